@@ -1,0 +1,35 @@
+import { z } from 'zod';
+import { bounded } from './fields';
+
+/**
+ * Site design conditions (°F, %, ft). Cooling outdoor humidity is given either as the
+ * coincident wet bulb or directly as grains per lb. [PUB: IRC R301.2(1) design criteria
+ * fields; IECC R302.1 72 °F heating / 75 °F cooling interior design — PUB (secondary)]
+ */
+export const designConditionsSchema = z
+  .object({
+    outdoorCoolingDryBulbF: bounded('Outdoor cooling dry bulb', 50, 130, '°F'),
+    outdoorCoolingWetBulbF: bounded('Outdoor coincident wet bulb', 30, 95, '°F').optional(),
+    outdoorCoolingGrains: bounded('Outdoor humidity', 0, 220, 'grains/lb').optional(),
+    outdoorHeatingDryBulbF: bounded('Outdoor heating dry bulb', -60, 70, '°F'),
+    indoorCoolingF: bounded('Indoor cooling set point', 60, 90, '°F').default(75),
+    indoorHeatingF: bounded('Indoor heating set point', 50, 85, '°F').default(70),
+    indoorCoolingRhPercent: bounded('Indoor relative humidity', 20, 80, '%').default(50),
+    dailyRangeF: bounded('Daily temperature range', 0, 50, '°F').default(20),
+    elevationFt: bounded('Elevation', -300, 14000, 'ft').default(0),
+    source: z.string().max(200, 'Source must be at most 200 characters').optional(),
+  })
+  .superRefine((d, ctx) => {
+    if (d.outdoorCoolingWetBulbF === undefined && d.outdoorCoolingGrains === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['outdoorCoolingWetBulbF'], message: 'Enter the coincident wet bulb or the outdoor humidity in grains' });
+    }
+    if (d.outdoorCoolingWetBulbF !== undefined && d.outdoorCoolingWetBulbF > d.outdoorCoolingDryBulbF) {
+      ctx.addIssue({ code: 'custom', path: ['outdoorCoolingWetBulbF'], message: 'Wet bulb cannot be above the dry bulb' });
+    }
+    if (d.outdoorHeatingDryBulbF >= d.indoorHeatingF) {
+      ctx.addIssue({ code: 'custom', path: ['outdoorHeatingDryBulbF'], message: 'Outdoor heating design temperature must be below the indoor heating set point' });
+    }
+  });
+
+export type DesignConditionsInput = z.input<typeof designConditionsSchema>;
+export type DesignConditions = z.output<typeof designConditionsSchema>;

@@ -1,0 +1,102 @@
+import { roundHalfUp } from '../rounding';
+import type { EquipmentType, IndoorUnit, OutdoorUnit } from '../schemas/equipment';
+import { capacityAtOutdoorF, sizingRatio } from './capacity';
+import { isHeatPump, type SizingPolicy } from './policy';
+
+/** The loads a piece of equipment must meet, Btu/h. */
+export interface LoadToMeet {
+  readonly sensibleBtuh: number;
+  readonly latentBtuh: number;
+  readonly heatingBtuh: number;
+}
+
+/** One equipment-to-load match. Ratios to 3 decimals, capacities to 1 Btu/h (half-up). */
+export interface SizingCheck {
+  readonly coolingLoadBtuh: number;
+  readonly coolingCapacityBtuh: number;
+  readonly coolingRatio: number | null;
+  readonly allowedPercent: { readonly min: number; readonly max: number };
+  readonly withinRange: boolean;
+  readonly heatingLoadBtuh: number;
+  readonly heatingCapacityBtuh: number | null;
+  readonly heatingRatio: number | null;
+  readonly warnings: readonly string[];
+}
+
+interface Rated {
+  readonly description: string;
+  readonly cooling: IndoorUnit['cooling'];
+  readonly heating?: IndoorUnit['heating'] | undefined;
+  readonly sensibleHeatRatio?: number | undefined;
+}
+
+/**
+ * Checks equipment capacity at the design outdoor temperatures against a load, using the
+ * sizing range for `equipmentType` from `policy` [MEM: Manual S limits as company policy].
+ * Warnings are plain words for the estimator.
+ */
+export function checkSizing(
+  { unit, equipmentType, load, coolingDesignF, heatingDesignF, policy }:
+  { readonly unit: Rated; readonly equipmentType: EquipmentType; readonly load: LoadToMeet; readonly coolingDesignF: number; readonly heatingDesignF: number; readonly policy: SizingPolicy },
+): SizingCheck {
+  const warnings: string[] = [];
+  const range = policy.cooling[equipmentType];
+  const coolingLoad = load.sensibleBtuh + load.latentBtuh;
+  const cool = capacityAtOutdoorF({ points: unit.cooling, outdoorF: coolingDesignF });
+  if (cool.extrapolated) warnings.push(`${unit.description}: the cooling data does not reach ${coolingDesignF} °F; the nearest rating was used.`);
+  const ratio = coolingLoad > 0 ? sizingRatio({ loadBtuh: coolingLoad, capacityBtuh: cool.btuh }) : null;
+  const pct = ratio === null ? null : roundHalfUp(ratio * 100);
+  const within = ratio !== null && ratio * 100 >= range.minPercent - 1e-9 && ratio * 100 <= range.maxPercent + 1e-9;
+  if (ratio === null) warnings.push(`${unit.description}: there is no cooling load to size against.`);
+  else if (!within && ratio * 100 < range.minPercent) warnings.push(`${unit.description} covers only ${pct} % of the cooling load at ${coolingDesignF} °F (allowed ${range.minPercent}–${range.maxPercent} %): choose a larger unit.`);
+  else if (!within) warnings.push(`${unit.description} delivers ${pct} % of the cooling load at ${coolingDesignF} °F (allowed ${range.minPercent}–${range.maxPercent} %): it is oversized and will dehumidify poorly; choose a smaller unit.`);
+  if (unit.sensibleHeatRatio !== undefined && cool.btuh * unit.sensibleHeatRatio < load.sensibleBtuh) {
+    warnings.push(`${unit.description}: its sensible capacity (${roundHalfUp(cool.btuh * unit.sensibleHeatRatio)} Btu/h) is below the sensible load (${roundHalfUp(load.sensibleBtuh)} Btu/h).`);
+  }
+  let heatingCapacity: number | null = null;
+  let heatingRatio: number | null = null;
+  if (unit.heating && isHeatPump(equipmentType)) {
+    const heat = capacityAtOutdoorF({ points: unit.heating, outdoorF: heatingDesignF });
+    heatingCapacity = roundHalfUp(heat.btuh);
+    if (load.heatingBtuh > 0) {
+      heatingRatio = roundHalfUp(sizingRatio({ loadBtuh: load.heatingBtuh, capacityBtuh: heat.btuh }), 3);
+      if (heatingRatio * 100 < policy.heatingMinPercent) {
+        warnings.push(`${unit.description} heats ${roundHalfUp(heatingRatio * 100)} % of the heat loss at ${heatingDesignF} °F: plan supplemental heat or a larger unit.`);
+      }
+    }
+    if (heat.extrapolated) warnings.push(`${unit.description}: the heating data does not reach ${heatingDesignF} °F; the nearest rating was used.`);
+  }
+  return {
+    coolingLoadBtuh: coolingLoad,
+    coolingCapacityBtuh: roundHalfUp(cool.btuh),
+    coolingRatio: ratio === null ? null : roundHalfUp(ratio, 3),
+    allowedPercent: { min: range.minPercent, max: range.maxPercent },
+    withinRange: within,
+    heatingLoadBtuh: load.heatingBtuh,
+    heatingCapacityBtuh: heatingCapacity,
+    heatingRatio,
+    warnings,
+  };
+}
+
+/** Multi-zone combination check: head count and connected indoor nominal capacity as % of the outdoor unit's. */
+export interface CombinationCheck {
+  readonly heads: number;
+  readonly maxHeads: number;
+  readonly connectedPercent: number;
+  readonly allowedPercent: { readonly min: number; readonly max: number };
+  readonly ok: boolean;
+  readonly warnings: readonly string[];
+}
+
+/** Sum of connected indoor nominal capacity ÷ outdoor nominal, %, rounded half-up to 1 %; and the head count. [PUB: maker combination tables, typical] */
+export function checkCombination({ outdoor, indoor }: { readonly outdoor: OutdoorUnit; readonly indoor: readonly IndoorUnit[] }): CombinationCheck {
+  const connected = indoor.reduce((s, u) => s + u.nominalBtuh, 0);
+  const pct = roundHalfUp((connected / outdoor.nominalBtuh) * 100);
+  const { min, max } = outdoor.connectedRatioPercent;
+  const warnings: string[] = [];
+  if (indoor.length > outdoor.maxHeads) warnings.push(`${outdoor.description} takes at most ${outdoor.maxHeads} indoor unit(s); ${indoor.length} are connected.`);
+  if (pct < min) warnings.push(`The connected indoor units add up to ${pct} % of ${outdoor.description}'s capacity; the maker allows ${min}–${max} %. Add or enlarge indoor units, or choose a smaller outdoor unit.`);
+  if (pct > max) warnings.push(`The connected indoor units add up to ${pct} % of ${outdoor.description}'s capacity; the maker allows ${min}–${max} %. Remove or shrink indoor units, or choose a larger outdoor unit.`);
+  return { heads: indoor.length, maxHeads: outdoor.maxHeads, connectedPercent: pct, allowedPercent: { min, max }, ok: warnings.length === 0, warnings };
+}

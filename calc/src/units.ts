@@ -1,0 +1,105 @@
+import convert from 'convert-units';
+import { num } from './errors';
+
+/**
+ * Canonical units: imperial (ft, ft², ft³, in, °F, Btu/h, CFM, oz, lb, psig).
+ * Metric appears only at the edges through these helpers. convert-units has no Btu,
+ * so the energy-rate factors are named constants here.
+ */
+
+/** Btu/h per watt: 3600 s/h ÷ 1055.05585262 J/Btu(IT). [PUB: SI/NIST definitions] */
+export const BTUH_PER_W = 3.412141633;
+/** Btu/h per ton of refrigeration, exact by definition. [PUB: SI/NIST definitions] */
+export const BTUH_PER_TON = 12000;
+/** Grains per pound. [PUB: definition, 1 grain = 1/7000 lb] */
+export const GRAINS_PER_LB = 7000;
+/** Standard atmosphere, psia. [PUB: SI/NIST definitions] */
+export const STANDARD_ATM_PSIA = 14.696;
+/** Ounces per pound. [PUB: definition] */
+export const OZ_PER_LB = 16;
+
+/** Watts → Btu/h (× 3.412141633). No rounding. */
+export function btuhFromW({ w }: { readonly w: number }): number {
+  return num(w) * BTUH_PER_W;
+}
+/** Btu/h → watts. No rounding. */
+export function wFromBtuh({ btuh }: { readonly btuh: number }): number {
+  return num(btuh) / BTUH_PER_W;
+}
+/** Btu/h → tons of refrigeration (÷ 12,000). No rounding. */
+export function tonsFromBtuh({ btuh }: { readonly btuh: number }): number {
+  return num(btuh) / BTUH_PER_TON;
+}
+/** Tons → Btu/h. No rounding. */
+export function btuhFromTons({ tons }: { readonly tons: number }): number {
+  return num(tons) * BTUH_PER_TON;
+}
+
+/** Metres → feet (convert-units). */
+export function ftFromM({ m }: { readonly m: number }): number {
+  return convert(num(m)).from('m').to('ft');
+}
+/** Feet → metres (convert-units). */
+export function mFromFt({ ft }: { readonly ft: number }): number {
+  return convert(num(ft)).from('ft').to('m');
+}
+/** Centimetres → inches (convert-units). */
+export function inFromCm({ cm }: { readonly cm: number }): number {
+  return convert(num(cm)).from('cm').to('in');
+}
+/** Square metres → square feet (convert-units). */
+export function ft2FromM2({ m2 }: { readonly m2: number }): number {
+  return convert(num(m2)).from('m2').to('ft2');
+}
+/** Square feet → square metres (convert-units). */
+export function m2FromFt2({ ft2 }: { readonly ft2: number }): number {
+  return convert(num(ft2)).from('ft2').to('m2');
+}
+/** °C → °F, an absolute temperature (convert-units). */
+export function fFromC({ c }: { readonly c: number }): number {
+  return convert(num(c)).from('C').to('F');
+}
+/** °F → °C, an absolute temperature (convert-units). */
+export function cFromF({ f }: { readonly f: number }): number {
+  return convert(num(f)).from('F').to('C');
+}
+/** A temperature difference in °F → K (× 5/9, no offset: 20 °F difference = 11.11 K). */
+export function kelvinDeltaFromF({ deltaF }: { readonly deltaF: number }): number {
+  return (num(deltaF) * 5) / 9;
+}
+/** A temperature difference in K → °F (× 9/5). */
+export function fDeltaFromKelvin({ deltaK }: { readonly deltaK: number }): number {
+  return (num(deltaK) * 9) / 5;
+}
+/** Ounces → grams (convert-units). */
+export function gFromOz({ oz }: { readonly oz: number }): number {
+  return convert(num(oz)).from('oz').to('g');
+}
+/** Grams → ounces (convert-units). */
+export function ozFromG({ g }: { readonly g: number }): number {
+  return convert(num(g)).from('g').to('oz');
+}
+/** oz/ft → g/m (1 oz/ft = 93.010 g/m). */
+export function gPerMFromOzPerFt({ ozPerFt }: { readonly ozPerFt: number }): number {
+  return gFromOz({ oz: num(ozPerFt) }) / mFromFt({ ft: 1 });
+}
+/** g/m → oz/ft. */
+export function ozPerFtFromGPerM({ gPerM }: { readonly gPerM: number }): number {
+  return ozFromG({ g: num(gPerM) }) / ftFromM({ m: 1 });
+}
+/** CFM → L/s (convert-units ft3/min → l/s). */
+export function lpsFromCfm({ cfm }: { readonly cfm: number }): number {
+  return convert(num(cfm)).from('ft3/min').to('l/s');
+}
+/** L/s → CFM. */
+export function cfmFromLps({ lps }: { readonly lps: number }): number {
+  return convert(num(lps)).from('l/s').to('ft3/min');
+}
+/** psi → kPa (convert-units). */
+export function kpaFromPsi({ psi }: { readonly psi: number }): number {
+  return convert(num(psi)).from('psi').to('kPa');
+}
+/** Microns of mercury (mTorr) → Pa (convert-units torr ÷ 1000). */
+export function paFromMicrons({ microns }: { readonly microns: number }): number {
+  return convert(num(microns) / 1000).from('torr').to('Pa');
+}

@@ -1,0 +1,48 @@
+import { loadConfig } from '../server/src/config';
+import { startSmtpFake } from '../server/src/fakes/smtp-fake';
+import { startServer } from '../server/src/server';
+import { demoAccounts, isEmpty, seedDemo } from '../fixtures/seed';
+import { buildClientIfStale } from './lib/client-build';
+import { migrate, withOrm } from './lib/db';
+import { DEMO, startCluster } from './lib/stack';
+import { log } from './lib/system';
+
+const t0 = Date.now();
+const { cluster, url: databaseUrl } = await startCluster(DEMO);
+await migrate(databaseUrl);
+await withOrm(databaseUrl, async (orm) => {
+  const em = orm.em.fork();
+  if (await isEmpty(em)) {
+    log('loading the demo data…');
+    await seedDemo(em);
+  }
+});
+await buildClientIfStale();
+
+const config = loadConfig({ ...process.env, DATABASE_URL: process.env.DATABASE_URL ?? databaseUrl });
+const smtp = await startSmtpFake({ port: config.SMTP_PORT, dir: '.data/outbox' });
+const running = await startServer(config);
+
+console.log(`
+  Gaugeline is running at ${running.url}   (ready in ${((Date.now() - t0) / 1000).toFixed(1)} s)
+  Outgoing e-mail is caught by the local SMTP fake on 127.0.0.1:${smtp.port}; owners read it at ${running.url}/dev/outbox
+
+  Demo sign-ins:
+${demoAccounts.map((a) => `    ${a.role.padEnd(12)} ${a.email.padEnd(40)} ${a.password.padEnd(28)} ${a.company}`).join('\n')}
+
+  Press Ctrl-C to stop.
+`);
+
+let stopping = false;
+async function stop(signal: string) {
+  if (stopping) return;
+  stopping = true;
+  log(`${signal}: stopping the server, the fakes and the database…`);
+  await running.close().catch(() => undefined);
+  await smtp.close().catch(() => undefined);
+  cluster.stop();
+  log('stopped.');
+  process.exit(0);
+}
+process.on('SIGINT', () => void stop('SIGINT'));
+process.on('SIGTERM', () => void stop('SIGTERM'));

@@ -1,0 +1,38 @@
+import { roles, type ApiRouter } from '../../lib/route';
+import { presentUser } from './user.presenter';
+import { createUserSchema, updateUserSchema, userIdParams } from './user.schema';
+import { createUser, getUser, listUsers, updateUser } from './user.service';
+
+const OWNER = roles('owner');
+
+export function userRoutes(api: ApiRouter): void {
+  api.route({
+    method: 'get',
+    path: '/',
+    policy: OWNER,
+    handler: async ({ em, actor }) => ({ users: (await listUsers(em, actor)).map(presentUser) }),
+  });
+  api.route({
+    method: 'get',
+    path: '/:id',
+    policy: OWNER,
+    params: userIdParams,
+    handler: async ({ em, actor, params }) => ({ user: presentUser(await getUser(em, actor, params.id)) }),
+  });
+  api.route({
+    method: 'post',
+    path: '/',
+    policy: OWNER,
+    body: createUserSchema,
+    status: 201,
+    handler: async ({ em, actor, body, services }) => ({ user: presentUser(await createUser(em, actor, services.mailer, body)) }),
+  });
+  api.route({
+    method: 'patch',
+    path: '/:id',
+    policy: OWNER,
+    params: userIdParams,
+    body: updateUserSchema,
+    handler: async ({ em, actor, params, body }) => ({ user: presentUser(await updateUser(em, actor, params.id, body)) }),
+  });
+}

@@ -1,0 +1,65 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { ConflictError, NotFoundError, UnprocessableError } from '../../lib/errors';
+import type { Actor } from '../../lib/route';
+import { hashPassword } from '../../services/passwords';
+import type { Mailer } from '../../services/mailer';
+import { CompanySchema } from '../companies/company.entity';
+import { UserSchema, type User } from './user.entity';
+import type { CreateUserInput, UpdateUserInput } from './user.schema';
+
+export function listUsers(em: EntityManager, actor: Actor): Promise<User[]> {
+  return em.find(UserSchema, { company: actor.companyId }, { orderBy: { name: 'asc' }, populate: ['company'] });
+}
+
+/** A user of the actor's company, or 404 — whether the id belongs to another company or to nobody. */
+export async function getUser(em: EntityManager, actor: Actor, id: string): Promise<User> {
+  const user = await em.findOne(UserSchema, { id, company: actor.companyId }, { populate: ['company'] });
+  if (!user) throw new NotFoundError('The user');
+  return user;
+}
+
+export async function createUser(em: EntityManager, actor: Actor, mailer: Mailer, input: CreateUserInput): Promise<User> {
+  if (await em.count(UserSchema, { email: input.email })) throw new ConflictError('That e-mail address already has an account.');
+  const user = em.create(UserSchema, {
+    company: em.getReference(CompanySchema, actor.companyId),
+    name: input.name,
+    email: input.email,
+    role: input.role,
+    active: true,
+    passwordHash: await hashPassword(input.password),
+  });
+  await em.flush();
+  await em.populate(user, ['company']);
+  await mailer
+    .send({
+      to: user.email,
+      subject: `${actor.name} added you to Gaugeline`,
+      text: `Hello ${user.name},\n\n${actor.name} created a Gaugeline account for you (role: ${user.role}). Sign in with this e-mail address and the password they gave you, then keep it to yourself.\n`,
+    })
+    .catch(() => undefined); // the account exists either way; a mail outage must not undo it
+  return user;
+}
+
+/** Ends every session of a user (deactivation, and later password resets). */
+export async function endSessionsOf(em: EntityManager, userId: string): Promise<number> {
+  const r = await em.getConnection().execute<{ affectedRows?: number }>(`delete from "session" where sess->>'userId' = ?`, [userId], 'run');
+  return typeof r.affectedRows === 'number' ? r.affectedRows : 0;
+}
+
+export async function updateUser(em: EntityManager, actor: Actor, id: string, input: UpdateUserInput): Promise<User> {
+  const user = await getUser(em, actor, id);
+  const losesOwner = user.role === 'owner' && ((input.role && input.role !== 'owner') || input.active === false);
+  if (losesOwner) {
+    if (user.id === actor.userId) throw new UnprocessableError('You cannot remove your own owner access. Ask another owner.');
+    const owners = await em.count(UserSchema, { company: actor.companyId, role: 'owner', active: true });
+    if (owners <= 1) throw new UnprocessableError('A company needs at least one active owner.');
+  }
+  if (input.name !== undefined) user.name = input.name;
+  if (input.role !== undefined) user.role = input.role;
+  const deactivating = input.active === false && user.active;
+  if (input.active !== undefined) user.active = input.active;
+  await em.flush();
+  // loadActor refuses inactive users on every request anyway; deleting the rows also frees the store.
+  if (deactivating) await endSessionsOf(em, user.id);
+  return user;
+}

@@ -1,0 +1,22 @@
+import type { MikroORM } from '@mikro-orm/postgresql';
+import type pg from 'pg';
+import type { Config } from '../config';
+import type { Outbox } from '../fakes/smtp-fake';
+import type { Mailer } from './mailer';
+
+export interface Clock {
+  now(): Date;
+}
+export const systemClock: Clock = { now: () => new Date() };
+
+/** What createApp is given: every outside dependency, so tests can build the app with their own. */
+export interface Services {
+  orm: MikroORM;
+  /** A small pool of its own for the session store (connect-pg-simple speaks pg directly). */
+  sessionPool: pg.Pool;
+  config: Config;
+  mailer: Mailer;
+  clock: Clock;
+  /** Only where the dev outbox page is on (never in production). */
+  outbox?: Outbox;
+}

@@ -1,0 +1,66 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { randomUUID } from 'node:crypto';
+import request from 'supertest';
+import type { Express } from 'express';
+import { CompanySchema } from '../../server/src/modules/companies/company.entity';
+import { ROLES, UserSchema, type Role } from '../../server/src/modules/users/user.entity';
+import { hashPassword } from '../../server/src/services/passwords';
+
+export const HTTPS = { 'X-Forwarded-Proto': 'https' } as const;
+export const TEST_PASSWORD = 'correct-horse-battery-9';
+
+let hash: Promise<string> | undefined;
+const passwordHash = () => (hash ??= hashPassword(TEST_PASSWORD));
+
+export interface TestCompany {
+  id: string;
+  name: string;
+  users: Record<Role, { id: string; email: string; name: string }>;
+}
+
+/** A fresh company with one active user of every role; unique e-mails so test files can run in parallel. */
+export async function makeCompany(em: EntityManager, label = 'Test'): Promise<TestCompany> {
+  const tag = randomUUID().slice(0, 8);
+  const company = em.create(CompanySchema, { name: `${label} Company ${tag}`, unitSystem: 'imperial' });
+  const users = {} as Record<Role, { id: string; email: string; name: string }>;
+  for (const role of ROLES) {
+    const u = em.create(UserSchema, {
+      company,
+      name: `${label} ${role} ${tag}`,
+      email: `${role}-${tag}@${label.toLowerCase()}.example.com`,
+      role,
+      active: true,
+      passwordHash: await passwordHash(),
+    });
+    users[role] = { id: u.id, email: u.email, name: u.name };
+  }
+  await em.flush();
+  return { id: company.id, name: company.name, users };
+}
+
+export interface Session {
+  agent: ReturnType<typeof request.agent>;
+  csrf: string;
+  cookie: string[];
+}
+
+export async function csrfOf(agent: ReturnType<typeof request.agent>): Promise<string> {
+  const r = await agent.get('/api/auth/csrf').set(HTTPS);
+  return String(r.body.token);
+}
+
+/** Signs in through the API as a browser would (pre-session CSRF token, then the rotated one). */
+export async function login(app: Express, email: string, password = TEST_PASSWORD): Promise<Session> {
+  const agent = request.agent(app);
+  const pre = await csrfOf(agent);
+  const res = await agent.post('/api/auth/login').set(HTTPS).set('X-CSRF-Token', pre).send({ email, password });
+  if (res.status !== 200) throw new Error(`login ${email}: ${res.status} ${JSON.stringify(res.body)}`);
+  const cookie = ([] as string[]).concat(res.headers['set-cookie'] ?? []);
+  return { agent, csrf: await csrfOf(agent), cookie };
+}
+
+export const isProblem = (r: request.Response): boolean =>
+  /^application\/problem\+json/.test(String(r.headers['content-type'] ?? '')) &&
+  typeof r.body.type === 'string' &&
+  typeof r.body.title === 'string' &&
+  r.body.status === r.status;

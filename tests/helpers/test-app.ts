@@ -1,0 +1,50 @@
+import { MikroORM } from '@mikro-orm/postgresql';
+import type { Express } from 'express';
+import pg from 'pg';
+import { ormConfig } from '../../mikro-orm.config';
+import { createApp } from '../../server/src/app';
+import { loadConfig, type Config } from '../../server/src/config';
+import { startSmtpFake, type SmtpFake } from '../../server/src/fakes/smtp-fake';
+import { createSmtpMailer } from '../../server/src/services/mailer';
+import { systemClock, type Clock, type Services } from '../../server/src/services/services';
+
+export interface TestApp {
+  app: Express;
+  orm: MikroORM;
+  services: Services;
+  smtp: SmtpFake;
+  close(): Promise<void>;
+}
+
+export function testDatabaseUrl(): string {
+  const url = process.env.DATABASE_URL;
+  if (!url || !url.includes('_test')) throw new Error('DATABASE_URL must point at the test database: run the suite with `npm test`.');
+  return url;
+}
+
+/** The real app on the real test database, with production error semantics and its own SMTP fake. */
+export async function buildTestApp(overrides: Partial<Config> = {}, clock: Clock = systemClock): Promise<TestApp> {
+  const url = testDatabaseUrl();
+  const config = loadConfig(
+    { NODE_ENV: 'production', DATABASE_URL: url, SESSION_SECRET: 'test-secret-test-secret-test-secret-0123', APP_ORIGIN: 'https://gaugeline.test', LOG_LEVEL: 'silent' },
+    { DEV_OUTBOX: 'on', LOGIN_MAX_PER_IP: 1000, ...overrides },
+  );
+  const orm = await MikroORM.init(ormConfig(url, 5));
+  const sessionPool = new pg.Pool({ connectionString: url, max: 3 });
+  const smtp = await startSmtpFake({ port: 0 });
+  const mailer = createSmtpMailer({ host: '127.0.0.1', port: smtp.port, from: config.MAIL_FROM });
+  const services: Services = { orm, sessionPool, config: { ...config, devOutbox: true }, mailer, clock, outbox: smtp };
+  const app = createApp(services);
+  return {
+    app,
+    orm,
+    services,
+    smtp,
+    async close() {
+      mailer.close();
+      await smtp.close();
+      await sessionPool.end().catch(() => undefined);
+      await orm.close().catch(() => undefined);
+    },
+  };
+}

@@ -1,6 +1,8 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
+// @ts-expect-error cookiejar ships no types; it is superagent's own cookie jar
+import { CookieAccessInfo } from 'cookiejar';
 import type { Express } from 'express';
 import { CompanySchema } from '../../server/src/modules/companies/company.entity';
 import { ROLES, UserSchema, type Role } from '../../server/src/modules/users/user.entity';
@@ -21,10 +23,11 @@ export interface TestCompany {
 /** A fresh company with one active user of every role; unique e-mails so test files can run in parallel. */
 export async function makeCompany(em: EntityManager, label = 'Test'): Promise<TestCompany> {
   const tag = randomUUID().slice(0, 8);
-  const company = em.create(CompanySchema, { name: `${label} Company ${tag}`, unitSystem: 'imperial' });
+  const company = em.create(CompanySchema, { id: randomUUID(), name: `${label} Company ${tag}`, unitSystem: 'imperial' });
   const users = {} as Record<Role, { id: string; email: string; name: string }>;
   for (const role of ROLES) {
     const u = em.create(UserSchema, {
+      id: randomUUID(),
       company,
       name: `${label} ${role} ${tag}`,
       email: `${role}-${tag}@${label.toLowerCase()}.example.com`,
@@ -44,6 +47,28 @@ export interface Session {
   cookie: string[];
 }
 
+type Agent = ReturnType<typeof request.agent>;
+interface CookieJarAgent {
+  jar: { getCookies(access: unknown): { toValueString(): string } };
+  _attachCookies(req: { url: string; cookies: string }): void;
+}
+
+/**
+ * A supertest agent that behaves like a browser behind the TLS-terminating proxy: it says
+ * X-Forwarded-Proto: https and sends back Secure (`__Host-`) cookies, which the stock agent
+ * only does for https URLs (security plan, harness trap G1).
+ */
+export function browserAgent(app: Express): Agent {
+  const agent = request.agent(app);
+  agent.set('X-Forwarded-Proto', 'https');
+  const patched = agent as unknown as CookieJarAgent;
+  patched._attachCookies = (req) => {
+    const url = new URL(req.url);
+    req.cookies = patched.jar.getCookies(new CookieAccessInfo(url.hostname, url.pathname, true)).toValueString();
+  };
+  return agent;
+}
+
 export async function csrfOf(agent: ReturnType<typeof request.agent>): Promise<string> {
   const r = await agent.get('/api/auth/csrf').set(HTTPS);
   return String(r.body.token);
@@ -51,7 +76,7 @@ export async function csrfOf(agent: ReturnType<typeof request.agent>): Promise<s
 
 /** Signs in through the API as a browser would (pre-session CSRF token, then the rotated one). */
 export async function login(app: Express, email: string, password = TEST_PASSWORD): Promise<Session> {
-  const agent = request.agent(app);
+  const agent = browserAgent(app);
   const pre = await csrfOf(agent);
   const res = await agent.post('/api/auth/login').set(HTTPS).set('X-CSRF-Token', pre).send({ email, password });
   if (res.status !== 200) throw new Error(`login ${email}: ${res.status} ${JSON.stringify(res.body)}`);

@@ -1,0 +1,20 @@
+import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
+import { randomUUID } from 'node:crypto';
+import type { DesignConditions } from '@calc';
+import { CompanySchema } from '../companies/company.entity';
+
+/** One row per company, made on the owner's first save. The unit system lives on Company itself. */
+export const CompanySettingsSchema = defineEntity({
+  name: 'CompanySettings',
+  tableName: 'company_settings',
+  properties: {
+    id: p.uuid().primary().onCreate(() => randomUUID()),
+    company: p.manyToOne(CompanySchema).unique(),
+    /** Prefills new jobs' design conditions; null until the owner sets them. */
+    defaultDesignConditions: p.json<DesignConditions>().nullable(),
+    version: p.integer().version(),
+    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+  },
+});
+
+export type CompanySettings = InferEntity<typeof CompanySettingsSchema>;

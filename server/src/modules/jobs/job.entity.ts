@@ -1,0 +1,44 @@
+import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
+import { randomUUID } from 'node:crypto';
+import type { DesignConditions } from '@calc';
+import { CompanySchema } from '../companies/company.entity';
+import { CustomerSchema } from '../customers/customer.entity';
+import { UserSchema } from '../users/user.entity';
+import type { DesignSources } from './design-conditions';
+
+/** Later issues add states after these; the order is the usual life of a job. */
+export const JOB_STATUSES = ['walkthrough', 'design', 'proposed', 'won', 'lost', 'installed'] as const;
+export type JobStatus = (typeof JOB_STATUSES)[number];
+export const TIGHTNESS = ['very-tight', 'tight', 'average', 'leaky', 'very-leaky'] as const;
+
+export const JobSchema = defineEntity({
+  name: 'Job',
+  tableName: 'job',
+  properties: {
+    id: p.uuid().primary().onCreate(() => randomUUID()),
+    company: p.manyToOne(CompanySchema).index(),
+    customer: p.manyToOne(CustomerSchema).index(),
+    /** The salesperson who owns the job; a salesperson sees only their own. */
+    salesperson: p.manyToOne(UserSchema).index(),
+    assignedInstaller: p.manyToOne(UserSchema).nullable().index(),
+    status: p.enum([...JOB_STATUSES]).default('walkthrough'),
+    street: p.string().length(200),
+    unit: p.string().length(60).default(''),
+    city: p.string().length(100),
+    region: p.string().length(60),
+    postalCode: p.string().length(20),
+    notes: p.text().default(''),
+    /** calc's parsed design conditions, or null until the site's values are known. */
+    designConditions: p.json<DesignConditions>().nullable(),
+    /** Where each design value came from, with a free-text note (e.g. the local code table). */
+    designSources: p.json<DesignSources>(),
+    tightness: p.enum([...TIGHTNESS]).default('average'),
+    version: p.integer().version(),
+    createdAt: p.datetime().onCreate(() => new Date()),
+    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    /** Bumped by any change to the job, its rooms or photos: the jobs list sorts on it. */
+    lastActivityAt: p.datetime().onCreate(() => new Date()).index(),
+  },
+});
+
+export type Job = InferEntity<typeof JobSchema>;

@@ -1,14 +1,19 @@
 import { spawn } from 'node:child_process';
 import { buildClientIfStale } from './lib/client-build';
-import { migrate } from './lib/db';
+import { isEmpty, seedDemo } from '../fixtures/seed';
+import { migrate, withOrm } from './lib/db';
 import { TEST, startCluster } from './lib/stack';
 import { chromiumPath, ensureChromium, log } from './lib/system';
 
 // The test cluster is separate from the demo one and its database is made anew on every run.
 const t0 = Date.now();
 ensureChromium();
-const { cluster, url } = await startCluster(TEST, { fast: true, recreate: true });
+const { cluster, url, startedHere } = await startCluster(TEST, { fast: true, recreate: true });
 await migrate(url);
+// The end-to-end tests sign in as the demo accounts; other tests make companies of their own.
+await withOrm(url, async (orm) => {
+  if (await isEmpty(orm.em.fork())) await seedDemo(orm.em.fork());
+});
 if (!process.env.GAUGELINE_SKIP_BUILD) await buildClientIfStale();
 log(`test set-up ready in ${((Date.now() - t0) / 1000).toFixed(1)} s; running the suite…`);
 
@@ -17,6 +22,7 @@ const child = spawn(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', 
   env: { ...process.env, DATABASE_URL: url, NODE_ENV: 'test', CHROMIUM_PATH: chromiumPath, LOG_LEVEL: 'silent' },
 });
 const code: number = await new Promise((resolve) => child.on('exit', (c, sig) => resolve(c ?? (sig ? 1 : 0))));
-cluster.stop();
+// Leave a cluster that another run started (e.g. a second terminal) to that run.
+if (startedHere) cluster.stop();
 log(`tests finished in ${((Date.now() - t0) / 1000).toFixed(1)} s`);
 process.exit(code);

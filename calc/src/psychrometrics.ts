@@ -81,7 +81,7 @@ export function moistAirEnthalpyBtuPerLb(
 
 /**
  * Dew point, °F: the temperature whose saturation pressure equals the vapour pressure
- * (eq. 5/6 inverted by 80 bisection steps over −148…392 °F; deterministic, ±1e-9 °F).
+ * (eq. 5/6 inverted by 50 bisection steps over −148…392 °F; deterministic, ±1e-12 °F).
  */
 export function dewPointF(
   { humidityRatio, pressurePsia }: { readonly humidityRatio: number; readonly pressurePsia: number },
@@ -90,7 +90,7 @@ export function dewPointF(
   const pw = (num(pressurePsia, 'positive') * w) / (MOLAR_RATIO + w);
   let lo = -148;
   let hi = 392;
-  for (let i = 0; i < 80; i += 1) {
+  for (let i = 0; i < 50; i += 1) {
     const mid = (lo + hi) / 2;
     if (saturationPressurePsia({ dryBulbF: mid }) < pw) lo = mid;
     else hi = mid;

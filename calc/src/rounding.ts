@@ -8,7 +8,7 @@ import { num } from './errors';
  */
 export function roundHalfUp(value: number, decimals = 0): number {
   const v = num(value);
-  const factor = 10 ** decimals;
+  const factor = decimals === 0 ? 1 : 10 ** decimals;
   const shifted = Math.abs(v) * factor;
   const rounded = Math.floor(shifted + 0.5 + shifted * 1e-12) / factor;
   return v < 0 ? -rounded : rounded;

@@ -18,6 +18,19 @@ export const STANDARD_ATM_PSIA = 14.696;
 /** Ounces per pound. [PUB: definition] */
 export const OZ_PER_LB = 16;
 
+/*
+ * Linear factors taken from convert-units once at load (its lookups are slow per call);
+ * temperatures are affine and convert per call.
+ */
+const factor = (from: string, to: string): number => convert(1).from(from).to(to);
+const FT_PER_M = factor('m', 'ft');
+const IN_PER_CM = factor('cm', 'in');
+const FT2_PER_M2 = factor('m2', 'ft2');
+const G_PER_OZ = factor('oz', 'g');
+const LPS_PER_CFM = factor('ft3/min', 'l/s');
+const KPA_PER_PSI = factor('psi', 'kPa');
+const PA_PER_TORR = factor('torr', 'Pa');
+
 /** Watts → Btu/h (× 3.412141633). No rounding. */
 export function btuhFromW({ w }: { readonly w: number }): number {
   return num(w) * BTUH_PER_W;
@@ -37,23 +50,23 @@ export function btuhFromTons({ tons }: { readonly tons: number }): number {
 
 /** Metres → feet (convert-units). */
 export function ftFromM({ m }: { readonly m: number }): number {
-  return convert(num(m)).from('m').to('ft');
+  return num(m) * FT_PER_M;
 }
 /** Feet → metres (convert-units). */
 export function mFromFt({ ft }: { readonly ft: number }): number {
-  return convert(num(ft)).from('ft').to('m');
+  return num(ft) / FT_PER_M;
 }
 /** Centimetres → inches (convert-units). */
 export function inFromCm({ cm }: { readonly cm: number }): number {
-  return convert(num(cm)).from('cm').to('in');
+  return num(cm) * IN_PER_CM;
 }
 /** Square metres → square feet (convert-units). */
 export function ft2FromM2({ m2 }: { readonly m2: number }): number {
-  return convert(num(m2)).from('m2').to('ft2');
+  return num(m2) * FT2_PER_M2;
 }
 /** Square feet → square metres (convert-units). */
 export function m2FromFt2({ ft2 }: { readonly ft2: number }): number {
-  return convert(num(ft2)).from('ft2').to('m2');
+  return num(ft2) / FT2_PER_M2;
 }
 /** °C → °F, an absolute temperature (convert-units). */
 export function fFromC({ c }: { readonly c: number }): number {
@@ -73,11 +86,11 @@ export function fDeltaFromKelvin({ deltaK }: { readonly deltaK: number }): numbe
 }
 /** Ounces → grams (convert-units). */
 export function gFromOz({ oz }: { readonly oz: number }): number {
-  return convert(num(oz)).from('oz').to('g');
+  return num(oz) * G_PER_OZ;
 }
 /** Grams → ounces (convert-units). */
 export function ozFromG({ g }: { readonly g: number }): number {
-  return convert(num(g)).from('g').to('oz');
+  return num(g) / G_PER_OZ;
 }
 /** oz/ft → g/m (1 oz/ft = 93.010 g/m). */
 export function gPerMFromOzPerFt({ ozPerFt }: { readonly ozPerFt: number }): number {
@@ -89,17 +102,17 @@ export function ozPerFtFromGPerM({ gPerM }: { readonly gPerM: number }): number 
 }
 /** CFM → L/s (convert-units ft3/min → l/s). */
 export function lpsFromCfm({ cfm }: { readonly cfm: number }): number {
-  return convert(num(cfm)).from('ft3/min').to('l/s');
+  return num(cfm) * LPS_PER_CFM;
 }
 /** L/s → CFM. */
 export function cfmFromLps({ lps }: { readonly lps: number }): number {
-  return convert(num(lps)).from('l/s').to('ft3/min');
+  return num(lps) / LPS_PER_CFM;
 }
 /** psi → kPa (convert-units). */
 export function kpaFromPsi({ psi }: { readonly psi: number }): number {
-  return convert(num(psi)).from('psi').to('kPa');
+  return num(psi) * KPA_PER_PSI;
 }
 /** Microns of mercury (mTorr) → Pa (convert-units torr ÷ 1000). */
 export function paFromMicrons({ microns }: { readonly microns: number }): number {
-  return convert(num(microns) / 1000).from('torr').to('Pa');
+  return (num(microns) / 1000) * PA_PER_TORR;
 }

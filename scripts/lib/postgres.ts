@@ -1,5 +1,6 @@
-import { chownSync, existsSync, mkdirSync, readdirSync, chmodSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { createHash } from 'node:crypto';
+import { chownSync, existsSync, mkdirSync, readdirSync, chmodSync, symlinkSync } from 'node:fs';
+import { basename, dirname, join, resolve } from 'node:path';
 import pg from 'pg';
 import { ensureDebianPackages, isRoot, log, run } from './system';
 
@@ -39,13 +40,34 @@ function ownByPostgres(path: string): void {
   chownSync(path, uid, gid);
 }
 
+/**
+ * As root the cluster runs as `postgres`, which must be able to reach the data folder. When the
+ * checkout sits under a folder it cannot enter (say /root), the cluster lives in /var/tmp instead,
+ * keyed by the checkout's path, and `.data/<name>` becomes a link to it so it is still found there.
+ */
+function reachableDataDir(wanted: string): string {
+  if (!isRoot) return wanted;
+  const parent = dirname(wanted);
+  mkdirSync(parent, { recursive: true });
+  try {
+    run('runuser', ['-u', 'postgres', '--', 'test', '-x', parent], { cwd: '/' });
+    return wanted;
+  } catch {
+    const alt = join('/var/tmp', `gaugeline-${createHash('sha256').update(wanted).digest('hex').slice(0, 12)}`, basename(wanted));
+    mkdirSync(dirname(alt), { recursive: true, mode: 0o755 });
+    if (!existsSync(wanted)) symlinkSync(alt, wanted);
+    log(`postgres cannot enter ${parent}; the cluster lives in ${alt} (linked from ${wanted})`);
+    return alt;
+  }
+}
+
 export class Cluster {
   readonly bin: string;
   readonly socketDir: string;
   readonly logFile: string;
 
   constructor(readonly opts: ClusterOptions) {
-    this.opts = { ...opts, dataDir: resolve(opts.dataDir) };
+    this.opts = { ...opts, dataDir: reachableDataDir(resolve(opts.dataDir)) };
     this.bin = ensurePostgresInstalled();
     this.socketDir = `${this.opts.dataDir}-run`;
     this.logFile = `${this.opts.dataDir}.log`;
@@ -77,16 +99,18 @@ export class Cluster {
     }
   }
 
-  start(): void {
+  /** Starts the cluster; returns false when it was already running (someone else will stop it). */
+  start(): boolean {
     this.init();
     mkdirSync(this.socketDir, { recursive: true });
     ownByPostgres(this.socketDir);
     if (!existsSync(this.logFile)) run('touch', [this.logFile]);
     ownByPostgres(this.logFile);
-    if (this.running()) return;
+    if (this.running()) return false;
     const settings = [`-c listen_addresses=127.0.0.1`, `-p ${this.opts.port}`, `-k ${this.socketDir}`];
     if (this.opts.fast) settings.push('-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off');
     asOwner(join(this.bin, 'pg_ctl'), ['-D', this.pgData, '-l', this.logFile, '-w', '-t', '30', '-o', settings.join(' '), 'start']);
+    return true;
   }
 
   stop(): void {

@@ -8,6 +8,7 @@ import { directoryOutbox } from './fakes/smtp-fake';
 import { logger } from './lib/logger';
 import { createSmtpMailer } from './services/mailer';
 import { systemClock, type Services } from './services/services';
+import { createLocalDiskStorage } from './services/storage';
 
 export interface Running {
   server: Server;
@@ -26,6 +27,7 @@ export async function startServer(config: Config = loadConfig(), extra: Partial<
     sessionPool,
     config,
     mailer,
+    storage: createLocalDiskStorage(config.STORAGE_DIR),
     clock: systemClock,
     outbox: config.devOutbox ? directoryOutbox('.data/outbox') : undefined,
     ...extra,

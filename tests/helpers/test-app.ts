@@ -1,5 +1,8 @@
 import { MikroORM } from '@mikro-orm/postgresql';
 import type { Express } from 'express';
+import { mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import pg from 'pg';
 import { ormConfig } from '../../mikro-orm.config';
 import { createApp } from '../../server/src/app';
@@ -7,6 +10,7 @@ import { loadConfig, type Config } from '../../server/src/config';
 import { startSmtpFake, type SmtpFake } from '../../server/src/fakes/smtp-fake';
 import { createSmtpMailer } from '../../server/src/services/mailer';
 import { systemClock, type Clock, type Services } from '../../server/src/services/services';
+import { createLocalDiskStorage } from '../../server/src/services/storage';
 
 export interface TestApp {
   app: Express;
@@ -33,7 +37,9 @@ export async function buildTestApp(overrides: Partial<Config> = {}, clock: Clock
   const sessionPool = new pg.Pool({ connectionString: url, max: 3 });
   const smtp = await startSmtpFake({ port: 0 });
   const mailer = createSmtpMailer({ host: '127.0.0.1', port: smtp.port, from: config.MAIL_FROM });
-  const services: Services = { orm, sessionPool, config: { ...config, devOutbox: true }, mailer, clock, outbox: smtp };
+  // Each test app stores uploads in its own temporary folder, never in the developer's .data/uploads.
+  const storage = createLocalDiskStorage(mkdtempSync(join(tmpdir(), 'gaugeline-uploads-')));
+  const services: Services = { orm, sessionPool, config: { ...config, devOutbox: true }, mailer, storage, clock, outbox: smtp };
   const app = createApp(services);
   return {
     app,

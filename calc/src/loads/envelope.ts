@@ -23,14 +23,15 @@ export function glassCoolingDeltaTF(p: DesignPsychrometrics): number {
 
 /** Opaque walls: U (construction or override) × net area × ΔT. [PUB: Q = U·A·ΔT] */
 export function wallsLoad(room: Room, p: DesignPsychrometrics): CoolHeat {
-  return room.exposedWalls.reduce<CoolHeat>((acc, wall) => {
+  let cooling = 0;
+  let heating = 0;
+  for (const wall of room.exposedWalls) {
     const u = wall.uFactor ?? WALL_CONSTRUCTIONS[wall.construction].value;
     const area = wallNetAreaFt2(wall, room.ceilingHeightFt);
-    return {
-      cooling: acc.cooling + pos(conductionBtuh({ u, areaFt2: area, deltaTF: p.coolingDeltaTF })),
-      heating: acc.heating + conductionBtuh({ u, areaFt2: area, deltaTF: p.heatingDeltaTF }),
-    };
-  }, { cooling: 0, heating: 0 });
+    cooling += pos(conductionBtuh({ u, areaFt2: area, deltaTF: p.coolingDeltaTF }));
+    heating += conductionBtuh({ u, areaFt2: area, deltaTF: p.heatingDeltaTF });
+  }
+  return { cooling, heating };
 }
 
 /** Window U and SHGC: the entered label values, else the glazing default. */

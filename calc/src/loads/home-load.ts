@@ -5,7 +5,7 @@ import { homeInputSchema, type Home, type HomeInput } from '../schemas/home';
 import { BTUH_PER_TON } from '../units';
 import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
 import { METHOD_NOTES } from './notes';
-import { COMPONENT_KEYS, roomLoadFromParsed, type LoadComponents, type RoomLoad } from './room-load';
+import { roomLoadFromParsed, type LoadComponents, type RoomLoad } from './room-load';
 
 /** Whole-home estimated loads. */
 export interface HomeLoad {
@@ -38,14 +38,12 @@ export interface HomeLoad {
 
 /** Adds room component sets key by key (integers, so the home total equals the sum of rooms). */
 function sumComponents(sets: readonly LoadComponents[]): LoadComponents {
-  const out: Record<keyof LoadComponents, number> = {
-    walls: 0, windowsConduction: 0, windowsSolar: 0, doors: 0, ceiling: 0, floor: 0, infiltration: 0, people: 0, appliances: 0, total: 0,
-  };
-  for (const s of sets) {
-    for (const k of COMPONENT_KEYS) out[k] += s[k];
-    out.total += s.total;
+  let walls = 0, windowsConduction = 0, windowsSolar = 0, doors = 0, ceiling = 0, floor = 0, infiltration = 0, people = 0, appliances = 0, total = 0;
+  for (const c of sets) {
+    walls += c.walls; windowsConduction += c.windowsConduction; windowsSolar += c.windowsSolar; doors += c.doors; ceiling += c.ceiling;
+    floor += c.floor; infiltration += c.infiltration; people += c.people; appliances += c.appliances; total += c.total;
   }
-  return out;
+  return { walls, windowsConduction, windowsSolar, doors, ceiling, floor, infiltration, people, appliances, total };
 }
 
 /** Whole-home loads from a parsed home (engine path; no validation). */

@@ -48,14 +48,17 @@ type Parts = Record<ComponentKey, number>;
 
 /** Rounds each part half-up to 1 Btu/h and adds a total equal to their sum. */
 export function toComponents(parts: Parts): LoadComponents {
-  const rounded: Parts = {
-    walls: roundHalfUp(parts.walls), windowsConduction: roundHalfUp(parts.windowsConduction),
-    windowsSolar: roundHalfUp(parts.windowsSolar), doors: roundHalfUp(parts.doors), ceiling: roundHalfUp(parts.ceiling),
-    floor: roundHalfUp(parts.floor), infiltration: roundHalfUp(parts.infiltration), people: roundHalfUp(parts.people),
-    appliances: roundHalfUp(parts.appliances),
-  };
-  const total = COMPONENT_KEYS.reduce((sum, k) => sum + rounded[k], 0);
-  return { ...rounded, total };
+  const walls = roundHalfUp(parts.walls);
+  const windowsConduction = roundHalfUp(parts.windowsConduction);
+  const windowsSolar = roundHalfUp(parts.windowsSolar);
+  const doors = roundHalfUp(parts.doors);
+  const ceiling = roundHalfUp(parts.ceiling);
+  const floor = roundHalfUp(parts.floor);
+  const infiltration = roundHalfUp(parts.infiltration);
+  const people = roundHalfUp(parts.people);
+  const appliances = roundHalfUp(parts.appliances);
+  const total = walls + windowsConduction + windowsSolar + doors + ceiling + floor + infiltration + people + appliances;
+  return { walls, windowsConduction, windowsSolar, doors, ceiling, floor, infiltration, people, appliances, total };
 }
 
 /** Room loads from already-parsed inputs (the engine path used by homeLoad). */

@@ -16,8 +16,8 @@ export interface PlausibilityWarning {
 export function roomPlausibilityWarnings(room: Room): PlausibilityWarning[] {
   const out: PlausibilityWarning[] = [];
   const area = floorAreaFt2(room);
-  if (room.ceilingHeightFt < 7) out.push({ path: ['ceilingHeightFt'], message: `A ${room.ceilingHeightFt} ft ceiling is unusually low — check the measurement.` });
-  if (room.ceilingHeightFt > 14) out.push({ path: ['ceilingHeightFt'], message: `A ${room.ceilingHeightFt} ft ceiling is unusually high — check it, or enter the real wall heights.` });
+  if (room.ceilingHeightFt < 7) out.push({ path: ['ceilingHeightFt'], message: `A ${roundHalfUp(room.ceilingHeightFt, 1)} ft ceiling is unusually low — check the measurement.` });
+  if (room.ceilingHeightFt > 14) out.push({ path: ['ceilingHeightFt'], message: `A ${roundHalfUp(room.ceilingHeightFt, 1)} ft ceiling is unusually high — check it, or enter the real wall heights.` });
   if (area < 25) out.push({ path: ['lengthFt'], message: `${roundHalfUp(area)} ft² is very small for a room — check the length and width.` });
   if (area > 1500) out.push({ path: ['lengthFt'], message: `${roundHalfUp(area)} ft² is very large for one room — consider splitting it.` });
   if (room.lengthFt !== undefined && room.widthFt !== undefined && Math.max(room.lengthFt, room.widthFt) > 8 * Math.min(room.lengthFt, room.widthFt)) {

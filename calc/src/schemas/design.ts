@@ -1,18 +1,18 @@
 import { z } from 'zod';
-import { bounded, boundedInt, key, name } from './fields';
+import { bounded, boundedInt, keyField, nameField } from './fields';
 import { tubeOdSchema } from './equipment';
 
 /** A zone: the rooms one indoor unit serves. */
 export const zoneSchema = z.object({
-  key: key('Zone key'),
-  name: name('Zone name'),
-  roomIds: z.array(key('Room id')).min(1, 'Choose at least one room for the zone').max(50, 'At most 50 rooms per zone'),
-  indoorUnitKey: key('Indoor unit'),
+  key: keyField('Zone key'),
+  name: nameField('Zone name'),
+  roomIds: z.array(keyField('Room id')).min(1, 'Choose at least one room for the zone').max(50, 'At most 50 rooms per zone'),
+  indoorUnitKey: keyField('Indoor unit'),
 });
 
 /** One line-set circuit from the outdoor unit to a zone's indoor unit. Lengths in ft. */
 export const circuitSchema = z.object({
-  zoneKey: key('Zone'),
+  zoneKey: keyField('Zone'),
   lengthFt: bounded('Line-set length', 1, 300, 'ft'),
   liftFt: bounded('Vertical lift', 0, 200, 'ft').default(0),
   liquidOdIn: tubeOdSchema.optional(),
@@ -34,9 +34,9 @@ export const electricalInputSchema = z.object({
 
 /** One outdoor unit and what it feeds. */
 export const systemSchema = z.object({
-  key: key('System key'),
-  name: name('System name'),
-  outdoorUnitKey: key('Outdoor unit'),
+  key: keyField('System key'),
+  name: nameField('System name'),
+  outdoorUnitKey: keyField('Outdoor unit'),
   mounting: z.enum(['pad', 'wall-bracket'], { error: 'Choose pad or wall bracket' }).default('pad'),
   circuits: z.array(circuitSchema).min(1, 'Add at least one line-set circuit').max(8, 'At most 8 circuits per system'),
   electrical: electricalInputSchema,

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { bounded, boundedInt, key, name } from './fields';
+import { bounded, boundedInt, keyField, nameField } from './fields';
 
 /** Capacity at one outdoor temperature (manufacturer expanded data), Btu/h. */
 export const capacityPointSchema = z.object({
@@ -24,8 +24,8 @@ export const tubeOdSchema = z.union(
 
 /** An indoor unit in the catalog (invented models in fixtures). */
 export const indoorUnitSchema = z.object({
-  key: key('Indoor unit key'),
-  description: name('Description', 120),
+  key: keyField('Indoor unit key'),
+  description: nameField('Description', 120),
   unitType: indoorUnitTypeSchema,
   nominalBtuh: bounded('Nominal capacity', 3000, 120000, 'Btu/h'),
   cooling: capacityCurve('cooling'),
@@ -38,8 +38,8 @@ export const indoorUnitSchema = z.object({
 
 /** An outdoor unit in the catalog, with its charge and line-set data from the maker. */
 export const outdoorUnitSchema = z.object({
-  key: key('Outdoor unit key'),
-  description: name('Description', 120),
+  key: keyField('Outdoor unit key'),
+  description: nameField('Description', 120),
   equipmentType: equipmentTypeSchema,
   refrigerant: refrigerantSchema,
   nominalBtuh: bounded('Nominal capacity', 6000, 120000, 'Btu/h'),

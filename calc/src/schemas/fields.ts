@@ -18,12 +18,12 @@ export function boundedInt(label: string, min: number, max: number, unit = '') {
 }
 
 /** A short required name. */
-export function name(label: string, max = 80) {
+export function nameField(label: string, max = 80) {
   return z.string({ error: `${label}: enter text` }).trim().min(1, `Enter a ${label.toLowerCase()}`).max(max, `${label} must be at most ${max} characters`);
 }
 
 /** A stable key (letters, digits, dashes, underscores, dots, slashes, colons). */
-export function key(label: string) {
+export function keyField(label: string) {
   return z
     .string({ error: `${label}: enter text` })
     .min(1, `Enter a ${label.toLowerCase()}`)

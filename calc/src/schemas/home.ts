@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { key, name } from './fields';
+import { keyField, nameField } from './fields';
 import { designConditionsSchema } from './design-conditions';
 import { roomInputSchema } from './room-input';
 
@@ -9,8 +9,8 @@ export const tightnessSchema = z.enum(['very-tight', 'tight', 'average', 'leaky'
 /** A home: its design conditions, its tightness and its rooms (unique ids). */
 export const homeInputSchema = z
   .object({
-    id: key('Home id').optional(),
-    name: name('Home name').optional(),
+    id: keyField('Home id').optional(),
+    name: nameField('Home name').optional(),
     designConditions: designConditionsSchema,
     tightness: tightnessSchema.default('average'),
     rooms: z.array(roomInputSchema).min(1, 'Add at least one room').max(200, 'At most 200 rooms'),

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { bounded, boundedInt, key, name } from './fields';
+import { bounded, boundedInt, keyField, nameField } from './fields';
 import { aboveSchema, applianceSchema, belowSchema, wallSchema } from './room';
 import { roundHalfUp } from '../rounding';
 import { wallDoorAreaFt2, wallGrossAreaFt2, wallWindowAreaFt2, windowAreaFt2 } from '../geometry';
@@ -11,8 +11,8 @@ import { wallDoorAreaFt2, wallGrossAreaFt2, wallWindowAreaFt2, windowAreaFt2 } f
  */
 export const roomInputSchema = z
   .object({
-    id: key('Room id'),
-    name: name('Room name'),
+    id: keyField('Room id'),
+    name: nameField('Room name'),
     floorLevel: boundedInt('Floor level', -2, 5).default(1),
     lengthFt: bounded('Length', 1, 200, 'ft').optional(),
     widthFt: bounded('Width', 1, 200, 'ft').optional(),

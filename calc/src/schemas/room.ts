@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { bounded, boundedInt, compassDirectionSchema, name } from './fields';
+import { bounded, boundedInt, compassDirectionSchema, nameField } from './fields';
 
 /** Interior shading of a window. */
 export const interiorShadingSchema = z.enum(['none', 'blinds', 'drapes', 'shades'], { error: 'Choose the interior shading' });
@@ -75,7 +75,7 @@ export const belowSchema = z.discriminatedUnion('kind', [
 
 /** A heat-producing appliance or light: a gain in W or Btu/h, plus optional latent Btu/h. */
 export const applianceSchema = z.object({
-  label: name('Appliance name', 60),
+  label: nameField('Appliance name', 60),
   gain: bounded('Appliance gain', 0, 20000),
   unit: z.enum(['W', 'Btu/h'], { error: 'Choose W or Btu/h' }).default('W'),
   latentBtuh: bounded('Appliance latent gain', 0, 10000, 'Btu/h').default(0),

@@ -15,7 +15,8 @@ export interface CapacityAt {
 export function capacityAtOutdoorF({ points, outdoorF }: { readonly points: readonly CapacityPoint[]; readonly outdoorF: number }): CapacityAt {
   const t = num(outdoorF);
   assert(points.length > 0, 'EMPTY_LIST');
-  const sorted = [...points].sort((a, b) => a.outdoorF - b.outdoorF);
+  const ascending = points.every((p, i) => i === 0 || (points[i - 1]?.outdoorF ?? -Infinity) <= p.outdoorF);
+  const sorted = ascending ? points : [...points].sort((a, b) => a.outdoorF - b.outdoorF);
   const first = sorted[0];
   const last = sorted[sorted.length - 1];
   assert(first !== undefined && last !== undefined, 'EMPTY_LIST');

@@ -1,5 +1,10 @@
 import { CompanySchema } from '../modules/companies/company.entity';
 import { UserSchema } from '../modules/users/user.entity';
+import { CompanySettingsSchema } from '../modules/company-settings/company-settings.entity';
+import { CustomerSchema } from '../modules/customers/customer.entity';
+import { JobSchema } from '../modules/jobs/job.entity';
+import { PhotoSchema } from '../modules/photos/photo.entity';
+import { RoomSchema } from '../modules/rooms/room.entity';
 
 /** Every entity the ORM knows. A module adds its schema here. */
-export const entities = [CompanySchema, UserSchema];
+export const entities = [CompanySchema, UserSchema, CompanySettingsSchema, CustomerSchema, JobSchema, RoomSchema, PhotoSchema];

@@ -6,6 +6,12 @@ import { createLoginLimiter } from './auth/rate-limit';
 import { outboxRoutes } from './dev/outbox.routes';
 import { healthRoutes } from './health/health.routes';
 import { userRoutes } from './users/user.routes';
+import { companySettingsRoutes } from './company-settings/company-settings.routes';
+import { customerRoutes } from './customers/customer.routes';
+import { jobRoutes } from './jobs/job.routes';
+import { loadsRoutes } from './loads/loads.routes';
+import { photoRoutes } from './photos/photo.routes';
+import { roomRoutes } from './rooms/room.routes';
 
 /** Every API module, mounted under /api. Each route is made through createApiRouter, so each has a policy. */
 export function mountModules(app: Express, services: Services): void {
@@ -19,4 +25,10 @@ export function mountModules(app: Express, services: Services): void {
   mount('/auth', (api) => authRoutes(api, limiter));
   mount('/users', userRoutes);
   mount('/dev', outboxRoutes);
+  mount('/company', companySettingsRoutes);
+  mount('/customers', customerRoutes);
+  mount('/jobs', jobRoutes);
+  mount('/jobs', roomRoutes);
+  mount('/jobs', photoRoutes);
+  mount('/jobs', loadsRoutes);
 }

@@ -3,6 +3,7 @@ import type pg from 'pg';
 import type { Config } from '../config';
 import type { Outbox } from '../fakes/smtp-fake';
 import type { Mailer } from './mailer';
+import type { Storage } from './storage';
 
 export interface Clock {
   now(): Date;
@@ -16,6 +17,8 @@ export interface Services {
   sessionPool: pg.Pool;
   config: Config;
   mailer: Mailer;
+  /** Uploaded files (room photos). */
+  storage: Storage;
   clock: Clock;
   /** Only where the dev outbox page is on (never in production). */
   outbox?: Outbox;

@@ -1,0 +1,92 @@
+/**
+ * calc benchmark: a 40-room home with full design, takeoff and pricing. Prints the median
+ * time of a full recompute and how many times it fits in one 16 ms frame (goal ≥ 100×).
+ * Run: npx tsx bench/calc.ts — informational, never fails.
+ */
+import { performance } from 'node:perf_hooks';
+import {
+  computeDesign, computeDesignFromParsed, designSchema, equipmentCatalogSchema, homeInputSchema, priceBookSchema, pricingSchema,
+  DEFAULT_SIZING_POLICY, type DesignInput, type EquipmentCatalogInput, type RoomInput,
+} from '../calc/index';
+import { catalog as sampleCatalog, conditions, priceBook, pricing } from '../tests/calc/sample-data';
+
+const FRAME_MS = 16;
+const directions = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'] as const;
+
+function room(i: number): RoomInput {
+  const dir = directions[i % directions.length] ?? 'N';
+  const dir2 = directions[(i + 2) % directions.length] ?? 'E';
+  return {
+    id: `room-${i}`, name: `Room ${i + 1}`, floorLevel: 1 + (i % 2), lengthFt: 10 + (i % 7), widthFt: 9 + (i % 5), ceilingHeightFt: 8 + (i % 3),
+    exposedWalls: [
+      { direction: dir, lengthFt: 10 + (i % 7), windows: [{ widthIn: 36, heightIn: 48, count: 1 + (i % 2), glazing: 'double-low-e', interiorShading: 'blinds' }] },
+      { direction: dir2, lengthFt: 9 + (i % 5), windows: [{ areaFt2: 12, glazing: 'double-clear' }], doors: i % 4 === 0 ? [{ areaFt2: 20 }] : [] },
+    ],
+    above: i % 2 === 0 ? { kind: 'attic', insulation: 'r38' } : { kind: 'conditioned' },
+    below: i % 2 === 0 ? { kind: 'conditioned' } : { kind: 'crawlspace', vented: true, insulation: 'r19' },
+    occupants: i % 3, appliances: i % 5 === 0 ? [{ label: 'Electronics', gain: 300, unit: 'W' }] : [],
+  };
+}
+
+const catalog: EquipmentCatalogInput = {
+  indoorUnits: sampleCatalog.indoorUnits,
+  outdoorUnits: [...sampleCatalog.outdoorUnits, {
+    key: 'GL-O48-M5', description: 'GL-O48 five-port outdoor unit', equipmentType: 'heat-pump-variable-speed', refrigerant: 'R-454B',
+    nominalBtuh: 48000, cooling: [{ outdoorF: 82, btuh: 50000 }, { outdoorF: 95, btuh: 48000 }, { outdoorF: 105, btuh: 44000 }],
+    heating: [{ outdoorF: 5, btuh: 40000 }, { outdoorF: 47, btuh: 54000 }], maxHeads: 5, factoryChargeOz: 140, prechargedLengthFt: 25,
+    adderOzPerFt: 0.16, maxLineLengthFt: 82, maxTotalLineLengthFt: 330, maxLiftFt: 49, mcaA: 32, mocpA: 45,
+  }],
+};
+
+const rooms = Array.from({ length: 40 }, (_, i) => room(i));
+const zones = Array.from({ length: 20 }, (_, z) => ({
+  key: `zone-${z}`, name: `Zone ${z + 1}`, roomIds: [`room-${2 * z}`, `room-${2 * z + 1}`], indoorUnitKey: z % 2 === 0 ? 'GL-12K-WH' : 'GL-9K-WH',
+}));
+const design: DesignInput = {
+  zones,
+  systems: Array.from({ length: 4 }, (_, s) => ({
+    key: `sys-${s}`, name: `System ${s + 1}`, outdoorUnitKey: 'GL-O48-M5', mounting: s % 2 === 0 ? 'pad' : 'wall-bracket',
+    circuits: Array.from({ length: 5 }, (_, c) => ({ zoneKey: `zone-${s * 5 + c}`, lengthFt: 20 + 7 * c, liftFt: c * 3, lineCoverFt: 10, condensate: c === 4 ? 'pump' : 'gravity' })),
+    electrical: { terminationC: 75, wiringMethod: 'thhn-conduit', circuitLengthFt: 60 },
+  })),
+};
+const home = { designConditions: conditions, tightness: 'average' as const, rooms };
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  const mid = Math.floor(s.length / 2);
+  return s.length % 2 ? (s[mid] ?? 0) : ((s[mid - 1] ?? 0) + (s[mid] ?? 0)) / 2;
+}
+
+function measure(run: () => unknown, runs: number): { median: number; p90: number; min: number } {
+  for (let i = 0; i < 50; i += 1) run(); // warm-up
+  const times: number[] = [];
+  for (let i = 0; i < runs; i += 1) {
+    const t0 = performance.now();
+    run();
+    times.push(performance.now() - t0);
+  }
+  const sorted = [...times].sort((a, b) => a - b);
+  return { median: median(times), p90: sorted[Math.floor(runs * 0.9)] ?? 0, min: sorted[0] ?? 0 };
+}
+
+function report(label: string, m: { median: number; p90: number; min: number }): void {
+  const ratio = FRAME_MS / m.median;
+  console.log(`  ${label}: median ${m.median.toFixed(3)} ms (min ${m.min.toFixed(3)}, p90 ${m.p90.toFixed(3)}) → ${ratio.toFixed(1)}× within a ${FRAME_MS} ms frame (goal ≥ 100×: ${ratio >= 100 ? 'met' : 'not met'})`);
+}
+
+try {
+  const full = () => computeDesign({ home, design, catalog, priceBook, pricing });
+  const parsed = {
+    home: homeInputSchema.parse(home), design: designSchema.parse(design), catalog: equipmentCatalogSchema.parse(catalog),
+    priceBook: priceBookSchema.parse(priceBook), pricing: pricingSchema.parse(pricing), policy: DEFAULT_SIZING_POLICY,
+  };
+  const engine = () => computeDesignFromParsed(parsed);
+  const first = full();
+  console.log('calc benchmark — 40 rooms, 20 zones, 4 systems × 5 circuits, takeoff + pricing');
+  console.log(`  takeoff lines: ${first.takeoff.length}, total: $${(first.price.totalCents / 100).toFixed(2)}, warnings: ${first.warnings.length}`);
+  report('full recompute incl. zod validation (computeDesign)', measure(full, 300));
+  report('engine recompute on validated inputs (computeDesignFromParsed)', measure(engine, 1000));
+} catch (e) {
+  console.log('calc benchmark could not run:', e instanceof Error ? e.message : String(e));
+}

@@ -1,0 +1,56 @@
+/**
+ * Gaugeline calc — the pure trade engine (imported as `@calc`). No I/O, no clock, no
+ * randomness. Canonical units imperial; see calc/README.md for the map.
+ */
+export * from './src/errors';
+export * from './src/rounding';
+export * from './src/units';
+export * from './src/psychrometrics';
+export * from './src/air';
+export * from './src/conduction';
+export * from './src/construction-defaults';
+export * from './src/geometry';
+export * from './src/parse';
+export * from './src/metric';
+
+export * from './src/schemas/fields';
+export * from './src/schemas/design-conditions';
+export * from './src/schemas/room';
+export * from './src/schemas/room-input';
+export * from './src/schemas/home';
+export * from './src/schemas/equipment';
+export * from './src/schemas/design';
+
+export * from './src/loads/conditions';
+export * from './src/loads/envelope';
+export * from './src/loads/internal';
+export * from './src/loads/notes';
+export * from './src/loads/room-load';
+export * from './src/loads/home-load';
+export * from './src/loads/warnings';
+
+export * from './src/sizing/policy';
+export * from './src/sizing/capacity';
+export * from './src/sizing/match';
+
+export * from './src/refrigerant/tube';
+export * from './src/refrigerant/charge';
+export * from './src/refrigerant/a2l';
+export * from './src/refrigerant/cautions';
+export * from './src/refrigerant/circuits';
+
+export * from './src/electrical/nec';
+export * from './src/electrical/plan';
+export * from './src/commissioning/checks';
+
+export * from './src/takeoff/defaults';
+export * from './src/takeoff/lines';
+export * from './src/takeoff/build';
+
+export * from './src/pricing/money';
+export * from './src/pricing/schemas';
+export * from './src/pricing/price';
+
+export * from './src/design/zone-loads';
+export * from './src/design/compute-design';
+export * from './src/design/options';

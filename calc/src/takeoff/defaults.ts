@@ -1,0 +1,38 @@
+/**
+ * Takeoff and labor defaults [TRADE — common practice; each company edits its own].
+ * Lengths in ft, hours in h, cylinder sizes in lb.
+ */
+export const TAKEOFF_DEFAULTS = {
+  /** Pre-insulated line-set kit lengths sold. */
+  lineSetKitLengthsFt: [15, 25, 35, 50, 75, 100],
+  /** Line-cover straight section length. */
+  lineCoverPieceFt: 8,
+  /** Condensate line sold by 10 ft. */
+  condensateStepFt: 10,
+  /** Wire and communication cable: slack added, then rounded up to 5 ft. */
+  cableSlackFt: 5,
+  cableStepFt: 5,
+  /** Refrigerant sold in cylinders of this many lb. */
+  cylinderLb: { 'R-410A': 25, 'R-32': 20, 'R-454B': 20 },
+} as const;
+
+/** Labor table, hours per task. [TRADE; the company's own table overrides] */
+export const LABOR_HOURS = {
+  mountWallHead: 1.5,
+  mountCassette: 3,
+  mountFloorConsole: 1.5,
+  mountAirHandler: 4,
+  setOutdoorPad: 1,
+  setOutdoorBracket: 2,
+  lineSetBase: 0.75,
+  lineSetPerFt: 0.02,
+  wallPenetration: 0.5,
+  condensateGravity: 0.5,
+  condensatePump: 1.5,
+  lineCoverPerFt: 0.05,
+  electricalBase: 2,
+  electricalPerFt: 0.02,
+  pressureTestEvacuate: 2,
+  chargeStartupBase: 1,
+  chargeStartupPerCircuit: 0.25,
+} as const;

@@ -1,0 +1,25 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { redirect } from 'react-router-dom';
+import { rolesFor } from '../config/nav';
+import { paths, signInPath } from '../config/paths';
+import { meQueryOptions } from '../features/auth/api/get-me';
+import type { Me } from '../features/auth/schemas';
+
+export const NOTICE_NOT_ALLOWED = 'not-allowed';
+
+/** Loaders run in parallel, so every guarded loader checks the session itself (the query is shared). */
+export async function requireUser(queryClient: QueryClient, request: Request): Promise<Me> {
+  const me = await queryClient.ensureQueryData(meQueryOptions());
+  if (!me) {
+    const url = new URL(request.url);
+    throw redirect(signInPath(url.pathname + url.search));
+  }
+  return me;
+}
+
+/** Areas from config/nav.ts: a role without access goes back home with a notice. */
+export async function requireArea(queryClient: QueryClient, request: Request, navId: string): Promise<Me> {
+  const me = await requireUser(queryClient, request);
+  if (!rolesFor(navId).includes(me.user.role)) throw redirect(`${paths.home}?notice=${NOTICE_NOT_ALLOWED}`);
+  return me;
+}

@@ -1,0 +1,58 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { ComponentType } from 'react';
+import { createBrowserRouter, type LoaderFunction, type RouteObject } from 'react-router-dom';
+import { RouteError } from '../components/errors/route-error';
+import { Spinner } from '../components/ui/spinner';
+import { paths } from '../config/paths';
+
+/** What every file in app/routes/ exports. */
+export interface RouteModule {
+  default: ComponentType;
+  clientLoader?: (queryClient: QueryClient) => LoaderFunction;
+  ErrorBoundary?: ComponentType;
+}
+
+function lazyRoute(queryClient: QueryClient, load: () => Promise<RouteModule>): RouteObject['lazy'] {
+  return async () => {
+    const m = await load();
+    return {
+      Component: m.default,
+      ...(m.clientLoader ? { loader: m.clientLoader(queryClient) } : {}),
+      // Every route gets an error boundary; a module may bring a more specific one.
+      ErrorBoundary: m.ErrorBoundary ?? RouteError,
+    };
+  };
+}
+
+export function createRoutes(queryClient: QueryClient): RouteObject[] {
+  const lazy = (load: () => Promise<RouteModule>) => lazyRoute(queryClient, load);
+  return [
+    {
+      // Catches what the lazy routes cannot, such as a chunk that failed to download.
+      errorElement: <RouteError />,
+      HydrateFallback: () => <Spinner label="Opening Gaugeline…" />,
+      children: [
+        { path: paths.signIn, lazy: lazy(() => import('./routes/sign-in')) },
+        {
+          // The signed-in shell: its loader is the auth guard.
+          path: paths.home,
+          id: 'app',
+          lazy: lazy(() => import('./routes/app-root')),
+          children: [
+            { index: true, lazy: lazy(() => import('./routes/home')) },
+            { path: paths.jobs, lazy: lazy(() => import('./routes/jobs')) },
+            { path: paths.users, lazy: lazy(() => import('./routes/users')) },
+            { path: paths.outbox, lazy: lazy(() => import('./routes/outbox')) },
+            { path: paths.reports, lazy: lazy(() => import('./routes/reports')) },
+            { path: paths.priceBook, lazy: lazy(() => import('./routes/price-book')) },
+            { path: '*', lazy: lazy(() => import('./routes/not-found')) },
+          ],
+        },
+      ],
+    },
+  ];
+}
+
+export function createAppRouter(queryClient: QueryClient) {
+  return createBrowserRouter(createRoutes(queryClient));
+}

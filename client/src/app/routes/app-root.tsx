@@ -1,0 +1,54 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { Suspense, useMemo } from 'react';
+import { Outlet, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { AppShell } from '../../components/layout/app-shell';
+import { Alert } from '../../components/ui/alert';
+import { Button } from '../../components/ui/button';
+import { Spinner } from '../../components/ui/spinner';
+import type { Feature } from '../../config/nav';
+import { useSignedIn } from '../../features/auth/api/get-me';
+import { useSignOut } from '../../features/auth/api/sign-out';
+import { useOutboxAvailable } from '../../features/outbox/api/get-outbox';
+import { NOTICE_NOT_ALLOWED, requireUser } from '../guards';
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    await requireUser(queryClient, request);
+    return null;
+  };
+
+function RoleNotice() {
+  const [params, setParams] = useSearchParams();
+  if (params.get('notice') !== NOTICE_NOT_ALLOWED) return null;
+  const handleDismiss = () => {
+    params.delete('notice');
+    setParams(params, { replace: true });
+  };
+  return (
+    <div className="mb-6 flex flex-col gap-2">
+      <Alert tone="warning" title="That page is not part of your role">
+        You were brought back to your start page. If you need it, ask an owner of your company to change your role.
+      </Alert>
+      <Button variant="ghost" className="self-start" onClick={handleDismiss}>
+        Dismiss
+      </Button>
+    </div>
+  );
+}
+
+export default function AppRoot() {
+  const { user, company } = useSignedIn();
+  const signOut = useSignOut();
+  const outbox = useOutboxAvailable(user.role === 'owner');
+  const features = useMemo<ReadonlySet<Feature>>(() => new Set(outbox ? ['outbox'] : []), [outbox]);
+
+  return (
+    <AppShell user={user} companyName={company.name} features={features} signingOut={signOut.isPending} onSignOut={() => signOut.mutate()}>
+      <RoleNotice />
+      <Suspense fallback={<Spinner />}>
+        <Outlet />
+      </Suspense>
+    </AppShell>
+  );
+}

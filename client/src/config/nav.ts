@@ -1,0 +1,36 @@
+import { paths } from './paths';
+import type { Role } from './roles';
+
+/**
+ * The one list of signed-in areas: the navigation and the route guards both read it,
+ * so a menu item and the page it opens can never disagree about who may use it.
+ * A later feature adds one entry here and one route in app/router.tsx.
+ */
+export interface NavItem {
+  id: string;
+  label: string;
+  to: string;
+  roles: readonly Role[];
+  /** Shown only when the server says the area exists (e.g. the dev outbox). */
+  needsFeature?: 'outbox';
+}
+
+const ALL: readonly Role[] = ['owner', 'estimator', 'salesperson', 'installer'];
+
+export const navItems: readonly NavItem[] = [
+  { id: 'jobs', label: 'Jobs', to: paths.jobs, roles: ALL },
+  { id: 'users', label: 'Users', to: paths.users, roles: ['owner'] },
+  { id: 'reports', label: 'Reports', to: paths.reports, roles: ['owner'] },
+  { id: 'price-book', label: 'Price book & catalog', to: paths.priceBook, roles: ['owner'] },
+  { id: 'outbox', label: 'Outbox', to: paths.outbox, roles: ['owner'], needsFeature: 'outbox' },
+];
+
+export type Feature = NonNullable<NavItem['needsFeature']>;
+
+export function navItemsFor(role: Role, features: ReadonlySet<Feature>): NavItem[] {
+  return navItems.filter((i) => i.roles.includes(role) && (!i.needsFeature || features.has(i.needsFeature)));
+}
+
+export function rolesFor(id: string): readonly Role[] {
+  return navItems.find((i) => i.id === id)?.roles ?? [];
+}

@@ -1,0 +1,29 @@
+/** Every client URL in one place; build links with these, never with string literals. */
+export const paths = {
+  home: '/',
+  signIn: '/sign-in',
+  jobs: '/jobs',
+  users: '/users',
+  outbox: '/dev/outbox',
+  reports: '/reports',
+  priceBook: '/price-book',
+} as const;
+
+export type AppPath = (typeof paths)[keyof typeof paths];
+
+export function signInPath(next?: string): string {
+  return next && next !== paths.home ? `${paths.signIn}?next=${encodeURIComponent(next)}` : paths.signIn;
+}
+
+/** Accepts only same-origin relative paths ("/jobs?x=1"), never "//host" or "https://…". */
+export function safeNext(next: string | null | undefined): string {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) return paths.home;
+  try {
+    const url = new URL(next, 'http://gaugeline.invalid');
+    if (url.origin !== 'http://gaugeline.invalid') return paths.home;
+    if (url.pathname === paths.signIn) return paths.home;
+    return `${url.pathname}${url.search}${url.hash}`;
+  } catch {
+    return paths.home;
+  }
+}

@@ -1,0 +1,29 @@
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
+import { apiFetch } from '../../../lib/api-client';
+import { isApiError } from '../../../lib/api-error';
+import { meSchema, type Me } from '../schemas';
+import { authKeys } from '../query-keys';
+
+/** The signed-in user and company, or null when nobody is signed in (401). */
+export async function getMe(signal?: AbortSignal): Promise<Me | null> {
+  try {
+    return await apiFetch('/api/auth/me', { schema: meSchema, signal });
+  } catch (e) {
+    if (isApiError(e) && e.status === 401) return null;
+    throw e;
+  }
+}
+
+export const meQueryOptions = () =>
+  queryOptions({ queryKey: authKeys.me(), queryFn: ({ signal }) => getMe(signal), staleTime: 5 * 60_000 });
+
+export function useMe() {
+  return useSuspenseQuery(meQueryOptions()).data;
+}
+
+/** For pages inside the signed-in shell, where the guard has already made sure of a session. */
+export function useSignedIn(): Me {
+  const me = useMe();
+  if (!me) throw new Error('This page needs a signed-in user.');
+  return me;
+}

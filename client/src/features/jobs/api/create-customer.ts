@@ -1,0 +1,14 @@
+import { apiFetch } from '../../../lib/api-client';
+import { customerResponse } from '../schemas';
+
+export interface CreateCustomerBody {
+  name: string;
+  email?: string | null;
+  phone?: string | null;
+  notes?: string;
+}
+
+/** POST /api/customers. */
+export async function createCustomer(body: CreateCustomerBody) {
+  return (await apiFetch('/api/customers', { method: 'POST', body, schema: customerResponse })).customer;
+}

@@ -1,0 +1,84 @@
+import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { Link } from 'react-router-dom';
+import { jobStatusLabels, type JobRecord } from '../../../lib/job-records';
+
+const col = createColumnHelper<JobRecord>();
+const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
+
+const columns = [
+  col.accessor((j) => j.customer.name, {
+    id: 'customer',
+    header: 'Customer',
+    cell: (c) => (
+      <Link className="font-semibold text-ink-800 underline underline-offset-2" to={`/jobs/${c.row.original.id}`}>
+        {c.getValue()}
+      </Link>
+    ),
+  }),
+  col.accessor((j) => [j.site.street, j.site.unit, j.site.city].filter(Boolean).join(', '), { id: 'address', header: 'Site address' }),
+  col.accessor('status', { header: 'Status', cell: (c) => jobStatusLabels[c.getValue()] }),
+  col.accessor((j) => j.salesperson?.name ?? '—', { id: 'salesperson', header: 'Salesperson' }),
+  col.accessor('lastActivityAt', { header: 'Last activity', cell: (c) => when.format(new Date(c.getValue())) }),
+];
+
+interface Props {
+  jobs: readonly JobRecord[];
+  total: number;
+  page: number;
+  pageSize: number;
+  onPage: (page: number) => void;
+}
+
+/** Server-paginated: the table shows one page; the URL carries the page number. */
+export function JobsTable({ jobs, total, page, pageSize, onPage }: Props) {
+  const pageCount = Math.max(1, Math.ceil(total / pageSize));
+  const table = useReactTable({
+    data: [...jobs],
+    columns,
+    getCoreRowModel: getCoreRowModel(),
+    manualPagination: true,
+    pageCount,
+    state: { pagination: { pageIndex: page - 1, pageSize } },
+  });
+  return (
+    <div className="flex flex-col gap-3">
+      <div className="overflow-x-auto rounded-lg border border-line bg-white">
+        <table className="w-full min-w-[640px] text-left">
+          <thead className="bg-ink-50 text-sm text-ink-900">
+            {table.getHeaderGroups().map((hg) => (
+              <tr key={hg.id}>
+                {hg.headers.map((h) => (
+                  <th key={h.id} scope="col" className="px-3 py-2 font-semibold">
+                    {flexRender(h.column.columnDef.header, h.getContext())}
+                  </th>
+                ))}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {table.getRowModel().rows.map((row) => (
+              <tr key={row.id} className="border-t border-line">
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className="px-3 py-3">
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <nav aria-label="Pages" className="flex items-center justify-between gap-2">
+        <button type="button" className="min-h-touch rounded-md border border-line bg-white px-4 disabled:opacity-50" disabled={page <= 1} onClick={() => onPage(page - 1)}>
+          Previous page
+        </button>
+        <span className="text-sm text-muted">
+          Page {page} of {pageCount} · {total} {total === 1 ? 'job' : 'jobs'}
+        </span>
+        <button type="button" className="min-h-touch rounded-md border border-line bg-white px-4 disabled:opacity-50" disabled={page >= pageCount} onClick={() => onPage(page + 1)}>
+          Next page
+        </button>
+      </nav>
+    </div>
+  );
+}

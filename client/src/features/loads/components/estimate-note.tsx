@@ -1,0 +1,24 @@
+import { METHOD_NOTES } from '@calc';
+
+/** Says plainly that these are estimates, and which method made them. */
+export function EstimateBadge() {
+  return (
+    <span className="inline-flex items-center rounded-full border border-amber-line bg-amber-soft px-3 py-0.5 text-sm font-semibold text-amber-deep">
+      Estimate
+    </span>
+  );
+}
+
+export function MethodNote({ open = false }: { open?: boolean }) {
+  return (
+    <details open={open} className="rounded-md border border-line bg-paper p-3 text-sm">
+      <summary className="min-h-touch cursor-pointer font-semibold text-ink-900">How these numbers are worked out</summary>
+      <p className="mt-2 text-ink-950">A load estimate is an estimate. Gaugeline’s method and assumptions:</p>
+      <ul className="mt-1 list-disc pl-5 text-ink-950">
+        {METHOD_NOTES.map((n) => (
+          <li key={n}>{n}</li>
+        ))}
+      </ul>
+    </details>
+  );
+}

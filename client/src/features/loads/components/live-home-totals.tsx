@@ -1,0 +1,15 @@
+import { computeHomeLoad } from '../model/compute';
+import { HomeTotals } from './home-totals';
+
+interface Props {
+  rooms: readonly { readonly id: string; readonly input: Record<string, unknown> }[];
+  designConditions: Record<string, unknown> | null;
+  tightness: string;
+}
+
+/** The whole home, recomputed in the browser from the rooms as they stand (saved or waiting). */
+export function LiveHomeTotals({ rooms, designConditions, tightness }: Props) {
+  const result = computeHomeLoad(rooms, designConditions, tightness);
+  if (!result.ok) return <p className="rounded-md border border-line bg-white p-4 text-muted">{result.message}</p>;
+  return <HomeTotals load={result.value.load} skipped={result.value.skipped} />;
+}

@@ -1,0 +1,78 @@
+import {
+  BTUH_PER_TON,
+  CalcError,
+  COMPONENT_KEYS,
+  designConditionsSchema,
+  homeLoad,
+  roomInputSchema,
+  roomLoad,
+  roundHalfUp,
+  type ComponentKey,
+  type HomeLoad,
+  type Room,
+  type RoomLoad,
+  type Tightness,
+} from '@calc';
+
+/** Our words for calc's load components (chart labels and the printout). */
+export const COMPONENT_LABELS: Record<ComponentKey, string> = {
+  walls: 'Walls',
+  windowsConduction: 'Windows (conduction)',
+  windowsSolar: 'Sun through glass',
+  doors: 'Doors',
+  ceiling: 'Ceiling',
+  floor: 'Floor',
+  infiltration: 'Air leakage',
+  people: 'People',
+  appliances: 'Appliances',
+};
+export { COMPONENT_KEYS };
+
+const TIGHTNESS: readonly Tightness[] = ['very-tight', 'tight', 'average', 'leaky', 'very-leaky'];
+export const toTightness = (t: string): Tightness => TIGHTNESS.find((x) => x === t) ?? 'average';
+
+export const tons = (btuh: number) => roundHalfUp(btuh / BTUH_PER_TON, 2);
+
+export type LoadResult<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly message: string };
+
+function fail(e: unknown): { ok: false; message: string } {
+  if (e instanceof CalcError) return { ok: false, message: e.details[0]?.message ?? e.message };
+  return { ok: false, message: 'The loads could not be worked out from these inputs.' };
+}
+
+/** One room, live, with calc's roomLoad — the same engine the server runs. */
+export function computeRoomLoad(room: Room, designConditions: Record<string, unknown> | null, tightness: string): LoadResult<RoomLoad> {
+  if (!designConditions) return { ok: false, message: 'Enter the design conditions for the site to see this room’s loads.' };
+  try {
+    return { ok: true, value: roomLoad({ room, designConditions: designConditionsSchema.parse(designConditions), tightness: toTightness(tightness) }) };
+  } catch (e) {
+    return fail(e);
+  }
+}
+
+/**
+ * The whole home from the rooms calc accepts; rooms it refuses are named in `skipped`
+ * so the totals never silently leave one out.
+ */
+export function computeHomeLoad(
+  inputs: readonly { readonly id: string; readonly input: Record<string, unknown> }[],
+  designConditions: Record<string, unknown> | null,
+  tightness: string,
+): LoadResult<{ load: HomeLoad; skipped: readonly string[] }> {
+  if (!designConditions) return { ok: false, message: 'Enter the design conditions for the site to see the loads.' };
+  const rooms: Room[] = [];
+  const skipped: string[] = [];
+  for (const r of inputs) {
+    const parsed = roomInputSchema.safeParse({ ...r.input, id: r.id });
+    if (parsed.success) rooms.push(parsed.data);
+    else skipped.push(typeof r.input.name === 'string' ? r.input.name : r.id);
+  }
+  if (rooms.length === 0) return { ok: false, message: 'Add a room to see the loads.' };
+  const parsedConditions = designConditionsSchema.safeParse(designConditions);
+  if (!parsedConditions.success) return { ok: false, message: parsedConditions.error.issues[0]?.message ?? 'Check the design conditions.' };
+  try {
+    return { ok: true, value: { load: homeLoad({ home: { designConditions: parsedConditions.data, tightness: toTightness(tightness), rooms } }), skipped } };
+  } catch (e) {
+    return fail(e);
+  }
+}

@@ -1,0 +1,62 @@
+import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { useMemo } from 'react';
+import type { User } from '../../../types/user';
+import { useUsers } from '../api/get-users';
+import { UserRowActions } from './user-row-actions';
+
+const col = createColumnHelper<User>();
+
+export function UsersTable({ currentUserId }: { currentUserId: string }) {
+  const users = useUsers();
+  const columns = useMemo(
+    () => [
+      col.accessor('name', { header: 'Name', cell: (c) => <span className="font-semibold">{c.getValue()}</span> }),
+      col.accessor('email', { header: 'E-mail', cell: (c) => <span className="break-all">{c.getValue()}</span> }),
+      col.accessor('active', {
+        header: 'Status',
+        cell: (c) =>
+          c.getValue() ? (
+            <span className="rounded-sm bg-ok-soft px-2 py-0.5 text-sm font-semibold text-ok">Active</span>
+          ) : (
+            <span className="rounded-sm bg-amber-soft px-2 py-0.5 text-sm font-semibold text-amber-deep">Deactivated</span>
+          ),
+      }),
+      col.display({
+        id: 'actions',
+        header: 'Role and access',
+        cell: (c) => <UserRowActions user={c.row.original} isSelf={c.row.original.id === currentUserId} />,
+      }),
+    ],
+    [currentUserId],
+  );
+  const table = useReactTable({ data: users, columns, getCoreRowModel: getCoreRowModel(), getRowId: (u) => u.id });
+
+  // Phone: each row becomes a card (headers become inline labels); desktop: a plain table.
+  return (
+    <table className="w-full border-collapse text-left text-base">
+      <caption className="sr-only">People who can sign in to your company</caption>
+      <thead className="max-md:sr-only">
+        {table.getHeaderGroups().map((hg) => (
+          <tr key={hg.id} className="border-b border-line">
+            {hg.headers.map((h) => (
+              <th key={h.id} scope="col" className="px-3 py-2 text-sm font-semibold text-muted">
+                {flexRender(h.column.columnDef.header, h.getContext())}
+              </th>
+            ))}
+          </tr>
+        ))}
+      </thead>
+      <tbody>
+        {table.getRowModel().rows.map((row) => (
+          <tr key={row.id} className="border-b border-line max-md:mb-3 max-md:block max-md:rounded-lg max-md:border max-md:bg-white max-md:p-3">
+            {row.getVisibleCells().map((cell) => (
+              <td key={cell.id} className="px-3 py-3 align-top max-md:block max-md:px-0 max-md:py-1">
+                {flexRender(cell.column.columnDef.cell, cell.getContext())}
+              </td>
+            ))}
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}

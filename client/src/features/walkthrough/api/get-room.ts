@@ -1,0 +1,8 @@
+import { apiFetch } from '../../../lib/api-client';
+import { roomPath } from '../../../lib/job-queries';
+import { roomResponse } from '../../../lib/job-records';
+
+/** GET /api/jobs/:jobId/rooms/:roomId — the room as it is now (read after a conflict). */
+export async function getRoom(jobId: string, roomId: string) {
+  return (await apiFetch(roomPath(jobId, roomId), { schema: roomResponse })).room;
+}

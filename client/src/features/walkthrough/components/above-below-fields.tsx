@@ -1,0 +1,49 @@
+import { asRecord, asString } from '../model/draft';
+import { aboveOptions, belowOptions, ceilingInsulationOptions, floorInsulationOptions } from '../model/options';
+import type { EditorProps } from './editor-props';
+import { SelectInput } from './field-kit';
+
+const ABOVE_DEFAULTS: Record<string, object> = { attic: { kind: 'attic', insulation: 'r30' }, roof: { kind: 'roof', insulation: 'r30' }, conditioned: { kind: 'conditioned' } };
+const BELOW_DEFAULTS: Record<string, object> = {
+  slab: { kind: 'slab', edgeInsulated: false },
+  crawlspace: { kind: 'crawlspace', vented: true, insulation: 'none' },
+  basement: { kind: 'basement', insulation: 'none' },
+  garage: { kind: 'garage', insulation: 'none' },
+  conditioned: { kind: 'conditioned' },
+};
+
+/** What is above the room (attic, roof, conditioned floor) and below it (slab, crawl, basement, garage, conditioned). */
+export function AboveBelowFields({ draft, set, err }: EditorProps) {
+  const above = asRecord(draft.above);
+  const below = asRecord(draft.below);
+  const aboveKind = asString(above.kind, 'conditioned');
+  const belowKind = asString(below.kind, 'conditioned');
+  return (
+    <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+      <SelectInput label="Above the room" value={aboveKind} options={aboveOptions} onChange={(k) => set(['above'], ABOVE_DEFAULTS[k])} error={err(['above'])} />
+      {aboveKind === 'attic' || aboveKind === 'roof' ? (
+        <SelectInput label="Ceiling insulation" value={asString(above.insulation, 'r30')} options={ceilingInsulationOptions} onChange={(x) => set(['above', 'insulation'], x)} error={err(['above', 'insulation'])} />
+      ) : null}
+      <SelectInput label="Below the room" value={belowKind} options={belowOptions} onChange={(k) => set(['below'], BELOW_DEFAULTS[k])} error={err(['below'])} />
+      {belowKind === 'slab' ? (
+        <SelectInput
+          label="Slab edge"
+          value={below.edgeInsulated === true ? 'yes' : 'no'}
+          options={[{ value: 'no', label: 'Edge not insulated' }, { value: 'yes', label: 'Edge insulated' }]}
+          onChange={(x) => set(['below', 'edgeInsulated'], x === 'yes')}
+        />
+      ) : null}
+      {belowKind === 'crawlspace' ? (
+        <SelectInput
+          label="Crawl space venting"
+          value={below.vented === false ? 'closed' : 'vented'}
+          options={[{ value: 'vented', label: 'Vented' }, { value: 'closed', label: 'Closed (sealed)' }]}
+          onChange={(x) => set(['below', 'vented'], x === 'vented')}
+        />
+      ) : null}
+      {belowKind === 'crawlspace' || belowKind === 'basement' || belowKind === 'garage' ? (
+        <SelectInput label="Floor insulation" value={asString(below.insulation, 'none')} options={floorInsulationOptions} onChange={(x) => set(['below', 'insulation'], x)} error={err(['below', 'insulation'])} />
+      ) : null}
+    </div>
+  );
+}

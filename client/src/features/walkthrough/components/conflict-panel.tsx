@@ -1,0 +1,101 @@
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { Spinner } from '../../../components/ui/spinner';
+import { errorMessage } from '../../../lib/api-error';
+import { getJob, jobKeys } from '../../../lib/job-queries';
+import type { JobRecord, RoomRecord } from '../../../lib/job-records';
+import { getRoom } from '../api/get-room';
+import { diffFields, JOB_FIELD_LABELS, mergeChoices, ROOM_FIELD_LABELS, type Choice } from '../model/conflict';
+import type { WalkthroughItem } from '../sync/edits';
+import { useWalkthroughQueue } from '../sync/queue-context';
+import { ConflictChoices } from './conflict-choices';
+
+/**
+ * Shown when the server answered 409 to the oldest waiting edit. Reads the record as it is
+ * now, shows both values and writes the person's choice against the server's new version.
+ */
+export function ConflictPanel({ item, onResolved }: { item: WalkthroughItem; onResolved: () => void }) {
+  const edit = item.payload;
+  if (edit.kind === 'job-update') return <JobConflict item={item} jobId={edit.jobId} onResolved={onResolved} />;
+  if (edit.kind === 'room-create') return null;
+  return <RoomConflict item={item} jobId={edit.jobId} roomId={edit.roomId} onResolved={onResolved} />;
+}
+
+function RoomConflict({ item, jobId, roomId, onResolved }: { item: WalkthroughItem; jobId: string; roomId: string; onResolved: () => void }) {
+  const queue = useWalkthroughQueue();
+  const queryClient = useQueryClient();
+  const current = useQuery({ queryKey: [...jobKeys.rooms(jobId), roomId, 'current', item.id], queryFn: () => getRoom(jobId, roomId), retry: false });
+  const edit = item.payload;
+
+  const keepTheirs = (room: RoomRecord) => {
+    queryClient.setQueryData<RoomRecord[]>(jobKeys.rooms(jobId), (rooms) => rooms?.map((r) => (r.id === room.id ? room : r)));
+  };
+
+  if (current.isPending) return <Spinner label="Reading the saved version…" />;
+  if (current.isError) {
+    return (
+      <Alert tone="danger" title="This room was changed or removed by someone else.">
+        <p>{errorMessage(current.error)}</p>
+        <Button className="mt-2" variant="secondary" onClick={() => void queue.resolveConflict(item.id, 'drop').then(onResolved)}>
+          Discard my change
+        </Button>
+      </Alert>
+    );
+  }
+  const theirs = current.data;
+  if (edit.kind === 'room-delete') {
+    return (
+      <Alert tone="danger" title={`Someone changed “${String(theirs.input.name ?? 'this room')}” after you deleted it.`}>
+        <div className="mt-2 flex flex-wrap gap-2">
+          <Button variant="danger" onClick={() => void queue.resolveConflict(item.id, { payload: edit, baseVersion: theirs.version }).then(onResolved)}>
+            Delete it anyway
+          </Button>
+          <Button variant="secondary" onClick={() => { keepTheirs(theirs); void queue.resolveConflict(item.id, 'drop').then(onResolved); }}>
+            Keep the room
+          </Button>
+        </div>
+      </Alert>
+    );
+  }
+  if (edit.kind !== 'room-update') return null;
+  const diffs = diffFields(edit.input, theirs.input, ROOM_FIELD_LABELS);
+  const handleResolve = (choices: Record<string, Choice>) => {
+    const keepsMine = Object.values(choices).some((c) => c === 'mine');
+    if (!keepsMine) {
+      keepTheirs(theirs);
+      void queue.resolveConflict(item.id, 'drop').then(onResolved);
+      return;
+    }
+    const input = { ...mergeChoices(edit.input, theirs.input, choices), id: roomId };
+    void queue.resolveConflict(item.id, { payload: { ...edit, input }, baseVersion: theirs.version }).then(onResolved);
+  };
+  return <ConflictChoices key={item.id} title={`“${String(theirs.input.name ?? 'Room')}” was changed by someone else`} diffs={diffs} onResolve={handleResolve} />;
+}
+
+function JobConflict({ item, jobId, onResolved }: { item: WalkthroughItem; jobId: string; onResolved: () => void }) {
+  const queue = useWalkthroughQueue();
+  const queryClient = useQueryClient();
+  const current = useQuery({ queryKey: [...jobKeys.detail(jobId), 'current', item.id], queryFn: ({ signal }) => getJob(jobId, signal), retry: false });
+  const edit = item.payload;
+  if (edit.kind !== 'job-update') return null;
+  if (current.isPending) return <Spinner label="Reading the saved version…" />;
+  if (current.isError) return <Alert tone="danger" title="Could not read the job as saved now.">{errorMessage(current.error)}</Alert>;
+  const theirs: JobRecord = current.data;
+  const mine = edit.changes.designConditions ?? {};
+  const theirValues = theirs.designConditions ?? {};
+  const diffs = diffFields(mine, theirValues, JOB_FIELD_LABELS).filter((d) => d.mine !== undefined);
+  const handleResolve = (choices: Record<string, Choice>) => {
+    queryClient.setQueryData(jobKeys.detail(jobId), theirs);
+    if (!Object.values(choices).some((c) => c === 'mine')) {
+      void queue.resolveConflict(item.id, 'drop').then(onResolved);
+      return;
+    }
+    const entered: Record<string, number | string> = {};
+    for (const [k, v] of Object.entries(mergeChoices(mine, theirValues, choices))) {
+      if ((k in mine || choices[k] === 'mine') && (typeof v === 'number' || typeof v === 'string')) entered[k] = v;
+    }
+    void queue.resolveConflict(item.id, { payload: { ...edit, changes: { ...edit.changes, designConditions: entered } }, baseVersion: theirs.version }).then(onResolved);
+  };
+  return <ConflictChoices key={item.id} title="The site’s design conditions were changed by someone else" diffs={diffs} onResolve={handleResolve} />;
+}

@@ -1,0 +1,100 @@
+import { useState } from 'react';
+import { Button } from '../../../components/ui/button';
+import { INFILTRATION_TIGHTNESS } from '@calc';
+import type { JobRecord } from '../../../lib/job-records';
+import { DESIGN_FIELD_SPECS, enteredFromJob, notesFromJob, resolveDesign, type Entered } from '../model/design-fields';
+import { jobTarget, type JobChanges } from '../sync/edits';
+import { useWalkthroughQueue } from '../sync/queue-context';
+import { useDebouncedSave } from '../sync/use-debounced-save';
+import { NumberInput, SelectInput, TextInput } from './field-kit';
+
+const NOTICE = 'Design values must come from the local code’s climate table or a recognised climatic data source for the site.';
+const sourceLabels = { entered: 'Entered for this job', 'company-default': 'Company default', 'standard-default': 'Standard default' } as const;
+const tightnessOptions = Object.entries(INFILTRATION_TIGHTNESS).map(([value, t]) => ({ value, label: t.label }));
+
+interface Props {
+  job: JobRecord;
+  companyDefaults: Record<string, unknown> | null;
+  notice?: string | undefined;
+}
+
+/** The site's design conditions: company defaults prefill, each value says where it came from. Autosaved. */
+export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
+  const queue = useWalkthroughQueue();
+  const [entered, setEntered] = useState<Entered>(() => enteredFromJob(job));
+  const [notes, setNotes] = useState<Record<string, string>>(() => notesFromJob(job));
+  const [source, setSource] = useState(() => (typeof job.designConditions?.source === 'string' ? job.designConditions.source : ''));
+  const [tightness, setTightness] = useState<string>(job.tightness);
+  const resolved = resolveDesign(entered, source, companyDefaults);
+
+  const { schedule } = useDebouncedSave<JobChanges>(jobTarget(job.id), (changes) => {
+    void queue.enqueue({ target: jobTarget(job.id), baseVersion: job.version, payload: { kind: 'job-update', jobId: job.id, changes } });
+  });
+  const save = (next: { entered?: Entered; notes?: Record<string, string>; source?: string; tightness?: string }) => {
+    const e = next.entered ?? entered;
+    const n = next.notes ?? notes;
+    const s = next.source ?? source;
+    const t = next.tightness ?? tightness;
+    if (!resolveDesign(e, s, companyDefaults).values) return;
+    const designConditions: Record<string, number | string> = {};
+    for (const [k, v] of Object.entries(e)) if (v !== undefined) designConditions[k] = v;
+    if (s.trim()) designConditions.source = s.trim();
+    schedule({ designConditions, designSourceNotes: Object.fromEntries(Object.entries(n).filter(([, v]) => v.trim() !== '')), tightness: t });
+  };
+
+  return (
+    <section aria-label="Design conditions" className="flex flex-col gap-4">
+      <p className="rounded-md border-l-4 border-amber-line bg-amber-soft px-4 py-3 text-ink-950">{notice ?? NOTICE}</p>
+      <div className="grid gap-4 sm:grid-cols-2">
+        {DESIGN_FIELD_SPECS.map((f) => {
+          const value = resolved.shown[f.key];
+          const origin = resolved.origin[f.key] ?? 'standard-default';
+          return (
+            <div key={f.key} className="flex flex-col gap-2 rounded-md border border-line p-3">
+              <NumberInput
+                label={f.label}
+                quantity={f.quantity}
+                unit={f.unit ?? ''}
+                value={typeof value === 'number' ? value : undefined}
+                error={resolved.errors.get(f.key)}
+                hint={<span data-source={origin}>Source: {sourceLabels[origin]}</span>}
+                onChange={(v) => {
+                  // Emptying a field with a company default must not snap the default back in while typing.
+                  const typed = v === undefined && typeof companyDefaults?.[f.key] === 'number' ? Number.NaN : v;
+                  const next = { ...entered, [f.key]: typed };
+                  setEntered(next);
+                  save({ entered: next });
+                }}
+              />
+              {origin === 'entered' && typeof companyDefaults?.[f.key] === 'number' ? (
+                <Button
+                  variant="ghost"
+                  onClick={() => {
+                    const next = { ...entered, [f.key]: undefined };
+                    setEntered(next);
+                    save({ entered: next });
+                  }}
+                >
+                  Use company default for {f.label.toLowerCase()}
+                </Button>
+              ) : null}
+              <TextInput
+                label={`Where ${f.label.toLowerCase()} came from`}
+                value={notes[f.key] ?? ''}
+                onChange={(v) => {
+                  const next = { ...notes, [f.key]: v };
+                  setNotes(next);
+                  save({ notes: next });
+                }}
+              />
+            </div>
+          );
+        })}
+      </div>
+      <div className="grid gap-4 sm:grid-cols-2">
+        <TextInput label="Source of the design values (e.g. the local code table)" value={source} error={resolved.errors.get('source')} onChange={(v) => { setSource(v); save({ source: v }); }} />
+        <SelectInput label="How tight is the house" value={tightness} options={tightnessOptions} onChange={(v) => { setTightness(v); save({ tightness: v }); }} />
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,134 @@
+import { useEffect, useId, useState, type ReactNode } from 'react';
+import { fromDisplay, toDisplay, unitLabel, type Quantity } from '../../../lib/unit-display';
+import { useUnitSystem } from './unit-system';
+
+export const inputClass =
+  'block min-h-touch w-full rounded-md border border-line bg-white px-3 text-base text-ink-950 placeholder:text-muted aria-[invalid=true]:border-danger aria-[invalid=true]:bg-danger-soft/40';
+
+interface ShellProps {
+  id: string;
+  label: string;
+  error?: string | undefined;
+  hint?: ReactNode;
+  unit?: string;
+  children: ReactNode;
+}
+
+/** Label on top, unit beside the input, the error under it: the same look as components/ui/form-fields. */
+export function FieldShell({ id, label, error, hint, unit, children }: ShellProps) {
+  return (
+    <div className="flex min-w-0 flex-col gap-1">
+      <label htmlFor={id} className="text-sm font-semibold text-ink-900">
+        {label}
+      </label>
+      <div className="flex items-center gap-2">
+        {children}
+        {unit ? <span className="min-w-8 text-sm text-muted" aria-hidden="true">{unit}</span> : null}
+      </div>
+      {hint ? <p id={`${id}-hint`} className="text-sm text-muted">{hint}</p> : null}
+      {error ? <p id={`${id}-error`} className="text-sm font-semibold text-danger">{error}</p> : null}
+    </div>
+  );
+}
+
+const aria = (id: string, error: string | undefined, hint: boolean) => ({
+  'aria-invalid': error ? true : undefined,
+  'aria-describedby': [error ? `${id}-error` : '', hint ? `${id}-hint` : ''].filter(Boolean).join(' ') || undefined,
+});
+
+interface NumberProps {
+  label: string;
+  value: number | undefined;
+  onChange: (value: number | undefined) => void;
+  quantity?: Quantity;
+  /** Unit of a plain quantity (count, Btu/h, W). */
+  unit?: string;
+  error?: string | undefined;
+  hint?: ReactNode;
+  integer?: boolean;
+}
+
+const format = (v: number | undefined) => (v === undefined || Number.isNaN(v) ? '' : String(v));
+
+/**
+ * A number on the phone's decimal keypad, shown in the company's units. Empty → undefined,
+ * text → NaN, so calc's schema says what is wrong. Keeps the typed text while it parses
+ * to the same number ("8." stays "8.").
+ */
+export function NumberInput({ label, value, onChange, quantity = 'plain', unit = '', error, hint, integer = false }: NumberProps) {
+  const id = useId();
+  const system = useUnitSystem();
+  const shown = value === undefined || Number.isNaN(value) ? value : toDisplay(quantity, system, value);
+  const [text, setText] = useState(format(shown));
+  useEffect(() => {
+    const typed = text.trim() === '' ? undefined : Number(text.replace(',', '.'));
+    if (typed !== shown && !(typed !== undefined && shown !== undefined && Number.isNaN(typed) && Number.isNaN(shown))) setText(format(shown));
+    // Only an outside change of the value (copy, conflict choice) rewrites the text.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [shown]);
+  const handleChange = (raw: string) => {
+    setText(raw);
+    const t = raw.trim();
+    if (t === '') return onChange(undefined);
+    const n = Number(t.replace(',', '.'));
+    onChange(Number.isNaN(n) ? Number.NaN : fromDisplay(quantity, system, n));
+  };
+  return (
+    <FieldShell id={id} label={label} error={error} hint={hint} unit={unitLabel(quantity, system, unit)}>
+      <input
+        id={id}
+        type="text"
+        inputMode={integer ? 'numeric' : 'decimal'}
+        autoComplete="off"
+        className={inputClass}
+        value={text}
+        onChange={(e) => handleChange(e.target.value)}
+        {...aria(id, error, hint !== undefined)}
+      />
+    </FieldShell>
+  );
+}
+
+interface TextProps {
+  label: string;
+  value: string;
+  onChange: (value: string) => void;
+  error?: string | undefined;
+  multiline?: boolean;
+}
+
+export function TextInput({ label, value, onChange, error, multiline = false }: TextProps) {
+  const id = useId();
+  return (
+    <FieldShell id={id} label={label} error={error}>
+      {multiline ? (
+        <textarea id={id} rows={3} className={`${inputClass} py-2`} value={value} onChange={(e) => onChange(e.target.value)} {...aria(id, error, false)} />
+      ) : (
+        <input id={id} type="text" className={inputClass} value={value} onChange={(e) => onChange(e.target.value)} {...aria(id, error, false)} />
+      )}
+    </FieldShell>
+  );
+}
+
+interface SelectProps {
+  label: string;
+  value: string;
+  onChange: (value: string) => void;
+  options: readonly { readonly value: string; readonly label: string }[];
+  error?: string | undefined;
+}
+
+export function SelectInput({ label, value, onChange, options, error }: SelectProps) {
+  const id = useId();
+  return (
+    <FieldShell id={id} label={label} error={error}>
+      <select id={id} className={inputClass} value={value} onChange={(e) => onChange(e.target.value)} {...aria(id, error, false)}>
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+    </FieldShell>
+  );
+}

@@ -1,0 +1,97 @@
+import { useMemo, useState } from 'react';
+import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
+import { Button } from '../../../components/ui/button';
+import { RoomLoadPanel } from '../../loads/components/room-load-panel';
+import { asNumber, asRecords, asString, setIn, type PathPart } from '../model/draft';
+import { floorLevelOptions } from '../model/options';
+import { NEW_WALL } from '../model/room-templates';
+import { checkRoom, pathKey } from '../model/validate-room';
+import type { RoomView } from '../sync/overlay';
+import { roomTarget } from '../sync/edits';
+import { useDebouncedSave } from '../sync/use-debounced-save';
+import { useWalkthroughQueue } from '../sync/queue-context';
+import { AboveBelowFields } from './above-below-fields';
+import { ApplianceFields } from './appliance-fields';
+import { NumberInput, SelectInput, TextInput } from './field-kit';
+import { RoomPhotos } from './room-photos';
+import { WallFields } from './wall-fields';
+
+interface Props {
+  jobId: string;
+  room: RoomView;
+  designConditions: Record<string, unknown> | null;
+  tightness: string;
+}
+
+/** One room, saved as it is typed: every valid change goes to the queue after a short pause. */
+export function RoomEditor({ jobId, room, designConditions, tightness }: Props) {
+  const queue = useWalkthroughQueue();
+  const [draft, setDraft] = useState<Record<string, unknown>>(() => ({ ...room.input, id: room.id }));
+  const check = useMemo(() => checkRoom(draft), [draft]);
+  const { schedule } = useDebouncedSave<Record<string, unknown>>(roomTarget(room.id), (input) => {
+    void queue.enqueue({ target: roomTarget(room.id), baseVersion: room.version, payload: { kind: 'room-update', jobId, roomId: room.id, input } });
+  });
+
+  const replace = (next: unknown) => {
+    const value = typeof next === 'object' && next !== null && !Array.isArray(next) ? { ...next } : draft;
+    setDraft(value);
+    // Only what calc accepts is saved; the form shows what to fix meanwhile.
+    if (checkRoom(value).ok) schedule(value);
+  };
+  const set = (path: readonly PathPart[], value: unknown) => replace(setIn(draft, path, value));
+  const err = (path: readonly PathPart[]) => check.errors.get(pathKey(path));
+  const props = { draft, set, err };
+  const walls = asRecords(draft.exposedWalls);
+  const name = asString(draft.name) || 'Room';
+
+  return (
+    <section aria-label={`Room: ${name}`} className="flex flex-col gap-5">
+      <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
+        <div className="col-span-2 sm:col-span-1">
+          <TextInput label="Room name" value={asString(draft.name)} onChange={(x) => set(['name'], x)} error={err(['name'])} />
+        </div>
+        <SelectInput label="Floor level" value={String(asNumber(draft.floorLevel) ?? 1)} options={floorLevelOptions} onChange={(x) => set(['floorLevel'], Number(x))} error={err(['floorLevel'])} />
+        <NumberInput label="Length" quantity="ft" value={asNumber(draft.lengthFt)} onChange={(x) => set(['lengthFt'], x)} error={err(['lengthFt'])} />
+        <NumberInput label="Width" quantity="ft" value={asNumber(draft.widthFt)} onChange={(x) => set(['widthFt'], x)} error={err(['widthFt'])} />
+        <NumberInput label="Floor area (instead of length × width)" quantity="ft2" value={asNumber(draft.areaFt2)} onChange={(x) => set(['areaFt2'], x)} error={err(['areaFt2'])} />
+        <NumberInput label="Ceiling height" quantity="ft" value={asNumber(draft.ceilingHeightFt)} onChange={(x) => set(['ceilingHeightFt'], x)} error={err(['ceilingHeightFt'])} />
+      </div>
+
+      <div className="flex flex-col gap-3">
+        <h3 className="text-lg font-semibold text-ink-900">Outside walls</h3>
+        {err(['exposedWalls']) ? <p className="text-sm font-semibold text-danger">{err(['exposedWalls'])}</p> : null}
+        {walls.map((_, i) => (
+          <WallFields key={i} index={i} replace={replace} {...props} />
+        ))}
+        <div>
+          <Button variant="secondary" onClick={() => replace(setIn(draft, ['exposedWalls'], [...walls, NEW_WALL]))}>
+            Add wall
+          </Button>
+        </div>
+      </div>
+
+      <div className="flex flex-col gap-3">
+        <h3 className="text-lg font-semibold text-ink-900">Above and below</h3>
+        <AboveBelowFields {...props} />
+      </div>
+
+      <div className="flex flex-col gap-3">
+        <h3 className="text-lg font-semibold text-ink-900">People and appliances</h3>
+        <div className="max-w-48">
+          <NumberInput label="Occupants" integer unit="people" value={asNumber(draft.occupants)} onChange={(x) => set(['occupants'], x)} error={err(['occupants'])} />
+        </div>
+        <ApplianceFields replace={replace} {...props} />
+      </div>
+
+      <TextInput label="Notes" multiline value={asString(draft.notes)} onChange={(x) => set(['notes'], x)} error={err(['notes'])} />
+
+      <QueryWidgetBoundary name="the room photos">
+        <RoomPhotos jobId={jobId} room={room} />
+      </QueryWidgetBoundary>
+
+      <QueryWidgetBoundary name="the room loads">
+        <RoomLoadPanel room={check.ok ? check.room : null} warnings={check.ok ? check.warnings : []} designConditions={designConditions} tightness={tightness} />
+      </QueryWidgetBoundary>
+    </section>
+  );
+}

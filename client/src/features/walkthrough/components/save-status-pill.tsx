@@ -1,0 +1,36 @@
+import type { QueueState } from '../../../lib/offline-queue';
+
+export type SaveStatus = { readonly kind: 'saved' } | { readonly kind: 'saving' } | { readonly kind: 'offline'; readonly waiting: number } | { readonly kind: 'conflict' };
+
+/** Pure: what the pill says, from the queue and the edits still inside the debounce. */
+export function saveStatus(state: Pick<QueueState<unknown>, 'items' | 'online' | 'sending' | 'conflict'>, typing: number): SaveStatus {
+  if (state.conflict) return { kind: 'conflict' };
+  const waiting = state.items.length;
+  if (!state.online && waiting > 0) return { kind: 'offline', waiting };
+  if (waiting > 0 || state.sending || typing > 0) return { kind: 'saving' };
+  return { kind: 'saved' };
+}
+
+const looks: Record<SaveStatus['kind'], string> = {
+  saved: 'border-ok bg-ok-soft text-ok',
+  saving: 'border-ink-200 bg-ink-50 text-ink-800',
+  offline: 'border-amber-line bg-amber-soft text-amber-deep',
+  conflict: 'border-danger bg-danger-soft text-danger',
+};
+
+function text(s: SaveStatus): string {
+  if (s.kind === 'saved') return 'Saved';
+  if (s.kind === 'saving') return 'Saving…';
+  if (s.kind === 'conflict') return 'Needs your choice — changed by someone else';
+  return `Offline — ${s.waiting} ${s.waiting === 1 ? 'change' : 'changes'} waiting`;
+}
+
+/** Always on screen during a walk-through; role="status" so screen readers hear it change. */
+export function SaveStatusPill({ status }: { status: SaveStatus }) {
+  return (
+    <p role="status" aria-live="polite" className={`inline-flex min-h-9 items-center gap-2 rounded-full border px-3 text-sm font-semibold ${looks[status.kind]}`}>
+      <span aria-hidden="true" className="size-2 rounded-full bg-current" />
+      {text(status)}
+    </p>
+  );
+}

@@ -1,0 +1,9 @@
+import { createContext, useContext } from 'react';
+import type { UnitSystem } from '../../../lib/job-records';
+
+/** The company's unit system (company settings); imperial when unknown. */
+export const UnitSystemContext = createContext<UnitSystem>('imperial');
+
+export function useUnitSystem(): UnitSystem {
+  return useContext(UnitSystemContext);
+}

@@ -1,0 +1,101 @@
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
+import { Alert } from '../../../components/ui/alert';
+import { Button, buttonClass } from '../../../components/ui/button';
+import { EmptyState } from '../../../components/ui/empty-state';
+import type { CompanySettingsRecord, JobRecord, RoomRecord } from '../../../lib/job-records';
+import { LiveHomeTotals } from '../../loads/components/live-home-totals';
+import { roomTarget } from '../sync/edits';
+import { overlayJob, overlayRooms } from '../sync/overlay';
+import { useQueueState, useWalkthroughQueue } from '../sync/queue-context';
+import { ConflictPanel } from './conflict-panel';
+import { DesignConditionsForm } from './design-conditions-form';
+import { LiveSaveStatus } from './live-save-status';
+import { RoomEditor } from './room-editor';
+import { RoomListActions } from './room-list-actions';
+import { RoomTabs } from './room-tabs';
+import { UnitSystemContext } from './unit-system';
+
+interface Props {
+  job: JobRecord;
+  rooms: readonly RoomRecord[];
+  settings: CompanySettingsRecord | null;
+}
+
+/** The walk-through of one job: design conditions, rooms one at a time, live loads. */
+export function WalkthroughView({ job: serverJob, rooms: serverRooms, settings }: Props) {
+  const queue = useWalkthroughQueue();
+  const state = useQueueState();
+  const rooms = overlayRooms(serverJob.id, serverRooms, state.items);
+  const { job } = overlayJob(serverJob, state.items, settings?.defaultDesignConditions ?? null);
+  const [selected, setSelected] = useState<string | null>(null);
+  const [revision, setRevision] = useState(0);
+  const current = rooms.find((r) => r.id === selected) ?? rooms[0] ?? null;
+  const conflict = state.conflict && state.conflict.payload.jobId === job.id ? state.conflict : null;
+  const address = [job.site.street, job.site.unit, job.site.city, job.site.region].filter(Boolean).join(', ');
+
+  const handleDelete = () => {
+    if (!current || !window.confirm(`Delete ${String(current.input.name ?? 'this room')} and its photos?`)) return;
+    void queue.enqueue({ target: roomTarget(current.id), baseVersion: current.version, payload: { kind: 'room-delete', jobId: job.id, roomId: current.id } });
+    setSelected(null);
+  };
+
+  return (
+    <UnitSystemContext.Provider value={settings?.unitSystem ?? 'imperial'}>
+      <div className="flex flex-col gap-6 pb-24">
+        <header className="sticky top-0 z-10 -mx-4 flex flex-wrap items-center justify-between gap-2 border-b border-line bg-paper/95 px-4 py-2 backdrop-blur">
+          <div>
+            <h1 className="text-xl font-bold text-ink-900">{job.customer.name}</h1>
+            <p className="text-sm text-muted">{address}</p>
+          </div>
+          <div className="flex items-center gap-2">
+            <LiveSaveStatus />
+            <Link className={buttonClass('secondary')} to={`/jobs/${job.id}/loads`}>
+              Loads summary
+            </Link>
+          </div>
+        </header>
+
+        {conflict ? <ConflictPanel key={conflict.id} item={conflict} onResolved={() => setRevision((r) => r + 1)} /> : null}
+        {state.rejected ? (
+          <Alert tone="danger" title="One change was not accepted and was not saved.">
+            <p>{state.rejected}</p>
+            <Button variant="secondary" className="mt-2" onClick={() => queue.dismissRejected()}>
+              Dismiss
+            </Button>
+          </Alert>
+        ) : null}
+
+        <details className="rounded-lg border border-line bg-white p-4" open={job.designConditions === null}>
+          <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">Site design conditions</summary>
+          <QueryWidgetBoundary name="the design conditions">
+            <DesignConditionsForm key={`${job.id}:${revision}`} job={job} companyDefaults={settings?.defaultDesignConditions ?? null} notice={settings?.designConditionsNotice} />
+          </QueryWidgetBoundary>
+        </details>
+
+        <section aria-label="Walk-through rooms" className="flex flex-col gap-4">
+          <h2 className="text-lg font-semibold text-ink-900">Rooms</h2>
+          <RoomTabs rooms={rooms} selectedId={current?.id ?? null} onSelect={setSelected} />
+          <RoomListActions jobId={job.id} rooms={rooms} onCreated={setSelected} />
+          {current ? (
+            <div className="rounded-lg border border-line bg-white p-4">
+              <QueryWidgetBoundary name="the room form">
+                <RoomEditor key={`${current.id}:${revision}`} jobId={job.id} room={current} designConditions={job.designConditions} tightness={job.tightness} />
+              </QueryWidgetBoundary>
+              <Button variant="danger" className="mt-6" onClick={handleDelete}>
+                Delete this room
+              </Button>
+            </div>
+          ) : (
+            <EmptyState title="No rooms yet">Pick a template and add the first room, then walk the house room by room.</EmptyState>
+          )}
+        </section>
+
+        <QueryWidgetBoundary name="the whole-home loads">
+          <LiveHomeTotals rooms={rooms} designConditions={job.designConditions} tightness={job.tightness} />
+        </QueryWidgetBoundary>
+      </div>
+    </UnitSystemContext.Provider>
+  );
+}

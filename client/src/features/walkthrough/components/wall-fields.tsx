@@ -1,0 +1,53 @@
+import { Button } from '../../../components/ui/button';
+import { append, asNumber, asRecords, asString, getIn, removeAt } from '../model/draft';
+import { constructionOptions, directionOptions } from '../model/options';
+import { DoorFields } from './door-fields';
+import type { EditorProps } from './editor-props';
+import { NumberInput, SelectInput } from './field-kit';
+import { WindowFields } from './window-fields';
+
+export const NEW_WINDOW = { widthIn: 36, heightIn: 48, count: 1, glazing: 'double-clear', interiorShading: 'none' };
+export const NEW_DOOR = { widthIn: 36, heightIn: 80, count: 1, doorType: 'insulated-steel' };
+
+interface WallProps extends EditorProps {
+  index: number;
+  replace: (next: unknown) => void;
+}
+
+/** One exposed wall: facing, length, construction, and the windows and doors in it. */
+export function WallFields({ draft, set, err, index, replace }: WallProps) {
+  const base = ['exposedWalls', index] as const;
+  const p = (...k: (string | number)[]) => [...base, ...k];
+  const v = (k: string) => getIn(draft, p(k));
+  const windows = asRecords(v('windows'));
+  const doors = asRecords(v('doors'));
+  return (
+    <fieldset className="flex flex-col gap-3 rounded-lg border border-ink-200 bg-ink-50/40 p-3">
+      <legend className="px-1 font-semibold text-ink-900">Wall {index + 1}</legend>
+      <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+        <SelectInput label="Wall faces" value={asString(v('direction'), 'N')} options={directionOptions} onChange={(x) => set(p('direction'), x)} error={err(p('direction'))} />
+        <NumberInput label="Wall length" quantity="ft" value={asNumber(v('lengthFt'))} onChange={(x) => set(p('lengthFt'), x)} error={err(p('lengthFt'))} />
+        <NumberInput label="Wall height (blank = ceiling)" quantity="ft" value={asNumber(v('heightFt'))} onChange={(x) => set(p('heightFt'), x)} error={err(p('heightFt'))} />
+        <SelectInput label="Construction" value={asString(v('construction'), 'wood-2x4-r13')} options={constructionOptions} onChange={(x) => set(p('construction'), x)} error={err(p('construction'))} />
+      </div>
+      {err(p('windows')) ? <p className="text-sm font-semibold text-danger">{err(p('windows'))}</p> : null}
+      {windows.map((_, wi) => (
+        <WindowFields key={wi} draft={draft} set={set} err={err} base={p('windows', wi)} index={wi} onRemove={() => replace(removeAt(draft, p('windows'), wi))} />
+      ))}
+      {doors.map((_, di) => (
+        <DoorFields key={di} draft={draft} set={set} err={err} base={p('doors', di)} index={di} onRemove={() => replace(removeAt(draft, p('doors'), di))} />
+      ))}
+      <div className="flex flex-wrap gap-2">
+        <Button variant="secondary" onClick={() => replace(append(draft, p('windows'), NEW_WINDOW))}>
+          Add window
+        </Button>
+        <Button variant="secondary" onClick={() => replace(append(draft, p('doors'), NEW_DOOR))}>
+          Add door
+        </Button>
+        <Button variant="ghost" onClick={() => replace(removeAt(draft, ['exposedWalls'], index))}>
+          Remove wall {index + 1}
+        </Button>
+      </div>
+    </fieldset>
+  );
+}

@@ -1,0 +1,38 @@
+import type { Coalesce, QueueItem } from '../../../lib/offline-queue';
+
+/** A room's input as calc's schema reads it (validated before it is queued). */
+export type RoomInputValue = Record<string, unknown>;
+
+/** The job fields the walk-through writes: entered design values, their notes, tightness. */
+export interface JobChanges {
+  readonly designConditions?: Record<string, number | string>;
+  readonly designSourceNotes?: Record<string, string>;
+  readonly tightness?: string;
+}
+
+/** One autosaved edit. Each carries the whole record as the person left it. */
+export type WalkthroughEdit =
+  | { readonly kind: 'room-create'; readonly jobId: string; readonly roomId: string; readonly position: number; readonly input: RoomInputValue }
+  | { readonly kind: 'room-update'; readonly jobId: string; readonly roomId: string; readonly input: RoomInputValue }
+  | { readonly kind: 'room-delete'; readonly jobId: string; readonly roomId: string }
+  | { readonly kind: 'job-update'; readonly jobId: string; readonly changes: JobChanges };
+
+export type WalkthroughItem = QueueItem<WalkthroughEdit>;
+
+export const roomTarget = (roomId: string) => `room:${roomId}`;
+export const jobTarget = (jobId: string) => `job:${jobId}`;
+
+/**
+ * Folds a new edit into one still waiting for the same record, so a long offline stretch
+ * replays as one write per record instead of one per keystroke. Order between records is
+ * untouched.
+ */
+export const coalesceEdits: Coalesce<WalkthroughEdit> = (waiting, next) => {
+  const w = waiting.payload;
+  const n = next.payload;
+  if (w.kind === 'room-create' && n.kind === 'room-update') return { ...waiting, payload: { ...w, input: n.input } };
+  if (w.kind === 'room-create' && n.kind === 'room-delete') return 'drop-both';
+  if (w.kind === 'room-update' && (n.kind === 'room-update' || n.kind === 'room-delete')) return { ...waiting, payload: n };
+  if (w.kind === 'job-update' && n.kind === 'job-update') return { ...waiting, payload: { ...w, changes: { ...w.changes, ...n.changes } } };
+  return null;
+};

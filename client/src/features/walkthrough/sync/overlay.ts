@@ -1,0 +1,72 @@
+import type { JobRecord, RoomRecord } from '../../../lib/job-records';
+import type { QueueItem } from '../../../lib/offline-queue';
+import { resolveDesign } from '../model/design-fields';
+import type { RoomInputValue, WalkthroughEdit } from './edits';
+
+/** A room as the screen shows it: the server's record with any waiting edit laid over it. */
+export interface RoomView {
+  readonly id: string;
+  readonly position: number;
+  readonly input: RoomInputValue;
+  /** The version last seen from the server; null until a queued create reaches it. */
+  readonly version: number | null;
+  readonly photos: RoomRecord['photos'];
+  readonly waiting: boolean;
+}
+
+/**
+ * What the person sees after a reload: the server's rooms, then every queued edit of this
+ * job applied in queue order (creates added, updates replacing the input, deletes hiding).
+ */
+export function overlayRooms(jobId: string, server: readonly RoomRecord[], queue: readonly QueueItem<WalkthroughEdit>[]): RoomView[] {
+  const rooms = new Map<string, RoomView>(
+    server.map((r) => [r.id, { id: r.id, position: r.position, input: r.input, version: r.version, photos: r.photos, waiting: false }]),
+  );
+  for (const { payload: e } of queue) {
+    if (e.jobId !== jobId) continue;
+    if (e.kind === 'room-create') {
+      const known = rooms.get(e.roomId);
+      rooms.set(e.roomId, { id: e.roomId, position: e.position, input: e.input, version: known?.version ?? null, photos: known?.photos ?? [], waiting: true });
+    } else if (e.kind === 'room-update') {
+      const known = rooms.get(e.roomId);
+      if (known) rooms.set(e.roomId, { ...known, input: e.input, waiting: true });
+    } else if (e.kind === 'room-delete') {
+      rooms.delete(e.roomId);
+    }
+  }
+  return [...rooms.values()].sort((a, b) => a.position - b.position);
+}
+
+/** The job with its queued changes: entered design values laid over what the server resolved. */
+export function overlayJob(
+  job: JobRecord,
+  queue: readonly QueueItem<WalkthroughEdit>[],
+  companyDefaults: Record<string, unknown> | null = null,
+): { job: JobRecord; waiting: boolean } {
+  let out = job;
+  let waiting = false;
+  for (const { payload: e } of queue) {
+    if (e.kind !== 'job-update' || e.jobId !== job.id) continue;
+    waiting = true;
+    const typed = e.changes.designConditions;
+    const entered = typed ? Object.fromEntries(Object.entries(typed).filter((kv): kv is [string, number] => typeof kv[1] === 'number')) : {};
+    const resolved = typed ? resolveDesign(entered, typeof typed.source === 'string' ? typed.source : '', companyDefaults).values : null;
+    const designConditions = resolved ?? out.designConditions;
+    const designSources = { ...out.designSources };
+    for (const [field, note] of Object.entries(e.changes.designSourceNotes ?? {})) {
+      designSources[field] = { source: designSources[field]?.source ?? 'entered', note };
+    }
+    if (typed) {
+      for (const [field, origin] of Object.entries(resolveDesign(entered, '', companyDefaults).origin)) {
+        designSources[field] = { source: origin, note: designSources[field]?.note ?? '' };
+      }
+    }
+    out = { ...out, designConditions, designSources, tightness: isTightness(e.changes.tightness) ? e.changes.tightness : out.tightness };
+  }
+  return { job: out, waiting };
+}
+
+const TIGHTNESS = ['very-tight', 'tight', 'average', 'leaky', 'very-leaky'] as const;
+function isTightness(v: string | undefined): v is JobRecord['tightness'] {
+  return TIGHTNESS.some((t) => t === v);
+}

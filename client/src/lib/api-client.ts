@@ -1,0 +1,82 @@
+import { z } from 'zod';
+import { ApiError, apiErrorFromResponse, networkError } from './api-error';
+
+type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+
+export interface ApiOptions {
+  method?: Method;
+  body?: unknown;
+  signal?: AbortSignal;
+}
+
+const csrfSchema = z.object({ token: z.string().min(1) });
+let csrfToken: Promise<string> | null = null;
+
+/** The CSRF token is tied to the session: forget it whenever the session changes (sign-in, sign-out). */
+export function clearCsrfToken(): void {
+  csrfToken = null;
+}
+
+function getCsrfToken(): Promise<string> {
+  if (!csrfToken) {
+    const pending = send('/api/auth/csrf', { method: 'GET' }).then(async (res) => csrfSchema.parse(await res.json()).token);
+    // A failed fetch must not stay cached.
+    pending.catch(() => {
+      if (csrfToken === pending) csrfToken = null;
+    });
+    csrfToken = pending;
+  }
+  return csrfToken;
+}
+
+async function send(path: string, options: ApiOptions, csrf?: string): Promise<Response> {
+  const headers: Record<string, string> = { Accept: 'application/json, application/problem+json' };
+  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  if (csrf) headers['X-CSRF-Token'] = csrf;
+  let res: Response;
+  try {
+    res = await fetch(path, {
+      method: options.method ?? 'GET',
+      credentials: 'same-origin',
+      headers,
+      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      signal: options.signal,
+    });
+  } catch (e) {
+    if (e instanceof DOMException && e.name === 'AbortError') throw e;
+    throw networkError();
+  }
+  if (!res.ok) throw await apiErrorFromResponse(res);
+  return res;
+}
+
+async function sendWithCsrf(path: string, options: ApiOptions): Promise<Response> {
+  const method = options.method ?? 'GET';
+  if (method === 'GET') return send(path, options);
+  try {
+    return await send(path, options, await getCsrfToken());
+  } catch (e) {
+    // The session may have rotated under us: fetch a fresh token and try exactly once more.
+    if (!(e instanceof ApiError && e.status === 403 && e.code === 'csrf')) throw e;
+    clearCsrfToken();
+    return send(path, options, await getCsrfToken());
+  }
+}
+
+async function readBody(res: Response): Promise<unknown> {
+  if (res.status === 204) return undefined;
+  const text = await res.text();
+  return text === '' ? undefined : JSON.parse(text);
+}
+
+/**
+ * JSON fetch for our API. With a schema, the body is parsed (the parse boundary: callers get
+ * typed data or a thrown error). Non-2xx responses throw ApiError.
+ */
+export function apiFetch<T>(path: string, options: ApiOptions & { schema: z.ZodType<T> }): Promise<T>;
+export function apiFetch(path: string, options?: ApiOptions): Promise<unknown>;
+export async function apiFetch<T>(path: string, options: ApiOptions & { schema?: z.ZodType<T> } = {}): Promise<unknown> {
+  const res = await sendWithCsrf(path, options);
+  const body = await readBody(res);
+  return options.schema ? options.schema.parse(body) : body;
+}

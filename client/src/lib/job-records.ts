@@ -1,0 +1,85 @@
+import { z } from 'zod';
+
+/**
+ * The client's parse boundary for the job records the server presents (job.presenter.ts,
+ * room.presenter.ts, photo.presenter.ts, company-settings.presenter.ts). Shared by the jobs,
+ * walk-through and loads features, which all read the same records.
+ * Room inputs and design conditions stay `unknown`-shaped records here: calc's schemas
+ * validate them where they are used, so a stored value calc now rejects still shows up.
+ */
+
+export const JOB_STATUSES = ['walkthrough', 'design', 'proposed', 'won', 'lost', 'installed'] as const;
+export type JobStatus = (typeof JOB_STATUSES)[number];
+export const jobStatusLabels: Record<JobStatus, string> = {
+  walkthrough: 'Walk-through',
+  design: 'Design',
+  proposed: 'Proposed',
+  won: 'Won',
+  lost: 'Lost',
+  installed: 'Installed',
+};
+
+const person = z.object({ id: z.string(), name: z.string() }).nullable();
+export const DESIGN_VALUE_SOURCES = ['entered', 'company-default', 'standard-default'] as const;
+export type DesignValueSource = (typeof DESIGN_VALUE_SOURCES)[number];
+const designSource = z.object({ source: z.enum(DESIGN_VALUE_SOURCES), note: z.string() });
+
+export const jobRecord = z.object({
+  id: z.string(),
+  status: z.enum(JOB_STATUSES),
+  customer: z.object({ id: z.string(), name: z.string() }),
+  site: z.object({ street: z.string(), unit: z.string(), city: z.string(), region: z.string(), postalCode: z.string() }),
+  salesperson: person,
+  assignedInstaller: person,
+  notes: z.string(),
+  designConditions: z.record(z.string(), z.unknown()).nullable(),
+  designSources: z.record(z.string(), designSource),
+  tightness: z.enum(['very-tight', 'tight', 'average', 'leaky', 'very-leaky']),
+  version: z.number().int(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+  lastActivityAt: z.string(),
+});
+export type JobRecord = z.output<typeof jobRecord>;
+
+export const photoRecord = z.object({
+  id: z.string(),
+  roomId: z.string(),
+  url: z.string(),
+  contentType: z.string(),
+  byteSize: z.number(),
+  width: z.number(),
+  height: z.number(),
+  originalName: z.string(),
+  createdAt: z.string(),
+});
+export type PhotoRecord = z.output<typeof photoRecord>;
+
+export const roomRecord = z.object({
+  id: z.string(),
+  jobId: z.string(),
+  position: z.number().int(),
+  input: z.record(z.string(), z.unknown()),
+  version: z.number().int(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+  photos: z.array(photoRecord),
+});
+export type RoomRecord = z.output<typeof roomRecord>;
+
+export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+
+export const companySettingsRecord = z.object({
+  unitSystem: z.enum(UNIT_SYSTEMS),
+  defaultDesignConditions: z.record(z.string(), z.unknown()).nullable(),
+  version: z.number().int(),
+  updatedAt: z.string().nullable(),
+  designConditionsNotice: z.string().optional(),
+});
+export type CompanySettingsRecord = z.output<typeof companySettingsRecord>;
+
+export const jobResponse = z.object({ job: jobRecord });
+export const roomResponse = z.object({ room: roomRecord });
+export const roomsResponse = z.object({ rooms: z.array(roomRecord) });
+export const settingsResponse = z.object({ settings: companySettingsRecord });

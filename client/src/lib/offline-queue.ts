@@ -1,0 +1,85 @@
+import { createStore, get, set, type UseStore } from 'idb-keyval';
+
+/**
+ * An ordered, persisted queue of writes: the one path every autosaved edit takes, online
+ * or not. Each edit is written to storage before it is sent, sent one at a time in the
+ * order it was made, and removed only when the server accepted it — so a dropped
+ * connection or a reload loses nothing. What an edit means is the caller's business
+ * (`send` and `coalesce`); the queue only keeps order, versions and state.
+ */
+
+export interface QueueItem<P> {
+  readonly id: string;
+  /** Monotonic order of creation; replay goes by it. */
+  readonly seq: number;
+  /** What the edit writes ("room:<id>", "job:<id>"): versions chain per target. */
+  readonly target: string;
+  /** The version of the target the edit was made against (If-Match); null for a create. */
+  readonly baseVersion: number | null;
+  readonly payload: P;
+  readonly queuedAt: string;
+}
+
+export type NewItem<P> = Pick<QueueItem<P>, 'target' | 'baseVersion' | 'payload'>;
+
+export type SendResult =
+  | { readonly kind: 'ok'; readonly version: number | null }
+  | { readonly kind: 'network' }
+  | { readonly kind: 'conflict' }
+  | { readonly kind: 'rejected'; readonly message: string };
+
+/** Merge a new edit into a still-waiting one of the same target, 'drop-both', or null to append. */
+export type Coalesce<P> = (waiting: QueueItem<P>, next: NewItem<P>) => QueueItem<P> | 'drop-both' | null;
+
+export interface QueueStorage<P> {
+  load(): Promise<QueueItem<P>[]>;
+  save(items: readonly QueueItem<P>[]): Promise<void>;
+}
+
+export interface QueueState<P> {
+  readonly loaded: boolean;
+  readonly online: boolean;
+  readonly sending: boolean;
+  readonly items: readonly QueueItem<P>[];
+  /** The head item the server refused with 409; the queue waits until it is resolved. */
+  readonly conflict: QueueItem<P> | null;
+  /** The last edit the server refused outright (dropped), in its words. */
+  readonly rejected: string | null;
+}
+
+export const QUEUE_STORAGE_KEY = 'gaugeline:offline-queue:v1';
+
+/** IndexedDB storage through idb-keyval; pass a custom store in tests or to separate users. */
+export function idbQueueStorage<P>(key: string = QUEUE_STORAGE_KEY, store?: UseStore): QueueStorage<P> {
+  const db = store ?? createStore('gaugeline', 'offline-queue');
+  return {
+    load: async () => {
+      const v: unknown = await get(key, db);
+      return Array.isArray(v) ? v : [];
+    },
+    save: (items) => set(key, items, db),
+  };
+}
+
+export function memoryQueueStorage<P>(initial: readonly QueueItem<P>[] = []): QueueStorage<P> & { readonly saved: () => readonly QueueItem<P>[] } {
+  let items = [...initial];
+  return {
+    load: async () => [...items],
+    save: async (next) => {
+      items = [...next];
+    },
+    saved: () => items,
+  };
+}
+
+export interface OfflineQueueOptions<P> {
+  storage: QueueStorage<P>;
+  send: (item: QueueItem<P>) => Promise<SendResult>;
+  coalesce?: Coalesce<P>;
+  /** Called after the server accepted an item (update caches here). */
+  onSent?: (item: QueueItem<P>, version: number | null) => void;
+  isOnline?: () => boolean;
+  retryMs?: number;
+  newId?: () => string;
+  now?: () => Date;
+}

@@ -1,0 +1,19 @@
+import { QueryClient } from '@tanstack/react-query';
+import { isApiError } from './api-error';
+
+/** Client errors (4xx) will not change on a retry; network blips and 5xx might. */
+function shouldRetry(failureCount: number, error: unknown): boolean {
+  if (isApiError(error) && error.status >= 400 && error.status < 500) return false;
+  return failureCount < 2;
+}
+
+export function createQueryClient(): QueryClient {
+  return new QueryClient({
+    defaultOptions: {
+      queries: { staleTime: 30_000, retry: shouldRetry, refetchOnWindowFocus: false },
+      mutations: { retry: false },
+    },
+  });
+}
+
+export const queryClient = createQueryClient();

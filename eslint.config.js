@@ -1,0 +1,45 @@
+// Lint: typescript-eslint's recommended rules plus the project's import boundaries
+// (calc imports nothing of ours; the client never imports the server; features stay apart).
+import js from '@eslint/js';
+import tseslint from 'typescript-eslint';
+import reactHooks from 'eslint-plugin-react-hooks';
+import globals from 'globals';
+
+const noOurs = (patterns, message) => ['error', { patterns: patterns.map((group) => ({ group, message })) }];
+
+export default tseslint.config(
+  { ignores: ['dist/**', 'node_modules/**', '.data/**', 'coverage/**'] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    languageOptions: { globals: { ...globals.node, ...globals.browser } },
+    rules: {
+      '@typescript-eslint/no-explicit-any': 'error',
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-namespace': 'off',
+    },
+  },
+  {
+    files: ['calc/**/*.ts'],
+    rules: {
+      'no-restricted-imports': noOurs(
+        [['**/client/**', '**/server/**', '**/scripts/**', '**/fixtures/**', 'node:*', 'fs', 'path', 'http']],
+        'calc is pure: it imports only zod, mathjs, convert-units and its own files.',
+      ),
+      'no-restricted-globals': ['error', { name: 'fetch', message: 'calc does no I/O.' }, { name: 'Date', message: 'calc has no clock.' }],
+      'no-restricted-properties': ['error', { object: 'Math', property: 'random', message: 'calc has no randomness.' }],
+    },
+  },
+  {
+    files: ['client/**/*.{ts,tsx}'],
+    plugins: { 'react-hooks': reactHooks },
+    rules: {
+      ...reactHooks.configs.recommended.rules,
+      'no-restricted-imports': noOurs([['**/server/**', '../../server/*', 'node:*']], 'The client never imports the server at runtime.'),
+    },
+  },
+  {
+    files: ['server/**/*.ts'],
+    rules: { 'no-restricted-imports': noOurs([['**/client/**']], 'The server does not import client code.') },
+  },
+);

@@ -1,0 +1,16 @@
+import type { Customer } from './customer.entity';
+
+/** The only shape a customer leaves the server in. */
+export function presentCustomer(c: Customer) {
+  return {
+    id: c.id,
+    name: c.name,
+    email: c.email ?? null,
+    phone: c.phone ?? null,
+    notes: c.notes,
+    createdAt: c.createdAt.toISOString(),
+    updatedAt: c.updatedAt.toISOString(),
+  };
+}
+
+export type CustomerDto = ReturnType<typeof presentCustomer>;

@@ -1,0 +1,56 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { ConflictError, NotFoundError } from '../../lib/errors';
+import type { Actor } from '../../lib/route';
+import { CompanySchema } from '../companies/company.entity';
+import { JobSchema } from '../jobs/job.entity';
+import { CustomerSchema, type Customer } from './customer.entity';
+import { likePattern, type CreateCustomerInput, type ListCustomersQuery, type UpdateCustomerInput } from './customer.schema';
+
+export async function listCustomers(em: EntityManager, actor: Actor, q: ListCustomersQuery): Promise<{ items: Customer[]; total: number }> {
+  const pat = q.search ? likePattern(q.search) : undefined;
+  const where = pat
+    ? { company: actor.companyId, $or: [{ name: { $ilike: pat } }, { email: { $ilike: pat } }, { phone: { $ilike: pat } }] }
+    : { company: actor.companyId };
+  const [items, total] = await em.findAndCount(CustomerSchema, where, {
+    orderBy: { name: 'asc', id: 'asc' },
+    limit: q.pageSize,
+    offset: (q.page - 1) * q.pageSize,
+  });
+  return { items, total };
+}
+
+export async function getCustomer(em: EntityManager, actor: Actor, id: string): Promise<Customer> {
+  const c = await em.findOne(CustomerSchema, { id, company: actor.companyId });
+  if (!c) throw new NotFoundError('The customer');
+  return c;
+}
+
+export async function createCustomer(em: EntityManager, actor: Actor, input: CreateCustomerInput): Promise<Customer> {
+  const c = em.create(CustomerSchema, {
+    company: em.getReference(CompanySchema, actor.companyId),
+    name: input.name,
+    email: input.email ?? null,
+    phone: input.phone ?? null,
+    notes: input.notes ?? '',
+  });
+  await em.flush();
+  return c;
+}
+
+export async function updateCustomer(em: EntityManager, actor: Actor, id: string, input: UpdateCustomerInput): Promise<Customer> {
+  const c = await getCustomer(em, actor, id);
+  if (input.name !== undefined) c.name = input.name;
+  if (input.email !== undefined) c.email = input.email;
+  if (input.phone !== undefined) c.phone = input.phone;
+  if (input.notes !== undefined) c.notes = input.notes;
+  await em.flush();
+  return c;
+}
+
+/** A customer with jobs stays: the jobs (and later proposals) need who they were for. */
+export async function deleteCustomer(em: EntityManager, actor: Actor, id: string): Promise<void> {
+  const c = await getCustomer(em, actor, id);
+  if (await em.count(JobSchema, { customer: c.id })) throw new ConflictError('This customer has jobs; it cannot be deleted.');
+  em.remove(c);
+  await em.flush();
+}

@@ -1,0 +1,32 @@
+import type { FilterQuery } from '@mikro-orm/core';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { NotFoundError } from '../../lib/errors';
+import type { Actor } from '../../lib/route';
+import { JobSchema, type Job } from './job.entity';
+
+/**
+ * Which jobs a person may see: estimators and owners the company's, a salesperson the
+ * jobs they own, an installer the jobs assigned to them. Anything else answers 404.
+ */
+export function jobScope(actor: Actor): FilterQuery<Job> {
+  if (actor.role === 'salesperson') return { company: actor.companyId, salesperson: actor.userId };
+  if (actor.role === 'installer') return { company: actor.companyId, assignedInstaller: actor.userId };
+  return { company: actor.companyId };
+}
+
+export const JOB_POPULATE = ['customer', 'salesperson', 'assignedInstaller'] as const;
+
+export async function findJob(em: EntityManager, actor: Actor, id: string): Promise<Job> {
+  const job = await em.findOne(JobSchema, { $and: [jobScope(actor), { id }] }, { populate: JOB_POPULATE });
+  if (!job) throw new NotFoundError('The job');
+  return job;
+}
+
+/**
+ * Records activity on a job without bumping its version: room and photo edits are not
+ * job edits, and must not make someone editing the job's details hit a conflict.
+ * Plain SQL because nativeUpdate increments the version column; runs in the caller's transaction.
+ */
+export async function touchJob(em: EntityManager, jobId: string, at: Date): Promise<void> {
+  await em.execute('update "job" set "last_activity_at" = ? where "id" = ?', [at, jobId], 'run');
+}

@@ -1,0 +1,57 @@
+import { ANY_STAFF, roles, type ApiRouter } from '../../lib/route';
+import { findJob } from './job-access';
+import { presentJob } from './job.presenter';
+import { createJobSchema, jobIdParams, listJobsQuery, updateJobSchema } from './job.schema';
+import { createJob, listJobs, updateJob } from './job.service';
+import { ifMatchVersion, setEtag } from './version-lock';
+
+/** Installers read the jobs assigned to them; they never change them here. */
+const EDITORS = roles('owner', 'estimator', 'salesperson');
+
+export function jobRoutes(api: ApiRouter): void {
+  api.route({
+    method: 'get',
+    path: '/',
+    policy: ANY_STAFF,
+    query: listJobsQuery,
+    handler: async ({ em, actor, query }) => {
+      const { items, total } = await listJobs(em, actor, query);
+      return { items: items.map(presentJob), total, page: query.page, pageSize: query.pageSize };
+    },
+  });
+  api.route({
+    method: 'get',
+    path: '/:id',
+    policy: ANY_STAFF,
+    params: jobIdParams,
+    handler: async ({ em, actor, params, res }) => {
+      const job = await findJob(em, actor, params.id);
+      setEtag(res, job.version);
+      return { job: presentJob(job) };
+    },
+  });
+  api.route({
+    method: 'post',
+    path: '/',
+    policy: EDITORS,
+    body: createJobSchema,
+    status: 201,
+    handler: async ({ em, actor, body, services, res }) => {
+      const job = await createJob(em, actor, services.clock, body);
+      setEtag(res, job.version);
+      return { job: presentJob(job) };
+    },
+  });
+  api.route({
+    method: 'patch',
+    path: '/:id',
+    policy: EDITORS,
+    params: jobIdParams,
+    body: updateJobSchema,
+    handler: async ({ em, actor, params, body, services, req, res }) => {
+      const job = await updateJob(em, actor, services.clock, params.id, ifMatchVersion(req), body);
+      setEtag(res, job.version);
+      return { job: presentJob(job) };
+    },
+  });
+}

@@ -1,0 +1,127 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { ForbiddenError, UnprocessableError, ValidationError } from '../../lib/errors';
+import type { Actor } from '../../lib/route';
+import type { Clock } from '../../services/services';
+import { CompanySchema } from '../companies/company.entity';
+import { companyDesignDefaults } from '../company-settings/company-settings.service';
+import { CustomerSchema, type Customer } from '../customers/customer.entity';
+import { likePattern } from '../customers/customer.schema';
+import { UserSchema, type User } from '../users/user.entity';
+import { enteredOf, notesOf, resolveDesignConditions } from './design-conditions';
+import { findJob, JOB_POPULATE, jobScope } from './job-access';
+import { JobSchema, type Job, type JobStatus } from './job.entity';
+import { presentJob } from './job.presenter';
+import type { CreateJobInput, ListJobsQuery, UpdateJobInput } from './job.schema';
+import { assertVersion } from './version-lock';
+
+/** Moves a person may make by hand; later issues add the proposal-driven ones. */
+const TRANSITIONS: Record<JobStatus, readonly JobStatus[]> = {
+  walkthrough: ['design', 'lost'],
+  design: ['walkthrough', 'proposed', 'lost'],
+  proposed: ['design', 'won', 'lost'],
+  won: ['installed'],
+  lost: ['walkthrough', 'design'],
+  installed: [],
+};
+
+const isOffice = (a: Actor) => a.role === 'owner' || a.role === 'estimator';
+
+export async function listJobs(em: EntityManager, actor: Actor, q: ListJobsQuery): Promise<{ items: Job[]; total: number }> {
+  const filters: object[] = [jobScope(actor)];
+  if (q.status) filters.push({ status: q.status });
+  if (q.search) {
+    const pat = likePattern(q.search);
+    filters.push({ $or: [{ customer: { name: { $ilike: pat } } }, { street: { $ilike: pat } }, { city: { $ilike: pat } }, { postalCode: { $ilike: pat } }] });
+  }
+  const [items, total] = await em.findAndCount(JobSchema, { $and: filters }, {
+    populate: JOB_POPULATE,
+    orderBy: { lastActivityAt: 'desc', id: 'asc' },
+    limit: q.pageSize,
+    offset: (q.page - 1) * q.pageSize,
+  });
+  return { items, total };
+}
+
+async function customerOf(em: EntityManager, actor: Actor, id: string): Promise<Customer> {
+  const c = await em.findOne(CustomerSchema, { id, company: actor.companyId });
+  if (!c) throw new ValidationError([{ path: 'customerId', message: 'Choose a customer of your company.' }]);
+  return c;
+}
+
+async function salespersonOf(em: EntityManager, actor: Actor, id: string | undefined): Promise<User> {
+  const wanted = id ?? actor.userId;
+  if (actor.role === 'salesperson' && wanted !== actor.userId) throw new ForbiddenError('A salesperson can only own their own jobs.');
+  const u = await em.findOne(UserSchema, { id: wanted, company: actor.companyId, active: true, role: { $in: ['salesperson', 'estimator', 'owner'] } });
+  if (!u) throw new ValidationError([{ path: 'salespersonId', message: 'Choose an active salesperson, estimator or owner of your company.' }]);
+  return u;
+}
+
+async function installerOf(em: EntityManager, actor: Actor, id: string | null): Promise<User | null> {
+  if (!isOffice(actor)) throw new ForbiddenError('Only an owner or estimator assigns installers.');
+  if (id === null) return null;
+  const u = await em.findOne(UserSchema, { id, company: actor.companyId, active: true, role: 'installer' });
+  if (!u) throw new ValidationError([{ path: 'assignedInstallerId', message: 'Choose an active installer of your company.' }]);
+  return u;
+}
+
+export async function createJob(em: EntityManager, actor: Actor, clock: Clock, input: CreateJobInput): Promise<Job> {
+  const customer = await customerOf(em, actor, input.customerId);
+  const salesperson = await salespersonOf(em, actor, input.salespersonId);
+  const installer = input.assignedInstallerId === undefined ? null : await installerOf(em, actor, input.assignedInstallerId);
+  const defaults = await companyDesignDefaults(em, actor.companyId);
+  const design = input.designConditions || defaults
+    ? resolveDesignConditions(input.designConditions ?? {}, input.designSourceNotes ?? {}, defaults)
+    : null;
+  const now = clock.now();
+  const job = em.create(JobSchema, {
+    company: em.getReference(CompanySchema, actor.companyId),
+    customer,
+    salesperson,
+    assignedInstaller: installer,
+    status: 'walkthrough',
+    street: input.street,
+    unit: input.unit ?? '',
+    city: input.city,
+    region: input.region,
+    postalCode: input.postalCode,
+    notes: input.notes ?? '',
+    designConditions: design?.conditions ?? null,
+    designSources: design?.sources ?? {},
+    tightness: input.tightness ?? 'average',
+    lastActivityAt: now,
+  });
+  await em.flush();
+  return job;
+}
+
+export async function updateJob(em: EntityManager, actor: Actor, clock: Clock, id: string, version: number, input: UpdateJobInput): Promise<Job> {
+  const job = await findJob(em, actor, id);
+  assertVersion(version, job.version, 'The job', () => presentJob(job));
+  const from: JobStatus = job.status;
+  if (input.status !== undefined && input.status !== from) {
+    if (!TRANSITIONS[from].includes(input.status)) {
+      throw new UnprocessableError(`A job cannot move from ${from} to ${input.status}.`, { errors: [{ path: 'status', message: `Allowed next states: ${TRANSITIONS[from].join(', ') || 'none'}.` }] });
+    }
+    job.status = input.status;
+  }
+  if (input.customerId !== undefined) job.customer = await customerOf(em, actor, input.customerId);
+  if (input.salespersonId !== undefined) job.salesperson = await salespersonOf(em, actor, input.salespersonId);
+  if (input.assignedInstallerId !== undefined) job.assignedInstaller = await installerOf(em, actor, input.assignedInstallerId);
+  if (input.street !== undefined) job.street = input.street;
+  if (input.unit !== undefined) job.unit = input.unit;
+  if (input.city !== undefined) job.city = input.city;
+  if (input.region !== undefined) job.region = input.region;
+  if (input.postalCode !== undefined) job.postalCode = input.postalCode;
+  if (input.notes !== undefined) job.notes = input.notes;
+  if (input.tightness !== undefined) job.tightness = input.tightness;
+  if (input.designConditions !== undefined || input.designSourceNotes !== undefined) {
+    const entered = input.designConditions ?? enteredOf(job.designConditions ?? null, job.designSources);
+    const notes = input.designSourceNotes ?? notesOf(job.designSources);
+    const design = resolveDesignConditions(entered, notes, await companyDesignDefaults(em, actor.companyId));
+    job.designConditions = design.conditions;
+    job.designSources = design.sources;
+  }
+  job.lastActivityAt = clock.now();
+  await em.flush();
+  return job;
+}

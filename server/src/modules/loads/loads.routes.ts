@@ -1,0 +1,20 @@
+import { z } from 'zod';
+import { ANY_STAFF, type ApiRouter } from '../../lib/route';
+import { jobLoads } from './loads.service';
+
+const params = z.strictObject({ id: z.uuid({ message: 'Must be a job id.' }) });
+
+/** Mounted under /api/jobs. */
+export function loadsRoutes(api: ApiRouter): void {
+  api.route({
+    method: 'get',
+    path: '/:id/loads',
+    policy: ANY_STAFF,
+    params,
+    handler: async ({ em, actor, params: p }) => {
+      const r = await jobLoads(em, actor, p.id);
+      // calc's result is plain JSON by contract, so it is sent as calc made it.
+      return { jobId: r.job.id, jobVersion: r.job.version, tightness: r.job.tightness, designConditions: r.home.designConditions, loads: r.load, warnings: r.warnings };
+    },
+  });
+}

@@ -1,0 +1,56 @@
+import { z } from 'zod';
+import { ANY_STAFF, roles, type ApiRouter } from '../../lib/route';
+import { roomParams } from '../rooms/room.schema';
+import { presentPhoto } from './photo.presenter';
+import { addPhoto, deletePhoto, findPhoto, photoBytes } from './photo.service';
+import { receiveUpload } from './receive-upload';
+
+const EDITORS = roles('owner', 'estimator', 'salesperson');
+const photoParams = roomParams.extend({ photoId: z.uuid({ message: 'Must be a photo id.' }) });
+
+/** Mounted under /api/jobs. Bytes leave only through the GET below, after the same scope checks as the job. */
+export function photoRoutes(api: ApiRouter): void {
+  api.route({
+    method: 'post',
+    path: '/:jobId/rooms/:roomId/photos',
+    policy: EDITORS,
+    params: roomParams,
+    multipart: true,
+    status: 201,
+    handler: async ({ em, actor, params, services, req, res }) => {
+      const file = await receiveUpload(req, res, services.config.UPLOAD_MAX_BYTES);
+      const photo = await addPhoto(em, actor, services.clock, services.storage, params, file);
+      return { photo: presentPhoto(photo, params.jobId, params.roomId) };
+    },
+  });
+  api.route({
+    method: 'get',
+    path: '/:jobId/rooms/:roomId/photos/:photoId',
+    policy: ANY_STAFF,
+    params: photoParams,
+    handler: async ({ em, actor, params, services, res }) => {
+      const photo = await findPhoto(em, actor, params);
+      const bytes = await photoBytes(services.storage, photo);
+      res
+        .status(200)
+        .setHeader('Content-Type', photo.contentType)
+        .setHeader('X-Content-Type-Options', 'nosniff')
+        .setHeader('Content-Disposition', `inline; filename="room-photo-${photo.id}.jpg"`)
+        .setHeader('Cache-Control', 'private, max-age=300')
+        .setHeader('Content-Length', String(bytes.length))
+        .end(bytes);
+      return undefined;
+    },
+  });
+  api.route({
+    method: 'delete',
+    path: '/:jobId/rooms/:roomId/photos/:photoId',
+    policy: EDITORS,
+    params: photoParams,
+    handler: async ({ em, actor, params, services, res }) => {
+      await deletePhoto(em, actor, services.clock, services.storage, params);
+      res.status(204).end();
+      return undefined;
+    },
+  });
+}

@@ -1,0 +1,89 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { randomUUID } from 'node:crypto';
+import { NotFoundError, UnprocessableError } from '../../lib/errors';
+import type { Actor } from '../../lib/route';
+import type { Clock } from '../../services/services';
+import type { Storage } from '../../services/storage';
+import { findJob, touchJob } from '../jobs/job-access';
+import type { Job } from '../jobs/job.entity';
+import { assertVersion } from '../jobs/version-lock';
+import { PhotoSchema, type Photo } from '../photos/photo.entity';
+import { RoomSchema, type RoomRow } from './room.entity';
+import { presentRoom } from './room.presenter';
+import type { CreateRoomInput, UpdateRoomInput } from './room.schema';
+
+/** calc's home schema takes at most 200 rooms. */
+const MAX_ROOMS = 200;
+
+export interface RoomWithPhotos {
+  room: RoomRow;
+  photos: Photo[];
+}
+
+export async function roomsOf(em: EntityManager, job: Job): Promise<RoomWithPhotos[]> {
+  const rooms = await em.find(RoomSchema, { job: job.id }, { orderBy: { position: 'asc', createdAt: 'asc', id: 'asc' } });
+  const photos = rooms.length ? await em.find(PhotoSchema, { room: { $in: rooms.map((r) => r.id) } }, { orderBy: { createdAt: 'asc', id: 'asc' } }) : [];
+  return rooms.map((room) => ({ room, photos: photos.filter((p) => p.room.id === room.id) }));
+}
+
+export async function listRooms(em: EntityManager, actor: Actor, jobId: string): Promise<RoomWithPhotos[]> {
+  return roomsOf(em, await findJob(em, actor, jobId));
+}
+
+/** A room of a job the actor may see; 404 otherwise. */
+export async function findRoom(em: EntityManager, actor: Actor, jobId: string, roomId: string): Promise<{ job: Job; room: RoomRow }> {
+  const job = await findJob(em, actor, jobId);
+  const room = await em.findOne(RoomSchema, { id: roomId, job: job.id });
+  if (!room) throw new NotFoundError('The room');
+  return { job, room };
+}
+
+export async function getRoom(em: EntityManager, actor: Actor, jobId: string, roomId: string): Promise<RoomWithPhotos> {
+  const { room } = await findRoom(em, actor, jobId, roomId);
+  return { room, photos: await em.find(PhotoSchema, { room: room.id }, { orderBy: { createdAt: 'asc', id: 'asc' } }) };
+}
+
+export function createRoom(em: EntityManager, actor: Actor, clock: Clock, jobId: string, input: CreateRoomInput): Promise<RoomWithPhotos> {
+  return em.transactional(async (tx) => {
+    const job = await findJob(tx, actor, jobId);
+    const count = await tx.count(RoomSchema, { job: job.id });
+    if (count >= MAX_ROOMS) throw new UnprocessableError(`A job can have at most ${MAX_ROOMS} rooms.`);
+    const id = input.id ?? randomUUID();
+    const room = tx.create(RoomSchema, { id, job, position: input.position ?? count, input: { ...input.input, id } });
+    await tx.flush();
+    await touchJob(tx, job.id, clock.now());
+    return { room, photos: [] };
+  });
+}
+
+export function updateRoom(
+  em: EntityManager, actor: Actor, clock: Clock, jobId: string, roomId: string, version: number, input: UpdateRoomInput,
+): Promise<RoomWithPhotos> {
+  return em.transactional(async (tx) => {
+    const { job, room } = await findRoom(tx, actor, jobId, roomId);
+    const photos = await tx.find(PhotoSchema, { room: room.id }, { orderBy: { createdAt: 'asc', id: 'asc' } });
+    assertVersion(version, room.version, 'The room', () => presentRoom(room, job.id, photos));
+    if (input.input !== undefined) room.input = { ...input.input, id: room.id };
+    if (input.position !== undefined) room.position = input.position;
+    await tx.flush();
+    await touchJob(tx, job.id, clock.now());
+    return { room, photos };
+  });
+}
+
+export async function deleteRoom(
+  em: EntityManager, actor: Actor, clock: Clock, storage: Storage, jobId: string, roomId: string, version: number,
+): Promise<void> {
+  const keys = await em.transactional(async (tx) => {
+    const { job, room } = await findRoom(tx, actor, jobId, roomId);
+    const photos = await tx.find(PhotoSchema, { room: room.id });
+    assertVersion(version, room.version, 'The room', () => presentRoom(room, job.id, photos));
+    tx.remove(photos);
+    tx.remove(room);
+    await tx.flush();
+    await touchJob(tx, job.id, clock.now());
+    return photos.map((p) => p.storageKey);
+  });
+  // Files go after the rows are gone: a failed delete leaves an orphan file, never a row without its file.
+  await Promise.all(keys.map((k) => storage.delete(k).catch(() => undefined)));
+}

@@ -1,0 +1,115 @@
+import { describe, it, expect } from 'vitest';
+import { computeDesign, computeOptions, CalcError, CAUTIONS, cylindersToBuy, stockKitLengthFt } from '@calc';
+import { catalog, design, priceBook, pricing, threeRoomHome } from './sample-data';
+
+const run = () => computeDesign({ home: threeRoomHome, design, catalog, priceBook, pricing });
+const qty = (r: ReturnType<typeof run>, key: string) => r.takeoff.find((l) => l.itemKey === key)?.quantity;
+
+describe('full design on the worked three-room house', () => {
+  it('sizing: zone and system ratios with plain-word warnings', () => {
+    const r = run();
+    // Living zone = living + kitchen: 5,300 + 921 + 2,121 + 184 = 8,526 Btu/h; GL-12K gives 12,000 at 95 °F → 1.407 (> 130 %)
+    expect(r.zones[0]?.sizing.coolingLoadBtuh).toBe(8526);
+    expect(r.zones[0]?.sizing.coolingRatio).toBe(1.407);
+    expect(r.zones[0]?.sizing.withinRange).toBe(false);
+    expect(r.warnings.some((w) => w.includes('GL-12K wall head delivers 141 %'))).toBe(true);
+    // System: 24,000 / 10,227 = 2.347; combination 9k + 12k on 24k = 88 %
+    expect(r.systems[0]?.sizing.coolingRatio).toBe(2.347);
+    expect(r.systems[0]?.combination.connectedPercent).toBe(88);
+  });
+  it('refrigerant: R-32 per-circuit pre-charge 25 ft at 0.16 oz/ft', () => {
+    const ref = run().systems[0]?.refrigerant;
+    // 40 ft → (40 − 25) × 0.16 = 2.4 oz; 20 ft → 0; total 2.4; system 60 + 2.4 = 62.4 oz (1.769 kg < m1 1.842 kg)
+    expect(ref?.circuits.map((c) => c.extraChargeOz)).toEqual([2.4, 0]);
+    expect(ref?.extraChargeOz).toBe(2.4);
+    expect(ref?.totalChargeOz).toBe(62.4);
+    expect(ref?.circuits[0]?.adderSource).toBe('equipment');
+    expect(ref?.safetyClass).toBe('A2L');
+    expect(ref?.cautions).toContain(CAUTIONS.a2l);
+  });
+  it('electrical: MCA 18.6 / MOCP 30 on NM-B → 12 AWG, 30 A breaker', () => {
+    const e = run().systems[0]?.electrical;
+    expect(e?.wireAwg).toBe(12);
+    expect(e?.breakerA).toBe(30);
+    expect(e?.disconnectWithinSight).toBe(true);
+  });
+  it('takeoff quantities with their derivations', () => {
+    const r = run();
+    expect(qty(r, 'line-set-kit:1/4x3/8:50ft')).toBe(1); // 40 ft → 50 ft kit
+    expect(qty(r, 'line-set-kit:1/4x3/8:25ft')).toBe(1); // 20 ft → 25 ft kit
+    expect(qty(r, 'comm-cable:14-4')).toBe(70); // (40 + 5) + (20 + 5) = 45 + 25
+    expect(qty(r, 'line-cover:straight')).toBe(2); // 12 ft ÷ 8 ft → 2
+    expect(qty(r, 'condensate-line:3/4')).toBe(30); // 15 → 20, 8 → 10
+    expect(qty(r, 'condensate-pump')).toBe(1);
+    expect(qty(r, 'wire:nm-b:12awg')).toBe(50); // 42 + 5 → 50
+    expect(qty(r, 'refrigerant:R-32:20lb')).toBe(1); // 2.4 oz → one 20 lb cylinder
+    expect(qty(r, 'labor:run-line-set')).toBe(2.7); // (0.75 + 0.8) + (0.75 + 0.4)
+    expect(qty(r, 'labor:electrical')).toBe(2.84); // 2 + 42 × 0.02
+    for (const l of r.takeoff) {
+      expect(l.derivation.length).toBeGreaterThan(0);
+      expect(l.quantity).toBeGreaterThan(0);
+    }
+  });
+  it('price: every step to the cent', () => {
+    const p = run().price;
+    // Equipment 210,000 + 52,000 + 46,000 = 308,000; materials 99,550 (sum of the price-book lines); labor 16.64 h × 9,500 = 158,080
+    expect(p.equipmentCostCents).toBe(308000);
+    expect(p.materialsCostCents).toBe(99550);
+    expect(p.laborCostCents).toBe(158080);
+    // Goods 407,550 / 0.6 = 679,250; labor 158,080 / 0.6 = 263,466.67 → 263,467; sell 942,717; − 25,000 = 917,717
+    expect(p.sellCents).toBe(942717);
+    expect(p.subtotalCents).toBe(917717);
+    // Taxable goods share 679,250 × 917,717 / 942,717 = 661,236.91 → 661,237; 6 % = 39,674.22 → 39,674; total 957,391
+    expect(p.taxCents).toBe(39674);
+    expect(p.totalCents).toBe(957391);
+    // Deposit 30 % = 287,217.3 → 287,217; balance 670,174; 9.99 % / 60 months → 14,235.92 → 14,236
+    expect(p.depositCents).toBe(287217);
+    expect(p.monthlyPaymentCents).toBe(14236);
+  });
+  it('cautions always include estimate, refrigerant, pressure test and electrician wording', () => {
+    const r = run();
+    expect(r.cautions).toEqual(expect.arrayContaining([CAUTIONS.estimate, CAUTIONS.refrigerant, CAUTIONS.pressureTest, CAUTIONS.electrical, CAUTIONS.a2l]));
+    expect(r.isEstimate).toBe(true);
+  });
+  it('unknown rooms and equipment are calc errors with a path', () => {
+    const bad = { ...design, zones: [{ key: 'z', name: 'Z', roomIds: ['nope'], indoorUnitKey: 'GL-9K-WH' }] };
+    expect(() => computeDesign({ home: threeRoomHome, design: bad, catalog, priceBook, pricing })).toThrow(CalcError);
+    const [first] = design.systems;
+    if (!first) throw new Error('sample design has a system');
+    try {
+      computeDesign({ home: threeRoomHome, design: { ...design, systems: [{ ...first, outdoorUnitKey: 'missing' }] }, catalog, priceBook, pricing });
+      expect.unreachable();
+    } catch (e) {
+      expect(e instanceof CalcError && e.code).toBe('UNKNOWN_EQUIPMENT');
+      expect(e instanceof CalcError && e.details[0]?.path).toEqual(['systems', 0, 'outdoorUnitKey']);
+    }
+  });
+  it('missing adder → labelled tube-volume estimate; missing price → warning', () => {
+    const single = {
+      zones: [{ key: 'z1', name: 'Bed', roomIds: ['bed'], indoorUnitKey: 'GL-12K-WH' }],
+      systems: [{ key: 's', name: 'Bedroom system', outdoorUnitKey: 'GL-O12-S1', circuits: [{ zoneKey: 'z1', lengthFt: 35 }], electrical: { circuitLengthFt: 30 } }],
+    };
+    const r = computeDesign({ home: threeRoomHome, design: single, catalog, priceBook, pricing });
+    const ref = r.systems[0]?.refrigerant;
+    // R-410A 1/4 liquid at 61.76 lb/ft³: 0.195 oz/ft × (35 − 25) = 1.95 oz
+    expect(ref?.circuits[0]?.adderSource).toBe('estimate');
+    expect(ref?.extraChargeOz).toBeCloseTo(1.9, 1);
+    expect(ref?.notes.some((n) => n.startsWith('Estimate'))).toBe(true);
+    expect(r.warnings.some((w) => w.includes('No price for'))).toBe(true);
+  });
+  it('options side by side', () => {
+    const o = computeOptions({ home: threeRoomHome, catalog, priceBook, options: [
+      { key: 'good', name: 'Good', design, pricing: { ...pricing, percent: 30 } },
+      { key: 'best', name: 'Best', design, pricing },
+    ] });
+    expect(o.comparison).toHaveLength(2);
+    expect(o.comparison[1]?.differenceFromFirstCents).toBe((o.results[1]?.result.price.totalCents ?? 0) - (o.results[0]?.result.price.totalCents ?? 0));
+  });
+  it('helpers: stock kits and cylinders', () => {
+    // common practice [TRADE] stock lengths 15/25/35/50/75/100 ft
+    expect(stockKitLengthFt({ lengthFt: 15 })).toBe(15);
+    expect(stockKitLengthFt({ lengthFt: 101 })).toBeNull();
+    expect(cylindersToBuy({ extraOz: 0, cylinderLb: 25 })).toBe(0);
+    expect(cylindersToBuy({ extraOz: 401, cylinderLb: 25 })).toBe(2);
+  });
+});

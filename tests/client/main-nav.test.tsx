@@ -1,0 +1,38 @@
+import { render, screen, within } from '@testing-library/react';
+import { MemoryRouter } from 'react-router-dom';
+import { describe, expect, it } from 'vitest';
+import { MainNav } from '../../client/src/components/layout/main-nav';
+import type { Feature } from '../../client/src/config/nav';
+import type { Role } from '../../client/src/config/roles';
+
+function navLinks(role: Role, features: Feature[] = []) {
+  render(
+    <MemoryRouter>
+      <MainNav role={role} features={new Set(features)} />
+    </MemoryRouter>,
+  );
+  const nav = screen.getByRole('navigation', { name: 'Main' });
+  return within(nav)
+    .getAllByRole('link')
+    .map((a) => [a.textContent, a.getAttribute('href')]);
+}
+
+describe('main navigation by role', () => {
+  it('gives the owner every area, with the outbox only when the server has one', () => {
+    const owner = [
+      ['Jobs', '/jobs'],
+      ['Users', '/users'],
+      ['Reports', '/reports'],
+      ['Price book & catalog', '/price-book'],
+    ];
+    expect(navLinks('owner')).toEqual(owner);
+  });
+
+  it('adds Outbox for the owner when available', () => {
+    expect(navLinks('owner', ['outbox']).map(([label]) => label)).toContain('Outbox');
+  });
+
+  it.each<Role>(['estimator', 'salesperson', 'installer'])('shows only Jobs to the %s', (role) => {
+    expect(navLinks(role, ['outbox'])).toEqual([['Jobs', '/jobs']]);
+  });
+});

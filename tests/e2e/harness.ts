@@ -1,0 +1,66 @@
+import { mkdirSync } from 'node:fs';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { loadConfig } from '../../server/src/config';
+import { startSmtpFake, type SmtpFake } from '../../server/src/fakes/smtp-fake';
+import { startServer, type Running } from '../../server/src/server';
+import { testDatabaseUrl } from '../helpers/test-app';
+
+export const PHONE = { width: 375, height: 812 } as const;
+export const DESKTOP = { width: 1440, height: 900 } as const;
+export const SHOTS = 'tests/e2e/screenshots';
+
+export interface E2E {
+  url: string;
+  browser: Browser;
+  smtp: SmtpFake;
+  running: Running;
+  newPage(viewport: { width: number; height: number }): Promise<{ context: BrowserContext; page: Page }>;
+  close(): Promise<void>;
+}
+
+/** The real server (built client, seeded test database, SMTP fake) and Debian's Chromium, headless; each context is a fresh profile. */
+export async function startE2E(): Promise<E2E> {
+  const smtp = await startSmtpFake({ port: 0 });
+  const config = loadConfig({
+    NODE_ENV: 'test',
+    DATABASE_URL: testDatabaseUrl(),
+    PORT: '0',
+    SMTP_PORT: String(smtp.port),
+    LOG_LEVEL: 'silent',
+    DEV_OUTBOX: 'on',
+    LOGIN_MAX_PER_IP: '10000',
+  });
+  const running = await startServer(config, { outbox: smtp });
+  mkdirSync(SHOTS, { recursive: true });
+  const browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+  return {
+    url: running.url,
+    browser,
+    smtp,
+    running,
+    async newPage(viewport) {
+      const context = await browser.newContext({ viewport, baseURL: running.url });
+      const page = await context.newPage();
+      page.setDefaultTimeout(15_000);
+      // Any request to another host would be a bug (fonts and assets ship with the app).
+      await page.route(/^(?!http:\/\/127\.0\.0\.1)/, (route) => route.abort());
+      return { context, page };
+    },
+    async close() {
+      await browser.close();
+      await running.close();
+      await smtp.close();
+    },
+  };
+}
+
+export async function signIn(page: Page, email: string, password: string): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}

@@ -1,0 +1,94 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { CustomerSchema } from '../../server/src/modules/customers/customer.entity';
+import { browserAgent, HTTPS, login, makeCompany, type Session, type TestCompany } from '../helpers/fixtures';
+import { buildTestApp, type TestApp } from '../helpers/test-app';
+import { del, expectProblem, newJob, patch, post } from './jobs-helpers';
+
+let t: TestApp;
+let a: TestCompany;
+let b: TestCompany;
+let sales: Session;
+
+beforeAll(async () => {
+  t = await buildTestApp();
+  a = await makeCompany(t.orm.em.fork(), 'CustA');
+  b = await makeCompany(t.orm.em.fork(), 'CustB');
+  sales = await login(t.app, a.users.salesperson.email);
+});
+afterAll(async () => t.close());
+
+describe('customers', () => {
+  it('401 when signed out', async () => {
+    expectProblem(await browserAgent(t.app).get('/api/customers').set(HTTPS), 401);
+    expectProblem(await browserAgent(t.app).post('/api/customers').set(HTTPS).send({ name: 'X' }), 403); // no CSRF token before sign-in
+  });
+
+  it('403 for an installer (they meet customers only through assigned jobs)', async () => {
+    const s = await login(t.app, a.users.installer.email);
+    expectProblem(await s.agent.get('/api/customers'), 403);
+    expectProblem(await post(s, '/api/customers').send({ name: 'Installer Made' }), 403);
+  });
+
+  it('400 per invalid field, naming it', async () => {
+    const cases: Array<[Record<string, unknown>, string, string]> = [
+      [{ name: '' }, 'name', 'Enter the customer name.'],
+      [{ name: 'x'.repeat(161) }, 'name', 'Name must be at most 160 characters.'],
+      [{ name: 'Ok', email: 'not-mail' }, 'email', 'Enter a valid e-mail address.'],
+      [{ name: 'Ok', phone: 'call me' }, 'phone', 'Enter a phone number using digits, spaces, dashes, dots or brackets.'],
+      [{ name: 'Ok', notes: 'n'.repeat(4001) }, 'notes', 'Notes must be at most 4000 characters.'],
+      [{ name: 'Ok', companyId: b.id }, '(body)', 'Unrecognized key: "companyId"'],
+    ];
+    for (const [body, path, message] of cases) {
+      const r = await post(sales, '/api/customers').send(body);
+      expectProblem(r, 400);
+      expect(r.body.errors).toContainEqual({ path, message });
+    }
+  });
+
+  it('creates, reads, lists, searches and updates within the company', async () => {
+    const c = await post(sales, '/api/customers').send({ name: 'Gwendolyn Starkweather-Ibe', email: 'Gwen@Example.com', phone: '555-0117', notes: 'Side gate' });
+    expect(c.status).toBe(201);
+    const id = String(c.body.customer.id);
+    expect(c.body.customer).toMatchObject({ name: 'Gwendolyn Starkweather-Ibe', email: 'gwen@example.com', phone: '555-0117', notes: 'Side gate' });
+    const row = await t.orm.em.fork().findOneOrFail(CustomerSchema, { id });
+    expect(row.company.id).toBe(a.id);
+
+    const est = await login(t.app, a.users.estimator.email);
+    expect((await est.agent.get(`/api/customers/${id}`)).body.customer.name).toBe('Gwendolyn Starkweather-Ibe');
+    const list = await est.agent.get('/api/customers').query({ search: 'starkweather', pageSize: 5 });
+    expect(list.status).toBe(200);
+    expect(list.body).toMatchObject({ total: 1, page: 1, pageSize: 5 });
+    expect(list.body.items[0].id).toBe(id);
+    expect((await est.agent.get('/api/customers').query({ search: '%' })).body.total).toBe(0);
+    expectProblem(await est.agent.get('/api/customers').query({ pageSize: 101 }), 400);
+
+    const u = await patch(sales, `/api/customers/${id}`).send({ phone: null, notes: 'Front door' });
+    expect(u.status).toBe(200);
+    const fresh = await t.orm.em.fork().findOneOrFail(CustomerSchema, { id });
+    expect([fresh.phone, fresh.notes]).toEqual([null, 'Front door']);
+  });
+
+  it('404 for another company, for read, write and delete; nothing changes', async () => {
+    const c = await post(sales, '/api/customers').send({ name: 'Ambrose Pilkington-Reyes' });
+    const id = String(c.body.customer.id);
+    const other = await login(t.app, b.users.owner.email);
+    expectProblem(await other.agent.get(`/api/customers/${id}`), 404);
+    expectProblem(await patch(other, `/api/customers/${id}`).send({ name: 'Taken' }), 404);
+    expectProblem(await del(other, `/api/customers/${id}`), 404);
+    expect((await other.agent.get('/api/customers')).body.items.map((x: { id: string }) => x.id)).not.toContain(id);
+    expect((await t.orm.em.fork().findOneOrFail(CustomerSchema, { id })).name).toBe('Ambrose Pilkington-Reyes');
+  });
+
+  it('deletes (office roles only) and refuses while jobs exist', async () => {
+    const c = await post(sales, '/api/customers').send({ name: 'Temporary Customer' });
+    const id = String(c.body.customer.id);
+    expectProblem(await del(sales, `/api/customers/${id}`), 403);
+    const owner = await login(t.app, a.users.owner.email);
+    expect((await del(owner, `/api/customers/${id}`)).status).toBe(204);
+    expect(await t.orm.em.fork().count(CustomerSchema, { id })).toBe(0);
+
+    const job = await newJob(sales);
+    const withJob = await t.orm.em.fork().findOneOrFail((await import('../../server/src/modules/jobs/job.entity')).JobSchema, { id: job.id });
+    expectProblem(await del(owner, `/api/customers/${withJob.customer.id}`), 409);
+  });
+});

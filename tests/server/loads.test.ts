@@ -1,0 +1,80 @@
+import { homeLoad, type HomeInput, type RoomInput } from '@calc';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { browserAgent, HTTPS, login, makeCompany, type Session, type TestCompany } from '../helpers/fixtures';
+import { buildTestApp, type TestApp } from '../helpers/test-app';
+import { DESIGN, expectProblem, newCustomer, newJob, newRoom, patch, post, sampleRoom, SITE } from './jobs-helpers';
+
+let t: TestApp;
+let a: TestCompany;
+let sales: Session;
+
+beforeAll(async () => {
+  t = await buildTestApp();
+  a = await makeCompany(t.orm.em.fork(), 'LoadsA');
+  sales = await login(t.app, a.users.salesperson.email);
+});
+afterAll(async () => t.close());
+
+const FIXTURE_ROOMS: Array<Omit<RoomInput, 'id'>> = [
+  sampleRoom('Living room'),
+  { name: 'Kitchen', areaFt2: 140, ceilingHeightFt: 9, exposedWalls: [{ direction: 'E', lengthFt: 12, windows: [{ widthIn: 30, heightIn: 36, interiorShading: 'blinds' }] }], appliances: [{ label: 'Range', gain: 1200, latentBtuh: 400 }], occupants: 2, above: { kind: 'attic', insulation: 'r30' }, below: { kind: 'slab' } },
+  { name: 'Bedroom', lengthFt: 12, widthFt: 11, exposedWalls: [{ direction: 'N', lengthFt: 12, windows: [{ areaFt2: 15, glazing: 'single-clear' }] }, { direction: 'W', lengthFt: 11 }], occupants: 2, above: { kind: 'roof', insulation: 'r19' }, below: { kind: 'garage', insulation: 'none' } },
+];
+
+describe('GET /api/jobs/:id/loads', () => {
+  it('401 signed out; 404 for another company and another salesperson', async () => {
+    const job = await newJob(sales);
+    await newRoom(sales, job.id);
+    expectProblem(await browserAgent(t.app).get(`/api/jobs/${job.id}/loads`).set(HTTPS), 401);
+    const b = await makeCompany(t.orm.em.fork(), 'LoadsB');
+    expectProblem(await (await login(t.app, b.users.estimator.email)).agent.get(`/api/jobs/${job.id}/loads`), 404);
+    const owner = await login(t.app, a.users.owner.email);
+    const ownJob = await newJob(owner);
+    expectProblem(await sales.agent.get(`/api/jobs/${ownJob.id}/loads`), 404);
+    expectProblem(await sales.agent.get('/api/jobs/not-an-id/loads'), 400);
+  });
+
+  it('equals calc’s homeLoad computed directly from the same inputs', async () => {
+    const job = await newJob(sales, { tightness: 'leaky' });
+    const ids: string[] = [];
+    for (const input of FIXTURE_ROOMS) ids.push((await newRoom(sales, job.id, input)).id);
+    const r = await sales.agent.get(`/api/jobs/${job.id}/loads`);
+    expect(r.status, JSON.stringify(r.body)).toBe(200);
+    const home: HomeInput = {
+      id: job.id,
+      designConditions: DESIGN,
+      tightness: 'leaky',
+      rooms: FIXTURE_ROOMS.map((room, i) => ({ ...room, id: ids[i] ?? '' })),
+    };
+    const expected = JSON.parse(JSON.stringify(homeLoad({ home })));
+    expect(r.body.loads).toEqual(expected);
+    expect(r.body.loads.rooms.map((x: { roomId: string }) => x.roomId)).toEqual(ids);
+    expect(r.body.loads.totals.coolingBtuh).toBeGreaterThan(0);
+    expect(r.body.loads.totals.heatingBtuh).toBeGreaterThan(0);
+    expect(Object.keys(r.body.warnings.rooms)).toEqual(ids);
+    // An installer assigned to the job reads the same numbers.
+    const owner = await login(t.app, a.users.owner.email);
+    await patch(owner, `/api/jobs/${job.id}`, job.version).send({ assignedInstallerId: a.users.installer.id });
+    const inst = await login(t.app, a.users.installer.email);
+    expect((await inst.agent.get(`/api/jobs/${job.id}/loads`)).body.loads).toEqual(expected);
+  });
+
+  it('422 with a clear message when design conditions or rooms are missing', async () => {
+    const bare = await post(sales, '/api/jobs').send({ customerId: await newCustomer(sales), ...SITE });
+    expect(bare.status).toBe(201);
+    expect(bare.body.job.designConditions).toBeNull();
+    const noDesign = await sales.agent.get(`/api/jobs/${bare.body.job.id}/loads`);
+    expectProblem(noDesign, 422);
+    expect(noDesign.body.detail).toBe('Enter the design conditions for the site before the loads can be worked out.');
+    const noRooms = await sales.agent.get(`/api/jobs/${(await newJob(sales)).id}/loads`);
+    expectProblem(noRooms, 422);
+    expect(noRooms.body.detail).toBe('Add at least one room before the loads can be worked out.');
+  });
+
+  it('flags implausible inputs as warnings (a 2 ft ceiling)', async () => {
+    const job = await newJob(sales);
+    const low = await newRoom(sales, job.id, { name: 'Crawl loft', areaFt2: 80, ceilingHeightFt: 2 });
+    const r = await sales.agent.get(`/api/jobs/${job.id}/loads`);
+    expect(r.body.warnings.rooms[low.id]).toContainEqual({ path: ['ceilingHeightFt'], message: 'A 2 ft ceiling is unusually low — check the measurement.' });
+  });
+});

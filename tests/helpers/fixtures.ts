@@ -1,7 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
-// @ts-expect-error cookiejar ships no types; it is superagent's own cookie jar
 import { CookieAccessInfo } from 'cookiejar';
 import type { Express } from 'express';
 import { CompanySchema } from '../../server/src/modules/companies/company.entity';

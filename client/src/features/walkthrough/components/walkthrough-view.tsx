@@ -4,6 +4,7 @@ import { QueryWidgetBoundary } from '../../../components/errors/query-widget-bou
 import { Alert } from '../../../components/ui/alert';
 import { Button, buttonClass } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
+import { Spinner } from '../../../components/ui/spinner';
 import type { CompanySettingsRecord, JobRecord, RoomRecord } from '../../../lib/job-records';
 import { LiveHomeTotals } from '../../loads/components/live-home-totals';
 import { roomTarget } from '../sync/edits';
@@ -40,6 +41,9 @@ export function WalkthroughView({ job: serverJob, rooms: serverRooms, settings }
     void queue.enqueue({ target: roomTarget(current.id), baseVersion: current.version, payload: { kind: 'room-delete', jobId: job.id, roomId: current.id } });
     setSelected(null);
   };
+
+  // Waiting edits from an earlier visit must be laid over the server's values before anyone types.
+  if (!state.loaded) return <Spinner label="Restoring changes kept on this device…" />;
 
   return (
     <UnitSystemContext.Provider value={settings?.unitSystem ?? 'imperial'}>

@@ -1,0 +1,106 @@
+import { METHOD_NOTES, type HomeLoad } from '@calc';
+import type { JobRecord } from '../../../lib/job-records';
+import { COMPONENT_KEYS, COMPONENT_LABELS, tons } from '../model/compute';
+
+const n = (v: number) => v.toLocaleString('en-US');
+const DESIGN_ROWS: [string, string, string][] = [
+  ['outdoorCoolingDryBulbF', 'Outdoor cooling dry bulb', '°F'],
+  ['outdoorCoolingWetBulbF', 'Outdoor coincident wet bulb', '°F'],
+  ['outdoorCoolingGrains', 'Outdoor humidity', 'gr/lb'],
+  ['outdoorHeatingDryBulbF', 'Outdoor heating dry bulb', '°F'],
+  ['indoorCoolingF', 'Indoor cooling set point', '°F'],
+  ['indoorHeatingF', 'Indoor heating set point', '°F'],
+  ['indoorCoolingRhPercent', 'Indoor relative humidity', '%'],
+  ['dailyRangeF', 'Daily range', '°F'],
+  ['elevationFt', 'Elevation', 'ft'],
+];
+const sourceWords: Record<string, string> = { entered: 'entered', 'company-default': 'company default', 'standard-default': 'standard default' };
+
+/** The one-page load summary: inputs it used, per-room and whole-home results, the method. */
+export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; load: HomeLoad; printedOn: string }) {
+  const dc = job.designConditions ?? {};
+  const t = load.totals;
+  return (
+    <article className="load-sheet mx-auto flex max-w-[186mm] flex-col gap-3 bg-white p-4 text-sm text-ink-950">
+      <header className="flex items-start justify-between border-b-2 border-ink-800 pb-2">
+        <div>
+          <p className="text-xs font-semibold uppercase tracking-wide text-ink-600">Gaugeline · Load summary</p>
+          <h1 className="text-xl font-bold">{job.customer.name}</h1>
+          <p>{[job.site.street, job.site.unit, job.site.city, job.site.region, job.site.postalCode].filter(Boolean).join(', ')}</p>
+        </div>
+        <div className="text-right">
+          <p className="rounded border border-ink-800 px-2 font-semibold">ESTIMATE</p>
+          <p className="mt-1 text-xs">Printed {printedOn} · job version {job.version}</p>
+        </div>
+      </header>
+
+      <section aria-label="Inputs used">
+        <h2 className="font-semibold">Design conditions used</h2>
+        <table className="w-full text-xs">
+          <tbody>
+            {DESIGN_ROWS.filter(([k]) => typeof dc[k] === 'number').map(([k, label, unit]) => (
+              <tr key={k} className="border-b border-line">
+                <td className="py-0.5">{label}</td>
+                <td className="py-0.5 text-right">{String(dc[k])} {unit}</td>
+                <td className="py-0.5 pl-2 text-muted">{sourceWords[job.designSources[k]?.source ?? ''] ?? ''}{job.designSources[k]?.note ? ` — ${job.designSources[k]?.note}` : ''}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        <p className="text-xs">House tightness: {job.tightness}. {typeof dc.source === 'string' && dc.source ? `Source of design values: ${dc.source}.` : ''}</p>
+      </section>
+
+      <section aria-label="Room results">
+        <h2 className="font-semibold">Rooms (Btu/h)</h2>
+        <table className="w-full text-xs">
+          <thead>
+            <tr className="border-b border-ink-800 text-left">
+              <th>Room</th><th className="text-right">ft²</th><th className="text-right">Sensible</th><th className="text-right">Latent</th>
+              <th className="text-right">Cooling</th><th className="text-right">Tons</th><th className="text-right">Heat loss</th>
+            </tr>
+          </thead>
+          <tbody>
+            {load.rooms.map((r) => (
+              <tr key={r.roomId} className="border-b border-line">
+                <td>{r.roomName}</td><td className="text-right">{r.floorAreaFt2}</td><td className="text-right">{n(r.sensibleGain.total)}</td>
+                <td className="text-right">{n(r.latentGain.total)}</td><td className="text-right">{n(r.coolingTotalBtuh)}</td>
+                <td className="text-right">{tons(r.coolingTotalBtuh)}</td><td className="text-right">{n(r.heatLoss.total)}</td>
+              </tr>
+            ))}
+            <tr className="font-semibold">
+              <td>Whole home</td><td className="text-right">{n(t.floorAreaFt2)}</td><td className="text-right">{n(t.sensibleBtuh)}</td>
+              <td className="text-right">{n(t.latentBtuh)}</td><td className="text-right">{n(t.coolingBtuh)}</td>
+              <td className="text-right">{t.coolingTons}</td><td className="text-right">{n(t.heatingBtuh)}</td>
+            </tr>
+          </tbody>
+        </table>
+        <p className="text-xs">Sensible heat ratio {t.sensibleHeatRatio.toFixed(2)}.</p>
+      </section>
+
+      <section aria-label="Where the load comes from">
+        <h2 className="font-semibold">Whole-home breakdown (Btu/h)</h2>
+        <table className="w-full text-xs">
+          <thead>
+            <tr className="border-b border-ink-800 text-left"><th>Part</th><th className="text-right">Cooling gain</th><th className="text-right">Heat loss</th></tr>
+          </thead>
+          <tbody>
+            {COMPONENT_KEYS.map((k) => (
+              <tr key={k} className="border-b border-line">
+                <td>{COMPONENT_LABELS[k]}</td>
+                <td className="text-right">{n(load.sensibleGain[k] + load.latentGain[k])}</td>
+                <td className="text-right">{n(load.heatLoss[k])}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </section>
+
+      <footer className="border-t border-line pt-2 text-[0.7rem] leading-snug">
+        <p className="font-semibold">A load estimate is an estimate. Method and assumptions:</p>
+        <ul className="list-disc pl-4">
+          {METHOD_NOTES.map((m) => <li key={m}>{m}</li>)}
+        </ul>
+      </footer>
+    </article>
+  );
+}

@@ -1,0 +1,66 @@
+import { designConditionsSchema, designConditionsWarnings, roomInputSchema } from '@calc';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { Link, useParams } from 'react-router-dom';
+import { z } from 'zod';
+import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
+import { buttonClass } from '../../../components/ui/button';
+import { PageHeader } from '../../../components/ui/page-header';
+import { jobQueryOptions, roomsQueryOptions } from '../../../lib/job-queries';
+import { computeHomeLoad } from '../model/compute';
+import { MethodNote } from './estimate-note';
+import { HomeTotals } from './home-totals';
+import { RoomLoadCard } from './room-load-card';
+import { ServerCheck } from './server-check';
+
+export const loadsParams = z.object({ jobId: z.uuid({ message: 'That is not a job address.' }) });
+
+/** /jobs/:jobId/loads — the saved rooms' loads worked out in the browser, checked against the server. */
+export function LoadsPage() {
+  const { jobId } = loadsParams.parse(useParams());
+  const job = useSuspenseQuery(jobQueryOptions(jobId)).data;
+  const rooms = useSuspenseQuery(roomsQueryOptions(jobId)).data;
+  const result = computeHomeLoad(rooms, job.designConditions, job.tightness);
+  const parsedRooms = new Map(rooms.flatMap((r) => {
+    const p = roomInputSchema.safeParse({ ...r.input, id: r.id });
+    return p.success ? [[r.id, p.data] as const] : [];
+  }));
+  const conditions = designConditionsSchema.safeParse(job.designConditions ?? {});
+  const conditionWarnings = conditions.success ? designConditionsWarnings(conditions.data) : [];
+
+  return (
+    <div className="flex flex-col gap-5">
+      <PageHeader
+        title={`Loads — ${job.customer.name}`}
+        lead="Room-by-room heat gain and heat loss from the saved walk-through."
+        actions={
+          <>
+            <Link className={buttonClass('secondary')} to={`/jobs/${jobId}`}>Back to the walk-through</Link>
+            <Link className={buttonClass('primary')} to={`/jobs/${jobId}/loads/print`}>Printable summary</Link>
+          </>
+        }
+      />
+      {!result.ok ? <p className="rounded-md border border-line bg-white p-4">{result.message}</p> : null}
+      {result.ok ? (
+        <>
+          <HomeTotals load={result.value.load} skipped={result.value.skipped} />
+          <QueryWidgetBoundary name="the server check">
+            <ServerCheck jobId={jobId} jobVersion={job.version} browser={result.value.load} />
+          </QueryWidgetBoundary>
+          {conditionWarnings.length > 0 ? (
+            <ul className="list-disc rounded-md bg-amber-soft py-2 pl-8 text-sm text-amber-deep">
+              {conditionWarnings.map((w) => <li key={w.message}>{w.message}</li>)}
+            </ul>
+          ) : null}
+          <div className="grid gap-4 lg:grid-cols-2">
+            {result.value.load.rooms.map((l) => (
+              <QueryWidgetBoundary key={l.roomId} name={`the loads of ${l.roomName}`}>
+                <RoomLoadCard load={l} room={parsedRooms.get(l.roomId)} />
+              </QueryWidgetBoundary>
+            ))}
+          </div>
+        </>
+      ) : null}
+      <MethodNote />
+    </div>
+  );
+}

@@ -1,0 +1,24 @@
+import { roomPlausibilityWarnings, type Room, type RoomLoad } from '@calc';
+import { ComponentChart } from './component-chart';
+import { LoadFigures } from './load-figures';
+
+/** One room on the loads page: the figures, the breakdown and any plain-word warnings. */
+export function RoomLoadCard({ load, room }: { load: RoomLoad; room: Room | undefined }) {
+  const warnings = room ? roomPlausibilityWarnings(room) : [];
+  return (
+    <article aria-label={`Loads for ${load.roomName}`} className="flex flex-col gap-3 rounded-lg border border-line bg-white p-4">
+      <h3 className="text-lg font-semibold text-ink-900">
+        {load.roomName} <span className="text-sm font-normal text-muted">{load.floorAreaFt2} ft²</span>
+      </h3>
+      <LoadFigures load={load} />
+      <ComponentChart sensible={load.sensibleGain} latent={load.latentGain} heatLoss={load.heatLoss} />
+      {warnings.length > 0 ? (
+        <ul className="list-disc pl-5 text-sm text-amber-deep">
+          {warnings.map((w) => (
+            <li key={`${w.path.join('.')}:${w.message}`}>{w.message}</li>
+          ))}
+        </ul>
+      ) : null}
+    </article>
+  );
+}

@@ -36,8 +36,8 @@ export const JobSchema = defineEntity({
     version: p.integer().version(),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
-    /** Bumped by any change to the job, its rooms or photos: the jobs list sorts on it. */
-    lastActivityAt: p.datetime().onCreate(() => new Date()).index(),
+    /** Bumped by any change to the job, its rooms or photos: the jobs list sorts on it (index (company_id, last_activity_at desc) in the migration). */
+    lastActivityAt: p.datetime().onCreate(() => new Date()),
   },
 });
 

@@ -8,6 +8,8 @@ import { DEMO, startCluster } from './lib/stack';
 import { log } from './lib/system';
 
 const t0 = Date.now();
+// Vite's build sets process.env.NODE_ENV to production in this process: read the environment first.
+const env = { ...process.env };
 const { cluster, url: databaseUrl } = await startCluster(DEMO);
 await migrate(databaseUrl);
 await withOrm(databaseUrl, async (orm) => {
@@ -19,7 +21,7 @@ await withOrm(databaseUrl, async (orm) => {
 });
 await buildClientIfStale();
 
-const config = loadConfig({ ...process.env, DATABASE_URL: process.env.DATABASE_URL ?? databaseUrl });
+const config = loadConfig({ ...env, DATABASE_URL: env.DATABASE_URL ?? databaseUrl });
 const smtp = await startSmtpFake({ port: config.SMTP_PORT, dir: '.data/outbox' });
 const running = await startServer(config);
 

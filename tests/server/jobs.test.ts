@@ -137,6 +137,17 @@ describe('jobs: design conditions, company defaults and sources', () => {
     expect(r.body.job.designSources.outdoorHeatingDryBulbF.source).toBe('entered');
     expect(r.body.job.designConditions.indoorCoolingF).toBe(75);
   });
+
+  it('editing only the source notes keeps the entered values, and later value edits keep the notes', async () => {
+    const job = await newJob(sales, { designConditions: { ...DESIGN, outdoorCoolingDryBulbF: 99 } });
+    const r = await patch(sales, `/api/jobs/${job.id}`, job.version).send({ designSourceNotes: { outdoorCoolingDryBulbF: 'Local code table, row 12' } });
+    expect(r.status, JSON.stringify(r.body)).toBe(200);
+    expect(r.body.job.designConditions.outdoorCoolingDryBulbF).toBe(99);
+    expect(r.body.job.designSources.outdoorCoolingDryBulbF).toEqual({ source: 'entered', note: 'Local code table, row 12' });
+    const back = await patch(sales, `/api/jobs/${job.id}`, r.body.job.version).send({ designConditions: { ...DESIGN, source: 'Re-checked on site' } });
+    expect(back.body.job.designConditions).toMatchObject({ ...DESIGN, source: 'Re-checked on site' });
+    expect(back.body.job.designSources.outdoorCoolingDryBulbF).toEqual({ source: 'entered', note: 'Local code table, row 12' });
+  });
 });
 
 describe('jobs: CRUD, states, list', () => {

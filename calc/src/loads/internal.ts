@@ -1,4 +1,4 @@
-import { latentHeatBtuh, sensibleHeatBtuh } from '../air';
+import { LATENT_CONSTANT, SENSIBLE_CONSTANT } from '../air';
 import { PERSON_LATENT_W, PERSON_SENSIBLE_W } from '../construction-defaults';
 import { BTUH_PER_W } from '../units';
 import type { Room } from '../schemas/room-input';
@@ -26,9 +26,10 @@ export function infiltrationLoad(room: Room, p: DesignPsychrometrics, homeAch: n
   return {
     cfm,
     ach,
-    sensibleCooling: Math.max(0, sensibleHeatBtuh({ cfm, deltaTF: p.coolingDeltaTF }) * af),
-    latentCooling: latentHeatBtuh({ cfm, deltaGrains: p.deltaGrains }) * af,
-    heating: sensibleHeatBtuh({ cfm, deltaTF: p.heatingDeltaTF }) * af,
+    // sensibleHeatBtuh / latentHeatBtuh written out (cfm ≥ 0 here), so no argument objects per room
+    sensibleCooling: Math.max(0, SENSIBLE_CONSTANT * cfm * p.coolingDeltaTF * af),
+    latentCooling: LATENT_CONSTANT * cfm * p.deltaGrains * af,
+    heating: SENSIBLE_CONSTANT * cfm * p.heatingDeltaTF * af,
   };
 }
 
@@ -42,11 +43,11 @@ export function peopleLoad(room: Room): { sensible: number; latent: number } {
 
 /** Appliances and lights: W × 3.412 or Btu/h as entered, plus entered latent. [PUB: unit definition] Cooling only. */
 export function appliancesLoad(room: Room): { sensible: number; latent: number } {
-  return room.appliances.reduce(
-    (acc, a) => ({
-      sensible: acc.sensible + (a.unit === 'W' ? a.gain * BTUH_PER_W : a.gain),
-      latent: acc.latent + a.latentBtuh,
-    }),
-    { sensible: 0, latent: 0 },
-  );
+  let sensible = 0;
+  let latent = 0;
+  for (const a of room.appliances) {
+    sensible += a.unit === 'W' ? a.gain * BTUH_PER_W : a.gain;
+    latent += a.latentBtuh;
+  }
+  return { sensible, latent };
 }

@@ -6,7 +6,7 @@ import { roomInputSchema, type Room, type RoomInput } from '../schemas/room-inpu
 import { tightnessSchema, type Tightness } from '../schemas/home';
 import { INFILTRATION_TIGHTNESS } from '../construction-defaults';
 import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
-import { ceilingLoad, doorsLoad, floorLoad, wallsLoad, windowsConductionLoad, windowsSolarLoad } from './envelope';
+import { ceilingLoad, exposedWallsLoad, floorLoad } from './envelope';
 import { appliancesLoad, infiltrationLoad, peopleLoad } from './internal';
 import { METHOD_NOTES } from './notes';
 
@@ -63,9 +63,7 @@ export function toComponents(parts: Parts): LoadComponents {
 
 /** Room loads from already-parsed inputs (the engine path used by homeLoad). */
 export function roomLoadFromParsed(room: Room, p: DesignPsychrometrics, homeAch: number): RoomLoad {
-  const walls = wallsLoad(room, p);
-  const glass = windowsConductionLoad(room, p);
-  const doors = doorsLoad(room, p);
+  const { walls, windowsConduction: glass, windowsSolar, doors } = exposedWallsLoad(room, p);
   const ceiling = ceilingLoad(room, p);
   const floor = floorLoad(room, p);
   const air = infiltrationLoad(room, p, homeAch);
@@ -73,7 +71,7 @@ export function roomLoadFromParsed(room: Room, p: DesignPsychrometrics, homeAch:
   const appliances = appliancesLoad(room);
   const area = floorAreaFt2(room);
   const sensibleGain = toComponents({
-    walls: walls.cooling, windowsConduction: glass.cooling, windowsSolar: windowsSolarLoad(room), doors: doors.cooling,
+    walls: walls.cooling, windowsConduction: glass.cooling, windowsSolar, doors: doors.cooling,
     ceiling: ceiling.cooling, floor: floor.cooling, infiltration: air.sensibleCooling, people: people.sensible, appliances: appliances.sensible,
   });
   const latentGain = toComponents({

@@ -13,7 +13,7 @@ export class OfflineQueue<P> {
   private seq = 0;
 
   constructor(private readonly options: OfflineQueueOptions<P>) {
-    this.state = { loaded: false, online: this.isOnline(), sending: false, items: [], conflict: null, rejected: null };
+    this.state = { loaded: false, online: this.isOnline(), sending: false, items: [], conflict: null, rejected: null, blocked: null };
   }
 
   private isOnline(): boolean {
@@ -49,7 +49,8 @@ export class OfflineQueue<P> {
 
   /** Loads what a previous visit left waiting, listens for the connection and retries now and then. */
   async start(): Promise<void> {
-    const stored = await this.options.storage.load();
+    // No IndexedDB (private mode, old browser): keep working in memory rather than not at all.
+    const stored = await this.options.storage.load().catch(() => []);
     const items = [...stored].sort((a, b) => a.seq - b.seq);
     // Anything enqueued before the load finished goes after what was stored.
     const merged = [...items, ...this.state.items.filter((i) => !items.some((s) => s.id === i.id))];
@@ -139,6 +140,10 @@ export class OfflineQueue<P> {
         this.update({ sending: false, online: false });
         break;
       }
+      if (result.kind === 'blocked') {
+        this.update({ sending: false, online: true, blocked: result.message });
+        break;
+      }
       if (result.kind === 'conflict') {
         this.update({ sending: false, online: true, conflict: current ?? head });
         break;
@@ -153,7 +158,7 @@ export class OfflineQueue<P> {
         this.options.onSent?.(head, result.version);
         await this.setItems(rebased);
       }
-      this.update({ sending: false, online: true });
+      this.update({ sending: false, online: true, blocked: null });
     }
   }
 

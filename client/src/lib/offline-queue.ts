@@ -26,6 +26,8 @@ export type SendResult =
   | { readonly kind: 'ok'; readonly version: number | null }
   | { readonly kind: 'network' }
   | { readonly kind: 'conflict' }
+  /** Cannot be sent now but must not be lost (signed out): keep it, stop, say why. */
+  | { readonly kind: 'blocked'; readonly message: string }
   | { readonly kind: 'rejected'; readonly message: string };
 
 /** Merge a new edit into a still-waiting one of the same target, 'drop-both', or null to append. */
@@ -45,6 +47,8 @@ export interface QueueState<P> {
   readonly conflict: QueueItem<P> | null;
   /** The last edit the server refused outright (dropped), in its words. */
   readonly rejected: string | null;
+  /** Why sending is paused with edits kept (e.g. the session ended); cleared by the next success. */
+  readonly blocked: string | null;
 }
 
 export const QUEUE_STORAGE_KEY = 'gaugeline:offline-queue:v1';

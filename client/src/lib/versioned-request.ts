@@ -12,6 +12,11 @@ import { ApiError, apiErrorFromResponse, networkError } from './api-error';
 const csrfSchema = z.object({ token: z.string().min(1) });
 let csrfToken: Promise<string> | null = null;
 
+/** Forget the token (tests; a new session). */
+export function clearVersionedCsrfToken(): void {
+  csrfToken = null;
+}
+
 function token(): Promise<string> {
   if (!csrfToken) {
     const pending = apiFetch('/api/auth/csrf', { schema: csrfSchema }).then((t) => t.token);

@@ -1,5 +1,12 @@
 import type { HomeLoad } from '@calc';
-import type { ServerLoads } from '../api/get-server-loads';
+
+/** The parts of GET /api/jobs/:id/loads that are compared (ServerLoads fits it). */
+export interface ServerLoadsLike {
+  readonly loads: {
+    readonly rooms: readonly { readonly roomId: string; readonly coolingTotalBtuh: number; readonly heatLoss: { readonly total: number } }[];
+    readonly totals: { readonly sensibleBtuh: number; readonly latentBtuh: number; readonly heatingBtuh: number; readonly sensibleHeatRatio: number };
+  };
+}
 
 export interface LoadMismatch {
   readonly what: string;
@@ -8,7 +15,7 @@ export interface LoadMismatch {
 }
 
 /** Every figure the page shows, browser against server; both run calc, so any difference is a bug or stale data. */
-export function compareLoads(browser: HomeLoad, server: ServerLoads): LoadMismatch[] {
+export function compareLoads(browser: HomeLoad, server: ServerLoadsLike): LoadMismatch[] {
   const out: LoadMismatch[] = [];
   const check = (what: string, b: number, s: number) => {
     if (b !== s) out.push({ what, browser: b, server: s });

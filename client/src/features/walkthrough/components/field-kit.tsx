@@ -23,7 +23,7 @@ export function FieldShell({ id, label, error, hint, unit, children }: ShellProp
       </label>
       <div className="flex items-center gap-2">
         {children}
-        {unit ? <span className="min-w-8 text-sm text-muted" aria-hidden="true">{unit}</span> : null}
+        {unit ? <span id={`${id}-unit`} className="min-w-8 text-sm text-muted">{unit}</span> : null}
       </div>
       {hint ? <p id={`${id}-hint`} className="text-sm text-muted">{hint}</p> : null}
       {error ? <p id={`${id}-error`} className="text-sm font-semibold text-danger">{error}</p> : null}
@@ -31,9 +31,10 @@ export function FieldShell({ id, label, error, hint, unit, children }: ShellProp
   );
 }
 
-const aria = (id: string, error: string | undefined, hint: boolean) => ({
+const aria = (id: string, error: string | undefined, hint: boolean, unit = false) => ({
   'aria-invalid': error ? true : undefined,
-  'aria-describedby': [error ? `${id}-error` : '', hint ? `${id}-hint` : ''].filter(Boolean).join(' ') || undefined,
+  // The unit is read with the field ("Length, ft") without becoming part of its name.
+  'aria-describedby': [unit ? `${id}-unit` : '', error ? `${id}-error` : '', hint ? `${id}-hint` : ''].filter(Boolean).join(' ') || undefined,
 });
 
 interface NumberProps {
@@ -83,7 +84,7 @@ export function NumberInput({ label, value, onChange, quantity = 'plain', unit =
         className={inputClass}
         value={text}
         onChange={(e) => handleChange(e.target.value)}
-        {...aria(id, error, hint !== undefined)}
+        {...aria(id, error, hint !== undefined, unitLabel(quantity, system, unit) !== '')}
       />
     </FieldShell>
   );

@@ -1,11 +1,17 @@
 import type { QueueState } from '../../../lib/offline-queue';
 
-export type SaveStatus = { readonly kind: 'saved' } | { readonly kind: 'saving' } | { readonly kind: 'offline'; readonly waiting: number } | { readonly kind: 'conflict' };
+export type SaveStatus =
+  | { readonly kind: 'saved' }
+  | { readonly kind: 'saving' }
+  | { readonly kind: 'offline'; readonly waiting: number }
+  | { readonly kind: 'blocked'; readonly waiting: number }
+  | { readonly kind: 'conflict' };
 
 /** Pure: what the pill says, from the queue and the edits still inside the debounce. */
-export function saveStatus(state: Pick<QueueState<unknown>, 'items' | 'online' | 'sending' | 'conflict'>, typing: number): SaveStatus {
+export function saveStatus(state: Pick<QueueState<unknown>, 'items' | 'online' | 'sending' | 'conflict'> & { blocked?: string | null }, typing: number): SaveStatus {
   if (state.conflict) return { kind: 'conflict' };
   const waiting = state.items.length;
+  if (state.blocked && waiting > 0) return { kind: 'blocked', waiting };
   if (!state.online && waiting > 0) return { kind: 'offline', waiting };
   if (waiting > 0 || state.sending || typing > 0) return { kind: 'saving' };
   return { kind: 'saved' };
@@ -15,6 +21,7 @@ const looks: Record<SaveStatus['kind'], string> = {
   saved: 'border-ok bg-ok-soft text-ok',
   saving: 'border-ink-200 bg-ink-50 text-ink-800',
   offline: 'border-amber-line bg-amber-soft text-amber-deep',
+  blocked: 'border-danger bg-danger-soft text-danger',
   conflict: 'border-danger bg-danger-soft text-danger',
 };
 
@@ -22,6 +29,7 @@ function text(s: SaveStatus): string {
   if (s.kind === 'saved') return 'Saved';
   if (s.kind === 'saving') return 'Saving…';
   if (s.kind === 'conflict') return 'Needs your choice — changed by someone else';
+  if (s.kind === 'blocked') return `Not saved — sign in again; ${s.waiting} ${s.waiting === 1 ? 'change' : 'changes'} kept`;
   return `Offline — ${s.waiting} ${s.waiting === 1 ? 'change' : 'changes'} waiting`;
 }
 

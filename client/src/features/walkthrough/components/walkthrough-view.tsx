@@ -62,6 +62,7 @@ export function WalkthroughView({ job: serverJob, rooms: serverRooms, settings }
         </header>
 
         {conflict ? <ConflictPanel key={conflict.id} item={conflict} onResolved={() => setRevision((r) => r + 1)} /> : null}
+        {state.blocked ? <Alert tone="warning" title="Changes are not being saved right now.">{state.blocked}</Alert> : null}
         {state.rejected ? (
           <Alert tone="danger" title="One change was not accepted and was not saved.">
             <p>{state.rejected}</p>

@@ -27,6 +27,7 @@ function failure(e: unknown): SendResult {
   if (isApiError(e)) {
     if (e.code === 'network' || e.status === 0) return { kind: 'network' };
     if (e.status === 409) return { kind: 'conflict' };
+    if (e.status === 401) return { kind: 'blocked', message: 'Your session has ended. Sign in again (in another tab keeps this page); your changes stay on this device until then.' };
     // 5xx may pass; keep the edit and try again later rather than lose it.
     if (e.status >= 500 || e.status === 429) return { kind: 'network' };
     const fields = e.errors.map((f) => f.message).join(' ');

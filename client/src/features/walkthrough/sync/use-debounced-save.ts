@@ -30,7 +30,7 @@ export function useDebouncedSave<T>(key: string, save: (value: T) => void, delay
       if (timer.current) clearTimeout(timer.current);
       timer.current = setTimeout(flush, delay);
     },
-    [delay, flush],
+    [delay, flush, key],
   );
 
   const cancel = useCallback(() => {

@@ -1,6 +1,8 @@
 import { spawn } from 'node:child_process';
 import { buildClientIfStale } from './lib/client-build';
+import { rmSync } from 'node:fs';
 import { isEmpty, seedDemo } from '../fixtures/seed';
+import { createLocalDiskStorage } from '../server/src/services/storage';
 import { migrate, withOrm } from './lib/db';
 import { TEST, startCluster } from './lib/stack';
 import { chromiumPath, ensureChromium, log } from './lib/system';
@@ -11,15 +13,18 @@ ensureChromium();
 const { cluster, url, startedHere } = await startCluster(TEST, { fast: true, recreate: true });
 await migrate(url);
 // The end-to-end tests sign in as the demo accounts; other tests make companies of their own.
+// Test uploads (demo photos included) live apart from the demo instance's, and start empty.
+const storageDir = `.data/uploads-${TEST.database}`;
+rmSync(storageDir, { recursive: true, force: true });
 await withOrm(url, async (orm) => {
-  if (await isEmpty(orm.em.fork())) await seedDemo(orm.em.fork());
+  if (await isEmpty(orm.em.fork())) await seedDemo(orm.em.fork(), createLocalDiskStorage(storageDir));
 });
 if (!process.env.GAUGELINE_SKIP_BUILD) await buildClientIfStale();
 log(`test set-up ready in ${((Date.now() - t0) / 1000).toFixed(1)} s; running the suite…`);
 
 const child = spawn(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', ...process.argv.slice(2)], {
   stdio: 'inherit',
-  env: { ...process.env, DATABASE_URL: url, NODE_ENV: 'test', CHROMIUM_PATH: chromiumPath, LOG_LEVEL: 'silent' },
+  env: { ...process.env, DATABASE_URL: url, STORAGE_DIR: storageDir, NODE_ENV: 'test', CHROMIUM_PATH: chromiumPath, LOG_LEVEL: 'silent' },
 });
 const code: number = await new Promise((resolve) => child.on('exit', (c, sig) => resolve(c ?? (sig ? 1 : 0))));
 // Leave a cluster that another run started (e.g. a second terminal) to that run.

@@ -24,6 +24,7 @@ export async function startE2E(): Promise<E2E> {
   const config = loadConfig({
     NODE_ENV: 'test',
     DATABASE_URL: testDatabaseUrl(),
+    STORAGE_DIR: process.env.STORAGE_DIR,
     PORT: '0',
     SMTP_PORT: String(smtp.port),
     LOG_LEVEL: 'silent',

@@ -1,0 +1,111 @@
+import { QueryClientProvider } from '@tanstack/react-query';
+import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import { Suspense } from 'react';
+import { MemoryRouter, Route, Routes } from 'react-router-dom';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { filtersFromSearch } from '../../client/src/features/jobs/components/jobs-filters';
+import { JobsListPage } from '../../client/src/features/jobs/components/jobs-list-page';
+import { NewJobPage } from '../../client/src/features/jobs/components/new-job-page';
+import { clearCsrfToken } from '../../client/src/lib/api-client';
+import { createQueryClient } from '../../client/src/lib/query-client';
+import { json, mockFetch, problem } from './helpers/fetch-mock';
+import { JOB_ID, jobRecord } from './helpers/walkthrough-harness';
+
+beforeEach(() => clearCsrfToken());
+afterEach(() => vi.unstubAllGlobals());
+
+function renderAt(path: string) {
+  render(
+    <QueryClientProvider client={createQueryClient()}>
+      <MemoryRouter initialEntries={[path]}>
+        <Suspense fallback="loading">
+          <Routes>
+            <Route path="/jobs" element={<JobsListPage />} />
+            <Route path="/jobs/new" element={<NewJobPage />} />
+            <Route path="/jobs/:jobId" element={<p>Walk-through open</p>} />
+          </Routes>
+        </Suspense>
+      </MemoryRouter>
+    </QueryClientProvider>,
+  );
+}
+
+const page = (items: unknown[], total: number, p = 1) => json(200, { items, total, page: p, pageSize: 25 });
+
+describe('jobs list', () => {
+  it('reads its filters from the URL, defaulting anything odd', () => {
+    expect(filtersFromSearch(new URLSearchParams('q=%20lane%20&status=design&page=3'))).toEqual({ search: 'lane', status: 'design', page: 3, pageSize: 25 });
+    expect(filtersFromSearch(new URLSearchParams('status=nope&page=-2'))).toEqual({ search: '', status: '', page: 1, pageSize: 25 });
+  });
+
+  it('lists jobs from the server page, searches and pages on the server', async () => {
+    const fetchMock = mockFetch({
+      'GET /api/jobs?page=1&pageSize=25': page([jobRecord()], 30),
+      'GET /api/jobs?page=2&pageSize=25': page([jobRecord({ id: '44444444-4444-4444-8444-444444444444', customer: { id: 'c2', name: 'Avery Sample' } })], 30, 2),
+      'GET /api/jobs?page=1&pageSize=25&search=sample': page([jobRecord()], 1),
+      'GET /api/jobs?page=1&pageSize=25&search=sample&status=design': page([], 0),
+    });
+    renderAt('/jobs');
+    const table = await screen.findByRole('table');
+    expect(within(table).getByRole('link', { name: 'Rowan Example' })).toHaveAttribute('href', `/jobs/${JOB_ID}`);
+    expect(within(table).getByText('12 Sample Lane, Testville')).toBeInTheDocument();
+    expect(screen.getByText('Page 1 of 2 · 30 jobs')).toBeInTheDocument();
+
+    fireEvent.click(screen.getByRole('button', { name: 'Next page' }));
+    expect(await screen.findByRole('link', { name: 'Avery Sample' })).toBeInTheDocument();
+
+    fireEvent.change(screen.getByLabelText('Search jobs'), { target: { value: 'sample' } });
+    await waitFor(() => expect(screen.getByText('Page 1 of 1 · 1 job')).toBeInTheDocument());
+    fireEvent.change(screen.getByLabelText('Status'), { target: { value: 'design' } });
+    expect(await screen.findByText('No job matches')).toBeInTheDocument();
+    expect(fetchMock).toHaveBeenCalledWith('/api/jobs?page=1&pageSize=25&search=sample&status=design', expect.anything());
+  });
+
+  it('has a "New job" link', async () => {
+    mockFetch({ 'GET /api/jobs?page=1&pageSize=25': page([], 0) });
+    renderAt('/jobs');
+    expect(await screen.findByText('No jobs yet')).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'New job' })).toHaveAttribute('href', '/jobs/new');
+  });
+});
+
+describe('new job', () => {
+  it('says what is missing next to each field', async () => {
+    mockFetch({});
+    renderAt('/jobs/new');
+    fireEvent.click(await screen.findByRole('button', { name: 'Create job and start the walk-through' }));
+    expect(await screen.findByText('Enter the customer name.')).toBeInTheDocument();
+    expect(screen.getByText('Enter the street address.')).toBeInTheDocument();
+    expect(screen.getByText('Enter a postal code (letters, digits, spaces or dashes).')).toBeInTheDocument();
+  });
+
+  it('creates the customer, then the job, and opens the walk-through; a server field error lands on its field', async () => {
+    const bodies: unknown[] = [];
+    mockFetch({
+      'GET /api/auth/csrf': json(200, { token: 't' }),
+      'POST /api/customers': (init) => {
+        bodies.push(JSON.parse(String(init?.body)));
+        return json(201, { customer: { id: 'c9', name: 'Rowan Example', email: null, phone: null, notes: '', createdAt: '', updatedAt: '' } });
+      },
+      'POST /api/jobs': (init, call) => {
+        bodies.push(JSON.parse(String(init?.body)));
+        if (call === 1) return problem(400, 'validation', 'Check the fields.', { errors: [{ path: 'city', message: 'Enter the city or town.' }] });
+        return json(201, { job: jobRecord() });
+      },
+    });
+    renderAt('/jobs/new');
+    fireEvent.change(await screen.findByLabelText('Customer name'), { target: { value: 'Rowan Example' } });
+    fireEvent.change(screen.getByLabelText('Street address'), { target: { value: '12 Sample Lane' } });
+    fireEvent.change(screen.getByLabelText('City or town'), { target: { value: 'Testville' } });
+    fireEvent.change(screen.getByLabelText('State or region'), { target: { value: 'TS' } });
+    fireEvent.change(screen.getByLabelText('Postal code'), { target: { value: '00000' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Create job and start the walk-through' }));
+    expect(await screen.findByText('Enter the city or town.')).toBeInTheDocument();
+
+    fireEvent.click(screen.getByRole('button', { name: 'Create job and start the walk-through' }));
+    expect(await screen.findByText('Walk-through open')).toBeInTheDocument();
+    // The customer is made once, even though the job took two tries.
+    expect(bodies.filter((b) => typeof b === 'object' && b !== null && 'name' in b)).toHaveLength(1);
+    expect(bodies.at(-1)).toMatchObject({ customerId: 'c9', street: '12 Sample Lane', postalCode: '00000' });
+  });
+});

@@ -13,10 +13,8 @@ const MOLAR_RATIO = 0.621945;
 /** Triple point of water, °F; below it saturation is over ice. [PUB: ASHRAE 2017 ch. 1] */
 const TRIPLE_POINT_F = 32.018;
 
-/** Saturation vapour pressure, psia; eq. 5 (ice, ≤ 32.018 °F) and eq. 6 (water). */
-export function saturationPressurePsia({ dryBulbF }: { readonly dryBulbF: number }): number {
-  const t = num(dryBulbF) + RANKINE_OFFSET;
-  assert(t > 0, 'ABSOLUTE_ZERO');
+/** Saturation pressure, psia, at `dryBulbF` (already checked) with t = dryBulbF + 459.67 °R > 0. */
+function saturationPressureAt(dryBulbF: number, t: number): number {
   const lnP =
     dryBulbF <= TRIPLE_POINT_F
       ? -1.0214165e4 / t - 4.8932428 - 5.3765794e-3 * t + 1.9202377e-7 * t ** 2 +
@@ -24,6 +22,13 @@ export function saturationPressurePsia({ dryBulbF }: { readonly dryBulbF: number
       : -1.0440397e4 / t - 1.129465e1 - 2.7022355e-2 * t + 1.289036e-5 * t ** 2 -
         2.4780681e-9 * t ** 3 + 6.5459673 * Math.log(t);
   return Math.exp(lnP);
+}
+
+/** Saturation vapour pressure, psia; eq. 5 (ice, ≤ 32.018 °F) and eq. 6 (water). */
+export function saturationPressurePsia({ dryBulbF }: { readonly dryBulbF: number }): number {
+  const t = num(dryBulbF) + RANKINE_OFFSET;
+  assert(t > 0, 'ABSOLUTE_ZERO');
+  return saturationPressureAt(dryBulbF, t);
 }
 
 /** Standard-atmosphere pressure at elevation, psia; eq. 3: 14.696 (1 − 6.8754e-6 Z)^5.2559. */
@@ -92,7 +97,7 @@ export function dewPointF(
   let hi = 392;
   for (let i = 0; i < 50; i += 1) {
     const mid = (lo + hi) / 2;
-    if (saturationPressurePsia({ dryBulbF: mid }) < pw) lo = mid;
+    if (saturationPressureAt(mid, mid + RANKINE_OFFSET) < pw) lo = mid; // mid ≥ −148 °F, so t > 0
     else hi = mid;
   }
   return (lo + hi) / 2;

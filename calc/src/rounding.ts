@@ -1,5 +1,8 @@
 import { num } from './errors';
 
+/** 10 ** n for the usual decimal counts (exact: the same values `10 ** n` gives), saving a pow per rounding. */
+const POWERS_OF_TEN: readonly number[] = [1, 10, 100, 1000, 10000, 100000, 1000000];
+
 /**
  * Rounds half away from zero ("half-up" for the non-negative quantities calc deals in)
  * to `decimals` places. Uses an exponent shift plus a 1e-9 relative nudge so that
@@ -8,7 +11,7 @@ import { num } from './errors';
  */
 export function roundHalfUp(value: number, decimals = 0): number {
   const v = num(value);
-  const factor = decimals === 0 ? 1 : 10 ** decimals;
+  const factor = POWERS_OF_TEN[decimals] ?? 10 ** decimals;
   const shifted = Math.abs(v) * factor;
   const rounded = Math.floor(shifted + 0.5 + shifted * 1e-12) / factor;
   return v < 0 ? -rounded : rounded;

@@ -59,6 +59,13 @@ function lookup<T>(map: ReadonlyMap<string, T>, k: string, code: 'UNKNOWN_EQUIPM
   return v;
 }
 
+/** A Map from key to item, built with a plain loop (no [key, value] pair per item). */
+function byKey<T>(items: readonly T[], key: (item: T) => string): Map<string, T> {
+  const map = new Map<string, T>();
+  for (const item of items) map.set(key(item), item);
+  return map;
+}
+
 /**
  * The full recompute behind the screens: loads → zone and system sizing → refrigerant per
  * circuit → electrical → takeoff → priced option. Validates every input with its schema
@@ -93,18 +100,19 @@ export interface ParsedDesignRequest {
 export function computeDesignFromParsed({ home, design, catalog, priceBook, pricing, policy }: ParsedDesignRequest): DesignResult {
   const loads = homeLoadFromParsed(home);
   const dc = home.designConditions;
-  const indoorUnits = new Map<string, IndoorUnit>(catalog.indoorUnits.map((u) => [u.key, u]));
-  const outdoorUnits = new Map<string, OutdoorUnit>(catalog.outdoorUnits.map((u) => [u.key, u]));
-  const zoneByKey = new Map(design.zones.map((z) => [z.key, z]));
-  const perZone = zoneLoads({ loads, zones: design.zones, roomsById: new Map(home.rooms.map((r) => [r.id, r])) });
+  const indoorUnits = byKey(catalog.indoorUnits, (u) => u.key);
+  const outdoorUnits = byKey(catalog.outdoorUnits, (u) => u.key);
+  const zoneByKey = byKey(design.zones, (z) => z.key);
+  const perZone = zoneLoads({ loads, zones: design.zones, roomsById: byKey(home.rooms, (r) => r.id) });
   const warnings: string[] = [];
   const systemOfZone = new Map<string, OutdoorUnit>();
-  design.systems.forEach((s, si) => {
+  const outdoorOfSystem = design.systems.map((s, si) => {
     const outdoor = lookup(outdoorUnits, s.outdoorUnitKey, 'UNKNOWN_EQUIPMENT', ['systems', si, 'outdoorUnitKey']);
     s.circuits.forEach((c, ci) => {
       lookup(zoneByKey, c.zoneKey, 'UNKNOWN_ZONE', ['systems', si, 'circuits', ci, 'zoneKey']);
       systemOfZone.set(c.zoneKey, outdoor);
     });
+    return outdoor;
   });
   const zones: ZoneResult[] = design.zones.map((z, zi) => {
     const indoor = lookup(indoorUnits, z.indoorUnitKey, 'UNKNOWN_EQUIPMENT', ['zones', zi, 'indoorUnitKey']);
@@ -118,20 +126,20 @@ export function computeDesignFromParsed({ home, design, catalog, priceBook, pric
     return { zoneKey: z.key, name: z.name, roomIds: z.roomIds, indoorUnitKey: indoor.key, sizing };
   });
   const forTakeoff: SystemForTakeoff[] = [];
-  const systems: SystemResult[] = design.systems.map((s) => {
-    const outdoor = lookup(outdoorUnits, s.outdoorUnitKey, 'UNKNOWN_EQUIPMENT', []);
+  const systems: SystemResult[] = design.systems.map((s, si) => {
+    const outdoor = outdoorOfSystem[si] ?? lookup(outdoorUnits, s.outdoorUnitKey, 'UNKNOWN_EQUIPMENT', []);
     const indoorByZone = new Map<string, IndoorUnit>();
+    const sum = { sensibleBtuh: 0, latentBtuh: 0, heatingBtuh: 0 };
     const circuits = s.circuits.map((c) => {
       const zone = lookup(zoneByKey, c.zoneKey, 'UNKNOWN_ZONE', []);
       const indoor = lookup(indoorUnits, zone.indoorUnitKey, 'UNKNOWN_EQUIPMENT', []);
       indoorByZone.set(c.zoneKey, indoor);
       const load = lookup(perZone, c.zoneKey, 'UNKNOWN_ZONE', []);
+      sum.sensibleBtuh += load.sensibleBtuh;
+      sum.latentBtuh += load.latentBtuh;
+      sum.heatingBtuh += load.heatingBtuh;
       return { circuit: c, indoor, roomAreaM2: m2FromFt2({ ft2: load.headRoomAreaFt2 }) };
     });
-    const sum = s.circuits.reduce((acc, c) => {
-      const l = lookup(perZone, c.zoneKey, 'UNKNOWN_ZONE', []);
-      return { sensibleBtuh: acc.sensibleBtuh + l.sensibleBtuh, latentBtuh: acc.latentBtuh + l.latentBtuh, heatingBtuh: acc.heatingBtuh + l.heatingBtuh };
-    }, { sensibleBtuh: 0, latentBtuh: 0, heatingBtuh: 0 });
     const sizing = checkSizing({ unit: outdoor, equipmentType: outdoor.equipmentType, load: sum, coolingDesignF: dc.outdoorCoolingDryBulbF, heatingDesignF: dc.outdoorHeatingDryBulbF, policy });
     const combination = checkCombination({ outdoor, indoor: circuits.map((c) => c.indoor) });
     const refrigerant = refrigerantPlan({ outdoor, circuits });

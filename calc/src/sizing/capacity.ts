@@ -7,6 +7,14 @@ export interface CapacityAt {
   readonly extrapolated: boolean;
 }
 
+/** True when the points are already in ascending outdoor temperature (the usual catalog order). */
+function isAscending(points: readonly CapacityPoint[]): boolean {
+  for (let i = 1; i < points.length; i += 1) {
+    if (!((points[i - 1]?.outdoorF ?? -Infinity) <= (points[i]?.outdoorF ?? Infinity))) return false;
+  }
+  return true;
+}
+
 /**
  * Capacity at `outdoorF`, Btu/h, by linear interpolation between the maker's expanded-data
  * points [PUB (secondary): Manual S — use expanded data at design conditions]. Outside the
@@ -15,7 +23,7 @@ export interface CapacityAt {
 export function capacityAtOutdoorF({ points, outdoorF }: { readonly points: readonly CapacityPoint[]; readonly outdoorF: number }): CapacityAt {
   const t = num(outdoorF);
   assert(points.length > 0, 'EMPTY_LIST');
-  const ascending = points.every((p, i) => i === 0 || (points[i - 1]?.outdoorF ?? -Infinity) <= p.outdoorF);
+  const ascending = isAscending(points);
   const sorted = ascending ? points : [...points].sort((a, b) => a.outdoorF - b.outdoorF);
   const first = sorted[0];
   const last = sorted[sorted.length - 1];

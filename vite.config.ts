@@ -11,6 +11,8 @@ const apiTarget = `http://127.0.0.1:${process.env.PORT ?? '4780'}`;
 export default defineConfig({
   root: here('./client'),
   plugins: [react(), tailwindcss()],
+  // convert-units (used by calc) reads Node's `global`; the browser has globalThis.
+  define: { global: 'globalThis' },
   resolve: { alias },
   build: { outDir: here('./dist/client'), emptyOutDir: true, sourcemap: true },
   server: { port: 5173, host: '127.0.0.1', proxy: { '/api': apiTarget } },

@@ -55,7 +55,7 @@ describe('save status pill', () => {
 describe('room form', () => {
   it('shows calc’s message beside the window when the windows are larger than the wall', async () => {
     await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
-    const area = screen.getByLabelText('Window area (instead of size)');
+    const area = screen.getByLabelText('Window area');
     fireEvent.change(area, { target: { value: '100' } });
     expect(await screen.findByText('The windows (100 ft²) are larger than the wall (80 ft²)')).toBeInTheDocument();
     expect(area).toHaveAttribute('aria-invalid', 'true');

@@ -4,6 +4,7 @@ import { createBrowserRouter, type LoaderFunction, type RouteObject } from 'reac
 import { RouteError } from '../components/errors/route-error';
 import { Spinner } from '../components/ui/spinner';
 import { paths } from '../config/paths';
+import { createJobsRoutes } from '../features/jobs/routes';
 
 /** What every file in app/routes/ exports. */
 export interface RouteModule {
@@ -40,7 +41,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           lazy: lazy(() => import('./routes/app-root')),
           children: [
             { index: true, lazy: lazy(() => import('./routes/home')) },
-            { path: paths.jobs, lazy: lazy(() => import('./routes/jobs')) },
+            ...createJobsRoutes(queryClient),
             { path: paths.users, lazy: lazy(() => import('./routes/users')) },
             { path: paths.outbox, lazy: lazy(() => import('./routes/outbox')) },
             { path: paths.reports, lazy: lazy(() => import('./routes/reports')) },

@@ -53,13 +53,28 @@ export interface QueueState<P> {
 
 export const QUEUE_STORAGE_KEY = 'gaugeline:offline-queue:v1';
 
-/** IndexedDB storage through idb-keyval; pass a custom store in tests or to separate users. */
-export function idbQueueStorage<P>(key: string = QUEUE_STORAGE_KEY, store?: UseStore): QueueStorage<P> {
+/** The stored list is read back as written by this file; anything else (an old format) is skipped. */
+function isStoredItem(v: unknown): v is QueueItem<unknown> {
+  if (typeof v !== 'object' || v === null) return false;
+  const r: Record<string, unknown> = { ...v };
+  return typeof r.id === 'string' && typeof r.seq === 'number' && typeof r.target === 'string' && typeof r.payload === 'object' && r.payload !== null;
+}
+
+/**
+ * IndexedDB storage through idb-keyval; pass a custom store in tests or to separate users.
+ * `isPayload` checks each stored edit (the queue cannot know what its payloads are).
+ */
+export function idbQueueStorage<P>(isPayload: (v: unknown) => v is P, key: string = QUEUE_STORAGE_KEY, store?: UseStore): QueueStorage<P> {
   const db = store ?? createStore('gaugeline', 'offline-queue');
   return {
     load: async () => {
       const v: unknown = await get(key, db);
-      return Array.isArray(v) ? v : [];
+      if (!Array.isArray(v)) return [];
+      return v.flatMap((item: unknown): QueueItem<P>[] => {
+        if (!isStoredItem(item)) return [];
+        const { payload } = item;
+        return isPayload(payload) ? [{ ...item, payload, baseVersion: typeof item.baseVersion === 'number' ? item.baseVersion : null }] : [];
+      });
     },
     save: (items) => set(key, items, db),
   };

@@ -2,6 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs, RouteObject } from 'react-router-dom';
 import { z } from 'zod';
 import { RouteError } from '../../components/errors/route-error';
+import { jobRoutePatterns } from '../../lib/job-paths';
 import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../../lib/job-queries';
 import { queryClient as sharedQueryClient } from '../../lib/query-client';
 import { sharedWalkthroughQueue } from '../walkthrough/sync/walkthrough-queue';
@@ -31,7 +32,7 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
   };
   return [
     {
-      path: '/jobs',
+      path: jobRoutePatterns.list,
       ErrorBoundary: RouteError,
       loader: ({ request }) => {
         sharedWalkthroughQueue(queryClient);
@@ -41,24 +42,24 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
       lazy: async () => ({ Component: (await import('./components/jobs-list-page')).JobsListPage }),
     },
     {
-      path: '/jobs/new',
+      path: jobRoutePatterns.new,
       ErrorBoundary: RouteError,
       lazy: async () => ({ Component: (await import('./components/new-job-page')).NewJobPage }),
     },
     {
-      path: '/jobs/:jobId',
+      path: jobRoutePatterns.walkthrough,
       ErrorBoundary: RouteError,
       loader: jobWithRooms,
       lazy: async () => ({ Component: (await import('../walkthrough/components/walkthrough-page')).WalkthroughPage }),
     },
     {
-      path: '/jobs/:jobId/loads',
+      path: jobRoutePatterns.loads,
       ErrorBoundary: RouteError,
       loader: jobWithRooms,
       lazy: async () => ({ Component: (await import('../loads/components/loads-page')).LoadsPage }),
     },
     {
-      path: '/jobs/:jobId/loads/print',
+      path: jobRoutePatterns.print,
       ErrorBoundary: RouteError,
       loader: jobWithRooms,
       lazy: async () => ({ Component: (await import('../loads/components/load-print-page')).LoadPrintPage }),

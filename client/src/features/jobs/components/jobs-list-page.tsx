@@ -7,6 +7,7 @@ import { EmptyState } from '../../../components/ui/empty-state';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Spinner } from '../../../components/ui/spinner';
 import { errorMessage } from '../../../lib/api-error';
+import { jobPaths } from '../../../lib/job-paths';
 import { JOB_STATUSES, jobStatusLabels } from '../../../lib/job-records';
 import { useJobs } from '../api/get-jobs';
 import { filtersFromSearch } from './jobs-filters';
@@ -40,7 +41,7 @@ export function JobsListPage() {
       <PageHeader
         title="Jobs"
         lead="Every job you can see, the most recently active first."
-        actions={<Link className={buttonClass('primary')} to="/jobs/new">New job</Link>}
+        actions={<Link className={buttonClass('primary')} to={jobPaths.new}>New job</Link>}
       />
       <div role="search" className="mb-4 grid gap-3 sm:grid-cols-[2fr_1fr]">
         <div className="flex flex-col gap-1">

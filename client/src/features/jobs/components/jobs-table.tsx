@@ -1,5 +1,6 @@
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
+import { jobPaths } from '../../../lib/job-paths';
 import { jobStatusLabels, type JobRecord } from '../../../lib/job-records';
 
 const col = createColumnHelper<JobRecord>();
@@ -10,7 +11,7 @@ const columns = [
     id: 'customer',
     header: 'Customer',
     cell: (c) => (
-      <Link className="font-semibold text-ink-800 underline underline-offset-2" to={`/jobs/${c.row.original.id}`}>
+      <Link className="font-semibold text-ink-800 underline underline-offset-2" to={jobPaths.walkthrough(c.row.original.id)}>
         {c.getValue()}
       </Link>
     ),
@@ -42,7 +43,24 @@ export function JobsTable({ jobs, total, page, pageSize, onPage }: Props) {
   });
   return (
     <div className="flex flex-col gap-3">
-      <div className="overflow-x-auto rounded-lg border border-line bg-white">
+      {/* Phones get one card per job; wider screens the table. Both come from the same rows. */}
+      <ul aria-label="Jobs" className="flex flex-col gap-2 sm:hidden">
+        {table.getRowModel().rows.map((row) => {
+          const j = row.original;
+          return (
+            <li key={row.id}>
+              <Link to={jobPaths.walkthrough(j.id)} className="flex min-h-touch flex-col rounded-lg border border-line bg-white px-4 py-3">
+                <span className="font-semibold text-ink-800">{j.customer.name}</span>
+                <span className="text-sm text-ink-950">{[j.site.street, j.site.unit, j.site.city].filter(Boolean).join(', ')}</span>
+                <span className="text-sm text-muted">
+                  {jobStatusLabels[j.status]} · {when.format(new Date(j.lastActivityAt))}
+                </span>
+              </Link>
+            </li>
+          );
+        })}
+      </ul>
+      <div className="hidden overflow-x-auto rounded-lg border border-line bg-white sm:block">
         <table className="w-full min-w-[640px] text-left">
           <thead className="bg-ink-50 text-sm text-ink-900">
             {table.getHeaderGroups().map((hg) => (

@@ -2,6 +2,7 @@ import { useRef } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { Form } from '../../../components/ui/form';
 import { SelectField, SubmitButton, TextField } from '../../../components/ui/form-fields';
+import { jobPaths } from '../../../lib/job-paths';
 import { useCreateJob } from '../api/create-job';
 import { newJobSchema, type NewJobInput } from '../schemas';
 import { CustomerPicker } from './customer-picker';
@@ -23,7 +24,7 @@ export function NewJobForm() {
       aria-label="New job"
       onSubmit={async (values) => {
         const job = await createJob.mutateAsync({ values, madeCustomerId: madeCustomer.current, onCustomer: (id) => (madeCustomer.current = id) });
-        await navigate(`/jobs/${job.id}`);
+        await navigate(jobPaths.walkthrough(job.id));
       }}
     >
       {(form) => (

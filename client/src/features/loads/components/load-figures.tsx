@@ -12,7 +12,7 @@ export function LoadFigures({ load }: { load: RoomLoad }) {
     ['Heat loss', `${n(load.heatLoss.total)} Btu/h`],
   ];
   return (
-    <dl className="grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-4">
+    <dl className="grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-4 lg:grid-cols-2">
       {rows.map(([label, value]) => (
         <div key={label}>
           <dt className="text-sm text-muted">{label}</dt>

@@ -1,6 +1,7 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useParams } from 'react-router-dom';
 import { Button, buttonClass } from '../../../components/ui/button';
+import { jobPaths } from '../../../lib/job-paths';
 import { jobQueryOptions, roomsQueryOptions } from '../../../lib/job-queries';
 import { computeHomeLoad } from '../model/compute';
 import { LoadSummarySheet } from './load-summary-sheet';
@@ -19,7 +20,7 @@ export function LoadPrintPage() {
       <PrintStyles />
       <div className="no-print flex flex-wrap gap-2 print:hidden">
         <Button onClick={() => window.print()}>Print</Button>
-        <Link className={buttonClass('secondary')} to={`/jobs/${jobId}/loads`}>Back to the loads</Link>
+        <Link className={buttonClass('secondary')} to={jobPaths.loads(jobId)}>Back to the loads</Link>
       </div>
       {result.ok ? <LoadSummarySheet job={job} load={result.value.load} printedOn={printedOn} /> : <p>{result.message}</p>}
     </div>

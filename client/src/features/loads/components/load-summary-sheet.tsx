@@ -36,17 +36,17 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
 
       <section aria-label="Inputs used">
         <h2 className="font-semibold">Design conditions used</h2>
-        <table className="w-full text-xs">
-          <tbody>
-            {DESIGN_ROWS.filter(([k]) => typeof dc[k] === 'number').map(([k, label, unit]) => (
-              <tr key={k} className="border-b border-line">
-                <td className="py-0.5">{label}</td>
-                <td className="py-0.5 text-right">{String(dc[k])} {unit}</td>
-                <td className="py-0.5 pl-2 text-muted">{sourceWords[job.designSources[k]?.source ?? ''] ?? ''}{job.designSources[k]?.note ? ` — ${job.designSources[k]?.note}` : ''}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <dl className="grid grid-cols-1 gap-x-6 text-xs sm:grid-cols-2 print:grid-cols-2">
+          {DESIGN_ROWS.filter(([k]) => typeof dc[k] === 'number').map(([k, label, unit]) => (
+            <div key={k} className="flex justify-between gap-2 border-b border-line py-0.5">
+              <dt>{label}</dt>
+              <dd className="text-right">
+                {String(dc[k])} {unit}
+                <span className="pl-2 text-muted">{sourceWords[job.designSources[k]?.source ?? ''] ?? ''}{job.designSources[k]?.note ? ` — ${job.designSources[k]?.note}` : ''}</span>
+              </dd>
+            </div>
+          ))}
+        </dl>
         <p className="text-xs">House tightness: {job.tightness}. {typeof dc.source === 'string' && dc.source ? `Source of design values: ${dc.source}.` : ''}</p>
       </section>
 
@@ -97,7 +97,7 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
 
       <footer className="border-t border-line pt-2 text-[0.7rem] leading-snug">
         <p className="font-semibold">A load estimate is an estimate. Method and assumptions:</p>
-        <ul className="list-disc pl-4">
+        <ul className="list-disc pl-4 sm:columns-2 sm:gap-6 print:columns-2 print:gap-6">
           {METHOD_NOTES.map((m) => <li key={m}>{m}</li>)}
         </ul>
       </footer>

@@ -5,6 +5,7 @@ import { z } from 'zod';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { buttonClass } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
+import { jobPaths } from '../../../lib/job-paths';
 import { jobQueryOptions, roomsQueryOptions } from '../../../lib/job-queries';
 import { computeHomeLoad } from '../model/compute';
 import { MethodNote } from './estimate-note';
@@ -33,10 +34,10 @@ export function LoadsPage() {
         title={`Loads — ${job.customer.name}`}
         lead="Room-by-room heat gain and heat loss from the saved walk-through."
         actions={
-          <>
-            <Link className={buttonClass('secondary')} to={`/jobs/${jobId}`}>Back to the walk-through</Link>
-            <Link className={buttonClass('primary')} to={`/jobs/${jobId}/loads/print`}>Printable summary</Link>
-          </>
+          <div className="flex flex-wrap gap-2">
+            <Link className={buttonClass('secondary')} to={jobPaths.walkthrough(jobId)}>Back to the walk-through</Link>
+            <Link className={buttonClass('primary')} to={jobPaths.print(jobId)}>Printable summary</Link>
+          </div>
         }
       />
       {!result.ok ? <p className="rounded-md border border-line bg-white p-4">{result.message}</p> : null}

@@ -45,7 +45,8 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
   const name = asString(draft.name) || 'Room';
 
   return (
-    <section aria-label={`Room: ${name}`} className="flex flex-col gap-5">
+    <section aria-label={`Room: ${name}`} className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_24rem]">
+      <div className="flex min-w-0 flex-col gap-5">
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
         <div className="col-span-2 sm:col-span-1">
           <TextInput label="Room name" value={asString(draft.name)} onChange={(x) => set(['name'], x)} error={err(['name'])} />
@@ -53,7 +54,7 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
         <SelectInput label="Floor level" value={String(asNumber(draft.floorLevel) ?? 1)} options={floorLevelOptions} onChange={(x) => set(['floorLevel'], Number(x))} error={err(['floorLevel'])} />
         <NumberInput label="Length" quantity="ft" value={asNumber(draft.lengthFt)} onChange={(x) => set(['lengthFt'], x)} error={err(['lengthFt'])} />
         <NumberInput label="Width" quantity="ft" value={asNumber(draft.widthFt)} onChange={(x) => set(['widthFt'], x)} error={err(['widthFt'])} />
-        <NumberInput label="Floor area (instead of length × width)" quantity="ft2" value={asNumber(draft.areaFt2)} onChange={(x) => set(['areaFt2'], x)} error={err(['areaFt2'])} />
+        <NumberInput label="Floor area" hint="Only if length × width does not fit" quantity="ft2" value={asNumber(draft.areaFt2)} onChange={(x) => set(['areaFt2'], x)} error={err(['areaFt2'])} />
         <NumberInput label="Ceiling height" quantity="ft" value={asNumber(draft.ceilingHeightFt)} onChange={(x) => set(['ceilingHeightFt'], x)} error={err(['ceilingHeightFt'])} />
       </div>
 
@@ -89,9 +90,13 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
         <RoomPhotos jobId={jobId} room={room} />
       </QueryWidgetBoundary>
 
-      <QueryWidgetBoundary name="the room loads">
-        <RoomLoadPanel room={check.ok ? check.room : null} warnings={check.ok ? check.warnings : []} designConditions={designConditions} tightness={tightness} />
-      </QueryWidgetBoundary>
+      </div>
+      {/* On a wide screen the loads stay in view beside the form while it is filled in. */}
+      <aside className="min-w-0 lg:sticky lg:top-20 lg:self-start">
+        <QueryWidgetBoundary name="the room loads">
+          <RoomLoadPanel room={check.ok ? check.room : null} warnings={check.ok ? check.warnings : []} designConditions={designConditions} tightness={tightness} />
+        </QueryWidgetBoundary>
+      </aside>
     </section>
   );
 }

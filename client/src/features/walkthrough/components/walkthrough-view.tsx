@@ -5,6 +5,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button, buttonClass } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Spinner } from '../../../components/ui/spinner';
+import { jobPaths } from '../../../lib/job-paths';
 import type { CompanySettingsRecord, JobRecord, RoomRecord } from '../../../lib/job-records';
 import { LiveHomeTotals } from '../../loads/components/live-home-totals';
 import { roomTarget } from '../sync/edits';
@@ -55,7 +56,7 @@ export function WalkthroughView({ job: serverJob, rooms: serverRooms, settings }
           </div>
           <div className="flex items-center gap-2">
             <LiveSaveStatus />
-            <Link className={buttonClass('secondary')} to={`/jobs/${job.id}/loads`}>
+            <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
               Loads summary
             </Link>
           </div>

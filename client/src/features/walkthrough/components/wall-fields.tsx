@@ -27,7 +27,7 @@ export function WallFields({ draft, set, err, index, replace }: WallProps) {
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
         <SelectInput label="Wall faces" value={asString(v('direction'), 'N')} options={directionOptions} onChange={(x) => set(p('direction'), x)} error={err(p('direction'))} />
         <NumberInput label="Wall length" quantity="ft" value={asNumber(v('lengthFt'))} onChange={(x) => set(p('lengthFt'), x)} error={err(p('lengthFt'))} />
-        <NumberInput label="Wall height (blank = ceiling)" quantity="ft" value={asNumber(v('heightFt'))} onChange={(x) => set(p('heightFt'), x)} error={err(p('heightFt'))} />
+        <NumberInput label="Wall height" hint="Blank uses the ceiling height" quantity="ft" value={asNumber(v('heightFt'))} onChange={(x) => set(p('heightFt'), x)} error={err(p('heightFt'))} />
         <SelectInput label="Construction" value={asString(v('construction'), 'wood-2x4-r13')} options={constructionOptions} onChange={(x) => set(p('construction'), x)} error={err(p('construction'))} />
       </div>
       {err(p('windows')) ? <p className="text-sm font-semibold text-danger">{err(p('windows'))}</p> : null}

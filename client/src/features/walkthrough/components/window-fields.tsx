@@ -15,23 +15,22 @@ export function WindowFields({ draft, set, err, base, index, onRemove }: EditorP
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
         <NumberInput label="Window width" quantity="in" value={asNumber(v('widthIn'))} onChange={(x) => set(p('widthIn'), x)} error={err(p('widthIn'))} />
         <NumberInput label="Window height" quantity="in" value={asNumber(v('heightIn'))} onChange={(x) => set(p('heightIn'), x)} error={err(p('heightIn'))} />
-        <NumberInput label="Window area (instead of size)" quantity="ft2" value={asNumber(v('areaFt2'))} onChange={(x) => set(p('areaFt2'), x)} error={err(p('areaFt2'))} />
+        <NumberInput label="Window area" hint="Instead of width × height" quantity="ft2" value={asNumber(v('areaFt2'))} onChange={(x) => set(p('areaFt2'), x)} error={err(p('areaFt2'))} />
         <NumberInput label="Window count" integer value={asNumber(v('count'))} onChange={(x) => set(p('count'), x)} error={err(p('count'))} />
         <SelectInput label="Glazing" value={glazing} options={glazingOptions} onChange={(x) => set(p('glazing'), x)} error={err(p('glazing'))} />
         <NumberInput
           label="Window U-factor"
-          unit="Btu/h·ft²·°F"
           value={asNumber(v('uFactor'))}
           onChange={(x) => set(p('uFactor'), x)}
           error={err(p('uFactor'))}
-          hint={defaults ? `Blank uses ${defaults.u} (typical ${defaults.label.toLowerCase()})` : undefined}
+          hint={defaults ? `Btu/h·ft²·°F, from the label. Blank uses ${defaults.u} (typical ${defaults.label.toLowerCase()})` : 'Btu/h·ft²·°F, from the label'}
         />
         <NumberInput
           label="Window SHGC"
           value={asNumber(v('shgc'))}
           onChange={(x) => set(p('shgc'), x)}
           error={err(p('shgc'))}
-          hint={defaults ? `Blank uses ${defaults.shgc}` : undefined}
+          hint={defaults ? `From the label. Blank uses ${defaults.shgc}` : 'From the label'}
         />
         <SelectInput label="Interior shading" value={asString(v('interiorShading'), 'none')} options={shadingOptions} onChange={(x) => set(p('interiorShading'), x)} error={err(p('interiorShading'))} />
       </div>

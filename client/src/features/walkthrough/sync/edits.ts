@@ -36,3 +36,16 @@ export const coalesceEdits: Coalesce<WalkthroughEdit> = (waiting, next) => {
   if (w.kind === 'job-update' && n.kind === 'job-update') return { ...waiting, payload: { ...w, changes: { ...w.changes, ...n.changes } } };
   return null;
 };
+
+const EDIT_KINDS = ['room-create', 'room-update', 'room-delete', 'job-update'];
+
+/** Reading the queue back from IndexedDB: an edit this version of the app knows how to send. */
+export function isWalkthroughEdit(v: unknown): v is WalkthroughEdit {
+  if (typeof v !== 'object' || v === null) return false;
+  const r: Record<string, unknown> = { ...v };
+  if (typeof r.kind !== 'string' || !EDIT_KINDS.includes(r.kind) || typeof r.jobId !== 'string') return false;
+  if (r.kind === 'job-update') return typeof r.changes === 'object' && r.changes !== null;
+  if (typeof r.roomId !== 'string') return false;
+  if (r.kind === 'room-delete') return true;
+  return typeof r.input === 'object' && r.input !== null && (r.kind === 'room-update' || typeof r.position === 'number');
+}

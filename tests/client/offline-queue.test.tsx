@@ -156,4 +156,18 @@ describe('offline queue', () => {
     await vi.waitFor(() => expect(q.getSnapshot().rejected).toBe('Length must be between 1 and 200 ft'));
     expect(q.getSnapshot().items).toHaveLength(0);
   });
+
+  it('puts an edit made with a stale version (its own write just landed) on the version that write reached', async () => {
+    // Seen in the browser: the debounce fired between the create's answer and the next render,
+    // so the editor still said "no version" and the update went out without If-Match (428).
+    const sent: Array<number | null> = [];
+    const q = await started(makeQueue({ send: async (i) => (sent.push(i.baseVersion), { kind: 'ok', version: i.payload.kind === 'room-create' ? 1 : (i.baseVersion ?? 0) + 1 }) }));
+    await q.enqueue({ target: roomTarget('r'), baseVersion: null, payload: { kind: 'room-create', jobId: 'j1', roomId: 'r', position: 0, input: { id: 'r', name: 'Den' } } });
+    await vi.waitFor(() => expect(q.getSnapshot().items).toHaveLength(0));
+    await q.enqueue({ target: roomTarget('r'), baseVersion: null, payload: update('r', 'Den renamed') });
+    await vi.waitFor(() => expect(q.getSnapshot().items).toHaveLength(0));
+    await q.enqueue({ target: roomTarget('r'), baseVersion: 1, payload: update('r', 'Den again') });
+    await vi.waitFor(() => expect(q.getSnapshot().items).toHaveLength(0));
+    expect(sent).toEqual([null, 1, 2]);
+  });
 });

@@ -11,6 +11,8 @@ export class OfflineQueue<P> {
   private timer: ReturnType<typeof setInterval> | null = null;
   private inFlight: string | null = null;
   private seq = 0;
+  /** The version each target reached through this queue's own writes. */
+  private readonly reached = new Map<string, number>();
 
   constructor(private readonly options: OfflineQueueOptions<P>) {
     this.state = { loaded: false, online: this.isOnline(), sending: false, items: [], conflict: null, rejected: null, blocked: null };
@@ -77,7 +79,12 @@ export class OfflineQueue<P> {
   }
 
   /** Stores the edit (merging it into a waiting one of the same target when allowed), then tries to send. */
-  async enqueue(next: NewItem<P>): Promise<void> {
+  async enqueue(edit: NewItem<P>): Promise<void> {
+    // An editor may still hold the version it rendered with when its own previous write has
+    // already landed (the debounce fires between the answer and the next render): an edit made
+    // on this device stands on the newest version this device wrote, never on an older one.
+    const reached = this.reached.get(edit.target);
+    const next = reached !== undefined && (edit.baseVersion === null || edit.baseVersion < reached) ? { ...edit, baseVersion: reached } : edit;
     const items = [...this.state.items];
     const coalesce = this.options.coalesce;
     if (coalesce) {
@@ -155,6 +162,7 @@ export class OfflineQueue<P> {
       } else {
         // Later edits of the same target were made on top of this one: they now stand on its new version.
         const rebased = rest.map((i) => (i.target === head.target && result.version !== null ? { ...i, baseVersion: result.version } : i));
+        if (result.version !== null) this.reached.set(head.target, result.version);
         this.options.onSent?.(head, result.version);
         await this.setItems(rebased);
       }

@@ -26,7 +26,8 @@ function afterWrite(queryClient: QueryClient, jobId: string): void {
 function failure(e: unknown): SendResult {
   if (isApiError(e)) {
     if (e.code === 'network' || e.status === 0) return { kind: 'network' };
-    if (e.status === 409) return { kind: 'conflict' };
+    // 428 means the edit carried no version: never drop it, ask the person as for a 409.
+    if (e.status === 409 || e.status === 428) return { kind: 'conflict' };
     if (e.status === 401) return { kind: 'blocked', message: 'Your session has ended. Sign in again (in another tab keeps this page); your changes stay on this device until then.' };
     // 5xx may pass; keep the edit and try again later rather than lose it.
     if (e.status >= 500 || e.status === 429) return { kind: 'network' };

@@ -19,6 +19,7 @@ export interface Running {
 
 /** Builds the services from configuration and listens. The only place that opens a port for the API. */
 export async function startServer(config: Config = loadConfig(), extra: Partial<Services> = {}): Promise<Running> {
+  logger.level = config.LOG_LEVEL;
   const orm = await MikroORM.init(ormConfig(config.DATABASE_URL, config.DB_POOL_MAX));
   const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 4, connectionTimeoutMillis: 2000 });
   const mailer = createSmtpMailer({ host: config.SMTP_HOST, port: config.SMTP_PORT, from: config.MAIL_FROM });

@@ -36,7 +36,7 @@ function text(s: SaveStatus): string {
 /** Always on screen during a walk-through; role="status" so screen readers hear it change. */
 export function SaveStatusPill({ status }: { status: SaveStatus }) {
   return (
-    <p role="status" aria-live="polite" className={`inline-flex min-h-9 items-center gap-2 rounded-full border px-3 text-sm font-semibold ${looks[status.kind]}`}>
+    <p role="status" aria-live="polite" className={`inline-flex min-h-9 items-center gap-2 whitespace-nowrap rounded-full border px-3 text-sm font-semibold ${looks[status.kind]}`}>
       <span aria-hidden="true" className="size-2 rounded-full bg-current" />
       {text(status)}
     </p>

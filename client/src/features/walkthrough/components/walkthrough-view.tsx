@@ -54,7 +54,7 @@ export function WalkthroughView({ job: serverJob, rooms: serverRooms, settings }
             <h1 className="text-xl font-bold text-ink-900">{job.customer.name}</h1>
             <p className="text-sm text-muted">{address}</p>
           </div>
-          <div className="flex items-center gap-2">
+          <div className="flex flex-wrap items-center gap-2">
             <LiveSaveStatus />
             <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
               Loads summary

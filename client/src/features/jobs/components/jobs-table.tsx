@@ -1,4 +1,5 @@
-import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { DataTableBody, DataTableHead } from '../../../components/ui/data-table';
 import { Link } from 'react-router-dom';
 import { jobPaths } from '../../../lib/job-paths';
 import { jobStatusLabels, type JobRecord } from '../../../lib/job-records';
@@ -62,28 +63,8 @@ export function JobsTable({ jobs, total, page, pageSize, onPage }: Props) {
       </ul>
       <div className="hidden overflow-x-auto rounded-lg border border-line bg-white sm:block">
         <table className="w-full min-w-[640px] text-left">
-          <thead className="bg-ink-50 text-sm text-ink-900">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => (
-                  <th key={h.id} scope="col" className="px-3 py-2 font-semibold">
-                    {flexRender(h.column.columnDef.header, h.getContext())}
-                  </th>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-t border-line">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-3">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
+          <DataTableHead table={table} className="bg-ink-50 text-sm text-ink-900" cellClassName="px-3 py-2 font-semibold" />
+          <DataTableBody table={table} classes={{ row: 'border-t border-line', cell: 'px-3 py-3' }} />
         </table>
       </div>
       <nav aria-label="Pages" className="flex items-center justify-between gap-2">

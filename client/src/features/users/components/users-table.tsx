@@ -1,4 +1,5 @@
-import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
+import { DataTableBody, DataTableHead } from '../../../components/ui/data-table';
 import { useMemo } from 'react';
 import type { User } from '../../../types/user';
 import { useUsers } from '../api/get-users';
@@ -35,28 +36,14 @@ export function UsersTable({ currentUserId }: { currentUserId: string }) {
   return (
     <table className="w-full border-collapse text-left text-base">
       <caption className="sr-only">People who can sign in to your company</caption>
-      <thead className="max-md:sr-only">
-        {table.getHeaderGroups().map((hg) => (
-          <tr key={hg.id} className="border-b border-line">
-            {hg.headers.map((h) => (
-              <th key={h.id} scope="col" className="px-3 py-2 text-sm font-semibold text-muted">
-                {flexRender(h.column.columnDef.header, h.getContext())}
-              </th>
-            ))}
-          </tr>
-        ))}
-      </thead>
-      <tbody>
-        {table.getRowModel().rows.map((row) => (
-          <tr key={row.id} className="border-b border-line max-md:mb-3 max-md:block max-md:rounded-lg max-md:border max-md:bg-white max-md:p-3">
-            {row.getVisibleCells().map((cell) => (
-              <td key={cell.id} className="px-3 py-3 align-top max-md:block max-md:px-0 max-md:py-1">
-                {flexRender(cell.column.columnDef.cell, cell.getContext())}
-              </td>
-            ))}
-          </tr>
-        ))}
-      </tbody>
+      <DataTableHead table={table} className="max-md:sr-only" rowClassName="border-b border-line" cellClassName="px-3 py-2 text-sm font-semibold text-muted" />
+      <DataTableBody
+        table={table}
+        classes={{
+          row: 'border-b border-line max-md:mb-3 max-md:block max-md:rounded-lg max-md:border max-md:bg-white max-md:p-3',
+          cell: 'px-3 py-3 align-top max-md:block max-md:px-0 max-md:py-1',
+        }}
+      />
     </table>
   );
 }

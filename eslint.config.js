@@ -4,8 +4,32 @@ import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
+import { readdirSync } from 'node:fs';
 
 const noOurs = (patterns, message) => ['error', { patterns: patterns.map((group) => ({ group, message })) }];
+
+// Features do not import each other; app/routes compose them. The exceptions are deliberate:
+// the walk-through shows the loads feature's live panels, and jobs/routes.tsx composes the job screens.
+const features = readdirSync(new URL('./client/src/features', import.meta.url)).filter((f) => !f.includes('.'));
+const allowed = { walkthrough: ['loads'] };
+const featureBoundaries = features.map((feature) => {
+  const others = features.filter((f) => f !== feature && !(allowed[feature] ?? []).includes(f));
+  return {
+    files: [`client/src/features/${feature}/**/*.{ts,tsx}`],
+    ignores: feature === 'jobs' ? ['client/src/features/jobs/routes.tsx'] : [],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { regex: `^(\\.\\./)+(${others.join('|')})/`, message: 'Features do not import each other; share through lib/ or compose in app/routes.' },
+            { group: ['**/server/**', 'node:*'], message: 'The client never imports the server at runtime.' },
+          ],
+        },
+      ],
+    },
+  };
+});
 
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', '.data/**', 'coverage/**'] },
@@ -38,6 +62,7 @@ export default tseslint.config(
       'no-restricted-imports': noOurs([['**/server/**', '../../server/*', 'node:*']], 'The client never imports the server at runtime.'),
     },
   },
+  ...featureBoundaries,
   {
     files: ['server/**/*.ts'],
     rules: { 'no-restricted-imports': noOurs([['**/client/**']], 'The server does not import client code.') },

@@ -4,4 +4,6 @@ import { afterEach } from 'vitest';
 
 afterEach(() => {
   cleanup();
+  // Each test starts with an empty localStorage (the walk-through keeps refused drafts there).
+  localStorage.clear();
 });

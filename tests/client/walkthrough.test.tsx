@@ -102,3 +102,33 @@ describe('room form', () => {
     expect(await screen.findByText(/6 ft ceiling is unusually low/)).toBeInTheDocument();
   });
 });
+
+describe('a draft the schema refuses', () => {
+
+  it('is kept on the device and comes back after a reload, and is dropped once the room is valid', async () => {
+    const first = await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
+    fireEvent.change(screen.getByLabelText('Window area'), { target: { value: '100' } });
+    expect(await screen.findByText('The windows (100 ft²) are larger than the wall (80 ft²)')).toBeInTheDocument();
+    first.unmount();
+    // "reload": a fresh editor for the same room at the same version
+    const sent: unknown[] = [];
+    const second = await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />, {
+      send: async (item) => (sent.push(item.payload), { kind: 'ok', version: 4 }),
+    });
+    expect(screen.getByLabelText('Window area')).toHaveValue('100');
+    expect(screen.getByText(/Brought back what you were typing/)).toBeInTheDocument();
+    fireEvent.change(screen.getByLabelText('Window area'), { target: { value: '20' } });
+    await waitFor(() => expect(sent).toHaveLength(1), { timeout: 2000 });
+    second.unmount();
+    await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
+    expect(screen.getByLabelText('Window area')).not.toHaveValue('100');
+  });
+
+  it('is discarded when the room on the server has moved on', async () => {
+    const first = await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
+    fireEvent.change(screen.getByLabelText('Window area'), { target: { value: '100' } });
+    first.unmount();
+    await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView(bedroomInput, 4)} designConditions={designConditions} tightness="average" />);
+    expect(screen.getByLabelText('Window area')).not.toHaveValue('100');
+  });
+});

@@ -10,6 +10,7 @@ import type { RoomView } from '../sync/overlay';
 import { roomTarget } from '../sync/edits';
 import { useDebouncedSave } from '../sync/use-debounced-save';
 import { useWalkthroughQueue } from '../sync/queue-context';
+import { clearUnsavedDraft, keepUnsavedDraft, takeUnsavedDraft } from '../sync/unsaved-drafts';
 import { AboveBelowFields } from './above-below-fields';
 import { ApplianceFields } from './appliance-fields';
 import { NumberInput, SelectInput, TextInput } from './field-kit';
@@ -26,7 +27,9 @@ interface Props {
 /** One room, saved as it is typed: every valid change goes to the queue after a short pause. */
 export function RoomEditor({ jobId, room, designConditions, tightness }: Props) {
   const queue = useWalkthroughQueue();
-  const [draft, setDraft] = useState<Record<string, unknown>>(() => ({ ...room.input, id: room.id }));
+  // A draft the schema refused last time (still being fixed) comes back instead of the saved room.
+  const [restored] = useState(() => takeUnsavedDraft(room.id, room.version));
+  const [draft, setDraft] = useState<Record<string, unknown>>(() => ({ ...(restored?.input ?? room.input), id: room.id }));
   const check = useMemo(() => checkRoom(draft), [draft]);
   const { schedule } = useDebouncedSave<Record<string, unknown>>(roomTarget(room.id), (input) => {
     void queue.enqueue({ target: roomTarget(room.id), baseVersion: room.version, payload: { kind: 'room-update', jobId, roomId: room.id, input } });
@@ -35,8 +38,14 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
   const replace = (next: unknown) => {
     const value = typeof next === 'object' && next !== null && !Array.isArray(next) ? { ...next } : draft;
     setDraft(value);
-    // Only what calc accepts is saved; the form shows what to fix meanwhile.
-    if (checkRoom(value).ok) schedule(value);
+    // Only what calc accepts is saved; the form shows what to fix meanwhile, and the device
+    // keeps the refused draft so a reload does not lose it.
+    if (checkRoom(value).ok) {
+      clearUnsavedDraft(room.id);
+      schedule(value);
+    } else {
+      keepUnsavedDraft(room.id, { baseVersion: room.version, input: value });
+    }
   };
   const set = (path: readonly PathPart[], value: unknown) => replace(setIn(draft, path, value));
   const err = (path: readonly PathPart[]) => check.errors.get(pathKey(path));
@@ -47,6 +56,11 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
   return (
     <section aria-label={`Room: ${name}`} className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_24rem]">
       <div className="flex min-w-0 flex-col gap-5">
+      {restored && !check.ok ? (
+        <p role="note" className="rounded-md border border-amber-line bg-amber-soft px-3 py-2 text-sm text-amber-deep">
+          Brought back what you were typing here. It saves as soon as the fields marked in red are fixed.
+        </p>
+      ) : null}
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
         <div className="col-span-2 sm:col-span-1">
           <TextInput label="Room name" value={asString(draft.name)} onChange={(x) => set(['name'], x)} error={err(['name'])} />

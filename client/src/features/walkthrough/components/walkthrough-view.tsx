@@ -18,6 +18,7 @@ import { RoomEditor } from './room-editor';
 import { RoomListActions } from './room-list-actions';
 import { RoomTabs } from './room-tabs';
 import { UnitSystemContext } from './unit-system';
+import { clearUnsavedDraft } from '../sync/unsaved-drafts';
 
 interface Props {
   job: JobRecord;
@@ -39,6 +40,7 @@ export function WalkthroughView({ job: serverJob, rooms: serverRooms, settings }
 
   const handleDelete = () => {
     if (!current || !window.confirm(`Delete ${String(current.input.name ?? 'this room')} and its photos?`)) return;
+    clearUnsavedDraft(current.id);
     void queue.enqueue({ target: roomTarget(current.id), baseVersion: current.version, payload: { kind: 'room-delete', jobId: job.id, roomId: current.id } });
     setSelected(null);
   };

@@ -1,0 +1,56 @@
+/**
+ * What the person typed in a room that calc's schema does not accept yet (say a window
+ * larger than its wall, half-way through fixing it). Valid drafts go to the offline queue;
+ * these are kept on the device (localStorage: synchronous, so the editor can restore them
+ * before its first paint) until the room becomes valid or the server's room moves on.
+ */
+const PREFIX = 'gaugeline:unsaved-room:v1:';
+
+export interface UnsavedDraft {
+  /** The room version the draft was typed against; null for a room not yet on the server. */
+  readonly baseVersion: number | null;
+  readonly input: Record<string, unknown>;
+}
+
+function storage(): Storage | null {
+  try {
+    return typeof localStorage === 'undefined' ? null : localStorage;
+  } catch {
+    return null;
+  }
+}
+
+function isDraft(v: unknown): v is UnsavedDraft {
+  if (typeof v !== 'object' || v === null || !('input' in v) || !('baseVersion' in v)) return false;
+  const { input, baseVersion } = v;
+  return typeof input === 'object' && input !== null && !Array.isArray(input) && (baseVersion === null || typeof baseVersion === 'number');
+}
+
+export function keepUnsavedDraft(roomId: string, draft: UnsavedDraft): void {
+  try {
+    storage()?.setItem(PREFIX + roomId, JSON.stringify(draft));
+  } catch {
+    // Storage full or refused: the draft stays on screen; nothing else to do.
+  }
+}
+
+export function clearUnsavedDraft(roomId: string): void {
+  storage()?.removeItem(PREFIX + roomId);
+}
+
+/** The draft typed against this very version, if any; a draft for an older version is discarded. */
+export function takeUnsavedDraft(roomId: string, version: number | null): UnsavedDraft | null {
+  const raw = storage()?.getItem(PREFIX + roomId);
+  if (!raw) return null;
+  let parsed: unknown = null;
+  try {
+    parsed = JSON.parse(raw);
+  } catch {
+    parsed = null;
+  }
+  if (!isDraft(parsed) || parsed.baseVersion !== version) {
+    clearUnsavedDraft(roomId);
+    return null;
+  }
+  return parsed;
+}

@@ -68,13 +68,13 @@ export function JobsTable({ jobs, total, page, pageSize, onPage }: Props) {
         </table>
       </div>
       <nav aria-label="Pages" className="flex items-center justify-between gap-2">
-        <button type="button" className="min-h-touch rounded-md border border-line bg-white px-4 disabled:opacity-50" disabled={page <= 1} onClick={() => onPage(page - 1)}>
+        <button type="button" className="min-h-touch whitespace-nowrap rounded-md border border-line bg-white px-3 disabled:opacity-50" disabled={page <= 1} onClick={() => onPage(page - 1)}>
           Previous page
         </button>
-        <span className="text-sm text-muted">
+        <span className="text-center text-sm text-muted">
           Page {page} of {pageCount} · {total} {total === 1 ? 'job' : 'jobs'}
         </span>
-        <button type="button" className="min-h-touch rounded-md border border-line bg-white px-4 disabled:opacity-50" disabled={page >= pageCount} onClick={() => onPage(page + 1)}>
+        <button type="button" className="min-h-touch whitespace-nowrap rounded-md border border-line bg-white px-3 disabled:opacity-50" disabled={page >= pageCount} onClick={() => onPage(page + 1)}>
           Next page
         </button>
       </nav>

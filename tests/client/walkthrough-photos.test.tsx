@@ -5,9 +5,11 @@ import { RoomPhotos } from '../../client/src/features/walkthrough/components/roo
 import { jobTarget } from '../../client/src/features/walkthrough/sync/edits';
 import { useQueueState } from '../../client/src/features/walkthrough/sync/queue-context';
 import { clearCsrfToken } from '../../client/src/lib/api-client';
+import { jobKeys } from '../../client/src/lib/job-queries';
+import { createQueryClient } from '../../client/src/lib/query-client';
 import { clearVersionedCsrfToken } from '../../client/src/lib/versioned-request';
 import { headerOf, json, mockFetch, problem } from './helpers/fetch-mock';
-import { designConditions, JOB_ID, jobRecord, renderWalkthrough, ROOM_ID, roomView } from './helpers/walkthrough-harness';
+import { bedroomInput, designConditions, JOB_ID, jobRecord, renderWalkthrough, ROOM_ID, roomRecord, roomView } from './helpers/walkthrough-harness';
 
 beforeEach(() => {
   clearCsrfToken();
@@ -26,9 +28,11 @@ describe('room photos', () => {
         if (init?.body instanceof FormData) sent.push(init.body);
         return json(201, { photo });
       },
-      [`GET /api/jobs/${JOB_ID}/rooms`]: json(200, { rooms: [] }),
     });
-    await renderWalkthrough(<RoomPhotos jobId={JOB_ID} room={{ ...roomView(), photos: [photo] }} />);
+    // The photo goes up only once the room is in the rooms cache (it exists on the server).
+    const queryClient = createQueryClient();
+    queryClient.setQueryData(jobKeys.rooms(JOB_ID), [roomRecord(bedroomInput, 3)]);
+    const { photoQueue } = await renderWalkthrough(<RoomPhotos jobId={JOB_ID} room={{ ...roomView(), photos: [photo] }} />, { queryClient });
     expect(screen.getByRole('img', { name: 'Photo 1 of 1' })).toHaveAttribute('src', photo.url);
     const input = screen.getByLabelText('Take or add a photo');
     expect(input).toHaveAttribute('accept', 'image/*');
@@ -36,13 +40,18 @@ describe('room photos', () => {
     fireEvent.change(input, { target: { files: [new File(['x'], 'wall.jpg', { type: 'image/jpeg' })] } });
     expect(await screen.findByText('Added wall.jpg.')).toBeInTheDocument();
     expect(sent[0]?.get('file')).toBeInstanceOf(File);
+    photoQueue.stop();
   });
 
-  it('waits for the room to reach the server before taking photos', async () => {
-    mockFetch({});
-    await renderWalkthrough(<RoomPhotos jobId={JOB_ID} room={roomView(undefined, null)} />);
-    expect(screen.getByLabelText('Take or add a photo')).toBeDisabled();
-    expect(screen.getByText('Photos can be added once this room has reached the server.')).toBeInTheDocument();
+  it('takes photos before the room has reached the server and keeps them waiting', async () => {
+    const fetch = mockFetch({});
+    const { photoQueue } = await renderWalkthrough(<RoomPhotos jobId={JOB_ID} room={roomView(undefined, null)} />);
+    expect(screen.getByLabelText('Take or add a photo')).toBeEnabled();
+    fireEvent.change(screen.getByLabelText('Take or add a photo'), { target: { files: [new File(['x'], 'wall.jpg', { type: 'image/jpeg' })] } });
+    expect(await screen.findByText('Photos wait on this device until the room has reached the server.')).toBeInTheDocument();
+    expect(screen.getByText('waiting to upload')).toBeInTheDocument();
+    expect(fetch).not.toHaveBeenCalled();
+    photoQueue.stop();
   });
 });
 

@@ -8,6 +8,8 @@ import { OfflineQueue } from '../../../client/src/lib/offline-queue-runner';
 import { createQueryClient } from '../../../client/src/lib/query-client';
 import { coalesceEdits, type WalkthroughEdit } from '../../../client/src/features/walkthrough/sync/edits';
 import { WalkthroughQueueProvider } from '../../../client/src/features/walkthrough/sync/queue-context';
+import { createPhotoQueue, PhotoQueueProvider } from '../../../client/src/features/walkthrough/sync/photo-queue-context';
+import { memoryPhotoStorage, type PhotoStorage } from '../../../client/src/features/walkthrough/sync/photo-storage';
 import { createEditSender } from '../../../client/src/features/walkthrough/sync/send-edit';
 import type { RoomView } from '../../../client/src/features/walkthrough/sync/overlay';
 
@@ -48,20 +50,35 @@ export function testQueue(
   return { queue, storage };
 }
 
-export async function renderWalkthrough(ui: ReactNode, options: { send?: Send | 'real'; online?: () => boolean; queryClient?: QueryClient; stored?: readonly QueueItem<WalkthroughEdit>[] } = {}) {
+interface RenderOptions {
+  send?: Send | 'real';
+  online?: () => boolean;
+  queryClient?: QueryClient;
+  stored?: readonly QueueItem<WalkthroughEdit>[];
+  /** Waiting photos (memory): pass the same storage twice to stand for a reload. */
+  photoStorage?: PhotoStorage;
+}
+
+export async function renderWalkthrough(ui: ReactNode, options: RenderOptions = {}) {
   const queryClient = options.queryClient ?? createQueryClient();
   const { queue, storage } = testQueue(queryClient, options.send, options.online, options.stored);
+  const photoStorage = options.photoStorage ?? memoryPhotoStorage();
+  // The photo queue uploads for real (tests mock fetch) and reads the same connection as the edit queue.
+  const photoQueue = createPhotoQueue(queryClient, queue, { storage: photoStorage, isOnline: options.online ?? (() => true), retryMs: 0 });
   await queue.start();
+  await photoQueue.start();
   const view = render(
     <QueryClientProvider client={queryClient}>
       <WalkthroughQueueProvider queue={queue}>
-        <MemoryRouter>
-          <Suspense fallback="loading">{ui}</Suspense>
-        </MemoryRouter>
+        <PhotoQueueProvider queue={photoQueue}>
+          <MemoryRouter>
+            <Suspense fallback="loading">{ui}</Suspense>
+          </MemoryRouter>
+        </PhotoQueueProvider>
       </WalkthroughQueueProvider>
     </QueryClientProvider>,
   );
-  return { ...view, queue, storage, queryClient };
+  return { ...view, queue, storage, queryClient, photoQueue, photoStorage };
 }
 
 export function jobRecord(overrides: Record<string, unknown> = {}) {

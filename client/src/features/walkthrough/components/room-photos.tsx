@@ -1,33 +1,33 @@
-import { useId, useState } from 'react';
-import { Alert } from '../../../components/ui/alert';
-import { errorMessage } from '../../../lib/api-error';
-import { useUploadPhoto } from '../api/upload-photo';
+import { useId } from 'react';
 import type { RoomView } from '../sync/overlay';
+import { usePhotoQueue, usePhotoQueueState } from '../sync/photo-queue-context';
 import { useQueueState } from '../sync/queue-context';
+import { PhotoRefusals } from './photo-refusals';
+import { WaitingPhoto } from './waiting-photo';
 
 /**
- * Photos of one room. On a phone the picker opens the rear camera. Thumbnails come from the
- * authorised photo route (the session cookie goes with the image request).
+ * Photos of one room. On a phone the picker opens the rear camera. A new photo is kept on the
+ * device first and uploads once the room is on the server and the connection is up, so taking
+ * one never depends on signal. Server thumbnails come from the authorised photo route.
  */
 export function RoomPhotos({ jobId, room }: { jobId: string; room: RoomView }) {
   const id = useId();
-  const upload = useUploadPhoto(jobId);
+  const photos = usePhotoQueue();
+  const { waiting, uploading, notices } = usePhotoQueueState();
   const { online } = useQueueState();
-  const [done, setDone] = useState<string | null>(null);
-  const saved = room.version !== null;
-  const canUpload = saved && online && !upload.isPending;
+  const mine = waiting.filter((p) => p.roomId === room.id);
+  const added = notices.find((n) => n.roomId === room.id && n.kind === 'added');
+  const busy = mine.some((p) => p.id === uploading);
 
-  const handleFile = async (file: File | undefined) => {
+  const handleFile = (file: File | undefined) => {
     if (!file) return;
-    setDone(null);
-    await upload.mutateAsync({ jobId, roomId: room.id, file });
-    setDone(file.name);
+    void photos.add({ jobId, roomId: room.id, fileName: file.name, blob: file });
   };
 
   return (
     <div className="flex flex-col gap-3">
       <h3 className="text-lg font-semibold text-ink-900">Photos</h3>
-      {room.photos.length > 0 ? (
+      {room.photos.length + mine.length > 0 ? (
         <ul className="flex flex-wrap gap-2" aria-label="Room photos">
           {room.photos.map((p, i) => (
             <li key={p.id}>
@@ -36,16 +36,18 @@ export function RoomPhotos({ jobId, room }: { jobId: string; room: RoomView }) {
               </a>
             </li>
           ))}
+          {mine.map((p) => (
+            <li key={p.id}>
+              <WaitingPhoto photo={p} />
+            </li>
+          ))}
         </ul>
       ) : (
         <p className="text-sm text-muted">No photos yet.</p>
       )}
       <div>
-        <label
-          htmlFor={id}
-          className={`inline-flex min-h-touch cursor-pointer items-center rounded-md border border-line bg-white px-4 font-semibold text-ink-900 ${canUpload ? 'hover:bg-ink-50' : 'cursor-not-allowed opacity-60'}`}
-        >
-          {upload.isPending ? 'Uploading…' : 'Take or add a photo'}
+        <label htmlFor={id} className="inline-flex min-h-touch cursor-pointer items-center rounded-md border border-line bg-white px-4 font-semibold text-ink-900 hover:bg-ink-50">
+          Take or add a photo
         </label>
         <input
           id={id}
@@ -53,17 +55,17 @@ export function RoomPhotos({ jobId, room }: { jobId: string; room: RoomView }) {
           accept="image/*"
           capture="environment"
           className="sr-only"
-          disabled={!canUpload}
           onChange={(e) => {
-            void handleFile(e.target.files?.[0]).catch(() => undefined);
+            handleFile(e.target.files?.[0]);
             e.target.value = '';
           }}
         />
       </div>
-      {!saved ? <p className="text-sm text-muted">Photos can be added once this room has reached the server.</p> : null}
-      {saved && !online ? <p className="text-sm text-muted">Photos upload when the connection is back; the room itself is kept meanwhile.</p> : null}
-      {upload.isError ? <Alert tone="danger" title="The photo was not added.">{errorMessage(upload.error)}</Alert> : null}
-      {done && !upload.isError ? <p role="status" className="text-sm text-ok">Added {done}.</p> : null}
+      {busy ? <p className="text-sm text-muted">Uploading…</p> : null}
+      {mine.length > 0 && room.version === null ? <p className="text-sm text-muted">Photos wait on this device until the room has reached the server.</p> : null}
+      {mine.length > 0 && room.version !== null && !online ? <p className="text-sm text-muted">Photos upload when the connection is back; they are kept on this device meanwhile.</p> : null}
+      <PhotoRefusals show={(n) => n.jobId === jobId && n.roomId === room.id} />
+      {added && mine.length === 0 ? <p role="status" className="text-sm text-ok">{added.message}</p> : null}
     </div>
   );
 }

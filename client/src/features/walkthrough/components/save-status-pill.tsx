@@ -7,10 +7,17 @@ export type SaveStatus =
   | { readonly kind: 'blocked'; readonly waiting: number }
   | { readonly kind: 'conflict' };
 
-/** Pure: what the pill says, from the queue and the edits still inside the debounce. */
-export function saveStatus(state: Pick<QueueState<unknown>, 'items' | 'online' | 'sending' | 'conflict'> & { blocked?: string | null }, typing: number): SaveStatus {
+/**
+ * Pure: what the pill says, from the queue, the edits still inside the debounce and the photos
+ * kept on the device (to the person a waiting photo is a change not yet saved like any other).
+ */
+export function saveStatus(
+  state: Pick<QueueState<unknown>, 'items' | 'online' | 'sending' | 'conflict'> & { blocked?: string | null },
+  typing: number,
+  photos = 0,
+): SaveStatus {
   if (state.conflict) return { kind: 'conflict' };
-  const waiting = state.items.length;
+  const waiting = state.items.length + photos;
   if (state.blocked && waiting > 0) return { kind: 'blocked', waiting };
   if (!state.online && waiting > 0) return { kind: 'offline', waiting };
   if (waiting > 0 || state.sending || typing > 0) return { kind: 'saving' };

@@ -10,10 +10,12 @@ import type { CompanySettingsRecord, JobRecord, RoomRecord } from '../../../lib/
 import { LiveHomeTotals } from '../../loads/components/live-home-totals';
 import { roomTarget } from '../sync/edits';
 import { overlayJob, overlayRooms } from '../sync/overlay';
+import { usePhotoQueue } from '../sync/photo-queue-context';
 import { useQueueState, useWalkthroughQueue } from '../sync/queue-context';
 import { ConflictPanel } from './conflict-panel';
 import { DesignConditionsForm } from './design-conditions-form';
 import { LiveSaveStatus } from './live-save-status';
+import { PhotoRefusals } from './photo-refusals';
 import { RoomEditor } from './room-editor';
 import { RoomListActions } from './room-list-actions';
 import { RoomTabs } from './room-tabs';
@@ -29,6 +31,7 @@ interface Props {
 /** The walk-through of one job: design conditions, rooms one at a time, live loads. */
 export function WalkthroughView({ job: serverJob, rooms: serverRooms, settings }: Props) {
   const queue = useWalkthroughQueue();
+  const photos = usePhotoQueue();
   const state = useQueueState();
   const rooms = overlayRooms(serverJob.id, serverRooms, state.items);
   const { job } = overlayJob(serverJob, state.items, settings?.defaultDesignConditions ?? null);
@@ -41,6 +44,8 @@ export function WalkthroughView({ job: serverJob, rooms: serverRooms, settings }
   const handleDelete = () => {
     if (!current || !window.confirm(`Delete ${String(current.input.name ?? 'this room')} and its photos?`)) return;
     clearUnsavedDraft(current.id);
+    // The person was asked about the room "and its photos": ones still on the device go too.
+    void photos.discardRoom(current.id);
     void queue.enqueue({ target: roomTarget(current.id), baseVersion: current.version, payload: { kind: 'room-delete', jobId: job.id, roomId: current.id } });
     setSelected(null);
   };
@@ -74,6 +79,8 @@ export function WalkthroughView({ job: serverJob, rooms: serverRooms, settings }
             </Button>
           </Alert>
         ) : null}
+        {/* A refused photo of a room not on screen (or no longer there) is told here. */}
+        <PhotoRefusals show={(n) => n.jobId === job.id && n.roomId !== current?.id} />
 
         <details className="rounded-lg border border-line bg-white p-4" open={job.designConditions === null}>
           <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">Site design conditions</summary>

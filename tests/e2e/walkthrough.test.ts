@@ -35,6 +35,7 @@ async function fillNumber(page: Page, label: string, value: string): Promise<voi
 }
 
 describe('a salesperson walks a home on a phone', () => {
+  // Rooms, windows, a copied room, photos (one taken offline), live loads, a cut network, a reload.
   it('creates a job, enters rooms with windows, adds a photo, sees live loads, and loses nothing offline', async () => {
     if (!salesperson) throw new Error('no demo salesperson');
     const { context, page } = await e.newPage(PHONE);
@@ -95,6 +96,9 @@ describe('a salesperson walks a home on a phone', () => {
     await context.setOffline(true);
     await page.getByLabel('Room name').fill('Kitchen while offline');
     await fillNumber(page, 'Length', '16');
+    // a photo taken with no signal waits on the phone
+    await page.locator('input[type="file"]').setInputFiles({ name: 'kitchen-offline.jpg', mimeType: 'image/jpeg', buffer: jpeg });
+    await page.getByText('waiting to upload').first().waitFor();
     await pill(page).filter({ hasText: /Offline — \d+ changes? waiting/ }).waitFor({ timeout: 20_000 });
     await page.screenshot({ path: `${SHOTS}/walkthrough-offline-375.png` });
     await context.setOffline(false);
@@ -113,6 +117,7 @@ describe('a salesperson walks a home on a phone', () => {
     expect(byName.get('Bedroom east')?.input.exposedWalls[0]?.windows.length).toBe(2);
     expect(byName.get('Bedroom west')?.input.exposedWalls[0]?.windows.length).toBe(2);
     expect(byName.get('Bedroom west')?.photos.length).toBe(1);
+    expect(byName.get('Kitchen while offline')?.photos.length).toBe(1);
     await page.getByRole('button', { name: /Kitchen while offline/ }).click();
     await expect(page.getByLabel('Room name').inputValue()).resolves.toBe('Kitchen while offline');
 

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler, Response } from 'express';
 import { DriverException, ConnectionException, OptimisticLockError, UniqueConstraintViolationException } from '@mikro-orm/core';
 import { ZodError } from 'zod';
+import { CalcError } from '@calc';
 import {
   AppError,
   BadRequestError,
@@ -54,14 +55,14 @@ export function toAppError(err: unknown): AppError | undefined {
   if (err instanceof ConnectionException) return new ServiceUnavailableError();
   if (err instanceof DriverException) {
     // SQLSTATE classes: 22 data exception, 23 integrity violation → the input was wrong, not the server.
-    const sqlState = (err as DriverException & { code?: string }).code ?? '';
+    const sqlState = err.code ?? '';
     if (sqlState.startsWith('22') || sqlState.startsWith('23')) return new BadRequestError('The data does not fit the allowed values.');
     if (sqlState.startsWith('08') || sqlState === '57P01' || sqlState === '53300') return new ServiceUnavailableError();
     return undefined;
   }
-  if (typeof err === 'object' && err !== null && 'name' in err && err.name === 'CalcError') {
-    const message = err instanceof Error ? err.message : 'The values cannot be calculated.';
-    return new AppError(422, 'calc', 'Cannot be calculated', message);
+  if (err instanceof CalcError) {
+    const errors = err.details.map((d) => ({ path: d.path.map(String).join('.'), message: d.message }));
+    return new AppError(422, 'calc', 'Cannot be calculated', err.message, errors.length ? { errors } : {});
   }
   if (isHttpLike(err)) {
     const status = err.status ?? err.statusCode;

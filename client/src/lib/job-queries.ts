@@ -36,10 +36,25 @@ export async function getJob(jobId: string, signal?: AbortSignal) {
 export const jobQueryOptions = (jobId: string) =>
   queryOptions({ queryKey: jobKeys.detail(jobId), queryFn: ({ signal }) => getJob(jobId, signal) });
 
+/**
+ * A refetch that left before this tab's own write landed answers with the older room; keep the
+ * newer version we already hold, so the screen (and the next edit made on it) never goes back.
+ */
+export function keepNewerRooms(old: unknown, fresh: unknown): unknown {
+  if (!Array.isArray(old) || !Array.isArray(fresh)) return fresh;
+  const held = new Map<unknown, unknown>(old.map((r: { id?: unknown }) => [r.id, r]));
+  return fresh.map((r: { id?: unknown; version?: unknown }) => {
+    const mine = held.get(r.id);
+    const newer = typeof mine === 'object' && mine !== null && 'version' in mine && typeof mine.version === 'number' && typeof r.version === 'number' && mine.version > r.version;
+    return newer ? mine : r;
+  });
+}
+
 export const roomsQueryOptions = (jobId: string) =>
   queryOptions({
     queryKey: jobKeys.rooms(jobId),
     queryFn: async ({ signal }) => (await apiFetch(roomsPath(jobId), { schema: roomsResponse, signal })).rooms,
+    structuralSharing: keepNewerRooms,
   });
 
 export const companySettingsQueryOptions = () =>

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import sharp from 'sharp';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, onTestFailed } from 'vitest';
 import { demoAccounts } from '../../fixtures/seed';
 import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
 
@@ -39,6 +39,18 @@ describe('a salesperson walks a home on a phone', () => {
   it('creates a job, enters rooms with windows, adds a photo, sees live loads, and loses nothing offline', async () => {
     if (!salesperson) throw new Error('no demo salesperson');
     const { context, page } = await e.newPage(PHONE);
+    // Room writes and browser errors, printed only if the journey fails, to tell what went out.
+    const t0 = Date.now();
+    const trail: string[] = [];
+    const note = (line: string) => trail.push(`${String(Date.now() - t0).padStart(6)} ms ${line}`);
+    page.on('request', (r) => {
+      if (r.url().includes('/rooms') && r.method() !== 'GET') note(`→ ${r.method()} …${r.url().slice(-14)} ${(r.postData() ?? '').match(/"name":"[^"]*"/)?.[0] ?? ''} If-Match ${r.headers()['if-match'] ?? '-'}`);
+    });
+    page.on('response', (r) => {
+      if (r.url().includes('/rooms')) note(`← ${r.status()} ${r.request().method()} …${r.url().slice(-14)}`);
+    });
+    page.on('console', (m) => note(`console.${m.type()}: ${m.text()}`));
+    onTestFailed(() => console.log(`room writes during the journey:\n${trail.join('\n')}`));
     await signIn(page, salesperson.email, salesperson.password);
     await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
 
@@ -73,6 +85,7 @@ describe('a salesperson walks a home on a phone', () => {
 
     // Room 2: a bedroom with one more window on its wall
     await addRoom(page, 'Bedroom');
+    note(`added bedroom; editor shows ${await page.getByLabel('Room name').inputValue()}`);
     await page.getByLabel('Room name').fill('Bedroom east');
     await page.getByRole('button', { name: 'Add window' }).first().click();
     await page.getByLabel('Window width').last().fill('30');
@@ -81,6 +94,7 @@ describe('a salesperson walks a home on a phone', () => {
 
     // Room 3: a copy of the previous room, renamed
     await page.getByRole('button', { name: 'Copy previous room' }).click();
+    note(`copied; editor shows ${await page.getByLabel('Room name').inputValue()}`);
     await page.getByLabel('Room name').fill('Bedroom west');
     await waitSaved(page);
 

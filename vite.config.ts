@@ -55,10 +55,6 @@ export default defineConfig({
           environment: 'node',
           execArgv: ['--import', 'tsx'],
           fileParallelism: false,
-          // The phone journey has lost the first rename after a room create in 2 of ~10 full-suite
-          // runs under load (open bug, see DEVELOPERS.md); each failed attempt prints its room-write
-          // trail. Retries keep one intermittent failure from blocking the suite while it is chased.
-          retry: 2,
           testTimeout: 120_000,
           hookTimeout: 120_000,
         },

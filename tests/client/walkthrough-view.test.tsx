@@ -3,8 +3,19 @@ import { describe, expect, it } from 'vitest';
 import { WalkthroughView } from '../../client/src/features/walkthrough/components/walkthrough-view';
 import { roomTarget, type WalkthroughEdit } from '../../client/src/features/walkthrough/sync/edits';
 import { overlayRooms } from '../../client/src/features/walkthrough/sync/overlay';
+import { jobKeys } from '../../client/src/lib/job-queries';
 import type { QueueItem } from '../../client/src/lib/offline-queue';
+import { createQueryClient } from '../../client/src/lib/query-client';
 import { bedroomInput, JOB_ID, jobRecord, renderWalkthrough, ROOM_ID, roomRecord } from './helpers/walkthrough-harness';
+
+/** A query cache holding what the server returned: the job and one saved bedroom. */
+function seeded() {
+  const queryClient = createQueryClient();
+  queryClient.setQueryData(jobKeys.detail(JOB_ID), jobRecord());
+  queryClient.setQueryData(jobKeys.rooms(JOB_ID), [roomRecord(bedroomInput, 3)]);
+  queryClient.setQueryData(jobKeys.settings(), { unitSystem: 'imperial', defaultDesignConditions: null, version: 1, updatedAt: null });
+  return queryClient;
+}
 
 const NEW_ID = '33333333-3333-4333-8333-333333333333';
 const item = (seq: number, payload: WalkthroughEdit, baseVersion: number | null): QueueItem<WalkthroughEdit> => ({
@@ -24,7 +35,7 @@ describe('walk-through after a reload', () => {
   });
 
   it('shows every value typed before the reload and says the changes are waiting', async () => {
-    await renderWalkthrough(<WalkthroughView job={jobRecord()} rooms={[roomRecord(bedroomInput, 3)]} settings={null} />, { stored: waiting, online: () => false });
+    await renderWalkthrough(<WalkthroughView jobId={JOB_ID} />, { queryClient: seeded(),  stored: waiting, online: () => false });
     const tabs = await screen.findByRole('list', { name: 'Rooms' });
     expect(within(tabs).getAllByRole('button').map((b) => b.textContent)).toEqual(['Primary bedroom (not yet saved)', 'Nursery (not yet saved)']);
     expect(screen.getByLabelText('Room name')).toHaveValue('Primary bedroom');
@@ -35,7 +46,7 @@ describe('walk-through after a reload', () => {
 
 describe('adding rooms', () => {
   it('copies the previous room and adds one from a template', async () => {
-    const { queue } = await renderWalkthrough(<WalkthroughView job={jobRecord()} rooms={[roomRecord(bedroomInput, 3)]} settings={null} />, { online: () => false });
+    const { queue } = await renderWalkthrough(<WalkthroughView jobId={JOB_ID} />, { queryClient: seeded(),  online: () => false });
     fireEvent.click(await screen.findByRole('button', { name: 'Copy previous room' }));
     await waitFor(() => expect(screen.getByLabelText('Room name')).toHaveValue('Bedroom 2 (copy)'));
     expect(screen.getAllByLabelText('Wall length')).toHaveLength(1);

@@ -57,6 +57,8 @@ interface RenderOptions {
   stored?: readonly QueueItem<WalkthroughEdit>[];
   /** Waiting photos (memory): pass the same storage twice to stand for a reload. */
   photoStorage?: PhotoStorage;
+  /** Where the memory router starts (for a route component that reads its params). */
+  path?: string;
 }
 
 export async function renderWalkthrough(ui: ReactNode, options: RenderOptions = {}) {
@@ -71,7 +73,7 @@ export async function renderWalkthrough(ui: ReactNode, options: RenderOptions = 
     <QueryClientProvider client={queryClient}>
       <WalkthroughQueueProvider queue={queue}>
         <PhotoQueueProvider queue={photoQueue}>
-          <MemoryRouter>
+          <MemoryRouter initialEntries={[options.path ?? '/']}>
             <Suspense fallback="loading">{ui}</Suspense>
           </MemoryRouter>
         </PhotoQueueProvider>

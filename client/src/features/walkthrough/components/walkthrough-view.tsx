@@ -1,3 +1,4 @@
+import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
@@ -6,7 +7,7 @@ import { Button, buttonClass } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Spinner } from '../../../components/ui/spinner';
 import { jobPaths } from '../../../lib/job-paths';
-import type { CompanySettingsRecord, JobRecord, RoomRecord } from '../../../lib/job-records';
+import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../../../lib/job-queries';
 import { LiveHomeTotals } from '../../loads/components/live-home-totals';
 import { roomTarget } from '../sync/edits';
 import { overlayJob, overlayRooms } from '../sync/overlay';
@@ -22,17 +23,23 @@ import { RoomTabs } from './room-tabs';
 import { UnitSystemContext } from './unit-system';
 import { clearUnsavedDraft } from '../sync/unsaved-drafts';
 
-interface Props {
-  job: JobRecord;
-  rooms: readonly RoomRecord[];
-  settings: CompanySettingsRecord | null;
-}
-
-/** The walk-through of one job: design conditions, rooms one at a time, live loads. */
-export function WalkthroughView({ job: serverJob, rooms: serverRooms, settings }: Props) {
+/**
+ * The walk-through of one job: design conditions, rooms one at a time, live loads.
+ *
+ * The server's records and the queue are read in this one component on purpose: when a write
+ * lands, the query cache gains the record a moment before the queue drops the edit, and a
+ * render that saw the new queue with older records handed down from a parent would lose the
+ * room for one frame — the editor would show another room and remount, dropping the focus
+ * and whatever was being typed. Both reads here see the same moment.
+ */
+export function WalkthroughView({ jobId }: { jobId: string }) {
   const queue = useWalkthroughQueue();
   const photos = usePhotoQueue();
   const state = useQueueState();
+  const serverJob = useSuspenseQuery(jobQueryOptions(jobId)).data;
+  const serverRooms = useSuspenseQuery(roomsQueryOptions(jobId)).data;
+  // Settings only change units and defaults; the walk-through works without them.
+  const settings = useQuery(companySettingsQueryOptions()).data ?? null;
   const rooms = overlayRooms(serverJob.id, serverRooms, state.items);
   const { job } = overlayJob(serverJob, state.items, settings?.defaultDesignConditions ?? null);
   const [selected, setSelected] = useState<string | null>(null);

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { isApiError } from '../../../lib/api-error';
-import { jobKeys } from '../../../lib/job-queries';
+import { jobKeys, roomsQueryOptions } from '../../../lib/job-queries';
 import type { JobRecord, RoomRecord } from '../../../lib/job-records';
 import type { SendResult } from '../../../lib/offline-queue';
 import { createRoom } from '../api/create-room';
@@ -10,12 +10,32 @@ import { updateJob } from '../api/update-job';
 import { updateRoom } from '../api/update-room';
 import type { WalkthroughItem } from './edits';
 
-function putRoom(queryClient: QueryClient, room: RoomRecord): void {
-  queryClient.setQueryData<RoomRecord[]>(jobKeys.rooms(room.jobId), (rooms) => {
-    if (!rooms) return [room];
-    return rooms.some((r) => r.id === room.id) ? rooms.map((r) => (r.id === room.id ? room : r)) : [...rooms, room];
-  });
+type RoomsChange = (rooms: RoomRecord[]) => RoomRecord[];
+
+/**
+ * Lays a write's answer over the rooms list the screen holds, so that no fetch answered before
+ * the write can put the older list back (a new room missing, a deleted one still there):
+ * - a list is held: a refetch still on its way is cancelled first, then the answer goes in;
+ * - no list yet (or its first fetch is on its way): the answer waits for the server's whole
+ *   list instead of making up a list of one room, then goes in.
+ */
+async function changeRooms(queryClient: QueryClient, jobId: string, change: RoomsChange): Promise<void> {
+  const key = jobKeys.rooms(jobId);
+  const apply = () => queryClient.setQueryData<RoomRecord[]>(key, (rooms) => (rooms ? change(rooms) : rooms));
+  if (queryClient.getQueryData(key) === undefined) {
+    void queryClient.fetchQuery(roomsQueryOptions(jobId)).then(apply, () => undefined);
+    return;
+  }
+  await queryClient.cancelQueries({ queryKey: key, exact: true });
+  apply();
 }
+
+/** The room as the server answered, unless the list already holds a newer version of it. */
+const withRoom = (room: RoomRecord): RoomsChange => (rooms) => {
+  const held = rooms.find((r) => r.id === room.id);
+  if (!held) return [...rooms, room];
+  return held.version > room.version ? rooms : rooms.map((r) => (r.id === room.id ? room : r));
+};
 
 function afterWrite(queryClient: QueryClient, jobId: string): void {
   // The server's loads and the jobs list (last activity) are now out of date; refetch lazily.
@@ -48,13 +68,13 @@ export function createEditSender(queryClient: QueryClient) {
           if (isApiError(e) && e.status === 409) return getRoom(edit.jobId, edit.roomId);
           throw e;
         });
-        putRoom(queryClient, room);
+        await changeRooms(queryClient, edit.jobId, withRoom(room));
         afterWrite(queryClient, edit.jobId);
         return { kind: 'ok', version: room.version };
       }
       if (edit.kind === 'room-update') {
         const room = await updateRoom(edit.jobId, edit.roomId, item.baseVersion, edit.input);
-        putRoom(queryClient, room);
+        await changeRooms(queryClient, edit.jobId, withRoom(room));
         afterWrite(queryClient, edit.jobId);
         return { kind: 'ok', version: room.version };
       }
@@ -62,7 +82,7 @@ export function createEditSender(queryClient: QueryClient) {
         await deleteRoom(edit.jobId, edit.roomId, item.baseVersion).catch((e: unknown) => {
           if (!(isApiError(e) && e.status === 404)) throw e;
         });
-        queryClient.setQueryData<RoomRecord[]>(jobKeys.rooms(edit.jobId), (rooms) => rooms?.filter((r) => r.id !== edit.roomId));
+        await changeRooms(queryClient, edit.jobId, (rooms) => rooms.filter((r) => r.id !== edit.roomId));
         afterWrite(queryClient, edit.jobId);
         return { kind: 'ok', version: null };
       }

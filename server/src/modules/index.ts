@@ -5,6 +5,7 @@ import { authRoutes } from './auth/auth.routes';
 import { createLoginLimiter } from './auth/rate-limit';
 import { outboxRoutes } from './dev/outbox.routes';
 import { healthRoutes } from './health/health.routes';
+import { staffRoutes } from './users/staff.routes';
 import { userRoutes } from './users/user.routes';
 import { companySettingsRoutes } from './company-settings/company-settings.routes';
 import { customerRoutes } from './customers/customer.routes';
@@ -24,6 +25,7 @@ export function mountModules(app: Express, services: Services): void {
   mount('/health', healthRoutes);
   mount('/auth', (api) => authRoutes(api, limiter));
   mount('/users', userRoutes);
+  mount('/staff', staffRoutes);
   mount('/dev', outboxRoutes);
   mount('/company', companySettingsRoutes);
   mount('/customers', customerRoutes);

@@ -10,6 +10,7 @@ import { useSignedIn } from '../../features/auth/api/get-me';
 import { useSignOut } from '../../features/auth/api/sign-out';
 import { useOutboxAvailable } from '../../features/outbox/api/get-outbox';
 import { NOTICE_NOT_ALLOWED, requireUser } from '../guards';
+import { ViewerContext } from '../../lib/viewer';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -41,14 +42,17 @@ export default function AppRoot() {
   const { user, company } = useSignedIn();
   const signOut = useSignOut();
   const outbox = useOutboxAvailable(user.role === 'owner');
+  const viewer = useMemo(() => ({ id: user.id, role: user.role }), [user.id, user.role]);
   const features = useMemo<ReadonlySet<Feature>>(() => new Set(outbox ? ['outbox'] : []), [outbox]);
 
   return (
     <AppShell user={user} companyName={company.name} features={features} signingOut={signOut.isPending} onSignOut={() => signOut.mutate()}>
       <RoleNotice />
-      <Suspense fallback={<Spinner />}>
-        <Outlet />
-      </Suspense>
+      <ViewerContext.Provider value={viewer}>
+        <Suspense fallback={<Spinner />}>
+          <Outlet />
+        </Suspense>
+      </ViewerContext.Provider>
     </AppShell>
   );
 }

@@ -44,3 +44,18 @@ export function fromDisplay(q: Quantity, system: UnitSystem, value: number): num
   if (q === 'plain' || system === 'imperial') return value;
   return conversions[q].fromMetric(value);
 }
+
+/**
+ * calc's bound messages are written once, in canonical units ("Length must be between 1 and
+ * 200 ft", see calc/src/schemas/fields.ts `bounded`). A metric company reads them in its own
+ * units: both bounds are converted and rounded as the field's value is shown. Any other message
+ * passes through unchanged.
+ */
+export function localiseBound(message: string | undefined, q: Quantity, system: UnitSystem): string | undefined {
+  if (message === undefined || q === 'plain' || system === 'imperial') return message;
+  const c = conversions[q];
+  const m = /^(.*) must be between (-?\d+(?:\.\d+)?) and (-?\d+(?:\.\d+)?) (\S+)$/.exec(message);
+  if (!m || m[4] !== c.imperial) return message;
+  const [, label, lo, hi] = m;
+  return `${label} must be between ${toDisplay(q, system, Number(lo))} and ${toDisplay(q, system, Number(hi))} ${c.metric}`;
+}

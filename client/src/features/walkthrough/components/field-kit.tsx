@@ -1,5 +1,5 @@
 import { useEffect, useId, useState, type ReactNode } from 'react';
-import { fromDisplay, toDisplay, unitLabel, type Quantity } from '../../../lib/unit-display';
+import { fromDisplay, localiseBound, toDisplay, unitLabel, type Quantity } from '../../../lib/unit-display';
 import { useUnitSystem } from './unit-system';
 
 export const inputClass =
@@ -56,9 +56,10 @@ const format = (v: number | undefined) => (v === undefined || Number.isNaN(v) ? 
  * text → NaN, so calc's schema says what is wrong. Keeps the typed text while it parses
  * to the same number ("8." stays "8.").
  */
-export function NumberInput({ label, value, onChange, quantity = 'plain', unit = '', error, hint, integer = false }: NumberProps) {
+export function NumberInput({ label, value, onChange, quantity = 'plain', unit = '', error: canonicalError, hint, integer = false }: NumberProps) {
   const id = useId();
   const system = useUnitSystem();
+  const error = localiseBound(canonicalError, quantity, system);
   const shown = value === undefined || Number.isNaN(value) ? value : toDisplay(quantity, system, value);
   const [text, setText] = useState(format(shown));
   useEffect(() => {

@@ -1,5 +1,6 @@
 import { ANY_STAFF, roles, type ApiRouter } from '../../lib/route';
 import { findJob } from './job-access';
+import { deleteJob } from './job-delete';
 import { presentJob } from './job.presenter';
 import { createJobSchema, jobIdParams, listJobsQuery, updateJobSchema } from './job.schema';
 import { createJob, listJobs, updateJob } from './job.service';
@@ -52,6 +53,17 @@ export function jobRoutes(api: ApiRouter): void {
       const job = await updateJob(em, actor, services.clock, params.id, ifMatchVersion(req), body);
       setEtag(res, job.version);
       return { job: presentJob(job) };
+    },
+  });
+  api.route({
+    method: 'delete',
+    path: '/:id',
+    policy: EDITORS,
+    params: jobIdParams,
+    handler: async ({ em, actor, params, services, req, res }) => {
+      await deleteJob(em, actor, services.storage, params.id, ifMatchVersion(req));
+      res.status(204).end();
+      return undefined;
     },
   });
 }

@@ -1,0 +1,31 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useNavigate } from 'react-router-dom';
+import { z } from 'zod';
+import { jobPaths } from '../../../lib/job-paths';
+import { jobKeys, jobPath } from '../../../lib/job-queries';
+import type { JobRecord } from '../../../lib/job-records';
+import { versionedFetch } from '../../../lib/versioned-request';
+
+/** DELETE /api/jobs/:jobId, If-Match: the version the person saw. Rooms and photos go with it. */
+export async function deleteJob(jobId: string, version: number) {
+  await versionedFetch(jobPath(jobId), { method: 'DELETE', version, schema: z.undefined() });
+}
+
+/**
+ * Deletes the job, then leaves its screen. The job's queries are dropped only once the jobs list
+ * is showing: dropped while the walk-through is still mounted (a data router waits for the next
+ * page's loader first), any re-render there would fetch the deleted job again and show a 404.
+ * The callbacks sit on the hook, not on mutate(), so they still run once this screen unmounts.
+ */
+export function useDeleteJob() {
+  const queryClient = useQueryClient();
+  const navigate = useNavigate();
+  return useMutation({
+    mutationFn: (job: Pick<JobRecord, 'id' | 'version'>) => deleteJob(job.id, job.version),
+    onSuccess: async (_answer, job) => {
+      await queryClient.invalidateQueries({ queryKey: jobKeys.lists() });
+      await navigate(jobPaths.list, { replace: true });
+      queryClient.removeQueries({ queryKey: jobKeys.detail(job.id) });
+    },
+  });
+}

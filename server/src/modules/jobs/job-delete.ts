@@ -1,0 +1,42 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { ConflictError } from '../../lib/errors';
+import type { Actor } from '../../lib/route';
+import type { Storage } from '../../services/storage';
+import { PhotoSchema } from '../photos/photo.entity';
+import { RoomSchema } from '../rooms/room.entity';
+import { findJob } from './job-access';
+import { JobSchema, type JobStatus } from './job.entity';
+import { presentJob } from './job.presenter';
+import { assertVersion } from './version-lock';
+
+/** Only a job made by mistake goes: from proposed on, the reports count it (won/lost), so it stays. */
+export const DELETABLE_STATUSES: readonly JobStatus[] = ['walkthrough', 'design'];
+
+function notDeletable(status: JobStatus): ConflictError {
+  const instead = status === 'proposed' ? 'mark it lost instead' : 'won, lost and installed jobs stay for the reports';
+  return new ConflictError(`Only a job still in walk-through or design can be deleted (this one is ${status}); ${instead}.`);
+}
+
+/**
+ * Deletes a job with its rooms and photos; the customer stays (they may have other jobs).
+ * Who may: the policy keeps installers out, and findJob's scope leaves a salesperson only their own jobs.
+ * Photos, then rooms, then the job, so a photo upload racing this waits on its room instead of
+ * deadlocking on the job row; the job goes only at the version the person saw.
+ */
+export async function deleteJob(em: EntityManager, actor: Actor, storage: Storage, id: string, version: number): Promise<void> {
+  const keys = await em.transactional(async (tx) => {
+    const job = await findJob(tx, actor, id);
+    assertVersion(version, job.version, 'The job', () => presentJob(job));
+    if (!DELETABLE_STATUSES.includes(job.status)) throw notDeletable(job.status);
+    const photos = await tx.find(PhotoSchema, { room: { job: job.id } });
+    if (photos.length) await tx.nativeDelete(PhotoSchema, { id: { $in: photos.map((p) => p.id) } });
+    await tx.nativeDelete(RoomSchema, { job: job.id });
+    // A change saved since the read above (status, details) bumped the version: refuse rather than delete it unseen.
+    if ((await tx.nativeDelete(JobSchema, { id: job.id, version })) === 0) {
+      throw new ConflictError('The job was changed by someone else while it was being deleted. Reload it and try again.');
+    }
+    return photos.map((p) => p.storageKey);
+  });
+  // Files go after the rows are gone: a failed delete leaves an orphan file, never a row without its file.
+  await Promise.all(keys.map((k) => storage.delete(k).catch(() => undefined)));
+}

@@ -9,8 +9,13 @@ import type { JobRecord } from '../../client/src/lib/job-records';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { clearVersionedCsrfToken } from '../../client/src/lib/versioned-request';
 import { ViewerContext, type Viewer } from '../../client/src/lib/viewer';
+import { roomTarget, type WalkthroughEdit } from '../../client/src/features/walkthrough/sync/edits';
+import { createPhotoQueue, PhotoQueueProvider } from '../../client/src/features/walkthrough/sync/photo-queue-context';
+import { memoryPhotoStorage } from '../../client/src/features/walkthrough/sync/photo-storage';
+import { WalkthroughQueueProvider } from '../../client/src/features/walkthrough/sync/queue-context';
+import type { QueueItem } from '../../client/src/lib/offline-queue';
 import { headerOf, json, mockFetch, problem } from './helpers/fetch-mock';
-import { JOB_ID, jobRecord } from './helpers/walkthrough-harness';
+import { JOB_ID, jobRecord, ROOM_ID, testQueue } from './helpers/walkthrough-harness';
 
 beforeEach(() => {
   clearCsrfToken();
@@ -28,20 +33,29 @@ function answerConfirm(yes: boolean) {
 const OWNER: Viewer = { id: 'u-owner', role: 'owner' };
 const filters = { search: '', status: '', page: 1, pageSize: 25 };
 
-function renderButton(job: JobRecord, viewer: Viewer, queryClient: QueryClient = createQueryClient()) {
+function renderButton(job: JobRecord, viewer: Viewer, queryClient: QueryClient = createQueryClient(), stored: readonly QueueItem<WalkthroughEdit>[] = [], photoStorage = memoryPhotoStorage()) {
+  // Offline queues on memory storage, holding what the test says is waiting on the device.
+  const { queue } = testQueue(queryClient, async () => ({ kind: 'network' }), () => false, stored);
+  const photos = createPhotoQueue(queryClient, queue, { storage: photoStorage, isOnline: () => false, retryMs: 0 });
+  void queue.start();
+  void photos.start();
   render(
     <QueryClientProvider client={queryClient}>
-      <ViewerContext.Provider value={viewer}>
-        <MemoryRouter initialEntries={[`/jobs/${job.id}`]}>
-          <Routes>
-            <Route path="/jobs" element={<p>Jobs list</p>} />
-            <Route path="/jobs/:jobId" element={<DeleteJobButton job={job} />} />
-          </Routes>
-        </MemoryRouter>
-      </ViewerContext.Provider>
+      <WalkthroughQueueProvider queue={queue}>
+        <PhotoQueueProvider queue={photos}>
+          <ViewerContext.Provider value={viewer}>
+            <MemoryRouter initialEntries={[`/jobs/${job.id}`]}>
+              <Routes>
+                <Route path="/jobs" element={<p>Jobs list</p>} />
+                <Route path="/jobs/:jobId" element={<DeleteJobButton job={job} />} />
+              </Routes>
+            </MemoryRouter>
+          </ViewerContext.Provider>
+        </PhotoQueueProvider>
+      </WalkthroughQueueProvider>
     </QueryClientProvider>,
   );
-  return queryClient;
+  return Object.assign(queryClient, { edits: queue, photos });
 }
 
 describe('DeleteJobButton', () => {
@@ -114,5 +128,35 @@ describe('DeleteJobButton', () => {
     expect(screen.queryByText('Jobs list')).not.toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Delete job' })).toBeEnabled();
     expect(queryClient.getQueryData(jobKeys.detail(JOB_ID))).toEqual(job);
+  });
+
+  it('drops what of this job still waits on the device — edits, a conflict, photos — and nothing of other jobs', async () => {
+    mockFetch({ 'GET /api/auth/csrf': json(200, { token: 't' }), [`DELETE /api/jobs/${JOB_ID}`]: { status: 204 } });
+    answerConfirm(true);
+    const OTHER_JOB = '55555555-5555-4555-8555-555555555555';
+    const item = (id: string, jobId: string): QueueItem<WalkthroughEdit> => ({
+      id, seq: Number(id.slice(1)), target: roomTarget(`${jobId}-room`), baseVersion: 1, queuedAt: '2026-01-01T00:00:00.000Z',
+      payload: { kind: 'room-update', jobId, roomId: `${jobId}-room`, input: { name: 'Den' } },
+    });
+    const photoStorage = memoryPhotoStorage();
+    const photo = (id: string, jobId: string) => ({ id, seq: 1, jobId, roomId: ROOM_ID, fileName: 'den.jpg', blob: new Blob(['x'], { type: 'image/jpeg' }), queuedAt: '2026-01-01T00:00:00.000Z' });
+    await photoStorage.put(photo('p-this', JOB_ID));
+    await photoStorage.put(photo('p-other', OTHER_JOB));
+    const job = jobRecord();
+    const q = renderButton(job, OWNER, createQueryClient(), [item('e1', JOB_ID), item('e2', OTHER_JOB)], photoStorage);
+    await waitFor(() => expect(q.photos.getSnapshot().waiting).toHaveLength(2));
+
+    fireEvent.click(screen.getByRole('button', { name: 'Delete job' }));
+    expect(await screen.findByText('Jobs list')).toBeInTheDocument();
+    expect(q.edits.getSnapshot().items.map((i) => i.id)).toEqual(['e2']);
+    expect(photoStorage.ids()).toEqual(['p-other']);
+  });
+
+  it('a job already deleted elsewhere (404) counts as done', async () => {
+    mockFetch({ 'GET /api/auth/csrf': json(200, { token: 't' }), [`DELETE /api/jobs/${JOB_ID}`]: problem(404, 'not-found', 'The job was not found.') });
+    answerConfirm(true);
+    renderButton(jobRecord(), OWNER);
+    fireEvent.click(screen.getByRole('button', { name: 'Delete job' }));
+    expect(await screen.findByText('Jobs list')).toBeInTheDocument();
   });
 });

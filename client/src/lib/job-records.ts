@@ -19,10 +19,44 @@ export const jobStatusLabels: Record<JobStatus, string> = {
   installed: 'Installed',
 };
 
+/**
+ * The moves a person may make by hand, as the server allows them (job.service.ts TRANSITIONS;
+ * the server decides, this only offers the buttons), with the words on each button.
+ */
+export const JOB_STATUS_MOVES: Record<JobStatus, readonly JobStatus[]> = {
+  walkthrough: ['design', 'lost'],
+  design: ['walkthrough', 'proposed', 'lost'],
+  proposed: ['design', 'won', 'lost'],
+  won: ['installed'],
+  lost: ['walkthrough', 'design'],
+  installed: [],
+};
+export const moveLabels: Record<JobStatus, string> = {
+  walkthrough: 'Back to walk-through',
+  design: 'Move to design',
+  proposed: 'Mark proposed',
+  won: 'Mark won',
+  lost: 'Mark lost',
+  installed: 'Mark installed',
+};
+
 const person = z.object({ id: z.string(), name: z.string() }).nullable();
 export const DESIGN_VALUE_SOURCES = ['entered', 'company-default', 'standard-default'] as const;
 export type DesignValueSource = (typeof DESIGN_VALUE_SOURCES)[number];
 const designSource = z.object({ source: z.enum(DESIGN_VALUE_SOURCES), note: z.string() });
+
+export const customerRecord = z.object({
+  id: z.string(),
+  name: z.string(),
+  email: z.string().nullable(),
+  phone: z.string().nullable(),
+  notes: z.string(),
+  createdAt: z.string(),
+  updatedAt: z.string(),
+});
+export type CustomerRecord = z.output<typeof customerRecord>;
+
+export const customerResponse = z.object({ customer: customerRecord });
 
 export const jobRecord = z.object({
   id: z.string(),

@@ -189,6 +189,17 @@ export class OfflineQueue<P> {
     void this.flush();
   }
 
+  /**
+   * Drops every waiting edit `match` picks, when what they were for is gone (the person deleted
+   * it and was told so); a conflict about one of them is closed too, so the queue moves on.
+   */
+  async discard(match: (item: QueueItem<P>) => boolean): Promise<void> {
+    const keep = this.state.items.filter((i) => i.id === this.inFlight || !match(i));
+    if (this.state.conflict && match(this.state.conflict)) this.update({ conflict: null });
+    await this.setItems(keep);
+    void this.flush();
+  }
+
   dismissRejected(): void {
     this.update({ rejected: null });
   }

@@ -15,7 +15,7 @@ import type { CreateJobInput, ListJobsQuery, UpdateJobInput } from './job.schema
 import { assertVersion } from './version-lock';
 
 /** Moves a person may make by hand; later issues add the proposal-driven ones. */
-const TRANSITIONS: Record<JobStatus, readonly JobStatus[]> = {
+export const TRANSITIONS: Record<JobStatus, readonly JobStatus[]> = {
   walkthrough: ['design', 'lost'],
   design: ['walkthrough', 'proposed', 'lost'],
   proposed: ['design', 'won', 'lost'],

@@ -15,6 +15,7 @@ import { usePhotoQueue } from '../sync/photo-queue-context';
 import { useQueueState, useWalkthroughQueue } from '../sync/queue-context';
 import { ConflictPanel } from './conflict-panel';
 import { DesignConditionsForm } from './design-conditions-form';
+import { JobDetailsPanel } from './job-details-panel';
 import { LiveSaveStatus } from './live-save-status';
 import { PhotoRefusals } from './photo-refusals';
 import { RoomEditor } from './room-editor';
@@ -88,6 +89,10 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
         ) : null}
         {/* A refused photo of a room not on screen (or no longer there) is told here. */}
         <PhotoRefusals show={(n) => n.jobId === job.id && n.roomId !== current?.id} />
+
+        <QueryWidgetBoundary name="the job details">
+          <JobDetailsPanel job={serverJob} />
+        </QueryWidgetBoundary>
 
         <details className="rounded-lg border border-line bg-white p-4" open={job.designConditions === null}>
           <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">Site design conditions</summary>

@@ -117,6 +117,12 @@ export class PhotoQueue {
     await this.options.storage.remove(id).catch(() => undefined);
   }
 
+  /** The person deleted the whole job (and was told its photos go with it). */
+  async discardJob(jobId: string): Promise<void> {
+    await Promise.all(this.state.waiting.filter((p) => p.jobId === jobId).map((p) => this.remove(p.id)));
+    this.update({ notices: this.state.notices.filter((n) => n.jobId !== jobId) });
+  }
+
   /** The person deleted the room (and was told its photos go with it). */
   async discardRoom(roomId: string): Promise<void> {
     await Promise.all(this.list(roomId).map((p) => this.remove(p.id)));

@@ -1,0 +1,58 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { z } from 'zod';
+import { apiFetch } from '../../../lib/api-client';
+import { jobKeys, jobPath } from '../../../lib/job-queries';
+import { customerResponse, jobResponse, type JobStatus } from '../../../lib/job-records';
+import { versionedFetch } from '../../../lib/versioned-request';
+import { ROLES } from '../../../config/roles';
+
+/** What the job details form changes on the job itself (the site, notes, who it belongs to, status). */
+export interface JobDetailsChanges {
+  readonly street?: string;
+  readonly unit?: string;
+  readonly city?: string;
+  readonly region?: string;
+  readonly postalCode?: string;
+  readonly notes?: string;
+  readonly salespersonId?: string;
+  readonly assignedInstallerId?: string | null;
+  readonly status?: JobStatus;
+}
+
+/** PATCH /api/jobs/:id straight away (not through the walk-through queue): a button the person waits on. */
+export async function saveJobDetails(jobId: string, version: number, changes: JobDetailsChanges) {
+  return (await versionedFetch(jobPath(jobId), { method: 'PATCH', version, body: changes, schema: jobResponse })).job;
+}
+
+export interface CustomerChanges {
+  readonly name?: string;
+  readonly email?: string | null;
+  readonly phone?: string | null;
+}
+
+export async function saveCustomer(customerId: string, changes: CustomerChanges) {
+  return (await apiFetch(`/api/customers/${encodeURIComponent(customerId)}`, { method: 'PATCH', body: changes, schema: customerResponse })).customer;
+}
+
+export const customerQueryOptions = (customerId: string) =>
+  queryOptions({
+    queryKey: [...jobKeys.all, 'customer', customerId] as const,
+    queryFn: async ({ signal }) => (await apiFetch(`/api/customers/${encodeURIComponent(customerId)}`, { schema: customerResponse, signal })).customer,
+  });
+
+export function useCustomer(customerId: string, enabled: boolean) {
+  return useQuery({ ...customerQueryOptions(customerId), enabled });
+}
+
+const staffResponse = z.object({ staff: z.array(z.object({ id: z.string(), name: z.string(), role: z.enum(ROLES) })) });
+export type StaffMember = z.output<typeof staffResponse>['staff'][number];
+
+/** GET /api/staff — owner and estimator only; the people a job can be handed to. */
+export function useStaff(enabled: boolean) {
+  return useQuery({
+    queryKey: ['staff'] as const,
+    queryFn: async ({ signal }) => (await apiFetch('/api/staff', { schema: staffResponse, signal })).staff,
+    staleTime: 5 * 60_000,
+    enabled,
+  });
+}

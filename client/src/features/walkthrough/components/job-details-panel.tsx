@@ -1,0 +1,237 @@
+import { useQueryClient } from '@tanstack/react-query';
+import { useRef, useState } from 'react';
+import { z } from 'zod';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { Form } from '../../../components/ui/form';
+import { SelectField, SubmitButton, TextField } from '../../../components/ui/form-fields';
+import { Spinner } from '../../../components/ui/spinner';
+import { ApiError, errorMessage, isApiError } from '../../../lib/api-error';
+import { customerFields, siteFields } from '../../../lib/job-fields';
+import { jobKeys } from '../../../lib/job-queries';
+import { JOB_STATUS_MOVES, jobStatusLabels, moveLabels, type CustomerRecord, type JobRecord, type JobStatus } from '../../../lib/job-records';
+import { isOffice, useViewer } from '../../../lib/viewer';
+import { customerQueryOptions, saveCustomer, saveJobDetails, useCustomer, useStaff, type JobDetailsChanges, type StaffMember } from '../api/job-details';
+import { useWalkthroughQueue } from '../sync/queue-context';
+import { DeleteJobButton } from './delete-job-button';
+
+const detailsSchema = z.object({
+  ...customerFields,
+  customerName: customerFields.customerName.min(1, { message: 'Enter the customer name.' }),
+  ...siteFields,
+  salespersonId: z.string(),
+  assignedInstallerId: z.string(),
+});
+type DetailsInput = z.input<typeof detailsSchema>;
+type DetailsValues = z.output<typeof detailsSchema>;
+
+/** Customer field errors come back as name/email/phone; the form calls them customerX. */
+const customerField: Record<string, string> = { name: 'customerName', email: 'customerEmail', phone: 'customerPhone' };
+
+function valuesOf(job: JobRecord, customer: CustomerRecord): DetailsInput {
+  return {
+    customerName: customer.name, customerEmail: customer.email ?? '', customerPhone: customer.phone ?? '',
+    street: job.site.street, unit: job.site.unit, city: job.site.city, region: job.site.region, postalCode: job.site.postalCode,
+    notes: job.notes, salespersonId: job.salesperson?.id ?? '', assignedInstallerId: job.assignedInstaller?.id ?? '',
+  };
+}
+
+/** Only what the person changed goes out, so a field someone else changed meanwhile is left alone. */
+function jobChanges(job: JobRecord, v: DetailsValues, office: boolean): JobDetailsChanges {
+  const out: Record<string, string | null> = {};
+  const site = { street: job.site.street, unit: job.site.unit, city: job.site.city, region: job.site.region, postalCode: job.site.postalCode, notes: job.notes };
+  for (const [k, before] of Object.entries(site)) {
+    const now = v[k as keyof typeof site];
+    if (now !== before) out[k] = now;
+  }
+  if (office && v.salespersonId && v.salespersonId !== (job.salesperson?.id ?? '')) out.salespersonId = v.salespersonId;
+  if (office && v.assignedInstallerId !== (job.assignedInstaller?.id ?? '')) out.assignedInstallerId = v.assignedInstallerId || null;
+  return out;
+}
+
+function customerChanges(c: CustomerRecord, v: DetailsValues) {
+  const out: { name?: string; email?: string | null; phone?: string | null } = {};
+  if (v.customerName !== c.name) out.name = v.customerName;
+  if ((v.customerEmail || null) !== c.email) out.email = v.customerEmail || null;
+  if ((v.customerPhone || null) !== c.phone) out.phone = v.customerPhone || null;
+  return out;
+}
+
+/**
+ * Writes that change the job straight away must not overtake a design-conditions edit still in
+ * the walk-through queue (it would then meet a newer version): wait for the queue, then use the
+ * newest version this tab holds.
+ */
+function useJobWriter(job: JobRecord) {
+  const queue = useWalkthroughQueue();
+  const queryClient = useQueryClient();
+  const latest = useRef(job);
+  latest.current = job;
+  return async (changes: JobDetailsChanges) => {
+    await queue.flush();
+    const held = queryClient.getQueryData<JobRecord>(jobKeys.detail(job.id)) ?? latest.current;
+    try {
+      const saved = await saveJobDetails(job.id, held.version, changes);
+      queryClient.setQueryData(jobKeys.detail(job.id), saved);
+      void queryClient.invalidateQueries({ queryKey: jobKeys.lists() });
+      return saved;
+    } catch (e) {
+      if (isApiError(e) && e.status === 409) {
+        // Show their version; what this person typed stays in the form to save again.
+        await queryClient.invalidateQueries({ queryKey: jobKeys.detail(job.id), exact: true });
+        throw new ApiError({ ...e, detail: 'Someone else saved this job meanwhile. Their version is loaded now: check the fields and save again.', errors: [] });
+      }
+      throw e;
+    }
+  };
+}
+
+function StatusMoves({ job }: { job: JobRecord }) {
+  const write = useJobWriter(job);
+  const [busy, setBusy] = useState<JobStatus | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const moves = JOB_STATUS_MOVES[job.status];
+  if (moves.length === 0) return null;
+  const move = async (to: JobStatus) => {
+    setBusy(to);
+    setError(null);
+    try {
+      await write({ status: to });
+    } catch (e) {
+      setError(errorMessage(e));
+    } finally {
+      setBusy(null);
+    }
+  };
+  return (
+    <div className="flex flex-col gap-2">
+      <div className="flex flex-wrap gap-2">
+        {moves.map((to) => (
+          <Button key={to} variant={to === 'lost' ? 'ghost' : 'secondary'} busy={busy === to} disabled={busy !== null} onClick={() => void move(to)}>
+            {moveLabels[to]}
+          </Button>
+        ))}
+      </div>
+      {error ? <Alert tone="danger" title="The status was not changed.">{error}</Alert> : null}
+    </div>
+  );
+}
+
+const peopleOptions = (staff: readonly StaffMember[], roles: readonly string[], current: { id: string; name: string } | null) => {
+  const list = staff.filter((s) => roles.includes(s.role)).map((s) => ({ value: s.id, label: s.name }));
+  // Someone no longer active still shows as the one the job is with until it is handed on.
+  if (current && !list.some((o) => o.value === current.id)) list.unshift({ value: current.id, label: `${current.name} (inactive)` });
+  return list;
+};
+
+function DetailsForm({ job, customer, office }: { job: JobRecord; customer: CustomerRecord; office: boolean }) {
+  const queryClient = useQueryClient();
+  const write = useJobWriter(job);
+  const staff = useStaff(office);
+  const [saved, setSaved] = useState(false);
+  return (
+    <Form
+      schema={detailsSchema}
+      defaultValues={valuesOf(job, customer)}
+      aria-label="Job details"
+      onSubmit={async (values, form) => {
+        setSaved(false);
+        const forCustomer = customerChanges(customer, values);
+        if (Object.keys(forCustomer).length > 0) {
+          try {
+            const c = await saveCustomer(customer.id, forCustomer);
+            queryClient.setQueryData(customerQueryOptions(c.id).queryKey, c);
+          } catch (e) {
+            if (isApiError(e)) throw new ApiError({ ...e, errors: e.errors.map((f) => ({ ...f, path: customerField[f.path] ?? f.path })) });
+            throw e;
+          }
+        }
+        const forJob = jobChanges(job, values, office);
+        if (Object.keys(forJob).length > 0) await write(forJob);
+        // The job's header and the jobs list show the customer's name.
+        if (forCustomer.name !== undefined) void queryClient.invalidateQueries({ queryKey: jobKeys.detail(job.id), exact: true });
+        form.reset(values);
+        setSaved(true);
+      }}
+    >
+      <fieldset className="grid gap-4 sm:grid-cols-3">
+        <legend className="mb-2 text-base font-semibold text-ink-900">Customer</legend>
+        <TextField name="customerName" label="Customer name" autoComplete="off" />
+        <TextField name="customerEmail" label="Customer e-mail" type="email" inputMode="email" autoComplete="off" />
+        <TextField name="customerPhone" label="Customer phone" type="tel" inputMode="tel" autoComplete="off" />
+      </fieldset>
+      <fieldset className="grid gap-4 sm:grid-cols-2">
+        <legend className="mb-2 text-base font-semibold text-ink-900">Site</legend>
+        <TextField name="street" label="Street address" autoComplete="off" />
+        <TextField name="unit" label="Unit or apartment" autoComplete="off" />
+        <TextField name="city" label="City or town" autoComplete="off" />
+        <TextField name="region" label="State or region" autoComplete="off" />
+        <TextField name="postalCode" label="Postal code" autoComplete="off" />
+        <TextField name="notes" label="Job notes" autoComplete="off" />
+      </fieldset>
+      {office ? (
+        staff.data ? (
+          <fieldset className="grid gap-4 sm:grid-cols-2">
+            <legend className="mb-2 text-base font-semibold text-ink-900">People</legend>
+            <SelectField name="salespersonId" label="Salesperson" options={peopleOptions(staff.data, ['salesperson', 'estimator', 'owner'], job.salesperson)} />
+            <SelectField name="assignedInstallerId" label="Installer" options={[{ value: '', label: 'Not assigned yet' }, ...peopleOptions(staff.data, ['installer'], job.assignedInstaller)]} />
+          </fieldset>
+        ) : staff.isError ? (
+          <Alert tone="warning" title="Could not load your company’s people.">{errorMessage(staff.error)}</Alert>
+        ) : (
+          <Spinner label="Loading your company’s people…" />
+        )
+      ) : null}
+      <div className="flex flex-wrap items-center gap-3">
+        <SubmitButton>Save details</SubmitButton>
+        {saved ? <p role="status" className="text-sm font-semibold text-ok">Details saved.</p> : null}
+      </div>
+    </Form>
+  );
+}
+
+function ReadOnlyPeople({ job }: { job: JobRecord }) {
+  return (
+    <dl className="grid gap-2 text-base sm:grid-cols-2">
+      <div>
+        <dt className="text-sm font-semibold text-muted">Salesperson</dt>
+        <dd>{job.salesperson?.name ?? '—'}</dd>
+      </div>
+      <div>
+        <dt className="text-sm font-semibold text-muted">Installer</dt>
+        <dd>{job.assignedInstaller?.name ?? 'Not assigned yet'}</dd>
+      </div>
+    </dl>
+  );
+}
+
+/**
+ * The job itself, folded away under the walk-through: where it stands (with the moves the
+ * person may make), the customer's contact details, the site, who it is with, and delete.
+ * Installers see it read-only, as the server lets them.
+ */
+export function JobDetailsPanel({ job }: { job: JobRecord }) {
+  const viewer = useViewer();
+  const canEdit = viewer !== null && viewer.role !== 'installer';
+  const customer = useCustomer(job.customer.id, canEdit);
+  return (
+    <details className="rounded-lg border border-line bg-white p-4">
+      <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">
+        Job details <span className="ml-2 rounded-full bg-ink-50 px-3 py-1 text-sm font-semibold text-ink-800">{jobStatusLabels[job.status]}</span>
+      </summary>
+      <div className="mt-4 flex flex-col gap-6">
+        {canEdit ? <StatusMoves job={job} /> : null}
+        {!canEdit ? (
+          <ReadOnlyPeople job={job} />
+        ) : customer.data ? (
+          <DetailsForm job={job} customer={customer.data} office={isOffice(viewer)} />
+        ) : customer.isError ? (
+          <Alert tone="danger" title="Could not load the customer’s details.">{errorMessage(customer.error)}</Alert>
+        ) : (
+          <Spinner label="Loading the customer’s details…" />
+        )}
+        <DeleteJobButton job={job} />
+      </div>
+    </details>
+  );
+}

@@ -13,7 +13,7 @@ import { JOB_STATUS_MOVES, jobStatusLabels, moveLabels, type CustomerRecord, typ
 import { isOffice, useViewer } from '../../../lib/viewer';
 import { customerQueryOptions, saveCustomer, saveJobDetails, useCustomer, useStaff, type JobDetailsChanges, type StaffMember } from '../api/job-details';
 import { useWalkthroughQueue } from '../sync/queue-context';
-import { DeleteJobButton } from './delete-job-button';
+import { canDeleteJob, DeleteJobButton } from './delete-job-button';
 
 const detailsSchema = z.object({
   ...customerFields,
@@ -104,7 +104,10 @@ function StatusMoves({ job }: { job: JobRecord }) {
     }
   };
   return (
-    <div className="flex flex-col gap-2">
+    <div role="group" aria-labelledby={`moves-${job.id}`} className="flex flex-col gap-2">
+      <p id={`moves-${job.id}`} className="text-base font-semibold text-ink-900">
+        Status: {jobStatusLabels[job.status]}
+      </p>
       <div className="flex flex-wrap gap-2">
         {moves.map((to) => (
           <Button key={to} variant={to === 'lost' ? 'ghost' : 'secondary'} busy={busy === to} disabled={busy !== null} onClick={() => void move(to)}>
@@ -230,7 +233,12 @@ export function JobDetailsPanel({ job }: { job: JobRecord }) {
         ) : (
           <Spinner label="Loading the customer’s details…" />
         )}
-        <DeleteJobButton job={job} />
+        {/* Kept apart from Save, so a thumb on a phone does not find it by accident. */}
+        {canDeleteJob(viewer, job) ? (
+          <div className="border-t border-line pt-4">
+            <DeleteJobButton job={job} />
+          </div>
+        ) : null}
       </div>
     </details>
   );

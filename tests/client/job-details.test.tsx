@@ -1,7 +1,9 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { JobDetailsPanel } from '../../client/src/features/walkthrough/components/job-details-panel';
-import { jobKeys } from '../../client/src/lib/job-queries';
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { act } from '@testing-library/react';
+import { jobKeys, jobQueryOptions } from '../../client/src/lib/job-queries';
 import type { JobRecord } from '../../client/src/lib/job-records';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { ViewerContext, type Viewer } from '../../client/src/lib/viewer';
@@ -51,8 +53,8 @@ async function renderPanel(viewer: Viewer) {
   const queryClient = createQueryClient();
   queryClient.setQueryData(jobKeys.detail(JOB_ID), jobRecord());
   function Host() {
-    // Reads the job from the cache as the walk-through does, so a save shows at once.
-    const job = queryClient.getQueryData<JobRecord>(jobKeys.detail(JOB_ID)) ?? jobRecord();
+    // Reads the job from the cache as the walk-through does, so a save (or someone else's) shows at once.
+    const job = useSuspenseQuery(jobQueryOptions(JOB_ID)).data;
     return <JobDetailsPanel job={job} />;
   }
   const view = await renderWalkthrough(
@@ -132,5 +134,16 @@ describe('job details on the walk-through', () => {
     expect(screen.queryByRole('button', { name: 'Move to design' })).toBeNull();
     expect(screen.queryByRole('button', { name: 'Save details' })).toBeNull();
     expect(s.sent).toEqual([]);
+  });
+
+  it('never sends back a field someone else changed while the form was open', async () => {
+    const s = server();
+    const { queryClient } = await renderPanel(salesperson);
+    fireEvent.change(await screen.findByLabelText('Job notes'), { target: { value: 'Gate code 4411' } });
+    // Another device moved the job to a corrected city meanwhile; this tab learns of it.
+    act(() => queryClient.setQueryData(jobKeys.detail(JOB_ID), jobRecord({ site: { ...jobRecord().site, city: 'Newtown' }, version: 3 })));
+    fireEvent.click(screen.getByRole('button', { name: 'Save details' }));
+    await screen.findByText('Details saved.');
+    expect(s.writes().map((w) => [w.body, w.ifMatch])).toEqual([[{ notes: 'Gate code 4411' }, '"3"']]);
   });
 });

@@ -36,16 +36,19 @@ function valuesOf(job: JobRecord, customer: CustomerRecord): DetailsInput {
   };
 }
 
-/** Only what the person changed goes out, so a field someone else changed meanwhile is left alone. */
-function jobChanges(job: JobRecord, v: DetailsValues, office: boolean): JobDetailsChanges {
+/**
+ * Only fields the person touched (`dirty`) and that differ from the job as held now go out, so
+ * a field someone else changed meanwhile is never sent back with the value this form opened with.
+ */
+function jobChanges(job: JobRecord, v: DetailsValues, office: boolean, dirty: ReadonlySet<string>): JobDetailsChanges {
   const out: Record<string, string | null> = {};
   const site = { street: job.site.street, unit: job.site.unit, city: job.site.city, region: job.site.region, postalCode: job.site.postalCode, notes: job.notes };
   for (const [k, before] of Object.entries(site)) {
     const now = v[k as keyof typeof site];
-    if (now !== before) out[k] = now;
+    if (dirty.has(k) && now !== before) out[k] = now;
   }
-  if (office && v.salespersonId && v.salespersonId !== (job.salesperson?.id ?? '')) out.salespersonId = v.salespersonId;
-  if (office && v.assignedInstallerId !== (job.assignedInstaller?.id ?? '')) out.assignedInstallerId = v.assignedInstallerId || null;
+  if (office && dirty.has('salespersonId') && v.salespersonId && v.salespersonId !== (job.salesperson?.id ?? '')) out.salespersonId = v.salespersonId;
+  if (office && dirty.has('assignedInstallerId') && v.assignedInstallerId !== (job.assignedInstaller?.id ?? '')) out.assignedInstallerId = v.assignedInstallerId || null;
   return out;
 }
 
@@ -149,7 +152,8 @@ function DetailsForm({ job, customer, office }: { job: JobRecord; customer: Cust
             throw e;
           }
         }
-        const forJob = jobChanges(job, values, office);
+        const dirty = new Set(Object.entries(form.formState.dirtyFields).filter(([, on]) => on === true).map(([k]) => k));
+        const forJob = jobChanges(job, values, office, dirty);
         if (Object.keys(forJob).length > 0) await write(forJob);
         // The job's header and the jobs list show the customer's name.
         if (forCustomer.name !== undefined) void queryClient.invalidateQueries({ queryKey: jobKeys.detail(job.id), exact: true });

@@ -141,7 +141,11 @@ describe('job details on the walk-through', () => {
     const { queryClient } = await renderPanel(salesperson);
     fireEvent.change(await screen.findByLabelText('Job notes'), { target: { value: 'Gate code 4411' } });
     // Another device moved the job to a corrected city meanwhile; this tab learns of it.
-    act(() => queryClient.setQueryData(jobKeys.detail(JOB_ID), jobRecord({ site: { ...jobRecord().site, city: 'Newtown' }, version: 3 })));
+    await act(async () => {
+      queryClient.setQueryData(jobKeys.detail(JOB_ID), jobRecord({ site: { ...jobRecord().site, city: 'Newtown' }, version: 3 }));
+      await new Promise((r) => setTimeout(r, 20));
+    });
+    expect(screen.getByLabelText('City or town')).toHaveValue('Testville');
     fireEvent.click(screen.getByRole('button', { name: 'Save details' }));
     await screen.findByText('Details saved.');
     expect(s.writes().map((w) => [w.body, w.ifMatch])).toEqual([[{ notes: 'Gate code 4411' }, '"3"']]);

@@ -52,11 +52,11 @@ function jobChanges(job: JobRecord, v: DetailsValues, office: boolean, dirty: Re
   return out;
 }
 
-function customerChanges(c: CustomerRecord, v: DetailsValues) {
+function customerChanges(c: CustomerRecord, v: DetailsValues, dirty: ReadonlySet<string>) {
   const out: { name?: string; email?: string | null; phone?: string | null } = {};
-  if (v.customerName !== c.name) out.name = v.customerName;
-  if ((v.customerEmail || null) !== c.email) out.email = v.customerEmail || null;
-  if ((v.customerPhone || null) !== c.phone) out.phone = v.customerPhone || null;
+  if (dirty.has('customerName') && v.customerName !== c.name) out.name = v.customerName;
+  if (dirty.has('customerEmail') && (v.customerEmail || null) !== c.email) out.email = v.customerEmail || null;
+  if (dirty.has('customerPhone') && (v.customerPhone || null) !== c.phone) out.phone = v.customerPhone || null;
   return out;
 }
 
@@ -142,7 +142,9 @@ function DetailsForm({ job, customer, office }: { job: JobRecord; customer: Cust
       aria-label="Job details"
       onSubmit={async (values, form) => {
         setSaved(false);
-        const forCustomer = customerChanges(customer, values);
+        // Only fields the person touched go out (see jobChanges).
+        const dirty = new Set(Object.entries(form.formState.dirtyFields).filter(([, on]) => on === true).map(([k]) => k));
+        const forCustomer = customerChanges(customer, values, dirty);
         if (Object.keys(forCustomer).length > 0) {
           try {
             const c = await saveCustomer(customer.id, forCustomer);
@@ -152,7 +154,6 @@ function DetailsForm({ job, customer, office }: { job: JobRecord; customer: Cust
             throw e;
           }
         }
-        const dirty = new Set(Object.entries(form.formState.dirtyFields).filter(([, on]) => on === true).map(([k]) => k));
         const forJob = jobChanges(job, values, office, dirty);
         if (Object.keys(forJob).length > 0) await write(forJob);
         // The job's header and the jobs list show the customer's name.

@@ -22,7 +22,10 @@ const featureBoundaries = features.map((feature) => {
         'error',
         {
           patterns: [
-            { regex: `^(\\.\\./)+(${others.join('|')})/`, message: 'Features do not import each other; share through lib/ or compose in app/routes.' },
+            {
+              regex: `^(\\.\\./)+(${others.join('|')})/`,
+              message: 'Features do not import each other; share through lib/ or compose in app/routes.',
+            },
             { group: ['**/server/**', 'node:*'], message: 'The client never imports the server at runtime.' },
           ],
         },
@@ -50,7 +53,11 @@ export default tseslint.config(
         [['**/client/**', '**/server/**', '**/scripts/**', '**/fixtures/**', 'node:*', 'fs', 'path', 'http']],
         'calc is pure: it imports only zod, mathjs, convert-units and its own files.',
       ),
-      'no-restricted-globals': ['error', { name: 'fetch', message: 'calc does no I/O.' }, { name: 'Date', message: 'calc has no clock.' }],
+      'no-restricted-globals': [
+        'error',
+        { name: 'fetch', message: 'calc does no I/O.' },
+        { name: 'Date', message: 'calc has no clock.' },
+      ],
       'no-restricted-properties': ['error', { object: 'Math', property: 'random', message: 'calc has no randomness.' }],
     },
   },
@@ -59,7 +66,10 @@ export default tseslint.config(
     plugins: { 'react-hooks': reactHooks },
     rules: {
       ...reactHooks.configs.recommended.rules,
-      'no-restricted-imports': noOurs([['**/server/**', '../../server/*', 'node:*']], 'The client never imports the server at runtime.'),
+      'no-restricted-imports': noOurs(
+        [['**/server/**', '../../server/*', 'node:*']],
+        'The client never imports the server at runtime.',
+      ),
     },
   },
   ...featureBoundaries,

@@ -11,7 +11,16 @@ await migrate(url);
 await withOrm(url, async (orm) => {
   if (await isEmpty(orm.em.fork())) await seedDemo(orm.em.fork());
 });
-const running = await startServer(loadConfig({ ...process.env, DATABASE_URL: url, PORT: '0', LOG_LEVEL: 'silent', LOGIN_MAX_PER_IP: '100000', LOGIN_MAX_PER_ACCOUNT: '100000' }));
+const running = await startServer(
+  loadConfig({
+    ...process.env,
+    DATABASE_URL: url,
+    PORT: '0',
+    LOG_LEVEL: 'silent',
+    LOGIN_MAX_PER_IP: '100000',
+    LOGIN_MAX_PER_ACCOUNT: '100000',
+  }),
+);
 const base = running.url;
 
 async function session(email: string, password: string): Promise<{ cookie: string; csrf: string }> {
@@ -28,7 +37,8 @@ async function session(email: string, password: string): Promise<{ cookie: strin
   return { cookie, csrf: csrf.token };
 }
 
-const pct = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor((p / 100) * xs.length))] ?? NaN;
+const pct = (xs: number[], p: number) =>
+  [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor((p / 100) * xs.length))] ?? NaN;
 const owner = demoAccounts.find((a) => a.role === 'owner');
 if (!owner) throw new Error('no demo owner');
 
@@ -38,7 +48,9 @@ for (let i = 0; i < 20; i++) {
   await session(owner.email, owner.password);
   loginTimes.push(performance.now() - t0);
 }
-console.log(`sign-in (csrf + login + csrf), 20 serial: p50 ${pct(loginTimes, 50).toFixed(1)} ms, p95 ${pct(loginTimes, 95).toFixed(1)} ms`);
+console.log(
+  `sign-in (csrf + login + csrf), 20 serial: p50 ${pct(loginTimes, 50).toFixed(1)} ms, p95 ${pct(loginTimes, 95).toFixed(1)} ms`,
+);
 
 async function load(path: string, seconds: number, clients: number) {
   const s = await session(owner!.email, owner!.password);

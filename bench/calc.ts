@@ -9,8 +9,17 @@
 import { availableParallelism, loadavg } from 'node:os';
 import { performance } from 'node:perf_hooks';
 import {
-  computeDesign, computeDesignFromParsed, designSchema, equipmentCatalogSchema, homeInputSchema, priceBookSchema, pricingSchema,
-  DEFAULT_SIZING_POLICY, type DesignInput, type EquipmentCatalogInput, type RoomInput,
+  computeDesign,
+  computeDesignFromParsed,
+  designSchema,
+  equipmentCatalogSchema,
+  homeInputSchema,
+  priceBookSchema,
+  pricingSchema,
+  DEFAULT_SIZING_POLICY,
+  type DesignInput,
+  type EquipmentCatalogInput,
+  type RoomInput,
 } from '../calc/index';
 import { catalog as sampleCatalog, conditions, priceBook, pricing } from '../tests/calc/sample-data';
 
@@ -21,36 +30,87 @@ function room(i: number): RoomInput {
   const dir = directions[i % directions.length] ?? 'N';
   const dir2 = directions[(i + 2) % directions.length] ?? 'E';
   return {
-    id: `room-${i}`, name: `Room ${i + 1}`, floorLevel: 1 + (i % 2), lengthFt: 10 + (i % 7), widthFt: 9 + (i % 5), ceilingHeightFt: 8 + (i % 3),
+    id: `room-${i}`,
+    name: `Room ${i + 1}`,
+    floorLevel: 1 + (i % 2),
+    lengthFt: 10 + (i % 7),
+    widthFt: 9 + (i % 5),
+    ceilingHeightFt: 8 + (i % 3),
     exposedWalls: [
-      { direction: dir, lengthFt: 10 + (i % 7), windows: [{ widthIn: 36, heightIn: 48, count: 1 + (i % 2), glazing: 'double-low-e', interiorShading: 'blinds' }] },
-      { direction: dir2, lengthFt: 9 + (i % 5), windows: [{ areaFt2: 12, glazing: 'double-clear' }], doors: i % 4 === 0 ? [{ areaFt2: 20 }] : [] },
+      {
+        direction: dir,
+        lengthFt: 10 + (i % 7),
+        windows: [
+          { widthIn: 36, heightIn: 48, count: 1 + (i % 2), glazing: 'double-low-e', interiorShading: 'blinds' },
+        ],
+      },
+      {
+        direction: dir2,
+        lengthFt: 9 + (i % 5),
+        windows: [{ areaFt2: 12, glazing: 'double-clear' }],
+        doors: i % 4 === 0 ? [{ areaFt2: 20 }] : [],
+      },
     ],
     above: i % 2 === 0 ? { kind: 'attic', insulation: 'r38' } : { kind: 'conditioned' },
     below: i % 2 === 0 ? { kind: 'conditioned' } : { kind: 'crawlspace', vented: true, insulation: 'r19' },
-    occupants: i % 3, appliances: i % 5 === 0 ? [{ label: 'Electronics', gain: 300, unit: 'W' }] : [],
+    occupants: i % 3,
+    appliances: i % 5 === 0 ? [{ label: 'Electronics', gain: 300, unit: 'W' }] : [],
   };
 }
 
 const catalog: EquipmentCatalogInput = {
   indoorUnits: sampleCatalog.indoorUnits,
-  outdoorUnits: [...sampleCatalog.outdoorUnits, {
-    key: 'GL-O48-M5', description: 'GL-O48 five-port outdoor unit', equipmentType: 'heat-pump-variable-speed', refrigerant: 'R-454B',
-    nominalBtuh: 48000, cooling: [{ outdoorF: 82, btuh: 50000 }, { outdoorF: 95, btuh: 48000 }, { outdoorF: 105, btuh: 44000 }],
-    heating: [{ outdoorF: 5, btuh: 40000 }, { outdoorF: 47, btuh: 54000 }], maxHeads: 5, factoryChargeOz: 140, prechargedLengthFt: 25,
-    adderOzPerFt: 0.16, maxLineLengthFt: 82, maxTotalLineLengthFt: 330, maxLiftFt: 49, mcaA: 32, mocpA: 45,
-  }],
+  outdoorUnits: [
+    ...sampleCatalog.outdoorUnits,
+    {
+      key: 'GL-O48-M5',
+      description: 'GL-O48 five-port outdoor unit',
+      equipmentType: 'heat-pump-variable-speed',
+      refrigerant: 'R-454B',
+      nominalBtuh: 48000,
+      cooling: [
+        { outdoorF: 82, btuh: 50000 },
+        { outdoorF: 95, btuh: 48000 },
+        { outdoorF: 105, btuh: 44000 },
+      ],
+      heating: [
+        { outdoorF: 5, btuh: 40000 },
+        { outdoorF: 47, btuh: 54000 },
+      ],
+      maxHeads: 5,
+      factoryChargeOz: 140,
+      prechargedLengthFt: 25,
+      adderOzPerFt: 0.16,
+      maxLineLengthFt: 82,
+      maxTotalLineLengthFt: 330,
+      maxLiftFt: 49,
+      mcaA: 32,
+      mocpA: 45,
+    },
+  ],
 };
 
 const rooms = Array.from({ length: 40 }, (_, i) => room(i));
 const zones = Array.from({ length: 20 }, (_, z) => ({
-  key: `zone-${z}`, name: `Zone ${z + 1}`, roomIds: [`room-${2 * z}`, `room-${2 * z + 1}`], indoorUnitKey: z % 2 === 0 ? 'GL-12K-WH' : 'GL-9K-WH',
+  key: `zone-${z}`,
+  name: `Zone ${z + 1}`,
+  roomIds: [`room-${2 * z}`, `room-${2 * z + 1}`],
+  indoorUnitKey: z % 2 === 0 ? 'GL-12K-WH' : 'GL-9K-WH',
 }));
 const design: DesignInput = {
   zones,
   systems: Array.from({ length: 4 }, (_, s) => ({
-    key: `sys-${s}`, name: `System ${s + 1}`, outdoorUnitKey: 'GL-O48-M5', mounting: s % 2 === 0 ? 'pad' : 'wall-bracket',
-    circuits: Array.from({ length: 5 }, (_, c) => ({ zoneKey: `zone-${s * 5 + c}`, lengthFt: 20 + 7 * c, liftFt: c * 3, lineCoverFt: 10, condensate: c === 4 ? 'pump' : 'gravity' })),
+    key: `sys-${s}`,
+    name: `System ${s + 1}`,
+    outdoorUnitKey: 'GL-O48-M5',
+    mounting: s % 2 === 0 ? 'pad' : 'wall-bracket',
+    circuits: Array.from({ length: 5 }, (_, c) => ({
+      zoneKey: `zone-${s * 5 + c}`,
+      lengthFt: 20 + 7 * c,
+      liftFt: c * 3,
+      lineCoverFt: 10,
+      condensate: c === 4 ? 'pump' : 'gravity',
+    })),
     electrical: { terminationC: 75, wiringMethod: 'thhn-conduit', circuitLengthFt: 60 },
   })),
 };
@@ -64,7 +124,8 @@ interface Timing {
   readonly runs: number;
 }
 
-const quantile = (sorted: readonly number[], q: number): number => sorted[Math.min(sorted.length - 1, Math.floor(sorted.length * q))] ?? 0;
+const quantile = (sorted: readonly number[], q: number): number =>
+  sorted[Math.min(sorted.length - 1, Math.floor(sorted.length * q))] ?? 0;
 
 /**
  * Warm-up (lets V8 optimise the hot paths), then times `runs` single calls. The median is
@@ -90,21 +151,35 @@ const GOAL_MS = FRAME_MS / GOAL_RATIO;
 function report(label: string, m: Timing): void {
   const ratio = FRAME_MS / m.median;
   console.log(`  ${label}`);
-  console.log(`    median ${m.median.toFixed(3)} ms · p95 ${m.p95.toFixed(3)} ms · min ${m.min.toFixed(3)} ms (${m.runs} runs)`);
-  console.log(`    → ${ratio.toFixed(1)}× within a ${FRAME_MS} ms frame; goal ≥ ${GOAL_RATIO}× (median < ${GOAL_MS.toFixed(2)} ms): ${ratio >= GOAL_RATIO ? 'MET' : 'NOT MET'}`);
+  console.log(
+    `    median ${m.median.toFixed(3)} ms · p95 ${m.p95.toFixed(3)} ms · min ${m.min.toFixed(3)} ms (${m.runs} runs)`,
+  );
+  console.log(
+    `    → ${ratio.toFixed(1)}× within a ${FRAME_MS} ms frame; goal ≥ ${GOAL_RATIO}× (median < ${GOAL_MS.toFixed(2)} ms): ${ratio >= GOAL_RATIO ? 'MET' : 'NOT MET'}`,
+  );
 }
 
 try {
   const full = () => computeDesign({ home, design, catalog, priceBook, pricing });
   const parsed = {
-    home: homeInputSchema.parse(home), design: designSchema.parse(design), catalog: equipmentCatalogSchema.parse(catalog),
-    priceBook: priceBookSchema.parse(priceBook), pricing: pricingSchema.parse(pricing), policy: DEFAULT_SIZING_POLICY,
+    home: homeInputSchema.parse(home),
+    design: designSchema.parse(design),
+    catalog: equipmentCatalogSchema.parse(catalog),
+    priceBook: priceBookSchema.parse(priceBook),
+    pricing: pricingSchema.parse(pricing),
+    policy: DEFAULT_SIZING_POLICY,
   };
   const engine = () => computeDesignFromParsed(parsed);
   const first = full();
   console.log('calc benchmark — 40 rooms, 20 zones, 4 systems × 5 circuits, takeoff + pricing');
-  console.log(`  takeoff lines: ${first.takeoff.length}, total: $${(first.price.totalCents / 100).toFixed(2)}, warnings: ${first.warnings.length}`);
-  console.log(`  load average (1/5/15 min): ${loadavg().map((l) => l.toFixed(2)).join(' / ')} on ${availableParallelism()} CPU(s)`);
+  console.log(
+    `  takeoff lines: ${first.takeoff.length}, total: $${(first.price.totalCents / 100).toFixed(2)}, warnings: ${first.warnings.length}`,
+  );
+  console.log(
+    `  load average (1/5/15 min): ${loadavg()
+      .map((l) => l.toFixed(2))
+      .join(' / ')} on ${availableParallelism()} CPU(s)`,
+  );
   report('full recompute incl. zod validation (computeDesign)', measure(full, { warmup: 500, runs: 3000 }));
   report('engine only, on validated inputs (computeDesignFromParsed)', measure(engine, { warmup: 2000, runs: 10000 }));
 } catch (e) {

@@ -2,7 +2,9 @@ import { readdirSync } from 'node:fs';
 import { spawnSync } from 'node:child_process';
 
 // Runs every bench/*.ts in turn. Benchmarks print figures; they never fail the build.
-const files = readdirSync('bench').filter((f) => f.endsWith('.ts')).sort();
+const files = readdirSync('bench')
+  .filter((f) => f.endsWith('.ts'))
+  .sort();
 if (files.length === 0) console.log('no benchmarks yet');
 for (const f of files) {
   console.log(`\n=== bench/${f} ===`);

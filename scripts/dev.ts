@@ -16,7 +16,10 @@ await withOrm(url, async (orm) => {
 const config = loadConfig({ ...process.env, DATABASE_URL: url, CLIENT_DIST: '.data/no-client' });
 const smtp = await startSmtpFake({ port: config.SMTP_PORT, dir: '.data/outbox' });
 const running = await startServer(config);
-const vite = spawn(process.execPath, ['node_modules/vite/bin/vite.js'], { stdio: 'inherit', env: { ...process.env, PORT: String(config.PORT) } });
+const vite = spawn(process.execPath, ['node_modules/vite/bin/vite.js'], {
+  stdio: 'inherit',
+  env: { ...process.env, PORT: String(config.PORT) },
+});
 log(`API on ${running.url}; open http://127.0.0.1:5173 for the client with hot reload.`);
 const stop = async () => {
   vite.kill('SIGTERM');

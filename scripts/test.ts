@@ -1,4 +1,4 @@
-import { spawn } from 'node:child_process';
+import { spawn, spawnSync } from 'node:child_process';
 import { buildClientIfStale } from './lib/client-build';
 import { rmSync } from 'node:fs';
 import { isEmpty, seedDemo } from '../fixtures/seed';
@@ -9,6 +9,19 @@ import { chromiumPath, ensureChromium, log } from './lib/system';
 
 // The test cluster is separate from the demo one and its database is made anew on every run.
 const t0 = Date.now();
+const vitestArgs = process.argv.slice(2);
+// The whole suite (what CI runs) starts with the typecheck and the lint, so CI catches what they catch.
+// A run narrowed by vitest arguments skips them, as does GAUGELINE_SKIP_CHECKS=1.
+if (vitestArgs.length === 0 && !process.env.GAUGELINE_SKIP_CHECKS) {
+  for (const script of ['typecheck', 'lint']) {
+    log(`npm run ${script}…`);
+    const r = spawnSync('npm', ['run', '-s', script], { stdio: 'inherit' });
+    if (r.status !== 0) {
+      log(`npm run ${script} failed; fix it before the suite runs.`);
+      process.exit(r.status ?? 1);
+    }
+  }
+}
 ensureChromium();
 const { cluster, url, startedHere } = await startCluster(TEST, { fast: true, recreate: true });
 await migrate(url);
@@ -22,9 +35,16 @@ await withOrm(url, async (orm) => {
 if (!process.env.GAUGELINE_SKIP_BUILD) await buildClientIfStale();
 log(`test set-up ready in ${((Date.now() - t0) / 1000).toFixed(1)} s; running the suite…`);
 
-const child = spawn(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', ...process.argv.slice(2)], {
+const child = spawn(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', ...vitestArgs], {
   stdio: 'inherit',
-  env: { ...process.env, DATABASE_URL: url, STORAGE_DIR: storageDir, NODE_ENV: 'test', CHROMIUM_PATH: chromiumPath, LOG_LEVEL: 'silent' },
+  env: {
+    ...process.env,
+    DATABASE_URL: url,
+    STORAGE_DIR: storageDir,
+    NODE_ENV: 'test',
+    CHROMIUM_PATH: chromiumPath,
+    LOG_LEVEL: 'silent',
+  },
 });
 const code: number = await new Promise((resolve) => child.on('exit', (c, sig) => resolve(c ?? (sig ? 1 : 0))));
 // Leave a cluster that another run started (e.g. a second terminal) to that run.

@@ -31,14 +31,24 @@ export function infiltrationCfm({ volumeFt3, ach }: { readonly volumeFt3: number
  * Supply airflow to carry a sensible load, CFM = Q_s / (1.08 × supply ΔT). [TRADE; PUB
  * (secondary): Manual S 2nd ed. description] No rounding.
  */
-export function airflowForSensibleCfm(
-  { sensibleBtuh, supplyDeltaTF }: { readonly sensibleBtuh: number; readonly supplyDeltaTF: number },
-): number {
+export function airflowForSensibleCfm({
+  sensibleBtuh,
+  supplyDeltaTF,
+}: {
+  readonly sensibleBtuh: number;
+  readonly supplyDeltaTF: number;
+}): number {
   return num(sensibleBtuh, 'nonNegative') / (SENSIBLE_CONSTANT * num(supplyDeltaTF, 'positive'));
 }
 
 /** Whole-house mechanical ventilation, CFM = 0.03 × floor ft² + 7.5 × (bedrooms + 1). [MEM: ASHRAE 62.2-2013] */
-export function ventilationCfm62_2({ floorAreaFt2, bedrooms }: { readonly floorAreaFt2: number; readonly bedrooms: number }): number {
+export function ventilationCfm62_2({
+  floorAreaFt2,
+  bedrooms,
+}: {
+  readonly floorAreaFt2: number;
+  readonly bedrooms: number;
+}): number {
   return 0.03 * num(floorAreaFt2, 'nonNegative') + 7.5 * (num(bedrooms, 'nonNegativeInteger') + 1);
 }
 

@@ -15,9 +15,15 @@ export function seriesU({ rValues }: { readonly rValues: readonly number[] }): n
  * Parallel-path U: (1 − f) × U_cavity + f × U_framing, f = framing fraction 0–1.
  * [PUB: ORNL whole-wall paper; MEM: ASHRAE Fundamentals ch. 27] No rounding.
  */
-export function parallelPathU(
-  { cavityU, framingU, framingFraction }: { readonly cavityU: number; readonly framingU: number; readonly framingFraction: number },
-): number {
+export function parallelPathU({
+  cavityU,
+  framingU,
+  framingFraction,
+}: {
+  readonly cavityU: number;
+  readonly framingU: number;
+  readonly framingFraction: number;
+}): number {
   const f = num(framingFraction, 'fraction');
   return (1 - f) * num(cavityU, 'nonNegative') + f * num(framingU, 'nonNegative');
 }
@@ -26,9 +32,15 @@ export function parallelPathU(
  * Conduction, Btu/h = U × A × ΔT. [PUB: U-factor definition, IECC] Negative ΔT is
  * allowed (heat flows out); area and U must be non-negative. No rounding.
  */
-export function conductionBtuh(
-  { u, areaFt2, deltaTF }: { readonly u: number; readonly areaFt2: number; readonly deltaTF: number },
-): number {
+export function conductionBtuh({
+  u,
+  areaFt2,
+  deltaTF,
+}: {
+  readonly u: number;
+  readonly areaFt2: number;
+  readonly deltaTF: number;
+}): number {
   return num(u, 'nonNegative') * num(areaFt2, 'nonNegative') * num(deltaTF);
 }
 
@@ -38,8 +50,14 @@ export function rsiFromR({ r }: { readonly r: number }): number {
 }
 
 /** Slab-edge heat loss, Btu/h = F × perimeter(ft) × ΔT; F in Btu/h·ft·°F. [MEM: ASHRAE/IECC F-factor] */
-export function slabEdgeBtuh(
-  { fFactor, perimeterFt, deltaTF }: { readonly fFactor: number; readonly perimeterFt: number; readonly deltaTF: number },
-): number {
+export function slabEdgeBtuh({
+  fFactor,
+  perimeterFt,
+  deltaTF,
+}: {
+  readonly fFactor: number;
+  readonly perimeterFt: number;
+  readonly deltaTF: number;
+}): number {
   return num(fFactor, 'nonNegative') * num(perimeterFt, 'nonNegative') * num(deltaTF);
 }

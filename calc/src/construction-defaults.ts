@@ -13,17 +13,41 @@ export interface Sourced<T> {
 
 /** Whole-assembly wall U-factors, Btu/h·ft²·°F. */
 export const WALL_CONSTRUCTIONS = {
-  'wood-2x4-r13': { value: 0.083, label: '2×4 wood frame, R-13 batt', source: '[OWN] parallel-path worked example (U 0.0829); [MEM: IECC R402.1.2 equivalent U 0.084]' },
-  'wood-2x6-r19': { value: 0.06, label: '2×6 wood frame, R-19/R-20 batt', source: '[MEM: IECC R402.1.2 equivalent U 0.060]' },
-  'wood-2x4-uninsulated': { value: 0.24, label: '2×4 wood frame, empty cavity', source: '[OWN] parallel path with a ≈ R-1 cavity air space [MEM: ASHRAE ch. 26]' },
-  'masonry-uninsulated': { value: 0.35, label: 'Solid masonry, no insulation', source: '[MEM: ASHRAE Fundamentals ch. 26 typical masonry]' },
-  'masonry-r10-furred': { value: 0.08, label: 'Masonry with R-10 furred interior', source: '[MEM: IECC mass-wall equivalent U ≈ 0.08]' },
+  'wood-2x4-r13': {
+    value: 0.083,
+    label: '2×4 wood frame, R-13 batt',
+    source: '[OWN] parallel-path worked example (U 0.0829); [MEM: IECC R402.1.2 equivalent U 0.084]',
+  },
+  'wood-2x6-r19': {
+    value: 0.06,
+    label: '2×6 wood frame, R-19/R-20 batt',
+    source: '[MEM: IECC R402.1.2 equivalent U 0.060]',
+  },
+  'wood-2x4-uninsulated': {
+    value: 0.24,
+    label: '2×4 wood frame, empty cavity',
+    source: '[OWN] parallel path with a ≈ R-1 cavity air space [MEM: ASHRAE ch. 26]',
+  },
+  'masonry-uninsulated': {
+    value: 0.35,
+    label: 'Solid masonry, no insulation',
+    source: '[MEM: ASHRAE Fundamentals ch. 26 typical masonry]',
+  },
+  'masonry-r10-furred': {
+    value: 0.08,
+    label: 'Masonry with R-10 furred interior',
+    source: '[MEM: IECC mass-wall equivalent U ≈ 0.08]',
+  },
 } as const satisfies Record<string, Sourced<number>>;
 export type WallConstructionKey = keyof typeof WALL_CONSTRUCTIONS;
 
 /** Ceiling/roof U-factor by insulation level, Btu/h·ft²·°F (attic floor or insulated roof deck). */
 export const CEILING_INSULATION = {
-  none: { value: 0.6, label: 'No insulation', source: '[OWN] ½ in gypsum + two still-air films (0.61 + 0.45 + 0.61 → U 0.60) [MEM: ASHRAE ch. 26 films]' },
+  none: {
+    value: 0.6,
+    label: 'No insulation',
+    source: '[OWN] ½ in gypsum + two still-air films (0.61 + 0.45 + 0.61 → U 0.60) [MEM: ASHRAE ch. 26 films]',
+  },
   r11: { value: 0.083, label: 'R-11', source: '[MEM: ASHRAE ch. 26 typical, verify]' },
   r19: { value: 0.05, label: 'R-19', source: '[MEM: ASHRAE ch. 26 typical, verify]' },
   r30: { value: 0.035, label: 'R-30', source: '[MEM: IECC R402.1.2 equivalent U 0.035]' },
@@ -50,10 +74,26 @@ export const SLAB_EDGE = {
 
 /** Glazing defaults: whole-window U and SHGC. Override with the NFRC label. */
 export const GLAZING_TYPES = {
-  'single-clear': { value: { u: 1.04, shgc: 0.76 }, label: 'Single pane, clear', source: '[MEM: ASHRAE Fundamentals ch. 15 fenestration tables]' },
-  'double-clear': { value: { u: 0.55, shgc: 0.67 }, label: 'Double pane, clear', source: '[MEM: ASHRAE Fundamentals ch. 15; U range 0.45–0.80]' },
-  'double-low-e': { value: { u: 0.3, shgc: 0.3 }, label: 'Double pane, low-e, argon', source: '[MEM: ASHRAE ch. 15 U 0.25–0.32; PUB: IECC SHGC ≤ 0.25 zones 1–3 is stricter]' },
-  'triple-low-e': { value: { u: 0.2, shgc: 0.25 }, label: 'Triple pane, low-e', source: '[MEM: ASHRAE Fundamentals ch. 15, verify]' },
+  'single-clear': {
+    value: { u: 1.04, shgc: 0.76 },
+    label: 'Single pane, clear',
+    source: '[MEM: ASHRAE Fundamentals ch. 15 fenestration tables]',
+  },
+  'double-clear': {
+    value: { u: 0.55, shgc: 0.67 },
+    label: 'Double pane, clear',
+    source: '[MEM: ASHRAE Fundamentals ch. 15; U range 0.45–0.80]',
+  },
+  'double-low-e': {
+    value: { u: 0.3, shgc: 0.3 },
+    label: 'Double pane, low-e, argon',
+    source: '[MEM: ASHRAE ch. 15 U 0.25–0.32; PUB: IECC SHGC ≤ 0.25 zones 1–3 is stricter]',
+  },
+  'triple-low-e': {
+    value: { u: 0.2, shgc: 0.25 },
+    label: 'Triple pane, low-e',
+    source: '[MEM: ASHRAE Fundamentals ch. 15, verify]',
+  },
 } as const satisfies Record<string, Sourced<{ u: number; shgc: number }>>;
 export type GlazingTypeKey = keyof typeof GLAZING_TYPES;
 
@@ -67,7 +107,11 @@ export type DoorTypeKey = keyof typeof DOOR_TYPES;
 
 /** Natural (design) air changes per hour by tightness. */
 export const INFILTRATION_TIGHTNESS = {
-  'very-tight': { value: 0.15, label: 'Very tight (≤ 3 ACH50)', source: '[TRADE/MEM: ASHRAE 1997 ch. 28, Manual J tightness tables: 0.10–0.20]' },
+  'very-tight': {
+    value: 0.15,
+    label: 'Very tight (≤ 3 ACH50)',
+    source: '[TRADE/MEM: ASHRAE 1997 ch. 28, Manual J tightness tables: 0.10–0.20]',
+  },
   tight: { value: 0.3, label: 'Tight', source: '[TRADE/MEM: 0.25–0.35]' },
   average: { value: 0.5, label: 'Average', source: '[TRADE/MEM: ≈ 0.5]' },
   leaky: { value: 0.85, label: 'Leaky / older', source: '[TRADE/MEM: 0.7–1.0]' },
@@ -82,7 +126,14 @@ export type TightnessKey = keyof typeof INFILTRATION_TIGHTNESS;
  * 30–45 diffuse; TRADE: E/W highest, S moderate in summer]
  */
 export const PEAK_IRRADIANCE_BTUH_FT2 = {
-  N: 40, NE: 120, E: 200, SE: 150, S: 100, SW: 150, W: 215, NW: 120,
+  N: 40,
+  NE: 120,
+  E: 200,
+  SE: 150,
+  S: 100,
+  SW: 150,
+  W: 215,
+  NW: 120,
 } as const;
 export type CompassDirection = keyof typeof PEAK_IRRADIANCE_BTUH_FT2;
 export const IRRADIANCE_SOURCE = '[MEM: ASHRAE Fundamentals ch. 14/15 clear-sky peaks; Gaugeline simplification]';
@@ -102,8 +153,16 @@ export type InteriorShadingKey = keyof typeof INTERIOR_SHADING_IAC;
  * buffer spaces (crawl, garage, basement) sit at indoor + fraction × (outdoor − indoor).
  */
 export const ADJACENT_SPACE = {
-  atticCoolingAdderF: { value: 30, label: 'Attic above outdoor, summer', source: '[TRADE: sun-heated attic simplification, verify]' },
-  roofCoolingAdderF: { value: 40, label: 'Roof deck sol-air above outdoor', source: '[TRADE: sol-air simplification, verify]' },
+  atticCoolingAdderF: {
+    value: 30,
+    label: 'Attic above outdoor, summer',
+    source: '[TRADE: sun-heated attic simplification, verify]',
+  },
+  roofCoolingAdderF: {
+    value: 40,
+    label: 'Roof deck sol-air above outdoor',
+    source: '[TRADE: sol-air simplification, verify]',
+  },
   crawlspaceVented: { value: { heating: 0.8, cooling: 0 }, label: 'Vented crawl space', source: '[TRADE]' },
   crawlspaceClosed: { value: { heating: 0.5, cooling: 0 }, label: 'Closed crawl space', source: '[TRADE]' },
   basement: { value: { heating: 0.3, cooling: 0 }, label: 'Unconditioned basement', source: '[TRADE]' },
@@ -117,4 +176,5 @@ export const ADJACENT_SPACE = {
  */
 export const PERSON_SENSIBLE_W = 70;
 export const PERSON_LATENT_W = 45;
-export const PEOPLE_SOURCE = '[PUB: ASHRAE Fundamentals ch. 18 Table 1, seated very light work, 70 W sensible / 45 W latent]';
+export const PEOPLE_SOURCE =
+  '[PUB: ASHRAE Fundamentals ch. 18 Table 1, seated very light work, 70 W sensible / 45 W latent]';

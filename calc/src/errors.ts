@@ -14,9 +14,11 @@ export const CALC_ERROR_MESSAGES = {
   PERCENT_OUT_OF_RANGE: 'The percentage is outside the allowed range.',
   EMPTY_LIST: 'At least one value is needed.',
   UNKNOWN_TUBE_OD: 'Unknown tube size: use an ASTM B280 ACR size of 1/4, 5/16, 3/8, 1/2, 5/8, 3/4 or 7/8 in.',
-  AMPACITY_ABOVE_TABLE: 'The required ampacity is above the 4 AWG copper row of NEC Table 310.16 covered here; size the conductor by hand.',
+  AMPACITY_ABOVE_TABLE:
+    'The required ampacity is above the 4 AWG copper row of NEC Table 310.16 covered here; size the conductor by hand.',
   UNKNOWN_TERMINATION: 'Termination rating must be 60 or 75 °C.',
-  NO_STANDARD_BREAKER: 'No standard breaker rating fits between the circuit ampacity (MCA) and the maximum overcurrent protection (MOCP).',
+  NO_STANDARD_BREAKER:
+    'No standard breaker rating fits between the circuit ampacity (MCA) and the maximum overcurrent protection (MOCP).',
   MARGIN_TOO_HIGH: 'Margin must be below 100 %.',
   ABSOLUTE_ZERO: 'The temperature is below absolute zero.',
   WET_BULB_ABOVE_DRY_BULB: 'The wet-bulb temperature cannot be above the dry-bulb temperature.',

@@ -38,6 +38,10 @@ export function wallNetAreaFt2(wall: Wall, ceilingHeightFt: number): number {
 }
 
 /** Floor area, ft²: length × width, or the entered area. */
-export function floorAreaFt2(room: { readonly lengthFt?: number | undefined; readonly widthFt?: number | undefined; readonly areaFt2?: number | undefined }): number {
+export function floorAreaFt2(room: {
+  readonly lengthFt?: number | undefined;
+  readonly widthFt?: number | undefined;
+  readonly areaFt2?: number | undefined;
+}): number {
   return room.areaFt2 ?? (room.lengthFt ?? 0) * (room.widthFt ?? 0);
 }

@@ -17,10 +17,19 @@ const TRIPLE_POINT_F = 32.018;
 function saturationPressureAt(dryBulbF: number, t: number): number {
   const lnP =
     dryBulbF <= TRIPLE_POINT_F
-      ? -1.0214165e4 / t - 4.8932428 - 5.3765794e-3 * t + 1.9202377e-7 * t ** 2 +
-        3.5575832e-10 * t ** 3 - 9.0344688e-14 * t ** 4 + 4.1635019 * Math.log(t)
-      : -1.0440397e4 / t - 1.129465e1 - 2.7022355e-2 * t + 1.289036e-5 * t ** 2 -
-        2.4780681e-9 * t ** 3 + 6.5459673 * Math.log(t);
+      ? -1.0214165e4 / t -
+        4.8932428 -
+        5.3765794e-3 * t +
+        1.9202377e-7 * t ** 2 +
+        3.5575832e-10 * t ** 3 -
+        9.0344688e-14 * t ** 4 +
+        4.1635019 * Math.log(t)
+      : -1.0440397e4 / t -
+        1.129465e1 -
+        2.7022355e-2 * t +
+        1.289036e-5 * t ** 2 -
+        2.4780681e-9 * t ** 3 +
+        6.5459673 * Math.log(t);
   return Math.exp(lnP);
 }
 
@@ -42,9 +51,13 @@ export function altitudeFactor({ elevationFt }: { readonly elevationFt: number }
 }
 
 /** Humidity ratio from vapour partial pressure; eq. 20: W = 0.621945 pw / (p − pw). */
-export function humidityRatioFromVaporPressure(
-  { vaporPsia, pressurePsia }: { readonly vaporPsia: number; readonly pressurePsia: number },
-): number {
+export function humidityRatioFromVaporPressure({
+  vaporPsia,
+  pressurePsia,
+}: {
+  readonly vaporPsia: number;
+  readonly pressurePsia: number;
+}): number {
   const pw = num(vaporPsia, 'nonNegative');
   const p = num(pressurePsia, 'positive');
   assert(pw < p, 'PRESSURE_OUT_OF_RANGE');
@@ -52,17 +65,29 @@ export function humidityRatioFromVaporPressure(
 }
 
 /** Humidity ratio from dry bulb and relative humidity (0–1); eq. 12 and 20. */
-export function humidityRatioFromRh(
-  { dryBulbF, rh, pressurePsia }: { readonly dryBulbF: number; readonly rh: number; readonly pressurePsia: number },
-): number {
+export function humidityRatioFromRh({
+  dryBulbF,
+  rh,
+  pressurePsia,
+}: {
+  readonly dryBulbF: number;
+  readonly rh: number;
+  readonly pressurePsia: number;
+}): number {
   const vaporPsia = num(rh, 'fraction') * saturationPressurePsia({ dryBulbF });
   return humidityRatioFromVaporPressure({ vaporPsia, pressurePsia });
 }
 
 /** Humidity ratio from dry bulb and thermodynamic wet bulb; eq. 35 (wet surface) / 37 (ice). */
-export function humidityRatioFromWetBulb(
-  { dryBulbF, wetBulbF, pressurePsia }: { readonly dryBulbF: number; readonly wetBulbF: number; readonly pressurePsia: number },
-): number {
+export function humidityRatioFromWetBulb({
+  dryBulbF,
+  wetBulbF,
+  pressurePsia,
+}: {
+  readonly dryBulbF: number;
+  readonly wetBulbF: number;
+  readonly pressurePsia: number;
+}): number {
   const tdb = num(dryBulbF);
   const twb = num(wetBulbF);
   assert(twb <= tdb, 'WET_BULB_ABOVE_DRY_BULB');
@@ -70,16 +95,21 @@ export function humidityRatioFromWetBulb(
     vaporPsia: saturationPressurePsia({ dryBulbF: twb }),
     pressurePsia,
   });
-  const w = twb >= 32
-    ? ((1093 - 0.556 * twb) * wsStar - 0.24 * (tdb - twb)) / (1093 + 0.444 * tdb - twb)
-    : ((1220 - 0.04 * twb) * wsStar - 0.24 * (tdb - twb)) / (1220 + 0.444 * tdb - 0.48 * twb);
+  const w =
+    twb >= 32
+      ? ((1093 - 0.556 * twb) * wsStar - 0.24 * (tdb - twb)) / (1093 + 0.444 * tdb - twb)
+      : ((1220 - 0.04 * twb) * wsStar - 0.24 * (tdb - twb)) / (1220 + 0.444 * tdb - 0.48 * twb);
   return Math.max(w, 1e-7);
 }
 
 /** Moist-air enthalpy, Btu/lb dry air; eq. 32: h = 0.240 t + W (1061 + 0.444 t). */
-export function moistAirEnthalpyBtuPerLb(
-  { dryBulbF, humidityRatio }: { readonly dryBulbF: number; readonly humidityRatio: number },
-): number {
+export function moistAirEnthalpyBtuPerLb({
+  dryBulbF,
+  humidityRatio,
+}: {
+  readonly dryBulbF: number;
+  readonly humidityRatio: number;
+}): number {
   const t = num(dryBulbF);
   return 0.24 * t + num(humidityRatio, 'nonNegative') * (1061 + 0.444 * t);
 }
@@ -88,16 +118,21 @@ export function moistAirEnthalpyBtuPerLb(
  * Dew point, °F: the temperature whose saturation pressure equals the vapour pressure
  * (eq. 5/6 inverted by 50 bisection steps over −148…392 °F; deterministic, ±1e-12 °F).
  */
-export function dewPointF(
-  { humidityRatio, pressurePsia }: { readonly humidityRatio: number; readonly pressurePsia: number },
-): number {
+export function dewPointF({
+  humidityRatio,
+  pressurePsia,
+}: {
+  readonly humidityRatio: number;
+  readonly pressurePsia: number;
+}): number {
   const w = num(humidityRatio, 'positive');
   const pw = (num(pressurePsia, 'positive') * w) / (MOLAR_RATIO + w);
   let lo = -148;
   let hi = 392;
   for (let i = 0; i < 50; i += 1) {
     const mid = (lo + hi) / 2;
-    if (saturationPressureAt(mid, mid + RANKINE_OFFSET) < pw) lo = mid; // mid ≥ −148 °F, so t > 0
+    if (saturationPressureAt(mid, mid + RANKINE_OFFSET) < pw)
+      lo = mid; // mid ≥ −148 °F, so t > 0
     else hi = mid;
   }
   return (lo + hi) / 2;

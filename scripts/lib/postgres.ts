@@ -15,7 +15,9 @@ export interface ClusterOptions {
 function binDir(): string | undefined {
   const base = '/usr/lib/postgresql';
   if (!existsSync(base)) return undefined;
-  const majors = readdirSync(base).filter((d) => existsSync(join(base, d, 'bin', 'initdb'))).sort((a, b) => Number(b) - Number(a));
+  const majors = readdirSync(base)
+    .filter((d) => existsSync(join(base, d, 'bin', 'initdb')))
+    .sort((a, b) => Number(b) - Number(a));
   return majors[0] ? join(base, majors[0], 'bin') : undefined;
 }
 
@@ -53,7 +55,11 @@ function reachableDataDir(wanted: string): string {
     run('runuser', ['-u', 'postgres', '--', 'test', '-x', parent], { cwd: '/' });
     return wanted;
   } catch {
-    const alt = join('/var/tmp', `gaugeline-${createHash('sha256').update(wanted).digest('hex').slice(0, 12)}`, basename(wanted));
+    const alt = join(
+      '/var/tmp',
+      `gaugeline-${createHash('sha256').update(wanted).digest('hex').slice(0, 12)}`,
+      basename(wanted),
+    );
     mkdirSync(dirname(alt), { recursive: true, mode: 0o755 });
     if (!existsSync(wanted)) symlinkSync(alt, wanted);
     log(`postgres cannot enter ${parent}; the cluster lives in ${alt} (linked from ${wanted})`);
@@ -87,7 +93,15 @@ export class Cluster {
     mkdirSync(this.pgData, { recursive: true });
     chmodSync(this.pgData, 0o700);
     ownByPostgres(this.pgData);
-    asOwner(join(this.bin, 'initdb'), ['-D', this.pgData, '-U', 'postgres', '--auth=trust', '--encoding=UTF8', '--locale=C.UTF-8']);
+    asOwner(join(this.bin, 'initdb'), [
+      '-D',
+      this.pgData,
+      '-U',
+      'postgres',
+      '--auth=trust',
+      '--encoding=UTF8',
+      '--locale=C.UTF-8',
+    ]);
   }
 
   running(): boolean {
@@ -109,7 +123,18 @@ export class Cluster {
     if (this.running()) return false;
     const settings = [`-c listen_addresses=127.0.0.1`, `-p ${this.opts.port}`, `-k ${this.socketDir}`];
     if (this.opts.fast) settings.push('-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off');
-    asOwner(join(this.bin, 'pg_ctl'), ['-D', this.pgData, '-l', this.logFile, '-w', '-t', '30', '-o', settings.join(' '), 'start']);
+    asOwner(join(this.bin, 'pg_ctl'), [
+      '-D',
+      this.pgData,
+      '-l',
+      this.logFile,
+      '-w',
+      '-t',
+      '30',
+      '-o',
+      settings.join(' '),
+      'start',
+    ]);
     return true;
   }
 
@@ -123,7 +148,12 @@ export class Cluster {
   }
 
   /** Creates the application role (no superuser, no BYPASSRLS) and its database. */
-  async ensureDatabase(name: string, role: string, password: string, opts: { recreate?: boolean } = {}): Promise<string> {
+  async ensureDatabase(
+    name: string,
+    role: string,
+    password: string,
+    opts: { recreate?: boolean } = {},
+  ): Promise<string> {
     const client = new pg.Client({ connectionString: this.adminUrl() });
     await client.connect();
     try {

@@ -28,7 +28,9 @@ let aptUpdated = false;
 export function ensureDebianPackages(packages: readonly string[], why: string, present: () => boolean): void {
   if (present()) return;
   if (!isRoot) {
-    fail(`${why} is missing. Install it with:\n\n    sudo apt-get install -y ${packages.join(' ')}\n\nthen run the command again.`);
+    fail(
+      `${why} is missing. Install it with:\n\n    sudo apt-get install -y ${packages.join(' ')}\n\nthen run the command again.`,
+    );
   }
   log(`installing ${packages.join(', ')} from Debian's packages (${why})…`);
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };

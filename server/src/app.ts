@@ -31,7 +31,8 @@ export function createApp(services: Services): Express {
         return id;
       },
       autoLogging: { ignore: (req) => req.url === '/api/health' },
-      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug'),
+      customLogLevel: (_req, res, err) =>
+        err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug',
     }),
   );
   app.use(
@@ -48,7 +49,9 @@ export function createApp(services: Services): Express {
           upgradeInsecureRequests: null,
         },
       },
-      strictTransportSecurity: config.APP_ORIGIN.startsWith('https:') ? { maxAge: 31_536_000, includeSubDomains: true } : false,
+      strictTransportSecurity: config.APP_ORIGIN.startsWith('https:')
+        ? { maxAge: 31_536_000, includeSubDomains: true }
+        : false,
     }),
   );
 
@@ -67,9 +70,16 @@ export function createApp(services: Services): Express {
 
   const dist = resolve(config.CLIENT_DIST);
   if (existsSync(join(dist, 'index.html'))) {
-    app.use(express.static(dist, { index: false, maxAge: '1h', setHeaders: (res, path) => {
-      if (path.includes(`${join(dist, 'assets')}`)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
-    } }));
+    app.use(
+      express.static(dist, {
+        index: false,
+        maxAge: '1h',
+        setHeaders: (res, path) => {
+          if (path.includes(`${join(dist, 'assets')}`))
+            res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+        },
+      }),
+    );
     app.get('/{*splat}', (_req, res) => {
       res.setHeader('Cache-Control', 'no-cache');
       res.sendFile(join(dist, 'index.html'));

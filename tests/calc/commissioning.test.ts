@@ -1,5 +1,13 @@
 import { describe, it, expect } from 'vitest';
-import { nitrogenTestPsigAt, evacuationVerdict, maxGaugeResolutionPsi, condensateFallIn, condensateGalPerHour, condensateLbPerHour, CALC_ERROR_MESSAGES } from '@calc';
+import {
+  nitrogenTestPsigAt,
+  evacuationVerdict,
+  maxGaugeResolutionPsi,
+  condensateFallIn,
+  condensateGalPerHour,
+  condensateLbPerHour,
+  CALC_ERROR_MESSAGES,
+} from '@calc';
 
 describe('pressure test and evacuation (reference §9)', () => {
   it('9.3: 300 psig at 70 °F cooling to 60 °F → 294.06 psig ± 0.05', () => {
@@ -11,16 +19,24 @@ describe('pressure test and evacuation (reference §9)', () => {
   });
   it('9.2: 480 → 1,450 microns: passes the 1,500 rule, fails a 1,000 trade policy', () => {
     // [PUB: UL-derived instructions 500 / 1,500 microns; TRADE: 1,000-micron decay policy]
-    expect(evacuationVerdict({ reachedMicrons: 480, afterHoldMicrons: 1450, targetMicrons: 500, maxRiseToMicrons: 1500 })).toEqual({ reached: true, held: true, pass: true });
-    expect(evacuationVerdict({ reachedMicrons: 480, afterHoldMicrons: 1450, targetMicrons: 500, maxRiseToMicrons: 1000 })).toEqual({ reached: true, held: false, pass: false });
-    expect(evacuationVerdict({ reachedMicrons: 650, afterHoldMicrons: 700, targetMicrons: 500, maxRiseToMicrons: 1500 })).toEqual({ reached: false, held: true, pass: false });
+    expect(
+      evacuationVerdict({ reachedMicrons: 480, afterHoldMicrons: 1450, targetMicrons: 500, maxRiseToMicrons: 1500 }),
+    ).toEqual({ reached: true, held: true, pass: true });
+    expect(
+      evacuationVerdict({ reachedMicrons: 480, afterHoldMicrons: 1450, targetMicrons: 500, maxRiseToMicrons: 1000 }),
+    ).toEqual({ reached: true, held: false, pass: false });
+    expect(
+      evacuationVerdict({ reachedMicrons: 650, afterHoldMicrons: 700, targetMicrons: 500, maxRiseToMicrons: 1500 }),
+    ).toEqual({ reached: false, held: true, pass: false });
   });
   it('9.4: 150 psig test → gauge resolution ≤ 7.5 psi', () => {
     // [PUB: UL-derived A2L instructions, 5 % of test pressure]
     expect(maxGaugeResolutionPsi({ testPsig: 150 })).toBeCloseTo(7.5, 9);
   });
   it('rejects strings', () => {
-    expect(() => nitrogenTestPsigAt({ psig: JSON.parse('"300"'), fromF: 70, toF: 60 })).toThrow(CALC_ERROR_MESSAGES.NOT_A_NUMBER);
+    expect(() => nitrogenTestPsigAt({ psig: JSON.parse('"300"'), fromF: 70, toF: 60 })).toThrow(
+      CALC_ERROR_MESSAGES.NOT_A_NUMBER,
+    );
   });
 });
 

@@ -68,7 +68,15 @@ describe('full design on the worked three-room house', () => {
   });
   it('cautions always include estimate, refrigerant, pressure test and electrician wording', () => {
     const r = run();
-    expect(r.cautions).toEqual(expect.arrayContaining([CAUTIONS.estimate, CAUTIONS.refrigerant, CAUTIONS.pressureTest, CAUTIONS.electrical, CAUTIONS.a2l]));
+    expect(r.cautions).toEqual(
+      expect.arrayContaining([
+        CAUTIONS.estimate,
+        CAUTIONS.refrigerant,
+        CAUTIONS.pressureTest,
+        CAUTIONS.electrical,
+        CAUTIONS.a2l,
+      ]),
+    );
     expect(r.isEstimate).toBe(true);
   });
   it('unknown rooms and equipment are calc errors with a path', () => {
@@ -77,7 +85,13 @@ describe('full design on the worked three-room house', () => {
     const [first] = design.systems;
     if (!first) throw new Error('sample design has a system');
     try {
-      computeDesign({ home: threeRoomHome, design: { ...design, systems: [{ ...first, outdoorUnitKey: 'missing' }] }, catalog, priceBook, pricing });
+      computeDesign({
+        home: threeRoomHome,
+        design: { ...design, systems: [{ ...first, outdoorUnitKey: 'missing' }] },
+        catalog,
+        priceBook,
+        pricing,
+      });
       expect.unreachable();
     } catch (e) {
       expect(e instanceof CalcError && e.code).toBe('UNKNOWN_EQUIPMENT');
@@ -87,7 +101,15 @@ describe('full design on the worked three-room house', () => {
   it('missing adder → labelled tube-volume estimate; missing price → warning', () => {
     const single = {
       zones: [{ key: 'z1', name: 'Bed', roomIds: ['bed'], indoorUnitKey: 'GL-12K-WH' }],
-      systems: [{ key: 's', name: 'Bedroom system', outdoorUnitKey: 'GL-O12-S1', circuits: [{ zoneKey: 'z1', lengthFt: 35 }], electrical: { circuitLengthFt: 30 } }],
+      systems: [
+        {
+          key: 's',
+          name: 'Bedroom system',
+          outdoorUnitKey: 'GL-O12-S1',
+          circuits: [{ zoneKey: 'z1', lengthFt: 35 }],
+          electrical: { circuitLengthFt: 30 },
+        },
+      ],
     };
     const r = computeDesign({ home: threeRoomHome, design: single, catalog, priceBook, pricing });
     const ref = r.systems[0]?.refrigerant;
@@ -98,12 +120,19 @@ describe('full design on the worked three-room house', () => {
     expect(r.warnings.some((w) => w.includes('No price for'))).toBe(true);
   });
   it('options side by side', () => {
-    const o = computeOptions({ home: threeRoomHome, catalog, priceBook, options: [
-      { key: 'good', name: 'Good', design, pricing: { ...pricing, percent: 30 } },
-      { key: 'best', name: 'Best', design, pricing },
-    ] });
+    const o = computeOptions({
+      home: threeRoomHome,
+      catalog,
+      priceBook,
+      options: [
+        { key: 'good', name: 'Good', design, pricing: { ...pricing, percent: 30 } },
+        { key: 'best', name: 'Best', design, pricing },
+      ],
+    });
     expect(o.comparison).toHaveLength(2);
-    expect(o.comparison[1]?.differenceFromFirstCents).toBe((o.results[1]?.result.price.totalCents ?? 0) - (o.results[0]?.result.price.totalCents ?? 0));
+    expect(o.comparison[1]?.differenceFromFirstCents).toBe(
+      (o.results[1]?.result.price.totalCents ?? 0) - (o.results[0]?.result.price.totalCents ?? 0),
+    );
   });
   it('helpers: stock kits and cylinders', () => {
     // common practice [TRADE] stock lengths 15/25/35/50/75/100 ft

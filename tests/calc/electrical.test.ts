@@ -1,12 +1,29 @@
 import { describe, it, expect } from 'vitest';
 import {
-  NEC_310_16_COPPER, copperWireAwg, copperAmpacityA, breakerSizeA, mcaFromNameplateA, mocpFromNameplateA, disconnectWithinSight,
-  ambientFactor75C, electricalPlan, CALC_ERROR_MESSAGES, STANDARD_BREAKERS_A, CAUTIONS,
+  NEC_310_16_COPPER,
+  copperWireAwg,
+  copperAmpacityA,
+  breakerSizeA,
+  mcaFromNameplateA,
+  mocpFromNameplateA,
+  disconnectWithinSight,
+  ambientFactor75C,
+  electricalPlan,
+  CALC_ERROR_MESSAGES,
+  STANDARD_BREAKERS_A,
+  CAUTIONS,
 } from '@calc';
 
 describe('NEC Table 310.16 copper (60/75/90 °C)', () => {
   // [PUB: NFPA 70 (2023) Table 310.16 as reproduced by wiresizes.com and voltagelab.com]
-  const table: [number, number, number, number][] = [[14, 15, 20, 25], [12, 20, 25, 30], [10, 30, 35, 40], [8, 40, 50, 55], [6, 55, 65, 75], [4, 70, 85, 95]];
+  const table: [number, number, number, number][] = [
+    [14, 15, 20, 25],
+    [12, 20, 25, 30],
+    [10, 30, 35, 40],
+    [8, 40, 50, 55],
+    [6, 55, 65, 75],
+    [4, 70, 85, 95],
+  ];
   it.each(table)('%s AWG: %s / %s / %s A', (awg, c60, c75, c90) => {
     expect(NEC_310_16_COPPER.find((r) => r.awg === awg)).toEqual({ awg, c60, c75, c90 });
     expect(copperAmpacityA({ awg, terminationC: 60 })).toBe(c60);
@@ -16,7 +33,9 @@ describe('NEC Table 310.16 copper (60/75/90 °C)', () => {
   });
   it('above 4 AWG and unknown terminations throw constant messages', () => {
     expect(() => copperWireAwg({ ampacityA: 86, terminationC: 75 })).toThrow(CALC_ERROR_MESSAGES.AMPACITY_ABOVE_TABLE);
-    expect(() => copperWireAwg({ ampacityA: 20, terminationC: JSON.parse('90') })).toThrow(CALC_ERROR_MESSAGES.UNKNOWN_TERMINATION);
+    expect(() => copperWireAwg({ ampacityA: 20, terminationC: JSON.parse('90') })).toThrow(
+      CALC_ERROR_MESSAGES.UNKNOWN_TERMINATION,
+    );
   });
 });
 
@@ -30,7 +49,17 @@ describe('electrical check values (reference §10)', () => {
   it('10.2: MCA 22.5 at 75 °C → 12 AWG; on NM-B (60 °C) → 10 AWG', () => {
     // [PUB: Table 310.16; MEM: NEC 334.80 NM-B at 60 °C]
     expect(copperWireAwg({ ampacityA: 22.5, terminationC: 75 })).toBe(12);
-    const plan = electricalPlan({ mcaA: 22.5, mocpA: 35, input: { terminationC: 75, wiringMethod: 'nm-b', circuitLengthFt: 30, disconnectDistanceFt: 3, disconnectVisible: true } });
+    const plan = electricalPlan({
+      mcaA: 22.5,
+      mocpA: 35,
+      input: {
+        terminationC: 75,
+        wiringMethod: 'nm-b',
+        circuitLengthFt: 30,
+        disconnectDistanceFt: 3,
+        disconnectVisible: true,
+      },
+    });
     expect(plan.wireAwg).toBe(10);
     expect(plan.ampacityColumnC).toBe(60);
   });
@@ -66,7 +95,17 @@ describe('electrical check values (reference §10)', () => {
     expect(() => breakerSizeA({ mcaA: 31, mocpA: 33 })).toThrow(CALC_ERROR_MESSAGES.NO_STANDARD_BREAKER);
   });
   it('plan carries the electrician caution, isEstimate and a within-sight warning', () => {
-    const plan = electricalPlan({ mcaA: 18.6, mocpA: 30, input: { terminationC: 60, wiringMethod: 'nm-b', circuitLengthFt: 40, disconnectDistanceFt: 60, disconnectVisible: false } });
+    const plan = electricalPlan({
+      mcaA: 18.6,
+      mocpA: 30,
+      input: {
+        terminationC: 60,
+        wiringMethod: 'nm-b',
+        circuitLengthFt: 40,
+        disconnectDistanceFt: 60,
+        disconnectVisible: false,
+      },
+    });
     expect(plan.caution).toBe(CAUTIONS.electrical);
     expect(plan.isEstimate).toBe(true);
     expect(plan.disconnectWithinSight).toBe(false);

@@ -1,7 +1,18 @@
 import { describe, it, expect } from 'vitest';
 import {
-  seriesU, parallelPathU, conductionBtuh, rsiFromR, solarGainBtuh, btuhFromW, PERSON_SENSIBLE_W, PERSON_LATENT_W,
-  WALL_CONSTRUCTIONS, PEAK_IRRADIANCE_BTUH_FT2, INTERIOR_SHADING_IAC, CalcError, CALC_ERROR_MESSAGES,
+  seriesU,
+  parallelPathU,
+  conductionBtuh,
+  rsiFromR,
+  solarGainBtuh,
+  btuhFromW,
+  PERSON_SENSIBLE_W,
+  PERSON_LATENT_W,
+  WALL_CONSTRUCTIONS,
+  PEAK_IRRADIANCE_BTUH_FT2,
+  INTERIOR_SHADING_IAC,
+  CalcError,
+  CALC_ERROR_MESSAGES,
 } from '@calc';
 
 describe('conduction (reference §2)', () => {
@@ -37,7 +48,9 @@ describe('conduction (reference §2)', () => {
   });
   it('invalid inputs throw CalcError with constant messages', () => {
     expect(() => seriesU({ rValues: [] })).toThrow(CALC_ERROR_MESSAGES.EMPTY_LIST);
-    expect(() => parallelPathU({ cavityU: 0.06, framingU: 0.14, framingFraction: 1.5 })).toThrow(CALC_ERROR_MESSAGES.FRACTION_OUT_OF_RANGE);
+    expect(() => parallelPathU({ cavityU: 0.06, framingU: 0.14, framingFraction: 1.5 })).toThrow(
+      CALC_ERROR_MESSAGES.FRACTION_OUT_OF_RANGE,
+    );
     try {
       conductionBtuh({ u: 0.1, areaFt2: -5, deltaTF: 10 });
       expect.unreachable();
@@ -55,7 +68,9 @@ describe('solar gain and internal gains (reference §3, §4)', () => {
   });
   it('3.2: same with blinds IAC 0.70 → 840; blinds default is 0.70', () => {
     // pure arithmetic; IAC 0.70 [MEM: ASHRAE ch. 15]
-    expect(solarGainBtuh({ areaFt2: 20, shgc: 0.3, irradiance: 200, iac: INTERIOR_SHADING_IAC.blinds.value })).toBeCloseTo(840, 9);
+    expect(
+      solarGainBtuh({ areaFt2: 20, shgc: 0.3, irradiance: 200, iac: INTERIOR_SHADING_IAC.blinds.value }),
+    ).toBeCloseTo(840, 9);
   });
   it('3.3: SC 0.80 → SHGC 0.696 ± 0.001', () => {
     // [MEM: ASHRAE ch. 15, SHGC = 0.87 × SC]

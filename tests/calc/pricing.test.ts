@@ -1,11 +1,26 @@
 import { describe, it, expect } from 'vitest';
 import {
-  priceFromMarginCents, priceFromMarkupCents, monthlyPaymentCents, roundHalfUp, roundCentsHalfUp, priceOption, pricingSchema,
-  compareOptions, CALC_ERROR_MESSAGES, type PricedLine,
+  priceFromMarginCents,
+  priceFromMarkupCents,
+  monthlyPaymentCents,
+  roundHalfUp,
+  roundCentsHalfUp,
+  priceOption,
+  pricingSchema,
+  compareOptions,
+  CALC_ERROR_MESSAGES,
+  type PricedLine,
 } from '@calc';
 
 const line = (category: PricedLine['category'], cents: number): PricedLine => ({
-  itemKey: `x:${category}:${cents}`, description: 'test', quantity: 1, unit: 'each', category, derivation: 'test', unitCostCents: cents, extendedCostCents: cents,
+  itemKey: `x:${category}:${cents}`,
+  description: 'test',
+  quantity: 1,
+  unit: 'each',
+  category,
+  derivation: 'test',
+  unitCostCents: cents,
+  extendedCostCents: cents,
 });
 
 describe('money helpers (integer cents, half-up)', () => {
@@ -21,14 +36,18 @@ describe('money helpers (integer cents, half-up)', () => {
     expect(priceFromMarkupCents({ costCents: 100000, markupPercent: 40 })).toBe(140000);
   });
   it('margin of 100 % or more and fractional cents are errors', () => {
-    expect(() => priceFromMarginCents({ costCents: 100, marginPercent: 100 })).toThrow(CALC_ERROR_MESSAGES.MARGIN_TOO_HIGH);
+    expect(() => priceFromMarginCents({ costCents: 100, marginPercent: 100 })).toThrow(
+      CALC_ERROR_MESSAGES.MARGIN_TOO_HIGH,
+    );
     expect(() => priceFromMarkupCents({ costCents: 10.5, markupPercent: 10 })).toThrow(CALC_ERROR_MESSAGES.NOT_INTEGER);
   });
   it('monthly payment: $10,000 at 6 % for 60 months = $193.33; 0 % divides evenly', () => {
     // [PUB: standard annuity formula] 1,000,000 × 0.005 / (1 − 1.005^−60) = 19,332.80 → 19,333
     expect(monthlyPaymentCents({ principalCents: 1000000, aprPercent: 6, months: 60 })).toBe(19333);
     expect(monthlyPaymentCents({ principalCents: 1000000, aprPercent: 0, months: 48 })).toBe(20833);
-    expect(() => monthlyPaymentCents({ principalCents: 1000, aprPercent: 5, months: 0 })).toThrow(CALC_ERROR_MESSAGES.NOT_POSITIVE);
+    expect(() => monthlyPaymentCents({ principalCents: 1000, aprPercent: 5, months: 0 })).toThrow(
+      CALC_ERROR_MESSAGES.NOT_POSITIVE,
+    );
   });
 });
 
@@ -36,8 +55,16 @@ describe('option price roll-up', () => {
   const lines = [line('equipment', 300000), line('material', 50000), line('labor', 95000)];
   it('margin, percent + amount discounts, tax on goods share, deposit, financing — each step hand-checked', () => {
     const pricing = pricingSchema.parse({
-      method: 'margin', percent: 40, discounts: [{ label: 'Ten off', kind: 'percent', value: 10 }, { label: 'Coupon', kind: 'amount', value: 10000 }],
-      taxRatePercent: 6, taxOn: 'materials', deposit: { kind: 'percent', value: 30 }, financing: { aprPercent: 0, months: 12 },
+      method: 'margin',
+      percent: 40,
+      discounts: [
+        { label: 'Ten off', kind: 'percent', value: 10 },
+        { label: 'Coupon', kind: 'amount', value: 10000 },
+      ],
+      taxRatePercent: 6,
+      taxOn: 'materials',
+      deposit: { kind: 'percent', value: 30 },
+      financing: { aprPercent: 0, months: 12 },
     });
     const p = priceOption({ lines, pricing });
     // goods cost 350,000 / 0.6 = 583,333.33 → 583,333; labor 95,000 / 0.6 = 158,333.33 → 158,333
@@ -58,7 +85,10 @@ describe('option price roll-up', () => {
     expect(p.costCents).toBe(445000);
   });
   it('tax on the total and markup', () => {
-    const p = priceOption({ lines, pricing: pricingSchema.parse({ method: 'markup', percent: 50, taxRatePercent: 5, taxOn: 'total' }) });
+    const p = priceOption({
+      lines,
+      pricing: pricingSchema.parse({ method: 'markup', percent: 50, taxRatePercent: 5, taxOn: 'total' }),
+    });
     // 350,000 × 1.5 = 525,000; 95,000 × 1.5 = 142,500; total base 667,500; tax 33,375
     expect(p.subtotalCents).toBe(667500);
     expect(p.taxCents).toBe(33375);
@@ -66,14 +96,26 @@ describe('option price roll-up', () => {
     expect(p.monthlyPaymentCents).toBeNull();
   });
   it('discounts never exceed the sell price; amount deposits are capped at the total', () => {
-    const p = priceOption({ lines, pricing: pricingSchema.parse({ percent: 10, discounts: [{ label: 'Huge', kind: 'amount', value: 99999999 }], deposit: { kind: 'amount', value: 50000 } }) });
+    const p = priceOption({
+      lines,
+      pricing: pricingSchema.parse({
+        percent: 10,
+        discounts: [{ label: 'Huge', kind: 'amount', value: 99999999 }],
+        deposit: { kind: 'amount', value: 50000 },
+      }),
+    });
     expect(p.subtotalCents).toBe(0);
     expect(p.depositCents).toBe(0);
   });
   it('options side by side show the difference from the first', () => {
     const a = priceOption({ lines, pricing: pricingSchema.parse({ percent: 30 }) });
     const b = priceOption({ lines, pricing: pricingSchema.parse({ percent: 40 }) });
-    const rows = compareOptions({ options: [{ key: 'good', name: 'Good', price: a }, { key: 'better', name: 'Better', price: b }] });
+    const rows = compareOptions({
+      options: [
+        { key: 'good', name: 'Good', price: a },
+        { key: 'better', name: 'Better', price: b },
+      ],
+    });
     expect(rows[0]?.differenceFromFirstCents).toBe(0);
     expect(rows[1]?.differenceFromFirstCents).toBe(b.totalCents - a.totalCents);
   });

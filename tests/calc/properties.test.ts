@@ -2,8 +2,20 @@ import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { unit } from 'mathjs';
 import {
-  roomLoad, homeLoad, extraChargeOz, COMPONENT_KEYS, roomFromMetric, designConditionsFromMetric, priceLines, priceOption,
-  pricingSchema, priceBookSchema, type RoomInput, type LoadComponents, type TakeoffLine, type WallInput,
+  roomLoad,
+  homeLoad,
+  extraChargeOz,
+  COMPONENT_KEYS,
+  roomFromMetric,
+  designConditionsFromMetric,
+  priceLines,
+  priceOption,
+  pricingSchema,
+  priceBookSchema,
+  type RoomInput,
+  type LoadComponents,
+  type TakeoffLine,
+  type WallInput,
 } from '@calc';
 import { conditions } from './sample-data';
 
@@ -28,103 +40,177 @@ type RoomSpec = typeof roomArb extends fc.Arbitrary<infer T> ? T : never;
 
 function toRoom(s: RoomSpec, scale = 1): RoomInput {
   const walls: WallInput[] = s.walls.map((w) => ({
-    direction: w.direction, lengthFt: w.lengthFt, construction: w.construction,
-    windows: w.windowFraction > 0.01 ? [{ areaFt2: Math.max(0.5, w.windowFraction * w.lengthFt * s.ceilingHeightFt * scale) }] : [],
+    direction: w.direction,
+    lengthFt: w.lengthFt,
+    construction: w.construction,
+    windows:
+      w.windowFraction > 0.01
+        ? [{ areaFt2: Math.max(0.5, w.windowFraction * w.lengthFt * s.ceilingHeightFt * scale) }]
+        : [],
   }));
   return {
-    id: 'r', name: 'Room', lengthFt: s.lengthFt * scale, widthFt: s.widthFt, ceilingHeightFt: s.ceilingHeightFt, exposedWalls: walls,
-    occupants: s.occupants, appliances: s.applianceW > 0 ? [{ label: 'Load', gain: s.applianceW, unit: 'W' }] : [],
+    id: 'r',
+    name: 'Room',
+    lengthFt: s.lengthFt * scale,
+    widthFt: s.widthFt,
+    ceilingHeightFt: s.ceilingHeightFt,
+    exposedWalls: walls,
+    occupants: s.occupants,
+    appliances: s.applianceW > 0 ? [{ label: 'Load', gain: s.applianceW, unit: 'W' }] : [],
     above: s.above === 'conditioned' ? { kind: 'conditioned' } : { kind: s.above, insulation: 'r30' },
-    below: s.below === 'conditioned' ? { kind: 'conditioned' } : s.below === 'slab' ? { kind: 'slab' } : { kind: s.below, insulation: 'none' },
+    below:
+      s.below === 'conditioned'
+        ? { kind: 'conditioned' }
+        : s.below === 'slab'
+          ? { kind: 'slab' }
+          : { kind: s.below, insulation: 'none' },
   };
 }
 
-const sets = (r: { sensibleGain: LoadComponents; latentGain: LoadComponents; heatLoss: LoadComponents }) => [r.sensibleGain, r.latentGain, r.heatLoss];
+const sets = (r: { sensibleGain: LoadComponents; latentGain: LoadComponents; heatLoss: LoadComponents }) => [
+  r.sensibleGain,
+  r.latentGain,
+  r.heatLoss,
+];
 
 describe('load invariants (fast-check)', () => {
   it('every component is finite and non-negative; total = sum of components', () => {
-    fc.assert(fc.property(roomArb, (s) => {
-      const r = roomLoad({ room: toRoom(s), designConditions: conditions });
-      for (const set of sets(r)) {
-        for (const k of COMPONENT_KEYS) {
-          expect(Number.isFinite(set[k])).toBe(true);
-          expect(set[k]).toBeGreaterThanOrEqual(0);
+    fc.assert(
+      fc.property(roomArb, (s) => {
+        const r = roomLoad({ room: toRoom(s), designConditions: conditions });
+        for (const set of sets(r)) {
+          for (const k of COMPONENT_KEYS) {
+            expect(Number.isFinite(set[k])).toBe(true);
+            expect(set[k]).toBeGreaterThanOrEqual(0);
+          }
+          expect(set.total).toBe(COMPONENT_KEYS.reduce((a, k) => a + set[k], 0));
         }
-        expect(set.total).toBe(COMPONENT_KEYS.reduce((a, k) => a + set[k], 0));
-      }
-    }));
+      }),
+    );
   });
   it('home total = sum of room totals', () => {
-    fc.assert(fc.property(fc.array(roomArb, { minLength: 1, maxLength: 5 }), (specs) => {
-      const rooms = specs.map((s, i) => ({ ...toRoom(s), id: `r${i}` }));
-      const h = homeLoad({ home: { designConditions: conditions, rooms } });
-      expect(h.totals.sensibleBtuh).toBe(h.rooms.reduce((a, r) => a + r.sensibleGain.total, 0));
-      expect(h.totals.heatingBtuh).toBe(h.rooms.reduce((a, r) => a + r.heatLoss.total, 0));
-      expect(h.totals.coolingBtuh).toBe(h.totals.sensibleBtuh + h.totals.latentBtuh);
-    }), { numRuns: 50 });
+    fc.assert(
+      fc.property(fc.array(roomArb, { minLength: 1, maxLength: 5 }), (specs) => {
+        const rooms = specs.map((s, i) => ({ ...toRoom(s), id: `r${i}` }));
+        const h = homeLoad({ home: { designConditions: conditions, rooms } });
+        expect(h.totals.sensibleBtuh).toBe(h.rooms.reduce((a, r) => a + r.sensibleGain.total, 0));
+        expect(h.totals.heatingBtuh).toBe(h.rooms.reduce((a, r) => a + r.heatLoss.total, 0));
+        expect(h.totals.coolingBtuh).toBe(h.totals.sensibleBtuh + h.totals.latentBtuh);
+      }),
+      { numRuns: 50 },
+    );
   });
   it('loads rise (never fall) with floor area', () => {
-    fc.assert(fc.property(roomArb, fc.double({ min: 1, max: 2, noNaN: true }), (s, k) => {
-      const small = roomLoad({ room: toRoom({ ...s, walls: [] }), designConditions: conditions });
-      const big = roomLoad({ room: toRoom({ ...s, walls: [], lengthFt: Math.min(200, s.lengthFt * k) }), designConditions: conditions });
-      expect(big.sensibleGain.total).toBeGreaterThanOrEqual(small.sensibleGain.total);
-      expect(big.heatLoss.total).toBeGreaterThanOrEqual(small.heatLoss.total);
-    }));
+    fc.assert(
+      fc.property(roomArb, fc.double({ min: 1, max: 2, noNaN: true }), (s, k) => {
+        const small = roomLoad({ room: toRoom({ ...s, walls: [] }), designConditions: conditions });
+        const big = roomLoad({
+          room: toRoom({ ...s, walls: [], lengthFt: Math.min(200, s.lengthFt * k) }),
+          designConditions: conditions,
+        });
+        expect(big.sensibleGain.total).toBeGreaterThanOrEqual(small.sensibleGain.total);
+        expect(big.heatLoss.total).toBeGreaterThanOrEqual(small.heatLoss.total);
+      }),
+    );
   });
   it('loads rise with the temperature difference (hotter summer, colder winter)', () => {
-    fc.assert(fc.property(roomArb, fc.double({ min: 0, max: 15, noNaN: true }), (s, d) => {
-      const room = toRoom(s);
-      const base = roomLoad({ room, designConditions: conditions });
-      const harsher = roomLoad({ room, designConditions: { ...conditions, outdoorCoolingDryBulbF: 95 + d, outdoorHeatingDryBulbF: 10 - d } });
-      expect(harsher.sensibleGain.total).toBeGreaterThanOrEqual(base.sensibleGain.total);
-      expect(harsher.heatLoss.total).toBeGreaterThanOrEqual(base.heatLoss.total);
-    }));
+    fc.assert(
+      fc.property(roomArb, fc.double({ min: 0, max: 15, noNaN: true }), (s, d) => {
+        const room = toRoom(s);
+        const base = roomLoad({ room, designConditions: conditions });
+        const harsher = roomLoad({
+          room,
+          designConditions: { ...conditions, outdoorCoolingDryBulbF: 95 + d, outdoorHeatingDryBulbF: 10 - d },
+        });
+        expect(harsher.sensibleGain.total).toBeGreaterThanOrEqual(base.sensibleGain.total);
+        expect(harsher.heatLoss.total).toBeGreaterThanOrEqual(base.heatLoss.total);
+      }),
+    );
   });
   it('loads rise with window area', () => {
-    fc.assert(fc.property(roomArb, fc.constantFrom(...directions), fc.double({ min: 1, max: 30, noNaN: true }), fc.double({ min: 0, max: 30, noNaN: true }), (s, dir, a, extra) => {
-      const withWindow = (area: number): RoomInput => ({ ...toRoom(s), exposedWalls: [{ direction: dir, lengthFt: 12, windows: [{ areaFt2: area }] }] });
-      const small = roomLoad({ room: withWindow(a), designConditions: conditions });
-      const big = roomLoad({ room: withWindow(Math.min(90, a + extra)), designConditions: conditions });
-      expect(big.sensibleGain.windowsSolar).toBeGreaterThanOrEqual(small.sensibleGain.windowsSolar);
-      expect(big.sensibleGain.total).toBeGreaterThanOrEqual(small.sensibleGain.total);
-      expect(big.heatLoss.total).toBeGreaterThanOrEqual(small.heatLoss.total);
-    }));
+    fc.assert(
+      fc.property(
+        roomArb,
+        fc.constantFrom(...directions),
+        fc.double({ min: 1, max: 30, noNaN: true }),
+        fc.double({ min: 0, max: 30, noNaN: true }),
+        (s, dir, a, extra) => {
+          const withWindow = (area: number): RoomInput => ({
+            ...toRoom(s),
+            exposedWalls: [{ direction: dir, lengthFt: 12, windows: [{ areaFt2: area }] }],
+          });
+          const small = roomLoad({ room: withWindow(a), designConditions: conditions });
+          const big = roomLoad({ room: withWindow(Math.min(90, a + extra)), designConditions: conditions });
+          expect(big.sensibleGain.windowsSolar).toBeGreaterThanOrEqual(small.sensibleGain.windowsSolar);
+          expect(big.sensibleGain.total).toBeGreaterThanOrEqual(small.sensibleGain.total);
+          expect(big.heatLoss.total).toBeGreaterThanOrEqual(small.heatLoss.total);
+        },
+      ),
+    );
   });
   it('SI and IP inputs give the same answer within 0.1 %', () => {
-    fc.assert(fc.property(roomArb, (s) => {
-      const imperial = toRoom(s);
-      // the same room measured in metric (mathjs as the independent converter)
-      const m = (ft: number) => unit(ft, 'ft').toNumber('m');
-      const metric: RoomInput = {
-        ...imperial,
-        lengthFt: m(imperial.lengthFt ?? 0), widthFt: m(imperial.widthFt ?? 0), ceilingHeightFt: m(imperial.ceilingHeightFt ?? 8),
-        exposedWalls: (imperial.exposedWalls ?? []).map((w) => ({ ...w, lengthFt: m(w.lengthFt), windows: (w.windows ?? []).map((win) => ({ ...win, areaFt2: unit(win.areaFt2 ?? 0, 'ft^2').toNumber('m^2') })) })),
-      };
-      const c = (f: number) => unit(f, 'degF').toNumber('degC');
-      const metricConditions = { ...conditions, outdoorCoolingDryBulbF: c(95), outdoorCoolingWetBulbF: c(75), outdoorHeatingDryBulbF: c(10), indoorCoolingF: c(75), indoorHeatingF: c(70), dailyRangeF: 20 / 1.8, elevationFt: 0 };
-      const a = roomLoad({ room: imperial, designConditions: conditions });
-      const b = roomLoad({ room: roomFromMetric(metric), designConditions: designConditionsFromMetric(metricConditions) });
-      const close = (x: number, y: number) => Math.abs(x - y) <= Math.max(1, 0.001 * Math.max(x, y));
-      expect(close(a.sensibleGain.total, b.sensibleGain.total)).toBe(true);
-      expect(close(a.latentGain.total, b.latentGain.total)).toBe(true);
-      expect(close(a.heatLoss.total, b.heatLoss.total)).toBe(true);
-    }));
+    fc.assert(
+      fc.property(roomArb, (s) => {
+        const imperial = toRoom(s);
+        // the same room measured in metric (mathjs as the independent converter)
+        const m = (ft: number) => unit(ft, 'ft').toNumber('m');
+        const metric: RoomInput = {
+          ...imperial,
+          lengthFt: m(imperial.lengthFt ?? 0),
+          widthFt: m(imperial.widthFt ?? 0),
+          ceilingHeightFt: m(imperial.ceilingHeightFt ?? 8),
+          exposedWalls: (imperial.exposedWalls ?? []).map((w) => ({
+            ...w,
+            lengthFt: m(w.lengthFt),
+            windows: (w.windows ?? []).map((win) => ({
+              ...win,
+              areaFt2: unit(win.areaFt2 ?? 0, 'ft^2').toNumber('m^2'),
+            })),
+          })),
+        };
+        const c = (f: number) => unit(f, 'degF').toNumber('degC');
+        const metricConditions = {
+          ...conditions,
+          outdoorCoolingDryBulbF: c(95),
+          outdoorCoolingWetBulbF: c(75),
+          outdoorHeatingDryBulbF: c(10),
+          indoorCoolingF: c(75),
+          indoorHeatingF: c(70),
+          dailyRangeF: 20 / 1.8,
+          elevationFt: 0,
+        };
+        const a = roomLoad({ room: imperial, designConditions: conditions });
+        const b = roomLoad({
+          room: roomFromMetric(metric),
+          designConditions: designConditionsFromMetric(metricConditions),
+        });
+        const close = (x: number, y: number) => Math.abs(x - y) <= Math.max(1, 0.001 * Math.max(x, y));
+        expect(close(a.sensibleGain.total, b.sensibleGain.total)).toBe(true);
+        expect(close(a.latentGain.total, b.latentGain.total)).toBe(true);
+        expect(close(a.heatLoss.total, b.heatLoss.total)).toBe(true);
+      }),
+    );
   });
 });
 
 describe('refrigerant invariants', () => {
   it('extra charge is never negative and linear in length beyond the pre-charge', () => {
-    fc.assert(fc.property(
-      fc.double({ min: 0, max: 300, noNaN: true }), fc.double({ min: 0, max: 100, noNaN: true }), fc.double({ min: 0, max: 2, noNaN: true }), fc.double({ min: 0, max: 100, noNaN: true }),
-      (len, pre, adder, more) => {
-        const a = extraChargeOz({ lengthFt: len, prechargedLengthFt: pre, ozPerFt: adder });
-        expect(a).toBeGreaterThanOrEqual(0);
-        if (len >= pre) {
-          const b = extraChargeOz({ lengthFt: len + more, prechargedLengthFt: pre, ozPerFt: adder });
-          expect(b - a).toBeCloseTo(more * adder, 9);
-        }
-      },
-    ));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 300, noNaN: true }),
+        fc.double({ min: 0, max: 100, noNaN: true }),
+        fc.double({ min: 0, max: 2, noNaN: true }),
+        fc.double({ min: 0, max: 100, noNaN: true }),
+        (len, pre, adder, more) => {
+          const a = extraChargeOz({ lengthFt: len, prechargedLengthFt: pre, ozPerFt: adder });
+          expect(a).toBeGreaterThanOrEqual(0);
+          if (len >= pre) {
+            const b = extraChargeOz({ lengthFt: len + more, prechargedLengthFt: pre, ozPerFt: adder });
+            expect(b - a).toBeCloseTo(more * adder, 9);
+          }
+        },
+      ),
+    );
   });
 });
 
@@ -135,17 +221,41 @@ describe('money invariants', () => {
       quantity: fc.double({ min: 0.01, max: 200, noNaN: true }),
       unitCostCents: fc.integer({ min: 0, max: 500000 }),
     });
-    fc.assert(fc.property(fc.array(lineArb, { minLength: 1, maxLength: 30 }), fc.double({ min: 0, max: 80, noNaN: true }), fc.double({ min: 0, max: 12, noNaN: true }), (specs, margin, tax) => {
-      const lines: TakeoffLine[] = specs.map((s, i) => ({ itemKey: `item-${i}`, description: 'x', quantity: s.quantity, unit: s.category === 'labor' ? 'h' : 'each', category: s.category, derivation: 'test' }));
-      const items = Object.fromEntries(specs.map((s, i) => [`item-${i}`, { unitCostCents: s.unitCostCents }]));
-      const priced = priceLines({ lines, priceBook: priceBookSchema.parse({ items, laborRateCents: 9000 }) }).lines;
-      const p = priceOption({ lines: priced, pricing: pricingSchema.parse({ method: 'margin', percent: margin, taxRatePercent: tax, deposit: { kind: 'percent', value: 25 }, discounts: [{ label: 'd', kind: 'percent', value: 5 }] }) });
-      expect(p.costCents).toBe(priced.reduce((a, l) => a + l.extendedCostCents, 0));
-      expect(p.equipmentCostCents + p.materialsCostCents + p.laborCostCents).toBe(p.costCents);
-      expect(p.totalCents).toBe(p.subtotalCents + p.taxCents);
-      expect(p.depositCents + p.balanceCents).toBe(p.totalCents);
-      for (const v of [p.sellCents, p.discountCents, p.taxCents, p.totalCents, p.depositCents]) expect(Number.isInteger(v)).toBe(true);
-      for (const l of priced) expect(Number.isInteger(l.extendedCostCents)).toBe(true);
-    }));
+    fc.assert(
+      fc.property(
+        fc.array(lineArb, { minLength: 1, maxLength: 30 }),
+        fc.double({ min: 0, max: 80, noNaN: true }),
+        fc.double({ min: 0, max: 12, noNaN: true }),
+        (specs, margin, tax) => {
+          const lines: TakeoffLine[] = specs.map((s, i) => ({
+            itemKey: `item-${i}`,
+            description: 'x',
+            quantity: s.quantity,
+            unit: s.category === 'labor' ? 'h' : 'each',
+            category: s.category,
+            derivation: 'test',
+          }));
+          const items = Object.fromEntries(specs.map((s, i) => [`item-${i}`, { unitCostCents: s.unitCostCents }]));
+          const priced = priceLines({ lines, priceBook: priceBookSchema.parse({ items, laborRateCents: 9000 }) }).lines;
+          const p = priceOption({
+            lines: priced,
+            pricing: pricingSchema.parse({
+              method: 'margin',
+              percent: margin,
+              taxRatePercent: tax,
+              deposit: { kind: 'percent', value: 25 },
+              discounts: [{ label: 'd', kind: 'percent', value: 5 }],
+            }),
+          });
+          expect(p.costCents).toBe(priced.reduce((a, l) => a + l.extendedCostCents, 0));
+          expect(p.equipmentCostCents + p.materialsCostCents + p.laborCostCents).toBe(p.costCents);
+          expect(p.totalCents).toBe(p.subtotalCents + p.taxCents);
+          expect(p.depositCents + p.balanceCents).toBe(p.totalCents);
+          for (const v of [p.sellCents, p.discountCents, p.taxCents, p.totalCents, p.depositCents])
+            expect(Number.isInteger(v)).toBe(true);
+          for (const l of priced) expect(Number.isInteger(l.extendedCostCents)).toBe(true);
+        },
+      ),
+    );
   });
 });

@@ -1,9 +1,22 @@
 import { describe, it, expect } from 'vitest';
 import psychrolib from 'psychrolib';
 import {
-  altitudeFactor, dewPointF, grainsFromHumidityRatio, humidityRatioFromRh, humidityRatioFromWetBulb,
-  latentHeatBtuh, moistAirEnthalpyBtuPerLb, saturationPressurePsia, sensibleHeatBtuh, standardPressurePsia,
-  infiltrationCfm, ventilationCfm62_2, naturalAchFromAch50, airflowForSensibleCfm, SENSIBLE_CONSTANT, LATENT_CONSTANT,
+  altitudeFactor,
+  dewPointF,
+  grainsFromHumidityRatio,
+  humidityRatioFromRh,
+  humidityRatioFromWetBulb,
+  latentHeatBtuh,
+  moistAirEnthalpyBtuPerLb,
+  saturationPressurePsia,
+  sensibleHeatBtuh,
+  standardPressurePsia,
+  infiltrationCfm,
+  ventilationCfm62_2,
+  naturalAchFromAch50,
+  airflowForSensibleCfm,
+  SENSIBLE_CONSTANT,
+  LATENT_CONSTANT,
 } from '@calc';
 
 psychrolib.SetUnitSystem(psychrolib.IP);
@@ -33,10 +46,14 @@ describe('air-stream heat (reference §1)', () => {
     // [PUB: 4.5 = 60 × 0.075; reference §1 notes the −2.9 % gap]
     const wIn = humidityRatioFromRh({ dryBulbF: 75, rh: 0.5, pressurePsia: P });
     const wOut = humidityRatioFromWetBulb({ dryBulbF: 95, wetBulbF: 75, pressurePsia: P });
-    const dh = moistAirEnthalpyBtuPerLb({ dryBulbF: 95, humidityRatio: wOut }) - moistAirEnthalpyBtuPerLb({ dryBulbF: 75, humidityRatio: wIn });
+    const dh =
+      moistAirEnthalpyBtuPerLb({ dryBulbF: 95, humidityRatio: wOut }) -
+      moistAirEnthalpyBtuPerLb({ dryBulbF: 75, humidityRatio: wIn });
     const total = 4.5 * 100 * dh;
     expect(Math.abs(total - 4594)).toBeLessThanOrEqual(5);
-    const parts = sensibleHeatBtuh({ cfm: 100, deltaTF: 20 }) + latentHeatBtuh({ cfm: 100, deltaGrains: grainsFromHumidityRatio({ humidityRatio: wOut - wIn }) });
+    const parts =
+      sensibleHeatBtuh({ cfm: 100, deltaTF: 20 }) +
+      latentHeatBtuh({ cfm: 100, deltaGrains: grainsFromHumidityRatio({ humidityRatio: wOut - wIn }) });
     expect(Math.abs(parts - total) / total).toBeLessThan(0.03);
   });
   it('rejects NaN, strings and negative CFM with the constant message', () => {
@@ -88,8 +105,16 @@ describe('psychrometrics vs psychrolib (ASHRAE 2017 ch. 1)', () => {
     for (let t = -20; t <= 110; t += 5) {
       expect(saturationPressurePsia({ dryBulbF: t }) / psychrolib.GetSatVapPres(t)).toBeCloseTo(1, 9);
     }
-    for (const [db, wb] of [[95, 75], [105, 70], [85, 80], [40, 30], [20, 15]] as const) {
-      const ours = grainsFromHumidityRatio({ humidityRatio: humidityRatioFromWetBulb({ dryBulbF: db, wetBulbF: wb, pressurePsia: P }) });
+    for (const [db, wb] of [
+      [95, 75],
+      [105, 70],
+      [85, 80],
+      [40, 30],
+      [20, 15],
+    ] as const) {
+      const ours = grainsFromHumidityRatio({
+        humidityRatio: humidityRatioFromWetBulb({ dryBulbF: db, wetBulbF: wb, pressurePsia: P }),
+      });
       const theirs = psychrolib.GetHumRatioFromTWetBulb(db, wb, P) * 7000;
       expect(Math.abs(ours - theirs)).toBeLessThan(0.01);
     }
@@ -97,12 +122,19 @@ describe('psychrometrics vs psychrolib (ASHRAE 2017 ch. 1)', () => {
   it('grains difference at 5000 ft matches psychrolib', () => {
     // [PUB: psychrolib as outside reference]
     const p = standardPressurePsia({ elevationFt: 5000 });
-    const ours = grainsFromHumidityRatio({ humidityRatio: humidityRatioFromWetBulb({ dryBulbF: 95, wetBulbF: 65, pressurePsia: p }) - humidityRatioFromRh({ dryBulbF: 75, rh: 0.45, pressurePsia: p }) });
-    const theirs = (psychrolib.GetHumRatioFromTWetBulb(95, 65, p) - psychrolib.GetHumRatioFromRelHum(75, 0.45, p)) * 7000;
+    const ours = grainsFromHumidityRatio({
+      humidityRatio:
+        humidityRatioFromWetBulb({ dryBulbF: 95, wetBulbF: 65, pressurePsia: p }) -
+        humidityRatioFromRh({ dryBulbF: 75, rh: 0.45, pressurePsia: p }),
+    });
+    const theirs =
+      (psychrolib.GetHumRatioFromTWetBulb(95, 65, p) - psychrolib.GetHumRatioFromRelHum(75, 0.45, p)) * 7000;
     expect(Math.abs(ours - theirs)).toBeLessThan(0.01);
   });
   it('wet bulb above dry bulb is a calc error', () => {
-    expect(() => humidityRatioFromWetBulb({ dryBulbF: 70, wetBulbF: 75, pressurePsia: P })).toThrow('The wet-bulb temperature cannot be above the dry-bulb temperature.');
+    expect(() => humidityRatioFromWetBulb({ dryBulbF: 70, wetBulbF: 75, pressurePsia: P })).toThrow(
+      'The wet-bulb temperature cannot be above the dry-bulb temperature.',
+    );
   });
   it('1.13 SI check (psychrolib SI mode): 24 °C / 50 % → 0.0092985 kg/kg ± 2e-6 equals our IP result', () => {
     // [PUB: psychrolib SI mode, reference §1 check 1.13]; humidity ratio is unit-free

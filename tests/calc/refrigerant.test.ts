@@ -1,7 +1,17 @@
 import { describe, it, expect } from 'vitest';
 import {
-  ASTM_B280_ANNEALED, tubeInsideDiameterIn, liquidLineChargeOzPerFt, extraChargeOz, CALC_ERROR_MESSAGES,
-  a2lMaxChargeKg, a2lMinRoomAreaM2, a2lM1Kg, LIQUID_DENSITY_100F_LB_FT3, REFRIGERANT_INFO, gPerMFromOzPerFt, tubeVolumeIn3PerFt,
+  ASTM_B280_ANNEALED,
+  tubeInsideDiameterIn,
+  liquidLineChargeOzPerFt,
+  extraChargeOz,
+  CALC_ERROR_MESSAGES,
+  a2lMaxChargeKg,
+  a2lMinRoomAreaM2,
+  a2lM1Kg,
+  LIQUID_DENSITY_100F_LB_FT3,
+  REFRIGERANT_INFO,
+  gPerMFromOzPerFt,
+  tubeVolumeIn3PerFt,
 } from '@calc';
 
 describe('ASTM B280 ACR annealed tube (reference §8)', () => {
@@ -42,16 +52,27 @@ describe('line-set charge (reference §8)', () => {
   });
   it('8.3: 1/4, R-32, ρ 56.429 → 0.178 oz/ft ± 0.003', () => {
     // [PUB: computed from ASTM B280 ID and the published R-32 EOS density]
-    expect(Math.abs(liquidLineChargeOzPerFt({ odIn: 0.25, liquidDensityLbPerFt3: 56.429 }) - 0.178)).toBeLessThanOrEqual(0.003);
+    expect(
+      Math.abs(liquidLineChargeOzPerFt({ odIn: 0.25, liquidDensityLbPerFt3: 56.429 }) - 0.178),
+    ).toBeLessThanOrEqual(0.003);
   });
   it('full-liquid table at 100 °F with the declared densities (reference §8 table, ±0.003)', () => {
     // [PUB: reference §8 computed table]
     const rows: [number, keyof typeof LIQUID_DENSITY_100F_LB_FT3, number][] = [
-      [0.25, 'R-410A', 0.195], [0.3125, 'R-410A', 0.333], [0.5, 'R-410A', 1.024],
-      [0.375, 'R-32', 0.476], [0.5, 'R-32', 0.936], [0.25, 'R-454B', 0.182], [0.375, 'R-454B', 0.489],
+      [0.25, 'R-410A', 0.195],
+      [0.3125, 'R-410A', 0.333],
+      [0.5, 'R-410A', 1.024],
+      [0.375, 'R-32', 0.476],
+      [0.5, 'R-32', 0.936],
+      [0.25, 'R-454B', 0.182],
+      [0.375, 'R-454B', 0.489],
     ];
     for (const [od, r, expected] of rows) {
-      expect(Math.abs(liquidLineChargeOzPerFt({ odIn: od, liquidDensityLbPerFt3: LIQUID_DENSITY_100F_LB_FT3[r] }) - expected)).toBeLessThanOrEqual(0.003);
+      expect(
+        Math.abs(
+          liquidLineChargeOzPerFt({ odIn: od, liquidDensityLbPerFt3: LIQUID_DENSITY_100F_LB_FT3[r] }) - expected,
+        ),
+      ).toBeLessThanOrEqual(0.003);
     }
   });
   it('8.4: 60 ft of 3/8 at 0.6 oz/ft, pre-charge 25 ft → 21.0 oz', () => {
@@ -72,14 +93,18 @@ describe('line-set charge (reference §8)', () => {
     expect(extraChargeOz({ lengthFt: 10, prechargedLengthFt: 15, ozPerFt: 0.6 })).toBe(0);
   });
   it('negative length is rejected', () => {
-    expect(() => extraChargeOz({ lengthFt: -1, prechargedLengthFt: 15, ozPerFt: 0.6 })).toThrow(CALC_ERROR_MESSAGES.NEGATIVE);
+    expect(() => extraChargeOz({ lengthFt: -1, prechargedLengthFt: 15, ozPerFt: 0.6 })).toThrow(
+      CALC_ERROR_MESSAGES.NEGATIVE,
+    );
   });
 });
 
 describe('A2L room-area rules (reference §11, IEC 60335-2-40:2018 Annex GG)', () => {
   it('11.1: R-32, LFL 0.307, h0 0.6, 10 m² → m_max 1.084 kg ± 0.002', () => {
     // [PUB: formula and table printed in equipment manuals]
-    expect(Math.abs(a2lMaxChargeKg({ lflKgPerM3: 0.307, h0M: 0.6, roomAreaM2: 10 }) - 1.084)).toBeLessThanOrEqual(0.002);
+    expect(Math.abs(a2lMaxChargeKg({ lflKgPerM3: 0.307, h0M: 0.6, roomAreaM2: 10 }) - 1.084)).toBeLessThanOrEqual(
+      0.002,
+    );
   });
   it('11.2: 2.00 kg, h0 0.6 → A_min 34.04 m² ± 0.05', () => {
     // [PUB: manufacturer table]
@@ -96,7 +121,10 @@ describe('A2L room-area rules (reference §11, IEC 60335-2-40:2018 Annex GG)', (
     expect(m1 / 0.45359237).toBeCloseTo(4.06, 2);
   });
   it('h0 is never below 0.6 m (floor units)', () => {
-    expect(a2lMaxChargeKg({ lflKgPerM3: 0.307, h0M: 0, roomAreaM2: 10 })).toBeCloseTo(a2lMaxChargeKg({ lflKgPerM3: 0.307, h0M: 0.6, roomAreaM2: 10 }), 12);
+    expect(a2lMaxChargeKg({ lflKgPerM3: 0.307, h0M: 0, roomAreaM2: 10 })).toBeCloseTo(
+      a2lMaxChargeKg({ lflKgPerM3: 0.307, h0M: 0.6, roomAreaM2: 10 }),
+      12,
+    );
   });
   it('safety classes: R-410A A1; R-32 and R-454B A2L', () => {
     // [PUB: CoolProp ASHRAE-34 table]

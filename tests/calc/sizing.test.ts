@@ -1,5 +1,14 @@
 import { describe, it, expect } from 'vitest';
-import { sizingRatio, capacityAtOutdoorF, checkSizing, checkCombination, DEFAULT_SIZING_POLICY, outdoorUnitSchema, indoorUnitSchema, CALC_ERROR_MESSAGES } from '@calc';
+import {
+  sizingRatio,
+  capacityAtOutdoorF,
+  checkSizing,
+  checkCombination,
+  DEFAULT_SIZING_POLICY,
+  outdoorUnitSchema,
+  indoorUnitSchema,
+  CALC_ERROR_MESSAGES,
+} from '@calc';
 import { catalog } from './sample-data';
 
 const policy = DEFAULT_SIZING_POLICY;
@@ -14,19 +23,80 @@ describe('sizing (reference §7)', () => {
     // from memory [MEM: ACCA Manual S 2nd ed. Table N2]
     const load = { sensibleBtuh: 24000, latentBtuh: 6000, heatingBtuh: 0 };
     expect(policy.cooling['ac-single-speed']).toEqual({ minPercent: 90, maxPercent: 115 });
-    expect(checkSizing({ unit: flat(36000), equipmentType: 'ac-single-speed', load, coolingDesignF: 95, heatingDesignF: 10, policy }).withinRange).toBe(false);
-    expect(checkSizing({ unit: flat(30000), equipmentType: 'ac-single-speed', load, coolingDesignF: 95, heatingDesignF: 10, policy }).withinRange).toBe(true);
-    expect(checkSizing({ unit: flat(34500), equipmentType: 'ac-single-speed', load, coolingDesignF: 95, heatingDesignF: 10, policy }).withinRange).toBe(true);
-    expect(checkSizing({ unit: flat(26900), equipmentType: 'ac-single-speed', load, coolingDesignF: 95, heatingDesignF: 10, policy }).withinRange).toBe(false);
-    const over = checkSizing({ unit: flat(36000), equipmentType: 'ac-single-speed', load, coolingDesignF: 95, heatingDesignF: 10, policy });
+    expect(
+      checkSizing({
+        unit: flat(36000),
+        equipmentType: 'ac-single-speed',
+        load,
+        coolingDesignF: 95,
+        heatingDesignF: 10,
+        policy,
+      }).withinRange,
+    ).toBe(false);
+    expect(
+      checkSizing({
+        unit: flat(30000),
+        equipmentType: 'ac-single-speed',
+        load,
+        coolingDesignF: 95,
+        heatingDesignF: 10,
+        policy,
+      }).withinRange,
+    ).toBe(true);
+    expect(
+      checkSizing({
+        unit: flat(34500),
+        equipmentType: 'ac-single-speed',
+        load,
+        coolingDesignF: 95,
+        heatingDesignF: 10,
+        policy,
+      }).withinRange,
+    ).toBe(true);
+    expect(
+      checkSizing({
+        unit: flat(26900),
+        equipmentType: 'ac-single-speed',
+        load,
+        coolingDesignF: 95,
+        heatingDesignF: 10,
+        policy,
+      }).withinRange,
+    ).toBe(false);
+    const over = checkSizing({
+      unit: flat(36000),
+      equipmentType: 'ac-single-speed',
+      load,
+      coolingDesignF: 95,
+      heatingDesignF: 10,
+      policy,
+    });
     expect(over.coolingRatio).toBe(1.2);
     expect(over.warnings[0]).toContain('oversized');
   });
   it('7.3: variable-speed limit 130 % → 39,000; a 3-ton (36,000) passes', () => {
     // from memory [MEM: ACCA Manual S 2nd ed.]
     const load = { sensibleBtuh: 24000, latentBtuh: 6000, heatingBtuh: 0 };
-    expect(checkSizing({ unit: flat(36000), equipmentType: 'ac-variable-speed', load, coolingDesignF: 95, heatingDesignF: 10, policy }).withinRange).toBe(true);
-    expect(checkSizing({ unit: flat(39001), equipmentType: 'ac-variable-speed', load, coolingDesignF: 95, heatingDesignF: 10, policy }).withinRange).toBe(false);
+    expect(
+      checkSizing({
+        unit: flat(36000),
+        equipmentType: 'ac-variable-speed',
+        load,
+        coolingDesignF: 95,
+        heatingDesignF: 10,
+        policy,
+      }).withinRange,
+    ).toBe(true);
+    expect(
+      checkSizing({
+        unit: flat(39001),
+        equipmentType: 'ac-variable-speed',
+        load,
+        coolingDesignF: 95,
+        heatingDesignF: 10,
+        policy,
+      }).withinRange,
+    ).toBe(false);
   });
   it('7.4: heat loss 60,000 × furnace limit 140 % = 84,000', () => {
     // [PUB (secondary): excessair blog summary of Manual S]
@@ -41,25 +111,51 @@ describe('sizing (reference §7)', () => {
     expect(() => sizingRatio({ loadBtuh: 0, capacityBtuh: 1 })).toThrow(CALC_ERROR_MESSAGES.NOT_POSITIVE);
   });
   it('policy is configurable: a stricter company limit flips the verdict', () => {
-    const strict = { ...policy, cooling: { ...policy.cooling, 'ac-variable-speed': { minPercent: 95, maxPercent: 110 } } };
+    const strict = {
+      ...policy,
+      cooling: { ...policy.cooling, 'ac-variable-speed': { minPercent: 95, maxPercent: 110 } },
+    };
     const load = { sensibleBtuh: 24000, latentBtuh: 6000, heatingBtuh: 0 };
-    expect(checkSizing({ unit: flat(36000), equipmentType: 'ac-variable-speed', load, coolingDesignF: 95, heatingDesignF: 10, policy: strict }).withinRange).toBe(false);
+    expect(
+      checkSizing({
+        unit: flat(36000),
+        equipmentType: 'ac-variable-speed',
+        load,
+        coolingDesignF: 95,
+        heatingDesignF: 10,
+        policy: strict,
+      }).withinRange,
+    ).toBe(false);
   });
 });
 
 describe('capacity interpolation', () => {
-  const points = [{ outdoorF: 82, btuh: 25500 }, { outdoorF: 95, btuh: 24000 }, { outdoorF: 105, btuh: 22000 }];
+  const points = [
+    { outdoorF: 82, btuh: 25500 },
+    { outdoorF: 95, btuh: 24000 },
+    { outdoorF: 105, btuh: 22000 },
+  ];
   it('interpolates linearly: 100 °F halfway between 95 and 105 → 23,000', () => {
     expect(capacityAtOutdoorF({ points, outdoorF: 100 })).toEqual({ btuh: 23000, extrapolated: false });
     expect(capacityAtOutdoorF({ points, outdoorF: 95 }).btuh).toBe(24000);
   });
   it('holds the nearest point outside the data and flags it', () => {
     expect(capacityAtOutdoorF({ points, outdoorF: 115 })).toEqual({ btuh: 22000, extrapolated: true });
-    expect(capacityAtOutdoorF({ points: [...points].reverse(), outdoorF: 70 })).toEqual({ btuh: 25500, extrapolated: true });
+    expect(capacityAtOutdoorF({ points: [...points].reverse(), outdoorF: 70 })).toEqual({
+      btuh: 25500,
+      extrapolated: true,
+    });
   });
   it('heat-pump heating below the heat loss warns about supplemental heat', () => {
     const indoor = indoorUnitSchema.parse(catalog.indoorUnits[0]);
-    const r = checkSizing({ unit: indoor, equipmentType: 'heat-pump-variable-speed', load: { sensibleBtuh: 7000, latentBtuh: 1000, heatingBtuh: 12000 }, coolingDesignF: 95, heatingDesignF: 5, policy });
+    const r = checkSizing({
+      unit: indoor,
+      equipmentType: 'heat-pump-variable-speed',
+      load: { sensibleBtuh: 7000, latentBtuh: 1000, heatingBtuh: 12000 },
+      coolingDesignF: 95,
+      heatingDesignF: 5,
+      policy,
+    });
     expect(r.heatingCapacityBtuh).toBe(8000);
     expect(r.warnings.some((w) => w.includes('supplemental heat'))).toBe(true);
   });

@@ -2,8 +2,24 @@ import { describe, it, expect } from 'vitest';
 import { unit } from 'mathjs';
 import convert from 'convert-units';
 import {
-  BTUH_PER_TON, BTUH_PER_W, btuhFromW, wFromBtuh, tonsFromBtuh, btuhFromTons, ftFromM, mFromFt, cFromF, fFromC,
-  kelvinDeltaFromF, gPerMFromOzPerFt, ozPerFtFromGPerM, lpsFromCfm, kpaFromPsi, paFromMicrons, ft2FromM2, m2FromFt2,
+  BTUH_PER_TON,
+  BTUH_PER_W,
+  btuhFromW,
+  wFromBtuh,
+  tonsFromBtuh,
+  btuhFromTons,
+  ftFromM,
+  mFromFt,
+  cFromF,
+  fFromC,
+  kelvinDeltaFromF,
+  gPerMFromOzPerFt,
+  ozPerFtFromGPerM,
+  lpsFromCfm,
+  kpaFromPsi,
+  paFromMicrons,
+  ft2FromM2,
+  m2FromFt2,
 } from '@calc';
 
 describe('unit conversions (reference §6), cross-checked with mathjs', () => {
@@ -26,7 +42,12 @@ describe('unit conversions (reference §6), cross-checked with mathjs', () => {
   });
   it('6.4: mini-split sizes 9/12/18/24 kBtu/h → 2.638 / 3.517 / 5.275 / 7.034 kW ± 0.001', () => {
     // [PUB: SI/NIST]
-    const expected: [number, number][] = [[9000, 2.638], [12000, 3.517], [18000, 5.275], [24000, 7.034]];
+    const expected: [number, number][] = [
+      [9000, 2.638],
+      [12000, 3.517],
+      [18000, 5.275],
+      [24000, 7.034],
+    ];
     for (const [btuh, kw] of expected) expect(Math.abs(wFromBtuh({ btuh }) / 1000 - kw)).toBeLessThanOrEqual(0.001);
   });
   it('mathjs pitfall: its "ton" is 2000 lb of mass, not a refrigeration ton', () => {

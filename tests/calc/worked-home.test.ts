@@ -31,9 +31,42 @@ describe('worked example: three-room house', () => {
     // Infiltration: 1.08 × 20 × 20 = 432; latent 0.68 × 20 × 33.807 = 459.77 → 460; heating 1.08 × 20 × 60 = 1,296
     // People: 3 × 238.850 = 716.55 → 717; latent 3 × 153.546 = 460.64 → 461
     // TV: 150 × 3.412141633 = 511.82 → 512
-    expect(r.sensibleGain).toEqual({ walls: 374, windowsConduction: 154, windowsSolar: 2581, doors: 80, ceiling: 450, floor: 0, infiltration: 432, people: 717, appliances: 512, total: 5300 });
-    expect(r.latentGain).toEqual({ walls: 0, windowsConduction: 0, windowsSolar: 0, doors: 0, ceiling: 0, floor: 0, infiltration: 460, people: 461, appliances: 0, total: 921 });
-    expect(r.heatLoss).toEqual({ walls: 1121, windowsConduction: 855, windowsSolar: 0, doors: 240, ceiling: 540, floor: 1533, infiltration: 1296, people: 0, appliances: 0, total: 5585 });
+    expect(r.sensibleGain).toEqual({
+      walls: 374,
+      windowsConduction: 154,
+      windowsSolar: 2581,
+      doors: 80,
+      ceiling: 450,
+      floor: 0,
+      infiltration: 432,
+      people: 717,
+      appliances: 512,
+      total: 5300,
+    });
+    expect(r.latentGain).toEqual({
+      walls: 0,
+      windowsConduction: 0,
+      windowsSolar: 0,
+      doors: 0,
+      ceiling: 0,
+      floor: 0,
+      infiltration: 460,
+      people: 461,
+      appliances: 0,
+      total: 921,
+    });
+    expect(r.heatLoss).toEqual({
+      walls: 1121,
+      windowsConduction: 855,
+      windowsSolar: 0,
+      doors: 240,
+      ceiling: 540,
+      floor: 1533,
+      infiltration: 1296,
+      people: 0,
+      appliances: 0,
+      total: 5585,
+    });
     expect(r.coolingTotalBtuh).toBe(6221);
     expect(r.isEstimate).toBe(true);
   });
@@ -47,9 +80,31 @@ describe('worked example: three-room house', () => {
     // Slab: 0.73 × 12 × 60 = 525.6 → 526
     // Infiltration: 0.5 × 1152 / 60 = 9.6 CFM; 1.08 × 9.6 × 20 = 207.36 → 207; latent 0.68 × 9.6 × 33.807 = 220.69 → 221; heating 622.08 → 622
     // People: 2 × 238.850 = 477.70 → 478; latent 2 × 153.546 = 307.09 → 307
-    expect(r.sensibleGain).toEqual({ walls: 139, windowsConduction: 39, windowsSolar: 94, doors: 0, ceiling: 216, floor: 0, infiltration: 207, people: 478, appliances: 0, total: 1173 });
+    expect(r.sensibleGain).toEqual({
+      walls: 139,
+      windowsConduction: 39,
+      windowsSolar: 94,
+      doors: 0,
+      ceiling: 216,
+      floor: 0,
+      infiltration: 207,
+      people: 478,
+      appliances: 0,
+      total: 1173,
+    });
     expect(r.latentGain.total).toBe(528);
-    expect(r.heatLoss).toEqual({ walls: 418, windowsConduction: 216, windowsSolar: 0, doors: 0, ceiling: 259, floor: 526, infiltration: 622, people: 0, appliances: 0, total: 2041 });
+    expect(r.heatLoss).toEqual({
+      walls: 418,
+      windowsConduction: 216,
+      windowsSolar: 0,
+      doors: 0,
+      ceiling: 259,
+      floor: 526,
+      infiltration: 622,
+      people: 0,
+      appliances: 0,
+      total: 2041,
+    });
   });
 
   it('kitchen 10 × 12 × 8 ft: E wall 10 ft with a 10 ft² low-e window; conditioned above; vented crawl with R-19 below; 1,200 Btu/h range allowance', () => {
@@ -60,16 +115,46 @@ describe('worked example: three-room house', () => {
     // Floor over vented crawl: cooling fraction 0 → 0; heating 120 × 0.047 × (60 × 0.8) = 270.72 → 271
     // Infiltration: 0.5 × 960 / 60 = 8 CFM; 1.08 × 8 × 20 = 172.8 → 173; latent 0.68 × 8 × 33.807 = 183.91 → 184; heating 518.4 → 518
     // Range allowance: 1,200 Btu/h as entered
-    expect(r.sensibleGain).toEqual({ walls: 116, windowsConduction: 32, windowsSolar: 600, doors: 0, ceiling: 0, floor: 0, infiltration: 173, people: 0, appliances: 1200, total: 2121 });
+    expect(r.sensibleGain).toEqual({
+      walls: 116,
+      windowsConduction: 32,
+      windowsSolar: 600,
+      doors: 0,
+      ceiling: 0,
+      floor: 0,
+      infiltration: 173,
+      people: 0,
+      appliances: 1200,
+      total: 2121,
+    });
     expect(r.latentGain.total).toBe(184);
-    expect(r.heatLoss).toEqual({ walls: 349, windowsConduction: 180, windowsSolar: 0, doors: 0, ceiling: 0, floor: 271, infiltration: 518, people: 0, appliances: 0, total: 1318 });
+    expect(r.heatLoss).toEqual({
+      walls: 349,
+      windowsConduction: 180,
+      windowsSolar: 0,
+      doors: 0,
+      ceiling: 0,
+      floor: 271,
+      infiltration: 518,
+      people: 0,
+      appliances: 0,
+      total: 1318,
+    });
   });
 
   it('whole home: sensible 8,594, latent 1,633, cooling 10,227 (0.85 ton), heating 8,944, SHR 0.840', () => {
     const h = homeLoad({ home: threeRoomHome });
     // Sensible 5,300 + 1,173 + 2,121 = 8,594; latent 921 + 528 + 184 = 1,633; cooling 10,227
     // Heating 5,585 + 2,041 + 1,318 = 8,944; SHR 8,594 / 10,227 = 0.8403 → 0.840; tons 10,227 / 12,000 = 0.852 → 0.85
-    expect(h.totals).toEqual({ sensibleBtuh: 8594, latentBtuh: 1633, coolingBtuh: 10227, heatingBtuh: 8944, sensibleHeatRatio: 0.84, coolingTons: 0.85, floorAreaFt2: 564 });
+    expect(h.totals).toEqual({
+      sensibleBtuh: 8594,
+      latentBtuh: 1633,
+      coolingBtuh: 10227,
+      heatingBtuh: 8944,
+      sensibleHeatRatio: 0.84,
+      coolingTons: 0.85,
+      floorAreaFt2: 564,
+    });
     expect(h.sensibleGain.windowsSolar).toBe(2581 + 94 + 600);
     expect(h.psychrometrics.deltaGrains).toBeCloseTo(33.81, 2);
     expect(h.psychrometrics.indoorDewPointF).toBeCloseTo(55.12, 1);

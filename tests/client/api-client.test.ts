@@ -45,7 +45,9 @@ describe('api client', () => {
     const fetch = mockFetch({
       'GET /api/auth/csrf': () => json(200, { token: `tok-${++token}` }),
       'POST /api/things': (init) =>
-        headerOf(init, 'X-CSRF-Token') === 'tok-2' ? json(201, { ok: true }) : problem(403, 'csrf', 'The request is missing a valid X-CSRF-Token header.'),
+        headerOf(init, 'X-CSRF-Token') === 'tok-2'
+          ? json(201, { ok: true })
+          : problem(403, 'csrf', 'The request is missing a valid X-CSRF-Token header.'),
     });
     await expect(apiFetch('/api/things', { method: 'POST', body: {} })).resolves.toEqual({ ok: true });
     expect(fetch).toHaveBeenCalledTimes(4);
@@ -81,7 +83,13 @@ describe('api client', () => {
   it('reads Retry-After on a 429', async () => {
     mockFetch({
       'GET /api/auth/csrf': json(200, { token: 'tok' }),
-      'POST /api/auth/login': problem(429, 'rate-limited', 'Too many attempts. Try again in 42 seconds.', {}, { 'Retry-After': '42' }),
+      'POST /api/auth/login': problem(
+        429,
+        'rate-limited',
+        'Too many attempts. Try again in 42 seconds.',
+        {},
+        { 'Retry-After': '42' },
+      ),
     });
     const err = await caught(apiFetch('/api/auth/login', { method: 'POST', body: {} }));
     expect(err.status).toBe(429);
@@ -94,7 +102,10 @@ describe('api client', () => {
     expect(bad.status).toBe(502);
     expect(bad.detail).toMatch(/Try again/);
 
-    vi.stubGlobal('fetch', vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Promise.reject(new TypeError('Failed to fetch'))),
+    );
     const offline = await caught(apiFetch('/api/a'));
     expect(offline).toMatchObject({ status: 0, code: 'network' });
   });

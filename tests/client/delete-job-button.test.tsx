@@ -33,9 +33,20 @@ function answerConfirm(yes: boolean) {
 const OWNER: Viewer = { id: 'u-owner', role: 'owner' };
 const filters = { search: '', status: '', page: 1, pageSize: 25 };
 
-function renderButton(job: JobRecord, viewer: Viewer, queryClient: QueryClient = createQueryClient(), stored: readonly QueueItem<WalkthroughEdit>[] = [], photoStorage = memoryPhotoStorage()) {
+function renderButton(
+  job: JobRecord,
+  viewer: Viewer,
+  queryClient: QueryClient = createQueryClient(),
+  stored: readonly QueueItem<WalkthroughEdit>[] = [],
+  photoStorage = memoryPhotoStorage(),
+) {
   // Offline queues on memory storage, holding what the test says is waiting on the device.
-  const { queue } = testQueue(queryClient, async () => ({ kind: 'network' }), () => false, stored);
+  const { queue } = testQueue(
+    queryClient,
+    async () => ({ kind: 'network' }),
+    () => false,
+    stored,
+  );
   const photos = createPhotoQueue(queryClient, queue, { storage: photoStorage, isOnline: () => false, retryMs: 0 });
   void queue.start();
   void photos.start();
@@ -112,7 +123,8 @@ describe('DeleteJobButton', () => {
   });
 
   it('a 409 shows the server’s message, keeps the job cached and stays on the page', async () => {
-    const detail = 'Only a job still in walk-through or design can be deleted (this one is proposed); mark it lost instead.';
+    const detail =
+      'Only a job still in walk-through or design can be deleted (this one is proposed); mark it lost instead.';
     mockFetch({
       'GET /api/auth/csrf': json(200, { token: 't' }),
       [`DELETE /api/jobs/${JOB_ID}`]: problem(409, 'conflict', detail),
@@ -135,11 +147,23 @@ describe('DeleteJobButton', () => {
     answerConfirm(true);
     const OTHER_JOB = '55555555-5555-4555-8555-555555555555';
     const item = (id: string, jobId: string): QueueItem<WalkthroughEdit> => ({
-      id, seq: Number(id.slice(1)), target: roomTarget(`${jobId}-room`), baseVersion: 1, queuedAt: '2026-01-01T00:00:00.000Z',
+      id,
+      seq: Number(id.slice(1)),
+      target: roomTarget(`${jobId}-room`),
+      baseVersion: 1,
+      queuedAt: '2026-01-01T00:00:00.000Z',
       payload: { kind: 'room-update', jobId, roomId: `${jobId}-room`, input: { name: 'Den' } },
     });
     const photoStorage = memoryPhotoStorage();
-    const photo = (id: string, jobId: string) => ({ id, seq: 1, jobId, roomId: ROOM_ID, fileName: 'den.jpg', blob: new Blob(['x'], { type: 'image/jpeg' }), queuedAt: '2026-01-01T00:00:00.000Z' });
+    const photo = (id: string, jobId: string) => ({
+      id,
+      seq: 1,
+      jobId,
+      roomId: ROOM_ID,
+      fileName: 'den.jpg',
+      blob: new Blob(['x'], { type: 'image/jpeg' }),
+      queuedAt: '2026-01-01T00:00:00.000Z',
+    });
     await photoStorage.put(photo('p-this', JOB_ID));
     await photoStorage.put(photo('p-other', OTHER_JOB));
     const job = jobRecord();
@@ -153,7 +177,10 @@ describe('DeleteJobButton', () => {
   });
 
   it('a job already deleted elsewhere (404) counts as done', async () => {
-    mockFetch({ 'GET /api/auth/csrf': json(200, { token: 't' }), [`DELETE /api/jobs/${JOB_ID}`]: problem(404, 'not-found', 'The job was not found.') });
+    mockFetch({
+      'GET /api/auth/csrf': json(200, { token: 't' }),
+      [`DELETE /api/jobs/${JOB_ID}`]: problem(404, 'not-found', 'The job was not found.'),
+    });
     answerConfirm(true);
     renderButton(jobRecord(), OWNER);
     fireEvent.click(screen.getByRole('button', { name: 'Delete job' }));

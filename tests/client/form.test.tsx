@@ -13,7 +13,11 @@ const schema = z.object({
 
 function renderForm(onSubmit: (values: z.output<typeof schema>) => Promise<void>) {
   render(
-    <Form schema={schema} defaultValues={{ name: 'Test Person', email: 'a@example.com', room: { width: 12 } }} onSubmit={onSubmit}>
+    <Form
+      schema={schema}
+      defaultValues={{ name: 'Test Person', email: 'a@example.com', room: { width: 12 } }}
+      onSubmit={onSubmit}
+    >
       <TextField name="name" label="Name" />
       <TextField name="email" label="E-mail" />
       <NumberField name="room.width" label="Width" />
@@ -23,7 +27,13 @@ function renderForm(onSubmit: (values: z.output<typeof schema>) => Promise<void>
 }
 
 const validationError = (errors: { path: string; message: string }[]) =>
-  new ApiError({ status: 400, code: 'validation', title: 'Invalid request', detail: 'Some fields need attention.', errors });
+  new ApiError({
+    status: 400,
+    code: 'validation',
+    title: 'Invalid request',
+    detail: 'Some fields need attention.',
+    errors,
+  });
 
 describe('Form', () => {
   it('maps 400 field errors from the server onto the matching fields, nested ones included', async () => {
@@ -55,7 +65,12 @@ describe('Form', () => {
 
   it('shows a non-validation problem as the form message', async () => {
     renderForm(async () => {
-      throw new ApiError({ status: 409, code: 'conflict', title: 'Conflict', detail: 'That e-mail is already in use.' });
+      throw new ApiError({
+        status: 409,
+        code: 'conflict',
+        title: 'Conflict',
+        detail: 'That e-mail is already in use.',
+      });
     });
     fireEvent.click(screen.getByRole('button', { name: 'Save' }));
     expect(await screen.findByRole('alert')).toHaveTextContent('That e-mail is already in use.');
@@ -74,7 +89,12 @@ describe('Form', () => {
     fireEvent.change(screen.getByLabelText('Name'), { target: { value: 'Someone' } });
     fireEvent.change(screen.getByLabelText('Width'), { target: { value: '14.5' } });
     fireEvent.click(screen.getByRole('button', { name: 'Save' }));
-    await waitFor(() => expect(onSubmit).toHaveBeenCalledWith({ name: 'Someone', email: 'a@example.com', room: { width: 14.5 } }, expect.anything()));
+    await waitFor(() =>
+      expect(onSubmit).toHaveBeenCalledWith(
+        { name: 'Someone', email: 'a@example.com', room: { width: 14.5 } },
+        expect.anything(),
+      ),
+    );
     expect(screen.getByLabelText('Width')).toHaveAttribute('inputmode', 'decimal');
   });
 });

@@ -11,14 +11,27 @@ import { JOB_ID, jobRecord, renderWalkthrough } from './helpers/walkthrough-harn
 
 afterEach(() => vi.unstubAllGlobals());
 
-const customer = { id: 'c1', name: 'Rowan Example', email: 'rowan@example.com', phone: '555-0100', notes: '', createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-01T00:00:00.000Z' };
+const customer = {
+  id: 'c1',
+  name: 'Rowan Example',
+  email: 'rowan@example.com',
+  phone: '555-0100',
+  notes: '',
+  createdAt: '2026-01-01T00:00:00.000Z',
+  updatedAt: '2026-01-01T00:00:00.000Z',
+};
 const staff = [
   { id: 'u1', name: 'Sam Seller', role: 'salesperson' },
   { id: 'u2', name: 'Ivy Installer', role: 'installer' },
   { id: 'u3', name: 'Olive Owner', role: 'owner' },
 ];
 
-interface Sent { method: string; url: string; body: unknown; ifMatch: string | undefined }
+interface Sent {
+  method: string;
+  url: string;
+  body: unknown;
+  ifMatch: string | undefined;
+}
 
 /** A server holding one job and its customer; `jobPatch` answers the job PATCH (default: accept). */
 function server(jobPatch?: (body: Record<string, unknown>) => Response) {
@@ -36,11 +49,18 @@ function server(jobPatch?: (body: Record<string, unknown>) => Response) {
       if (method === 'GET' && url === '/api/customers/c1') return Response.json({ customer });
       if (method === 'GET' && url === '/api/staff') return Response.json({ staff });
       if (method === 'GET' && url === `/api/jobs/${JOB_ID}`) return Response.json({ job });
-      if (method === 'PATCH' && url === '/api/customers/c1') return Response.json({ customer: { ...customer, ...body } });
+      if (method === 'PATCH' && url === '/api/customers/c1')
+        return Response.json({ customer: { ...customer, ...body } });
       if (method === 'PATCH' && url === `/api/jobs/${JOB_ID}`) {
         if (jobPatch) return jobPatch(body);
         const installer = staff.find((s) => s.id === body.assignedInstallerId);
-        job = { ...job, ...body, site: { ...job.site, ...body }, version: job.version + 1, assignedInstaller: installer ? { id: installer.id, name: installer.name } : job.assignedInstaller } as JobRecord;
+        job = {
+          ...job,
+          ...body,
+          site: { ...job.site, ...body },
+          version: job.version + 1,
+          assignedInstaller: installer ? { id: installer.id, name: installer.name } : job.assignedInstaller,
+        } as JobRecord;
         return Response.json({ job });
       }
       throw new Error(`Unexpected fetch: ${method} ${url}`);
@@ -76,7 +96,9 @@ describe('job details on the walk-through', () => {
     expect(screen.getByRole('button', { name: 'Mark lost' })).toBeTruthy();
     fireEvent.click(screen.getByRole('button', { name: 'Move to design' }));
     await waitFor(() => expect(queryClient.getQueryData<JobRecord>(jobKeys.detail(JOB_ID))?.status).toBe('design'));
-    expect(s.writes()).toEqual([{ method: 'PATCH', url: `/api/jobs/${JOB_ID}`, body: { status: 'design' }, ifMatch: '"2"' }]);
+    expect(s.writes()).toEqual([
+      { method: 'PATCH', url: `/api/jobs/${JOB_ID}`, body: { status: 'design' }, ifMatch: '"2"' },
+    ]);
   });
 
   it('sends only what changed: the customer’s phone to the customer, the street to the job', async () => {
@@ -107,7 +129,12 @@ describe('job details on the walk-through', () => {
   });
 
   it('on a conflict keeps what was typed and says to check and save again', async () => {
-    server(() => Response.json({ type: '/problems/conflict', title: 'Conflict', status: 409, detail: 'Changed elsewhere.', currentVersion: 3 }, { status: 409, headers: { 'Content-Type': 'application/problem+json' } }));
+    server(() =>
+      Response.json(
+        { type: '/problems/conflict', title: 'Conflict', status: 409, detail: 'Changed elsewhere.', currentVersion: 3 },
+        { status: 409, headers: { 'Content-Type': 'application/problem+json' } },
+      ),
+    );
     await renderPanel(salesperson);
     fireEvent.change(await screen.findByLabelText('Job notes'), { target: { value: 'Dog in the yard' } });
     fireEvent.click(screen.getByRole('button', { name: 'Save details' }));
@@ -119,8 +146,16 @@ describe('job details on the walk-through', () => {
     const s = server();
     await renderPanel({ id: 'u3', role: 'owner' });
     const installer = await screen.findByLabelText('Installer');
-    expect(within(installer).getAllByRole('option').map((o) => o.textContent)).toEqual(['Not assigned yet', 'Ivy Installer']);
-    expect(within(screen.getByLabelText('Salesperson')).getAllByRole('option').map((o) => o.textContent)).toEqual(['Sam Seller', 'Olive Owner']);
+    expect(
+      within(installer)
+        .getAllByRole('option')
+        .map((o) => o.textContent),
+    ).toEqual(['Not assigned yet', 'Ivy Installer']);
+    expect(
+      within(screen.getByLabelText('Salesperson'))
+        .getAllByRole('option')
+        .map((o) => o.textContent),
+    ).toEqual(['Sam Seller', 'Olive Owner']);
     fireEvent.change(installer, { target: { value: 'u2' } });
     fireEvent.click(screen.getByRole('button', { name: 'Save details' }));
     await screen.findByText('Details saved.');
@@ -142,7 +177,10 @@ describe('job details on the walk-through', () => {
     fireEvent.change(await screen.findByLabelText('Job notes'), { target: { value: 'Gate code 4411' } });
     // Another device moved the job to a corrected city meanwhile; this tab learns of it.
     await act(async () => {
-      queryClient.setQueryData(jobKeys.detail(JOB_ID), jobRecord({ site: { ...jobRecord().site, city: 'Newtown' }, version: 3 }));
+      queryClient.setQueryData(
+        jobKeys.detail(JOB_ID),
+        jobRecord({ site: { ...jobRecord().site, city: 'Newtown' }, version: 3 }),
+      );
       await new Promise((r) => setTimeout(r, 20));
     });
     expect(screen.getByLabelText('City or town')).toHaveValue('Testville');

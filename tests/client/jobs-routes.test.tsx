@@ -24,7 +24,9 @@ describe('jobs routes', () => {
     mockFetch({
       [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord() }),
       [`GET /api/jobs/${JOB_ID}/rooms`]: json(200, { rooms: [roomRecord(bedroomInput, 3)] }),
-      'GET /api/company/settings': json(200, { settings: { unitSystem: 'imperial', defaultDesignConditions: null, version: 0, updatedAt: null } }),
+      'GET /api/company/settings': json(200, {
+        settings: { unitSystem: 'imperial', defaultDesignConditions: null, version: 0, updatedAt: null },
+      }),
     });
     renderRoute(`/jobs/${JOB_ID}`);
     expect(await screen.findByRole('heading', { name: 'Rowan Example' }, { timeout: 4000 })).toBeInTheDocument();
@@ -40,9 +42,19 @@ describe('jobs routes', () => {
 
   it('shows the route error when the job belongs to nobody we know', async () => {
     mockFetch({
-      [`GET /api/jobs/${JOB_ID}`]: { status: 404, body: { type: '/problems/not-found', title: 'Not found', status: 404, detail: 'The job was not found.' }, headers: { 'Content-Type': 'application/problem+json' } },
-      [`GET /api/jobs/${JOB_ID}/rooms`]: { status: 404, body: { type: '/problems/not-found', title: 'Not found', status: 404, detail: 'The job was not found.' }, headers: { 'Content-Type': 'application/problem+json' } },
-      'GET /api/company/settings': json(200, { settings: { unitSystem: 'imperial', defaultDesignConditions: null, version: 0, updatedAt: null } }),
+      [`GET /api/jobs/${JOB_ID}`]: {
+        status: 404,
+        body: { type: '/problems/not-found', title: 'Not found', status: 404, detail: 'The job was not found.' },
+        headers: { 'Content-Type': 'application/problem+json' },
+      },
+      [`GET /api/jobs/${JOB_ID}/rooms`]: {
+        status: 404,
+        body: { type: '/problems/not-found', title: 'Not found', status: 404, detail: 'The job was not found.' },
+        headers: { 'Content-Type': 'application/problem+json' },
+      },
+      'GET /api/company/settings': json(200, {
+        settings: { unitSystem: 'imperial', defaultDesignConditions: null, version: 0, updatedAt: null },
+      }),
     });
     renderRoute(`/jobs/${JOB_ID}/loads`);
     expect(await screen.findByRole('heading', { name: 'Not found' })).toBeInTheDocument();

@@ -34,14 +34,28 @@ const page = (items: unknown[], total: number, p = 1) => json(200, { items, tota
 
 describe('jobs list', () => {
   it('reads its filters from the URL, defaulting anything odd', () => {
-    expect(filtersFromSearch(new URLSearchParams('q=%20lane%20&status=design&page=3'))).toEqual({ search: 'lane', status: 'design', page: 3, pageSize: 25 });
-    expect(filtersFromSearch(new URLSearchParams('status=nope&page=-2'))).toEqual({ search: '', status: '', page: 1, pageSize: 25 });
+    expect(filtersFromSearch(new URLSearchParams('q=%20lane%20&status=design&page=3'))).toEqual({
+      search: 'lane',
+      status: 'design',
+      page: 3,
+      pageSize: 25,
+    });
+    expect(filtersFromSearch(new URLSearchParams('status=nope&page=-2'))).toEqual({
+      search: '',
+      status: '',
+      page: 1,
+      pageSize: 25,
+    });
   });
 
   it('lists jobs from the server page, searches and pages on the server', async () => {
     const fetchMock = mockFetch({
       'GET /api/jobs?page=1&pageSize=25': page([jobRecord()], 30),
-      'GET /api/jobs?page=2&pageSize=25': page([jobRecord({ id: '44444444-4444-4444-8444-444444444444', customer: { id: 'c2', name: 'Avery Sample' } })], 30, 2),
+      'GET /api/jobs?page=2&pageSize=25': page(
+        [jobRecord({ id: '44444444-4444-4444-8444-444444444444', customer: { id: 'c2', name: 'Avery Sample' } })],
+        30,
+        2,
+      ),
       'GET /api/jobs?page=1&pageSize=25&search=sample': page([jobRecord()], 1),
       'GET /api/jobs?page=1&pageSize=25&search=sample&status=design': page([], 0),
     });
@@ -58,7 +72,10 @@ describe('jobs list', () => {
     await waitFor(() => expect(screen.getByText('Page 1 of 1 · 1 job')).toBeInTheDocument());
     fireEvent.change(screen.getByLabelText('Status'), { target: { value: 'design' } });
     expect(await screen.findByText('No job matches')).toBeInTheDocument();
-    expect(fetchMock).toHaveBeenCalledWith('/api/jobs?page=1&pageSize=25&search=sample&status=design', expect.anything());
+    expect(fetchMock).toHaveBeenCalledWith(
+      '/api/jobs?page=1&pageSize=25&search=sample&status=design',
+      expect.anything(),
+    );
   });
 
   it('has a "New job" link', async () => {
@@ -85,11 +102,24 @@ describe('new job', () => {
       'GET /api/auth/csrf': json(200, { token: 't' }),
       'POST /api/customers': (init) => {
         bodies.push(JSON.parse(String(init?.body)));
-        return json(201, { customer: { id: 'c9', name: 'Rowan Example', email: null, phone: null, notes: '', createdAt: '', updatedAt: '' } });
+        return json(201, {
+          customer: {
+            id: 'c9',
+            name: 'Rowan Example',
+            email: null,
+            phone: null,
+            notes: '',
+            createdAt: '',
+            updatedAt: '',
+          },
+        });
       },
       'POST /api/jobs': (init, call) => {
         bodies.push(JSON.parse(String(init?.body)));
-        if (call === 1) return problem(400, 'validation', 'Check the fields.', { errors: [{ path: 'city', message: 'Enter the city or town.' }] });
+        if (call === 1)
+          return problem(400, 'validation', 'Check the fields.', {
+            errors: [{ path: 'city', message: 'Enter the city or town.' }],
+          });
         return json(201, { job: jobRecord() });
       },
     });

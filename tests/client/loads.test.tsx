@@ -14,7 +14,14 @@ import { bedroomInput, designConditions, JOB_ID, jobRecord, roomRecord } from '.
 afterEach(() => vi.unstubAllGlobals());
 
 const home = { designConditions, tightness: 'average' as const, rooms: [bedroomInput] };
-const serverBody = (load = homeLoad({ home })) => ({ jobId: JOB_ID, jobVersion: 2, tightness: 'average', designConditions, loads: load, warnings: { designConditions: [], rooms: {} } });
+const serverBody = (load = homeLoad({ home })) => ({
+  jobId: JOB_ID,
+  jobVersion: 2,
+  tightness: 'average',
+  designConditions,
+  loads: load,
+  warnings: { designConditions: [], rooms: {} },
+});
 
 function renderAt(path: string, element: React.ReactNode) {
   render(
@@ -44,7 +51,9 @@ describe('loads page', () => {
     const browser = homeLoad({ home });
     expect(compareLoads(browser, serverBody(browser))).toEqual([]);
     const off = { ...browser, totals: { ...browser.totals, heatingBtuh: browser.totals.heatingBtuh + 5 } };
-    expect(compareLoads(browser, serverBody(off))).toEqual([{ what: 'Whole-home heat loss', browser: browser.totals.heatingBtuh, server: browser.totals.heatingBtuh + 5 }]);
+    expect(compareLoads(browser, serverBody(off))).toEqual([
+      { what: 'Whole-home heat loss', browser: browser.totals.heatingBtuh, server: browser.totals.heatingBtuh + 5 },
+    ]);
   });
 
   it('shows totals, the estimate badge and a "checked against server" note', async () => {

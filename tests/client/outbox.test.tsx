@@ -13,7 +13,15 @@ describe('outbox', () => {
     mockFetch({
       'GET /api/dev/outbox': json(200, {
         messages: [
-          { id: 'm1', receivedAt: '2026-02-01T10:00:00.000Z', from: 'no-reply@gaugeline.example.com', to: ['a@example.com'], subject: 'Your sign-in', text: 'Welcome to the team.', html: '<b>x</b>' },
+          {
+            id: 'm1',
+            receivedAt: '2026-02-01T10:00:00.000Z',
+            from: 'no-reply@gaugeline.example.com',
+            to: ['a@example.com'],
+            subject: 'Your sign-in',
+            text: 'Welcome to the team.',
+            html: '<b>x</b>',
+          },
         ],
       }),
     });

@@ -88,7 +88,9 @@ describe('routing and guards', () => {
     fireEvent.click(screen.getByRole('button', { name: 'Sign in' }));
     await screen.findByTestId('user-name');
     await waitFor(() => expect(router.state.location.pathname).toBe(target));
-    expect(await within(screen.getByRole('navigation', { name: 'Main' })).findByRole('link', { name: 'Outbox' })).toBeInTheDocument();
+    expect(
+      await within(screen.getByRole('navigation', { name: 'Main' })).findByRole('link', { name: 'Outbox' }),
+    ).toBeInTheDocument();
   });
 
   it('renders the not-found page inside the shell', async () => {

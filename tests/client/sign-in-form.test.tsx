@@ -6,7 +6,15 @@ import { clearCsrfToken } from '../../client/src/lib/api-client';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { json, mockFetch, problem } from './helpers/fetch-mock';
 
-const user = { id: 'u1', name: 'Test Owner', email: 'owner@example.com', role: 'owner', active: true, companyId: 'c1', createdAt: '2026-01-01T00:00:00.000Z' };
+const user = {
+  id: 'u1',
+  name: 'Test Owner',
+  email: 'owner@example.com',
+  role: 'owner',
+  active: true,
+  companyId: 'c1',
+  createdAt: '2026-01-01T00:00:00.000Z',
+};
 
 function renderSignIn(onSignedIn = vi.fn()) {
   render(

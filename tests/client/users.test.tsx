@@ -9,7 +9,13 @@ import { createQueryClient } from '../../client/src/lib/query-client';
 import { json, mockFetch, problem } from './helpers/fetch-mock';
 
 const person = (id: string, name: string, role: string, active = true) => ({
-  id, name, email: `${id}@example.com`, role, active, companyId: 'c1', createdAt: '2026-01-01T00:00:00.000Z',
+  id,
+  name,
+  email: `${id}@example.com`,
+  role,
+  active,
+  companyId: 'c1',
+  createdAt: '2026-01-01T00:00:00.000Z',
 });
 
 function renderWithQuery(ui: ReactNode) {
@@ -40,7 +46,9 @@ describe('users page parts', () => {
   it('asks before deactivating', async () => {
     const fetch = mockFetch({
       'GET /api/auth/csrf': json(200, { token: 't' }),
-      'GET /api/users': json(200, { users: [person('me', 'Me Owner', 'owner'), person('i1', 'Ivy Installer', 'installer')] }),
+      'GET /api/users': json(200, {
+        users: [person('me', 'Me Owner', 'owner'), person('i1', 'Ivy Installer', 'installer')],
+      }),
       'PATCH /api/users/i1': json(200, { user: person('i1', 'Ivy Installer', 'installer', false) }),
     });
     renderWithQuery(<UsersTable currentUserId="me" />);
@@ -49,7 +57,9 @@ describe('users page parts', () => {
     fireEvent.click(within(row).getByRole('button', { name: 'Deactivate' }));
     expect(fetch.mock.calls.some(([, init]) => init?.method === 'PATCH')).toBe(false);
     fireEvent.click(within(row).getByRole('button', { name: 'Deactivate Ivy Installer' }));
-    await waitFor(() => expect(fetch.mock.calls.find(([, init]) => init?.method === 'PATCH')?.[1]?.body).toBe('{"active":false}'));
+    await waitFor(() =>
+      expect(fetch.mock.calls.find(([, init]) => init?.method === 'PATCH')?.[1]?.body).toBe('{"active":false}'),
+    );
   });
 
   it('puts a taken e-mail (409) under the E-mail field', async () => {
@@ -62,6 +72,10 @@ describe('users page parts', () => {
     fireEvent.change(screen.getByLabelText('E-mail'), { target: { value: 'taken@example.com' } });
     fireEvent.change(screen.getByLabelText('First password'), { target: { value: 'twelve chars or more' } });
     fireEvent.click(screen.getByRole('button', { name: 'Add user' }));
-    await waitFor(() => expect(screen.getByLabelText('E-mail')).toHaveAccessibleDescription('That e-mail address already has an account.'));
+    await waitFor(() =>
+      expect(screen.getByLabelText('E-mail')).toHaveAccessibleDescription(
+        'That e-mail address already has an account.',
+      ),
+    );
   });
 });

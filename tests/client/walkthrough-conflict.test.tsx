@@ -46,7 +46,11 @@ async function setUp() {
   const queryClient = createQueryClient();
   queryClient.setQueryData(jobKeys.rooms(JOB_ID), [roomRecord(bedroomInput, 3)]);
   const harness = await renderWalkthrough(<ConflictHost />, { send: 'real', queryClient });
-  await harness.queue.enqueue({ target: roomTarget(ROOM_ID), baseVersion: 3, payload: { kind: 'room-update', jobId: JOB_ID, roomId: ROOM_ID, input: mine } });
+  await harness.queue.enqueue({
+    target: roomTarget(ROOM_ID),
+    baseVersion: 3,
+    payload: { kind: 'room-update', jobId: JOB_ID, roomId: ROOM_ID, input: mine },
+  });
   await screen.findByRole('region', { name: 'Resolve conflicting changes' });
   return { ...harness, patches, fetchMock, queryClient };
 }

@@ -26,15 +26,25 @@ describe('a new room whose create is answered while its name is being typed', ()
         if (url === '/api/auth/csrf') return Response.json({ token: 't' });
         const body: unknown = typeof init?.body === 'string' ? JSON.parse(init.body) : null;
         sent.push({ method, url, body });
-        const { id, position, input: roomInput } = (body ?? {}) as { id?: string; position?: number; input?: Record<string, unknown> };
+        const {
+          id,
+          position,
+          input: roomInput,
+        } = (body ?? {}) as { id?: string; position?: number; input?: Record<string, unknown> };
         if (method === 'POST') {
           // Held until the test lets it through, so the answer lands mid-typing.
           await new Promise<void>((resolve) => answers.push(resolve));
-          return Response.json({ room: { ...roomRecord(roomInput ?? {}, 1), id, position } }, { status: 201, headers: { ETag: '"1"' } });
+          return Response.json(
+            { room: { ...roomRecord(roomInput ?? {}, 1), id, position } },
+            { status: 201, headers: { ETag: '"1"' } },
+          );
         }
         if (method === 'PATCH') {
           const roomId = url.split('/').pop() ?? '';
-          return Response.json({ room: { ...roomRecord(roomInput ?? {}, 2), id: roomId, position: 1 } }, { headers: { ETag: '"2"' } });
+          return Response.json(
+            { room: { ...roomRecord(roomInput ?? {}, 2), id: roomId, position: 1 } },
+            { headers: { ETag: '"2"' } },
+          );
         }
         throw new Error(`Unexpected fetch: ${method} ${url}`);
       }),
@@ -42,7 +52,12 @@ describe('a new room whose create is answered while its name is being typed', ()
     const queryClient = createQueryClient();
     queryClient.setQueryData(jobKeys.detail(JOB_ID), jobRecord());
     queryClient.setQueryData(jobKeys.rooms(JOB_ID), [roomRecord(bedroomInput, 3)]);
-    queryClient.setQueryData(jobKeys.settings(), { unitSystem: 'imperial', defaultDesignConditions: null, version: 1, updatedAt: null });
+    queryClient.setQueryData(jobKeys.settings(), {
+      unitSystem: 'imperial',
+      defaultDesignConditions: null,
+      version: 1,
+      updatedAt: null,
+    });
     await renderWalkthrough(
       <Routes>
         <Route path="/jobs/:jobId" element={<WalkthroughPage />} />

@@ -21,7 +21,9 @@ const hintOf = (label: string) => document.getElementById(`${screen.getByLabelTe
 describe('design conditions', () => {
   it('prefills company defaults, says where each value came from, and states where design values must come from', async () => {
     await renderWalkthrough(<DesignConditionsForm job={job} companyDefaults={companyDefaults} />);
-    expect(screen.getByText(/must come from the local code’s climate table or a recognised climatic data source/)).toBeInTheDocument();
+    expect(
+      screen.getByText(/must come from the local code’s climate table or a recognised climatic data source/),
+    ).toBeInTheDocument();
     expect(screen.getByLabelText('Outdoor cooling dry bulb')).toHaveValue('95');
     expect(hintOf('Outdoor cooling dry bulb')).toBe('Source: Company default');
     expect(screen.getByLabelText('Outdoor heating dry bulb')).toHaveValue('15');
@@ -30,15 +32,22 @@ describe('design conditions', () => {
   });
 
   it('marks a typed value as entered, saves only entered values with their notes, and can go back to the default', async () => {
-    const { queue } = await renderWalkthrough(<DesignConditionsForm job={job} companyDefaults={companyDefaults} />, { online: () => false });
+    const { queue } = await renderWalkthrough(<DesignConditionsForm job={job} companyDefaults={companyDefaults} />, {
+      online: () => false,
+    });
     fireEvent.change(screen.getByLabelText('Outdoor cooling dry bulb'), { target: { value: '97' } });
     expect(hintOf('Outdoor cooling dry bulb')).toBe('Source: Entered for this job');
     await waitFor(() => expect(queue.getSnapshot().items).toHaveLength(1), { timeout: 2000 });
     expect(queue.getSnapshot().items[0]).toMatchObject({
       baseVersion: 2,
       payload: {
-        kind: 'job-update', jobId: JOB_ID,
-        changes: { designConditions: { outdoorCoolingDryBulbF: 97, outdoorHeatingDryBulbF: 15 }, designSourceNotes: { outdoorHeatingDryBulbF: 'County code table' }, tightness: 'average' },
+        kind: 'job-update',
+        jobId: JOB_ID,
+        changes: {
+          designConditions: { outdoorCoolingDryBulbF: 97, outdoorHeatingDryBulbF: 15 },
+          designSourceNotes: { outdoorHeatingDryBulbF: 'County code table' },
+          tightness: 'average',
+        },
       },
     });
     fireEvent.click(screen.getByRole('button', { name: 'Use company default for outdoor cooling dry bulb' }));
@@ -49,7 +58,9 @@ describe('design conditions', () => {
   it('shows calc’s rule next to the field', async () => {
     await renderWalkthrough(<DesignConditionsForm job={job} companyDefaults={companyDefaults} />);
     fireEvent.change(screen.getByLabelText('Outdoor heating dry bulb'), { target: { value: '70' } });
-    expect(await screen.findByText('Outdoor heating design temperature must be below the indoor heating set point')).toBeInTheDocument();
+    expect(
+      await screen.findByText('Outdoor heating design temperature must be below the indoor heating set point'),
+    ).toBeInTheDocument();
   });
 });
 
@@ -74,7 +85,10 @@ describe('metric companies', () => {
 describe('signed out while saving', () => {
   it('keeps the changes and says so', () => {
     const item = { id: 'e1', seq: 1, target: 'room:a', baseVersion: 1, payload: {}, queuedAt: '' };
-    const status = saveStatus({ items: [item], online: true, sending: false, conflict: null, blocked: 'Session ended' }, 0);
+    const status = saveStatus(
+      { items: [item], online: true, sending: false, conflict: null, blocked: 'Session ended' },
+      0,
+    );
     render(<SaveStatusPill status={status} />);
     expect(screen.getByRole('status')).toHaveTextContent('Not saved — sign in again; 1 change kept');
   });

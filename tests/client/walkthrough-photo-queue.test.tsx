@@ -16,7 +16,17 @@ import { json, mockFetch, problem } from './helpers/fetch-mock';
 import { bedroomInput, JOB_ID, renderWalkthrough, ROOM_ID, roomRecord } from './helpers/walkthrough-harness';
 
 const PHOTOS = `POST /api/jobs/${JOB_ID}/rooms/${ROOM_ID}/photos`;
-const photo = { id: 'p1', roomId: ROOM_ID, url: `/api/jobs/${JOB_ID}/rooms/${ROOM_ID}/photos/p1`, contentType: 'image/jpeg', byteSize: 10, width: 4, height: 3, originalName: 'wall.jpg', createdAt: '' };
+const photo = {
+  id: 'p1',
+  roomId: ROOM_ID,
+  url: `/api/jobs/${JOB_ID}/rooms/${ROOM_ID}/photos/p1`,
+  contentType: 'image/jpeg',
+  byteSize: 10,
+  width: 4,
+  height: 3,
+  originalName: 'wall.jpg',
+  createdAt: '',
+};
 
 /** Both queues listen to window 'online': stop them so one test's queue never answers the next test's event. */
 const started: { stop(): void }[] = [];
@@ -31,7 +41,8 @@ afterEach(() => {
 
 /** The room as the walk-through shows it: the rooms cache with the edit queue laid over it. */
 function Room() {
-  const rooms = useQuery({ queryKey: jobKeys.rooms(JOB_ID), queryFn: (): RoomRecord[] => [], staleTime: Infinity }).data ?? [];
+  const rooms =
+    useQuery({ queryKey: jobKeys.rooms(JOB_ID), queryFn: (): RoomRecord[] => [], staleTime: Infinity }).data ?? [];
   const { items } = useQueueState();
   const room = overlayRooms(JOB_ID, rooms, items).find((r) => r.id === ROOM_ID);
   return (
@@ -56,17 +67,25 @@ async function renderRoom(options: Parameters<typeof renderWalkthrough>[1], phot
 
 const pill = () => screen.getAllByRole('status').find((s) => /Saved|Saving|Offline/.test(s.textContent ?? ''));
 const addPhoto = (name = 'wall.jpg', type = 'image/jpeg') =>
-  fireEvent.change(screen.getByLabelText('Take or add a photo'), { target: { files: [new File(['x'], name, { type })] } });
+  fireEvent.change(screen.getByLabelText('Take or add a photo'), {
+    target: { files: [new File(['x'], name, { type })] },
+  });
 
 describe('photos kept on the device', () => {
   it('takes a photo offline, shows it waiting, and uploads it when the connection returns', async () => {
     const fetch = mockFetch({ 'GET /api/auth/csrf': json(200, { token: 't' }), [PHOTOS]: json(201, { photo }) });
     let online = false;
-    const { photoStorage } = await renderRoom({ online: () => online, queryClient: clientWith([roomRecord(bedroomInput, 3)]) });
+    const { photoStorage } = await renderRoom({
+      online: () => online,
+      queryClient: clientWith([roomRecord(bedroomInput, 3)]),
+    });
     const input = screen.getByLabelText('Take or add a photo');
     expect(input).toBeEnabled();
     addPhoto();
-    expect(await screen.findByRole('img', { name: 'wall.jpg, waiting to upload' })).toHaveAttribute('src', expect.stringMatching(/^blob:/));
+    expect(await screen.findByRole('img', { name: 'wall.jpg, waiting to upload' })).toHaveAttribute(
+      'src',
+      expect.stringMatching(/^blob:/),
+    );
     expect(screen.getByText('waiting to upload')).toBeInTheDocument();
     expect(pill()).toHaveTextContent('Offline — 1 change waiting');
     expect(fetch).not.toHaveBeenCalled();
@@ -91,9 +110,15 @@ describe('photos kept on the device', () => {
     });
     let online = false;
     const { queue } = await renderRoom({ online: () => online, send: 'real', queryClient: clientWith([]) });
-    await queue.enqueue({ target: roomTarget(ROOM_ID), baseVersion: null, payload: { kind: 'room-create', jobId: JOB_ID, roomId: ROOM_ID, position: 0, input: bedroomInput } });
+    await queue.enqueue({
+      target: roomTarget(ROOM_ID),
+      baseVersion: null,
+      payload: { kind: 'room-create', jobId: JOB_ID, roomId: ROOM_ID, position: 0, input: bedroomInput },
+    });
     addPhoto();
-    expect(await screen.findByText('Photos wait on this device until the room has reached the server.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('Photos wait on this device until the room has reached the server.'),
+    ).toBeInTheDocument();
     expect(pill()).toHaveTextContent('Offline — 2 changes waiting');
 
     online = true;
@@ -103,8 +128,12 @@ describe('photos kept on the device', () => {
   });
 
   it('removes a photo the server refuses and says why next to the photos', async () => {
-    const detail = 'This file is not a JPEG, PNG or WebP photo (its content was checked, not its name). Upload a photo in one of those formats.';
-    mockFetch({ 'GET /api/auth/csrf': json(200, { token: 't' }), [PHOTOS]: problem(415, 'unsupported-media-type', detail) });
+    const detail =
+      'This file is not a JPEG, PNG or WebP photo (its content was checked, not its name). Upload a photo in one of those formats.';
+    mockFetch({
+      'GET /api/auth/csrf': json(200, { token: 't' }),
+      [PHOTOS]: problem(415, 'unsupported-media-type', detail),
+    });
     const { photoStorage } = await renderRoom({ queryClient: clientWith([roomRecord(bedroomInput, 3)]) });
     addPhoto('notes.pdf', 'image/jpeg');
     const alert = await screen.findByRole('alert');
@@ -117,21 +146,32 @@ describe('photos kept on the device', () => {
   });
 
   it('sends a photo whose room is gone from the server and tells the 404 instead of waiting for ever', async () => {
-    mockFetch({ 'GET /api/auth/csrf': json(200, { token: 't' }), [PHOTOS]: problem(404, 'not-found', 'The room was not found.') });
+    mockFetch({
+      'GET /api/auth/csrf': json(200, { token: 't' }),
+      [PHOTOS]: problem(404, 'not-found', 'The room was not found.'),
+    });
     let online = false;
-    const { photoQueue, photoStorage, queryClient } = await renderRoom({ online: () => online, queryClient: clientWith([roomRecord(bedroomInput, 3)]) });
+    const { photoQueue, photoStorage, queryClient } = await renderRoom({
+      online: () => online,
+      queryClient: clientWith([roomRecord(bedroomInput, 3)]),
+    });
     addPhoto();
     await waitFor(() => expect(photoStorage.ids()).toHaveLength(1));
     // Deleted on another device: the next rooms list no longer has it.
     online = true;
     act(() => queryClient.setQueryData(jobKeys.rooms(JOB_ID), []));
     await waitFor(() => expect(photoStorage.ids()).toEqual([]));
-    expect(photoQueue.getSnapshot().notices).toMatchObject([{ kind: 'refused', fileName: 'wall.jpg', message: 'The room was not found.' }]);
+    expect(photoQueue.getSnapshot().notices).toMatchObject([
+      { kind: 'refused', fileName: 'wall.jpg', message: 'The room was not found.' },
+    ]);
   });
 
   it('keeps a photo after a server error and tries it again', async () => {
     let calls = 0;
-    mockFetch({ 'GET /api/auth/csrf': json(200, { token: 't' }), [PHOTOS]: () => (++calls === 1 ? problem(503, 'unavailable', 'Down') : json(201, { photo })) });
+    mockFetch({
+      'GET /api/auth/csrf': json(200, { token: 't' }),
+      [PHOTOS]: () => (++calls === 1 ? problem(503, 'unavailable', 'Down') : json(201, { photo })),
+    });
     const { photoQueue, photoStorage } = await renderRoom({ queryClient: clientWith([roomRecord(bedroomInput, 3)]) });
     addPhoto();
     await waitFor(() => expect(calls).toBe(1));
@@ -156,7 +196,10 @@ describe('photos kept on the device', () => {
     });
     let online = false;
     const photoStorage = memoryPhotoStorage();
-    const first = await renderRoom({ online: () => online, queryClient: clientWith([roomRecord(bedroomInput, 3)]) }, photoStorage);
+    const first = await renderRoom(
+      { online: () => online, queryClient: clientWith([roomRecord(bedroomInput, 3)]) },
+      photoStorage,
+    );
     addPhoto('first.jpg');
     addPhoto('second.jpg');
     await waitFor(() => expect(photoStorage.ids()).toHaveLength(2));

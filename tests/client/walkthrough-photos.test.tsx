@@ -9,7 +9,16 @@ import { jobKeys } from '../../client/src/lib/job-queries';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { clearVersionedCsrfToken } from '../../client/src/lib/versioned-request';
 import { headerOf, json, mockFetch, problem } from './helpers/fetch-mock';
-import { bedroomInput, designConditions, JOB_ID, jobRecord, renderWalkthrough, ROOM_ID, roomRecord, roomView } from './helpers/walkthrough-harness';
+import {
+  bedroomInput,
+  designConditions,
+  JOB_ID,
+  jobRecord,
+  renderWalkthrough,
+  ROOM_ID,
+  roomRecord,
+  roomView,
+} from './helpers/walkthrough-harness';
 
 beforeEach(() => {
   clearCsrfToken();
@@ -17,7 +26,17 @@ beforeEach(() => {
 });
 afterEach(() => vi.unstubAllGlobals());
 
-const photo = { id: 'p1', roomId: ROOM_ID, url: `/api/jobs/${JOB_ID}/rooms/${ROOM_ID}/photos/p1`, contentType: 'image/jpeg', byteSize: 10, width: 4, height: 3, originalName: 'wall.jpg', createdAt: '' };
+const photo = {
+  id: 'p1',
+  roomId: ROOM_ID,
+  url: `/api/jobs/${JOB_ID}/rooms/${ROOM_ID}/photos/p1`,
+  contentType: 'image/jpeg',
+  byteSize: 10,
+  width: 4,
+  height: 3,
+  originalName: 'wall.jpg',
+  createdAt: '',
+};
 
 describe('room photos', () => {
   it('opens the rear camera, uploads the file as "file" and shows thumbnails from the photo route', async () => {
@@ -32,7 +51,10 @@ describe('room photos', () => {
     // The photo goes up only once the room is in the rooms cache (it exists on the server).
     const queryClient = createQueryClient();
     queryClient.setQueryData(jobKeys.rooms(JOB_ID), [roomRecord(bedroomInput, 3)]);
-    const { photoQueue } = await renderWalkthrough(<RoomPhotos jobId={JOB_ID} room={{ ...roomView(), photos: [photo] }} />, { queryClient });
+    const { photoQueue } = await renderWalkthrough(
+      <RoomPhotos jobId={JOB_ID} room={{ ...roomView(), photos: [photo] }} />,
+      { queryClient },
+    );
     expect(screen.getByRole('img', { name: 'Photo 1 of 1' })).toHaveAttribute('src', photo.url);
     const input = screen.getByLabelText('Take or add a photo');
     expect(input).toHaveAttribute('accept', 'image/*');
@@ -47,8 +69,12 @@ describe('room photos', () => {
     const fetch = mockFetch({});
     const { photoQueue } = await renderWalkthrough(<RoomPhotos jobId={JOB_ID} room={roomView(undefined, null)} />);
     expect(screen.getByLabelText('Take or add a photo')).toBeEnabled();
-    fireEvent.change(screen.getByLabelText('Take or add a photo'), { target: { files: [new File(['x'], 'wall.jpg', { type: 'image/jpeg' })] } });
-    expect(await screen.findByText('Photos wait on this device until the room has reached the server.')).toBeInTheDocument();
+    fireEvent.change(screen.getByLabelText('Take or add a photo'), {
+      target: { files: [new File(['x'], 'wall.jpg', { type: 'image/jpeg' })] },
+    });
+    expect(
+      await screen.findByText('Photos wait on this device until the room has reached the server.'),
+    ).toBeInTheDocument();
     expect(screen.getByText('waiting to upload')).toBeInTheDocument();
     expect(fetch).not.toHaveBeenCalled();
     photoQueue.stop();
@@ -65,14 +91,22 @@ describe('conflict on the design conditions', () => {
     const patches: RequestInit[] = [];
     mockFetch({
       'GET /api/auth/csrf': json(200, { token: 't' }),
-      [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ version: 7, designConditions: { ...designConditions, outdoorCoolingDryBulbF: 99 } }) }),
+      [`GET /api/jobs/${JOB_ID}`]: json(200, {
+        job: jobRecord({ version: 7, designConditions: { ...designConditions, outdoorCoolingDryBulbF: 99 } }),
+      }),
       [`PATCH /api/jobs/${JOB_ID}`]: (init, call) => {
         patches.push(init ?? {});
-        return call === 1 ? problem(409, 'conflict', 'The job was changed by someone else.') : json(200, { job: jobRecord({ version: 8 }) });
+        return call === 1
+          ? problem(409, 'conflict', 'The job was changed by someone else.')
+          : json(200, { job: jobRecord({ version: 8 }) });
       },
     });
     const { queue } = await renderWalkthrough(<ConflictHost />, { send: 'real' });
-    await queue.enqueue({ target: jobTarget(JOB_ID), baseVersion: 2, payload: { kind: 'job-update', jobId: JOB_ID, changes: { designConditions: { outdoorCoolingDryBulbF: 97 } } } });
+    await queue.enqueue({
+      target: jobTarget(JOB_ID),
+      baseVersion: 2,
+      payload: { kind: 'job-update', jobId: JOB_ID, changes: { designConditions: { outdoorCoolingDryBulbF: 97 } } },
+    });
     const group = await screen.findByRole('group', { name: 'Outdoor cooling dry bulb (°F)' });
     expect(group).toHaveTextContent('97');
     expect(group).toHaveTextContent('99');

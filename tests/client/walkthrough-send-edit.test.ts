@@ -11,7 +11,11 @@ afterEach(() => vi.unstubAllGlobals());
 const NEW_ID = '44444444-4444-4444-8444-444444444444';
 const newRoom = { ...roomRecord({ ...bedroomInput, id: NEW_ID, name: 'Den' }, 1), id: NEW_ID, position: 1 };
 const create: WalkthroughItem = {
-  id: 'e1', seq: 1, target: roomTarget(NEW_ID), baseVersion: null, queuedAt: '2026-01-01T00:00:00.000Z',
+  id: 'e1',
+  seq: 1,
+  target: roomTarget(NEW_ID),
+  baseVersion: null,
+  queuedAt: '2026-01-01T00:00:00.000Z',
   payload: { kind: 'room-create', jobId: JOB_ID, roomId: NEW_ID, position: 1, input: newRoom.input },
 };
 
@@ -62,7 +66,9 @@ describe('a write answered while a rooms fetch is on its way', () => {
     expect(queryClient.getQueryData(jobKeys.rooms(JOB_ID))).toBeUndefined();
     s.answerList([roomRecord(bedroomInput, 3)]);
     await first;
-    await vi.waitFor(() => expect(names(queryClient.getQueryData(jobKeys.rooms(JOB_ID)))).toEqual(['Bedroom 2', 'Den']));
+    await vi.waitFor(() =>
+      expect(names(queryClient.getQueryData(jobKeys.rooms(JOB_ID)))).toEqual(['Bedroom 2', 'Den']),
+    );
   });
 
   it('keeps a newer version of the room the list already holds', async () => {

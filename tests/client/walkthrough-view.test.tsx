@@ -13,31 +13,75 @@ function seeded() {
   const queryClient = createQueryClient();
   queryClient.setQueryData(jobKeys.detail(JOB_ID), jobRecord());
   queryClient.setQueryData(jobKeys.rooms(JOB_ID), [roomRecord(bedroomInput, 3)]);
-  queryClient.setQueryData(jobKeys.settings(), { unitSystem: 'imperial', defaultDesignConditions: null, version: 1, updatedAt: null });
+  queryClient.setQueryData(jobKeys.settings(), {
+    unitSystem: 'imperial',
+    defaultDesignConditions: null,
+    version: 1,
+    updatedAt: null,
+  });
   return queryClient;
 }
 
 const NEW_ID = '33333333-3333-4333-8333-333333333333';
 const item = (seq: number, payload: WalkthroughEdit, baseVersion: number | null): QueueItem<WalkthroughEdit> => ({
-  id: `e${seq}`, seq, target: roomTarget('roomId' in payload ? payload.roomId : ''), baseVersion, payload, queuedAt: '2026-01-01T00:00:00.000Z',
+  id: `e${seq}`,
+  seq,
+  target: roomTarget('roomId' in payload ? payload.roomId : ''),
+  baseVersion,
+  payload,
+  queuedAt: '2026-01-01T00:00:00.000Z',
 });
 const waiting = [
-  item(1, { kind: 'room-update', jobId: JOB_ID, roomId: ROOM_ID, input: { ...bedroomInput, name: 'Primary bedroom', lengthFt: 15 } }, 3),
-  item(2, { kind: 'room-create', jobId: JOB_ID, roomId: NEW_ID, position: 1, input: { ...bedroomInput, id: NEW_ID, name: 'Nursery' } }, null),
+  item(
+    1,
+    {
+      kind: 'room-update',
+      jobId: JOB_ID,
+      roomId: ROOM_ID,
+      input: { ...bedroomInput, name: 'Primary bedroom', lengthFt: 15 },
+    },
+    3,
+  ),
+  item(
+    2,
+    {
+      kind: 'room-create',
+      jobId: JOB_ID,
+      roomId: NEW_ID,
+      position: 1,
+      input: { ...bedroomInput, id: NEW_ID, name: 'Nursery' },
+    },
+    null,
+  ),
 ];
 
 describe('walk-through after a reload', () => {
   it('lays the queued edits over what the server returned', () => {
     const rooms = overlayRooms(JOB_ID, [roomRecord(bedroomInput, 3)], waiting);
-    expect(rooms.map((r) => [r.input.name, r.version, r.waiting])).toEqual([['Primary bedroom', 3, true], ['Nursery', null, true]]);
-    const deleted = overlayRooms(JOB_ID, [roomRecord(bedroomInput, 3)], [item(3, { kind: 'room-delete', jobId: JOB_ID, roomId: ROOM_ID }, 3)]);
+    expect(rooms.map((r) => [r.input.name, r.version, r.waiting])).toEqual([
+      ['Primary bedroom', 3, true],
+      ['Nursery', null, true],
+    ]);
+    const deleted = overlayRooms(
+      JOB_ID,
+      [roomRecord(bedroomInput, 3)],
+      [item(3, { kind: 'room-delete', jobId: JOB_ID, roomId: ROOM_ID }, 3)],
+    );
     expect(deleted).toEqual([]);
   });
 
   it('shows every value typed before the reload and says the changes are waiting', async () => {
-    await renderWalkthrough(<WalkthroughView jobId={JOB_ID} />, { queryClient: seeded(),  stored: waiting, online: () => false });
+    await renderWalkthrough(<WalkthroughView jobId={JOB_ID} />, {
+      queryClient: seeded(),
+      stored: waiting,
+      online: () => false,
+    });
     const tabs = await screen.findByRole('list', { name: 'Rooms' });
-    expect(within(tabs).getAllByRole('button').map((b) => b.textContent)).toEqual(['Primary bedroom (not yet saved)', 'Nursery (not yet saved)']);
+    expect(
+      within(tabs)
+        .getAllByRole('button')
+        .map((b) => b.textContent),
+    ).toEqual(['Primary bedroom (not yet saved)', 'Nursery (not yet saved)']);
     expect(screen.getByLabelText('Room name')).toHaveValue('Primary bedroom');
     expect(screen.getByLabelText('Length')).toHaveValue('15');
     expect(screen.getAllByRole('status').some((s) => s.textContent === 'Offline — 2 changes waiting')).toBe(true);
@@ -46,7 +90,10 @@ describe('walk-through after a reload', () => {
 
 describe('adding rooms', () => {
   it('copies the previous room and adds one from a template', async () => {
-    const { queue } = await renderWalkthrough(<WalkthroughView jobId={JOB_ID} />, { queryClient: seeded(),  online: () => false });
+    const { queue } = await renderWalkthrough(<WalkthroughView jobId={JOB_ID} />, {
+      queryClient: seeded(),
+      online: () => false,
+    });
     fireEvent.click(await screen.findByRole('button', { name: 'Copy previous room' }));
     await waitFor(() => expect(screen.getByLabelText('Room name')).toHaveValue('Bedroom 2 (copy)'));
     expect(screen.getAllByLabelText('Wall length')).toHaveLength(1);

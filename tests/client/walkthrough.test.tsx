@@ -5,7 +5,14 @@ import { RoomEditor } from '../../client/src/features/walkthrough/components/roo
 import { SaveStatusPill, saveStatus } from '../../client/src/features/walkthrough/components/save-status-pill';
 import { LiveSaveStatus } from '../../client/src/features/walkthrough/components/live-save-status';
 import { render } from '@testing-library/react';
-import { bedroomInput, designConditions, JOB_ID, renderWalkthrough, ROOM_ID, roomView } from './helpers/walkthrough-harness';
+import {
+  bedroomInput,
+  designConditions,
+  JOB_ID,
+  renderWalkthrough,
+  ROOM_ID,
+  roomView,
+} from './helpers/walkthrough-harness';
 
 afterEach(() => vi.unstubAllGlobals());
 
@@ -19,7 +26,10 @@ describe('save status pill', () => {
     expect(saveStatus(base, 0)).toEqual({ kind: 'saved' });
     expect(saveStatus(base, 1)).toEqual({ kind: 'saving' });
     expect(saveStatus({ ...base, sending: true, items: [item] }, 0)).toEqual({ kind: 'saving' });
-    expect(saveStatus({ ...base, online: false, items: [item, { ...item, id: 'e2' }] }, 0)).toEqual({ kind: 'offline', waiting: 2 });
+    expect(saveStatus({ ...base, online: false, items: [item, { ...item, id: 'e2' }] }, 0)).toEqual({
+      kind: 'offline',
+      waiting: 2,
+    });
     expect(saveStatus({ ...base, online: false }, 0)).toEqual({ kind: 'saved' });
   });
 
@@ -47,14 +57,20 @@ describe('save status pill', () => {
     fireEvent.change(screen.getByLabelText('Length'), { target: { value: '14' } });
     expect(pill()).toHaveTextContent('Saving…');
     await waitFor(() => expect(pill()).toHaveTextContent('Offline — 1 change waiting'), { timeout: 2000 });
-    expect(queue.getSnapshot().items[0]?.payload).toMatchObject({ kind: 'room-update', roomId: ROOM_ID, input: { lengthFt: 14 } });
+    expect(queue.getSnapshot().items[0]?.payload).toMatchObject({
+      kind: 'room-update',
+      roomId: ROOM_ID,
+      input: { lengthFt: 14 },
+    });
     expect(queue.getSnapshot().items[0]?.baseVersion).toBe(3);
   });
 });
 
 describe('room form', () => {
   it('shows calc’s message beside the window when the windows are larger than the wall', async () => {
-    await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
+    await renderWalkthrough(
+      <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
+    );
     const area = screen.getByLabelText('Window area');
     fireEvent.change(area, { target: { value: '100' } });
     expect(await screen.findByText('The windows (100 ft²) are larger than the wall (80 ft²)')).toBeInTheDocument();
@@ -63,7 +79,9 @@ describe('room form', () => {
   });
 
   it('shows bounds from calc’s schema and never saves an invalid room', async () => {
-    const { queue } = await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
+    const { queue } = await renderWalkthrough(
+      <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
+    );
     fireEvent.change(screen.getByLabelText('Ceiling height'), { target: { value: '0.5' } });
     expect(await screen.findByText('Ceiling height must be between 2 and 40 ft')).toBeInTheDocument();
     fireEvent.change(screen.getByLabelText('Room name'), { target: { value: '' } });
@@ -73,7 +91,9 @@ describe('room form', () => {
   });
 
   it('adds a wall and a window with the buttons', async () => {
-    await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
+    await renderWalkthrough(
+      <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
+    );
     fireEvent.click(screen.getByRole('button', { name: 'Add wall' }));
     expect(screen.getAllByLabelText('Wall length')).toHaveLength(2);
     fireEvent.click(screen.getAllByRole('button', { name: 'Add window' })[1] ?? document.body);
@@ -81,7 +101,9 @@ describe('room form', () => {
   });
 
   it('updates the live loads as an input changes, with calc’s numbers', async () => {
-    await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
+    await renderWalkthrough(
+      <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
+    );
     const panel = screen.getByRole('region', { name: 'Room loads' });
     const before = roomLoad({ room: bedroomInput, designConditions, tightness: 'average' });
     expect(within(panel).getByTestId('load-sensible-gain')).toHaveTextContent(fmt(before.sensibleGain.total));
@@ -97,38 +119,55 @@ describe('room form', () => {
   });
 
   it('shows plain-word warnings for an unusual ceiling', async () => {
-    await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
+    await renderWalkthrough(
+      <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
+    );
     fireEvent.change(screen.getByLabelText('Ceiling height'), { target: { value: '6' } });
     expect(await screen.findByText(/6 ft ceiling is unusually low/)).toBeInTheDocument();
   });
 });
 
 describe('a draft the schema refuses', () => {
-
   it('is kept on the device and comes back after a reload, and is dropped once the room is valid', async () => {
-    const first = await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
+    const first = await renderWalkthrough(
+      <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
+    );
     fireEvent.change(screen.getByLabelText('Window area'), { target: { value: '100' } });
     expect(await screen.findByText('The windows (100 ft²) are larger than the wall (80 ft²)')).toBeInTheDocument();
     first.unmount();
     // "reload": a fresh editor for the same room at the same version
     const sent: unknown[] = [];
-    const second = await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />, {
-      send: async (item) => (sent.push(item.payload), { kind: 'ok', version: 4 }),
-    });
+    const second = await renderWalkthrough(
+      <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
+      {
+        send: async (item) => (sent.push(item.payload), { kind: 'ok', version: 4 }),
+      },
+    );
     expect(screen.getByLabelText('Window area')).toHaveValue('100');
     expect(screen.getByText(/Brought back what you were typing/)).toBeInTheDocument();
     fireEvent.change(screen.getByLabelText('Window area'), { target: { value: '20' } });
     await waitFor(() => expect(sent).toHaveLength(1), { timeout: 2000 });
     second.unmount();
-    await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
+    await renderWalkthrough(
+      <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
+    );
     expect(screen.getByLabelText('Window area')).not.toHaveValue('100');
   });
 
   it('is discarded when the room on the server has moved on', async () => {
-    const first = await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />);
+    const first = await renderWalkthrough(
+      <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
+    );
     fireEvent.change(screen.getByLabelText('Window area'), { target: { value: '100' } });
     first.unmount();
-    await renderWalkthrough(<RoomEditor jobId={JOB_ID} room={roomView(bedroomInput, 4)} designConditions={designConditions} tightness="average" />);
+    await renderWalkthrough(
+      <RoomEditor
+        jobId={JOB_ID}
+        room={roomView(bedroomInput, 4)}
+        designConditions={designConditions}
+        tightness="average"
+      />,
+    );
     expect(screen.getByLabelText('Window area')).not.toHaveValue('100');
   });
 });

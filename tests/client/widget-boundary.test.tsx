@@ -5,7 +5,13 @@ import { ApiError } from '../../client/src/lib/api-error';
 
 let fail = true;
 function Flaky() {
-  if (fail) throw new ApiError({ status: 503, code: 'unavailable', title: 'Service unavailable', detail: 'Try again shortly.' });
+  if (fail)
+    throw new ApiError({
+      status: 503,
+      code: 'unavailable',
+      title: 'Service unavailable',
+      detail: 'Try again shortly.',
+    });
   return <p>Panel content</p>;
 }
 

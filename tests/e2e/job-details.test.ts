@@ -70,7 +70,9 @@ describe('the job itself, from the walk-through', () => {
     await page.getByRole('button', { name: 'Save details' }).click();
     await page.getByText('Details saved.').waitFor();
     await page.screenshot({ path: `${SHOTS}/job-details-1440.png`, fullPage: true });
-    const saved = (await (await page.request.get(`/api/jobs/${jobId}`)).json()) as { job: { assignedInstaller: { name: string } | null } };
+    const saved = (await (await page.request.get(`/api/jobs/${jobId}`)).json()) as {
+      job: { assignedInstaller: { name: string } | null };
+    };
     expect(saved.job.assignedInstaller?.name).toBe(choice);
     await context.close();
   });

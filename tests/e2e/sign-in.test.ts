@@ -29,8 +29,10 @@ describe('sign in as every demo role, see the right navigation, sign out', () =>
         const nav = page.getByRole('navigation', { name: 'Main' });
         const rule = navFor[account.role];
         if (!rule) throw new Error(`no rule for ${account.role}`);
-        for (const label of rule.shows) await nav.getByRole('link', { name: label, exact: true }).waitFor({ state: 'visible' });
-        for (const label of rule.hides) expect(await nav.getByRole('link', { name: label, exact: true }).count()).toBe(0);
+        for (const label of rule.shows)
+          await nav.getByRole('link', { name: label, exact: true }).waitFor({ state: 'visible' });
+        for (const label of rule.hides)
+          expect(await nav.getByRole('link', { name: label, exact: true }).count()).toBe(0);
         await page.screenshot({ path: `${SHOTS}/home-${account.role}-${viewport.width}.png`, fullPage: true });
         await page.getByRole('button', { name: 'Sign out' }).first().click();
         await page.waitForURL((u) => u.pathname.startsWith('/sign-in'));

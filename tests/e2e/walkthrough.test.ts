@@ -13,11 +13,12 @@ afterAll(async () => e?.close());
 
 const salesperson = demoAccounts.find((a) => a.role === 'salesperson' && a.company.startsWith('Quillbrook'));
 
-const pill = (page: Page) => page.getByRole('status').filter({ hasText: /Saved|Saving|Offline|Not saved|Needs your choice/ });
+const pill = (page: Page) =>
+  page.getByRole('status').filter({ hasText: /Saved|Saving|Offline|Not saved|Needs your choice/ });
 /** "Saved" and still "Saved" a moment later: past the autosave debounce, nothing waiting. */
 async function waitSaved(page: Page): Promise<void> {
   const saved = pill(page).filter({ hasText: /^\s*Saved\s*$/ });
-  for (let stable = 0; stable < 2; ) {
+  for (let stable = 0; stable < 2;) {
     await saved.waitFor({ timeout: 20_000 });
     await page.waitForTimeout(700);
     stable = (await saved.count()) > 0 ? stable + 1 : 0;
@@ -44,7 +45,10 @@ describe('a salesperson walks a home on a phone', () => {
     const trail: string[] = [];
     const note = (line: string) => trail.push(`${String(Date.now() - t0).padStart(6)} ms ${line}`);
     page.on('request', (r) => {
-      if (r.url().includes('/rooms') && r.method() !== 'GET') note(`→ ${r.method()} …${r.url().slice(-14)} ${(r.postData() ?? '').match(/"name":"[^"]*"/)?.[0] ?? ''} If-Match ${r.headers()['if-match'] ?? '-'}`);
+      if (r.url().includes('/rooms') && r.method() !== 'GET')
+        note(
+          `→ ${r.method()} …${r.url().slice(-14)} ${(r.postData() ?? '').match(/"name":"[^"]*"/)?.[0] ?? ''} If-Match ${r.headers()['if-match'] ?? '-'}`,
+        );
     });
     page.on('response', (r) => {
       if (r.url().includes('/rooms')) note(`← ${r.status()} ${r.request().method()} …${r.url().slice(-14)}`);
@@ -57,7 +61,11 @@ describe('a salesperson walks a home on a phone', () => {
     // Customer and job
     const tag = randomUUID().slice(0, 6);
     await page.goto('/jobs');
-    await page.getByRole('link', { name: 'New job' }).or(page.getByRole('button', { name: 'New job' })).first().click();
+    await page
+      .getByRole('link', { name: 'New job' })
+      .or(page.getByRole('button', { name: 'New job' }))
+      .first()
+      .click();
     await page.getByLabel('Customer name').fill(`Wren Example-${tag}`);
     await page.getByLabel('Customer e-mail').fill(`wren-${tag}@example.com`);
     await page.getByLabel('Customer phone').fill('555-0142');
@@ -75,12 +83,18 @@ describe('a salesperson walks a home on a phone', () => {
     await page.getByLabel('Room name').fill('Front room');
     await fillNumber(page, 'Length', '20');
     await waitSaved(page);
-    const loadsPanel = page.getByText('This room’s loads').locator('xpath=ancestor::section[1]').or(page.locator('section', { hasText: 'This room’s loads' })).first();
+    const loadsPanel = page
+      .getByText('This room’s loads')
+      .locator('xpath=ancestor::section[1]')
+      .or(page.locator('section', { hasText: 'This room’s loads' }))
+      .first();
     await loadsPanel.waitFor();
     const before = await page.locator('section', { hasText: 'This room’s loads' }).last().innerText();
     await fillNumber(page, 'Length', '24');
     // live: the browser's numbers change before anything is saved
-    await expect.poll(async () => page.locator('section', { hasText: 'This room’s loads' }).last().innerText(), { timeout: 5000 }).not.toBe(before);
+    await expect
+      .poll(async () => page.locator('section', { hasText: 'This room’s loads' }).last().innerText(), { timeout: 5000 })
+      .not.toBe(before);
     await waitSaved(page);
 
     // Room 2: a bedroom with one more window on its wall
@@ -99,8 +113,12 @@ describe('a salesperson walks a home on a phone', () => {
     await waitSaved(page);
 
     // A photo for room 3, a real JPEG made here
-    const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 120, g: 160, b: 180 } } }).jpeg().toBuffer();
-    await page.locator('input[type="file"]').setInputFiles({ name: 'bedroom-west.jpg', mimeType: 'image/jpeg', buffer: jpeg });
+    const jpeg = await sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 120, g: 160, b: 180 } } })
+      .jpeg()
+      .toBuffer();
+    await page
+      .locator('input[type="file"]')
+      .setInputFiles({ name: 'bedroom-west.jpg', mimeType: 'image/jpeg', buffer: jpeg });
     await page.getByRole('img', { name: /Photo 1 of 1/ }).waitFor({ timeout: 15_000 });
     await page.screenshot({ path: `${SHOTS}/walkthrough-375.png`, fullPage: true });
 
@@ -111,9 +129,13 @@ describe('a salesperson walks a home on a phone', () => {
     await page.getByLabel('Room name').fill('Kitchen while offline');
     await fillNumber(page, 'Length', '16');
     // a photo taken with no signal waits on the phone
-    await page.locator('input[type="file"]').setInputFiles({ name: 'kitchen-offline.jpg', mimeType: 'image/jpeg', buffer: jpeg });
+    await page
+      .locator('input[type="file"]')
+      .setInputFiles({ name: 'kitchen-offline.jpg', mimeType: 'image/jpeg', buffer: jpeg });
     await page.getByText('waiting to upload').first().waitFor();
-    await pill(page).filter({ hasText: /Offline — \d+ changes? waiting/ }).waitFor({ timeout: 20_000 });
+    await pill(page)
+      .filter({ hasText: /Offline — \d+ changes? waiting/ })
+      .waitFor({ timeout: 20_000 });
     await page.screenshot({ path: `${SHOTS}/walkthrough-offline-375.png` });
     await context.setOffline(false);
     await waitSaved(page);
@@ -123,7 +145,12 @@ describe('a salesperson walks a home on a phone', () => {
     await waitSaved(page);
     const rooms = await page.request.get(`/api/jobs/${jobId}/rooms`);
     expect(rooms.status()).toBe(200);
-    const body = (await rooms.json()) as { rooms: Array<{ input: { name: string; lengthFt?: number; exposedWalls: Array<{ windows: unknown[] }> }; photos: unknown[] }> };
+    const body = (await rooms.json()) as {
+      rooms: Array<{
+        input: { name: string; lengthFt?: number; exposedWalls: Array<{ windows: unknown[] }> };
+        photos: unknown[];
+      }>;
+    };
     const byName = new Map(body.rooms.map((r) => [r.input.name, r]));
     expect([...byName.keys()].sort()).toEqual(['Bedroom east', 'Bedroom west', 'Front room', 'Kitchen while offline']);
     expect(byName.get('Front room')?.input.lengthFt).toBe(24);
@@ -144,7 +171,11 @@ describe('a salesperson walks a home on a phone', () => {
     const desk = await e.newPage(DESKTOP);
     await signIn(desk.page, salesperson.email, salesperson.password);
     await desk.page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
-    for (const [path, name] of [[`/jobs/${jobId}`, 'walkthrough'], [`/jobs/${jobId}/loads`, 'loads'], ['/jobs', 'jobs']] as const) {
+    for (const [path, name] of [
+      [`/jobs/${jobId}`, 'walkthrough'],
+      [`/jobs/${jobId}/loads`, 'loads'],
+      ['/jobs', 'jobs'],
+    ] as const) {
       await desk.page.goto(path);
       await desk.page.waitForLoadState('networkidle');
       await desk.page.screenshot({ path: `${SHOTS}/${name}-1440.png`, fullPage: true });

@@ -22,7 +22,11 @@ export interface TestCompany {
 /** A fresh company with one active user of every role; unique e-mails so test files can run in parallel. */
 export async function makeCompany(em: EntityManager, label = 'Test'): Promise<TestCompany> {
   const tag = randomUUID().slice(0, 8);
-  const company = em.create(CompanySchema, { id: randomUUID(), name: `${label} Company ${tag}`, unitSystem: 'imperial' });
+  const company = em.create(CompanySchema, {
+    id: randomUUID(),
+    name: `${label} Company ${tag}`,
+    unitSystem: 'imperial',
+  });
   const users = {} as Record<Role, { id: string; email: string; name: string }>;
   for (const role of ROLES) {
     const u = em.create(UserSchema, {

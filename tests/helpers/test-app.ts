@@ -22,7 +22,8 @@ export interface TestApp {
 
 export function testDatabaseUrl(): string {
   const url = process.env.DATABASE_URL;
-  if (!url || !url.includes('_test')) throw new Error('DATABASE_URL must point at the test database: run the suite with `npm test`.');
+  if (!url || !url.includes('_test'))
+    throw new Error('DATABASE_URL must point at the test database: run the suite with `npm test`.');
   return url;
 }
 
@@ -30,7 +31,13 @@ export function testDatabaseUrl(): string {
 export async function buildTestApp(overrides: Partial<Config> = {}, clock: Clock = systemClock): Promise<TestApp> {
   const url = testDatabaseUrl();
   const config = loadConfig(
-    { NODE_ENV: 'production', DATABASE_URL: url, SESSION_SECRET: 'test-secret-test-secret-test-secret-0123', APP_ORIGIN: 'https://gaugeline.test', LOG_LEVEL: 'silent' },
+    {
+      NODE_ENV: 'production',
+      DATABASE_URL: url,
+      SESSION_SECRET: 'test-secret-test-secret-test-secret-0123',
+      APP_ORIGIN: 'https://gaugeline.test',
+      LOG_LEVEL: 'silent',
+    },
     { DEV_OUTBOX: 'on', LOGIN_MAX_PER_IP: 1000, ...overrides },
   );
   const orm = await MikroORM.init(ormConfig(url, 5));
@@ -39,7 +46,15 @@ export async function buildTestApp(overrides: Partial<Config> = {}, clock: Clock
   const mailer = createSmtpMailer({ host: '127.0.0.1', port: smtp.port, from: config.MAIL_FROM });
   // Each test app stores uploads in its own temporary folder, never in the developer's .data/uploads.
   const storage = createLocalDiskStorage(mkdtempSync(join(tmpdir(), 'gaugeline-uploads-')));
-  const services: Services = { orm, sessionPool, config: { ...config, devOutbox: true }, mailer, storage, clock, outbox: smtp };
+  const services: Services = {
+    orm,
+    sessionPool,
+    config: { ...config, devOutbox: true },
+    mailer,
+    storage,
+    clock,
+    outbox: smtp,
+  };
   const app = createApp(services);
   return {
     app,

@@ -34,7 +34,11 @@ describe('customers', () => {
       [{ name: '' }, 'name', 'Enter the customer name.'],
       [{ name: 'x'.repeat(161) }, 'name', 'Name must be at most 160 characters.'],
       [{ name: 'Ok', email: 'not-mail' }, 'email', 'Enter a valid e-mail address.'],
-      [{ name: 'Ok', phone: 'call me' }, 'phone', 'Enter a phone number using digits, spaces, dashes, dots or brackets.'],
+      [
+        { name: 'Ok', phone: 'call me' },
+        'phone',
+        'Enter a phone number using digits, spaces, dashes, dots or brackets.',
+      ],
       [{ name: 'Ok', notes: 'n'.repeat(4001) }, 'notes', 'Notes must be at most 4000 characters.'],
       [{ name: 'Ok', companyId: b.id }, '(body)', 'Unrecognized key: "companyId"'],
     ];
@@ -46,10 +50,20 @@ describe('customers', () => {
   });
 
   it('creates, reads, lists, searches and updates within the company', async () => {
-    const c = await post(sales, '/api/customers').send({ name: 'Gwendolyn Starkweather-Ibe', email: 'Gwen@Example.com', phone: '555-0117', notes: 'Side gate' });
+    const c = await post(sales, '/api/customers').send({
+      name: 'Gwendolyn Starkweather-Ibe',
+      email: 'Gwen@Example.com',
+      phone: '555-0117',
+      notes: 'Side gate',
+    });
     expect(c.status).toBe(201);
     const id = String(c.body.customer.id);
-    expect(c.body.customer).toMatchObject({ name: 'Gwendolyn Starkweather-Ibe', email: 'gwen@example.com', phone: '555-0117', notes: 'Side gate' });
+    expect(c.body.customer).toMatchObject({
+      name: 'Gwendolyn Starkweather-Ibe',
+      email: 'gwen@example.com',
+      phone: '555-0117',
+      notes: 'Side gate',
+    });
     const row = await t.orm.em.fork().findOneOrFail(CustomerSchema, { id });
     expect(row.company.id).toBe(a.id);
 
@@ -88,7 +102,9 @@ describe('customers', () => {
     expect(await t.orm.em.fork().count(CustomerSchema, { id })).toBe(0);
 
     const job = await newJob(sales);
-    const withJob = await t.orm.em.fork().findOneOrFail((await import('../../server/src/modules/jobs/job.entity')).JobSchema, { id: job.id });
+    const withJob = await t.orm.em
+      .fork()
+      .findOneOrFail((await import('../../server/src/modules/jobs/job.entity')).JobSchema, { id: job.id });
     expectProblem(await del(owner, `/api/customers/${withJob.customer.id}`), 409);
   });
 });

@@ -26,7 +26,10 @@ afterAll(async () => t.close());
 
 const jobUrl = (id: string) => `/api/jobs/${id}`;
 const jobCount = (id: string) => t.orm.em.fork().count(JobSchema, { id });
-const jpeg = () => sharp({ create: { width: 32, height: 24, channels: 3, background: '#5a8f3c' } }).jpeg().toBuffer();
+const jpeg = () =>
+  sharp({ create: { width: 32, height: 24, channels: 3, background: '#5a8f3c' } })
+    .jpeg()
+    .toBuffer();
 
 async function addPhoto(s: Session, jobId: string, roomId: string): Promise<string> {
   const r = await post(s, `${jobUrl(jobId)}/rooms/${roomId}/photos`).attach('file', await jpeg(), 'hall.jpg');
@@ -66,7 +69,14 @@ describe('job delete: who may', () => {
 
     const em = t.orm.em.fork();
     const me = await em.findOneOrFail(UserSchema, { id: a.users.salesperson.id });
-    const second = em.create(UserSchema, { company: me.company, name: 'Second Example seller', email: `second-${mine.id.slice(0, 8)}@deletea.example.com`, role: 'salesperson', active: true, passwordHash: me.passwordHash });
+    const second = em.create(UserSchema, {
+      company: me.company,
+      name: 'Second Example seller',
+      email: `second-${mine.id.slice(0, 8)}@deletea.example.com`,
+      role: 'salesperson',
+      active: true,
+      passwordHash: me.passwordHash,
+    });
     await em.flush();
     const theirs = await newJob(owner, { salespersonId: second.id });
     const r = await del(sales, jobUrl(theirs.id), theirs.version);
@@ -100,7 +110,9 @@ describe('job delete: refused', () => {
     const pv = await moveTo(owner, proposed, 'design', 'proposed');
     const r = await del(owner, jobUrl(proposed.id), pv);
     expectProblem(r, 409);
-    expect(r.body.detail).toBe('Only a job still in walk-through or design can be deleted (this one is proposed); mark it lost instead.');
+    expect(r.body.detail).toBe(
+      'Only a job still in walk-through or design can be deleted (this one is proposed); mark it lost instead.',
+    );
     expect(r.body.currentVersion).toBeUndefined();
 
     const won = await newJob(owner);
@@ -160,7 +172,9 @@ describe('job delete: the happy path', () => {
     for (const k of keys) expect(await t.services.storage.get(k)).toBeNull();
     expect(await after.count(CustomerSchema, { id: customerId })).toBe(1);
     expectProblem(await owner.agent.get(jobUrl(job.id)), 404);
-    expect((await owner.agent.get('/api/jobs?pageSize=100')).body.items.map((j: { id: string }) => j.id)).not.toContain(job.id);
+    expect((await owner.agent.get('/api/jobs?pageSize=100')).body.items.map((j: { id: string }) => j.id)).not.toContain(
+      job.id,
+    );
 
     // The second delete finds nothing.
     expectProblem(await del(owner, jobUrl(job.id), version), 404);

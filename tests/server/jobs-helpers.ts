@@ -26,7 +26,12 @@ export function sampleRoom(name = 'Living room'): Omit<RoomInput, 'id'> {
     ceilingHeightFt: 8,
     exposedWalls: [
       { direction: 'S', lengthFt: 16, windows: [{ widthIn: 36, heightIn: 48, count: 2 }] },
-      { direction: 'W', lengthFt: 12, windows: [{ areaFt2: 12, glazing: 'double-low-e' }], doors: [{ widthIn: 36, heightIn: 80 }] },
+      {
+        direction: 'W',
+        lengthFt: 12,
+        windows: [{ areaFt2: 12, glazing: 'double-low-e' }],
+        doors: [{ widthIn: 36, heightIn: 80 }],
+      },
     ],
     above: { kind: 'attic', insulation: 'r38' },
     below: { kind: 'crawlspace', vented: true, insulation: 'r19' },

@@ -34,7 +34,14 @@ describe('jobs: access', () => {
     const est = await login(t.app, a.users.estimator.email);
     expect((await est.agent.get(`/api/jobs/${job.id}`)).status).toBe(200);
     // A salesperson may not hand a job to someone else either.
-    expectProblem(await post(sales, '/api/jobs').send({ customerId: await newCustomer(sales), ...SITE, salespersonId: a.users.estimator.id }), 403);
+    expectProblem(
+      await post(sales, '/api/jobs').send({
+        customerId: await newCustomer(sales),
+        ...SITE,
+        salespersonId: a.users.estimator.id,
+      }),
+      403,
+    );
   });
 
   it('company B gets 404 for everything of company A', async () => {
@@ -54,8 +61,13 @@ describe('jobs: access', () => {
     const job = await newJob(sales);
     const inst = await login(t.app, a.users.installer.email);
     expectProblem(await inst.agent.get(`/api/jobs/${job.id}`), 404);
-    expectProblem(await patch(sales, `/api/jobs/${job.id}`, job.version).send({ assignedInstallerId: a.users.installer.id }), 403);
-    const assigned = await patch(owner, `/api/jobs/${job.id}`, job.version).send({ assignedInstallerId: a.users.installer.id });
+    expectProblem(
+      await patch(sales, `/api/jobs/${job.id}`, job.version).send({ assignedInstallerId: a.users.installer.id }),
+      403,
+    );
+    const assigned = await patch(owner, `/api/jobs/${job.id}`, job.version).send({
+      assignedInstallerId: a.users.installer.id,
+    });
     expect(assigned.status, JSON.stringify(assigned.body)).toBe(200);
     expect(assigned.body.job.assignedInstaller).toEqual({ id: a.users.installer.id, name: a.users.installer.name });
     expect((await inst.agent.get(`/api/jobs/${job.id}`)).status).toBe(200);
@@ -74,13 +86,37 @@ describe('jobs: bad input', () => {
       [{ ...ok, street: ' ' }, 'street', 'Enter the street address.'],
       [{ ...ok, city: 'c'.repeat(101) }, 'city', 'The city or town must be at most 100 characters.'],
       [{ ...ok, postalCode: '!!' }, 'postalCode', 'Enter a postal code (letters, digits, spaces or dashes).'],
-      [{ ...ok, tightness: 'airtight' }, 'tightness', 'Tightness must be one of: very-tight, tight, average, leaky, very-leaky.'],
-      [{ ...ok, designConditions: { ...DESIGN, outdoorCoolingDryBulbF: 400 } }, 'designConditions.outdoorCoolingDryBulbF', 'Outdoor cooling dry bulb must be between 50 and 130 °F'],
-      [{ ...ok, designConditions: { ...DESIGN, outdoorCoolingWetBulbF: 99 } }, 'designConditions.outdoorCoolingWetBulbF', 'Outdoor coincident wet bulb must be between 30 and 95 °F'],
-      [{ ...ok, designConditions: { ...DESIGN, outdoorHeatingDryBulbF: '15' } }, 'designConditions.outdoorHeatingDryBulbF', 'Enter a number'],
+      [
+        { ...ok, tightness: 'airtight' },
+        'tightness',
+        'Tightness must be one of: very-tight, tight, average, leaky, very-leaky.',
+      ],
+      [
+        { ...ok, designConditions: { ...DESIGN, outdoorCoolingDryBulbF: 400 } },
+        'designConditions.outdoorCoolingDryBulbF',
+        'Outdoor cooling dry bulb must be between 50 and 130 °F',
+      ],
+      [
+        { ...ok, designConditions: { ...DESIGN, outdoorCoolingWetBulbF: 99 } },
+        'designConditions.outdoorCoolingWetBulbF',
+        'Outdoor coincident wet bulb must be between 30 and 95 °F',
+      ],
+      [
+        { ...ok, designConditions: { ...DESIGN, outdoorHeatingDryBulbF: '15' } },
+        'designConditions.outdoorHeatingDryBulbF',
+        'Enter a number',
+      ],
       [{ ...ok, designConditions: { ...DESIGN, windSpeed: 3 } }, 'designConditions', 'Unrecognized key: "windSpeed"'],
-      [{ ...ok, designConditions: { indoorCoolingF: 75 } }, 'designConditions.outdoorCoolingDryBulbF', 'Outdoor cooling dry bulb: enter a number'],
-      [{ ...ok, designSourceNotes: { outdoorCoolingDryBulbF: 'n'.repeat(201) } }, 'designSourceNotes.outdoorCoolingDryBulbF', 'A source note must be at most 200 characters'],
+      [
+        { ...ok, designConditions: { indoorCoolingF: 75 } },
+        'designConditions.outdoorCoolingDryBulbF',
+        'Outdoor cooling dry bulb: enter a number',
+      ],
+      [
+        { ...ok, designSourceNotes: { outdoorCoolingDryBulbF: 'n'.repeat(201) } },
+        'designSourceNotes.outdoorCoolingDryBulbF',
+        'A source note must be at most 200 characters',
+      ],
       [{ ...ok, status: 'won' }, '(body)', 'Unrecognized key: "status"'],
     ];
     for (const [body, path, message] of cases) {
@@ -108,21 +144,50 @@ describe('jobs: design conditions, company defaults and sources', () => {
     expect(first.body.settings).toMatchObject({ unitSystem: 'imperial', defaultDesignConditions: null, version: 0 });
     expect(first.headers.etag).toBe('"0"');
     const body = { unitSystem: 'metric', defaultDesignConditions: { ...DESIGN, source: 'County code table' } };
-    expectProblem(await s.agent.put('/api/company/settings').set('X-CSRF-Token', s.csrf).set('If-Match', '"0"').send(body), 403);
+    expectProblem(
+      await s.agent.put('/api/company/settings').set('X-CSRF-Token', s.csrf).set('If-Match', '"0"').send(body),
+      403,
+    );
     expectProblem(await o.agent.put('/api/company/settings').set('X-CSRF-Token', o.csrf).send(body), 428);
-    const bad = await o.agent.put('/api/company/settings').set('X-CSRF-Token', o.csrf).set('If-Match', '"0"').send({ ...body, defaultDesignConditions: { ...DESIGN, indoorHeatingF: 99 } });
+    const bad = await o.agent
+      .put('/api/company/settings')
+      .set('X-CSRF-Token', o.csrf)
+      .set('If-Match', '"0"')
+      .send({ ...body, defaultDesignConditions: { ...DESIGN, indoorHeatingF: 99 } });
     expectProblem(bad, 400);
-    expect(bad.body.errors).toContainEqual({ path: 'defaultDesignConditions.indoorHeatingF', message: 'Indoor heating set point must be between 50 and 85 °F' });
-    const put = await o.agent.put('/api/company/settings').set('X-CSRF-Token', o.csrf).set('If-Match', '"0"').send(body);
+    expect(bad.body.errors).toContainEqual({
+      path: 'defaultDesignConditions.indoorHeatingF',
+      message: 'Indoor heating set point must be between 50 and 85 °F',
+    });
+    const put = await o.agent
+      .put('/api/company/settings')
+      .set('X-CSRF-Token', o.csrf)
+      .set('If-Match', '"0"')
+      .send(body);
     expect(put.status, JSON.stringify(put.body)).toBe(200);
     expect(put.body.settings.version).toBe(1);
-    expectProblem(await o.agent.put('/api/company/settings').set('X-CSRF-Token', o.csrf).set('If-Match', '"0"').send(body), 409);
+    expectProblem(
+      await o.agent.put('/api/company/settings').set('X-CSRF-Token', o.csrf).set('If-Match', '"0"').send(body),
+      409,
+    );
 
     const customerId = await newCustomer(s);
-    const job = await post(s, '/api/jobs').send({ customerId, ...SITE, designConditions: { outdoorCoolingDryBulbF: 97 }, designSourceNotes: { outdoorCoolingDryBulbF: 'Site is in a heat island' } });
+    const job = await post(s, '/api/jobs').send({
+      customerId,
+      ...SITE,
+      designConditions: { outdoorCoolingDryBulbF: 97 },
+      designSourceNotes: { outdoorCoolingDryBulbF: 'Site is in a heat island' },
+    });
     expect(job.status, JSON.stringify(job.body)).toBe(201);
-    expect(job.body.job.designConditions).toMatchObject({ ...DESIGN, outdoorCoolingDryBulbF: 97, source: 'County code table' });
-    expect(job.body.job.designSources.outdoorCoolingDryBulbF).toEqual({ source: 'entered', note: 'Site is in a heat island' });
+    expect(job.body.job.designConditions).toMatchObject({
+      ...DESIGN,
+      outdoorCoolingDryBulbF: 97,
+      source: 'County code table',
+    });
+    expect(job.body.job.designSources.outdoorCoolingDryBulbF).toEqual({
+      source: 'entered',
+      note: 'Site is in a heat island',
+    });
     expect(job.body.job.designSources.outdoorHeatingDryBulbF).toEqual({ source: 'company-default', note: '' });
     const fresh = await t.orm.em.fork().findOneOrFail(JobSchema, { id: job.body.job.id });
     expect(fresh.designConditions?.outdoorCoolingDryBulbF).toBe(97);
@@ -131,7 +196,9 @@ describe('jobs: design conditions, company defaults and sources', () => {
 
   it('without company defaults, calc’s standard defaults are recorded as such', async () => {
     const { outdoorCoolingDryBulbF, outdoorCoolingWetBulbF, outdoorHeatingDryBulbF } = DESIGN;
-    const job = await newJob(sales, { designConditions: { outdoorCoolingDryBulbF, outdoorCoolingWetBulbF, outdoorHeatingDryBulbF } });
+    const job = await newJob(sales, {
+      designConditions: { outdoorCoolingDryBulbF, outdoorCoolingWetBulbF, outdoorHeatingDryBulbF },
+    });
     const r = await sales.agent.get(`/api/jobs/${job.id}`);
     expect(r.body.job.designSources.indoorCoolingF).toEqual({ source: 'standard-default', note: '' });
     expect(r.body.job.designSources.outdoorHeatingDryBulbF.source).toBe('entered');
@@ -140,13 +207,23 @@ describe('jobs: design conditions, company defaults and sources', () => {
 
   it('editing only the source notes keeps the entered values, and later value edits keep the notes', async () => {
     const job = await newJob(sales, { designConditions: { ...DESIGN, outdoorCoolingDryBulbF: 99 } });
-    const r = await patch(sales, `/api/jobs/${job.id}`, job.version).send({ designSourceNotes: { outdoorCoolingDryBulbF: 'Local code table, row 12' } });
+    const r = await patch(sales, `/api/jobs/${job.id}`, job.version).send({
+      designSourceNotes: { outdoorCoolingDryBulbF: 'Local code table, row 12' },
+    });
     expect(r.status, JSON.stringify(r.body)).toBe(200);
     expect(r.body.job.designConditions.outdoorCoolingDryBulbF).toBe(99);
-    expect(r.body.job.designSources.outdoorCoolingDryBulbF).toEqual({ source: 'entered', note: 'Local code table, row 12' });
-    const back = await patch(sales, `/api/jobs/${job.id}`, r.body.job.version).send({ designConditions: { ...DESIGN, source: 'Re-checked on site' } });
+    expect(r.body.job.designSources.outdoorCoolingDryBulbF).toEqual({
+      source: 'entered',
+      note: 'Local code table, row 12',
+    });
+    const back = await patch(sales, `/api/jobs/${job.id}`, r.body.job.version).send({
+      designConditions: { ...DESIGN, source: 'Re-checked on site' },
+    });
     expect(back.body.job.designConditions).toMatchObject({ ...DESIGN, source: 'Re-checked on site' });
-    expect(back.body.job.designSources.outdoorCoolingDryBulbF).toEqual({ source: 'entered', note: 'Local code table, row 12' });
+    expect(back.body.job.designSources.outdoorCoolingDryBulbF).toEqual({
+      source: 'entered',
+      note: 'Local code table, row 12',
+    });
   });
 });
 
@@ -156,7 +233,13 @@ describe('jobs: CRUD, states, list', () => {
     const got = await sales.agent.get(`/api/jobs/${job.id}`);
     expect(got.status).toBe(200);
     expect(got.headers.etag).toBe(`"${job.version}"`);
-    expect(got.body.job).toMatchObject({ status: 'walkthrough', notes: 'Dog in yard', salesperson: { id: a.users.salesperson.id }, site: { ...SITE, unit: '' }, version: 1 });
+    expect(got.body.job).toMatchObject({
+      status: 'walkthrough',
+      notes: 'Dog in yard',
+      salesperson: { id: a.users.salesperson.id },
+      site: { ...SITE, unit: '' },
+      version: 1,
+    });
 
     expectProblem(await patch(sales, `/api/jobs/${job.id}`).send({ notes: 'no version' }), 428);
     expectProblem(await patch(sales, `/api/jobs/${job.id}`).set('If-Match', 'one').send({ notes: 'bad' }), 400);
@@ -181,14 +264,20 @@ describe('jobs: CRUD, states, list', () => {
     const s = await login(t.app, c.users.salesperson.email);
     const ids: string[] = [];
     for (let i = 0; i < 5; i++) ids.push((await newJob(s, { street: `${i + 1} Larchwhistle Row` })).id);
-    const special = await post(s, '/api/jobs').send({ customerId: await newCustomer(s, 'Zebedee Farthingale'), ...SITE, city: 'Nethercombe' });
+    const special = await post(s, '/api/jobs').send({
+      customerId: await newCustomer(s, 'Zebedee Farthingale'),
+      ...SITE,
+      city: 'Nethercombe',
+    });
     expect(special.status).toBe(201);
     const all = await s.agent.get('/api/jobs').query({ pageSize: 4 });
     expect(all.body).toMatchObject({ total: 6, page: 1, pageSize: 4 });
     expect(all.body.items.map((j: { id: string }) => j.id)).toEqual([special.body.job.id, ...ids.slice(-3).reverse()]);
     const page2 = await s.agent.get('/api/jobs').query({ pageSize: 4, page: 2 });
     expect(page2.body.items.map((j: { id: string }) => j.id)).toEqual(ids.slice(0, 2).reverse());
-    expect((await s.agent.get('/api/jobs').query({ search: 'farthing' })).body.items.map((j: { id: string }) => j.id)).toEqual([special.body.job.id]);
+    expect(
+      (await s.agent.get('/api/jobs').query({ search: 'farthing' })).body.items.map((j: { id: string }) => j.id),
+    ).toEqual([special.body.job.id]);
     expect((await s.agent.get('/api/jobs').query({ search: 'nethercombe' })).body.total).toBe(1);
     expect((await s.agent.get('/api/jobs').query({ search: '3 Larchwhistle' })).body.total).toBe(1);
     // Activity on an older job moves it to the top.

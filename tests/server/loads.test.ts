@@ -17,8 +17,30 @@ afterAll(async () => t.close());
 
 const FIXTURE_ROOMS: Array<Omit<RoomInput, 'id'>> = [
   sampleRoom('Living room'),
-  { name: 'Kitchen', areaFt2: 140, ceilingHeightFt: 9, exposedWalls: [{ direction: 'E', lengthFt: 12, windows: [{ widthIn: 30, heightIn: 36, interiorShading: 'blinds' }] }], appliances: [{ label: 'Range', gain: 1200, latentBtuh: 400 }], occupants: 2, above: { kind: 'attic', insulation: 'r30' }, below: { kind: 'slab' } },
-  { name: 'Bedroom', lengthFt: 12, widthFt: 11, exposedWalls: [{ direction: 'N', lengthFt: 12, windows: [{ areaFt2: 15, glazing: 'single-clear' }] }, { direction: 'W', lengthFt: 11 }], occupants: 2, above: { kind: 'roof', insulation: 'r19' }, below: { kind: 'garage', insulation: 'none' } },
+  {
+    name: 'Kitchen',
+    areaFt2: 140,
+    ceilingHeightFt: 9,
+    exposedWalls: [
+      { direction: 'E', lengthFt: 12, windows: [{ widthIn: 30, heightIn: 36, interiorShading: 'blinds' }] },
+    ],
+    appliances: [{ label: 'Range', gain: 1200, latentBtuh: 400 }],
+    occupants: 2,
+    above: { kind: 'attic', insulation: 'r30' },
+    below: { kind: 'slab' },
+  },
+  {
+    name: 'Bedroom',
+    lengthFt: 12,
+    widthFt: 11,
+    exposedWalls: [
+      { direction: 'N', lengthFt: 12, windows: [{ areaFt2: 15, glazing: 'single-clear' }] },
+      { direction: 'W', lengthFt: 11 },
+    ],
+    occupants: 2,
+    above: { kind: 'roof', insulation: 'r19' },
+    below: { kind: 'garage', insulation: 'none' },
+  },
 ];
 
 describe('GET /api/jobs/:id/loads', () => {
@@ -75,6 +97,9 @@ describe('GET /api/jobs/:id/loads', () => {
     const job = await newJob(sales);
     const low = await newRoom(sales, job.id, { name: 'Crawl loft', areaFt2: 80, ceilingHeightFt: 2 });
     const r = await sales.agent.get(`/api/jobs/${job.id}/loads`);
-    expect(r.body.warnings.rooms[low.id]).toContainEqual({ path: ['ceilingHeightFt'], message: 'A 2 ft ceiling is unusually low — check the measurement.' });
+    expect(r.body.warnings.rooms[low.id]).toContainEqual({
+      path: ['ceilingHeightFt'],
+      message: 'A 2 ft ceiling is unusually low — check the measurement.',
+    });
   });
 });

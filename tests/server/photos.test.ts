@@ -28,7 +28,13 @@ const url = () => `/api/jobs/${job.id}/rooms/${room.id}/photos`;
 const image = (width = 64, height = 48) => sharp({ create: { width, height, channels: 3, background: '#3a7ca5' } });
 /** A JPEG carrying camera EXIF with a GPS position, as a phone writes it. */
 const withGps = () =>
-  image().withExif({ IFD0: { Make: 'Testcam', Orientation: '1' }, IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 0/1' } }).jpeg().toBuffer();
+  image()
+    .withExif({
+      IFD0: { Make: 'Testcam', Orientation: '1' },
+      IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '51/1 30/1 0/1', GPSLongitudeRef: 'W', GPSLongitude: '0/1 7/1 0/1' },
+    })
+    .jpeg()
+    .toBuffer();
 const upload = (s: Session, bytes: Buffer, filename = 'kitchen.jpg', contentType = 'image/jpeg') =>
   post(s, url()).attach('file', bytes, { filename, contentType });
 
@@ -51,13 +57,21 @@ describe('photos: bad uploads', () => {
   it('a renamed non-image is refused by content (415), whatever its name and declared type', async () => {
     const r = await upload(sales, Buffer.from('#!/bin/sh\necho not a photo\n'.repeat(20)), 'photo.jpg', 'image/jpeg');
     expectProblem(r, 415);
-    expect(r.body.detail).toBe('This file is not a JPEG, PNG or WebP photo (its content was checked, not its name). Upload a photo in one of those formats.');
+    expect(r.body.detail).toBe(
+      'This file is not a JPEG, PNG or WebP photo (its content was checked, not its name). Upload a photo in one of those formats.',
+    );
     const pdf = await upload(sales, Buffer.from('%PDF-1.7\n%âãÏÓ\n1 0 obj\n<<>>\nendobj\n'), 'room.png', 'image/png');
     expectProblem(pdf, 415);
   });
 
   it('HEIC is refused with a clear message (this sharp build cannot decode it)', async () => {
-    const heic = Buffer.concat([Buffer.from([0, 0, 0, 0x18]), Buffer.from('ftypheic'), Buffer.from([0, 0, 0, 0]), Buffer.from('mif1heic'), Buffer.alloc(64)]);
+    const heic = Buffer.concat([
+      Buffer.from([0, 0, 0, 0x18]),
+      Buffer.from('ftypheic'),
+      Buffer.from([0, 0, 0, 0]),
+      Buffer.from('mif1heic'),
+      Buffer.alloc(64),
+    ]);
     const r = await upload(sales, heic, 'IMG_0001.HEIC', 'image/heic');
     expectProblem(r, 415);
     expect(r.body.detail).toMatch(/HEIC photos are not accepted yet/);
@@ -79,7 +93,10 @@ describe('photos: bad uploads', () => {
     expectProblem(await post(sales, url()).attach('photo', jpg, 'a.jpg'), 400);
     expectProblem(await post(sales, url()).attach('file', jpg, 'a.jpg').attach('file', jpg, 'b.jpg'), 400);
     expectProblem(await post(sales, url()).send({ file: 'x' }), 400);
-    expectProblem(await post(sales, url()).set('Content-Type', 'multipart/form-data; boundary=zz').send('--zz\r\nbroken'), 400);
+    expectProblem(
+      await post(sales, url()).set('Content-Type', 'multipart/form-data; boundary=zz').send('--zz\r\nbroken'),
+      400,
+    );
   });
 
   it('a path-traversal file name is harmless: the key is a uuid, the name is only shown, sanitised', async () => {
@@ -102,13 +119,22 @@ describe('photos: happy path', () => {
     const r = await upload(sales, src, 'living room.jpg');
     expect(r.status, JSON.stringify(r.body)).toBe(201);
     const id = String(r.body.photo.id);
-    expect(r.body.photo).toMatchObject({ contentType: 'image/jpeg', width: 64, height: 48, originalName: 'living room.jpg', url: `${url()}/${id}` });
-
-    const got = await sales.agent.get(`${url()}/${id}`).buffer(true).parse((res, cb) => {
-      const parts: Buffer[] = [];
-      res.on('data', (c: Buffer) => parts.push(c));
-      res.on('end', () => cb(null, Buffer.concat(parts)));
+    expect(r.body.photo).toMatchObject({
+      contentType: 'image/jpeg',
+      width: 64,
+      height: 48,
+      originalName: 'living room.jpg',
+      url: `${url()}/${id}`,
     });
+
+    const got = await sales.agent
+      .get(`${url()}/${id}`)
+      .buffer(true)
+      .parse((res, cb) => {
+        const parts: Buffer[] = [];
+        res.on('data', (c: Buffer) => parts.push(c));
+        res.on('end', () => cb(null, Buffer.concat(parts)));
+      });
     expect(got.status).toBe(200);
     expect(got.headers['content-type']).toBe('image/jpeg');
     expect(got.headers['x-content-type-options']).toBe('nosniff');
@@ -132,13 +158,19 @@ describe('photos: happy path', () => {
     const sideways = await image(40, 20).jpeg().withMetadata({ orientation: 6 }).toBuffer();
     const r = await upload(sales, sideways, 'side.jpg');
     expect([r.body.photo.width, r.body.photo.height]).toEqual([20, 40]);
-    expect((await upload(sales, await image().png().toBuffer(), 'a.png', 'image/png')).body.photo.contentType).toBe('image/jpeg');
+    expect((await upload(sales, await image().png().toBuffer(), 'a.png', 'image/png')).body.photo.contentType).toBe(
+      'image/jpeg',
+    );
     expect((await upload(sales, await image().webp().toBuffer(), 'a.webp', 'image/webp')).status).toBe(201);
   });
 
   it('deleting the room removes its photos and their files', async () => {
     const r2 = await newRoom(sales, job.id);
-    const up = await post(sales, `/api/jobs/${job.id}/rooms/${r2.id}/photos`).attach('file', await image().jpeg().toBuffer(), 'x.jpg');
+    const up = await post(sales, `/api/jobs/${job.id}/rooms/${r2.id}/photos`).attach(
+      'file',
+      await image().jpeg().toBuffer(),
+      'x.jpg',
+    );
     const row = await t.orm.em.fork().findOneOrFail(PhotoSchema, { id: up.body.photo.id });
     await patch(sales, `/api/jobs/${job.id}/rooms/${r2.id}`, r2.version).send({ position: 9 });
     expect((await del(sales, `/api/jobs/${job.id}/rooms/${r2.id}`, r2.version + 1)).status).toBe(204);

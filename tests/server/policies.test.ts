@@ -28,7 +28,10 @@ describe('deny by default', () => {
   });
 
   it('the Express router holds no API route outside the registry', () => {
-    interface Layer { route?: { path: string; methods: Record<string, boolean> }; handle?: { stack?: Layer[] } }
+    interface Layer {
+      route?: { path: string; methods: Record<string, boolean> };
+      handle?: { stack?: Layer[] };
+    }
     const root = (t.app as unknown as { router: { stack: Layer[] } }).router.stack;
     const registered = new Set(routeRegistry.map((r) => `${r.method} ${r.path.replace(/^\/api\/[^/]+/, '')}`));
     const inner = root.flatMap((l) => l.handle?.stack ?? []).filter((l) => l.route);
@@ -36,7 +39,10 @@ describe('deny by default', () => {
     for (const l of inner) {
       for (const m of Object.keys(l.route?.methods ?? {})) {
         const key = `${m} ${l.route?.path}`;
-        expect([...registered].some((r) => r === key), key).toBe(true);
+        expect(
+          [...registered].some((r) => r === key),
+          key,
+        ).toBe(true);
       }
     }
   });

@@ -5,10 +5,16 @@ import { toAppError } from '../../server/src/lib/problem';
 
 describe('toAppError maps what libraries throw onto the problem vocabulary', () => {
   it('a calc error becomes 422 "calc" with its constant message and field paths', () => {
-    const e = toAppError(new CalcError('INVALID_INPUT', [{ path: ['rooms', 0, 'lengthFt'], message: 'Length must be between 1 and 200 ft' }]));
+    const e = toAppError(
+      new CalcError('INVALID_INPUT', [
+        { path: ['rooms', 0, 'lengthFt'], message: 'Length must be between 1 and 200 ft' },
+      ]),
+    );
     expect(e?.status).toBe(422);
     expect(e?.code).toBe('calc');
-    expect(e?.extra).toEqual({ errors: [{ path: 'rooms.0.lengthFt', message: 'Length must be between 1 and 200 ft' }] });
+    expect(e?.extra).toEqual({
+      errors: [{ path: 'rooms.0.lengthFt', message: 'Length must be between 1 and 200 ft' }],
+    });
   });
 
   it('a zod error becomes 400 with each field', () => {

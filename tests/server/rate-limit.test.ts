@@ -14,7 +14,8 @@ describe('sign-in rate limit', () => {
   it('answers 429 with Retry-After after too many failures for one account, even with the right password', async () => {
     const agent = browserAgent(t.app).set('X-Forwarded-For', '203.0.113.10');
     const csrf = await csrfOf(agent);
-    const attempt = (password: string) => agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: a.users.owner.email, password });
+    const attempt = (password: string) =>
+      agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: a.users.owner.email, password });
     for (let i = 0; i < 3; i++) expect((await attempt('wrong-password-guess')).status).toBe(401);
     const blocked = await attempt(TEST_PASSWORD);
     expect(blocked.status).toBe(429);
@@ -28,7 +29,10 @@ describe('sign-in rate limit', () => {
     const csrf = await csrfOf(agent);
     const statuses: number[] = [];
     for (let i = 0; i < 10; i++) {
-      const r = await agent.post('/api/auth/login').set('X-CSRF-Token', csrf).send({ email: `spray-${i}@limit.example.com`, password: 'wrong-password-guess' });
+      const r = await agent
+        .post('/api/auth/login')
+        .set('X-CSRF-Token', csrf)
+        .send({ email: `spray-${i}@limit.example.com`, password: 'wrong-password-guess' });
       statuses.push(r.status);
     }
     expect(statuses).toContain(429);

@@ -40,7 +40,14 @@ describe('rooms: access', () => {
     const em = t.orm.em.fork();
     const { UserSchema } = await import('../../server/src/modules/users/user.entity');
     const me = await em.findOneOrFail(UserSchema, { id: a.users.salesperson.id });
-    const second = em.create(UserSchema, { company: me.company, name: 'Second seller', email: `second-${room.id.slice(0, 8)}@roomsa.example.com`, role: 'salesperson', active: true, passwordHash: me.passwordHash });
+    const second = em.create(UserSchema, {
+      company: me.company,
+      name: 'Second seller',
+      email: `second-${room.id.slice(0, 8)}@roomsa.example.com`,
+      role: 'salesperson',
+      active: true,
+      passwordHash: me.passwordHash,
+    });
     await em.flush();
     const s2 = await login(t.app, second.email);
     expectProblem(await s2.agent.get(rooms(job.id)), 404);
@@ -56,11 +63,23 @@ describe('rooms: bad input', () => {
     const cases: Array<[object, string, string]> = [
       [{ input: { ...sampleRoom(), lengthFt: 0 } }, 'input.lengthFt', 'Length must be between 1 and 200 ft'],
       [{ input: { ...sampleRoom(), lengthFt: 10_000 } }, 'input.lengthFt', 'Length must be between 1 and 200 ft'],
-      [{ input: { ...sampleRoom(), ceilingHeightFt: 'tall' } }, 'input.ceilingHeightFt', 'Ceiling height: enter a number'],
+      [
+        { input: { ...sampleRoom(), ceilingHeightFt: 'tall' } },
+        'input.ceilingHeightFt',
+        'Ceiling height: enter a number',
+      ],
       [{ input: { ...sampleRoom(), name: '' } }, 'input.name', 'Enter a room name'],
       [{ input: { name: 'Hall' } }, 'input.lengthFt', 'Enter the length and width, or the floor area'],
-      [{ input: { ...sampleRoom(), exposedWalls: [wall] } }, 'input.exposedWalls.0.windows.0.areaFt2', 'The windows (400 ft²) are larger than the wall (80 ft²)'],
-      [{ input: { ...sampleRoom(), exposedWalls: [{ ...wall, direction: 'UP', windows: [] }] } }, 'input.exposedWalls.0.direction', 'Choose a direction: N, NE, E, SE, S, SW, W or NW'],
+      [
+        { input: { ...sampleRoom(), exposedWalls: [wall] } },
+        'input.exposedWalls.0.windows.0.areaFt2',
+        'The windows (400 ft²) are larger than the wall (80 ft²)',
+      ],
+      [
+        { input: { ...sampleRoom(), exposedWalls: [{ ...wall, direction: 'UP', windows: [] }] } },
+        'input.exposedWalls.0.direction',
+        'Choose a direction: N, NE, E, SE, S, SW, W or NW',
+      ],
       [{ input: { ...sampleRoom(), colour: 'teal' } }, 'input', 'Unrecognized key: "colour"'],
       [{ input: sampleRoom(), position: -1 }, 'position', 'Position must be between 0 and 10000.'],
       [{ input: sampleRoom(), jobId: job.id }, '(body)', 'Unrecognized key: "jobId"'],
@@ -82,7 +101,13 @@ describe('rooms: CRUD and the lock', () => {
     expect(first.status).toBe(201);
     expect(first.headers.etag).toBe('"1"');
     const id = String(first.body.room.id);
-    expect(first.body.room).toMatchObject({ jobId: j.id, position: 0, version: 1, input: { id, name: 'Kitchen', floorLevel: 1, notes: '' }, photos: [] });
+    expect(first.body.room).toMatchObject({
+      jobId: j.id,
+      position: 0,
+      version: 1,
+      input: { id, name: 'Kitchen', floorLevel: 1, notes: '' },
+      photos: [],
+    });
     const second = await newRoom(sales, j.id, { ...sampleRoom('Bedroom'), areaFt2: 130 });
     const list = await sales.agent.get(rooms(j.id));
     expect(list.body.rooms.map((r: { id: string }) => r.id)).toEqual([id, second.id]);
@@ -90,10 +115,15 @@ describe('rooms: CRUD and the lock', () => {
     expect(row.input.exposedWalls[0]?.windows[0]?.count).toBe(2);
 
     expectProblem(await patch(sales, `${rooms(j.id)}/${id}`).send({ position: 5 }), 428);
-    const up = await patch(sales, `${rooms(j.id)}/${id}`, 1).send({ input: { ...sampleRoom('Kitchen'), occupants: 5 }, position: 2 });
+    const up = await patch(sales, `${rooms(j.id)}/${id}`, 1).send({
+      input: { ...sampleRoom('Kitchen'), occupants: 5 },
+      position: 2,
+    });
     expect(up.status, JSON.stringify(up.body)).toBe(200);
     expect(up.body.room).toMatchObject({ version: 2, position: 2, input: { id, occupants: 5 } });
-    const stale = await patch(sales, `${rooms(j.id)}/${id}`, 1).send({ input: { ...sampleRoom('Kitchen'), occupants: 1 } });
+    const stale = await patch(sales, `${rooms(j.id)}/${id}`, 1).send({
+      input: { ...sampleRoom('Kitchen'), occupants: 1 },
+    });
     expectProblem(stale, 409);
     expect(stale.body).toMatchObject({ currentVersion: 2, current: { id, input: { occupants: 5 } } });
     expect((await t.orm.em.fork().findOneOrFail(RoomSchema, { id })).input.occupants).toBe(5);

@@ -15,7 +15,12 @@ beforeAll(async () => {
 });
 afterAll(async () => t.close());
 
-const newUser = (tag: string) => ({ name: `New ${tag}`, email: `new-${tag}-${Date.now()}@users.example.com`, role: 'installer', password: 'a-long-new-password' });
+const newUser = (tag: string) => ({
+  name: `New ${tag}`,
+  email: `new-${tag}-${Date.now()}@users.example.com`,
+  role: 'installer',
+  password: 'a-long-new-password',
+});
 
 describe('user administration', () => {
   it('is refused when signed out (401)', async () => {
@@ -40,7 +45,11 @@ describe('user administration', () => {
     const r = await s.agent.get('/api/users');
     expect(r.status).toBe(200);
     const ids = r.body.users.map((u: { id: string }) => u.id).sort();
-    expect(ids).toEqual(Object.values(a.users).map((u) => u.id).sort());
+    expect(ids).toEqual(
+      Object.values(a.users)
+        .map((u) => u.id)
+        .sort(),
+    );
     expect(JSON.stringify(r.body)).not.toMatch(/passwordHash|argon2/);
   });
 
@@ -50,7 +59,10 @@ describe('user administration', () => {
     expect(read.status).toBe(404);
     expect(isProblem(read)).toBe(true);
     expect(JSON.stringify(read.body)).not.toContain(a.users.estimator.email);
-    const write = await s.agent.patch(`/api/users/${a.users.estimator.id}`).set('X-CSRF-Token', s.csrf).send({ role: 'owner' });
+    const write = await s.agent
+      .patch(`/api/users/${a.users.estimator.id}`)
+      .set('X-CSRF-Token', s.csrf)
+      .send({ role: 'owner' });
     expect(write.status).toBe(404);
     const fresh = await t.orm.em.fork().findOneOrFail(UserSchema, { id: a.users.estimator.id });
     expect(fresh.role).toBe('estimator');
@@ -58,7 +70,10 @@ describe('user administration', () => {
 
   it('ignores a tenant id smuggled into the body (strict schema → 400)', async () => {
     const s = await login(t.app, a.users.owner.email);
-    const r = await s.agent.post('/api/users').set('X-CSRF-Token', s.csrf).send({ ...newUser('smuggle'), companyId: b.id });
+    const r = await s.agent
+      .post('/api/users')
+      .set('X-CSRF-Token', s.csrf)
+      .send({ ...newUser('smuggle'), companyId: b.id });
     expect(r.status).toBe(400);
     expect(r.body.errors[0].message).toMatch(/Unrecognized key/i);
   });
@@ -85,7 +100,9 @@ describe('user administration', () => {
     const r = await s.agent.post('/api/users').set('X-CSRF-Token', s.csrf).send(body);
     expect(r.status).toBe(201);
     expect(r.body.user).toMatchObject({ email: body.email, role: 'installer', companyId: a.id });
-    const stored = await t.orm.em.fork().findOneOrFail(UserSchema, { email: body.email }, { populate: ['passwordHash'] });
+    const stored = await t.orm.em
+      .fork()
+      .findOneOrFail(UserSchema, { email: body.email }, { populate: ['passwordHash'] });
     // OWASP Password Storage Cheat Sheet: argon2id m=19456 (19 MiB), t=2, p=1
     expect(stored.passwordHash).toMatch(/^\$argon2id\$v=19\$m=19456,t=2,p=1\$/);
     const mail = await t.smtp.waitFor(body.email);
@@ -97,10 +114,16 @@ describe('user administration', () => {
 
   it('changes a role, and refuses to remove the last owner', async () => {
     const s = await login(t.app, a.users.owner.email);
-    const r = await s.agent.patch(`/api/users/${a.users.installer.id}`).set('X-CSRF-Token', s.csrf).send({ role: 'estimator' });
+    const r = await s.agent
+      .patch(`/api/users/${a.users.installer.id}`)
+      .set('X-CSRF-Token', s.csrf)
+      .send({ role: 'estimator' });
     expect(r.status).toBe(200);
     expect(r.body.user.role).toBe('estimator');
-    const self = await s.agent.patch(`/api/users/${a.users.owner.id}`).set('X-CSRF-Token', s.csrf).send({ active: false });
+    const self = await s.agent
+      .patch(`/api/users/${a.users.owner.id}`)
+      .set('X-CSRF-Token', s.csrf)
+      .send({ active: false });
     expect(self.status).toBe(422);
     await s.agent.patch(`/api/users/${a.users.installer.id}`).set('X-CSRF-Token', s.csrf).send({ role: 'installer' });
   });
@@ -110,11 +133,17 @@ describe('user administration', () => {
     const sessions = await Promise.all([1, 2, 3].map(() => login(t.app, c.users.salesperson.email)));
     for (const x of sessions) expect((await x.agent.get('/api/auth/me')).status).toBe(200);
     const owner = await login(t.app, c.users.owner.email);
-    const r = await owner.agent.patch(`/api/users/${c.users.salesperson.id}`).set('X-CSRF-Token', owner.csrf).send({ active: false });
+    const r = await owner.agent
+      .patch(`/api/users/${c.users.salesperson.id}`)
+      .set('X-CSRF-Token', owner.csrf)
+      .send({ active: false });
     expect(r.status).toBe(200);
     for (const x of sessions) expect((await x.agent.get('/api/auth/me')).status).toBe(401);
     const again = await browserAgent(t.app).get('/api/auth/csrf');
-    const relogin = await browserAgent(t.app).post('/api/auth/login').set('X-CSRF-Token', again.body.token).send({ email: c.users.salesperson.email, password: TEST_PASSWORD });
+    const relogin = await browserAgent(t.app)
+      .post('/api/auth/login')
+      .set('X-CSRF-Token', again.body.token)
+      .send({ email: c.users.salesperson.email, password: TEST_PASSWORD });
     expect(relogin.status).toBe(403); // different agent: no session for that token, so CSRF refuses first
   });
 });

@@ -8,7 +8,15 @@ const RANKINE = 459.67;
  * volume, P₂ = (P₁ + 14.696) × T₂/T₁ − 14.696 with absolute °R. [PUB: ideal-gas law;
  * reference check 9.3] No rounding.
  */
-export function nitrogenTestPsigAt({ psig, fromF, toF }: { readonly psig: number; readonly fromF: number; readonly toF: number }): number {
+export function nitrogenTestPsigAt({
+  psig,
+  fromF,
+  toF,
+}: {
+  readonly psig: number;
+  readonly fromF: number;
+  readonly toF: number;
+}): number {
   const p1 = num(psig) + STANDARD_ATM_PSIA;
   const t1 = num(fromF) + RANKINE;
   const t2 = num(toF) + RANKINE;
@@ -22,10 +30,17 @@ export function nitrogenTestPsigAt({ psig, fromF, toF }: { readonly psig: number
  * `held` when after isolation it stayed ≤ the allowed rise, `pass` when both. [PUB:
  * UL-derived instructions — 500 microns, ≤ 1,500 after 10 min; TRADE: 1,000-micron policy]
  */
-export function evacuationVerdict(
-  { reachedMicrons, afterHoldMicrons, targetMicrons, maxRiseToMicrons }:
-  { readonly reachedMicrons: number; readonly afterHoldMicrons: number; readonly targetMicrons: number; readonly maxRiseToMicrons: number },
-): { reached: boolean; held: boolean; pass: boolean } {
+export function evacuationVerdict({
+  reachedMicrons,
+  afterHoldMicrons,
+  targetMicrons,
+  maxRiseToMicrons,
+}: {
+  readonly reachedMicrons: number;
+  readonly afterHoldMicrons: number;
+  readonly targetMicrons: number;
+  readonly maxRiseToMicrons: number;
+}): { reached: boolean; held: boolean; pass: boolean } {
   const reached = num(reachedMicrons, 'nonNegative') <= num(targetMicrons, 'nonNegative');
   const held = num(afterHoldMicrons, 'nonNegative') <= num(maxRiseToMicrons, 'nonNegative');
   return { reached, held, pass: reached && held };

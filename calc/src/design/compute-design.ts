@@ -4,11 +4,24 @@ import { m2FromFt2 } from '../units';
 import { homeLoadFromParsed, type HomeLoad } from '../loads/home-load';
 import { parseOrThrow } from '../parse';
 import { priceLines, priceOption, type OptionPrice, type PricedLine } from '../pricing/price';
-import { priceBookSchema, pricingSchema, type PriceBook, type PriceBookInput, type Pricing, type PricingInput } from '../pricing/schemas';
+import {
+  priceBookSchema,
+  pricingSchema,
+  type PriceBook,
+  type PriceBookInput,
+  type Pricing,
+  type PricingInput,
+} from '../pricing/schemas';
 import { CAUTIONS } from '../refrigerant/cautions';
 import { refrigerantPlan, type RefrigerantPlan } from '../refrigerant/circuits';
 import { designSchema, type Design, type DesignInput } from '../schemas/design';
-import { equipmentCatalogSchema, type EquipmentCatalog, type EquipmentCatalogInput, type IndoorUnit, type OutdoorUnit } from '../schemas/equipment';
+import {
+  equipmentCatalogSchema,
+  type EquipmentCatalog,
+  type EquipmentCatalogInput,
+  type IndoorUnit,
+  type OutdoorUnit,
+} from '../schemas/equipment';
 import { homeInputSchema, type Home, type HomeInput } from '../schemas/home';
 import { checkCombination, checkSizing, type CombinationCheck, type SizingCheck } from '../sizing/match';
 import { DEFAULT_SIZING_POLICY, sizingPolicySchema, type SizingPolicy } from '../sizing/policy';
@@ -53,7 +66,12 @@ export interface DesignRequest {
   readonly policy?: SizingPolicy;
 }
 
-function lookup<T>(map: ReadonlyMap<string, T>, k: string, code: 'UNKNOWN_EQUIPMENT' | 'UNKNOWN_ROOM' | 'UNKNOWN_ZONE', path: (string | number)[]): T {
+function lookup<T>(
+  map: ReadonlyMap<string, T>,
+  k: string,
+  code: 'UNKNOWN_EQUIPMENT' | 'UNKNOWN_ROOM' | 'UNKNOWN_ZONE',
+  path: (string | number)[],
+): T {
   const v = map.get(k);
   if (v === undefined) throw new CalcError(code, [{ path, message: `"${k}" was not found` }]);
   return v;
@@ -97,7 +115,14 @@ export interface ParsedDesignRequest {
  * outputs (the client re-runs this on every keystroke after its form parsed the change).
  * Still throws UNKNOWN_* for dangling references.
  */
-export function computeDesignFromParsed({ home, design, catalog, priceBook, pricing, policy }: ParsedDesignRequest): DesignResult {
+export function computeDesignFromParsed({
+  home,
+  design,
+  catalog,
+  priceBook,
+  pricing,
+  policy,
+}: ParsedDesignRequest): DesignResult {
   const loads = homeLoadFromParsed(home);
   const dc = home.designConditions;
   const indoorUnits = byKey(catalog.indoorUnits, (u) => u.key);
@@ -120,8 +145,12 @@ export function computeDesignFromParsed({ home, design, catalog, priceBook, pric
     const outdoor = systemOfZone.get(z.key);
     if (!outdoor) warnings.push(`Zone ${z.name} is not connected to any outdoor unit.`);
     const sizing = checkSizing({
-      unit: indoor, equipmentType: outdoor?.equipmentType ?? 'heat-pump-variable-speed', load,
-      coolingDesignF: dc.outdoorCoolingDryBulbF, heatingDesignF: dc.outdoorHeatingDryBulbF, policy,
+      unit: indoor,
+      equipmentType: outdoor?.equipmentType ?? 'heat-pump-variable-speed',
+      load,
+      coolingDesignF: dc.outdoorCoolingDryBulbF,
+      heatingDesignF: dc.outdoorHeatingDryBulbF,
+      policy,
     });
     return { zoneKey: z.key, name: z.name, roomIds: z.roomIds, indoorUnitKey: indoor.key, sizing };
   });
@@ -140,23 +169,56 @@ export function computeDesignFromParsed({ home, design, catalog, priceBook, pric
       sum.heatingBtuh += load.heatingBtuh;
       return { circuit: c, indoor, roomAreaM2: m2FromFt2({ ft2: load.headRoomAreaFt2 }) };
     });
-    const sizing = checkSizing({ unit: outdoor, equipmentType: outdoor.equipmentType, load: sum, coolingDesignF: dc.outdoorCoolingDryBulbF, heatingDesignF: dc.outdoorHeatingDryBulbF, policy });
+    const sizing = checkSizing({
+      unit: outdoor,
+      equipmentType: outdoor.equipmentType,
+      load: sum,
+      coolingDesignF: dc.outdoorCoolingDryBulbF,
+      heatingDesignF: dc.outdoorHeatingDryBulbF,
+      policy,
+    });
     const combination = checkCombination({ outdoor, indoor: circuits.map((c) => c.indoor) });
     const refrigerant = refrigerantPlan({ outdoor, circuits });
     const electrical = electricalPlan({ mcaA: outdoor.mcaA, mocpA: outdoor.mocpA, input: s.electrical });
     forTakeoff.push({ system: s, outdoor, indoorByZone, refrigerant, electrical });
-    return { systemKey: s.key, name: s.name, outdoorUnitKey: outdoor.key, sizing, combination, refrigerant, electrical };
+    return {
+      systemKey: s.key,
+      name: s.name,
+      outdoorUnitKey: outdoor.key,
+      sizing,
+      combination,
+      refrigerant,
+      electrical,
+    };
   });
   const priced = priceLines({ lines: buildTakeoff({ systems: forTakeoff }), priceBook });
   const anyA2l = systems.some((s) => s.refrigerant.safetyClass === 'A2L');
   return {
-    loads, zones, systems, takeoff: priced.lines, price: priceOption({ lines: priced.lines, pricing }),
+    loads,
+    zones,
+    systems,
+    takeoff: priced.lines,
+    price: priceOption({ lines: priced.lines, pricing }),
     warnings: [
-      ...warnings, ...zones.flatMap((z) => z.sizing.warnings),
-      ...systems.flatMap((s) => [...s.sizing.warnings, ...s.combination.warnings, ...s.refrigerant.warnings, ...s.electrical.warnings]),
+      ...warnings,
+      ...zones.flatMap((z) => z.sizing.warnings),
+      ...systems.flatMap((s) => [
+        ...s.sizing.warnings,
+        ...s.combination.warnings,
+        ...s.refrigerant.warnings,
+        ...s.electrical.warnings,
+      ]),
       ...priced.warnings,
     ],
-    cautions: [CAUTIONS.estimate, CAUTIONS.makerAndCode, CAUTIONS.refrigerant, ...(anyA2l ? [CAUTIONS.a2l] : []), CAUTIONS.pressureTest, CAUTIONS.electrical, CAUTIONS.homeowner],
+    cautions: [
+      CAUTIONS.estimate,
+      CAUTIONS.makerAndCode,
+      CAUTIONS.refrigerant,
+      ...(anyA2l ? [CAUTIONS.a2l] : []),
+      CAUTIONS.pressureTest,
+      CAUTIONS.electrical,
+      CAUTIONS.homeowner,
+    ],
     isEstimate: true,
   };
 }

@@ -15,9 +15,20 @@ export interface OptionRequest {
  * Up to three (or more) options side by side: each option's full design result, and a
  * comparison row with its total and its difference from the first option, cents.
  */
-export function computeOptions(
-  { options, ...shared }: Omit<DesignRequest, 'design' | 'pricing'> & { readonly options: readonly OptionRequest[] },
-): { results: { key: string; name: string; result: DesignResult }[]; comparison: ReturnType<typeof compareOptions> } {
-  const results = options.map((o) => ({ key: o.key, name: o.name, result: computeDesign({ ...shared, design: o.design, pricing: o.pricing }) }));
-  return { results, comparison: compareOptions({ options: results.map((r) => ({ key: r.key, name: r.name, price: r.result.price })) }) };
+export function computeOptions({
+  options,
+  ...shared
+}: Omit<DesignRequest, 'design' | 'pricing'> & { readonly options: readonly OptionRequest[] }): {
+  results: { key: string; name: string; result: DesignResult }[];
+  comparison: ReturnType<typeof compareOptions>;
+} {
+  const results = options.map((o) => ({
+    key: o.key,
+    name: o.name,
+    result: computeDesign({ ...shared, design: o.design, pricing: o.pricing }),
+  }));
+  return {
+    results,
+    comparison: compareOptions({ options: results.map((r) => ({ key: r.key, name: r.name, price: r.result.price })) }),
+  };
 }

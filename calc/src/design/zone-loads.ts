@@ -12,9 +12,15 @@ export interface ZoneLoad extends LoadToMeet {
 }
 
 /** Sums room loads per zone. Throws UNKNOWN_ROOM (with the field path) for a room id not in the home. */
-export function zoneLoads(
-  { loads, zones, roomsById }: { readonly loads: HomeLoad; readonly zones: readonly Zone[]; readonly roomsById: ReadonlyMap<string, Room> },
-): Map<string, ZoneLoad> {
+export function zoneLoads({
+  loads,
+  zones,
+  roomsById,
+}: {
+  readonly loads: HomeLoad;
+  readonly zones: readonly Zone[];
+  readonly roomsById: ReadonlyMap<string, Room>;
+}): Map<string, ZoneLoad> {
   const byRoom = new Map<string, RoomLoad>();
   for (const r of loads.rooms) byRoom.set(r.roomId, r);
   const out = new Map<string, ZoneLoad>();
@@ -27,7 +33,10 @@ export function zoneLoads(
     for (let ri = 0; ri < z.roomIds.length; ri += 1) {
       const id = z.roomIds[ri] ?? '';
       const r = byRoom.get(id);
-      if (!r) throw new CalcError('UNKNOWN_ROOM', [{ path: ['zones', zi, 'roomIds', ri], message: `Room "${id}" is not in the home` }]);
+      if (!r)
+        throw new CalcError('UNKNOWN_ROOM', [
+          { path: ['zones', zi, 'roomIds', ri], message: `Room "${id}" is not in the home` },
+        ]);
       sensibleBtuh += r.sensibleGain.total;
       latentBtuh += r.latentGain.total;
       heatingBtuh += r.heatLoss.total;

@@ -19,7 +19,9 @@ export const NEC_310_16_COPPER: readonly AmpacityRow[] = [
 ];
 
 /** Standard overcurrent-device ratings up to 200 A. [MEM: NEC 240.6(A)] */
-export const STANDARD_BREAKERS_A: readonly number[] = [15, 20, 25, 30, 35, 40, 45, 50, 60, 70, 80, 90, 100, 110, 125, 150, 175, 200];
+export const STANDARD_BREAKERS_A: readonly number[] = [
+  15, 20, 25, 30, 35, 40, 45, 50, 60, 70, 80, 90, 100, 110, 125, 150, 175, 200,
+];
 
 function column(terminationC: unknown): 'c60' | 'c75' {
   assert(terminationC === 60 || terminationC === 75, 'UNKNOWN_TERMINATION');
@@ -27,7 +29,13 @@ function column(terminationC: unknown): 'c60' | 'c75' {
 }
 
 /** Ampacity of a copper AWG size in the 60 or 75 °C column, A. [PUB: NEC Table 310.16] */
-export function copperAmpacityA({ awg, terminationC }: { readonly awg: number; readonly terminationC: 60 | 75 }): number {
+export function copperAmpacityA({
+  awg,
+  terminationC,
+}: {
+  readonly awg: number;
+  readonly terminationC: 60 | 75;
+}): number {
   const row = NEC_310_16_COPPER.find((r) => r.awg === awg);
   if (!row) throw new CalcError('AMPACITY_ABOVE_TABLE');
   return row[column(terminationC)];
@@ -38,7 +46,13 @@ export function copperAmpacityA({ awg, terminationC }: { readonly awg: number; r
  * least `ampacityA`. [PUB: NEC Table 310.16; MEM: 110.14(C) termination limit] Throws
  * AMPACITY_ABOVE_TABLE above 4 AWG.
  */
-export function copperWireAwg({ ampacityA, terminationC }: { readonly ampacityA: number; readonly terminationC: 60 | 75 }): number {
+export function copperWireAwg({
+  ampacityA,
+  terminationC,
+}: {
+  readonly ampacityA: number;
+  readonly terminationC: 60 | 75;
+}): number {
   const need = num(ampacityA, 'nonNegative');
   const col = column(terminationC);
   const row = NEC_310_16_COPPER.find((r) => r[col] >= need);
@@ -71,7 +85,13 @@ export function breakerSizeA({ mcaA, mocpA }: { readonly mcaA: number; readonly 
 }
 
 /** MCA, A = 1.25 × largest motor RLA + Σ other loads. [PUB: UL 1995 method in a packaged-unit manual] No rounding. */
-export function mcaFromNameplateA({ largestRlaA, otherLoadsA = 0 }: { readonly largestRlaA: number; readonly otherLoadsA?: number }): number {
+export function mcaFromNameplateA({
+  largestRlaA,
+  otherLoadsA = 0,
+}: {
+  readonly largestRlaA: number;
+  readonly otherLoadsA?: number;
+}): number {
   return 1.25 * num(largestRlaA, 'nonNegative') + num(otherLoadsA, 'nonNegative');
 }
 
@@ -79,7 +99,13 @@ export function mcaFromNameplateA({ largestRlaA, otherLoadsA = 0 }: { readonly l
  * MOCP, A = 2.25 × largest RLA + Σ others, rounded DOWN to a standard rating but not below
  * MCA (then the next standard rating up). [PUB: UL 1995 §36 method; MEM: rounding rule]
  */
-export function mocpFromNameplateA({ largestRlaA, otherLoadsA = 0 }: { readonly largestRlaA: number; readonly otherLoadsA?: number }): number {
+export function mocpFromNameplateA({
+  largestRlaA,
+  otherLoadsA = 0,
+}: {
+  readonly largestRlaA: number;
+  readonly otherLoadsA?: number;
+}): number {
   const raw = 2.25 * num(largestRlaA, 'nonNegative') + num(otherLoadsA, 'nonNegative');
   const mca = mcaFromNameplateA({ largestRlaA, otherLoadsA });
   const down = STANDARD_BREAKERS_A.filter((a) => a <= raw + 1e-9).pop();
@@ -90,6 +116,12 @@ export function mocpFromNameplateA({ largestRlaA, otherLoadsA = 0 }: { readonly 
 }
 
 /** Disconnect "within sight": visible and ≤ 50 ft. [PUB: NEC 440.14; NEC Art. 100 "within sight"] */
-export function disconnectWithinSight({ distanceFt, visible }: { readonly distanceFt: number; readonly visible: boolean }): boolean {
+export function disconnectWithinSight({
+  distanceFt,
+  visible,
+}: {
+  readonly distanceFt: number;
+  readonly visible: boolean;
+}): boolean {
   return visible === true && num(distanceFt, 'nonNegative') <= 50;
 }

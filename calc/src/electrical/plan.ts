@@ -23,7 +23,15 @@ export interface ElectricalPlan {
  * termination rating picks the column [MEM: NEC 110.14(C)]. Never throws for out-of-table
  * values: it returns nulls with a plain-word warning.
  */
-export function electricalPlan({ mcaA, mocpA, input }: { readonly mcaA: number; readonly mocpA: number; readonly input: ElectricalInput }): ElectricalPlan {
+export function electricalPlan({
+  mcaA,
+  mocpA,
+  input,
+}: {
+  readonly mcaA: number;
+  readonly mocpA: number;
+  readonly input: ElectricalInput;
+}): ElectricalPlan {
   const warnings: string[] = [];
   const column: 60 | 75 = input.wiringMethod === 'thhn-conduit' ? input.terminationC : 60;
   let wireAwg: number | null = null;
@@ -38,11 +46,22 @@ export function electricalPlan({ mcaA, mocpA, input }: { readonly mcaA: number; 
     breakerA = breakerSizeA({ mcaA, mocpA });
   } catch (e) {
     if (!(e instanceof CalcError)) throw e;
-    warnings.push(`No standard breaker fits between the MCA (${mcaA} A) and the MOCP (${mocpA} A): check the nameplate.`);
+    warnings.push(
+      `No standard breaker fits between the MCA (${mcaA} A) and the MOCP (${mocpA} A): check the nameplate.`,
+    );
   }
-  const withinSight = disconnectWithinSight({ distanceFt: input.disconnectDistanceFt, visible: input.disconnectVisible });
-  if (!withinSight) warnings.push('The disconnect must be within sight of the outdoor unit: visible from it and no more than 50 ft away (NEC 440.14).');
-  if (input.circuitLengthFt > 100) warnings.push(`The circuit runs ${input.circuitLengthFt} ft: the electrician should check voltage drop and may need a larger wire.`);
+  const withinSight = disconnectWithinSight({
+    distanceFt: input.disconnectDistanceFt,
+    visible: input.disconnectVisible,
+  });
+  if (!withinSight)
+    warnings.push(
+      'The disconnect must be within sight of the outdoor unit: visible from it and no more than 50 ft away (NEC 440.14).',
+    );
+  if (input.circuitLengthFt > 100)
+    warnings.push(
+      `The circuit runs ${input.circuitLengthFt} ft: the electrician should check voltage drop and may need a larger wire.`,
+    );
   return {
     mcaA,
     mocpA,

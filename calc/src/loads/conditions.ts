@@ -1,7 +1,12 @@
 import type { DesignConditions } from '../schemas/design-conditions';
 import {
-  altitudeFactor, dewPointF, grainsFromHumidityRatio, humidityRatioFromRh, humidityRatioFromWetBulb,
-  moistAirEnthalpyBtuPerLb, standardPressurePsia,
+  altitudeFactor,
+  dewPointF,
+  grainsFromHumidityRatio,
+  humidityRatioFromRh,
+  humidityRatioFromWetBulb,
+  moistAirEnthalpyBtuPerLb,
+  standardPressurePsia,
 } from '../psychrometrics';
 import { GRAINS_PER_LB } from '../units';
 
@@ -37,9 +42,14 @@ export interface DesignPsychrometrics {
 export function designPsychrometrics(c: DesignConditions): DesignPsychrometrics {
   const pressurePsia = standardPressurePsia({ elevationFt: c.elevationFt });
   const indoorW = humidityRatioFromRh({ dryBulbF: c.indoorCoolingF, rh: c.indoorCoolingRhPercent / 100, pressurePsia });
-  const outdoorW = c.outdoorCoolingGrains !== undefined
-    ? c.outdoorCoolingGrains / GRAINS_PER_LB
-    : humidityRatioFromWetBulb({ dryBulbF: c.outdoorCoolingDryBulbF, wetBulbF: c.outdoorCoolingWetBulbF ?? c.outdoorCoolingDryBulbF, pressurePsia });
+  const outdoorW =
+    c.outdoorCoolingGrains !== undefined
+      ? c.outdoorCoolingGrains / GRAINS_PER_LB
+      : humidityRatioFromWetBulb({
+          dryBulbF: c.outdoorCoolingDryBulbF,
+          wetBulbF: c.outdoorCoolingWetBulbF ?? c.outdoorCoolingDryBulbF,
+          pressurePsia,
+        });
   const indoorGrains = grainsFromHumidityRatio({ humidityRatio: indoorW });
   const outdoorGrains = grainsFromHumidityRatio({ humidityRatio: outdoorW });
   return {

@@ -1,7 +1,14 @@
 import { slabEdgeBtuh } from '../conduction';
 import {
-  ADJACENT_SPACE, CEILING_INSULATION, DOOR_TYPES, FLOOR_INSULATION, GLAZING_TYPES, INTERIOR_SHADING_IAC,
-  PEAK_IRRADIANCE_BTUH_FT2, SLAB_EDGE, WALL_CONSTRUCTIONS,
+  ADJACENT_SPACE,
+  CEILING_INSULATION,
+  DOOR_TYPES,
+  FLOOR_INSULATION,
+  GLAZING_TYPES,
+  INTERIOR_SHADING_IAC,
+  PEAK_IRRADIANCE_BTUH_FT2,
+  SLAB_EDGE,
+  WALL_CONSTRUCTIONS,
 } from '../construction-defaults';
 import { doorAreaFt2, floorAreaFt2, wallGrossAreaFt2, windowAreaFt2 } from '../geometry';
 import type { Room } from '../schemas/room-input';
@@ -38,7 +45,17 @@ export function windowProperties(w: Window): { u: number; shgc: number } {
  * Solar gain through glass, Btu/h = A × SHGC × peak irradiance(facing) × IAC.
  * [PUB: SHGC definition; irradiance factors are a documented simplification, MEM/TRADE]
  */
-export function solarGainBtuh({ areaFt2, shgc, irradiance, iac }: { areaFt2: number; shgc: number; irradiance: number; iac: number }): number {
+export function solarGainBtuh({
+  areaFt2,
+  shgc,
+  irradiance,
+  iac,
+}: {
+  areaFt2: number;
+  shgc: number;
+  irradiance: number;
+  iac: number;
+}): number {
   return areaFt2 * shgc * irradiance * iac;
 }
 
@@ -61,7 +78,13 @@ export interface ExposedWallsLoad {
  */
 export function exposedWallsLoad(room: Room, p: DesignPsychrometrics): ExposedWallsLoad {
   const glassDt = glassCoolingDeltaTF(p);
-  let wallsCooling = 0, wallsHeating = 0, glassCooling = 0, glassHeating = 0, solar = 0, doorsCooling = 0, doorsHeating = 0;
+  let wallsCooling = 0,
+    wallsHeating = 0,
+    glassCooling = 0,
+    glassHeating = 0,
+    solar = 0,
+    doorsCooling = 0,
+    doorsHeating = 0;
   for (const wall of room.exposedWalls) {
     let windowsArea = 0;
     const irradiance = PEAK_IRRADIANCE_BTUH_FT2[wall.direction];
@@ -132,7 +155,8 @@ export function doorsLoad(room: Room, p: DesignPsychrometrics): CoolHeat {
 export function ceilingLoad(room: Room, p: DesignPsychrometrics): CoolHeat {
   if (room.above.kind === 'conditioned') return { cooling: 0, heating: 0 };
   const u = CEILING_INSULATION[room.above.insulation].value;
-  const adder = room.above.kind === 'attic' ? ADJACENT_SPACE.atticCoolingAdderF.value : ADJACENT_SPACE.roofCoolingAdderF.value;
+  const adder =
+    room.above.kind === 'attic' ? ADJACENT_SPACE.atticCoolingAdderF.value : ADJACENT_SPACE.roofCoolingAdderF.value;
   const area = floorAreaFt2(room);
   return {
     cooling: pos(uaDt(u, area, p.coolingDeltaTF + adder)),
@@ -149,9 +173,14 @@ export function floorLoad(room: Room, p: DesignPsychrometrics): CoolHeat {
     const perimeterFt = room.exposedWalls.reduce((sum, w) => sum + w.lengthFt, 0);
     return { cooling: 0, heating: slabEdgeBtuh({ fFactor: f, perimeterFt, deltaTF: p.heatingDeltaTF }) };
   }
-  const fractions = below.kind === 'garage' ? ADJACENT_SPACE.garage.value
-    : below.kind === 'basement' ? ADJACENT_SPACE.basement.value
-      : below.vented ? ADJACENT_SPACE.crawlspaceVented.value : ADJACENT_SPACE.crawlspaceClosed.value;
+  const fractions =
+    below.kind === 'garage'
+      ? ADJACENT_SPACE.garage.value
+      : below.kind === 'basement'
+        ? ADJACENT_SPACE.basement.value
+        : below.vented
+          ? ADJACENT_SPACE.crawlspaceVented.value
+          : ADJACENT_SPACE.crawlspaceClosed.value;
   const u = FLOOR_INSULATION[below.insulation].value;
   const area = floorAreaFt2(room);
   return {

@@ -38,16 +38,36 @@ export interface HomeLoad {
 
 /** Adds room component sets key by key (integers, so the home total equals the sum of rooms). */
 function sumComponents(sets: readonly LoadComponents[]): LoadComponents {
-  let walls = 0, windowsConduction = 0, windowsSolar = 0, doors = 0, ceiling = 0, floor = 0, infiltration = 0, people = 0, appliances = 0, total = 0;
+  let walls = 0,
+    windowsConduction = 0,
+    windowsSolar = 0,
+    doors = 0,
+    ceiling = 0,
+    floor = 0,
+    infiltration = 0,
+    people = 0,
+    appliances = 0,
+    total = 0;
   for (const c of sets) {
-    walls += c.walls; windowsConduction += c.windowsConduction; windowsSolar += c.windowsSolar; doors += c.doors; ceiling += c.ceiling;
-    floor += c.floor; infiltration += c.infiltration; people += c.people; appliances += c.appliances; total += c.total;
+    walls += c.walls;
+    windowsConduction += c.windowsConduction;
+    windowsSolar += c.windowsSolar;
+    doors += c.doors;
+    ceiling += c.ceiling;
+    floor += c.floor;
+    infiltration += c.infiltration;
+    people += c.people;
+    appliances += c.appliances;
+    total += c.total;
   }
   return { walls, windowsConduction, windowsSolar, doors, ceiling, floor, infiltration, people, appliances, total };
 }
 
 /** Whole-home loads from a parsed home (engine path; no validation). */
-export function homeLoadFromParsed(home: Home, psy: DesignPsychrometrics = designPsychrometrics(home.designConditions)): HomeLoad {
+export function homeLoadFromParsed(
+  home: Home,
+  psy: DesignPsychrometrics = designPsychrometrics(home.designConditions),
+): HomeLoad {
   const ach = INFILTRATION_TIGHTNESS[home.tightness].value;
   const rooms = home.rooms.map((r) => roomLoadFromParsed(r, psy, ach));
   const sensibleGain = sumComponents(rooms.map((r) => r.sensibleGain));
@@ -66,7 +86,10 @@ export function homeLoadFromParsed(home: Home, psy: DesignPsychrometrics = desig
       heatingBtuh: heatLoss.total,
       sensibleHeatRatio: cooling > 0 ? roundHalfUp(sensibleGain.total / cooling, 3) : 1,
       coolingTons: roundHalfUp(cooling / BTUH_PER_TON, 2),
-      floorAreaFt2: roundHalfUp(rooms.reduce((s, r) => s + r.floorAreaFt2, 0), 1),
+      floorAreaFt2: roundHalfUp(
+        rooms.reduce((s, r) => s + r.floorAreaFt2, 0),
+        1,
+      ),
     },
     psychrometrics: {
       pressurePsia: roundHalfUp(psy.pressurePsia, 3),

@@ -26,7 +26,15 @@ export interface LoadComponents {
 
 export type ComponentKey = Exclude<keyof LoadComponents, 'total'>;
 export const COMPONENT_KEYS: readonly ComponentKey[] = [
-  'walls', 'windowsConduction', 'windowsSolar', 'doors', 'ceiling', 'floor', 'infiltration', 'people', 'appliances',
+  'walls',
+  'windowsConduction',
+  'windowsSolar',
+  'doors',
+  'ceiling',
+  'floor',
+  'infiltration',
+  'people',
+  'appliances',
 ];
 
 /** One room's estimated loads. */
@@ -71,16 +79,37 @@ export function roomLoadFromParsed(room: Room, p: DesignPsychrometrics, homeAch:
   const appliances = appliancesLoad(room);
   const area = floorAreaFt2(room);
   const sensibleGain = toComponents({
-    walls: walls.cooling, windowsConduction: glass.cooling, windowsSolar, doors: doors.cooling,
-    ceiling: ceiling.cooling, floor: floor.cooling, infiltration: air.sensibleCooling, people: people.sensible, appliances: appliances.sensible,
+    walls: walls.cooling,
+    windowsConduction: glass.cooling,
+    windowsSolar,
+    doors: doors.cooling,
+    ceiling: ceiling.cooling,
+    floor: floor.cooling,
+    infiltration: air.sensibleCooling,
+    people: people.sensible,
+    appliances: appliances.sensible,
   });
   const latentGain = toComponents({
-    walls: 0, windowsConduction: 0, windowsSolar: 0, doors: 0, ceiling: 0, floor: 0,
-    infiltration: air.latentCooling, people: people.latent, appliances: appliances.latent,
+    walls: 0,
+    windowsConduction: 0,
+    windowsSolar: 0,
+    doors: 0,
+    ceiling: 0,
+    floor: 0,
+    infiltration: air.latentCooling,
+    people: people.latent,
+    appliances: appliances.latent,
   });
   const heatLoss = toComponents({
-    walls: walls.heating, windowsConduction: glass.heating, windowsSolar: 0, doors: doors.heating,
-    ceiling: ceiling.heating, floor: floor.heating, infiltration: air.heating, people: 0, appliances: 0,
+    walls: walls.heating,
+    windowsConduction: glass.heating,
+    windowsSolar: 0,
+    doors: doors.heating,
+    ceiling: ceiling.heating,
+    floor: floor.heating,
+    infiltration: air.heating,
+    people: 0,
+    appliances: 0,
   });
   return {
     roomId: room.id,
@@ -102,9 +131,15 @@ export function roomLoadFromParsed(room: Room, p: DesignPsychrometrics, homeAch:
  * Validates the room and conditions (throws CalcError INVALID_INPUT with field details).
  * Method: see METHOD_NOTES. Each component rounded half-up to 1 Btu/h.
  */
-export function roomLoad(
-  { room, designConditions, tightness = 'average' }: { readonly room: RoomInput; readonly designConditions: DesignConditionsInput; readonly tightness?: Tightness },
-): RoomLoad {
+export function roomLoad({
+  room,
+  designConditions,
+  tightness = 'average',
+}: {
+  readonly room: RoomInput;
+  readonly designConditions: DesignConditionsInput;
+  readonly tightness?: Tightness;
+}): RoomLoad {
   const r = parseOrThrow(roomInputSchema, room);
   const c = parseOrThrow(designConditionsSchema, designConditions);
   const t = parseOrThrow(tightnessSchema, tightness);

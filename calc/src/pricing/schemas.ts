@@ -5,7 +5,10 @@ const cents = (label: string) => boundedInt(label, 0, 100_000_000, 'cents');
 
 /** The company's price book: cost per item key, labor rate per hour. All cents. */
 export const priceBookSchema = z.object({
-  items: z.record(keyField('Item key'), z.object({ unitCostCents: cents('Unit cost'), description: nameField('Description', 120).optional() })),
+  items: z.record(
+    keyField('Item key'),
+    z.object({ unitCostCents: cents('Unit cost'), description: nameField('Description', 120).optional() }),
+  ),
   laborRateCents: cents('Labor rate'),
 });
 
@@ -24,15 +27,26 @@ export const pricingSchema = z
     discounts: z.array(discountSchema).max(10, 'At most 10 discounts').default([]),
     taxRatePercent: bounded('Tax rate', 0, 20, '%').default(0),
     taxOn: z.enum(['materials', 'total', 'none'], { error: 'Choose what is taxed' }).default('materials'),
-    deposit: z.object({ kind: z.enum(['percent', 'amount']), value: bounded('Deposit', 0, 100_000_000) }).default({ kind: 'percent', value: 0 }),
-    financing: z.object({ aprPercent: bounded('APR', 0, 40, '%'), months: boundedInt('Term', 1, 240, 'months') }).optional(),
+    deposit: z
+      .object({ kind: z.enum(['percent', 'amount']), value: bounded('Deposit', 0, 100_000_000) })
+      .default({ kind: 'percent', value: 0 }),
+    financing: z
+      .object({ aprPercent: bounded('APR', 0, 40, '%'), months: boundedInt('Term', 1, 240, 'months') })
+      .optional(),
   })
   .superRefine((p, ctx) => {
-    if (p.method === 'margin' && p.percent >= 100) ctx.addIssue({ code: 'custom', path: ['percent'], message: 'Margin must be below 100 %' });
+    if (p.method === 'margin' && p.percent >= 100)
+      ctx.addIssue({ code: 'custom', path: ['percent'], message: 'Margin must be below 100 %' });
     for (const [i, d] of p.discounts.entries()) {
-      if (d.kind === 'percent' && d.value > 100) ctx.addIssue({ code: 'custom', path: ['discounts', i, 'value'], message: 'A percent discount must be between 0 and 100 %' });
+      if (d.kind === 'percent' && d.value > 100)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['discounts', i, 'value'],
+          message: 'A percent discount must be between 0 and 100 %',
+        });
     }
-    if (p.deposit.kind === 'percent' && p.deposit.value > 100) ctx.addIssue({ code: 'custom', path: ['deposit', 'value'], message: 'Deposit must be between 0 and 100 %' });
+    if (p.deposit.kind === 'percent' && p.deposit.value > 100)
+      ctx.addIssue({ code: 'custom', path: ['deposit', 'value'], message: 'Deposit must be between 0 and 100 %' });
   });
 
 export type PriceBook = z.output<typeof priceBookSchema>;

@@ -22,17 +22,29 @@ export function a2lM1Kg({ lflKgPerM3 }: { readonly lflKgPerM3: number }): number
  * Maximum charge for a room, kg = 2.5 × LFL^(5/4) × h0 × √A (h0 ≥ 0.6 m).
  * [PUB: IEC 60335-2-40:2018 Annex GG, reproduced in equipment manuals] No rounding.
  */
-export function a2lMaxChargeKg(
-  { lflKgPerM3, h0M, roomAreaM2 }: { readonly lflKgPerM3: number; readonly h0M: number; readonly roomAreaM2: number },
-): number {
+export function a2lMaxChargeKg({
+  lflKgPerM3,
+  h0M,
+  roomAreaM2,
+}: {
+  readonly lflKgPerM3: number;
+  readonly h0M: number;
+  readonly roomAreaM2: number;
+}): number {
   const h0 = Math.max(0.6, num(h0M, 'nonNegative'));
   return 2.5 * num(lflKgPerM3, 'positive') ** 1.25 * h0 * Math.sqrt(num(roomAreaM2, 'nonNegative'));
 }
 
 /** Minimum room area, m² = (M / (2.5 × LFL^(5/4) × h0))². [PUB: IEC 60335-2-40:2018 Annex GG] No rounding. */
-export function a2lMinRoomAreaM2(
-  { chargeKg, lflKgPerM3, h0M }: { readonly chargeKg: number; readonly lflKgPerM3: number; readonly h0M: number },
-): number {
+export function a2lMinRoomAreaM2({
+  chargeKg,
+  lflKgPerM3,
+  h0M,
+}: {
+  readonly chargeKg: number;
+  readonly lflKgPerM3: number;
+  readonly h0M: number;
+}): number {
   const h0 = Math.max(0.6, num(h0M, 'nonNegative'));
   return (num(chargeKg, 'nonNegative') / (2.5 * num(lflKgPerM3, 'positive') ** 1.25 * h0)) ** 2;
 }

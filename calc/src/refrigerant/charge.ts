@@ -6,9 +6,13 @@ import { tubeVolumeIn3PerFt } from './tube';
  * Refrigerant held by a liquid-full line, oz/ft = π/4·ID² × 12 ÷ 1728 × ρ(lb/ft³) × 16.
  * [PUB: ASTM B280 IDs; densities from published EOS (reference §8)] No rounding.
  */
-export function liquidLineChargeOzPerFt(
-  { odIn, liquidDensityLbPerFt3 }: { readonly odIn: number; readonly liquidDensityLbPerFt3: number },
-): number {
+export function liquidLineChargeOzPerFt({
+  odIn,
+  liquidDensityLbPerFt3,
+}: {
+  readonly odIn: number;
+  readonly liquidDensityLbPerFt3: number;
+}): number {
   return (tubeVolumeIn3PerFt({ odIn }) / 1728) * num(liquidDensityLbPerFt3, 'positive') * OZ_PER_LB;
 }
 
@@ -17,9 +21,15 @@ export function liquidLineChargeOzPerFt(
  * Never negative: no charge is removed for a short run ("no removal" policy). [TRADE;
  * reference §8 formula] No rounding.
  */
-export function extraChargeOz(
-  { lengthFt, prechargedLengthFt, ozPerFt }: { readonly lengthFt: number; readonly prechargedLengthFt: number; readonly ozPerFt: number },
-): number {
+export function extraChargeOz({
+  lengthFt,
+  prechargedLengthFt,
+  ozPerFt,
+}: {
+  readonly lengthFt: number;
+  readonly prechargedLengthFt: number;
+  readonly ozPerFt: number;
+}): number {
   const beyond = num(lengthFt, 'nonNegative') - num(prechargedLengthFt, 'nonNegative');
   return Math.max(0, beyond) * num(ozPerFt, 'nonNegative');
 }

@@ -21,13 +21,25 @@ export const designConditionsSchema = z
   })
   .superRefine((d, ctx) => {
     if (d.outdoorCoolingWetBulbF === undefined && d.outdoorCoolingGrains === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['outdoorCoolingWetBulbF'], message: 'Enter the coincident wet bulb or the outdoor humidity in grains' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['outdoorCoolingWetBulbF'],
+        message: 'Enter the coincident wet bulb or the outdoor humidity in grains',
+      });
     }
     if (d.outdoorCoolingWetBulbF !== undefined && d.outdoorCoolingWetBulbF > d.outdoorCoolingDryBulbF) {
-      ctx.addIssue({ code: 'custom', path: ['outdoorCoolingWetBulbF'], message: 'Wet bulb cannot be above the dry bulb' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['outdoorCoolingWetBulbF'],
+        message: 'Wet bulb cannot be above the dry bulb',
+      });
     }
     if (d.outdoorHeatingDryBulbF >= d.indoorHeatingF) {
-      ctx.addIssue({ code: 'custom', path: ['outdoorHeatingDryBulbF'], message: 'Outdoor heating design temperature must be below the indoor heating set point' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['outdoorHeatingDryBulbF'],
+        message: 'Outdoor heating design temperature must be below the indoor heating set point',
+      });
     }
   });
 

@@ -6,7 +6,10 @@ import { tubeOdSchema } from './equipment';
 export const zoneSchema = z.object({
   key: keyField('Zone key'),
   name: nameField('Zone name'),
-  roomIds: z.array(keyField('Room id')).min(1, 'Choose at least one room for the zone').max(50, 'At most 50 rooms per zone'),
+  roomIds: z
+    .array(keyField('Room id'))
+    .min(1, 'Choose at least one room for the zone')
+    .max(50, 'At most 50 rooms per zone'),
   indoorUnitKey: keyField('Indoor unit'),
 });
 
@@ -25,7 +28,9 @@ export const circuitSchema = z.object({
 
 /** The branch circuit feeding an outdoor unit. */
 export const electricalInputSchema = z.object({
-  terminationC: z.union([z.literal(60), z.literal(75)], { error: 'Termination rating must be 60 or 75 °C' }).default(60),
+  terminationC: z
+    .union([z.literal(60), z.literal(75)], { error: 'Termination rating must be 60 or 75 °C' })
+    .default(60),
   wiringMethod: z.enum(['nm-b', 'thhn-conduit', 'uf-b'], { error: 'Choose a wiring method' }).default('nm-b'),
   circuitLengthFt: bounded('Circuit length', 1, 300, 'ft'),
   disconnectDistanceFt: bounded('Disconnect distance', 0, 500, 'ft').default(5),

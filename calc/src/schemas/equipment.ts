@@ -8,17 +8,37 @@ export const capacityPointSchema = z.object({
 });
 
 const capacityCurve = (label: string) =>
-  z.array(capacityPointSchema).min(1, `Enter at least one ${label} capacity point`).max(20, `At most 20 ${label} capacity points`);
+  z
+    .array(capacityPointSchema)
+    .min(1, `Enter at least one ${label} capacity point`)
+    .max(20, `At most 20 ${label} capacity points`);
 
 /** Equipment types that carry a sizing policy. */
 export const equipmentTypeSchema = z.enum(
-  ['ac-single-speed', 'ac-two-stage', 'ac-variable-speed', 'heat-pump-single-speed', 'heat-pump-two-stage', 'heat-pump-variable-speed'],
+  [
+    'ac-single-speed',
+    'ac-two-stage',
+    'ac-variable-speed',
+    'heat-pump-single-speed',
+    'heat-pump-two-stage',
+    'heat-pump-variable-speed',
+  ],
   { error: 'Choose an equipment type' },
 );
 export const refrigerantSchema = z.enum(['R-410A', 'R-32', 'R-454B'], { error: 'Choose a refrigerant' });
-export const indoorUnitTypeSchema = z.enum(['wall-head', 'ceiling-cassette', 'floor-console', 'ducted-air-handler'], { error: 'Choose an indoor unit type' });
+export const indoorUnitTypeSchema = z.enum(['wall-head', 'ceiling-cassette', 'floor-console', 'ducted-air-handler'], {
+  error: 'Choose an indoor unit type',
+});
 export const tubeOdSchema = z.union(
-  [z.literal(0.25), z.literal(0.3125), z.literal(0.375), z.literal(0.5), z.literal(0.625), z.literal(0.75), z.literal(0.875)],
+  [
+    z.literal(0.25),
+    z.literal(0.3125),
+    z.literal(0.375),
+    z.literal(0.5),
+    z.literal(0.625),
+    z.literal(0.75),
+    z.literal(0.875),
+  ],
   { error: 'Choose a tube size: 1/4, 5/16, 3/8, 1/2, 5/8, 3/4 or 7/8 in' },
 );
 
@@ -47,7 +67,10 @@ export const outdoorUnitSchema = z.object({
   heating: capacityCurve('heating').optional(),
   maxHeads: boundedInt('Maximum indoor units', 1, 8).default(1),
   connectedRatioPercent: z
-    .object({ min: bounded('Minimum connected capacity', 10, 100, '%'), max: bounded('Maximum connected capacity', 100, 200, '%') })
+    .object({
+      min: bounded('Minimum connected capacity', 10, 100, '%'),
+      max: bounded('Maximum connected capacity', 100, 200, '%'),
+    })
     .default({ min: 50, max: 130 }),
   factoryChargeOz: bounded('Factory charge', 0, 1000, 'oz'),
   prechargedLengthFt: bounded('Pre-charged length', 0, 200, 'ft'),

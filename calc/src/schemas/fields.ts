@@ -9,7 +9,10 @@ import { z } from 'zod';
 export function bounded(label: string, min: number, max: number, unit = '') {
   const suffix = unit ? ` ${unit}` : '';
   const message = `${label} must be between ${min} and ${max}${suffix}`;
-  return z.number({ error: `${label}: enter a number` }).min(min, message).max(max, message);
+  return z
+    .number({ error: `${label}: enter a number` })
+    .min(min, message)
+    .max(max, message);
 }
 
 /** A whole number between `min` and `max`. */
@@ -19,7 +22,11 @@ export function boundedInt(label: string, min: number, max: number, unit = '') {
 
 /** A short required name. */
 export function nameField(label: string, max = 80) {
-  return z.string({ error: `${label}: enter text` }).trim().min(1, `Enter a ${label.toLowerCase()}`).max(max, `${label} must be at most ${max} characters`);
+  return z
+    .string({ error: `${label}: enter text` })
+    .trim()
+    .min(1, `Enter a ${label.toLowerCase()}`)
+    .max(max, `${label} must be at most ${max} characters`);
 }
 
 /** A stable key (letters, digits, dashes, underscores, dots, slashes, colons). */

@@ -4,7 +4,9 @@ import { designConditionsSchema } from './design-conditions';
 import { roomInputSchema } from './room-input';
 
 /** Envelope tightness keys of the construction defaults. */
-export const tightnessSchema = z.enum(['very-tight', 'tight', 'average', 'leaky', 'very-leaky'], { error: 'Choose how tight the house is' });
+export const tightnessSchema = z.enum(['very-tight', 'tight', 'average', 'leaky', 'very-leaky'], {
+  error: 'Choose how tight the house is',
+});
 
 /** A home: its design conditions, its tightness and its rooms (unique ids). */
 export const homeInputSchema = z
@@ -18,7 +20,8 @@ export const homeInputSchema = z
   .superRefine((home, ctx) => {
     const seen = new Set<string>();
     home.rooms.forEach((room, i) => {
-      if (seen.has(room.id)) ctx.addIssue({ code: 'custom', path: ['rooms', i, 'id'], message: 'Each room needs its own id' });
+      if (seen.has(room.id))
+        ctx.addIssue({ code: 'custom', path: ['rooms', i, 'id'], message: 'Each room needs its own id' });
       seen.add(room.id);
     });
   });

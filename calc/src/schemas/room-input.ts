@@ -35,7 +35,10 @@ export const roomInputSchema = z
       const windows = wallWindowAreaFt2(wall);
       const openings = windows + wallDoorAreaFt2(wall);
       if (windows > gross) {
-        const largest = wall.windows.reduce((best, w, i, all) => (windowAreaFt2(w) > windowAreaFt2(all[best] ?? w) ? i : best), 0);
+        const largest = wall.windows.reduce(
+          (best, w, i, all) => (windowAreaFt2(w) > windowAreaFt2(all[best] ?? w) ? i : best),
+          0,
+        );
         ctx.addIssue({
           code: 'custom',
           path: ['exposedWalls', wi, 'windows', largest, 'areaFt2'],

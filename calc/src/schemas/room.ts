@@ -2,16 +2,22 @@ import { z } from 'zod';
 import { bounded, boundedInt, compassDirectionSchema, nameField } from './fields';
 
 /** Interior shading of a window. */
-export const interiorShadingSchema = z.enum(['none', 'blinds', 'drapes', 'shades'], { error: 'Choose the interior shading' });
+export const interiorShadingSchema = z.enum(['none', 'blinds', 'drapes', 'shades'], {
+  error: 'Choose the interior shading',
+});
 /** Glazing type keys of the construction defaults. */
-export const glazingTypeSchema = z.enum(['single-clear', 'double-clear', 'double-low-e', 'triple-low-e'], { error: 'Choose a glazing type' });
+export const glazingTypeSchema = z.enum(['single-clear', 'double-clear', 'double-low-e', 'triple-low-e'], {
+  error: 'Choose a glazing type',
+});
 /** Wall construction keys of the construction defaults. */
 export const wallConstructionSchema = z.enum(
   ['wood-2x4-r13', 'wood-2x6-r19', 'wood-2x4-uninsulated', 'masonry-uninsulated', 'masonry-r10-furred'],
   { error: 'Choose a wall construction' },
 );
 export const doorTypeSchema = z.enum(['wood-solid', 'insulated-steel', 'fiberglass'], { error: 'Choose a door type' });
-export const ceilingInsulationSchema = z.enum(['none', 'r11', 'r19', 'r30', 'r38', 'r49', 'r60'], { error: 'Choose an insulation level' });
+export const ceilingInsulationSchema = z.enum(['none', 'r11', 'r19', 'r30', 'r38', 'r49', 'r60'], {
+  error: 'Choose an insulation level',
+});
 export const floorInsulationSchema = z.enum(['none', 'r13', 'r19', 'r30'], { error: 'Choose an insulation level' });
 
 /** A window (or a group of `count` equal windows): width × height in inches, or an area in ft². */
@@ -58,20 +64,32 @@ export const wallSchema = z.object({
 });
 
 /** What is above the room. */
-export const aboveSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('attic'), insulation: ceilingInsulationSchema.default('r30') }),
-  z.object({ kind: z.literal('roof'), insulation: ceilingInsulationSchema.default('r30') }),
-  z.object({ kind: z.literal('conditioned') }),
-], { error: 'Choose what is above the room' });
+export const aboveSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({ kind: z.literal('attic'), insulation: ceilingInsulationSchema.default('r30') }),
+    z.object({ kind: z.literal('roof'), insulation: ceilingInsulationSchema.default('r30') }),
+    z.object({ kind: z.literal('conditioned') }),
+  ],
+  { error: 'Choose what is above the room' },
+);
 
 /** What is below the room. */
-export const belowSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('slab'), edgeInsulated: z.boolean().default(false) }),
-  z.object({ kind: z.literal('crawlspace'), vented: z.boolean().default(true), insulation: floorInsulationSchema.default('none') }),
-  z.object({ kind: z.literal('basement'), insulation: floorInsulationSchema.default('none') }),
-  z.object({ kind: z.literal('garage'), insulation: floorInsulationSchema.default('none') }),
-  z.object({ kind: z.literal('conditioned') }),
-], { error: 'Choose what is below the room' });
+export const belowSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z.object({ kind: z.literal('slab'), edgeInsulated: z.boolean().default(false) }),
+    z.object({
+      kind: z.literal('crawlspace'),
+      vented: z.boolean().default(true),
+      insulation: floorInsulationSchema.default('none'),
+    }),
+    z.object({ kind: z.literal('basement'), insulation: floorInsulationSchema.default('none') }),
+    z.object({ kind: z.literal('garage'), insulation: floorInsulationSchema.default('none') }),
+    z.object({ kind: z.literal('conditioned') }),
+  ],
+  { error: 'Choose what is below the room' },
+);
 
 /** A heat-producing appliance or light: a gain in W or Btu/h, plus optional latent Btu/h. */
 export const applianceSchema = z.object({

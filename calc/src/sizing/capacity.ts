@@ -20,7 +20,13 @@ function isAscending(points: readonly CapacityPoint[]): boolean {
  * points [PUB (secondary): Manual S — use expanded data at design conditions]. Outside the
  * data the nearest point is held (no extrapolation) and `extrapolated` is true. No rounding.
  */
-export function capacityAtOutdoorF({ points, outdoorF }: { readonly points: readonly CapacityPoint[]; readonly outdoorF: number }): CapacityAt {
+export function capacityAtOutdoorF({
+  points,
+  outdoorF,
+}: {
+  readonly points: readonly CapacityPoint[];
+  readonly outdoorF: number;
+}): CapacityAt {
   const t = num(outdoorF);
   assert(points.length > 0, 'EMPTY_LIST');
   const ascending = isAscending(points);
@@ -42,6 +48,12 @@ export function capacityAtOutdoorF({ points, outdoorF }: { readonly points: read
 }
 
 /** Sizing ratio = capacity ÷ load (unitless). Load must be > 0. No rounding. */
-export function sizingRatio({ loadBtuh, capacityBtuh }: { readonly loadBtuh: number; readonly capacityBtuh: number }): number {
+export function sizingRatio({
+  loadBtuh,
+  capacityBtuh,
+}: {
+  readonly loadBtuh: number;
+  readonly capacityBtuh: number;
+}): number {
   return num(capacityBtuh, 'nonNegative') / num(loadBtuh, 'positive');
 }

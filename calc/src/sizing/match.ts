@@ -35,23 +35,45 @@ interface Rated {
  * sizing range for `equipmentType` from `policy` [MEM: Manual S limits as company policy].
  * Warnings are plain words for the estimator.
  */
-export function checkSizing(
-  { unit, equipmentType, load, coolingDesignF, heatingDesignF, policy }:
-  { readonly unit: Rated; readonly equipmentType: EquipmentType; readonly load: LoadToMeet; readonly coolingDesignF: number; readonly heatingDesignF: number; readonly policy: SizingPolicy },
-): SizingCheck {
+export function checkSizing({
+  unit,
+  equipmentType,
+  load,
+  coolingDesignF,
+  heatingDesignF,
+  policy,
+}: {
+  readonly unit: Rated;
+  readonly equipmentType: EquipmentType;
+  readonly load: LoadToMeet;
+  readonly coolingDesignF: number;
+  readonly heatingDesignF: number;
+  readonly policy: SizingPolicy;
+}): SizingCheck {
   const warnings: string[] = [];
   const range = policy.cooling[equipmentType];
   const coolingLoad = load.sensibleBtuh + load.latentBtuh;
   const cool = capacityAtOutdoorF({ points: unit.cooling, outdoorF: coolingDesignF });
-  if (cool.extrapolated) warnings.push(`${unit.description}: the cooling data does not reach ${coolingDesignF} °F; the nearest rating was used.`);
+  if (cool.extrapolated)
+    warnings.push(
+      `${unit.description}: the cooling data does not reach ${coolingDesignF} °F; the nearest rating was used.`,
+    );
   const ratio = coolingLoad > 0 ? sizingRatio({ loadBtuh: coolingLoad, capacityBtuh: cool.btuh }) : null;
   const pct = ratio === null ? null : roundHalfUp(ratio * 100);
   const within = ratio !== null && ratio * 100 >= range.minPercent - 1e-9 && ratio * 100 <= range.maxPercent + 1e-9;
   if (ratio === null) warnings.push(`${unit.description}: there is no cooling load to size against.`);
-  else if (!within && ratio * 100 < range.minPercent) warnings.push(`${unit.description} covers only ${pct} % of the cooling load at ${coolingDesignF} °F (allowed ${range.minPercent}–${range.maxPercent} %): choose a larger unit.`);
-  else if (!within) warnings.push(`${unit.description} delivers ${pct} % of the cooling load at ${coolingDesignF} °F (allowed ${range.minPercent}–${range.maxPercent} %): it is oversized and will dehumidify poorly; choose a smaller unit.`);
+  else if (!within && ratio * 100 < range.minPercent)
+    warnings.push(
+      `${unit.description} covers only ${pct} % of the cooling load at ${coolingDesignF} °F (allowed ${range.minPercent}–${range.maxPercent} %): choose a larger unit.`,
+    );
+  else if (!within)
+    warnings.push(
+      `${unit.description} delivers ${pct} % of the cooling load at ${coolingDesignF} °F (allowed ${range.minPercent}–${range.maxPercent} %): it is oversized and will dehumidify poorly; choose a smaller unit.`,
+    );
   if (unit.sensibleHeatRatio !== undefined && cool.btuh * unit.sensibleHeatRatio < load.sensibleBtuh) {
-    warnings.push(`${unit.description}: its sensible capacity (${roundHalfUp(cool.btuh * unit.sensibleHeatRatio)} Btu/h) is below the sensible load (${roundHalfUp(load.sensibleBtuh)} Btu/h).`);
+    warnings.push(
+      `${unit.description}: its sensible capacity (${roundHalfUp(cool.btuh * unit.sensibleHeatRatio)} Btu/h) is below the sensible load (${roundHalfUp(load.sensibleBtuh)} Btu/h).`,
+    );
   }
   let heatingCapacity: number | null = null;
   let heatingRatio: number | null = null;
@@ -61,10 +83,15 @@ export function checkSizing(
     if (load.heatingBtuh > 0) {
       heatingRatio = roundHalfUp(sizingRatio({ loadBtuh: load.heatingBtuh, capacityBtuh: heat.btuh }), 3);
       if (heatingRatio * 100 < policy.heatingMinPercent) {
-        warnings.push(`${unit.description} heats ${roundHalfUp(heatingRatio * 100)} % of the heat loss at ${heatingDesignF} °F: plan supplemental heat or a larger unit.`);
+        warnings.push(
+          `${unit.description} heats ${roundHalfUp(heatingRatio * 100)} % of the heat loss at ${heatingDesignF} °F: plan supplemental heat or a larger unit.`,
+        );
       }
     }
-    if (heat.extrapolated) warnings.push(`${unit.description}: the heating data does not reach ${heatingDesignF} °F; the nearest rating was used.`);
+    if (heat.extrapolated)
+      warnings.push(
+        `${unit.description}: the heating data does not reach ${heatingDesignF} °F; the nearest rating was used.`,
+      );
   }
   return {
     coolingLoadBtuh: coolingLoad,
@@ -90,13 +117,35 @@ export interface CombinationCheck {
 }
 
 /** Sum of connected indoor nominal capacity ÷ outdoor nominal, %, rounded half-up to 1 %; and the head count. [PUB: maker combination tables, typical] */
-export function checkCombination({ outdoor, indoor }: { readonly outdoor: OutdoorUnit; readonly indoor: readonly IndoorUnit[] }): CombinationCheck {
+export function checkCombination({
+  outdoor,
+  indoor,
+}: {
+  readonly outdoor: OutdoorUnit;
+  readonly indoor: readonly IndoorUnit[];
+}): CombinationCheck {
   const connected = indoor.reduce((s, u) => s + u.nominalBtuh, 0);
   const pct = roundHalfUp((connected / outdoor.nominalBtuh) * 100);
   const { min, max } = outdoor.connectedRatioPercent;
   const warnings: string[] = [];
-  if (indoor.length > outdoor.maxHeads) warnings.push(`${outdoor.description} takes at most ${outdoor.maxHeads} indoor unit(s); ${indoor.length} are connected.`);
-  if (pct < min) warnings.push(`The connected indoor units add up to ${pct} % of ${outdoor.description}'s capacity; the maker allows ${min}–${max} %. Add or enlarge indoor units, or choose a smaller outdoor unit.`);
-  if (pct > max) warnings.push(`The connected indoor units add up to ${pct} % of ${outdoor.description}'s capacity; the maker allows ${min}–${max} %. Remove or shrink indoor units, or choose a larger outdoor unit.`);
-  return { heads: indoor.length, maxHeads: outdoor.maxHeads, connectedPercent: pct, allowedPercent: { min, max }, ok: warnings.length === 0, warnings };
+  if (indoor.length > outdoor.maxHeads)
+    warnings.push(
+      `${outdoor.description} takes at most ${outdoor.maxHeads} indoor unit(s); ${indoor.length} are connected.`,
+    );
+  if (pct < min)
+    warnings.push(
+      `The connected indoor units add up to ${pct} % of ${outdoor.description}'s capacity; the maker allows ${min}–${max} %. Add or enlarge indoor units, or choose a smaller outdoor unit.`,
+    );
+  if (pct > max)
+    warnings.push(
+      `The connected indoor units add up to ${pct} % of ${outdoor.description}'s capacity; the maker allows ${min}–${max} %. Remove or shrink indoor units, or choose a larger outdoor unit.`,
+    );
+  return {
+    heads: indoor.length,
+    maxHeads: outdoor.maxHeads,
+    connectedPercent: pct,
+    allowedPercent: { min, max },
+    ok: warnings.length === 0,
+    warnings,
+  };
 }

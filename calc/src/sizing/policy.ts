@@ -3,7 +3,10 @@ import { bounded } from '../schemas/fields';
 import type { EquipmentType } from '../schemas/equipment';
 
 const range = (label: string) =>
-  z.object({ minPercent: bounded(`${label} minimum`, 50, 150, '%'), maxPercent: bounded(`${label} maximum`, 80, 200, '%') });
+  z.object({
+    minPercent: bounded(`${label} minimum`, 50, 150, '%'),
+    maxPercent: bounded(`${label} maximum`, 80, 200, '%'),
+  });
 
 /**
  * Allowed cooling capacity as % of the total cooling load per equipment type — company

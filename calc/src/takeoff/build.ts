@@ -35,7 +35,14 @@ interface LineGroup {
 class LineMerger {
   private readonly groups = new Map<string, LineGroup>();
 
-  add(itemKey: string, description: string, quantity: number, unit: TakeoffLine['unit'], category: TakeoffLine['category'], derivation: string): void {
+  add(
+    itemKey: string,
+    description: string,
+    quantity: number,
+    unit: TakeoffLine['unit'],
+    category: TakeoffLine['category'],
+    derivation: string,
+  ): void {
     const g = this.groups.get(itemKey);
     if (g) {
       g.quantity += quantity;
@@ -60,8 +67,12 @@ class LineMerger {
     for (const g of this.groups.values()) {
       const merged = g.derivations.length > 1;
       out.push({
-        itemKey: g.itemKey, description: g.description, quantity: merged ? roundHalfUp(g.quantity, 2) : g.quantity,
-        unit: g.unit, category: g.category, derivation: merged ? g.derivations.join('; ') : (g.derivations[0] ?? ''),
+        itemKey: g.itemKey,
+        description: g.description,
+        quantity: merged ? roundHalfUp(g.quantity, 2) : g.quantity,
+        unit: g.unit,
+        category: g.category,
+        derivation: merged ? g.derivations.join('; ') : (g.derivations[0] ?? ''),
       });
     }
     return out;
@@ -74,17 +85,27 @@ export function stockKitLengthFt({ lengthFt }: { readonly lengthFt: number }): n
 }
 
 /** Whole cylinders to buy for an extra charge, oz → ceil(lb / cylinder lb). 0 when nothing is added. */
-export function cylindersToBuy({ extraOz, cylinderLb }: { readonly extraOz: number; readonly cylinderLb: number }): number {
+export function cylindersToBuy({
+  extraOz,
+  cylinderLb,
+}: {
+  readonly extraOz: number;
+  readonly cylinderLb: number;
+}): number {
   return extraOz <= 0 ? 0 : Math.ceil(extraOz / OZ_PER_LB / cylinderLb - 1e-9);
 }
 
 const MOUNT_LABOR: Record<IndoorUnit['unitType'], number> = {
-  'wall-head': LABOR_HOURS.mountWallHead, 'ceiling-cassette': LABOR_HOURS.mountCassette,
-  'floor-console': LABOR_HOURS.mountFloorConsole, 'ducted-air-handler': LABOR_HOURS.mountAirHandler,
+  'wall-head': LABOR_HOURS.mountWallHead,
+  'ceiling-cassette': LABOR_HOURS.mountCassette,
+  'floor-console': LABOR_HOURS.mountFloorConsole,
+  'ducted-air-handler': LABOR_HOURS.mountAirHandler,
 };
 const MOUNT_DESCRIPTION: Record<IndoorUnit['unitType'], string> = {
-  'wall-head': 'Mount indoor unit (wall-head)', 'ceiling-cassette': 'Mount indoor unit (ceiling-cassette)',
-  'floor-console': 'Mount indoor unit (floor-console)', 'ducted-air-handler': 'Mount indoor unit (ducted-air-handler)',
+  'wall-head': 'Mount indoor unit (wall-head)',
+  'ceiling-cassette': 'Mount indoor unit (ceiling-cassette)',
+  'floor-console': 'Mount indoor unit (floor-console)',
+  'ducted-air-handler': 'Mount indoor unit (ducted-air-handler)',
 };
 
 /*
@@ -105,36 +126,113 @@ const CHARGE_STARTUP_TEXT = [`${L.chargeStartupBase} h + `, ` circuit(s) × ${L.
 /** Materials and labor lines for one circuit of a system (indoor unit, line set, accessories, labor), added to `out`. */
 function circuitLines(name: string, c: Circuit, indoor: IndoorUnit, plan: CircuitCharge, out: LineMerger): void {
   const at = ` (${name}, zone ${c.zoneKey})`;
-  out.add(`equipment:${indoor.key}`, indoor.description, 1, 'each', 'equipment', `indoor unit for ${name}, zone ${c.zoneKey}`);
+  out.add(
+    `equipment:${indoor.key}`,
+    indoor.description,
+    1,
+    'each',
+    'equipment',
+    `indoor unit for ${name}, zone ${c.zoneKey}`,
+  );
   const kit = stockKitLengthFt({ lengthFt: c.lengthFt });
   if (kit !== null) {
-    out.mat(`line-set-kit:${plan.liquidLabel}x${plan.suctionLabel}:${kit}ft`, `Insulated line-set kit ${plan.liquidLabel} × ${plan.suctionLabel} in, ${kit} ft`, 1, 'each', `${c.lengthFt} ft run rounded up to the ${kit} ft stock kit${at}`);
+    out.mat(
+      `line-set-kit:${plan.liquidLabel}x${plan.suctionLabel}:${kit}ft`,
+      `Insulated line-set kit ${plan.liquidLabel} × ${plan.suctionLabel} in, ${kit} ft`,
+      1,
+      'each',
+      `${c.lengthFt} ft run rounded up to the ${kit} ft stock kit${at}`,
+    );
   } else {
     const ft = roundUpTo(c.lengthFt, 5);
-    out.mat(`copper-acr:${plan.liquidLabel}`, `ACR copper ${plan.liquidLabel} in, coil`, ft, 'ft', `${c.lengthFt} ft run longer than any kit, rounded up to 5 ft${at}`);
-    out.mat(`copper-acr:${plan.suctionLabel}`, `ACR copper ${plan.suctionLabel} in, coil`, ft, 'ft', `same run, suction line${at}`);
-    out.mat(`pipe-insulation:${plan.suctionLabel}`, `Pipe insulation for ${plan.suctionLabel} in`, ft, 'ft', `suction line insulation${at}`);
+    out.mat(
+      `copper-acr:${plan.liquidLabel}`,
+      `ACR copper ${plan.liquidLabel} in, coil`,
+      ft,
+      'ft',
+      `${c.lengthFt} ft run longer than any kit, rounded up to 5 ft${at}`,
+    );
+    out.mat(
+      `copper-acr:${plan.suctionLabel}`,
+      `ACR copper ${plan.suctionLabel} in, coil`,
+      ft,
+      'ft',
+      `same run, suction line${at}`,
+    );
+    out.mat(
+      `pipe-insulation:${plan.suctionLabel}`,
+      `Pipe insulation for ${plan.suctionLabel} in`,
+      ft,
+      'ft',
+      `suction line insulation${at}`,
+    );
   }
   out.mat('insulation-tape', 'Insulation tape for joints', 1, 'roll', `one roll per circuit${at}`);
-  out.mat('comm-cable:14-4', 'Communication cable 14/4 stranded', roundUpTo(c.lengthFt + T.cableSlackFt, T.cableStepFt), 'ft', `${c.lengthFt}${CABLE_SLACK_TEXT}${at}`);
-  if (c.wallPenetrations > 0) out.mat('wall-sleeve', 'Wall sleeve with cap', c.wallPenetrations, 'each', `${c.wallPenetrations} wall penetration(s)${at}`);
+  out.mat(
+    'comm-cable:14-4',
+    'Communication cable 14/4 stranded',
+    roundUpTo(c.lengthFt + T.cableSlackFt, T.cableStepFt),
+    'ft',
+    `${c.lengthFt}${CABLE_SLACK_TEXT}${at}`,
+  );
+  if (c.wallPenetrations > 0)
+    out.mat(
+      'wall-sleeve',
+      'Wall sleeve with cap',
+      c.wallPenetrations,
+      'each',
+      `${c.wallPenetrations} wall penetration(s)${at}`,
+    );
   if (c.lineCoverFt > 0) {
     const pieces = Math.ceil(c.lineCoverFt / T.lineCoverPieceFt - 1e-9);
-    out.mat('line-cover:straight', LINE_COVER_DESCRIPTION, pieces, 'each', `${c.lineCoverFt}${LINE_COVER_PIECE_TEXT}${at}`);
+    out.mat(
+      'line-cover:straight',
+      LINE_COVER_DESCRIPTION,
+      pieces,
+      'each',
+      `${c.lineCoverFt}${LINE_COVER_PIECE_TEXT}${at}`,
+    );
     out.mat('line-cover:wall-inlet', 'Line cover wall inlet', 1, 'each', `one per covered run${at}`);
-    out.labor('labor:line-cover', 'Install line cover', c.lineCoverFt * L.lineCoverPerFt, `${c.lineCoverFt}${LINE_COVER_LABOR_TEXT}${at}`);
+    out.labor(
+      'labor:line-cover',
+      'Install line cover',
+      c.lineCoverFt * L.lineCoverPerFt,
+      `${c.lineCoverFt}${LINE_COVER_LABOR_TEXT}${at}`,
+    );
   }
   const pump = c.condensate === 'pump' || indoor.needsCondensatePump;
   if (pump) out.mat('condensate-pump', 'Condensate pump', 1, 'each', `pump drain${at}`);
   if (c.condensateLengthFt > 0) {
-    out.mat('condensate-line:3/4', 'Condensate line 3/4 in', roundUpTo(c.condensateLengthFt, T.condensateStepFt), 'ft', `${c.condensateLengthFt} ft rounded up to 10 ft${at}`);
+    out.mat(
+      'condensate-line:3/4',
+      'Condensate line 3/4 in',
+      roundUpTo(c.condensateLengthFt, T.condensateStepFt),
+      'ft',
+      `${c.condensateLengthFt} ft rounded up to 10 ft${at}`,
+    );
   }
   out.mat('fasteners:kit', 'Fastener and strap kit', 1, 'each', `one per circuit${at}`);
   const laborTable = `labor table${at}`;
   out.labor('labor:mount-indoor', MOUNT_DESCRIPTION[indoor.unitType], MOUNT_LABOR[indoor.unitType], laborTable);
-  out.labor('labor:run-line-set', 'Run, flare/braze and support line set', L.lineSetBase + c.lengthFt * L.lineSetPerFt, `${LINE_SET_LABOR_TEXT[0]}${c.lengthFt}${LINE_SET_LABOR_TEXT[1]}${at}`);
-  if (c.wallPenetrations > 0) out.labor('labor:wall-penetration', 'Core wall penetration', c.wallPenetrations * L.wallPenetration, `${c.wallPenetrations}${WALL_PENETRATION_LABOR_TEXT}${at}`);
-  out.labor(pump ? 'labor:condensate-pump' : 'labor:condensate-gravity', pump ? 'Condensate pump and line' : 'Gravity condensate line', pump ? L.condensatePump : L.condensateGravity, laborTable);
+  out.labor(
+    'labor:run-line-set',
+    'Run, flare/braze and support line set',
+    L.lineSetBase + c.lengthFt * L.lineSetPerFt,
+    `${LINE_SET_LABOR_TEXT[0]}${c.lengthFt}${LINE_SET_LABOR_TEXT[1]}${at}`,
+  );
+  if (c.wallPenetrations > 0)
+    out.labor(
+      'labor:wall-penetration',
+      'Core wall penetration',
+      c.wallPenetrations * L.wallPenetration,
+      `${c.wallPenetrations}${WALL_PENETRATION_LABOR_TEXT}${at}`,
+    );
+  out.labor(
+    pump ? 'labor:condensate-pump' : 'labor:condensate-gravity',
+    pump ? 'Condensate pump and line' : 'Gravity condensate line',
+    pump ? L.condensatePump : L.condensateGravity,
+    laborTable,
+  );
 }
 
 /** Materials and labor lines for one system (equipment, line sets, accessories, electrical, refrigerant, labor), added to `out`. */
@@ -149,27 +247,79 @@ function systemLines(s: SystemForTakeoff, out: LineMerger): void {
     if (c && indoor && plan) circuitLines(name, c, indoor, plan, out);
   }
   const bracket = s.system.mounting === 'wall-bracket';
-  out.mat(bracket ? 'mount:wall-bracket' : 'mount:pad', bracket ? 'Outdoor unit wall bracket' : 'Outdoor unit pad', 1, 'each', `${name} mounting`);
-  out.labor('labor:set-outdoor', 'Set outdoor unit', bracket ? L.setOutdoorBracket : L.setOutdoorPad, `labor table (${name})`);
+  out.mat(
+    bracket ? 'mount:wall-bracket' : 'mount:pad',
+    bracket ? 'Outdoor unit wall bracket' : 'Outdoor unit pad',
+    1,
+    'each',
+    `${name} mounting`,
+  );
+  out.labor(
+    'labor:set-outdoor',
+    'Set outdoor unit',
+    bracket ? L.setOutdoorBracket : L.setOutdoorPad,
+    `labor table (${name})`,
+  );
   const e = s.electrical;
   const wiring = s.system.electrical;
   const disconnectA = (e.breakerA ?? e.mocpA) <= 60 ? 60 : 100;
-  out.mat(`disconnect:${disconnectA}a`, `AC disconnect, ${disconnectA} A non-fused`, 1, 'each', `within sight of ${name}; breaker ${e.breakerA ?? '?'} A`);
+  out.mat(
+    `disconnect:${disconnectA}a`,
+    `AC disconnect, ${disconnectA} A non-fused`,
+    1,
+    'each',
+    `within sight of ${name}; breaker ${e.breakerA ?? '?'} A`,
+  );
   out.mat('whip:3/4x6ft', 'Liquid-tight whip 3/4 in × 6 ft', 1, 'each', `disconnect to unit (${name})`);
-  if (e.breakerA !== null) out.mat(`breaker:2p-${e.breakerA}a`, `2-pole breaker ${e.breakerA} A`, 1, 'each', `largest standard rating ≤ MOCP ${e.mocpA} A and ≥ MCA ${e.mcaA} A (${name})`);
+  if (e.breakerA !== null)
+    out.mat(
+      `breaker:2p-${e.breakerA}a`,
+      `2-pole breaker ${e.breakerA} A`,
+      1,
+      'each',
+      `largest standard rating ≤ MOCP ${e.mocpA} A and ≥ MCA ${e.mcaA} A (${name})`,
+    );
   if (e.wireAwg !== null) {
     const ft = roundUpTo(wiring.circuitLengthFt + T.cableSlackFt, T.cableStepFt);
-    out.mat(`wire:${wiring.wiringMethod}:${e.wireAwg}awg`, `${e.wireAwg} AWG copper, ${wiring.wiringMethod}`, ft, 'ft', `MCA ${e.mcaA} A → ${e.wireAwg} AWG at ${e.ampacityColumnC} °C; ${wiring.circuitLengthFt} ft + slack, rounded up to 5 ft (${name})`);
+    out.mat(
+      `wire:${wiring.wiringMethod}:${e.wireAwg}awg`,
+      `${e.wireAwg} AWG copper, ${wiring.wiringMethod}`,
+      ft,
+      'ft',
+      `MCA ${e.mcaA} A → ${e.wireAwg} AWG at ${e.ampacityColumnC} °C; ${wiring.circuitLengthFt} ft + slack, rounded up to 5 ft (${name})`,
+    );
   }
-  out.labor('labor:electrical', 'Branch circuit, disconnect and whip', L.electricalBase + wiring.circuitLengthFt * L.electricalPerFt, `${ELECTRICAL_LABOR_TEXT[0]}${wiring.circuitLengthFt}${ELECTRICAL_LABOR_TEXT[1]} (${name})`);
+  out.labor(
+    'labor:electrical',
+    'Branch circuit, disconnect and whip',
+    L.electricalBase + wiring.circuitLengthFt * L.electricalPerFt,
+    `${ELECTRICAL_LABOR_TEXT[0]}${wiring.circuitLengthFt}${ELECTRICAL_LABOR_TEXT[1]} (${name})`,
+  );
   const r = s.refrigerant;
   const cylLb = T.cylinderLb[r.refrigerant];
   const cylinders = cylindersToBuy({ extraOz: r.extraChargeOz, cylinderLb: cylLb });
-  if (cylinders > 0) out.mat(`refrigerant:${r.refrigerant}:${cylLb}lb`, `${r.refrigerant} refrigerant, ${cylLb} lb cylinder`, cylinders, 'cylinder', `${r.extraChargeOz} oz extra charge = ${roundHalfUp(r.extraChargeOz / OZ_PER_LB, 2)} lb → ${cylinders} × ${cylLb} lb (${name})`);
+  if (cylinders > 0)
+    out.mat(
+      `refrigerant:${r.refrigerant}:${cylLb}lb`,
+      `${r.refrigerant} refrigerant, ${cylLb} lb cylinder`,
+      cylinders,
+      'cylinder',
+      `${r.extraChargeOz} oz extra charge = ${roundHalfUp(r.extraChargeOz / OZ_PER_LB, 2)} lb → ${cylinders} × ${cylLb} lb (${name})`,
+    );
   out.mat('nitrogen:test', 'Dry nitrogen for pressure test and purge', 1, 'each', `one test per system (${name})`);
-  out.labor('labor:pressure-test-evacuate', 'Pressure test and evacuation', L.pressureTestEvacuate, `labor table (${name})`);
+  out.labor(
+    'labor:pressure-test-evacuate',
+    'Pressure test and evacuation',
+    L.pressureTestEvacuate,
+    `labor table (${name})`,
+  );
   const count = circuits.length;
-  out.labor('labor:charge-startup', 'Charge and start-up', L.chargeStartupBase + count * L.chargeStartupPerCircuit, `${CHARGE_STARTUP_TEXT[0]}${count}${CHARGE_STARTUP_TEXT[1]} (${name})`);
+  out.labor(
+    'labor:charge-startup',
+    'Charge and start-up',
+    L.chargeStartupBase + count * L.chargeStartupPerCircuit,
+    `${CHARGE_STARTUP_TEXT[0]}${count}${CHARGE_STARTUP_TEXT[1]} (${name})`,
+  );
 }
 
 /** The full takeoff for a design: every system's lines, merged by item key (quantities summed). */

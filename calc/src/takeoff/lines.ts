@@ -26,8 +26,12 @@ export function mergeLines(lines: readonly TakeoffLine[]): TakeoffLine[] {
   const out: TakeoffLine[] = [];
   for (const { first: l, quantity, derivations } of groups.values()) {
     out.push({
-      itemKey: l.itemKey, description: l.description, quantity: derivations.length > 1 ? roundHalfUp(quantity, 2) : quantity,
-      unit: l.unit, category: l.category, derivation: derivations.length > 1 ? derivations.join('; ') : l.derivation,
+      itemKey: l.itemKey,
+      description: l.description,
+      quantity: derivations.length > 1 ? roundHalfUp(quantity, 2) : quantity,
+      unit: l.unit,
+      category: l.category,
+      derivation: derivations.length > 1 ? derivations.join('; ') : l.derivation,
     });
   }
   return out;

@@ -19,7 +19,9 @@ export function clearCsrfToken(): void {
 
 function getCsrfToken(): Promise<string> {
   if (!csrfToken) {
-    const pending = send('/api/auth/csrf', { method: 'GET' }).then(async (res) => csrfSchema.parse(await res.json()).token);
+    const pending = send('/api/auth/csrf', { method: 'GET' }).then(
+      async (res) => csrfSchema.parse(await res.json()).token,
+    );
     // A failed fetch must not stay cached.
     pending.catch(() => {
       if (csrfToken === pending) csrfToken = null;
@@ -75,7 +77,10 @@ async function readBody(res: Response): Promise<unknown> {
  */
 export function apiFetch<T>(path: string, options: ApiOptions & { schema: z.ZodType<T> }): Promise<T>;
 export function apiFetch(path: string, options?: ApiOptions): Promise<unknown>;
-export async function apiFetch<T>(path: string, options: ApiOptions & { schema?: z.ZodType<T> } = {}): Promise<unknown> {
+export async function apiFetch<T>(
+  path: string,
+  options: ApiOptions & { schema?: z.ZodType<T> } = {},
+): Promise<unknown> {
   const res = await sendWithCsrf(path, options);
   const body = await readBody(res);
   return options.schema ? options.schema.parse(body) : body;

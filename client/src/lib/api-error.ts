@@ -17,7 +17,14 @@ export class ApiError extends Error {
   /** Seconds from the Retry-After header (429), when the server sent one. */
   readonly retryAfter: number | null;
 
-  constructor(init: { status: number; code: string; title: string; detail: string; errors?: FieldError[]; retryAfter?: number | null }) {
+  constructor(init: {
+    status: number;
+    code: string;
+    title: string;
+    detail: string;
+    errors?: FieldError[];
+    retryAfter?: number | null;
+  }) {
     super(init.detail);
     this.status = init.status;
     this.code = init.code;
@@ -57,7 +64,13 @@ function fallbackDetail(status: number): string {
 /** Reads a non-2xx response; never throws while doing so. */
 export async function apiErrorFromResponse(res: Response): Promise<ApiError> {
   const retryAfter = parseRetryAfter(res.headers.get('Retry-After'));
-  const base = { status: res.status, code: `http-${res.status}`, title: res.statusText || 'Error', detail: fallbackDetail(res.status), retryAfter };
+  const base = {
+    status: res.status,
+    code: `http-${res.status}`,
+    title: res.statusText || 'Error',
+    detail: fallbackDetail(res.status),
+    retryAfter,
+  };
   const type = res.headers.get('Content-Type') ?? '';
   if (!type.includes('json')) return new ApiError(base);
   let body: unknown;
@@ -70,7 +83,13 @@ export async function apiErrorFromResponse(res: Response): Promise<ApiError> {
   if (!parsed.success) return new ApiError(base);
   const p = parsed.data;
   const code = p.type?.split('/').filter(Boolean).pop() ?? base.code;
-  return new ApiError({ ...base, code, title: p.title ?? base.title, detail: p.detail ?? base.detail, errors: p.errors ?? [] });
+  return new ApiError({
+    ...base,
+    code,
+    title: p.title ?? base.title,
+    detail: p.detail ?? base.detail,
+    errors: p.errors ?? [],
+  });
 }
 
 export function networkError(): ApiError {

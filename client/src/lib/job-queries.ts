@@ -45,7 +45,13 @@ export function keepNewerRooms(old: unknown, fresh: unknown): unknown {
   const held = new Map<unknown, unknown>(old.map((r: { id?: unknown }) => [r.id, r]));
   return fresh.map((r: { id?: unknown; version?: unknown }) => {
     const mine = held.get(r.id);
-    const newer = typeof mine === 'object' && mine !== null && 'version' in mine && typeof mine.version === 'number' && typeof r.version === 'number' && mine.version > r.version;
+    const newer =
+      typeof mine === 'object' &&
+      mine !== null &&
+      'version' in mine &&
+      typeof mine.version === 'number' &&
+      typeof r.version === 'number' &&
+      mine.version > r.version;
     return newer ? mine : r;
   });
 }
@@ -60,6 +66,7 @@ export const roomsQueryOptions = (jobId: string) =>
 export const companySettingsQueryOptions = () =>
   queryOptions({
     queryKey: jobKeys.settings(),
-    queryFn: async ({ signal }) => (await apiFetch(COMPANY_SETTINGS_PATH, { schema: settingsResponse, signal })).settings,
+    queryFn: async ({ signal }) =>
+      (await apiFetch(COMPANY_SETTINGS_PATH, { schema: settingsResponse, signal })).settings,
     staleTime: 5 * 60_000,
   });

@@ -15,7 +15,15 @@ export class OfflineQueue<P> {
   private readonly reached = new Map<string, number>();
 
   constructor(private readonly options: OfflineQueueOptions<P>) {
-    this.state = { loaded: false, online: this.isOnline(), sending: false, items: [], conflict: null, rejected: null, blocked: null };
+    this.state = {
+      loaded: false,
+      online: this.isOnline(),
+      sending: false,
+      items: [],
+      conflict: null,
+      rejected: null,
+      blocked: null,
+    };
   }
 
   private isOnline(): boolean {
@@ -84,7 +92,10 @@ export class OfflineQueue<P> {
     // already landed (the debounce fires between the answer and the next render): an edit made
     // on this device stands on the newest version this device wrote, never on an older one.
     const reached = this.reached.get(edit.target);
-    const next = reached !== undefined && (edit.baseVersion === null || edit.baseVersion < reached) ? { ...edit, baseVersion: reached } : edit;
+    const next =
+      reached !== undefined && (edit.baseVersion === null || edit.baseVersion < reached)
+        ? { ...edit, baseVersion: reached }
+        : edit;
     const items = [...this.state.items];
     const coalesce = this.options.coalesce;
     if (coalesce) {
@@ -161,7 +172,9 @@ export class OfflineQueue<P> {
         await this.setItems(rest);
       } else {
         // Later edits of the same target were made on top of this one: they now stand on its new version.
-        const rebased = rest.map((i) => (i.target === head.target && result.version !== null ? { ...i, baseVersion: result.version } : i));
+        const rebased = rest.map((i) =>
+          i.target === head.target && result.version !== null ? { ...i, baseVersion: result.version } : i,
+        );
         if (result.version !== null) this.reached.set(head.target, result.version);
         this.options.onSent?.(head, result.version);
         await this.setItems(rebased);
@@ -175,7 +188,10 @@ export class OfflineQueue<P> {
    * keep theirs — which drops every waiting edit of that target, since each carries the
    * whole record as the person had it.
    */
-  async resolveConflict(itemId: string, resolution: { readonly payload: P; readonly baseVersion: number } | 'drop'): Promise<void> {
+  async resolveConflict(
+    itemId: string,
+    resolution: { readonly payload: P; readonly baseVersion: number } | 'drop',
+  ): Promise<void> {
     const target = this.state.items.find((i) => i.id === itemId)?.target;
     const items =
       resolution === 'drop'

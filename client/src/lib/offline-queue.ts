@@ -57,14 +57,24 @@ export const QUEUE_STORAGE_KEY = 'gaugeline:offline-queue:v1';
 function isStoredItem(v: unknown): v is QueueItem<unknown> {
   if (typeof v !== 'object' || v === null) return false;
   const r: Record<string, unknown> = { ...v };
-  return typeof r.id === 'string' && typeof r.seq === 'number' && typeof r.target === 'string' && typeof r.payload === 'object' && r.payload !== null;
+  return (
+    typeof r.id === 'string' &&
+    typeof r.seq === 'number' &&
+    typeof r.target === 'string' &&
+    typeof r.payload === 'object' &&
+    r.payload !== null
+  );
 }
 
 /**
  * IndexedDB storage through idb-keyval; pass a custom store in tests or to separate users.
  * `isPayload` checks each stored edit (the queue cannot know what its payloads are).
  */
-export function idbQueueStorage<P>(isPayload: (v: unknown) => v is P, key: string = QUEUE_STORAGE_KEY, store?: UseStore): QueueStorage<P> {
+export function idbQueueStorage<P>(
+  isPayload: (v: unknown) => v is P,
+  key: string = QUEUE_STORAGE_KEY,
+  store?: UseStore,
+): QueueStorage<P> {
   const db = store ?? createStore('gaugeline', 'offline-queue');
   return {
     load: async () => {
@@ -73,14 +83,18 @@ export function idbQueueStorage<P>(isPayload: (v: unknown) => v is P, key: strin
       return v.flatMap((item: unknown): QueueItem<P>[] => {
         if (!isStoredItem(item)) return [];
         const { payload } = item;
-        return isPayload(payload) ? [{ ...item, payload, baseVersion: typeof item.baseVersion === 'number' ? item.baseVersion : null }] : [];
+        return isPayload(payload)
+          ? [{ ...item, payload, baseVersion: typeof item.baseVersion === 'number' ? item.baseVersion : null }]
+          : [];
       });
     },
     save: (items) => set(key, items, db),
   };
 }
 
-export function memoryQueueStorage<P>(initial: readonly QueueItem<P>[] = []): QueueStorage<P> & { readonly saved: () => readonly QueueItem<P>[] } {
+export function memoryQueueStorage<P>(
+  initial: readonly QueueItem<P>[] = [],
+): QueueStorage<P> & { readonly saved: () => readonly QueueItem<P>[] } {
   let items = [...initial];
   return {
     load: async () => [...items],

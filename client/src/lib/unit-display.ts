@@ -1,4 +1,15 @@
-import { cFromF, fDeltaFromKelvin, fFromC, ft2FromM2, ftFromM, inFromCm, kelvinDeltaFromF, m2FromFt2, mFromFt, roundHalfUp } from '@calc';
+import {
+  cFromF,
+  fDeltaFromKelvin,
+  fFromC,
+  ft2FromM2,
+  ftFromM,
+  inFromCm,
+  kelvinDeltaFromF,
+  m2FromFt2,
+  mFromFt,
+  roundHalfUp,
+} from '@calc';
 import type { UnitSystem } from './job-records';
 
 /**
@@ -19,12 +30,48 @@ interface Conversion {
 const CM_PER_IN = 1 / inFromCm({ cm: 1 });
 
 const conversions: Record<Exclude<Quantity, 'plain'>, Conversion> = {
-  ft: { imperial: 'ft', metric: 'm', toMetric: (ft) => mFromFt({ ft }), fromMetric: (m) => ftFromM({ m }), metricDecimals: 2 },
-  elevation: { imperial: 'ft', metric: 'm', toMetric: (ft) => mFromFt({ ft }), fromMetric: (m) => ftFromM({ m }), metricDecimals: 0 },
-  in: { imperial: 'in', metric: 'cm', toMetric: (v) => v * CM_PER_IN, fromMetric: (cm) => inFromCm({ cm }), metricDecimals: 1 },
-  ft2: { imperial: 'ft²', metric: 'm²', toMetric: (ft2) => m2FromFt2({ ft2 }), fromMetric: (m2) => ft2FromM2({ m2 }), metricDecimals: 2 },
-  degF: { imperial: '°F', metric: '°C', toMetric: (f) => cFromF({ f }), fromMetric: (c) => fFromC({ c }), metricDecimals: 1 },
-  deltaF: { imperial: '°F', metric: 'K', toMetric: (deltaF) => kelvinDeltaFromF({ deltaF }), fromMetric: (deltaK) => fDeltaFromKelvin({ deltaK }), metricDecimals: 1 },
+  ft: {
+    imperial: 'ft',
+    metric: 'm',
+    toMetric: (ft) => mFromFt({ ft }),
+    fromMetric: (m) => ftFromM({ m }),
+    metricDecimals: 2,
+  },
+  elevation: {
+    imperial: 'ft',
+    metric: 'm',
+    toMetric: (ft) => mFromFt({ ft }),
+    fromMetric: (m) => ftFromM({ m }),
+    metricDecimals: 0,
+  },
+  in: {
+    imperial: 'in',
+    metric: 'cm',
+    toMetric: (v) => v * CM_PER_IN,
+    fromMetric: (cm) => inFromCm({ cm }),
+    metricDecimals: 1,
+  },
+  ft2: {
+    imperial: 'ft²',
+    metric: 'm²',
+    toMetric: (ft2) => m2FromFt2({ ft2 }),
+    fromMetric: (m2) => ft2FromM2({ m2 }),
+    metricDecimals: 2,
+  },
+  degF: {
+    imperial: '°F',
+    metric: '°C',
+    toMetric: (f) => cFromF({ f }),
+    fromMetric: (c) => fFromC({ c }),
+    metricDecimals: 1,
+  },
+  deltaF: {
+    imperial: '°F',
+    metric: 'K',
+    toMetric: (deltaF) => kelvinDeltaFromF({ deltaF }),
+    fromMetric: (deltaK) => fDeltaFromKelvin({ deltaK }),
+    metricDecimals: 1,
+  },
 };
 
 export function unitLabel(q: Quantity, system: UnitSystem, plainUnit = ''): string {

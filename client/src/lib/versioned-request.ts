@@ -38,11 +38,19 @@ export interface VersionedOptions<T> {
 }
 
 async function sendOnce(path: string, options: VersionedOptions<unknown>, csrf: string): Promise<Response> {
-  const headers: Record<string, string> = { Accept: 'application/json, application/problem+json', 'X-CSRF-Token': csrf };
+  const headers: Record<string, string> = {
+    Accept: 'application/json, application/problem+json',
+    'X-CSRF-Token': csrf,
+  };
   const isForm = options.body instanceof FormData;
   if (options.body !== undefined && !isForm) headers['Content-Type'] = 'application/json';
   if (options.version !== undefined && options.version !== null) headers['If-Match'] = `"${options.version}"`;
-  const body = options.body === undefined ? undefined : options.body instanceof FormData ? options.body : JSON.stringify(options.body);
+  const body =
+    options.body === undefined
+      ? undefined
+      : options.body instanceof FormData
+        ? options.body
+        : JSON.stringify(options.body);
   let res: Response;
   try {
     res = await fetch(path, { method: options.method, credentials: 'same-origin', headers, body });

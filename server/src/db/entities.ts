@@ -7,4 +7,12 @@ import { PhotoSchema } from '../modules/photos/photo.entity';
 import { RoomSchema } from '../modules/rooms/room.entity';
 
 /** Every entity the ORM knows. A module adds its schema here. */
-export const entities = [CompanySchema, UserSchema, CompanySettingsSchema, CustomerSchema, JobSchema, RoomSchema, PhotoSchema];
+export const entities = [
+  CompanySchema,
+  UserSchema,
+  CompanySettingsSchema,
+  CustomerSchema,
+  JobSchema,
+  RoomSchema,
+  PhotoSchema,
+];

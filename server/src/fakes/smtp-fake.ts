@@ -24,7 +24,9 @@ export function directoryOutbox(dir: string): Outbox {
     async list() {
       const names = await readdir(dir).catch(() => []);
       const mails = await Promise.all(
-        names.filter((n) => n.endsWith('.json')).map(async (n) => JSON.parse(await readFile(join(dir, n), 'utf8')) as StoredMail),
+        names
+          .filter((n) => n.endsWith('.json'))
+          .map(async (n) => JSON.parse(await readFile(join(dir, n), 'utf8')) as StoredMail),
       );
       return mails.sort((a, b) => b.receivedAt.localeCompare(a.receivedAt));
     },
@@ -63,7 +65,11 @@ export async function startSmtpFake(opts: { port: number; host?: string; dir?: s
             html: typeof parsed.html === 'string' ? parsed.html : null,
           };
           messages.push(mail);
-          if (opts.dir) await writeFile(join(opts.dir, `${mail.receivedAt.replace(/[:.]/g, '-')}-${mail.id}.json`), JSON.stringify(mail));
+          if (opts.dir)
+            await writeFile(
+              join(opts.dir, `${mail.receivedAt.replace(/[:.]/g, '-')}-${mail.id}.json`),
+              JSON.stringify(mail),
+            );
           for (const w of waiters.filter((x) => mail.to.includes(x.to.toLowerCase()))) {
             waiters.splice(waiters.indexOf(w), 1);
             w.resolve(mail);
@@ -91,7 +97,13 @@ export async function startSmtpFake(opts: { port: number; host?: string; dir?: s
       if (found) return Promise.resolve(found);
       return new Promise((resolve, reject) => {
         const t = setTimeout(() => reject(new Error(`no mail to ${to} within ${timeoutMs} ms`)), timeoutMs);
-        waiters.push({ to, resolve: (m) => { clearTimeout(t); resolve(m); } });
+        waiters.push({
+          to,
+          resolve: (m) => {
+            clearTimeout(t);
+            resolve(m);
+          },
+        });
       });
     },
     close: () => new Promise<void>((resolve) => server.close(() => resolve())),

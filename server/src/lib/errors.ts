@@ -17,7 +17,10 @@ export class AppError extends Error {
 }
 
 export class ValidationError extends AppError {
-  constructor(readonly errors: FieldError[], detail = 'Some fields need attention.') {
+  constructor(
+    readonly errors: FieldError[],
+    detail = 'Some fields need attention.',
+  ) {
     super(400, 'validation', 'Invalid request', detail, { errors });
   }
 }
@@ -42,7 +45,12 @@ export class ForbiddenError extends AppError {
 
 export class CsrfError extends AppError {
   constructor() {
-    super(403, 'csrf', 'Forbidden', 'The request is missing a valid X-CSRF-Token header. Reload the page and try again.');
+    super(
+      403,
+      'csrf',
+      'Forbidden',
+      'The request is missing a valid X-CSRF-Token header. Reload the page and try again.',
+    );
   }
 }
 

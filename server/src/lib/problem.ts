@@ -1,5 +1,10 @@
 import type { ErrorRequestHandler, RequestHandler, Response } from 'express';
-import { DriverException, ConnectionException, OptimisticLockError, UniqueConstraintViolationException } from '@mikro-orm/core';
+import {
+  DriverException,
+  ConnectionException,
+  OptimisticLockError,
+  UniqueConstraintViolationException,
+} from '@mikro-orm/core';
 import { ZodError } from 'zod';
 import { CalcError } from '@calc';
 import {
@@ -50,13 +55,16 @@ function isHttpLike(e: unknown): e is HttpLikeError {
 export function toAppError(err: unknown): AppError | undefined {
   if (err instanceof AppError) return err;
   if (err instanceof ZodError) return new ValidationError(zodToFieldErrors(err));
-  if (err instanceof OptimisticLockError) return new ConflictError('Someone else changed this record. Reload to see their changes.');
-  if (err instanceof UniqueConstraintViolationException) return new ConflictError('A record with these details already exists.');
+  if (err instanceof OptimisticLockError)
+    return new ConflictError('Someone else changed this record. Reload to see their changes.');
+  if (err instanceof UniqueConstraintViolationException)
+    return new ConflictError('A record with these details already exists.');
   if (err instanceof ConnectionException) return new ServiceUnavailableError();
   if (err instanceof DriverException) {
     // SQLSTATE classes: 22 data exception, 23 integrity violation → the input was wrong, not the server.
     const sqlState = err.code ?? '';
-    if (sqlState.startsWith('22') || sqlState.startsWith('23')) return new BadRequestError('The data does not fit the allowed values.');
+    if (sqlState.startsWith('22') || sqlState.startsWith('23'))
+      return new BadRequestError('The data does not fit the allowed values.');
     if (sqlState.startsWith('08') || sqlState === '57P01' || sqlState === '53300') return new ServiceUnavailableError();
     return undefined;
   }
@@ -68,9 +76,11 @@ export function toAppError(err: unknown): AppError | undefined {
     const status = err.status ?? err.statusCode;
     if (err.type === 'entity.parse.failed') return new BadRequestError('The request body is not valid JSON.');
     if (err.type === 'entity.too.large' || status === 413) return new PayloadTooLargeError();
-    if (err.type === 'encoding.unsupported' || err.type === 'charset.unsupported' || status === 415) return new UnsupportedMediaTypeError();
+    if (err.type === 'encoding.unsupported' || err.type === 'charset.unsupported' || status === 415)
+      return new UnsupportedMediaTypeError();
     if (err.code === 'LIMIT_FILE_SIZE') return new PayloadTooLargeError('The file is too large.');
-    if (typeof err.code === 'string' && err.code.startsWith('LIMIT_')) return new BadRequestError('The upload does not fit the allowed limits.');
+    if (typeof err.code === 'string' && err.code.startsWith('LIMIT_'))
+      return new BadRequestError('The upload does not fit the allowed limits.');
     if (status === 400) return new BadRequestError('The request could not be read.');
   }
   return undefined;
@@ -89,5 +99,14 @@ export const problemHandler: ErrorRequestHandler = (err, req, res, _next) => {
   }
   req.log?.error({ err }, 'unhandled error');
   const id = typeof req.id === 'string' || typeof req.id === 'number' ? String(req.id) : undefined;
-  sendProblem(res, new AppError(500, 'internal', 'Internal error', 'Something went wrong on our side. It has been logged.', id ? { requestId: id } : {}));
+  sendProblem(
+    res,
+    new AppError(
+      500,
+      'internal',
+      'Internal error',
+      'Something went wrong on our side. It has been logged.',
+      id ? { requestId: id } : {},
+    ),
+  );
 };

@@ -69,11 +69,14 @@ export const routeRegistry: RegisteredRoute[] = [];
 
 export interface ApiRouter {
   router: Router;
-  route<PS extends ZodType, QS extends ZodType, BS extends ZodType, Pol extends Policy>(spec: RouteSpec<PS, QS, BS, Pol>): void;
+  route<PS extends ZodType, QS extends ZodType, BS extends ZodType, Pol extends Policy>(
+    spec: RouteSpec<PS, QS, BS, Pol>,
+  ): void;
 }
 
 const hasBody = (req: Request): boolean =>
-  (req.headers['content-length'] !== undefined && req.headers['content-length'] !== '0') || req.headers['transfer-encoding'] !== undefined;
+  (req.headers['content-length'] !== undefined && req.headers['content-length'] !== '0') ||
+  req.headers['transfer-encoding'] !== undefined;
 
 export function createApiRouter(prefix: string, getServices: () => Services): ApiRouter {
   const router = express.Router();

@@ -12,7 +12,10 @@ export function zodToFieldErrors(err: ZodError): FieldError[] {
 export function parseInput<S extends ZodType>(schema: S, value: unknown, prefix = ''): z.output<S> {
   const r = schema.safeParse(value);
   if (r.success) return r.data;
-  const errors = zodToFieldErrors(r.error).map((e) => ({ ...e, path: prefix && e.path === '(body)' ? prefix : e.path }));
+  const errors = zodToFieldErrors(r.error).map((e) => ({
+    ...e,
+    path: prefix && e.path === '(body)' ? prefix : e.path,
+  }));
   throw new ValidationError(errors);
 }
 

@@ -7,7 +7,13 @@ export function json(status: number, body: unknown, headers: Record<string, stri
   return { status, body, headers: { 'Content-Type': 'application/json', ...headers } };
 }
 
-export function problem(status: number, code: string, detail: string, extra: Record<string, unknown> = {}, headers: Record<string, string> = {}): Reply {
+export function problem(
+  status: number,
+  code: string,
+  detail: string,
+  extra: Record<string, unknown> = {},
+  headers: Record<string, string> = {},
+): Reply {
   return {
     status,
     body: { type: `/problems/${code}`, title: code, status, detail, ...extra },

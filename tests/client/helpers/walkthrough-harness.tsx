@@ -8,7 +8,10 @@ import { OfflineQueue } from '../../../client/src/lib/offline-queue-runner';
 import { createQueryClient } from '../../../client/src/lib/query-client';
 import { coalesceEdits, type WalkthroughEdit } from '../../../client/src/features/walkthrough/sync/edits';
 import { WalkthroughQueueProvider } from '../../../client/src/features/walkthrough/sync/queue-context';
-import { createPhotoQueue, PhotoQueueProvider } from '../../../client/src/features/walkthrough/sync/photo-queue-context';
+import {
+  createPhotoQueue,
+  PhotoQueueProvider,
+} from '../../../client/src/features/walkthrough/sync/photo-queue-context';
 import { memoryPhotoStorage, type PhotoStorage } from '../../../client/src/features/walkthrough/sync/photo-storage';
 import { createEditSender } from '../../../client/src/features/walkthrough/sync/send-edit';
 import type { RoomView } from '../../../client/src/features/walkthrough/sync/overlay';
@@ -17,14 +20,37 @@ export const JOB_ID = '11111111-1111-4111-8111-111111111111';
 export const ROOM_ID = '22222222-2222-4222-8222-222222222222';
 
 export const designConditions = {
-  outdoorCoolingDryBulbF: 95, outdoorCoolingWetBulbF: 75, outdoorHeatingDryBulbF: 20, indoorCoolingF: 75,
-  indoorHeatingF: 70, indoorCoolingRhPercent: 50, dailyRangeF: 20, elevationFt: 0,
+  outdoorCoolingDryBulbF: 95,
+  outdoorCoolingWetBulbF: 75,
+  outdoorHeatingDryBulbF: 20,
+  indoorCoolingF: 75,
+  indoorHeatingF: 70,
+  indoorCoolingRhPercent: 50,
+  dailyRangeF: 20,
+  elevationFt: 0,
 };
 
 export const bedroomInput = {
-  id: ROOM_ID, name: 'Bedroom 2', floorLevel: 1, lengthFt: 12, widthFt: 10, ceilingHeightFt: 8,
-  exposedWalls: [{ direction: 'W', lengthFt: 10, construction: 'wood-2x4-r13', windows: [{ widthIn: 36, heightIn: 48, count: 1, glazing: 'double-clear', interiorShading: 'none' }], doors: [] }],
-  above: { kind: 'attic', insulation: 'r30' }, below: { kind: 'slab', edgeInsulated: false }, occupants: 2, appliances: [], notes: '',
+  id: ROOM_ID,
+  name: 'Bedroom 2',
+  floorLevel: 1,
+  lengthFt: 12,
+  widthFt: 10,
+  ceilingHeightFt: 8,
+  exposedWalls: [
+    {
+      direction: 'W',
+      lengthFt: 10,
+      construction: 'wood-2x4-r13',
+      windows: [{ widthIn: 36, heightIn: 48, count: 1, glazing: 'double-clear', interiorShading: 'none' }],
+      doors: [],
+    },
+  ],
+  above: { kind: 'attic', insulation: 'r30' },
+  below: { kind: 'slab', edgeInsulated: false },
+  occupants: 2,
+  appliances: [],
+  notes: '',
 } satisfies RoomInput;
 
 export function roomView(input: Record<string, unknown> = bedroomInput, version: number | null = 3): RoomView {
@@ -32,7 +58,16 @@ export function roomView(input: Record<string, unknown> = bedroomInput, version:
 }
 
 export function roomRecord(input: Record<string, unknown>, version: number) {
-  return { id: ROOM_ID, jobId: JOB_ID, position: 0, input, version, createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-01T00:00:00.000Z', photos: [] };
+  return {
+    id: ROOM_ID,
+    jobId: JOB_ID,
+    position: 0,
+    input,
+    version,
+    createdAt: '2026-01-01T00:00:00.000Z',
+    updatedAt: '2026-01-01T00:00:00.000Z',
+    photos: [],
+  };
 }
 
 type Send = (item: QueueItem<WalkthroughEdit>) => Promise<SendResult>;
@@ -46,7 +81,13 @@ export function testQueue(
 ) {
   const storage = memoryQueueStorage<WalkthroughEdit>(stored);
   const sender = send === 'real' ? createEditSender(queryClient) : send;
-  const queue = new OfflineQueue<WalkthroughEdit>({ storage, send: sender, coalesce: coalesceEdits, isOnline: online, retryMs: 0 });
+  const queue = new OfflineQueue<WalkthroughEdit>({
+    storage,
+    send: sender,
+    coalesce: coalesceEdits,
+    isOnline: online,
+    retryMs: 0,
+  });
   return { queue, storage };
 }
 
@@ -66,7 +107,11 @@ export async function renderWalkthrough(ui: ReactNode, options: RenderOptions = 
   const { queue, storage } = testQueue(queryClient, options.send, options.online, options.stored);
   const photoStorage = options.photoStorage ?? memoryPhotoStorage();
   // The photo queue uploads for real (tests mock fetch) and reads the same connection as the edit queue.
-  const photoQueue = createPhotoQueue(queryClient, queue, { storage: photoStorage, isOnline: options.online ?? (() => true), retryMs: 0 });
+  const photoQueue = createPhotoQueue(queryClient, queue, {
+    storage: photoStorage,
+    isOnline: options.online ?? (() => true),
+    retryMs: 0,
+  });
   await queue.start();
   await photoQueue.start();
   const view = render(
@@ -85,11 +130,20 @@ export async function renderWalkthrough(ui: ReactNode, options: RenderOptions = 
 
 export function jobRecord(overrides: Record<string, unknown> = {}) {
   return {
-    id: JOB_ID, status: 'walkthrough' as const, customer: { id: 'c1', name: 'Rowan Example' },
+    id: JOB_ID,
+    status: 'walkthrough' as const,
+    customer: { id: 'c1', name: 'Rowan Example' },
     site: { street: '12 Sample Lane', unit: '', city: 'Testville', region: 'TS', postalCode: '00000' },
-    salesperson: { id: 'u1', name: 'Sam Seller' }, assignedInstaller: null, notes: '',
-    designConditions: designConditions, designSources: {}, tightness: 'average' as const, version: 2,
-    createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-01T00:00:00.000Z', lastActivityAt: '2026-01-01T00:00:00.000Z',
+    salesperson: { id: 'u1', name: 'Sam Seller' },
+    assignedInstaller: null,
+    notes: '',
+    designConditions: designConditions,
+    designSources: {},
+    tightness: 'average' as const,
+    version: 2,
+    createdAt: '2026-01-01T00:00:00.000Z',
+    updatedAt: '2026-01-01T00:00:00.000Z',
+    lastActivityAt: '2026-01-01T00:00:00.000Z',
     ...overrides,
   };
 }

@@ -46,7 +46,13 @@ export default function AppRoot() {
   const features = useMemo<ReadonlySet<Feature>>(() => new Set(outbox ? ['outbox'] : []), [outbox]);
 
   return (
-    <AppShell user={user} companyName={company.name} features={features} signingOut={signOut.isPending} onSignOut={() => signOut.mutate()}>
+    <AppShell
+      user={user}
+      companyName={company.name}
+      features={features}
+      signingOut={signOut.isPending}
+      onSignOut={() => signOut.mutate()}
+    >
       <RoleNotice />
       <ViewerContext.Provider value={viewer}>
         <Suspense fallback={<Spinner />}>

@@ -6,7 +6,9 @@ export default function NotFoundRoute() {
   return (
     <section className="py-8">
       <h1 className="text-2xl font-bold text-ink-900">Page not found</h1>
-      <p className="mt-2 max-w-prose">There is no page at this address. It may have moved, or the link may be incomplete.</p>
+      <p className="mt-2 max-w-prose">
+        There is no page at this address. It may have moved, or the link may be incomplete.
+      </p>
       <Link to={paths.home} className={`${buttonClass('primary')} mt-6`}>
         Go to the start page
       </Link>

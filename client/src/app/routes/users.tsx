@@ -21,7 +21,10 @@ export default function UsersRoute() {
   const { user, company } = useSignedIn();
   return (
     <>
-      <PageHeader title="Users" lead={`Everyone who can sign in to ${company.name}, and what their role lets them do.`} />
+      <PageHeader
+        title="Users"
+        lead={`Everyone who can sign in to ${company.name}, and what their role lets them do.`}
+      />
       <div className="flex flex-col gap-6">
         <Card title="People">
           <QueryWidgetBoundary name="the list of users">

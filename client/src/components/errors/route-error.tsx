@@ -5,15 +5,25 @@ import { buttonClass } from '../ui/button';
 
 function describe(error: unknown): { title: string; detail: string; signIn: boolean } {
   if (isApiError(error)) {
-    if (error.status === 401) return { title: 'Your session has ended', detail: 'Sign in again to carry on where you were.', signIn: true };
+    if (error.status === 401)
+      return { title: 'Your session has ended', detail: 'Sign in again to carry on where you were.', signIn: true };
     if (error.status === 403) return { title: 'Not available to your role', detail: error.detail, signIn: false };
-    if (error.status === 404) return { title: 'Not found', detail: 'This record does not exist, or it belongs to another company.', signIn: false };
+    if (error.status === 404)
+      return {
+        title: 'Not found',
+        detail: 'This record does not exist, or it belongs to another company.',
+        signIn: false,
+      };
     return { title: error.title, detail: error.detail, signIn: false };
   }
   if (isRouteErrorResponse(error) && error.status === 404) {
     return { title: 'Page not found', detail: 'There is no page at this address.', signIn: false };
   }
-  return { title: 'This page stopped working', detail: 'Something went wrong while showing it. Reload to try again; what you saved is safe.', signIn: false };
+  return {
+    title: 'This page stopped working',
+    detail: 'Something went wrong while showing it. Reload to try again; what you saved is safe.',
+    signIn: false,
+  };
 }
 
 /** errorElement for every route: says what happened and offers the way back. */

@@ -20,7 +20,10 @@ export function AppShell({ user, companyName, features, onSignOut, signingOut, c
   const [menuOpen, setMenuOpen] = useState(false);
   return (
     <div className="min-h-dvh bg-paper">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-3">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-3"
+      >
         Skip to content
       </a>
       <header
@@ -31,7 +34,11 @@ export function AppShell({ user, companyName, features, onSignOut, signingOut, c
       >
         <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">
           {/* Phone: mark + buttons, then who is signed in, then the opened menu. Desktop: one row. */}
-          <Link to={paths.home} className="order-1 flex min-h-touch items-center rounded-md" aria-label="Gaugeline, start page">
+          <Link
+            to={paths.home}
+            className="order-1 flex min-h-touch items-center rounded-md"
+            aria-label="Gaugeline, start page"
+          >
             <Wordmark inverse />
           </Link>
           <MainNav
@@ -42,7 +49,9 @@ export function AppShell({ user, companyName, features, onSignOut, signingOut, c
             className={`order-4 w-full pb-2 md:order-2 md:block md:w-auto md:pb-0 ${menuOpen ? 'block' : 'hidden'}`}
           />
           <p className="order-3 w-full border-t border-ink-700 pt-1 leading-tight md:order-3 md:ml-auto md:w-auto md:border-0 md:pt-0 md:text-right">
-            <span data-testid="user-name" className="font-semibold md:block">{user.name}</span>
+            <span data-testid="user-name" className="font-semibold md:block">
+              {user.name}
+            </span>
             <span className="text-sm text-ink-200 md:block">
               <span className="md:hidden"> · </span>
               {roleLabels[user.role]} · {companyName}
@@ -61,7 +70,12 @@ export function AppShell({ user, companyName, features, onSignOut, signingOut, c
             >
               <span className="sr-only">Menu</span>
               <svg aria-hidden="true" viewBox="0 0 24 24" className="size-6">
-                <path d={menuOpen ? 'M6 6l12 12M18 6 6 18' : 'M4 7h16M4 12h16M4 17h16'} stroke="currentColor" strokeWidth="2" strokeLinecap="round" />
+                <path
+                  d={menuOpen ? 'M6 6l12 12M18 6 6 18' : 'M4 7h16M4 12h16M4 17h16'}
+                  stroke="currentColor"
+                  strokeWidth="2"
+                  strokeLinecap="round"
+                />
               </svg>
             </button>
           </div>

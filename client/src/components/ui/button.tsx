@@ -17,10 +17,29 @@ export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   busy?: boolean;
 }
 
-export function Button({ variant = 'primary', busy = false, className = '', type = 'button', disabled, children, ...rest }: ButtonProps) {
+export function Button({
+  variant = 'primary',
+  busy = false,
+  className = '',
+  type = 'button',
+  disabled,
+  children,
+  ...rest
+}: ButtonProps) {
   return (
-    <button type={type} className={buttonClass(variant, className)} disabled={disabled || busy} aria-busy={busy || undefined} {...rest}>
-      {busy ? <span aria-hidden="true" className="size-4 animate-spin rounded-full border-2 border-current border-r-transparent" /> : null}
+    <button
+      type={type}
+      className={buttonClass(variant, className)}
+      disabled={disabled || busy}
+      aria-busy={busy || undefined}
+      {...rest}
+    >
+      {busy ? (
+        <span
+          aria-hidden="true"
+          className="size-4 animate-spin rounded-full border-2 border-current border-r-transparent"
+        />
+      ) : null}
       {children}
     </button>
   );

@@ -6,7 +6,17 @@ interface Classes {
 }
 
 /** The header rows of a TanStack table; each feature keeps its own columns and layout. */
-export function DataTableHead<T>({ table, className, rowClassName, cellClassName }: { table: Table<T>; className?: string; rowClassName?: string; cellClassName?: string }) {
+export function DataTableHead<T>({
+  table,
+  className,
+  rowClassName,
+  cellClassName,
+}: {
+  table: Table<T>;
+  className?: string;
+  rowClassName?: string;
+  cellClassName?: string;
+}) {
   return (
     <thead className={className}>
       {table.getHeaderGroups().map((hg) => (

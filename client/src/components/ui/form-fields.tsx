@@ -20,7 +20,11 @@ function FieldShell({ id, label, hint, error, children }: FieldShellProps) {
         {label}
       </label>
       {children}
-      {hint ? <p id={`${id}-hint`} className="text-sm text-muted">{hint}</p> : null}
+      {hint ? (
+        <p id={`${id}-hint`} className="text-sm text-muted">
+          {hint}
+        </p>
+      ) : null}
       {error ? (
         <p id={`${id}-error`} className="text-sm font-semibold text-danger">
           {error}
@@ -35,10 +39,19 @@ function useField(name: string, hasHint: boolean) {
   const { register, getFieldState, formState } = useFormContext();
   const error = getFieldState(name, formState).error?.message;
   const describedBy = [error ? `${id}-error` : '', hasHint ? `${id}-hint` : ''].filter(Boolean).join(' ');
-  return { id, register, error, aria: { 'aria-invalid': error ? true : undefined, 'aria-describedby': describedBy || undefined } };
+  return {
+    id,
+    register,
+    error,
+    aria: { 'aria-invalid': error ? true : undefined, 'aria-describedby': describedBy || undefined },
+  };
 }
 
-type TextInputProps = Omit<InputHTMLAttributes<HTMLInputElement>, 'name' | 'id'> & { name: string; label: string; hint?: ReactNode };
+type TextInputProps = Omit<InputHTMLAttributes<HTMLInputElement>, 'name' | 'id'> & {
+  name: string;
+  label: string;
+  hint?: ReactNode;
+};
 
 export function TextField({ name, label, hint, type = 'text', ...rest }: TextInputProps) {
   const { id, register, error, aria } = useField(name, hint !== undefined);
@@ -55,10 +68,21 @@ export function TextField({ name, label, hint, type = 'text', ...rest }: TextInp
  */
 export function NumberField({ name, label, hint, decimals = true, ...rest }: TextInputProps & { decimals?: boolean }) {
   const { id, register, error, aria } = useField(name, hint !== undefined);
-  const options: RegisterOptions = { setValueAs: (v: unknown) => (v === '' || v === undefined || v === null ? undefined : Number(v)) };
+  const options: RegisterOptions = {
+    setValueAs: (v: unknown) => (v === '' || v === undefined || v === null ? undefined : Number(v)),
+  };
   return (
     <FieldShell id={id} label={label} hint={hint} error={error}>
-      <input id={id} type="text" inputMode={decimals ? 'decimal' : 'numeric'} autoComplete="off" className={inputClass} {...aria} {...rest} {...register(name, options)} />
+      <input
+        id={id}
+        type="text"
+        inputMode={decimals ? 'decimal' : 'numeric'}
+        autoComplete="off"
+        className={inputClass}
+        {...aria}
+        {...rest}
+        {...register(name, options)}
+      />
     </FieldShell>
   );
 }

@@ -1,6 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState, type ReactNode } from 'react';
-import { FormProvider, useForm, type DefaultValues, type FieldValues, type Path, type UseFormReturn } from 'react-hook-form';
+import {
+  FormProvider,
+  useForm,
+  type DefaultValues,
+  type FieldValues,
+  type Path,
+  type UseFormReturn,
+} from 'react-hook-form';
 import type { z } from 'zod';
 import { isApiError, type FieldError } from '../../lib/api-error';
 import { Alert } from './alert';
@@ -35,7 +42,15 @@ function isPath<T extends FieldValues>(known: ReadonlySet<string>, p: string): p
   return known.has(p);
 }
 
-export function Form<S extends Schema>({ schema, defaultValues, onSubmit, children, className = '', resetOnSuccess = false, ...aria }: FormProps<S>) {
+export function Form<S extends Schema>({
+  schema,
+  defaultValues,
+  onSubmit,
+  children,
+  className = '',
+  resetOnSuccess = false,
+  ...aria
+}: FormProps<S>) {
   const form = useForm<z.input<S>, unknown, z.output<S>>({ resolver: zodResolver(schema), defaultValues });
   const [unplaced, setUnplaced] = useState<FieldError[]>([]);
 

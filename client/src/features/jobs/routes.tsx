@@ -27,7 +27,10 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
     // Starting the queue replays what an earlier visit left waiting.
     sharedWalkthroughQueue(queryClient);
     void queryClient.prefetchQuery(companySettingsQueryOptions());
-    await Promise.all([queryClient.ensureQueryData(jobQueryOptions(jobId)), queryClient.ensureQueryData(roomsQueryOptions(jobId))]);
+    await Promise.all([
+      queryClient.ensureQueryData(jobQueryOptions(jobId)),
+      queryClient.ensureQueryData(roomsQueryOptions(jobId)),
+    ]);
     return null;
   };
   return [

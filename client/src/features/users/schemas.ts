@@ -3,7 +3,11 @@ import { ROLES } from '../../config/roles';
 import { userSchema } from '../../types/user';
 
 // Same rules and wording as the server's user.schema.ts (client never imports server code).
-const nameSchema = z.string().trim().min(1, { message: 'Enter a name.' }).max(120, { message: 'Name must be at most 120 characters.' });
+const nameSchema = z
+  .string()
+  .trim()
+  .min(1, { message: 'Enter a name.' })
+  .max(120, { message: 'Name must be at most 120 characters.' });
 
 export const createUserSchema = z.object({
   name: nameSchema,

@@ -19,7 +19,9 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter): void {
     path: '/login',
     policy: PUBLIC,
     body: loginSchema,
-    handler: async ({ em, req, body, services }) => ({ user: presentUser(await signIn(em, req, limiter, services.clock, body)) }),
+    handler: async ({ em, req, body, services }) => ({
+      user: presentUser(await signIn(em, req, limiter, services.clock, body)),
+    }),
   });
 
   api.route({
@@ -39,7 +41,10 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter): void {
     policy: ANY_STAFF,
     handler: async ({ actor, em }) => {
       const user = await em.findOneOrFail(UserSchema, { id: actor.userId }, { populate: ['company'] });
-      return { user: presentUser(user), company: { id: user.company.id, name: user.company.name, unitSystem: user.company.unitSystem } };
+      return {
+        user: presentUser(user),
+        company: { id: user.company.id, name: user.company.name, unitSystem: user.company.unitSystem },
+      };
     },
   });
 }

@@ -16,5 +16,8 @@ export const newPasswordSchema = z
 export const loginSchema = z.strictObject({
   email: emailSchema,
   // Over-long passwords are refused before any hashing work.
-  password: z.string({ message: 'Enter your password.' }).min(1, { message: 'Enter your password.' }).max(512, { message: 'Password is too long.' }),
+  password: z
+    .string({ message: 'Enter your password.' })
+    .min(1, { message: 'Enter your password.' })
+    .max(512, { message: 'Password is too long.' }),
 });

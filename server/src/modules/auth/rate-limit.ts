@@ -8,11 +8,23 @@ import { RateLimitedError } from '../../lib/errors';
  * from a migration), so the limit holds across server processes.
  */
 export function createLoginLimiter(config: Config, pool: pg.Pool) {
-  const common = { storeClient: pool, storeType: 'pool', tableName: 'rate_limit', tableCreated: true, duration: config.LOGIN_WINDOW_SECONDS, clearExpiredByTimeout: false };
-  const perAccount = new RateLimiterPostgres({ ...common, keyPrefix: 'login_acct', points: config.LOGIN_MAX_PER_ACCOUNT });
+  const common = {
+    storeClient: pool,
+    storeType: 'pool',
+    tableName: 'rate_limit',
+    tableCreated: true,
+    duration: config.LOGIN_WINDOW_SECONDS,
+    clearExpiredByTimeout: false,
+  };
+  const perAccount = new RateLimiterPostgres({
+    ...common,
+    keyPrefix: 'login_acct',
+    points: config.LOGIN_MAX_PER_ACCOUNT,
+  });
   const perIp = new RateLimiterPostgres({ ...common, keyPrefix: 'login_ip', points: config.LOGIN_MAX_PER_IP });
 
-  const blockedFor = (r: RateLimiterRes | null, max: number) => (r && r.consumedPoints >= max ? Math.max(1, Math.ceil(r.msBeforeNext / 1000)) : 0);
+  const blockedFor = (r: RateLimiterRes | null, max: number) =>
+    r && r.consumedPoints >= max ? Math.max(1, Math.ceil(r.msBeforeNext / 1000)) : 0;
 
   return {
     async assertAllowed(email: string, ip: string): Promise<void> {

@@ -6,11 +6,17 @@ export const CompanySchema = defineEntity({
   name: 'Company',
   tableName: 'company',
   properties: {
-    id: p.uuid().primary().onCreate(() => randomUUID()),
+    id: p
+      .uuid()
+      .primary()
+      .onCreate(() => randomUUID()),
     name: p.string().length(160),
     unitSystem: p.enum(['imperial', 'metric']).default('imperial'),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 

@@ -8,12 +8,18 @@ export const CompanySettingsSchema = defineEntity({
   name: 'CompanySettings',
   tableName: 'company_settings',
   properties: {
-    id: p.uuid().primary().onCreate(() => randomUUID()),
+    id: p
+      .uuid()
+      .primary()
+      .onCreate(() => randomUUID()),
     company: p.manyToOne(CompanySchema).unique(),
     /** Prefills new jobs' design conditions; null until the owner sets them. */
     defaultDesignConditions: p.json<DesignConditions>().nullable(),
     version: p.integer().version(),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 

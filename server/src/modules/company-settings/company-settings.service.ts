@@ -26,15 +26,30 @@ export async function companyDesignDefaults(em: EntityManager, companyId: string
   return row?.defaultDesignConditions ?? null;
 }
 
-export async function putCompanySettings(em: EntityManager, actor: Actor, version: number, input: PutCompanySettingsInput): Promise<SettingsView> {
+export async function putCompanySettings(
+  em: EntityManager,
+  actor: Actor,
+  version: number,
+  input: PutCompanySettingsInput,
+): Promise<SettingsView> {
   const company = await em.findOne(CompanySchema, { id: actor.companyId });
   if (!company) throw new NotFoundError('The company');
   const existing = await em.findOne(CompanySettingsSchema, { company: actor.companyId });
-  const current = { unitSystem: company.unitSystem, defaultDesignConditions: existing?.defaultDesignConditions ?? null, version: existing?.version ?? 0, updatedAt: existing?.updatedAt ?? null };
+  const current = {
+    unitSystem: company.unitSystem,
+    defaultDesignConditions: existing?.defaultDesignConditions ?? null,
+    version: existing?.version ?? 0,
+    updatedAt: existing?.updatedAt ?? null,
+  };
   assertVersion(version, current.version, 'The company settings', () => presentCompanySettings(current));
   const row = existing ?? em.create(CompanySettingsSchema, { company, defaultDesignConditions: null });
   row.defaultDesignConditions = input.defaultDesignConditions;
   company.unitSystem = input.unitSystem;
   await em.flush();
-  return { unitSystem: company.unitSystem, defaultDesignConditions: row.defaultDesignConditions ?? null, version: row.version, updatedAt: row.updatedAt };
+  return {
+    unitSystem: company.unitSystem,
+    defaultDesignConditions: row.defaultDesignConditions ?? null,
+    version: row.version,
+    updatedAt: row.updatedAt,
+  };
 }

@@ -7,14 +7,20 @@ export const CustomerSchema = defineEntity({
   name: 'Customer',
   tableName: 'customer',
   properties: {
-    id: p.uuid().primary().onCreate(() => randomUUID()),
+    id: p
+      .uuid()
+      .primary()
+      .onCreate(() => randomUUID()),
     company: p.manyToOne(CompanySchema).index(),
     name: p.string().length(160),
     email: p.string().length(254).nullable(),
     phone: p.string().length(40).nullable(),
     notes: p.text().default(''),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 

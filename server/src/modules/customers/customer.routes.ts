@@ -39,7 +39,9 @@ export function customerRoutes(api: ApiRouter): void {
     policy: SELLERS,
     params: customerIdParams,
     body: updateCustomerSchema,
-    handler: async ({ em, actor, params, body }) => ({ customer: presentCustomer(await updateCustomer(em, actor, params.id, body)) }),
+    handler: async ({ em, actor, params, body }) => ({
+      customer: presentCustomer(await updateCustomer(em, actor, params.id, body)),
+    }),
   });
   api.route({
     method: 'delete',

@@ -4,12 +4,24 @@ import type { Actor } from '../../lib/route';
 import { CompanySchema } from '../companies/company.entity';
 import { JobSchema } from '../jobs/job.entity';
 import { CustomerSchema, type Customer } from './customer.entity';
-import { likePattern, type CreateCustomerInput, type ListCustomersQuery, type UpdateCustomerInput } from './customer.schema';
+import {
+  likePattern,
+  type CreateCustomerInput,
+  type ListCustomersQuery,
+  type UpdateCustomerInput,
+} from './customer.schema';
 
-export async function listCustomers(em: EntityManager, actor: Actor, q: ListCustomersQuery): Promise<{ items: Customer[]; total: number }> {
+export async function listCustomers(
+  em: EntityManager,
+  actor: Actor,
+  q: ListCustomersQuery,
+): Promise<{ items: Customer[]; total: number }> {
   const pat = q.search ? likePattern(q.search) : undefined;
   const where = pat
-    ? { company: actor.companyId, $or: [{ name: { $ilike: pat } }, { email: { $ilike: pat } }, { phone: { $ilike: pat } }] }
+    ? {
+        company: actor.companyId,
+        $or: [{ name: { $ilike: pat } }, { email: { $ilike: pat } }, { phone: { $ilike: pat } }],
+      }
     : { company: actor.companyId };
   const [items, total] = await em.findAndCount(CustomerSchema, where, {
     orderBy: { name: 'asc', id: 'asc' },
@@ -37,7 +49,12 @@ export async function createCustomer(em: EntityManager, actor: Actor, input: Cre
   return c;
 }
 
-export async function updateCustomer(em: EntityManager, actor: Actor, id: string, input: UpdateCustomerInput): Promise<Customer> {
+export async function updateCustomer(
+  em: EntityManager,
+  actor: Actor,
+  id: string,
+  input: UpdateCustomerInput,
+): Promise<Customer> {
   const c = await getCustomer(em, actor, id);
   if (input.name !== undefined) c.name = input.name;
   if (input.email !== undefined) c.email = input.email;
@@ -50,7 +67,8 @@ export async function updateCustomer(em: EntityManager, actor: Actor, id: string
 /** A customer with jobs stays: the jobs (and later proposals) need who they were for. */
 export async function deleteCustomer(em: EntityManager, actor: Actor, id: string): Promise<void> {
   const c = await getCustomer(em, actor, id);
-  if (await em.count(JobSchema, { customer: c.id })) throw new ConflictError('This customer has jobs; it cannot be deleted.');
+  if (await em.count(JobSchema, { customer: c.id }))
+    throw new ConflictError('This customer has jobs; it cannot be deleted.');
   em.remove(c);
   await em.flush();
 }

@@ -7,8 +7,15 @@ export type DesignField = Exclude<keyof DesignConditions, 'source'>;
 
 /** Every numeric design value, in calc's order. `satisfies` keeps it in step with calc's schema. */
 export const DESIGN_FIELDS = [
-  'outdoorCoolingDryBulbF', 'outdoorCoolingWetBulbF', 'outdoorCoolingGrains', 'outdoorHeatingDryBulbF',
-  'indoorCoolingF', 'indoorHeatingF', 'indoorCoolingRhPercent', 'dailyRangeF', 'elevationFt',
+  'outdoorCoolingDryBulbF',
+  'outdoorCoolingWetBulbF',
+  'outdoorCoolingGrains',
+  'outdoorHeatingDryBulbF',
+  'indoorCoolingF',
+  'indoorHeatingF',
+  'indoorCoolingRhPercent',
+  'dailyRangeF',
+  'elevationFt',
 ] as const satisfies readonly DesignField[];
 
 /**
@@ -22,8 +29,15 @@ export type DesignSources = Partial<Record<DesignField, { source: DesignValueSou
 const value = z.number({ error: 'Enter a number' }).optional();
 /** What the person typed; omitted fields fall back to the company default. calc applies the bounds. */
 export const enteredDesignSchema = z.strictObject({
-  outdoorCoolingDryBulbF: value, outdoorCoolingWetBulbF: value, outdoorCoolingGrains: value, outdoorHeatingDryBulbF: value,
-  indoorCoolingF: value, indoorHeatingF: value, indoorCoolingRhPercent: value, dailyRangeF: value, elevationFt: value,
+  outdoorCoolingDryBulbF: value,
+  outdoorCoolingWetBulbF: value,
+  outdoorCoolingGrains: value,
+  outdoorHeatingDryBulbF: value,
+  indoorCoolingF: value,
+  indoorHeatingF: value,
+  indoorCoolingRhPercent: value,
+  dailyRangeF: value,
+  elevationFt: value,
   source: z.string().trim().max(200, { message: 'Source must be at most 200 characters' }).optional(),
 });
 export type EnteredDesign = z.output<typeof enteredDesignSchema>;
@@ -55,7 +69,9 @@ export function resolveDesignConditions(
   const source = entered.source ?? companyDefault?.source;
   const parsed = designConditionsSchema.safeParse({ ...candidate, ...(source ? { source } : {}) });
   if (!parsed.success) {
-    throw new ValidationError(zodToFieldErrors(parsed.error).map((e) => ({ ...e, path: `designConditions.${e.path}` })));
+    throw new ValidationError(
+      zodToFieldErrors(parsed.error).map((e) => ({ ...e, path: `designConditions.${e.path}` })),
+    );
   }
   const sources: DesignSources = {};
   for (const f of DESIGN_FIELDS) {

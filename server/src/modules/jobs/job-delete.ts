@@ -14,7 +14,9 @@ export const DELETABLE_STATUSES: readonly JobStatus[] = ['walkthrough', 'design'
 
 function notDeletable(status: JobStatus): ConflictError {
   const instead = status === 'proposed' ? 'mark it lost instead' : 'won, lost and installed jobs stay for the reports';
-  return new ConflictError(`Only a job still in walk-through or design can be deleted (this one is ${status}); ${instead}.`);
+  return new ConflictError(
+    `Only a job still in walk-through or design can be deleted (this one is ${status}); ${instead}.`,
+  );
 }
 
 /**
@@ -23,7 +25,13 @@ function notDeletable(status: JobStatus): ConflictError {
  * Photos, then rooms, then the job, so a photo upload racing this waits on its room instead of
  * deadlocking on the job row; the job goes only at the version the person saw.
  */
-export async function deleteJob(em: EntityManager, actor: Actor, storage: Storage, id: string, version: number): Promise<void> {
+export async function deleteJob(
+  em: EntityManager,
+  actor: Actor,
+  storage: Storage,
+  id: string,
+  version: number,
+): Promise<void> {
   const keys = await em.transactional(async (tx) => {
     const job = await findJob(tx, actor, id);
     assertVersion(version, job.version, 'The job', () => presentJob(job));
@@ -33,7 +41,9 @@ export async function deleteJob(em: EntityManager, actor: Actor, storage: Storag
     await tx.nativeDelete(RoomSchema, { job: job.id });
     // A change saved since the read above (status, details) bumped the version: refuse rather than delete it unseen.
     if ((await tx.nativeDelete(JobSchema, { id: job.id, version })) === 0) {
-      throw new ConflictError('The job was changed by someone else while it was being deleted. Reload it and try again.');
+      throw new ConflictError(
+        'The job was changed by someone else while it was being deleted. Reload it and try again.',
+      );
     }
     return photos.map((p) => p.storageKey);
   });

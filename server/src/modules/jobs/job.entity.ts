@@ -15,7 +15,10 @@ export const JobSchema = defineEntity({
   name: 'Job',
   tableName: 'job',
   properties: {
-    id: p.uuid().primary().onCreate(() => randomUUID()),
+    id: p
+      .uuid()
+      .primary()
+      .onCreate(() => randomUUID()),
     company: p.manyToOne(CompanySchema).index(),
     customer: p.manyToOne(CustomerSchema).index(),
     /** The salesperson who owns the job; a salesperson sees only their own. */
@@ -35,7 +38,10 @@ export const JobSchema = defineEntity({
     tightness: p.enum([...TIGHTNESS]).default('average'),
     version: p.integer().version(),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
     /** Bumped by any change to the job, its rooms or photos: the jobs list sorts on it (index (company_id, last_activity_at desc) in the migration). */
     lastActivityAt: p.datetime().onCreate(() => new Date()),
   },

@@ -26,19 +26,34 @@ export const TRANSITIONS: Record<JobStatus, readonly JobStatus[]> = {
 
 const isOffice = (a: Actor) => a.role === 'owner' || a.role === 'estimator';
 
-export async function listJobs(em: EntityManager, actor: Actor, q: ListJobsQuery): Promise<{ items: Job[]; total: number }> {
+export async function listJobs(
+  em: EntityManager,
+  actor: Actor,
+  q: ListJobsQuery,
+): Promise<{ items: Job[]; total: number }> {
   const filters: object[] = [jobScope(actor)];
   if (q.status) filters.push({ status: q.status });
   if (q.search) {
     const pat = likePattern(q.search);
-    filters.push({ $or: [{ customer: { name: { $ilike: pat } } }, { street: { $ilike: pat } }, { city: { $ilike: pat } }, { postalCode: { $ilike: pat } }] });
+    filters.push({
+      $or: [
+        { customer: { name: { $ilike: pat } } },
+        { street: { $ilike: pat } },
+        { city: { $ilike: pat } },
+        { postalCode: { $ilike: pat } },
+      ],
+    });
   }
-  const [items, total] = await em.findAndCount(JobSchema, { $and: filters }, {
-    populate: JOB_POPULATE,
-    orderBy: { lastActivityAt: 'desc', id: 'asc' },
-    limit: q.pageSize,
-    offset: (q.page - 1) * q.pageSize,
-  });
+  const [items, total] = await em.findAndCount(
+    JobSchema,
+    { $and: filters },
+    {
+      populate: JOB_POPULATE,
+      orderBy: { lastActivityAt: 'desc', id: 'asc' },
+      limit: q.pageSize,
+      offset: (q.page - 1) * q.pageSize,
+    },
+  );
   return { items, total };
 }
 
@@ -50,9 +65,18 @@ async function customerOf(em: EntityManager, actor: Actor, id: string): Promise<
 
 async function salespersonOf(em: EntityManager, actor: Actor, id: string | undefined): Promise<User> {
   const wanted = id ?? actor.userId;
-  if (actor.role === 'salesperson' && wanted !== actor.userId) throw new ForbiddenError('A salesperson can only own their own jobs.');
-  const u = await em.findOne(UserSchema, { id: wanted, company: actor.companyId, active: true, role: { $in: ['salesperson', 'estimator', 'owner'] } });
-  if (!u) throw new ValidationError([{ path: 'salespersonId', message: 'Choose an active salesperson, estimator or owner of your company.' }]);
+  if (actor.role === 'salesperson' && wanted !== actor.userId)
+    throw new ForbiddenError('A salesperson can only own their own jobs.');
+  const u = await em.findOne(UserSchema, {
+    id: wanted,
+    company: actor.companyId,
+    active: true,
+    role: { $in: ['salesperson', 'estimator', 'owner'] },
+  });
+  if (!u)
+    throw new ValidationError([
+      { path: 'salespersonId', message: 'Choose an active salesperson, estimator or owner of your company.' },
+    ]);
   return u;
 }
 
@@ -60,18 +84,23 @@ async function installerOf(em: EntityManager, actor: Actor, id: string | null): 
   if (!isOffice(actor)) throw new ForbiddenError('Only an owner or estimator assigns installers.');
   if (id === null) return null;
   const u = await em.findOne(UserSchema, { id, company: actor.companyId, active: true, role: 'installer' });
-  if (!u) throw new ValidationError([{ path: 'assignedInstallerId', message: 'Choose an active installer of your company.' }]);
+  if (!u)
+    throw new ValidationError([
+      { path: 'assignedInstallerId', message: 'Choose an active installer of your company.' },
+    ]);
   return u;
 }
 
 export async function createJob(em: EntityManager, actor: Actor, clock: Clock, input: CreateJobInput): Promise<Job> {
   const customer = await customerOf(em, actor, input.customerId);
   const salesperson = await salespersonOf(em, actor, input.salespersonId);
-  const installer = input.assignedInstallerId === undefined ? null : await installerOf(em, actor, input.assignedInstallerId);
+  const installer =
+    input.assignedInstallerId === undefined ? null : await installerOf(em, actor, input.assignedInstallerId);
   const defaults = await companyDesignDefaults(em, actor.companyId);
-  const design = input.designConditions || defaults
-    ? resolveDesignConditions(input.designConditions ?? {}, input.designSourceNotes ?? {}, defaults)
-    : null;
+  const design =
+    input.designConditions || defaults
+      ? resolveDesignConditions(input.designConditions ?? {}, input.designSourceNotes ?? {}, defaults)
+      : null;
   const now = clock.now();
   const job = em.create(JobSchema, {
     company: em.getReference(CompanySchema, actor.companyId),
@@ -94,19 +123,29 @@ export async function createJob(em: EntityManager, actor: Actor, clock: Clock, i
   return job;
 }
 
-export async function updateJob(em: EntityManager, actor: Actor, clock: Clock, id: string, version: number, input: UpdateJobInput): Promise<Job> {
+export async function updateJob(
+  em: EntityManager,
+  actor: Actor,
+  clock: Clock,
+  id: string,
+  version: number,
+  input: UpdateJobInput,
+): Promise<Job> {
   const job = await findJob(em, actor, id);
   assertVersion(version, job.version, 'The job', () => presentJob(job));
   const from: JobStatus = job.status;
   if (input.status !== undefined && input.status !== from) {
     if (!TRANSITIONS[from].includes(input.status)) {
-      throw new UnprocessableError(`A job cannot move from ${from} to ${input.status}.`, { errors: [{ path: 'status', message: `Allowed next states: ${TRANSITIONS[from].join(', ') || 'none'}.` }] });
+      throw new UnprocessableError(`A job cannot move from ${from} to ${input.status}.`, {
+        errors: [{ path: 'status', message: `Allowed next states: ${TRANSITIONS[from].join(', ') || 'none'}.` }],
+      });
     }
     job.status = input.status;
   }
   if (input.customerId !== undefined) job.customer = await customerOf(em, actor, input.customerId);
   if (input.salespersonId !== undefined) job.salesperson = await salespersonOf(em, actor, input.salespersonId);
-  if (input.assignedInstallerId !== undefined) job.assignedInstaller = await installerOf(em, actor, input.assignedInstallerId);
+  if (input.assignedInstallerId !== undefined)
+    job.assignedInstaller = await installerOf(em, actor, input.assignedInstallerId);
   if (input.street !== undefined) job.street = input.street;
   if (input.unit !== undefined) job.unit = input.unit;
   if (input.city !== undefined) job.city = input.city;

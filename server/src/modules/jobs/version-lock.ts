@@ -11,10 +11,15 @@ import { ConflictError, PreconditionRequiredError, ValidationError } from '../..
 export function ifMatchVersion(req: Request): number {
   const header = req.get('If-Match');
   if (header === undefined || header.trim() === '') {
-    throw new PreconditionRequiredError('Send the version you edited in an If-Match header, for example If-Match: "3".');
+    throw new PreconditionRequiredError(
+      'Send the version you edited in an If-Match header, for example If-Match: "3".',
+    );
   }
   const m = /^\s*(?:W\/)?"(\d{1,9})"\s*$/.exec(header);
-  if (!m) throw new ValidationError([{ path: 'If-Match', message: 'If-Match must be the quoted version number, for example "3".' }]);
+  if (!m)
+    throw new ValidationError([
+      { path: 'If-Match', message: 'If-Match must be the quoted version number, for example "3".' },
+    ]);
   return Number(m[1]);
 }
 

@@ -14,7 +14,14 @@ export function loadsRoutes(api: ApiRouter): void {
     handler: async ({ em, actor, params: p }) => {
       const r = await jobLoads(em, actor, p.id);
       // calc's result is plain JSON by contract, so it is sent as calc made it.
-      return { jobId: r.job.id, jobVersion: r.job.version, tightness: r.job.tightness, designConditions: r.home.designConditions, loads: r.load, warnings: r.warnings };
+      return {
+        jobId: r.job.id,
+        jobVersion: r.job.version,
+        tightness: r.job.tightness,
+        designConditions: r.home.designConditions,
+        loads: r.load,
+        warnings: r.warnings,
+      };
     },
   });
 }

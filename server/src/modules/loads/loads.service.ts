@@ -1,5 +1,12 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { designConditionsWarnings, homeLoad, roomPlausibilityWarnings, type HomeInput, type HomeLoad, type PlausibilityWarning } from '@calc';
+import {
+  designConditionsWarnings,
+  homeLoad,
+  roomPlausibilityWarnings,
+  type HomeInput,
+  type HomeLoad,
+  type PlausibilityWarning,
+} from '@calc';
 import { UnprocessableError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
 import { findJob } from '../jobs/job-access';
@@ -25,11 +32,22 @@ export async function jobLoads(em: EntityManager, actor: Actor, jobId: string): 
       errors: [{ path: 'designConditions', message: 'Design conditions are missing.' }],
     });
   }
-  const rows = await em.find(RoomSchema, { job: job.id }, { orderBy: { position: 'asc', createdAt: 'asc', id: 'asc' } });
+  const rows = await em.find(
+    RoomSchema,
+    { job: job.id },
+    { orderBy: { position: 'asc', createdAt: 'asc', id: 'asc' } },
+  );
   if (rows.length === 0) {
-    throw new UnprocessableError('Add at least one room before the loads can be worked out.', { errors: [{ path: 'rooms', message: 'Add at least one room.' }] });
+    throw new UnprocessableError('Add at least one room before the loads can be worked out.', {
+      errors: [{ path: 'rooms', message: 'Add at least one room.' }],
+    });
   }
-  const home: HomeInput = { id: job.id, designConditions: conditions, tightness: job.tightness, rooms: rows.map((r) => r.input) };
+  const home: HomeInput = {
+    id: job.id,
+    designConditions: conditions,
+    tightness: job.tightness,
+    rooms: rows.map((r) => r.input),
+  };
   const load = homeLoad({ home });
   const rooms: Record<string, PlausibilityWarning[]> = {};
   for (const r of rows) rooms[r.id] = roomPlausibilityWarnings(r.input);

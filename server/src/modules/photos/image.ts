@@ -24,10 +24,14 @@ export interface CleanPhoto {
 export async function cleanPhoto(input: Buffer): Promise<CleanPhoto> {
   const type = await fileTypeFromBuffer(input);
   if (type && HEIC.has(type.mime)) {
-    throw new UnsupportedMediaTypeError('HEIC photos are not accepted yet. Save or share the photo as JPEG and upload that.');
+    throw new UnsupportedMediaTypeError(
+      'HEIC photos are not accepted yet. Save or share the photo as JPEG and upload that.',
+    );
   }
   if (!type || !ACCEPTED.has(type.mime)) {
-    throw new UnsupportedMediaTypeError('This file is not a JPEG, PNG or WebP photo (its content was checked, not its name). Upload a photo in one of those formats.');
+    throw new UnsupportedMediaTypeError(
+      'This file is not a JPEG, PNG or WebP photo (its content was checked, not its name). Upload a photo in one of those formats.',
+    );
   }
   let meta: sharp.Metadata;
   try {

@@ -8,7 +8,10 @@ export const PhotoSchema = defineEntity({
   name: 'Photo',
   tableName: 'photo',
   properties: {
-    id: p.uuid().primary().onCreate(() => randomUUID()),
+    id: p
+      .uuid()
+      .primary()
+      .onCreate(() => randomUUID()),
     room: p.manyToOne(RoomSchema).deleteRule('cascade').index(),
     storageKey: p.uuid().unique(),
     contentType: p.string().length(40),

@@ -19,7 +19,12 @@ export interface PhotoIds {
 
 /** Cleans the image, stores the bytes under a fresh uuid, then records the row (removing the file if that fails). */
 export async function addPhoto(
-  em: EntityManager, actor: Actor, clock: Clock, storage: Storage, ids: PhotoIds, file: { buffer: Buffer; originalname: string },
+  em: EntityManager,
+  actor: Actor,
+  clock: Clock,
+  storage: Storage,
+  ids: PhotoIds,
+  file: { buffer: Buffer; originalname: string },
 ): Promise<Photo> {
   const { job, room } = await findRoom(em, actor, ids.jobId, ids.roomId);
   if ((await em.count(PhotoSchema, { room: room.id })) >= MAX_PHOTOS_PER_ROOM) {
@@ -63,7 +68,13 @@ export async function photoBytes(storage: Storage, photo: Photo): Promise<Buffer
   return bytes;
 }
 
-export async function deletePhoto(em: EntityManager, actor: Actor, clock: Clock, storage: Storage, ids: PhotoIds & { photoId: string }): Promise<void> {
+export async function deletePhoto(
+  em: EntityManager,
+  actor: Actor,
+  clock: Clock,
+  storage: Storage,
+  ids: PhotoIds & { photoId: string },
+): Promise<void> {
   const photo = await findPhoto(em, actor, ids);
   await em.transactional(async (tx) => {
     await tx.nativeDelete(PhotoSchema, { id: photo.id });

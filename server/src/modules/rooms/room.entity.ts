@@ -8,13 +8,19 @@ export const RoomSchema = defineEntity({
   name: 'Room',
   tableName: 'room',
   properties: {
-    id: p.uuid().primary().onCreate(() => randomUUID()),
+    id: p
+      .uuid()
+      .primary()
+      .onCreate(() => randomUUID()),
     job: p.manyToOne(JobSchema).deleteRule('cascade').index(),
     position: p.integer().default(0),
     input: p.json<RoomInput>(),
     version: p.integer().version(),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 

@@ -10,7 +10,10 @@ export const roomInputBody = z.preprocess(
   roomInputSchema.strict(),
 );
 
-const position = z.int({ message: 'Position must be a whole number.' }).min(0, { message: 'Position must be between 0 and 10000.' }).max(10_000, { message: 'Position must be between 0 and 10000.' });
+const position = z
+  .int({ message: 'Position must be a whole number.' })
+  .min(0, { message: 'Position must be between 0 and 10000.' })
+  .max(10_000, { message: 'Position must be between 0 and 10000.' });
 
 export const createRoomSchema = z.strictObject({
   /** A client-made id lets a room created offline be replayed safely: a second POST gets 409. */

@@ -21,8 +21,18 @@ export interface RoomWithPhotos {
 }
 
 export async function roomsOf(em: EntityManager, job: Job): Promise<RoomWithPhotos[]> {
-  const rooms = await em.find(RoomSchema, { job: job.id }, { orderBy: { position: 'asc', createdAt: 'asc', id: 'asc' } });
-  const photos = rooms.length ? await em.find(PhotoSchema, { room: { $in: rooms.map((r) => r.id) } }, { orderBy: { createdAt: 'asc', id: 'asc' } }) : [];
+  const rooms = await em.find(
+    RoomSchema,
+    { job: job.id },
+    { orderBy: { position: 'asc', createdAt: 'asc', id: 'asc' } },
+  );
+  const photos = rooms.length
+    ? await em.find(
+        PhotoSchema,
+        { room: { $in: rooms.map((r) => r.id) } },
+        { orderBy: { createdAt: 'asc', id: 'asc' } },
+      )
+    : [];
   return rooms.map((room) => ({ room, photos: photos.filter((p) => p.room.id === room.id) }));
 }
 
@@ -31,7 +41,12 @@ export async function listRooms(em: EntityManager, actor: Actor, jobId: string):
 }
 
 /** A room of a job the actor may see; 404 otherwise. */
-export async function findRoom(em: EntityManager, actor: Actor, jobId: string, roomId: string): Promise<{ job: Job; room: RoomRow }> {
+export async function findRoom(
+  em: EntityManager,
+  actor: Actor,
+  jobId: string,
+  roomId: string,
+): Promise<{ job: Job; room: RoomRow }> {
   const job = await findJob(em, actor, jobId);
   const room = await em.findOne(RoomSchema, { id: roomId, job: job.id });
   if (!room) throw new NotFoundError('The room');
@@ -43,7 +58,13 @@ export async function getRoom(em: EntityManager, actor: Actor, jobId: string, ro
   return { room, photos: await em.find(PhotoSchema, { room: room.id }, { orderBy: { createdAt: 'asc', id: 'asc' } }) };
 }
 
-export function createRoom(em: EntityManager, actor: Actor, clock: Clock, jobId: string, input: CreateRoomInput): Promise<RoomWithPhotos> {
+export function createRoom(
+  em: EntityManager,
+  actor: Actor,
+  clock: Clock,
+  jobId: string,
+  input: CreateRoomInput,
+): Promise<RoomWithPhotos> {
   return em.transactional(async (tx) => {
     const job = await findJob(tx, actor, jobId);
     const count = await tx.count(RoomSchema, { job: job.id });
@@ -57,7 +78,13 @@ export function createRoom(em: EntityManager, actor: Actor, clock: Clock, jobId:
 }
 
 export function updateRoom(
-  em: EntityManager, actor: Actor, clock: Clock, jobId: string, roomId: string, version: number, input: UpdateRoomInput,
+  em: EntityManager,
+  actor: Actor,
+  clock: Clock,
+  jobId: string,
+  roomId: string,
+  version: number,
+  input: UpdateRoomInput,
 ): Promise<RoomWithPhotos> {
   return em.transactional(async (tx) => {
     const { job, room } = await findRoom(tx, actor, jobId, roomId);
@@ -72,7 +99,13 @@ export function updateRoom(
 }
 
 export async function deleteRoom(
-  em: EntityManager, actor: Actor, clock: Clock, storage: Storage, jobId: string, roomId: string, version: number,
+  em: EntityManager,
+  actor: Actor,
+  clock: Clock,
+  storage: Storage,
+  jobId: string,
+  roomId: string,
+  version: number,
 ): Promise<void> {
   const keys = await em.transactional(async (tx) => {
     const { job, room } = await findRoom(tx, actor, jobId, roomId);

@@ -7,7 +7,11 @@ import { UserSchema } from './user.entity';
  * for the owner and estimator who assign them. The full user admin stays owner-only.
  */
 export async function listAssignableStaff(em: EntityManager, actor: Actor) {
-  const users = await em.find(UserSchema, { company: actor.companyId, active: true }, { orderBy: { name: 'asc', id: 'asc' } });
+  const users = await em.find(
+    UserSchema,
+    { company: actor.companyId, active: true },
+    { orderBy: { name: 'asc', id: 'asc' } },
+  );
   return users.map((u) => ({ id: u.id, name: u.name, role: u.role }));
 }
 

@@ -9,7 +9,10 @@ export const UserSchema = defineEntity({
   name: 'User',
   tableName: 'app_user',
   properties: {
-    id: p.uuid().primary().onCreate(() => randomUUID()),
+    id: p
+      .uuid()
+      .primary()
+      .onCreate(() => randomUUID()),
     company: p.manyToOne(CompanySchema).index(),
     name: p.string().length(120),
     /** Stored lower-cased; unique across the deployment, since sign-in has no company field. */
@@ -18,7 +21,10 @@ export const UserSchema = defineEntity({
     active: p.boolean().default(true),
     passwordHash: p.string().length(255).hidden(),
     createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p.datetime().onCreate(() => new Date()).onUpdate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
   },
 });
 

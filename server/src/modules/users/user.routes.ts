@@ -25,7 +25,9 @@ export function userRoutes(api: ApiRouter): void {
     policy: OWNER,
     body: createUserSchema,
     status: 201,
-    handler: async ({ em, actor, body, services }) => ({ user: presentUser(await createUser(em, actor, services.mailer, body)) }),
+    handler: async ({ em, actor, body, services }) => ({
+      user: presentUser(await createUser(em, actor, services.mailer, body)),
+    }),
   });
   api.route({
     method: 'patch',
@@ -33,6 +35,8 @@ export function userRoutes(api: ApiRouter): void {
     policy: OWNER,
     params: userIdParams,
     body: updateUserSchema,
-    handler: async ({ em, actor, params, body }) => ({ user: presentUser(await updateUser(em, actor, params.id, body)) }),
+    handler: async ({ em, actor, params, body }) => ({
+      user: presentUser(await updateUser(em, actor, params.id, body)),
+    }),
   });
 }

@@ -2,7 +2,11 @@ import { z } from 'zod';
 import { emailSchema, newPasswordSchema } from '../auth/auth.schema';
 import { ROLES } from './user.entity';
 
-const nameSchema = z.string({ message: 'Enter a name.' }).trim().min(1, { message: 'Enter a name.' }).max(120, { message: 'Name must be at most 120 characters.' });
+const nameSchema = z
+  .string({ message: 'Enter a name.' })
+  .trim()
+  .min(1, { message: 'Enter a name.' })
+  .max(120, { message: 'Name must be at most 120 characters.' });
 const roleSchema = z.enum(ROLES, { message: `Role must be one of: ${ROLES.join(', ')}.` });
 
 export const createUserSchema = z.strictObject({

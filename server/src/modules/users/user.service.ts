@@ -18,8 +18,14 @@ export async function getUser(em: EntityManager, actor: Actor, id: string): Prom
   return user;
 }
 
-export async function createUser(em: EntityManager, actor: Actor, mailer: Mailer, input: CreateUserInput): Promise<User> {
-  if (await em.count(UserSchema, { email: input.email })) throw new ConflictError('That e-mail address already has an account.');
+export async function createUser(
+  em: EntityManager,
+  actor: Actor,
+  mailer: Mailer,
+  input: CreateUserInput,
+): Promise<User> {
+  if (await em.count(UserSchema, { email: input.email }))
+    throw new ConflictError('That e-mail address already has an account.');
   const user = em.create(UserSchema, {
     company: em.getReference(CompanySchema, actor.companyId),
     name: input.name,
@@ -42,7 +48,9 @@ export async function createUser(em: EntityManager, actor: Actor, mailer: Mailer
 
 /** Ends every session of a user (deactivation, and later password resets). */
 export async function endSessionsOf(em: EntityManager, userId: string): Promise<number> {
-  const r = await em.getConnection().execute<{ affectedRows?: number }>(`delete from "session" where sess->>'userId' = ?`, [userId], 'run');
+  const r = await em
+    .getConnection()
+    .execute<{ affectedRows?: number }>(`delete from "session" where sess->>'userId' = ?`, [userId], 'run');
   return typeof r.affectedRows === 'number' ? r.affectedRows : 0;
 }
 
@@ -50,7 +58,8 @@ export async function updateUser(em: EntityManager, actor: Actor, id: string, in
   const user = await getUser(em, actor, id);
   const losesOwner = user.role === 'owner' && ((input.role && input.role !== 'owner') || input.active === false);
   if (losesOwner) {
-    if (user.id === actor.userId) throw new UnprocessableError('You cannot remove your own owner access. Ask another owner.');
+    if (user.id === actor.userId)
+      throw new UnprocessableError('You cannot remove your own owner access. Ask another owner.');
     const owners = await em.count(UserSchema, { company: actor.companyId, role: 'owner', active: true });
     if (owners <= 1) throw new UnprocessableError('A company needs at least one active owner.');
   }

@@ -42,7 +42,15 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
           For safety, sign-in is paused. Try again in <strong>{waitText(wait)}</strong>.
         </Alert>
       ) : null}
-      <TextField name="email" label="E-mail" type="email" inputMode="email" autoComplete="username" autoCapitalize="none" spellCheck={false} />
+      <TextField
+        name="email"
+        label="E-mail"
+        type="email"
+        inputMode="email"
+        autoComplete="username"
+        autoCapitalize="none"
+        spellCheck={false}
+      />
       <TextField name="password" label="Password" type="password" autoComplete="current-password" />
       <SubmitButton className="w-full" disabled={wait > 0}>
         Sign in

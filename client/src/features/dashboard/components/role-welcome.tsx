@@ -13,29 +13,44 @@ const guide: Record<Role, { lead: string; steps: Step[] }> = {
   owner: {
     lead: 'You set up the company and see how its quotes do.',
     steps: [
-      { text: 'Add your estimators, salespeople and installers so each can sign in.', link: { to: paths.users, label: 'Manage users' } },
-      { text: 'Fill in the price book and the equipment you sell; every takeoff is priced from it.', link: { to: paths.priceBook, label: 'Open price book' } },
+      {
+        text: 'Add your estimators, salespeople and installers so each can sign in.',
+        link: { to: paths.users, label: 'Manage users' },
+      },
+      {
+        text: 'Fill in the price book and the equipment you sell; every takeoff is priced from it.',
+        link: { to: paths.priceBook, label: 'Open price book' },
+      },
       { text: 'Once proposals go out, win rate and average ticket appear under Reports.' },
     ],
   },
   estimator: {
     lead: 'You turn a walk-through into a system, a material list and a priced proposal.',
     steps: [
-      { text: 'Open a job to check its room loads and choose equipment for each zone.', link: { to: paths.jobs, label: 'Go to jobs' } },
+      {
+        text: 'Open a job to check its room loads and choose equipment for each zone.',
+        link: { to: paths.jobs, label: 'Go to jobs' },
+      },
       { text: 'Set each line-set run, review the takeoff and labor, then issue the proposal.' },
     ],
   },
   salesperson: {
     lead: 'You walk the home, room by room, and leave with a first price.',
     steps: [
-      { text: 'Start a job for the customer and record each room as you go; it saves on the phone if the signal drops.', link: { to: paths.jobs, label: 'Go to jobs' } },
+      {
+        text: 'Start a job for the customer and record each room as you go; it saves on the phone if the signal drops.',
+        link: { to: paths.jobs, label: 'Go to jobs' },
+      },
       { text: 'Note the customer’s comfort wishes so the estimator can shape the options.' },
     ],
   },
   installer: {
     lead: 'You get the job packet and keep the commissioning record.',
     steps: [
-      { text: 'Open your jobs to see equipment, line-set runs, the charge plan and materials.', link: { to: paths.jobs, label: 'Go to jobs' } },
+      {
+        text: 'Open your jobs to see equipment, line-set runs, the charge plan and materials.',
+        link: { to: paths.jobs, label: 'Go to jobs' },
+      },
       { text: 'Record the pressure test, evacuation reading and refrigerant added on site.' },
     ],
   },
@@ -53,7 +68,10 @@ export function RoleWelcome({ role, firstName }: { role: Role; firstName: string
         <ol className="flex flex-col gap-4">
           {steps.map((s, i) => (
             <li key={s.text} className="flex gap-3">
-              <span aria-hidden="true" className="flex size-8 shrink-0 items-center justify-center rounded-full bg-ink-100 font-bold text-ink-800">
+              <span
+                aria-hidden="true"
+                className="flex size-8 shrink-0 items-center justify-center rounded-full bg-ink-100 font-bold text-ink-800"
+              >
                 {i + 1}
               </span>
               <div className="flex flex-col items-start gap-2">

@@ -28,18 +28,36 @@ const customerField: Record<string, string> = { name: 'customerName', email: 'cu
  * Makes the customer (unless picked, or made by an earlier try that then failed on the
  * job), then the job. `onCustomer` keeps the new id so a retry does not make a second one.
  */
-async function createCustomerAndJob({ values: v, madeCustomerId, onCustomer }: { values: NewJobValues; madeCustomerId: string | null; onCustomer: (id: string) => void }) {
+async function createCustomerAndJob({
+  values: v,
+  madeCustomerId,
+  onCustomer,
+}: {
+  values: NewJobValues;
+  madeCustomerId: string | null;
+  onCustomer: (id: string) => void;
+}) {
   let customerId = v.customerMode === 'existing' ? v.customerId : (madeCustomerId ?? '');
   if (v.customerMode === 'new' && !madeCustomerId) {
     try {
-      customerId = (await createCustomer({ name: v.customerName, email: v.customerEmail || null, phone: v.customerPhone || null })).id;
+      customerId = (
+        await createCustomer({ name: v.customerName, email: v.customerEmail || null, phone: v.customerPhone || null })
+      ).id;
       onCustomer(customerId);
     } catch (e) {
       if (!(e instanceof ApiError)) throw e;
       throw new ApiError({ ...e, errors: e.errors.map((f) => ({ ...f, path: customerField[f.path] ?? f.path })) });
     }
   }
-  return createJob({ customerId, street: v.street, unit: v.unit, city: v.city, region: v.region, postalCode: v.postalCode, notes: v.notes });
+  return createJob({
+    customerId,
+    street: v.street,
+    unit: v.unit,
+    city: v.city,
+    region: v.region,
+    postalCode: v.postalCode,
+    notes: v.notes,
+  });
 }
 
 export function useCreateJob() {

@@ -10,7 +10,8 @@ export async function getCustomers(search: string, signal?: AbortSignal) {
   return (await apiFetch(`/api/customers?${q.toString()}`, { schema: customersResponse, signal })).items;
 }
 
-export const customersQueryOptions = (search: string) => queryOptions({ queryKey: jobKeys.customers(search), queryFn: ({ signal }) => getCustomers(search, signal) });
+export const customersQueryOptions = (search: string) =>
+  queryOptions({ queryKey: jobKeys.customers(search), queryFn: ({ signal }) => getCustomers(search, signal) });
 
 export function useCustomers(search: string, enabled: boolean) {
   return useQuery({ ...customersQueryOptions(search), enabled });

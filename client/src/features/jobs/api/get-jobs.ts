@@ -12,7 +12,11 @@ export async function getJobs(filters: JobListFilters, signal?: AbortSignal) {
 }
 
 export const jobsQueryOptions = (filters: JobListFilters) =>
-  queryOptions({ queryKey: jobKeys.list(filters), queryFn: ({ signal }) => getJobs(filters, signal), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: jobKeys.list(filters),
+    queryFn: ({ signal }) => getJobs(filters, signal),
+    placeholderData: keepPreviousData,
+  });
 
 export function useJobs(filters: JobListFilters) {
   return useQuery(jobsQueryOptions(filters));

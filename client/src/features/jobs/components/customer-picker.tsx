@@ -27,7 +27,13 @@ export function CustomerPicker() {
         {(customers.data ?? []).map((c) => (
           <li key={c.id}>
             <label className="flex min-h-touch cursor-pointer items-center gap-3 rounded-md border border-line bg-white px-3 has-[:checked]:border-ink-800 has-[:checked]:bg-ink-50">
-              <input type="radio" name="customer-choice" className="size-5" checked={chosen === c.id} onChange={() => setValue('customerId', c.id, { shouldValidate: true })} />
+              <input
+                type="radio"
+                name="customer-choice"
+                className="size-5"
+                checked={chosen === c.id}
+                onChange={() => setValue('customerId', c.id, { shouldValidate: true })}
+              />
               <span>
                 <span className="block font-semibold">{c.name}</span>
                 <span className="block text-sm text-muted">{[c.email, c.phone].filter(Boolean).join(' · ')}</span>
@@ -36,7 +42,9 @@ export function CustomerPicker() {
           </li>
         ))}
       </ul>
-      {customers.isSuccess && customers.data.length === 0 ? <p className="text-sm text-muted">No customer matches. Switch to “New customer”.</p> : null}
+      {customers.isSuccess && customers.data.length === 0 ? (
+        <p className="text-sm text-muted">No customer matches. Switch to “New customer”.</p>
+      ) : null}
     </div>
   );
 }

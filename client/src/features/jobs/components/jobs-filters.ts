@@ -12,6 +12,10 @@ const searchParamsSchema = z.object({
 
 /** The list's filters live in the URL (?q=&status=&page=) so a reload or a shared link keeps them. */
 export function filtersFromSearch(params: URLSearchParams): JobListFilters {
-  const p = searchParamsSchema.parse({ q: params.get('q') ?? '', status: params.get('status') ?? '', page: params.get('page') ?? '1' });
+  const p = searchParamsSchema.parse({
+    q: params.get('q') ?? '',
+    status: params.get('status') ?? '',
+    page: params.get('page') ?? '1',
+  });
   return { search: p.q.trim(), status: p.status, page: p.page, pageSize: JOBS_PAGE_SIZE };
 }

@@ -41,19 +41,41 @@ export function JobsListPage() {
       <PageHeader
         title="Jobs"
         lead="Every job you can see, the most recently active first."
-        actions={<Link className={buttonClass('primary')} to={jobPaths.new}>New job</Link>}
+        actions={
+          <Link className={buttonClass('primary')} to={jobPaths.new}>
+            New job
+          </Link>
+        }
       />
       <div role="search" className="mb-4 grid gap-3 sm:grid-cols-[2fr_1fr]">
         <div className="flex flex-col gap-1">
-          <label htmlFor="jobs-search" className="text-sm font-semibold text-ink-900">Search jobs</label>
-          <input id="jobs-search" type="search" className={field} value={typed} onChange={(e) => setTyped(e.target.value)} placeholder="Customer, street, city or postal code" />
+          <label htmlFor="jobs-search" className="text-sm font-semibold text-ink-900">
+            Search jobs
+          </label>
+          <input
+            id="jobs-search"
+            type="search"
+            className={field}
+            value={typed}
+            onChange={(e) => setTyped(e.target.value)}
+            placeholder="Customer, street, city or postal code"
+          />
         </div>
         <div className="flex flex-col gap-1">
-          <label htmlFor="jobs-status" className="text-sm font-semibold text-ink-900">Status</label>
-          <select id="jobs-status" className={field} value={filters.status} onChange={(e) => update({ status: e.target.value, page: '' })}>
+          <label htmlFor="jobs-status" className="text-sm font-semibold text-ink-900">
+            Status
+          </label>
+          <select
+            id="jobs-status"
+            className={field}
+            value={filters.status}
+            onChange={(e) => update({ status: e.target.value, page: '' })}
+          >
             <option value="">Any status</option>
             {JOB_STATUSES.map((s) => (
-              <option key={s} value={s}>{jobStatusLabels[s]}</option>
+              <option key={s} value={s}>
+                {jobStatusLabels[s]}
+              </option>
             ))}
           </select>
         </div>
@@ -65,15 +87,28 @@ export function JobsListPage() {
   );
 }
 
-function JobsResults({ filters, onPage }: { filters: ReturnType<typeof filtersFromSearch>; onPage: (page: number) => void }) {
+function JobsResults({
+  filters,
+  onPage,
+}: {
+  filters: ReturnType<typeof filtersFromSearch>;
+  onPage: (page: number) => void;
+}) {
   const jobs = useJobs(filters);
   if (jobs.isPending) return <Spinner label="Loading jobs…" />;
-  if (jobs.isError) return <Alert tone="danger" title="Could not load the jobs.">{errorMessage(jobs.error)}</Alert>;
+  if (jobs.isError)
+    return (
+      <Alert tone="danger" title="Could not load the jobs.">
+        {errorMessage(jobs.error)}
+      </Alert>
+    );
   const { items, total, page, pageSize } = jobs.data;
   if (total === 0) {
     return (
       <EmptyState title={filters.search || filters.status ? 'No job matches' : 'No jobs yet'}>
-        {filters.search || filters.status ? 'Try another search or status.' : 'Start one with “New job” when a customer calls.'}
+        {filters.search || filters.status
+          ? 'Try another search or status.'
+          : 'Start one with “New job” when a customer calls.'}
       </EmptyState>
     );
   }

@@ -12,12 +12,18 @@ const columns = [
     id: 'customer',
     header: 'Customer',
     cell: (c) => (
-      <Link className="font-semibold text-ink-800 underline underline-offset-2" to={jobPaths.walkthrough(c.row.original.id)}>
+      <Link
+        className="font-semibold text-ink-800 underline underline-offset-2"
+        to={jobPaths.walkthrough(c.row.original.id)}
+      >
         {c.getValue()}
       </Link>
     ),
   }),
-  col.accessor((j) => [j.site.street, j.site.unit, j.site.city].filter(Boolean).join(', '), { id: 'address', header: 'Site address' }),
+  col.accessor((j) => [j.site.street, j.site.unit, j.site.city].filter(Boolean).join(', '), {
+    id: 'address',
+    header: 'Site address',
+  }),
   col.accessor('status', { header: 'Status', cell: (c) => jobStatusLabels[c.getValue()] }),
   col.accessor((j) => j.salesperson?.name ?? '—', { id: 'salesperson', header: 'Salesperson' }),
   col.accessor('lastActivityAt', { header: 'Last activity', cell: (c) => when.format(new Date(c.getValue())) }),
@@ -50,9 +56,14 @@ export function JobsTable({ jobs, total, page, pageSize, onPage }: Props) {
           const j = row.original;
           return (
             <li key={row.id}>
-              <Link to={jobPaths.walkthrough(j.id)} className="flex min-h-touch flex-col rounded-lg border border-line bg-white px-4 py-3">
+              <Link
+                to={jobPaths.walkthrough(j.id)}
+                className="flex min-h-touch flex-col rounded-lg border border-line bg-white px-4 py-3"
+              >
                 <span className="font-semibold text-ink-800">{j.customer.name}</span>
-                <span className="text-sm text-ink-950">{[j.site.street, j.site.unit, j.site.city].filter(Boolean).join(', ')}</span>
+                <span className="text-sm text-ink-950">
+                  {[j.site.street, j.site.unit, j.site.city].filter(Boolean).join(', ')}
+                </span>
                 <span className="text-sm text-muted">
                   {jobStatusLabels[j.status]} · {when.format(new Date(j.lastActivityAt))}
                 </span>
@@ -63,18 +74,32 @@ export function JobsTable({ jobs, total, page, pageSize, onPage }: Props) {
       </ul>
       <div className="hidden overflow-x-auto rounded-lg border border-line bg-white sm:block">
         <table className="w-full min-w-[640px] text-left">
-          <DataTableHead table={table} className="bg-ink-50 text-sm text-ink-900" cellClassName="px-3 py-2 font-semibold" />
+          <DataTableHead
+            table={table}
+            className="bg-ink-50 text-sm text-ink-900"
+            cellClassName="px-3 py-2 font-semibold"
+          />
           <DataTableBody table={table} classes={{ row: 'border-t border-line', cell: 'px-3 py-3' }} />
         </table>
       </div>
       <nav aria-label="Pages" className="flex items-center justify-between gap-2">
-        <button type="button" className="min-h-touch whitespace-nowrap rounded-md border border-line bg-white px-3 disabled:opacity-50" disabled={page <= 1} onClick={() => onPage(page - 1)}>
+        <button
+          type="button"
+          className="min-h-touch whitespace-nowrap rounded-md border border-line bg-white px-3 disabled:opacity-50"
+          disabled={page <= 1}
+          onClick={() => onPage(page - 1)}
+        >
           Previous page
         </button>
         <span className="text-center text-sm text-muted">
           Page {page} of {pageCount} · {total} {total === 1 ? 'job' : 'jobs'}
         </span>
-        <button type="button" className="min-h-touch whitespace-nowrap rounded-md border border-line bg-white px-3 disabled:opacity-50" disabled={page >= pageCount} onClick={() => onPage(page + 1)}>
+        <button
+          type="button"
+          className="min-h-touch whitespace-nowrap rounded-md border border-line bg-white px-3 disabled:opacity-50"
+          disabled={page >= pageCount}
+          onClick={() => onPage(page + 1)}
+        >
           Next page
         </button>
       </nav>

@@ -8,8 +8,17 @@ import { newJobSchema, type NewJobInput } from '../schemas';
 import { CustomerPicker } from './customer-picker';
 
 const empty: NewJobInput = {
-  customerMode: 'new', customerId: '', customerName: '', customerEmail: '', customerPhone: '',
-  street: '', unit: '', city: '', region: '', postalCode: '', notes: '',
+  customerMode: 'new',
+  customerId: '',
+  customerName: '',
+  customerEmail: '',
+  customerPhone: '',
+  street: '',
+  unit: '',
+  city: '',
+  region: '',
+  postalCode: '',
+  notes: '',
 };
 
 /** Customer (new or existing) and the site address; the walk-through opens next. */
@@ -23,7 +32,11 @@ export function NewJobForm() {
       defaultValues={empty}
       aria-label="New job"
       onSubmit={async (values) => {
-        const job = await createJob.mutateAsync({ values, madeCustomerId: madeCustomer.current, onCustomer: (id) => (madeCustomer.current = id) });
+        const job = await createJob.mutateAsync({
+          values,
+          madeCustomerId: madeCustomer.current,
+          onCustomer: (id) => (madeCustomer.current = id),
+        });
         await navigate(jobPaths.walkthrough(job.id));
       }}
     >
@@ -34,14 +47,23 @@ export function NewJobForm() {
             <SelectField
               name="customerMode"
               label="Customer"
-              options={[{ value: 'new', label: 'New customer' }, { value: 'existing', label: 'Existing customer' }]}
+              options={[
+                { value: 'new', label: 'New customer' },
+                { value: 'existing', label: 'Existing customer' },
+              ]}
             />
             {form.watch('customerMode') === 'existing' ? (
               <CustomerPicker />
             ) : (
               <div className="grid gap-4 sm:grid-cols-3">
                 <TextField name="customerName" label="Customer name" autoComplete="off" />
-                <TextField name="customerEmail" label="Customer e-mail" type="email" inputMode="email" autoComplete="off" />
+                <TextField
+                  name="customerEmail"
+                  label="Customer e-mail"
+                  type="email"
+                  inputMode="email"
+                  autoComplete="off"
+                />
                 <TextField name="customerPhone" label="Customer phone" type="tel" inputMode="tel" autoComplete="off" />
               </div>
             )}
@@ -55,7 +77,9 @@ export function NewJobForm() {
             <TextField name="postalCode" label="Postal code" autoComplete="off" />
             <TextField name="notes" label="Job notes" autoComplete="off" />
           </fieldset>
-          <p className="text-sm text-muted">The site’s design conditions start from your company’s defaults; check them on the next screen.</p>
+          <p className="text-sm text-muted">
+            The site’s design conditions start from your company’s defaults; check them on the next screen.
+          </p>
           <div>
             <SubmitButton>Create job and start the walk-through</SubmitButton>
           </div>

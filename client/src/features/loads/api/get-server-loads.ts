@@ -4,7 +4,14 @@ import { apiFetch } from '../../../lib/api-client';
 import { jobKeys, jobPath } from '../../../lib/job-queries';
 
 const components = z.looseObject({ total: z.number() });
-const roomLoad = z.looseObject({ roomId: z.string(), roomName: z.string(), sensibleGain: components, latentGain: components, heatLoss: components, coolingTotalBtuh: z.number() });
+const roomLoad = z.looseObject({
+  roomId: z.string(),
+  roomName: z.string(),
+  sensibleGain: components,
+  latentGain: components,
+  heatLoss: components,
+  coolingTotalBtuh: z.number(),
+});
 
 /** Only what is compared is checked; the rest of calc's HomeLoad passes through untouched. */
 export const serverLoadsResponse = z.object({
@@ -13,7 +20,13 @@ export const serverLoadsResponse = z.object({
   tightness: z.string(),
   loads: z.looseObject({
     rooms: z.array(roomLoad),
-    totals: z.looseObject({ sensibleBtuh: z.number(), latentBtuh: z.number(), coolingBtuh: z.number(), heatingBtuh: z.number(), sensibleHeatRatio: z.number() }),
+    totals: z.looseObject({
+      sensibleBtuh: z.number(),
+      latentBtuh: z.number(),
+      coolingBtuh: z.number(),
+      heatingBtuh: z.number(),
+      sensibleHeatRatio: z.number(),
+    }),
   }),
 });
 export type ServerLoads = z.output<typeof serverLoadsResponse>;
@@ -24,7 +37,11 @@ export function getServerLoads(jobId: string, signal?: AbortSignal) {
 }
 
 export const serverLoadsQueryOptions = (jobId: string) =>
-  queryOptions({ queryKey: jobKeys.serverLoads(jobId), queryFn: ({ signal }) => getServerLoads(jobId, signal), retry: false });
+  queryOptions({
+    queryKey: jobKeys.serverLoads(jobId),
+    queryFn: ({ signal }) => getServerLoads(jobId, signal),
+    retry: false,
+  });
 
 export function useServerLoads(jobId: string) {
   return useQuery(serverLoadsQueryOptions(jobId));

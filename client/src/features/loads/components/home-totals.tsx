@@ -16,7 +16,10 @@ export function HomeTotals({ load, skipped = [] }: { load: HomeLoad; skipped?: r
     ['Floor area', `${n(t.floorAreaFt2)} ft²`],
   ];
   return (
-    <section aria-label="Whole-home loads" className="flex flex-col gap-3 rounded-lg border border-ink-200 bg-white p-4">
+    <section
+      aria-label="Whole-home loads"
+      className="flex flex-col gap-3 rounded-lg border border-ink-200 bg-white p-4"
+    >
       <div className="flex items-center gap-3">
         <h2 className="text-lg font-semibold text-ink-900">Whole home</h2>
         <EstimateBadge />

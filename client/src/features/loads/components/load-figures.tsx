@@ -16,7 +16,10 @@ export function LoadFigures({ load }: { load: RoomLoad }) {
       {rows.map(([label, value]) => (
         <div key={label}>
           <dt className="text-sm text-muted">{label}</dt>
-          <dd className="text-lg font-semibold text-ink-900" data-testid={`load-${label.toLowerCase().replace(/\s+/g, '-')}`}>
+          <dd
+            className="text-lg font-semibold text-ink-900"
+            data-testid={`load-${label.toLowerCase().replace(/\s+/g, '-')}`}
+          >
             {value}
           </dd>
         </div>

@@ -20,9 +20,15 @@ export function LoadPrintPage() {
       <PrintStyles />
       <div className="no-print flex flex-wrap gap-2 print:hidden">
         <Button onClick={() => window.print()}>Print</Button>
-        <Link className={buttonClass('secondary')} to={jobPaths.loads(jobId)}>Back to the loads</Link>
+        <Link className={buttonClass('secondary')} to={jobPaths.loads(jobId)}>
+          Back to the loads
+        </Link>
       </div>
-      {result.ok ? <LoadSummarySheet job={job} load={result.value.load} printedOn={printedOn} /> : <p>{result.message}</p>}
+      {result.ok ? (
+        <LoadSummarySheet job={job} load={result.value.load} printedOn={printedOn} />
+      ) : (
+        <p>{result.message}</p>
+      )}
     </div>
   );
 }

@@ -14,7 +14,11 @@ const DESIGN_ROWS: [string, string, string][] = [
   ['dailyRangeF', 'Daily range', '°F'],
   ['elevationFt', 'Elevation', 'ft'],
 ];
-const sourceWords: Record<string, string> = { entered: 'entered', 'company-default': 'company default', 'standard-default': 'standard default' };
+const sourceWords: Record<string, string> = {
+  entered: 'entered',
+  'company-default': 'company default',
+  'standard-default': 'standard default',
+};
 
 /** The one-page load summary: inputs it used, per-room and whole-home results, the method. */
 export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; load: HomeLoad; printedOn: string }) {
@@ -26,11 +30,17 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
         <div>
           <p className="text-xs font-semibold uppercase tracking-wide text-ink-600">Gaugeline · Load summary</p>
           <h1 className="text-xl font-bold">{job.customer.name}</h1>
-          <p>{[job.site.street, job.site.unit, job.site.city, job.site.region, job.site.postalCode].filter(Boolean).join(', ')}</p>
+          <p>
+            {[job.site.street, job.site.unit, job.site.city, job.site.region, job.site.postalCode]
+              .filter(Boolean)
+              .join(', ')}
+          </p>
         </div>
         <div className="text-right">
           <p className="rounded border border-ink-800 px-2 font-semibold">ESTIMATE</p>
-          <p className="mt-1 text-xs">Printed {printedOn} · job version {job.version}</p>
+          <p className="mt-1 text-xs">
+            Printed {printedOn} · job version {job.version}
+          </p>
         </div>
       </header>
 
@@ -42,12 +52,18 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
               <dt>{label}</dt>
               <dd className="text-right">
                 {String(dc[k])} {unit}
-                <span className="pl-2 text-muted">{sourceWords[job.designSources[k]?.source ?? ''] ?? ''}{job.designSources[k]?.note ? ` — ${job.designSources[k]?.note}` : ''}</span>
+                <span className="pl-2 text-muted">
+                  {sourceWords[job.designSources[k]?.source ?? ''] ?? ''}
+                  {job.designSources[k]?.note ? ` — ${job.designSources[k]?.note}` : ''}
+                </span>
               </dd>
             </div>
           ))}
         </dl>
-        <p className="text-xs">House tightness: {job.tightness}. {typeof dc.source === 'string' && dc.source ? `Source of design values: ${dc.source}.` : ''}</p>
+        <p className="text-xs">
+          House tightness: {job.tightness}.{' '}
+          {typeof dc.source === 'string' && dc.source ? `Source of design values: ${dc.source}.` : ''}
+        </p>
       </section>
 
       <section aria-label="Room results">
@@ -55,22 +71,35 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
         <table className="w-full text-xs">
           <thead>
             <tr className="border-b border-ink-800 text-left">
-              <th>Room</th><th className="text-right">ft²</th><th className="text-right">Sensible</th><th className="text-right">Latent</th>
-              <th className="text-right">Cooling</th><th className="text-right">Tons</th><th className="text-right">Heat loss</th>
+              <th>Room</th>
+              <th className="text-right">ft²</th>
+              <th className="text-right">Sensible</th>
+              <th className="text-right">Latent</th>
+              <th className="text-right">Cooling</th>
+              <th className="text-right">Tons</th>
+              <th className="text-right">Heat loss</th>
             </tr>
           </thead>
           <tbody>
             {load.rooms.map((r) => (
               <tr key={r.roomId} className="border-b border-line">
-                <td>{r.roomName}</td><td className="text-right">{r.floorAreaFt2}</td><td className="text-right">{n(r.sensibleGain.total)}</td>
-                <td className="text-right">{n(r.latentGain.total)}</td><td className="text-right">{n(r.coolingTotalBtuh)}</td>
-                <td className="text-right">{tons(r.coolingTotalBtuh)}</td><td className="text-right">{n(r.heatLoss.total)}</td>
+                <td>{r.roomName}</td>
+                <td className="text-right">{r.floorAreaFt2}</td>
+                <td className="text-right">{n(r.sensibleGain.total)}</td>
+                <td className="text-right">{n(r.latentGain.total)}</td>
+                <td className="text-right">{n(r.coolingTotalBtuh)}</td>
+                <td className="text-right">{tons(r.coolingTotalBtuh)}</td>
+                <td className="text-right">{n(r.heatLoss.total)}</td>
               </tr>
             ))}
             <tr className="font-semibold">
-              <td>Whole home</td><td className="text-right">{n(t.floorAreaFt2)}</td><td className="text-right">{n(t.sensibleBtuh)}</td>
-              <td className="text-right">{n(t.latentBtuh)}</td><td className="text-right">{n(t.coolingBtuh)}</td>
-              <td className="text-right">{t.coolingTons}</td><td className="text-right">{n(t.heatingBtuh)}</td>
+              <td>Whole home</td>
+              <td className="text-right">{n(t.floorAreaFt2)}</td>
+              <td className="text-right">{n(t.sensibleBtuh)}</td>
+              <td className="text-right">{n(t.latentBtuh)}</td>
+              <td className="text-right">{n(t.coolingBtuh)}</td>
+              <td className="text-right">{t.coolingTons}</td>
+              <td className="text-right">{n(t.heatingBtuh)}</td>
             </tr>
           </tbody>
         </table>
@@ -81,7 +110,11 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
         <h2 className="font-semibold">Whole-home breakdown (Btu/h)</h2>
         <table className="w-full text-xs">
           <thead>
-            <tr className="border-b border-ink-800 text-left"><th>Part</th><th className="text-right">Cooling gain</th><th className="text-right">Heat loss</th></tr>
+            <tr className="border-b border-ink-800 text-left">
+              <th>Part</th>
+              <th className="text-right">Cooling gain</th>
+              <th className="text-right">Heat loss</th>
+            </tr>
           </thead>
           <tbody>
             {COMPONENT_KEYS.map((k) => (
@@ -98,7 +131,9 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
       <footer className="border-t border-line pt-2 text-[0.7rem] leading-snug">
         <p className="font-semibold">A load estimate is an estimate. Method and assumptions:</p>
         <ul className="list-disc pl-4 sm:columns-2 sm:gap-6 print:columns-2 print:gap-6">
-          {METHOD_NOTES.map((m) => <li key={m}>{m}</li>)}
+          {METHOD_NOTES.map((m) => (
+            <li key={m}>{m}</li>
+          ))}
         </ul>
       </footer>
     </article>

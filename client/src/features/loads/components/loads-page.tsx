@@ -21,10 +21,12 @@ export function LoadsPage() {
   const job = useSuspenseQuery(jobQueryOptions(jobId)).data;
   const rooms = useSuspenseQuery(roomsQueryOptions(jobId)).data;
   const result = computeHomeLoad(rooms, job.designConditions, job.tightness);
-  const parsedRooms = new Map(rooms.flatMap((r) => {
-    const p = roomInputSchema.safeParse({ ...r.input, id: r.id });
-    return p.success ? [[r.id, p.data] as const] : [];
-  }));
+  const parsedRooms = new Map(
+    rooms.flatMap((r) => {
+      const p = roomInputSchema.safeParse({ ...r.input, id: r.id });
+      return p.success ? [[r.id, p.data] as const] : [];
+    }),
+  );
   const conditions = designConditionsSchema.safeParse(job.designConditions ?? {});
   const conditionWarnings = conditions.success ? designConditionsWarnings(conditions.data) : [];
 
@@ -35,8 +37,12 @@ export function LoadsPage() {
         lead="Room-by-room heat gain and heat loss from the saved walk-through."
         actions={
           <div className="flex flex-wrap gap-2">
-            <Link className={buttonClass('secondary')} to={jobPaths.walkthrough(jobId)}>Back to the walk-through</Link>
-            <Link className={buttonClass('primary')} to={jobPaths.print(jobId)}>Printable summary</Link>
+            <Link className={buttonClass('secondary')} to={jobPaths.walkthrough(jobId)}>
+              Back to the walk-through
+            </Link>
+            <Link className={buttonClass('primary')} to={jobPaths.print(jobId)}>
+              Printable summary
+            </Link>
           </div>
         }
       />
@@ -49,7 +55,9 @@ export function LoadsPage() {
           </QueryWidgetBoundary>
           {conditionWarnings.length > 0 ? (
             <ul className="list-disc rounded-md bg-amber-soft py-2 pl-8 text-sm text-amber-deep">
-              {conditionWarnings.map((w) => <li key={w.message}>{w.message}</li>)}
+              {conditionWarnings.map((w) => (
+                <li key={w.message}>{w.message}</li>
+              ))}
             </ul>
           ) : null}
           <div className="grid gap-4 lg:grid-cols-2">

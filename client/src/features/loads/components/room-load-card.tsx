@@ -6,7 +6,10 @@ import { LoadFigures } from './load-figures';
 export function RoomLoadCard({ load, room }: { load: RoomLoad; room: Room | undefined }) {
   const warnings = room ? roomPlausibilityWarnings(room) : [];
   return (
-    <article aria-label={`Loads for ${load.roomName}`} className="flex flex-col gap-3 rounded-lg border border-line bg-white p-4">
+    <article
+      aria-label={`Loads for ${load.roomName}`}
+      className="flex flex-col gap-3 rounded-lg border border-line bg-white p-4"
+    >
       <h3 className="text-lg font-semibold text-ink-900">
         {load.roomName} <span className="text-sm font-normal text-muted">{load.floorAreaFt2} ft²</span>
       </h3>

@@ -27,7 +27,11 @@ export function RoomLoadPanel({ room, warnings, designConditions, tightness }: P
       {result?.ok ? (
         <>
           <LoadFigures load={result.value} />
-          <ComponentChart sensible={result.value.sensibleGain} latent={result.value.latentGain} heatLoss={result.value.heatLoss} />
+          <ComponentChart
+            sensible={result.value.sensibleGain}
+            latent={result.value.latentGain}
+            heatLoss={result.value.heatLoss}
+          />
         </>
       ) : null}
       {warnings.length > 0 ? (

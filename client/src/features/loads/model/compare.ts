@@ -3,8 +3,17 @@ import type { HomeLoad } from '@calc';
 /** The parts of GET /api/jobs/:id/loads that are compared (ServerLoads fits it). */
 export interface ServerLoadsLike {
   readonly loads: {
-    readonly rooms: readonly { readonly roomId: string; readonly coolingTotalBtuh: number; readonly heatLoss: { readonly total: number } }[];
-    readonly totals: { readonly sensibleBtuh: number; readonly latentBtuh: number; readonly heatingBtuh: number; readonly sensibleHeatRatio: number };
+    readonly rooms: readonly {
+      readonly roomId: string;
+      readonly coolingTotalBtuh: number;
+      readonly heatLoss: { readonly total: number };
+    }[];
+    readonly totals: {
+      readonly sensibleBtuh: number;
+      readonly latentBtuh: number;
+      readonly heatingBtuh: number;
+      readonly sensibleHeatRatio: number;
+    };
   };
 }
 
@@ -35,6 +44,7 @@ export function compareLoads(browser: HomeLoad, server: ServerLoadsLike): LoadMi
     check(`${room.roomName}: total cooling`, room.coolingTotalBtuh, other.coolingTotalBtuh);
     check(`${room.roomName}: heat loss`, room.heatLoss.total, other.heatLoss.total);
   }
-  if (server.loads.rooms.length !== browser.rooms.length) check('Number of rooms', browser.rooms.length, server.loads.rooms.length);
+  if (server.loads.rooms.length !== browser.rooms.length)
+    check('Number of rooms', browser.rooms.length, server.loads.rooms.length);
   return out;
 }

@@ -41,10 +41,22 @@ function fail(e: unknown): { ok: false; message: string } {
 }
 
 /** One room, live, with calc's roomLoad — the same engine the server runs. */
-export function computeRoomLoad(room: Room, designConditions: Record<string, unknown> | null, tightness: string): LoadResult<RoomLoad> {
-  if (!designConditions) return { ok: false, message: 'Enter the design conditions for the site to see this room’s loads.' };
+export function computeRoomLoad(
+  room: Room,
+  designConditions: Record<string, unknown> | null,
+  tightness: string,
+): LoadResult<RoomLoad> {
+  if (!designConditions)
+    return { ok: false, message: 'Enter the design conditions for the site to see this room’s loads.' };
   try {
-    return { ok: true, value: roomLoad({ room, designConditions: designConditionsSchema.parse(designConditions), tightness: toTightness(tightness) }) };
+    return {
+      ok: true,
+      value: roomLoad({
+        room,
+        designConditions: designConditionsSchema.parse(designConditions),
+        tightness: toTightness(tightness),
+      }),
+    };
   } catch (e) {
     return fail(e);
   }
@@ -69,9 +81,16 @@ export function computeHomeLoad(
   }
   if (rooms.length === 0) return { ok: false, message: 'Add a room to see the loads.' };
   const parsedConditions = designConditionsSchema.safeParse(designConditions);
-  if (!parsedConditions.success) return { ok: false, message: parsedConditions.error.issues[0]?.message ?? 'Check the design conditions.' };
+  if (!parsedConditions.success)
+    return { ok: false, message: parsedConditions.error.issues[0]?.message ?? 'Check the design conditions.' };
   try {
-    return { ok: true, value: { load: homeLoad({ home: { designConditions: parsedConditions.data, tightness: toTightness(tightness), rooms } }), skipped } };
+    return {
+      ok: true,
+      value: {
+        load: homeLoad({ home: { designConditions: parsedConditions.data, tightness: toTightness(tightness), rooms } }),
+        skipped,
+      },
+    };
   } catch (e) {
     return fail(e);
   }

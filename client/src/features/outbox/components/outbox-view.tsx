@@ -13,7 +13,14 @@ export function OutboxView() {
 
   if (messages.length === 0) {
     return (
-      <EmptyState title="No e-mail sent yet" action={<Button variant="secondary" busy={isFetching} onClick={() => void refetch()}>Check again</Button>}>
+      <EmptyState
+        title="No e-mail sent yet"
+        action={
+          <Button variant="secondary" busy={isFetching} onClick={() => void refetch()}>
+            Check again
+          </Button>
+        }
+      >
         Messages Gaugeline sends on this development server are caught here instead of being delivered.
       </EmptyState>
     );
@@ -42,7 +49,11 @@ export function OutboxView() {
           ))}
         </ul>
       </div>
-      {open ? <MessageReader message={open} onClose={() => setOpenId(null)} /> : <p className="text-muted">Choose a message to read it.</p>}
+      {open ? (
+        <MessageReader message={open} onClose={() => setOpenId(null)} />
+      ) : (
+        <p className="text-muted">Choose a message to read it.</p>
+      )}
     </div>
   );
 }

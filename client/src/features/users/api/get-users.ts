@@ -7,7 +7,8 @@ export async function getUsers(signal?: AbortSignal) {
   return (await apiFetch('/api/users', { schema: usersResponse, signal })).users;
 }
 
-export const usersQueryOptions = () => queryOptions({ queryKey: userKeys.list(), queryFn: ({ signal }) => getUsers(signal) });
+export const usersQueryOptions = () =>
+  queryOptions({ queryKey: userKeys.list(), queryFn: ({ signal }) => getUsers(signal) });
 
 export function useUsers() {
   return useSuspenseQuery(usersQueryOptions()).data;

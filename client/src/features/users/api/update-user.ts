@@ -4,7 +4,9 @@ import { userKeys } from '../query-keys';
 import { userResponse, type UpdateUserInput } from '../schemas';
 
 export async function updateUser({ id, ...changes }: UpdateUserInput & { id: string }) {
-  return (await apiFetch(`/api/users/${encodeURIComponent(id)}`, { method: 'PATCH', body: changes, schema: userResponse })).user;
+  return (
+    await apiFetch(`/api/users/${encodeURIComponent(id)}`, { method: 'PATCH', body: changes, schema: userResponse })
+  ).user;
 }
 
 export function useUpdateUser() {

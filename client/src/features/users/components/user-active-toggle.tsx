@@ -27,8 +27,14 @@ export function UserActiveToggle({ user, disabled, busy, onChange }: Props) {
     );
   }
   return (
-    <div role="group" aria-label={`Confirm deactivating ${user.name}`} className="flex flex-col gap-2 rounded-md bg-amber-soft p-2">
-      <p className="text-sm text-ink-950">{user.name} will be signed out everywhere and cannot sign in until reactivated.</p>
+    <div
+      role="group"
+      aria-label={`Confirm deactivating ${user.name}`}
+      className="flex flex-col gap-2 rounded-md bg-amber-soft p-2"
+    >
+      <p className="text-sm text-ink-950">
+        {user.name} will be signed out everywhere and cannot sign in until reactivated.
+      </p>
       <div className="flex flex-wrap gap-2">
         <Button
           variant="danger"

@@ -19,7 +19,9 @@ export function UsersTable({ currentUserId }: { currentUserId: string }) {
           c.getValue() ? (
             <span className="rounded-sm bg-ok-soft px-2 py-0.5 text-sm font-semibold text-ok">Active</span>
           ) : (
-            <span className="rounded-sm bg-amber-soft px-2 py-0.5 text-sm font-semibold text-amber-deep">Deactivated</span>
+            <span className="rounded-sm bg-amber-soft px-2 py-0.5 text-sm font-semibold text-amber-deep">
+              Deactivated
+            </span>
           ),
       }),
       col.display({
@@ -36,7 +38,12 @@ export function UsersTable({ currentUserId }: { currentUserId: string }) {
   return (
     <table className="w-full border-collapse text-left text-base">
       <caption className="sr-only">People who can sign in to your company</caption>
-      <DataTableHead table={table} className="max-md:sr-only" rowClassName="border-b border-line" cellClassName="px-3 py-2 text-sm font-semibold text-muted" />
+      <DataTableHead
+        table={table}
+        className="max-md:sr-only"
+        rowClassName="border-b border-line"
+        cellClassName="px-3 py-2 text-sm font-semibold text-muted"
+      />
       <DataTableBody
         table={table}
         classes={{

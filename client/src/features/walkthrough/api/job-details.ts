@@ -31,13 +31,21 @@ export interface CustomerChanges {
 }
 
 export async function saveCustomer(customerId: string, changes: CustomerChanges) {
-  return (await apiFetch(`/api/customers/${encodeURIComponent(customerId)}`, { method: 'PATCH', body: changes, schema: customerResponse })).customer;
+  return (
+    await apiFetch(`/api/customers/${encodeURIComponent(customerId)}`, {
+      method: 'PATCH',
+      body: changes,
+      schema: customerResponse,
+    })
+  ).customer;
 }
 
 export const customerQueryOptions = (customerId: string) =>
   queryOptions({
     queryKey: [...jobKeys.all, 'customer', customerId] as const,
-    queryFn: async ({ signal }) => (await apiFetch(`/api/customers/${encodeURIComponent(customerId)}`, { schema: customerResponse, signal })).customer,
+    queryFn: async ({ signal }) =>
+      (await apiFetch(`/api/customers/${encodeURIComponent(customerId)}`, { schema: customerResponse, signal }))
+        .customer,
   });
 
 export function useCustomer(customerId: string, enabled: boolean) {

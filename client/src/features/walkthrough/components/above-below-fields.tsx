@@ -3,7 +3,11 @@ import { aboveOptions, belowOptions, ceilingInsulationOptions, floorInsulationOp
 import type { EditorProps } from './editor-props';
 import { SelectInput } from './field-kit';
 
-const ABOVE_DEFAULTS: Record<string, object> = { attic: { kind: 'attic', insulation: 'r30' }, roof: { kind: 'roof', insulation: 'r30' }, conditioned: { kind: 'conditioned' } };
+const ABOVE_DEFAULTS: Record<string, object> = {
+  attic: { kind: 'attic', insulation: 'r30' },
+  roof: { kind: 'roof', insulation: 'r30' },
+  conditioned: { kind: 'conditioned' },
+};
 const BELOW_DEFAULTS: Record<string, object> = {
   slab: { kind: 'slab', edgeInsulated: false },
   crawlspace: { kind: 'crawlspace', vented: true, insulation: 'none' },
@@ -20,16 +24,37 @@ export function AboveBelowFields({ draft, set, err }: EditorProps) {
   const belowKind = asString(below.kind, 'conditioned');
   return (
     <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-      <SelectInput label="Above the room" value={aboveKind} options={aboveOptions} onChange={(k) => set(['above'], ABOVE_DEFAULTS[k])} error={err(['above'])} />
+      <SelectInput
+        label="Above the room"
+        value={aboveKind}
+        options={aboveOptions}
+        onChange={(k) => set(['above'], ABOVE_DEFAULTS[k])}
+        error={err(['above'])}
+      />
       {aboveKind === 'attic' || aboveKind === 'roof' ? (
-        <SelectInput label="Ceiling insulation" value={asString(above.insulation, 'r30')} options={ceilingInsulationOptions} onChange={(x) => set(['above', 'insulation'], x)} error={err(['above', 'insulation'])} />
+        <SelectInput
+          label="Ceiling insulation"
+          value={asString(above.insulation, 'r30')}
+          options={ceilingInsulationOptions}
+          onChange={(x) => set(['above', 'insulation'], x)}
+          error={err(['above', 'insulation'])}
+        />
       ) : null}
-      <SelectInput label="Below the room" value={belowKind} options={belowOptions} onChange={(k) => set(['below'], BELOW_DEFAULTS[k])} error={err(['below'])} />
+      <SelectInput
+        label="Below the room"
+        value={belowKind}
+        options={belowOptions}
+        onChange={(k) => set(['below'], BELOW_DEFAULTS[k])}
+        error={err(['below'])}
+      />
       {belowKind === 'slab' ? (
         <SelectInput
           label="Slab edge"
           value={below.edgeInsulated === true ? 'yes' : 'no'}
-          options={[{ value: 'no', label: 'Edge not insulated' }, { value: 'yes', label: 'Edge insulated' }]}
+          options={[
+            { value: 'no', label: 'Edge not insulated' },
+            { value: 'yes', label: 'Edge insulated' },
+          ]}
           onChange={(x) => set(['below', 'edgeInsulated'], x === 'yes')}
         />
       ) : null}
@@ -37,12 +62,21 @@ export function AboveBelowFields({ draft, set, err }: EditorProps) {
         <SelectInput
           label="Crawl space venting"
           value={below.vented === false ? 'closed' : 'vented'}
-          options={[{ value: 'vented', label: 'Vented' }, { value: 'closed', label: 'Closed (sealed)' }]}
+          options={[
+            { value: 'vented', label: 'Vented' },
+            { value: 'closed', label: 'Closed (sealed)' },
+          ]}
           onChange={(x) => set(['below', 'vented'], x === 'vented')}
         />
       ) : null}
       {belowKind === 'crawlspace' || belowKind === 'basement' || belowKind === 'garage' ? (
-        <SelectInput label="Floor insulation" value={asString(below.insulation, 'none')} options={floorInsulationOptions} onChange={(x) => set(['below', 'insulation'], x)} error={err(['below', 'insulation'])} />
+        <SelectInput
+          label="Floor insulation"
+          value={asString(below.insulation, 'none')}
+          options={floorInsulationOptions}
+          onChange={(x) => set(['below', 'insulation'], x)}
+          error={err(['below', 'insulation'])}
+        />
       ) : null}
     </div>
   );

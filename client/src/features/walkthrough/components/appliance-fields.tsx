@@ -13,10 +13,35 @@ export function ApplianceFields({ draft, set, err, replace }: EditorProps & { re
         return (
           <fieldset key={i} className="grid grid-cols-2 gap-3 rounded-md border border-line p-3 sm:grid-cols-4">
             <legend className="px-1 text-sm font-semibold text-ink-800">Appliance {i + 1}</legend>
-            <TextInput label="Appliance name" value={asString(a.label)} onChange={(x) => set(p('label'), x)} error={err(p('label'))} />
-            <NumberInput label="Heat given off" value={asNumber(a.gain)} unit={asString(a.unit, 'W')} onChange={(x) => set(p('gain'), x)} error={err(p('gain'))} />
-            <SelectInput label="Gain unit" value={asString(a.unit, 'W')} options={[{ value: 'W', label: 'W' }, { value: 'Btu/h', label: 'Btu/h' }]} onChange={(x) => set(p('unit'), x)} />
-            <NumberInput label="Moisture (latent) gain" unit="Btu/h" value={asNumber(a.latentBtuh)} onChange={(x) => set(p('latentBtuh'), x)} error={err(p('latentBtuh'))} />
+            <TextInput
+              label="Appliance name"
+              value={asString(a.label)}
+              onChange={(x) => set(p('label'), x)}
+              error={err(p('label'))}
+            />
+            <NumberInput
+              label="Heat given off"
+              value={asNumber(a.gain)}
+              unit={asString(a.unit, 'W')}
+              onChange={(x) => set(p('gain'), x)}
+              error={err(p('gain'))}
+            />
+            <SelectInput
+              label="Gain unit"
+              value={asString(a.unit, 'W')}
+              options={[
+                { value: 'W', label: 'W' },
+                { value: 'Btu/h', label: 'Btu/h' },
+              ]}
+              onChange={(x) => set(p('unit'), x)}
+            />
+            <NumberInput
+              label="Moisture (latent) gain"
+              unit="Btu/h"
+              value={asNumber(a.latentBtuh)}
+              onChange={(x) => set(p('latentBtuh'), x)}
+              error={err(p('latentBtuh'))}
+            />
             <Button variant="ghost" onClick={() => replace(removeAt(draft, ['appliances'], i))}>
               Remove appliance {i + 1}
             </Button>
@@ -24,7 +49,12 @@ export function ApplianceFields({ draft, set, err, replace }: EditorProps & { re
         );
       })}
       <div>
-        <Button variant="secondary" onClick={() => replace(append(draft, ['appliances'], { label: 'Appliance', gain: 100, unit: 'W', latentBtuh: 0 }))}>
+        <Button
+          variant="secondary"
+          onClick={() =>
+            replace(append(draft, ['appliances'], { label: 'Appliance', gain: 100, unit: 'W', latentBtuh: 0 }))
+          }
+        >
           Add appliance
         </Button>
       </div>

@@ -11,19 +11,29 @@ interface Props {
 
 /** Yours and theirs side by side, per field, with a choice for each. */
 export function ConflictChoices({ title, diffs, onResolve, busy = false }: Props) {
-  const [choices, setChoices] = useState<Record<string, Choice>>(() => Object.fromEntries(diffs.map((d) => [d.key, 'mine'])));
+  const [choices, setChoices] = useState<Record<string, Choice>>(() =>
+    Object.fromEntries(diffs.map((d) => [d.key, 'mine'])),
+  );
   const all = (c: Choice) => Object.fromEntries(diffs.map((d) => [d.key, c]));
   return (
-    <section aria-label="Resolve conflicting changes" className="flex flex-col gap-3 rounded-lg border-2 border-danger bg-white p-4">
+    <section
+      aria-label="Resolve conflicting changes"
+      className="flex flex-col gap-3 rounded-lg border-2 border-danger bg-white p-4"
+    >
       <h2 className="text-lg font-semibold text-danger">{title}</h2>
       <p>Someone else saved this while you were editing. Choose which value to keep for each field.</p>
-      {diffs.length === 0 ? <p className="text-muted">Their version and yours are the same; nothing to choose.</p> : null}
+      {diffs.length === 0 ? (
+        <p className="text-muted">Their version and yours are the same; nothing to choose.</p>
+      ) : null}
       {diffs.map((d) => (
         <fieldset key={d.key} className="rounded-md border border-line p-3">
           <legend className="px-1 font-semibold text-ink-900">{d.label}</legend>
           <div className="grid gap-2 sm:grid-cols-2">
             {(['mine', 'theirs'] as const).map((side) => (
-              <label key={side} className="flex min-h-touch cursor-pointer items-start gap-2 rounded-md border border-line p-2 has-[:checked]:border-ink-700 has-[:checked]:bg-ink-50">
+              <label
+                key={side}
+                className="flex min-h-touch cursor-pointer items-start gap-2 rounded-md border border-line p-2 has-[:checked]:border-ink-700 has-[:checked]:bg-ink-50"
+              >
                 <input
                   type="radio"
                   className="mt-1 size-5"
@@ -33,7 +43,9 @@ export function ConflictChoices({ title, diffs, onResolve, busy = false }: Props
                   aria-label={`${d.label}: keep ${side === 'mine' ? 'yours' : 'theirs'}`}
                 />
                 <span>
-                  <span className="block text-sm font-semibold">{side === 'mine' ? 'Yours' : 'Theirs (saved now)'}</span>
+                  <span className="block text-sm font-semibold">
+                    {side === 'mine' ? 'Yours' : 'Theirs (saved now)'}
+                  </span>
                   <span className="block break-words">{describe(d.key, side === 'mine' ? d.mine : d.theirs)}</span>
                 </span>
               </label>

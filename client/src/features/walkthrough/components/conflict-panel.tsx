@@ -22,14 +22,30 @@ export function ConflictPanel({ item, onResolved }: { item: WalkthroughItem; onR
   return <RoomConflict item={item} jobId={edit.jobId} roomId={edit.roomId} onResolved={onResolved} />;
 }
 
-function RoomConflict({ item, jobId, roomId, onResolved }: { item: WalkthroughItem; jobId: string; roomId: string; onResolved: () => void }) {
+function RoomConflict({
+  item,
+  jobId,
+  roomId,
+  onResolved,
+}: {
+  item: WalkthroughItem;
+  jobId: string;
+  roomId: string;
+  onResolved: () => void;
+}) {
   const queue = useWalkthroughQueue();
   const queryClient = useQueryClient();
-  const current = useQuery({ queryKey: [...jobKeys.rooms(jobId), roomId, 'current', item.id], queryFn: () => getRoom(jobId, roomId), retry: false });
+  const current = useQuery({
+    queryKey: [...jobKeys.rooms(jobId), roomId, 'current', item.id],
+    queryFn: () => getRoom(jobId, roomId),
+    retry: false,
+  });
   const edit = item.payload;
 
   const keepTheirs = (room: RoomRecord) => {
-    queryClient.setQueryData<RoomRecord[]>(jobKeys.rooms(jobId), (rooms) => rooms?.map((r) => (r.id === room.id ? room : r)));
+    queryClient.setQueryData<RoomRecord[]>(jobKeys.rooms(jobId), (rooms) =>
+      rooms?.map((r) => (r.id === room.id ? room : r)),
+    );
   };
 
   if (current.isPending) return <Spinner label="Reading the saved version…" />;
@@ -37,7 +53,11 @@ function RoomConflict({ item, jobId, roomId, onResolved }: { item: WalkthroughIt
     return (
       <Alert tone="danger" title="This room was changed or removed by someone else.">
         <p>{errorMessage(current.error)}</p>
-        <Button className="mt-2" variant="secondary" onClick={() => void queue.resolveConflict(item.id, 'drop').then(onResolved)}>
+        <Button
+          className="mt-2"
+          variant="secondary"
+          onClick={() => void queue.resolveConflict(item.id, 'drop').then(onResolved)}
+        >
           Discard my change
         </Button>
       </Alert>
@@ -46,12 +66,26 @@ function RoomConflict({ item, jobId, roomId, onResolved }: { item: WalkthroughIt
   const theirs = current.data;
   if (edit.kind === 'room-delete') {
     return (
-      <Alert tone="danger" title={`Someone changed “${String(theirs.input.name ?? 'this room')}” after you deleted it.`}>
+      <Alert
+        tone="danger"
+        title={`Someone changed “${String(theirs.input.name ?? 'this room')}” after you deleted it.`}
+      >
         <div className="mt-2 flex flex-wrap gap-2">
-          <Button variant="danger" onClick={() => void queue.resolveConflict(item.id, { payload: edit, baseVersion: theirs.version }).then(onResolved)}>
+          <Button
+            variant="danger"
+            onClick={() =>
+              void queue.resolveConflict(item.id, { payload: edit, baseVersion: theirs.version }).then(onResolved)
+            }
+          >
             Delete it anyway
           </Button>
-          <Button variant="secondary" onClick={() => { keepTheirs(theirs); void queue.resolveConflict(item.id, 'drop').then(onResolved); }}>
+          <Button
+            variant="secondary"
+            onClick={() => {
+              keepTheirs(theirs);
+              void queue.resolveConflict(item.id, 'drop').then(onResolved);
+            }}
+          >
             Keep the room
           </Button>
         </div>
@@ -70,17 +104,33 @@ function RoomConflict({ item, jobId, roomId, onResolved }: { item: WalkthroughIt
     const input = { ...mergeChoices(edit.input, theirs.input, choices), id: roomId };
     void queue.resolveConflict(item.id, { payload: { ...edit, input }, baseVersion: theirs.version }).then(onResolved);
   };
-  return <ConflictChoices key={item.id} title={`“${String(theirs.input.name ?? 'Room')}” was changed by someone else`} diffs={diffs} onResolve={handleResolve} />;
+  return (
+    <ConflictChoices
+      key={item.id}
+      title={`“${String(theirs.input.name ?? 'Room')}” was changed by someone else`}
+      diffs={diffs}
+      onResolve={handleResolve}
+    />
+  );
 }
 
 function JobConflict({ item, jobId, onResolved }: { item: WalkthroughItem; jobId: string; onResolved: () => void }) {
   const queue = useWalkthroughQueue();
   const queryClient = useQueryClient();
-  const current = useQuery({ queryKey: [...jobKeys.detail(jobId), 'current', item.id], queryFn: ({ signal }) => getJob(jobId, signal), retry: false });
+  const current = useQuery({
+    queryKey: [...jobKeys.detail(jobId), 'current', item.id],
+    queryFn: ({ signal }) => getJob(jobId, signal),
+    retry: false,
+  });
   const edit = item.payload;
   if (edit.kind !== 'job-update') return null;
   if (current.isPending) return <Spinner label="Reading the saved version…" />;
-  if (current.isError) return <Alert tone="danger" title="Could not read the job as saved now.">{errorMessage(current.error)}</Alert>;
+  if (current.isError)
+    return (
+      <Alert tone="danger" title="Could not read the job as saved now.">
+        {errorMessage(current.error)}
+      </Alert>
+    );
   const theirs: JobRecord = current.data;
   const mine = edit.changes.designConditions ?? {};
   const theirValues = theirs.designConditions ?? {};
@@ -95,7 +145,19 @@ function JobConflict({ item, jobId, onResolved }: { item: WalkthroughItem; jobId
     for (const [k, v] of Object.entries(mergeChoices(mine, theirValues, choices))) {
       if ((k in mine || choices[k] === 'mine') && (typeof v === 'number' || typeof v === 'string')) entered[k] = v;
     }
-    void queue.resolveConflict(item.id, { payload: { ...edit, changes: { ...edit.changes, designConditions: entered } }, baseVersion: theirs.version }).then(onResolved);
+    void queue
+      .resolveConflict(item.id, {
+        payload: { ...edit, changes: { ...edit.changes, designConditions: entered } },
+        baseVersion: theirs.version,
+      })
+      .then(onResolved);
   };
-  return <ConflictChoices key={item.id} title="The site’s design conditions were changed by someone else" diffs={diffs} onResolve={handleResolve} />;
+  return (
+    <ConflictChoices
+      key={item.id}
+      title="The site’s design conditions were changed by someone else"
+      diffs={diffs}
+      onResolve={handleResolve}
+    />
+  );
 }

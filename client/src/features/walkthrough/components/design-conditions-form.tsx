@@ -8,8 +8,13 @@ import { useWalkthroughQueue } from '../sync/queue-context';
 import { useDebouncedSave } from '../sync/use-debounced-save';
 import { NumberInput, SelectInput, TextInput } from './field-kit';
 
-const NOTICE = 'Design values must come from the local code’s climate table or a recognised climatic data source for the site.';
-const sourceLabels = { entered: 'Entered for this job', 'company-default': 'Company default', 'standard-default': 'Standard default' } as const;
+const NOTICE =
+  'Design values must come from the local code’s climate table or a recognised climatic data source for the site.';
+const sourceLabels = {
+  entered: 'Entered for this job',
+  'company-default': 'Company default',
+  'standard-default': 'Standard default',
+} as const;
 const tightnessOptions = Object.entries(INFILTRATION_TIGHTNESS).map(([value, t]) => ({ value, label: t.label }));
 
 interface Props {
@@ -23,12 +28,18 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
   const queue = useWalkthroughQueue();
   const [entered, setEntered] = useState<Entered>(() => enteredFromJob(job));
   const [notes, setNotes] = useState<Record<string, string>>(() => notesFromJob(job));
-  const [source, setSource] = useState(() => (typeof job.designConditions?.source === 'string' ? job.designConditions.source : ''));
+  const [source, setSource] = useState(() =>
+    typeof job.designConditions?.source === 'string' ? job.designConditions.source : '',
+  );
   const [tightness, setTightness] = useState<string>(job.tightness);
   const resolved = resolveDesign(entered, source, companyDefaults);
 
   const { schedule } = useDebouncedSave<JobChanges>(jobTarget(job.id), (changes) => {
-    void queue.enqueue({ target: jobTarget(job.id), baseVersion: job.version, payload: { kind: 'job-update', jobId: job.id, changes } });
+    void queue.enqueue({
+      target: jobTarget(job.id),
+      baseVersion: job.version,
+      payload: { kind: 'job-update', jobId: job.id, changes },
+    });
   });
   const save = (next: { entered?: Entered; notes?: Record<string, string>; source?: string; tightness?: string }) => {
     const e = next.entered ?? entered;
@@ -39,7 +50,11 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
     const designConditions: Record<string, number | string> = {};
     for (const [k, v] of Object.entries(e)) if (v !== undefined) designConditions[k] = v;
     if (s.trim()) designConditions.source = s.trim();
-    schedule({ designConditions, designSourceNotes: Object.fromEntries(Object.entries(n).filter(([, v]) => v.trim() !== '')), tightness: t });
+    schedule({
+      designConditions,
+      designSourceNotes: Object.fromEntries(Object.entries(n).filter(([, v]) => v.trim() !== '')),
+      tightness: t,
+    });
   };
 
   return (
@@ -92,8 +107,24 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
         })}
       </div>
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextInput label="Source of the design values (e.g. the local code table)" value={source} error={resolved.errors.get('source')} onChange={(v) => { setSource(v); save({ source: v }); }} />
-        <SelectInput label="How tight is the house" value={tightness} options={tightnessOptions} onChange={(v) => { setTightness(v); save({ tightness: v }); }} />
+        <TextInput
+          label="Source of the design values (e.g. the local code table)"
+          value={source}
+          error={resolved.errors.get('source')}
+          onChange={(v) => {
+            setSource(v);
+            save({ source: v });
+          }}
+        />
+        <SelectInput
+          label="How tight is the house"
+          value={tightness}
+          options={tightnessOptions}
+          onChange={(v) => {
+            setTightness(v);
+            save({ tightness: v });
+          }}
+        />
       </div>
     </section>
   );

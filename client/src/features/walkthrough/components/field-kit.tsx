@@ -23,10 +23,22 @@ export function FieldShell({ id, label, error, hint, unit, children }: ShellProp
       </label>
       <div className="flex items-center gap-2">
         {children}
-        {unit ? <span id={`${id}-unit`} className="min-w-8 text-sm text-muted">{unit}</span> : null}
+        {unit ? (
+          <span id={`${id}-unit`} className="min-w-8 text-sm text-muted">
+            {unit}
+          </span>
+        ) : null}
       </div>
-      {hint ? <p id={`${id}-hint`} className="text-sm text-muted">{hint}</p> : null}
-      {error ? <p id={`${id}-error`} className="text-sm font-semibold text-danger">{error}</p> : null}
+      {hint ? (
+        <p id={`${id}-hint`} className="text-sm text-muted">
+          {hint}
+        </p>
+      ) : null}
+      {error ? (
+        <p id={`${id}-error`} className="text-sm font-semibold text-danger">
+          {error}
+        </p>
+      ) : null}
     </div>
   );
 }
@@ -34,7 +46,9 @@ export function FieldShell({ id, label, error, hint, unit, children }: ShellProp
 const aria = (id: string, error: string | undefined, hint: boolean, unit = false) => ({
   'aria-invalid': error ? true : undefined,
   // The unit is read with the field ("Length, ft") without becoming part of its name.
-  'aria-describedby': [unit ? `${id}-unit` : '', error ? `${id}-error` : '', hint ? `${id}-hint` : ''].filter(Boolean).join(' ') || undefined,
+  'aria-describedby':
+    [unit ? `${id}-unit` : '', error ? `${id}-error` : '', hint ? `${id}-hint` : ''].filter(Boolean).join(' ') ||
+    undefined,
 });
 
 interface NumberProps {
@@ -56,7 +70,16 @@ const format = (v: number | undefined) => (v === undefined || Number.isNaN(v) ? 
  * text → NaN, so calc's schema says what is wrong. Keeps the typed text while it parses
  * to the same number ("8." stays "8.").
  */
-export function NumberInput({ label, value, onChange, quantity = 'plain', unit = '', error: canonicalError, hint, integer = false }: NumberProps) {
+export function NumberInput({
+  label,
+  value,
+  onChange,
+  quantity = 'plain',
+  unit = '',
+  error: canonicalError,
+  hint,
+  integer = false,
+}: NumberProps) {
   const id = useId();
   const system = useUnitSystem();
   const error = localiseBound(canonicalError, quantity, system);
@@ -64,7 +87,8 @@ export function NumberInput({ label, value, onChange, quantity = 'plain', unit =
   const [text, setText] = useState(format(shown));
   useEffect(() => {
     const typed = text.trim() === '' ? undefined : Number(text.replace(',', '.'));
-    if (typed !== shown && !(typed !== undefined && shown !== undefined && Number.isNaN(typed) && Number.isNaN(shown))) setText(format(shown));
+    if (typed !== shown && !(typed !== undefined && shown !== undefined && Number.isNaN(typed) && Number.isNaN(shown)))
+      setText(format(shown));
     // Only an outside change of the value (copy, conflict choice) rewrites the text.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [shown]);
@@ -104,9 +128,23 @@ export function TextInput({ label, value, onChange, error, multiline = false }: 
   return (
     <FieldShell id={id} label={label} error={error}>
       {multiline ? (
-        <textarea id={id} rows={3} className={`${inputClass} py-2`} value={value} onChange={(e) => onChange(e.target.value)} {...aria(id, error, false)} />
+        <textarea
+          id={id}
+          rows={3}
+          className={`${inputClass} py-2`}
+          value={value}
+          onChange={(e) => onChange(e.target.value)}
+          {...aria(id, error, false)}
+        />
       ) : (
-        <input id={id} type="text" className={inputClass} value={value} onChange={(e) => onChange(e.target.value)} {...aria(id, error, false)} />
+        <input
+          id={id}
+          type="text"
+          className={inputClass}
+          value={value}
+          onChange={(e) => onChange(e.target.value)}
+          {...aria(id, error, false)}
+        />
       )}
     </FieldShell>
   );
@@ -124,7 +162,13 @@ export function SelectInput({ label, value, onChange, options, error }: SelectPr
   const id = useId();
   return (
     <FieldShell id={id} label={label} error={error}>
-      <select id={id} className={inputClass} value={value} onChange={(e) => onChange(e.target.value)} {...aria(id, error, false)}>
+      <select
+        id={id}
+        className={inputClass}
+        value={value}
+        onChange={(e) => onChange(e.target.value)}
+        {...aria(id, error, false)}
+      >
         {options.map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}

@@ -9,9 +9,24 @@ import { Spinner } from '../../../components/ui/spinner';
 import { ApiError, errorMessage, isApiError } from '../../../lib/api-error';
 import { customerFields, siteFields } from '../../../lib/job-fields';
 import { jobKeys } from '../../../lib/job-queries';
-import { JOB_STATUS_MOVES, jobStatusLabels, moveLabels, type CustomerRecord, type JobRecord, type JobStatus } from '../../../lib/job-records';
+import {
+  JOB_STATUS_MOVES,
+  jobStatusLabels,
+  moveLabels,
+  type CustomerRecord,
+  type JobRecord,
+  type JobStatus,
+} from '../../../lib/job-records';
 import { isOffice, useViewer } from '../../../lib/viewer';
-import { customerQueryOptions, saveCustomer, saveJobDetails, useCustomer, useStaff, type JobDetailsChanges, type StaffMember } from '../api/job-details';
+import {
+  customerQueryOptions,
+  saveCustomer,
+  saveJobDetails,
+  useCustomer,
+  useStaff,
+  type JobDetailsChanges,
+  type StaffMember,
+} from '../api/job-details';
 import { useWalkthroughQueue } from '../sync/queue-context';
 import { canDeleteJob, DeleteJobButton } from './delete-job-button';
 
@@ -30,9 +45,17 @@ const customerField: Record<string, string> = { name: 'customerName', email: 'cu
 
 function valuesOf(job: JobRecord, customer: CustomerRecord): DetailsInput {
   return {
-    customerName: customer.name, customerEmail: customer.email ?? '', customerPhone: customer.phone ?? '',
-    street: job.site.street, unit: job.site.unit, city: job.site.city, region: job.site.region, postalCode: job.site.postalCode,
-    notes: job.notes, salespersonId: job.salesperson?.id ?? '', assignedInstallerId: job.assignedInstaller?.id ?? '',
+    customerName: customer.name,
+    customerEmail: customer.email ?? '',
+    customerPhone: customer.phone ?? '',
+    street: job.site.street,
+    unit: job.site.unit,
+    city: job.site.city,
+    region: job.site.region,
+    postalCode: job.site.postalCode,
+    notes: job.notes,
+    salespersonId: job.salesperson?.id ?? '',
+    assignedInstallerId: job.assignedInstaller?.id ?? '',
   };
 }
 
@@ -42,13 +65,22 @@ function valuesOf(job: JobRecord, customer: CustomerRecord): DetailsInput {
  */
 function jobChanges(job: JobRecord, v: DetailsValues, office: boolean, dirty: ReadonlySet<string>): JobDetailsChanges {
   const out: Record<string, string | null> = {};
-  const site = { street: job.site.street, unit: job.site.unit, city: job.site.city, region: job.site.region, postalCode: job.site.postalCode, notes: job.notes };
+  const site = {
+    street: job.site.street,
+    unit: job.site.unit,
+    city: job.site.city,
+    region: job.site.region,
+    postalCode: job.site.postalCode,
+    notes: job.notes,
+  };
   for (const [k, before] of Object.entries(site)) {
     const now = v[k as keyof typeof site];
     if (dirty.has(k) && now !== before) out[k] = now;
   }
-  if (office && dirty.has('salespersonId') && v.salespersonId && v.salespersonId !== (job.salesperson?.id ?? '')) out.salespersonId = v.salespersonId;
-  if (office && dirty.has('assignedInstallerId') && v.assignedInstallerId !== (job.assignedInstaller?.id ?? '')) out.assignedInstallerId = v.assignedInstallerId || null;
+  if (office && dirty.has('salespersonId') && v.salespersonId && v.salespersonId !== (job.salesperson?.id ?? ''))
+    out.salespersonId = v.salespersonId;
+  if (office && dirty.has('assignedInstallerId') && v.assignedInstallerId !== (job.assignedInstaller?.id ?? ''))
+    out.assignedInstallerId = v.assignedInstallerId || null;
   return out;
 }
 
@@ -82,7 +114,12 @@ function useJobWriter(job: JobRecord) {
       if (isApiError(e) && e.status === 409) {
         // Show their version; what this person typed stays in the form to save again.
         await queryClient.invalidateQueries({ queryKey: jobKeys.detail(job.id), exact: true });
-        throw new ApiError({ ...e, detail: 'Someone else saved this job meanwhile. Their version is loaded now: check the fields and save again.', errors: [] });
+        throw new ApiError({
+          ...e,
+          detail:
+            'Someone else saved this job meanwhile. Their version is loaded now: check the fields and save again.',
+          errors: [],
+        });
       }
       throw e;
     }
@@ -113,20 +150,35 @@ function StatusMoves({ job }: { job: JobRecord }) {
       </p>
       <div className="flex flex-wrap gap-2">
         {moves.map((to) => (
-          <Button key={to} variant={to === 'lost' ? 'ghost' : 'secondary'} busy={busy === to} disabled={busy !== null} onClick={() => void move(to)}>
+          <Button
+            key={to}
+            variant={to === 'lost' ? 'ghost' : 'secondary'}
+            busy={busy === to}
+            disabled={busy !== null}
+            onClick={() => void move(to)}
+          >
             {moveLabels[to]}
           </Button>
         ))}
       </div>
-      {error ? <Alert tone="danger" title="The status was not changed.">{error}</Alert> : null}
+      {error ? (
+        <Alert tone="danger" title="The status was not changed.">
+          {error}
+        </Alert>
+      ) : null}
     </div>
   );
 }
 
-const peopleOptions = (staff: readonly StaffMember[], roles: readonly string[], current: { id: string; name: string } | null) => {
+const peopleOptions = (
+  staff: readonly StaffMember[],
+  roles: readonly string[],
+  current: { id: string; name: string } | null,
+) => {
   const list = staff.filter((s) => roles.includes(s.role)).map((s) => ({ value: s.id, label: s.name }));
   // Someone no longer active still shows as the one the job is with until it is handed on.
-  if (current && !list.some((o) => o.value === current.id)) list.unshift({ value: current.id, label: `${current.name} (inactive)` });
+  if (current && !list.some((o) => o.value === current.id))
+    list.unshift({ value: current.id, label: `${current.name} (inactive)` });
   return list;
 };
 
@@ -143,21 +195,30 @@ function DetailsForm({ job, customer, office }: { job: JobRecord; customer: Cust
       onSubmit={async (values, form) => {
         setSaved(false);
         // Only fields the person touched go out (see jobChanges).
-        const dirty = new Set(Object.entries(form.formState.dirtyFields).filter(([, on]) => on === true).map(([k]) => k));
+        const dirty = new Set(
+          Object.entries(form.formState.dirtyFields)
+            .filter(([, on]) => on === true)
+            .map(([k]) => k),
+        );
         const forCustomer = customerChanges(customer, values, dirty);
         if (Object.keys(forCustomer).length > 0) {
           try {
             const c = await saveCustomer(customer.id, forCustomer);
             queryClient.setQueryData(customerQueryOptions(c.id).queryKey, c);
           } catch (e) {
-            if (isApiError(e)) throw new ApiError({ ...e, errors: e.errors.map((f) => ({ ...f, path: customerField[f.path] ?? f.path })) });
+            if (isApiError(e))
+              throw new ApiError({
+                ...e,
+                errors: e.errors.map((f) => ({ ...f, path: customerField[f.path] ?? f.path })),
+              });
             throw e;
           }
         }
         const forJob = jobChanges(job, values, office, dirty);
         if (Object.keys(forJob).length > 0) await write(forJob);
         // The job's header and the jobs list show the customer's name.
-        if (forCustomer.name !== undefined) void queryClient.invalidateQueries({ queryKey: jobKeys.detail(job.id), exact: true });
+        if (forCustomer.name !== undefined)
+          void queryClient.invalidateQueries({ queryKey: jobKeys.detail(job.id), exact: true });
         form.reset(values);
         setSaved(true);
       }}
@@ -181,18 +242,35 @@ function DetailsForm({ job, customer, office }: { job: JobRecord; customer: Cust
         staff.data ? (
           <fieldset className="grid gap-4 sm:grid-cols-2">
             <legend className="mb-2 text-base font-semibold text-ink-900">People</legend>
-            <SelectField name="salespersonId" label="Salesperson" options={peopleOptions(staff.data, ['salesperson', 'estimator', 'owner'], job.salesperson)} />
-            <SelectField name="assignedInstallerId" label="Installer" options={[{ value: '', label: 'Not assigned yet' }, ...peopleOptions(staff.data, ['installer'], job.assignedInstaller)]} />
+            <SelectField
+              name="salespersonId"
+              label="Salesperson"
+              options={peopleOptions(staff.data, ['salesperson', 'estimator', 'owner'], job.salesperson)}
+            />
+            <SelectField
+              name="assignedInstallerId"
+              label="Installer"
+              options={[
+                { value: '', label: 'Not assigned yet' },
+                ...peopleOptions(staff.data, ['installer'], job.assignedInstaller),
+              ]}
+            />
           </fieldset>
         ) : staff.isError ? (
-          <Alert tone="warning" title="Could not load your company’s people.">{errorMessage(staff.error)}</Alert>
+          <Alert tone="warning" title="Could not load your company’s people.">
+            {errorMessage(staff.error)}
+          </Alert>
         ) : (
           <Spinner label="Loading your company’s people…" />
         )
       ) : null}
       <div className="flex flex-wrap items-center gap-3">
         <SubmitButton>Save details</SubmitButton>
-        {saved ? <p role="status" className="text-sm font-semibold text-ok">Details saved.</p> : null}
+        {saved ? (
+          <p role="status" className="text-sm font-semibold text-ok">
+            Details saved.
+          </p>
+        ) : null}
       </div>
     </Form>
   );
@@ -225,7 +303,10 @@ export function JobDetailsPanel({ job }: { job: JobRecord }) {
   return (
     <details className="rounded-lg border border-line bg-white p-4">
       <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">
-        Job details <span className="ml-2 rounded-full bg-ink-50 px-3 py-1 text-sm font-semibold text-ink-800">{jobStatusLabels[job.status]}</span>
+        Job details{' '}
+        <span className="ml-2 rounded-full bg-ink-50 px-3 py-1 text-sm font-semibold text-ink-800">
+          {jobStatusLabels[job.status]}
+        </span>
       </summary>
       <div className="mt-4 flex flex-col gap-6">
         {canEdit ? <StatusMoves job={job} /> : null}
@@ -234,7 +315,9 @@ export function JobDetailsPanel({ job }: { job: JobRecord }) {
         ) : customer.data ? (
           <DetailsForm job={job} customer={customer.data} office={isOffice(viewer)} />
         ) : customer.isError ? (
-          <Alert tone="danger" title="Could not load the customer’s details.">{errorMessage(customer.error)}</Alert>
+          <Alert tone="danger" title="Could not load the customer’s details.">
+            {errorMessage(customer.error)}
+          </Alert>
         ) : (
           <Spinner label="Loading the customer’s details…" />
         )}

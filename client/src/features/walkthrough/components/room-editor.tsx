@@ -29,10 +29,17 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
   const queue = useWalkthroughQueue();
   // A draft the schema refused last time (still being fixed) comes back instead of the saved room.
   const [restored] = useState(() => takeUnsavedDraft(room.id, room.version));
-  const [draft, setDraft] = useState<Record<string, unknown>>(() => ({ ...(restored?.input ?? room.input), id: room.id }));
+  const [draft, setDraft] = useState<Record<string, unknown>>(() => ({
+    ...(restored?.input ?? room.input),
+    id: room.id,
+  }));
   const check = useMemo(() => checkRoom(draft), [draft]);
   const { schedule } = useDebouncedSave<Record<string, unknown>>(roomTarget(room.id), (input) => {
-    void queue.enqueue({ target: roomTarget(room.id), baseVersion: room.version, payload: { kind: 'room-update', jobId, roomId: room.id, input } });
+    void queue.enqueue({
+      target: roomTarget(room.id),
+      baseVersion: room.version,
+      payload: { kind: 'room-update', jobId, roomId: room.id, input },
+    });
   });
 
   const replace = (next: unknown) => {
@@ -56,59 +63,115 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
   return (
     <section aria-label={`Room: ${name}`} className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_24rem]">
       <div className="flex min-w-0 flex-col gap-5">
-      {restored && !check.ok ? (
-        <p role="note" className="rounded-md border border-amber-line bg-amber-soft px-3 py-2 text-sm text-amber-deep">
-          Brought back what you were typing here. It saves as soon as the fields marked in red are fixed.
-        </p>
-      ) : null}
-      <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
-        <div className="col-span-2 sm:col-span-1">
-          <TextInput label="Room name" value={asString(draft.name)} onChange={(x) => set(['name'], x)} error={err(['name'])} />
+        {restored && !check.ok ? (
+          <p
+            role="note"
+            className="rounded-md border border-amber-line bg-amber-soft px-3 py-2 text-sm text-amber-deep"
+          >
+            Brought back what you were typing here. It saves as soon as the fields marked in red are fixed.
+          </p>
+        ) : null}
+        <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
+          <div className="col-span-2 sm:col-span-1">
+            <TextInput
+              label="Room name"
+              value={asString(draft.name)}
+              onChange={(x) => set(['name'], x)}
+              error={err(['name'])}
+            />
+          </div>
+          <SelectInput
+            label="Floor level"
+            value={String(asNumber(draft.floorLevel) ?? 1)}
+            options={floorLevelOptions}
+            onChange={(x) => set(['floorLevel'], Number(x))}
+            error={err(['floorLevel'])}
+          />
+          <NumberInput
+            label="Length"
+            quantity="ft"
+            value={asNumber(draft.lengthFt)}
+            onChange={(x) => set(['lengthFt'], x)}
+            error={err(['lengthFt'])}
+          />
+          <NumberInput
+            label="Width"
+            quantity="ft"
+            value={asNumber(draft.widthFt)}
+            onChange={(x) => set(['widthFt'], x)}
+            error={err(['widthFt'])}
+          />
+          <NumberInput
+            label="Floor area"
+            hint="Only if length × width does not fit"
+            quantity="ft2"
+            value={asNumber(draft.areaFt2)}
+            onChange={(x) => set(['areaFt2'], x)}
+            error={err(['areaFt2'])}
+          />
+          <NumberInput
+            label="Ceiling height"
+            quantity="ft"
+            value={asNumber(draft.ceilingHeightFt)}
+            onChange={(x) => set(['ceilingHeightFt'], x)}
+            error={err(['ceilingHeightFt'])}
+          />
         </div>
-        <SelectInput label="Floor level" value={String(asNumber(draft.floorLevel) ?? 1)} options={floorLevelOptions} onChange={(x) => set(['floorLevel'], Number(x))} error={err(['floorLevel'])} />
-        <NumberInput label="Length" quantity="ft" value={asNumber(draft.lengthFt)} onChange={(x) => set(['lengthFt'], x)} error={err(['lengthFt'])} />
-        <NumberInput label="Width" quantity="ft" value={asNumber(draft.widthFt)} onChange={(x) => set(['widthFt'], x)} error={err(['widthFt'])} />
-        <NumberInput label="Floor area" hint="Only if length × width does not fit" quantity="ft2" value={asNumber(draft.areaFt2)} onChange={(x) => set(['areaFt2'], x)} error={err(['areaFt2'])} />
-        <NumberInput label="Ceiling height" quantity="ft" value={asNumber(draft.ceilingHeightFt)} onChange={(x) => set(['ceilingHeightFt'], x)} error={err(['ceilingHeightFt'])} />
-      </div>
 
-      <div className="flex flex-col gap-3">
-        <h3 className="text-lg font-semibold text-ink-900">Outside walls</h3>
-        {err(['exposedWalls']) ? <p className="text-sm font-semibold text-danger">{err(['exposedWalls'])}</p> : null}
-        {walls.map((_, i) => (
-          <WallFields key={i} index={i} replace={replace} {...props} />
-        ))}
-        <div>
-          <Button variant="secondary" onClick={() => replace(setIn(draft, ['exposedWalls'], [...walls, NEW_WALL]))}>
-            Add wall
-          </Button>
+        <div className="flex flex-col gap-3">
+          <h3 className="text-lg font-semibold text-ink-900">Outside walls</h3>
+          {err(['exposedWalls']) ? <p className="text-sm font-semibold text-danger">{err(['exposedWalls'])}</p> : null}
+          {walls.map((_, i) => (
+            <WallFields key={i} index={i} replace={replace} {...props} />
+          ))}
+          <div>
+            <Button variant="secondary" onClick={() => replace(setIn(draft, ['exposedWalls'], [...walls, NEW_WALL]))}>
+              Add wall
+            </Button>
+          </div>
         </div>
-      </div>
 
-      <div className="flex flex-col gap-3">
-        <h3 className="text-lg font-semibold text-ink-900">Above and below</h3>
-        <AboveBelowFields {...props} />
-      </div>
-
-      <div className="flex flex-col gap-3">
-        <h3 className="text-lg font-semibold text-ink-900">People and appliances</h3>
-        <div className="max-w-48">
-          <NumberInput label="Occupants" integer unit="people" value={asNumber(draft.occupants)} onChange={(x) => set(['occupants'], x)} error={err(['occupants'])} />
+        <div className="flex flex-col gap-3">
+          <h3 className="text-lg font-semibold text-ink-900">Above and below</h3>
+          <AboveBelowFields {...props} />
         </div>
-        <ApplianceFields replace={replace} {...props} />
-      </div>
 
-      <TextInput label="Notes" multiline value={asString(draft.notes)} onChange={(x) => set(['notes'], x)} error={err(['notes'])} />
+        <div className="flex flex-col gap-3">
+          <h3 className="text-lg font-semibold text-ink-900">People and appliances</h3>
+          <div className="max-w-48">
+            <NumberInput
+              label="Occupants"
+              integer
+              unit="people"
+              value={asNumber(draft.occupants)}
+              onChange={(x) => set(['occupants'], x)}
+              error={err(['occupants'])}
+            />
+          </div>
+          <ApplianceFields replace={replace} {...props} />
+        </div>
 
-      <QueryWidgetBoundary name="the room photos">
-        <RoomPhotos jobId={jobId} room={room} />
-      </QueryWidgetBoundary>
+        <TextInput
+          label="Notes"
+          multiline
+          value={asString(draft.notes)}
+          onChange={(x) => set(['notes'], x)}
+          error={err(['notes'])}
+        />
 
+        <QueryWidgetBoundary name="the room photos">
+          <RoomPhotos jobId={jobId} room={room} />
+        </QueryWidgetBoundary>
       </div>
       {/* On a wide screen the loads stay in view beside the form while it is filled in. */}
       <aside className="min-w-0 lg:sticky lg:top-20 lg:self-start">
         <QueryWidgetBoundary name="the room loads">
-          <RoomLoadPanel room={check.ok ? check.room : null} warnings={check.ok ? check.warnings : []} designConditions={designConditions} tightness={tightness} />
+          <RoomLoadPanel
+            room={check.ok ? check.room : null}
+            warnings={check.ok ? check.warnings : []}
+            designConditions={designConditions}
+            tightness={tightness}
+          />
         </QueryWidgetBoundary>
       </aside>
     </section>

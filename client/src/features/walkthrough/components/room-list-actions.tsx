@@ -9,22 +9,43 @@ import { SelectInput } from './field-kit';
 const templateOptions = ROOM_TEMPLATES.map((t) => ({ value: t.key, label: t.label }));
 
 /** "Add room" from a template and "Copy previous room": a typical room in a tap or two. */
-export function RoomListActions({ jobId, rooms, onCreated }: { jobId: string; rooms: readonly RoomView[]; onCreated: (id: string) => void }) {
+export function RoomListActions({
+  jobId,
+  rooms,
+  onCreated,
+}: {
+  jobId: string;
+  rooms: readonly RoomView[];
+  onCreated: (id: string) => void;
+}) {
   const queue = useWalkthroughQueue();
   const [template, setTemplate] = useState('bedroom');
   const nextPosition = rooms.reduce((m, r) => Math.max(m, r.position + 1), 0);
   const previous = rooms[rooms.length - 1];
 
   const create = (input: Record<string, unknown>, id: string) => {
-    void queue.enqueue({ target: roomTarget(id), baseVersion: null, payload: { kind: 'room-create', jobId, roomId: id, position: nextPosition, input } });
+    void queue.enqueue({
+      target: roomTarget(id),
+      baseVersion: null,
+      payload: { kind: 'room-create', jobId, roomId: id, position: nextPosition, input },
+    });
     onCreated(id);
   };
   const handleAdd = () => {
     const t = ROOM_TEMPLATES.find((x) => x.key === template) ?? ROOM_TEMPLATES[0];
     if (!t) return;
     const id = newRoomId();
-    const sameKind = rooms.filter((r) => typeof r.input.name === 'string' && r.input.name.startsWith(String(t.input.name))).length;
-    create({ ...structuredClone(t.input), id, name: sameKind > 0 ? `${String(t.input.name)} ${sameKind + 1}` : t.input.name }, id);
+    const sameKind = rooms.filter(
+      (r) => typeof r.input.name === 'string' && r.input.name.startsWith(String(t.input.name)),
+    ).length;
+    create(
+      {
+        ...structuredClone(t.input),
+        id,
+        name: sameKind > 0 ? `${String(t.input.name)} ${sameKind + 1}` : t.input.name,
+      },
+      id,
+    );
   };
   const handleCopy = () => {
     if (!previous) return;

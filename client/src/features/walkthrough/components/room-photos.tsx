@@ -32,7 +32,12 @@ export function RoomPhotos({ jobId, room }: { jobId: string; room: RoomView }) {
           {room.photos.map((p, i) => (
             <li key={p.id}>
               <a href={p.url} target="_blank" rel="noreferrer">
-                <img src={p.url} alt={`Photo ${i + 1} of ${room.photos.length}`} loading="lazy" className="size-24 rounded-md border border-line object-cover" />
+                <img
+                  src={p.url}
+                  alt={`Photo ${i + 1} of ${room.photos.length}`}
+                  loading="lazy"
+                  className="size-24 rounded-md border border-line object-cover"
+                />
               </a>
             </li>
           ))}
@@ -46,7 +51,10 @@ export function RoomPhotos({ jobId, room }: { jobId: string; room: RoomView }) {
         <p className="text-sm text-muted">No photos yet.</p>
       )}
       <div>
-        <label htmlFor={id} className="inline-flex min-h-touch cursor-pointer items-center rounded-md border border-line bg-white px-4 font-semibold text-ink-900 hover:bg-ink-50">
+        <label
+          htmlFor={id}
+          className="inline-flex min-h-touch cursor-pointer items-center rounded-md border border-line bg-white px-4 font-semibold text-ink-900 hover:bg-ink-50"
+        >
           Take or add a photo
         </label>
         <input
@@ -62,10 +70,20 @@ export function RoomPhotos({ jobId, room }: { jobId: string; room: RoomView }) {
         />
       </div>
       {busy ? <p className="text-sm text-muted">Uploading…</p> : null}
-      {mine.length > 0 && room.version === null ? <p className="text-sm text-muted">Photos wait on this device until the room has reached the server.</p> : null}
-      {mine.length > 0 && room.version !== null && !online ? <p className="text-sm text-muted">Photos upload when the connection is back; they are kept on this device meanwhile.</p> : null}
+      {mine.length > 0 && room.version === null ? (
+        <p className="text-sm text-muted">Photos wait on this device until the room has reached the server.</p>
+      ) : null}
+      {mine.length > 0 && room.version !== null && !online ? (
+        <p className="text-sm text-muted">
+          Photos upload when the connection is back; they are kept on this device meanwhile.
+        </p>
+      ) : null}
       <PhotoRefusals show={(n) => n.jobId === jobId && n.roomId === room.id} />
-      {added && mine.length === 0 ? <p role="status" className="text-sm text-ok">{added.message}</p> : null}
+      {added && mine.length === 0 ? (
+        <p role="status" className="text-sm text-ok">
+          {added.message}
+        </p>
+      ) : null}
     </div>
   );
 }

@@ -1,7 +1,15 @@
 import type { RoomView } from '../sync/overlay';
 
 /** One button per room; the chosen one is open below. */
-export function RoomTabs({ rooms, selectedId, onSelect }: { rooms: readonly RoomView[]; selectedId: string | null; onSelect: (id: string) => void }) {
+export function RoomTabs({
+  rooms,
+  selectedId,
+  onSelect,
+}: {
+  rooms: readonly RoomView[];
+  selectedId: string | null;
+  onSelect: (id: string) => void;
+}) {
   return (
     <ul aria-label="Rooms" className="flex gap-2 overflow-x-auto pb-1">
       {rooms.map((r, i) => (

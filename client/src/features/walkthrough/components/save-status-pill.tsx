@@ -36,14 +36,19 @@ function text(s: SaveStatus): string {
   if (s.kind === 'saved') return 'Saved';
   if (s.kind === 'saving') return 'Saving…';
   if (s.kind === 'conflict') return 'Needs your choice — changed by someone else';
-  if (s.kind === 'blocked') return `Not saved — sign in again; ${s.waiting} ${s.waiting === 1 ? 'change' : 'changes'} kept`;
+  if (s.kind === 'blocked')
+    return `Not saved — sign in again; ${s.waiting} ${s.waiting === 1 ? 'change' : 'changes'} kept`;
   return `Offline — ${s.waiting} ${s.waiting === 1 ? 'change' : 'changes'} waiting`;
 }
 
 /** Always on screen during a walk-through; role="status" so screen readers hear it change. */
 export function SaveStatusPill({ status }: { status: SaveStatus }) {
   return (
-    <p role="status" aria-live="polite" className={`inline-flex min-h-9 items-center gap-2 whitespace-nowrap rounded-full border px-3 text-sm font-semibold ${looks[status.kind]}`}>
+    <p
+      role="status"
+      aria-live="polite"
+      className={`inline-flex min-h-9 items-center gap-2 whitespace-nowrap rounded-full border px-3 text-sm font-semibold ${looks[status.kind]}`}
+    >
       <span aria-hidden="true" className="size-2 rounded-full bg-current" />
       {text(status)}
     </p>

@@ -54,7 +54,11 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
     clearUnsavedDraft(current.id);
     // The person was asked about the room "and its photos": ones still on the device go too.
     void photos.discardRoom(current.id);
-    void queue.enqueue({ target: roomTarget(current.id), baseVersion: current.version, payload: { kind: 'room-delete', jobId: job.id, roomId: current.id } });
+    void queue.enqueue({
+      target: roomTarget(current.id),
+      baseVersion: current.version,
+      payload: { kind: 'room-delete', jobId: job.id, roomId: current.id },
+    });
     setSelected(null);
   };
 
@@ -77,8 +81,14 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
           </div>
         </header>
 
-        {conflict ? <ConflictPanel key={conflict.id} item={conflict} onResolved={() => setRevision((r) => r + 1)} /> : null}
-        {state.blocked ? <Alert tone="warning" title="Changes are not being saved right now.">{state.blocked}</Alert> : null}
+        {conflict ? (
+          <ConflictPanel key={conflict.id} item={conflict} onResolved={() => setRevision((r) => r + 1)} />
+        ) : null}
+        {state.blocked ? (
+          <Alert tone="warning" title="Changes are not being saved right now.">
+            {state.blocked}
+          </Alert>
+        ) : null}
         {state.rejected ? (
           <Alert tone="danger" title="One change was not accepted and was not saved.">
             <p>{state.rejected}</p>
@@ -95,9 +105,16 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
         </QueryWidgetBoundary>
 
         <details className="rounded-lg border border-line bg-white p-4" open={job.designConditions === null}>
-          <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">Site design conditions</summary>
+          <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">
+            Site design conditions
+          </summary>
           <QueryWidgetBoundary name="the design conditions">
-            <DesignConditionsForm key={`${job.id}:${revision}`} job={job} companyDefaults={settings?.defaultDesignConditions ?? null} notice={settings?.designConditionsNotice} />
+            <DesignConditionsForm
+              key={`${job.id}:${revision}`}
+              job={job}
+              companyDefaults={settings?.defaultDesignConditions ?? null}
+              notice={settings?.designConditionsNotice}
+            />
           </QueryWidgetBoundary>
         </details>
 
@@ -108,14 +125,22 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
           {current ? (
             <div className="rounded-lg border border-line bg-white p-4">
               <QueryWidgetBoundary name="the room form">
-                <RoomEditor key={`${current.id}:${revision}`} jobId={job.id} room={current} designConditions={job.designConditions} tightness={job.tightness} />
+                <RoomEditor
+                  key={`${current.id}:${revision}`}
+                  jobId={job.id}
+                  room={current}
+                  designConditions={job.designConditions}
+                  tightness={job.tightness}
+                />
               </QueryWidgetBoundary>
               <Button variant="danger" className="mt-6" onClick={handleDelete}>
                 Delete this room
               </Button>
             </div>
           ) : (
-            <EmptyState title="No rooms yet">Pick a template and add the first room, then walk the house room by room.</EmptyState>
+            <EmptyState title="No rooms yet">
+              Pick a template and add the first room, then walk the house room by room.
+            </EmptyState>
           )}
         </section>
 

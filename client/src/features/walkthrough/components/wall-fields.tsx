@@ -25,17 +25,58 @@ export function WallFields({ draft, set, err, index, replace }: WallProps) {
     <fieldset className="flex flex-col gap-3 rounded-lg border border-ink-200 bg-ink-50/40 p-3">
       <legend className="px-1 font-semibold text-ink-900">Wall {index + 1}</legend>
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-        <SelectInput label="Wall faces" value={asString(v('direction'), 'N')} options={directionOptions} onChange={(x) => set(p('direction'), x)} error={err(p('direction'))} />
-        <NumberInput label="Wall length" quantity="ft" value={asNumber(v('lengthFt'))} onChange={(x) => set(p('lengthFt'), x)} error={err(p('lengthFt'))} />
-        <NumberInput label="Wall height" hint="Blank uses the ceiling height" quantity="ft" value={asNumber(v('heightFt'))} onChange={(x) => set(p('heightFt'), x)} error={err(p('heightFt'))} />
-        <SelectInput label="Construction" value={asString(v('construction'), 'wood-2x4-r13')} options={constructionOptions} onChange={(x) => set(p('construction'), x)} error={err(p('construction'))} />
+        <SelectInput
+          label="Wall faces"
+          value={asString(v('direction'), 'N')}
+          options={directionOptions}
+          onChange={(x) => set(p('direction'), x)}
+          error={err(p('direction'))}
+        />
+        <NumberInput
+          label="Wall length"
+          quantity="ft"
+          value={asNumber(v('lengthFt'))}
+          onChange={(x) => set(p('lengthFt'), x)}
+          error={err(p('lengthFt'))}
+        />
+        <NumberInput
+          label="Wall height"
+          hint="Blank uses the ceiling height"
+          quantity="ft"
+          value={asNumber(v('heightFt'))}
+          onChange={(x) => set(p('heightFt'), x)}
+          error={err(p('heightFt'))}
+        />
+        <SelectInput
+          label="Construction"
+          value={asString(v('construction'), 'wood-2x4-r13')}
+          options={constructionOptions}
+          onChange={(x) => set(p('construction'), x)}
+          error={err(p('construction'))}
+        />
       </div>
       {err(p('windows')) ? <p className="text-sm font-semibold text-danger">{err(p('windows'))}</p> : null}
       {windows.map((_, wi) => (
-        <WindowFields key={wi} draft={draft} set={set} err={err} base={p('windows', wi)} index={wi} onRemove={() => replace(removeAt(draft, p('windows'), wi))} />
+        <WindowFields
+          key={wi}
+          draft={draft}
+          set={set}
+          err={err}
+          base={p('windows', wi)}
+          index={wi}
+          onRemove={() => replace(removeAt(draft, p('windows'), wi))}
+        />
       ))}
       {doors.map((_, di) => (
-        <DoorFields key={di} draft={draft} set={set} err={err} base={p('doors', di)} index={di} onRemove={() => replace(removeAt(draft, p('doors'), di))} />
+        <DoorFields
+          key={di}
+          draft={draft}
+          set={set}
+          err={err}
+          base={p('doors', di)}
+          index={di}
+          onRemove={() => replace(removeAt(draft, p('doors'), di))}
+        />
       ))}
       <div className="flex flex-wrap gap-2">
         <Button variant="secondary" onClick={() => replace(append(draft, p('windows'), NEW_WINDOW))}>

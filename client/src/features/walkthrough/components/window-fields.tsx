@@ -4,7 +4,14 @@ import { glazingDefaults, glazingOptions, shadingOptions } from '../model/option
 import type { EditorProps } from './editor-props';
 import { NumberInput, SelectInput } from './field-kit';
 
-export function WindowFields({ draft, set, err, base, index, onRemove }: EditorProps & { base: readonly (string | number)[]; index: number; onRemove: () => void }) {
+export function WindowFields({
+  draft,
+  set,
+  err,
+  base,
+  index,
+  onRemove,
+}: EditorProps & { base: readonly (string | number)[]; index: number; onRemove: () => void }) {
   const p = (k: string) => [...base, k];
   const v = (k: string) => getIn(draft, p(k));
   const glazing = asString(v('glazing'), 'double-clear');
@@ -13,17 +20,52 @@ export function WindowFields({ draft, set, err, base, index, onRemove }: EditorP
     <fieldset className="rounded-md border border-line p-3">
       <legend className="px-1 text-sm font-semibold text-ink-800">Window {index + 1}</legend>
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-        <NumberInput label="Window width" quantity="in" value={asNumber(v('widthIn'))} onChange={(x) => set(p('widthIn'), x)} error={err(p('widthIn'))} />
-        <NumberInput label="Window height" quantity="in" value={asNumber(v('heightIn'))} onChange={(x) => set(p('heightIn'), x)} error={err(p('heightIn'))} />
-        <NumberInput label="Window area" hint="Instead of width × height" quantity="ft2" value={asNumber(v('areaFt2'))} onChange={(x) => set(p('areaFt2'), x)} error={err(p('areaFt2'))} />
-        <NumberInput label="Window count" integer value={asNumber(v('count'))} onChange={(x) => set(p('count'), x)} error={err(p('count'))} />
-        <SelectInput label="Glazing" value={glazing} options={glazingOptions} onChange={(x) => set(p('glazing'), x)} error={err(p('glazing'))} />
+        <NumberInput
+          label="Window width"
+          quantity="in"
+          value={asNumber(v('widthIn'))}
+          onChange={(x) => set(p('widthIn'), x)}
+          error={err(p('widthIn'))}
+        />
+        <NumberInput
+          label="Window height"
+          quantity="in"
+          value={asNumber(v('heightIn'))}
+          onChange={(x) => set(p('heightIn'), x)}
+          error={err(p('heightIn'))}
+        />
+        <NumberInput
+          label="Window area"
+          hint="Instead of width × height"
+          quantity="ft2"
+          value={asNumber(v('areaFt2'))}
+          onChange={(x) => set(p('areaFt2'), x)}
+          error={err(p('areaFt2'))}
+        />
+        <NumberInput
+          label="Window count"
+          integer
+          value={asNumber(v('count'))}
+          onChange={(x) => set(p('count'), x)}
+          error={err(p('count'))}
+        />
+        <SelectInput
+          label="Glazing"
+          value={glazing}
+          options={glazingOptions}
+          onChange={(x) => set(p('glazing'), x)}
+          error={err(p('glazing'))}
+        />
         <NumberInput
           label="Window U-factor"
           value={asNumber(v('uFactor'))}
           onChange={(x) => set(p('uFactor'), x)}
           error={err(p('uFactor'))}
-          hint={defaults ? `Btu/h·ft²·°F, from the label. Blank uses ${defaults.u} (typical ${defaults.label.toLowerCase()})` : 'Btu/h·ft²·°F, from the label'}
+          hint={
+            defaults
+              ? `Btu/h·ft²·°F, from the label. Blank uses ${defaults.u} (typical ${defaults.label.toLowerCase()})`
+              : 'Btu/h·ft²·°F, from the label'
+          }
         />
         <NumberInput
           label="Window SHGC"
@@ -32,7 +74,13 @@ export function WindowFields({ draft, set, err, base, index, onRemove }: EditorP
           error={err(p('shgc'))}
           hint={defaults ? `From the label. Blank uses ${defaults.shgc}` : 'From the label'}
         />
-        <SelectInput label="Interior shading" value={asString(v('interiorShading'), 'none')} options={shadingOptions} onChange={(x) => set(p('interiorShading'), x)} error={err(p('interiorShading'))} />
+        <SelectInput
+          label="Interior shading"
+          value={asString(v('interiorShading'), 'none')}
+          options={shadingOptions}
+          onChange={(x) => set(p('interiorShading'), x)}
+          error={err(p('interiorShading'))}
+        />
       </div>
       <Button variant="ghost" className="mt-2" onClick={onRemove}>
         Remove window {index + 1}

@@ -42,14 +42,22 @@ export const JOB_FIELD_LABELS: Record<string, string> = {
 const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
 
 /** Top-level fields whose values differ; a whole wall list counts as one field. */
-export function diffFields(mine: Record<string, unknown>, theirs: Record<string, unknown>, labels: Record<string, string>): FieldDiff[] {
+export function diffFields(
+  mine: Record<string, unknown>,
+  theirs: Record<string, unknown>,
+  labels: Record<string, string>,
+): FieldDiff[] {
   return Object.keys(labels)
     .filter((k) => !same(mine[k], theirs[k]))
     .map((k) => ({ key: k, label: labels[k] ?? k, mine: mine[k], theirs: theirs[k] }));
 }
 
 /** Theirs as the base, with each field the person chose to keep from theirs or from mine. */
-export function mergeChoices(mine: Record<string, unknown>, theirs: Record<string, unknown>, choices: Record<string, Choice>): Record<string, unknown> {
+export function mergeChoices(
+  mine: Record<string, unknown>,
+  theirs: Record<string, unknown>,
+  choices: Record<string, Choice>,
+): Record<string, unknown> {
   const out: Record<string, unknown> = { ...theirs };
   for (const [k, c] of Object.entries(choices)) {
     if (c !== 'mine') continue;
@@ -66,12 +74,17 @@ export function describe(key: string, v: unknown): string {
     const walls = asRecords(v);
     if (walls.length === 0) return 'No outside walls';
     return walls
-      .map((w) => `${asString(w.direction)} ${asNumber(w.lengthFt) ?? '?'} ft, ${asRecords(w.windows).length} window(s), ${asRecords(w.doors).length} door(s)`)
+      .map(
+        (w) =>
+          `${asString(w.direction)} ${asNumber(w.lengthFt) ?? '?'} ft, ${asRecords(w.windows).length} window(s), ${asRecords(w.doors).length} door(s)`,
+      )
       .join('; ');
   }
   if (key === 'appliances') {
     const list = asRecords(v);
-    return list.length === 0 ? 'None' : list.map((a) => `${asString(a.label)} ${asNumber(a.gain) ?? '?'} ${asString(a.unit, 'W')}`).join('; ');
+    return list.length === 0
+      ? 'None'
+      : list.map((a) => `${asString(a.label)} ${asNumber(a.gain) ?? '?'} ${asString(a.unit, 'W')}`).join('; ');
   }
   if (key === 'above' || key === 'below') {
     const r = asRecord(v);

@@ -14,7 +14,12 @@ export interface DesignFieldSpec {
 export const DESIGN_FIELD_SPECS: readonly DesignFieldSpec[] = [
   { key: 'outdoorCoolingDryBulbF', label: 'Outdoor cooling dry bulb', quantity: 'degF' },
   { key: 'outdoorCoolingWetBulbF', label: 'Outdoor coincident wet bulb', quantity: 'degF' },
-  { key: 'outdoorCoolingGrains', label: 'Outdoor humidity (instead of wet bulb)', quantity: 'plain', unit: 'grains/lb' },
+  {
+    key: 'outdoorCoolingGrains',
+    label: 'Outdoor humidity (instead of wet bulb)',
+    quantity: 'plain',
+    unit: 'grains/lb',
+  },
   { key: 'outdoorHeatingDryBulbF', label: 'Outdoor heating dry bulb', quantity: 'degF' },
   { key: 'indoorCoolingF', label: 'Indoor cooling set point', quantity: 'degF' },
   { key: 'indoorHeatingF', label: 'Indoor heating set point', quantity: 'degF' },
@@ -64,6 +69,7 @@ export function resolveDesign(entered: Entered, source: string, defaults: Record
   if (source.trim()) merged.source = source.trim();
   const parsed = designConditionsSchema.safeParse(merged);
   const errors = new Map<string, string>();
-  if (!parsed.success) for (const i of parsed.error.issues) if (!errors.has(pathKey(i.path))) errors.set(pathKey(i.path), i.message);
+  if (!parsed.success)
+    for (const i of parsed.error.issues) if (!errors.has(pathKey(i.path))) errors.set(pathKey(i.path), i.message);
   return { values: parsed.success ? parsed.data : null, shown: merged, origin, errors };
 }

@@ -1,7 +1,15 @@
-import { CEILING_INSULATION, DOOR_TYPES, FLOOR_INSULATION, GLAZING_TYPES, INTERIOR_SHADING_IAC, WALL_CONSTRUCTIONS } from '@calc';
+import {
+  CEILING_INSULATION,
+  DOOR_TYPES,
+  FLOOR_INSULATION,
+  GLAZING_TYPES,
+  INTERIOR_SHADING_IAC,
+  WALL_CONSTRUCTIONS,
+} from '@calc';
 
 /** Select options built from calc's construction defaults, so labels and keys stay in step with calc. */
-const fromTable = (table: Record<string, { readonly label: string }>) => Object.entries(table).map(([value, t]) => ({ value, label: t.label }));
+const fromTable = (table: Record<string, { readonly label: string }>) =>
+  Object.entries(table).map(([value, t]) => ({ value, label: t.label }));
 
 export const directionOptions = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'].map((d) => ({ value: d, label: d }));
 export const constructionOptions = fromTable(WALL_CONSTRUCTIONS);

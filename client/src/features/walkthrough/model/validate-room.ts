@@ -4,7 +4,12 @@ import type { RoomInputValue } from '../sync/edits';
 export type FieldErrors = ReadonlyMap<string, string>;
 
 export type RoomCheck =
-  | { readonly ok: true; readonly room: Room; readonly warnings: readonly PlausibilityWarning[]; readonly errors: FieldErrors }
+  | {
+      readonly ok: true;
+      readonly room: Room;
+      readonly warnings: readonly PlausibilityWarning[];
+      readonly errors: FieldErrors;
+    }
   | { readonly ok: false; readonly errors: FieldErrors };
 
 /** Dotted path of a field, the same string the fields use as their name ("exposedWalls.0.lengthFt"). */

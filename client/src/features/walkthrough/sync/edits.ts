@@ -12,7 +12,13 @@ export interface JobChanges {
 
 /** One autosaved edit. Each carries the whole record as the person left it. */
 export type WalkthroughEdit =
-  | { readonly kind: 'room-create'; readonly jobId: string; readonly roomId: string; readonly position: number; readonly input: RoomInputValue }
+  | {
+      readonly kind: 'room-create';
+      readonly jobId: string;
+      readonly roomId: string;
+      readonly position: number;
+      readonly input: RoomInputValue;
+    }
   | { readonly kind: 'room-update'; readonly jobId: string; readonly roomId: string; readonly input: RoomInputValue }
   | { readonly kind: 'room-delete'; readonly jobId: string; readonly roomId: string }
   | { readonly kind: 'job-update'; readonly jobId: string; readonly changes: JobChanges };
@@ -32,8 +38,10 @@ export const coalesceEdits: Coalesce<WalkthroughEdit> = (waiting, next) => {
   const n = next.payload;
   if (w.kind === 'room-create' && n.kind === 'room-update') return { ...waiting, payload: { ...w, input: n.input } };
   if (w.kind === 'room-create' && n.kind === 'room-delete') return 'drop-both';
-  if (w.kind === 'room-update' && (n.kind === 'room-update' || n.kind === 'room-delete')) return { ...waiting, payload: n };
-  if (w.kind === 'job-update' && n.kind === 'job-update') return { ...waiting, payload: { ...w, changes: { ...w.changes, ...n.changes } } };
+  if (w.kind === 'room-update' && (n.kind === 'room-update' || n.kind === 'room-delete'))
+    return { ...waiting, payload: n };
+  if (w.kind === 'job-update' && n.kind === 'job-update')
+    return { ...waiting, payload: { ...w, changes: { ...w.changes, ...n.changes } } };
   return null;
 };
 
@@ -47,5 +55,7 @@ export function isWalkthroughEdit(v: unknown): v is WalkthroughEdit {
   if (r.kind === 'job-update') return typeof r.changes === 'object' && r.changes !== null;
   if (typeof r.roomId !== 'string') return false;
   if (r.kind === 'room-delete') return true;
-  return typeof r.input === 'object' && r.input !== null && (r.kind === 'room-update' || typeof r.position === 'number');
+  return (
+    typeof r.input === 'object' && r.input !== null && (r.kind === 'room-update' || typeof r.position === 'number')
+  );
 }

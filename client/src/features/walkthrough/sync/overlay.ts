@@ -18,15 +18,29 @@ export interface RoomView {
  * What the person sees after a reload: the server's rooms, then every queued edit of this
  * job applied in queue order (creates added, updates replacing the input, deletes hiding).
  */
-export function overlayRooms(jobId: string, server: readonly RoomRecord[], queue: readonly QueueItem<WalkthroughEdit>[]): RoomView[] {
+export function overlayRooms(
+  jobId: string,
+  server: readonly RoomRecord[],
+  queue: readonly QueueItem<WalkthroughEdit>[],
+): RoomView[] {
   const rooms = new Map<string, RoomView>(
-    server.map((r) => [r.id, { id: r.id, position: r.position, input: r.input, version: r.version, photos: r.photos, waiting: false }]),
+    server.map((r) => [
+      r.id,
+      { id: r.id, position: r.position, input: r.input, version: r.version, photos: r.photos, waiting: false },
+    ]),
   );
   for (const { payload: e } of queue) {
     if (e.jobId !== jobId) continue;
     if (e.kind === 'room-create') {
       const known = rooms.get(e.roomId);
-      rooms.set(e.roomId, { id: e.roomId, position: e.position, input: e.input, version: known?.version ?? null, photos: known?.photos ?? [], waiting: true });
+      rooms.set(e.roomId, {
+        id: e.roomId,
+        position: e.position,
+        input: e.input,
+        version: known?.version ?? null,
+        photos: known?.photos ?? [],
+        waiting: true,
+      });
     } else if (e.kind === 'room-update') {
       const known = rooms.get(e.roomId);
       if (known) rooms.set(e.roomId, { ...known, input: e.input, waiting: true });
@@ -49,8 +63,12 @@ export function overlayJob(
     if (e.kind !== 'job-update' || e.jobId !== job.id) continue;
     waiting = true;
     const typed = e.changes.designConditions;
-    const entered = typed ? Object.fromEntries(Object.entries(typed).filter((kv): kv is [string, number] => typeof kv[1] === 'number')) : {};
-    const resolved = typed ? resolveDesign(entered, typeof typed.source === 'string' ? typed.source : '', companyDefaults).values : null;
+    const entered = typed
+      ? Object.fromEntries(Object.entries(typed).filter((kv): kv is [string, number] => typeof kv[1] === 'number'))
+      : {};
+    const resolved = typed
+      ? resolveDesign(entered, typeof typed.source === 'string' ? typed.source : '', companyDefaults).values
+      : null;
     const designConditions = resolved ?? out.designConditions;
     const designSources = { ...out.designSources };
     for (const [field, note] of Object.entries(e.changes.designSourceNotes ?? {})) {
@@ -61,7 +79,12 @@ export function overlayJob(
         designSources[field] = { source: origin, note: designSources[field]?.note ?? '' };
       }
     }
-    out = { ...out, designConditions, designSources, tightness: isTightness(e.changes.tightness) ? e.changes.tightness : out.tightness };
+    out = {
+      ...out,
+      designConditions,
+      designSources,
+      tightness: isTightness(e.changes.tightness) ? e.changes.tightness : out.tightness,
+    };
   }
   return { job: out, waiting };
 }

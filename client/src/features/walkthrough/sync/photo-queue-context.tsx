@@ -9,8 +9,17 @@ import type { WalkthroughQueue } from './walkthrough-queue';
 type Overrides = Partial<Omit<PhotoQueueOptions, 'send' | 'roomReady'>>;
 
 /** The app's photo queue: uploads through the API and retries whenever a room may just have reached the server. */
-export function createPhotoQueue(queryClient: QueryClient, edits: WalkthroughQueue, overrides: Overrides = {}): PhotoQueue {
-  const queue = new PhotoQueue({ storage: overrides.storage ?? idbPhotoStorage(), send: createPhotoSender(queryClient), roomReady: roomOnServer(queryClient, edits), ...overrides });
+export function createPhotoQueue(
+  queryClient: QueryClient,
+  edits: WalkthroughQueue,
+  overrides: Overrides = {},
+): PhotoQueue {
+  const queue = new PhotoQueue({
+    storage: overrides.storage ?? idbPhotoStorage(),
+    send: createPhotoSender(queryClient),
+    roomReady: roomOnServer(queryClient, edits),
+    ...overrides,
+  });
   const retry = () => {
     if (queue.getSnapshot().waiting.length > 0) void queue.flush();
   };

@@ -79,7 +79,9 @@ export class PhotoQueue {
   async start(): Promise<void> {
     // No IndexedDB (private mode): photos still wait in memory for this visit.
     const stored = await this.options.storage.load().catch((): WaitingPhoto[] => []);
-    const waiting = [...stored, ...this.state.waiting.filter((p) => !stored.some((s) => s.id === p.id))].sort((a, b) => a.seq - b.seq);
+    const waiting = [...stored, ...this.state.waiting.filter((p) => !stored.some((s) => s.id === p.id))].sort(
+      (a, b) => a.seq - b.seq,
+    );
     this.seq = waiting.reduce((m, p) => Math.max(m, p.seq), 0);
     this.update({ loaded: true, waiting });
     if (typeof window !== 'undefined') window.addEventListener('online', this.handleOnline);
@@ -143,8 +145,15 @@ export class PhotoQueue {
 
   private notify(photo: WaitingPhoto, kind: PhotoNotice['kind'], message: string): void {
     // Only the latest "added" per room is worth showing; every refusal stays until dismissed.
-    const kept = this.state.notices.filter((n) => !(kind === 'added' && n.kind === 'added' && n.roomId === photo.roomId));
-    this.update({ notices: [...kept, { id: photo.id, jobId: photo.jobId, roomId: photo.roomId, fileName: photo.fileName, kind, message }] });
+    const kept = this.state.notices.filter(
+      (n) => !(kind === 'added' && n.kind === 'added' && n.roomId === photo.roomId),
+    );
+    this.update({
+      notices: [
+        ...kept,
+        { id: photo.id, jobId: photo.jobId, roomId: photo.roomId, fileName: photo.fileName, kind, message },
+      ],
+    });
   }
 
   private async drain(): Promise<void> {

@@ -24,8 +24,13 @@ function isWaitingPhoto(v: unknown): v is WaitingPhoto {
   if (typeof v !== 'object' || v === null) return false;
   const r: Record<string, unknown> = { ...v };
   return (
-    typeof r.id === 'string' && typeof r.seq === 'number' && typeof r.jobId === 'string' && typeof r.roomId === 'string' &&
-    typeof r.fileName === 'string' && typeof r.queuedAt === 'string' && r.blob instanceof Blob
+    typeof r.id === 'string' &&
+    typeof r.seq === 'number' &&
+    typeof r.jobId === 'string' &&
+    typeof r.roomId === 'string' &&
+    typeof r.fileName === 'string' &&
+    typeof r.queuedAt === 'string' &&
+    r.blob instanceof Blob
   );
 }
 

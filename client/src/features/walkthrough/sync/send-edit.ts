@@ -31,11 +31,13 @@ async function changeRooms(queryClient: QueryClient, jobId: string, change: Room
 }
 
 /** The room as the server answered, unless the list already holds a newer version of it. */
-const withRoom = (room: RoomRecord): RoomsChange => (rooms) => {
-  const held = rooms.find((r) => r.id === room.id);
-  if (!held) return [...rooms, room];
-  return held.version > room.version ? rooms : rooms.map((r) => (r.id === room.id ? room : r));
-};
+const withRoom =
+  (room: RoomRecord): RoomsChange =>
+  (rooms) => {
+    const held = rooms.find((r) => r.id === room.id);
+    if (!held) return [...rooms, room];
+    return held.version > room.version ? rooms : rooms.map((r) => (r.id === room.id ? room : r));
+  };
 
 function afterWrite(queryClient: QueryClient, jobId: string): void {
   // The server's loads and the jobs list (last activity) are now out of date; refetch lazily.
@@ -48,7 +50,12 @@ function failure(e: unknown): SendResult {
     if (e.code === 'network' || e.status === 0) return { kind: 'network' };
     // 428 means the edit carried no version: never drop it, ask the person as for a 409.
     if (e.status === 409 || e.status === 428) return { kind: 'conflict' };
-    if (e.status === 401) return { kind: 'blocked', message: 'Your session has ended. Sign in again (in another tab keeps this page); your changes stay on this device until then.' };
+    if (e.status === 401)
+      return {
+        kind: 'blocked',
+        message:
+          'Your session has ended. Sign in again (in another tab keeps this page); your changes stay on this device until then.',
+      };
     // 5xx may pass; keep the edit and try again later rather than lose it.
     if (e.status >= 500 || e.status === 429) return { kind: 'network' };
     const fields = e.errors.map((f) => f.message).join(' ');
@@ -63,7 +70,11 @@ export function createEditSender(queryClient: QueryClient) {
     const edit = item.payload;
     try {
       if (edit.kind === 'room-create') {
-        const room = await createRoom(edit.jobId, { id: edit.roomId, position: edit.position, input: edit.input }).catch(async (e: unknown) => {
+        const room = await createRoom(edit.jobId, {
+          id: edit.roomId,
+          position: edit.position,
+          input: edit.input,
+        }).catch(async (e: unknown) => {
           // A replayed create whose first answer was lost: the room is already there.
           if (isApiError(e) && e.status === 409) return getRoom(edit.jobId, edit.roomId);
           throw e;

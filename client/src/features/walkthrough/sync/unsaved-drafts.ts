@@ -23,7 +23,12 @@ function storage(): Storage | null {
 function isDraft(v: unknown): v is UnsavedDraft {
   if (typeof v !== 'object' || v === null || !('input' in v) || !('baseVersion' in v)) return false;
   const { input, baseVersion } = v;
-  return typeof input === 'object' && input !== null && !Array.isArray(input) && (baseVersion === null || typeof baseVersion === 'number');
+  return (
+    typeof input === 'object' &&
+    input !== null &&
+    !Array.isArray(input) &&
+    (baseVersion === null || typeof baseVersion === 'number')
+  );
 }
 
 export function keepUnsavedDraft(roomId: string, draft: UnsavedDraft): void {

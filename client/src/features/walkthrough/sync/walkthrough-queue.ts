@@ -11,7 +11,12 @@ export function createWalkthroughQueue(
   storage: QueueStorage<WalkthroughEdit> = idbQueueStorage(isWalkthroughEdit),
   retryMs = 15_000,
 ): WalkthroughQueue {
-  return new OfflineQueue<WalkthroughEdit>({ storage, send: createEditSender(queryClient), coalesce: coalesceEdits, retryMs });
+  return new OfflineQueue<WalkthroughEdit>({
+    storage,
+    send: createEditSender(queryClient),
+    coalesce: coalesceEdits,
+    retryMs,
+  });
 }
 
 let shared: WalkthroughQueue | null = null;

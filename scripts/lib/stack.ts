@@ -3,7 +3,7 @@ import { Cluster } from './postgres';
 /** Where each purpose's cluster lives. Demo data and tests never share a cluster or a database. */
 export const DEMO = {
   dataDir: '.data/pg',
-  port: 54328,
+  port: Number(process.env.GAUGELINE_DEMO_PORT ?? 54328),
   database: 'gaugeline',
   role: 'gaugeline',
   password: 'gaugeline-local',

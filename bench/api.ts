@@ -1,77 +1,387 @@
-import { loadConfig } from '../server/src/config';
-import { startServer } from '../server/src/server';
+/**
+ * API bench: the real server in production mode (built client, NODE_ENV=production, log level
+ * info as in production) on the demo data, in its own process, driven by autocannon from this
+ * process; beside each route, in the same run, the floor (bench/lib/floor-server.ts: a bare
+ * Express route doing the same SQL through a pg pool of the same size) in a third process.
+ * Prints requests/s, p50/p95/p99 and errors per route and each ratio to its floor. Never fails.
+ *
+ * BENCH_SECONDS (default 8) and BENCH_CONNECTIONS (default 50) change the load;
+ * BENCH_APP_PORT / BENCH_FLOOR_PORT (default 4896 / 4897) the ports.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import { randomBytes, randomUUID } from 'node:crypto';
+import { availableParallelism, loadavg } from 'node:os';
+import pg from 'pg';
 import { demoAccounts, isEmpty, seedDemo } from '../fixtures/seed';
+import { buildClientIfStale } from '../scripts/lib/client-build';
 import { migrate, withOrm } from '../scripts/lib/db';
 import { DEMO, startCluster } from '../scripts/lib/stack';
+import { load, type LoadResult } from './lib/load';
 
-// API figures on the local demo cluster: sign-in latency (argon2id dominates) and an
-// authenticated read under 8 concurrent clients. Loopback only, bounded in time.
-const { url } = await startCluster(DEMO);
-await migrate(url);
-await withOrm(url, async (orm) => {
-  if (await isEmpty(orm.em.fork())) await seedDemo(orm.em.fork());
-});
-const running = await startServer(
-  loadConfig({
-    ...process.env,
-    DATABASE_URL: url,
-    PORT: '0',
-    LOG_LEVEL: 'silent',
-    LOGIN_MAX_PER_IP: '100000',
-    LOGIN_MAX_PER_ACCOUNT: '100000',
-  }),
-);
-const base = running.url;
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
+const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
+const SIGNIN_CONNECTIONS = 8;
+const APP_PORT = Number(process.env.BENCH_APP_PORT ?? 4896);
+const FLOOR_PORT = Number(process.env.BENCH_FLOOR_PORT ?? 4897);
+const POOL_MAX = 10;
+const EXTRA_JOBS = 120;
+const APP = `http://127.0.0.1:${APP_PORT}`;
+const FLOOR = `http://127.0.0.1:${FLOOR_PORT}`;
+const BENCH_MARK = 'made by npm run bench';
 
-async function session(email: string, password: string): Promise<{ cookie: string; csrf: string }> {
-  const pre = await fetch(`${base}/api/auth/csrf`);
-  const cookie0 = (pre.headers.get('set-cookie') ?? '').split(';')[0] ?? '';
+/** What one autocannon connection carries from one step of its sequence to the next. */
+interface Ctx {
+  room?: { id: string; version: number };
+  t0?: number;
+  cookie?: string;
+  token?: string;
+}
+
+const children: ChildProcess[] = [];
+function start(script: string, env: Record<string, string>): ChildProcess {
+  const child = spawn(process.execPath, ['--import', 'tsx', script], {
+    env: { ...process.env, ...env },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  children.push(child);
+  return child;
+}
+async function waitFor(url: string): Promise<void> {
+  for (let i = 0; i < 300; i += 1) {
+    try {
+      const r = await fetch(url);
+      await r.arrayBuffer();
+      if (r.status < 500) return;
+    } catch {
+      /* not listening yet */
+    }
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`${url} did not answer within 30 s`);
+}
+async function stopAll(): Promise<void> {
+  await Promise.all(
+    children.map(
+      (c) =>
+        new Promise<void>((resolve) => {
+          if (c.exitCode !== null) return resolve();
+          c.once('exit', () => resolve());
+          c.kill('SIGTERM');
+          setTimeout(() => {
+            c.kill('SIGKILL');
+            resolve();
+          }, 5000).unref();
+        }),
+    ),
+  );
+}
+
+const cookieOf = (setCookie: string | string[] | undefined | null) =>
+  (Array.isArray(setCookie) ? setCookie : setCookie ? [setCookie] : []).map((c) => c.split(';')[0] ?? '').join('; ');
+
+async function signIn(email: string, password: string): Promise<{ cookie: string; csrf: string }> {
+  const pre = await fetch(`${APP}/api/auth/csrf`, { headers: { 'x-forwarded-proto': 'https' } });
   const { token } = (await pre.json()) as { token: string };
-  const res = await fetch(`${base}/api/auth/login`, {
+  const res = await fetch(`${APP}/api/auth/login`, {
     method: 'POST',
-    headers: { 'content-type': 'application/json', cookie: cookie0, 'x-csrf-token': token },
+    headers: {
+      'content-type': 'application/json',
+      cookie: cookieOf(pre.headers.getSetCookie()),
+      'x-csrf-token': token,
+      'x-forwarded-proto': 'https',
+    },
     body: JSON.stringify({ email, password }),
   });
-  const cookie = (res.headers.get('set-cookie') ?? '').split(';')[0] ?? '';
-  const csrf = (await (await fetch(`${base}/api/auth/csrf`, { headers: { cookie } })).json()) as { token: string };
+  if (res.status !== 200) throw new Error(`sign-in answered ${res.status}`);
+  const cookie = cookieOf(res.headers.getSetCookie());
+  const csrf = (await (
+    await fetch(`${APP}/api/auth/csrf`, { headers: { cookie, 'x-forwarded-proto': 'https' } })
+  ).json()) as { token: string };
   return { cookie, csrf: csrf.token };
 }
 
-const pct = (xs: number[], p: number) =>
-  [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor((p / 100) * xs.length))] ?? NaN;
+const f = (n: number, d = 0) => (Number.isFinite(n) ? n.toFixed(d) : '—');
+function table(rows: Array<{ route: string; floor: LoadResult; app: LoadResult }>): void {
+  const head = ['route', 'floor req/s', 'app req/s', 'floor p50/p95/p99 ms', 'app p50/p95/p99 ms', 'errors', 'p95 ×'];
+  const lines = rows.map(({ route, floor, app }) => [
+    route,
+    f(floor.rps),
+    f(app.rps),
+    `${f(floor.p50)}/${f(floor.p95)}/${f(floor.p99)}`,
+    `${f(app.p50)}/${f(app.p95)}/${f(app.p99)}`,
+    `${floor.errors}/${app.errors}`,
+    `${f(app.p95 / floor.p95, 2)}`,
+  ]);
+  const widths = head.map((h, i) => Math.max(h.length, ...lines.map((l) => (l[i] ?? '').length)));
+  const fmt = (cells: string[]) => cells.map((c, i) => c.padEnd(widths[i] ?? 0)).join('  ');
+  console.log(fmt(head));
+  for (const l of lines) console.log(fmt(l));
+}
+
 const owner = demoAccounts.find((a) => a.role === 'owner');
 if (!owner) throw new Error('no demo owner');
+const { url: databaseUrl } = await startCluster(DEMO);
+await migrate(databaseUrl);
+await withOrm(databaseUrl, async (orm) => {
+  if (await isEmpty(orm.em.fork())) await seedDemo(orm.em.fork());
+});
+await buildClientIfStale();
 
-const loginTimes: number[] = [];
-for (let i = 0; i < 20; i++) {
-  const t0 = performance.now();
-  await session(owner.email, owner.password);
-  loginTimes.push(performance.now() - t0);
-}
-console.log(
-  `sign-in (csrf + login + csrf), 20 serial: p50 ${pct(loginTimes, 50).toFixed(1)} ms, p95 ${pct(loginTimes, 95).toFixed(1)} ms`,
-);
+const db = new pg.Pool({ connectionString: databaseUrl, max: 2 });
+let benchJobId: string | undefined;
+try {
+  // The job with the most rooms among the owner's company's jobs with design conditions.
+  const pick = await db.query<{ job_id: string; company_id: string; rooms: string }>(
+    `select j.id as job_id, j.company_id, count(r.id) as rooms from job j join app_user u on u.company_id = j.company_id
+     join room r on r.job_id = j.id where u.email = $1 and j.design_conditions is not null
+     group by j.id order by count(r.id) desc, j.id limit 1`,
+    [owner.email],
+  );
+  const target = pick.rows[0];
+  if (!target) throw new Error('the demo data has no job with rooms');
 
-async function load(path: string, seconds: number, clients: number) {
-  const s = await session(owner!.email, owner!.password);
-  const times: number[] = [];
-  let errors = 0;
-  const until = performance.now() + seconds * 1000;
-  await Promise.all(
-    Array.from({ length: clients }, async () => {
-      while (performance.now() < until) {
-        const t0 = performance.now();
-        const r = await fetch(`${base}${path}`, { headers: { cookie: s.cookie } });
-        await r.arrayBuffer();
-        if (r.status !== 200) errors += 1;
-        times.push(performance.now() - t0);
-      }
-    }),
+  // Leftovers of a bench that was stopped half-way, then more jobs so the list pages (25 of many) like a busy company's.
+  await db.query('delete from job where notes like $1', [`%${BENCH_MARK}%`]);
+  await db.query(
+    `insert into job (id, company_id, customer_id, salesperson_id, assigned_installer_id, status, street, unit, city,
+       region, postal_code, notes, design_conditions, design_sources, tightness, version, created_at, updated_at,
+       last_activity_at)
+     select gen_random_uuid(), company_id, customer_id, salesperson_id, assigned_installer_id, status, street, unit,
+       city, region, postal_code, $1, design_conditions, design_sources, tightness, 1, now(), now(),
+       now() - (g || ' hours')::interval from job, generate_series(1, $2) g where id = $3`,
+    [`Bench job (${BENCH_MARK}; deleted when it ends)`, EXTRA_JOBS, target.job_id],
+  );
+  // A job of its own for the room saves (a room per connection each for app and floor), deleted at the end.
+  benchJobId = randomUUID();
+  await db.query(
+    `insert into job (id, company_id, customer_id, salesperson_id, assigned_installer_id, status, street, unit, city,
+       region, postal_code, notes, design_conditions, design_sources, tightness, version, created_at, updated_at,
+       last_activity_at)
+     select $1, company_id, customer_id, salesperson_id, null, 'walkthrough', street, unit, city, region, postal_code,
+       $2, design_conditions, design_sources, tightness, 1, now(), now(), now() from job where id = $3`,
+    [benchJobId, `Bench job (${BENCH_MARK}; deleted when it ends)`, target.job_id],
+  );
+  const sample = await db.query<{ input: Record<string, unknown> }>(
+    'select input from room where job_id = $1 order by position limit 1',
+    [target.job_id],
+  );
+  const roomInput = sample.rows[0]?.input ?? {};
+  const makeRooms = async (n: number) => {
+    const ids: string[] = [];
+    for (let i = 0; i < n; i += 1) {
+      const id = randomUUID();
+      await db.query(
+        `insert into room (id, job_id, position, input, version, created_at, updated_at) values ($1, $2, $3, $4, 1, now(), now())`,
+        [id, benchJobId, ids.length, JSON.stringify({ ...roomInput, id, name: `Bench room ${i + 1}` })],
+      );
+      ids.push(id);
+    }
+    return ids;
+  };
+  const jobsCount = await db.query<{ n: string }>('select count(*) as n from job where company_id = $1', [
+    target.company_id,
+  ]);
+  const appRooms = await makeRooms(CONNECTIONS);
+  const floorRooms = await makeRooms(CONNECTIONS);
+
+  start('server/src/main.ts', {
+    NODE_ENV: 'production',
+    PORT: String(APP_PORT),
+    HOST: '127.0.0.1',
+    APP_ORIGIN: `https://127.0.0.1:${APP_PORT}`,
+    DATABASE_URL: databaseUrl,
+    DB_POOL_MAX: String(POOL_MAX),
+    SESSION_SECRET: randomBytes(32).toString('base64url'),
+    LOG_LEVEL: 'info',
+    // Sign-in is benchmarked: the per-IP and per-account failure limits would otherwise stop it.
+    LOGIN_MAX_PER_IP: '1000000',
+    LOGIN_MAX_PER_ACCOUNT: '1000000',
+    CLIENT_DIST: 'dist/client',
+  });
+  start('bench/lib/floor-server.ts', {
+    DATABASE_URL: databaseUrl,
+    PORT: String(FLOOR_PORT),
+    DB_POOL_MAX: String(POOL_MAX),
+  });
+  await Promise.all([waitFor(`${APP}/api/health`), waitFor(`${FLOOR}/floor/nothing`)]);
+
+  const s = await signIn(owner.email, owner.password);
+  const appHeaders = { cookie: s.cookie, 'x-forwarded-proto': 'https', 'accept-encoding': 'gzip, deflate, br' };
+  const floorHeaders = { 'accept-encoding': 'gzip, deflate, br' };
+  const q = `company=${target.company_id}`;
+
+  console.log(
+    `API bench — ${CONNECTIONS} connections × ${SECONDS} s per route (sign-in: ${SIGNIN_CONNECTIONS}), loopback, demo data ` +
+      `(${jobsCount.rows[0]?.n ?? '?'} jobs in the company, ${EXTRA_JOBS} of them added for the run; job ${target.job_id.slice(0, 8)} has ${target.rooms} rooms)`,
   );
   console.log(
-    `GET ${path}, ${clients} clients × ${seconds} s: ${(times.length / seconds).toFixed(0)} req/s, p50 ${pct(times, 50).toFixed(1)} ms, p95 ${pct(times, 95).toFixed(1)} ms, p99 ${pct(times, 99).toFixed(1)} ms, non-200 ${errors}`,
+    `server: NODE_ENV=production, LOG_LEVEL=info, pool ${POOL_MAX}; floor: bare Express + pg pool ${POOL_MAX}, same SQL`,
   );
+  console.log(
+    `load average before: ${loadavg()
+      .map((l) => l.toFixed(2))
+      .join(' / ')} on ${availableParallelism()} CPU(s) — other work on the machine slows both sides; read the ratios`,
+  );
+
+  const warm = async (url: string, headers: Record<string, string>) =>
+    load({ label: 'warm-up', url, connections: 10, seconds: 1, headers });
+
+  const rows: Array<{ route: string; floor: LoadResult; app: LoadResult }> = [];
+  const pair = async (route: string, floorRun: () => Promise<LoadResult>, appRun: () => Promise<LoadResult>) => {
+    const floor = await floorRun();
+    const app = await appRun();
+    rows.push({ route, floor, app });
+    console.log(
+      `  ${route}: app ${f(app.rps)} req/s p95 ${f(app.p95)} ms (${app.errors} errors) · floor ${f(floor.rps)} req/s p95 ${f(floor.p95)} ms (${floor.errors} errors)`,
+    );
+  };
+  const get = (label: string, url: string, headers: Record<string, string>) =>
+    load({ label, url, connections: CONNECTIONS, seconds: SECONDS, headers });
+
+  for (const [route, appPath, floorPath] of [
+    ['GET /api/jobs', '/api/jobs', `/floor/jobs?${q}`],
+    [`GET /api/jobs/:id/rooms`, `/api/jobs/${target.job_id}/rooms`, `/floor/jobs/${target.job_id}/rooms?${q}`],
+    [`GET /api/jobs/:id/loads`, `/api/jobs/${target.job_id}/loads`, `/floor/jobs/${target.job_id}/loads?${q}`],
+  ] as const) {
+    await warm(`${FLOOR}${floorPath}`, floorHeaders);
+    await warm(`${APP}${appPath}`, appHeaders);
+    await pair(
+      route,
+      () => get(route, `${FLOOR}${floorPath}`, floorHeaders),
+      () => get(route, `${APP}${appPath}`, appHeaders),
+    );
+  }
+
+  // Room save: each in-flight request takes a free room and returns it with the version the answer gave.
+  const saver = (base: string, headers: Record<string, string>, ids: string[], prefix: string) => {
+    const free = ids.map((id) => ({ id, version: 1 }));
+    let n = 0;
+    return load({
+      label: 'room save',
+      url: base,
+      connections: CONNECTIONS,
+      seconds: SECONDS,
+      requests: [
+        {
+          method: 'PATCH',
+          setupRequest: (req, ctx) => {
+            const context = ctx as Ctx;
+            const room = free.pop();
+            if (!room) throw new Error('no free room: more connections than rooms');
+            context.room = room;
+            n += 1;
+            return {
+              ...req,
+              path: `${prefix}/jobs/${benchJobId}/rooms/${room.id}`,
+              headers: { ...headers, 'content-type': 'application/json', 'if-match': `"${room.version}"` },
+              body: JSON.stringify({ input: { ...roomInput, name: `Bench room save ${n}` } }),
+            };
+          },
+          onResponse: (status, body, ctx) => {
+            const context = ctx as Ctx;
+            const room = context.room;
+            if (!room) return;
+            if (status === 200) room.version = (JSON.parse(body) as { room: { version: number } }).room.version;
+            free.push(room);
+          },
+        },
+      ],
+    });
+  };
+  await pair(
+    'PATCH /api/jobs/:id/rooms/:roomId',
+    () => saver(FLOOR, {}, floorRooms, '/floor'),
+    () => saver(APP, { ...appHeaders, 'x-csrf-token': s.csrf }, appRooms, '/api'),
+  );
+
+  // Sign-in: GET /api/auth/csrf (a fresh anonymous session) then POST /api/auth/login; the login step is timed.
+  const floorTimes: number[] = [];
+  const appTimes: number[] = [];
+  const body = JSON.stringify({ email: owner.email, password: owner.password });
+  await pair(
+    'POST /api/auth/login',
+    () =>
+      load({
+        label: 'sign-in floor',
+        url: FLOOR,
+        connections: SIGNIN_CONNECTIONS,
+        seconds: SECONDS,
+        timed: floorTimes,
+        requests: [
+          {
+            method: 'POST',
+            path: '/floor/login',
+            headers: { 'content-type': 'application/json' },
+            body,
+            setupRequest: (req, ctx) => {
+              const context = ctx as Ctx;
+              context.t0 = performance.now();
+              return req;
+            },
+            onResponse: (_status, _body, ctx) => {
+              floorTimes.push(performance.now() - ((ctx as Ctx).t0 ?? 0));
+            },
+          },
+        ],
+      }),
+    () =>
+      load({
+        label: 'sign-in app',
+        url: APP,
+        connections: SIGNIN_CONNECTIONS,
+        seconds: SECONDS,
+        timed: appTimes,
+        requests: [
+          {
+            method: 'GET',
+            path: '/api/auth/csrf',
+            headers: { 'x-forwarded-proto': 'https' },
+            onResponse: (_status, resBody, ctx, headers) => {
+              const context = ctx as Ctx;
+              const h = headers as Record<string, string | string[]>;
+              context.cookie = cookieOf(h['set-cookie'] ?? h['Set-Cookie']);
+              context.token = (JSON.parse(resBody) as { token: string }).token;
+            },
+          },
+          {
+            method: 'POST',
+            path: '/api/auth/login',
+            setupRequest: (req, ctx) => {
+              const context = ctx as Ctx;
+              context.t0 = performance.now();
+              return {
+                ...req,
+                headers: {
+                  'content-type': 'application/json',
+                  'x-forwarded-proto': 'https',
+                  cookie: context.cookie ?? '',
+                  'x-csrf-token': context.token ?? '',
+                },
+                body,
+              };
+            },
+            onResponse: (_status, _body, ctx) => {
+              appTimes.push(performance.now() - ((ctx as Ctx).t0 ?? 0));
+            },
+          },
+        ],
+      }),
+  );
+
+  console.log('');
+  table(rows);
+  console.log(
+    `load average after: ${loadavg()
+      .map((l) => l.toFixed(2))
+      .join(' / ')}. Goals (issue 11): read routes p95 ≤ 2× floor with 0 errors, room save ≤ 3×.`,
+  );
+  console.log(
+    'Sign-in: autocannon counts csrf + login as one sign-in on the app side; latencies are the login step; argon2id dominates both.',
+  );
+} catch (e) {
+  console.log('API bench could not finish:', e instanceof Error ? e.message : String(e));
+} finally {
+  await stopAll();
+  await db.query('delete from job where notes like $1', [`%${BENCH_MARK}%`]).catch(() => undefined);
+  await db.end();
 }
-await load('/api/auth/me', 3, 8);
-await load('/api/users', 3, 8);
-await running.close();

@@ -55,3 +55,13 @@ export * from './src/pricing/price';
 export * from './src/design/zone-loads';
 export * from './src/design/compute-design';
 export * from './src/design/options';
+
+export * from './src/catalog/sell-rule';
+export * from './src/catalog/model';
+export * from './src/catalog/model-queries';
+export * from './src/catalog/price-book';
+export * from './src/catalog/csv-columns';
+export * from './src/catalog/csv-safety';
+export * from './src/catalog/datasets';
+export * from './src/catalog/records';
+export * from './src/catalog/diff-import';

@@ -1,5 +1,6 @@
 // Lint: typescript-eslint's recommended rules plus the project's import boundaries
-// (calc imports nothing of ours; the client never imports the server; features stay apart).
+// (calc imports nothing of ours; the client imports only the server's contract folder, through @contract;
+// features stay apart).
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import reactHooks from 'eslint-plugin-react-hooks';
@@ -26,7 +27,10 @@ const featureBoundaries = features.map((feature) => {
               regex: `^(\\.\\./)+(${others.join('|')})/`,
               message: 'Features do not import each other; share through lib/ or compose in app/routes.',
             },
-            { group: ['**/server/**', 'node:*'], message: 'The client never imports the server at runtime.' },
+            {
+              group: ['**/server/**', 'node:*'],
+              message: "The client imports only the server's contract, through @contract.",
+            },
           ],
         },
       ],
@@ -68,7 +72,7 @@ export default tseslint.config(
       ...reactHooks.configs.recommended.rules,
       'no-restricted-imports': noOurs(
         [['**/server/**', '../../server/*', 'node:*']],
-        'The client never imports the server at runtime.',
+        "The client imports only the server's contract, through @contract.",
       ),
     },
   },
@@ -76,5 +80,27 @@ export default tseslint.config(
   {
     files: ['server/**/*.ts'],
     rules: { 'no-restricted-imports': noOurs([['**/client/**']], 'The server does not import client code.') },
+  },
+  {
+    // The contract (alias @contract) is the one folder of the server the client imports: it stays pure.
+    files: ['server/src/contract/**/*.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^(?!zod$|@calc$|\\./)',
+              message: 'The contract imports only zod, @calc and its own files (the client imports it).',
+            },
+          ],
+        },
+      ],
+      'no-restricted-globals': [
+        'error',
+        { name: 'fetch', message: 'The contract does no I/O.' },
+        { name: 'Date', message: 'The contract has no clock.' },
+      ],
+    },
   },
 );

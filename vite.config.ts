@@ -4,7 +4,7 @@ import tailwindcss from '@tailwindcss/vite';
 import { defineConfig } from 'vitest/config';
 
 const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
-const alias = { '@calc': here('./calc/index.ts') };
+const alias = { '@calc': here('./calc/index.ts'), '@contract': here('./server/src/contract/index.ts') };
 const apiTarget = `http://127.0.0.1:${process.env.PORT ?? '4780'}`;
 
 // One file for the client build, the dev server and the test projects.

@@ -3,7 +3,7 @@ import { MemoryRouter } from 'react-router-dom';
 import { describe, expect, it } from 'vitest';
 import { MainNav } from '../../client/src/components/layout/main-nav';
 import type { Feature } from '../../client/src/config/nav';
-import type { Role } from '../../client/src/config/roles';
+import type { Role } from '@contract';
 
 function navLinks(role: Role, features: Feature[] = []) {
   render(

@@ -3,7 +3,7 @@ import { fireEvent, render, screen, waitFor, within } from '@testing-library/rea
 import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { createRoutes } from '../../client/src/app/router';
-import type { Role } from '../../client/src/config/roles';
+import type { Role } from '@contract';
 import { clearCsrfToken } from '../../client/src/lib/api-client';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { json, mockFetch, problem } from './helpers/fetch-mock';

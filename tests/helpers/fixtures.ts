@@ -4,7 +4,8 @@ import request from 'supertest';
 import { CookieAccessInfo } from 'cookiejar';
 import type { Express } from 'express';
 import { CompanySchema } from '../../server/src/modules/companies/company.entity';
-import { ROLES, UserSchema, type Role } from '../../server/src/modules/users/user.entity';
+import { ROLES, type Role } from '../../server/src/contract';
+import { UserSchema } from '../../server/src/modules/users/user.entity';
 import { hashPassword } from '../../server/src/services/passwords';
 
 export const HTTPS = { 'X-Forwarded-Proto': 'https' } as const;

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildTestApp, type TestApp } from '../helpers/test-app';
 import { browserAgent, login, makeCompany, type Session, type TestCompany } from '../helpers/fixtures';
 import { routeRegistry } from '../../server/src/lib/route';
-import { ROLES, type Role } from '../../server/src/modules/users/user.entity';
+import { ROLES, type Role } from '../../server/src/contract';
 
 let t: TestApp;
 let a: TestCompany;

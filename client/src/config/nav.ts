@@ -1,5 +1,5 @@
 import { paths } from './paths';
-import type { Role } from './roles';
+import { STAFF_ROLES, type Role } from '@contract';
 
 /**
  * The one list of signed-in areas: the navigation and the route guards both read it,
@@ -15,10 +15,8 @@ export interface NavItem {
   needsFeature?: 'outbox';
 }
 
-const ALL: readonly Role[] = ['owner', 'estimator', 'salesperson', 'installer'];
-
 export const navItems: readonly NavItem[] = [
-  { id: 'jobs', label: 'Jobs', to: paths.jobs, roles: ALL },
+  { id: 'jobs', label: 'Jobs', to: paths.jobs, roles: STAFF_ROLES },
   { id: 'users', label: 'Users', to: paths.users, roles: ['owner'] },
   { id: 'reports', label: 'Reports', to: paths.reports, roles: ['owner'] },
   { id: 'price-book', label: 'Price book & catalog', to: paths.priceBook, roles: ['owner'] },

@@ -1,6 +1,6 @@
-export const ROLES = ['owner', 'estimator', 'salesperson', 'installer'] as const;
-export type Role = (typeof ROLES)[number];
+import type { Role } from '@contract';
 
+/** The words for each role (the list itself is the contract's ROLES). */
 export const roleLabels: Record<Role, string> = {
   owner: 'Owner',
   estimator: 'Estimator',

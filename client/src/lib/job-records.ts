@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { DESIGN_VALUE_SOURCES, JOB_STATUSES, TIGHTNESS, UNIT_SYSTEMS, type JobStatus } from '@contract';
 
 /**
  * The client's parse boundary for the job records the server presents (job.presenter.ts,
@@ -8,8 +9,6 @@ import { z } from 'zod';
  * validate them where they are used, so a stored value calc now rejects still shows up.
  */
 
-export const JOB_STATUSES = ['walkthrough', 'design', 'proposed', 'won', 'lost', 'installed'] as const;
-export type JobStatus = (typeof JOB_STATUSES)[number];
 export const jobStatusLabels: Record<JobStatus, string> = {
   walkthrough: 'Walk-through',
   design: 'Design',
@@ -19,18 +18,7 @@ export const jobStatusLabels: Record<JobStatus, string> = {
   installed: 'Installed',
 };
 
-/**
- * The moves a person may make by hand, as the server allows them (job.service.ts TRANSITIONS;
- * the server decides, this only offers the buttons), with the words on each button.
- */
-export const JOB_STATUS_MOVES: Record<JobStatus, readonly JobStatus[]> = {
-  walkthrough: ['design', 'lost'],
-  design: ['walkthrough', 'proposed', 'lost'],
-  proposed: ['design', 'won', 'lost'],
-  won: ['installed'],
-  lost: ['walkthrough', 'design'],
-  installed: [],
-};
+/** The words on each status-move button (which moves a person may make is the contract's JOB_STATUS_MACHINE). */
 export const moveLabels: Record<JobStatus, string> = {
   walkthrough: 'Back to walk-through',
   design: 'Move to design',
@@ -41,8 +29,6 @@ export const moveLabels: Record<JobStatus, string> = {
 };
 
 const person = z.object({ id: z.string(), name: z.string() }).nullable();
-export const DESIGN_VALUE_SOURCES = ['entered', 'company-default', 'standard-default'] as const;
-export type DesignValueSource = (typeof DESIGN_VALUE_SOURCES)[number];
 const designSource = z.object({ source: z.enum(DESIGN_VALUE_SOURCES), note: z.string() });
 
 export const customerRecord = z.object({
@@ -74,7 +60,7 @@ export const jobRecord = z.object({
   notes: z.string(),
   designConditions: z.record(z.string(), z.unknown()).nullable(),
   designSources: z.record(z.string(), designSource),
-  tightness: z.enum(['very-tight', 'tight', 'average', 'leaky', 'very-leaky']),
+  tightness: z.enum(TIGHTNESS),
   version: z.number().int(),
   createdAt: z.string(),
   updatedAt: z.string(),
@@ -106,9 +92,6 @@ export const roomRecord = z.object({
   photos: z.array(photoRecord),
 });
 export type RoomRecord = z.output<typeof roomRecord>;
-
-export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
-export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 
 export const companySettingsRecord = z.object({
   unitSystem: z.enum(UNIT_SYSTEMS),

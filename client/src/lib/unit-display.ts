@@ -10,7 +10,7 @@ import {
   mFromFt,
   roundHalfUp,
 } from '@calc';
-import type { UnitSystem } from './job-records';
+import type { UnitSystem } from '@contract';
 
 /**
  * Every number is stored and computed in calc's canonical imperial units; a metric company

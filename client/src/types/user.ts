@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ROLES } from '../config/roles';
+import { ROLES, UNIT_SYSTEMS } from '@contract';
 
 /** Shapes several features read (the server's presenters are the source of truth for them). */
 export const userSchema = z.object({
@@ -16,6 +16,6 @@ export type User = z.infer<typeof userSchema>;
 export const companySchema = z.object({
   id: z.string(),
   name: z.string(),
-  unitSystem: z.enum(['imperial', 'metric']),
+  unitSystem: z.enum(UNIT_SYSTEMS),
 });
 export type Company = z.infer<typeof companySchema>;

@@ -2,7 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { RequestContext } from '@mikro-orm/core';
 import express, { type Request, type Response, type Router } from 'express';
 import type { z, ZodType } from 'zod';
-import type { Role } from '../modules/users/user.entity';
+import { JOB_EDITOR_ROLES, OFFICE_ROLES, OWNER_ROLES, STAFF_ROLES, type Role } from '@contract';
 import { ForbiddenError, UnauthenticatedError, UnsupportedMediaTypeError } from './errors';
 import { parseInput } from './validate';
 import type { Services } from '../services/services';
@@ -27,7 +27,11 @@ export interface RolesPolicy {
 export type Policy = PublicPolicy | RolesPolicy;
 export const PUBLIC: PublicPolicy = { kind: 'public' };
 export const roles = (...r: Role[]): RolesPolicy => ({ kind: 'roles', roles: r });
-export const ANY_STAFF = roles('owner', 'estimator', 'salesperson', 'installer');
+export const ANY_STAFF = roles(...STAFF_ROLES);
+/** The contract's role groups as policies. */
+export const JOB_EDITORS = roles(...JOB_EDITOR_ROLES);
+export const OFFICE = roles(...OFFICE_ROLES);
+export const OWNER = roles(...OWNER_ROLES);
 
 export interface RouteContext<P, Q, B, A> {
   req: Request;

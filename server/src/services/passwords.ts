@@ -3,8 +3,6 @@ import { cpus } from 'node:os';
 
 /** OWASP Password Storage Cheat Sheet, argon2id primary setting: m=19 MiB, t=2, p=1. */
 export const ARGON2_OPTIONS = { type: argon2.argon2id, memoryCost: 19456, timeCost: 2, parallelism: 1 } as const;
-export const PASSWORD_MIN = 12;
-export const PASSWORD_MAX = 128;
 
 // Hashing is bounded to the core count so a sign-in flood cannot take the whole libuv pool.
 const limit = Math.max(1, cpus().length);

@@ -1,6 +1,6 @@
 import { NavLink } from 'react-router-dom';
 import { navItemsFor, type Feature } from '../../config/nav';
-import type { Role } from '../../config/roles';
+import type { Role } from '@contract';
 
 interface MainNavProps {
   role: Role;

@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { customerFields, siteFields } from '../../lib/job-fields';
-import { customerRecord, customerResponse, JOB_STATUSES, jobRecord, type CustomerRecord } from '../../lib/job-records';
+import { blankOr, customerRules, siteRules } from '@contract';
+import { customerRecord, customerResponse, jobRecord, type CustomerRecord } from '../../lib/job-records';
 
-/** Client copies of the server's customer and job records and the new-job form (rules in lib/job-fields.ts). */
+/** The jobs list's records and the new-job form (field rules from the contract). */
 export const customersResponse = z.object({
   items: z.array(customerRecord),
   total: z.number(),
@@ -20,16 +20,20 @@ export const newJobSchema = z
   .object({
     customerMode: z.enum(['new', 'existing']),
     customerId: z.string(),
-    ...customerFields,
-    ...siteFields,
+    /** Checked with the contract's rule only when a new customer is made (superRefine below). */
+    customerName: z.string().trim(),
+    customerEmail: blankOr(customerRules.email),
+    customerPhone: blankOr(customerRules.phone),
+    ...siteRules,
   })
   .superRefine((v, ctx) => {
-    if (v.customerMode === 'new' && v.customerName.trim() === '')
-      ctx.addIssue({ code: 'custom', path: ['customerName'], message: 'Enter the customer name.' });
+    if (v.customerMode === 'new')
+      for (const i of customerRules.name.safeParse(v.customerName).error?.issues ?? [])
+        ctx.addIssue({ code: 'custom', path: ['customerName'], message: i.message });
     if (v.customerMode === 'existing' && v.customerId === '')
       ctx.addIssue({ code: 'custom', path: ['customerId'], message: 'Choose a customer.' });
   });
 export type NewJobInput = z.input<typeof newJobSchema>;
 export type NewJobValues = z.output<typeof newJobSchema>;
 
-export { customerRecord, customerResponse, JOB_STATUSES, type CustomerRecord };
+export { customerRecord, customerResponse, type CustomerRecord };

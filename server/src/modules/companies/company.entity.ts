@@ -1,5 +1,6 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
 import { randomUUID } from 'node:crypto';
+import { UNIT_SYSTEMS } from '@contract';
 
 /** A tenant: one contracting firm. Every other record belongs to exactly one company. */
 export const CompanySchema = defineEntity({
@@ -11,7 +12,7 @@ export const CompanySchema = defineEntity({
       .primary()
       .onCreate(() => randomUUID()),
     name: p.string().length(160),
-    unitSystem: p.enum(['imperial', 'metric']).default('imperial'),
+    unitSystem: p.enum([...UNIT_SYSTEMS]).default('imperial'),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p
       .datetime()

@@ -1,7 +1,8 @@
 import type { DesignConditions } from '@calc';
+import type { UnitSystem } from '@contract';
 
 export interface SettingsView {
-  unitSystem: 'imperial' | 'metric';
+  unitSystem: UnitSystem;
   defaultDesignConditions: DesignConditions | null;
   /** 0 until the owner first saves; send it back as If-Match: "0". */
   version: number;

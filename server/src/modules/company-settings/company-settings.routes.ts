@@ -1,4 +1,4 @@
-import { ANY_STAFF, roles, type ApiRouter } from '../../lib/route';
+import { ANY_STAFF, OWNER, type ApiRouter } from '../../lib/route';
 import { ifMatchVersion, setEtag } from '../jobs/version-lock';
 import { presentCompanySettings } from './company-settings.presenter';
 import { putCompanySettingsSchema } from './company-settings.schema';
@@ -18,7 +18,7 @@ export function companySettingsRoutes(api: ApiRouter): void {
   api.route({
     method: 'put',
     path: '/settings',
-    policy: roles('owner'),
+    policy: OWNER,
     body: putCompanySettingsSchema,
     handler: async ({ em, actor, body, req, res }) => {
       const s = await putCompanySettings(em, actor, ifMatchVersion(req), body);

@@ -1,7 +1,6 @@
 import { z } from 'zod';
 import { designConditionsSchema } from '@calc';
-
-export const UNIT_SYSTEMS = ['imperial', 'metric'] as const;
+import { UNIT_SYSTEMS } from '@contract';
 
 /** The whole settings document; the owner sends it back with If-Match. */
 export const putCompanySettingsSchema = z.strictObject({

@@ -1,17 +1,15 @@
-import { roles, type ApiRouter } from '../../lib/route';
+import { JOB_EDITORS, OFFICE, type ApiRouter } from '../../lib/route';
 import { presentCustomer } from './customer.presenter';
 import { createCustomerSchema, customerIdParams, listCustomersQuery, updateCustomerSchema } from './customer.schema';
 import { createCustomer, deleteCustomer, getCustomer, listCustomers, updateCustomer } from './customer.service';
 
 /** Installers meet customers only through the jobs assigned to them. */
-const SELLERS = roles('owner', 'estimator', 'salesperson');
-const OFFICE = roles('owner', 'estimator');
 
 export function customerRoutes(api: ApiRouter): void {
   api.route({
     method: 'get',
     path: '/',
-    policy: SELLERS,
+    policy: JOB_EDITORS,
     query: listCustomersQuery,
     handler: async ({ em, actor, query }) => {
       const { items, total } = await listCustomers(em, actor, query);
@@ -21,14 +19,14 @@ export function customerRoutes(api: ApiRouter): void {
   api.route({
     method: 'get',
     path: '/:id',
-    policy: SELLERS,
+    policy: JOB_EDITORS,
     params: customerIdParams,
     handler: async ({ em, actor, params }) => ({ customer: presentCustomer(await getCustomer(em, actor, params.id)) }),
   });
   api.route({
     method: 'post',
     path: '/',
-    policy: SELLERS,
+    policy: JOB_EDITORS,
     body: createCustomerSchema,
     status: 201,
     handler: async ({ em, actor, body }) => ({ customer: presentCustomer(await createCustomer(em, actor, body)) }),
@@ -36,7 +34,7 @@ export function customerRoutes(api: ApiRouter): void {
   api.route({
     method: 'patch',
     path: '/:id',
-    policy: SELLERS,
+    policy: JOB_EDITORS,
     params: customerIdParams,
     body: updateCustomerSchema,
     handler: async ({ em, actor, params, body }) => ({

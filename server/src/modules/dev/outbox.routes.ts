@@ -1,12 +1,12 @@
 import { NotFoundError } from '../../lib/errors';
-import { roles, type ApiRouter } from '../../lib/route';
+import { OWNER, type ApiRouter } from '../../lib/route';
 
 /** The local e-mail fake's outbox, for the owner while developing; absent in production. */
 export function outboxRoutes(api: ApiRouter): void {
   api.route({
     method: 'get',
     path: '/outbox',
-    policy: roles('owner'),
+    policy: OWNER,
     handler: async ({ services }) => {
       if (!services.config.devOutbox || !services.outbox) throw new NotFoundError('The outbox');
       const messages = await services.outbox.list();

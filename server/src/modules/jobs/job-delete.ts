@@ -1,16 +1,14 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { ConflictError } from '../../lib/errors';
+import { DELETABLE_JOB_STATUSES, mayDeleteJob, type JobStatus } from '@contract';
+import { ConflictError, ForbiddenError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
 import type { Storage } from '../../services/storage';
 import { PhotoSchema } from '../photos/photo.entity';
 import { RoomSchema } from '../rooms/room.entity';
 import { findJob } from './job-access';
-import { JobSchema, type JobStatus } from './job.entity';
+import { JobSchema } from './job.entity';
 import { presentJob } from './job.presenter';
 import { assertVersion } from './version-lock';
-
-/** Only a job made by mistake goes: from proposed on, the reports count it (won/lost), so it stays. */
-export const DELETABLE_STATUSES: readonly JobStatus[] = ['walkthrough', 'design'];
 
 function notDeletable(status: JobStatus): ConflictError {
   const instead = status === 'proposed' ? 'mark it lost instead' : 'won, lost and installed jobs stay for the reports';
@@ -21,7 +19,8 @@ function notDeletable(status: JobStatus): ConflictError {
 
 /**
  * Deletes a job with its rooms and photos; the customer stays (they may have other jobs).
- * Who may: the policy keeps installers out, and findJob's scope leaves a salesperson only their own jobs.
+ * Who may: the contract's mayDeleteJob (the policy keeps installers out, and findJob's scope leaves a
+ * salesperson only their own jobs, so its check is a second line).
  * Photos, then rooms, then the job, so a photo upload racing this waits on its room instead of
  * deadlocking on the job row; the job goes only at the version the person saw.
  */
@@ -35,7 +34,8 @@ export async function deleteJob(
   const keys = await em.transactional(async (tx) => {
     const job = await findJob(tx, actor, id);
     assertVersion(version, job.version, 'The job', () => presentJob(job));
-    if (!DELETABLE_STATUSES.includes(job.status)) throw notDeletable(job.status);
+    if (!DELETABLE_JOB_STATUSES.includes(job.status)) throw notDeletable(job.status);
+    if (!mayDeleteJob({ id: actor.userId, role: actor.role }, job)) throw new ForbiddenError();
     const photos = await tx.find(PhotoSchema, { room: { job: job.id } });
     if (photos.length) await tx.nativeDelete(PhotoSchema, { id: { $in: photos.map((p) => p.id) } });
     await tx.nativeDelete(RoomSchema, { job: job.id });

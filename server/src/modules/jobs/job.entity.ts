@@ -1,15 +1,10 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
 import { randomUUID } from 'node:crypto';
 import type { DesignConditions } from '@calc';
+import { JOB_STATUSES, TIGHTNESS, type DesignSources } from '@contract';
 import { CompanySchema } from '../companies/company.entity';
 import { CustomerSchema } from '../customers/customer.entity';
 import { UserSchema } from '../users/user.entity';
-import type { DesignSources } from './design-conditions';
-
-/** Later issues add states after these; the order is the usual life of a job. */
-export const JOB_STATUSES = ['walkthrough', 'design', 'proposed', 'won', 'lost', 'installed'] as const;
-export type JobStatus = (typeof JOB_STATUSES)[number];
-export const TIGHTNESS = ['very-tight', 'tight', 'average', 'leaky', 'very-leaky'] as const;
 
 export const JobSchema = defineEntity({
   name: 'Job',

@@ -1,13 +1,10 @@
-import { ANY_STAFF, roles, type ApiRouter } from '../../lib/route';
+import { ANY_STAFF, JOB_EDITORS, type ApiRouter } from '../../lib/route';
 import { findJob } from './job-access';
 import { deleteJob } from './job-delete';
 import { presentJob } from './job.presenter';
 import { createJobSchema, jobIdParams, listJobsQuery, updateJobSchema } from './job.schema';
 import { createJob, listJobs, updateJob } from './job.service';
 import { ifMatchVersion, setEtag } from './version-lock';
-
-/** Installers read the jobs assigned to them; they never change them here. */
-const EDITORS = roles('owner', 'estimator', 'salesperson');
 
 export function jobRoutes(api: ApiRouter): void {
   api.route({
@@ -34,7 +31,7 @@ export function jobRoutes(api: ApiRouter): void {
   api.route({
     method: 'post',
     path: '/',
-    policy: EDITORS,
+    policy: JOB_EDITORS,
     body: createJobSchema,
     status: 201,
     handler: async ({ em, actor, body, services, res }) => {
@@ -46,7 +43,7 @@ export function jobRoutes(api: ApiRouter): void {
   api.route({
     method: 'patch',
     path: '/:id',
-    policy: EDITORS,
+    policy: JOB_EDITORS,
     params: jobIdParams,
     body: updateJobSchema,
     handler: async ({ em, actor, params, body, services, req, res }) => {
@@ -58,7 +55,7 @@ export function jobRoutes(api: ApiRouter): void {
   api.route({
     method: 'delete',
     path: '/:id',
-    policy: EDITORS,
+    policy: JOB_EDITORS,
     params: jobIdParams,
     handler: async ({ em, actor, params, services, req, res }) => {
       await deleteJob(em, actor, services.storage, params.id, ifMatchVersion(req));

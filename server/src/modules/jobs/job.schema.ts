@@ -1,28 +1,11 @@
 import { z } from 'zod';
-import { designNotesSchema, enteredDesignSchema } from './design-conditions';
-import { JOB_STATUSES, TIGHTNESS } from './job.entity';
+import { designNotesSchema, enteredDesignSchema, JOB_STATUSES, listQueryFields, siteRules, TIGHTNESS } from '@contract';
 
-const text = (label: string, max: number) =>
-  z
-    .string({ message: `Enter the ${label}.` })
-    .trim()
-    .min(1, { message: `Enter the ${label}.` })
-    .max(max, { message: `The ${label} must be at most ${max} characters.` });
+const status = z.enum(JOB_STATUSES, { message: `Status must be one of: ${JOB_STATUSES.join(', ')}.` });
 
 const fields = {
   customerId: z.uuid({ message: 'Choose a customer.' }),
-  street: text('street address', 200),
-  unit: z
-    .string({ message: 'The unit must be text.' })
-    .trim()
-    .max(60, { message: 'The unit must be at most 60 characters.' }),
-  city: text('city or town', 100),
-  region: text('state or region', 60),
-  postalCode: z
-    .string({ message: 'Enter the postal code.' })
-    .trim()
-    .regex(/^[A-Za-z0-9][A-Za-z0-9 -]{1,18}$/, { message: 'Enter a postal code (letters, digits, spaces or dashes).' }),
-  notes: z.string({ message: 'Notes must be text.' }).max(4000, { message: 'Notes must be at most 4000 characters.' }),
+  ...siteRules,
   salespersonId: z.uuid({ message: 'Choose a salesperson.' }),
   assignedInstallerId: z.uuid({ message: 'Choose an installer.' }).nullable(),
   tightness: z.enum(TIGHTNESS, { message: `Tightness must be one of: ${TIGHTNESS.join(', ')}.` }),
@@ -45,7 +28,7 @@ export const createJobSchema = z.strictObject({
 export const updateJobSchema = z
   .strictObject({
     ...fields,
-    status: z.enum(JOB_STATUSES, { message: `Status must be one of: ${JOB_STATUSES.join(', ')}.` }),
+    status,
   })
   .partial()
   .refine((v) => Object.keys(v).length > 0, { message: 'Send at least one field to change.' });
@@ -53,20 +36,8 @@ export const updateJobSchema = z
 export const jobIdParams = z.strictObject({ id: z.uuid({ message: 'Must be a job id.' }) });
 
 export const listJobsQuery = z.strictObject({
-  search: z.string().trim().max(100, { message: 'Search must be at most 100 characters.' }).optional(),
-  status: z.enum(JOB_STATUSES, { message: `Status must be one of: ${JOB_STATUSES.join(', ')}.` }).optional(),
-  page: z.coerce
-    .number({ message: 'Page must be a number.' })
-    .int({ message: 'Page must be a whole number.' })
-    .min(1, { message: 'Page starts at 1.' })
-    .max(100_000, { message: 'Page is too large.' })
-    .default(1),
-  pageSize: z.coerce
-    .number({ message: 'Page size must be a number.' })
-    .int({ message: 'Page size must be a whole number.' })
-    .min(1, { message: 'Page size must be between 1 and 100.' })
-    .max(100, { message: 'Page size must be between 1 and 100.' })
-    .default(25),
+  ...listQueryFields,
+  status: status.optional(),
 });
 
 export type CreateJobInput = z.output<typeof createJobSchema>;

@@ -1,4 +1,14 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
+import {
+  enteredOf,
+  JOB_OWNER_ROLES,
+  mayAssignInstaller,
+  mayChooseSalesperson,
+  mayMoveJob,
+  nextStatuses,
+  notesOf,
+  type JobStatus,
+} from '@contract';
 import { ForbiddenError, UnprocessableError, ValidationError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
 import type { Clock } from '../../services/services';
@@ -7,24 +17,12 @@ import { companyDesignDefaults } from '../company-settings/company-settings.serv
 import { CustomerSchema, type Customer } from '../customers/customer.entity';
 import { likePattern } from '../customers/customer.schema';
 import { UserSchema, type User } from '../users/user.entity';
-import { enteredOf, notesOf, resolveDesignConditions } from './design-conditions';
+import { resolveDesignConditions } from './design-conditions';
 import { findJob, JOB_POPULATE, jobScope } from './job-access';
-import { JobSchema, type Job, type JobStatus } from './job.entity';
+import { JobSchema, type Job } from './job.entity';
 import { presentJob } from './job.presenter';
 import type { CreateJobInput, ListJobsQuery, UpdateJobInput } from './job.schema';
 import { assertVersion } from './version-lock';
-
-/** Moves a person may make by hand; later issues add the proposal-driven ones. */
-export const TRANSITIONS: Record<JobStatus, readonly JobStatus[]> = {
-  walkthrough: ['design', 'lost'],
-  design: ['walkthrough', 'proposed', 'lost'],
-  proposed: ['design', 'won', 'lost'],
-  won: ['installed'],
-  lost: ['walkthrough', 'design'],
-  installed: [],
-};
-
-const isOffice = (a: Actor) => a.role === 'owner' || a.role === 'estimator';
 
 export async function listJobs(
   em: EntityManager,
@@ -65,13 +63,13 @@ async function customerOf(em: EntityManager, actor: Actor, id: string): Promise<
 
 async function salespersonOf(em: EntityManager, actor: Actor, id: string | undefined): Promise<User> {
   const wanted = id ?? actor.userId;
-  if (actor.role === 'salesperson' && wanted !== actor.userId)
+  if (!mayChooseSalesperson({ id: actor.userId, role: actor.role }, wanted))
     throw new ForbiddenError('A salesperson can only own their own jobs.');
   const u = await em.findOne(UserSchema, {
     id: wanted,
     company: actor.companyId,
     active: true,
-    role: { $in: ['salesperson', 'estimator', 'owner'] },
+    role: { $in: [...JOB_OWNER_ROLES] },
   });
   if (!u)
     throw new ValidationError([
@@ -81,7 +79,7 @@ async function salespersonOf(em: EntityManager, actor: Actor, id: string | undef
 }
 
 async function installerOf(em: EntityManager, actor: Actor, id: string | null): Promise<User | null> {
-  if (!isOffice(actor)) throw new ForbiddenError('Only an owner or estimator assigns installers.');
+  if (!mayAssignInstaller(actor.role)) throw new ForbiddenError('Only an owner or estimator assigns installers.');
   if (id === null) return null;
   const u = await em.findOne(UserSchema, { id, company: actor.companyId, active: true, role: 'installer' });
   if (!u)
@@ -135,11 +133,14 @@ export async function updateJob(
   assertVersion(version, job.version, 'The job', () => presentJob(job));
   const from: JobStatus = job.status;
   if (input.status !== undefined && input.status !== from) {
-    if (!TRANSITIONS[from].includes(input.status)) {
+    const allowed = nextStatuses(from);
+    if (!allowed.includes(input.status)) {
       throw new UnprocessableError(`A job cannot move from ${from} to ${input.status}.`, {
-        errors: [{ path: 'status', message: `Allowed next states: ${TRANSITIONS[from].join(', ') || 'none'}.` }],
+        errors: [{ path: 'status', message: `Allowed next states: ${allowed.join(', ') || 'none'}.` }],
       });
     }
+    if (!mayMoveJob(actor.role, from, input.status))
+      throw new ForbiddenError(`Your role cannot move a job from ${from} to ${input.status}.`);
     job.status = input.status;
   }
   if (input.customerId !== undefined) job.customer = await customerOf(em, actor, input.customerId);

@@ -1,11 +1,10 @@
 import { z } from 'zod';
-import { ANY_STAFF, roles, type ApiRouter } from '../../lib/route';
+import { ANY_STAFF, JOB_EDITORS, type ApiRouter } from '../../lib/route';
 import { roomParams } from '../rooms/room.schema';
 import { presentPhoto } from './photo.presenter';
 import { addPhoto, deletePhoto, findPhoto, photoBytes } from './photo.service';
 import { receiveUpload } from './receive-upload';
 
-const EDITORS = roles('owner', 'estimator', 'salesperson');
 const photoParams = roomParams.extend({ photoId: z.uuid({ message: 'Must be a photo id.' }) });
 
 /** Mounted under /api/jobs. Bytes leave only through the GET below, after the same scope checks as the job. */
@@ -13,7 +12,7 @@ export function photoRoutes(api: ApiRouter): void {
   api.route({
     method: 'post',
     path: '/:jobId/rooms/:roomId/photos',
-    policy: EDITORS,
+    policy: JOB_EDITORS,
     params: roomParams,
     multipart: true,
     status: 201,
@@ -45,7 +44,7 @@ export function photoRoutes(api: ApiRouter): void {
   api.route({
     method: 'delete',
     path: '/:jobId/rooms/:roomId/photos/:photoId',
-    policy: EDITORS,
+    policy: JOB_EDITORS,
     params: photoParams,
     handler: async ({ em, actor, params, services, res }) => {
       await deletePhoto(em, actor, services.clock, services.storage, params);

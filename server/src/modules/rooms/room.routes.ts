@@ -1,10 +1,8 @@
-import { ANY_STAFF, roles, type ApiRouter } from '../../lib/route';
+import { ANY_STAFF, JOB_EDITORS, type ApiRouter } from '../../lib/route';
 import { ifMatchVersion, setEtag } from '../jobs/version-lock';
 import { presentRoom } from './room.presenter';
 import { createRoomSchema, jobRoomsParams, roomParams, updateRoomSchema } from './room.schema';
 import { createRoom, deleteRoom, getRoom, listRooms, updateRoom } from './room.service';
-
-const EDITORS = roles('owner', 'estimator', 'salesperson');
 
 /** Mounted under /api/jobs: rooms are always reached through a job the actor may see. */
 export function roomRoutes(api: ApiRouter): void {
@@ -31,7 +29,7 @@ export function roomRoutes(api: ApiRouter): void {
   api.route({
     method: 'post',
     path: '/:jobId/rooms',
-    policy: EDITORS,
+    policy: JOB_EDITORS,
     params: jobRoomsParams,
     body: createRoomSchema,
     status: 201,
@@ -44,7 +42,7 @@ export function roomRoutes(api: ApiRouter): void {
   api.route({
     method: 'patch',
     path: '/:jobId/rooms/:roomId',
-    policy: EDITORS,
+    policy: JOB_EDITORS,
     params: roomParams,
     body: updateRoomSchema,
     handler: async ({ em, actor, params, body, services, req, res }) => {
@@ -56,7 +54,7 @@ export function roomRoutes(api: ApiRouter): void {
   api.route({
     method: 'delete',
     path: '/:jobId/rooms/:roomId',
-    policy: EDITORS,
+    policy: JOB_EDITORS,
     params: roomParams,
     handler: async ({ em, actor, params, services, req, res }) => {
       await deleteRoom(em, actor, services.clock, services.storage, params.jobId, params.roomId, ifMatchVersion(req));

@@ -1,5 +1,5 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
-import { roles, type Actor, type ApiRouter } from '../../lib/route';
+import { OFFICE, type Actor, type ApiRouter } from '../../lib/route';
 import { UserSchema } from './user.entity';
 
 /**
@@ -19,7 +19,7 @@ export function staffRoutes(api: ApiRouter): void {
   api.route({
     method: 'get',
     path: '/',
-    policy: roles('owner', 'estimator'),
+    policy: OFFICE,
     handler: async ({ em, actor }) => ({ staff: await listAssignableStaff(em, actor) }),
   });
 }

@@ -1,9 +1,7 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
 import { randomUUID } from 'node:crypto';
+import { ROLES } from '@contract';
 import { CompanySchema } from '../companies/company.entity';
-
-export const ROLES = ['owner', 'estimator', 'salesperson', 'installer'] as const;
-export type Role = (typeof ROLES)[number];
 
 export const UserSchema = defineEntity({
   name: 'User',

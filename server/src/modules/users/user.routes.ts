@@ -1,9 +1,7 @@
-import { roles, type ApiRouter } from '../../lib/route';
+import { OWNER, type ApiRouter } from '../../lib/route';
 import { presentUser } from './user.presenter';
 import { createUserSchema, updateUserSchema, userIdParams } from './user.schema';
 import { createUser, getUser, listUsers, updateUser } from './user.service';
-
-const OWNER = roles('owner');
 
 export function userRoutes(api: ApiRouter): void {
   api.route({

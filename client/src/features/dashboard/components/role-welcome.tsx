@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { buttonClass } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { paths } from '../../../config/paths';
-import type { Role } from '../../../config/roles';
+import type { Role } from '@contract';
 
 interface Step {
   text: string;

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import type { JobListFilters } from '../../../lib/job-queries';
-import { JOB_STATUSES } from '../../../lib/job-records';
+import { JOB_STATUSES } from '@contract';
 
 export const JOBS_PAGE_SIZE = 25;
 

@@ -13,6 +13,7 @@ import {
   type RoomLoad,
   type Tightness,
 } from '@calc';
+import { TIGHTNESS } from '@contract';
 
 /** Our words for calc's load components (chart labels and the printout). */
 export const COMPONENT_LABELS: Record<ComponentKey, string> = {
@@ -28,7 +29,6 @@ export const COMPONENT_LABELS: Record<ComponentKey, string> = {
 };
 export { COMPONENT_KEYS };
 
-const TIGHTNESS: readonly Tightness[] = ['very-tight', 'tight', 'average', 'leaky', 'very-leaky'];
 export const toTightness = (t: string): Tightness => TIGHTNESS.find((x) => x === t) ?? 'average';
 
 export const tons = (btuh: number) => roundHalfUp(btuh / BTUH_PER_TON, 2);

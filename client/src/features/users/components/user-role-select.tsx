@@ -1,5 +1,6 @@
 import { useId } from 'react';
-import { ROLES, roleLabels, type Role } from '../../../config/roles';
+import { ROLES, type Role } from '@contract';
+import { roleLabels } from '../../../config/roles';
 import type { User } from '../../../types/user';
 
 function isRole(v: string): v is Role {

@@ -2,9 +2,10 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { apiFetch } from '../../../lib/api-client';
 import { jobKeys, jobPath } from '../../../lib/job-queries';
-import { customerResponse, jobResponse, type JobStatus } from '../../../lib/job-records';
+import type { JobStatus } from '@contract';
+import { customerResponse, jobResponse } from '../../../lib/job-records';
 import { versionedFetch } from '../../../lib/versioned-request';
-import { ROLES } from '../../../config/roles';
+import { ROLES } from '@contract';
 
 /** What the job details form changes on the job itself (the site, notes, who it belongs to, status). */
 export interface JobDetailsChanges {

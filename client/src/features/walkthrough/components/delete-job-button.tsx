@@ -1,24 +1,16 @@
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/api-error';
-import type { JobRecord, JobStatus } from '../../../lib/job-records';
-import { isOffice, useViewer, type Viewer } from '../../../lib/viewer';
+import { mayDeleteJob } from '@contract';
+import type { JobRecord } from '../../../lib/job-records';
+import { useViewer } from '../../../lib/viewer';
 import { useDeleteJob } from '../api/delete-job';
-
-/** From proposed on a job counts in the reports (won/lost), so only these may go; the server says the same. */
-const DELETABLE: readonly JobStatus[] = ['walkthrough', 'design'];
-
-/** Mirrors the server: owner and estimator any job of the company, a salesperson their own, an installer never. */
-export function canDeleteJob(viewer: Viewer | null, job: JobRecord): boolean {
-  if (!viewer || !DELETABLE.includes(job.status)) return false;
-  return isOffice(viewer) || (viewer.role === 'salesperson' && job.salesperson?.id === viewer.id);
-}
 
 /** For a job made by mistake: asks, deletes it with its rooms and photos, and goes back to the jobs list. */
 export function DeleteJobButton({ job }: { job: JobRecord }) {
   const viewer = useViewer();
   const remove = useDeleteJob();
-  if (!canDeleteJob(viewer, job)) return null;
+  if (!viewer || !mayDeleteJob(viewer, job)) return null;
 
   const handleDelete = () => {
     const question = `Delete the job for ${job.customer.name} at ${job.site.street}? Its rooms and photos are deleted too; this cannot be undone. The customer stays.`;

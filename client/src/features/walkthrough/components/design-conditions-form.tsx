@@ -1,8 +1,9 @@
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { INFILTRATION_TIGHTNESS } from '@calc';
+import { enteredOf, notesOf, resolveDesign, type DesignNotes, type EnteredDesign } from '@contract';
 import type { JobRecord } from '../../../lib/job-records';
-import { DESIGN_FIELD_SPECS, enteredFromJob, notesFromJob, resolveDesign, type Entered } from '../model/design-fields';
+import { DESIGN_FIELD_SPECS } from '../model/design-fields';
 import { jobTarget, type JobChanges } from '../sync/edits';
 import { useWalkthroughQueue } from '../sync/queue-context';
 import { useDebouncedSave } from '../sync/use-debounced-save';
@@ -26,13 +27,16 @@ interface Props {
 /** The site's design conditions: company defaults prefill, each value says where it came from. Autosaved. */
 export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
   const queue = useWalkthroughQueue();
-  const [entered, setEntered] = useState<Entered>(() => enteredFromJob(job));
-  const [notes, setNotes] = useState<Record<string, string>>(() => notesFromJob(job));
+  const [entered, setEntered] = useState<EnteredDesign>(() => enteredOf(job.designConditions, job.designSources));
+  const [notes, setNotes] = useState<DesignNotes>(() => notesOf(job.designSources));
   const [source, setSource] = useState(() =>
     typeof job.designConditions?.source === 'string' ? job.designConditions.source : '',
   );
   const [tightness, setTightness] = useState<string>(job.tightness);
-  const resolved = resolveDesign(entered, source, companyDefaults);
+  const resolve = (e: EnteredDesign, s: string) => resolveDesign({ ...e, source: s }, companyDefaults);
+  const resolved = resolve(entered, source);
+  const errors = new Map<string, string>();
+  for (const i of resolved.issues) if (!errors.has(i.path)) errors.set(i.path, i.message);
 
   const { schedule } = useDebouncedSave<JobChanges>(jobTarget(job.id), (changes) => {
     void queue.enqueue({
@@ -41,14 +45,14 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
       payload: { kind: 'job-update', jobId: job.id, changes },
     });
   });
-  const save = (next: { entered?: Entered; notes?: Record<string, string>; source?: string; tightness?: string }) => {
+  const save = (next: { entered?: EnteredDesign; notes?: DesignNotes; source?: string; tightness?: string }) => {
     const e = next.entered ?? entered;
     const n = next.notes ?? notes;
     const s = next.source ?? source;
     const t = next.tightness ?? tightness;
-    if (!resolveDesign(e, s, companyDefaults).values) return;
+    if (!resolve(e, s).conditions) return;
     const designConditions: Record<string, number | string> = {};
-    for (const [k, v] of Object.entries(e)) if (v !== undefined) designConditions[k] = v;
+    for (const [k, v] of Object.entries(e)) if (k !== 'source' && v !== undefined) designConditions[k] = v;
     if (s.trim()) designConditions.source = s.trim();
     schedule({
       designConditions,
@@ -63,7 +67,7 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
       <div className="grid gap-4 sm:grid-cols-2">
         {DESIGN_FIELD_SPECS.map((f) => {
           const value = resolved.shown[f.key];
-          const origin = resolved.origin[f.key] ?? 'standard-default';
+          const origin = resolved.origin[f.key];
           return (
             <div key={f.key} className="flex flex-col gap-2 rounded-md border border-line p-3">
               <NumberInput
@@ -71,7 +75,7 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
                 quantity={f.quantity}
                 unit={f.unit ?? ''}
                 value={typeof value === 'number' ? value : undefined}
-                error={resolved.errors.get(f.key)}
+                error={errors.get(f.key)}
                 hint={<span data-source={origin}>Source: {sourceLabels[origin]}</span>}
                 onChange={(v) => {
                   // Emptying a field with a company default must not snap the default back in while typing.
@@ -110,7 +114,7 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
         <TextInput
           label="Source of the design values (e.g. the local code table)"
           value={source}
-          error={resolved.errors.get('source')}
+          error={errors.get('source')}
           onChange={(v) => {
             setSource(v);
             save({ source: v });

@@ -1,23 +1,25 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
 import { z } from 'zod';
+import {
+  blankOr,
+  customerRules,
+  isOfficeRole,
+  mayDeleteJob,
+  mayEditJob,
+  movesFor,
+  siteRules,
+  type JobStatus,
+} from '@contract';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Form } from '../../../components/ui/form';
 import { SelectField, SubmitButton, TextField } from '../../../components/ui/form-fields';
 import { Spinner } from '../../../components/ui/spinner';
 import { ApiError, errorMessage, isApiError } from '../../../lib/api-error';
-import { customerFields, siteFields } from '../../../lib/job-fields';
 import { jobKeys } from '../../../lib/job-queries';
-import {
-  JOB_STATUS_MOVES,
-  jobStatusLabels,
-  moveLabels,
-  type CustomerRecord,
-  type JobRecord,
-  type JobStatus,
-} from '../../../lib/job-records';
-import { isOffice, useViewer } from '../../../lib/viewer';
+import { jobStatusLabels, moveLabels, type CustomerRecord, type JobRecord } from '../../../lib/job-records';
+import { useViewer, type Viewer } from '../../../lib/viewer';
 import {
   customerQueryOptions,
   saveCustomer,
@@ -28,12 +30,13 @@ import {
   type StaffMember,
 } from '../api/job-details';
 import { useWalkthroughQueue } from '../sync/queue-context';
-import { canDeleteJob, DeleteJobButton } from './delete-job-button';
+import { DeleteJobButton } from './delete-job-button';
 
 const detailsSchema = z.object({
-  ...customerFields,
-  customerName: customerFields.customerName.min(1, { message: 'Enter the customer name.' }),
-  ...siteFields,
+  customerName: customerRules.name,
+  customerEmail: blankOr(customerRules.email),
+  customerPhone: blankOr(customerRules.phone),
+  ...siteRules,
   salespersonId: z.string(),
   assignedInstallerId: z.string(),
 });
@@ -126,11 +129,11 @@ function useJobWriter(job: JobRecord) {
   };
 }
 
-function StatusMoves({ job }: { job: JobRecord }) {
+function StatusMoves({ job, viewer }: { job: JobRecord; viewer: Viewer }) {
   const write = useJobWriter(job);
   const [busy, setBusy] = useState<JobStatus | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const moves = JOB_STATUS_MOVES[job.status];
+  const moves = movesFor(viewer.role, job.status);
   if (moves.length === 0) return null;
   const move = async (to: JobStatus) => {
     setBusy(to);
@@ -298,7 +301,7 @@ function ReadOnlyPeople({ job }: { job: JobRecord }) {
  */
 export function JobDetailsPanel({ job }: { job: JobRecord }) {
   const viewer = useViewer();
-  const canEdit = viewer !== null && viewer.role !== 'installer';
+  const canEdit = viewer !== null && mayEditJob(viewer.role);
   const customer = useCustomer(job.customer.id, canEdit);
   return (
     <details className="rounded-lg border border-line bg-white p-4">
@@ -309,11 +312,11 @@ export function JobDetailsPanel({ job }: { job: JobRecord }) {
         </span>
       </summary>
       <div className="mt-4 flex flex-col gap-6">
-        {canEdit ? <StatusMoves job={job} /> : null}
+        {canEdit ? <StatusMoves job={job} viewer={viewer} /> : null}
         {!canEdit ? (
           <ReadOnlyPeople job={job} />
         ) : customer.data ? (
-          <DetailsForm job={job} customer={customer.data} office={isOffice(viewer)} />
+          <DetailsForm job={job} customer={customer.data} office={viewer !== null && isOfficeRole(viewer.role)} />
         ) : customer.isError ? (
           <Alert tone="danger" title="Could not load the customer’s details.">
             {errorMessage(customer.error)}
@@ -322,7 +325,7 @@ export function JobDetailsPanel({ job }: { job: JobRecord }) {
           <Spinner label="Loading the customer’s details…" />
         )}
         {/* Kept apart from Save, so a thumb on a phone does not find it by accident. */}
-        {canDeleteJob(viewer, job) ? (
+        {viewer && mayDeleteJob(viewer, job) ? (
           <div className="border-t border-line pt-4">
             <DeleteJobButton job={job} />
           </div>

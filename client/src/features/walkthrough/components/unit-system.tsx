@@ -1,5 +1,5 @@
 import { createContext, useContext } from 'react';
-import type { UnitSystem } from '../../../lib/job-records';
+import type { UnitSystem } from '@contract';
 
 /** The company's unit system (company settings); imperial when unknown. */
 export const UnitSystemContext = createContext<UnitSystem>('imperial');

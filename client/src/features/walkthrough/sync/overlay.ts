@@ -1,6 +1,6 @@
 import type { JobRecord, RoomRecord } from '../../../lib/job-records';
 import type { QueueItem } from '../../../lib/offline-queue';
-import { resolveDesign } from '../model/design-fields';
+import { DESIGN_FIELDS, resolveDesign, TIGHTNESS, type EnteredDesign } from '@contract';
 import type { RoomInputValue, WalkthroughEdit } from './edits';
 
 /** A room as the screen shows it: the server's record with any waiting edit laid over it. */
@@ -63,19 +63,20 @@ export function overlayJob(
     if (e.kind !== 'job-update' || e.jobId !== job.id) continue;
     waiting = true;
     const typed = e.changes.designConditions;
-    const entered = typed
-      ? Object.fromEntries(Object.entries(typed).filter((kv): kv is [string, number] => typeof kv[1] === 'number'))
-      : {};
-    const resolved = typed
-      ? resolveDesign(entered, typeof typed.source === 'string' ? typed.source : '', companyDefaults).values
-      : null;
-    const designConditions = resolved ?? out.designConditions;
+    const entered: EnteredDesign = {};
+    for (const f of DESIGN_FIELDS) {
+      const v = typed?.[f];
+      if (typeof v === 'number') entered[f] = v;
+    }
+    if (typeof typed?.source === 'string') entered.source = typed.source;
+    const resolved = typed ? resolveDesign(entered, companyDefaults) : null;
+    const designConditions = resolved?.conditions ?? out.designConditions;
     const designSources = { ...out.designSources };
     for (const [field, note] of Object.entries(e.changes.designSourceNotes ?? {})) {
       designSources[field] = { source: designSources[field]?.source ?? 'entered', note };
     }
     if (typed) {
-      for (const [field, origin] of Object.entries(resolveDesign(entered, '', companyDefaults).origin)) {
+      for (const [field, origin] of Object.entries(resolved?.origin ?? {})) {
         designSources[field] = { source: origin, note: designSources[field]?.note ?? '' };
       }
     }
@@ -89,7 +90,6 @@ export function overlayJob(
   return { job: out, waiting };
 }
 
-const TIGHTNESS = ['very-tight', 'tight', 'average', 'leaky', 'very-leaky'] as const;
 function isTightness(v: string | undefined): v is JobRecord['tightness'] {
   return TIGHTNESS.some((t) => t === v);
 }

@@ -1,0 +1,9 @@
+/**
+ * The contract: what the browser and the server agree on, in one pure module both import
+ * (alias `@contract`). No I/O, no clock; it imports only zod and `@calc`. Lint lets the client import
+ * this folder of the server and nothing else.
+ */
+export * from './enums';
+export * from './permissions';
+export * from './fields';
+export * from './design-conditions';

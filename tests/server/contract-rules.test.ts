@@ -1,0 +1,95 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import {
+  JOB_STATUSES,
+  mayDeleteJob,
+  mayMoveJob,
+  nextStatuses,
+  ROLES,
+  TIGHTNESS,
+  UNIT_SYSTEMS,
+  type JobStatus,
+} from '../../server/src/contract';
+import { JobSchema } from '../../server/src/modules/jobs/job.entity';
+import { login, makeCompany, type Session, type TestCompany } from '../helpers/fixtures';
+import { buildTestApp, type TestApp } from '../helpers/test-app';
+import { del, newJob, patch } from './jobs-helpers';
+
+/**
+ * The contract's rules are what the server enforces: the client shows buttons from the same rules,
+ * so every move and delete the server accepts is exactly one the contract allows (and the other way round).
+ */
+let t: TestApp;
+let a: TestCompany;
+const sessions = {} as Record<(typeof ROLES)[number], Session>;
+
+beforeAll(async () => {
+  t = await buildTestApp();
+  a = await makeCompany(t.orm.em.fork(), 'ContractRules');
+  for (const role of ROLES) sessions[role] = await login(t.app, a.users[role].email);
+});
+afterAll(async () => t.close());
+
+const newSalespersonJob = () =>
+  newJob(sessions.owner, { salespersonId: a.users.salesperson.id, assignedInstallerId: a.users.installer.id });
+
+/** Puts a job straight into a status (the database, not the API, so every start is reachable). */
+async function jobIn(status: JobStatus, job?: { id: string }): Promise<{ id: string; version: number }> {
+  job ??= await newSalespersonJob();
+  const em = t.orm.em.fork();
+  await em.nativeUpdate(JobSchema, { id: job.id }, { status });
+  const row = await em.findOneOrFail(JobSchema, { id: job.id });
+  return { id: job.id, version: row.version };
+}
+
+describe('job status machine', () => {
+  it.each(JOB_STATUSES)('from %s, the server accepts exactly the moves the contract allows each role', async (from) => {
+    const { id } = await newSalespersonJob();
+    for (const to of JOB_STATUSES.filter((s) => s !== from)) {
+      for (const role of ROLES) {
+        const job = await jobIn(from, { id });
+        const r = await patch(sessions[role], `/api/jobs/${job.id}`, job.version).send({ status: to });
+        const allowed = mayMoveJob(role, from, to);
+        expect(r.status === 200, `${role}: ${from} → ${to} answered ${r.status}`).toBe(allowed);
+        if (!allowed && role !== 'installer' && !nextStatuses(from).includes(to)) expect(r.status).toBe(422);
+      }
+    }
+  });
+});
+
+describe('job delete', () => {
+  it.each(JOB_STATUSES)('in %s, the server deletes exactly when the contract says the person may', async (status) => {
+    for (const role of ROLES) {
+      const job = await jobIn(status);
+      const viewer = { id: a.users[role].id, role };
+      const expected = mayDeleteJob(viewer, { status, salesperson: { id: a.users.salesperson.id } });
+      const r = await del(sessions[role], `/api/jobs/${job.id}`, job.version);
+      expect(r.status === 204, `${role} deleting a ${status} job answered ${r.status}`).toBe(expected);
+    }
+  });
+});
+
+describe('the database agrees with the contract', () => {
+  /** The values a CHECK (… in (…)) constraint or enum check allows, read from PostgreSQL's catalogue. */
+  async function checkValues(table: string, column: string): Promise<string[]> {
+    const rows = await t.orm.em
+      .fork()
+      .getConnection()
+      .execute<{ def: string }[]>(
+        `select pg_get_constraintdef(c.oid) as def from pg_constraint c join pg_class r on r.oid = c.conrelid
+         where r.relname = ? and c.contype = 'c'`,
+        [table],
+      );
+    const def = rows.map((r) => r.def).find((d) => d.includes(`${column} = ANY`));
+    expect(def, `a CHECK on ${table}.${column}`).toBeDefined();
+    return [...(def ?? '').matchAll(/'([^']+)'::text/g)].map((m) => m[1] ?? '');
+  }
+
+  it.each([
+    ['job', 'tightness', TIGHTNESS],
+    ['job', 'status', JOB_STATUSES],
+    ['app_user', 'role', ROLES],
+    ['company', 'unit_system', UNIT_SYSTEMS],
+  ] as const)('%s.%s allows exactly the contract list', async (table, column, list) => {
+    expect((await checkValues(table, column)).sort()).toEqual([...list].sort());
+  });
+});

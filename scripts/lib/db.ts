@@ -1,8 +1,9 @@
 import { MikroORM } from '@mikro-orm/postgresql';
 import { ormConfig } from '../../mikro-orm.config';
+import { migrateQueue } from '../../server/src/services/queue';
 import { log } from './system';
 
-/** Applies every committed migration that has not run yet. */
+/** Applies every committed migration that has not run yet, then graphile-worker's own (schema graphile_worker). */
 export async function migrate(databaseUrl: string): Promise<void> {
   const orm = await MikroORM.init(ormConfig(databaseUrl, 2));
   try {
@@ -14,6 +15,7 @@ export async function migrate(databaseUrl: string): Promise<void> {
   } finally {
     await orm.close();
   }
+  await migrateQueue(databaseUrl);
 }
 
 export async function withOrm<T>(databaseUrl: string, fn: (orm: MikroORM) => Promise<T>): Promise<T> {

@@ -39,6 +39,14 @@ const schema = z.object({
     .int()
     .min(1)
     .default(15 * 60),
+  /** `off`: this server only adds jobs and `npm run worker` (server/src/worker-main.ts) runs them. */
+  QUEUE_WORKERS: z.enum(['on', 'off']).default('on'),
+  QUEUE_CONCURRENCY: z.coerce.number().int().min(1).max(32).default(2),
+  /** Keeps two deployments (or two test apps) on one database from running each other's jobs. */
+  QUEUE_NAMESPACE: z
+    .string()
+    .regex(/^[a-z0-9-]{1,40}$/, { message: 'lower-case letters, digits and dashes, at most 40' })
+    .optional(),
   DEV_OUTBOX: z.enum(['on', 'off']).optional(),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   CLIENT_DIST: z.string().default('dist/client'),

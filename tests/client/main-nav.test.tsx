@@ -22,6 +22,7 @@ describe('main navigation by role', () => {
     const owner = [
       ['Jobs', '/jobs'],
       ['Users', '/users'],
+      ['E-mail', '/mail'],
       ['Reports', '/reports'],
       ['Price book & catalog', '/price-book'],
     ];

@@ -1,4 +1,5 @@
 import { MikroORM } from '@mikro-orm/postgresql';
+import { randomUUID } from 'node:crypto';
 import type { Express } from 'express';
 import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -9,8 +10,10 @@ import { createApp } from '../../server/src/app';
 import { loadConfig, type Config } from '../../server/src/config';
 import { startSmtpFake, type SmtpFake } from '../../server/src/fakes/smtp-fake';
 import { createSmtpMailer } from '../../server/src/services/mailer';
+import { createQueue } from '../../server/src/services/queue';
 import { systemClock, type Clock, type Services } from '../../server/src/services/services';
 import { createLocalDiskStorage } from '../../server/src/services/storage';
+import { taskHandlers } from '../../server/src/tasks/handlers';
 
 export interface TestApp {
   app: Express;
@@ -46,7 +49,7 @@ export async function buildTestApp(overrides: Partial<Config> = {}, clock: Clock
   const mailer = createSmtpMailer({ host: '127.0.0.1', port: smtp.port, from: config.MAIL_FROM });
   // Each test app stores uploads in its own temporary folder, never in the developer's .data/uploads.
   const storage = createLocalDiskStorage(mkdtempSync(join(tmpdir(), 'gaugeline-uploads-')));
-  const services: Services = {
+  const base: Omit<Services, 'queue'> = {
     orm,
     sessionPool,
     config: { ...config, devOutbox: true },
@@ -55,6 +58,17 @@ export async function buildTestApp(overrides: Partial<Config> = {}, clock: Clock
     clock,
     outbox: smtp,
   };
+  // Workers run in the test app as in the server; the namespace keeps each test file's jobs (and so
+  // its e-mail) to its own app while the files share one database.
+  const queue = createQueue({
+    databaseUrl: url,
+    handlers: taskHandlers(base),
+    namespace: `t-${randomUUID().slice(0, 8)}`,
+    concurrency: 1,
+    pollIntervalMs: 200,
+  });
+  await queue.start();
+  const services: Services = { ...base, queue };
   const app = createApp(services);
   return {
     app,
@@ -62,6 +76,7 @@ export async function buildTestApp(overrides: Partial<Config> = {}, clock: Clock
     services,
     smtp,
     async close() {
+      await services.queue.stop().catch(() => undefined);
       mailer.close();
       await smtp.close();
       await sessionPool.end().catch(() => undefined);

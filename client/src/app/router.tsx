@@ -43,6 +43,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             { index: true, lazy: lazy(() => import('./routes/home')) },
             ...createJobsRoutes(queryClient),
             { path: paths.users, lazy: lazy(() => import('./routes/users')) },
+            { path: paths.mail, lazy: lazy(() => import('./routes/mail')) },
             { path: paths.outbox, lazy: lazy(() => import('./routes/outbox')) },
             { path: paths.reports, lazy: lazy(() => import('./routes/reports')) },
             { path: paths.priceBook, lazy: lazy(() => import('./routes/price-book')) },

@@ -18,6 +18,7 @@ export interface NavItem {
 export const navItems: readonly NavItem[] = [
   { id: 'jobs', label: 'Jobs', to: paths.jobs, roles: STAFF_ROLES },
   { id: 'users', label: 'Users', to: paths.users, roles: ['owner'] },
+  { id: 'mail', label: 'E-mail', to: paths.mail, roles: ['owner'] },
   { id: 'reports', label: 'Reports', to: paths.reports, roles: ['owner'] },
   { id: 'price-book', label: 'Price book & catalog', to: paths.priceBook, roles: ['owner'] },
   { id: 'outbox', label: 'Outbox', to: paths.outbox, roles: ['owner'], needsFeature: 'outbox' },

@@ -5,6 +5,7 @@ export const paths = {
   jobs: '/jobs',
   users: '/users',
   outbox: '/dev/outbox',
+  mail: '/mail',
   reports: '/reports',
   priceBook: '/price-book',
 } as const;

@@ -4,6 +4,7 @@ import { CompanySettingsSchema } from '../modules/company-settings/company-setti
 import { CustomerSchema } from '../modules/customers/customer.entity';
 import { JobSchema } from '../modules/jobs/job.entity';
 import { PhotoSchema } from '../modules/photos/photo.entity';
+import { OutgoingMessageSchema } from '../modules/mail/outgoing-message.entity';
 import { RoomSchema } from '../modules/rooms/room.entity';
 
 /** Every entity the ORM knows. A module adds its schema here. */
@@ -15,4 +16,5 @@ export const entities = [
   JobSchema,
   RoomSchema,
   PhotoSchema,
+  OutgoingMessageSchema,
 ];

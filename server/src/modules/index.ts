@@ -10,6 +10,7 @@ import { userRoutes } from './users/user.routes';
 import { companySettingsRoutes } from './company-settings/company-settings.routes';
 import { customerRoutes } from './customers/customer.routes';
 import { jobRoutes } from './jobs/job.routes';
+import { mailRoutes } from './mail/mail.routes';
 import { loadsRoutes } from './loads/loads.routes';
 import { photoRoutes } from './photos/photo.routes';
 import { roomRoutes } from './rooms/room.routes';
@@ -27,6 +28,7 @@ export function mountModules(app: Express, services: Services): void {
   mount('/users', userRoutes);
   mount('/staff', staffRoutes);
   mount('/dev', outboxRoutes);
+  mount('/mail', mailRoutes);
   mount('/company', companySettingsRoutes);
   mount('/customers', customerRoutes);
   mount('/jobs', jobRoutes);

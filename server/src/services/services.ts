@@ -3,6 +3,7 @@ import type pg from 'pg';
 import type { Config } from '../config';
 import type { Outbox } from '../fakes/smtp-fake';
 import type { Mailer } from './mailer';
+import type { Queue } from './queue';
 import type { Storage } from './storage';
 
 export interface Clock {
@@ -16,7 +17,10 @@ export interface Services {
   /** A small pool of its own for the session store (connect-pg-simple speaks pg directly). */
   sessionPool: pg.Pool;
   config: Config;
+  /** Used by the queue's workers only: requests put e-mail on the queue (modules/mail), never send it. */
   mailer: Mailer;
+  /** Background work in PostgreSQL (services/queue.ts); task kinds in tasks/kinds.ts. */
+  queue: Queue;
   /** Uploaded files (room photos). */
   storage: Storage;
   clock: Clock;

@@ -24,7 +24,7 @@ export function userRoutes(api: ApiRouter): void {
     body: createUserSchema,
     status: 201,
     handler: async ({ em, actor, body, services }) => ({
-      user: presentUser(await createUser(em, actor, services.mailer, body)),
+      user: presentUser(await createUser(em, actor, services.queue, body)),
     }),
   });
   api.route({

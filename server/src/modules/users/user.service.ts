@@ -2,7 +2,8 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { ConflictError, NotFoundError, UnprocessableError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
 import { hashPassword } from '../../services/passwords';
-import type { Mailer } from '../../services/mailer';
+import type { Queue } from '../../services/queue';
+import { queueMessage } from '../mail/mail.service';
 import { CompanySchema } from '../companies/company.entity';
 import { UserSchema, type User } from './user.entity';
 import type { CreateUserInput, UpdateUserInput } from './user.schema';
@@ -18,12 +19,7 @@ export async function getUser(em: EntityManager, actor: Actor, id: string): Prom
   return user;
 }
 
-export async function createUser(
-  em: EntityManager,
-  actor: Actor,
-  mailer: Mailer,
-  input: CreateUserInput,
-): Promise<User> {
+export async function createUser(em: EntityManager, actor: Actor, queue: Queue, input: CreateUserInput): Promise<User> {
   if (await em.count(UserSchema, { email: input.email }))
     throw new ConflictError('That e-mail address already has an account.');
   const user = em.create(UserSchema, {
@@ -36,13 +32,16 @@ export async function createUser(
   });
   await em.flush();
   await em.populate(user, ['company']);
-  await mailer
-    .send({
-      to: user.email,
-      subject: `${actor.name} added you to Gaugeline`,
-      text: `Hello ${user.name},\n\n${actor.name} created a Gaugeline account for you (role: ${user.role}). Sign in with this e-mail address and the password they gave you, then keep it to yourself.\n`,
-    })
-    .catch(() => undefined); // the account exists either way; a mail outage must not undo it
+  // Queued, not sent: a mail outage neither slows nor undoes the account; the queue retries and the
+  // owner's E-mail page shows a message that keeps failing.
+  await queueMessage(em, queue, {
+    companyId: actor.companyId,
+    userId: user.id,
+    kind: 'new-user',
+    to: user.email,
+    subject: `${actor.name} added you to Gaugeline`,
+    text: `Hello ${user.name},\n\n${actor.name} created a Gaugeline account for you (role: ${user.role}). Sign in with this e-mail address and the password they gave you, then keep it to yourself.\n`,
+  });
   return user;
 }
 

@@ -1,0 +1,29 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router-dom';
+import { QueryWidgetBoundary } from '../../components/errors/query-widget-boundary';
+import { PageHeader } from '../../components/ui/page-header';
+import { messagesQueryOptions } from '../../features/mail/api/get-messages';
+import { MailList } from '../../features/mail/components/mail-list';
+import { requireArea } from '../guards';
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    await requireArea(queryClient, request, 'mail');
+    await queryClient.ensureQueryData(messagesQueryOptions());
+    return null;
+  };
+
+export default function MailRoute() {
+  return (
+    <>
+      <PageHeader
+        title="E-mail"
+        lead="What Gaugeline sent for your company, and anything the mail server has not accepted yet."
+      />
+      <QueryWidgetBoundary name="the e-mail list">
+        <MailList />
+      </QueryWidgetBoundary>
+    </>
+  );
+}

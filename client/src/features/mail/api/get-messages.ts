@@ -1,0 +1,16 @@
+import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
+import { apiFetch } from '../../../lib/api-client';
+import { mailKeys } from '../query-keys';
+import { messagesResponse } from '../schemas';
+
+export async function getMessages(signal?: AbortSignal) {
+  return (await apiFetch('/api/mail', { schema: messagesResponse, signal })).messages;
+}
+
+export const messagesQueryOptions = () =>
+  queryOptions({ queryKey: mailKeys.list(), queryFn: ({ signal }) => getMessages(signal) });
+
+/** Refreshed every 15 s while open: a retry happening in the background shows without a reload. */
+export function useMessages() {
+  return useSuspenseQuery({ ...messagesQueryOptions(), refetchInterval: 15_000 });
+}

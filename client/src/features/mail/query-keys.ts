@@ -1,0 +1,4 @@
+export const mailKeys = {
+  all: ['mail'] as const,
+  list: () => [...mailKeys.all, 'list'] as const,
+};

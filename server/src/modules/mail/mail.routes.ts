@@ -1,0 +1,26 @@
+import { z } from 'zod';
+import { roles, type ApiRouter } from '../../lib/route';
+import { presentMessage } from './mail.presenter';
+import { listMessages, retryMessage } from './mail.service';
+
+const OWNER = roles('owner');
+const messageIdParams = z.strictObject({ id: z.uuid({ message: 'Must be a message id.' }) });
+
+/** The owner's E-mail page: what the app sent or is trying to send for the company, and "Try again". */
+export function mailRoutes(api: ApiRouter): void {
+  api.route({
+    method: 'get',
+    path: '/',
+    policy: OWNER,
+    handler: async ({ em, actor }) => ({ messages: (await listMessages(em, actor)).map(presentMessage) }),
+  });
+  api.route({
+    method: 'post',
+    path: '/:id/retry',
+    policy: OWNER,
+    params: messageIdParams,
+    handler: async ({ em, actor, params, services }) => ({
+      message: presentMessage(await retryMessage(em, services.queue, actor, params.id)),
+    }),
+  });
+}

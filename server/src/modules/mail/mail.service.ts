@@ -1,0 +1,129 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { ConflictError, NotFoundError } from '../../lib/errors';
+import type { Actor } from '../../lib/route';
+import type { Mailer } from '../../services/mailer';
+import type { Queue } from '../../services/queue';
+import type { Clock } from '../../services/services';
+import type { TaskRun } from '../../tasks/kinds';
+import { CompanySchema } from '../companies/company.entity';
+import { UserSchema } from '../users/user.entity';
+import { OutgoingMessageSchema, type MessageKind, type OutgoingMessage } from './outgoing-message.entity';
+
+export interface NewMessage {
+  companyId: string;
+  userId?: string;
+  kind: MessageKind;
+  to: string;
+  subject: string;
+  /** Null only for kinds whose body is made when sent (password-reset). */
+  text: string | null;
+}
+
+const jobKey = (messageId: string) => `email:${messageId}`;
+
+/**
+ * Records a message and queues its sending in one transaction: the job exists exactly when the
+ * message does, and a request never waits for the mail server.
+ */
+export async function queueMessage(em: EntityManager, queue: Queue, m: NewMessage): Promise<OutgoingMessage> {
+  return em.transactional(async (tx) => {
+    const message = tx.create(OutgoingMessageSchema, {
+      company: tx.getReference(CompanySchema, m.companyId),
+      user: m.userId ? tx.getReference(UserSchema, m.userId) : null,
+      kind: m.kind,
+      toAddress: m.to,
+      subject: m.subject,
+      bodyText: m.text,
+      state: 'waiting',
+      attempts: 0,
+    });
+    await tx.flush();
+    await queue.add('send-email', { messageId: message.id }, { em: tx, jobKey: jobKey(message.id) });
+    return message;
+  });
+}
+
+/** Turns a transport error into words an owner can act on (kept on the message, shown on the E-mail page). */
+export function describeMailError(err: unknown): string {
+  const e = (typeof err === 'object' && err !== null ? err : {}) as {
+    code?: unknown;
+    responseCode?: unknown;
+    response?: unknown;
+    message?: unknown;
+  };
+  const code = typeof e.code === 'string' ? e.code : undefined;
+  let text: string;
+  if (typeof e.responseCode === 'number') {
+    text = `The mail server refused it (${e.responseCode}): ${typeof e.response === 'string' ? e.response : ''}`;
+  } else if (code && ['ECONNREFUSED', 'ECONNECTION', 'ETIMEDOUT', 'ESOCKET', 'EDNS', 'ECONNRESET'].includes(code)) {
+    text = `The mail server could not be reached (${code}).`;
+  } else {
+    text = typeof e.message === 'string' && e.message ? e.message : 'Sending failed.';
+  }
+  return text.trim().slice(0, 500);
+}
+
+/** graphile-worker waits e^min(n,10) seconds after the n-th failed try (its fail_job). */
+export const retryDelayMs = (attempt: number) => Math.round(Math.exp(Math.min(attempt, 10)) * 1000);
+
+export interface SendDeps {
+  mailer: Mailer;
+  clock: Clock;
+  /** Makes the body of a message stored without one (password-reset), inside the sending transaction. */
+  compose(em: EntityManager, message: OutgoingMessage): Promise<string | null>;
+}
+
+/**
+ * The `send-email` task: one try at one message. A message already sent is left alone (a job that
+ * ran twice sends once). A failure is written on the message and thrown, so the queue retries it.
+ */
+export async function sendMessage(em: EntityManager, deps: SendDeps, messageId: string, run: TaskRun): Promise<void> {
+  const message = await em.findOne(OutgoingMessageSchema, { id: messageId });
+  if (!message || message.state === 'sent') return;
+  message.attempts = run.attempt;
+  try {
+    // The body is made and the mail sent inside one transaction, so a one-time link made for a
+    // message that then failed to go out is rolled back with it.
+    const sent = await em.transactional(async (tx) => {
+      const text = message.bodyText ?? (await deps.compose(tx, message));
+      if (text === null) return false;
+      await deps.mailer.send({ to: message.toAddress, subject: message.subject, text });
+      return true;
+    });
+    message.state = sent ? 'sent' : 'failed';
+    message.sentAt = sent ? deps.clock.now() : null;
+    message.lastError = sent ? null : 'Not sent: the account it was for is no longer active.';
+    message.nextAttemptAt = null;
+    await em.flush();
+  } catch (err) {
+    const last = run.attempt >= run.maxAttempts;
+    message.state = last ? 'failed' : 'retrying';
+    message.lastError = describeMailError(err);
+    message.nextAttemptAt = last ? null : new Date(deps.clock.now().getTime() + retryDelayMs(run.attempt));
+    await em.flush();
+    throw err;
+  }
+}
+
+export function listMessages(em: EntityManager, actor: Actor): Promise<OutgoingMessage[]> {
+  return em.find(
+    OutgoingMessageSchema,
+    { company: actor.companyId },
+    { orderBy: { createdAt: 'desc', id: 'asc' }, limit: 100 },
+  );
+}
+
+/** "Try again": sends a message that has not gone out now, with a fresh set of tries. */
+export async function retryMessage(em: EntityManager, queue: Queue, actor: Actor, id: string) {
+  return em.transactional(async (tx) => {
+    const message = await tx.findOne(OutgoingMessageSchema, { id, company: actor.companyId });
+    if (!message) throw new NotFoundError('The message');
+    if (message.state === 'sent') throw new ConflictError('This message has already been sent.');
+    message.state = 'waiting';
+    message.attempts = 0;
+    message.nextAttemptAt = null;
+    await tx.flush();
+    await queue.add('send-email', { messageId: message.id }, { em: tx, jobKey: jobKey(message.id) });
+    return message;
+  });
+}

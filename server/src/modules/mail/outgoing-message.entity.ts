@@ -1,0 +1,44 @@
+import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
+import { randomUUID } from 'node:crypto';
+import { CompanySchema } from '../companies/company.entity';
+import { UserSchema } from '../users/user.entity';
+
+export const MESSAGE_KINDS = ['new-user', 'password-changed', 'password-reset'] as const;
+export type MessageKind = (typeof MESSAGE_KINDS)[number];
+/** waiting → sent; a failed try → retrying (the queue tries again later) → … → failed after the last try. */
+export const MESSAGE_STATES = ['waiting', 'retrying', 'failed', 'sent'] as const;
+export type MessageState = (typeof MESSAGE_STATES)[number];
+
+/**
+ * One e-mail the app sends, with its delivery state. The job queue's `send-email` task sends it;
+ * the owner's E-mail page lists the ones that keep failing. A password-reset message has no stored
+ * body: its one-time link is made when it is sent, so the raw token never reaches the database.
+ */
+export const OutgoingMessageSchema = defineEntity({
+  name: 'OutgoingMessage',
+  tableName: 'outgoing_message',
+  properties: {
+    id: p
+      .uuid()
+      .primary()
+      .onCreate(() => randomUUID()),
+    company: p.manyToOne(CompanySchema),
+    user: p.manyToOne(UserSchema).nullable().deleteRule('set null'),
+    kind: p.enum([...MESSAGE_KINDS]),
+    toAddress: p.string().length(254),
+    subject: p.string().length(300),
+    bodyText: p.text().nullable(),
+    state: p.enum([...MESSAGE_STATES]).default('waiting'),
+    attempts: p.integer().default(0),
+    lastError: p.string().length(500).nullable(),
+    nextAttemptAt: p.datetime().nullable(),
+    sentAt: p.datetime().nullable(),
+    createdAt: p.datetime().onCreate(() => new Date()),
+    updatedAt: p
+      .datetime()
+      .onCreate(() => new Date())
+      .onUpdate(() => new Date()),
+  },
+});
+
+export type OutgoingMessage = InferEntity<typeof OutgoingMessageSchema>;

@@ -1,0 +1,22 @@
+import { sendMessage } from '../modules/mail/mail.service';
+import type { Services } from '../services/services';
+import type { TaskHandlers } from './kinds';
+
+/** The handler of each task kind; each try works in an EntityManager of its own. */
+export function taskHandlers(services: Omit<Services, 'queue'>): TaskHandlers {
+  return {
+    'send-email': async ({ messageId }, run) => {
+      const em = services.orm.em.fork();
+      await sendMessage(
+        em,
+        {
+          mailer: services.mailer,
+          clock: services.clock,
+          compose: async () => null,
+        },
+        messageId,
+        run,
+      );
+    },
+  };
+}

@@ -1,0 +1,31 @@
+import { z } from 'zod';
+
+/**
+ * Every kind of background work, in one place: its payload schema (checked when a job is added and
+ * again when a worker takes it, so a job written by an older server cannot reach a handler malformed)
+ * and how often it is tried before it counts as failed. Handlers live in `tasks/handlers.ts`.
+ *
+ * Tries back off exponentially (graphile-worker: the n-th retry waits e^min(n,10) seconds, so
+ * 3 s, 7 s, 20 s, 55 s, 2.5 min, 7 min, 18 min, 50 min, 2.3 h): ten tries span about 9.7 hours.
+ */
+export const TASKS = {
+  /** Sends one `outgoing_message` row (modules/mail). */
+  'send-email': {
+    payload: z.strictObject({ messageId: z.uuid() }),
+    maxAttempts: 10,
+  },
+} as const;
+
+export type TaskKind = keyof typeof TASKS;
+export const TASK_KINDS = Object.keys(TASKS) as TaskKind[];
+export type TaskPayload<K extends TaskKind> = z.infer<(typeof TASKS)[K]['payload']>;
+
+/** What a handler learns about the try it is in. */
+export interface TaskRun {
+  jobId: string;
+  /** This try's number, from 1. */
+  attempt: number;
+  maxAttempts: number;
+}
+
+export type TaskHandlers = { [K in TaskKind]: (payload: TaskPayload<K>, run: TaskRun) => Promise<void> };

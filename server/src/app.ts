@@ -7,7 +7,7 @@ import { pinoHttp } from 'pino-http';
 import { randomUUID } from 'node:crypto';
 import { logger } from './lib/logger';
 import { notFoundApi, problemHandler } from './lib/problem';
-import { csrfGuard, sessionMiddleware } from './lib/session';
+import { csrfGuard, personGuard, sessionMiddleware } from './lib/session';
 import { loadActor } from './modules/auth/load-actor';
 import { mountModules } from './modules';
 import type { Services } from './services/services';
@@ -64,6 +64,7 @@ export function createApp(services: Services): Express {
   app.use(sessionMiddleware(config, services.sessionPool));
   app.use(loadActor(config, services.clock));
   app.use('/api', csrfGuard);
+  app.use('/api', personGuard);
 
   mountModules(app, services);
   app.use('/api', notFoundApi);

@@ -7,19 +7,17 @@ import { clearCsrfToken } from '../../client/src/lib/api-client';
 import { jobKeys } from '../../client/src/lib/job-queries';
 import type { JobRecord } from '../../client/src/lib/job-records';
 import { createQueryClient } from '../../client/src/lib/query-client';
-import { clearVersionedCsrfToken } from '../../client/src/lib/versioned-request';
 import { ViewerContext, type Viewer } from '../../client/src/lib/viewer';
 import { roomTarget, type WalkthroughEdit } from '../../client/src/features/walkthrough/sync/edits';
 import { createPhotoQueue, PhotoQueueProvider } from '../../client/src/features/walkthrough/sync/photo-queue-context';
 import { memoryPhotoStorage } from '../../client/src/features/walkthrough/sync/photo-storage';
 import { WalkthroughQueueProvider } from '../../client/src/features/walkthrough/sync/queue-context';
-import type { QueueItem } from '../../client/src/lib/offline-queue';
+import type { QueueItem } from '../../client/src/lib/offline/queue';
 import { headerOf, json, mockFetch, problem } from './helpers/fetch-mock';
 import { JOB_ID, jobRecord, ROOM_ID, testQueue } from './helpers/walkthrough-harness';
 
 beforeEach(() => {
   clearCsrfToken();
-  clearVersionedCsrfToken();
 });
 afterEach(() => vi.unstubAllGlobals());
 

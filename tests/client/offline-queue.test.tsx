@@ -4,8 +4,8 @@ import {
   type QueueItem,
   type QueueStorage,
   type SendResult,
-} from '../../client/src/lib/offline-queue';
-import { OfflineQueue } from '../../client/src/lib/offline-queue-runner';
+} from '../../client/src/lib/offline/queue';
+import { OfflineQueue } from '../../client/src/lib/offline/queue-runner';
 import { coalesceEdits, roomTarget, type WalkthroughEdit } from '../../client/src/features/walkthrough/sync/edits';
 
 type Edit = WalkthroughEdit;

@@ -7,7 +7,6 @@ import { clearCsrfToken } from '../../client/src/lib/api-client';
 import { jobKeys } from '../../client/src/lib/job-queries';
 import type { RoomRecord } from '../../client/src/lib/job-records';
 import { createQueryClient } from '../../client/src/lib/query-client';
-import { clearVersionedCsrfToken } from '../../client/src/lib/versioned-request';
 import { headerOf, json, mockFetch, problem } from './helpers/fetch-mock';
 import { bedroomInput, JOB_ID, renderWalkthrough, ROOM_ID, roomRecord } from './helpers/walkthrough-harness';
 
@@ -26,7 +25,6 @@ function bodyOf(init: RequestInit | undefined): unknown {
 
 beforeEach(() => {
   clearCsrfToken();
-  clearVersionedCsrfToken();
 });
 afterEach(() => vi.unstubAllGlobals());
 

@@ -11,7 +11,6 @@ import { clearCsrfToken } from '../../client/src/lib/api-client';
 import { jobKeys } from '../../client/src/lib/job-queries';
 import type { RoomRecord } from '../../client/src/lib/job-records';
 import { createQueryClient } from '../../client/src/lib/query-client';
-import { clearVersionedCsrfToken } from '../../client/src/lib/versioned-request';
 import { json, mockFetch, problem } from './helpers/fetch-mock';
 import { bedroomInput, JOB_ID, renderWalkthrough, ROOM_ID, roomRecord } from './helpers/walkthrough-harness';
 
@@ -32,7 +31,6 @@ const photo = {
 const started: { stop(): void }[] = [];
 beforeEach(() => {
   clearCsrfToken();
-  clearVersionedCsrfToken();
 });
 afterEach(() => {
   for (const q of started.splice(0)) q.stop();

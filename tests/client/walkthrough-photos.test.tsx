@@ -7,7 +7,6 @@ import { useQueueState } from '../../client/src/features/walkthrough/sync/queue-
 import { clearCsrfToken } from '../../client/src/lib/api-client';
 import { jobKeys } from '../../client/src/lib/job-queries';
 import { createQueryClient } from '../../client/src/lib/query-client';
-import { clearVersionedCsrfToken } from '../../client/src/lib/versioned-request';
 import { headerOf, json, mockFetch, problem } from './helpers/fetch-mock';
 import {
   bedroomInput,
@@ -22,7 +21,6 @@ import {
 
 beforeEach(() => {
   clearCsrfToken();
-  clearVersionedCsrfToken();
 });
 afterEach(() => vi.unstubAllGlobals());
 

@@ -4,7 +4,7 @@ import { WalkthroughView } from '../../client/src/features/walkthrough/component
 import { roomTarget, type WalkthroughEdit } from '../../client/src/features/walkthrough/sync/edits';
 import { overlayRooms } from '../../client/src/features/walkthrough/sync/overlay';
 import { jobKeys } from '../../client/src/lib/job-queries';
-import type { QueueItem } from '../../client/src/lib/offline-queue';
+import type { QueueItem } from '../../client/src/lib/offline/queue';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { bedroomInput, JOB_ID, jobRecord, renderWalkthrough, ROOM_ID, roomRecord } from './helpers/walkthrough-harness';
 

@@ -4,6 +4,7 @@ import { rolesFor } from '../config/nav';
 import { paths, signInPath } from '../config/paths';
 import { meQueryOptions } from '../features/auth/api/get-me';
 import type { Me } from '../features/auth/schemas';
+import { setCurrentPerson } from '../lib/offline/person';
 
 export const NOTICE_NOT_ALLOWED = 'not-allowed';
 
@@ -14,6 +15,8 @@ export async function requireUser(queryClient: QueryClient, request: Request): P
     const url = new URL(request.url);
     throw redirect(signInPath(url.pathname + url.search));
   }
+  // From here on the device keeps and sends only this person's waiting changes.
+  setCurrentPerson({ companyId: me.company.id, userId: me.user.id });
   return me;
 }
 

@@ -5,7 +5,12 @@ type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 export interface ApiOptions {
   method?: Method;
+  /** JSON (any value), or FormData for an upload (the browser sets the multipart boundary). */
   body?: unknown;
+  /** The optimistic-lock version the person edited, sent as `If-Match: "N"`. */
+  version?: number | null;
+  /** A queued change replayed for this person (user id): the server refuses it under anyone else's session. */
+  person?: string;
   signal?: AbortSignal;
 }
 
@@ -33,15 +38,18 @@ function getCsrfToken(): Promise<string> {
 
 async function send(path: string, options: ApiOptions, csrf?: string): Promise<Response> {
   const headers: Record<string, string> = { Accept: 'application/json, application/problem+json' };
-  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  const form = typeof FormData !== 'undefined' && options.body instanceof FormData ? options.body : null;
+  if (options.body !== undefined && !form) headers['Content-Type'] = 'application/json';
   if (csrf) headers['X-CSRF-Token'] = csrf;
+  if (options.version !== undefined && options.version !== null) headers['If-Match'] = `"${options.version}"`;
+  if (options.person !== undefined) headers['X-Gaugeline-Person'] = options.person;
   let res: Response;
   try {
     res = await fetch(path, {
       method: options.method ?? 'GET',
       credentials: 'same-origin',
       headers,
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.body === undefined ? undefined : (form ?? JSON.stringify(options.body)),
       signal: options.signal,
     });
   } catch (e) {
@@ -72,8 +80,10 @@ async function readBody(res: Response): Promise<unknown> {
 }
 
 /**
- * JSON fetch for our API. With a schema, the body is parsed (the parse boundary: callers get
- * typed data or a thrown error). Non-2xx responses throw ApiError.
+ * The one fetch for our API: same-origin cookie, X-CSRF-Token on writes (fetched once, refetched
+ * and retried once after a 403 csrf), If-Match from `version`, JSON or FormData bodies. With a
+ * schema, the body is parsed (the parse boundary: callers get typed data or a thrown error).
+ * Non-2xx responses throw ApiError; no connection throws ApiError code 'network'.
  */
 export function apiFetch<T>(path: string, options: ApiOptions & { schema: z.ZodType<T> }): Promise<T>;
 export function apiFetch(path: string, options?: ApiOptions): Promise<unknown>;

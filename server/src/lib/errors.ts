@@ -54,6 +54,18 @@ export class CsrfError extends AppError {
   }
 }
 
+/** A queued change replayed under a session that is not the person who made it (a shared device). */
+export class OtherPersonError extends AppError {
+  constructor() {
+    super(
+      403,
+      'other-person',
+      'Forbidden',
+      'This change was made by another person on this device. Only they can send it, after signing in.',
+    );
+  }
+}
+
 export class NotFoundError extends AppError {
   constructor(what = 'The resource') {
     super(404, 'not-found', 'Not found', `${what} was not found.`);

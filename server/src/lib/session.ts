@@ -4,7 +4,7 @@ import type { RequestHandler } from 'express';
 import { randomBytes, timingSafeEqual } from 'node:crypto';
 import type pg from 'pg';
 import type { Config } from '../config';
-import { CsrfError } from './errors';
+import { CsrfError, OtherPersonError } from './errors';
 
 /** Sessions live in PostgreSQL (table `session`, created by a migration), so any server process can serve any request. */
 export function sessionMiddleware(config: Config, pool: pg.Pool): RequestHandler {
@@ -44,5 +44,20 @@ export const csrfGuard: RequestHandler = (req, _res, next) => {
   const a = Buffer.from(sent);
   const b = Buffer.from(expected);
   if (a.length !== b.length || !timingSafeEqual(a, b)) return next(new CsrfError());
+  next();
+};
+
+/** The header the client's offline queue sends with each replayed change: the id of the person who made it. */
+export const PERSON_HEADER = 'x-gaugeline-person';
+
+/**
+ * A change waiting on a shared device carries the id of the person who made it; sent under
+ * anyone else's session it is refused (403 other-person) and stays on the device for its owner.
+ * Without a session the route's own policy answers (401), so the person can sign in again.
+ */
+export const personGuard: RequestHandler = (req, _res, next) => {
+  const person = req.get(PERSON_HEADER);
+  if (person === undefined || !req.actor) return next();
+  if (person !== req.actor.userId) return next(new OtherPersonError());
   next();
 };

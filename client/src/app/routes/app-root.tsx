@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { Suspense, useMemo } from 'react';
+import { Suspense, useMemo, useState } from 'react';
 import { Outlet, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { AppShell } from '../../components/layout/app-shell';
 import { Alert } from '../../components/ui/alert';
@@ -10,6 +10,9 @@ import { useSignedIn } from '../../features/auth/api/get-me';
 import { useSignOut } from '../../features/auth/api/sign-out';
 import { useOutboxAvailable } from '../../features/outbox/api/get-outbox';
 import { NOTICE_NOT_ALLOWED, requireUser } from '../guards';
+import { usePhotoQueueState } from '../../features/walkthrough/sync/photo-queue-context';
+import { useQueueState } from '../../features/walkthrough/sync/queue-context';
+import { SignOutQuestion } from '../../lib/offline/sign-out-question';
 import { ViewerContext } from '../../lib/viewer';
 
 export const clientLoader =
@@ -44,6 +47,9 @@ export default function AppRoot() {
   const outbox = useOutboxAvailable(user.role === 'owner');
   const viewer = useMemo(() => ({ id: user.id, role: user.role }), [user.id, user.role]);
   const features = useMemo<ReadonlySet<Feature>>(() => new Set(outbox ? ['outbox'] : []), [outbox]);
+  // Using the queues here also starts them: what this person left waiting is sent once they are back.
+  const waiting = useQueueState().items.length + usePhotoQueueState().waiting.length;
+  const [asking, setAsking] = useState(false);
 
   return (
     <AppShell
@@ -51,8 +57,16 @@ export default function AppRoot() {
       companyName={company.name}
       features={features}
       signingOut={signOut.isPending}
-      onSignOut={() => signOut.mutate()}
+      onSignOut={() => (waiting > 0 ? setAsking(true) : signOut.mutate())}
     >
+      {asking ? (
+        <SignOutQuestion
+          count={waiting}
+          busy={signOut.isPending}
+          onStay={() => setAsking(false)}
+          onSignOut={() => signOut.mutate()}
+        />
+      ) : null}
       <RoleNotice />
       <ViewerContext.Provider value={viewer}>
         <Suspense fallback={<Spinner />}>

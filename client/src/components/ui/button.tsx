@@ -1,4 +1,4 @@
-import type { ButtonHTMLAttributes } from 'react';
+import type { ButtonHTMLAttributes, Ref } from 'react';
 
 type Variant = 'primary' | 'secondary' | 'danger' | 'ghost';
 
@@ -15,6 +15,7 @@ export const buttonClass = (variant: Variant = 'primary', extra = '') =>
 export interface ButtonProps extends ButtonHTMLAttributes<HTMLButtonElement> {
   variant?: Variant;
   busy?: boolean;
+  ref?: Ref<HTMLButtonElement>;
 }
 
 export function Button({

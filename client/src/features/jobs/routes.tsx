@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { RouteError } from '../../components/errors/route-error';
 import { jobRoutePatterns } from '../../lib/job-paths';
 import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../../lib/job-queries';
+import { getCurrentPerson } from '../../lib/offline/person';
 import { queryClient as sharedQueryClient } from '../../lib/query-client';
 import { sharedWalkthroughQueue } from '../walkthrough/sync/walkthrough-queue';
 import { jobsQueryOptions } from './api/get-jobs';
@@ -25,7 +26,7 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
   const jobWithRooms = async ({ params }: LoaderFunctionArgs) => {
     const jobId = jobIdOf(params);
     // Starting the queue replays what an earlier visit left waiting.
-    sharedWalkthroughQueue(queryClient);
+    if (getCurrentPerson()) sharedWalkthroughQueue(queryClient);
     void queryClient.prefetchQuery(companySettingsQueryOptions());
     await Promise.all([
       queryClient.ensureQueryData(jobQueryOptions(jobId)),
@@ -38,7 +39,7 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
       path: jobRoutePatterns.list,
       ErrorBoundary: RouteError,
       loader: ({ request }) => {
-        sharedWalkthroughQueue(queryClient);
+        if (getCurrentPerson()) sharedWalkthroughQueue(queryClient);
         void queryClient.prefetchQuery(jobsQueryOptions(filtersFromSearch(new URL(request.url).searchParams)));
         return null;
       },

@@ -1,17 +1,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useNavigate } from 'react-router-dom';
-import { z } from 'zod';
 import { jobPaths } from '../../../lib/job-paths';
 import { jobKeys, jobPath } from '../../../lib/job-queries';
 import type { JobRecord } from '../../../lib/job-records';
-import { versionedFetch } from '../../../lib/versioned-request';
+import { apiFetch } from '../../../lib/api-client';
 import { isApiError } from '../../../lib/api-error';
 import { usePhotoQueue } from '../sync/photo-queue-context';
 import { useWalkthroughQueue } from '../sync/queue-context';
 
 /** DELETE /api/jobs/:jobId, If-Match: the version the person saw. Rooms and photos go with it. */
 export async function deleteJob(jobId: string, version: number) {
-  await versionedFetch(jobPath(jobId), { method: 'DELETE', version, schema: z.undefined() }).catch((e: unknown) => {
+  await apiFetch(jobPath(jobId), { method: 'DELETE', version }).catch((e: unknown) => {
     // Deleted already (on another device, or an answer lost on the way): what was asked is done.
     if (!(isApiError(e) && e.status === 404)) throw e;
   });

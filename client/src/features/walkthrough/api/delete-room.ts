@@ -1,8 +1,7 @@
-import { z } from 'zod';
 import { roomPath } from '../../../lib/job-queries';
-import { versionedFetch } from '../../../lib/versioned-request';
+import { apiFetch } from '../../../lib/api-client';
 
 /** DELETE /api/jobs/:jobId/rooms/:roomId, If-Match: the version the person saw. */
-export async function deleteRoom(jobId: string, roomId: string, version: number | null) {
-  await versionedFetch(roomPath(jobId, roomId), { method: 'DELETE', version, schema: z.undefined() });
+export async function deleteRoom(jobId: string, roomId: string, version: number | null, person?: string) {
+  await apiFetch(roomPath(jobId, roomId), { method: 'DELETE', version, person });
 }

@@ -4,7 +4,6 @@ import { apiFetch } from '../../../lib/api-client';
 import { jobKeys, jobPath } from '../../../lib/job-queries';
 import type { JobStatus } from '@contract';
 import { customerResponse, jobResponse } from '../../../lib/job-records';
-import { versionedFetch } from '../../../lib/versioned-request';
 import { ROLES } from '@contract';
 
 /** What the job details form changes on the job itself (the site, notes, who it belongs to, status). */
@@ -22,7 +21,7 @@ export interface JobDetailsChanges {
 
 /** PATCH /api/jobs/:id straight away (not through the walk-through queue): a button the person waits on. */
 export async function saveJobDetails(jobId: string, version: number, changes: JobDetailsChanges) {
-  return (await versionedFetch(jobPath(jobId), { method: 'PATCH', version, body: changes, schema: jobResponse })).job;
+  return (await apiFetch(jobPath(jobId), { method: 'PATCH', version, body: changes, schema: jobResponse })).job;
 }
 
 export interface CustomerChanges {

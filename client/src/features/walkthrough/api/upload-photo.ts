@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { roomPath } from '../../../lib/job-queries';
 import { photoRecord } from '../../../lib/job-records';
-import { versionedFetch } from '../../../lib/versioned-request';
+import { apiFetch } from '../../../lib/api-client';
 
 const photoResponse = z.object({ photo: photoRecord });
 
@@ -11,15 +11,18 @@ export async function uploadPhoto({
   roomId,
   blob,
   fileName,
+  person,
 }: {
   jobId: string;
   roomId: string;
   blob: Blob;
   fileName: string;
+  /** The person the photo was taken by (a waiting photo is sent only under their session). */
+  person?: string;
 }) {
   const form = new FormData();
   form.append('file', blob, fileName);
   return (
-    await versionedFetch(`${roomPath(jobId, roomId)}/photos`, { method: 'POST', body: form, schema: photoResponse })
+    await apiFetch(`${roomPath(jobId, roomId)}/photos`, { method: 'POST', body: form, person, schema: photoResponse })
   ).photo;
 }

@@ -1,4 +1,4 @@
-import type { Coalesce, QueueItem } from '../../../lib/offline-queue';
+import type { Coalesce, QueueItem } from '../../../lib/offline/queue';
 
 /** A room's input as calc's schema reads it (validated before it is queued). */
 export type RoomInputValue = Record<string, unknown>;

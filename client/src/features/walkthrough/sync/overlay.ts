@@ -1,5 +1,5 @@
 import type { JobRecord, RoomRecord } from '../../../lib/job-records';
-import type { QueueItem } from '../../../lib/offline-queue';
+import type { QueueItem } from '../../../lib/offline/queue';
 import { DESIGN_FIELDS, resolveDesign, TIGHTNESS, type EnteredDesign } from '@contract';
 import type { RoomInputValue, WalkthroughEdit } from './edits';
 

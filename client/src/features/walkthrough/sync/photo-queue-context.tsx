@@ -1,12 +1,13 @@
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { createContext, useContext, useSyncExternalStore, type ReactNode } from 'react';
 import { PhotoQueue, type PhotoQueueOptions, type PhotoQueueState } from './photo-queue';
-import { idbPhotoStorage } from './photo-storage';
+import { getCurrentPerson, personKey, personStores, useCurrentPerson } from '../../../lib/offline/person';
+import { idbPhotoStorage, memoryPhotoStorage } from './photo-storage';
 import { useWalkthroughQueue } from './queue-context';
 import { createPhotoSender, roomOnServer } from './send-photo';
 import type { WalkthroughQueue } from './walkthrough-queue';
 
-type Overrides = Partial<Omit<PhotoQueueOptions, 'send' | 'roomReady'>>;
+type Overrides = Partial<Omit<PhotoQueueOptions, 'send' | 'roomReady'>> & { readonly person?: string };
 
 /** The app's photo queue: uploads through the API and retries whenever a room may just have reached the server. */
 export function createPhotoQueue(
@@ -14,11 +15,12 @@ export function createPhotoQueue(
   edits: WalkthroughQueue,
   overrides: Overrides = {},
 ): PhotoQueue {
+  const { person, ...options } = overrides;
   const queue = new PhotoQueue({
-    storage: overrides.storage ?? idbPhotoStorage(),
-    send: createPhotoSender(queryClient),
+    storage: memoryPhotoStorage(),
+    send: createPhotoSender(queryClient, person),
     roomReady: roomOnServer(queryClient, edits),
-    ...overrides,
+    ...options,
   });
   const retry = () => {
     if (queue.getSnapshot().waiting.length > 0) void queue.flush();
@@ -31,14 +33,22 @@ export function createPhotoQueue(
   return queue;
 }
 
-let shared: PhotoQueue | null = null;
+let shared: { readonly key: string; readonly edits: WalkthroughQueue; readonly queue: PhotoQueue } | null = null;
 
-function sharedPhotoQueue(queryClient: QueryClient, edits: WalkthroughQueue): PhotoQueue {
-  if (!shared) {
-    shared = createPhotoQueue(queryClient, edits);
-    void shared.start();
+/** The signed-in person's waiting photos, in their own store; another person's stop and stay stored. */
+export function sharedPhotoQueue(queryClient: QueryClient, edits: WalkthroughQueue): PhotoQueue {
+  const person = getCurrentPerson();
+  const key = person ? personKey(person) : '';
+  if (shared?.key !== key || shared.edits !== edits) {
+    shared?.queue.stop();
+    const queue = createPhotoQueue(queryClient, edits, {
+      storage: person ? idbPhotoStorage(personStores(person).photos) : memoryPhotoStorage(),
+      person: person?.userId,
+    });
+    shared = { key, edits, queue };
+    void queue.start();
   }
-  return shared;
+  return shared.queue;
 }
 
 const PhotoQueueContext = createContext<PhotoQueue | null>(null);
@@ -50,6 +60,7 @@ export function PhotoQueueProvider({ queue, children }: { queue: PhotoQueue; chi
 
 export function usePhotoQueue(): PhotoQueue {
   const injected = useContext(PhotoQueueContext);
+  useCurrentPerson();
   const queryClient = useQueryClient();
   const edits = useWalkthroughQueue();
   return injected ?? sharedPhotoQueue(queryClient, edits);

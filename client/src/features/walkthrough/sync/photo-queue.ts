@@ -54,6 +54,7 @@ export class PhotoQueue {
   private flushing: Promise<void> | null = null;
   private timer: ReturnType<typeof setInterval> | null = null;
   private seq = 0;
+  private stopped = false;
 
   constructor(private readonly options: PhotoQueueOptions) {}
 
@@ -77,6 +78,7 @@ export class PhotoQueue {
   private readonly handleOnline = () => void this.flush();
 
   async start(): Promise<void> {
+    this.stopped = false;
     // No IndexedDB (private mode): photos still wait in memory for this visit.
     const stored = await this.options.storage.load().catch((): WaitingPhoto[] => []);
     const waiting = [...stored, ...this.state.waiting.filter((p) => !stored.some((s) => s.id === p.id))].sort(
@@ -90,7 +92,9 @@ export class PhotoQueue {
     void this.flush();
   }
 
+  /** Stops uploading (another person signed in on this tab); what waits stays stored. */
   stop(): void {
+    this.stopped = true;
     if (typeof window !== 'undefined') window.removeEventListener('online', this.handleOnline);
     if (this.timer) clearInterval(this.timer);
     this.timer = null;
@@ -159,7 +163,7 @@ export class PhotoQueue {
   private async drain(): Promise<void> {
     if (!this.state.loaded) return;
     for (;;) {
-      if (!this.isOnline()) return;
+      if (this.stopped || !this.isOnline()) return;
       // Oldest first among rooms the server knows; a room still being created holds only its own photos.
       const next = this.state.waiting.find((p) => this.options.roomReady(p.jobId, p.roomId));
       if (!next) return;

@@ -1,4 +1,4 @@
-import { createStore, del, entries, set, type UseStore } from 'idb-keyval';
+import { del, entries, set, type UseStore } from 'idb-keyval';
 
 /** A photo taken on this device that has not reached the server yet. */
 export interface WaitingPhoto {
@@ -35,8 +35,7 @@ function isWaitingPhoto(v: unknown): v is WaitingPhoto {
 }
 
 /** IndexedDB through idb-keyval, apart from the edit queue: it stores Blobs as they are. */
-export function idbPhotoStorage(store?: UseStore): PhotoStorage {
-  const db = store ?? createStore('gaugeline-photos', 'waiting');
+export function idbPhotoStorage(db: UseStore): PhotoStorage {
   return {
     load: async () => (await entries(db)).map(([, v]: [unknown, unknown]) => v).filter(isWaitingPhoto),
     put: (photo) => set(photo.id, photo, db),

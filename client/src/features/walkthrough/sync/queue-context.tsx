@@ -1,6 +1,7 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { createContext, useContext, useSyncExternalStore, type ReactNode } from 'react';
-import type { QueueState } from '../../../lib/offline-queue';
+import { useCurrentPerson } from '../../../lib/offline/person';
+import type { QueueState } from '../../../lib/offline/queue';
 import type { WalkthroughEdit } from './edits';
 import { sharedWalkthroughQueue, type WalkthroughQueue } from './walkthrough-queue';
 
@@ -13,6 +14,8 @@ export function WalkthroughQueueProvider({ queue, children }: { queue: Walkthrou
 
 export function useWalkthroughQueue(): WalkthroughQueue {
   const injected = useContext(QueueContext);
+  // Another person signing in on this tab swaps the queue: re-render with theirs.
+  useCurrentPerson();
   const queryClient = useQueryClient();
   return injected ?? sharedWalkthroughQueue(queryClient);
 }

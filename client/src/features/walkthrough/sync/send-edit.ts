@@ -2,7 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { isApiError } from '../../../lib/api-error';
 import { jobKeys, roomsQueryOptions } from '../../../lib/job-queries';
 import type { JobRecord, RoomRecord } from '../../../lib/job-records';
-import type { SendResult } from '../../../lib/offline-queue';
+import type { SendResult } from '../../../lib/offline/queue';
 import { createRoom } from '../api/create-room';
 import { deleteRoom } from '../api/delete-room';
 import { getRoom } from '../api/get-room';
@@ -48,6 +48,8 @@ function afterWrite(queryClient: QueryClient, jobId: string): void {
 function failure(e: unknown): SendResult {
   if (isApiError(e)) {
     if (e.code === 'network' || e.status === 0) return { kind: 'network' };
+    // Another person signed in on this device (another tab): these changes wait for their maker.
+    if (e.code === 'other-person') return { kind: 'blocked', message: OTHER_PERSON };
     // 428 means the edit carried no version: never drop it, ask the person as for a 409.
     if (e.status === 409 || e.status === 428) return { kind: 'conflict' };
     if (e.status === 401)
@@ -64,17 +66,27 @@ function failure(e: unknown): SendResult {
   return { kind: 'network' };
 }
 
-/** Sends one queued edit and puts the server's answer into the query cache. */
-export function createEditSender(queryClient: QueryClient) {
+export const OTHER_PERSON =
+  'Someone else is signed in on this device now. These changes stay here until you sign in again.';
+
+/**
+ * Sends one queued edit and puts the server's answer into the query cache. `person` (the user id
+ * whose queue this is) goes with every write, so the server refuses it under anyone else's session.
+ */
+export function createEditSender(queryClient: QueryClient, person?: string) {
   return async (item: WalkthroughItem): Promise<SendResult> => {
     const edit = item.payload;
     try {
       if (edit.kind === 'room-create') {
-        const room = await createRoom(edit.jobId, {
-          id: edit.roomId,
-          position: edit.position,
-          input: edit.input,
-        }).catch(async (e: unknown) => {
+        const room = await createRoom(
+          edit.jobId,
+          {
+            id: edit.roomId,
+            position: edit.position,
+            input: edit.input,
+          },
+          person,
+        ).catch(async (e: unknown) => {
           // A replayed create whose first answer was lost: the room is already there.
           if (isApiError(e) && e.status === 409) return getRoom(edit.jobId, edit.roomId);
           throw e;
@@ -84,20 +96,20 @@ export function createEditSender(queryClient: QueryClient) {
         return { kind: 'ok', version: room.version };
       }
       if (edit.kind === 'room-update') {
-        const room = await updateRoom(edit.jobId, edit.roomId, item.baseVersion, edit.input);
+        const room = await updateRoom(edit.jobId, edit.roomId, item.baseVersion, edit.input, person);
         await changeRooms(queryClient, edit.jobId, withRoom(room));
         afterWrite(queryClient, edit.jobId);
         return { kind: 'ok', version: room.version };
       }
       if (edit.kind === 'room-delete') {
-        await deleteRoom(edit.jobId, edit.roomId, item.baseVersion).catch((e: unknown) => {
+        await deleteRoom(edit.jobId, edit.roomId, item.baseVersion, person).catch((e: unknown) => {
           if (!(isApiError(e) && e.status === 404)) throw e;
         });
         await changeRooms(queryClient, edit.jobId, (rooms) => rooms.filter((r) => r.id !== edit.roomId));
         afterWrite(queryClient, edit.jobId);
         return { kind: 'ok', version: null };
       }
-      const job = await updateJob(edit.jobId, item.baseVersion, edit.changes);
+      const job = await updateJob(edit.jobId, item.baseVersion, edit.changes, person);
       queryClient.setQueryData<JobRecord>(jobKeys.detail(job.id), job);
       afterWrite(queryClient, edit.jobId);
       return { kind: 'ok', version: job.version };

@@ -2,7 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { isApiError } from '../../../lib/api-error';
 import { jobKeys } from '../../../lib/job-queries';
 import type { RoomRecord } from '../../../lib/job-records';
-import type { QueueState } from '../../../lib/offline-queue';
+import type { QueueState } from '../../../lib/offline/queue';
 import { uploadPhoto } from '../api/upload-photo';
 import type { WalkthroughEdit } from './edits';
 import type { PhotoSendResult } from './photo-queue';
@@ -27,15 +27,16 @@ export function roomOnServer(queryClient: QueryClient, edits?: { getSnapshot(): 
 function failure(e: unknown): PhotoSendResult {
   if (!isApiError(e) || e.status === 0) return { kind: 'keep' };
   // 5xx may pass, 429 will; 401 means sign in again — the photo must not be lost meanwhile.
-  if (e.status >= 500 || e.status === 429 || e.status === 401) return { kind: 'keep' };
+  // 403 other-person: someone else signed in on this device; the photo waits for its taker.
+  if (e.status >= 500 || e.status === 429 || e.status === 401 || e.code === 'other-person') return { kind: 'keep' };
   return { kind: 'refused', message: e.detail };
 }
 
 /** Uploads one waiting photo and puts the server's record into the room, so its thumbnail replaces the local one. */
-export function createPhotoSender(queryClient: QueryClient) {
+export function createPhotoSender(queryClient: QueryClient, person?: string) {
   return async (waiting: WaitingPhoto): Promise<PhotoSendResult> => {
     try {
-      const photo = await uploadPhoto(waiting);
+      const photo = await uploadPhoto({ ...waiting, person });
       queryClient.setQueryData<RoomRecord[]>(jobKeys.rooms(waiting.jobId), (rooms) =>
         rooms?.map((r) => (r.id === waiting.roomId ? { ...r, photos: [...r.photos, photo] } : r)),
       );

@@ -1,10 +1,18 @@
+import { getCurrentPerson, personKey } from '../../../lib/offline/person';
+
 /**
  * What the person typed in a room that calc's schema does not accept yet (say a window
  * larger than its wall, half-way through fixing it). Valid drafts go to the offline queue;
  * these are kept on the device (localStorage: synchronous, so the editor can restore them
  * before its first paint) until the room becomes valid or the server's room moves on.
  */
-const PREFIX = 'gaugeline:unsaved-room:v1:';
+const PREFIX = 'gaugeline:unsaved-room:v2:';
+
+/** Per person, like everything the device keeps (lib/offline/person.ts). */
+function keyOf(roomId: string): string {
+  const person = getCurrentPerson();
+  return `${PREFIX}${person ? personKey(person) : 'nobody'}:${roomId}`;
+}
 
 export interface UnsavedDraft {
   /** The room version the draft was typed against; null for a room not yet on the server. */
@@ -33,19 +41,19 @@ function isDraft(v: unknown): v is UnsavedDraft {
 
 export function keepUnsavedDraft(roomId: string, draft: UnsavedDraft): void {
   try {
-    storage()?.setItem(PREFIX + roomId, JSON.stringify(draft));
+    storage()?.setItem(keyOf(roomId), JSON.stringify(draft));
   } catch {
     // Storage full or refused: the draft stays on screen; nothing else to do.
   }
 }
 
 export function clearUnsavedDraft(roomId: string): void {
-  storage()?.removeItem(PREFIX + roomId);
+  storage()?.removeItem(keyOf(roomId));
 }
 
 /** The draft typed against this very version, if any; a draft for an older version is discarded. */
 export function takeUnsavedDraft(roomId: string, version: number | null): UnsavedDraft | null {
-  const raw = storage()?.getItem(PREFIX + roomId);
+  const raw = storage()?.getItem(keyOf(roomId));
   if (!raw) return null;
   let parsed: unknown = null;
   try {

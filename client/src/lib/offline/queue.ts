@@ -1,4 +1,4 @@
-import { createStore, get, set, type UseStore } from 'idb-keyval';
+import { get, set, type UseStore } from 'idb-keyval';
 
 /**
  * An ordered, persisted queue of writes: the one path every autosaved edit takes, online
@@ -67,15 +67,14 @@ function isStoredItem(v: unknown): v is QueueItem<unknown> {
 }
 
 /**
- * IndexedDB storage through idb-keyval; pass a custom store in tests or to separate users.
+ * IndexedDB storage through idb-keyval, in the person's own store (lib/offline/person.ts).
  * `isPayload` checks each stored edit (the queue cannot know what its payloads are).
  */
 export function idbQueueStorage<P>(
   isPayload: (v: unknown) => v is P,
+  db: UseStore,
   key: string = QUEUE_STORAGE_KEY,
-  store?: UseStore,
 ): QueueStorage<P> {
-  const db = store ?? createStore('gaugeline', 'offline-queue');
   return {
     load: async () => {
       const v: unknown = await get(key, db);

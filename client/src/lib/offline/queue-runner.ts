@@ -1,4 +1,4 @@
-import type { OfflineQueueOptions, QueueItem, QueueState, NewItem } from './offline-queue';
+import type { OfflineQueueOptions, QueueItem, QueueState, NewItem } from './queue';
 
 type Listener = () => void;
 
@@ -11,6 +11,7 @@ export class OfflineQueue<P> {
   private timer: ReturnType<typeof setInterval> | null = null;
   private inFlight: string | null = null;
   private seq = 0;
+  private stopped = false;
   /** The version each target reached through this queue's own writes. */
   private readonly reached = new Map<string, number>();
 
@@ -59,6 +60,7 @@ export class OfflineQueue<P> {
 
   /** Loads what a previous visit left waiting, listens for the connection and retries now and then. */
   async start(): Promise<void> {
+    this.stopped = false;
     // No IndexedDB (private mode, old browser): keep working in memory rather than not at all.
     const stored = await this.options.storage.load().catch(() => []);
     const items = [...stored].sort((a, b) => a.seq - b.seq);
@@ -77,7 +79,9 @@ export class OfflineQueue<P> {
     void this.flush();
   }
 
+  /** Stops listening and sending (another person signed in on this tab); what waits stays stored. */
   stop(): void {
+    this.stopped = true;
     if (typeof window !== 'undefined') {
       window.removeEventListener('online', this.handleOnline);
       window.removeEventListener('offline', this.handleOffline);
@@ -142,6 +146,7 @@ export class OfflineQueue<P> {
   private async drain(): Promise<void> {
     if (!this.state.loaded) return;
     for (;;) {
+      if (this.stopped) break;
       const head = this.state.items[0];
       if (!head || this.state.conflict) break;
       if (!this.isOnline()) {

@@ -13,6 +13,8 @@ import { mountModules } from './modules';
 import type { Services } from './services/services';
 
 const JSON_LIMIT = '256kb';
+const IMPORT_JSON_LIMIT = '3mb';
+const IMPORT_PATH = /^\/api\/company-data\/[a-z-]+\/import\/(preview|apply)$/;
 
 /** Builds the whole HTTP app without listening: server.ts listens, the tests call it through supertest. */
 export function createApp(services: Services): Express {
@@ -59,6 +61,9 @@ export function createApp(services: Services): Express {
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
+  // A CSV import carries the whole file (up to IMPORT_LIMITS.maxBytes, checked with a message naming the limit).
+  const importJson = express.json({ limit: IMPORT_JSON_LIMIT, strict: true });
+  app.use((req, res, next) => (IMPORT_PATH.test(req.path) ? importJson(req, res, next) : next()));
   app.use('/api', express.json({ limit: JSON_LIMIT, strict: true }));
   app.use((req, _res, next) => RequestContext.create(orm.em, next));
   app.use(sessionMiddleware(config, services.sessionPool));

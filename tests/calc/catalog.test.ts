@@ -205,3 +205,12 @@ describe('who sees what', () => {
     expect(names).toContain('description');
   });
 });
+
+describe('published column list', () => {
+  it('README.md lists every CSV column of every table', async () => {
+    const { readFileSync } = await import('node:fs');
+    const readme = readFileSync(new URL('../../README.md', import.meta.url), 'utf8');
+    for (const id of DATASET_IDS)
+      for (const c of DATASETS[id].columns) expect(readme, `${id}.${c.name}`).toContain(`| \`${c.name}\` |`);
+  });
+});

@@ -6,6 +6,11 @@ import { JobSchema } from '../modules/jobs/job.entity';
 import { PhotoSchema } from '../modules/photos/photo.entity';
 import { OutgoingMessageSchema } from '../modules/mail/outgoing-message.entity';
 import { RoomSchema } from '../modules/rooms/room.entity';
+import {
+  CompanyDataChangeSchema,
+  CompanyDataRowSchema,
+  PriceBookSettingsSchema,
+} from '../modules/company-data/company-data.entity';
 
 /** Every entity the ORM knows. A module adds its schema here. */
 export const entities = [
@@ -17,4 +22,7 @@ export const entities = [
   RoomSchema,
   PhotoSchema,
   OutgoingMessageSchema,
+  CompanyDataRowSchema,
+  CompanyDataChangeSchema,
+  PriceBookSettingsSchema,
 ];

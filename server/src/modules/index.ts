@@ -14,6 +14,7 @@ import { mailRoutes } from './mail/mail.routes';
 import { loadsRoutes } from './loads/loads.routes';
 import { photoRoutes } from './photos/photo.routes';
 import { roomRoutes } from './rooms/room.routes';
+import { companyDataRoutes } from './company-data/company-data.routes';
 
 /** Every API module, mounted under /api. Each route is made through createApiRouter, so each has a policy. */
 export function mountModules(app: Express, services: Services): void {
@@ -35,4 +36,5 @@ export function mountModules(app: Express, services: Services): void {
   mount('/jobs', roomRoutes);
   mount('/jobs', photoRoutes);
   mount('/jobs', loadsRoutes);
+  mount('/company-data', companyDataRoutes);
 }

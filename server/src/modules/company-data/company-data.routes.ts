@@ -1,0 +1,150 @@
+import { DATASET_IDS, DATASETS, EDITORS, priceBookSettingsSchema, type DataRole } from '@calc';
+import { z } from 'zod';
+import { ANY_STAFF, roles, type ApiRouter } from '../../lib/route';
+import { ifMatchVersion, setEtag } from '../jobs/version-lock';
+import { applyImport, exportCsv, previewImport, templateCsv } from './company-data.import';
+import { presentChange, presentRow } from './company-data.presenter';
+import { datasetParams, importApplyBody, importPreviewBody, recordBody, rowParams } from './company-data.schema';
+import { assertReader, createRow, getRow, listRows, rowHistory, updateRow } from './company-data.service';
+import { getSettings, presentSettings, putSettings } from './price-book-settings.service';
+
+const OFFICE = roles(...EDITORS);
+const PRICE_READERS = roles('owner', 'estimator', 'salesperson');
+
+/** The equipment catalog and price book: /api/company-data/... */
+export function companyDataRoutes(api: ApiRouter): void {
+  api.route({
+    method: 'get',
+    path: '/tables',
+    policy: ANY_STAFF,
+    handler: async ({ actor }) => ({
+      tables: DATASET_IDS.filter((id) => DATASETS[id].readers.includes(actor.role as DataRole)).map((id) => ({
+        id,
+        label: DATASETS[id].label,
+        canEdit: EDITORS.includes(actor.role as DataRole),
+      })),
+    }),
+  });
+  api.route({
+    method: 'get',
+    path: '/settings',
+    policy: PRICE_READERS,
+    handler: async ({ em, actor, res }) => {
+      const s = await getSettings(em, actor.companyId);
+      setEtag(res, s.version);
+      return { settings: presentSettings(s, actor.role) };
+    },
+  });
+  api.route({
+    method: 'put',
+    path: '/settings',
+    policy: OFFICE,
+    body: z.strictObject({ settings: priceBookSettingsSchema.strict() }),
+    handler: async ({ em, actor, body, req, res }) => {
+      const s = await putSettings(em, actor, ifMatchVersion(req), body.settings);
+      setEtag(res, s.version);
+      return { settings: presentSettings(s, actor.role) };
+    },
+  });
+  api.route({
+    method: 'get',
+    path: '/:dataset',
+    policy: ANY_STAFF,
+    params: datasetParams,
+    handler: async ({ em, actor, params }) => {
+      assertReader(actor, params.dataset);
+      const rows = await listRows(em, actor.companyId, params.dataset);
+      return { dataset: params.dataset, rows: rows.map((r) => presentRow(r, actor.role)) };
+    },
+  });
+  api.route({
+    method: 'get',
+    path: '/:dataset/csv/export',
+    policy: OFFICE,
+    params: datasetParams,
+    handler: async ({ em, actor, params, res }) => {
+      const csv = await exportCsv(em, actor.companyId, params.dataset);
+      res.type('text/csv; charset=utf-8').attachment(`${params.dataset}.csv`).send(csv);
+      return undefined;
+    },
+  });
+  api.route({
+    method: 'get',
+    path: '/:dataset/csv/template',
+    policy: OFFICE,
+    params: datasetParams,
+    handler: async ({ params, res }) => {
+      res
+        .type('text/csv; charset=utf-8')
+        .attachment(`${params.dataset}-template.csv`)
+        .send(templateCsv(params.dataset));
+      return undefined;
+    },
+  });
+  api.route({
+    method: 'post',
+    path: '/:dataset/import/preview',
+    policy: OFFICE,
+    params: datasetParams,
+    body: importPreviewBody,
+    handler: async ({ em, actor, params, body }) => ({
+      preview: await previewImport(em, actor, params.dataset, body.csv),
+    }),
+  });
+  api.route({
+    method: 'post',
+    path: '/:dataset/import/apply',
+    policy: OFFICE,
+    params: datasetParams,
+    body: importApplyBody,
+    handler: async ({ em, actor, params, body }) => ({
+      applied: await applyImport(em, actor, params.dataset, body.csv, body.token),
+    }),
+  });
+  api.route({
+    method: 'post',
+    path: '/:dataset',
+    policy: OFFICE,
+    params: datasetParams,
+    body: recordBody,
+    status: 201,
+    handler: async ({ em, actor, params, body, res }) => {
+      const row = await createRow(em, actor, params.dataset, body.record);
+      setEtag(res, row.version);
+      return { row: presentRow(row, actor.role) };
+    },
+  });
+  api.route({
+    method: 'get',
+    path: '/:dataset/:key',
+    policy: ANY_STAFF,
+    params: rowParams,
+    handler: async ({ em, actor, params, res }) => {
+      assertReader(actor, params.dataset);
+      const row = await getRow(em, actor.companyId, params.dataset, params.key);
+      setEtag(res, row.version);
+      return { row: presentRow(row, actor.role) };
+    },
+  });
+  api.route({
+    method: 'put',
+    path: '/:dataset/:key',
+    policy: OFFICE,
+    params: rowParams,
+    body: recordBody,
+    handler: async ({ em, actor, params, body, req, res }) => {
+      const row = await updateRow(em, actor, params.dataset, params.key, ifMatchVersion(req), body.record);
+      setEtag(res, row.version);
+      return { row: presentRow(row, actor.role) };
+    },
+  });
+  api.route({
+    method: 'get',
+    path: '/:dataset/:key/history',
+    policy: OFFICE,
+    params: rowParams,
+    handler: async ({ em, actor, params }) => ({
+      history: (await rowHistory(em, actor.companyId, params.dataset, params.key)).map(presentChange),
+    }),
+  });
+}

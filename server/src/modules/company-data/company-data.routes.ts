@@ -1,6 +1,6 @@
 import { DATASET_IDS, DATASETS, EDITORS, priceBookSettingsSchema, type DataRole } from '@calc';
 import { z } from 'zod';
-import { ANY_STAFF, roles, type ApiRouter } from '../../lib/route';
+import { ANY_STAFF, OFFICE, roles, type ApiRouter } from '../../lib/route';
 import { ifMatchVersion, setEtag } from '../jobs/version-lock';
 import { applyImport, exportCsv, previewImport, templateCsv } from './company-data.import';
 import { presentChange, presentRow } from './company-data.presenter';
@@ -8,7 +8,6 @@ import { datasetParams, importApplyBody, importPreviewBody, recordBody, rowParam
 import { assertReader, createRow, getRow, listRows, rowHistory, updateRow } from './company-data.service';
 import { getSettings, presentSettings, putSettings } from './price-book-settings.service';
 
-const OFFICE = roles(...EDITORS);
 const PRICE_READERS = roles('owner', 'estimator', 'salesperson');
 
 /** The equipment catalog and price book: /api/company-data/... */

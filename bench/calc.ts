@@ -20,6 +20,12 @@ import {
   priceBookSchema,
   pricingSchema,
   DEFAULT_SIZING_POLICY,
+  designDayContext,
+  designPsychrometrics,
+  homeLoad,
+  recombineBlock,
+  roomHourly,
+  roomInputSchema,
   type DesignInput,
   type EquipmentCatalogInput,
   type RoomInput,
@@ -151,6 +157,14 @@ function measure(run: () => unknown, { warmup, runs }: { readonly warmup: number
 const GOAL_RATIO = 100;
 const GOAL_MS = FRAME_MS / GOAL_RATIO;
 
+function reportGoal(label: string, m: Timing, goalMs: number): void {
+  console.log(`  ${label}`);
+  console.log(
+    `    median ${m.median.toFixed(3)} ms · p95 ${m.p95.toFixed(3)} ms · min ${m.min.toFixed(3)} ms (${m.runs} runs)`,
+  );
+  console.log(`    → goal median ≤ ${goalMs} ms: ${m.median <= goalMs ? 'MET' : 'NOT MET'}`);
+}
+
 function report(label: string, m: Timing): void {
   const ratio = FRAME_MS / m.median;
   console.log(`  ${label}`);
@@ -205,6 +219,37 @@ try {
   budget('40-room loads recompute incl. validation (homeLoad)', measure(loads40, { warmup: 500, runs: 3000 }), 1.6);
   report('full recompute incl. zod validation (computeDesign)', measure(full, { warmup: 500, runs: 3000 }));
   report('engine only, on validated inputs (computeDesignFromParsed)', measure(engine, { warmup: 2000, runs: 10000 }));
+  // Issue 9/11: the hour-by-hour loads alone. Full: validate the home, 24 hours × 40 rooms, block, per-room figures.
+  const loadsFull = () => homeLoad({ home });
+  reportGoal(
+    'loads: 40-room full hourly recompute incl. validation (homeLoad)',
+    measure(loadsFull, { warmup: 500, runs: 3000 }),
+    1.6,
+  );
+  // Per keystroke: one room re-parsed, its 24 hours recomputed (air shares held), the block recombined.
+  const ph = parsed.home;
+  const psy = designPsychrometrics(ph.designConditions);
+  const ctx = designDayContext(ph.designConditions);
+  const air = {
+    summerCfm: 5,
+    winterCfm: 10,
+    ventCfm: 0,
+    ventCoolingSensibleCfm: 0,
+    ventLatentCfm: 0,
+    ventHeatingCfm: 0,
+  };
+  const profiles = ph.rooms.map((r) => roomHourly(r, psy, ctx, air).hourly);
+  const edited = rooms[7] ?? room(7);
+  const keystroke = () => {
+    const r = roomInputSchema.parse(edited);
+    profiles[7] = roomHourly(r, psy, ctx, air).hourly;
+    return recombineBlock(profiles);
+  };
+  reportGoal(
+    'loads: per keystroke (one room re-parsed, block recombined)',
+    measure(keystroke, { warmup: 2000, runs: 10000 }),
+    0.16,
+  );
 } catch (e) {
   console.log('calc benchmark could not run:', e instanceof Error ? e.message : String(e));
 }

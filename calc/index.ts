@@ -23,6 +23,8 @@ export * from './src/schemas/equipment';
 export * from './src/schemas/design';
 
 export * from './src/loads/conditions';
+export * from './src/loads/hourly-method';
+export * from './src/loads/design-day-context';
 export * from './src/loads/envelope';
 export * from './src/loads/internal';
 export * from './src/loads/notes';

@@ -88,16 +88,107 @@ describe('load invariants (fast-check)', () => {
       }),
     );
   });
-  it('home total = sum of room totals', () => {
+  it('block load: at least the largest room peak, at most the sum of room peaks; heating and latent add up (definition of a coincident peak)', () => {
     fc.assert(
       fc.property(fc.array(roomArb, { minLength: 1, maxLength: 5 }), (specs) => {
         const rooms = specs.map((s, i) => ({ ...toRoom(s), id: `r${i}` }));
         const h = homeLoad({ home: { designConditions: conditions, rooms } });
-        expect(h.totals.sensibleBtuh).toBe(h.rooms.reduce((a, r) => a + r.sensibleGain.total, 0));
+        const peaks = h.rooms.map((r) => r.sensibleGain.total);
+        expect(h.totals.sensibleBtuh).toBeLessThanOrEqual(peaks.reduce((a, b) => a + b, 0));
+        expect(h.totals.sensibleBtuh).toBeGreaterThanOrEqual(Math.max(...peaks));
+        expect(h.block.sumOfRoomPeaksSensibleBtuh).toBe(peaks.reduce((a, b) => a + b, 0));
+        // the block hour's figure is the sum of every room's figure at that hour
+        const hi = h.block.hour - 1;
+        expect(h.totals.sensibleBtuh).toBe(h.rooms.reduce((a, r) => a + (r.hourlySensibleBtuh[hi] ?? 0), 0));
+        for (const r of h.rooms) expect(r.atBlock.sensibleBtuh).toBe(r.hourlySensibleBtuh[hi]);
+        // and no hour of the summed profile is above it
+        for (const hr of h.hourly) expect(hr.sensibleBtuh).toBeLessThanOrEqual(h.totals.sensibleBtuh);
         expect(h.totals.heatingBtuh).toBe(h.rooms.reduce((a, r) => a + r.heatLoss.total, 0));
+        expect(h.totals.latentBtuh).toBe(h.rooms.reduce((a, r) => a + r.latentGain.total, 0));
         expect(h.totals.coolingBtuh).toBe(h.totals.sensibleBtuh + h.totals.latentBtuh);
       }),
       { numRuns: 50 },
+    );
+  });
+  it('every hourly figure is finite, whole and non-negative; each room peaks at its own highest hour', () => {
+    fc.assert(
+      fc.property(
+        roomArb,
+        fc.double({ min: -60, max: 70, noNaN: true }),
+        fc.integer({ min: 1, max: 12 }),
+        (s, lat, m) => {
+          const r = roomLoad({
+            room: toRoom(s),
+            designConditions: { ...conditions, latitudeDeg: lat, designMonth: m },
+          });
+          expect(r.hourlySensibleBtuh).toHaveLength(24);
+          for (const v of r.hourlySensibleBtuh) {
+            expect(Number.isInteger(v)).toBe(true);
+            expect(v).toBeGreaterThanOrEqual(0);
+          }
+          expect(r.sensibleGain.total).toBe(Math.max(...r.hourlySensibleBtuh));
+          expect(r.hourlySensibleBtuh[r.peakHour - 1]).toBe(r.sensibleGain.total);
+        },
+      ),
+    );
+  });
+  it('an overhang never increases the sun through a window (shadow only removes beam)', () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...directions),
+        fc.double({ min: 0, max: 8, noNaN: true }),
+        fc.double({ min: 0, max: 4, noNaN: true }),
+        fc.double({ min: -60, max: 70, noNaN: true }),
+        (dir, depth, gap, lat) => {
+          const room = (overhang: boolean): RoomInput => ({
+            id: 'r',
+            name: 'Room',
+            lengthFt: 12,
+            widthFt: 12,
+            exposedWalls: [
+              {
+                direction: dir,
+                lengthFt: 12,
+                windows: [
+                  overhang
+                    ? { widthIn: 48, heightIn: 48, overhangDepthFt: depth, overhangGapFt: gap }
+                    : { widthIn: 48, heightIn: 48 },
+                ],
+              },
+            ],
+          });
+          const dc = { ...conditions, latitudeDeg: lat };
+          const a = roomLoad({ room: room(false), designConditions: dc });
+          const b = roomLoad({ room: room(true), designConditions: dc });
+          expect(b.sensibleGain.windowsSolar).toBeLessThanOrEqual(a.sensibleGain.windowsSolar);
+          for (let h = 0; h < 24; h += 1)
+            expect(b.hourlySensibleBtuh[h] ?? 0).toBeLessThanOrEqual(a.hourlySensibleBtuh[h] ?? 0);
+        },
+      ),
+    );
+  });
+  it('turning the house 180° moves the peak, not the heating load; mirroring east↔west mirrors the day about noon', () => {
+    const turn = { N: 'S', NE: 'SW', E: 'W', SE: 'NW', S: 'N', SW: 'NE', W: 'E', NW: 'SE' } as const;
+    const mirror = { N: 'N', NE: 'NW', E: 'W', SE: 'SW', S: 'S', SW: 'SE', W: 'E', NW: 'NE' } as const;
+    fc.assert(
+      fc.property(fc.array(roomArb, { minLength: 1, maxLength: 4 }), (specs) => {
+        const rooms = specs.map((s, i) => ({ ...toRoom(s), id: `r${i}` }));
+        const turned = (map: Record<string, (typeof directions)[number]>) =>
+          rooms.map((r) => ({
+            ...r,
+            exposedWalls: (r.exposedWalls ?? []).map((w) => ({ ...w, direction: map[w.direction] ?? w.direction })),
+          }));
+        const a = homeLoad({ home: { designConditions: conditions, rooms } });
+        const b = homeLoad({ home: { designConditions: conditions, rooms: turned(turn) } });
+        expect(b.totals.heatingBtuh).toBe(a.totals.heatingBtuh);
+        // Mirror: the sun of hour 12 + t on a west wall is the sun of hour 12 − t on the east wall (eqs. 11–16),
+        // so the sun through the glass before storage mirrors; solar gain summed over the day is unchanged.
+        const c = homeLoad({ home: { designConditions: conditions, rooms: turned(mirror) } });
+        const daySolar = (h: typeof a) => h.hourly.reduce((s, x) => s + x.windowsSolarBtuh, 0);
+        expect(Math.abs(daySolar(c) - daySolar(a))).toBeLessThanOrEqual(24 * a.rooms.length * 4);
+        expect(c.totals.heatingBtuh).toBe(a.totals.heatingBtuh);
+      }),
+      { numRuns: 40 },
     );
   });
   it('loads rise (never fall) with floor area', () => {

@@ -3,58 +3,217 @@ import { homeLoad, roomLoad } from '@calc';
 import { bedroom, conditions, kitchen, livingRoom, threeRoomHome } from './sample-data';
 
 /*
- * Worked example: an invented three-room house, every number checked by hand.
+ * Worked example: an invented three-room house, worked by hand in this file.
  * Site: 95 °F db / 75 °F wb summer, 10 °F winter, indoor 75 °F / 50 % and 70 °F, daily
- * range 20 °F, sea level (altitude factor 1). Tightness "average" → 0.5 ACH.
- *   ΔT cooling = 95 − 75 = 20 °F; ΔT heating = 70 − 10 = 60 °F.
- *   Glass cooling ΔT = 20 − 0.46 × 20 = 10.8 °F.
+ * range 20 °F, sea level (altitude factor 1). No latitude entered → 40° N is assumed; design
+ * month July → the 21st, day n = 202; no optical depths → the generic τb 0.40, τd 2.30.
+ * Tightness "average" → 0.5 ACH in winter, half (0.25) in summer.
+ *   ΔT heating = 70 − 10 = 60 °F.
  *   Grains: indoor 64.650, outdoor 98.456 → Δgr 33.807 (psychrolib-checked, reference 1.3/1.4).
- *   Attic ceiling cooling ΔT = 20 + 30 (attic adder) = 50 °F.
  *   People: 70 W × 3.412141633 = 238.850 Btu/h sensible; 45 W → 153.546 Btu/h latent.
- * Components round half-up to 1 Btu/h; totals are sums of the rounded components.
+ *
+ * The cooling side is hour by hour, so it is worked by the `hand` functions below: each is the
+ * handbook equation written out again here (not calc's code), step by step, with its source.
+ * Components round half-up to 1 Btu/h each hour; totals are sums of the rounded components.
  */
 
-describe('worked example: three-room house', () => {
-  it('living room 20 × 15 × 8 ft: S wall 20 ft with 60×48 in low-e window (blinds), W wall 15 ft with 15 ft² clear window and a 36×80 in steel door; R-38 attic; slab; 3 people; 150 W TV', () => {
+const RAD = Math.PI / 180;
+const round = (x: number) => Math.floor(x + 0.5); // half-up for the non-negative parts
+const pos = (x: number) => Math.max(0, x);
+
+// ASHRAE 1997 ch. 28 Table 2 fraction of daily range, hours 1–24 [MEM] (peak 15:00, low 05:00)
+const FRACTION = [
+  0.87, 0.92, 0.96, 0.99, 1.0, 0.98, 0.93, 0.84, 0.71, 0.56, 0.39, 0.23, 0.11, 0.03, 0.0, 0.03, 0.1, 0.21, 0.34, 0.47,
+  0.58, 0.68, 0.76, 0.82,
+];
+const To = FRACTION.map((f) => 95 - f * 20); // outdoor dry bulb each hour, °F
+
+// Sun at L 40°, n 202 (ASHRAE 2013 ch. 14): δ = 23.45 sin(360 × (202 + 284)/365) = 23.45 × sin 479.34° = 20.44°
+const L = 40 * RAD;
+const decl = 23.45 * Math.sin(((360 * (202 + 284)) / 365) * RAD) * RAD;
+// E_o = 433.6 × (1 + 0.033 cos(360 × 199/365)) = 433.6 × (1 − 0.02774) = 421.6 Btu/h·ft² (eq. 4)
+const Eo = 433.6 * (1 + 0.033 * Math.cos(((360 * 199) / 365) * RAD));
+// τb 0.40, τd 2.30 → ab = 1.454 − 0.1624 − 0.6164 + 0.01932 = 0.69452; ad = 0.507 + 0.082 − 0.184 − 0.1748 = 0.2302
+const ab = 0.69452;
+const ad = 0.2302;
+const sunAt = (hour: number) => {
+  const H = 15 * (hour - 12) * RAD; // hour angle
+  const sinB = Math.cos(L) * Math.cos(decl) * Math.cos(H) + Math.sin(L) * Math.sin(decl); // eq. 12
+  const beta = Math.asin(sinB);
+  // azimuth from north = 180° + φ, φ from south: sin φ ∝ sin H cos δ, cos φ ∝ cos H cos δ sin L − sin δ cos L
+  const az =
+    180 +
+    Math.atan2(
+      Math.sin(H) * Math.cos(decl),
+      Math.cos(H) * Math.cos(decl) * Math.sin(L) - Math.sin(decl) * Math.cos(L),
+    ) /
+      RAD;
+  if (beta <= 0) return { beta, az, Eb: 0, Ed: 0 };
+  const bDeg = beta / RAD;
+  const m = 1 / (sinB + 0.50572 * Math.pow(6.07995 + bDeg, -1.6364)); // air mass, eq. 16
+  return { beta, az, Eb: Eo * Math.exp(-0.4 * Math.pow(m, ab)), Ed: Eo * Math.exp(-2.3 * Math.pow(m, ad)) };
+};
+const SUN = Array.from({ length: 24 }, (_, i) => sunAt(i + 1));
+const AZ = { N: 0, E: 90, S: 180, W: 270 } as const;
+type Dir = keyof typeof AZ;
+
+/** Irradiance on a vertical wall: beam E_b cos θ; sky E_d·Y; ground (E_b sin β + E_d)·0.2·½ (eqs. 22–26). */
+const onWall = (dir: Dir, i: number) => {
+  const s = SUN[i]!;
+  if (s.beta <= 0) return { beam: 0, diffuse: 0, cos: 0 };
+  const c = Math.cos(s.beta) * Math.cos((s.az - AZ[dir]) * RAD);
+  const Y = Math.max(0.45, 0.55 + 0.437 * c + 0.313 * c * c);
+  return { beam: s.Eb * Math.max(0, c), diffuse: s.Ed * Y + (s.Eb * Math.sin(s.beta) + s.Ed) * 0.1, cos: c };
+};
+/** Angular SHGC ÷ normal for double clear glazing [MEM: ASHRAE ch. 15 Table 10, ID 5a]: 0°…90° by 40/50/60/70/80. */
+const shgcRatio = (cos: number) => {
+  const th = Math.acos(Math.min(1, Math.max(-1, cos))) / RAD;
+  const x = [0, 40, 50, 60, 70, 80, 90];
+  const y = [1, 0.974, 0.934, 0.842, 0.658, 0.342, 0];
+  for (let k = 1; k < x.length; k += 1)
+    if (th <= x[k]!) return y[k - 1]! + ((y[k]! - y[k - 1]!) * (th - x[k - 1]!)) / (x[k]! - x[k - 1]!);
+  return 0;
+};
+/** Solar storage: r_j = ½^(j+1) / (1 − ½^24), a periodic 24-hour convolution (Gaugeline's RTS simplification). */
+const store = (q: number[]) =>
+  q.map((_, h) => {
+    let s = 0;
+    for (let j = 0; j < 24; j += 1) s += (0.5 ** (j + 1) / (1 - 0.5 ** 24)) * q[(h - j + 24) % 24]!;
+    return s;
+  });
+/** Sol-air, medium colour: T_e = T_o + 0.225 × E_t (− 7 °F on a horizontal surface) [ASHRAE ch. 18 sol-air]. */
+const wallTe = (dir: Dir) => To.map((t, i) => t + 0.225 * (onWall(dir, i).beam + onWall(dir, i).diffuse));
+/** Light frame: lag 2 h, decrement 0.9 about the daily mean: ΔT(h) = T̄e − 75 + 0.9 × (T_e(h − 2) − T̄e). */
+const lagged = (te: number[], lag: number, d: number) => {
+  const mean = te.reduce((a, b) => a + b, 0) / 24;
+  return te.map((_, h) => mean - 75 + d * (te[(h - lag + 24) % 24]! - mean));
+};
+/** Attic: roof sol-air T_e = T_o + 0.225 × E_horizontal − 7; attic = T_o + 0.45 × (T_e − T_o), one hour behind. */
+const atticDt = (() => {
+  const te = To.map((t, i) => {
+    const s = SUN[i]!;
+    return t + 0.225 * (s.beta > 0 ? s.Eb * Math.sin(s.beta) + s.Ed : 0) - 7;
+  });
+  return To.map((_, h) => {
+    const p = (h - 1 + 24) % 24;
+    return To[p]! + 0.45 * (te[p]! - To[p]!) - 75;
+  });
+})();
+
+interface HandRoom {
+  walls: { dir: Dir; netFt2: number; u: number; doors?: { ft2: number; u: number }[] }[];
+  windows: { dir: Dir; ft2: number; u: number; shgc: number; iac: number }[];
+  atticUA: number;
+  summerCfm: number;
+  people: number; // sensible, Btu/h
+  appliances: number; // sensible, Btu/h
+}
+const COMPONENTS = [
+  'walls',
+  'windowsConduction',
+  'windowsSolar',
+  'doors',
+  'ceiling',
+  'infiltration',
+  'people',
+  'appliances',
+] as const;
+/** Each hour's rounded parts for a hand room. */
+function hand(r: HandRoom) {
+  const solarInstant = To.map((_, i) =>
+    r.windows.reduce((s, w) => {
+      const e = onWall(w.dir, i);
+      return s + w.ft2 * w.shgc * w.iac * (e.beam * shgcRatio(e.cos) + e.diffuse * 0.868);
+    }, 0),
+  );
+  const solar = store(solarInstant);
+  const glassUA = r.windows.reduce((s, w) => s + w.ft2 * w.u, 0);
+  return To.map((t, i) => {
+    const walls = r.walls.reduce((s, w) => s + w.u * w.netFt2 * lagged(wallTe(w.dir), 2, 0.9)[i]!, 0);
+    const doors = r.walls.reduce(
+      (s, w) => s + (w.doors ?? []).reduce((d, x) => d + x.u * x.ft2 * lagged(wallTe(w.dir), 2, 0.9)[i]!, 0),
+      0,
+    );
+    const parts = {
+      walls: round(pos(walls)),
+      windowsConduction: round(pos(glassUA * (t - 75))),
+      windowsSolar: round(pos(solar[i]!)),
+      doors: round(pos(doors)),
+      ceiling: round(pos(r.atticUA * atticDt[i]!)),
+      infiltration: round(pos(1.08 * r.summerCfm * (t - 75))),
+      people: round(r.people),
+      appliances: round(r.appliances),
+    };
+    return { ...parts, total: COMPONENTS.reduce((s, k) => s + parts[k], 0) };
+  });
+}
+const peakOf = (hours: ReturnType<typeof hand>) =>
+  hours.reduce((best, h, i) => (h.total > hours[best]!.total ? i : best), 0);
+
+// The three rooms by hand (areas: S wall 160 − 20 window = 140 ft²; W 120 − 15 − 20 door = 85 ft²; …)
+const livingHand = (summerCfm: number): HandRoom => ({
+  walls: [
+    { dir: 'S', netFt2: 140, u: 0.083 },
+    { dir: 'W', netFt2: 85, u: 0.083, doors: [{ ft2: 20, u: 0.2 }] },
+  ],
+  windows: [
+    { dir: 'S', ft2: 20, u: 0.3, shgc: 0.3, iac: 0.7 }, // 60 × 48 in low-e, blinds
+    { dir: 'W', ft2: 15, u: 0.55, shgc: 0.67, iac: 1 }, // double clear
+  ],
+  atticUA: 300 * 0.03, // R-38
+  summerCfm,
+  people: 3 * 238.85,
+  appliances: 150 * 3.412141633, // 511.82
+});
+const bedroomHand = (summerCfm: number): HandRoom => ({
+  walls: [{ dir: 'N', netFt2: 96 - 12, u: 0.083 }],
+  windows: [{ dir: 'N', ft2: 12, u: 0.3, shgc: 0.3, iac: 0.65 }], // drapes
+  atticUA: 144 * 0.03,
+  summerCfm,
+  people: 2 * 238.85,
+  appliances: 0,
+});
+const kitchenHand = (summerCfm: number): HandRoom => ({
+  walls: [{ dir: 'E', netFt2: 80 - 10, u: 0.083 }],
+  windows: [{ dir: 'E', ft2: 10, u: 0.3, shgc: 0.3, iac: 1 }],
+  atticUA: 0, // conditioned above
+  summerCfm,
+  people: 0,
+  appliances: 1200,
+});
+
+describe('worked example: three-room house, hour by hour', () => {
+  it('spot values of the design day by hand: 40° N, 21 July, 16:00 sun on the west wall', () => {
+    // β at 16:00: sin β = cos 40 cos 20.44 cos 60 + sin 40 sin 20.44 = 0.3589 + 0.2245 = 0.5834 → β 35.69°
+    const s = SUN[15]!;
+    expect(s.beta / RAD).toBeCloseTo(35.69, 1);
+    // Outdoor at 16:00 = 95 − 0.03 × 20 = 94.4 °F; at 05:00 = 75 °F
+    expect(To[15]).toBeCloseTo(94.4, 9);
+    expect(To[4]).toBe(75);
+    // the whole design day is in calc's result: same outdoor profile
+    const h = homeLoad({ home: threeRoomHome });
+    expect(h.hourly.map((x) => x.outdoorDryBulbF)).toEqual(To.map((t) => Math.round(t * 10) / 10));
+    expect(h.designDay).toMatchObject({ latitudeDeg: 40, latitudeAssumed: true, month: 7, dayOfYear: 202 });
+    expect(h.designDay.skyIsGeneric).toBe(true);
+  });
+
+  it('living room alone (S low-e with blinds, W clear glass, steel door, R-38 attic, slab, 3 people, 150 W TV)', () => {
     const r = roomLoad({ room: livingRoom, designConditions: conditions });
-    // Floor 300 ft², volume 2,400 ft³, infiltration 0.5 × 2400 / 60 = 20.0 CFM
-    expect(r.floorAreaFt2).toBe(300);
-    expect(r.volumeFt3).toBe(2400);
-    expect(r.infiltrationCfm).toBe(20);
-    // Walls: S gross 160 − 20 window = 140; W gross 120 − 15 − 20 door = 85 → 225 ft² × 0.083
-    //   cooling 225 × 0.083 × 20 = 373.5 → 374; heating × 60 = 1,120.5 → 1,121
-    // Window conduction: (20 × 0.30 + 15 × 0.55) × 10.8 = (6 + 8.25) × 10.8 = 153.9 → 154; heating 14.25 × 60 = 855
-    // Sun: S 20 × 0.30 × 100 × 0.70 = 420; W 15 × 0.67 × 215 × 1.0 = 2,160.75 → 2,580.75 → 2,581
-    // Door: 20 ft² × 0.20 × 20 = 80; heating × 60 = 240
-    // Ceiling: 300 × 0.030 × 50 = 450; heating 300 × 0.030 × 60 = 540
-    // Slab: cooling 0; heating 0.73 × (20 + 15) ft exposed perimeter × 60 = 1,533
-    // Infiltration: 1.08 × 20 × 20 = 432; latent 0.68 × 20 × 33.807 = 459.77 → 460; heating 1.08 × 20 × 60 = 1,296
-    // People: 3 × 238.850 = 716.55 → 717; latent 3 × 153.546 = 460.64 → 461
-    // TV: 150 × 3.412141633 = 511.82 → 512
-    expect(r.sensibleGain).toEqual({
-      walls: 374,
-      windowsConduction: 154,
-      windowsSolar: 2581,
-      doors: 80,
-      ceiling: 450,
-      floor: 0,
-      infiltration: 432,
-      people: 717,
-      appliances: 512,
-      total: 5300,
-    });
-    expect(r.latentGain).toEqual({
-      walls: 0,
-      windowsConduction: 0,
-      windowsSolar: 0,
-      doors: 0,
-      ceiling: 0,
-      floor: 0,
-      infiltration: 460,
-      people: 461,
-      appliances: 0,
-      total: 921,
-    });
+    // Leakage on its own: winter 0.5 × 2,400 / 60 = 20 CFM; summer 10 CFM
+    expect(r.infiltrationHeatingCfm).toBe(20);
+    expect(r.infiltrationCfm).toBe(10);
+    const hours = hand(livingHand(10));
+    const peak = peakOf(hours);
+    expect(r.peakHour).toBe(peak + 1);
+    const { total, ...parts } = hours[peak]!;
+    expect(r.sensibleGain).toEqual({ ...parts, floor: 0, ventilation: 0, total });
+    expect(r.hourlySensibleBtuh).toEqual(hours.map((h) => h.total));
+    // Latent: 0.68 × 10 × 33.807 = 229.89 → 230; people 3 × 153.546 = 460.64 → 461
+    expect(r.latentGain.infiltration).toBe(230);
+    expect(r.latentGain.people).toBe(461);
+    // Heating (unchanged method): walls 225 × 0.083 × 60 = 1,120.5 → 1,121; glass (6 + 8.25) × 60 = 855;
+    // door 20 × 0.2 × 60 = 240; ceiling 300 × 0.03 × 60 = 540; slab 0.73 × 35 × 60 = 1,533;
+    // leakage 1.08 × 20 × 60 = 1,296 → 5,585; no credit for sun, people or appliances
     expect(r.heatLoss).toEqual({
       walls: 1121,
       windowsConduction: 855,
@@ -63,102 +222,61 @@ describe('worked example: three-room house', () => {
       ceiling: 540,
       floor: 1533,
       infiltration: 1296,
+      ventilation: 0,
       people: 0,
       appliances: 0,
       total: 5585,
     });
-    expect(r.coolingTotalBtuh).toBe(6221);
-    expect(r.isEstimate).toBe(true);
   });
 
-  it('bedroom 12 × 12 × 8 ft: N wall 12 ft with 36×48 in low-e window (drapes); R-38 attic; slab; 2 people', () => {
-    const r = roomLoad({ room: bedroom, designConditions: conditions });
-    // Walls: 96 − 12 = 84 ft² × 0.083 × 20 = 139.44 → 139; × 60 = 418.32 → 418
-    // Window: 12 × 0.30 × 10.8 = 38.88 → 39; heating 12 × 0.30 × 60 = 216
-    // Sun: 12 × 0.30 × 40 (north) × 0.65 (drapes) = 93.6 → 94
-    // Ceiling: 144 × 0.030 × 50 = 216; heating 144 × 0.030 × 60 = 259.2 → 259
-    // Slab: 0.73 × 12 × 60 = 525.6 → 526
-    // Infiltration: 0.5 × 1152 / 60 = 9.6 CFM; 1.08 × 9.6 × 20 = 207.36 → 207; latent 0.68 × 9.6 × 33.807 = 220.69 → 221; heating 622.08 → 622
-    // People: 2 × 238.850 = 477.70 → 478; latent 2 × 153.546 = 307.09 → 307
-    expect(r.sensibleGain).toEqual({
-      walls: 139,
-      windowsConduction: 39,
-      windowsSolar: 94,
-      doors: 0,
-      ceiling: 216,
-      floor: 0,
-      infiltration: 207,
-      people: 478,
-      appliances: 0,
-      total: 1173,
-    });
-    expect(r.latentGain.total).toBe(528);
-    expect(r.heatLoss).toEqual({
-      walls: 418,
-      windowsConduction: 216,
-      windowsSolar: 0,
-      doors: 0,
-      ceiling: 259,
-      floor: 526,
-      infiltration: 622,
-      people: 0,
-      appliances: 0,
-      total: 2041,
-    });
+  it('bedroom alone (N low-e with drapes, R-38 attic, 2 people) and kitchen alone (E low-e, 1,200 Btu/h range)', () => {
+    const b = roomLoad({ room: bedroom, designConditions: conditions });
+    // leakage: winter 0.5 × 1,152 / 60 = 9.6 CFM, summer 4.8
+    const bh = hand(bedroomHand(4.8));
+    expect(b.peakHour).toBe(peakOf(bh) + 1);
+    expect(b.sensibleGain.total).toBe(bh[peakOf(bh)]!.total);
+    expect(b.hourlySensibleBtuh).toEqual(bh.map((h) => h.total));
+    // heating: walls 84 × 0.083 × 60 = 418.32 → 418; glass 216; ceiling 259.2 → 259; slab 0.73 × 12 × 60 = 525.6 → 526; leakage 1.08 × 9.6 × 60 = 622.08 → 622
+    expect(b.heatLoss.total).toBe(418 + 216 + 259 + 526 + 622);
+    const k = roomLoad({ room: kitchen, designConditions: conditions });
+    const kh = hand(kitchenHand(4)); // 0.5 × 960 / 60 = 8 CFM winter, 4 summer
+    expect(k.peakHour).toBe(peakOf(kh) + 1);
+    expect(k.hourlySensibleBtuh).toEqual(kh.map((h) => h.total));
+    // the kitchen's east glass peaks in the morning, the living room's west glass in the afternoon
+    expect(k.peakHour).toBeLessThan(12);
+    // heating: walls 70 × 0.083 × 60 = 348.6 → 349; glass 180; crawl floor 120 × 0.047 × 48 = 270.72 → 271; leakage 518.4 → 518
+    expect(k.heatLoss.total).toBe(349 + 180 + 271 + 518);
   });
 
-  it('kitchen 10 × 12 × 8 ft: E wall 10 ft with a 10 ft² low-e window; conditioned above; vented crawl with R-19 below; 1,200 Btu/h range allowance', () => {
-    const r = roomLoad({ room: kitchen, designConditions: conditions });
-    // Walls: 80 − 10 = 70 ft² × 0.083 × 20 = 116.2 → 116; × 60 = 348.6 → 349
-    // Window: 10 × 0.30 × 10.8 = 32.4 → 32; heating 180
-    // Sun: 10 × 0.30 × 200 (east) × 1.0 = 600
-    // Floor over vented crawl: cooling fraction 0 → 0; heating 120 × 0.047 × (60 × 0.8) = 270.72 → 271
-    // Infiltration: 0.5 × 960 / 60 = 8 CFM; 1.08 × 8 × 20 = 172.8 → 173; latent 0.68 × 8 × 33.807 = 183.91 → 184; heating 518.4 → 518
-    // Range allowance: 1,200 Btu/h as entered
-    expect(r.sensibleGain).toEqual({
-      walls: 116,
-      windowsConduction: 32,
-      windowsSolar: 600,
-      doors: 0,
-      ceiling: 0,
-      floor: 0,
-      infiltration: 173,
-      people: 0,
-      appliances: 1200,
-      total: 2121,
-    });
-    expect(r.latentGain.total).toBe(184);
-    expect(r.heatLoss).toEqual({
-      walls: 349,
-      windowsConduction: 180,
-      windowsSolar: 0,
-      doors: 0,
-      ceiling: 0,
-      floor: 271,
-      infiltration: 518,
-      people: 0,
-      appliances: 0,
-      total: 1318,
-    });
-  });
-
-  it('whole home: sensible 8,594, latent 1,633, cooling 10,227 (0.85 ton), heating 8,944, SHR 0.840', () => {
+  it('whole home: leakage shared by outside envelope, the block hour, block ≤ sum of room peaks', () => {
     const h = homeLoad({ home: threeRoomHome });
-    // Sensible 5,300 + 1,173 + 2,121 = 8,594; latent 921 + 528 + 184 = 1,633; cooling 10,227
-    // Heating 5,585 + 2,041 + 1,318 = 8,944; SHR 8,594 / 10,227 = 0.8403 → 0.840; tons 10,227 / 12,000 = 0.852 → 0.85
-    expect(h.totals).toEqual({
-      sensibleBtuh: 8594,
-      latentBtuh: 1633,
-      coolingBtuh: 10227,
-      heatingBtuh: 8944,
-      sensibleHeatRatio: 0.84,
-      coolingTons: 0.85,
-      floorAreaFt2: 564,
-    });
-    expect(h.sensibleGain.windowsSolar).toBe(2581 + 94 + 600);
+    // House volume 2,400 + 1,152 + 960 = 4,512 ft³ → winter 0.5 × 4,512 / 60 = 37.6 CFM, summer 18.8
+    expect(h.air.winterCfm).toBe(37.6);
+    expect(h.air.summerCfm).toBe(18.8);
+    // Outside envelope: living 160 + 120 + 300 ceiling = 580; bedroom 96 + 144 = 240; kitchen 80 → 900 ft²
+    const share = { living: 580 / 900, bed: 240 / 900, kitchen: 80 / 900 };
+    const rooms = [
+      hand(livingHand(18.8 * share.living)),
+      hand(bedroomHand(18.8 * share.bed)),
+      hand(kitchenHand(18.8 * share.kitchen)),
+    ];
+    const house = To.map((_, i) => rooms.reduce((s, r) => s + r[i]!.total, 0));
+    const blockIndex = house.indexOf(Math.max(...house));
+    expect(h.block.hour).toBe(blockIndex + 1);
+    expect(h.totals.sensibleBtuh).toBe(house[blockIndex]);
+    const peaks = rooms.reduce((s, r) => s + r[peakOf(r)]!.total, 0);
+    expect(h.block.sumOfRoomPeaksSensibleBtuh).toBe(peaks);
+    expect(h.totals.sensibleBtuh).toBeLessThan(peaks); // the rooms peak at different hours
+    // Heating leakage: 1.08 × 37.6 × 60 = 2,436.5 in all, by envelope: living 24.231 CFM → 1,570.1 → 1,570,
+    // bedroom 10.027 → 649.7 → 650, kitchen 3.342 → 216.6 → 217
+    expect(h.rooms.map((r) => r.heatLoss.infiltration)).toEqual([1570, 650, 217]);
+    // Latent: leakage 0.68 × 18.8 × 33.807 = 432.2 (split 278 + 115 + 39 after rounding) + people 461 + 307 = 1,200
+    expect(h.totals.latentBtuh).toBe(278 + 115 + 39 + 461 + 307);
+    expect(h.totals.coolingBtuh).toBe(h.totals.sensibleBtuh + h.totals.latentBtuh);
     expect(h.psychrometrics.deltaGrains).toBeCloseTo(33.81, 2);
     expect(h.psychrometrics.indoorDewPointF).toBeCloseTo(55.12, 1);
-    expect(h.notes.length).toBeGreaterThan(5);
+    expect(h.internalGains.defaulted).toBe(false); // people and a TV are entered
+    expect(h.notes.some((n) => n.includes('block load'))).toBe(true);
     expect(h.isEstimate).toBe(true);
   });
 });

@@ -1,7 +1,7 @@
 import { CalcError } from '../errors';
 import { electricalPlan, type ElectricalPlan } from '../electrical/plan';
 import { m2FromFt2 } from '../units';
-import { homeLoadFromParsed, type HomeLoad } from '../loads/home-load';
+import { coincidentLoad, homeLoadFromParsed, type HomeLoad } from '../loads/home-load';
 import { parseOrThrow } from '../parse';
 import { priceLines, priceOption, type OptionPrice, type PricedLine } from '../pricing/price';
 import {
@@ -158,17 +158,18 @@ export function computeDesignFromParsed({
   const systems: SystemResult[] = design.systems.map((s, si) => {
     const outdoor = outdoorOfSystem[si] ?? lookup(outdoorUnits, s.outdoorUnitKey, 'UNKNOWN_EQUIPMENT', []);
     const indoorByZone = new Map<string, IndoorUnit>();
-    const sum = { sensibleBtuh: 0, latentBtuh: 0, heatingBtuh: 0 };
+    const servedRooms: string[] = [];
     const circuits = s.circuits.map((c) => {
       const zone = lookup(zoneByKey, c.zoneKey, 'UNKNOWN_ZONE', []);
       const indoor = lookup(indoorUnits, zone.indoorUnitKey, 'UNKNOWN_EQUIPMENT', []);
       indoorByZone.set(c.zoneKey, indoor);
       const load = lookup(perZone, c.zoneKey, 'UNKNOWN_ZONE', []);
-      sum.sensibleBtuh += load.sensibleBtuh;
-      sum.latentBtuh += load.latentBtuh;
-      sum.heatingBtuh += load.heatingBtuh;
+      for (const id of zone.roomIds) if (!servedRooms.includes(id)) servedRooms.push(id);
       return { circuit: c, indoor, roomAreaM2: m2FromFt2({ ft2: load.headRoomAreaFt2 }) };
     });
+    // The outdoor unit meets the coincident load of every room it serves (one peak hour for all of them).
+    const c = coincidentLoad({ loads, roomIds: servedRooms });
+    const sum = { sensibleBtuh: c.sensibleBtuh, latentBtuh: c.latentBtuh, heatingBtuh: c.heatingBtuh };
     const sizing = checkSizing({
       unit: outdoor,
       equipmentType: outdoor.equipmentType,

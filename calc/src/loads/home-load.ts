@@ -1,15 +1,40 @@
+import { ventilationCfm62_2 } from '../air';
 import { INFILTRATION_TIGHTNESS } from '../construction-defaults';
+import { CalcError } from '../errors';
+import { floorAreaFt2 } from '../geometry';
 import { parseOrThrow } from '../parse';
 import { roundHalfUp } from '../rounding';
-import { homeInputSchema, type Home, type HomeInput } from '../schemas/home';
+import { homeInputSchema, type Home, type HomeInput, type VentilationKind } from '../schemas/home';
 import { BTUH_PER_TON } from '../units';
 import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
+import { designDayContext, HOURS, type DesignDayContext } from './design-day-context';
+import { BLOWER_DOOR_N, DEFAULT_RECOVERY_SENSIBLE, RLF_INTERNAL, SUMMER_LEAKAGE_FRACTION } from './hourly-method';
 import { METHOD_NOTES } from './notes';
-import { roomLoadFromParsed, type LoadComponents, type RoomLoad } from './room-load';
+import {
+  exposedEnvelopeFt2,
+  roomComponentsAt,
+  roomSolarAt,
+  roomHourly,
+  roomLoadFromHourly,
+  type LoadComponents,
+  type RoomAir,
+  type RoomHourly,
+  type RoomLoad,
+} from './room-load';
 
-/** Whole-home estimated loads. */
+/** One hour of the design day for the whole home. */
+export interface HomeHour {
+  readonly hour: number;
+  readonly outdoorDryBulbF: number;
+  readonly sensibleBtuh: number;
+  readonly latentBtuh: number;
+  readonly windowsSolarBtuh: number;
+}
+
+/** Whole-home estimated loads. Cooling totals are the block (coincident) load at the home's peak hour. */
 export interface HomeLoad {
   readonly rooms: readonly RoomLoad[];
+  /** Sensible gain of all rooms at the block hour, by component. */
   readonly sensibleGain: LoadComponents;
   readonly latentGain: LoadComponents;
   readonly heatLoss: LoadComponents;
@@ -23,6 +48,43 @@ export interface HomeLoad {
     /** Cooling Btu/h ÷ 12,000, 2 decimals (half-up). */
     readonly coolingTons: number;
     readonly floorAreaFt2: number;
+  };
+  /** The block load: the hour at which the sum of all rooms peaks. */
+  readonly block: {
+    readonly hour: number;
+    readonly sensibleBtuh: number;
+    readonly latentBtuh: number;
+    readonly coolingBtuh: number;
+    /** Sum of each room's own sensible peak (what sizing by room peaks would use). */
+    readonly sumOfRoomPeaksSensibleBtuh: number;
+  };
+  readonly hourly: readonly HomeHour[];
+  readonly designDay: {
+    readonly latitudeDeg: number;
+    readonly latitudeAssumed: boolean;
+    readonly month: number;
+    readonly dayOfYear: number;
+    readonly tauB: number;
+    readonly tauD: number;
+    readonly skySource: string;
+    readonly skyIsGeneric: boolean;
+  };
+  readonly air: {
+    readonly winterAch: number;
+    readonly summerAch: number;
+    readonly winterCfm: number;
+    readonly summerCfm: number;
+    readonly leakageBasis: 'tightness' | 'blower-door';
+    readonly ventilationKind: VentilationKind;
+    readonly ventilationCfm: number;
+    readonly bedrooms: number;
+  };
+  readonly internalGains: {
+    /** True when no room had people or appliances entered and the whole-home default was used. */
+    readonly defaulted: boolean;
+    readonly occupants: number;
+    readonly sensibleBtuh: number;
+    readonly latentBtuh: number;
   };
   readonly psychrometrics: {
     readonly pressurePsia: number;
@@ -45,6 +107,7 @@ function sumComponents(sets: readonly LoadComponents[]): LoadComponents {
     ceiling = 0,
     floor = 0,
     infiltration = 0,
+    ventilation = 0,
     people = 0,
     appliances = 0,
     total = 0;
@@ -56,24 +119,176 @@ function sumComponents(sets: readonly LoadComponents[]): LoadComponents {
     ceiling += c.ceiling;
     floor += c.floor;
     infiltration += c.infiltration;
+    ventilation += c.ventilation;
     people += c.people;
     appliances += c.appliances;
     total += c.total;
   }
-  return { walls, windowsConduction, windowsSolar, doors, ceiling, floor, infiltration, people, appliances, total };
+  return {
+    walls,
+    windowsConduction,
+    windowsSolar,
+    doors,
+    ceiling,
+    floor,
+    infiltration,
+    ventilation,
+    people,
+    appliances,
+    total,
+  };
+}
+
+/** Bedrooms: entered, else the rooms whose name says "bed", at least 1. [OWN: stated rule] */
+export function homeBedrooms(home: Home): number {
+  if (home.bedrooms !== undefined) return home.bedrooms;
+  let n = 0;
+  for (const r of home.rooms) if (/bed/i.test(r.name)) n += 1;
+  return Math.max(1, n);
+}
+
+/**
+ * Ventilation air that loads the house, CFM, by system [MEM: ASHRAE Fundamentals ch. 16 combination of
+ * unbalanced ventilation with leakage: Q = max(Q_unbal, Q_inf + ½·Q_unbal)]:
+ * - none: 0; balanced: Q; ERV/HRV: Q·(1 − ε) (sensible; latent with the latent effectiveness, HRV 0);
+ * - exhaust or supply: the part above leakage, max(Q − Q_inf, ½·Q) — season by season.
+ */
+function ventilationLoads(home: Home, q: number, summerInf: number, winterInf: number) {
+  const v = home.ventilation;
+  const kind = v?.kind ?? 'none';
+  if (kind === 'none' || q <= 0) return { cooling: 0, latent: 0, heating: 0 };
+  if (kind === 'balanced') return { cooling: q, latent: q, heating: q };
+  if (kind === 'erv-hrv') {
+    const es = v?.sensibleEffectiveness ?? DEFAULT_RECOVERY_SENSIBLE;
+    const el = v?.latentEffectiveness ?? 0;
+    return { cooling: q * (1 - es), latent: q * (1 - el), heating: q * (1 - es) };
+  }
+  const s = Math.max(q - summerInf, 0.5 * q);
+  return { cooling: s, latent: s, heating: Math.max(q - winterInf, 0.5 * q) };
+}
+
+/** The whole-home work before rounding into the result: each room's hourly table and the block hour. */
+export interface HomeWork {
+  readonly rooms: readonly RoomHourly[];
+  readonly blockIndex: number;
+  readonly houseHourly: Float64Array;
+}
+
+/**
+ * The block hour of a set of room hourly profiles (index 0–23, earliest on ties) and its sum: the
+ * live path recombines the block after one room's hours change without recomputing the others.
+ */
+export function recombineBlock(profiles: readonly ArrayLike<number>[]): { index: number; sensibleBtuh: number } {
+  const sum = new Float64Array(HOURS);
+  for (const p of profiles) for (let h = 0; h < HOURS; h += 1) sum[h] = (sum[h] ?? 0) + (p[h] ?? 0);
+  let best = 0;
+  for (let h = 1; h < HOURS; h += 1) if ((sum[h] ?? 0) > (sum[best] ?? 0)) best = h;
+  return { index: best, sensibleBtuh: sum[best] ?? 0 };
 }
 
 /** Whole-home loads from a parsed home (engine path; no validation). */
 export function homeLoadFromParsed(
   home: Home,
   psy: DesignPsychrometrics = designPsychrometrics(home.designConditions),
+  ctx: DesignDayContext = designDayContext(home.designConditions),
 ): HomeLoad {
-  const ach = INFILTRATION_TIGHTNESS[home.tightness].value;
-  const rooms = home.rooms.map((r) => roomLoadFromParsed(r, psy, ach));
-  const sensibleGain = sumComponents(rooms.map((r) => r.sensibleGain));
+  // House leakage (winter ACH from tightness or blower door; summer half), shared by exposed envelope.
+  let volume = 0;
+  let floorArea = 0;
+  let exposedTotal = 0;
+  const exposed: number[] = [];
+  const areas: number[] = [];
+  for (const r of home.rooms) {
+    const a = floorAreaFt2(r);
+    areas.push(a);
+    floorArea += a;
+    volume += a * r.ceilingHeightFt;
+    const e = r.achOverride === undefined ? exposedEnvelopeFt2(r) : 0;
+    exposed.push(e);
+    exposedTotal += e;
+  }
+  const leakageBasis = home.blowerDoorCfm50 !== undefined ? 'blower-door' : 'tightness';
+  const winterAch =
+    home.blowerDoorCfm50 !== undefined && volume > 0
+      ? (home.blowerDoorCfm50 * 60) / volume / BLOWER_DOOR_N
+      : INFILTRATION_TIGHTNESS[home.tightness].value;
+  const winterHouse = (winterAch * volume) / 60;
+  const summerHouse = winterHouse * SUMMER_LEAKAGE_FRACTION;
+  const bedrooms = homeBedrooms(home);
+  const ventKind = home.ventilation?.kind ?? 'none';
+  const q =
+    ventKind === 'none' ? 0 : (home.ventilation?.cfm ?? ventilationCfm62_2({ floorAreaFt2: floorArea, bedrooms }));
+  const vent = ventilationLoads(home, q, summerHouse, winterHouse);
+
+  let anyInternal = false;
+  for (const r of home.rooms) if (r.occupants > 0 || r.appliances.length > 0) anyInternal = true;
+  const occupants = bedrooms + 1;
+  const kitchens = home.rooms.filter((r) => /kitchen/i.test(r.name));
+  const kitchenArea = kitchens.reduce((s, r) => s + floorAreaFt2(r), 0);
+
+  const work: RoomHourly[] = [];
+  const houseHourly = new Float64Array(HOURS);
+  home.rooms.forEach((room, i) => {
+    const a = areas[i] ?? 0;
+    const areaShare = floorArea > 0 ? a / floorArea : 0;
+    let winterCfm: number;
+    if (room.achOverride !== undefined) winterCfm = (room.achOverride * a * room.ceilingHeightFt) / 60;
+    else winterCfm = exposedTotal > 0 ? (winterHouse * (exposed[i] ?? 0)) / exposedTotal : 0;
+    const summerCfm = room.achOverride !== undefined ? winterCfm : winterCfm * SUMMER_LEAKAGE_FRACTION;
+    let defaultInternal: RoomAir['defaultInternal'];
+    if (!anyInternal) {
+      // Base part to the kitchen(s) by their area (all rooms when none is named so); area and people parts by area.
+      const baseShare = kitchenArea > 0 ? (/kitchen/i.test(room.name) ? a / kitchenArea : 0) : areaShare;
+      defaultInternal = {
+        peopleSensible: RLF_INTERNAL.sensiblePerOccupant * occupants * areaShare,
+        peopleLatent: RLF_INTERNAL.latentPerOccupant * occupants * areaShare,
+        otherSensible: RLF_INTERNAL.sensibleBase * baseShare + RLF_INTERNAL.sensiblePerFt2 * a,
+        otherLatent: RLF_INTERNAL.latentBase * baseShare + RLF_INTERNAL.latentPerFt2 * a,
+      };
+    }
+    const air: RoomAir = {
+      summerCfm,
+      winterCfm,
+      ventCfm: q * areaShare,
+      ventCoolingSensibleCfm: vent.cooling * areaShare,
+      ventLatentCfm: vent.latent * areaShare,
+      ventHeatingCfm: vent.heating * areaShare,
+      defaultInternal,
+    };
+    const w = roomHourly(room, psy, ctx, air);
+    for (let h = 0; h < HOURS; h += 1) houseHourly[h] = (houseHourly[h] ?? 0) + (w.hourly[h] ?? 0);
+    work.push(w);
+  });
+  let block = 0;
+  for (let h = 1; h < HOURS; h += 1) if ((houseHourly[h] ?? 0) > (houseHourly[block] ?? 0)) block = h;
+
+  const rooms = work.map((w) => roomLoadFromHourly(w, psy, block));
+  const sensibleGain = sumComponents(work.map((w) => roomComponentsAt(w, block)));
   const latentGain = sumComponents(rooms.map((r) => r.latentGain));
   const heatLoss = sumComponents(rooms.map((r) => r.heatLoss));
   const cooling = sensibleGain.total + latentGain.total;
+  let sumPeaks = 0;
+  for (const r of rooms) sumPeaks += r.sensibleGain.total;
+  const hourly: HomeHour[] = [];
+  for (let h = 0; h < HOURS; h += 1) {
+    let solar = 0;
+    for (const w of work) solar += roomSolarAt(w, h);
+    hourly.push({
+      hour: h + 1,
+      outdoorDryBulbF: roundHalfUp(ctx.outdoorF[h] ?? 0, 1),
+      sensibleBtuh: houseHourly[h] ?? 0,
+      latentBtuh: latentGain.total,
+      windowsSolarBtuh: solar,
+    });
+  }
+  const internalS = anyInternal
+    ? 0
+    : RLF_INTERNAL.sensibleBase +
+      RLF_INTERNAL.sensiblePerFt2 * floorArea +
+      RLF_INTERNAL.sensiblePerOccupant * occupants;
+  const internalL = anyInternal
+    ? 0
+    : RLF_INTERNAL.latentBase + RLF_INTERNAL.latentPerFt2 * floorArea + RLF_INTERNAL.latentPerOccupant * occupants;
   return {
     rooms,
     sensibleGain,
@@ -91,6 +306,40 @@ export function homeLoadFromParsed(
         1,
       ),
     },
+    block: {
+      hour: block + 1,
+      sensibleBtuh: sensibleGain.total,
+      latentBtuh: latentGain.total,
+      coolingBtuh: cooling,
+      sumOfRoomPeaksSensibleBtuh: sumPeaks,
+    },
+    hourly,
+    designDay: {
+      latitudeDeg: ctx.latitudeDeg,
+      latitudeAssumed: ctx.latitudeAssumed,
+      month: ctx.month,
+      dayOfYear: ctx.dayOfYear,
+      tauB: ctx.tauB,
+      tauD: ctx.tauD,
+      skySource: ctx.skySource,
+      skyIsGeneric: ctx.skyIsGeneric,
+    },
+    air: {
+      winterAch: roundHalfUp(winterAch, 3),
+      summerAch: roundHalfUp(winterAch * SUMMER_LEAKAGE_FRACTION, 3),
+      winterCfm: roundHalfUp(winterHouse, 1),
+      summerCfm: roundHalfUp(summerHouse, 1),
+      leakageBasis,
+      ventilationKind: ventKind,
+      ventilationCfm: roundHalfUp(q, 1),
+      bedrooms,
+    },
+    internalGains: {
+      defaulted: !anyInternal,
+      occupants: anyInternal ? home.rooms.reduce((s, r) => s + r.occupants, 0) : occupants,
+      sensibleBtuh: roundHalfUp(internalS),
+      latentBtuh: roundHalfUp(internalL),
+    },
     psychrometrics: {
       pressurePsia: roundHalfUp(psy.pressurePsia, 3),
       altitudeFactor: roundHalfUp(psy.altitudeFactor, 4),
@@ -105,10 +354,62 @@ export function homeLoadFromParsed(
 }
 
 /**
- * Whole-home sensible/latent heat gain and heat loss, Btu/h, with per-room and per-
- * component breakdowns, sensible heat ratio and tons. Validates the home (CalcError
- * INVALID_INPUT with field paths). Rounding: components to 1 Btu/h, totals are sums.
+ * Whole-home sensible/latent heat gain (the block load at the home's peak hour of the design day)
+ * and heat loss, Btu/h, with per-room figures (each room's own peak) and per-component breakdowns,
+ * the hourly profile, sensible heat ratio and tons. Validates the home (CalcError INVALID_INPUT with
+ * field paths). Rounding: components to 1 Btu/h, totals are sums.
  */
 export function homeLoad({ home }: { readonly home: HomeInput }): HomeLoad {
   return homeLoadFromParsed(parseOrThrow(homeInputSchema, home));
+}
+
+/** The coincident load of a group of rooms: the hour at which their summed sensible gain peaks. */
+export interface CoincidentLoad {
+  readonly hour: number;
+  readonly sensibleBtuh: number;
+  readonly latentBtuh: number;
+  readonly coolingBtuh: number;
+  readonly heatingBtuh: number;
+  /** Sum of the group's rooms' own sensible peaks (≥ sensibleBtuh). */
+  readonly sumOfRoomPeaksSensibleBtuh: number;
+  readonly hourlySensibleBtuh: readonly number[];
+}
+
+/**
+ * Coincident (block) load of any group of a home's rooms — what one system serving them meets.
+ * Throws UNKNOWN_ROOM (path `roomIds[i]`) for an id not in the loads. Latent and heating add up.
+ */
+export function coincidentLoad({
+  loads,
+  roomIds,
+}: {
+  readonly loads: Pick<HomeLoad, 'rooms'>;
+  readonly roomIds: readonly string[];
+}): CoincidentLoad {
+  const byId = new Map<string, RoomLoad>();
+  for (const r of loads.rooms) byId.set(r.roomId, r);
+  const hourly = new Array<number>(HOURS).fill(0);
+  let latent = 0;
+  let heating = 0;
+  let sumPeaks = 0;
+  roomIds.forEach((id, i) => {
+    const r = byId.get(id);
+    if (!r) throw new CalcError('UNKNOWN_ROOM', [{ path: ['roomIds', i], message: `Room "${id}" is not in the home` }]);
+    for (let h = 0; h < HOURS; h += 1) hourly[h] = (hourly[h] ?? 0) + (r.hourlySensibleBtuh[h] ?? 0);
+    latent += r.latentGain.total;
+    heating += r.heatLoss.total;
+    sumPeaks += r.sensibleGain.total;
+  });
+  let best = 0;
+  for (let h = 1; h < HOURS; h += 1) if ((hourly[h] ?? 0) > (hourly[best] ?? 0)) best = h;
+  const sensible = hourly[best] ?? 0;
+  return {
+    hour: best + 1,
+    sensibleBtuh: sensible,
+    latentBtuh: latent,
+    coolingBtuh: sensible + latent,
+    heatingBtuh: heating,
+    sumOfRoomPeaksSensibleBtuh: sumPeaks,
+    hourlySensibleBtuh: hourly,
+  };
 }

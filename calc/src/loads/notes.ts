@@ -1,15 +1,20 @@
-import { IRRADIANCE_SOURCE, PEOPLE_SOURCE } from '../construction-defaults';
+import { PEOPLE_SOURCE } from '../construction-defaults';
+import { DAILY_RANGE_SOURCE } from '../solar/design-day';
+import { SOLAR_STORAGE_SOURCE } from './hourly-method';
 
 /** Plain-word statement of the load method, attached to every room and home result. */
 export const METHOD_NOTES: readonly string[] = [
-  'Estimate only: a simplified room-by-room method, not a full code load calculation.',
-  'Walls, doors, ceilings, framed floors and window conduction: U × area × temperature difference [PUB: U-factor definition].',
-  'Window cooling temperature difference is reduced by 0.46 × daily range [MEM: ASHRAE Fundamentals ch. 17 RLF].',
-  `Sun through glass: area × SHGC × peak irradiance for the facing × interior shading factor; the irradiance figures are a documented simplification ${IRRADIANCE_SOURCE}.`,
-  'Attic and roof ceilings are taken hotter than outdoors in summer (+30 °F attic, +40 °F roof); crawl spaces, basements and garages sit part-way between indoor and outdoor [TRADE simplification].',
+  'Estimate only: an hour-by-hour design-day method after ASHRAE Handbook—Fundamentals, not a full code load calculation.',
+  'Cooling is worked out for every hour of the design day (the 21st of the design month, solar time). Each room shows its own peak hour; the whole-home figure is the block load — the hour at which all rooms together peak.',
+  `Outdoor temperature each hour: design dry bulb − fraction × daily range ${DAILY_RANGE_SOURCE}.`,
+  'Sun position and clear-sky sun: ASHRAE Handbook—Fundamentals 2013 ch. 14 equations and its 2013 clear-sky model with the site’s optical depths τb and τd (or a generic default, labelled as such).',
+  `Sun through glass: area × SHGC × interior shading × (beam on the glass, less an overhang’s shadow, + sky and ground diffuse); part of it is stored by the room and reaches the load in later hours ${SOLAR_STORAGE_SOURCE}.`,
+  'Walls, doors and roofs: U × area × sol-air temperature difference (absorptance from the colour), with a time lag and damping for the construction’s mass [PUB: ASHRAE ch. 18 sol-air; MEM: decrement-factor method]. Attic air from the roof’s sol-air temperature, less with a radiant barrier [OWN/TRADE].',
+  'Window conduction: U × area × (outdoor that hour − indoor).',
   'Slab floors lose heat at the exposed edge: F-factor × exposed perimeter × temperature difference [MEM: ASHRAE 90.1/IECC F-factors].',
-  'Air leakage: air changes per hour × volume ÷ 60; sensible 1.08 × CFM × ΔT, latent 0.68 × CFM × Δgrains, both × altitude factor [PUB: §1 constants].',
-  `People: ${PEOPLE_SOURCE}; counted for cooling only.`,
-  'Appliances and lights: watts × 3.412 Btu/h per W; counted for cooling only, no heating credit.',
+  'Air leakage: winter air changes from the tightness (or a blower-door CFM50 ÷ 20 [TRADE]), summer half of it [TRADE/MEM]; the house’s leakage is shared among rooms by outside envelope area, so interior rooms get none. Sensible 1.08 × CFM × ΔT, latent 0.68 × CFM × Δgrains, both × altitude factor.',
+  'Ventilation: the ASHRAE 62.2 rate 0.03 cfm/ft² + 7.5 cfm × (bedrooms + 1) unless entered; balanced in full, ERV/HRV after recovery, exhaust or supply only the part above leakage [MEM: ASHRAE ch. 16]; shared to rooms by floor area.',
+  `People: ${PEOPLE_SOURCE}. When no room has people or appliances entered, the whole-home default 464 + 0.7 × ft² + 75 × occupants sensible and 68 + 0.07 × ft² + 41 × occupants latent is used, occupants = bedrooms + 1 [MEM: ASHRAE ch. 17 RLF]; its fixed part goes to the kitchen, the rest by floor area.`,
+  'Heating: conduction, slab edge, winter leakage and ventilation at the heating design temperature; no credit for sun, people or appliances.',
   'Humidity ratios: ASHRAE Handbook—Fundamentals 2017 ch. 1 psychrometric equations at the station pressure for the elevation.',
 ];

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { bounded } from './fields';
+import { bounded, boundedInt } from './fields';
 
 /**
  * Site design conditions (°F, %, ft). Cooling outdoor humidity is given either as the
@@ -18,6 +18,14 @@ export const designConditionsSchema = z
     dailyRangeF: bounded('Daily temperature range', 0, 50, '°F').default(20),
     elevationFt: bounded('Elevation', -300, 14000, 'ft').default(0),
     source: z.string().max(200, 'Source must be at most 200 characters').optional(),
+    /** Site latitude, degrees (north positive). Unknown → calc assumes 40° N and says so. */
+    latitudeDeg: bounded('Latitude', -60, 70, '°').optional(),
+    /** Month of the cooling design day (its 21st). [PUB: ASHRAE ch. 14 monthly design days] */
+    designMonth: boundedInt('Design month', 1, 12).default(7),
+    /** Clear-sky optical depths of the site and month (ASHRAE ch. 14 climatic data); both or neither. */
+    clearSkyTauB: bounded('Beam optical depth τb', 0.1, 1.5).optional(),
+    clearSkyTauD: bounded('Diffuse optical depth τd', 1, 3.5).optional(),
+    clearSkySource: z.string().max(200, 'Source must be at most 200 characters').optional(),
   })
   .superRefine((d, ctx) => {
     if (d.outdoorCoolingWetBulbF === undefined && d.outdoorCoolingGrains === undefined) {
@@ -25,6 +33,13 @@ export const designConditionsSchema = z
         code: 'custom',
         path: ['outdoorCoolingWetBulbF'],
         message: 'Enter the coincident wet bulb or the outdoor humidity in grains',
+      });
+    }
+    if ((d.clearSkyTauB === undefined) !== (d.clearSkyTauD === undefined)) {
+      ctx.addIssue({
+        code: 'custom',
+        path: [d.clearSkyTauB === undefined ? 'clearSkyTauB' : 'clearSkyTauD'],
+        message: 'Enter both optical depths (τb and τd) from the same climatic table, or neither',
       });
     }
     if (d.outdoorCoolingWetBulbF !== undefined && d.outdoorCoolingWetBulbF > d.outdoorCoolingDryBulbF) {

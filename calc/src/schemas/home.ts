@@ -1,11 +1,27 @@
 import { z } from 'zod';
-import { keyField, nameField } from './fields';
+import { bounded, boundedInt, keyField, nameField } from './fields';
 import { designConditionsSchema } from './design-conditions';
 import { roomInputSchema } from './room-input';
 
 /** Envelope tightness keys of the construction defaults. */
 export const tightnessSchema = z.enum(['very-tight', 'tight', 'average', 'leaky', 'very-leaky'], {
   error: 'Choose how tight the house is',
+});
+
+/** Whole-house mechanical ventilation system. */
+export const ventilationKindSchema = z.enum(['none', 'exhaust', 'supply', 'balanced', 'erv-hrv'], {
+  error: 'Choose the ventilation system',
+});
+
+/**
+ * Whole-house ventilation: the kind, its airflow (default: the ASHRAE 62.2 rate) and, for an
+ * ERV/HRV, its sensible and latent effectiveness (an HRV recovers no moisture: latent 0).
+ */
+export const ventilationSchema = z.object({
+  kind: ventilationKindSchema.default('none'),
+  cfm: bounded('Ventilation airflow', 0, 2000, 'cfm').optional(),
+  sensibleEffectiveness: bounded('Sensible effectiveness', 0, 0.95).optional(),
+  latentEffectiveness: bounded('Latent effectiveness', 0, 0.9).optional(),
 });
 
 /** A home: its design conditions, its tightness and its rooms (unique ids). */
@@ -15,6 +31,10 @@ export const homeInputSchema = z
     name: nameField('Home name').optional(),
     designConditions: designConditionsSchema,
     tightness: tightnessSchema.default('average'),
+    /** Blower-door airflow at 50 Pa; when given it replaces the tightness guess. */
+    blowerDoorCfm50: bounded('Blower-door CFM50', 50, 20000, 'cfm').optional(),
+    bedrooms: boundedInt('Bedrooms', 0, 20).optional(),
+    ventilation: ventilationSchema.optional(),
     rooms: z.array(roomInputSchema).min(1, 'Add at least one room').max(200, 'At most 200 rooms'),
   })
   .superRefine((home, ctx) => {
@@ -29,3 +49,5 @@ export const homeInputSchema = z
 export type HomeInput = z.input<typeof homeInputSchema>;
 export type Home = z.output<typeof homeInputSchema>;
 export type Tightness = z.output<typeof tightnessSchema>;
+export type Ventilation = z.output<typeof ventilationSchema>;
+export type VentilationKind = z.output<typeof ventilationKindSchema>;

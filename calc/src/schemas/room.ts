@@ -18,6 +18,8 @@ export const doorTypeSchema = z.enum(['wood-solid', 'insulated-steel', 'fibergla
 export const ceilingInsulationSchema = z.enum(['none', 'r11', 'r19', 'r30', 'r38', 'r49', 'r60'], {
   error: 'Choose an insulation level',
 });
+/** Outside colour of a wall or roof (sets the solar absorptance for sol-air). */
+export const surfaceColorSchema = z.enum(['light', 'medium', 'dark'], { error: 'Choose light, medium or dark' });
 export const floorInsulationSchema = z.enum(['none', 'r13', 'r19', 'r30'], { error: 'Choose an insulation level' });
 
 /** A window (or a group of `count` equal windows): width × height in inches, or an area in ft². */
@@ -31,6 +33,9 @@ export const windowSchema = z
     uFactor: bounded('Window U-factor', 0.1, 1.5, 'Btu/h·ft²·°F').optional(),
     shgc: bounded('Window SHGC', 0.05, 0.9).optional(),
     interiorShading: interiorShadingSchema.default('none'),
+    /** Exterior overhang over the window: how far it sticks out, and its height above the window top. */
+    overhangDepthFt: bounded('Overhang depth', 0, 20, 'ft').optional(),
+    overhangGapFt: bounded('Overhang height above the window', 0, 20, 'ft').optional(),
   })
   .refine((w) => w.areaFt2 !== undefined || (w.widthIn !== undefined && w.heightIn !== undefined), {
     message: 'Enter the window width and height, or its area',
@@ -59,6 +64,7 @@ export const wallSchema = z.object({
   heightFt: bounded('Wall height', 2, 40, 'ft').optional(),
   construction: wallConstructionSchema.default('wood-2x4-r13'),
   uFactor: bounded('Wall U-factor', 0.01, 1, 'Btu/h·ft²·°F').optional(),
+  color: surfaceColorSchema.optional(),
   windows: z.array(windowSchema).max(20, 'At most 20 window entries per wall').default([]),
   doors: z.array(doorSchema).max(6, 'At most 6 door entries per wall').default([]),
 });
@@ -67,8 +73,17 @@ export const wallSchema = z.object({
 export const aboveSchema = z.discriminatedUnion(
   'kind',
   [
-    z.object({ kind: z.literal('attic'), insulation: ceilingInsulationSchema.default('r30') }),
-    z.object({ kind: z.literal('roof'), insulation: ceilingInsulationSchema.default('r30') }),
+    z.object({
+      kind: z.literal('attic'),
+      insulation: ceilingInsulationSchema.default('r30'),
+      roofColor: surfaceColorSchema.optional(),
+      radiantBarrier: z.boolean().optional(),
+    }),
+    z.object({
+      kind: z.literal('roof'),
+      insulation: ceilingInsulationSchema.default('r30'),
+      roofColor: surfaceColorSchema.optional(),
+    }),
     z.object({ kind: z.literal('conditioned') }),
   ],
   { error: 'Choose what is above the room' },
@@ -108,3 +123,4 @@ export type Wall = z.output<typeof wallSchema>;
 export type Above = z.output<typeof aboveSchema>;
 export type Below = z.output<typeof belowSchema>;
 export type Appliance = z.output<typeof applianceSchema>;
+export type SurfaceColor = z.output<typeof surfaceColorSchema>;

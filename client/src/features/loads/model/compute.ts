@@ -24,6 +24,7 @@ export const COMPONENT_LABELS: Record<ComponentKey, string> = {
   ceiling: 'Ceiling',
   floor: 'Floor',
   infiltration: 'Air leakage',
+  ventilation: 'Ventilation',
   people: 'People',
   appliances: 'Appliances',
 };

@@ -8,7 +8,7 @@ import type { DesignValueSource } from './enums';
  * The walk-through form shows the result as the person types; the server stores it.
  */
 
-export type DesignField = Exclude<keyof DesignConditions, 'source'>;
+export type DesignField = Exclude<keyof DesignConditions, 'source' | 'clearSkySource'>;
 
 /** Every numeric design value, in calc's order. `satisfies` keeps it in step with calc's schema. */
 export const DESIGN_FIELDS = [
@@ -21,6 +21,10 @@ export const DESIGN_FIELDS = [
   'indoorCoolingRhPercent',
   'dailyRangeF',
   'elevationFt',
+  'latitudeDeg',
+  'designMonth',
+  'clearSkyTauB',
+  'clearSkyTauD',
 ] as const satisfies readonly DesignField[];
 
 export type DesignSources = Partial<Record<DesignField, { source: DesignValueSource; note: string }>>;
@@ -37,7 +41,13 @@ export const enteredDesignSchema = z.strictObject({
   indoorCoolingRhPercent: value,
   dailyRangeF: value,
   elevationFt: value,
+  latitudeDeg: value,
+  designMonth: value,
+  clearSkyTauB: value,
+  clearSkyTauD: value,
   source: z.string().trim().max(200, { message: 'Source must be at most 200 characters' }).optional(),
+  /** Where τb and τd come from (e.g. the climatic table's station and month). */
+  clearSkySource: z.string().trim().max(200, { message: 'Source must be at most 200 characters' }).optional(),
 });
 export type EnteredDesign = z.output<typeof enteredDesignSchema>;
 
@@ -51,10 +61,12 @@ export type DesignNotes = z.output<typeof designNotesSchema>;
 export type StoredDesign = Readonly<Record<string, unknown>>;
 
 const HUMIDITY: readonly DesignField[] = ['outdoorCoolingWetBulbF', 'outdoorCoolingGrains'];
+/** τb and τd come from one climatic table: typing either drops the company default of both, and of their source. */
+const SKY: readonly DesignField[] = ['clearSkyTauB', 'clearSkyTauD'];
 
 export interface DesignResolution {
   /** The merged values before calc's defaults: what the form shows in each field. */
-  readonly shown: Partial<Record<DesignField, number>> & { source?: string };
+  readonly shown: Partial<Record<DesignField, number>> & { source?: string; clearSkySource?: string };
   /** Where each field's value comes from (standard-default: calc's default, or none). */
   readonly origin: Record<DesignField, DesignValueSource>;
   /** calc's verdict on the merged values: the conditions with its defaults applied, or the issues. */
@@ -68,12 +80,14 @@ export interface DesignResolution {
  * is the company default's source, since the values are the company's.
  */
 export function resolveDesign(entered: EnteredDesign, companyDefault: StoredDesign | null): DesignResolution {
-  const shown: Partial<Record<DesignField, number>> & { source?: string } = {};
+  const shown: Partial<Record<DesignField, number>> & { source?: string; clearSkySource?: string } = {};
   const origin = {} as Record<DesignField, DesignValueSource>;
   const humidityEntered = HUMIDITY.some((f) => entered[f] !== undefined);
+  const skyEntered = SKY.some((f) => entered[f] !== undefined);
   for (const f of DESIGN_FIELDS) {
     const typed = entered[f];
-    const fallback = humidityEntered && HUMIDITY.includes(f) ? undefined : companyDefault?.[f];
+    const dropped = (humidityEntered && HUMIDITY.includes(f)) || (skyEntered && SKY.includes(f));
+    const fallback = dropped ? undefined : companyDefault?.[f];
     if (typed !== undefined) [shown[f], origin[f]] = [typed, 'entered'];
     else if (typeof fallback === 'number') [shown[f], origin[f]] = [fallback, 'company-default'];
     else origin[f] = 'standard-default';
@@ -82,6 +96,10 @@ export function resolveDesign(entered: EnteredDesign, companyDefault: StoredDesi
   const defaultSource = companyDefault?.source;
   const source = typedSource || (typeof defaultSource === 'string' ? defaultSource : undefined);
   if (source) shown.source = source;
+  const typedSky = entered.clearSkySource?.trim();
+  const defaultSky = companyDefault?.clearSkySource;
+  const skySource = typedSky || (!skyEntered && typeof defaultSky === 'string' ? defaultSky : undefined);
+  if (skySource) shown.clearSkySource = skySource;
   const parsed = designConditionsSchema.safeParse(shown);
   if (parsed.success) return { shown, origin, conditions: parsed.data, issues: [] };
   const issues = parsed.error.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));
@@ -111,6 +129,8 @@ export function enteredOf(conditions: StoredDesign | null, sources: DesignSource
     if (sources[f]?.source === 'entered' && typeof v === 'number') out[f] = v;
   }
   if (typeof conditions.source === 'string' && conditions.source) out.source = conditions.source;
+  if (typeof conditions.clearSkySource === 'string' && conditions.clearSkySource)
+    out.clearSkySource = conditions.clearSkySource;
   return out;
 }
 

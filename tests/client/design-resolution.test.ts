@@ -8,13 +8,35 @@ import { designConditions, JOB_ID, jobRecord } from './helpers/walkthrough-harne
  * Design-condition resolution is one function both ends run (the contract's resolveDesign): the values
  * the walk-through shows while offline are the ones the server then stores, source text included.
  */
-const companyDefault = { ...designConditions, source: 'Company climate table' };
+const companyDefault = {
+  ...designConditions,
+  source: 'Company climate table',
+  latitudeDeg: 36,
+  designMonth: 7,
+  clearSkyTauB: 0.45,
+  clearSkyTauD: 2.2,
+  clearSkySource: 'Station table, July',
+};
 
 describe('resolveDesign', () => {
   it('with nothing typed, every value and the source text come from the company default', () => {
     const r = resolveDesign({}, companyDefault);
     expect(r.conditions?.source).toBe('Company climate table');
     for (const f of DESIGN_FIELDS) if (f !== 'outdoorCoolingGrains') expect(r.origin[f]).toBe('company-default');
+    expect(r.conditions?.clearSkySource).toBe('Station table, July');
+  });
+
+  it('τb and τd are one pair: typing one drops the company default of both and of their source', () => {
+    const r = resolveDesign({ clearSkyTauB: 0.5 }, companyDefault);
+    expect(r.origin.clearSkyTauB).toBe('entered');
+    expect(r.origin.clearSkyTauD).toBe('standard-default');
+    expect(r.conditions).toBeNull();
+    expect(r.issues.some((i) => i.path === 'clearSkyTauD')).toBe(true);
+    const both = resolveDesign({ clearSkyTauB: 0.5, clearSkyTauD: 2.4, clearSkySource: 'Entered' }, companyDefault);
+    expect(both.conditions).toMatchObject({ clearSkyTauB: 0.5, clearSkyTauD: 2.4, clearSkySource: 'Entered' });
+    // latitude outside −60…70 is refused with calc's message
+    const far = resolveDesign({ latitudeDeg: 75 }, companyDefault);
+    expect(far.issues).toEqual([{ path: 'latitudeDeg', message: 'Latitude must be between -60 and 70 °' }]);
   });
 
   it('a typed source text wins over the company default’s; blank falls back to it', () => {
@@ -52,7 +74,12 @@ describe('resolveDesign', () => {
   it('enteredOf and notesOf read back only what the person typed and wrote', () => {
     const r = resolveDesign({ outdoorCoolingDryBulbF: 99 }, companyDefault);
     const sources = designSourcesOf(r.conditions!, r.origin, { outdoorCoolingDryBulbF: 'Measured', elevationFt: '' });
-    expect(enteredOf(r.conditions, sources)).toEqual({ outdoorCoolingDryBulbF: 99, source: 'Company climate table' });
+    // the source texts are read back as the job stores them (like `source`, the sky source rides along)
+    expect(enteredOf(r.conditions, sources)).toEqual({
+      outdoorCoolingDryBulbF: 99,
+      source: 'Company climate table',
+      clearSkySource: 'Station table, July',
+    });
     expect(notesOf(sources)).toEqual({ outdoorCoolingDryBulbF: 'Measured' });
   });
 });

@@ -39,6 +39,13 @@ const schema = z.object({
     .int()
     .min(1)
     .default(15 * 60),
+  RESET_MAX_PER_ACCOUNT: z.coerce.number().int().min(1).default(3),
+  RESET_MAX_PER_IP: z.coerce.number().int().min(1).default(20),
+  RESET_WINDOW_SECONDS: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .default(60 * 60),
   /** `off`: this server only adds jobs and `npm run worker` (server/src/worker-main.ts) runs them. */
   QUEUE_WORKERS: z.enum(['on', 'off']).default('on'),
   QUEUE_CONCURRENCY: z.coerce.number().int().min(1).max(32).default(2),

@@ -7,3 +7,4 @@ export * from './enums';
 export * from './permissions';
 export * from './fields';
 export * from './design-conditions';
+export * from './accounts';

@@ -5,6 +5,7 @@ import { CustomerSchema } from '../modules/customers/customer.entity';
 import { JobSchema } from '../modules/jobs/job.entity';
 import { PhotoSchema } from '../modules/photos/photo.entity';
 import { OutgoingMessageSchema } from '../modules/mail/outgoing-message.entity';
+import { PasswordResetTokenSchema } from '../modules/auth/password-reset-token.entity';
 import { RoomSchema } from '../modules/rooms/room.entity';
 import {
   CompanyDataChangeSchema,
@@ -25,4 +26,5 @@ export const entities = [
   CompanyDataRowSchema,
   CompanyDataChangeSchema,
   PriceBookSettingsSchema,
+  PasswordResetTokenSchema,
 ];

@@ -3,6 +3,7 @@ import { createApiRouter } from '../lib/route';
 import type { Services } from '../services/services';
 import { authRoutes } from './auth/auth.routes';
 import { createLoginLimiter } from './auth/rate-limit';
+import { createResetLimiter } from './auth/reset-limit';
 import { outboxRoutes } from './dev/outbox.routes';
 import { healthRoutes } from './health/health.routes';
 import { staffRoutes } from './users/staff.routes';
@@ -25,7 +26,8 @@ export function mountModules(app: Express, services: Services): void {
   };
   const limiter = createLoginLimiter(services.config, services.sessionPool);
   mount('/health', healthRoutes);
-  mount('/auth', (api) => authRoutes(api, limiter));
+  const resetLimiter = createResetLimiter(services.config, services.sessionPool);
+  mount('/auth', (api) => authRoutes(api, limiter, resetLimiter));
   mount('/users', userRoutes);
   mount('/staff', staffRoutes);
   mount('/dev', outboxRoutes);

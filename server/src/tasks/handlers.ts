@@ -1,3 +1,4 @@
+import { composeResetMessage } from '../modules/auth/password.service';
 import { sendMessage } from '../modules/mail/mail.service';
 import type { Services } from '../services/services';
 import type { TaskHandlers } from './kinds';
@@ -12,7 +13,11 @@ export function taskHandlers(services: Omit<Services, 'queue'>): TaskHandlers {
         {
           mailer: services.mailer,
           clock: services.clock,
-          compose: async () => null,
+          // Only password-reset messages are stored without a body: their link is made as they go out.
+          compose: (tx, message) =>
+            message.kind === 'password-reset'
+              ? composeResetMessage(tx, message, { clock: services.clock, appOrigin: services.config.APP_ORIGIN })
+              : Promise.resolve(null),
         },
         messageId,
         run,

@@ -2,11 +2,14 @@ import type { ApiRouter } from '../../lib/route';
 import { ANY_STAFF, PUBLIC } from '../../lib/route';
 import { UserSchema } from '../users/user.entity';
 import { presentUser } from '../users/user.presenter';
-import { loginSchema } from './auth.schema';
+import { RESET_REQUESTED_MESSAGE } from '@contract';
+import { changePasswordSchema, loginSchema, passwordResetRequestSchema, passwordResetSchema } from './auth.schema';
 import { csrfToken, signIn, signOut } from './auth.service';
+import { changePassword, completePasswordReset, requestPasswordReset } from './password.service';
 import type { LoginLimiter } from './rate-limit';
+import type { ResetLimiter } from './reset-limit';
 
-export function authRoutes(api: ApiRouter, limiter: LoginLimiter): void {
+export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: ResetLimiter): void {
   api.route({
     method: 'get',
     path: '/csrf',
@@ -45,6 +48,41 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter): void {
         user: presentUser(user),
         company: { id: user.company.id, name: user.company.name, unitSystem: user.company.unitSystem },
       };
+    },
+  });
+
+  /** Change one's own password: other sessions end, this one stays. */
+  api.route({
+    method: 'post',
+    path: '/password',
+    policy: ANY_STAFF,
+    body: changePasswordSchema,
+    handler: async ({ em, req, actor, body, services }) =>
+      changePassword(em, req, { limiter, queue: services.queue, clock: services.clock }, actor, body),
+  });
+
+  /** "Forgot password": always the same 202 answer, whether or not the address has an account. */
+  api.route({
+    method: 'post',
+    path: '/password-reset',
+    policy: PUBLIC,
+    body: passwordResetRequestSchema,
+    status: 202,
+    handler: async ({ em, req, body, services }) => {
+      await requestPasswordReset(em, req, { limiter: resetLimiter, queue: services.queue }, body.email);
+      return { message: RESET_REQUESTED_MESSAGE };
+    },
+  });
+
+  /** The e-mailed link's form: a new password for the token's account; every session of it ends. */
+  api.route({
+    method: 'post',
+    path: '/password-reset/complete',
+    policy: PUBLIC,
+    body: passwordResetSchema,
+    handler: async ({ em, body, services }) => {
+      await completePasswordReset(em, { queue: services.queue, clock: services.clock, limiter }, body);
+      return { message: 'Your new password is set. Sign in with it.' };
     },
   });
 }

@@ -7,7 +7,8 @@ import type { Clock } from '../../services/services';
 import type { TaskRun } from '../../tasks/kinds';
 import { CompanySchema } from '../companies/company.entity';
 import { UserSchema } from '../users/user.entity';
-import { OutgoingMessageSchema, type MessageKind, type OutgoingMessage } from './outgoing-message.entity';
+import type { MessageKind } from '@contract';
+import { OutgoingMessageSchema, type OutgoingMessage } from './outgoing-message.entity';
 
 export interface NewMessage {
   companyId: string;

@@ -1,13 +1,8 @@
+import { MESSAGE_KINDS, MESSAGE_STATES } from '@contract';
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
 import { randomUUID } from 'node:crypto';
 import { CompanySchema } from '../companies/company.entity';
 import { UserSchema } from '../users/user.entity';
-
-export const MESSAGE_KINDS = ['new-user', 'password-changed', 'password-reset'] as const;
-export type MessageKind = (typeof MESSAGE_KINDS)[number];
-/** waiting → sent; a failed try → retrying (the queue tries again later) → … → failed after the last try. */
-export const MESSAGE_STATES = ['waiting', 'retrying', 'failed', 'sent'] as const;
-export type MessageState = (typeof MESSAGE_STATES)[number];
 
 /**
  * One e-mail the app sends, with its delivery state. The job queue's `send-email` task sends it;

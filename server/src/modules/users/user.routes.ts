@@ -1,7 +1,7 @@
 import { OWNER, type ApiRouter } from '../../lib/route';
 import { presentUser } from './user.presenter';
 import { createUserSchema, updateUserSchema, userIdParams } from './user.schema';
-import { createUser, getUser, listUsers, updateUser } from './user.service';
+import { createUser, endUserSessions, getUser, listUsers, updateUser } from './user.service';
 
 export function userRoutes(api: ApiRouter): void {
   api.route({
@@ -35,6 +35,15 @@ export function userRoutes(api: ApiRouter): void {
     body: updateUserSchema,
     handler: async ({ em, actor, params, body }) => ({
       user: presentUser(await updateUser(em, actor, params.id, body)),
+    }),
+  });
+  api.route({
+    method: 'post',
+    path: '/:id/end-sessions',
+    policy: OWNER,
+    params: userIdParams,
+    handler: async ({ em, actor, params, req }) => ({
+      ended: await endUserSessions(em, actor, params.id, req.sessionID),
     }),
   });
 }

@@ -45,12 +45,25 @@ export async function createUser(em: EntityManager, actor: Actor, queue: Queue, 
   return user;
 }
 
-/** Ends every session of a user (deactivation, and later password resets). */
-export async function endSessionsOf(em: EntityManager, userId: string): Promise<number> {
+/**
+ * Ends every session of a user (deactivation, a password change or reset, the owner's "sign out
+ * everywhere"); `exceptSid` keeps one (the session making a change to its own account).
+ */
+export async function endSessionsOf(em: EntityManager, userId: string, exceptSid?: string): Promise<number> {
   const r = await em
     .getConnection()
-    .execute<{ affectedRows?: number }>(`delete from "session" where sess->>'userId' = ?`, [userId], 'run');
+    .execute<{ affectedRows?: number }>(
+      `delete from "session" where sess->>'userId' = ? and sid <> ?`,
+      [userId, exceptSid ?? ''],
+      'run',
+    );
   return typeof r.affectedRows === 'number' ? r.affectedRows : 0;
+}
+
+/** The owner's "sign out everywhere" for one person; for the owner themself, every session but this one. */
+export async function endUserSessions(em: EntityManager, actor: Actor, id: string, currentSid: string) {
+  const user = await getUser(em, actor, id);
+  return endSessionsOf(em, user.id, user.id === actor.userId ? currentSid : undefined);
 }
 
 export async function updateUser(em: EntityManager, actor: Actor, id: string, input: UpdateUserInput): Promise<User> {

@@ -1,0 +1,35 @@
+import { z } from 'zod';
+import { emailRule, newPasswordRule, signInPasswordRule } from './fields';
+
+/** Accounts: changing one's password, the e-mailed reset link, and the e-mail the app sends. */
+
+/** How long a password-reset link works, from the moment its e-mail is sent. */
+export const RESET_LINK_MINUTES = 30;
+/** The link's token: 32 random bytes (256 bits) in base64url, so always 43 characters. */
+export const RESET_TOKEN_LENGTH = 43;
+
+export const changePasswordFields = {
+  currentPassword: signInPasswordRule,
+  newPassword: newPasswordRule,
+};
+
+export const passwordResetRequestFields = { email: emailRule };
+
+export const passwordResetFields = {
+  token: z
+    .string({ message: 'The link is not complete: open it again from the e-mail.' })
+    .regex(new RegExp(`^[A-Za-z0-9_-]{${RESET_TOKEN_LENGTH}}$`), {
+      message: 'The link is not complete: open it again from the e-mail.',
+    }),
+  password: newPasswordRule,
+};
+
+/** The same answer whether or not an account uses the address (nobody learns who has one). */
+export const RESET_REQUESTED_MESSAGE = `If an account uses that address, an e-mail with a link to set a new password is on its way. The link works for ${RESET_LINK_MINUTES} minutes.`;
+export const RESET_LINK_INVALID = 'This link has expired or has already been used. Ask for a new one.';
+
+export const MESSAGE_KINDS = ['new-user', 'password-changed', 'password-reset'] as const;
+export type MessageKind = (typeof MESSAGE_KINDS)[number];
+/** waiting → sent; a failed try → retrying (the queue tries again later) → … → failed after the last try. */
+export const MESSAGE_STATES = ['waiting', 'retrying', 'failed', 'sent'] as const;
+export type MessageState = (typeof MESSAGE_STATES)[number];

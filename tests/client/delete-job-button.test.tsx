@@ -10,7 +10,7 @@ import { createQueryClient } from '../../client/src/lib/query-client';
 import { ViewerContext, type Viewer } from '../../client/src/lib/viewer';
 import { roomTarget, type WalkthroughEdit } from '../../client/src/features/walkthrough/sync/edits';
 import { createPhotoQueue, PhotoQueueProvider } from '../../client/src/features/walkthrough/sync/photo-queue-context';
-import { memoryPhotoStorage } from '../../client/src/features/walkthrough/sync/photo-storage';
+import { memoryFileStorage } from '../../client/src/lib/offline/file-storage';
 import { WalkthroughQueueProvider } from '../../client/src/features/walkthrough/sync/queue-context';
 import type { QueueItem } from '../../client/src/lib/offline/queue';
 import { headerOf, json, mockFetch, problem } from './helpers/fetch-mock';
@@ -36,7 +36,7 @@ function renderButton(
   viewer: Viewer,
   queryClient: QueryClient = createQueryClient(),
   stored: readonly QueueItem<WalkthroughEdit>[] = [],
-  photoStorage = memoryPhotoStorage(),
+  photoStorage = memoryFileStorage(),
 ) {
   // Offline queues on memory storage, holding what the test says is waiting on the device.
   const { queue } = testQueue(
@@ -152,7 +152,7 @@ describe('DeleteJobButton', () => {
       queuedAt: '2026-01-01T00:00:00.000Z',
       payload: { kind: 'room-update', jobId, roomId: `${jobId}-room`, input: { name: 'Den' } },
     });
-    const photoStorage = memoryPhotoStorage();
+    const photoStorage = memoryFileStorage();
     const photo = (id: string, jobId: string) => ({
       id,
       seq: 1,

@@ -3,7 +3,7 @@ import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { DesignConditionsForm } from '../../client/src/features/walkthrough/components/design-conditions-form';
 import { RoomEditor } from '../../client/src/features/walkthrough/components/room-editor';
-import { SaveStatusPill, saveStatus } from '../../client/src/features/walkthrough/components/save-status-pill';
+import { SaveStatusPill, saveStatus } from '../../client/src/lib/offline/save-status-pill';
 import { UnitSystemContext } from '../../client/src/features/walkthrough/components/unit-system';
 import { designConditions, JOB_ID, jobRecord, renderWalkthrough, roomView } from './helpers/walkthrough-harness';
 import { render } from '@testing-library/react';

@@ -5,7 +5,7 @@ import { LiveSaveStatus } from '../../client/src/features/walkthrough/components
 import { RoomPhotos } from '../../client/src/features/walkthrough/components/room-photos';
 import { roomTarget } from '../../client/src/features/walkthrough/sync/edits';
 import { overlayRooms } from '../../client/src/features/walkthrough/sync/overlay';
-import { memoryPhotoStorage } from '../../client/src/features/walkthrough/sync/photo-storage';
+import { memoryFileStorage } from '../../client/src/lib/offline/file-storage';
 import { useQueueState } from '../../client/src/features/walkthrough/sync/queue-context';
 import { clearCsrfToken } from '../../client/src/lib/api-client';
 import { jobKeys } from '../../client/src/lib/job-queries';
@@ -57,7 +57,7 @@ function clientWith(rooms: RoomRecord[]) {
   return queryClient;
 }
 
-async function renderRoom(options: Parameters<typeof renderWalkthrough>[1], photoStorage = memoryPhotoStorage()) {
+async function renderRoom(options: Parameters<typeof renderWalkthrough>[1], photoStorage = memoryFileStorage()) {
   const view = await renderWalkthrough(<Room />, { ...options, photoStorage });
   started.push(view.photoQueue, view.queue);
   return { ...view, photoStorage };
@@ -193,7 +193,7 @@ describe('photos kept on the device', () => {
       },
     });
     let online = false;
-    const photoStorage = memoryPhotoStorage();
+    const photoStorage = memoryFileStorage();
     const first = await renderRoom(
       { online: () => online, queryClient: clientWith([roomRecord(bedroomInput, 3)]) },
       photoStorage,

@@ -2,7 +2,7 @@ import { roomLoad } from '@calc';
 import { act, fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { RoomEditor } from '../../client/src/features/walkthrough/components/room-editor';
-import { SaveStatusPill, saveStatus } from '../../client/src/features/walkthrough/components/save-status-pill';
+import { SaveStatusPill, saveStatus } from '../../client/src/lib/offline/save-status-pill';
 import { LiveSaveStatus } from '../../client/src/features/walkthrough/components/live-save-status';
 import { render } from '@testing-library/react';
 import {

@@ -12,7 +12,7 @@ import {
   createPhotoQueue,
   PhotoQueueProvider,
 } from '../../../client/src/features/walkthrough/sync/photo-queue-context';
-import { memoryPhotoStorage, type PhotoStorage } from '../../../client/src/features/walkthrough/sync/photo-storage';
+import { memoryFileStorage, type FileStorage } from '../../../client/src/lib/offline/file-storage';
 import { createEditSender } from '../../../client/src/features/walkthrough/sync/send-edit';
 import type { RoomView } from '../../../client/src/features/walkthrough/sync/overlay';
 
@@ -97,7 +97,7 @@ interface RenderOptions {
   queryClient?: QueryClient;
   stored?: readonly QueueItem<WalkthroughEdit>[];
   /** Waiting photos (memory): pass the same storage twice to stand for a reload. */
-  photoStorage?: PhotoStorage;
+  photoStorage?: FileStorage;
   /** Where the memory router starts (for a route component that reads its params). */
   path?: string;
 }
@@ -105,7 +105,7 @@ interface RenderOptions {
 export async function renderWalkthrough(ui: ReactNode, options: RenderOptions = {}) {
   const queryClient = options.queryClient ?? createQueryClient();
   const { queue, storage } = testQueue(queryClient, options.send, options.online, options.stored);
-  const photoStorage = options.photoStorage ?? memoryPhotoStorage();
+  const photoStorage = options.photoStorage ?? memoryFileStorage();
   // The photo queue uploads for real (tests mock fetch) and reads the same connection as the edit queue.
   const photoQueue = createPhotoQueue(queryClient, queue, {
     storage: photoStorage,

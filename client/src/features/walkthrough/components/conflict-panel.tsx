@@ -6,10 +6,11 @@ import { errorMessage } from '../../../lib/api-error';
 import { getJob, jobKeys } from '../../../lib/job-queries';
 import type { JobRecord, RoomRecord } from '../../../lib/job-records';
 import { getRoom } from '../api/get-room';
-import { diffFields, JOB_FIELD_LABELS, mergeChoices, ROOM_FIELD_LABELS, type Choice } from '../model/conflict';
+import { diffFields, mergeChoices, type Choice } from '../../../lib/offline/conflict';
+import { describe, JOB_FIELD_LABELS, ROOM_FIELD_LABELS } from '../model/conflict';
 import type { WalkthroughItem } from '../sync/edits';
 import { useWalkthroughQueue } from '../sync/queue-context';
-import { ConflictChoices } from './conflict-choices';
+import { ConflictChoices } from '../../../lib/offline/conflict-choices';
 
 /**
  * Shown when the server answered 409 to the oldest waiting edit. Reads the record as it is
@@ -109,6 +110,7 @@ function RoomConflict({
       key={item.id}
       title={`“${String(theirs.input.name ?? 'Room')}” was changed by someone else`}
       diffs={diffs}
+      describe={describe}
       onResolve={handleResolve}
     />
   );
@@ -157,6 +159,7 @@ function JobConflict({ item, jobId, onResolved }: { item: WalkthroughItem; jobId
       key={item.id}
       title="The site’s design conditions were changed by someone else"
       diffs={diffs}
+      describe={describe}
       onResolve={handleResolve}
     />
   );

@@ -6,7 +6,7 @@ import type { JobRecord } from '../../../lib/job-records';
 import { DESIGN_FIELD_SPECS } from '../model/design-fields';
 import { jobTarget, type JobChanges } from '../sync/edits';
 import { useWalkthroughQueue } from '../sync/queue-context';
-import { useDebouncedSave } from '../sync/use-debounced-save';
+import { useDebouncedSave } from '../../../lib/offline/use-debounced-save';
 import { NumberInput, SelectInput, TextInput } from './field-kit';
 
 const NOTICE =

@@ -1,7 +1,7 @@
 import { usePhotoQueueState } from '../sync/photo-queue-context';
 import { useQueueState } from '../sync/queue-context';
-import { useTypingCount } from '../sync/pending-typing';
-import { SaveStatusPill, saveStatus } from './save-status-pill';
+import { useTypingCount } from '../../../lib/offline/typing';
+import { SaveStatusPill, saveStatus } from '../../../lib/offline/save-status-pill';
 
 export function LiveSaveStatus() {
   const state = useQueueState();

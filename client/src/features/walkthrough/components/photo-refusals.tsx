@@ -1,12 +1,12 @@
 import { Alert } from '../../../components/ui/alert';
-import type { PhotoNotice } from '../sync/photo-queue';
+import type { FileNotice } from '../../../lib/offline/file-queue';
 import { usePhotoQueue, usePhotoQueueState } from '../sync/photo-queue-context';
 
 /**
  * Photos the server refused, in its words, until dismissed: the photo itself is gone from the
  * device by then, so this is the one place the person learns of it. `show` picks which ones.
  */
-export function PhotoRefusals({ show }: { show: (notice: PhotoNotice) => boolean }) {
+export function PhotoRefusals({ show }: { show: (notice: FileNotice) => boolean }) {
   const queue = usePhotoQueue();
   const refused = usePhotoQueueState().notices.filter((n) => n.kind === 'refused' && show(n));
   return refused.map((n) => (

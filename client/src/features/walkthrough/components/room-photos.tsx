@@ -3,7 +3,7 @@ import type { RoomView } from '../sync/overlay';
 import { usePhotoQueue, usePhotoQueueState } from '../sync/photo-queue-context';
 import { useQueueState } from '../sync/queue-context';
 import { PhotoRefusals } from './photo-refusals';
-import { WaitingPhoto } from './waiting-photo';
+import { WaitingFile } from './waiting-photo';
 
 /**
  * Photos of one room. On a phone the picker opens the rear camera. A new photo is kept on the
@@ -43,7 +43,7 @@ export function RoomPhotos({ jobId, room }: { jobId: string; room: RoomView }) {
           ))}
           {mine.map((p) => (
             <li key={p.id}>
-              <WaitingPhoto photo={p} />
+              <WaitingFile photo={p} />
             </li>
           ))}
         </ul>

@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import type { WaitingPhoto as Waiting } from '../sync/photo-storage';
+import type { WaitingFile as Waiting } from '../../../lib/offline/file-storage';
 
 /** A local URL for the stored bytes, released when the thumbnail goes (object URLs hold the Blob in memory). */
 function useObjectUrl(blob: Blob): string | null {
@@ -12,7 +12,7 @@ function useObjectUrl(blob: Blob): string | null {
   return url;
 }
 
-export function WaitingPhoto({ photo }: { photo: Waiting }) {
+export function WaitingFile({ photo }: { photo: Waiting }) {
   const url = useObjectUrl(photo.blob);
   return (
     <figure className="relative size-24">

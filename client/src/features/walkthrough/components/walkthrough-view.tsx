@@ -22,7 +22,7 @@ import { RoomEditor } from './room-editor';
 import { RoomListActions } from './room-list-actions';
 import { RoomTabs } from './room-tabs';
 import { UnitSystemContext } from './unit-system';
-import { clearUnsavedDraft } from '../sync/unsaved-drafts';
+import { clearUnsavedDraft } from '../../../lib/offline/drafts';
 
 /**
  * The walk-through of one job: design conditions, rooms one at a time, live loads.

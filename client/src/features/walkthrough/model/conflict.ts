@@ -1,15 +1,6 @@
 import { asNumber, asRecord, asRecords, asString } from './draft';
 
-/** A field that differs between what this person saved and what the server now has. */
-export interface FieldDiff {
-  readonly key: string;
-  readonly label: string;
-  readonly mine: unknown;
-  readonly theirs: unknown;
-}
-
-export type Choice = 'mine' | 'theirs';
-
+/** The walk-through's field names and how its values read side by side (lib/offline/conflict.ts compares). */
 export const ROOM_FIELD_LABELS: Record<string, string> = {
   name: 'Room name',
   floorLevel: 'Floor level',
@@ -38,34 +29,6 @@ export const JOB_FIELD_LABELS: Record<string, string> = {
   elevationFt: 'Elevation (ft)',
   source: 'Source of the design values',
 };
-
-const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
-
-/** Top-level fields whose values differ; a whole wall list counts as one field. */
-export function diffFields(
-  mine: Record<string, unknown>,
-  theirs: Record<string, unknown>,
-  labels: Record<string, string>,
-): FieldDiff[] {
-  return Object.keys(labels)
-    .filter((k) => !same(mine[k], theirs[k]))
-    .map((k) => ({ key: k, label: labels[k] ?? k, mine: mine[k], theirs: theirs[k] }));
-}
-
-/** Theirs as the base, with each field the person chose to keep from theirs or from mine. */
-export function mergeChoices(
-  mine: Record<string, unknown>,
-  theirs: Record<string, unknown>,
-  choices: Record<string, Choice>,
-): Record<string, unknown> {
-  const out: Record<string, unknown> = { ...theirs };
-  for (const [k, c] of Object.entries(choices)) {
-    if (c !== 'mine') continue;
-    if (mine[k] === undefined) delete out[k];
-    else out[k] = mine[k];
-  }
-  return out;
-}
 
 /** A short plain description of a value for the side-by-side view. */
 export function describe(key: string, v: unknown): string {

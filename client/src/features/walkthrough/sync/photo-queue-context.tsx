@@ -1,23 +1,24 @@
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
-import { createContext, useContext, useSyncExternalStore, type ReactNode } from 'react';
-import { PhotoQueue, type PhotoQueueOptions, type PhotoQueueState } from './photo-queue';
-import { getCurrentPerson, personKey, personStores, useCurrentPerson } from '../../../lib/offline/person';
-import { idbPhotoStorage, memoryPhotoStorage } from './photo-storage';
+import { createContext, useContext, type ReactNode } from 'react';
+import { FileQueue, type FileQueueOptions, type FileQueueState } from '../../../lib/offline/file-queue';
+import { personStores } from '../../../lib/offline/person';
+import { perPerson, useOfflineQueue } from '../../../lib/offline/use-offline-queue';
+import { idbFileStorage, memoryFileStorage } from '../../../lib/offline/file-storage';
 import { useWalkthroughQueue } from './queue-context';
 import { createPhotoSender, roomOnServer } from './send-photo';
 import type { WalkthroughQueue } from './walkthrough-queue';
 
-type Overrides = Partial<Omit<PhotoQueueOptions, 'send' | 'roomReady'>> & { readonly person?: string };
+type Overrides = Partial<Omit<FileQueueOptions, 'send' | 'roomReady'>> & { readonly person?: string };
 
 /** The app's photo queue: uploads through the API and retries whenever a room may just have reached the server. */
 export function createPhotoQueue(
   queryClient: QueryClient,
   edits: WalkthroughQueue,
   overrides: Overrides = {},
-): PhotoQueue {
+): FileQueue {
   const { person, ...options } = overrides;
-  const queue = new PhotoQueue({
-    storage: memoryPhotoStorage(),
+  const queue = new FileQueue({
+    storage: memoryFileStorage(),
     send: createPhotoSender(queryClient, person),
     roomReady: roomOnServer(queryClient, edits),
     ...options,
@@ -33,40 +34,36 @@ export function createPhotoQueue(
   return queue;
 }
 
-let shared: { readonly key: string; readonly edits: WalkthroughQueue; readonly queue: PhotoQueue } | null = null;
-
 /** The signed-in person's waiting photos, in their own store; another person's stop and stay stored. */
-export function sharedPhotoQueue(queryClient: QueryClient, edits: WalkthroughQueue): PhotoQueue {
-  const person = getCurrentPerson();
-  const key = person ? personKey(person) : '';
-  if (shared?.key !== key || shared.edits !== edits) {
-    shared?.queue.stop();
-    const queue = createPhotoQueue(queryClient, edits, {
-      storage: person ? idbPhotoStorage(personStores(person).photos) : memoryPhotoStorage(),
+export const sharedPhotoQueue = perPerson(
+  (person, { queryClient, edits }: { queryClient: QueryClient; edits: WalkthroughQueue }) =>
+    createPhotoQueue(queryClient, edits, {
+      storage: person ? idbFileStorage(personStores(person).photos) : memoryFileStorage(),
       person: person?.userId,
-    });
-    shared = { key, edits, queue };
-    void queue.start();
-  }
-  return shared.queue;
-}
+    }),
+);
 
-const PhotoQueueContext = createContext<PhotoQueue | null>(null);
+const PhotoQueueContext = createContext<FileQueue | null>(null);
 
 /** Tests hand in their own queue (memory storage). */
-export function PhotoQueueProvider({ queue, children }: { queue: PhotoQueue; children: ReactNode }) {
+export function PhotoQueueProvider({ queue, children }: { queue: FileQueue; children: ReactNode }) {
   return <PhotoQueueContext.Provider value={queue}>{children}</PhotoQueueContext.Provider>;
 }
 
-export function usePhotoQueue(): PhotoQueue {
+const byEdits = new WeakMap<WalkthroughQueue, { queryClient: QueryClient; edits: WalkthroughQueue }>();
+
+export function usePhotoQueue(): FileQueue {
   const injected = useContext(PhotoQueueContext);
-  useCurrentPerson();
   const queryClient = useQueryClient();
   const edits = useWalkthroughQueue();
-  return injected ?? sharedPhotoQueue(queryClient, edits);
+  let on = byEdits.get(edits);
+  if (on?.queryClient !== queryClient) {
+    on = { queryClient, edits };
+    byEdits.set(edits, on);
+  }
+  return useOfflineQueue<FileQueueState, FileQueue>(injected ?? sharedPhotoQueue(on)).runner;
 }
 
-export function usePhotoQueueState(): PhotoQueueState {
-  const queue = usePhotoQueue();
-  return useSyncExternalStore(queue.subscribe, queue.getSnapshot, queue.getSnapshot);
+export function usePhotoQueueState(): FileQueueState {
+  return useOfflineQueue<FileQueueState, FileQueue>(usePhotoQueue()).state;
 }

@@ -1,6 +1,6 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { createContext, useContext, useSyncExternalStore, type ReactNode } from 'react';
-import { useCurrentPerson } from '../../../lib/offline/person';
+import { createContext, useContext, type ReactNode } from 'react';
+import { useOfflineQueue } from '../../../lib/offline/use-offline-queue';
 import type { QueueState } from '../../../lib/offline/queue';
 import type { WalkthroughEdit } from './edits';
 import { sharedWalkthroughQueue, type WalkthroughQueue } from './walkthrough-queue';
@@ -14,13 +14,12 @@ export function WalkthroughQueueProvider({ queue, children }: { queue: Walkthrou
 
 export function useWalkthroughQueue(): WalkthroughQueue {
   const injected = useContext(QueueContext);
-  // Another person signing in on this tab swaps the queue: re-render with theirs.
-  useCurrentPerson();
   const queryClient = useQueryClient();
-  return injected ?? sharedWalkthroughQueue(queryClient);
+  // Another person signing in on this tab swaps the queue: useOfflineQueue re-renders with theirs.
+  return useOfflineQueue<QueueState<WalkthroughEdit>, WalkthroughQueue>(injected ?? sharedWalkthroughQueue(queryClient))
+    .runner;
 }
 
 export function useQueueState(): QueueState<WalkthroughEdit> {
-  const queue = useWalkthroughQueue();
-  return useSyncExternalStore(queue.subscribe, queue.getSnapshot, queue.getSnapshot);
+  return useOfflineQueue<QueueState<WalkthroughEdit>, WalkthroughQueue>(useWalkthroughQueue()).state;
 }

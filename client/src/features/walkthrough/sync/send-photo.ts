@@ -5,8 +5,8 @@ import type { RoomRecord } from '../../../lib/job-records';
 import type { QueueState } from '../../../lib/offline/queue';
 import { uploadPhoto } from '../api/upload-photo';
 import type { WalkthroughEdit } from './edits';
-import type { PhotoSendResult } from './photo-queue';
-import type { WaitingPhoto } from './photo-storage';
+import type { FileSendResult } from '../../../lib/offline/file-queue';
+import type { WaitingFile } from '../../../lib/offline/file-storage';
 
 /**
  * The rooms cache holds only what the server returned, so a room in it has been created there.
@@ -24,7 +24,7 @@ export function roomOnServer(queryClient: QueryClient, edits?: { getSnapshot(): 
   };
 }
 
-function failure(e: unknown): PhotoSendResult {
+function failure(e: unknown): FileSendResult {
   if (!isApiError(e) || e.status === 0) return { kind: 'keep' };
   // 5xx may pass, 429 will; 401 means sign in again — the photo must not be lost meanwhile.
   // 403 other-person: someone else signed in on this device; the photo waits for its taker.
@@ -34,7 +34,7 @@ function failure(e: unknown): PhotoSendResult {
 
 /** Uploads one waiting photo and puts the server's record into the room, so its thumbnail replaces the local one. */
 export function createPhotoSender(queryClient: QueryClient, person?: string) {
-  return async (waiting: WaitingPhoto): Promise<PhotoSendResult> => {
+  return async (waiting: WaitingFile): Promise<FileSendResult> => {
     try {
       const photo = await uploadPhoto({ ...waiting, person });
       queryClient.setQueryData<RoomRecord[]>(jobKeys.rooms(waiting.jobId), (rooms) =>

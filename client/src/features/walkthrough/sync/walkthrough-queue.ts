@@ -1,5 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { getCurrentPerson, personKey, personStores } from '../../../lib/offline/person';
+import { personStores } from '../../../lib/offline/person';
+import { perPerson } from '../../../lib/offline/use-offline-queue';
 import { idbQueueStorage, memoryQueueStorage, type QueueStorage } from '../../../lib/offline/queue';
 import { OfflineQueue } from '../../../lib/offline/queue-runner';
 import { coalesceEdits, isWalkthroughEdit, type WalkthroughEdit } from './edits';
@@ -21,25 +22,16 @@ export function createWalkthroughQueue(
   });
 }
 
-let shared: { readonly key: string; readonly queue: WalkthroughQueue } | null = null;
-
 /**
- * The signed-in person's queue, started on first use: one per tab, it survives moving between
- * jobs. When another person signs in on this tab, the previous person's queue stops (its edits
- * stay in their own store) and this person's is loaded from theirs.
+ * The signed-in person's queue (lib/offline/use-offline-queue.ts: one per tab and person, started
+ * on first use, so it survives moving between jobs; another person's stops and stays stored).
  */
-export function sharedWalkthroughQueue(queryClient: QueryClient): WalkthroughQueue {
-  const person = getCurrentPerson();
-  const key = person ? personKey(person) : '';
-  if (shared?.key !== key) {
-    shared?.queue.stop();
+export const sharedWalkthroughQueue = perPerson((person, queryClient: QueryClient) =>
+  createWalkthroughQueue(
+    queryClient,
     // Nobody known yet (a loader running before the sign-in check): memory only, never stored.
-    const storage = person
-      ? idbQueueStorage(isWalkthroughEdit, personStores(person).queue)
-      : memoryQueueStorage<WalkthroughEdit>();
-    const queue = createWalkthroughQueue(queryClient, storage, 15_000, person?.userId);
-    shared = { key, queue };
-    void queue.start();
-  }
-  return shared.queue;
-}
+    person ? idbQueueStorage(isWalkthroughEdit, personStores(person).queue) : memoryQueueStorage<WalkthroughEdit>(),
+    15_000,
+    person?.userId,
+  ),
+);

@@ -1,7 +1,7 @@
 import { del, entries, set, type UseStore } from 'idb-keyval';
 
 /** A photo taken on this device that has not reached the server yet. */
-export interface WaitingPhoto {
+export interface WaitingFile {
   readonly id: string;
   /** Order of taking; uploads go by it (queuedAt can repeat within a millisecond). */
   readonly seq: number;
@@ -13,14 +13,14 @@ export interface WaitingPhoto {
 }
 
 /** One record per photo, so adding or removing one never rewrites the others' bytes. */
-export interface PhotoStorage {
-  load(): Promise<WaitingPhoto[]>;
-  put(photo: WaitingPhoto): Promise<void>;
+export interface FileStorage {
+  load(): Promise<WaitingFile[]>;
+  put(photo: WaitingFile): Promise<void>;
   remove(id: string): Promise<void>;
 }
 
 /** What comes back from IndexedDB is read as written by this file; anything else is skipped. */
-function isWaitingPhoto(v: unknown): v is WaitingPhoto {
+function isWaitingPhoto(v: unknown): v is WaitingFile {
   if (typeof v !== 'object' || v === null) return false;
   const r: Record<string, unknown> = { ...v };
   return (
@@ -35,7 +35,7 @@ function isWaitingPhoto(v: unknown): v is WaitingPhoto {
 }
 
 /** IndexedDB through idb-keyval, apart from the edit queue: it stores Blobs as they are. */
-export function idbPhotoStorage(db: UseStore): PhotoStorage {
+export function idbFileStorage(db: UseStore): FileStorage {
   return {
     load: async () => (await entries(db)).map(([, v]: [unknown, unknown]) => v).filter(isWaitingPhoto),
     put: (photo) => set(photo.id, photo, db),
@@ -44,8 +44,8 @@ export function idbPhotoStorage(db: UseStore): PhotoStorage {
 }
 
 /** For tests, and the same shape a reload would see: a new queue over the same object keeps what was put. */
-export function memoryPhotoStorage(): PhotoStorage & { readonly ids: () => string[] } {
-  const photos = new Map<string, WaitingPhoto>();
+export function memoryFileStorage(): FileStorage & { readonly ids: () => string[] } {
+  const photos = new Map<string, WaitingFile>();
   return {
     load: async () => [...photos.values()],
     put: async (photo) => {

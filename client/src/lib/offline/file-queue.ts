@@ -1,4 +1,4 @@
-import type { PhotoStorage, WaitingPhoto } from './photo-storage';
+import type { FileStorage, WaitingFile } from './file-storage';
 
 /**
  * Photos wait on the device until their room is on the server and the connection is up,
@@ -7,14 +7,14 @@ import type { PhotoStorage, WaitingPhoto } from './photo-storage';
  * nothing disappears without the person being told.
  */
 
-export type PhotoSendResult =
+export type FileSendResult =
   | { readonly kind: 'ok' }
   /** No connection, 5xx, signed out: try again later. */
   | { readonly kind: 'keep' }
   /** The server will never take it (too large, not an image, room full). */
   | { readonly kind: 'refused'; readonly message: string };
 
-export interface PhotoNotice {
+export interface FileNotice {
   readonly id: string;
   readonly jobId: string;
   readonly roomId: string;
@@ -23,16 +23,16 @@ export interface PhotoNotice {
   readonly message: string;
 }
 
-export interface PhotoQueueState {
+export interface FileQueueState {
   readonly loaded: boolean;
-  readonly waiting: readonly WaitingPhoto[];
+  readonly waiting: readonly WaitingFile[];
   readonly uploading: string | null;
-  readonly notices: readonly PhotoNotice[];
+  readonly notices: readonly FileNotice[];
 }
 
-export interface PhotoQueueOptions {
-  storage: PhotoStorage;
-  send: (photo: WaitingPhoto) => Promise<PhotoSendResult>;
+export interface FileQueueOptions {
+  storage: FileStorage;
+  send: (photo: WaitingFile) => Promise<FileSendResult>;
   /** True once the room's create has reached the server (a photo cannot be attached before). */
   roomReady: (jobId: string, roomId: string) => boolean;
   isOnline?: () => boolean;
@@ -41,31 +41,31 @@ export interface PhotoQueueOptions {
   now?: () => Date;
 }
 
-export interface NewPhoto {
+export interface NewFile {
   readonly jobId: string;
   readonly roomId: string;
   readonly fileName: string;
   readonly blob: Blob;
 }
 
-export class PhotoQueue {
-  private state: PhotoQueueState = { loaded: false, waiting: [], uploading: null, notices: [] };
+export class FileQueue {
+  private state: FileQueueState = { loaded: false, waiting: [], uploading: null, notices: [] };
   private readonly listeners = new Set<() => void>();
   private flushing: Promise<void> | null = null;
   private timer: ReturnType<typeof setInterval> | null = null;
   private seq = 0;
   private stopped = false;
 
-  constructor(private readonly options: PhotoQueueOptions) {}
+  constructor(private readonly options: FileQueueOptions) {}
 
   readonly subscribe = (listener: () => void): (() => void) => {
     this.listeners.add(listener);
     return () => this.listeners.delete(listener);
   };
 
-  readonly getSnapshot = (): PhotoQueueState => this.state;
+  readonly getSnapshot = (): FileQueueState => this.state;
 
-  private update(patch: Partial<PhotoQueueState>): void {
+  private update(patch: Partial<FileQueueState>): void {
     this.state = { ...this.state, ...patch };
     for (const l of this.listeners) l();
   }
@@ -80,7 +80,7 @@ export class PhotoQueue {
   async start(): Promise<void> {
     this.stopped = false;
     // No IndexedDB (private mode): photos still wait in memory for this visit.
-    const stored = await this.options.storage.load().catch((): WaitingPhoto[] => []);
+    const stored = await this.options.storage.load().catch((): WaitingFile[] => []);
     const waiting = [...stored, ...this.state.waiting.filter((p) => !stored.some((s) => s.id === p.id))].sort(
       (a, b) => a.seq - b.seq,
     );
@@ -100,14 +100,14 @@ export class PhotoQueue {
     this.timer = null;
   }
 
-  list(roomId: string): WaitingPhoto[] {
+  list(roomId: string): WaitingFile[] {
     return this.state.waiting.filter((p) => p.roomId === roomId);
   }
 
   /** Written to storage first, so a reload straight after taking the photo keeps it. */
-  async add(photo: NewPhoto): Promise<void> {
+  async add(photo: NewFile): Promise<void> {
     this.seq += 1;
-    const item: WaitingPhoto = {
+    const item: WaitingFile = {
       ...photo,
       id: this.options.newId ? this.options.newId() : crypto.randomUUID(),
       seq: this.seq,
@@ -147,7 +147,7 @@ export class PhotoQueue {
     return this.flushing;
   }
 
-  private notify(photo: WaitingPhoto, kind: PhotoNotice['kind'], message: string): void {
+  private notify(photo: WaitingFile, kind: FileNotice['kind'], message: string): void {
     // Only the latest "added" per room is worth showing; every refusal stays until dismissed.
     const kept = this.state.notices.filter(
       (n) => !(kind === 'added' && n.kind === 'added' && n.roomId === photo.roomId),
@@ -168,7 +168,7 @@ export class PhotoQueue {
       const next = this.state.waiting.find((p) => this.options.roomReady(p.jobId, p.roomId));
       if (!next) return;
       this.update({ uploading: next.id });
-      const result = await this.options.send(next).catch((): PhotoSendResult => ({ kind: 'keep' }));
+      const result = await this.options.send(next).catch((): FileSendResult => ({ kind: 'keep' }));
       this.update({ uploading: null });
       if (result.kind === 'keep') return;
       if (result.kind === 'refused') this.notify(next, 'refused', result.message);

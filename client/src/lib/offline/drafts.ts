@@ -1,4 +1,4 @@
-import { getCurrentPerson, personKey } from '../../../lib/offline/person';
+import { getCurrentPerson, personKey } from './person';
 
 /**
  * What the person typed in a room that calc's schema does not accept yet (say a window

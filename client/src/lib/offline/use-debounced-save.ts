@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef } from 'react';
-import { markTyping } from './pending-typing';
+import { markTyping } from './typing';
 
 export const AUTOSAVE_DELAY_MS = 600;
 

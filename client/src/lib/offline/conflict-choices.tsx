@@ -1,16 +1,23 @@
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
-import { describe, type Choice, type FieldDiff } from '../model/conflict';
+import { Button } from '../../components/ui/button';
+import type { Choice, FieldDiff } from './conflict';
 
 interface Props {
   title: string;
   diffs: readonly FieldDiff[];
   onResolve: (choices: Record<string, Choice>) => void;
   busy?: boolean;
+  /** How a field's value reads to the person. */
+  describe?: (key: string, value: unknown) => string;
+}
+
+function plain(_key: string, v: unknown): string {
+  if (v === undefined || v === null || v === '') return '—';
+  return typeof v === 'string' || typeof v === 'number' || typeof v === 'boolean' ? String(v) : JSON.stringify(v);
 }
 
 /** Yours and theirs side by side, per field, with a choice for each. */
-export function ConflictChoices({ title, diffs, onResolve, busy = false }: Props) {
+export function ConflictChoices({ title, diffs, onResolve, busy = false, describe = plain }: Props) {
   const [choices, setChoices] = useState<Record<string, Choice>>(() =>
     Object.fromEntries(diffs.map((d) => [d.key, 'mine'])),
   );

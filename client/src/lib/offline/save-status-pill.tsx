@@ -1,4 +1,4 @@
-import type { QueueState } from '../../../lib/offline/queue';
+import type { QueueState } from './queue';
 
 export type SaveStatus =
   | { readonly kind: 'saved' }

@@ -1,0 +1,42 @@
+/**
+ * After a 409: the fields that differ between what this person saved and what the server now
+ * has, and the record made of each field's chosen side. Any record type can use it: the caller
+ * names the fields (labels) and says how a value reads (ConflictChoices' `describe`).
+ */
+/** A field that differs between what this person saved and what the server now has. */
+export interface FieldDiff {
+  readonly key: string;
+  readonly label: string;
+  readonly mine: unknown;
+  readonly theirs: unknown;
+}
+
+export type Choice = 'mine' | 'theirs';
+
+const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
+
+/** Top-level fields whose values differ; a whole wall list counts as one field. */
+export function diffFields(
+  mine: Record<string, unknown>,
+  theirs: Record<string, unknown>,
+  labels: Record<string, string>,
+): FieldDiff[] {
+  return Object.keys(labels)
+    .filter((k) => !same(mine[k], theirs[k]))
+    .map((k) => ({ key: k, label: labels[k] ?? k, mine: mine[k], theirs: theirs[k] }));
+}
+
+/** Theirs as the base, with each field the person chose to keep from theirs or from mine. */
+export function mergeChoices(
+  mine: Record<string, unknown>,
+  theirs: Record<string, unknown>,
+  choices: Record<string, Choice>,
+): Record<string, unknown> {
+  const out: Record<string, unknown> = { ...theirs };
+  for (const [k, c] of Object.entries(choices)) {
+    if (c !== 'mine') continue;
+    if (mine[k] === undefined) delete out[k];
+    else out[k] = mine[k];
+  }
+  return out;
+}

@@ -1,7 +1,9 @@
 import { existsSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { RequestContext } from '@mikro-orm/core';
-import express, { type Express } from 'express';
+import compression from 'compression';
+import express, { type Express, type RequestHandler } from 'express';
+import expressStaticGzip from 'express-static-gzip';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import { randomUUID } from 'node:crypto';
@@ -15,6 +17,44 @@ import type { Services } from './services/services';
 const JSON_LIMIT = '256kb';
 const IMPORT_JSON_LIMIT = '3mb';
 const IMPORT_PATH = /^\/api\/company-data\/[a-z-]+\/import\/(preview|apply)$/;
+const COMPRESS_ABOVE_BYTES = 1024;
+
+/**
+ * The built client: files precompressed at build time (brotli, gzip) chosen by the request's
+ * Accept-Encoding with `Vary: Accept-Encoding`; hashed assets cached for a year; any other GET
+ * outside /api gets index.html (the SPA's routes), never cached without revalidation.
+ */
+function clientFiles(dist: string): RequestHandler | null {
+  if (!existsSync(join(dist, 'index.html'))) return null;
+  const assets = join(dist, 'assets');
+  const serve = expressStaticGzip(dist, {
+    enableBrotli: true,
+    orderPreference: ['br', 'gzip'],
+    index: false,
+    serveStatic: {
+      index: false,
+      maxAge: '1h',
+      setHeaders: (res, path) => {
+        if (path.startsWith(assets)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+        else if (/index\.html(\.br|\.gz)?$/.test(path)) res.setHeader('Cache-Control', 'no-cache');
+      },
+    },
+  });
+  const isApi = (path: string) => path === '/api' || path.startsWith('/api/');
+  return (req, res, next) => {
+    if ((req.method !== 'GET' && req.method !== 'HEAD') || isApi(req.path)) return next();
+    serve(req, res, (err?: unknown) => {
+      if (err) return next(err);
+      // Not a file: the SPA's own route.
+      const original = req.url;
+      req.url = '/index.html';
+      serve(req, res, (err2?: unknown) => {
+        req.url = original;
+        next(err2);
+      });
+    });
+  };
+}
 
 /** Builds the whole HTTP app without listening: server.ts listens, the tests call it through supertest. */
 export function createApp(services: Services): Express {
@@ -57,6 +97,10 @@ export function createApp(services: Services): Express {
     }),
   );
 
+  // The built client is answered before the session, the actor and the ORM's context: it needs none of them.
+  const client = clientFiles(resolve(config.CLIENT_DIST));
+  if (client) app.use(client);
+
   app.use('/api', (_req, res, next) => {
     res.setHeader('Cache-Control', 'no-store');
     next();
@@ -64,33 +108,18 @@ export function createApp(services: Services): Express {
   // A CSV import carries the whole file (up to IMPORT_LIMITS.maxBytes, checked with a message naming the limit).
   const importJson = express.json({ limit: IMPORT_JSON_LIMIT, strict: true });
   app.use((req, res, next) => (IMPORT_PATH.test(req.path) ? importJson(req, res, next) : next()));
+  // JSON answers above ~1 KB go compressed (gzip or brotli as the request accepts; Vary: Accept-Encoding).
+  app.use('/api', compression({ threshold: COMPRESS_ABOVE_BYTES }));
   app.use('/api', express.json({ limit: JSON_LIMIT, strict: true }));
-  app.use((req, _res, next) => RequestContext.create(orm.em, next));
   app.use(sessionMiddleware(config, services.sessionPool));
   app.use(loadActor(config, services.clock));
+  app.use((req, _res, next) => RequestContext.create(orm.em, next));
   app.use('/api', csrfGuard);
   app.use('/api', personGuard);
 
   mountModules(app, services);
   app.use('/api', notFoundApi);
 
-  const dist = resolve(config.CLIENT_DIST);
-  if (existsSync(join(dist, 'index.html'))) {
-    app.use(
-      express.static(dist, {
-        index: false,
-        maxAge: '1h',
-        setHeaders: (res, path) => {
-          if (path.includes(`${join(dist, 'assets')}`))
-            res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
-        },
-      }),
-    );
-    app.get('/{*splat}', (_req, res) => {
-      res.setHeader('Cache-Control', 'no-cache');
-      res.sendFile(join(dist, 'index.html'));
-    });
-  }
   app.use(problemHandler);
   return app;
 }

@@ -91,6 +91,11 @@ export const notFoundApi: RequestHandler = (req, _res, next) => {
 };
 
 export const problemHandler: ErrorRequestHandler = (err, req, res, _next) => {
+  if (res.headersSent) {
+    // The answer is already on its way (e.g. the session store failed while saving after it): log, never answer twice.
+    req.log?.error({ err }, 'error after the answer was sent');
+    return;
+  }
   const known = toAppError(err);
   if (known) {
     if (known.status >= 500) req.log?.warn({ err }, 'service unavailable');

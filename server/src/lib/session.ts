@@ -1,19 +1,116 @@
 import connectPgSimple from 'connect-pg-simple';
-import session from 'express-session';
-import type { RequestHandler } from 'express';
+import session, { type SessionData } from 'express-session';
+import type { Request, RequestHandler } from 'express';
 import { randomBytes, timingSafeEqual } from 'node:crypto';
 import type pg from 'pg';
 import type { Config } from '../config';
 import { CsrfError, OtherPersonError } from './errors';
 
-/** Sessions live in PostgreSQL (table `session`, created by a migration), so any server process can serve any request. */
+/** The signed-in person as read with the session (one statement); loadActor turns it into `req.actor`. */
+export interface SessionUser {
+  readonly id: string;
+  readonly companyId: string;
+  readonly role: string;
+  readonly name: string;
+  readonly email: string;
+  readonly active: boolean;
+}
+
+const USER = Symbol('sessionUser');
+const STORED_EXPIRY = Symbol('storedExpiry');
+type LoadedSession = SessionData & { [USER]?: SessionUser | null; [STORED_EXPIRY]?: number };
+
+/** How often a used session's idle expiry (the row's `expire`) is pushed forward. */
+export const SESSION_REFRESH_MS = 60_000;
+
+const PgStore = connectPgSimple(session);
+
+/**
+ * connect-pg-simple with two changes:
+ * - the read of a session is joined to its user: one indexed statement (session.sid and app_user.id
+ *   are primary keys) instead of a session read plus a user read. The user is read on every request,
+ *   never cached, so a deactivation or a role change counts at once;
+ * - the idle expiry is written at most once a minute (express-session touches on every request):
+ *   a touch writes only when the new expiry is a minute or more past the stored one. A session
+ *   therefore ends between idle − 1 min and idle after its last request, never later. The cookie
+ *   is still sent with every answer (rolling), so the browser never drops it first.
+ */
+class SessionWithUserStore extends PgStore {
+  constructor(private readonly db: pg.Pool) {
+    super({ pool: db, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 15 * 60 });
+  }
+
+  override get(sid: string, callback: (err: unknown, session?: SessionData | null) => void): void {
+    this.db
+      .query<{
+        sess: SessionData;
+        expire_epoch: string;
+        user_id: string | null;
+        company_id: string;
+        role: string;
+        name: string;
+        email: string;
+        active: boolean;
+      }>(
+        `select s.sess, extract(epoch from s.expire::timestamptz) as expire_epoch,
+           u.id as user_id, u.company_id, u.role, u.name, u.email, u.active
+         from "session" s left join "app_user" u on u.id = case
+           when s.sess->>'userId' ~ '^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$'
+           then (s.sess->>'userId')::uuid end
+         where s.sid = $1 and s.expire >= to_timestamp($2)`,
+        [sid, Math.ceil(Date.now() / 1000)],
+      )
+      .then(({ rows }) => {
+        const row = rows[0];
+        if (!row) return callback(null, null);
+        const sess: LoadedSession = row.sess;
+        const user: SessionUser | null = row.user_id
+          ? {
+              id: row.user_id,
+              companyId: row.company_id,
+              role: row.role,
+              name: row.name,
+              email: row.email,
+              active: row.active,
+            }
+          : null;
+        Object.defineProperty(sess, USER, { enumerable: false, value: user });
+        Object.defineProperty(sess, STORED_EXPIRY, { enumerable: false, value: Number(row.expire_epoch) });
+        callback(null, sess);
+      }, callback);
+  }
+
+  // express-session turns the stored data into req.session here: the user read with it goes on the
+  // request, the stored expiry on the session (not enumerable, so never saved).
+  override createSession(req: Request, data: SessionData): session.Session & SessionData {
+    const loaded = data as LoadedSession;
+    req.sessionUser = loaded[USER] ?? null;
+    const created = super.createSession(req, data);
+    Object.defineProperty(created, STORED_EXPIRY, { enumerable: false, value: loaded[STORED_EXPIRY] });
+    return created;
+  }
+
+  override touch(sid: string, sess: SessionData, callback?: (err?: unknown) => void): void {
+    const stored = (sess as LoadedSession)[STORED_EXPIRY];
+    const next = sess.cookie?.expires ? new Date(sess.cookie.expires).getTime() / 1000 : Number.POSITIVE_INFINITY;
+    if (stored !== undefined && Number.isFinite(stored) && next - stored < SESSION_REFRESH_MS / 1000) {
+      callback?.();
+      return;
+    }
+    super.touch(sid, sess, callback as () => void);
+  }
+}
+
+/**
+ * Sessions live in PostgreSQL (table `session`, created by a migration), so any server process can
+ * serve any request. See SessionWithUserStore for how the idle expiry is kept.
+ */
 export function sessionMiddleware(config: Config, pool: pg.Pool): RequestHandler {
-  const PgStore = connectPgSimple(session);
   const secure = config.NODE_ENV === 'production' || config.APP_ORIGIN.startsWith('https:');
   return session({
     name: secure ? '__Host-sid' : 'sid',
     secret: config.SESSION_SECRET,
-    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+    store: new SessionWithUserStore(pool),
     resave: false,
     saveUninitialized: false,
     rolling: true,

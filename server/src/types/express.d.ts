@@ -1,9 +1,12 @@
 import type { Actor } from '../lib/route';
+import type { SessionUser } from '../lib/session';
 
 declare global {
   namespace Express {
     interface Request {
       actor?: Actor;
+      /** The session's user as read with the session (lib/session.ts); null when signed out. */
+      sessionUser?: SessionUser | null;
     }
   }
 }

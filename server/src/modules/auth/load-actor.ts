@@ -1,12 +1,12 @@
 import type { RequestHandler } from 'express';
-import { RequestContext } from '@mikro-orm/core';
 import type { Config } from '../../config';
+import type { Actor } from '../../lib/route';
 import type { Clock } from '../../services/services';
-import { UserSchema } from '../users/user.entity';
 
 /**
- * Turns the session into `req.actor`, re-reading the user on every request so that a deactivated
- * user or a role change takes effect at once, and enforcing the absolute session lifetime.
+ * Turns the session into `req.actor`. The user is read with the session on every request (one
+ * statement, lib/session.ts), never cached, so a deactivated user or a role change takes effect at
+ * once; enforces the absolute session lifetime.
  */
 export function loadActor(config: Config, clock: Clock): RequestHandler {
   const absoluteMs = config.SESSION_ABSOLUTE_HOURS * 3_600_000;
@@ -14,13 +14,18 @@ export function loadActor(config: Config, clock: Clock): RequestHandler {
     const s = req.session;
     if (!s?.userId) return next();
     const tooOld = !s.authAt || clock.now().getTime() - s.authAt > absoluteMs;
-    const em = RequestContext.getEntityManager();
-    const user = tooOld || !em ? null : await em.findOne(UserSchema, { id: s.userId }, { populate: ['company'] });
-    if (!user || !user.active) {
+    const user = tooOld ? null : req.sessionUser;
+    if (!user || user.id !== s.userId || !user.active) {
       await new Promise<void>((resolve) => s.destroy(() => resolve()));
       return next();
     }
-    req.actor = { userId: user.id, companyId: user.company.id, role: user.role, name: user.name, email: user.email };
+    req.actor = {
+      userId: user.id,
+      companyId: user.companyId,
+      role: user.role as Actor['role'],
+      name: user.name,
+      email: user.email,
+    };
     next();
   };
 }

@@ -1,9 +1,33 @@
 import type { Job } from './job.entity';
 
+/** What presentJob reads: a Job entity, or a plain row read for a hot path (job-reads.ts). */
+export type JobView = Pick<
+  Job,
+  | 'id'
+  | 'status'
+  | 'street'
+  | 'unit'
+  | 'city'
+  | 'region'
+  | 'postalCode'
+  | 'notes'
+  | 'designConditions'
+  | 'designSources'
+  | 'tightness'
+  | 'version'
+  | 'createdAt'
+  | 'updatedAt'
+  | 'lastActivityAt'
+> & {
+  customer: { id: string; name: string };
+  salesperson: { id: string; name: string } | null | undefined;
+  assignedInstaller: { id: string; name: string } | null | undefined;
+};
+
 const person = (u: { id: string; name: string } | null | undefined) => (u ? { id: u.id, name: u.name } : null);
 
 /** The only shape a job leaves the server in (the same for every role: it holds no prices yet). */
-export function presentJob(j: Job) {
+export function presentJob(j: JobView) {
   return {
     id: j.id,
     status: j.status,

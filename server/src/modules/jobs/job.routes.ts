@@ -1,9 +1,9 @@
 import { ANY_STAFF, JOB_EDITORS, type ApiRouter } from '../../lib/route';
-import { findJob } from './job-access';
 import { deleteJob } from './job-delete';
+import { findJobView, listJobViews } from './job-reads';
 import { presentJob } from './job.presenter';
 import { createJobSchema, jobIdParams, listJobsQuery, updateJobSchema } from './job.schema';
-import { createJob, listJobs, updateJob } from './job.service';
+import { createJob, updateJob } from './job.service';
 import { ifMatchVersion, setEtag } from './version-lock';
 
 export function jobRoutes(api: ApiRouter): void {
@@ -13,7 +13,7 @@ export function jobRoutes(api: ApiRouter): void {
     policy: ANY_STAFF,
     query: listJobsQuery,
     handler: async ({ em, actor, query }) => {
-      const { items, total } = await listJobs(em, actor, query);
+      const { items, total } = await listJobViews(em, actor, query);
       return { items: items.map(presentJob), total, page: query.page, pageSize: query.pageSize };
     },
   });
@@ -23,7 +23,7 @@ export function jobRoutes(api: ApiRouter): void {
     policy: ANY_STAFF,
     params: jobIdParams,
     handler: async ({ em, actor, params, res }) => {
-      const job = await findJob(em, actor, params.id);
+      const job = await findJobView(em, actor, params.id);
       setEtag(res, job.version);
       return { job: presentJob(job) };
     },

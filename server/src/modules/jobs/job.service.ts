@@ -15,45 +15,13 @@ import type { Clock } from '../../services/services';
 import { CompanySchema } from '../companies/company.entity';
 import { companyDesignDefaults } from '../company-settings/company-settings.service';
 import { CustomerSchema, type Customer } from '../customers/customer.entity';
-import { likePattern } from '../customers/customer.schema';
 import { UserSchema, type User } from '../users/user.entity';
 import { resolveDesignConditions } from './design-conditions';
-import { findJob, JOB_POPULATE, jobScope } from './job-access';
+import { findJob } from './job-access';
 import { JobSchema, type Job } from './job.entity';
 import { presentJob } from './job.presenter';
-import type { CreateJobInput, ListJobsQuery, UpdateJobInput } from './job.schema';
+import type { CreateJobInput, UpdateJobInput } from './job.schema';
 import { assertVersion } from './version-lock';
-
-export async function listJobs(
-  em: EntityManager,
-  actor: Actor,
-  q: ListJobsQuery,
-): Promise<{ items: Job[]; total: number }> {
-  const filters: object[] = [jobScope(actor)];
-  if (q.status) filters.push({ status: q.status });
-  if (q.search) {
-    const pat = likePattern(q.search);
-    filters.push({
-      $or: [
-        { customer: { name: { $ilike: pat } } },
-        { street: { $ilike: pat } },
-        { city: { $ilike: pat } },
-        { postalCode: { $ilike: pat } },
-      ],
-    });
-  }
-  const [items, total] = await em.findAndCount(
-    JobSchema,
-    { $and: filters },
-    {
-      populate: JOB_POPULATE,
-      orderBy: { lastActivityAt: 'desc', id: 'asc' },
-      limit: q.pageSize,
-      offset: (q.page - 1) * q.pageSize,
-    },
-  );
-  return { items, total };
-}
 
 async function customerOf(em: EntityManager, actor: Actor, id: string): Promise<Customer> {
   const c = await em.findOne(CustomerSchema, { id, company: actor.companyId });

@@ -1,6 +1,11 @@
 import type { Photo } from './photo.entity';
 
-export function presentPhoto(p: Photo, jobId: string, roomId: string) {
+export type PhotoView = Pick<
+  Photo,
+  'id' | 'contentType' | 'byteSize' | 'width' | 'height' | 'originalName' | 'createdAt'
+>;
+
+export function presentPhoto(p: PhotoView, jobId: string, roomId: string) {
   return {
     id: p.id,
     roomId,

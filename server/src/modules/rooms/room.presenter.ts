@@ -1,9 +1,11 @@
-import { presentPhoto } from '../photos/photo.presenter';
-import type { Photo } from '../photos/photo.entity';
+import { presentPhoto, type PhotoView } from '../photos/photo.presenter';
 import type { RoomRow } from './room.entity';
 
+/** What presentRoom reads: the entity, or a plain row read for a hot path (room-reads.ts). */
+export type RoomView = Pick<RoomRow, 'id' | 'position' | 'input' | 'version' | 'createdAt' | 'updatedAt'>;
+
 /** The only shape a room leaves the server in; its photos come with it (metadata only, bytes by URL). */
-export function presentRoom(r: RoomRow, jobId: string, photos: readonly Photo[]) {
+export function presentRoom(r: RoomView, jobId: string, photos: readonly PhotoView[]) {
   return {
     id: r.id,
     jobId,

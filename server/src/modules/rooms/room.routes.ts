@@ -1,8 +1,9 @@
 import { ANY_STAFF, JOB_EDITORS, type ApiRouter } from '../../lib/route';
 import { ifMatchVersion, setEtag } from '../jobs/version-lock';
 import { presentRoom } from './room.presenter';
+import { listRoomViews, updateRoomIfCurrent } from './room-reads';
 import { createRoomSchema, jobRoomsParams, roomParams, updateRoomSchema } from './room.schema';
-import { createRoom, deleteRoom, getRoom, listRooms, updateRoom } from './room.service';
+import { createRoom, deleteRoom, getRoom, updateRoom } from './room.service';
 
 /** Mounted under /api/jobs: rooms are always reached through a job the actor may see. */
 export function roomRoutes(api: ApiRouter): void {
@@ -12,7 +13,7 @@ export function roomRoutes(api: ApiRouter): void {
     policy: ANY_STAFF,
     params: jobRoomsParams,
     handler: async ({ em, actor, params }) => ({
-      rooms: (await listRooms(em, actor, params.jobId)).map((r) => presentRoom(r.room, params.jobId, r.photos)),
+      rooms: (await listRoomViews(em, actor, params.jobId)).map((r) => presentRoom(r.room, params.jobId, r.photos)),
     }),
   });
   api.route({
@@ -46,7 +47,10 @@ export function roomRoutes(api: ApiRouter): void {
     params: roomParams,
     body: updateRoomSchema,
     handler: async ({ em, actor, params, body, services, req, res }) => {
-      const r = await updateRoom(em, actor, services.clock, params.jobId, params.roomId, ifMatchVersion(req), body);
+      const version = ifMatchVersion(req);
+      const r =
+        (await updateRoomIfCurrent(em, actor, services.clock.now(), params.jobId, params.roomId, version, body)) ??
+        (await updateRoom(em, actor, services.clock, params.jobId, params.roomId, version, body));
       setEtag(res, r.room.version);
       return { room: presentRoom(r.room, params.jobId, r.photos) };
     },

@@ -36,10 +36,6 @@ export async function roomsOf(em: EntityManager, job: Job): Promise<RoomWithPhot
   return rooms.map((room) => ({ room, photos: photos.filter((p) => p.room.id === room.id) }));
 }
 
-export async function listRooms(em: EntityManager, actor: Actor, jobId: string): Promise<RoomWithPhotos[]> {
-  return roomsOf(em, await findJob(em, actor, jobId));
-}
-
 /** A room of a job the actor may see; 404 otherwise. */
 export async function findRoom(
   em: EntityManager,

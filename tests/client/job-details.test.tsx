@@ -17,6 +17,7 @@ const customer = {
   email: 'rowan@example.com',
   phone: '555-0100',
   notes: '',
+  version: 1,
   createdAt: '2026-01-01T00:00:00.000Z',
   updatedAt: '2026-01-01T00:00:00.000Z',
 };
@@ -34,7 +35,10 @@ interface Sent {
 }
 
 /** A server holding one job and its customer; `jobPatch` answers the job PATCH (default: accept). */
-function server(jobPatch?: (body: Record<string, unknown>) => Response) {
+function server(
+  jobPatch?: (body: Record<string, unknown>) => Response,
+  customerPatch?: (body: Record<string, unknown>) => Response,
+) {
   const sent: Sent[] = [];
   let job: JobRecord = jobRecord();
   vi.stubGlobal(
@@ -49,8 +53,9 @@ function server(jobPatch?: (body: Record<string, unknown>) => Response) {
       if (method === 'GET' && url === '/api/customers/c1') return Response.json({ customer });
       if (method === 'GET' && url === '/api/staff') return Response.json({ staff });
       if (method === 'GET' && url === `/api/jobs/${JOB_ID}`) return Response.json({ job });
+      if (method === 'PATCH' && url === '/api/customers/c1' && customerPatch) return customerPatch(body);
       if (method === 'PATCH' && url === '/api/customers/c1')
-        return Response.json({ customer: { ...customer, ...body } });
+        return Response.json({ customer: { ...customer, ...body, version: customer.version + 1 } });
       if (method === 'PATCH' && url === `/api/jobs/${JOB_ID}`) {
         if (jobPatch) return jobPatch(body);
         const installer = staff.find((s) => s.id === body.assignedInstallerId);
@@ -115,6 +120,32 @@ describe('job details on the walk-through', () => {
     // A salesperson does not hand jobs around: no people fields, no staff list asked for.
     expect(screen.queryByLabelText('Installer')).toBeNull();
     expect(s.sent.some((x) => x.url === '/api/staff')).toBe(false);
+  });
+
+  it('sends the customer’s version as If-Match; a 409 says someone else saved it and keeps what was typed', async () => {
+    const s = server(undefined, () =>
+      Response.json(
+        {
+          type: '/problems/conflict',
+          title: 'Conflict',
+          status: 409,
+          detail: 'The customer was changed by someone else.',
+          currentVersion: 2,
+          current: { ...customer, phone: '555-0123', version: 2 },
+        },
+        { status: 409, headers: { 'Content-Type': 'application/problem+json' } },
+      ),
+    );
+    await renderPanel(salesperson);
+    fireEvent.change(await screen.findByLabelText('Customer phone'), { target: { value: '555-0199' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save details' }));
+    expect(await screen.findByText(/Someone else saved this customer meanwhile/)).toBeTruthy();
+    expect(s.writes().map((w) => [w.method, w.url, w.ifMatch])).toEqual([['PATCH', '/api/customers/c1', '"1"']]);
+    expect(screen.getByLabelText('Customer phone')).toHaveValue('555-0199');
+    // Their version is read again.
+    await waitFor(() =>
+      expect(s.sent.filter((x) => x.method === 'GET' && x.url === '/api/customers/c1')).toHaveLength(2),
+    );
   });
 
   it('says what is wrong next to the field and sends nothing', async () => {

@@ -109,6 +109,7 @@ describe('new job', () => {
             email: null,
             phone: null,
             notes: '',
+            version: 1,
             createdAt: '',
             updatedAt: '',
           },

@@ -76,7 +76,7 @@ describe('customers', () => {
     expect((await est.agent.get('/api/customers').query({ search: '%' })).body.total).toBe(0);
     expectProblem(await est.agent.get('/api/customers').query({ pageSize: 101 }), 400);
 
-    const u = await patch(sales, `/api/customers/${id}`).send({ phone: null, notes: 'Front door' });
+    const u = await patch(sales, `/api/customers/${id}`, 1).send({ phone: null, notes: 'Front door' });
     expect(u.status).toBe(200);
     const fresh = await t.orm.em.fork().findOneOrFail(CustomerSchema, { id });
     expect([fresh.phone, fresh.notes]).toEqual([null, 'Front door']);
@@ -87,8 +87,8 @@ describe('customers', () => {
     const id = String(c.body.customer.id);
     const other = await login(t.app, b.users.owner.email);
     expectProblem(await other.agent.get(`/api/customers/${id}`), 404);
-    expectProblem(await patch(other, `/api/customers/${id}`).send({ name: 'Taken' }), 404);
-    expectProblem(await del(other, `/api/customers/${id}`), 404);
+    expectProblem(await patch(other, `/api/customers/${id}`, 1).send({ name: 'Taken' }), 404);
+    expectProblem(await del(other, `/api/customers/${id}`, 1), 404);
     expect((await other.agent.get('/api/customers')).body.items.map((x: { id: string }) => x.id)).not.toContain(id);
     expect((await t.orm.em.fork().findOneOrFail(CustomerSchema, { id })).name).toBe('Ambrose Pilkington-Reyes');
   });
@@ -96,15 +96,47 @@ describe('customers', () => {
   it('deletes (office roles only) and refuses while jobs exist', async () => {
     const c = await post(sales, '/api/customers').send({ name: 'Temporary Customer' });
     const id = String(c.body.customer.id);
-    expectProblem(await del(sales, `/api/customers/${id}`), 403);
+    expectProblem(await del(sales, `/api/customers/${id}`, 1), 403);
     const owner = await login(t.app, a.users.owner.email);
-    expect((await del(owner, `/api/customers/${id}`)).status).toBe(204);
+    expect((await del(owner, `/api/customers/${id}`, 1)).status).toBe(204);
     expect(await t.orm.em.fork().count(CustomerSchema, { id })).toBe(0);
 
     const job = await newJob(sales);
     const withJob = await t.orm.em
       .fork()
       .findOneOrFail((await import('../../server/src/modules/jobs/job.entity')).JobSchema, { id: job.id });
-    expectProblem(await del(owner, `/api/customers/${withJob.customer.id}`), 409);
+    expectProblem(await del(owner, `/api/customers/${withJob.customer.id}`, 1), 409);
+  });
+
+  it('versions like jobs and rooms: ETag out, 428 without If-Match, 409 on a stale one with the customer as now', async () => {
+    const c = await post(sales, '/api/customers').send({ name: 'Odalys Fenwick-Arbuthnot', phone: '555-0190' });
+    expect(c.body.customer.version).toBe(1);
+    expect(c.headers.etag).toBe('"1"');
+    const id = String(c.body.customer.id);
+    const got = await sales.agent.get(`/api/customers/${id}`);
+    expect([got.headers.etag, got.body.customer.version]).toEqual(['"1"', 1]);
+
+    const none = await patch(sales, `/api/customers/${id}`).send({ name: 'No version' });
+    expectProblem(none, 428);
+    expect(none.body.type).toBe('/problems/precondition-required');
+    expectProblem(await del(await login(t.app, a.users.owner.email), `/api/customers/${id}`), 428);
+
+    const first = await patch(sales, `/api/customers/${id}`, 1).send({ phone: '555-0191' });
+    expect(first.status, JSON.stringify(first.body)).toBe(200);
+    expect([first.headers.etag, first.body.customer.version]).toEqual(['"2"', 2]);
+
+    // A second device still holding version 1.
+    const stale = await patch(sales, `/api/customers/${id}`, 1).send({ phone: '555-0000', name: 'Overwritten' });
+    expectProblem(stale, 409);
+    expect(stale.body).toMatchObject({
+      type: '/problems/conflict',
+      currentVersion: 2,
+      current: { id, name: 'Odalys Fenwick-Arbuthnot', phone: '555-0191', version: 2 },
+    });
+    const row = await t.orm.em.fork().findOneOrFail(CustomerSchema, { id });
+    expect([row.name, row.phone, row.version]).toEqual(['Odalys Fenwick-Arbuthnot', '555-0191', 2]);
+    const owner = await login(t.app, a.users.owner.email);
+    expectProblem(await del(owner, `/api/customers/${id}`, 1), 409);
+    expect(await t.orm.em.fork().count(CustomerSchema, { id })).toBe(1);
   });
 });

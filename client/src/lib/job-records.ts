@@ -37,6 +37,8 @@ export const customerRecord = z.object({
   email: z.string().nullable(),
   phone: z.string().nullable(),
   notes: z.string(),
+  /** Optimistic lock, sent back as If-Match on every change. */
+  version: z.number().int(),
   createdAt: z.string(),
   updatedAt: z.string(),
 });

@@ -16,6 +16,8 @@ export const CustomerSchema = defineEntity({
     email: p.string().length(254).nullable(),
     phone: p.string().length(40).nullable(),
     notes: p.text().default(''),
+    /** Optimistic lock (jobs/version-lock.ts): every update and delete names the version it was made against. */
+    version: p.integer().version(),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p
       .datetime()

@@ -8,6 +8,7 @@ export function presentCustomer(c: Customer) {
     email: c.email ?? null,
     phone: c.phone ?? null,
     notes: c.notes,
+    version: c.version,
     createdAt: c.createdAt.toISOString(),
     updatedAt: c.updatedAt.toISOString(),
   };

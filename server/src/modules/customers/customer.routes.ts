@@ -1,4 +1,5 @@
 import { JOB_EDITORS, OFFICE, type ApiRouter } from '../../lib/route';
+import { ifMatchVersion, setEtag } from '../jobs/version-lock';
 import { presentCustomer } from './customer.presenter';
 import { createCustomerSchema, customerIdParams, listCustomersQuery, updateCustomerSchema } from './customer.schema';
 import { createCustomer, deleteCustomer, getCustomer, listCustomers, updateCustomer } from './customer.service';
@@ -21,7 +22,11 @@ export function customerRoutes(api: ApiRouter): void {
     path: '/:id',
     policy: JOB_EDITORS,
     params: customerIdParams,
-    handler: async ({ em, actor, params }) => ({ customer: presentCustomer(await getCustomer(em, actor, params.id)) }),
+    handler: async ({ em, actor, params, res }) => {
+      const customer = await getCustomer(em, actor, params.id);
+      setEtag(res, customer.version);
+      return { customer: presentCustomer(customer) };
+    },
   });
   api.route({
     method: 'post',
@@ -29,7 +34,11 @@ export function customerRoutes(api: ApiRouter): void {
     policy: JOB_EDITORS,
     body: createCustomerSchema,
     status: 201,
-    handler: async ({ em, actor, body }) => ({ customer: presentCustomer(await createCustomer(em, actor, body)) }),
+    handler: async ({ em, actor, body, res }) => {
+      const customer = await createCustomer(em, actor, body);
+      setEtag(res, customer.version);
+      return { customer: presentCustomer(customer) };
+    },
   });
   api.route({
     method: 'patch',
@@ -37,17 +46,19 @@ export function customerRoutes(api: ApiRouter): void {
     policy: JOB_EDITORS,
     params: customerIdParams,
     body: updateCustomerSchema,
-    handler: async ({ em, actor, params, body }) => ({
-      customer: presentCustomer(await updateCustomer(em, actor, params.id, body)),
-    }),
+    handler: async ({ em, actor, params, body, req, res }) => {
+      const customer = await updateCustomer(em, actor, params.id, ifMatchVersion(req), body);
+      setEtag(res, customer.version);
+      return { customer: presentCustomer(customer) };
+    },
   });
   api.route({
     method: 'delete',
     path: '/:id',
     policy: OFFICE,
     params: customerIdParams,
-    handler: async ({ em, actor, params, res }) => {
-      await deleteCustomer(em, actor, params.id);
+    handler: async ({ em, actor, params, req, res }) => {
+      await deleteCustomer(em, actor, params.id, ifMatchVersion(req));
       res.status(204).end();
       return undefined;
     },

@@ -3,6 +3,8 @@ import { ConflictError, NotFoundError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
 import { CompanySchema } from '../companies/company.entity';
 import { JobSchema } from '../jobs/job.entity';
+import { assertVersion } from '../jobs/version-lock';
+import { presentCustomer } from './customer.presenter';
 import { CustomerSchema, type Customer } from './customer.entity';
 import {
   likePattern,
@@ -53,9 +55,11 @@ export async function updateCustomer(
   em: EntityManager,
   actor: Actor,
   id: string,
+  version: number,
   input: UpdateCustomerInput,
 ): Promise<Customer> {
   const c = await getCustomer(em, actor, id);
+  assertVersion(version, c.version, 'The customer', () => presentCustomer(c));
   if (input.name !== undefined) c.name = input.name;
   if (input.email !== undefined) c.email = input.email;
   if (input.phone !== undefined) c.phone = input.phone;
@@ -65,8 +69,9 @@ export async function updateCustomer(
 }
 
 /** A customer with jobs stays: the jobs (and later proposals) need who they were for. */
-export async function deleteCustomer(em: EntityManager, actor: Actor, id: string): Promise<void> {
+export async function deleteCustomer(em: EntityManager, actor: Actor, id: string, version: number): Promise<void> {
   const c = await getCustomer(em, actor, id);
+  assertVersion(version, c.version, 'The customer', () => presentCustomer(c));
   if (await em.count(JobSchema, { customer: c.id }))
     throw new ConflictError('This customer has jobs; it cannot be deleted.');
   em.remove(c);

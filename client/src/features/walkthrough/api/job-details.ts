@@ -30,10 +30,12 @@ export interface CustomerChanges {
   readonly phone?: string | null;
 }
 
-export async function saveCustomer(customerId: string, changes: CustomerChanges) {
+/** PATCH /api/customers/:id, If-Match: the version the person edited. */
+export async function saveCustomer(customerId: string, version: number, changes: CustomerChanges) {
   return (
     await apiFetch(`/api/customers/${encodeURIComponent(customerId)}`, {
       method: 'PATCH',
+      version,
       body: changes,
       schema: customerResponse,
     })

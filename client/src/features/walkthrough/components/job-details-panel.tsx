@@ -205,10 +205,22 @@ function DetailsForm({ job, customer, office }: { job: JobRecord; customer: Cust
         );
         const forCustomer = customerChanges(customer, values, dirty);
         if (Object.keys(forCustomer).length > 0) {
+          const key = customerQueryOptions(customer.id).queryKey;
           try {
-            const c = await saveCustomer(customer.id, forCustomer);
-            queryClient.setQueryData(customerQueryOptions(c.id).queryKey, c);
+            const held = queryClient.getQueryData<CustomerRecord>(key) ?? customer;
+            const c = await saveCustomer(customer.id, held.version, forCustomer);
+            queryClient.setQueryData(key, c);
           } catch (e) {
+            if (isApiError(e) && e.status === 409) {
+              // Show their version; what this person typed stays in the form to save again.
+              await queryClient.invalidateQueries({ queryKey: key, exact: true });
+              throw new ApiError({
+                ...e,
+                detail:
+                  'Someone else saved this customer meanwhile. Their version is loaded now: check the fields and save again.',
+                errors: [],
+              });
+            }
             if (isApiError(e))
               throw new ApiError({
                 ...e,

@@ -25,6 +25,7 @@ describe('main navigation by role', () => {
       ['E-mail', '/mail'],
       ['Reports', '/reports'],
       ['Price book & catalog', '/price-book'],
+      ['Your account', '/account'],
     ];
     expect(navLinks('owner')).toEqual(owner);
   });
@@ -33,7 +34,10 @@ describe('main navigation by role', () => {
     expect(navLinks('owner', ['outbox']).map(([label]) => label)).toContain('Outbox');
   });
 
-  it.each<Role>(['estimator', 'salesperson', 'installer'])('shows only Jobs to the %s', (role) => {
-    expect(navLinks(role, ['outbox'])).toEqual([['Jobs', '/jobs']]);
+  it.each<Role>(['estimator', 'salesperson', 'installer'])('shows only Jobs and their account to the %s', (role) => {
+    expect(navLinks(role, ['outbox'])).toEqual([
+      ['Jobs', '/jobs'],
+      ['Your account', '/account'],
+    ]);
   });
 });

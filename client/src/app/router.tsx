@@ -34,6 +34,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
       HydrateFallback: () => <Spinner label="Opening Gaugeline…" />,
       children: [
         { path: paths.signIn, lazy: lazy(() => import('./routes/sign-in')) },
+        { path: paths.forgotPassword, lazy: lazy(() => import('./routes/forgot-password')) },
+        { path: paths.resetPassword, lazy: lazy(() => import('./routes/reset-password')) },
         {
           // The signed-in shell: its loader is the auth guard.
           path: paths.home,
@@ -43,6 +45,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             { index: true, lazy: lazy(() => import('./routes/home')) },
             ...createJobsRoutes(queryClient),
             { path: paths.users, lazy: lazy(() => import('./routes/users')) },
+            { path: paths.account, lazy: lazy(() => import('./routes/account')) },
             { path: paths.mail, lazy: lazy(() => import('./routes/mail')) },
             { path: paths.outbox, lazy: lazy(() => import('./routes/outbox')) },
             { path: paths.reports, lazy: lazy(() => import('./routes/reports')) },

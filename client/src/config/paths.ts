@@ -1,7 +1,12 @@
+import { RESET_PASSWORD_PATH } from '@contract';
+
 /** Every client URL in one place; build links with these, never with string literals. */
 export const paths = {
   home: '/',
   signIn: '/sign-in',
+  forgotPassword: '/forgot-password',
+  resetPassword: RESET_PASSWORD_PATH,
+  account: '/account',
   jobs: '/jobs',
   users: '/users',
   outbox: '/dev/outbox',

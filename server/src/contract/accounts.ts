@@ -1,7 +1,12 @@
 import { z } from 'zod';
-import { emailRule, newPasswordRule, signInPasswordRule } from './fields';
+import { emailRule, newPasswordRule, PASSWORD_MAX, PASSWORD_MIN, signInPasswordRule } from './fields';
 
 /** Accounts: changing one's password, the e-mailed reset link, and the e-mail the app sends. */
+
+/** The client page a reset e-mail links to; the token follows in the fragment (`#token=…`). */
+export const RESET_PASSWORD_PATH = '/reset-password';
+/** What the new-password fields say about length, from the one pair of bounds. */
+export const PASSWORD_HINT = `${PASSWORD_MIN} to ${PASSWORD_MAX} characters. A short sentence is easy to remember and hard to guess.`;
 
 /** How long a password-reset link works, from the moment its e-mail is sent. */
 export const RESET_LINK_MINUTES = 30;

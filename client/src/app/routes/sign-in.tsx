@@ -1,8 +1,8 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { z } from 'zod';
-import { Wordmark } from '../../components/layout/wordmark';
-import { safeNext } from '../../config/paths';
+import { PublicPage } from '../../components/layout/public-page';
+import { paths, safeNext } from '../../config/paths';
 import { meQueryOptions } from '../../features/auth/api/get-me';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
 import { searchParamsObject } from '../../lib/route-params';
@@ -27,17 +27,13 @@ export default function SignInRoute() {
   const [search] = useSearchParams();
   const navigate = useNavigate();
   return (
-    <main className="flex min-h-dvh flex-col items-center bg-ink-900 px-4 py-10 sm:justify-center">
-      <div className="w-full max-w-sm">
-        <div className="mb-6 flex justify-center">
-          <Wordmark inverse />
-        </div>
-        <div className="rounded-lg bg-white p-6 shadow-card">
-          <h1 className="mb-1 text-xl font-bold text-ink-900">Sign in</h1>
-          <p className="mb-5 text-base text-muted">Use the e-mail and password your company owner set up for you.</p>
-          <SignInForm onSignedIn={() => navigate(nextFrom(search), { replace: true })} />
-        </div>
-      </div>
-    </main>
+    <PublicPage title="Sign in" lead="Use the e-mail and password your company owner set up for you.">
+      <SignInForm onSignedIn={() => navigate(nextFrom(search), { replace: true })} />
+      <p className="mt-4 text-base">
+        <Link to={paths.forgotPassword} className="font-semibold text-ink-800 underline underline-offset-2">
+          Forgot your password?
+        </Link>
+      </p>
+    </PublicPage>
   );
 }

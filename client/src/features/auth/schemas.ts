@@ -1,5 +1,11 @@
 import { z } from 'zod';
-import { emailRule, signInPasswordRule } from '@contract';
+import {
+  changePasswordFields,
+  emailRule,
+  passwordResetFields,
+  passwordResetRequestFields,
+  signInPasswordRule,
+} from '@contract';
 import { companySchema, userSchema } from '../../types/user';
 
 export const meSchema = z.object({ user: userSchema, company: companySchema });
@@ -8,3 +14,21 @@ export type Me = z.infer<typeof meSchema>;
 /** The server's sign-in rules (the contract's), so the page reads the same either way. */
 export const signInSchema = z.object({ email: emailRule, password: signInPasswordRule });
 export type SignInInput = z.infer<typeof signInSchema>;
+
+const confirmRule = z.string().min(1, { message: 'Type the new password again.' });
+const sameTwice = { message: 'The two new passwords are not the same.', path: ['confirmPassword'] };
+
+/** Change password: the contract's fields, plus typing the new one twice (checked here only). */
+export const changePasswordFormSchema = z
+  .object({ ...changePasswordFields, confirmPassword: confirmRule })
+  .refine((v) => v.newPassword === v.confirmPassword, sameTwice);
+export type ChangePasswordForm = z.input<typeof changePasswordFormSchema>;
+
+export const forgotPasswordSchema = z.object(passwordResetRequestFields);
+
+/** The reset page's form; the token comes from the link, not from a field. */
+export const resetPasswordFormSchema = z
+  .object({ password: passwordResetFields.password, confirmPassword: confirmRule })
+  .refine((v) => v.password === v.confirmPassword, { ...sameTwice });
+
+export const messageResponse = z.object({ message: z.string() });

@@ -1,4 +1,4 @@
-import { RESET_LINK_INVALID, RESET_LINK_MINUTES } from '@contract';
+import { RESET_LINK_INVALID, RESET_LINK_MINUTES, RESET_PASSWORD_PATH } from '@contract';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Request } from 'express';
 import { createHash, randomBytes } from 'node:crypto';
@@ -113,7 +113,7 @@ export async function composeResetMessage(
     expiresAt: new Date(now.getTime() + RESET_LINK_MINUTES * 60_000),
   });
   await em.flush();
-  const link = `${deps.appOrigin.replace(/\/$/, '')}/reset-password#token=${token}`;
+  const link = `${deps.appOrigin.replace(/\/$/, '')}${RESET_PASSWORD_PATH}#token=${token}`;
   return (
     `Hello ${user.name},\n\nSomeone (we hope you) asked to set a new password for your Gaugeline account. ` +
     `Open this link within ${RESET_LINK_MINUTES} minutes to choose one:\n\n${link}\n\n` +

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Form } from '../../../components/ui/form';
 import { SelectField, SubmitButton, TextField } from '../../../components/ui/form-fields';
-import { ROLES } from '@contract';
+import { PASSWORD_HINT, ROLES } from '@contract';
 import { roleLabels } from '../../../config/roles';
 import { isApiError, onField } from '../../../lib/api-error';
 import { useCreateUser } from '../api/create-user';
@@ -47,7 +47,7 @@ export function CreateUserForm() {
             label="First password"
             type="password"
             autoComplete="new-password"
-            hint="12 to 128 characters. A short sentence is easy to remember and hard to guess."
+            hint={PASSWORD_HINT}
           />
         </div>
         <div>

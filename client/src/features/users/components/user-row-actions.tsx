@@ -1,6 +1,7 @@
 import { errorMessage } from '../../../lib/api-error';
 import type { User } from '../../../types/user';
 import { useUpdateUser } from '../api/update-user';
+import { EndSessionsButton } from './end-sessions-button';
 import { UserActiveToggle } from './user-active-toggle';
 import { UserRoleSelect } from './user-role-select';
 
@@ -22,6 +23,7 @@ export function UserRowActions({ user, isSelf }: { user: User; isSelf: boolean }
       <div className="flex flex-wrap items-center gap-2">
         <UserRoleSelect user={user} disabled={isSelf || row.pending || !user.active} onChange={row.setRole} />
         <UserActiveToggle user={user} disabled={isSelf || row.pending} busy={row.pending} onChange={row.setActive} />
+        {user.active ? <EndSessionsButton user={user} isSelf={isSelf} /> : null}
       </div>
       {isSelf ? <p className="text-sm text-muted">This is you. Another owner can change your role.</p> : null}
       {row.error ? (

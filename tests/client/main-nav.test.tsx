@@ -34,10 +34,14 @@ describe('main navigation by role', () => {
     expect(navLinks('owner', ['outbox']).map(([label]) => label)).toContain('Outbox');
   });
 
-  it.each<Role>(['estimator', 'salesperson', 'installer'])('shows only Jobs and their account to the %s', (role) => {
-    expect(navLinks(role, ['outbox'])).toEqual([
-      ['Jobs', '/jobs'],
-      ['Your account', '/account'],
-    ]);
-  });
+  it.each<Role>(['estimator', 'salesperson', 'installer'])(
+    'shows Jobs, the catalog (read-only outside the office) and their account to the %s',
+    (role) => {
+      expect(navLinks(role, ['outbox'])).toEqual([
+        ['Jobs', '/jobs'],
+        ['Price book & catalog', '/price-book'],
+        ['Your account', '/account'],
+      ]);
+    },
+  );
 });

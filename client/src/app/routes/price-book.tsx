@@ -1,7 +1,9 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router-dom';
-import { EmptyState } from '../../components/ui/empty-state';
+import { EDITORS } from '@calc';
 import { PageHeader } from '../../components/ui/page-header';
+import { useSignedIn } from '../../features/auth/api/get-me';
+import { PriceBookPage } from '../../features/price-book/components/price-book-page';
 import { requireArea } from '../guards';
 
 export const clientLoader =
@@ -12,12 +14,19 @@ export const clientLoader =
   };
 
 export default function PriceBookRoute() {
+  const { user } = useSignedIn();
+  const office = EDITORS.includes(user.role);
   return (
     <>
-      <PageHeader title="Price book & catalog" lead="Your material and labor prices, and the equipment you offer." />
-      <EmptyState title="The price book is not editable here yet">
-        Editing prices and equipment arrives in a later release. Takeoffs will be priced from what you enter here.
-      </EmptyState>
+      <PageHeader
+        title={office ? 'Price book & catalog' : 'Equipment catalog'}
+        lead={
+          office
+            ? 'The equipment you offer and what your materials, labor and kits cost. Takeoffs are priced from here.'
+            : 'The equipment your company offers and its specifications.'
+        }
+      />
+      <PriceBookPage role={user.role} />
     </>
   );
 }

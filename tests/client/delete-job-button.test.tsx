@@ -5,7 +5,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { DeleteJobButton } from '../../client/src/features/walkthrough/components/delete-job-button';
 import { clearCsrfToken } from '../../client/src/lib/api-client';
 import { jobKeys } from '../../client/src/lib/job-queries';
-import type { JobRecord } from '../../client/src/lib/job-records';
+import type { JobRecord } from '@contract';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { ViewerContext, type Viewer } from '../../client/src/lib/viewer';
 import { roomTarget, type WalkthroughEdit } from '../../client/src/features/walkthrough/sync/edits';

@@ -4,7 +4,7 @@ import { JobDetailsPanel } from '../../client/src/features/walkthrough/component
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { act } from '@testing-library/react';
 import { jobKeys, jobQueryOptions } from '../../client/src/lib/job-queries';
-import type { JobRecord } from '../../client/src/lib/job-records';
+import type { JobRecord } from '@contract';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { ViewerContext, type Viewer } from '../../client/src/lib/viewer';
 import { JOB_ID, jobRecord, renderWalkthrough } from './helpers/walkthrough-harness';

@@ -9,7 +9,7 @@ import { memoryFileStorage } from '../../client/src/lib/offline/file-storage';
 import { useQueueState } from '../../client/src/features/walkthrough/sync/queue-context';
 import { clearCsrfToken } from '../../client/src/lib/api-client';
 import { jobKeys } from '../../client/src/lib/job-queries';
-import type { RoomRecord } from '../../client/src/lib/job-records';
+import type { RoomRecord } from '@contract';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { json, mockFetch, problem } from './helpers/fetch-mock';
 import { bedroomInput, JOB_ID, renderWalkthrough, ROOM_ID, roomRecord } from './helpers/walkthrough-harness';

@@ -1,6 +1,6 @@
 import { queryOptions } from '@tanstack/react-query';
 import { apiFetch } from './api-client';
-import { jobResponse, roomsResponse, settingsResponse } from './job-records';
+import { jobResponse, roomsResponse, settingsResponse } from '@contract';
 
 /**
  * Query keys and read queries for the job records that the jobs, walk-through and loads

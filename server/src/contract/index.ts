@@ -8,3 +8,4 @@ export * from './permissions';
 export * from './fields';
 export * from './design-conditions';
 export * from './accounts';
+export * from './records';

@@ -1,21 +1,7 @@
 import { z } from 'zod';
 import { blankOr, customerRules, siteRules } from '@contract';
-import { customerRecord, customerResponse, jobRecord, type CustomerRecord } from '../../lib/job-records';
 
-/** The jobs list's records and the new-job form (field rules from the contract). */
-export const customersResponse = z.object({
-  items: z.array(customerRecord),
-  total: z.number(),
-  page: z.number(),
-  pageSize: z.number(),
-});
-export const jobsResponse = z.object({
-  items: z.array(jobRecord),
-  total: z.number(),
-  page: z.number(),
-  pageSize: z.number(),
-});
-
+/** The new-job form (field rules from the contract; the records it reads are the contract's too). */
 export const newJobSchema = z
   .object({
     customerMode: z.enum(['new', 'existing']),
@@ -35,5 +21,3 @@ export const newJobSchema = z
   });
 export type NewJobInput = z.input<typeof newJobSchema>;
 export type NewJobValues = z.output<typeof newJobSchema>;
-
-export { customerRecord, customerResponse, type CustomerRecord };

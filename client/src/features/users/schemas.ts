@@ -1,6 +1,5 @@
 import { z } from 'zod';
 import { userRules } from '@contract';
-import { userSchema } from '../../types/user';
 
 export const createUserSchema = z.object(userRules);
 export type CreateUserInput = z.infer<typeof createUserSchema>;
@@ -10,6 +9,3 @@ export interface UpdateUserInput {
   role?: CreateUserInput['role'];
   active?: boolean;
 }
-
-export const usersResponse = z.object({ users: z.array(userSchema) });
-export const userResponse = z.object({ user: userSchema });

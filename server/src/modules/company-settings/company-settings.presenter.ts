@@ -1,5 +1,5 @@
 import type { DesignConditions } from '@calc';
-import type { UnitSystem } from '@contract';
+import type { CompanySettingsRecord, UnitSystem } from '@contract';
 
 export interface SettingsView {
   unitSystem: UnitSystem;
@@ -9,7 +9,7 @@ export interface SettingsView {
   updatedAt: Date | null;
 }
 
-export function presentCompanySettings(s: SettingsView) {
+export function presentCompanySettings(s: SettingsView): CompanySettingsRecord {
   return {
     unitSystem: s.unitSystem,
     defaultDesignConditions: s.defaultDesignConditions,

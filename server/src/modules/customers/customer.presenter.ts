@@ -1,7 +1,8 @@
+import type { CustomerRecord } from '@contract';
 import type { Customer } from './customer.entity';
 
 /** The only shape a customer leaves the server in. */
-export function presentCustomer(c: Customer) {
+export function presentCustomer(c: Customer): CustomerRecord {
   return {
     id: c.id,
     name: c.name,
@@ -13,5 +14,3 @@ export function presentCustomer(c: Customer) {
     updatedAt: c.updatedAt.toISOString(),
   };
 }
-
-export type CustomerDto = ReturnType<typeof presentCustomer>;

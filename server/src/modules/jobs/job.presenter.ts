@@ -1,3 +1,4 @@
+import type { JobRecord } from '@contract';
 import type { Job } from './job.entity';
 
 /** What presentJob reads: a Job entity, or a plain row read for a hot path (job-reads.ts). */
@@ -27,7 +28,7 @@ export type JobView = Pick<
 const person = (u: { id: string; name: string } | null | undefined) => (u ? { id: u.id, name: u.name } : null);
 
 /** The only shape a job leaves the server in (the same for every role: it holds no prices yet). */
-export function presentJob(j: JobView) {
+export function presentJob(j: JobView): JobRecord {
   return {
     id: j.id,
     status: j.status,
@@ -45,5 +46,3 @@ export function presentJob(j: JobView) {
     lastActivityAt: j.lastActivityAt.toISOString(),
   };
 }
-
-export type JobDto = ReturnType<typeof presentJob>;

@@ -1,3 +1,4 @@
+import type { PhotoRecord } from '@contract';
 import type { Photo } from './photo.entity';
 
 export type PhotoView = Pick<
@@ -5,7 +6,8 @@ export type PhotoView = Pick<
   'id' | 'contentType' | 'byteSize' | 'width' | 'height' | 'originalName' | 'createdAt'
 >;
 
-export function presentPhoto(p: PhotoView, jobId: string, roomId: string) {
+/** The only shape a photo's metadata leaves the server in (the bytes go only through the photo route). */
+export function presentPhoto(p: PhotoView, jobId: string, roomId: string): PhotoRecord {
   return {
     id: p.id,
     roomId,
@@ -18,5 +20,3 @@ export function presentPhoto(p: PhotoView, jobId: string, roomId: string) {
     createdAt: p.createdAt.toISOString(),
   };
 }
-
-export type PhotoDto = ReturnType<typeof presentPhoto>;

@@ -1,3 +1,4 @@
+import type { RoomRecord } from '@contract';
 import { presentPhoto, type PhotoView } from '../photos/photo.presenter';
 import type { RoomRow } from './room.entity';
 
@@ -5,7 +6,7 @@ import type { RoomRow } from './room.entity';
 export type RoomView = Pick<RoomRow, 'id' | 'position' | 'input' | 'version' | 'createdAt' | 'updatedAt'>;
 
 /** The only shape a room leaves the server in; its photos come with it (metadata only, bytes by URL). */
-export function presentRoom(r: RoomView, jobId: string, photos: readonly PhotoView[]) {
+export function presentRoom(r: RoomView, jobId: string, photos: readonly PhotoView[]): RoomRecord {
   return {
     id: r.id,
     jobId,
@@ -17,5 +18,3 @@ export function presentRoom(r: RoomView, jobId: string, photos: readonly PhotoVi
     photos: photos.map((p) => presentPhoto(p, jobId, r.id)),
   };
 }
-
-export type RoomDto = ReturnType<typeof presentRoom>;

@@ -1,7 +1,8 @@
+import type { UserRecord } from '@contract';
 import type { User } from './user.entity';
 
 /** The only shape a user leaves the server in. */
-export function presentUser(u: User) {
+export function presentUser(u: User): UserRecord {
   return {
     id: u.id,
     name: u.name,
@@ -12,5 +13,3 @@ export function presentUser(u: User) {
     createdAt: u.createdAt.toISOString(),
   };
 }
-
-export type UserDto = ReturnType<typeof presentUser>;

@@ -1,13 +1,13 @@
 import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { isApiError } from '../../../lib/api-error';
-import { meSchema, type Me } from '../schemas';
+import { meResponse, type MeResponse } from '@contract';
 import { authKeys } from '../query-keys';
 
 /** The signed-in user and company, or null when nobody is signed in (401). */
-export async function getMe(signal?: AbortSignal): Promise<Me | null> {
+export async function getMe(signal?: AbortSignal): Promise<MeResponse | null> {
   try {
-    return await apiFetch('/api/auth/me', { schema: meSchema, signal });
+    return await apiFetch('/api/auth/me', { schema: meResponse, signal });
   } catch (e) {
     if (isApiError(e) && e.status === 401) return null;
     throw e;
@@ -22,7 +22,7 @@ export function useMe() {
 }
 
 /** For pages inside the signed-in shell, where the guard has already made sure of a session. */
-export function useSignedIn(): Me {
+export function useSignedIn(): MeResponse {
   const me = useMe();
   if (!me) throw new Error('This page needs a signed-in user.');
   return me;

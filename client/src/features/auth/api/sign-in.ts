@@ -1,14 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
 import { apiFetch, clearCsrfToken } from '../../../lib/api-client';
-import { userSchema } from '../../../types/user';
+import { userResponse } from '@contract';
 import type { SignInInput } from '../schemas';
 import { meQueryOptions } from './get-me';
 
-const signInResponse = z.object({ user: userSchema });
-
 export async function signIn(input: SignInInput) {
-  const res = await apiFetch('/api/auth/login', { method: 'POST', body: input, schema: signInResponse });
+  const res = await apiFetch('/api/auth/login', { method: 'POST', body: input, schema: userResponse });
   // The server regenerates the session at sign-in, so the old token is void.
   clearCsrfToken();
   return res.user;

@@ -1,5 +1,5 @@
 import { apiFetch } from '../../../lib/api-client';
-import { customerResponse } from '../schemas';
+import { customerResponse } from '@contract';
 
 export interface CreateCustomerBody {
   name: string;

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { jobKeys } from '../../../lib/job-queries';
-import { customersResponse } from '../schemas';
+import { customersResponse } from '@contract';
 
 /** GET /api/customers?search — the first page of matches, for picking a customer. */
 export async function getCustomers(search: string, signal?: AbortSignal) {

@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { jobKeys, type JobListFilters } from '../../../lib/job-queries';
-import { jobsResponse } from '../schemas';
+import { jobsResponse } from '@contract';
 
 /** GET /api/jobs?search&status&page&pageSize — sorted by last activity on the server. */
 export async function getJobs(filters: JobListFilters, signal?: AbortSignal) {

@@ -9,7 +9,7 @@ import { Spinner } from '../../../components/ui/spinner';
 import { errorMessage } from '../../../lib/api-error';
 import { jobPaths } from '../../../lib/job-paths';
 import { JOB_STATUSES } from '@contract';
-import { jobStatusLabels } from '../../../lib/job-records';
+import { jobStatusLabels } from '../../../lib/job-labels';
 import { useJobs } from '../api/get-jobs';
 import { filtersFromSearch } from './jobs-filters';
 import { JobsTable } from './jobs-table';

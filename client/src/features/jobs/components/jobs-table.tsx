@@ -2,7 +2,8 @@ import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/re
 import { DataTableBody, DataTableHead } from '../../../components/ui/data-table';
 import { Link } from 'react-router-dom';
 import { jobPaths } from '../../../lib/job-paths';
-import { jobStatusLabels, type JobRecord } from '../../../lib/job-records';
+import { type JobRecord } from '@contract';
+import { jobStatusLabels } from '../../../lib/job-labels';
 
 const col = createColumnHelper<JobRecord>();
 const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });

@@ -1,5 +1,5 @@
 import { METHOD_NOTES, type HomeLoad } from '@calc';
-import type { JobRecord } from '../../../lib/job-records';
+import type { JobRecord } from '@contract';
 import { COMPONENT_KEYS, COMPONENT_LABELS, tons } from '../model/compute';
 
 const n = (v: number) => v.toLocaleString('en-US');

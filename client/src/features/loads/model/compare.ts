@@ -1,6 +1,6 @@
 import type { HomeLoad } from '@calc';
 
-/** The parts of GET /api/jobs/:id/loads that are compared (ServerLoads fits it). */
+/** The parts of GET /api/jobs/:id/loads that are compared (the contract's LoadsResponse fits it). */
 export interface ServerLoadsLike {
   readonly loads: {
     readonly rooms: readonly {

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { outboxKeys } from '../query-keys';
-import { outboxResponse } from '../schemas';
+import { outboxResponse } from '@contract';
 
 export async function getOutbox(signal?: AbortSignal) {
   return (await apiFetch('/api/dev/outbox', { schema: outboxResponse, signal })).messages;

@@ -1,5 +1,5 @@
 import { Button } from '../../../components/ui/button';
-import type { OutboxMessage } from '../schemas';
+import type { OutboxMessage } from '@contract';
 
 /** Shows the plain-text part only: the HTML part is untrusted and never rendered. */
 export function MessageReader({ message, onClose }: { message: OutboxMessage; onClose: () => void }) {

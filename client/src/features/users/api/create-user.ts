@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { userKeys } from '../query-keys';
-import { userResponse, type CreateUserInput } from '../schemas';
+import { userResponse } from '@contract';
+import type { CreateUserInput } from '../schemas';
 
 export async function createUser(input: CreateUserInput) {
   return (await apiFetch('/api/users', { method: 'POST', body: input, schema: userResponse })).user;

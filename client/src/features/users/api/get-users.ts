@@ -1,7 +1,7 @@
 import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { userKeys } from '../query-keys';
-import { usersResponse } from '../schemas';
+import { usersResponse } from '@contract';
 
 export async function getUsers(signal?: AbortSignal) {
   return (await apiFetch('/api/users', { schema: usersResponse, signal })).users;

@@ -1,7 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { userKeys } from '../query-keys';
-import { userResponse, type UpdateUserInput } from '../schemas';
+import { userResponse } from '@contract';
+import type { UpdateUserInput } from '../schemas';
 
 export async function updateUser({ id, ...changes }: UpdateUserInput & { id: string }) {
   return (

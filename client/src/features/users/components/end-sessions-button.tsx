@@ -1,6 +1,6 @@
 import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/api-error';
-import type { User } from '../../../types/user';
+import type { UserRecord } from '@contract';
 import { useEndSessions } from '../api/end-sessions';
 
 function endedText(n: number, isSelf: boolean): string {
@@ -10,7 +10,7 @@ function endedText(n: number, isSelf: boolean): string {
 }
 
 /** "Sign out everywhere": for a lost phone or a shared tablet left signed in. */
-export function EndSessionsButton({ user, isSelf }: { user: User; isSelf: boolean }) {
+export function EndSessionsButton({ user, isSelf }: { user: UserRecord; isSelf: boolean }) {
   const end = useEndSessions();
   return (
     <div className="flex flex-col gap-1">

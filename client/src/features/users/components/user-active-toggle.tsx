@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
-import type { User } from '../../../types/user';
+import type { UserRecord } from '@contract';
 
 interface Props {
-  user: User;
+  user: UserRecord;
   disabled: boolean;
   busy: boolean;
   onChange: (active: boolean) => void;

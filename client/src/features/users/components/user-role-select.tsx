@@ -1,14 +1,13 @@
 import { useId } from 'react';
-import { ROLES, type Role } from '@contract';
+import { ROLES, type Role, type UserRecord } from '@contract';
 import { roleLabels } from '../../../config/roles';
-import type { User } from '../../../types/user';
 
 function isRole(v: string): v is Role {
   return ROLES.some((r) => r === v);
 }
 
 interface Props {
-  user: User;
+  user: UserRecord;
   disabled: boolean;
   onChange: (role: Role) => void;
 }

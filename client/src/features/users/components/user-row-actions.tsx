@@ -1,22 +1,22 @@
 import { errorMessage } from '../../../lib/api-error';
-import type { User } from '../../../types/user';
+import type { UserRecord } from '@contract';
 import { useUpdateUser } from '../api/update-user';
 import { EndSessionsButton } from './end-sessions-button';
 import { UserActiveToggle } from './user-active-toggle';
 import { UserRoleSelect } from './user-role-select';
 
 /** One mutation per row, so a failure shows beside the person it concerns. */
-export function useRowUpdate(user: User) {
+export function useRowUpdate(user: UserRecord) {
   const update = useUpdateUser();
   return {
     pending: update.isPending,
     error: update.error ? errorMessage(update.error) : null,
-    setRole: (role: User['role']) => update.mutate({ id: user.id, role }),
+    setRole: (role: UserRecord['role']) => update.mutate({ id: user.id, role }),
     setActive: (active: boolean) => update.mutate({ id: user.id, active }),
   };
 }
 
-export function UserRowActions({ user, isSelf }: { user: User; isSelf: boolean }) {
+export function UserRowActions({ user, isSelf }: { user: UserRecord; isSelf: boolean }) {
   const row = useRowUpdate(user);
   return (
     <div className="flex flex-col gap-2">

@@ -1,11 +1,11 @@
 import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { DataTableBody, DataTableHead } from '../../../components/ui/data-table';
 import { useMemo } from 'react';
-import type { User } from '../../../types/user';
+import type { UserRecord } from '@contract';
 import { useUsers } from '../api/get-users';
 import { UserRowActions } from './user-row-actions';
 
-const col = createColumnHelper<User>();
+const col = createColumnHelper<UserRecord>();
 
 export function UsersTable({ currentUserId }: { currentUserId: string }) {
   const users = useUsers();

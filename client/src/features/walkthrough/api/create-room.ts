@@ -1,6 +1,6 @@
 import { apiFetch } from '../../../lib/api-client';
 import { roomsPath } from '../../../lib/job-queries';
-import { roomResponse } from '../../../lib/job-records';
+import { roomResponse } from '@contract';
 import type { RoomInputValue } from '../sync/edits';
 
 /** POST /api/jobs/:jobId/rooms — the id is made on the phone so an offline create replays safely. */

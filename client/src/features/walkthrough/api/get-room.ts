@@ -1,6 +1,6 @@
 import { apiFetch } from '../../../lib/api-client';
 import { roomPath } from '../../../lib/job-queries';
-import { roomResponse } from '../../../lib/job-records';
+import { roomResponse } from '@contract';
 
 /** GET /api/jobs/:jobId/rooms/:roomId — the room as it is now (read after a conflict). */
 export async function getRoom(jobId: string, roomId: string) {

@@ -1,10 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
 import { apiFetch } from '../../../lib/api-client';
 import { jobKeys, jobPath } from '../../../lib/job-queries';
-import type { JobStatus } from '@contract';
-import { customerResponse, jobResponse } from '../../../lib/job-records';
-import { ROLES } from '@contract';
+import { customerResponse, jobResponse, staffResponse, type JobStatus } from '@contract';
 
 /** What the job details form changes on the job itself (the site, notes, who it belongs to, status). */
 export interface JobDetailsChanges {
@@ -53,9 +50,6 @@ export const customerQueryOptions = (customerId: string) =>
 export function useCustomer(customerId: string, enabled: boolean) {
   return useQuery({ ...customerQueryOptions(customerId), enabled });
 }
-
-const staffResponse = z.object({ staff: z.array(z.object({ id: z.string(), name: z.string(), role: z.enum(ROLES) })) });
-export type StaffMember = z.output<typeof staffResponse>['staff'][number];
 
 /** GET /api/staff — owner and estimator only; the people a job can be handed to. */
 export function useStaff(enabled: boolean) {

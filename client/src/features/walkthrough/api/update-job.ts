@@ -1,6 +1,6 @@
 import { apiFetch } from '../../../lib/api-client';
 import { jobPath } from '../../../lib/job-queries';
-import { jobResponse } from '../../../lib/job-records';
+import { jobResponse } from '@contract';
 import type { JobChanges } from '../sync/edits';
 
 /** PATCH /api/jobs/:jobId, If-Match: the version the person edited. */

@@ -1,6 +1,6 @@
 import { apiFetch } from '../../../lib/api-client';
 import { roomPath } from '../../../lib/job-queries';
-import { roomResponse } from '../../../lib/job-records';
+import { roomResponse } from '@contract';
 import type { RoomInputValue } from '../sync/edits';
 
 /** PATCH /api/jobs/:jobId/rooms/:roomId, If-Match: the version the person edited. */

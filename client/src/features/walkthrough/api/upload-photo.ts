@@ -1,9 +1,6 @@
-import { z } from 'zod';
 import { roomPath } from '../../../lib/job-queries';
-import { photoRecord } from '../../../lib/job-records';
 import { apiFetch } from '../../../lib/api-client';
-
-const photoResponse = z.object({ photo: photoRecord });
+import { photoResponse } from '@contract';
 
 /** POST /api/jobs/:jobId/rooms/:roomId/photos, multipart field "file" (a stored Blob keeps its name apart). */
 export async function uploadPhoto({

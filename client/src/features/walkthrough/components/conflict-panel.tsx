@@ -4,7 +4,7 @@ import { Button } from '../../../components/ui/button';
 import { Spinner } from '../../../components/ui/spinner';
 import { errorMessage } from '../../../lib/api-error';
 import { getJob, jobKeys } from '../../../lib/job-queries';
-import type { JobRecord, RoomRecord } from '../../../lib/job-records';
+import type { JobRecord, RoomRecord } from '@contract';
 import { getRoom } from '../api/get-room';
 import { diffFields, mergeChoices, type Choice } from '../../../lib/offline/conflict';
 import { describe, JOB_FIELD_LABELS, ROOM_FIELD_LABELS } from '../model/conflict';

@@ -1,8 +1,7 @@
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/api-error';
-import { mayDeleteJob } from '@contract';
-import type { JobRecord } from '../../../lib/job-records';
+import { mayDeleteJob, type JobRecord } from '@contract';
 import { useViewer } from '../../../lib/viewer';
 import { useDeleteJob } from '../api/delete-job';
 

@@ -1,8 +1,7 @@
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { INFILTRATION_TIGHTNESS } from '@calc';
-import { enteredOf, notesOf, resolveDesign, type DesignNotes, type EnteredDesign } from '@contract';
-import type { JobRecord } from '../../../lib/job-records';
+import { enteredOf, notesOf, resolveDesign, type DesignNotes, type EnteredDesign, type JobRecord } from '@contract';
 import { DESIGN_FIELD_SPECS } from '../model/design-fields';
 import { jobTarget, type JobChanges } from '../sync/edits';
 import { useWalkthroughQueue } from '../sync/queue-context';

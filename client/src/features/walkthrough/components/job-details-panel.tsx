@@ -10,6 +10,9 @@ import {
   movesFor,
   siteRules,
   type JobStatus,
+  type StaffMember,
+  type CustomerRecord,
+  type JobRecord,
 } from '@contract';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
@@ -18,7 +21,7 @@ import { SelectField, SubmitButton, TextField } from '../../../components/ui/for
 import { Spinner } from '../../../components/ui/spinner';
 import { ApiError, errorMessage, isApiError } from '../../../lib/api-error';
 import { jobKeys } from '../../../lib/job-queries';
-import { jobStatusLabels, moveLabels, type CustomerRecord, type JobRecord } from '../../../lib/job-records';
+import { jobStatusLabels, moveLabels } from '../../../lib/job-labels';
 import { useViewer, type Viewer } from '../../../lib/viewer';
 import {
   customerQueryOptions,
@@ -27,7 +30,6 @@ import {
   useCustomer,
   useStaff,
   type JobDetailsChanges,
-  type StaffMember,
 } from '../api/job-details';
 import { useWalkthroughQueue } from '../sync/queue-context';
 import { DeleteJobButton } from './delete-job-button';

@@ -1,6 +1,12 @@
-import type { JobRecord, RoomRecord } from '../../../lib/job-records';
 import type { QueueItem } from '../../../lib/offline/queue';
-import { DESIGN_FIELDS, resolveDesign, TIGHTNESS, type EnteredDesign } from '@contract';
+import {
+  type JobRecord,
+  type RoomRecord,
+  DESIGN_FIELDS,
+  resolveDesign,
+  TIGHTNESS,
+  type EnteredDesign,
+} from '@contract';
 import type { RoomInputValue, WalkthroughEdit } from './edits';
 
 /** A room as the screen shows it: the server's record with any waiting edit laid over it. */

@@ -1,8 +1,8 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { isApiError } from '../../../lib/api-error';
 import { jobKeys, roomsQueryOptions } from '../../../lib/job-queries';
-import type { JobRecord, RoomRecord } from '../../../lib/job-records';
 import type { SendResult } from '../../../lib/offline/queue';
+import type { JobRecord, RoomRecord } from '@contract';
 import { createRoom } from '../api/create-room';
 import { deleteRoom } from '../api/delete-room';
 import { getRoom } from '../api/get-room';

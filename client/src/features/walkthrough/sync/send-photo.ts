@@ -1,8 +1,8 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { isApiError } from '../../../lib/api-error';
 import { jobKeys } from '../../../lib/job-queries';
-import type { RoomRecord } from '../../../lib/job-records';
 import type { QueueState } from '../../../lib/offline/queue';
+import type { RoomRecord } from '@contract';
 import { uploadPhoto } from '../api/upload-photo';
 import type { WalkthroughEdit } from './edits';
 import type { FileSendResult } from '../../../lib/offline/file-queue';

@@ -1,0 +1,21 @@
+import type { JobStatus } from '@contract';
+
+/** Our words for job statuses, shared by the jobs and walk-through features (the records are the contract's). */
+export const jobStatusLabels: Record<JobStatus, string> = {
+  walkthrough: 'Walk-through',
+  design: 'Design',
+  proposed: 'Proposed',
+  won: 'Won',
+  lost: 'Lost',
+  installed: 'Installed',
+};
+
+/** The words on each status-move button (which moves a person may make is the contract's JOB_STATUS_MACHINE). */
+export const moveLabels: Record<JobStatus, string> = {
+  walkthrough: 'Back to walk-through',
+  design: 'Move to design',
+  proposed: 'Mark proposed',
+  won: 'Mark won',
+  lost: 'Mark lost',
+  installed: 'Mark installed',
+};

@@ -1,0 +1,189 @@
+import { z } from 'zod';
+import { enteredDesignSchema } from './design-conditions';
+import { DESIGN_VALUE_SOURCES, JOB_STATUSES, ROLES, TIGHTNESS, UNIT_SYSTEMS } from './enums';
+
+/**
+ * The response schemas: the only shapes records leave the server in. Each server presenter returns the
+ * type inferred here (so it cannot drift), the client parses each response with the same schema, and the
+ * route declarations name them so the OpenAPI document and the server tests' response check use them too.
+ * Objects are not strict: a client one version behind ignores a field added later instead of failing.
+ */
+
+const id = z.string();
+const timestamp = z.string().describe('ISO 8601 date-time');
+
+export const personRef = z.object({ id, name: z.string() });
+
+/**
+ * Design conditions as a job or the company settings hold them: the numbers calc resolved, read back without
+ * calc's bounds (calc checks them where they are used), so a stored value calc now refuses still shows up.
+ */
+export const storedDesignConditions = z.looseObject(enteredDesignSchema.shape);
+export const designSourceRecord = z.object({ source: z.enum(DESIGN_VALUE_SOURCES), note: z.string() });
+
+export const customerRecord = z.object({
+  id,
+  name: z.string(),
+  email: z.string().nullable(),
+  phone: z.string().nullable(),
+  notes: z.string(),
+  /** Optimistic lock, sent back as If-Match on every change. */
+  version: z.number().int(),
+  createdAt: timestamp,
+  updatedAt: timestamp,
+});
+export type CustomerRecord = z.output<typeof customerRecord>;
+
+export const jobRecord = z.object({
+  id,
+  status: z.enum(JOB_STATUSES),
+  customer: personRef,
+  site: z.object({
+    street: z.string(),
+    unit: z.string(),
+    city: z.string(),
+    region: z.string(),
+    postalCode: z.string(),
+  }),
+  salesperson: personRef.nullable(),
+  assignedInstaller: personRef.nullable(),
+  notes: z.string(),
+  designConditions: storedDesignConditions.nullable(),
+  designSources: z.record(z.string(), designSourceRecord),
+  tightness: z.enum(TIGHTNESS),
+  version: z.number().int(),
+  createdAt: timestamp,
+  updatedAt: timestamp,
+  lastActivityAt: timestamp,
+});
+export type JobRecord = z.output<typeof jobRecord>;
+
+export const photoRecord = z.object({
+  id,
+  roomId: id,
+  url: z.string(),
+  contentType: z.string(),
+  byteSize: z.number(),
+  width: z.number(),
+  height: z.number(),
+  originalName: z.string(),
+  createdAt: timestamp,
+});
+export type PhotoRecord = z.output<typeof photoRecord>;
+
+/** The room input is calc's RoomInput as saved; calc's roomInputSchema checks it where it is used. */
+export const roomRecord = z.object({
+  id,
+  jobId: id,
+  position: z.number().int(),
+  input: z.record(z.string(), z.unknown()),
+  version: z.number().int(),
+  createdAt: timestamp,
+  updatedAt: timestamp,
+  photos: z.array(photoRecord),
+});
+export type RoomRecord = z.output<typeof roomRecord>;
+
+export const companySettingsRecord = z.object({
+  unitSystem: z.enum(UNIT_SYSTEMS),
+  defaultDesignConditions: storedDesignConditions.nullable(),
+  /** 0 until the owner first saves; send it back as If-Match: "0". */
+  version: z.number().int(),
+  updatedAt: timestamp.nullable(),
+  designConditionsNotice: z.string().optional(),
+});
+export type CompanySettingsRecord = z.output<typeof companySettingsRecord>;
+
+export const userRecord = z.object({
+  id,
+  name: z.string(),
+  email: z.string(),
+  role: z.enum(ROLES),
+  active: z.boolean(),
+  companyId: id,
+  createdAt: timestamp,
+});
+export type UserRecord = z.output<typeof userRecord>;
+
+export const companyRecord = z.object({ id, name: z.string(), unitSystem: z.enum(UNIT_SYSTEMS) });
+export type CompanyRecord = z.output<typeof companyRecord>;
+
+export const staffMember = z.object({ id, name: z.string(), role: z.enum(ROLES) });
+export type StaffMember = z.output<typeof staffMember>;
+
+export const outboxMessage = z.object({
+  id,
+  receivedAt: timestamp,
+  from: z.string(),
+  to: z.array(z.string()),
+  subject: z.string(),
+  text: z.string(),
+  html: z.string().nullable(),
+});
+export type OutboxMessage = z.output<typeof outboxMessage>;
+
+const components = z.looseObject({ total: z.number() });
+/** calc's HomeLoad goes out as calc made it; only what the client compares is named here, the rest passes. */
+export const loadsResponse = z.object({
+  jobId: id,
+  jobVersion: z.number().int(),
+  tightness: z.enum(TIGHTNESS),
+  designConditions: z.record(z.string(), z.unknown()),
+  loads: z.looseObject({
+    rooms: z.array(
+      z.looseObject({
+        roomId: z.string(),
+        roomName: z.string(),
+        sensibleGain: components,
+        latentGain: components,
+        heatLoss: components,
+        coolingTotalBtuh: z.number(),
+      }),
+    ),
+    totals: z.looseObject({
+      sensibleBtuh: z.number(),
+      latentBtuh: z.number(),
+      coolingBtuh: z.number(),
+      heatingBtuh: z.number(),
+      sensibleHeatRatio: z.number(),
+    }),
+  }),
+  warnings: z.looseObject({
+    designConditions: z.array(z.unknown()),
+    rooms: z.record(z.string(), z.array(z.unknown())),
+  }),
+});
+export type LoadsResponse = z.output<typeof loadsResponse>;
+
+/** One page of a list. */
+export const pageOf = <T extends z.ZodType>(item: T) =>
+  z.object({ items: z.array(item), total: z.number().int(), page: z.number().int(), pageSize: z.number().int() });
+
+/** The bodies of the API's answers, by what they carry. */
+export const csrfResponse = z.object({ token: z.string().min(1) });
+export const meResponse = z.object({ user: userRecord, company: companyRecord });
+export type MeResponse = z.output<typeof meResponse>;
+export const userResponse = z.object({ user: userRecord });
+export const usersResponse = z.object({ users: z.array(userRecord) });
+export const staffResponse = z.object({ staff: z.array(staffMember) });
+export const customerResponse = z.object({ customer: customerRecord });
+export const customersResponse = pageOf(customerRecord);
+export const jobResponse = z.object({ job: jobRecord });
+export const jobsResponse = pageOf(jobRecord);
+export const roomResponse = z.object({ room: roomRecord });
+export const roomsResponse = z.object({ rooms: z.array(roomRecord) });
+export const photoResponse = z.object({ photo: photoRecord });
+export const settingsResponse = z.object({ settings: companySettingsRecord });
+export const outboxResponse = z.object({ messages: z.array(outboxMessage) });
+export const healthResponse = z.object({ status: z.enum(['ok', 'degraded']), db: z.enum(['ok', 'down']) });
+
+/** RFC 9457 problem details, as every error leaves the server (`application/problem+json`). */
+export const problemRecord = z.looseObject({
+  type: z.string(),
+  title: z.string(),
+  status: z.number().int(),
+  detail: z.string().optional(),
+  instance: z.string().optional(),
+  errors: z.array(z.object({ path: z.string(), message: z.string() })).optional(),
+});
+export type ProblemRecord = z.output<typeof problemRecord>;

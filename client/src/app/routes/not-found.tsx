@@ -5,7 +5,7 @@ import { paths } from '../../config/paths';
 export default function NotFoundRoute() {
   return (
     <section className="py-8">
-      <h1 className="text-2xl font-bold text-ink-900">Page not found</h1>
+      <h1 className="text-2xl font-semibold text-ink-900">Page not found</h1>
       <p className="mt-2 max-w-prose">
         There is no page at this address. It may have moved, or the link may be incomplete.
       </p>

@@ -34,7 +34,7 @@ export function RouteError() {
   if (!isApiError(error) && !isRouteErrorResponse(error)) console.error(error);
   return (
     <div role="alert" className="mx-auto max-w-xl px-4 py-12">
-      <h1 className="text-2xl font-bold text-ink-900">{title}</h1>
+      <h1 className="text-2xl font-semibold text-ink-900">{title}</h1>
       <p className="mt-2 text-base text-ink-950">{detail}</p>
       <div className="mt-6 flex flex-wrap gap-3">
         {signIn ? (

@@ -10,7 +10,7 @@ export function PublicPage({ title, lead, children }: { title: string; lead: Rea
           <Wordmark inverse />
         </div>
         <div className="rounded-lg bg-white p-6 shadow-card">
-          <h1 className="mb-1 text-xl font-bold text-ink-900">{title}</h1>
+          <h1 className="mb-1 text-xl font-semibold text-ink-900">{title}</h1>
           <p className="mb-5 text-base text-muted">{lead}</p>
           {children}
         </div>

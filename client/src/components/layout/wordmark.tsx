@@ -14,7 +14,7 @@ export function Wordmark({ inverse = false }: { inverse?: boolean }) {
   return (
     <span className={`inline-flex items-center gap-2 ${inverse ? 'text-white' : 'text-ink-900'}`}>
       <GaugeMark />
-      <span className="text-xl font-bold tracking-tight">Gaugeline</span>
+      <span className="text-xl font-semibold tracking-tight">Gaugeline</span>
     </span>
   );
 }

@@ -61,7 +61,7 @@ export function RoleWelcome({ role, firstName }: { role: Role; firstName: string
   return (
     <div className="flex flex-col gap-6">
       <div>
-        <h1 className="text-2xl font-bold text-ink-900">Hello, {firstName}</h1>
+        <h1 className="text-2xl font-semibold text-ink-900">Hello, {firstName}</h1>
         <p className="mt-1 text-lg text-muted">{lead}</p>
       </div>
       <Card title="What to do next">
@@ -70,7 +70,7 @@ export function RoleWelcome({ role, firstName }: { role: Role; firstName: string
             <li key={s.text} className="flex gap-3">
               <span
                 aria-hidden="true"
-                className="flex size-8 shrink-0 items-center justify-center rounded-full bg-ink-100 font-bold text-ink-800"
+                className="flex size-8 shrink-0 items-center justify-center rounded-full bg-ink-100 font-semibold text-ink-800"
               >
                 {i + 1}
               </span>

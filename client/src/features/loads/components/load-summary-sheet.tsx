@@ -29,7 +29,7 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
       <header className="flex items-start justify-between border-b-2 border-ink-800 pb-2">
         <div>
           <p className="text-xs font-semibold uppercase tracking-wide text-ink-600">Gaugeline · Load summary</p>
-          <h1 className="text-xl font-bold">{job.customer.name}</h1>
+          <h1 className="text-xl font-semibold">{job.customer.name}</h1>
           <p>
             {[job.site.street, job.site.unit, job.site.city, job.site.region, job.site.postalCode]
               .filter(Boolean)

@@ -1,5 +1,5 @@
 import { roomPlausibilityWarnings, type Room, type RoomLoad } from '@calc';
-import { ComponentChart } from './component-chart';
+import { LazyComponentChart } from './lazy-component-chart';
 import { LoadFigures } from './load-figures';
 
 /** One room on the loads page: the figures, the breakdown and any plain-word warnings. */
@@ -14,7 +14,7 @@ export function RoomLoadCard({ load, room }: { load: RoomLoad; room: Room | unde
         {load.roomName} <span className="text-sm font-normal text-muted">{load.floorAreaFt2} ft²</span>
       </h3>
       <LoadFigures load={load} />
-      <ComponentChart sensible={load.sensibleGain} latent={load.latentGain} heatLoss={load.heatLoss} />
+      <LazyComponentChart sensible={load.sensibleGain} latent={load.latentGain} heatLoss={load.heatLoss} />
       {warnings.length > 0 ? (
         <ul className="list-disc pl-5 text-sm text-amber-deep">
           {warnings.map((w) => (

@@ -1,7 +1,7 @@
 import type { PlausibilityWarning, Room } from '@calc';
 import { Alert } from '../../../components/ui/alert';
 import { computeRoomLoad } from '../model/compute';
-import { ComponentChart } from './component-chart';
+import { LazyComponentChart } from './lazy-component-chart';
 import { EstimateBadge } from './estimate-note';
 import { LoadFigures } from './load-figures';
 
@@ -27,7 +27,7 @@ export function RoomLoadPanel({ room, warnings, designConditions, tightness }: P
       {result?.ok ? (
         <>
           <LoadFigures load={result.value} />
-          <ComponentChart
+          <LazyComponentChart
             sensible={result.value.sensibleGain}
             latent={result.value.latentGain}
             heatLoss={result.value.heatLoss}

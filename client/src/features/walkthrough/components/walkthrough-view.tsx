@@ -1,5 +1,5 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
-import { useState } from 'react';
+import { lazy, Suspense, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { Alert } from '../../../components/ui/alert';
@@ -15,7 +15,6 @@ import { usePhotoQueue } from '../sync/photo-queue-context';
 import { useQueueState, useWalkthroughQueue } from '../sync/queue-context';
 import { ConflictPanel } from './conflict-panel';
 import { DesignConditionsForm } from './design-conditions-form';
-import { JobDetailsPanel } from './job-details-panel';
 import { LiveSaveStatus } from './live-save-status';
 import { PhotoRefusals } from './photo-refusals';
 import { RoomEditor } from './room-editor';
@@ -23,6 +22,9 @@ import { RoomListActions } from './room-list-actions';
 import { RoomTabs } from './room-tabs';
 import { UnitSystemContext } from './unit-system';
 import { clearUnsavedDraft } from '../../../lib/offline/drafts';
+
+// Folded under the walk-through and not needed to start typing a room: it loads after the page (issue 11).
+const JobDetailsPanel = lazy(async () => ({ default: (await import('./job-details-panel')).JobDetailsPanel }));
 
 /**
  * The walk-through of one job: design conditions, rooms one at a time, live loads.
@@ -70,7 +72,7 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
       <div className="flex flex-col gap-6 pb-24">
         <header className="sticky top-0 z-10 -mx-4 flex flex-wrap items-center justify-between gap-2 border-b border-line bg-paper/95 px-4 py-2 backdrop-blur">
           <div>
-            <h1 className="text-xl font-bold text-ink-900">{job.customer.name}</h1>
+            <h1 className="text-xl font-semibold text-ink-900">{job.customer.name}</h1>
             <p className="text-sm text-muted">{address}</p>
           </div>
           <div className="flex flex-wrap items-center gap-2">
@@ -101,7 +103,9 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
         <PhotoRefusals show={(n) => n.jobId === job.id && n.roomId !== current?.id} />
 
         <QueryWidgetBoundary name="the job details">
-          <JobDetailsPanel job={serverJob} />
+          <Suspense fallback={<div className="min-h-touch rounded-lg border border-line bg-white p-4" />}>
+            <JobDetailsPanel job={serverJob} />
+          </Suspense>
         </QueryWidgetBoundary>
 
         <details className="rounded-lg border border-line bg-white p-4" open={job.designConditions === null}>

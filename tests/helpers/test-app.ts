@@ -63,11 +63,12 @@ export async function buildTestApp(overrides: Partial<Config> = {}, clock: Clock
   const queue = createQueue({
     databaseUrl: url,
     handlers: taskHandlers(base),
-    namespace: `t-${randomUUID().slice(0, 8)}`,
+    namespace: config.QUEUE_NAMESPACE ?? `t-${randomUUID().slice(0, 8)}`,
     concurrency: 1,
     pollIntervalMs: 200,
   });
-  await queue.start();
+  // QUEUE_WORKERS: 'off' in the overrides: the app only adds jobs (a worker process runs them).
+  if (config.QUEUE_WORKERS === 'on') await queue.start();
   const services: Services = { ...base, queue };
   const app = createApp(services);
   return {

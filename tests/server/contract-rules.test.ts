@@ -1,5 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
+  MESSAGE_KINDS,
+  MESSAGE_STATES,
   JOB_STATUSES,
   mayDeleteJob,
   mayMoveJob,
@@ -89,6 +91,8 @@ describe('the database agrees with the contract', () => {
     ['job', 'status', JOB_STATUSES],
     ['app_user', 'role', ROLES],
     ['company', 'unit_system', UNIT_SYSTEMS],
+    ['outgoing_message', 'kind', MESSAGE_KINDS],
+    ['outgoing_message', 'state', MESSAGE_STATES],
   ] as const)('%s.%s allows exactly the contract list', async (table, column, list) => {
     expect((await checkValues(table, column)).sort()).toEqual([...list].sort());
   });

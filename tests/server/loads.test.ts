@@ -102,4 +102,38 @@ describe('GET /api/jobs/:id/loads', () => {
       message: 'A 2 ft ceiling is unusually low — check the measurement.',
     });
   });
+
+  it('the whole-house facts (bedrooms, blower door, ventilation) are saved with the job and used by the loads; bad ones are refused', async () => {
+    const job = await newJob(sales);
+    await newRoom(sales, job.id, { name: 'Main bedroom', areaFt2: 200, above: { kind: 'attic' } });
+    const house = { bedrooms: 3, blowerDoorCfm50: 900, ventilation: { kind: 'balanced' as const } };
+    const saved = await patch(sales, `/api/jobs/${job.id}`, job.version).send({ house });
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200);
+    expect(saved.body.job.house).toEqual(house);
+    const r = await sales.agent.get(`/api/jobs/${job.id}/loads`);
+    expect(r.status, JSON.stringify(r.body)).toBe(200);
+    // 62.2: 0.03 × 200 + 7.5 × (3 + 1) = 36 cfm [MEM: ASHRAE 62.2]; blower door 900 × 60 / 1,600 ft³ / 20 = 1.6875 ACH
+    expect(r.body.loads.air).toMatchObject({ ventilationKind: 'balanced', ventilationCfm: 36, winterAch: 1.688 });
+    expect(r.body.house).toEqual(house);
+    // Refused whole, nothing changed: out of bounds, an unknown key, an unknown system
+    for (const bad of [{ bedrooms: 25 }, { bedrooms: 2, pets: 1 }, { ventilation: { kind: 'window' } }]) {
+      const res = await patch(sales, `/api/jobs/${job.id}`, saved.body.job.version).send({ house: bad });
+      expectProblem(res, 400);
+    }
+    const again = await sales.agent.get(`/api/jobs/${job.id}`);
+    expect(again.body.job.house).toEqual(house);
+  });
+
+  it('the database refuses a house that bypasses the API (CHECK constraints mirror calc’s bounds)', async () => {
+    const job = await newJob(sales);
+    const conn = t.orm.em.fork().getConnection();
+    await expect(
+      conn.execute(`update "job" set "house" = '{"bedrooms": 99}'::jsonb where "id" = '${job.id}'`),
+    ).rejects.toThrow();
+    await expect(
+      conn.execute(
+        `update "job" set "house" = '{"ventilation": {"kind": "open-window"}}'::jsonb where "id" = '${job.id}'`,
+      ),
+    ).rejects.toThrow();
+  });
 });

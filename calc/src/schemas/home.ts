@@ -24,6 +24,14 @@ export const ventilationSchema = z.object({
   latentEffectiveness: bounded('Latent effectiveness', 0, 0.9).optional(),
 });
 
+/** What the walk-through records about the whole house beyond its rooms (all optional). */
+export const houseSchema = z.object({
+  /** Blower-door airflow at 50 Pa; when given it replaces the tightness guess. */
+  blowerDoorCfm50: bounded('Blower-door CFM50', 50, 20000, 'cfm').optional(),
+  bedrooms: boundedInt('Bedrooms', 0, 20).optional(),
+  ventilation: ventilationSchema.optional(),
+});
+
 /** A home: its design conditions, its tightness and its rooms (unique ids). */
 export const homeInputSchema = z
   .object({
@@ -31,10 +39,7 @@ export const homeInputSchema = z
     name: nameField('Home name').optional(),
     designConditions: designConditionsSchema,
     tightness: tightnessSchema.default('average'),
-    /** Blower-door airflow at 50 Pa; when given it replaces the tightness guess. */
-    blowerDoorCfm50: bounded('Blower-door CFM50', 50, 20000, 'cfm').optional(),
-    bedrooms: boundedInt('Bedrooms', 0, 20).optional(),
-    ventilation: ventilationSchema.optional(),
+    ...houseSchema.shape,
     rooms: z.array(roomInputSchema).min(1, 'Add at least one room').max(200, 'At most 200 rooms'),
   })
   .superRefine((home, ctx) => {
@@ -50,4 +55,6 @@ export type HomeInput = z.input<typeof homeInputSchema>;
 export type Home = z.output<typeof homeInputSchema>;
 export type Tightness = z.output<typeof tightnessSchema>;
 export type Ventilation = z.output<typeof ventilationSchema>;
+export type House = z.output<typeof houseSchema>;
+export type HouseInput = z.input<typeof houseSchema>;
 export type VentilationKind = z.output<typeof ventilationKindSchema>;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { designConditionsSchema, type DesignConditions } from '@calc';
+import { designConditionsSchema, houseSchema, type DesignConditions } from '@calc';
 import type { DesignValueSource } from './enums';
 
 /**
@@ -142,3 +142,10 @@ export function notesOf(sources: DesignSources): DesignNotes {
   }
   return out;
 }
+
+/**
+ * The whole-house facts a job stores beside its design conditions (bedrooms, blower door, ventilation):
+ * calc's houseSchema with unknown keys refused. Sent whole on each save.
+ */
+export const houseInputSchema = z.strictObject(houseSchema.shape);
+export type HouseFields = z.output<typeof houseInputSchema>;

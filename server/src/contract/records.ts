@@ -51,6 +51,8 @@ export const jobRecord = z.object({
   designConditions: storedDesignConditions.nullable(),
   designSources: z.record(z.string(), designSourceRecord),
   tightness: z.enum(TIGHTNESS),
+  /** Bedrooms, blower-door CFM50, ventilation (calc's houseSchema; read back without its bounds, checked where used). */
+  house: z.record(z.string(), z.unknown()).optional(),
   version: z.number().int(),
   createdAt: timestamp,
   updatedAt: timestamp,
@@ -128,6 +130,7 @@ export const loadsResponse = z.object({
   jobId: id,
   jobVersion: z.number().int(),
   tightness: z.enum(TIGHTNESS),
+  house: z.record(z.string(), z.unknown()).optional(),
   designConditions: z.record(z.string(), z.unknown()),
   loads: z.looseObject({
     rooms: z.array(

@@ -25,6 +25,7 @@ interface JobRow {
   design_conditions: DesignConditions | null;
   design_sources: DesignSources;
   tightness: JobView['tightness'];
+  house: JobView['house'] | null;
   version: number;
   created_at: Date | string;
   updated_at: Date | string;
@@ -38,7 +39,7 @@ interface JobRow {
 }
 
 const JOB_COLUMNS = `j.id, j.status, j.street, j.unit, j.city, j.region, j.postal_code, j.notes, j.design_conditions,
-  j.design_sources, j.tightness, j.version, j.created_at, j.updated_at, j.last_activity_at,
+  j.design_sources, j.tightness, j.house, j.version, j.created_at, j.updated_at, j.last_activity_at,
   c.id as customer_id, c.name as customer_name, s.id as salesperson_id, s.name as salesperson_name,
   i.id as installer_id, i.name as installer_name`;
 const JOB_FROM = `from "job" j join "customer" c on c.id = j.customer_id join "app_user" s on s.id = j.salesperson_id
@@ -71,6 +72,7 @@ function toView(r: JobRow): JobView {
     designConditions: r.design_conditions,
     designSources: r.design_sources,
     tightness: r.tightness,
+    house: r.house ?? {},
     version: r.version,
     createdAt: date(r.created_at),
     updatedAt: date(r.updated_at),

@@ -1,6 +1,6 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
 import { randomUUID } from 'node:crypto';
-import type { DesignConditions } from '@calc';
+import type { DesignConditions, House } from '@calc';
 import { JOB_STATUSES, TIGHTNESS, type DesignSources } from '@contract';
 import { CompanySchema } from '../companies/company.entity';
 import { CustomerSchema } from '../customers/customer.entity';
@@ -31,6 +31,8 @@ export const JobSchema = defineEntity({
     /** Where each design value came from, with a free-text note (e.g. the local code table). */
     designSources: p.json<DesignSources>(),
     tightness: p.enum([...TIGHTNESS]).default('average'),
+    /** Bedrooms, blower-door CFM50 and ventilation system (calc's houseSchema); {} until known. */
+    house: p.json<House>().defaultRaw("'{}'::jsonb"),
     version: p.integer().version(),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p

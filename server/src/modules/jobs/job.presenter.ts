@@ -15,6 +15,7 @@ export type JobView = Pick<
   | 'designConditions'
   | 'designSources'
   | 'tightness'
+  | 'house'
   | 'version'
   | 'createdAt'
   | 'updatedAt'
@@ -40,6 +41,7 @@ export function presentJob(j: JobView): JobRecord {
     designConditions: j.designConditions ?? null,
     designSources: j.designSources,
     tightness: j.tightness,
+    house: { ...(j.house ?? {}) },
     version: j.version,
     createdAt: j.createdAt.toISOString(),
     updatedAt: j.updatedAt.toISOString(),

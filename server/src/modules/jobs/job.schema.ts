@@ -1,5 +1,13 @@
 import { z } from 'zod';
-import { designNotesSchema, enteredDesignSchema, JOB_STATUSES, listQueryFields, siteRules, TIGHTNESS } from '@contract';
+import {
+  designNotesSchema,
+  enteredDesignSchema,
+  houseInputSchema,
+  JOB_STATUSES,
+  listQueryFields,
+  siteRules,
+  TIGHTNESS,
+} from '@contract';
 
 const status = z.enum(JOB_STATUSES, { message: `Status must be one of: ${JOB_STATUSES.join(', ')}.` });
 
@@ -12,6 +20,7 @@ const fields = {
   /** Entered values only; a field left out takes the company default (see design-conditions.ts). */
   designConditions: enteredDesignSchema,
   designSourceNotes: designNotesSchema,
+  house: houseInputSchema,
 };
 
 export const createJobSchema = z.strictObject({
@@ -23,6 +32,7 @@ export const createJobSchema = z.strictObject({
   tightness: fields.tightness.optional(),
   designConditions: fields.designConditions.optional(),
   designSourceNotes: fields.designSourceNotes.optional(),
+  house: fields.house.optional(),
 });
 
 export const updateJobSchema = z

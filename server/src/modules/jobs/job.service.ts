@@ -83,6 +83,7 @@ export async function createJob(em: EntityManager, actor: Actor, clock: Clock, i
     designConditions: design?.conditions ?? null,
     designSources: design?.sources ?? {},
     tightness: input.tightness ?? 'average',
+    house: input.house ?? {},
     lastActivityAt: now,
   });
   await em.flush();
@@ -122,6 +123,7 @@ export async function updateJob(
   if (input.postalCode !== undefined) job.postalCode = input.postalCode;
   if (input.notes !== undefined) job.notes = input.notes;
   if (input.tightness !== undefined) job.tightness = input.tightness;
+  if (input.house !== undefined) job.house = input.house;
   if (input.designConditions !== undefined || input.designSourceNotes !== undefined) {
     const entered = input.designConditions ?? enteredOf(job.designConditions ?? null, job.designSources);
     const notes = input.designSourceNotes ?? notesOf(job.designSources);

@@ -18,6 +18,7 @@ export function loadsRoutes(api: ApiRouter): void {
         jobId: r.job.id,
         jobVersion: r.job.version,
         tightness: r.job.tightness,
+        house: r.job.house ?? {},
         designConditions: r.home.designConditions,
         loads: r.load,
         warnings: r.warnings,

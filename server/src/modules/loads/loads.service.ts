@@ -14,7 +14,7 @@ import { scopeSql } from '../jobs/job-reads';
 import type { Job } from '../jobs/job.entity';
 
 export interface JobLoads {
-  job: Pick<Job, 'id' | 'version' | 'tightness'>;
+  job: Pick<Job, 'id' | 'version' | 'tightness' | 'house'>;
   home: HomeInput;
   load: HomeLoad;
   warnings: { designConditions: PlausibilityWarning[]; rooms: Record<string, PlausibilityWarning[]> };
@@ -33,10 +33,11 @@ export async function jobLoads(em: EntityManager, actor: Actor, jobId: string): 
       version: number;
       tightness: Job['tightness'];
       design_conditions: Job['designConditions'];
+      house: Job['house'] | null;
       rooms: Room[];
     }[]
   >(
-    `select j.id, j.version, j.tightness, j.design_conditions,
+    `select j.id, j.version, j.tightness, j.design_conditions, j.house,
        coalesce((select json_agg(r.input order by r.position, r.created_at, r.id) from "room" r where r.job_id = j.id),
          '[]'::json) as rooms
      from "job" j where j.id = ? and ${scope.sql}`,
@@ -54,12 +55,19 @@ export async function jobLoads(em: EntityManager, actor: Actor, jobId: string): 
       errors: [{ path: 'rooms', message: 'Add at least one room.' }],
     });
   }
-  const home: HomeInput = { id: job.id, designConditions: conditions, tightness: job.tightness, rooms: job.rooms };
+  const house = job.house ?? {};
+  const home: HomeInput = {
+    id: job.id,
+    designConditions: conditions,
+    tightness: job.tightness,
+    ...house,
+    rooms: job.rooms,
+  };
   const load = homeLoad({ home });
   const rooms: Record<string, PlausibilityWarning[]> = {};
   for (const r of job.rooms) rooms[r.id] = roomPlausibilityWarnings(r);
   return {
-    job: { id: job.id, version: job.version, tightness: job.tightness },
+    job: { id: job.id, version: job.version, tightness: job.tightness, house },
     home,
     load,
     warnings: { designConditions: designConditionsWarnings(conditions), rooms },

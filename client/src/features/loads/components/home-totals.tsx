@@ -1,20 +1,52 @@
+import { lazy, Suspense } from 'react';
 import type { HomeLoad } from '@calc';
 import { EstimateBadge } from './estimate-note';
 
-const n = (v: number) => v.toLocaleString('en-US');
+const HourlyChart = lazy(() => import('./hourly-chart'));
 
-/** Whole-home totals and the sensible heat ratio. */
-export function HomeTotals({ load, skipped = [] }: { load: HomeLoad; skipped?: readonly string[] }) {
+const n = (v: number) => v.toLocaleString('en-US');
+const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+
+/** "15:00" for a design-day hour (solar time). */
+export const hourLabel = (h: number) => `${String(h).padStart(2, '0')}:00`;
+
+/** The design day in words: latitude, the 21st of the month, and where the clear sky comes from. */
+export function designDayLine(load: HomeLoad): string {
+  const d = load.designDay;
+  const lat = `${Math.abs(d.latitudeDeg)}° ${d.latitudeDeg < 0 ? 'S' : 'N'}${d.latitudeAssumed ? ' (assumed: no latitude entered)' : ''}`;
+  const sky = d.skyIsGeneric
+    ? `generic clear sky τb ${d.tauB} / τd ${d.tauD} — not the site’s data`
+    : `clear sky τb ${d.tauB} / τd ${d.tauD} (${d.skySource})`;
+  return `Design day ${MONTHS[d.month - 1] ?? ''} 21 at ${lat}; ${sky}.`;
+}
+
+/**
+ * Whole-home totals: the block (coincident) load at the home's peak hour beside the sum of the
+ * rooms' own peaks, the sensible heat ratio, heat loss; on the loads page also the hour-by-hour curve.
+ */
+export function HomeTotals({
+  load,
+  skipped = [],
+  chart = false,
+}: {
+  load: HomeLoad;
+  skipped?: readonly string[];
+  chart?: boolean;
+}) {
   const t = load.totals;
+  const b = load.block;
   const rows: [string, string][] = [
+    ['Total cooling (block)', `${n(t.coolingBtuh)} Btu/h`],
+    ['Cooling', `${t.coolingTons} tons`],
     ['Sensible gain', `${n(t.sensibleBtuh)} Btu/h`],
     ['Latent gain', `${n(t.latentBtuh)} Btu/h`],
-    ['Total cooling', `${n(t.coolingBtuh)} Btu/h`],
-    ['Cooling', `${t.coolingTons} tons`],
     ['Heat loss', `${n(t.heatingBtuh)} Btu/h`],
     ['Sensible heat ratio', t.sensibleHeatRatio.toFixed(2)],
+    ['Home peaks at', `${hourLabel(b.hour)} solar time`],
     ['Floor area', `${n(t.floorAreaFt2)} ft²`],
   ];
+  const share =
+    b.sumOfRoomPeaksSensibleBtuh > 0 ? Math.round((b.sensibleBtuh / b.sumOfRoomPeaksSensibleBtuh) * 100) : 100;
   return (
     <section
       aria-label="Whole-home loads"
@@ -32,6 +64,17 @@ export function HomeTotals({ load, skipped = [] }: { load: HomeLoad; skipped?: r
           </div>
         ))}
       </dl>
+      <p className="text-sm text-ink-950" data-testid="block-vs-peaks">
+        Block sensible load {n(b.sensibleBtuh)} Btu/h at {hourLabel(b.hour)} against {n(b.sumOfRoomPeaksSensibleBtuh)}{' '}
+        Btu/h if every room peaked at once ({share} %): rooms peak at different hours, so equipment is sized on the
+        block load.
+      </p>
+      <p className="text-sm text-muted">{designDayLine(load)}</p>
+      {chart ? (
+        <Suspense fallback={<p className="h-[220px] text-sm text-muted">Drawing the design day…</p>}>
+          <HourlyChart hours={load.hourly} blockHour={b.hour} />
+        </Suspense>
+      ) : null}
       {skipped.length > 0 ? (
         <p className="text-sm text-amber-deep">Not counted until their fields are fixed: {skipped.join(', ')}.</p>
       ) : null}

@@ -5,11 +5,12 @@ interface Props {
   rooms: readonly { readonly id: string; readonly input: Record<string, unknown> }[];
   designConditions: Record<string, unknown> | null;
   tightness: string;
+  house?: Record<string, unknown> | undefined;
 }
 
 /** The whole home, recomputed in the browser from the rooms as they stand (saved or waiting). */
-export function LiveHomeTotals({ rooms, designConditions, tightness }: Props) {
-  const result = computeHomeLoad(rooms, designConditions, tightness);
+export function LiveHomeTotals({ rooms, designConditions, tightness, house }: Props) {
+  const result = computeHomeLoad(rooms, designConditions, tightness, house ?? {});
   if (!result.ok) return <p className="rounded-md border border-line bg-white p-4 text-muted">{result.message}</p>;
   return <HomeTotals load={result.value.load} skipped={result.value.skipped} />;
 }

@@ -10,6 +10,11 @@ export function LoadFigures({ load }: { load: RoomLoad }) {
     ['Latent gain', `${n(load.latentGain.total)} Btu/h`],
     ['Total cooling', `${n(load.coolingTotalBtuh)} Btu/h (${tons(load.coolingTotalBtuh)} tons)`],
     ['Heat loss', `${n(load.heatLoss.total)} Btu/h`],
+    ['Peaks at', `${String(load.peakHour).padStart(2, '0')}:00 solar time`],
+    [
+      'At the home’s peak',
+      `${n(load.atBlock.sensibleBtuh)} Btu/h sensible (${String(load.atBlock.hour).padStart(2, '0')}:00)`,
+    ],
   ];
   return (
     <dl className="grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-4 lg:grid-cols-2">

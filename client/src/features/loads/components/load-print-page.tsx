@@ -13,7 +13,7 @@ export function LoadPrintPage() {
   const { jobId } = loadsParams.parse(useParams());
   const job = useSuspenseQuery(jobQueryOptions(jobId)).data;
   const rooms = useSuspenseQuery(roomsQueryOptions(jobId)).data;
-  const result = computeHomeLoad(rooms, job.designConditions, job.tightness);
+  const result = computeHomeLoad(rooms, job.designConditions, job.tightness, job.house ?? {});
   const printedOn = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium' }).format(new Date());
   return (
     <div className="flex flex-col gap-4">

@@ -1,5 +1,6 @@
 import { METHOD_NOTES, type HomeLoad } from '@calc';
 import type { JobRecord } from '@contract';
+import { designDayLine, hourLabel } from './home-totals';
 import { COMPONENT_KEYS, COMPONENT_LABELS, tons } from '../model/compute';
 
 const n = (v: number) => v.toLocaleString('en-US');
@@ -13,6 +14,10 @@ const DESIGN_ROWS: [string, string, string][] = [
   ['indoorCoolingRhPercent', 'Indoor relative humidity', '%'],
   ['dailyRangeF', 'Daily range', '°F'],
   ['elevationFt', 'Elevation', 'ft'],
+  ['latitudeDeg', 'Latitude', '°'],
+  ['designMonth', 'Design month', ''],
+  ['clearSkyTauB', 'Clear-sky τb', ''],
+  ['clearSkyTauD', 'Clear-sky τd', ''],
 ];
 const sourceWords: Record<string, string> = {
   entered: 'entered',
@@ -78,6 +83,7 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
               <th className="text-right">Cooling</th>
               <th className="text-right">Tons</th>
               <th className="text-right">Heat loss</th>
+              <th className="text-right">Peak</th>
             </tr>
           </thead>
           <tbody>
@@ -90,20 +96,26 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
                 <td className="text-right">{n(r.coolingTotalBtuh)}</td>
                 <td className="text-right">{tons(r.coolingTotalBtuh)}</td>
                 <td className="text-right">{n(r.heatLoss.total)}</td>
+                <td className="text-right">{hourLabel(r.peakHour)}</td>
               </tr>
             ))}
             <tr className="font-semibold">
-              <td>Whole home</td>
+              <td>Whole home (block)</td>
               <td className="text-right">{n(t.floorAreaFt2)}</td>
               <td className="text-right">{n(t.sensibleBtuh)}</td>
               <td className="text-right">{n(t.latentBtuh)}</td>
               <td className="text-right">{n(t.coolingBtuh)}</td>
               <td className="text-right">{t.coolingTons}</td>
               <td className="text-right">{n(t.heatingBtuh)}</td>
+              <td className="text-right">{hourLabel(load.block.hour)}</td>
             </tr>
           </tbody>
         </table>
-        <p className="text-xs">Sensible heat ratio {t.sensibleHeatRatio.toFixed(2)}.</p>
+        <p className="text-xs">
+          Rooms show their own peak; the whole home is the block load, the hour at which all rooms together peak (
+          {hourLabel(load.block.hour)} solar time; {n(load.block.sumOfRoomPeaksSensibleBtuh)} Btu/h sensible if every
+          room peaked at once). Sensible heat ratio {t.sensibleHeatRatio.toFixed(2)}.
+        </p>
       </section>
 
       <section aria-label="Where the load comes from">
@@ -129,7 +141,11 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
       </section>
 
       <footer className="border-t border-line pt-2 text-[0.7rem] leading-snug">
-        <p className="font-semibold">A load estimate is an estimate. Method and assumptions:</p>
+        <p className="font-semibold">
+          A load estimate is an estimate. Method: hour-by-hour design day after ASHRAE Handbook—Fundamentals; block peak
+          at {hourLabel(load.block.hour)} solar time. {designDayLine(load)}{' '}
+          {typeof dc.source === 'string' && dc.source ? `Design values from ${dc.source}.` : ''} Assumptions:
+        </p>
         <ul className="list-disc pl-4 sm:columns-2 sm:gap-6 print:columns-2 print:gap-6">
           {METHOD_NOTES.map((m) => (
             <li key={m}>{m}</li>

@@ -20,7 +20,7 @@ export function LoadsPage() {
   const { jobId } = loadsParams.parse(useParams());
   const job = useSuspenseQuery(jobQueryOptions(jobId)).data;
   const rooms = useSuspenseQuery(roomsQueryOptions(jobId)).data;
-  const result = computeHomeLoad(rooms, job.designConditions, job.tightness);
+  const result = computeHomeLoad(rooms, job.designConditions, job.tightness, job.house ?? {});
   const parsedRooms = new Map(
     rooms.flatMap((r) => {
       const p = roomInputSchema.safeParse({ ...r.input, id: r.id });
@@ -34,7 +34,7 @@ export function LoadsPage() {
     <div className="flex flex-col gap-5">
       <PageHeader
         title={`Loads — ${job.customer.name}`}
-        lead="Room-by-room heat gain and heat loss from the saved walk-through."
+        lead="Hour by hour through the design day: each room’s own peak, and the whole home’s block load."
         actions={
           <div className="flex flex-wrap gap-2">
             <Link className={buttonClass('secondary')} to={jobPaths.walkthrough(jobId)}>
@@ -49,7 +49,7 @@ export function LoadsPage() {
       {!result.ok ? <p className="rounded-md border border-line bg-white p-4">{result.message}</p> : null}
       {result.ok ? (
         <>
-          <HomeTotals load={result.value.load} skipped={result.value.skipped} />
+          <HomeTotals load={result.value.load} skipped={result.value.skipped} chart />
           <QueryWidgetBoundary name="the server check">
             <ServerCheck jobId={jobId} jobVersion={job.version} browser={result.value.load} />
           </QueryWidgetBoundary>

@@ -4,6 +4,7 @@ import {
   COMPONENT_KEYS,
   designConditionsSchema,
   homeLoad,
+  houseSchema,
   roomInputSchema,
   roomLoad,
   roundHalfUp,
@@ -63,6 +64,12 @@ export function computeRoomLoad(
   }
 }
 
+/** The job's whole-house facts as calc reads them; a stored value calc refuses is left out (the form shows why). */
+export function houseOf(house: Record<string, unknown>) {
+  const parsed = houseSchema.safeParse(house);
+  return parsed.success ? parsed.data : {};
+}
+
 /**
  * The whole home from the rooms calc accepts; rooms it refuses are named in `skipped`
  * so the totals never silently leave one out.
@@ -71,6 +78,7 @@ export function computeHomeLoad(
   inputs: readonly { readonly id: string; readonly input: Record<string, unknown> }[],
   designConditions: Record<string, unknown> | null,
   tightness: string,
+  house: Record<string, unknown> = {},
 ): LoadResult<{ load: HomeLoad; skipped: readonly string[] }> {
   if (!designConditions) return { ok: false, message: 'Enter the design conditions for the site to see the loads.' };
   const rooms: Room[] = [];
@@ -88,7 +96,14 @@ export function computeHomeLoad(
     return {
       ok: true,
       value: {
-        load: homeLoad({ home: { designConditions: parsedConditions.data, tightness: toTightness(tightness), rooms } }),
+        load: homeLoad({
+          home: {
+            designConditions: parsedConditions.data,
+            tightness: toTightness(tightness),
+            ...houseOf(house),
+            rooms,
+          },
+        }),
         skipped,
       },
     };

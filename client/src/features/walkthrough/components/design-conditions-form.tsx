@@ -1,12 +1,13 @@
 import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
-import { INFILTRATION_TIGHTNESS } from '@calc';
+import { INFILTRATION_TIGHTNESS, houseSchema } from '@calc';
 import { enteredOf, notesOf, resolveDesign, type DesignNotes, type EnteredDesign, type JobRecord } from '@contract';
 import { DESIGN_FIELD_SPECS } from '../model/design-fields';
 import { jobTarget, type JobChanges } from '../sync/edits';
 import { useWalkthroughQueue } from '../sync/queue-context';
 import { useDebouncedSave } from '../../../lib/offline/use-debounced-save';
 import { NumberInput, SelectInput, TextInput } from './field-kit';
+import { HouseFields, type HouseDraft } from './house-fields';
 
 const NOTICE =
   'Design values must come from the local code’s climate table or a recognised climatic data source for the site.';
@@ -32,7 +33,12 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
     typeof job.designConditions?.source === 'string' ? job.designConditions.source : '',
   );
   const [tightness, setTightness] = useState<string>(job.tightness);
-  const resolve = (e: EnteredDesign, s: string) => resolveDesign({ ...e, source: s }, companyDefaults);
+  const [skySource, setSkySource] = useState(() =>
+    typeof job.designConditions?.clearSkySource === 'string' ? job.designConditions.clearSkySource : '',
+  );
+  const [house, setHouse] = useState<HouseDraft>(() => job.house ?? {});
+  const resolve = (e: EnteredDesign, s: string, sky = skySource) =>
+    resolveDesign({ ...e, source: s, clearSkySource: sky }, companyDefaults);
   const resolved = resolve(entered, source);
   const errors = new Map<string, string>();
   for (const i of resolved.issues) if (!errors.has(i.path)) errors.set(i.path, i.message);
@@ -44,19 +50,32 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
       payload: { kind: 'job-update', jobId: job.id, changes },
     });
   });
-  const save = (next: { entered?: EnteredDesign; notes?: DesignNotes; source?: string; tightness?: string }) => {
+  const save = (next: {
+    entered?: EnteredDesign;
+    notes?: DesignNotes;
+    source?: string;
+    skySource?: string;
+    tightness?: string;
+    house?: HouseDraft;
+  }) => {
     const e = next.entered ?? entered;
     const n = next.notes ?? notes;
     const s = next.source ?? source;
+    const sky = next.skySource ?? skySource;
     const t = next.tightness ?? tightness;
-    if (!resolve(e, s).conditions) return;
+    const h = next.house ?? house;
+    if (!resolve(e, s, sky).conditions) return;
+    if (!houseSchema.safeParse(h).success) return;
     const designConditions: Record<string, number | string> = {};
-    for (const [k, v] of Object.entries(e)) if (k !== 'source' && v !== undefined) designConditions[k] = v;
+    for (const [k, v] of Object.entries(e))
+      if (k !== 'source' && k !== 'clearSkySource' && v !== undefined) designConditions[k] = v;
     if (s.trim()) designConditions.source = s.trim();
+    if (sky.trim()) designConditions.clearSkySource = sky.trim();
     schedule({
       designConditions,
       designSourceNotes: Object.fromEntries(Object.entries(n).filter(([, v]) => v.trim() !== '')),
       tightness: t,
+      house: h,
     });
   };
 
@@ -75,7 +94,13 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
                 unit={f.unit ?? ''}
                 value={typeof value === 'number' ? value : undefined}
                 error={errors.get(f.key)}
-                hint={<span data-source={origin}>Source: {sourceLabels[origin]}</span>}
+                integer={f.integer ?? false}
+                hint={
+                  <>
+                    <span data-source={origin}>Source: {sourceLabels[origin]}</span>
+                    {f.whenEmpty && value === undefined ? <span className="block">{f.whenEmpty}</span> : null}
+                  </>
+                }
                 onChange={(v) => {
                   // Emptying a field with a company default must not snap the default back in while typing.
                   const typed = v === undefined && typeof companyDefaults?.[f.key] === 'number' ? Number.NaN : v;
@@ -119,6 +144,15 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
             save({ source: v });
           }}
         />
+        <TextInput
+          label="Source of τb and τd (station and month of the climatic table)"
+          value={skySource}
+          error={errors.get('clearSkySource')}
+          onChange={(v) => {
+            setSkySource(v);
+            save({ skySource: v });
+          }}
+        />
         <SelectInput
           label="How tight is the house"
           value={tightness}
@@ -129,6 +163,13 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
           }}
         />
       </div>
+      <HouseFields
+        value={house}
+        onChange={(next) => {
+          setHouse(next);
+          save({ house: next });
+        }}
+      />
     </section>
   );
 }

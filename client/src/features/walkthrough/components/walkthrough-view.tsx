@@ -149,7 +149,12 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
         </section>
 
         <QueryWidgetBoundary name="the whole-home loads">
-          <LiveHomeTotals rooms={rooms} designConditions={job.designConditions} tightness={job.tightness} />
+          <LiveHomeTotals
+            rooms={rooms}
+            designConditions={job.designConditions}
+            tightness={job.tightness}
+            house={job.house}
+          />
         </QueryWidgetBoundary>
       </div>
     </UnitSystemContext.Provider>

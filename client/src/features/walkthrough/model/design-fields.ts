@@ -6,6 +6,9 @@ export interface DesignFieldSpec {
   readonly label: string;
   readonly quantity: Quantity;
   readonly unit?: string;
+  /** What calc does when the field is left empty (shown under it). */
+  readonly whenEmpty?: string;
+  readonly integer?: boolean;
 }
 
 /** How the form shows each of the contract's DESIGN_FIELDS (resolution itself is the contract's resolveDesign). */
@@ -24,4 +27,26 @@ export const DESIGN_FIELD_SPECS: readonly DesignFieldSpec[] = [
   { key: 'indoorCoolingRhPercent', label: 'Indoor relative humidity', quantity: 'plain', unit: '%' },
   { key: 'dailyRangeF', label: 'Daily temperature range', quantity: 'deltaF' },
   { key: 'elevationFt', label: 'Elevation', quantity: 'elevation' },
+  {
+    key: 'latitudeDeg',
+    label: 'Latitude (south negative)',
+    quantity: 'plain',
+    unit: '°',
+    whenEmpty: 'Left empty: 40° N is assumed, and the loads say so.',
+  },
+  {
+    key: 'designMonth',
+    label: 'Cooling design month',
+    quantity: 'plain',
+    unit: '1–12',
+    integer: true,
+    whenEmpty: 'Left empty: July (7). South of the equator use January (1).',
+  },
+  {
+    key: 'clearSkyTauB',
+    label: 'Clear-sky beam optical depth τb',
+    quantity: 'plain',
+    whenEmpty: 'Left empty (with τd): a generic clear sky, τb 0.40 / τd 2.30 — not the site’s data.',
+  },
+  { key: 'clearSkyTauD', label: 'Clear-sky diffuse optical depth τd', quantity: 'plain' },
 ];

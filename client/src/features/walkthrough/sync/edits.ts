@@ -8,6 +8,8 @@ export interface JobChanges {
   readonly designConditions?: Record<string, number | string>;
   readonly designSourceNotes?: Record<string, string>;
   readonly tightness?: string;
+  /** Whole-house facts, sent whole (bedrooms, blower door, ventilation). */
+  readonly house?: Record<string, unknown>;
 }
 
 /** One autosaved edit. Each carries the whole record as the person left it. */

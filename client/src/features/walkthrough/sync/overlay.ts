@@ -75,6 +75,7 @@ export function overlayJob(
       if (typeof v === 'number') entered[f] = v;
     }
     if (typeof typed?.source === 'string') entered.source = typed.source;
+    if (typeof typed?.clearSkySource === 'string') entered.clearSkySource = typed.clearSkySource;
     const resolved = typed ? resolveDesign(entered, companyDefaults) : null;
     const designConditions = resolved?.conditions ?? out.designConditions;
     const designSources = { ...out.designSources };
@@ -91,6 +92,7 @@ export function overlayJob(
       designConditions,
       designSources,
       tightness: isTightness(e.changes.tightness) ? e.changes.tightness : out.tightness,
+      house: e.changes.house ?? out.house,
     };
   }
   return { job: out, waiting };

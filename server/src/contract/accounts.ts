@@ -38,3 +38,26 @@ export type MessageKind = (typeof MESSAGE_KINDS)[number];
 /** waiting → sent; a failed try → retrying (the queue tries again later) → … → failed after the last try. */
 export const MESSAGE_STATES = ['waiting', 'retrying', 'failed', 'sent'] as const;
 export type MessageState = (typeof MESSAGE_STATES)[number];
+
+/** An e-mail as the owner's E-mail page sees it: who, what about and how delivery went, never its body. */
+export const mailMessageRecord = z.object({
+  id: z.string(),
+  kind: z.enum(MESSAGE_KINDS),
+  to: z.string(),
+  subject: z.string(),
+  state: z.enum(MESSAGE_STATES),
+  /** Tries so far (0 after "Try again" until the next one). */
+  attempts: z.number().int(),
+  lastError: z.string().nullable(),
+  nextAttemptAt: z.string().nullable(),
+  sentAt: z.string().nullable(),
+  createdAt: z.string(),
+});
+export type MailMessageRecord = z.output<typeof mailMessageRecord>;
+export const mailMessagesResponse = z.object({ messages: z.array(mailMessageRecord) });
+export const mailMessageResponse = z.object({ message: mailMessageRecord });
+
+export const passwordChangedResponse = z.object({ endedSessions: z.number().int() });
+export const sessionsEndedResponse = z.object({ ended: z.number().int() });
+/** The words of "forgot password" and of a completed reset. */
+export const accountMessageResponse = z.object({ message: z.string() });

@@ -26,5 +26,3 @@ export const forgotPasswordSchema = z.object(passwordResetRequestFields);
 export const resetPasswordFormSchema = z
   .object({ password: passwordResetFields.password, confirmPassword: confirmRule })
   .refine((v) => v.password === v.confirmPassword, { ...sameTwice });
-
-export const messageResponse = z.object({ message: z.string() });

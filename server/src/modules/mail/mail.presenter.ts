@@ -1,7 +1,8 @@
+import type { MailMessageRecord } from '@contract';
 import type { OutgoingMessage } from './outgoing-message.entity';
 
 /** What the owner sees of an e-mail: who, what about and how delivery went — never its body. */
-export function presentMessage(m: OutgoingMessage) {
+export function presentMessage(m: OutgoingMessage): MailMessageRecord {
   return {
     id: m.id,
     kind: m.kind,
@@ -15,5 +16,3 @@ export function presentMessage(m: OutgoingMessage) {
     createdAt: m.createdAt.toISOString(),
   };
 }
-
-export type MessageDto = ReturnType<typeof presentMessage>;

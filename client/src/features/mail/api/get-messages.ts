@@ -1,10 +1,10 @@
 import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { mailKeys } from '../query-keys';
-import { messagesResponse } from '../schemas';
+import { mailMessagesResponse } from '@contract';
 
 export async function getMessages(signal?: AbortSignal) {
-  return (await apiFetch('/api/mail', { schema: messagesResponse, signal })).messages;
+  return (await apiFetch('/api/mail', { schema: mailMessagesResponse, signal })).messages;
 }
 
 export const messagesQueryOptions = () =>

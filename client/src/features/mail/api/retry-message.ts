@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { mailKeys } from '../query-keys';
-import { messageResponse } from '../schemas';
+import { mailMessageResponse } from '@contract';
 
 export async function retryMessage(id: string) {
-  return (await apiFetch(`/api/mail/${encodeURIComponent(id)}/retry`, { method: 'POST', schema: messageResponse }))
+  return (await apiFetch(`/api/mail/${encodeURIComponent(id)}/retry`, { method: 'POST', schema: mailMessageResponse }))
     .message;
 }
 

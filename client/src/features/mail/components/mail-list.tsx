@@ -4,7 +4,7 @@ import { EmptyState } from '../../../components/ui/empty-state';
 import { errorMessage } from '../../../lib/api-error';
 import { useMessages } from '../api/get-messages';
 import { useRetryMessage } from '../api/retry-message';
-import type { Message } from '../schemas';
+import type { MailMessageRecord as Message } from '@contract';
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 

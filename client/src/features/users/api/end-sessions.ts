@@ -1,8 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
-import { z } from 'zod';
+import { sessionsEndedResponse } from '@contract';
 import { apiFetch } from '../../../lib/api-client';
-
-const endedResponse = z.object({ ended: z.number().int() });
 
 /** Signs a person out on every device (for yourself: every device but this one). */
 export function useEndSessions() {
@@ -11,7 +9,7 @@ export function useEndSessions() {
       (
         await apiFetch(`/api/users/${encodeURIComponent(id)}/end-sessions`, {
           method: 'POST',
-          schema: endedResponse,
+          schema: sessionsEndedResponse,
         })
       ).ended,
   });

@@ -11,12 +11,15 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomBytes, randomUUID } from 'node:crypto';
 import { availableParallelism, loadavg } from 'node:os';
+import { join, resolve } from 'node:path';
 import pg from 'pg';
 import { demoAccounts, isEmpty, seedDemo } from '../fixtures/seed';
 import { buildClientIfStale } from '../scripts/lib/client-build';
 import { migrate, withOrm } from '../scripts/lib/db';
 import { DEMO, startCluster } from '../scripts/lib/stack';
 import { load, type LoadResult } from './lib/load';
+import { phoneTimings } from './lib/phone';
+import { printBudgets } from '../scripts/bundle-budget';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
 const CONNECTIONS = Number(process.env.BENCH_CONNECTIONS ?? 50);
@@ -28,6 +31,8 @@ const EXTRA_JOBS = 120;
 const APP = `http://127.0.0.1:${APP_PORT}`;
 const FLOOR = `http://127.0.0.1:${FLOOR_PORT}`;
 const BENCH_MARK = 'made by npm run bench';
+// Another checkout's server and built client (e.g. an older commit, for a before/after in one sitting).
+const SERVER_DIR = resolve(process.env.BENCH_SERVER_DIR ?? '.');
 
 /** What one autocannon connection carries from one step of its sequence to the next. */
 interface Ctx {
@@ -38,8 +43,9 @@ interface Ctx {
 }
 
 const children: ChildProcess[] = [];
-function start(script: string, env: Record<string, string>): ChildProcess {
+function start(script: string, env: Record<string, string>, cwd = '.'): ChildProcess {
   const child = spawn(process.execPath, ['--import', 'tsx', script], {
+    cwd,
     env: { ...process.env, ...env },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
@@ -184,20 +190,24 @@ try {
   const appRooms = await makeRooms(CONNECTIONS);
   const floorRooms = await makeRooms(CONNECTIONS);
 
-  start('server/src/main.ts', {
-    NODE_ENV: 'production',
-    PORT: String(APP_PORT),
-    HOST: '127.0.0.1',
-    APP_ORIGIN: `https://127.0.0.1:${APP_PORT}`,
-    DATABASE_URL: databaseUrl,
-    DB_POOL_MAX: String(POOL_MAX),
-    SESSION_SECRET: randomBytes(32).toString('base64url'),
-    LOG_LEVEL: 'info',
-    // Sign-in is benchmarked: the per-IP and per-account failure limits would otherwise stop it.
-    LOGIN_MAX_PER_IP: '1000000',
-    LOGIN_MAX_PER_ACCOUNT: '1000000',
-    CLIENT_DIST: 'dist/client',
-  });
+  start(
+    'server/src/main.ts',
+    {
+      NODE_ENV: 'production',
+      PORT: String(APP_PORT),
+      HOST: '127.0.0.1',
+      APP_ORIGIN: `https://127.0.0.1:${APP_PORT}`,
+      DATABASE_URL: databaseUrl,
+      DB_POOL_MAX: String(POOL_MAX),
+      SESSION_SECRET: randomBytes(32).toString('base64url'),
+      LOG_LEVEL: 'info',
+      // Sign-in is benchmarked: the per-IP and per-account failure limits would otherwise stop it.
+      LOGIN_MAX_PER_IP: '1000000',
+      LOGIN_MAX_PER_ACCOUNT: '1000000',
+      CLIENT_DIST: join(SERVER_DIR, 'dist/client'),
+    },
+    SERVER_DIR,
+  );
   start('bench/lib/floor-server.ts', {
     DATABASE_URL: databaseUrl,
     PORT: String(FLOOR_PORT),
@@ -378,6 +388,29 @@ try {
   console.log(
     'Sign-in: autocannon counts csrf + login as one sign-in on the app side; latencies are the login step; argon2id dominates both.',
   );
+
+  console.log('');
+  printBudgets(join(SERVER_DIR, 'dist/client'));
+  if (process.env.BENCH_PHONE === 'off') console.log('phone timings: skipped (BENCH_PHONE=off)');
+  else {
+    const eq = s.cookie.indexOf('=');
+    try {
+      const p = await phoneTimings(
+        APP,
+        { name: s.cookie.slice(0, eq), value: s.cookie.slice(eq + 1) },
+        // The bench's own job (its rooms go when the bench ends), so typing leaves no trace in the demo data.
+        `/jobs/${benchJobId}`,
+      );
+      console.log(
+        `phone (Chromium, 375 px, CPU 4× slower, 1.6 Mbps / 150 ms): walk-through until a room field takes typing — ` +
+          `cold ${f(p.coldMs)} ms (goal ≤ 3000: ${p.coldMs <= 3000 ? 'MET' : 'NOT MET'}), warm ${f(p.warmMs)} ms ` +
+          `(goal ≤ 1000: ${p.warmMs <= 1000 ? 'MET' : 'NOT MET'}); ${f(p.transferredKb)} KB over the wire on the cold load` +
+          (p.foreign ? `; ${p.foreign} requests to other hosts (a bug)` : ''),
+      );
+    } catch (e) {
+      console.log('phone timings could not run:', e instanceof Error ? e.message.split('\n')[0] : String(e));
+    }
+  }
 } catch (e) {
   console.log('API bench could not finish:', e instanceof Error ? e.message : String(e));
 } finally {

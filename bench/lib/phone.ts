@@ -1,0 +1,98 @@
+import { chromium, type BrowserContext } from 'playwright-core';
+
+/** A phone on weak 4G, as issue 11 sets it: 4× CPU slowdown, 1.6 Mbps down, 750 kbps up, 150 ms round trip. */
+const NETWORK = {
+  offline: false,
+  latency: 150,
+  downloadThroughput: (1.6 * 1024 * 1024) / 8,
+  uploadThroughput: (750 * 1024) / 8,
+};
+const CPU_SLOWDOWN = 4;
+
+export interface PhoneTiming {
+  readonly coldMs: number;
+  readonly warmMs: number;
+  readonly transferredKb: number;
+  readonly foreign: number;
+}
+
+/**
+ * Time from navigation until the walk-through's room-name field takes a typed letter, on a
+ * throttled 375 px Chromium (Debian's, through playwright-core): cold (empty cache) and warm
+ * (the same tab opening the page again). Signs in with the given cookie (sent as a browser
+ * behind the TLS proxy would, X-Forwarded-Proto: https).
+ */
+export async function phoneTimings(base: string, cookie: { name: string; value: string }, path: string) {
+  const browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking', '--disable-sync'],
+  });
+  let context: BrowserContext | undefined;
+  try {
+    context = await browser.newContext({
+      viewport: { width: 375, height: 812 },
+      deviceScaleFactor: 2,
+      isMobile: true,
+      hasTouch: true,
+      extraHTTPHeaders: { 'X-Forwarded-Proto': 'https' },
+    });
+    const host = new URL(base).hostname;
+    await context.addCookies([
+      { ...cookie, domain: host, path: '/', secure: true, httpOnly: true, sameSite: 'Lax' as const },
+    ]);
+    const page = await context.newPage();
+    // No page.route() here: routing turns Chromium's HTTP cache off, and the warm figure needs it.
+    // The app asks no other host for anything; any such request is counted and printed.
+    let foreign = 0;
+    page.on('request', (r) => {
+      if (!r.url().startsWith(base) && !r.url().startsWith('data:') && !r.url().startsWith('blob:')) foreign += 1;
+    });
+    page.setDefaultTimeout(60_000);
+    const cdp = await context.newCDPSession(page);
+    await cdp.send('Network.enable');
+    await cdp.send('Network.emulateNetworkConditions', NETWORK);
+    await cdp.send('Emulation.setCPUThrottlingRate', { rate: CPU_SLOWDOWN });
+    let bytes = 0;
+    cdp.on('Network.loadingFinished', (e: { encodedDataLength: number }) => {
+      bytes += e.encodedDataLength;
+    });
+
+    const trace = process.env.BENCH_PHONE_TRACE === '1';
+    let tNav = 0;
+    if (trace) {
+      page.on('request', (r) =>
+        console.log(`    +${(performance.now() - tNav).toFixed(0)} ms → ${r.method()} ${r.url().replace(base, '')}`),
+      );
+      page.on('requestfinished', (r) =>
+        console.log(`    +${(performance.now() - tNav).toFixed(0)} ms ✓ ${r.url().replace(base, '')}`),
+      );
+    }
+    const typeable = async (letter: string) => {
+      const t0 = performance.now();
+      tNav = t0;
+      await page.goto(`${base}${path}`, { waitUntil: 'commit' });
+      const field = page.getByLabel('Room name', { exact: true }).first();
+      await field.waitFor({ state: 'visible' });
+      await field.press('End');
+      await field.pressSequentially(letter);
+      await page.waitForFunction(
+        (l) => (document.activeElement as HTMLInputElement | null)?.value.endsWith(l) ?? false,
+        letter,
+      );
+      const ms = performance.now() - t0;
+      await field.press('Backspace');
+      return ms;
+    };
+    const coldMs = await typeable('q');
+    const transferredKb = bytes / 1024;
+    // Let the first visit's edit settle (it is typed back), then open the page again in the same tab.
+    await page.waitForTimeout(1500);
+    const warmMs = await typeable('z');
+    await page.waitForTimeout(1500);
+    return { coldMs, warmMs, transferredKb, foreign } satisfies PhoneTiming;
+  } finally {
+    await context?.close().catch(() => undefined);
+    await browser.close();
+  }
+}

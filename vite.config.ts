@@ -2,11 +2,52 @@ import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
 import { compression, defineAlgorithm } from 'vite-plugin-compression2';
+import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
 
 const here = (p: string) => fileURLToPath(new URL(p, import.meta.url));
 const alias = { '@calc': here('./calc/index.ts'), '@contract': here('./server/src/contract/index.ts') };
 const apiTarget = `http://127.0.0.1:${process.env.PORT ?? '4780'}`;
+
+/**
+ * The installable app (client/src/lib/offline/app-update.tsx registers it): a service worker made
+ * by workbox at build time precaches the shell and every built asset, so the app opens with no
+ * signal; API answers are never cached by it (the query cache is persisted per person instead).
+ * The workbox runtime is bundled beside sw.js: nothing is fetched from another host.
+ */
+const pwa = VitePWA({
+  registerType: 'prompt',
+  injectRegister: false,
+  strategies: 'generateSW',
+  includeAssets: ['icons/icon.svg', 'icons/apple-touch-icon-180.png'],
+  manifest: {
+    name: 'Gaugeline',
+    short_name: 'Gaugeline',
+    description: 'Walk-throughs, loads and proposals for heating and cooling contractors, with or without signal.',
+    lang: 'en',
+    start_url: '/',
+    scope: '/',
+    display: 'standalone',
+    theme_color: '#12343b',
+    background_color: '#f7f4ee',
+    icons: [
+      { src: '/icons/icon-192.png', sizes: '192x192', type: 'image/png' },
+      { src: '/icons/icon-512.png', sizes: '512x512', type: 'image/png' },
+      { src: '/icons/icon-maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
+    ],
+  },
+  workbox: {
+    globPatterns: ['**/*.{js,css,html,woff2,woff,svg,png,webmanifest}'],
+    navigateFallback: '/index.html',
+    navigateFallbackDenylist: [/^\/api(\/|$)/],
+    cleanupOutdatedCaches: true,
+    // The PDF and chart chunks are large; the walk-through must still open offline with them.
+    maximumFileSizeToCacheInBytes: 8 * 1024 * 1024,
+    inlineWorkboxRuntime: false,
+    sourcemap: false,
+  },
+  devOptions: { enabled: false },
+});
 
 // One file for the client build, the dev server and the test projects.
 export default defineConfig({
@@ -14,6 +55,7 @@ export default defineConfig({
   plugins: [
     react(),
     tailwindcss(),
+    pwa,
     // Every text file of the build also as .br and .gz: the server picks one by Accept-Encoding (server/src/app.ts).
     compression({
       include: /\.(js|mjs|css|html|svg|json|webmanifest|txt)$/,

@@ -16,7 +16,9 @@ function newest(path: string): number {
 /** Builds the client with Vite when dist is missing or older than any source it is made from. */
 export async function buildClientIfStale(): Promise<void> {
   const out = 'dist/client/index.html';
-  const sources = ['client', 'calc', 'vite.config.ts', 'package-lock.json'].filter((p) => existsSync(p));
+  const sources = ['client', 'calc', 'server/src/contract', 'vite.config.ts', 'package-lock.json'].filter((p) =>
+    existsSync(p),
+  );
   const srcTime = Math.max(...sources.map(newest));
   if (existsSync(out) && statSync(out).mtimeMs >= srcTime) return;
   log('building the client…');

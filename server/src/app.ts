@@ -9,7 +9,7 @@ import { pinoHttp } from 'pino-http';
 import { randomUUID } from 'node:crypto';
 import { logger } from './lib/logger';
 import { notFoundApi, problemHandler } from './lib/problem';
-import { csrfGuard, personGuard, sessionMiddleware } from './lib/session';
+import { apiVersionGuard, csrfGuard, personGuard, sessionMiddleware } from './lib/session';
 import { loadActor } from './modules/auth/load-actor';
 import { mountModules } from './modules';
 import type { Services } from './services/services';
@@ -36,7 +36,9 @@ function clientFiles(dist: string): RequestHandler | null {
       maxAge: '1h',
       setHeaders: (res, path) => {
         if (path.startsWith(assets)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
-        else if (/index\.html(\.br|\.gz)?$/.test(path)) res.setHeader('Cache-Control', 'no-cache');
+        // The shell, the service worker and its manifest are revalidated on every load, so an update is seen.
+        else if (/(index\.html|sw\.js|workbox-[\w-]+\.js|manifest\.webmanifest)(\.br|\.gz)?$/.test(path))
+          res.setHeader('Cache-Control', 'no-cache');
       },
     },
   });
@@ -105,6 +107,7 @@ export function createApp(services: Services): Express {
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
+  app.use('/api', apiVersionGuard);
   // A CSV import carries the whole file (up to IMPORT_LIMITS.maxBytes, checked with a message naming the limit).
   const importJson = express.json({ limit: IMPORT_JSON_LIMIT, strict: true });
   app.use((req, res, next) => (IMPORT_PATH.test(req.path) ? importJson(req, res, next) : next()));

@@ -15,7 +15,14 @@ export interface E2E {
   browser: Browser;
   smtp: SmtpFake;
   running: Running;
-  newPage(viewport: { width: number; height: number }): Promise<{ context: BrowserContext; page: Page }>;
+  /**
+   * A fresh profile. Service workers are blocked unless asked for: the built client installs one,
+   * and a cached shell would hide what a journey means to test (only the offline test wants it).
+   */
+  newPage(
+    viewport: { width: number; height: number },
+    options?: { serviceWorkers?: 'allow' | 'block' },
+  ): Promise<{ context: BrowserContext; page: Page }>;
   close(): Promise<void>;
 }
 
@@ -54,8 +61,12 @@ export async function startE2E(): Promise<E2E> {
     browser,
     smtp,
     running,
-    async newPage(viewport) {
-      const context = await browser.newContext({ viewport, baseURL: running.url });
+    async newPage(viewport, options = {}) {
+      const context = await browser.newContext({
+        viewport,
+        baseURL: running.url,
+        serviceWorkers: options.serviceWorkers ?? 'block',
+      });
       const page = await context.newPage();
       page.setDefaultTimeout(15_000);
       // Any request to another host would be a bug (fonts and assets ship with the app).

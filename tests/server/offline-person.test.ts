@@ -49,3 +49,26 @@ describe('replays carry the person who made them', () => {
     expect(r.body.room.input.name).toBe('Den');
   });
 });
+
+describe('the API names its version', () => {
+  it('every /api answer carries X-Gaugeline-Api; a write from a client of another version is refused (412), nothing changes', async () => {
+    const { API_VERSION } = await import('../../server/src/contract/api-version');
+    const job = await newJob(sales);
+    const room = await newRoom(sales, job.id);
+    const url = `/api/jobs/${job.id}/rooms/${room.id}`;
+    const read = await sales.agent.get(url).set('X-Gaugeline-Api', String(API_VERSION + 1));
+    expect(read.status).toBe(200);
+    expect(read.headers['x-gaugeline-api']).toBe(String(API_VERSION));
+    const old = await patch(sales, url, room.version)
+      .set('X-Gaugeline-Api', String(API_VERSION - 1))
+      .send({ input: { ...sampleRoom('From an old page') } });
+    expectProblem(old, 412);
+    expect(old.body).toMatchObject({ type: '/problems/api-version', currentVersion: API_VERSION });
+    expect(old.headers['x-gaugeline-api']).toBe(String(API_VERSION));
+    expect((await t.orm.em.fork().findOneOrFail(RoomSchema, { id: room.id })).version).toBe(room.version);
+    const same = await patch(sales, url, room.version)
+      .set('X-Gaugeline-Api', String(API_VERSION))
+      .send({ input: { ...sampleRoom('From this page') } });
+    expect(same.status, JSON.stringify(same.body)).toBe(200);
+  });
+});

@@ -1,4 +1,6 @@
+import { API_VERSION_HEADER } from '@contract';
 import { z } from 'zod';
+import { CLIENT_API_VERSION, noteServerApiVersion } from './api-version';
 import { ApiError, apiErrorFromResponse, networkError } from './api-error';
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -37,7 +39,10 @@ function getCsrfToken(): Promise<string> {
 }
 
 async function send(path: string, options: ApiOptions, csrf?: string): Promise<Response> {
-  const headers: Record<string, string> = { Accept: 'application/json, application/problem+json' };
+  const headers: Record<string, string> = {
+    Accept: 'application/json, application/problem+json',
+    [API_VERSION_HEADER]: CLIENT_API_VERSION,
+  };
   const form = typeof FormData !== 'undefined' && options.body instanceof FormData ? options.body : null;
   if (options.body !== undefined && !form) headers['Content-Type'] = 'application/json';
   if (csrf) headers['X-CSRF-Token'] = csrf;
@@ -56,6 +61,7 @@ async function send(path: string, options: ApiOptions, csrf?: string): Promise<R
     if (e instanceof DOMException && e.name === 'AbortError') throw e;
     throw networkError();
   }
+  noteServerApiVersion(res.headers.get(API_VERSION_HEADER));
   if (!res.ok) throw await apiErrorFromResponse(res);
   return res;
 }

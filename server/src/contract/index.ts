@@ -9,3 +9,4 @@ export * from './fields';
 export * from './design-conditions';
 export * from './accounts';
 export * from './records';
+export * from './api-version';

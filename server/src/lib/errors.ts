@@ -66,6 +66,19 @@ export class OtherPersonError extends AppError {
   }
 }
 
+/** A write from a client built against another API version (an old tab or service-worker shell). */
+export class ApiVersionError extends AppError {
+  constructor(sent: string, current: number) {
+    super(
+      412,
+      'api-version',
+      'Gaugeline was updated',
+      `This page was built for version ${sent} of Gaugeline's API; the server now speaks version ${current}. Reload the page to carry on: changes waiting on this device are kept and sent after the reload.`,
+      { currentVersion: current },
+    );
+  }
+}
+
 export class NotFoundError extends AppError {
   constructor(what = 'The resource') {
     super(404, 'not-found', 'Not found', `${what} was not found.`);

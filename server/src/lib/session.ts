@@ -4,7 +4,8 @@ import type { Request, RequestHandler } from 'express';
 import { randomBytes, timingSafeEqual } from 'node:crypto';
 import type pg from 'pg';
 import type { Config } from '../config';
-import { CsrfError, OtherPersonError } from './errors';
+import { API_VERSION, API_VERSION_HEADER } from '@contract';
+import { ApiVersionError, CsrfError, OtherPersonError } from './errors';
 
 /** The signed-in person as read with the session (one statement); loadActor turns it into `req.actor`. */
 export interface SessionUser {
@@ -157,4 +158,15 @@ export const personGuard: RequestHandler = (req, _res, next) => {
   if (person === undefined || !req.actor) return next();
   if (person !== req.actor.userId) return next(new OtherPersonError());
   next();
+};
+
+/**
+ * Every /api answer names the API version; a write from a client built against another one is
+ * refused before it touches anything (reads go through: the client shows its own message).
+ */
+export const apiVersionGuard: RequestHandler = (req, res, next) => {
+  res.setHeader(API_VERSION_HEADER, String(API_VERSION));
+  const sent = req.get(API_VERSION_HEADER);
+  if (sent === undefined || SAFE.has(req.method) || sent === String(API_VERSION)) return next();
+  next(new ApiVersionError(sent, API_VERSION));
 };

@@ -1,12 +1,15 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { paths } from '../../../config/paths';
 import { apiFetch, clearCsrfToken } from '../../../lib/api-client';
+import { forgetPersonCache } from '../../../lib/offline/persist-cache';
 
 export async function signOut(): Promise<void> {
   try {
     await apiFetch('/api/auth/logout', { method: 'POST' });
   } finally {
     clearCsrfToken();
+    // The saved query cache is this person's: it goes now (their waiting changes stay, for them alone).
+    await forgetPersonCache().catch(() => undefined);
   }
 }
 

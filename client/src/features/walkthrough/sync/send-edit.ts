@@ -50,6 +50,8 @@ function failure(e: unknown): SendResult {
     if (e.code === 'network' || e.status === 0) return { kind: 'network' };
     // Another person signed in on this device (another tab): these changes wait for their maker.
     if (e.code === 'other-person') return { kind: 'blocked', message: OTHER_PERSON };
+    // The server was updated past this page: keep the edits for the reloaded app to send.
+    if (e.code === 'api-version') return { kind: 'blocked', message: e.detail };
     // 428 means the edit carried no version: never drop it, ask the person as for a 409.
     if (e.status === 409 || e.status === 428) return { kind: 'conflict' };
     if (e.status === 401)

@@ -28,7 +28,8 @@ function failure(e: unknown): FileSendResult {
   if (!isApiError(e) || e.status === 0) return { kind: 'keep' };
   // 5xx may pass, 429 will; 401 means sign in again — the photo must not be lost meanwhile.
   // 403 other-person: someone else signed in on this device; the photo waits for its taker.
-  if (e.status >= 500 || e.status === 429 || e.status === 401 || e.code === 'other-person') return { kind: 'keep' };
+  if (e.status >= 500 || e.status === 429 || e.status === 401 || e.code === 'other-person' || e.code === 'api-version')
+    return { kind: 'keep' };
   return { kind: 'refused', message: e.detail };
 }
 

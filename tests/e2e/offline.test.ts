@@ -1,0 +1,122 @@
+import { randomUUID } from 'node:crypto';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it, onTestFailed } from 'vitest';
+import { demoAccounts } from '../../fixtures/seed';
+import { PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
+
+/**
+ * Opens with no signal: the production build's service worker keeps the shell and assets, the
+ * query cache is saved per person, so a walk-through visited before reloads with the network cut,
+ * takes a new room, and the room reaches the server once the network is back.
+ */
+let e: E2E;
+beforeAll(async () => {
+  e = await startE2E();
+});
+afterAll(async () => e?.close());
+
+const salesperson = demoAccounts.find((a) => a.role === 'salesperson' && a.company.startsWith('Larkspur'));
+
+const pill = (page: Page) =>
+  page.getByRole('status').filter({ hasText: /Saved|Saving|Offline|Not saved|Needs your choice/ });
+
+/** A job of the salesperson's own, made through the API as the app would. */
+async function newJob(page: Page, tag: string): Promise<string> {
+  const csrf = ((await (await page.request.get('/api/auth/csrf')).json()) as { token: string }).token;
+  const headers = { 'X-CSRF-Token': csrf };
+  const customer = await page.request.post('/api/customers', {
+    headers,
+    data: { name: `Basil Offline-${tag}`, phone: '555-0160' },
+  });
+  expect(customer.status()).toBe(201);
+  const customerId = ((await customer.json()) as { customer: { id: string } }).customer.id;
+  const job = await page.request.post('/api/jobs', {
+    headers,
+    data: { customerId, street: '9 Cellar Steps', city: 'Testerby', region: 'Demo State', postalCode: '00009' },
+  });
+  expect(job.status()).toBe(201);
+  return ((await job.json()) as { job: { id: string } }).job.id;
+}
+
+/** The saved query cache of this person holds the job (written at most once a second). */
+async function cacheHolds(page: Page, jobId: string): Promise<boolean> {
+  return page.evaluate(async (id) => {
+    const dbs = await indexedDB.databases();
+    const name = dbs.map((d) => d.name ?? '').find((n) => n.startsWith('gaugeline-cache:'));
+    if (!name) return false;
+    return new Promise<boolean>((resolve) => {
+      const open = indexedDB.open(name);
+      open.onerror = () => resolve(false);
+      open.onsuccess = () => {
+        const db = open.result;
+        if (!db.objectStoreNames.contains('queries')) return resolve(false);
+        const get = db.transaction('queries').objectStore('queries').get('queries');
+        get.onsuccess = () => resolve(typeof get.result === 'string' && get.result.includes(id));
+        get.onerror = () => resolve(false);
+      };
+    });
+  }, jobId);
+}
+
+describe('the app opens with no signal', () => {
+  it('reloads a walk-through visited before with the network cut, takes a room, and sends it when back', async () => {
+    if (!salesperson) throw new Error('no demo salesperson');
+    const { context, page } = await e.newPage(PHONE, { serviceWorkers: 'allow' });
+    // What the page said, printed only if the journey fails.
+    const trail: string[] = [];
+    page.on('console', (m) => trail.push(`console.${m.type()}: ${m.text()}`));
+    page.on('pageerror', (err) => trail.push(`page error: ${err.message}`));
+    onTestFailed(async () => {
+      console.log(`the page during the journey:\n${trail.join('\n')}`);
+      await page.screenshot({ path: `${SHOTS}/offline-failed-375.png`, fullPage: true }).catch(() => undefined);
+    });
+    await signIn(page, salesperson.email, salesperson.password);
+    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    const tag = randomUUID().slice(0, 6);
+    const jobId = await newJob(page, tag);
+
+    // Visit the walk-through once with signal; the service worker installs from the built client.
+    await page.goto(`/jobs/${jobId}`);
+    await page.getByRole('button', { name: 'Add room' }).waitFor();
+    const worker = await page.evaluate(async () => {
+      const reg = await navigator.serviceWorker.ready;
+      return reg.active?.scriptURL ?? '';
+    });
+    expect(new URL(worker).pathname).toBe('/sw.js');
+    // The first visit is not yet controlled by the worker; the next load is.
+    await page.reload();
+    await page.getByRole('button', { name: 'Add room' }).waitFor();
+    expect(await page.evaluate(() => navigator.serviceWorker.controller?.scriptURL ?? '')).toMatch(/\/sw\.js$/);
+    await expect.poll(() => cacheHolds(page, jobId), { timeout: 15_000 }).toBe(true);
+
+    // No signal: reload, the walk-through opens from the device.
+    await context.setOffline(true);
+    await page.reload();
+    await page.getByRole('button', { name: 'Add room' }).waitFor({ timeout: 20_000 });
+    await expect(page.getByText(`Basil Offline-${tag}`).first().isVisible()).resolves.toBe(true);
+    await page.getByLabel('Room template').selectOption({ index: 1 });
+    await page.getByRole('button', { name: 'Add room' }).click();
+    await page.getByLabel('Room name').fill(`Cellar den ${tag}`);
+    await pill(page)
+      .filter({ hasText: /Offline — \d+ changes? waiting/ })
+      .waitFor({ timeout: 20_000 });
+    await page.screenshot({ path: `${SHOTS}/offline-reload-375.png`, fullPage: true });
+
+    // Signal again: the room lands on the server.
+    await context.setOffline(false);
+    await pill(page)
+      .filter({ hasText: /^\s*Saved\s*$/ })
+      .waitFor({ timeout: 30_000 });
+    await expect
+      .poll(
+        async () => {
+          const res = await page.request.get(`/api/jobs/${jobId}/rooms`);
+          const body = (await res.json()) as { rooms: Array<{ input: { name: string } }> };
+          return body.rooms.map((r) => r.input.name);
+        },
+        { timeout: 20_000 },
+      )
+      .toContain(`Cellar den ${tag}`);
+    await context.close();
+  });
+});

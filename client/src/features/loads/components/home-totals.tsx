@@ -71,9 +71,15 @@ export function HomeTotals({
       </p>
       <p className="text-sm text-muted">{designDayLine(load)}</p>
       {chart ? (
-        <Suspense fallback={<p className="h-[220px] text-sm text-muted">Drawing the design day…</p>}>
-          <HourlyChart hours={load.hourly} blockHour={b.hour} />
-        </Suspense>
+        <div className="flex flex-col gap-1">
+          <p className="text-sm font-semibold text-ink-900">The design day, hour by hour (Btu/h, solar time)</p>
+          <p className="text-sm text-muted">
+            Grey: the whole home’s sensible gain. Amber: sun through glass. Dashed line: the block hour.
+          </p>
+          <Suspense fallback={<p className="h-[220px] text-sm text-muted">Drawing the design day…</p>}>
+            <HourlyChart hours={load.hourly} blockHour={b.hour} />
+          </Suspense>
+        </div>
       ) : null}
       {skipped.length > 0 ? (
         <p className="text-sm text-amber-deep">Not counted until their fields are fixed: {skipped.join(', ')}.</p>

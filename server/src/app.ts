@@ -5,9 +5,9 @@ import compression from 'compression';
 import express, { type Express, type RequestHandler } from 'express';
 import expressStaticGzip from 'express-static-gzip';
 import helmet from 'helmet';
-import { pinoHttp } from 'pino-http';
-import { randomUUID } from 'node:crypto';
+import { constants as zlibConstants } from 'node:zlib';
 import { logger } from './lib/logger';
+import { requestLog } from './lib/request-log';
 import { notFoundApi, problemHandler } from './lib/problem';
 import { apiVersionGuard, csrfGuard, personGuard, sessionMiddleware } from './lib/session';
 import { loadActor } from './modules/auth/load-actor';
@@ -66,19 +66,7 @@ export function createApp(services: Services): Express {
   app.set('trust proxy', config.TRUST_PROXY === 'false' ? false : config.TRUST_PROXY);
   app.set('json spaces', 0);
 
-  app.use(
-    pinoHttp({
-      logger,
-      genReqId: (req, res) => {
-        const id = randomUUID();
-        res.setHeader('X-Request-Id', id);
-        return id;
-      },
-      autoLogging: { ignore: (req) => req.url === '/api/health' },
-      customLogLevel: (_req, res, err) =>
-        err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'info' : 'debug',
-    }),
-  );
+  app.use(requestLog(logger));
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -112,7 +100,15 @@ export function createApp(services: Services): Express {
   const importJson = express.json({ limit: IMPORT_JSON_LIMIT, strict: true });
   app.use((req, res, next) => (IMPORT_PATH.test(req.path) ? importJson(req, res, next) : next()));
   // JSON answers above ~1 KB go compressed (gzip or brotli as the request accepts; Vary: Accept-Encoding).
-  app.use('/api', compression({ threshold: COMPRESS_ABOVE_BYTES }));
+  // Fast settings (gzip 3, brotli 2): on JSON they compress nearly as well as the defaults for a fraction of the CPU.
+  app.use(
+    '/api',
+    compression({
+      threshold: COMPRESS_ABOVE_BYTES,
+      level: 3,
+      brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 2 } },
+    }),
+  );
   app.use('/api', express.json({ limit: JSON_LIMIT, strict: true }));
   app.use(sessionMiddleware(config, services.sessionPool));
   app.use(loadActor(config, services.clock));

@@ -1,9 +1,11 @@
 import { QueryClientProvider } from '@tanstack/react-query';
 import { fireEvent, render, screen, within } from '@testing-library/react';
 import { Suspense } from 'react';
+import { MemoryRouter } from 'react-router-dom';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { MailMessageRecord } from '@contract';
 import { MailList } from '../../client/src/features/mail/components/mail-list';
+import { MailTrouble } from '../../client/src/features/mail/components/mail-trouble';
 import { clearCsrfToken } from '../../client/src/lib/api-client';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { json, mockFetch } from './helpers/fetch-mock';
@@ -73,5 +75,18 @@ describe('the owner’s E-mail page', () => {
     mockFetch({ 'GET /api/mail': json(200, { messages: [] }) });
     renderList();
     expect(await screen.findByText('No e-mail yet')).toBeInTheDocument();
+  });
+
+  it('the owner’s start page says when e-mail has not gone out, and nothing when all went', async () => {
+    mockFetch({ 'GET /api/mail': json(200, { messages: [message('m1', 'Sent one'), failing] }) });
+    render(
+      <QueryClientProvider client={createQueryClient()}>
+        <MemoryRouter>
+          <MailTrouble />
+        </MemoryRouter>
+      </QueryClientProvider>,
+    );
+    expect(await screen.findByText('1 e-mail has not gone out')).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'See E-mail' })).toHaveAttribute('href', '/mail');
   });
 });

@@ -9,6 +9,7 @@ import { gridColumns, tablesFor } from '../model/table-view';
 import { DataGrid } from './data-grid';
 import { ImportPanel } from './import-panel';
 import { RowPanel } from './row-panel';
+import { SettingsCard } from './settings-card';
 
 /** The catalog and price book: a tab per table, a searchable grid, a side panel for one record or an import. */
 export function PriceBookPage({ role }: { role: DataRole }) {
@@ -99,6 +100,7 @@ function TableView({ dataset, role, params, set }: ViewProps) {
   return (
     <div className={`grid gap-4 ${side ? 'xl:grid-cols-[minmax(0,1fr)_minmax(26rem,34rem)]' : ''}`}>
       <div className="order-2 flex min-w-0 flex-col gap-3 xl:order-1">
+        {dataset === 'categories' ? <SettingsCard canEdit={canEdit} /> : null}
         <div className="flex flex-col gap-2 md:flex-row md:items-end">
           <label className="flex flex-1 flex-col gap-1 text-sm font-semibold text-ink-900">
             Search {DATASETS[dataset].label.toLowerCase()}

@@ -2,6 +2,7 @@ import { asRecord, asString } from '../model/draft';
 import { aboveOptions, belowOptions, ceilingInsulationOptions, floorInsulationOptions } from '../model/options';
 import type { EditorProps } from './editor-props';
 import { SelectInput } from './field-kit';
+import { COLOR_OPTIONS } from './wall-fields';
 
 const ABOVE_DEFAULTS: Record<string, object> = {
   attic: { kind: 'attic', insulation: 'r30' },
@@ -38,6 +39,26 @@ export function AboveBelowFields({ draft, set, err }: EditorProps) {
           options={ceilingInsulationOptions}
           onChange={(x) => set(['above', 'insulation'], x)}
           error={err(['above', 'insulation'])}
+        />
+      ) : null}
+      {aboveKind === 'attic' || aboveKind === 'roof' ? (
+        <SelectInput
+          label="Roof colour"
+          value={asString(above.roofColor, 'medium')}
+          options={COLOR_OPTIONS}
+          onChange={(x) => set(['above', 'roofColor'], x)}
+          error={err(['above', 'roofColor'])}
+        />
+      ) : null}
+      {aboveKind === 'attic' ? (
+        <SelectInput
+          label="Radiant barrier under the roof"
+          value={above.radiantBarrier === true ? 'yes' : 'no'}
+          options={[
+            { value: 'no', label: 'No radiant barrier' },
+            { value: 'yes', label: 'Radiant barrier' },
+          ]}
+          onChange={(x) => set(['above', 'radiantBarrier'], x === 'yes')}
         />
       ) : null}
       <SelectInput

@@ -6,6 +6,12 @@ import type { EditorProps } from './editor-props';
 import { NumberInput, SelectInput } from './field-kit';
 import { WindowFields } from './window-fields';
 
+/** Outside colour of a wall or roof: sets how much sun it absorbs (sol-air temperature). */
+export const COLOR_OPTIONS = [
+  { value: 'light', label: 'Light' },
+  { value: 'medium', label: 'Medium' },
+  { value: 'dark', label: 'Dark' },
+];
 export const NEW_WINDOW = { widthIn: 36, heightIn: 48, count: 1, glazing: 'double-clear', interiorShading: 'none' };
 export const NEW_DOOR = { widthIn: 36, heightIn: 80, count: 1, doorType: 'insulated-steel' };
 
@@ -53,6 +59,13 @@ export function WallFields({ draft, set, err, index, replace }: WallProps) {
           options={constructionOptions}
           onChange={(x) => set(p('construction'), x)}
           error={err(p('construction'))}
+        />
+        <SelectInput
+          label="Outside colour"
+          value={asString(v('color'), 'medium')}
+          options={COLOR_OPTIONS}
+          onChange={(x) => set(p('color'), x)}
+          error={err(p('color'))}
         />
       </div>
       {err(p('windows')) ? <p className="text-sm font-semibold text-danger">{err(p('windows'))}</p> : null}

@@ -81,6 +81,22 @@ export function WindowFields({
           onChange={(x) => set(p('interiorShading'), x)}
           error={err(p('interiorShading'))}
         />
+        <NumberInput
+          label="Overhang depth"
+          hint="Eave or porch roof over the window, how far it sticks out. Blank: none"
+          quantity="ft"
+          value={asNumber(v('overhangDepthFt'))}
+          onChange={(x) => set(p('overhangDepthFt'), x)}
+          error={err(p('overhangDepthFt'))}
+        />
+        <NumberInput
+          label="Overhang above the window top"
+          hint="Blank: right at the window head"
+          quantity="ft"
+          value={asNumber(v('overhangGapFt'))}
+          onChange={(x) => set(p('overhangGapFt'), x)}
+          error={err(p('overhangGapFt'))}
+        />
       </div>
       <Button variant="ghost" className="mt-2" onClick={onRemove}>
         Remove window {index + 1}

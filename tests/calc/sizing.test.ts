@@ -177,3 +177,45 @@ describe('multi-zone combination limits', () => {
     expect(c.connectedPercent).toBe(200);
   });
 });
+
+describe('heat-pump allowance by climate and the latent check (issue 9)', () => {
+  const unit = (sensibleHeatRatio?: number) => ({
+    description: 'Test unit',
+    cooling: [{ outdoorF: 95, btuh: 12000 }],
+    heating: [{ outdoorF: 10, btuh: 14000 }],
+    ...(sensibleHeatRatio === undefined ? {} : { sensibleHeatRatio }),
+  });
+  const run = (load: { sensibleBtuh: number; latentBtuh: number; heatingBtuh: number }, shr?: number) =>
+    checkSizing({
+      unit: unit(shr),
+      equipmentType: 'heat-pump-single-speed',
+      load,
+      coolingDesignF: 95,
+      heatingDesignF: 10,
+      policy: DEFAULT_SIZING_POLICY,
+    });
+
+  it('a single-speed heat pump at 120 % passes where heating dominates (125 % allowance) and fails where cooling does (115 %) [MEM: Manual S limits, trade-facts §7; the dominance rule is ours]', () => {
+    // 12,000 ÷ 10,000 = 1.20
+    const cold = run({ sensibleBtuh: 8000, latentBtuh: 2000, heatingBtuh: 20000 });
+    expect(cold.limitRule).toBe('heat-pump-heating-dominated');
+    expect(cold.allowedPercent.max).toBe(125);
+    expect(cold.withinRange).toBe(true);
+    const hot = run({ sensibleBtuh: 8000, latentBtuh: 2000, heatingBtuh: 6000 });
+    expect(hot.limitRule).toBe('heat-pump-cooling-limit');
+    expect(hot.allowedPercent.max).toBe(115);
+    expect(hot.withinRange).toBe(false);
+    expect(hot.warnings.some((w) => w.includes('air-conditioner limit'))).toBe(true);
+  });
+
+  it('latent check: capacity × (1 − SHR) against the latent load — 12,000 × (1 − 0.80) = 2,400 < 3,000 warns; 0.70 → 3,600 passes [PUB: SHR definition]', () => {
+    const dry = run({ sensibleBtuh: 8000, latentBtuh: 3000, heatingBtuh: 20000 }, 0.8);
+    expect(dry.latentCapacityBtuh).toBe(2400);
+    // load SHR 8,000 / 11,000 = 0.7273
+    expect(dry.loadSensibleHeatRatio).toBe(0.727);
+    expect(dry.warnings.some((w) => w.includes('latent capacity (2400 Btu/h'))).toBe(true);
+    const ok = run({ sensibleBtuh: 8000, latentBtuh: 3000, heatingBtuh: 20000 }, 0.7);
+    expect(ok.latentCapacityBtuh).toBe(3600);
+    expect(ok.warnings.some((w) => w.includes('latent capacity'))).toBe(false);
+  });
+});

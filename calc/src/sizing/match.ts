@@ -20,8 +20,27 @@ export interface SizingCheck {
   readonly heatingLoadBtuh: number;
   readonly heatingCapacityBtuh: number | null;
   readonly heatingRatio: number | null;
+  /**
+   * Which cooling limit applied: a heat pump takes its own (larger) allowance only where heating dominates
+   * (heat loss above the total cooling load); elsewhere the air conditioner's limit of the same staging.
+   */
+  readonly limitRule: 'air-conditioner' | 'heat-pump-heating-dominated' | 'heat-pump-cooling-limit';
+  /** Latent capacity at design (capacity × (1 − equipment SHR)) when the data gives an SHR, Btu/h. */
+  readonly latentCapacityBtuh: number | null;
+  /** The load's sensible heat ratio (sensible ÷ total), 3 decimals; null without a cooling load. */
+  readonly loadSensibleHeatRatio: number | null;
   readonly warnings: readonly string[];
 }
+
+/** The air conditioner of the same staging, whose limit a heat pump takes where cooling dominates. */
+const COOLING_LIMIT_OF: Record<EquipmentType, EquipmentType> = {
+  'ac-single-speed': 'ac-single-speed',
+  'ac-two-stage': 'ac-two-stage',
+  'ac-variable-speed': 'ac-variable-speed',
+  'heat-pump-single-speed': 'ac-single-speed',
+  'heat-pump-two-stage': 'ac-two-stage',
+  'heat-pump-variable-speed': 'ac-variable-speed',
+};
 
 interface Rated {
   readonly description: string;
@@ -51,8 +70,18 @@ export function checkSizing({
   readonly policy: SizingPolicy;
 }): SizingCheck {
   const warnings: string[] = [];
-  const range = policy.cooling[equipmentType];
   const coolingLoad = load.sensibleBtuh + load.latentBtuh;
+  // The larger heat-pump allowance only where heating dominates (heat loss > total cooling load), a stated
+  // rule [MEM: ACCA Manual S 2nd ed. lets heat pumps in heating-dominated climates exceed the cooling limit].
+  const heatPump = isHeatPump(equipmentType);
+  const heatingDominated = load.heatingBtuh > coolingLoad;
+  const limitRule = !heatPump
+    ? 'air-conditioner'
+    : heatingDominated
+      ? 'heat-pump-heating-dominated'
+      : 'heat-pump-cooling-limit';
+  const range =
+    policy.cooling[limitRule === 'heat-pump-cooling-limit' ? COOLING_LIMIT_OF[equipmentType] : equipmentType];
   const cool = capacityAtOutdoorF({ points: unit.cooling, outdoorF: coolingDesignF });
   if (cool.extrapolated)
     warnings.push(
@@ -73,6 +102,21 @@ export function checkSizing({
   if (unit.sensibleHeatRatio !== undefined && cool.btuh * unit.sensibleHeatRatio < load.sensibleBtuh) {
     warnings.push(
       `${unit.description}: its sensible capacity (${roundHalfUp(cool.btuh * unit.sensibleHeatRatio)} Btu/h) is below the sensible load (${roundHalfUp(load.sensibleBtuh)} Btu/h).`,
+    );
+  }
+  // Latent check: latent capacity = capacity × (1 − SHR) against the latent load [PUB: SHR = sensible ÷ total;
+  // TRADE: the equipment's SHR at design should not exceed the load's in humid climates].
+  const latentCapacity =
+    unit.sensibleHeatRatio === undefined ? null : roundHalfUp(cool.btuh * (1 - unit.sensibleHeatRatio));
+  const loadShr = coolingLoad > 0 ? roundHalfUp(load.sensibleBtuh / coolingLoad, 3) : null;
+  if (latentCapacity !== null && latentCapacity < load.latentBtuh) {
+    warnings.push(
+      `${unit.description}: its latent capacity (${latentCapacity} Btu/h at SHR ${unit.sensibleHeatRatio ?? ''}) is below the latent load (${roundHalfUp(load.latentBtuh)} Btu/h, load SHR ${loadShr ?? ''}): the house may stay humid.`,
+    );
+  }
+  if (heatPump && limitRule === 'heat-pump-cooling-limit' && ratio !== null && ratio * 100 > range.maxPercent) {
+    warnings.push(
+      `Cooling dominates here (heat loss ${roundHalfUp(load.heatingBtuh)} ≤ cooling ${roundHalfUp(coolingLoad)} Btu/h), so the heat pump gets the air-conditioner limit, not the larger heat-pump allowance.`,
     );
   }
   let heatingCapacity: number | null = null;
@@ -102,6 +146,9 @@ export function checkSizing({
     heatingLoadBtuh: load.heatingBtuh,
     heatingCapacityBtuh: heatingCapacity,
     heatingRatio,
+    limitRule,
+    latentCapacityBtuh: latentCapacity,
+    loadSensibleHeatRatio: loadShr,
     warnings,
   };
 }

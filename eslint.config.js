@@ -4,6 +4,7 @@
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import reactHooks from 'eslint-plugin-react-hooks';
+import importPlugin from 'eslint-plugin-import';
 import globals from 'globals';
 import { readdirSync } from 'node:fs';
 
@@ -80,6 +81,31 @@ export default tseslint.config(
   {
     files: ['server/**/*.ts'],
     rules: { 'no-restricted-imports': noOurs([['**/client/**']], 'The server does not import client code.') },
+  },
+  {
+    // Server layering: no import cycles (between modules or anywhere), and lib/ never reaches into a module.
+    files: ['server/**/*.ts'],
+    plugins: { import: importPlugin },
+    settings: {
+      'import/resolver': { node: { extensions: ['.ts', '.js'] } },
+      'import/parsers': { '@typescript-eslint/parser': ['.ts'] },
+      'import/extensions': ['.ts', '.js'],
+    },
+    rules: {
+      'import/no-cycle': ['error', { ignoreExternal: true }],
+      'import/no-restricted-paths': [
+        'error',
+        {
+          zones: [
+            {
+              target: './server/src/lib',
+              from: './server/src/modules',
+              message: 'lib/ is shared by the modules: it never imports one (move the shared piece into lib/).',
+            },
+          ],
+        },
+      ],
+    },
   },
   {
     // The contract (alias @contract) is the one folder of the server the client imports: it stays pure.

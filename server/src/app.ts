@@ -11,7 +11,7 @@ import { requestLog } from './lib/request-log';
 import { notFoundApi, problemHandler } from './lib/problem';
 import { apiVersionGuard, csrfGuard, personGuard, sessionMiddleware } from './lib/session';
 import { loadActor } from './modules/auth/load-actor';
-import { mountModules } from './modules';
+import { mountHooks, mountModules, type ModuleMount } from './modules';
 import type { Services } from './services/services';
 
 const JSON_LIMIT = '256kb';
@@ -58,8 +58,14 @@ function clientFiles(dist: string): RequestHandler | null {
   };
 }
 
+/** Routes only the tests add (a webhook, a link-session route), mounted exactly like the real ones. */
+export interface AppExtras {
+  modules?: readonly ModuleMount[];
+  hooks?: readonly ModuleMount[];
+}
+
 /** Builds the whole HTTP app without listening: server.ts listens, the tests call it through supertest. */
-export function createApp(services: Services): Express {
+export function createApp(services: Services, extras: AppExtras = {}): Express {
   const { orm, config } = services;
   const app = express();
   app.disable('x-powered-by');
@@ -95,6 +101,8 @@ export function createApp(services: Services): Express {
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
+  // Signed webhooks take their body raw and have no session or CSRF: before all of those.
+  mountHooks(app, services, extras.hooks);
   app.use('/api', apiVersionGuard);
   // A CSV import carries the whole file (up to IMPORT_LIMITS.maxBytes, checked with a message naming the limit).
   const importJson = express.json({ limit: IMPORT_JSON_LIMIT, strict: true });
@@ -116,7 +124,7 @@ export function createApp(services: Services): Express {
   app.use('/api', csrfGuard);
   app.use('/api', personGuard);
 
-  mountModules(app, services);
+  mountModules(app, services, extras.modules);
   app.use('/api', notFoundApi);
 
   app.use(problemHandler);

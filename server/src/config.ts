@@ -57,6 +57,8 @@ const schema = z.object({
   DEV_OUTBOX: z.enum(['on', 'off']).optional(),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   CLIENT_DIST: z.string().default('dist/client'),
+  /** `on` (the tests): every JSON answer is checked against its route's response schema; a mismatch is a 500. */
+  RESPONSE_VALIDATION: z.enum(['on', 'off']).default('off'),
 });
 
 export type Config = z.infer<typeof schema> & { devOutbox: boolean };

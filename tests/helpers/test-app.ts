@@ -6,7 +6,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import pg from 'pg';
 import { ormConfig } from '../../mikro-orm.config';
-import { createApp } from '../../server/src/app';
+import { createApp, type AppExtras } from '../../server/src/app';
 import { loadConfig, type Config } from '../../server/src/config';
 import { startSmtpFake, type SmtpFake } from '../../server/src/fakes/smtp-fake';
 import { createSmtpMailer } from '../../server/src/services/mailer';
@@ -31,7 +31,11 @@ export function testDatabaseUrl(): string {
 }
 
 /** The real app on the real test database, with production error semantics and its own SMTP fake. */
-export async function buildTestApp(overrides: Partial<Config> = {}, clock: Clock = systemClock): Promise<TestApp> {
+export async function buildTestApp(
+  overrides: Partial<Config> = {},
+  clock: Clock = systemClock,
+  extras: AppExtras = {},
+): Promise<TestApp> {
   const url = testDatabaseUrl();
   const config = loadConfig(
     {
@@ -41,7 +45,7 @@ export async function buildTestApp(overrides: Partial<Config> = {}, clock: Clock
       APP_ORIGIN: 'https://gaugeline.test',
       LOG_LEVEL: 'silent',
     },
-    { DEV_OUTBOX: 'on', LOGIN_MAX_PER_IP: 1000, ...overrides },
+    { DEV_OUTBOX: 'on', LOGIN_MAX_PER_IP: 1000, RESPONSE_VALIDATION: 'on', ...overrides },
   );
   const orm = await MikroORM.init(ormConfig(url, 5));
   const sessionPool = new pg.Pool({ connectionString: url, max: 3 });
@@ -70,7 +74,7 @@ export async function buildTestApp(overrides: Partial<Config> = {}, clock: Clock
   // QUEUE_WORKERS: 'off' in the overrides: the app only adds jobs (a worker process runs them).
   if (config.QUEUE_WORKERS === 'on') await queue.start();
   const services: Services = { ...base, queue };
-  const app = createApp(services);
+  const app = createApp(services, extras);
   return {
     app,
     orm,

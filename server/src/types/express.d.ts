@@ -1,4 +1,4 @@
-import type { Actor } from '../lib/route';
+import type { Actor, LinkGrant } from '../lib/route';
 import type { SessionUser } from '../lib/session';
 
 declare global {
@@ -17,6 +17,8 @@ declare module 'express-session' {
     /** Epoch ms of sign-in, for the absolute lifetime (express-session only knows idle expiry). */
     authAt?: number;
     csrf?: string;
+    /** A customer's proposal-link session (lib/route.ts `link` policy); staff sessions have none. */
+    link?: LinkGrant;
   }
 }
 

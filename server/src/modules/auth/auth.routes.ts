@@ -1,8 +1,15 @@
 import type { ApiRouter } from '../../lib/route';
-import { ANY_STAFF, PUBLIC } from '../../lib/route';
+import { ANY_STAFF, NO_CONTENT, PUBLIC } from '../../lib/route';
 import { UserSchema } from '../users/user.entity';
 import { presentUser } from '../users/user.presenter';
-import { RESET_REQUESTED_MESSAGE } from '@contract';
+import {
+  csrfResponse,
+  meResponse,
+  accountMessageResponse,
+  passwordChangedResponse,
+  RESET_REQUESTED_MESSAGE,
+  userResponse,
+} from '@contract';
 import { changePasswordSchema, loginSchema, passwordResetRequestSchema, passwordResetSchema } from './auth.schema';
 import { csrfToken, signIn, signOut } from './auth.service';
 import { changePassword, completePasswordReset, requestPasswordReset } from './password.service';
@@ -14,6 +21,7 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     method: 'get',
     path: '/csrf',
     policy: PUBLIC,
+    response: csrfResponse,
     handler: async ({ req }) => ({ token: await csrfToken(req) }),
   });
 
@@ -22,6 +30,7 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     path: '/login',
     policy: PUBLIC,
     body: loginSchema,
+    response: userResponse,
     handler: async ({ em, req, body, services }) => ({
       user: presentUser(await signIn(em, req, limiter, services.clock, body)),
     }),
@@ -31,10 +40,9 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     method: 'post',
     path: '/logout',
     policy: PUBLIC,
-    handler: async ({ req, res }) => {
+    response: NO_CONTENT,
+    handler: async ({ req }) => {
       await signOut(req);
-      res.status(204).end();
-      return undefined;
     },
   });
 
@@ -42,6 +50,7 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     method: 'get',
     path: '/me',
     policy: ANY_STAFF,
+    response: meResponse,
     handler: async ({ actor, em }) => {
       const user = await em.findOneOrFail(UserSchema, { id: actor.userId }, { populate: ['company'] });
       return {
@@ -57,6 +66,7 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     path: '/password',
     policy: ANY_STAFF,
     body: changePasswordSchema,
+    response: passwordChangedResponse,
     handler: async ({ em, req, actor, body, services }) =>
       changePassword(em, req, { limiter, queue: services.queue, clock: services.clock }, actor, body),
   });
@@ -67,6 +77,7 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     path: '/password-reset',
     policy: PUBLIC,
     body: passwordResetRequestSchema,
+    response: accountMessageResponse,
     status: 202,
     handler: async ({ em, req, body, services }) => {
       await requestPasswordReset(em, req, { limiter: resetLimiter, queue: services.queue }, body.email);
@@ -80,6 +91,7 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     path: '/password-reset/complete',
     policy: PUBLIC,
     body: passwordResetSchema,
+    response: accountMessageResponse,
     handler: async ({ em, body, services }) => {
       await completePasswordReset(em, { queue: services.queue, clock: services.clock, limiter }, body);
       return { message: 'Your new password is set. Sign in with it.' };

@@ -1,7 +1,15 @@
 import { DATASET_IDS, DATASETS, EDITORS, priceBookSettingsSchema, type DataRole } from '@calc';
 import { z } from 'zod';
-import { ANY_STAFF, OFFICE, roles, type ApiRouter } from '../../lib/route';
-import { ifMatchVersion, setEtag } from '../jobs/version-lock';
+import {
+  companyDataHistoryResponse,
+  companyDataRowResponse,
+  companyDataTableResponse,
+  companyDataTablesResponse,
+  importApplyResponse,
+  importPreviewResponse,
+  priceBookSettingsResponse,
+} from '@contract';
+import { ANY_STAFF, OFFICE, rawResponse, roles, type ApiRouter } from '../../lib/route';
 import { applyImport, exportCsv, previewImport, templateCsv } from './company-data.import';
 import { presentChange, presentRow } from './company-data.presenter';
 import { datasetParams, importApplyBody, importPreviewBody, recordBody, rowParams } from './company-data.schema';
@@ -16,6 +24,7 @@ export function companyDataRoutes(api: ApiRouter): void {
     method: 'get',
     path: '/tables',
     policy: ANY_STAFF,
+    response: companyDataTablesResponse,
     handler: async ({ actor }) => ({
       tables: DATASET_IDS.filter((id) => DATASETS[id].readers.includes(actor.role as DataRole)).map((id) => ({
         id,
@@ -28,28 +37,29 @@ export function companyDataRoutes(api: ApiRouter): void {
     method: 'get',
     path: '/settings',
     policy: PRICE_READERS,
-    handler: async ({ em, actor, res }) => {
-      const s = await getSettings(em, actor.companyId);
-      setEtag(res, s.version);
-      return { settings: presentSettings(s, actor.role) };
-    },
+    response: priceBookSettingsResponse,
+    versioned: (out) => out.settings.version,
+    handler: async ({ em, actor }) => ({
+      settings: presentSettings(await getSettings(em, actor.companyId), actor.role),
+    }),
   });
   api.route({
     method: 'put',
     path: '/settings',
     policy: OFFICE,
     body: z.strictObject({ settings: priceBookSettingsSchema.strict() }),
-    handler: async ({ em, actor, body, req, res }) => {
-      const s = await putSettings(em, actor, ifMatchVersion(req), body.settings);
-      setEtag(res, s.version);
-      return { settings: presentSettings(s, actor.role) };
-    },
+    response: priceBookSettingsResponse,
+    versioned: (out) => out.settings.version,
+    handler: async ({ em, actor, body, ifMatch }) => ({
+      settings: presentSettings(await putSettings(em, actor, ifMatch, body.settings), actor.role),
+    }),
   });
   api.route({
     method: 'get',
     path: '/:dataset',
     policy: ANY_STAFF,
     params: datasetParams,
+    response: companyDataTableResponse,
     handler: async ({ em, actor, params }) => {
       assertReader(actor, params.dataset);
       const rows = await listRows(em, actor.companyId, params.dataset);
@@ -61,6 +71,7 @@ export function companyDataRoutes(api: ApiRouter): void {
     path: '/:dataset/csv/export',
     policy: OFFICE,
     params: datasetParams,
+    response: rawResponse('text/csv'),
     handler: async ({ em, actor, params, res }) => {
       const csv = await exportCsv(em, actor.companyId, params.dataset);
       res.type('text/csv; charset=utf-8').attachment(`${params.dataset}.csv`).send(csv);
@@ -72,6 +83,7 @@ export function companyDataRoutes(api: ApiRouter): void {
     path: '/:dataset/csv/template',
     policy: OFFICE,
     params: datasetParams,
+    response: rawResponse('text/csv'),
     handler: async ({ params, res }) => {
       res
         .type('text/csv; charset=utf-8')
@@ -86,6 +98,7 @@ export function companyDataRoutes(api: ApiRouter): void {
     policy: OFFICE,
     params: datasetParams,
     body: importPreviewBody,
+    response: importPreviewResponse,
     handler: async ({ em, actor, params, body }) => ({
       preview: await previewImport(em, actor, params.dataset, body.csv),
     }),
@@ -96,6 +109,7 @@ export function companyDataRoutes(api: ApiRouter): void {
     policy: OFFICE,
     params: datasetParams,
     body: importApplyBody,
+    response: importApplyResponse,
     handler: async ({ em, actor, params, body }) => ({
       applied: await applyImport(em, actor, params.dataset, body.csv, body.token),
     }),
@@ -107,22 +121,22 @@ export function companyDataRoutes(api: ApiRouter): void {
     params: datasetParams,
     body: recordBody,
     status: 201,
-    handler: async ({ em, actor, params, body, res }) => {
-      const row = await createRow(em, actor, params.dataset, body.record);
-      setEtag(res, row.version);
-      return { row: presentRow(row, actor.role) };
-    },
+    response: companyDataRowResponse,
+    versioned: (out) => out.row.version,
+    handler: async ({ em, actor, params, body }) => ({
+      row: presentRow(await createRow(em, actor, params.dataset, body.record), actor.role),
+    }),
   });
   api.route({
     method: 'get',
     path: '/:dataset/:key',
     policy: ANY_STAFF,
     params: rowParams,
-    handler: async ({ em, actor, params, res }) => {
+    response: companyDataRowResponse,
+    versioned: (out) => out.row.version,
+    handler: async ({ em, actor, params }) => {
       assertReader(actor, params.dataset);
-      const row = await getRow(em, actor.companyId, params.dataset, params.key);
-      setEtag(res, row.version);
-      return { row: presentRow(row, actor.role) };
+      return { row: presentRow(await getRow(em, actor.companyId, params.dataset, params.key), actor.role) };
     },
   });
   api.route({
@@ -131,17 +145,18 @@ export function companyDataRoutes(api: ApiRouter): void {
     policy: OFFICE,
     params: rowParams,
     body: recordBody,
-    handler: async ({ em, actor, params, body, req, res }) => {
-      const row = await updateRow(em, actor, params.dataset, params.key, ifMatchVersion(req), body.record);
-      setEtag(res, row.version);
-      return { row: presentRow(row, actor.role) };
-    },
+    response: companyDataRowResponse,
+    versioned: (out) => out.row.version,
+    handler: async ({ em, actor, params, body, ifMatch }) => ({
+      row: presentRow(await updateRow(em, actor, params.dataset, params.key, ifMatch, body.record), actor.role),
+    }),
   });
   api.route({
     method: 'get',
     path: '/:dataset/:key/history',
     policy: OFFICE,
     params: rowParams,
+    response: companyDataHistoryResponse,
     handler: async ({ em, actor, params }) => ({
       history: (await rowHistory(em, actor.companyId, params.dataset, params.key)).map(presentChange),
     }),

@@ -5,7 +5,7 @@ import type { Actor } from '../../lib/route';
 import { zodToFieldErrors } from '../../lib/validate';
 import { CompanySchema } from '../companies/company.entity';
 import { UserSchema } from '../users/user.entity';
-import { assertVersion } from '../jobs/version-lock';
+import { assertVersion } from '../../lib/version-lock';
 import { CompanyDataChangeSchema, CompanyDataRowSchema, type CompanyDataRow } from './company-data.entity';
 import { presentRow } from './company-data.presenter';
 

@@ -2,7 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { priceBookSettingsSchema, type DataRole, type PriceBookSettings } from '@calc';
 import type { Actor } from '../../lib/route';
 import { CompanySchema } from '../companies/company.entity';
-import { assertVersion } from '../jobs/version-lock';
+import { assertVersion } from '../../lib/version-lock';
 import { PriceBookSettingsSchema } from './company-data.entity';
 
 /** Until the owner saves: no tax and a 40 % margin [OWN: a neutral starting point, not advice]. */

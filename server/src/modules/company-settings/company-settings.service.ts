@@ -3,7 +3,7 @@ import type { DesignConditions } from '@calc';
 import { NotFoundError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
 import { CompanySchema } from '../companies/company.entity';
-import { assertVersion } from '../jobs/version-lock';
+import { assertVersion } from '../../lib/version-lock';
 import { presentCompanySettings, type SettingsView } from './company-settings.presenter';
 import { CompanySettingsSchema } from './company-settings.entity';
 import type { PutCompanySettingsInput } from './company-settings.schema';

@@ -1,17 +1,19 @@
-import { JOB_EDITORS, OFFICE, type ApiRouter } from '../../lib/route';
-import { ifMatchVersion, setEtag } from '../jobs/version-lock';
+import { customerResponse, customersResponse } from '@contract';
+import { JOB_EDITORS, NO_CONTENT, OFFICE, type ApiRouter } from '../../lib/route';
 import { presentCustomer } from './customer.presenter';
 import { createCustomerSchema, customerIdParams, listCustomersQuery, updateCustomerSchema } from './customer.schema';
 import { createCustomer, deleteCustomer, getCustomer, listCustomers, updateCustomer } from './customer.service';
 
-/** Installers meet customers only through the jobs assigned to them. */
+const etag = (out: { customer: { version: number } }) => out.customer.version;
 
+/** Installers meet customers only through the jobs assigned to them. */
 export function customerRoutes(api: ApiRouter): void {
   api.route({
     method: 'get',
     path: '/',
     policy: JOB_EDITORS,
     query: listCustomersQuery,
+    response: customersResponse,
     handler: async ({ em, actor, query }) => {
       const { items, total } = await listCustomers(em, actor, query);
       return { items: items.map(presentCustomer), total, page: query.page, pageSize: query.pageSize };
@@ -22,11 +24,9 @@ export function customerRoutes(api: ApiRouter): void {
     path: '/:id',
     policy: JOB_EDITORS,
     params: customerIdParams,
-    handler: async ({ em, actor, params, res }) => {
-      const customer = await getCustomer(em, actor, params.id);
-      setEtag(res, customer.version);
-      return { customer: presentCustomer(customer) };
-    },
+    response: customerResponse,
+    versioned: etag,
+    handler: async ({ em, actor, params }) => ({ customer: presentCustomer(await getCustomer(em, actor, params.id)) }),
   });
   api.route({
     method: 'post',
@@ -34,11 +34,9 @@ export function customerRoutes(api: ApiRouter): void {
     policy: JOB_EDITORS,
     body: createCustomerSchema,
     status: 201,
-    handler: async ({ em, actor, body, res }) => {
-      const customer = await createCustomer(em, actor, body);
-      setEtag(res, customer.version);
-      return { customer: presentCustomer(customer) };
-    },
+    response: customerResponse,
+    versioned: etag,
+    handler: async ({ em, actor, body }) => ({ customer: presentCustomer(await createCustomer(em, actor, body)) }),
   });
   api.route({
     method: 'patch',
@@ -46,21 +44,21 @@ export function customerRoutes(api: ApiRouter): void {
     policy: JOB_EDITORS,
     params: customerIdParams,
     body: updateCustomerSchema,
-    handler: async ({ em, actor, params, body, req, res }) => {
-      const customer = await updateCustomer(em, actor, params.id, ifMatchVersion(req), body);
-      setEtag(res, customer.version);
-      return { customer: presentCustomer(customer) };
-    },
+    response: customerResponse,
+    versioned: etag,
+    handler: async ({ em, actor, params, body, ifMatch }) => ({
+      customer: presentCustomer(await updateCustomer(em, actor, params.id, ifMatch, body)),
+    }),
   });
   api.route({
     method: 'delete',
     path: '/:id',
     policy: OFFICE,
     params: customerIdParams,
-    handler: async ({ em, actor, params, req, res }) => {
-      await deleteCustomer(em, actor, params.id, ifMatchVersion(req));
-      res.status(204).end();
-      return undefined;
+    response: NO_CONTENT,
+    versioned: true,
+    handler: async ({ em, actor, params, ifMatch }) => {
+      await deleteCustomer(em, actor, params.id, ifMatch);
     },
   });
 }

@@ -3,7 +3,7 @@ import { ConflictError, NotFoundError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
 import { CompanySchema } from '../companies/company.entity';
 import { JobSchema } from '../jobs/job.entity';
-import { assertVersion } from '../jobs/version-lock';
+import { assertVersion } from '../../lib/version-lock';
 import { presentCustomer } from './customer.presenter';
 import { CustomerSchema, type Customer } from './customer.entity';
 import {

@@ -1,18 +1,22 @@
-import { PUBLIC, type ApiRouter } from '../../lib/route';
+import { healthResponse } from '@contract';
+import { PUBLIC, reply, type ApiRouter } from '../../lib/route';
 
 export function healthRoutes(api: ApiRouter): void {
   api.route({
     method: 'get',
     path: '/',
     policy: PUBLIC,
-    handler: async ({ services, res }) => {
+    summary: 'Up and reaching the database: 200 ok, or 503 degraded',
+    response: healthResponse,
+    handler: async ({ services }) => {
       const up = await services.orm.em
         .getConnection()
         .execute('select 1')
         .then(() => true)
         .catch(() => false);
-      res.status(up ? 200 : 503).json({ status: up ? 'ok' : 'degraded', db: up ? 'ok' : 'down' });
-      return undefined;
+      return up
+        ? { status: 'ok' as const, db: 'ok' as const }
+        : reply(503, { status: 'degraded', db: 'down' } as const);
     },
   });
 }

@@ -8,7 +8,7 @@ import { RoomSchema } from '../rooms/room.entity';
 import { findJob } from './job-access';
 import { JobSchema } from './job.entity';
 import { presentJob } from './job.presenter';
-import { assertVersion } from './version-lock';
+import { assertVersion } from '../../lib/version-lock';
 
 function notDeletable(status: JobStatus): ConflictError {
   const instead = status === 'proposed' ? 'mark it lost instead' : 'won, lost and installed jobs stay for the reports';

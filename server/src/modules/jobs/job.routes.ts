@@ -1,17 +1,21 @@
-import { ANY_STAFF, JOB_EDITORS, type ApiRouter } from '../../lib/route';
+import { jobResponse, jobsResponse } from '@contract';
+import { ANY_STAFF, JOB_EDITORS, NO_CONTENT, type ApiRouter } from '../../lib/route';
 import { deleteJob } from './job-delete';
 import { findJobView, listJobViews } from './job-reads';
 import { presentJob } from './job.presenter';
 import { createJobSchema, jobIdParams, listJobsQuery, updateJobSchema } from './job.schema';
 import { createJob, updateJob } from './job.service';
-import { ifMatchVersion, setEtag } from './version-lock';
+
+const etag = (out: { job: { version: number } }) => out.job.version;
 
 export function jobRoutes(api: ApiRouter): void {
   api.route({
     method: 'get',
     path: '/',
     policy: ANY_STAFF,
+    summary: 'The jobs the person may see, newest activity first',
     query: listJobsQuery,
+    response: jobsResponse,
     handler: async ({ em, actor, query }) => {
       const { items, total } = await listJobViews(em, actor, query);
       return { items: items.map(presentJob), total, page: query.page, pageSize: query.pageSize };
@@ -22,11 +26,9 @@ export function jobRoutes(api: ApiRouter): void {
     path: '/:id',
     policy: ANY_STAFF,
     params: jobIdParams,
-    handler: async ({ em, actor, params, res }) => {
-      const job = await findJobView(em, actor, params.id);
-      setEtag(res, job.version);
-      return { job: presentJob(job) };
-    },
+    response: jobResponse,
+    versioned: etag,
+    handler: async ({ em, actor, params }) => ({ job: presentJob(await findJobView(em, actor, params.id)) }),
   });
   api.route({
     method: 'post',
@@ -34,11 +36,11 @@ export function jobRoutes(api: ApiRouter): void {
     policy: JOB_EDITORS,
     body: createJobSchema,
     status: 201,
-    handler: async ({ em, actor, body, services, res }) => {
-      const job = await createJob(em, actor, services.clock, body);
-      setEtag(res, job.version);
-      return { job: presentJob(job) };
-    },
+    response: jobResponse,
+    versioned: etag,
+    handler: async ({ em, actor, body, services }) => ({
+      job: presentJob(await createJob(em, actor, services.clock, body)),
+    }),
   });
   api.route({
     method: 'patch',
@@ -46,21 +48,22 @@ export function jobRoutes(api: ApiRouter): void {
     policy: JOB_EDITORS,
     params: jobIdParams,
     body: updateJobSchema,
-    handler: async ({ em, actor, params, body, services, req, res }) => {
-      const job = await updateJob(em, actor, services.clock, params.id, ifMatchVersion(req), body);
-      setEtag(res, job.version);
-      return { job: presentJob(job) };
-    },
+    response: jobResponse,
+    versioned: etag,
+    handler: async ({ em, actor, params, body, services, ifMatch }) => ({
+      job: presentJob(await updateJob(em, actor, services.clock, params.id, ifMatch, body)),
+    }),
   });
   api.route({
     method: 'delete',
     path: '/:id',
     policy: JOB_EDITORS,
+    summary: 'Deletes a job still in walk-through or design, with its rooms and photos',
     params: jobIdParams,
-    handler: async ({ em, actor, params, services, req, res }) => {
-      await deleteJob(em, actor, services.storage, params.id, ifMatchVersion(req));
-      res.status(204).end();
-      return undefined;
+    response: NO_CONTENT,
+    versioned: true,
+    handler: async ({ em, actor, params, services, ifMatch }) => {
+      await deleteJob(em, actor, services.storage, params.id, ifMatch);
     },
   });
 }

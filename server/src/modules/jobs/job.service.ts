@@ -21,7 +21,7 @@ import { findJob } from './job-access';
 import { JobSchema, type Job } from './job.entity';
 import { presentJob } from './job.presenter';
 import type { CreateJobInput, UpdateJobInput } from './job.schema';
-import { assertVersion } from './version-lock';
+import { assertVersion } from '../../lib/version-lock';
 
 async function customerOf(em: EntityManager, actor: Actor, id: string): Promise<Customer> {
   const c = await em.findOne(CustomerSchema, { id, company: actor.companyId });

@@ -1,9 +1,9 @@
 import { z } from 'zod';
-import { roles, type ApiRouter } from '../../lib/route';
+import { mailMessageResponse, mailMessagesResponse } from '@contract';
+import { OWNER, type ApiRouter } from '../../lib/route';
 import { presentMessage } from './mail.presenter';
 import { listMessages, retryMessage } from './mail.service';
 
-const OWNER = roles('owner');
 const messageIdParams = z.strictObject({ id: z.uuid({ message: 'Must be a message id.' }) });
 
 /** The owner's E-mail page: what the app sent or is trying to send for the company, and "Try again". */
@@ -12,6 +12,7 @@ export function mailRoutes(api: ApiRouter): void {
     method: 'get',
     path: '/',
     policy: OWNER,
+    response: mailMessagesResponse,
     handler: async ({ em, actor }) => ({ messages: (await listMessages(em, actor)).map(presentMessage) }),
   });
   api.route({
@@ -19,6 +20,7 @@ export function mailRoutes(api: ApiRouter): void {
     path: '/:id/retry',
     policy: OWNER,
     params: messageIdParams,
+    response: mailMessageResponse,
     handler: async ({ em, actor, params, services }) => ({
       message: presentMessage(await retryMessage(em, services.queue, actor, params.id)),
     }),

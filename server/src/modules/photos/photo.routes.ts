@@ -1,9 +1,10 @@
 import { z } from 'zod';
-import { ANY_STAFF, JOB_EDITORS, type ApiRouter } from '../../lib/route';
+import { photoResponse } from '@contract';
+import { ANY_STAFF, JOB_EDITORS, NO_CONTENT, rawResponse, type ApiRouter } from '../../lib/route';
 import { roomParams } from '../rooms/room.schema';
 import { presentPhoto } from './photo.presenter';
 import { addPhoto, deletePhoto, findPhoto, photoBytes } from './photo.service';
-import { receiveUpload } from './receive-upload';
+import { receiveUpload } from '../../lib/receive-upload';
 
 const photoParams = roomParams.extend({ photoId: z.uuid({ message: 'Must be a photo id.' }) });
 
@@ -16,6 +17,7 @@ export function photoRoutes(api: ApiRouter): void {
     params: roomParams,
     multipart: true,
     status: 201,
+    response: photoResponse,
     handler: async ({ em, actor, params, services, req, res }) => {
       const file = await receiveUpload(req, res, services.config.UPLOAD_MAX_BYTES);
       const photo = await addPhoto(em, actor, services.clock, services.storage, params, file);
@@ -27,6 +29,8 @@ export function photoRoutes(api: ApiRouter): void {
     path: '/:jobId/rooms/:roomId/photos/:photoId',
     policy: ANY_STAFF,
     params: photoParams,
+    summary: 'The photo (JPEG, re-encoded without metadata)',
+    response: rawResponse('image/jpeg'),
     handler: async ({ em, actor, params, services, res }) => {
       const photo = await findPhoto(em, actor, params);
       const bytes = await photoBytes(services.storage, photo);
@@ -46,10 +50,9 @@ export function photoRoutes(api: ApiRouter): void {
     path: '/:jobId/rooms/:roomId/photos/:photoId',
     policy: JOB_EDITORS,
     params: photoParams,
-    handler: async ({ em, actor, params, services, res }) => {
+    response: NO_CONTENT,
+    handler: async ({ em, actor, params, services }) => {
       await deletePhoto(em, actor, services.clock, services.storage, params);
-      res.status(204).end();
-      return undefined;
     },
   });
 }

@@ -1,9 +1,11 @@
-import { ANY_STAFF, JOB_EDITORS, type ApiRouter } from '../../lib/route';
-import { ifMatchVersion, setEtag } from '../jobs/version-lock';
+import { roomResponse, roomsResponse } from '@contract';
+import { ANY_STAFF, JOB_EDITORS, NO_CONTENT, type ApiRouter } from '../../lib/route';
 import { presentRoom } from './room.presenter';
 import { listRoomViews, updateRoomIfCurrent } from './room-reads';
 import { createRoomSchema, jobRoomsParams, roomParams, updateRoomSchema } from './room.schema';
 import { createRoom, deleteRoom, getRoom, updateRoom } from './room.service';
+
+const etag = (out: { room: { version: number } }) => out.room.version;
 
 /** Mounted under /api/jobs: rooms are always reached through a job the actor may see. */
 export function roomRoutes(api: ApiRouter): void {
@@ -12,6 +14,7 @@ export function roomRoutes(api: ApiRouter): void {
     path: '/:jobId/rooms',
     policy: ANY_STAFF,
     params: jobRoomsParams,
+    response: roomsResponse,
     handler: async ({ em, actor, params }) => ({
       rooms: (await listRoomViews(em, actor, params.jobId)).map((r) => presentRoom(r.room, params.jobId, r.photos)),
     }),
@@ -21,9 +24,10 @@ export function roomRoutes(api: ApiRouter): void {
     path: '/:jobId/rooms/:roomId',
     policy: ANY_STAFF,
     params: roomParams,
-    handler: async ({ em, actor, params, res }) => {
+    response: roomResponse,
+    versioned: etag,
+    handler: async ({ em, actor, params }) => {
       const r = await getRoom(em, actor, params.jobId, params.roomId);
-      setEtag(res, r.room.version);
       return { room: presentRoom(r.room, params.jobId, r.photos) };
     },
   });
@@ -34,9 +38,10 @@ export function roomRoutes(api: ApiRouter): void {
     params: jobRoomsParams,
     body: createRoomSchema,
     status: 201,
-    handler: async ({ em, actor, params, body, services, res }) => {
+    response: roomResponse,
+    versioned: etag,
+    handler: async ({ em, actor, params, body, services }) => {
       const r = await createRoom(em, actor, services.clock, params.jobId, body);
-      setEtag(res, r.room.version);
       return { room: presentRoom(r.room, params.jobId, r.photos) };
     },
   });
@@ -46,12 +51,12 @@ export function roomRoutes(api: ApiRouter): void {
     policy: JOB_EDITORS,
     params: roomParams,
     body: updateRoomSchema,
-    handler: async ({ em, actor, params, body, services, req, res }) => {
-      const version = ifMatchVersion(req);
+    response: roomResponse,
+    versioned: etag,
+    handler: async ({ em, actor, params, body, services, ifMatch }) => {
       const r =
-        (await updateRoomIfCurrent(em, actor, services.clock.now(), params.jobId, params.roomId, version, body)) ??
-        (await updateRoom(em, actor, services.clock, params.jobId, params.roomId, version, body));
-      setEtag(res, r.room.version);
+        (await updateRoomIfCurrent(em, actor, services.clock.now(), params.jobId, params.roomId, ifMatch, body)) ??
+        (await updateRoom(em, actor, services.clock, params.jobId, params.roomId, ifMatch, body));
       return { room: presentRoom(r.room, params.jobId, r.photos) };
     },
   });
@@ -60,10 +65,10 @@ export function roomRoutes(api: ApiRouter): void {
     path: '/:jobId/rooms/:roomId',
     policy: JOB_EDITORS,
     params: roomParams,
-    handler: async ({ em, actor, params, services, req, res }) => {
-      await deleteRoom(em, actor, services.clock, services.storage, params.jobId, params.roomId, ifMatchVersion(req));
-      res.status(204).end();
-      return undefined;
+    response: NO_CONTENT,
+    versioned: true,
+    handler: async ({ em, actor, params, services, ifMatch }) => {
+      await deleteRoom(em, actor, services.clock, services.storage, params.jobId, params.roomId, ifMatch);
     },
   });
 }

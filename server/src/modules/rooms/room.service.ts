@@ -6,7 +6,7 @@ import type { Clock } from '../../services/services';
 import type { Storage } from '../../services/storage';
 import { findJob, touchJob } from '../jobs/job-access';
 import type { Job } from '../jobs/job.entity';
-import { assertVersion } from '../jobs/version-lock';
+import { assertVersion } from '../../lib/version-lock';
 import { PhotoSchema, type Photo } from '../photos/photo.entity';
 import { RoomSchema, type RoomRow } from './room.entity';
 import { presentRoom } from './room.presenter';

@@ -1,4 +1,5 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
+import { staffResponse, type StaffMember } from '@contract';
 import { OFFICE, type Actor, type ApiRouter } from '../../lib/route';
 import { UserSchema } from './user.entity';
 
@@ -6,7 +7,7 @@ import { UserSchema } from './user.entity';
  * The people a job can be handed to (its salesperson, its installer): names and roles only,
  * for the owner and estimator who assign them. The full user admin stays owner-only.
  */
-export async function listAssignableStaff(em: EntityManager, actor: Actor) {
+export async function listAssignableStaff(em: EntityManager, actor: Actor): Promise<StaffMember[]> {
   const users = await em.find(
     UserSchema,
     { company: actor.companyId, active: true },
@@ -20,6 +21,7 @@ export function staffRoutes(api: ApiRouter): void {
     method: 'get',
     path: '/',
     policy: OFFICE,
+    response: staffResponse,
     handler: async ({ em, actor }) => ({ staff: await listAssignableStaff(em, actor) }),
   });
 }

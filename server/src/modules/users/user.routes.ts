@@ -1,3 +1,4 @@
+import { sessionsEndedResponse, userResponse, usersResponse } from '@contract';
 import { OWNER, type ApiRouter } from '../../lib/route';
 import { presentUser } from './user.presenter';
 import { createUserSchema, updateUserSchema, userIdParams } from './user.schema';
@@ -8,6 +9,7 @@ export function userRoutes(api: ApiRouter): void {
     method: 'get',
     path: '/',
     policy: OWNER,
+    response: usersResponse,
     handler: async ({ em, actor }) => ({ users: (await listUsers(em, actor)).map(presentUser) }),
   });
   api.route({
@@ -15,6 +17,7 @@ export function userRoutes(api: ApiRouter): void {
     path: '/:id',
     policy: OWNER,
     params: userIdParams,
+    response: userResponse,
     handler: async ({ em, actor, params }) => ({ user: presentUser(await getUser(em, actor, params.id)) }),
   });
   api.route({
@@ -23,6 +26,7 @@ export function userRoutes(api: ApiRouter): void {
     policy: OWNER,
     body: createUserSchema,
     status: 201,
+    response: userResponse,
     handler: async ({ em, actor, body, services }) => ({
       user: presentUser(await createUser(em, actor, services.queue, body)),
     }),
@@ -33,6 +37,7 @@ export function userRoutes(api: ApiRouter): void {
     policy: OWNER,
     params: userIdParams,
     body: updateUserSchema,
+    response: userResponse,
     handler: async ({ em, actor, params, body }) => ({
       user: presentUser(await updateUser(em, actor, params.id, body)),
     }),
@@ -42,6 +47,7 @@ export function userRoutes(api: ApiRouter): void {
     path: '/:id/end-sessions',
     policy: OWNER,
     params: userIdParams,
+    response: sessionsEndedResponse,
     handler: async ({ em, actor, params, req }) => ({
       ended: await endUserSessions(em, actor, params.id, req.sessionID),
     }),

@@ -2,7 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { DatasetId } from '@calc';
 import { apiFetch } from '../../../lib/api-client';
 import { priceBookKeys } from '../query-keys';
-import { historyResponse } from '../schemas';
+import { companyDataHistoryResponse as historyResponse } from '@contract';
 import { tablePath } from './get-table';
 
 export const historyQueryOptions = (dataset: DatasetId, key: string) =>

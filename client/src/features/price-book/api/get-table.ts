@@ -2,7 +2,7 @@ import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import type { DatasetId } from '@calc';
 import { apiFetch } from '../../../lib/api-client';
 import { priceBookKeys } from '../query-keys';
-import { tableResponse } from '../schemas';
+import { companyDataTableResponse as tableResponse } from '@contract';
 
 export const tablePath = (dataset: DatasetId) => `/api/company-data/${dataset}`;
 

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DatasetId } from '@calc';
 import { apiFetch } from '../../../lib/api-client';
 import { priceBookKeys } from '../query-keys';
-import { applyResponse, previewResponse } from '../schemas';
+import { importApplyResponse as applyResponse, importPreviewResponse as previewResponse } from '@contract';
 import { tablePath } from './get-table';
 
 export async function previewImport({ dataset, csv }: { dataset: DatasetId; csv: string }) {

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DatasetId } from '@calc';
 import { apiFetch } from '../../../lib/api-client';
 import { priceBookKeys } from '../query-keys';
-import { rowResponse } from '../schemas';
+import { companyDataRowResponse as rowResponse } from '@contract';
 import { tablePath } from './get-table';
 
 export interface SaveRowInput {

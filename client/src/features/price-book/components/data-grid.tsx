@@ -10,7 +10,7 @@ import { useMemo, useState } from 'react';
 import type { CsvColumn } from '@calc';
 import { DataTableBody, DataTableHead } from '../../../components/ui/data-table';
 import { columnHeading, isNumericCell } from '../model/table-view';
-import type { DataRow } from '../schemas';
+import type { CompanyDataRowRecord as DataRow } from '@contract';
 
 type GridRow = { key: string; cells: Record<string, string>; row: DataRow };
 const col = createColumnHelper<GridRow>();

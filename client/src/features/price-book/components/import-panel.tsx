@@ -6,7 +6,7 @@ import { isApiError } from '../../../lib/api-error';
 import { useApplyImport, usePreviewImport } from '../api/import-file';
 import { tablePath } from '../api/get-table';
 import { columnHeading } from '../model/table-view';
-import type { ImportPreview } from '../schemas';
+import type { ImportPreviewRecord as ImportPreview } from '@contract';
 
 interface Loaded {
   name: string;

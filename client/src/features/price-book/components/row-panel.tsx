@@ -5,7 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { isApiError } from '../../../lib/api-error';
 import { useSaveRow } from '../api/save-row';
 import { columnHeading } from '../model/table-view';
-import type { DataRow } from '../schemas';
+import type { CompanyDataRowRecord as DataRow } from '@contract';
 import { CapacityChart } from './capacity-chart';
 import { RowHistory } from './row-history';
 

@@ -1,6 +1,6 @@
 import type { Request, Response } from 'express';
 import multer from 'multer';
-import { BadRequestError, PayloadTooLargeError } from '../../lib/errors';
+import { BadRequestError, PayloadTooLargeError } from './errors';
 
 export const PHOTO_FIELD = 'file';
 

@@ -1,5 +1,5 @@
 import type { Request, Response } from 'express';
-import { ConflictError, PreconditionRequiredError, ValidationError } from '../../lib/errors';
+import { ConflictError, PreconditionRequiredError, ValidationError } from './errors';
 
 /**
  * The optimistic-lock protocol for jobs, rooms and company settings: every response that

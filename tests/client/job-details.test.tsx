@@ -7,6 +7,10 @@ import { jobKeys, jobQueryOptions } from '../../client/src/lib/job-queries';
 import type { JobRecord } from '@contract';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { ViewerContext, type Viewer } from '../../client/src/lib/viewer';
+import type { WalkthroughEdit } from '../../client/src/features/walkthrough/sync/edits';
+import { overlayJob } from '../../client/src/features/walkthrough/sync/overlay';
+import { useQueueState } from '../../client/src/features/walkthrough/sync/queue-context';
+import type { QueueItem } from '../../client/src/lib/offline/queue';
 import { JOB_ID, jobRecord, renderWalkthrough } from './helpers/walkthrough-harness';
 
 afterEach(() => vi.unstubAllGlobals());
@@ -74,19 +78,22 @@ function server(
   return { sent, writes: () => sent.filter((s) => s.method !== 'GET') };
 }
 
-async function renderPanel(viewer: Viewer) {
+async function renderPanel(
+  viewer: Viewer,
+  device: { online?: () => boolean; stored?: readonly QueueItem<WalkthroughEdit>[] } = {},
+) {
   const queryClient = createQueryClient();
   queryClient.setQueryData(jobKeys.detail(JOB_ID), jobRecord());
   function Host() {
-    // Reads the job from the cache as the walk-through does, so a save (or someone else's) shows at once.
+    // Reads the job from the cache as the walk-through does, with the waiting edits laid over it.
     const job = useSuspenseQuery(jobQueryOptions(JOB_ID)).data;
-    return <JobDetailsPanel job={job} />;
+    return <JobDetailsPanel job={overlayJob(job, useQueueState().items).job} />;
   }
   const view = await renderWalkthrough(
     <ViewerContext.Provider value={viewer}>
       <Host />
     </ViewerContext.Provider>,
-    { queryClient },
+    { queryClient, send: 'real', ...device },
   );
   fireEvent.click(screen.getByText('Job details'));
   return { ...view, queryClient };
@@ -146,6 +153,46 @@ describe('job details on the walk-through', () => {
     await waitFor(() =>
       expect(s.sent.filter((x) => x.method === 'GET' && x.url === '/api/customers/c1')).toHaveLength(2),
     );
+  });
+
+  it('typed with no signal: kept on the device, still there after a reload, sent when the connection is back', async () => {
+    const s = server();
+    const first = await renderPanel(salesperson, { online: () => false });
+    fireEvent.change(await screen.findByLabelText('Customer phone'), { target: { value: '555-0177' } });
+    fireEvent.change(screen.getByLabelText('Street address'), { target: { value: '7 Basement Way' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save details' }));
+    await screen.findByText('Details kept on this device; they are sent when the connection is back.');
+    expect(s.writes()).toEqual([]);
+    const kept = first.storage.saved();
+    expect(kept.map((i) => i.payload.kind)).toEqual(['customer-update', 'job-update']);
+    first.unmount();
+
+    // The page is reloaded (same stored queue), and the connection is back.
+    await renderPanel(salesperson, { stored: kept });
+    await waitFor(() =>
+      expect(s.writes().map((w) => [w.method, w.url, w.body, w.ifMatch])).toEqual([
+        ['PATCH', '/api/customers/c1', { phone: '555-0177' }, '"1"'],
+        ['PATCH', `/api/jobs/${JOB_ID}`, { street: '7 Basement Way' }, '"2"'],
+      ]),
+    );
+    expect(await screen.findByLabelText('Street address')).toHaveValue('7 Basement Way');
+    expect(screen.getByLabelText('Customer phone')).toHaveValue('555-0177');
+  });
+
+  it('shows what waits on the device after a reload with no signal', async () => {
+    server();
+    const kept: QueueItem<WalkthroughEdit>[] = [
+      {
+        id: 'q1',
+        seq: 1,
+        target: `job:${JOB_ID}`,
+        baseVersion: 2,
+        payload: { kind: 'job-update', jobId: JOB_ID, changes: { notes: 'Dog in the yard' } },
+        queuedAt: '2026-01-01T00:00:00.000Z',
+      },
+    ];
+    await renderPanel(salesperson, { online: () => false, stored: kept });
+    expect(await screen.findByLabelText('Job notes')).toHaveValue('Dog in the yard');
   });
 
   it('says what is wrong next to the field and sends nothing', async () => {

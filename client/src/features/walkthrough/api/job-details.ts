@@ -2,6 +2,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { jobKeys, jobPath } from '../../../lib/job-queries';
 import { customerResponse, jobResponse, staffResponse, type JobStatus } from '@contract';
+import type { CustomerChanges } from '../sync/edits';
 
 /** What the job details form changes on the job itself (the site, notes, who it belongs to, status). */
 export interface JobDetailsChanges {
@@ -21,30 +22,33 @@ export async function saveJobDetails(jobId: string, version: number, changes: Jo
   return (await apiFetch(jobPath(jobId), { method: 'PATCH', version, body: changes, schema: jobResponse })).job;
 }
 
-export interface CustomerChanges {
-  readonly name?: string;
-  readonly email?: string | null;
-  readonly phone?: string | null;
-}
-
 /** PATCH /api/customers/:id, If-Match: the version the person edited. */
-export async function saveCustomer(customerId: string, version: number, changes: CustomerChanges) {
+export async function saveCustomer(
+  customerId: string,
+  version: number | null,
+  changes: CustomerChanges,
+  person?: string,
+) {
   return (
     await apiFetch(`/api/customers/${encodeURIComponent(customerId)}`, {
       method: 'PATCH',
       version,
       body: changes,
+      person,
       schema: customerResponse,
     })
   ).customer;
 }
 
+export async function getCustomer(customerId: string, signal?: AbortSignal) {
+  return (await apiFetch(`/api/customers/${encodeURIComponent(customerId)}`, { schema: customerResponse, signal }))
+    .customer;
+}
+
 export const customerQueryOptions = (customerId: string) =>
   queryOptions({
     queryKey: [...jobKeys.all, 'customer', customerId] as const,
-    queryFn: async ({ signal }) =>
-      (await apiFetch(`/api/customers/${encodeURIComponent(customerId)}`, { schema: customerResponse, signal }))
-        .customer,
+    queryFn: ({ signal }) => getCustomer(customerId, signal),
   });
 
 export function useCustomer(customerId: string, enabled: boolean) {

@@ -8,7 +8,8 @@ import type { JobRecord, RoomRecord } from '@contract';
 import { getRoom } from '../api/get-room';
 import { diffFields, mergeChoices, type Choice } from '../../../lib/offline/conflict';
 import { describe, JOB_FIELD_LABELS, ROOM_FIELD_LABELS } from '../model/conflict';
-import type { WalkthroughItem } from '../sync/edits';
+import { DETAIL_FIELDS, type WalkthroughItem } from '../sync/edits';
+import { customerQueryOptions, getCustomer } from '../api/job-details';
 import { useWalkthroughQueue } from '../sync/queue-context';
 import { ConflictChoices } from '../../../lib/offline/conflict-choices';
 
@@ -19,6 +20,8 @@ import { ConflictChoices } from '../../../lib/offline/conflict-choices';
 export function ConflictPanel({ item, onResolved }: { item: WalkthroughItem; onResolved: () => void }) {
   const edit = item.payload;
   if (edit.kind === 'job-update') return <JobConflict item={item} jobId={edit.jobId} onResolved={onResolved} />;
+  if (edit.kind === 'customer-update')
+    return <CustomerConflict item={item} customerId={edit.customerId} onResolved={onResolved} />;
   if (edit.kind === 'room-create') return null;
   return <RoomConflict item={item} jobId={edit.jobId} roomId={edit.roomId} onResolved={onResolved} />;
 }
@@ -136,22 +139,35 @@ function JobConflict({ item, jobId, onResolved }: { item: WalkthroughItem; jobId
   const theirs: JobRecord = current.data;
   const mine = edit.changes.designConditions ?? {};
   const theirValues = theirs.designConditions ?? {};
-  const diffs = diffFields(mine, theirValues, JOB_FIELD_LABELS).filter((d) => d.mine !== undefined);
+  const mineDetails: Record<string, unknown> = {};
+  for (const k of DETAIL_FIELDS) if (edit.changes[k] !== undefined) mineDetails[k] = edit.changes[k];
+  const theirDetails: Record<string, unknown> = {
+    ...theirs.site,
+    notes: theirs.notes,
+    salespersonId: theirs.salesperson?.id ?? '',
+    assignedInstallerId: theirs.assignedInstaller?.id ?? null,
+  };
+  const diffs = [
+    ...diffFields(mine, theirValues, JOB_FIELD_LABELS),
+    ...diffFields(mineDetails, theirDetails, DETAIL_FIELD_LABELS),
+  ].filter((d) => d.mine !== undefined);
   const handleResolve = (choices: Record<string, Choice>) => {
     queryClient.setQueryData(jobKeys.detail(jobId), theirs);
     if (!Object.values(choices).some((c) => c === 'mine')) {
       void queue.resolveConflict(item.id, 'drop').then(onResolved);
       return;
     }
-    const entered: Record<string, number | string> = {};
-    for (const [k, v] of Object.entries(mergeChoices(mine, theirValues, choices))) {
-      if ((k in mine || choices[k] === 'mine') && (typeof v === 'number' || typeof v === 'string')) entered[k] = v;
+    const changes: Record<string, unknown> = { ...edit.changes };
+    for (const k of DETAIL_FIELDS) if (choices[k] === 'theirs') delete changes[k];
+    if (edit.changes.designConditions) {
+      const entered: Record<string, number | string> = {};
+      for (const [k, v] of Object.entries(mergeChoices(mine, theirValues, choices))) {
+        if ((k in mine || choices[k] === 'mine') && (typeof v === 'number' || typeof v === 'string')) entered[k] = v;
+      }
+      changes.designConditions = entered;
     }
     void queue
-      .resolveConflict(item.id, {
-        payload: { ...edit, changes: { ...edit.changes, designConditions: entered } },
-        baseVersion: theirs.version,
-      })
+      .resolveConflict(item.id, { payload: { ...edit, changes }, baseVersion: theirs.version })
       .then(onResolved);
   };
   return (
@@ -160,6 +176,73 @@ function JobConflict({ item, jobId, onResolved }: { item: WalkthroughItem; jobId
       title="The site’s design conditions were changed by someone else"
       diffs={diffs}
       describe={describe}
+      onResolve={handleResolve}
+    />
+  );
+}
+
+const DETAIL_FIELD_LABELS: Record<string, string> = {
+  street: 'Street address',
+  unit: 'Unit or apartment',
+  city: 'City or town',
+  region: 'State or region',
+  postalCode: 'Postal code',
+  notes: 'Job notes',
+  salespersonId: 'Salesperson',
+  assignedInstallerId: 'Installer',
+};
+
+const CUSTOMER_FIELD_LABELS: Record<string, string> = {
+  name: 'Customer name',
+  email: 'Customer e-mail',
+  phone: 'Customer phone',
+};
+
+function CustomerConflict({
+  item,
+  customerId,
+  onResolved,
+}: {
+  item: WalkthroughItem;
+  customerId: string;
+  onResolved: () => void;
+}) {
+  const queue = useWalkthroughQueue();
+  const queryClient = useQueryClient();
+  const options = customerQueryOptions(customerId);
+  const current = useQuery({
+    queryKey: [...options.queryKey, 'current', item.id],
+    queryFn: ({ signal }) => getCustomer(customerId, signal),
+    retry: false,
+  });
+  const edit = item.payload;
+  if (edit.kind !== 'customer-update') return null;
+  if (current.isPending) return <Spinner label="Reading the saved version…" />;
+  if (current.isError)
+    return (
+      <Alert tone="danger" title="Could not read the customer as saved now.">
+        {errorMessage(current.error)}
+      </Alert>
+    );
+  const theirs = current.data;
+  const mine: Record<string, unknown> = { ...edit.changes };
+  const diffs = diffFields(mine, theirs, CUSTOMER_FIELD_LABELS).filter((d) => d.mine !== undefined);
+  const handleResolve = (choices: Record<string, Choice>) => {
+    queryClient.setQueryData(options.queryKey, theirs);
+    const changes = Object.fromEntries(Object.entries(edit.changes).filter(([k]) => choices[k] === 'mine'));
+    if (Object.keys(changes).length === 0) {
+      void queue.resolveConflict(item.id, 'drop').then(onResolved);
+      return;
+    }
+    void queue
+      .resolveConflict(item.id, { payload: { ...edit, changes }, baseVersion: theirs.version })
+      .then(onResolved);
+  };
+  return (
+    <ConflictChoices
+      key={item.id}
+      title={`The contact details of ${theirs.name} were changed by someone else`}
+      diffs={diffs}
       onResolve={handleResolve}
     />
   );

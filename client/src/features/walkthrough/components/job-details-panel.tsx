@@ -25,13 +25,14 @@ import { jobStatusLabels, moveLabels } from '../../../lib/job-labels';
 import { useViewer, type Viewer } from '../../../lib/viewer';
 import {
   customerQueryOptions,
-  saveCustomer,
   saveJobDetails,
   useCustomer,
   useStaff,
   type JobDetailsChanges,
 } from '../api/job-details';
-import { useWalkthroughQueue } from '../sync/queue-context';
+import { customerTarget, DETAIL_FIELDS, jobTarget, type WalkthroughEdit } from '../sync/edits';
+import { overlayCustomer } from '../sync/overlay';
+import { useQueueState, useWalkthroughQueue } from '../sync/queue-context';
 import { DeleteJobButton } from './delete-job-button';
 
 const detailsSchema = z.object({
@@ -44,9 +45,6 @@ const detailsSchema = z.object({
 });
 type DetailsInput = z.input<typeof detailsSchema>;
 type DetailsValues = z.output<typeof detailsSchema>;
-
-/** Customer field errors come back as name/email/phone; the form calls them customerX. */
-const customerField: Record<string, string> = { name: 'customerName', email: 'customerEmail', phone: 'customerPhone' };
 
 function valuesOf(job: JobRecord, customer: CustomerRecord): DetailsInput {
   return {
@@ -95,6 +93,12 @@ function customerChanges(c: CustomerRecord, v: DetailsValues, dirty: ReadonlySet
   if (dirty.has('customerEmail') && (v.customerEmail || null) !== c.email) out.email = v.customerEmail || null;
   if (dirty.has('customerPhone') && (v.customerPhone || null) !== c.phone) out.phone = v.customerPhone || null;
   return out;
+}
+
+/** A job-details or customer edit (not a design-conditions one) of the walk-through queue. */
+function isDetailsEdit(e: WalkthroughEdit): boolean {
+  if (e.kind === 'customer-update') return true;
+  return e.kind === 'job-update' && DETAIL_FIELDS.some((k) => e.changes[k] !== undefined);
 }
 
 /**
@@ -187,57 +191,78 @@ const peopleOptions = (
   return list;
 };
 
+const CONFLICT_DETAIL =
+  'Someone else saved this job meanwhile. Their version is loaded now: check the fields and save again.';
+const CUSTOMER_CONFLICT_DETAIL =
+  'Someone else saved this customer meanwhile. Their version is loaded now: check the fields and save again.';
+
 function DetailsForm({ job, customer, office }: { job: JobRecord; customer: CustomerRecord; office: boolean }) {
   const queryClient = useQueryClient();
-  const write = useJobWriter(job);
+  const queue = useWalkthroughQueue();
   const staff = useStaff(office);
-  const [saved, setSaved] = useState(false);
+  const [saved, setSaved] = useState<'server' | 'device' | null>(null);
   return (
     <Form
       schema={detailsSchema}
       defaultValues={valuesOf(job, customer)}
       aria-label="Job details"
       onSubmit={async (values, form) => {
-        setSaved(false);
+        setSaved(null);
         // Only fields the person touched go out (see jobChanges).
         const dirty = new Set(
           Object.entries(form.formState.dirtyFields)
             .filter(([, on]) => on === true)
             .map(([k]) => k),
         );
+        // Through the walk-through's queue, like every other edit: stored on the device first, so
+        // details typed with no signal survive a reload and go out, in order, when it is back.
         const forCustomer = customerChanges(customer, values, dirty);
-        if (Object.keys(forCustomer).length > 0) {
-          const key = customerQueryOptions(customer.id).queryKey;
-          try {
-            const held = queryClient.getQueryData<CustomerRecord>(key) ?? customer;
-            const c = await saveCustomer(customer.id, held.version, forCustomer);
-            queryClient.setQueryData(key, c);
-          } catch (e) {
-            if (isApiError(e) && e.status === 409) {
-              // Show their version; what this person typed stays in the form to save again.
-              await queryClient.invalidateQueries({ queryKey: key, exact: true });
-              throw new ApiError({
-                ...e,
-                detail:
-                  'Someone else saved this customer meanwhile. Their version is loaded now: check the fields and save again.',
-                errors: [],
-              });
-            }
-            if (isApiError(e))
-              throw new ApiError({
-                ...e,
-                errors: e.errors.map((f) => ({ ...f, path: customerField[f.path] ?? f.path })),
-              });
-            throw e;
-          }
-        }
         const forJob = jobChanges(job, values, office, dirty);
-        if (Object.keys(forJob).length > 0) await write(forJob);
-        // The job's header and the jobs list show the customer's name.
-        if (forCustomer.name !== undefined)
-          void queryClient.invalidateQueries({ queryKey: jobKeys.detail(job.id), exact: true });
+        const customerKey = customerQueryOptions(customer.id).queryKey;
+        const targets = new Set<string>();
+        if (Object.keys(forCustomer).length > 0) {
+          const held = queryClient.getQueryData<CustomerRecord>(customerKey) ?? customer;
+          targets.add(customerTarget(customer.id));
+          await queue.enqueue({
+            target: customerTarget(customer.id),
+            baseVersion: held.version,
+            payload: { kind: 'customer-update', jobId: job.id, customerId: customer.id, changes: forCustomer },
+          });
+        }
+        if (Object.keys(forJob).length > 0) {
+          const held = queryClient.getQueryData<JobRecord>(jobKeys.detail(job.id)) ?? job;
+          targets.add(jobTarget(job.id));
+          await queue.enqueue({
+            target: jobTarget(job.id),
+            baseVersion: held.version,
+            payload: { kind: 'job-update', jobId: job.id, changes: forJob },
+          });
+        }
+        await queue.flush();
+        const state = queue.getSnapshot();
+        const conflict = state.conflict;
+        if (conflict && targets.has(conflict.target) && isDetailsEdit(conflict.payload)) {
+          // Show their version; what this person typed stays in the form to save again.
+          await queue.resolveConflict(conflict.id, 'drop');
+          const isCustomer = conflict.payload.kind === 'customer-update';
+          await queryClient.invalidateQueries({
+            queryKey: isCustomer ? customerKey : jobKeys.detail(job.id),
+            exact: true,
+          });
+          throw new ApiError({
+            status: 409,
+            code: 'conflict',
+            title: 'Conflict',
+            detail: isCustomer ? CUSTOMER_CONFLICT_DETAIL : CONFLICT_DETAIL,
+          });
+        }
+        if (state.rejected && !state.items.some((i) => targets.has(i.target))) {
+          const message = state.rejected;
+          queue.dismissRejected();
+          throw new ApiError({ status: 400, code: 'validation', title: 'Not saved', detail: message });
+        }
         form.reset(values);
-        setSaved(true);
+        setSaved(state.items.some((i) => targets.has(i.target)) ? 'device' : 'server');
       }}
     >
       <fieldset className="grid gap-4 sm:grid-cols-3">
@@ -283,9 +308,13 @@ function DetailsForm({ job, customer, office }: { job: JobRecord; customer: Cust
       ) : null}
       <div className="flex flex-wrap items-center gap-3">
         <SubmitButton>Save details</SubmitButton>
-        {saved ? (
+        {saved === 'server' ? (
           <p role="status" className="text-sm font-semibold text-ok">
             Details saved.
+          </p>
+        ) : saved === 'device' ? (
+          <p role="status" className="text-sm font-semibold text-amber-deep">
+            Details kept on this device; they are sent when the connection is back.
           </p>
         ) : null}
       </div>
@@ -317,6 +346,7 @@ export function JobDetailsPanel({ job }: { job: JobRecord }) {
   const viewer = useViewer();
   const canEdit = viewer !== null && mayEditJob(viewer.role);
   const customer = useCustomer(job.customer.id, canEdit);
+  const waiting = useQueueState().items;
   return (
     <details className="rounded-lg border border-line bg-white p-4">
       <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">
@@ -330,7 +360,11 @@ export function JobDetailsPanel({ job }: { job: JobRecord }) {
         {!canEdit ? (
           <ReadOnlyPeople job={job} />
         ) : customer.data ? (
-          <DetailsForm job={job} customer={customer.data} office={viewer !== null && isOfficeRole(viewer.role)} />
+          <DetailsForm
+            job={job}
+            customer={overlayCustomer(customer.data, waiting)}
+            office={viewer !== null && isOfficeRole(viewer.role)}
+          />
         ) : customer.isError ? (
           <Alert tone="danger" title="Could not load the customer’s details.">
             {errorMessage(customer.error)}

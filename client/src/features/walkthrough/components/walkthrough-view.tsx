@@ -104,7 +104,7 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
 
         <QueryWidgetBoundary name="the job details">
           <Suspense fallback={<div className="min-h-touch rounded-lg border border-line bg-white p-4" />}>
-            <JobDetailsPanel job={serverJob} />
+            <JobDetailsPanel job={job} />
           </Suspense>
         </QueryWidgetBoundary>
 

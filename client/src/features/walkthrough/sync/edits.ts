@@ -10,6 +10,34 @@ export interface JobChanges {
   readonly tightness?: string;
   /** Whole-house facts, sent whole (bedrooms, blower door, ventilation). */
   readonly house?: Record<string, unknown>;
+  /** Job details (the site, notes, who it is with): only the fields the person changed. */
+  readonly street?: string;
+  readonly unit?: string;
+  readonly city?: string;
+  readonly region?: string;
+  readonly postalCode?: string;
+  readonly notes?: string;
+  readonly salespersonId?: string;
+  readonly assignedInstallerId?: string | null;
+}
+
+/** The job-details fields of JobChanges (the rest are the walk-through's design edits). */
+export const DETAIL_FIELDS = [
+  'street',
+  'unit',
+  'city',
+  'region',
+  'postalCode',
+  'notes',
+  'salespersonId',
+  'assignedInstallerId',
+] as const;
+
+/** The customer's contact details as the job details form changes them. */
+export interface CustomerChanges {
+  readonly name?: string;
+  readonly email?: string | null;
+  readonly phone?: string | null;
 }
 
 /** One autosaved edit. Each carries the whole record as the person left it. */
@@ -23,12 +51,19 @@ export type WalkthroughEdit =
     }
   | { readonly kind: 'room-update'; readonly jobId: string; readonly roomId: string; readonly input: RoomInputValue }
   | { readonly kind: 'room-delete'; readonly jobId: string; readonly roomId: string }
-  | { readonly kind: 'job-update'; readonly jobId: string; readonly changes: JobChanges };
+  | { readonly kind: 'job-update'; readonly jobId: string; readonly changes: JobChanges }
+  | {
+      readonly kind: 'customer-update';
+      readonly jobId: string;
+      readonly customerId: string;
+      readonly changes: CustomerChanges;
+    };
 
 export type WalkthroughItem = QueueItem<WalkthroughEdit>;
 
 export const roomTarget = (roomId: string) => `room:${roomId}`;
 export const jobTarget = (jobId: string) => `job:${jobId}`;
+export const customerTarget = (customerId: string) => `customer:${customerId}`;
 
 /**
  * Folds a new edit into one still waiting for the same record, so a long offline stretch
@@ -44,10 +79,12 @@ export const coalesceEdits: Coalesce<WalkthroughEdit> = (waiting, next) => {
     return { ...waiting, payload: n };
   if (w.kind === 'job-update' && n.kind === 'job-update')
     return { ...waiting, payload: { ...w, changes: { ...w.changes, ...n.changes } } };
+  if (w.kind === 'customer-update' && n.kind === 'customer-update')
+    return { ...waiting, payload: { ...w, changes: { ...w.changes, ...n.changes } } };
   return null;
 };
 
-const EDIT_KINDS = ['room-create', 'room-update', 'room-delete', 'job-update'];
+const EDIT_KINDS = ['room-create', 'room-update', 'room-delete', 'job-update', 'customer-update'];
 
 /** Reading the queue back from IndexedDB: an edit this version of the app knows how to send. */
 export function isWalkthroughEdit(v: unknown): v is WalkthroughEdit {
@@ -55,6 +92,8 @@ export function isWalkthroughEdit(v: unknown): v is WalkthroughEdit {
   const r: Record<string, unknown> = { ...v };
   if (typeof r.kind !== 'string' || !EDIT_KINDS.includes(r.kind) || typeof r.jobId !== 'string') return false;
   if (r.kind === 'job-update') return typeof r.changes === 'object' && r.changes !== null;
+  if (r.kind === 'customer-update')
+    return typeof r.customerId === 'string' && typeof r.changes === 'object' && r.changes !== null;
   if (typeof r.roomId !== 'string') return false;
   if (r.kind === 'room-delete') return true;
   return (

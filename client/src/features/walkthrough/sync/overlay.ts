@@ -1,5 +1,6 @@
 import type { QueueItem } from '../../../lib/offline/queue';
 import {
+  type CustomerRecord,
   type JobRecord,
   type RoomRecord,
   DESIGN_FIELDS,
@@ -7,7 +8,7 @@ import {
   TIGHTNESS,
   type EnteredDesign,
 } from '@contract';
-import type { RoomInputValue, WalkthroughEdit } from './edits';
+import type { JobChanges, RoomInputValue, WalkthroughEdit } from './edits';
 
 /** A room as the screen shows it: the server's record with any waiting edit laid over it. */
 export interface RoomView {
@@ -94,8 +95,47 @@ export function overlayJob(
       tightness: isTightness(e.changes.tightness) ? e.changes.tightness : out.tightness,
       house: e.changes.house ?? out.house,
     };
+    out = withDetails(out, e.changes);
   }
   return { job: out, waiting };
+}
+
+/** Job details waiting in the queue, laid over the job (a person's name stays until the server answers). */
+function withDetails(job: JobRecord, c: JobChanges): JobRecord {
+  const site = { ...job.site };
+  for (const k of ['street', 'unit', 'city', 'region', 'postalCode'] as const) {
+    const v = c[k];
+    if (v !== undefined) site[k] = v;
+  }
+  const person = (id: string, held: { id: string; name: string } | null) => ({
+    id,
+    name: held?.id === id ? held.name : '',
+  });
+  return {
+    ...job,
+    site,
+    notes: c.notes ?? job.notes,
+    salesperson: c.salespersonId !== undefined ? person(c.salespersonId, job.salesperson) : job.salesperson,
+    assignedInstaller:
+      c.assignedInstallerId === undefined
+        ? job.assignedInstaller
+        : c.assignedInstallerId === null
+          ? null
+          : person(c.assignedInstallerId, job.assignedInstaller),
+  };
+}
+
+/** The customer with their waiting changes (job details typed with no signal, or not yet sent). */
+export function overlayCustomer(
+  customer: CustomerRecord,
+  queue: readonly QueueItem<WalkthroughEdit>[],
+): CustomerRecord {
+  let out = customer;
+  for (const { payload: e } of queue) {
+    if (e.kind !== 'customer-update' || e.customerId !== customer.id) continue;
+    out = { ...out, ...e.changes };
+  }
+  return out;
 }
 
 function isTightness(v: string | undefined): v is JobRecord['tightness'] {

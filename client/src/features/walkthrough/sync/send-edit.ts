@@ -6,6 +6,7 @@ import type { JobRecord, RoomRecord } from '@contract';
 import { createRoom } from '../api/create-room';
 import { deleteRoom } from '../api/delete-room';
 import { getRoom } from '../api/get-room';
+import { customerQueryOptions, saveCustomer } from '../api/job-details';
 import { updateJob } from '../api/update-job';
 import { updateRoom } from '../api/update-room';
 import type { WalkthroughItem } from './edits';
@@ -110,6 +111,14 @@ export function createEditSender(queryClient: QueryClient, person?: string) {
         await changeRooms(queryClient, edit.jobId, (rooms) => rooms.filter((r) => r.id !== edit.roomId));
         afterWrite(queryClient, edit.jobId);
         return { kind: 'ok', version: null };
+      }
+      if (edit.kind === 'customer-update') {
+        const customer = await saveCustomer(edit.customerId, item.baseVersion, edit.changes, person);
+        queryClient.setQueryData(customerQueryOptions(customer.id).queryKey, customer);
+        // The job's header and the jobs list show the customer's name.
+        void queryClient.invalidateQueries({ queryKey: jobKeys.detail(edit.jobId), exact: true });
+        void queryClient.invalidateQueries({ queryKey: jobKeys.lists() });
+        return { kind: 'ok', version: customer.version };
       }
       const job = await updateJob(edit.jobId, item.baseVersion, edit.changes, person);
       queryClient.setQueryData<JobRecord>(jobKeys.detail(job.id), job);

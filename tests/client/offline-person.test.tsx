@@ -189,9 +189,9 @@ describe('signing out with changes waiting', () => {
         <RouterProvider router={router} />
       </QueryClientProvider>,
     );
-    await screen.findByRole('heading', { name: 'Hello, Pat' });
+    await screen.findByRole('heading', { name: 'Hello, Pat' }, { timeout: 5000 });
     // The three stored edits are loaded and tried (no connection: they stay).
-    await waitFor(() => expect(net.writes().length).toBeGreaterThan(0));
+    await waitFor(() => expect(net.writes().length).toBeGreaterThan(0), { timeout: 5000 });
     fireEvent.click(screen.getByRole('button', { name: 'Sign out' }));
     expect(screen.getByText('3 changes have not reached the office — sign out anyway?')).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Stay signed in' })).toHaveFocus();
@@ -201,8 +201,8 @@ describe('signing out with changes waiting', () => {
 
     fireEvent.click(screen.getByRole('button', { name: 'Sign out' }));
     net.goOnline(); // the logout itself must get through; the edits stay
-    fireEvent.click(await screen.findByRole('button', { name: 'Sign out anyway' }));
-    await waitFor(() => expect(net.calls.some((c) => c.url === '/api/auth/logout')).toBe(true));
+    fireEvent.click(await screen.findByRole('button', { name: 'Sign out anyway' }, { timeout: 5000 }));
+    await waitFor(() => expect(net.calls.some((c) => c.url === '/api/auth/logout')).toBe(true), { timeout: 5000 });
     expect(await storedFor(D).load()).toHaveLength(3);
   });
 });

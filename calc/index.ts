@@ -12,6 +12,7 @@ export * from './src/construction-defaults';
 export * from './src/geometry';
 export * from './src/parse';
 export * from './src/metric';
+export * from './src/tape';
 export * from './src/solar/design-day';
 
 export * from './src/schemas/fields';

@@ -104,6 +104,23 @@ describe('changing your own password', () => {
     expect(mail.text).toContain('was changed from a signed-in session');
   });
 
+  it('voids a reset link asked for before the change', async () => {
+    const c = await makeCompany(t.orm.em.fork(), 'AccountsC');
+    const email = c.users.salesperson.email;
+    expect((await askReset(email, '198.51.100.7')).status).toBe(202);
+    const token = tokenIn((await mailTo(email, /new Gaugeline password/)).text);
+    const s = await login(t.app, email);
+    const changed = await s.agent
+      .post('/api/auth/password')
+      .set('X-CSRF-Token', s.csrf)
+      .send({ currentPassword: TEST_PASSWORD, newPassword: 'changed-before-the-link' });
+    expect(changed.status).toBe(200);
+    const late = await completeReset(token, 'would-undo-the-change');
+    expect(late.status).toBe(400);
+    expect(late.body.detail).toBe(RESET_LINK_INVALID);
+    await login(t.app, email, 'changed-before-the-link');
+  });
+
   it('is refused when signed out', async () => {
     const s = await anonymous();
     const r = await s.agent

@@ -36,7 +36,7 @@ function queuePasswordChanged(em: EntityManager, queue: Queue, user: User, when:
 
 /**
  * Changing one's own password: the current one is required (wrong tries count against the account's
- * sign-in limit), the user's other sessions end, this one stays, and they are told by e-mail.
+ * sign-in limit), the user's other sessions and open reset links end, this one stays, and they are told by e-mail.
  */
 export async function changePassword(
   em: EntityManager,
@@ -57,6 +57,8 @@ export async function changePassword(
   }
   user.passwordHash = await hashPassword(input.newPassword);
   await em.flush();
+  // A reset link asked for before the change must not undo it.
+  await em.nativeDelete(PasswordResetTokenSchema, { user: user.id });
   const endedSessions = await endSessionsOf(em, user.id, req.sessionID);
   await queuePasswordChanged(em, deps.queue, user, deps.clock.now(), 'from a signed-in session');
   req.log?.info({ event: 'password_changed', userId: user.id, endedSessions }, 'password changed');

@@ -16,7 +16,8 @@ export type TapeResult =
 /** The imperial formatter rounds to the nearest 1/16 in (the finest mark on a common tape). */
 export const TAPE_SIXTEENTHS_PER_FT = 192;
 
-const NUM = String.raw`(?:\d+(?:\.\d+)?|\.\d+)`;
+// A trailing point is allowed: "8." is on the way to 8.5.
+const NUM = String.raw`(?:\d+(?:\.\d*)?|\.\d+)`;
 const FEET_UNIT = String.raw`(?:'|ft|feet|foot)`;
 const INCH_UNIT = String.raw`(?:"|in|inch|inches)`;
 // Inches: a number, optionally followed by a fraction ("6 1/2"), or a fraction alone ("1/2").

@@ -25,6 +25,7 @@ describe('tape-measure entry: feet and inches as people write them', () => {
     expect(feetOf(parseTape(`12'`))).toBe(12);
     expect(feetOf(parseTape('12.5'))).toBe(12.5);
     expect(feetOf(parseTape('  8 ')), 'surrounding spaces').toBe(8);
+    expect(feetOf(parseTape('8.')), 'half-typed 8.5').toBe(8);
   });
   it('reads fractions of an inch and the curly quotes phones type', () => {
     expect(feetOf(parseTape(`12' 6 1/2"`))).toBeCloseTo(12 + 6.5 / 12, 12);

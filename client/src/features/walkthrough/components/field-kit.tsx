@@ -1,3 +1,5 @@
+import { formatTape, formatTapeCm, parseTape } from '@calc';
+import type { UnitSystem } from '@contract';
 import { useEffect, useId, useState, type ReactNode } from 'react';
 import { fromDisplay, localiseBound, toDisplay, unitLabel, type Quantity } from '../../../lib/unit-display';
 import { useUnitSystem } from './unit-system';
@@ -66,6 +68,32 @@ interface NumberProps {
 const format = (v: number | undefined) => (v === undefined || Number.isNaN(v) ? '' : String(v));
 
 /**
+ * What the text in a field means, in canonical units: undefined when empty, NaN (with the
+ * reason) when it cannot be read. Lengths in feet go through calc's tape-measure parser
+ * (`12'6"`, `12 ft 6 in`, `380 cm`); other quantities are plain numbers.
+ */
+function readField(
+  raw: string,
+  quantity: Quantity,
+  system: UnitSystem,
+): { value: number | undefined; refusal?: string; understood?: string } {
+  const t = raw.trim();
+  if (t === '') return { value: undefined };
+  if (quantity === 'ft') {
+    const r = parseTape(t, system);
+    if (!r.ok) return { value: Number.NaN, refusal: r.message };
+    const understood =
+      system === 'metric' ? `= ${formatTape(r.feet, 'metric')} (${formatTapeCm(r.feet)})` : `= ${formatTape(r.feet)}`;
+    return { value: r.feet, understood };
+  }
+  const n = Number(t.replace(',', '.'));
+  return { value: Number.isNaN(n) ? Number.NaN : fromDisplay(quantity, system, n) };
+}
+
+const sameValue = (a: number | undefined, b: number | undefined) =>
+  a === b || (a !== undefined && b !== undefined && Number.isNaN(a) && Number.isNaN(b));
+
+/**
  * A number on the phone's decimal keypad, shown in the company's units. Empty → undefined,
  * text → NaN, so calc's schema says what is wrong. Keeps the typed text while it parses
  * to the same number ("8." stays "8.").
@@ -82,34 +110,44 @@ export function NumberInput({
 }: NumberProps) {
   const id = useId();
   const system = useUnitSystem();
-  const error = localiseBound(canonicalError, quantity, system);
   const shown = value === undefined || Number.isNaN(value) ? value : toDisplay(quantity, system, value);
   const [text, setText] = useState(format(shown));
+  const read = readField(text, quantity, system);
+  // A refusal from the tape parser ("Did you mean 12.5 ft?") says more than the schema's "enter a number".
+  const error = read.refusal ?? localiseBound(canonicalError, quantity, system);
   useEffect(() => {
-    const typed = text.trim() === '' ? undefined : Number(text.replace(',', '.'));
-    if (typed !== shown && !(typed !== undefined && shown !== undefined && Number.isNaN(typed) && Number.isNaN(shown)))
-      setText(format(shown));
+    const typed = readField(text, quantity, system).value;
+    const typedShown = typed === undefined || Number.isNaN(typed) ? typed : toDisplay(quantity, system, typed);
+    if (!sameValue(typedShown, shown)) setText(format(shown));
     // Only an outside change of the value (copy, conflict choice) rewrites the text.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [shown]);
   const handleChange = (raw: string) => {
     setText(raw);
-    const t = raw.trim();
-    if (t === '') return onChange(undefined);
-    const n = Number(t.replace(',', '.'));
-    onChange(Number.isNaN(n) ? Number.NaN : fromDisplay(quantity, system, n));
+    onChange(readField(raw, quantity, system).value);
   };
+  // Imperial lengths need the ' and " keys, so they get the full keyboard.
+  const tapeKeys = quantity === 'ft' && system === 'imperial';
+  const fieldHint =
+    read.understood !== undefined && !error ? (
+      <>
+        <span className="font-semibold text-ink-900">{read.understood}</span>
+        {hint ? <> · {hint}</> : null}
+      </>
+    ) : (
+      hint
+    );
   return (
-    <FieldShell id={id} label={label} error={error} hint={hint} unit={unitLabel(quantity, system, unit)}>
+    <FieldShell id={id} label={label} error={error} hint={fieldHint} unit={unitLabel(quantity, system, unit)}>
       <input
         id={id}
         type="text"
-        inputMode={integer ? 'numeric' : 'decimal'}
+        inputMode={tapeKeys ? 'text' : integer ? 'numeric' : 'decimal'}
         autoComplete="off"
         className={inputClass}
         value={text}
         onChange={(e) => handleChange(e.target.value)}
-        {...aria(id, error, hint !== undefined, unitLabel(quantity, system, unit) !== '')}
+        {...aria(id, error, fieldHint !== undefined, unitLabel(quantity, system, unit) !== '')}
       />
     </FieldShell>
   );

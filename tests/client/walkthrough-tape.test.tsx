@@ -1,0 +1,36 @@
+import { fireEvent, screen, waitFor } from '@testing-library/react';
+import { describe, expect, it } from 'vitest';
+import { RoomEditor } from '../../client/src/features/walkthrough/components/room-editor';
+import { designConditions, JOB_ID, renderWalkthrough, ROOM_ID, roomView } from './helpers/walkthrough-harness';
+
+const editor = () => (
+  <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />
+);
+
+describe('length fields take tape-measure entry', () => {
+  it(`stores 12'6" as 12.5 ft and shows what it understood`, async () => {
+    // 12 ft 6 in = 12 + 6/12 ft (feet-and-inches notation: common practice).
+    const { queue } = await renderWalkthrough(editor(), { online: () => false });
+    const length = screen.getByLabelText('Length');
+    fireEvent.change(length, { target: { value: `12'6"` } });
+    expect(screen.getByText('= 12 ft 6 in')).toBeInTheDocument();
+    expect(length).not.toHaveAttribute('aria-invalid');
+    expect(length).toHaveValue(`12'6"`);
+    await waitFor(() => expect(queue.getSnapshot().items).toHaveLength(1), { timeout: 2000 });
+    expect(queue.getSnapshot().items[0]?.payload).toMatchObject({
+      kind: 'room-update',
+      roomId: ROOM_ID,
+      input: { lengthFt: 12.5 },
+    });
+  });
+
+  it('asks about 12,5 on the field and sends nothing', async () => {
+    const { queue } = await renderWalkthrough(editor(), { online: () => false });
+    const length = screen.getByLabelText('Length');
+    fireEvent.change(length, { target: { value: '12,5' } });
+    expect(await screen.findByText(/Did you mean 12\.5 ft\?/)).toBeInTheDocument();
+    expect(length).toHaveAttribute('aria-invalid', 'true');
+    await new Promise((r) => setTimeout(r, 800));
+    expect(queue.getSnapshot().items).toHaveLength(0);
+  });
+});

@@ -103,6 +103,8 @@ export interface RouteContext<P, Q, B, A> {
   link: LinkGrant | null;
   /** The body as received, on `raw` (webhook) routes. */
   rawBody: Buffer;
+  /** What services take first (lib/service-context.ts): the EntityManager, the actor and the clock. */
+  service: { em: EntityManager; actor: A; clock: Services['clock'] };
 }
 
 type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
@@ -262,6 +264,7 @@ export function createApiRouter(prefix: string, getServices: () => Services, opt
           ifMatch,
           link: grant,
           rawBody,
+          service: { em: em as EntityManager, actor: req.actor ?? null, clock: services.clock },
         };
         const result: unknown = await spec.handler(ctx as never);
         if (spec.response === NO_CONTENT) {

@@ -14,8 +14,8 @@ export function customerRoutes(api: ApiRouter): void {
     policy: JOB_EDITORS,
     query: listCustomersQuery,
     response: customersResponse,
-    handler: async ({ em, actor, query }) => {
-      const { items, total } = await listCustomers(em, actor, query);
+    handler: async ({ service, query }) => {
+      const { items, total } = await listCustomers(service, query);
       return { items: items.map(presentCustomer), total, page: query.page, pageSize: query.pageSize };
     },
   });
@@ -26,7 +26,7 @@ export function customerRoutes(api: ApiRouter): void {
     params: customerIdParams,
     response: customerResponse,
     versioned: etag,
-    handler: async ({ em, actor, params }) => ({ customer: presentCustomer(await getCustomer(em, actor, params.id)) }),
+    handler: async ({ service, params }) => ({ customer: presentCustomer(await getCustomer(service, params.id)) }),
   });
   api.route({
     method: 'post',
@@ -36,7 +36,7 @@ export function customerRoutes(api: ApiRouter): void {
     status: 201,
     response: customerResponse,
     versioned: etag,
-    handler: async ({ em, actor, body }) => ({ customer: presentCustomer(await createCustomer(em, actor, body)) }),
+    handler: async ({ service, body }) => ({ customer: presentCustomer(await createCustomer(service, body)) }),
   });
   api.route({
     method: 'patch',
@@ -46,8 +46,8 @@ export function customerRoutes(api: ApiRouter): void {
     body: updateCustomerSchema,
     response: customerResponse,
     versioned: etag,
-    handler: async ({ em, actor, params, body, ifMatch }) => ({
-      customer: presentCustomer(await updateCustomer(em, actor, params.id, ifMatch, body)),
+    handler: async ({ service, params, body, ifMatch }) => ({
+      customer: presentCustomer(await updateCustomer(service, params.id, ifMatch, body)),
     }),
   });
   api.route({
@@ -57,8 +57,8 @@ export function customerRoutes(api: ApiRouter): void {
     params: customerIdParams,
     response: NO_CONTENT,
     versioned: true,
-    handler: async ({ em, actor, params, ifMatch }) => {
-      await deleteCustomer(em, actor, params.id, ifMatch);
+    handler: async ({ service, params, ifMatch }) => {
+      await deleteCustomer(service, params.id, ifMatch);
     },
   });
 }

@@ -1,6 +1,5 @@
-import type { EntityManager } from '@mikro-orm/postgresql';
 import { ConflictError, NotFoundError } from '../../lib/errors';
-import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { CompanySchema } from '../companies/company.entity';
 import { JobSchema } from '../jobs/job.entity';
 import { assertVersion } from '../../lib/version-lock';
@@ -14,8 +13,7 @@ import {
 } from './customer.schema';
 
 export async function listCustomers(
-  em: EntityManager,
-  actor: Actor,
+  { em, actor }: ServiceContext,
   q: ListCustomersQuery,
 ): Promise<{ items: Customer[]; total: number }> {
   const pat = q.search ? likePattern(q.search) : undefined;
@@ -33,13 +31,13 @@ export async function listCustomers(
   return { items, total };
 }
 
-export async function getCustomer(em: EntityManager, actor: Actor, id: string): Promise<Customer> {
+export async function getCustomer({ em, actor }: ServiceContext, id: string): Promise<Customer> {
   const c = await em.findOne(CustomerSchema, { id, company: actor.companyId });
   if (!c) throw new NotFoundError('The customer');
   return c;
 }
 
-export async function createCustomer(em: EntityManager, actor: Actor, input: CreateCustomerInput): Promise<Customer> {
+export async function createCustomer({ em, actor }: ServiceContext, input: CreateCustomerInput): Promise<Customer> {
   const c = em.create(CustomerSchema, {
     company: em.getReference(CompanySchema, actor.companyId),
     name: input.name,
@@ -52,25 +50,25 @@ export async function createCustomer(em: EntityManager, actor: Actor, input: Cre
 }
 
 export async function updateCustomer(
-  em: EntityManager,
-  actor: Actor,
+  ctx: ServiceContext,
   id: string,
   version: number,
   input: UpdateCustomerInput,
 ): Promise<Customer> {
-  const c = await getCustomer(em, actor, id);
+  const c = await getCustomer(ctx, id);
   assertVersion(version, c.version, 'The customer', () => presentCustomer(c));
   if (input.name !== undefined) c.name = input.name;
   if (input.email !== undefined) c.email = input.email;
   if (input.phone !== undefined) c.phone = input.phone;
   if (input.notes !== undefined) c.notes = input.notes;
-  await em.flush();
+  await ctx.em.flush();
   return c;
 }
 
 /** A customer with jobs stays: the jobs (and later proposals) need who they were for. */
-export async function deleteCustomer(em: EntityManager, actor: Actor, id: string, version: number): Promise<void> {
-  const c = await getCustomer(em, actor, id);
+export async function deleteCustomer(ctx: ServiceContext, id: string, version: number): Promise<void> {
+  const { em } = ctx;
+  const c = await getCustomer(ctx, id);
   assertVersion(version, c.version, 'The customer', () => presentCustomer(c));
   if (await em.count(JobSchema, { customer: c.id }))
     throw new ConflictError('This customer has jobs; it cannot be deleted.');

@@ -24,6 +24,16 @@ describe('length fields take tape-measure entry', () => {
     });
   });
 
+  it('echoes inches as feet and inches, and stays quiet for whole feet', async () => {
+    // 150 in = 12 ft 6 in (12 in per ft, definition).
+    await renderWalkthrough(editor(), { online: () => false });
+    const width = screen.getByLabelText('Width');
+    fireEvent.change(width, { target: { value: '150"' } });
+    expect(screen.getByText('= 12 ft 6 in')).toBeInTheDocument();
+    fireEvent.change(width, { target: { value: '12' } });
+    expect(screen.queryByText(/^= /)).not.toBeInTheDocument();
+  });
+
   it('asks about 12,5 on the field and sends nothing', async () => {
     const { queue } = await renderWalkthrough(editor(), { online: () => false });
     const length = screen.getByLabelText('Length');

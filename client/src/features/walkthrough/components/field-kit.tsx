@@ -82,9 +82,10 @@ function readField(
   if (quantity === 'ft') {
     const r = parseTape(t, system);
     if (!r.ok) return { value: Number.NaN, refusal: r.message };
-    const understood =
-      system === 'metric' ? `= ${formatTape(r.feet, 'metric')} (${formatTapeCm(r.feet)})` : `= ${formatTape(r.feet)}`;
-    return { value: r.feet, understood };
+    if (system === 'metric')
+      return { value: r.feet, understood: `= ${formatTape(r.feet, 'metric')} (${formatTapeCm(r.feet)})` };
+    // Whole feet typed as a number need no echo: the unit beside the field already says "ft".
+    return { value: r.feet, understood: /^\d+$/.test(t) ? undefined : `= ${formatTape(r.feet)}` };
   }
   const n = Number(t.replace(',', '.'));
   return { value: Number.isNaN(n) ? Number.NaN : fromDisplay(quantity, system, n) };

@@ -9,6 +9,8 @@ import { constants as zlibConstants } from 'node:zlib';
 import { logger } from './lib/logger';
 import { requestLog } from './lib/request-log';
 import { notFoundApi, problemHandler } from './lib/problem';
+import { PayloadTooLargeError } from './lib/errors';
+import { IMPORT_LIMITS } from '@calc';
 import { apiVersionGuard, csrfGuard, personGuard, sessionMiddleware } from './lib/session';
 import { loadActor } from './modules/auth/load-actor';
 import { mountHooks, mountModules, type ModuleMount } from './modules';
@@ -106,7 +108,16 @@ export function createApp(services: Services, extras: AppExtras = {}): Express {
   app.use('/api', apiVersionGuard);
   // A CSV import carries the whole file (up to IMPORT_LIMITS.maxBytes, checked with a message naming the limit).
   const importJson = express.json({ limit: IMPORT_JSON_LIMIT, strict: true });
-  app.use((req, res, next) => (IMPORT_PATH.test(req.path) ? importJson(req, res, next) : next()));
+  const importTooLarge = new PayloadTooLargeError(
+    `The file is larger than the ${IMPORT_LIMITS.maxBytes / 1_000_000} MB limit. Split it into smaller files.`,
+  );
+  app.use((req, res, next) =>
+    IMPORT_PATH.test(req.path)
+      ? importJson(req, res, (err?: unknown) =>
+          next(err && (err as { type?: string }).type === 'entity.too.large' ? importTooLarge : err),
+        )
+      : next(),
+  );
   // JSON answers above ~1 KB go compressed (gzip or brotli as the request accepts; Vary: Accept-Encoding).
   // Fast settings (gzip 3, brotli 2): on JSON they compress nearly as well as the defaults for a fraction of the CPU.
   app.use(

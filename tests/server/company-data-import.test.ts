@@ -181,6 +181,10 @@ describe('CSV export and import', () => {
       path: 'csv',
       message: 'The file is larger than the 2 MB limit. Split it into smaller files.',
     });
+    // Past what the import route's body parser takes at all: still the file's limit, named.
+    const past = await preview(owner, 'financing', 'x'.repeat(3_500_000));
+    expectProblem(past, 413);
+    expect(past.body.detail).toBe('The file is larger than the 2 MB limit. Split it into smaller files.');
     const forged = await apply(owner, 'financing', 'plan\r\n', 'A'.repeat(43));
     expectProblem(forged, 409);
   });

@@ -62,6 +62,31 @@ describe('room schema', () => {
     expect(issue?.path).toEqual(['exposedWalls', 0, 'windows', 1, 'areaFt2']);
     expect(issue?.message).toBe('The windows (90 ft²) are larger than the wall (80 ft²)');
   });
+  it('one window larger than its wall is named on the width and height typed, with both sizes', () => {
+    // 120 in × 72 in = 60 ft² (1 ft² = 144 in²); wall 6 ft × 8 ft default ceiling = 48 ft²
+    const r = roomInputSchema.safeParse({
+      id: 'r1',
+      name: 'Den',
+      lengthFt: 12,
+      widthFt: 10,
+      exposedWalls: [{ direction: 'S', lengthFt: 6, windows: [{ widthIn: 120, heightIn: 72 }] }],
+    });
+    const issues = (r.error?.issues ?? []).map((i) => [i.path.join('.'), i.message]);
+    expect(issues).toEqual([
+      ['exposedWalls.0.windows.0.widthIn', 'The window (60 ft²) is larger than its wall (48 ft²)'],
+      ['exposedWalls.0.windows.0.heightIn', 'The window (60 ft²) is larger than its wall (48 ft²)'],
+    ]);
+  });
+  it('a refused wall length is the only message: the windows are not compared with a 0 ft wall', () => {
+    const r = roomInputSchema.safeParse({
+      id: 'r1',
+      name: 'Den',
+      lengthFt: 12,
+      widthFt: 10,
+      exposedWalls: [{ direction: 'S', lengthFt: 0, windows: [{ widthIn: 36, heightIn: 48 }] }],
+    });
+    expect((r.error?.issues ?? []).map((i) => i.path.join('.'))).toEqual(['exposedWalls.0.lengthFt']);
+  });
   it('home rooms need unique ids', () => {
     const r = homeInputSchema.safeParse({ designConditions: conditions, rooms: [livingRoom, livingRoom] });
     expect(messages(r)).toContain('Each room needs its own id');

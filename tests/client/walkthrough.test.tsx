@@ -67,15 +67,39 @@ describe('save status pill', () => {
 });
 
 describe('room form', () => {
-  it('shows calc’s message beside the window when the windows are larger than the wall', async () => {
+  it('shows calc’s message on the window area typed when the window is larger than its wall', async () => {
     await renderWalkthrough(
       <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
     );
     const area = screen.getByLabelText('Window area');
     fireEvent.change(area, { target: { value: '100' } });
-    expect(await screen.findByText('The windows (100 ft²) are larger than the wall (80 ft²)')).toBeInTheDocument();
+    expect(await screen.findByText('The window (100 ft²) is larger than its wall (80 ft²)')).toBeInTheDocument();
     expect(area).toHaveAttribute('aria-invalid', 'true');
     expect(screen.getByText('Fix the fields marked in red to update the loads.')).toBeInTheDocument();
+  });
+
+  it('puts a window larger than its wall on the width and height that were typed, naming both sizes', async () => {
+    await renderWalkthrough(
+      <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
+    );
+    // 120 in × 120 in = 100 ft²; the wall is 10 ft × 8 ft = 80 ft²
+    fireEvent.change(screen.getByLabelText('Window width'), { target: { value: '120' } });
+    fireEvent.change(screen.getByLabelText('Window height'), { target: { value: '120' } });
+    const message = 'The window (100 ft²) is larger than its wall (80 ft²)';
+    expect(await screen.findAllByText(message)).toHaveLength(2);
+    expect(screen.getByLabelText('Window width')).toHaveAttribute('aria-invalid', 'true');
+    expect(screen.getByLabelText('Window height')).toHaveAttribute('aria-invalid', 'true');
+    expect(screen.getByLabelText('Window area')).not.toHaveAttribute('aria-invalid', 'true');
+  });
+
+  it('a 0 ft wall marks the wall length only, not the empty window area', async () => {
+    await renderWalkthrough(
+      <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
+    );
+    fireEvent.change(screen.getByLabelText('Wall length'), { target: { value: '0' } });
+    expect(await screen.findByText('Wall length must be between 1 and 200 ft')).toBeInTheDocument();
+    expect(screen.getByLabelText('Window area')).not.toHaveAttribute('aria-invalid', 'true');
+    expect(screen.queryByText(/larger than/)).not.toBeInTheDocument();
   });
 
   it('shows bounds from calc’s schema and never saves an invalid room', async () => {
@@ -133,7 +157,7 @@ describe('a draft the schema refuses', () => {
       <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
     );
     fireEvent.change(screen.getByLabelText('Window area'), { target: { value: '100' } });
-    expect(await screen.findByText('The windows (100 ft²) are larger than the wall (80 ft²)')).toBeInTheDocument();
+    expect(await screen.findByText('The window (100 ft²) is larger than its wall (80 ft²)')).toBeInTheDocument();
     first.unmount();
     // "reload": a fresh editor for the same room at the same version
     const sent: unknown[] = [];

@@ -72,8 +72,8 @@ describe('rooms: bad input', () => {
       [{ input: { name: 'Hall' } }, 'input.lengthFt', 'Enter the length and width, or the floor area'],
       [
         { input: { ...sampleRoom(), exposedWalls: [wall] } },
-        'input.exposedWalls.0.windows.0.areaFt2',
-        'The windows (400 ft²) are larger than the wall (80 ft²)',
+        'input.exposedWalls.0.windows.0.heightIn',
+        'The 2 windows (400 ft²) are larger than their wall (80 ft²)',
       ],
       [
         { input: { ...sampleRoom(), exposedWalls: [{ ...wall, direction: 'UP', windows: [] }] } },

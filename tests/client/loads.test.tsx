@@ -1,14 +1,15 @@
 import { homeLoad } from '@calc';
 import { QueryClientProvider } from '@tanstack/react-query';
-import { render, screen, within } from '@testing-library/react';
+import { cleanup, render, screen, within } from '@testing-library/react';
 import { Suspense } from 'react';
 import { MemoryRouter, Route, Routes } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { LoadPrintPage } from '../../client/src/features/loads/components/load-print-page';
 import { LoadsPage } from '../../client/src/features/loads/components/loads-page';
 import { compareLoads } from '../../client/src/features/loads/model/compare';
+import { CompanyContext } from '../../client/src/lib/company';
 import { createQueryClient } from '../../client/src/lib/query-client';
-import { json, mockFetch, problem } from './helpers/fetch-mock';
+import { json, mockFetch } from './helpers/fetch-mock';
 import { bedroomInput, designConditions, JOB_ID, jobRecord, roomRecord } from './helpers/walkthrough-harness';
 
 afterEach(() => vi.unstubAllGlobals());
@@ -26,24 +27,37 @@ const serverBody = (load = homeLoad({ home })) => ({
 function renderAt(path: string, element: React.ReactNode) {
   render(
     <QueryClientProvider client={createQueryClient()}>
-      <MemoryRouter initialEntries={[path]}>
-        <Suspense fallback="loading">
-          <Routes>
-            <Route path="/jobs/:jobId/loads" element={element} />
-            <Route path="/jobs/:jobId/loads/print" element={element} />
-          </Routes>
-        </Suspense>
-      </MemoryRouter>
+      <CompanyContext.Provider value={{ id: 'c1', name: 'Bright Valley Comfort Co' }}>
+        <MemoryRouter initialEntries={[path]}>
+          <Suspense fallback="loading">
+            <Routes>
+              <Route path="/jobs/:jobId/loads" element={element} />
+              <Route path="/jobs/:jobId/loads/print" element={element} />
+            </Routes>
+          </Suspense>
+        </MemoryRouter>
+      </CompanyContext.Provider>
     </QueryClientProvider>,
   );
 }
 
-function mockJob(loads: ReturnType<typeof json>) {
+function mockJob(job = jobRecord(), roomVersion = 3) {
   mockFetch({
-    [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord() }),
-    [`GET /api/jobs/${JOB_ID}/rooms`]: json(200, { rooms: [roomRecord(bedroomInput, 3)] }),
-    [`GET /api/jobs/${JOB_ID}/loads`]: loads,
+    [`GET /api/jobs/${JOB_ID}`]: json(200, { job }),
+    [`GET /api/jobs/${JOB_ID}/rooms`]: json(200, { rooms: [roomRecord(bedroomInput, roomVersion)] }),
   });
+}
+
+/** The print view as a customer gets it, with tagged calc text and an internal note in the job. */
+const taggedJob = () =>
+  jobRecord({
+    designConditions: { ...designConditions, source: 'County design table 2026 [MEM: office copy]' },
+    designSources: { indoorCoolingF: { source: 'entered', note: 'Customer is fussy about drafts' } },
+  });
+
+async function printedSheet() {
+  await screen.findByRole('button', { name: 'Print' });
+  return document.querySelector('article.load-sheet') as HTMLElement;
 }
 
 describe('loads page', () => {
@@ -56,8 +70,8 @@ describe('loads page', () => {
     ]);
   });
 
-  it('shows totals, the estimate badge and a "checked against server" note', async () => {
-    mockJob(json(200, serverBody()));
+  it('shows totals, the estimate badge and the method, with no developer check line', async () => {
+    mockJob();
     renderAt(`/jobs/${JOB_ID}/loads`, <LoadsPage />);
     // The room cards' chart loads lazily (its own chunk): the first import in a busy test run takes a while.
     const totals = await screen.findByRole('region', { name: 'Whole-home loads' }, { timeout: 5000 });
@@ -65,32 +79,53 @@ describe('loads page', () => {
     expect(totals).toHaveTextContent(`${expected.coolingBtuh.toLocaleString('en-US')} Btu/h`);
     expect(totals).toHaveTextContent(expected.sensibleHeatRatio.toFixed(2));
     expect(within(totals).getByText('Estimate')).toBeInTheDocument();
-    expect(await screen.findByText(/Checked against server/)).toBeInTheDocument();
     expect(screen.getByRole('article', { name: 'Loads for Bedroom 2' })).toBeInTheDocument();
     expect(screen.getByText('How these numbers are worked out')).toBeInTheDocument();
+    expect(document.body.textContent).not.toMatch(/Checked against server|Checking against the server/);
   });
 
-  it('says so when the server’s numbers differ', async () => {
-    const load = homeLoad({ home });
-    mockJob(json(200, serverBody({ ...load, totals: { ...load.totals, sensibleBtuh: 1 } })));
-    renderAt(`/jobs/${JOB_ID}/loads`, <LoadsPage />);
-    expect(await screen.findByText(/The server’s numbers differ/)).toBeInTheDocument();
-    expect(screen.getByText(/Whole-home sensible gain: browser/)).toBeInTheDocument();
-  });
-
-  it('says when the server cannot check', async () => {
-    mockJob(problem(422, 'unprocessable', 'Add at least one room before the loads can be worked out.'));
-    renderAt(`/jobs/${JOB_ID}/loads`, <LoadsPage />);
-    expect(await screen.findByText(/Not checked against the server/)).toBeInTheDocument();
-  });
-
-  it('prints one sheet with the inputs it used and the method', async () => {
-    mockJob(json(200, serverBody()));
+  it('prints one sheet with the company, the customer, the inputs it used and a plain method', async () => {
+    mockJob(taggedJob());
     renderAt(`/jobs/${JOB_ID}/loads/print`, <LoadPrintPage />);
-    expect(await screen.findByRole('button', { name: 'Print' })).toBeInTheDocument();
+    const sheet = await printedSheet();
+    expect(sheet).toHaveTextContent('Bright Valley Comfort Co');
+    expect(sheet).toHaveTextContent('Rowan Example');
+    expect(sheet).toHaveTextContent('12 Sample Lane');
     expect(screen.getByRole('region', { name: 'Inputs used' })).toHaveTextContent('Outdoor cooling dry bulb');
+    expect(screen.getByRole('region', { name: 'Inputs used' })).toHaveTextContent(
+      'Source of design values: County design table 2026.',
+    );
     expect(screen.getByRole('region', { name: 'Room results' })).toHaveTextContent('Bedroom 2');
-    expect(screen.getByText(/A load estimate is an estimate/)).toBeInTheDocument();
+    expect(screen.getByRole('region', { name: 'Room results' })).toHaveTextContent('Whole home (block)');
+    expect(sheet).toHaveTextContent(/A load estimate is an estimate\. Method: Each room’s heat gain/);
     expect(document.querySelector('style')?.textContent).toContain('@media print');
+  });
+
+  it('keeps source tags and internal notes off the printed sheet', async () => {
+    mockJob(taggedJob());
+    renderAt(`/jobs/${JOB_ID}/loads/print`, <LoadPrintPage />);
+    const text = (await printedSheet()).textContent ?? '';
+    for (const tag of ['[MEM', '[PUB', '[TRADE', '[OWN']) expect(text).not.toContain(tag);
+    expect(text).not.toContain('Customer is fussy about drafts');
+    expect(text).not.toMatch(/job version/i);
+    expect(text).not.toContain('Demo values');
+  });
+
+  it('gives a new revision when a room changes', async () => {
+    const revisionOf = async (roomVersion: number) => {
+      mockJob(jobRecord(), roomVersion);
+      renderAt(`/jobs/${JOB_ID}/loads/print`, <LoadPrintPage />);
+      const match = /Revision ([0-9A-F]{6})/.exec((await printedSheet()).textContent ?? '');
+      cleanup();
+      vi.unstubAllGlobals();
+      return match?.[1];
+    };
+    const before = await revisionOf(3);
+    const again = await revisionOf(3);
+    const after = await revisionOf(4);
+    expect(before).toMatch(/^[0-9A-F]{6}$/);
+    expect(again).toBe(before);
+    expect(after).toMatch(/^[0-9A-F]{6}$/);
+    expect(after).not.toBe(before);
   });
 });

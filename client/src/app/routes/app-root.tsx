@@ -13,6 +13,7 @@ import { NOTICE_NOT_ALLOWED, requireUser } from '../guards';
 import { usePhotoQueueState } from '../../features/walkthrough/sync/photo-queue-context';
 import { useQueueState } from '../../features/walkthrough/sync/queue-context';
 import { SignOutQuestion } from '../../lib/offline/sign-out-question';
+import { CompanyContext } from '../../lib/company';
 import { ViewerContext } from '../../lib/viewer';
 
 export const clientLoader =
@@ -46,6 +47,7 @@ export default function AppRoot() {
   const signOut = useSignOut();
   const outbox = useOutboxAvailable(user.role === 'owner');
   const viewer = useMemo(() => ({ id: user.id, role: user.role }), [user.id, user.role]);
+  const companyIdentity = useMemo(() => ({ id: company.id, name: company.name }), [company.id, company.name]);
   const features = useMemo<ReadonlySet<Feature>>(() => new Set(outbox ? ['outbox'] : []), [outbox]);
   // Using the queues here also starts them: what this person left waiting is sent once they are back.
   const waiting = useQueueState().items.length + usePhotoQueueState().waiting.length;
@@ -69,9 +71,11 @@ export default function AppRoot() {
       ) : null}
       <RoleNotice />
       <ViewerContext.Provider value={viewer}>
-        <Suspense fallback={<Spinner />}>
-          <Outlet />
-        </Suspense>
+        <CompanyContext.Provider value={companyIdentity}>
+          <Suspense fallback={<Spinner />}>
+            <Outlet />
+          </Suspense>
+        </CompanyContext.Provider>
       </ViewerContext.Provider>
     </AppShell>
   );

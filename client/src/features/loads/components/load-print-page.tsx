@@ -1,9 +1,11 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { Link, useParams } from 'react-router-dom';
 import { Button, buttonClass } from '../../../components/ui/button';
+import { useCompanyName } from '../../../lib/company';
 import { jobPaths } from '../../../lib/job-paths';
 import { jobQueryOptions, roomsQueryOptions } from '../../../lib/job-queries';
 import { computeHomeLoad } from '../model/compute';
+import { lastChanged, summaryRevision } from '../model/print-text';
 import { LoadSummarySheet } from './load-summary-sheet';
 import { loadsParams } from './loads-page';
 import { PrintStyles } from './print-styles';
@@ -14,7 +16,10 @@ export function LoadPrintPage() {
   const job = useSuspenseQuery(jobQueryOptions(jobId)).data;
   const rooms = useSuspenseQuery(roomsQueryOptions(jobId)).data;
   const result = computeHomeLoad(rooms, job.designConditions, job.tightness, job.house ?? {});
-  const printedOn = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium' }).format(new Date());
+  const companyName = useCompanyName();
+  const date = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium' });
+  const printedOn = date.format(new Date());
+  const asOf = date.format(new Date(lastChanged(job, rooms)));
   return (
     <div className="flex flex-col gap-4">
       <PrintStyles />
@@ -25,7 +30,14 @@ export function LoadPrintPage() {
         </Link>
       </div>
       {result.ok ? (
-        <LoadSummarySheet job={job} load={result.value.load} printedOn={printedOn} />
+        <LoadSummarySheet
+          job={job}
+          load={result.value.load}
+          companyName={companyName}
+          printedOn={printedOn}
+          asOf={asOf}
+          revision={summaryRevision(job, rooms)}
+        />
       ) : (
         <p>{result.message}</p>
       )}

@@ -1,7 +1,8 @@
-import { METHOD_NOTES, type HomeLoad } from '@calc';
+import type { HomeLoad } from '@calc';
 import type { JobRecord } from '@contract';
 import { designDayLine, hourLabel } from './home-totals';
 import { COMPONENT_KEYS, COMPONENT_LABELS, tons } from '../model/compute';
+import { withoutSourceTags } from '../model/print-text';
 
 const n = (v: number) => v.toLocaleString('en-US');
 const DESIGN_ROWS: [string, string, string][] = [
@@ -25,15 +26,38 @@ const sourceWords: Record<string, string> = {
   'standard-default': 'standard default',
 };
 
-/** The one-page load summary: inputs it used, per-room and whole-home results, the method. */
-export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; load: HomeLoad; printedOn: string }) {
+/** The plain-sentence method a homeowner reads; the office screens keep the full notes with their sources. */
+export const PLAIN_METHOD =
+  'Each room’s heat gain was worked out hour by hour through a hot design day, and its heat loss at the cold design temperature, following the ASHRAE Handbook—Fundamentals; the whole-home figure is the hour when all rooms together need the most cooling.';
+
+/**
+ * The customer's one-page load summary: who prepared it, for whom, the design conditions with the source as
+ * the company wrote it, room and whole-home figures, the method in a sentence. No source tags or internal notes.
+ */
+export function LoadSummarySheet({
+  job,
+  load,
+  companyName,
+  printedOn,
+  asOf,
+  revision,
+}: {
+  job: JobRecord;
+  load: HomeLoad;
+  companyName: string;
+  printedOn: string;
+  asOf: string;
+  revision: string;
+}) {
   const dc = job.designConditions ?? {};
   const t = load.totals;
+  const source = typeof dc.source === 'string' ? withoutSourceTags(dc.source) : '';
   return (
     <article className="load-sheet mx-auto flex max-w-[186mm] flex-col gap-3 bg-white p-4 text-sm text-ink-950">
       <header className="flex items-start justify-between border-b-2 border-ink-800 pb-2">
         <div>
-          <p className="text-xs font-semibold uppercase tracking-wide text-ink-600">Gaugeline · Load summary</p>
+          <p className="text-base font-semibold">{companyName}</p>
+          <p className="text-xs font-semibold uppercase tracking-wide text-ink-600">Heating and cooling load summary</p>
           <h1 className="text-xl font-semibold">{job.customer.name}</h1>
           <p>
             {[job.site.street, job.site.unit, job.site.city, job.site.region, job.site.postalCode]
@@ -43,9 +67,9 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
         </div>
         <div className="text-right">
           <p className="rounded border border-ink-800 px-2 font-semibold">ESTIMATE</p>
-          <p className="mt-1 text-xs">
-            Printed {printedOn} · job version {job.version}
-          </p>
+          <p className="mt-1 text-xs">Figures as of {asOf}</p>
+          <p className="text-xs">Printed {printedOn}</p>
+          <p className="text-xs">Revision {revision}</p>
         </div>
       </header>
 
@@ -57,17 +81,13 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
               <dt>{label}</dt>
               <dd className="text-right">
                 {String(dc[k])} {unit}
-                <span className="pl-2 text-muted">
-                  {sourceWords[job.designSources[k]?.source ?? ''] ?? ''}
-                  {job.designSources[k]?.note ? ` — ${job.designSources[k]?.note}` : ''}
-                </span>
+                <span className="pl-2 text-muted">{sourceWords[job.designSources[k]?.source ?? ''] ?? ''}</span>
               </dd>
             </div>
           ))}
         </dl>
         <p className="text-xs">
-          House tightness: {job.tightness}.{' '}
-          {typeof dc.source === 'string' && dc.source ? `Source of design values: ${dc.source}.` : ''}
+          House tightness: {job.tightness}. {source ? `Source of design values: ${source}.` : ''}
         </p>
       </section>
 
@@ -141,16 +161,10 @@ export function LoadSummarySheet({ job, load, printedOn }: { job: JobRecord; loa
       </section>
 
       <footer className="border-t border-line pt-2 text-[0.7rem] leading-snug">
-        <p className="font-semibold">
-          A load estimate is an estimate. Method: hour-by-hour design day after ASHRAE Handbook—Fundamentals; block peak
-          at {hourLabel(load.block.hour)} solar time. {designDayLine(load)}{' '}
-          {typeof dc.source === 'string' && dc.source ? `Design values from ${dc.source}.` : ''} Assumptions:
+        <p>
+          <span className="font-semibold">A load estimate is an estimate.</span> Method: {PLAIN_METHOD}{' '}
+          {withoutSourceTags(designDayLine(load))}
         </p>
-        <ul className="list-disc pl-4 sm:columns-2 sm:gap-6 print:columns-2 print:gap-6">
-          {METHOD_NOTES.map((m) => (
-            <li key={m}>{m}</li>
-          ))}
-        </ul>
       </footer>
     </article>
   );

@@ -11,11 +11,10 @@ import { computeHomeLoad } from '../model/compute';
 import { MethodNote } from './estimate-note';
 import { HomeTotals } from './home-totals';
 import { RoomLoadCard } from './room-load-card';
-import { ServerCheck } from './server-check';
 
 export const loadsParams = z.object({ jobId: z.uuid({ message: 'That is not a job address.' }) });
 
-/** /jobs/:jobId/loads — the saved rooms' loads worked out in the browser, checked against the server. */
+/** /jobs/:jobId/loads — the saved rooms' loads worked out in the browser (the same calc the server runs). */
 export function LoadsPage() {
   const { jobId } = loadsParams.parse(useParams());
   const job = useSuspenseQuery(jobQueryOptions(jobId)).data;
@@ -50,9 +49,6 @@ export function LoadsPage() {
       {result.ok ? (
         <>
           <HomeTotals load={result.value.load} skipped={result.value.skipped} chart />
-          <QueryWidgetBoundary name="the server check">
-            <ServerCheck jobId={jobId} jobVersion={job.version} browser={result.value.load} />
-          </QueryWidgetBoundary>
           {conditionWarnings.length > 0 ? (
             <ul className="list-disc rounded-md bg-amber-soft py-2 pl-8 text-sm text-amber-deep">
               {conditionWarnings.map((w) => (

@@ -5,6 +5,11 @@ import {
   JOB_STATUSES,
   mayDeleteJob,
   mayMoveJob,
+  moveNeedsProposal,
+  movesFor,
+  NEEDS_PROPOSAL_MESSAGE,
+  NO_PROPOSAL_YET,
+  roleMayMoveJob,
   nextStatuses,
   ROLES,
   TIGHTNESS,
@@ -50,11 +55,25 @@ describe('job status machine', () => {
       for (const role of ROLES) {
         const job = await jobIn(from, { id });
         const r = await patch(sessions[role], `/api/jobs/${job.id}`, job.version).send({ status: to });
-        const allowed = mayMoveJob(role, from, to);
+        const allowed = mayMoveJob(role, from, to, NO_PROPOSAL_YET);
         expect(r.status === 200, `${role}: ${from} → ${to} answered ${r.status}`).toBe(allowed);
         if (!allowed && role !== 'installer' && !nextStatuses(from).includes(to)) expect(r.status).toBe(422);
+        if (roleMayMoveJob(role, from, to) && moveNeedsProposal(to)) expect(r.status).toBe(422);
       }
     }
+  });
+});
+
+describe('a move that needs a proposal', () => {
+  it('is refused (422, nothing changed) while the job has no proposal, and the contract offers none', async () => {
+    expect(movesFor('salesperson', 'design', NO_PROPOSAL_YET)).not.toContain('proposed');
+    expect(movesFor('salesperson', 'design', { hasProposal: true })).toContain('proposed');
+    const job = await jobIn('design');
+    const r = await patch(sessions.salesperson, `/api/jobs/${job.id}`, job.version).send({ status: 'proposed' });
+    expect(r.status).toBe(422);
+    expect(r.body.detail).toBe(NEEDS_PROPOSAL_MESSAGE);
+    const row = await t.orm.em.fork().findOneOrFail(JobSchema, { id: job.id });
+    expect([row.status, row.version]).toEqual(['design', job.version]);
   });
 });
 

@@ -52,14 +52,36 @@ export function nextStatuses(from: JobStatus): JobStatus[] {
   return Object.keys(JOB_STATUS_MACHINE[from]) as JobStatus[];
 }
 
-export function mayMoveJob(role: Role, from: JobStatus, to: JobStatus): boolean {
+/** What a move may depend on beyond the role: whether the job has a proposal to stand on. */
+export interface JobFacts {
+  readonly hasProposal: boolean;
+}
+
+/** "Proposed" means a proposal went to the customer: a job reaches it only with a proposal. */
+export const MOVES_NEEDING_PROPOSAL: readonly JobStatus[] = ['proposed'];
+export const moveNeedsProposal = (to: JobStatus): boolean => MOVES_NEEDING_PROPOSAL.includes(to);
+export const NEEDS_PROPOSAL_MESSAGE = 'A job is marked proposed when its proposal is sent, and this job has none yet.';
+
+/**
+ * No job has a proposal until proposals are built (a later issue): both ends use this for every job,
+ * so neither offers nor accepts "proposed". The proposals issue replaces it with the job's own fact.
+ */
+export const NO_PROPOSAL_YET: JobFacts = { hasProposal: false };
+
+/** The machine's answer for the role alone, whatever the job holds. */
+export function roleMayMoveJob(role: Role, from: JobStatus, to: JobStatus): boolean {
   const who = JOB_STATUS_MACHINE[from][to];
   return who !== undefined && has(who, role);
 }
 
-/** The moves this role may make from `from`, in the machine's order. */
-export function movesFor(role: Role, from: JobStatus): JobStatus[] {
-  return nextStatuses(from).filter((to) => mayMoveJob(role, from, to));
+/** Whether this role may make this move on a job with these facts. */
+export function mayMoveJob(role: Role, from: JobStatus, to: JobStatus, job: JobFacts): boolean {
+  return roleMayMoveJob(role, from, to) && (!moveNeedsProposal(to) || job.hasProposal);
+}
+
+/** The moves this role may make from `from` on this job, in the machine's order. */
+export function movesFor(role: Role, from: JobStatus, job: JobFacts): JobStatus[] {
+  return nextStatuses(from).filter((to) => mayMoveJob(role, from, to, job));
 }
 
 /** Only a job made by mistake goes: from proposed on, the reports count it (won/lost), so it stays. */

@@ -5,6 +5,9 @@ import {
   mayAssignInstaller,
   mayChooseSalesperson,
   mayMoveJob,
+  NEEDS_PROPOSAL_MESSAGE,
+  NO_PROPOSAL_YET,
+  roleMayMoveJob,
   nextStatuses,
   notesOf,
   type JobStatus,
@@ -108,8 +111,12 @@ export async function updateJob(
         errors: [{ path: 'status', message: `Allowed next states: ${allowed.join(', ') || 'none'}.` }],
       });
     }
-    if (!mayMoveJob(actor.role, from, input.status))
+    if (!roleMayMoveJob(actor.role, from, input.status))
       throw new ForbiddenError(`Your role cannot move a job from ${from} to ${input.status}.`);
+    if (!mayMoveJob(actor.role, from, input.status, NO_PROPOSAL_YET))
+      throw new UnprocessableError(NEEDS_PROPOSAL_MESSAGE, {
+        errors: [{ path: 'status', message: NEEDS_PROPOSAL_MESSAGE }],
+      });
     job.status = input.status;
   }
   if (input.customerId !== undefined) job.customer = await customerOf(em, actor, input.customerId);

@@ -8,8 +8,9 @@ import { PageHeader } from '../../../components/ui/page-header';
 import { Spinner } from '../../../components/ui/spinner';
 import { errorMessage } from '../../../lib/api-error';
 import { jobPaths } from '../../../lib/job-paths';
-import { JOB_STATUSES } from '@contract';
+import { JOB_STATUSES, mayEditJob } from '@contract';
 import { jobStatusLabels } from '../../../lib/job-labels';
+import { useViewer } from '../../../lib/viewer';
 import { useJobs } from '../api/get-jobs';
 import { filtersFromSearch } from './jobs-filters';
 import { JobsTable } from './jobs-table';
@@ -21,6 +22,9 @@ export function JobsListPage() {
   const [params, setParams] = useSearchParams();
   const filters = filtersFromSearch(params);
   const [typed, setTyped] = useState(filters.search);
+  const viewer = useViewer();
+  // Installers read the jobs assigned to them; starting one is for the people who sell (the contract's rule).
+  const mayStart = viewer === null || mayEditJob(viewer.role);
 
   const update = (patch: Record<string, string>) => {
     const next = new URLSearchParams(params);
@@ -41,11 +45,17 @@ export function JobsListPage() {
     <div>
       <PageHeader
         title="Jobs"
-        lead="Every job you can see, the most recently active first."
+        lead={
+          mayStart
+            ? 'Every job you can see, the most recently active first.'
+            : 'The jobs assigned to you, the most recently active first.'
+        }
         actions={
-          <Link className={buttonClass('primary')} to={jobPaths.new}>
-            New job
-          </Link>
+          mayStart ? (
+            <Link className={buttonClass('primary')} to={jobPaths.new}>
+              New job
+            </Link>
+          ) : undefined
         }
       />
       <div role="search" className="mb-4 grid gap-3 sm:grid-cols-[2fr_1fr]">
@@ -82,7 +92,11 @@ export function JobsListPage() {
         </div>
       </div>
       <QueryWidgetBoundary name="the job list">
-        <JobsResults filters={filters} onPage={(page) => update({ page: page > 1 ? String(page) : '' })} />
+        <JobsResults
+          filters={filters}
+          mayStart={mayStart}
+          onPage={(page) => update({ page: page > 1 ? String(page) : '' })}
+        />
       </QueryWidgetBoundary>
     </div>
   );
@@ -90,9 +104,11 @@ export function JobsListPage() {
 
 function JobsResults({
   filters,
+  mayStart,
   onPage,
 }: {
   filters: ReturnType<typeof filtersFromSearch>;
+  mayStart: boolean;
   onPage: (page: number) => void;
 }) {
   const jobs = useJobs(filters);
@@ -109,7 +125,9 @@ function JobsResults({
       <EmptyState title={filters.search || filters.status ? 'No job matches' : 'No jobs yet'}>
         {filters.search || filters.status
           ? 'Try another search or status.'
-          : 'Start one with “New job” when a customer calls.'}
+          : mayStart
+            ? 'Start one with “New job” when a customer calls.'
+            : 'A job shows here once the office assigns it to you.'}
       </EmptyState>
     );
   }

@@ -8,6 +8,7 @@ import {
   mayDeleteJob,
   mayEditJob,
   movesFor,
+  NO_PROPOSAL_YET,
   siteRules,
   type JobStatus,
   type StaffMember,
@@ -139,7 +140,7 @@ function StatusMoves({ job, viewer }: { job: JobRecord; viewer: Viewer }) {
   const write = useJobWriter(job);
   const [busy, setBusy] = useState<JobStatus | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const moves = movesFor(viewer.role, job.status);
+  const moves = movesFor(viewer.role, job.status, NO_PROPOSAL_YET);
   if (moves.length === 0) return null;
   const move = async (to: JobStatus) => {
     setBusy(to);

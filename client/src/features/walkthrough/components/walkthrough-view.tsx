@@ -1,5 +1,6 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
 import { lazy, Suspense, useState } from 'react';
+import { mayEditJob } from '@contract';
 import { Link } from 'react-router-dom';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { Alert } from '../../../components/ui/alert';
@@ -7,6 +8,7 @@ import { Button, buttonClass } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Spinner } from '../../../components/ui/spinner';
 import { jobPaths } from '../../../lib/job-paths';
+import { useViewer } from '../../../lib/viewer';
 import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../../../lib/job-queries';
 import { LiveHomeTotals } from '../../loads/components/live-home-totals';
 import { roomTarget } from '../sync/edits';
@@ -17,6 +19,7 @@ import { ConflictPanel } from './conflict-panel';
 import { DesignConditionsForm } from './design-conditions-form';
 import { LiveSaveStatus } from './live-save-status';
 import { PhotoRefusals } from './photo-refusals';
+import { ReadOnlyJob } from './read-only-job';
 import { RoomEditor } from './room-editor';
 import { RoomListActions } from './room-list-actions';
 import { RoomTabs } from './room-tabs';
@@ -47,6 +50,7 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
   const { job } = overlayJob(serverJob, state.items, settings?.defaultDesignConditions ?? null);
   const [selected, setSelected] = useState<string | null>(null);
   const [revision, setRevision] = useState(0);
+  const viewer = useViewer();
   const current = rooms.find((r) => r.id === selected) ?? rooms[0] ?? null;
   const conflict = state.conflict && state.conflict.payload.jobId === job.id ? state.conflict : null;
   const address = [job.site.street, job.site.unit, job.site.city, job.site.region].filter(Boolean).join(', ');
@@ -66,6 +70,9 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
 
   // Waiting edits from an earlier visit must be laid over the server's values before anyone types.
   if (!state.loaded) return <Spinner label="Restoring changes kept on this device…" />;
+  // Someone the contract does not let edit the job (an installer) reads it: no inputs, no save pill.
+  if (viewer !== null && !mayEditJob(viewer.role))
+    return <ReadOnlyJob job={job} rooms={rooms} unitSystem={settings?.unitSystem ?? 'imperial'} />;
 
   return (
     <UnitSystemContext.Provider value={settings?.unitSystem ?? 'imperial'}>

@@ -68,3 +68,4 @@ export * from './src/catalog/csv-safety';
 export * from './src/catalog/datasets';
 export * from './src/catalog/records';
 export * from './src/catalog/diff-import';
+export * from './src/catalog/metric-columns';

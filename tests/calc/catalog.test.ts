@@ -5,6 +5,7 @@ import {
   chargeAdderOzPerFt,
   DATASET_IDS,
   DATASETS,
+  metricVariant,
   hiddenFields,
   marginFromMarkup,
   marginPercentOf,
@@ -212,5 +213,15 @@ describe('published column list', () => {
     const readme = readFileSync(new URL('../../README.md', import.meta.url), 'utf8');
     for (const id of DATASET_IDS)
       for (const c of DATASETS[id].columns) expect(readme, `${id}.${c.name}`).toContain(`| \`${c.name}\` |`);
+  });
+
+  it('README.md lists the metric variant of every unit-bearing column', async () => {
+    const { readFileSync } = await import('node:fs');
+    const readme = readFileSync(new URL('../../README.md', import.meta.url), 'utf8');
+    for (const id of DATASET_IDS)
+      for (const c of DATASETS[id].columns) {
+        const m = metricVariant(c);
+        if (m) expect(readme, `${id}.${m.name}`).toContain(`| \`${c.name}\` | \`${m.name}\` |`);
+      }
   });
 });

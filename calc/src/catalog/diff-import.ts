@@ -2,6 +2,7 @@ import type { Rec } from './csv-columns';
 import type { Dataset } from './datasets';
 import { recordFromCells, recordToCells, type CellError } from './records';
 import { restoreCell } from './csv-safety';
+import { metricVariant, type CsvUnitSystem } from './metric-columns';
 
 /** Limits every import is held to (the server refuses larger files, naming the limit). */
 export const IMPORT_LIMITS = { maxBytes: 2_000_000, maxRows: 5000 } as const;
@@ -58,17 +59,38 @@ export function diffImport({
   rows,
   current,
   checkRecord,
+  units = 'imperial',
 }: {
   readonly dataset: Dataset;
+  /** A metric company's file may name each unit-bearing column in metric instead (not both). */
+  readonly units?: CsvUnitSystem;
   readonly header: readonly string[];
   readonly rows: readonly ImportRowIn[];
   readonly current: ReadonlyMap<string, Rec>;
   readonly checkRecord?: (record: { key: string }) => readonly CellError[];
 }): ImportDiff {
-  const names = dataset.columns.map((c) => c.name);
   const cleanHeader = header.map((h, i) => (i === 0 ? h.replace(/^\uFEFF/, '') : h).trim().toLowerCase());
   const fileErrors: string[] = [];
-  const unknown = cleanHeader.filter((h) => !names.includes(h));
+  // Each unit-bearing column is read in the unit its header names; both variants at once is refused.
+  const mixed: string[] = [];
+  const columns = dataset.columns.map((c) => {
+    const metric = metricVariant(c);
+    if (!metric || !cleanHeader.includes(metric.name)) return c;
+    if (units !== 'metric') return c;
+    if (cleanHeader.includes(c.name)) mixed.push(`${c.name} and ${metric.name}`);
+    return metric;
+  });
+  const names = columns.map((c) => c.name);
+  const read = { ...dataset, columns };
+  if (mixed.length > 0)
+    fileErrors.push(
+      `The same value is given in both units: ${mixed.join('; ')}. Keep one column of each pair (metric or imperial).`,
+    );
+  const bothUnits = new Set(mixed.map((m) => m.split(' and ')[0]));
+  const unknown = cleanHeader.filter((h) => !names.includes(h) && !bothUnits.has(h));
+  const metricNames = dataset.columns.map((c) => metricVariant(c)?.name);
+  if (units !== 'metric' && unknown.some((h) => metricNames.includes(h)))
+    fileErrors.push('Metric columns are read only when the company uses metric units (set in the company settings).');
   const missing = names.filter((n) => !cleanHeader.includes(n));
   const repeated = cleanHeader.filter((h, i) => cleanHeader.indexOf(h) !== i);
   if (unknown.length > 0) fileErrors.push(`Unknown columns: ${unknown.join(', ')}.`);
@@ -98,23 +120,23 @@ export function diffImport({
     cleanHeader.forEach((h, i) => {
       cells[h] = restoreCell(row.cells[i] ?? '');
     });
-    const read = recordFromCells(dataset, cells);
-    const errors = read.ok ? [...(checkRecord?.(read.record) ?? [])] : [...read.errors];
+    const parsed = recordFromCells(read, cells);
+    const errors = parsed.ok ? [...(checkRecord?.(parsed.record) ?? [])] : [...parsed.errors];
     if (key !== null && seenKeys.has(key))
       errors.push({ column: keyColumn, message: `${key} is also on line ${seenKeys.get(key)}` });
     if (key !== null && !seenKeys.has(key)) seenKeys.set(key, row.line);
-    if (!read.ok || errors.length > 0) {
+    if (!parsed.ok || errors.length > 0) {
       outcomes.push({ line: row.line, key, status: 'refused', errors });
       continue;
     }
-    const record = read.record;
+    const record = parsed.record;
     const held = current.get(record.key);
     if (!held) {
       outcomes.push({ line: row.line, key: record.key, status: 'added', record });
       continue;
     }
-    const before = recordToCells(dataset, held);
-    const after = recordToCells(dataset, record);
+    const before = recordToCells(read, held);
+    const after = recordToCells(read, record);
     const changes: CellChange[] = [];
     names.forEach((n, i) => {
       if (before[i] !== after[i]) changes.push({ column: n, before: before[i] ?? '', after: after[i] ?? '' });

@@ -5,9 +5,11 @@ import { stringify } from 'csv-stringify/sync';
 import {
   DATASETS,
   IMPORT_LIMITS,
+  columnsForUnits,
   diffImport,
   neutraliseCell,
   recordToCells,
+  type CsvUnitSystem,
   type DatasetId,
   type ImportDiff,
   type ImportRowIn,
@@ -68,8 +70,15 @@ const EMPTY_DIFF = (fileError: string): ImportDiff => ({
   canApply: false,
 });
 
+/** The company's unit system: a metric company's files may use (and its exports use) metric columns. */
+export async function companyUnits(em: EntityManager, companyId: string): Promise<CsvUnitSystem> {
+  const company = await em.findOneOrFail(CompanySchema, companyId, { fields: ['unitSystem'] });
+  return company.unitSystem === 'metric' ? 'metric' : 'imperial';
+}
+
 async function diffAgainst(em: EntityManager, companyId: string, dataset: DatasetId, csv: string) {
   const held = await listRows(em, companyId, dataset);
+  const units = await companyUnits(em, companyId);
   const parsed = parseCsv(csv);
   if ('error' in parsed) return { held, diff: EMPTY_DIFF(parsed.error) };
   const keyIndex = parsed.header.findIndex(
@@ -86,6 +95,7 @@ async function diffAgainst(em: EntityManager, companyId: string, dataset: Datase
     header: parsed.header,
     rows: parsed.rows,
     current: new Map(held.map((r) => [r.key, r.data])),
+    units,
     checkRecord: (record) => check(record as Record<string, unknown> & { key: string }),
   });
   return { held, diff };
@@ -159,8 +169,8 @@ export async function applyImport(em: EntityManager, actor: Actor, dataset: Data
   });
 }
 
-function toCsv(dataset: DatasetId, records: ReadonlyArray<Record<string, unknown>>): string {
-  const ds = DATASETS[dataset];
+function toCsv(dataset: DatasetId, records: ReadonlyArray<Record<string, unknown>>, units: CsvUnitSystem): string {
+  const ds = { ...DATASETS[dataset], columns: columnsForUnits(DATASETS[dataset].columns, units) };
   const rows = records.map((r) => recordToCells(ds, r).map(neutraliseCell));
   // A BOM so spreadsheets read UTF-8 (°, …); import strips it.
   return `\uFEFF${stringify([ds.columns.map((c) => c.name), ...rows], { record_delimiter: '\r\n' })}`;
@@ -171,9 +181,10 @@ export async function exportCsv(em: EntityManager, companyId: string, dataset: D
   return toCsv(
     dataset,
     rows.map((r) => r.data),
+    await companyUnits(em, companyId),
   );
 }
 
-export function templateCsv(dataset: DatasetId): string {
-  return toCsv(dataset, [templateExample(dataset)]);
+export async function templateCsv(em: EntityManager, companyId: string, dataset: DatasetId): Promise<string> {
+  return toCsv(dataset, [templateExample(dataset)], await companyUnits(em, companyId));
 }

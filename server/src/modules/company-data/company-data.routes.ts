@@ -84,11 +84,11 @@ export function companyDataRoutes(api: ApiRouter): void {
     policy: OFFICE,
     params: datasetParams,
     response: rawResponse('text/csv'),
-    handler: async ({ params, res }) => {
+    handler: async ({ em, actor, params, res }) => {
       res
         .type('text/csv; charset=utf-8')
         .attachment(`${params.dataset}-template.csv`)
-        .send(templateCsv(params.dataset));
+        .send(await templateCsv(em, actor.companyId, params.dataset));
       return undefined;
     },
   });

@@ -93,7 +93,7 @@ export function LoadSummarySheet({
 
       <section aria-label="Room results">
         <h2 className="font-semibold">Rooms (Btu/h)</h2>
-        <table className="w-full text-xs">
+        <table className="w-full text-xs [&_td]:pl-1.5 [&_th]:pl-1.5">
           <thead>
             <tr className="border-b border-ink-800 text-left">
               <th>Room</th>
@@ -140,7 +140,7 @@ export function LoadSummarySheet({
 
       <section aria-label="Where the load comes from">
         <h2 className="font-semibold">Whole-home breakdown (Btu/h)</h2>
-        <table className="w-full text-xs">
+        <table className="w-full text-xs [&_td]:pl-1.5 [&_th]:pl-1.5">
           <thead>
             <tr className="border-b border-ink-800 text-left">
               <th>Part</th>

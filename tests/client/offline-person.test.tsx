@@ -175,7 +175,7 @@ describe('signing out with changes waiting', () => {
   it('asks first; "Stay signed in" keeps the session, "Sign out anyway" signs out and keeps the changes', async () => {
     await storedFor(D).save([edit(1, 'Den'), edit(2, 'Study'), { ...edit(3, 'Nook'), target: 'room:other' }]);
     const net = stubFetch((c) => {
-      if (c.url === '/api/auth/me') return json(200, { user, company });
+      if (c.url === '/api/auth/session') return json(200, { me: { user, company } });
       if (c.url === '/api/auth/csrf') return json(200, { token: 't' });
       if (c.url === '/api/auth/logout') return new Response(null, { status: 204 });
       return null;

@@ -35,7 +35,7 @@ afterEach(() => vi.unstubAllGlobals());
 
 describe('routing and guards', () => {
   it('sends a signed-out visitor to sign-in, remembering the page', async () => {
-    mockFetch({ 'GET /api/auth/me': problem(401, 'unauthenticated', 'Sign in to continue.') });
+    mockFetch({ 'GET /api/auth/session': json(200, { me: null }) });
     const router = renderAt('/users');
     expect(await screen.findByRole('button', { name: 'Sign in' })).toBeInTheDocument();
     expect(router.state.location.pathname).toBe('/sign-in');
@@ -43,7 +43,7 @@ describe('routing and guards', () => {
   });
 
   it('sends a role without access back home with a notice', async () => {
-    mockFetch({ 'GET /api/auth/me': json(200, { user: person('salesperson'), company }) });
+    mockFetch({ 'GET /api/auth/session': json(200, { me: { user: person('salesperson'), company } }) });
     const router = renderAt('/users');
     expect(await screen.findByText('That page is not part of your role')).toBeInTheDocument();
     expect(router.state.location.pathname).toBe('/');
@@ -52,7 +52,7 @@ describe('routing and guards', () => {
 
   it('shows the owner the shell, the user list and no Outbox when the server has none', async () => {
     mockFetch({
-      'GET /api/auth/me': json(200, { user: person('owner', 'Robin Owner'), company }),
+      'GET /api/auth/session': json(200, { me: { user: person('owner', 'Robin Owner'), company } }),
       'GET /api/users': json(200, { users: [person('owner', 'Robin Owner'), person('installer', 'Sam Fitter')] }),
       'GET /api/dev/outbox': problem(404, 'not-found', 'The outbox was not found.'),
     });
@@ -73,7 +73,7 @@ describe('routing and guards', () => {
     let signedIn = false;
     const me = { user: person('owner'), company };
     mockFetch({
-      'GET /api/auth/me': () => (signedIn ? json(200, me) : problem(401, 'unauthenticated', 'Sign in to continue.')),
+      'GET /api/auth/session': () => json(200, { me: signedIn ? me : null }),
       'GET /api/auth/csrf': json(200, { token: 't' }),
       'POST /api/auth/login': () => {
         signedIn = true;
@@ -94,7 +94,7 @@ describe('routing and guards', () => {
   });
 
   it('renders the not-found page inside the shell', async () => {
-    mockFetch({ 'GET /api/auth/me': json(200, { user: person('installer'), company }) });
+    mockFetch({ 'GET /api/auth/session': json(200, { me: { user: person('installer'), company } }) });
     renderAt('/no-such-page');
     expect(await screen.findByRole('heading', { name: 'Page not found' })).toBeInTheDocument();
     expect(screen.getByRole('navigation', { name: 'Main' })).toBeInTheDocument();
@@ -102,7 +102,7 @@ describe('routing and guards', () => {
 
   it('explains a switched-off outbox', async () => {
     mockFetch({
-      'GET /api/auth/me': json(200, { user: person('owner'), company }),
+      'GET /api/auth/session': json(200, { me: { user: person('owner'), company } }),
       'GET /api/dev/outbox': problem(404, 'not-found', 'The outbox was not found.'),
     });
     renderAt('/dev/outbox');

@@ -57,14 +57,16 @@ describe('sign-in form', () => {
     const fetch = mockFetch({
       'GET /api/auth/csrf': json(200, { token: 't' }),
       'POST /api/auth/login': json(200, { user }),
-      'GET /api/auth/me': json(200, { user, company: { id: 'c1', name: 'Test Company', unitSystem: 'imperial' } }),
+      'GET /api/auth/session': json(200, {
+        me: { user, company: { id: 'c1', name: 'Test Company', unitSystem: 'imperial' } },
+      }),
     });
     const onSignedIn = renderSignIn();
     await vi.waitFor(() => expect(onSignedIn).toHaveBeenCalled());
     expect(fetch.mock.calls.map(([url, init]) => `${init?.method} ${String(url)}`)).toEqual([
       'GET /api/auth/csrf',
       'POST /api/auth/login',
-      'GET /api/auth/me',
+      'GET /api/auth/session',
     ]);
   });
 });

@@ -130,6 +130,17 @@ describe('sessions', () => {
     expect(isProblem(r)).toBe(true);
   });
 
+  it('GET /api/auth/session answers 200 with me: null when signed out, and who is signed in otherwise', async () => {
+    const out = await request(t.app).get('/api/auth/session').set(HTTPS);
+    expect(out.status).toBe(200);
+    expect(out.body).toEqual({ me: null });
+    const s = await login(t.app, a.users.salesperson.email);
+    const signedIn = await s.agent.get('/api/auth/session').set(HTTPS);
+    expect(signedIn.status).toBe(200);
+    expect(signedIn.body.me.user.email).toBe(a.users.salesperson.email);
+    expect(signedIn.body.me).toEqual((await s.agent.get('/api/auth/me').set(HTTPS)).body);
+  });
+
   it('a cookie replayed after sign-out gets 401', async () => {
     const s = await login(t.app, a.users.salesperson.email);
     const sid = sidOf(s.cookie);

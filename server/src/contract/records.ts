@@ -166,6 +166,8 @@ export const pageOf = <T extends z.ZodType>(item: T) =>
 export const csrfResponse = z.object({ token: z.string().min(1) });
 export const meResponse = z.object({ user: userRecord, company: companyRecord });
 export type MeResponse = z.output<typeof meResponse>;
+/** GET /api/auth/session: who is signed in, or null; signed out is an answer, not an error (no 401 in the console). */
+export const sessionResponse = z.object({ me: meResponse.nullable() });
 export const userResponse = z.object({ user: userRecord });
 export const usersResponse = z.object({ users: z.array(userRecord) });
 export const staffResponse = z.object({ staff: z.array(staffMember) });

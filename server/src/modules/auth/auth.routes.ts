@@ -1,3 +1,4 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
 import type { ApiRouter } from '../../lib/route';
 import { ANY_STAFF, NO_CONTENT, PUBLIC } from '../../lib/route';
 import { UserSchema } from '../users/user.entity';
@@ -5,6 +6,7 @@ import { presentUser } from '../users/user.presenter';
 import {
   csrfResponse,
   meResponse,
+  sessionResponse,
   accountMessageResponse,
   passwordChangedResponse,
   RESET_REQUESTED_MESSAGE,
@@ -46,18 +48,29 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     },
   });
 
+  const me = async (em: EntityManager, userId: string) => {
+    const user = await em.findOneOrFail(UserSchema, { id: userId }, { populate: ['company'] });
+    return {
+      user: presentUser(user),
+      company: { id: user.company.id, name: user.company.name, unitSystem: user.company.unitSystem },
+    };
+  };
+
   api.route({
     method: 'get',
     path: '/me',
     policy: ANY_STAFF,
     response: meResponse,
-    handler: async ({ actor, em }) => {
-      const user = await em.findOneOrFail(UserSchema, { id: actor.userId }, { populate: ['company'] });
-      return {
-        user: presentUser(user),
-        company: { id: user.company.id, name: user.company.name, unitSystem: user.company.unitSystem },
-      };
-    },
+    handler: async ({ actor, em }) => me(em, actor.userId),
+  });
+
+  /** What the app asks on every load: being signed out is an answer (200, me: null), not a 401. */
+  api.route({
+    method: 'get',
+    path: '/session',
+    policy: PUBLIC,
+    response: sessionResponse,
+    handler: async ({ actor, em }) => ({ me: actor ? await me(em, actor.userId) : null }),
   });
 
   /** Change one's own password: other sessions end, this one stays. */

@@ -1,17 +1,14 @@
 import { queryOptions, useSuspenseQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
-import { isApiError } from '../../../lib/api-error';
-import { meResponse, type MeResponse } from '@contract';
+import { sessionResponse, type MeResponse } from '@contract';
 import { authKeys } from '../query-keys';
 
-/** The signed-in user and company, or null when nobody is signed in (401). */
+/**
+ * The signed-in user and company, or null when nobody is signed in. Asks /api/auth/session, where
+ * signed out is a 200 answer: a sign-in page load logs no failed request in the console.
+ */
 export async function getMe(signal?: AbortSignal): Promise<MeResponse | null> {
-  try {
-    return await apiFetch('/api/auth/me', { schema: meResponse, signal });
-  } catch (e) {
-    if (isApiError(e) && e.status === 401) return null;
-    throw e;
-  }
+  return (await apiFetch('/api/auth/session', { schema: sessionResponse, signal })).me;
 }
 
 export const meQueryOptions = () =>

@@ -6,30 +6,67 @@ interface Props {
   sensible: LoadComponents;
   latent: LoadComponents;
   heatLoss: LoadComponents;
+  /** Names the chart for screen readers, e.g. "Bedroom 2". */
+  roomName?: string | undefined;
 }
 
-/** Where the load comes from, one bar pair per component (cooling gain vs heat loss), Btu/h. */
-export function ComponentChart({ sensible, latent, heatLoss }: Props) {
+const btuh = (n: number) => `${Math.round(n).toLocaleString('en-US')} Btu/h`;
+
+/**
+ * Where the load comes from, one bar pair per component (cooling gain vs heat loss), Btu/h.
+ * Cool colour for cooling, warm for heating (both ≥ 3:1 on white). The drawing is not a
+ * keyboard stop (nothing in it does anything); its figures are in the table under it.
+ */
+export function ComponentChart({ sensible, latent, heatLoss, roomName }: Props) {
   const data = COMPONENT_KEYS.map((k) => ({
     name: COMPONENT_LABELS[k],
     cooling: sensible[k] + latent[k],
     heating: heatLoss[k],
   }));
-  const summary = data.map((d) => `${d.name}: ${d.cooling} Btu/h cooling, ${d.heating} Btu/h heating`).join('; ');
+  const title = roomName ? `Where ${roomName}'s load comes from` : "Where this room's load comes from";
   return (
-    <figure className="h-[300px] w-full min-w-0">
-      <ResponsiveContainer width="100%" height="100%">
-        <BarChart data={data} layout="vertical" margin={{ left: 0, right: 12 }} accessibilityLayer>
-          <CartesianGrid strokeDasharray="3 3" horizontal={false} />
-          <XAxis type="number" tick={{ fontSize: 12 }} />
-          <YAxis type="category" dataKey="name" width={112} tick={{ fontSize: 11 }} />
-          <Tooltip formatter={(v) => `${String(v)} Btu/h`} />
-          <Legend />
-          <Bar dataKey="cooling" name="Cooling gain" fill="var(--color-amber)" isAnimationActive={false} />
-          <Bar dataKey="heating" name="Heat loss" fill="var(--color-ink-500)" isAnimationActive={false} />
-        </BarChart>
-      </ResponsiveContainer>
-      <figcaption className="sr-only">{summary}</figcaption>
+    <figure aria-label={title} className="w-full min-w-0">
+      <div className="h-[300px] w-full" aria-hidden="true">
+        <ResponsiveContainer width="100%" height="100%" initialDimension={{ width: 600, height: 300 }}>
+          <BarChart data={data} layout="vertical" margin={{ left: 0, right: 12 }} accessibilityLayer={false}>
+            <CartesianGrid strokeDasharray="3 3" horizontal={false} />
+            <XAxis type="number" tick={{ fontSize: 12 }} />
+            <YAxis type="category" dataKey="name" width={112} tick={{ fontSize: 11 }} />
+            <Tooltip formatter={(v) => btuh(Number(v))} />
+            <Legend />
+            <Bar dataKey="cooling" name="Cooling gain" fill="var(--color-cooling)" isAnimationActive={false} />
+            <Bar dataKey="heating" name="Heat loss" fill="var(--color-heating)" isAnimationActive={false} />
+          </BarChart>
+        </ResponsiveContainer>
+      </div>
+      <details className="mt-1 text-sm">
+        <summary className="min-h-11 cursor-pointer py-2 font-semibold text-ink-800">The figures as a table</summary>
+        <table className="w-full text-left">
+          <caption className="sr-only">{title}, Btu/h</caption>
+          <thead>
+            <tr>
+              <th scope="col">Component</th>
+              <th scope="col" className="text-right">
+                Cooling gain
+              </th>
+              <th scope="col" className="text-right">
+                Heat loss
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {data.map((d) => (
+              <tr key={d.name} className="border-t border-line">
+                <th scope="row" className="font-normal">
+                  {d.name}
+                </th>
+                <td className="text-right tabular-nums">{btuh(d.cooling)}</td>
+                <td className="text-right tabular-nums">{btuh(d.heating)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </details>
     </figure>
   );
 }

@@ -14,7 +14,12 @@ export function RoomLoadCard({ load, room }: { load: RoomLoad; room: Room | unde
         {load.roomName} <span className="text-sm font-normal text-muted">{load.floorAreaFt2} ft²</span>
       </h3>
       <LoadFigures load={load} />
-      <LazyComponentChart sensible={load.sensibleGain} latent={load.latentGain} heatLoss={load.heatLoss} />
+      <LazyComponentChart
+        sensible={load.sensibleGain}
+        latent={load.latentGain}
+        heatLoss={load.heatLoss}
+        roomName={load.roomName}
+      />
       {warnings.length > 0 ? (
         <ul className="list-disc pl-5 text-sm text-amber-deep">
           {warnings.map((w) => (

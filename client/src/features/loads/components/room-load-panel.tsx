@@ -31,6 +31,7 @@ export function RoomLoadPanel({ room, warnings, designConditions, tightness }: P
             sensible={result.value.sensibleGain}
             latent={result.value.latentGain}
             heatLoss={result.value.heatLoss}
+            roomName={result.value.roomName}
           />
         </>
       ) : null}

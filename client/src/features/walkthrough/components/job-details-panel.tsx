@@ -35,6 +35,7 @@ import { customerTarget, DETAIL_FIELDS, jobTarget, type WalkthroughEdit } from '
 import { overlayCustomer } from '../sync/overlay';
 import { useQueueState, useWalkthroughQueue } from '../sync/queue-context';
 import { DeleteJobButton } from './delete-job-button';
+import { JobPeopleFacts } from './job-people';
 
 const detailsSchema = z.object({
   customerName: customerRules.name,
@@ -326,14 +327,7 @@ function DetailsForm({ job, customer, office }: { job: JobRecord; customer: Cust
 function ReadOnlyPeople({ job }: { job: JobRecord }) {
   return (
     <dl className="grid gap-2 text-base sm:grid-cols-2">
-      <div>
-        <dt className="text-sm font-semibold text-muted">Salesperson</dt>
-        <dd>{job.salesperson?.name ?? '—'}</dd>
-      </div>
-      <div>
-        <dt className="text-sm font-semibold text-muted">Installer</dt>
-        <dd>{job.assignedInstaller?.name ?? 'Not assigned yet'}</dd>
-      </div>
+      <JobPeopleFacts job={job} />
     </dl>
   );
 }

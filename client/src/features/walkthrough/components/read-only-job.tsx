@@ -6,6 +6,7 @@ import { jobPaths } from '../../../lib/job-paths';
 import { jobStatusLabels } from '../../../lib/job-labels';
 import { toDisplay, unitLabel } from '../../../lib/unit-display';
 import type { RoomView } from '../sync/overlay';
+import { JobPeopleFacts } from './job-people';
 
 /**
  * The job as someone who may not change it sees it (an installer, by the contract's `mayEditJob`):
@@ -45,14 +46,7 @@ export function ReadOnlyJob({
             <dt className="text-sm font-semibold text-muted">Status</dt>
             <dd>{jobStatusLabels[job.status]}</dd>
           </div>
-          <div>
-            <dt className="text-sm font-semibold text-muted">Salesperson</dt>
-            <dd>{job.salesperson?.name ?? '—'}</dd>
-          </div>
-          <div>
-            <dt className="text-sm font-semibold text-muted">Installer</dt>
-            <dd>{job.assignedInstaller?.name ?? 'Not assigned yet'}</dd>
-          </div>
+          <JobPeopleFacts job={job} />
         </dl>
         <h3 className="mt-4 text-base font-semibold text-ink-900">Notes</h3>
         <p className="whitespace-pre-line text-base">{job.notes || 'No notes.'}</p>

@@ -22,6 +22,7 @@ export * from './src/schemas/room-input';
 export * from './src/schemas/home';
 export * from './src/schemas/equipment';
 export * from './src/schemas/design';
+export * from './src/schemas/ducts';
 
 export * from './src/loads/conditions';
 export * from './src/loads/hourly-method';
@@ -32,6 +33,7 @@ export * from './src/loads/notes';
 export * from './src/loads/room-load';
 export * from './src/loads/home-load';
 export * from './src/loads/warnings';
+export * from './src/loads/ducts';
 
 export * from './src/sizing/policy';
 export * from './src/sizing/capacity';

@@ -71,3 +71,10 @@ export * from './src/catalog/datasets';
 export * from './src/catalog/records';
 export * from './src/catalog/diff-import';
 export * from './src/catalog/metric-columns';
+
+export * from './src/explain/format';
+export * from './src/explain/explanation';
+export * from './src/pricing/discount';
+export * from './src/pricing/preliminary';
+export * from './src/pricing/explain-price';
+export * from './src/takeoff/regenerate';

@@ -53,12 +53,20 @@ export interface OptionPrice {
   readonly subtotalCents: number;
   readonly taxableCents: number;
   readonly taxCents: number;
+  /** Tax the contractor pays on its own cost ('materials-cost' rule), cents; part of `costCents`, not of the total. */
+  readonly contractorTaxCents: number;
   readonly totalCents: number;
   readonly depositCents: number;
   readonly balanceCents: number;
   readonly monthlyPaymentCents: number | null;
   /** (subtotal − cost) ÷ subtotal, %, 2 decimals half-up; 0 when the subtotal is 0. */
   readonly grossMarginPercent: number;
+}
+
+/** Materials' share of the goods sell price, cents (half-up): goods sell × materials cost ÷ (equipment + materials cost). */
+function materialsSellShare(goodsSell: number, equipmentCost: number, materialsCost: number): number {
+  const goodsCost = equipmentCost + materialsCost;
+  return goodsCost === 0 ? 0 : roundCentsHalfUp((goodsSell * materialsCost) / goodsCost);
 }
 
 const sum = (xs: readonly number[]): number => xs.reduce((a, b) => a + b, 0);
@@ -95,22 +103,32 @@ export function priceOption({
   const amountOff = sum(pricing.discounts.filter((d) => d.kind === 'amount').map((d) => roundCentsHalfUp(d.value)));
   const discount = Math.min(sellCents, percentOff + amountOff);
   const subtotal = sellCents - discount;
+  const rule = pricing.taxOn;
+  // Goods (or materials alone) carry their share of the discounted price: discounts fall on every line alike.
+  const taxedSell =
+    rule === 'materials'
+      ? goodsSell
+      : rule === 'materials-only'
+        ? materialsSellShare(goodsSell, equipment, materials)
+        : 0;
   const taxable =
-    pricing.taxOn === 'none'
+    rule === 'none' || rule === 'materials-cost'
       ? 0
-      : pricing.taxOn === 'total'
+      : rule === 'total'
         ? subtotal
         : sellCents === 0
           ? 0
-          : roundCentsHalfUp((goodsSell * subtotal) / sellCents);
+          : roundCentsHalfUp((taxedSell * subtotal) / sellCents);
   const tax = percentOfCents({ cents: taxable, percent: pricing.taxRatePercent });
+  const contractorTax =
+    rule === 'materials-cost' ? percentOfCents({ cents: equipment + materials, percent: pricing.taxRatePercent }) : 0;
   const total = subtotal + tax;
   const deposit =
     pricing.deposit.kind === 'percent'
       ? percentOfCents({ cents: total, percent: pricing.deposit.value })
       : Math.min(total, roundCentsHalfUp(pricing.deposit.value));
   const balance = total - deposit;
-  const cost = equipment + materials + laborCost;
+  const cost = equipment + materials + laborCost + contractorTax;
   return {
     equipmentCostCents: equipment,
     materialsCostCents: materials,
@@ -123,6 +141,7 @@ export function priceOption({
     subtotalCents: subtotal,
     taxableCents: taxable,
     taxCents: tax,
+    contractorTaxCents: contractorTax,
     totalCents: total,
     depositCents: deposit,
     balanceCents: balance,

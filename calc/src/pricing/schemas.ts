@@ -1,6 +1,18 @@
 import { z } from 'zod';
 import { bounded, boundedInt, keyField, nameField } from '../schemas/fields';
 
+/** The tax rules an option can use (see pricingSchema.taxOn). */
+export const TAX_RULES = ['materials', 'materials-only', 'total', 'materials-cost', 'none'] as const;
+export type TaxRule = (typeof TAX_RULES)[number];
+/** The rules in plain words, for the screen and the proposal. */
+export const TAX_RULE_LABELS: Record<TaxRule, string> = {
+  materials: 'Tax on equipment and materials at the sell price',
+  'materials-only': 'Tax on materials only, at the sell price',
+  total: 'Tax on the whole price',
+  'materials-cost': 'We pay the tax on our cost of equipment and materials (no tax line for the customer)',
+  none: 'No tax',
+};
+
 const cents = (label: string) => boundedInt(label, 0, 100_000_000, 'cents');
 
 /** The company's price book: cost per item key, labor rate per hour. All cents. */
@@ -26,7 +38,13 @@ export const pricingSchema = z
     percent: bounded('Markup or margin', 0, 500, '%'),
     discounts: z.array(discountSchema).max(10, 'At most 10 discounts').default([]),
     taxRatePercent: bounded('Tax rate', 0, 20, '%').default(0),
-    taxOn: z.enum(['materials', 'total', 'none'], { error: 'Choose what is taxed' }).default('materials'),
+    /**
+     * What the tax falls on: 'materials' = equipment and materials at their sell price (their share of the
+     * discounted price); 'materials-only' = materials alone at sell (equipment exempt); 'total' = the whole
+     * price; 'materials-cost' = the contractor pays the tax on its cost of equipment and materials (a cost,
+     * no tax line for the customer); 'none'. Names in plain words: TAX_RULE_LABELS.
+     */
+    taxOn: z.enum(TAX_RULES, { error: 'Choose what is taxed' }).default('materials'),
     deposit: z
       .object({ kind: z.enum(['percent', 'amount']), value: bounded('Deposit', 0, 100_000_000) })
       .default({ kind: 'percent', value: 0 }),

@@ -13,7 +13,22 @@ export interface FieldDiff {
 
 export type Choice = 'mine' | 'theirs';
 
-const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
+/** JSON with object keys sorted and undefined keys left out: two records equal field by field read the same. */
+function canonical(v: unknown): unknown {
+  if (Array.isArray(v)) return v.map(canonical);
+  if (typeof v === 'object' && v !== null)
+    return Object.fromEntries(
+      Object.entries(v)
+        .filter(([, x]) => x !== undefined)
+        .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+        .map(([k, x]) => [k, canonical(x)]),
+    );
+  return v ?? null;
+}
+
+/** Equal as data: key order and keys holding undefined do not count. */
+export const sameValue = (a: unknown, b: unknown) => JSON.stringify(canonical(a)) === JSON.stringify(canonical(b));
+const same = sameValue;
 
 /** Top-level fields whose values differ; a whole wall list counts as one field. */
 export function diffFields(

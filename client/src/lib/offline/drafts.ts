@@ -18,6 +18,8 @@ export interface UnsavedDraft {
   /** The room version the draft was typed against; null for a room not yet on the server. */
   readonly baseVersion: number | null;
   readonly input: Record<string, unknown>;
+  /** The part of the draft that was sent (its refused fields at their saved values), if any was. */
+  readonly sent?: Record<string, unknown> | undefined;
 }
 
 function storage(): Storage | null {
@@ -27,6 +29,8 @@ function storage(): Storage | null {
     return null;
   }
 }
+
+const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
 
 function isDraft(v: unknown): v is UnsavedDraft {
   if (typeof v !== 'object' || v === null || !('input' in v) || !('baseVersion' in v)) return false;
@@ -51,8 +55,15 @@ export function clearUnsavedDraft(roomId: string): void {
   storage()?.removeItem(keyOf(roomId));
 }
 
-/** The draft typed against this very version, if any; a draft for an older version is discarded. */
-export function takeUnsavedDraft(roomId: string, version: number | null): UnsavedDraft | null {
+/**
+ * The draft typed against this very version, or whose sent part is what the record now holds
+ * (`holdsSent`: the server moved on only by this draft's own saves); any other draft is discarded.
+ */
+export function takeUnsavedDraft(
+  roomId: string,
+  version: number | null,
+  holdsSent?: (sent: Record<string, unknown>) => boolean,
+): UnsavedDraft | null {
   const raw = storage()?.getItem(keyOf(roomId));
   if (!raw) return null;
   let parsed: unknown = null;
@@ -61,7 +72,9 @@ export function takeUnsavedDraft(roomId: string, version: number | null): Unsave
   } catch {
     parsed = null;
   }
-  if (!isDraft(parsed) || parsed.baseVersion !== version) {
+  const sent = isDraft(parsed) && 'sent' in parsed && isObject(parsed.sent) ? parsed.sent : undefined;
+  const current = isDraft(parsed) && (parsed.baseVersion === version || (sent && holdsSent?.(sent)));
+  if (!isDraft(parsed) || !current) {
     clearUnsavedDraft(roomId);
     return null;
   }

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { INFILTRATION_TIGHTNESS, houseSchema } from '@calc';
 import { enteredOf, notesOf, resolveDesign, type DesignNotes, type EnteredDesign, type JobRecord } from '@contract';
@@ -6,6 +6,7 @@ import { DESIGN_FIELD_SPECS } from '../model/design-fields';
 import { jobTarget, type JobChanges } from '../sync/edits';
 import { useWalkthroughQueue } from '../sync/queue-context';
 import { useDebouncedSave } from '../../../lib/offline/use-debounced-save';
+import { markUnsavedFields } from '../../../lib/offline/unsaved-fields';
 import { NumberInput, SelectInput, TextInput } from './field-kit';
 import { HouseFields, type HouseDraft } from './house-fields';
 
@@ -43,7 +44,14 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
   const errors = new Map<string, string>();
   for (const i of resolved.issues) if (!errors.has(i.path)) errors.set(i.path, i.message);
 
-  const { schedule } = useDebouncedSave<JobChanges>(jobTarget(job.id), (changes) => {
+  // Fields typed but refused, so not sent: counted from the person's last edit only (values the job
+  // already held before it was opened are not "unsaved").
+  const [refused, setRefused] = useState(0);
+  const target = jobTarget(job.id);
+  useEffect(() => markUnsavedFields(`${target}:design`, refused), [target, refused]);
+  useEffect(() => () => markUnsavedFields(`${target}:design`, 0), [target]);
+
+  const { schedule, cancel } = useDebouncedSave<JobChanges>(target, (changes) => {
     void queue.enqueue({
       target: jobTarget(job.id),
       baseVersion: job.version,
@@ -64,8 +72,14 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
     const sky = next.skySource ?? skySource;
     const t = next.tightness ?? tightness;
     const h = next.house ?? house;
-    if (!resolve(e, s, sky).conditions) return;
-    if (!houseSchema.safeParse(h).success) return;
+    // Nothing is sent while a field shows an error, not even the prefix typed before it went over
+    // a limit (it may be waiting in the debounce): the pill says what is not saved meanwhile.
+    const issues = resolve(e, s, sky).issues.length + (houseSchema.safeParse(h).success ? 0 : 1);
+    setRefused(issues);
+    if (issues > 0) {
+      cancel();
+      return;
+    }
     const designConditions: Record<string, number | string> = {};
     for (const [k, v] of Object.entries(e))
       if (k !== 'source' && k !== 'clearSkySource' && v !== undefined) designConditions[k] = v;

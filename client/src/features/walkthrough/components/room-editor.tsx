@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { Button } from '../../../components/ui/button';
 import { RoomLoadPanel } from '../../loads/components/room-load-panel';
@@ -6,6 +6,8 @@ import { asNumber, asRecords, asString, setIn, type PathPart } from '../model/dr
 import { floorLevelOptions } from '../model/options';
 import { NEW_WALL } from '../model/room-templates';
 import { checkRoom, pathKey } from '../model/validate-room';
+import { sameRoomInput, saveablePart } from '../model/saveable';
+import { markUnsavedFields } from '../../../lib/offline/unsaved-fields';
 import type { RoomView } from '../sync/overlay';
 import { roomTarget } from '../sync/edits';
 import { useDebouncedSave } from '../../../lib/offline/use-debounced-save';
@@ -27,32 +29,49 @@ interface Props {
 /** One room, saved as it is typed: every valid change goes to the queue after a short pause. */
 export function RoomEditor({ jobId, room, designConditions, tightness }: Props) {
   const queue = useWalkthroughQueue();
-  // A draft the schema refused last time (still being fixed) comes back instead of the saved room.
-  const [restored] = useState(() => takeUnsavedDraft(room.id, room.version));
+  // A draft the schema refused last time (still being fixed) comes back instead of the saved room,
+  // also after the server moved on by this draft's own partial saves.
+  const [restored] = useState(() => takeUnsavedDraft(room.id, room.version, (sent) => sameRoomInput(sent, room.input)));
   const [draft, setDraft] = useState<Record<string, unknown>>(() => ({
     ...(restored?.input ?? room.input),
     id: room.id,
   }));
   const check = useMemo(() => checkRoom(draft), [draft]);
-  const { schedule } = useDebouncedSave<Record<string, unknown>>(roomTarget(room.id), (input) => {
+  const target = roomTarget(room.id);
+  // What was last handed to the debounce: a partial save is not repeated while only refused fields change.
+  const queued = useRef<Record<string, unknown> | null>(null);
+  const { schedule, cancel } = useDebouncedSave<Record<string, unknown>>(target, (input) => {
     void queue.enqueue({
-      target: roomTarget(room.id),
+      target,
       baseVersion: room.version,
       payload: { kind: 'room-update', jobId, roomId: room.id, input },
     });
   });
+  // The pill counts the fields showing an error: while any does, it never says "Saved".
+  useEffect(() => markUnsavedFields(target, check.errors.size), [target, check.errors.size]);
+  useEffect(() => () => markUnsavedFields(target, 0), [target]);
 
   const replace = (next: unknown) => {
     const value = typeof next === 'object' && next !== null && !Array.isArray(next) ? { ...next } : draft;
     setDraft(value);
-    // Only what calc accepts is saved; the form shows what to fix meanwhile, and the device
-    // keeps the refused draft so a reload does not lose it.
     if (checkRoom(value).ok) {
       clearUnsavedDraft(room.id);
+      queued.current = value;
       schedule(value);
-    } else {
-      keepUnsavedDraft(room.id, { baseVersion: room.version, input: value });
+      return;
     }
+    // A refused field is never sent, not even the prefix typed before it went over a limit: the
+    // debounce gets the room with each refused field at its saved value, so the other edits of the
+    // room still reach the office. The device keeps the whole draft so a reload does not lose it.
+    const part = saveablePart(value, room.input);
+    if (part === null || sameRoomInput(part, room.input)) {
+      cancel();
+      queued.current = null;
+    } else if (!sameRoomInput(part, queued.current ?? room.input)) {
+      queued.current = part;
+      schedule(part);
+    }
+    keepUnsavedDraft(room.id, { baseVersion: room.version, input: value, sent: queued.current ?? undefined });
   };
   const set = (path: readonly PathPart[], value: unknown) => replace(setIn(draft, path, value));
   const err = (path: readonly PathPart[]) => check.errors.get(pathKey(path));
@@ -68,7 +87,7 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
             role="note"
             className="rounded-md border border-amber-line bg-amber-soft px-3 py-2 text-sm text-amber-deep"
           >
-            Brought back what you were typing here. It saves as soon as the fields marked in red are fixed.
+            Brought back what you were typing here. The fields marked in red are not saved until they are fixed.
           </p>
         ) : null}
         <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">

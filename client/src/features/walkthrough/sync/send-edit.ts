@@ -1,15 +1,16 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { isApiError } from '../../../lib/api-error';
-import { jobKeys, roomsQueryOptions } from '../../../lib/job-queries';
+import { getJob, jobKeys, roomsQueryOptions } from '../../../lib/job-queries';
 import type { SendResult } from '../../../lib/offline/queue';
 import type { JobRecord, RoomRecord } from '@contract';
 import { createRoom } from '../api/create-room';
 import { deleteRoom } from '../api/delete-room';
 import { getRoom } from '../api/get-room';
-import { customerQueryOptions, saveCustomer } from '../api/job-details';
+import { customerQueryOptions, getCustomer, saveCustomer } from '../api/job-details';
 import { updateJob } from '../api/update-job';
 import { updateRoom } from '../api/update-room';
 import type { WalkthroughItem } from './edits';
+import { customerHolds, jobHolds, roomHolds } from './settle-replay';
 
 type RoomsChange = (rooms: RoomRecord[]) => RoomRecord[];
 
@@ -72,6 +73,19 @@ function failure(e: unknown): SendResult {
 export const OTHER_PERSON =
   'Someone else is signed in on this device now. These changes stay here until you sign in again.';
 
+const isConflict = (e: unknown) => isApiError(e) && e.status === 409;
+
+/**
+ * After a 409, the record as it is now when it already holds every value the edit writes (a
+ * replay of a write whose answer was lost): settled without asking. Otherwise the 409 stands.
+ */
+async function heldAlready<T>(e: unknown, read: () => Promise<T>, holds: (record: T) => boolean): Promise<T> {
+  if (!isConflict(e)) throw e;
+  const record = await read().catch(() => null);
+  if (record !== null && holds(record)) return record;
+  throw e;
+}
+
 /**
  * Sends one queued edit and puts the server's answer into the query cache. `person` (the user id
  * whose queue this is) goes with every write, so the server refuses it under anyone else's session.
@@ -99,7 +113,14 @@ export function createEditSender(queryClient: QueryClient, person?: string) {
         return { kind: 'ok', version: room.version };
       }
       if (edit.kind === 'room-update') {
-        const room = await updateRoom(edit.jobId, edit.roomId, item.baseVersion, edit.input, person);
+        const room = await updateRoom(edit.jobId, edit.roomId, item.baseVersion, edit.input, person).catch(
+          (e: unknown) =>
+            heldAlready(
+              e,
+              () => getRoom(edit.jobId, edit.roomId),
+              (r) => roomHolds(r, edit.input),
+            ),
+        );
         await changeRooms(queryClient, edit.jobId, withRoom(room));
         afterWrite(queryClient, edit.jobId);
         return { kind: 'ok', version: room.version };
@@ -113,14 +134,27 @@ export function createEditSender(queryClient: QueryClient, person?: string) {
         return { kind: 'ok', version: null };
       }
       if (edit.kind === 'customer-update') {
-        const customer = await saveCustomer(edit.customerId, item.baseVersion, edit.changes, person);
+        const customer = await saveCustomer(edit.customerId, item.baseVersion, edit.changes, person).catch(
+          (e: unknown) =>
+            heldAlready(
+              e,
+              () => getCustomer(edit.customerId),
+              (c) => customerHolds(c, edit.changes),
+            ),
+        );
         queryClient.setQueryData(customerQueryOptions(customer.id).queryKey, customer);
         // The job's header and the jobs list show the customer's name.
         void queryClient.invalidateQueries({ queryKey: jobKeys.detail(edit.jobId), exact: true });
         void queryClient.invalidateQueries({ queryKey: jobKeys.lists() });
         return { kind: 'ok', version: customer.version };
       }
-      const job = await updateJob(edit.jobId, item.baseVersion, edit.changes, person);
+      const job = await updateJob(edit.jobId, item.baseVersion, edit.changes, person).catch((e: unknown) =>
+        heldAlready(
+          e,
+          () => getJob(edit.jobId),
+          (j) => jobHolds(j, edit.changes),
+        ),
+      );
       queryClient.setQueryData<JobRecord>(jobKeys.detail(job.id), job);
       afterWrite(queryClient, edit.jobId);
       return { kind: 'ok', version: job.version };

@@ -9,4 +9,5 @@ export * from './fields';
 export * from './design-conditions';
 export * from './accounts';
 export * from './records';
+export * from './desk';
 export * from './api-version';

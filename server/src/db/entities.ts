@@ -7,6 +7,7 @@ import { PhotoSchema } from '../modules/photos/photo.entity';
 import { OutgoingMessageSchema } from '../modules/mail/outgoing-message.entity';
 import { PasswordResetTokenSchema } from '../modules/auth/password-reset-token.entity';
 import { RoomSchema } from '../modules/rooms/room.entity';
+import { DesignOptionSchema } from '../modules/desk/option.entity';
 import {
   CompanyDataChangeSchema,
   CompanyDataRowSchema,
@@ -27,4 +28,5 @@ export const entities = [
   CompanyDataChangeSchema,
   PriceBookSettingsSchema,
   PasswordResetTokenSchema,
+  DesignOptionSchema,
 ];

@@ -18,6 +18,7 @@ import { loadsRoutes } from './loads/loads.routes';
 import { photoRoutes } from './photos/photo.routes';
 import { roomRoutes } from './rooms/room.routes';
 import { companyDataRoutes } from './company-data/company-data.routes';
+import { deskRoutes } from './desk/desk.routes';
 
 /** A module's routes under /api<prefix> (tests add their own through createApp's extras). */
 export type ModuleMount = readonly [prefix: string, register: (api: ApiRouter) => void];
@@ -59,6 +60,7 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/jobs', roomRoutes);
   mount('/jobs', photoRoutes);
   mount('/jobs', loadsRoutes);
+  mount('/jobs', deskRoutes);
   mount('/company-data', companyDataRoutes);
   for (const [prefix, register] of extra) mount(prefix, register);
 }

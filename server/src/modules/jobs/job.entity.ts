@@ -33,6 +33,9 @@ export const JobSchema = defineEntity({
     tightness: p.enum([...TIGHTNESS]).default('average'),
     /** Bedrooms, blower-door CFM50 and ventilation system (calc's houseSchema); {} until known. */
     house: p.json<House>().defaultRaw("'{}'::jsonb"),
+    /** Marked "ready to propose" by the office (the desk module sets and clears it; null when not marked). */
+    readyAt: p.datetime().nullable(),
+    readyBy: p.manyToOne(UserSchema).nullable(),
     version: p.integer().version(),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p

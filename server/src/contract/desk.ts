@@ -1,0 +1,328 @@
+import { z } from 'zod';
+import { bounded, boundedInt, designSchema, discountSchema, keyField, nameField, sellRuleSchema } from '@calc';
+import type { Role } from './enums';
+
+/**
+ * The estimator's desk (issue 13): what both ends agree on about priced options — the inputs an option
+ * stores, the records the server answers with, who may do what, and why a job cannot be marked ready.
+ * The server recomputes every number from these inputs with calc; no total is ever taken from a browser.
+ */
+
+/** A job holds at most this many options (a basic, a better and a best). */
+export const MAX_OPTIONS = 3;
+
+/** Who may read the desk (installers read equipment, lines and electrical only: no money). */
+export const DESK_EDITOR_ROLES = ['owner', 'estimator', 'salesperson'] as const satisfies readonly Role[];
+/** Who reviews a first price, edits the takeoff and marks a job ready to propose: the office. */
+export const DESK_OFFICE_ROLES = ['owner', 'estimator'] as const satisfies readonly Role[];
+/** Who decides a discount beyond a person's limit. */
+export const DISCOUNT_APPROVER_ROLES = ['owner'] as const satisfies readonly Role[];
+
+const has = (list: readonly Role[], role: Role) => list.includes(role);
+export const mayEditOptions = (role: Role): boolean => has(DESK_EDITOR_ROLES, role);
+export const mayEditTakeoff = (role: Role): boolean => has(DESK_OFFICE_ROLES, role);
+export const mayReviewOption = (role: Role): boolean => has(DESK_OFFICE_ROLES, role);
+export const mayMarkReady = (role: Role): boolean => has(DESK_OFFICE_ROLES, role);
+export const mayDecideDiscount = (role: Role): boolean => has(DISCOUNT_APPROVER_ROLES, role);
+/** Cost, markup/margin and the takeoff's unit costs: the office only (as in the price book). */
+export const maySeeCost = (role: Role): boolean => has(DESK_OFFICE_ROLES, role);
+/** Prices, discounts and monthly payments: everyone but installers. */
+export const maySeePrice = (role: Role): boolean => role !== 'installer';
+
+// ---- Inputs ------------------------------------------------------------------------------------------
+
+export const optionNameRule = nameField('Option name', 60);
+
+export const depositSchema = z
+  .strictObject({
+    kind: z.enum(['percent', 'amount'], { error: 'Choose percent or amount' }),
+    value: bounded('Deposit', 0, 100_000_000),
+  })
+  .superRefine((d, ctx) => {
+    if (d.kind === 'percent' && d.value > 100)
+      ctx.addIssue({ code: 'custom', path: ['value'], message: 'Deposit must be between 0 and 100 %' });
+  });
+
+export const taxOverrideSchema = z.strictObject({
+  taxRatePercent: bounded('Tax rate', 0, 20, '%'),
+  taxOn: z.enum(['materials', 'total', 'none'], { error: 'Choose what is taxed' }),
+});
+
+/** A discount as typed: calc's shape, a percent at most 100. Amounts are cents. */
+export const optionDiscountSchema = discountSchema.superRefine((d, ctx) => {
+  if (d.kind === 'percent' && d.value > 100)
+    ctx.addIssue({ code: 'custom', path: ['value'], message: 'A percent discount must be between 0 and 100 %' });
+});
+
+/** How one option is priced. null = the company's rule from the price book. */
+export const optionPricingSchema = z.strictObject({
+  sellRule: sellRuleSchema.nullable().default(null),
+  discounts: z.array(optionDiscountSchema).max(10, 'At most 10 discounts').default([]),
+  tax: taxOverrideSchema.nullable().default(null),
+  deposit: depositSchema.default({ kind: 'percent', value: 0 }),
+  financingPlanKey: keyField('Financing plan').nullable().default(null),
+});
+export type OptionPricing = z.output<typeof optionPricingSchema>;
+export type OptionPricingInput = z.input<typeof optionPricingSchema>;
+
+/** calc's design (zones → indoor units, systems → outdoor unit, circuits, electrical), checked by calc's schema. */
+export const optionDesignSchema = designSchema;
+
+const TAKEOFF_UNITS = ['each', 'ft', 'h', 'cylinder', 'roll'] as const;
+const TAKEOFF_CATEGORIES = ['equipment', 'material', 'labor'] as const;
+const quantity = bounded('Quantity', 0, 100_000);
+const unitCost = boundedInt('Unit cost', 0, 100_000_000, 'cents');
+
+/**
+ * One change to the generated takeoff. `change` and `remove` name a generated line by its item key;
+ * `add` is a line of the estimator's own (its `id` is theirs, unique in the option).
+ */
+export const takeoffEditSchema = z.discriminatedUnion(
+  'kind',
+  [
+    z
+      .strictObject({
+        kind: z.literal('change'),
+        itemKey: keyField('Item'),
+        quantity: quantity.optional(),
+        unitCostCents: unitCost.optional(),
+      })
+      .refine((e) => e.quantity !== undefined || e.unitCostCents !== undefined, {
+        message: 'Change the quantity, the unit cost or both',
+        path: ['quantity'],
+      }),
+    z.strictObject({
+      kind: z.literal('add'),
+      id: keyField('Line id'),
+      description: nameField('Description', 120),
+      quantity,
+      unit: z.enum(TAKEOFF_UNITS, { error: `Unit must be one of ${TAKEOFF_UNITS.join(', ')}` }),
+      category: z.enum(TAKEOFF_CATEGORIES, { error: 'Choose equipment, material or labor' }),
+      unitCostCents: unitCost,
+    }),
+    z.strictObject({ kind: z.literal('remove'), itemKey: keyField('Item') }),
+  ],
+  { error: 'An edit is a change, an add or a remove' },
+);
+export type TakeoffEditInput = z.input<typeof takeoffEditSchema>;
+
+export const takeoffEditsSchema = z
+  .array(takeoffEditSchema)
+  .max(200, 'At most 200 takeoff edits')
+  .superRefine((edits, ctx) => {
+    const seen = new Set<string>();
+    edits.forEach((e, i) => {
+      const k = e.kind === 'add' ? `add:${e.id}` : `line:${e.itemKey}`;
+      if (seen.has(k))
+        ctx.addIssue({
+          code: 'custom',
+          path: [i, e.kind === 'add' ? 'id' : 'itemKey'],
+          message: 'This line is edited twice',
+        });
+      seen.add(k);
+    });
+  });
+
+/** POST /api/jobs/:jobId/options: a new option, empty, filled, or a copy of another option of the job. */
+export const createOptionBody = z.strictObject({
+  name: optionNameRule,
+  design: optionDesignSchema.optional(),
+  pricing: optionPricingSchema.optional(),
+  copyFromOptionId: z.uuid({ message: 'Choose an option of this job to copy.' }).optional(),
+});
+/** PATCH an option: any of its inputs (If-Match). Totals are never inputs. */
+export const updateOptionBody = z.strictObject({
+  name: optionNameRule.optional(),
+  design: optionDesignSchema.optional(),
+  pricing: optionPricingSchema.optional(),
+});
+export const takeoffEditsBody = z.strictObject({ edits: takeoffEditsSchema });
+export const discountDecisionBody = z.strictObject({
+  approve: z.boolean({ error: 'Say whether the discount is approved' }),
+});
+/** Of the edits that no longer apply (by `takeoffEditKey`): accept = keep on the line as generated now; drop = remove. */
+export const regenerateBody = z.strictObject({
+  accept: z.array(z.string().max(200)).max(200).default([]),
+  drop: z.array(z.string().max(200)).max(200).default([]),
+});
+
+// ---- Records -----------------------------------------------------------------------------------------
+
+const id = z.string();
+const timestamp = z.string().describe('ISO 8601 date-time');
+const personRef = z.object({ id, name: z.string() });
+
+/** The key naming a takeoff edit in answers and in `regenerate.drop`: `add:<id>` or `line:<itemKey>`. */
+export const takeoffEditKey = (e: { kind: string; id?: string; itemKey?: string }): string =>
+  e.kind === 'add' ? `add:${e.id ?? ''}` : `line:${e.itemKey ?? ''}`;
+
+/** A takeoff line as the desk shows it: the generated value beside the edited one. Money only for the office. */
+export const takeoffLineRecord = z.object({
+  itemKey: z.string(),
+  description: z.string(),
+  unit: z.string(),
+  category: z.enum(TAKEOFF_CATEGORIES),
+  derivation: z.string(),
+  quantity: z.number(),
+  generatedQuantity: z.number().nullable(),
+  unitCostCents: z.number().nullable().optional(),
+  generatedUnitCostCents: z.number().nullable().optional(),
+  extendedCostCents: z.number().optional(),
+  /** 'generated' unchanged, 'changed' by an edit, 'added' by the estimator. */
+  origin: z.enum(['generated', 'changed', 'added']),
+});
+export type TakeoffLineRecord = z.output<typeof takeoffLineRecord>;
+
+/** A stored edit, with the generated value it was made against. Unit costs only for the office. */
+export const takeoffEditRecord = z.object({
+  key: z.string(),
+  edit: z.record(z.string(), z.unknown()),
+  generated: z.object({ quantity: z.number(), unitCostCents: z.number().nullable().optional() }).nullable(),
+  /** Why it no longer applies (the line is gone, or the generated value moved since the edit); null if it applies. */
+  stale: z.string().nullable(),
+});
+
+/** The option's price. Cost and margin fields only for the office; no price at all for installers. */
+export const optionPriceRecord = z.object({
+  sellCents: z.number(),
+  discountCents: z.number(),
+  discountPercent: z.number(),
+  subtotalCents: z.number(),
+  taxCents: z.number(),
+  totalCents: z.number(),
+  depositCents: z.number(),
+  balanceCents: z.number(),
+  monthlyPaymentCents: z.number().nullable(),
+  equipmentCostCents: z.number().optional(),
+  materialsCostCents: z.number().optional(),
+  laborCostCents: z.number().optional(),
+  costCents: z.number().optional(),
+  grossMarginCents: z.number().optional(),
+  grossMarginPercent: z.number().optional(),
+  sellRule: z.object({ method: z.enum(['markup', 'margin']), percent: z.number() }).optional(),
+});
+export type OptionPriceRecord = z.output<typeof optionPriceRecord>;
+
+export const monthlyEstimateRecord = z.object({
+  planKey: z.string(),
+  name: z.string(),
+  aprPercent: z.number(),
+  months: z.number(),
+  monthlyPaymentCents: z.number(),
+});
+
+export const DISCOUNT_STATES = ['pending', 'approved', 'denied'] as const;
+/** A discount beyond the person's limit: not applied until the owner approves. */
+export const discountRequestRecord = z.object({
+  state: z.enum(DISCOUNT_STATES),
+  discounts: z.array(z.object({ label: z.string(), kind: z.enum(['percent', 'amount']), value: z.number() })),
+  percent: z.number(),
+  limitPercent: z.number(),
+  requestedBy: personRef,
+  requestedAt: timestamp,
+  decidedBy: personRef.nullable(),
+  decidedAt: timestamp.nullable(),
+});
+export type DiscountRequestRecord = z.output<typeof discountRequestRecord>;
+
+/** Why an option (or the job) cannot be proposed yet. */
+export const BLOCKER_CODES = [
+  'no-options',
+  'cannot-calculate',
+  'limit-exceeded',
+  'combination-refused',
+  'discount-pending',
+  'preliminary',
+  'takeoff-edits-stale',
+] as const;
+export const blockerRecord = z.object({
+  code: z.enum(BLOCKER_CODES),
+  optionId: id.nullable(),
+  message: z.string(),
+});
+export type BlockerRecord = z.output<typeof blockerRecord>;
+
+/**
+ * calc's results for an option (zones, systems with sizing, refrigerant, electrical; warnings, cautions)
+ * pass as calc made them; only what the screens compare is named.
+ */
+export const optionResultRecord = z.object({
+  zones: z.array(z.looseObject({ zoneKey: z.string(), name: z.string(), indoorUnitKey: z.string() })),
+  systems: z.array(z.looseObject({ systemKey: z.string(), name: z.string(), outdoorUnitKey: z.string() })),
+  takeoff: z.array(takeoffLineRecord),
+  price: optionPriceRecord.nullable(),
+  monthly: z.array(monthlyEstimateRecord),
+  /** Models chosen in this option that the catalog no longer offers (retired or deleted); the option stays valid. */
+  discontinued: z.array(z.object({ key: z.string(), name: z.string() })),
+  warnings: z.array(z.string()),
+  cautions: z.array(z.string()),
+  isEstimate: z.literal(true),
+});
+export type OptionResultRecord = z.output<typeof optionResultRecord>;
+
+export const optionRecord = z.object({
+  id,
+  jobId: id,
+  position: z.number().int(),
+  name: z.string(),
+  design: z.record(z.string(), z.unknown()).nullable(),
+  /** null for installers. */
+  pricing: z.record(z.string(), z.unknown()).nullable(),
+  /** Office only (empty for others). */
+  takeoffEdits: z.array(takeoffEditRecord),
+  discountRequest: discountRequestRecord.nullable(),
+  /** A first price from the phone: not sendable until the office reviews it. */
+  preliminary: z.boolean(),
+  reviewedBy: personRef.nullable(),
+  reviewedAt: timestamp.nullable(),
+  result: optionResultRecord.nullable(),
+  /** Why calc could not work the option out (e.g. a room of a zone was deleted), with field paths. */
+  problems: z.array(z.object({ path: z.string(), message: z.string() })),
+  blockers: z.array(blockerRecord),
+  version: z.number().int(),
+  createdBy: personRef.nullable(),
+  createdAt: timestamp,
+  updatedAt: timestamp,
+});
+export type OptionRecord = z.output<typeof optionRecord>;
+
+export const readinessRecord = z.object({
+  /** Marked ready to propose by the office, and by whom; null when not marked. */
+  markedReady: z.object({ at: timestamp, by: personRef }).nullable(),
+  /** Marked and nothing blocks it now. */
+  ready: z.boolean(),
+  blockers: z.array(blockerRecord),
+});
+export type ReadinessRecord = z.output<typeof readinessRecord>;
+
+export const optionResponse = z.object({ option: optionRecord });
+export const deskResponse = z.object({
+  jobId: id,
+  jobStatus: z.string(),
+  options: z.array(optionRecord),
+  readiness: readinessRecord,
+});
+export type DeskResponse = z.output<typeof deskResponse>;
+export const regenerateResponse = z.object({
+  option: optionRecord,
+  /** Edits that no longer apply, kept (not dropped) and not applied: for the estimator to accept (drop) or redo. */
+  notApplied: z.array(takeoffEditRecord),
+});
+export const firstPriceResponse = z.object({
+  option: optionRecord,
+  range: z.object({ lowCents: z.number(), highCents: z.number() }).nullable(),
+  preliminary: z.literal(true),
+  notice: z.string(),
+});
+
+// ---- Words both ends show ----------------------------------------------------------------------------
+
+export const DESK_MESSAGES = {
+  noOptions: 'Add at least one option before marking the job ready.',
+  tooManyOptions: `A job holds at most ${MAX_OPTIONS} options.`,
+  discountPending: 'A discount is waiting for the owner’s approval.',
+  preliminary: 'This is a first price from the walk-through; an estimator or the owner reviews it first.',
+  takeoffStale: 'Some takeoff edits no longer match the design; regenerate the takeoff and accept or drop them.',
+  firstPriceNotice: 'Preliminary price, subject to the estimator’s review. Not a proposal.',
+  discontinued: 'discontinued',
+} as const;

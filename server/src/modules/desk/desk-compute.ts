@@ -1,0 +1,261 @@
+import {
+  CalcError,
+  computeDesign,
+  extendCents,
+  monthlyPaymentCents,
+  priceOption,
+  pricingSchema,
+  roundHalfUp,
+  type CatalogModel,
+  type DesignResult,
+  type EquipmentCatalog,
+  type HomeInput,
+  type OptionPrice,
+  type PricedLine,
+  type PriceBook,
+  type Pricing,
+  type SellRule,
+} from '@calc';
+import { DESK_MESSAGES, takeoffEditKey, type BlockerRecord, type OptionPricing } from '@contract';
+import type { FieldError } from '../../lib/errors';
+import { engineCatalog, enginePriceBook, type CompanyDesk } from './desk-inputs';
+import type { DesignOption, StoredTakeoffEdit } from './option.entity';
+
+/** A takeoff line as the desk holds it: what is counted, and what calc generated beside it. */
+export interface DeskLine {
+  readonly line: PricedLine;
+  readonly generated: { readonly quantity: number; readonly unitCostCents: number | null } | null;
+  readonly origin: 'generated' | 'changed' | 'added';
+}
+
+export interface EditState {
+  readonly key: string;
+  readonly stored: StoredTakeoffEdit;
+  /** Why the edit no longer applies; null when it is applied. */
+  readonly stale: string | null;
+}
+
+export interface OptionFigures {
+  readonly design: DesignResult;
+  readonly lines: readonly DeskLine[];
+  readonly price: OptionPrice;
+  readonly discountPercent: number;
+  readonly sellRule: SellRule;
+  readonly monthly: {
+    planKey: string;
+    name: string;
+    aprPercent: number;
+    months: number;
+    monthlyPaymentCents: number;
+  }[];
+}
+
+export interface ComputedOption {
+  readonly figures: OptionFigures | null;
+  readonly discontinued: { key: string; name: string }[];
+  readonly problems: FieldError[];
+  readonly edits: EditState[];
+  readonly blockers: BlockerRecord[];
+}
+
+/** The company's catalog and price book as the engine reads them, built once per request. */
+export interface EngineData {
+  readonly desk: CompanyDesk;
+  readonly catalog: EquipmentCatalog;
+  readonly priceBook: PriceBook;
+}
+
+export function engineData(desk: CompanyDesk): EngineData {
+  return { desk, catalog: engineCatalog(desk.models), priceBook: enginePriceBook(desk, desk.models) };
+}
+
+/** The models a design names (indoor units of its zones, outdoor units of its systems). */
+export function modelKeysOf(design: DesignOption['design']): string[] {
+  if (!design) return [];
+  const keys = new Set<string>();
+  for (const z of design.zones ?? []) keys.add(z.indoorUnitKey);
+  for (const s of design.systems ?? []) keys.add(s.outdoorUnitKey);
+  return [...keys];
+}
+
+/** calc's pricing from the option's inputs and the company's rules (sell rule and tax unless the option overrides). */
+export function calcPricing(
+  p: OptionPricing,
+  desk: CompanyDesk,
+  discounts = p.discounts,
+): { pricing: Pricing; sellRule: SellRule } {
+  const sellRule = p.sellRule ?? desk.settings.defaultSellRule;
+  const plan = p.financingPlanKey ? desk.financing.find((f) => f.key === p.financingPlanKey) : undefined;
+  const pricing = pricingSchema.parse({
+    method: sellRule.method,
+    percent: sellRule.percent,
+    discounts,
+    taxRatePercent: p.tax?.taxRatePercent ?? desk.settings.taxRatePercent,
+    taxOn: p.tax?.taxOn ?? desk.settings.taxAppliesTo,
+    deposit: p.deposit,
+    financing: plan ? { aprPercent: plan.aprPercent, months: plan.months } : undefined,
+  });
+  return { pricing, sellRule };
+}
+
+/**
+ * Lays the estimator's takeoff edits over calc's generated lines. An edit applies while the line it
+ * names is generated and the value it changes is still what it was edited against; otherwise it is
+ * kept, not applied, and said why (regenerate lets the estimator accept it on the new value or drop it).
+ */
+export function applyTakeoffEdits(
+  generated: readonly PricedLine[],
+  edits: readonly StoredTakeoffEdit[],
+): { lines: DeskLine[]; edits: EditState[] } {
+  const byKey = new Map(generated.map((l) => [l.itemKey, l]));
+  const states: EditState[] = [];
+  const changed = new Map<string, StoredTakeoffEdit>();
+  const removed = new Set<string>();
+  const added: DeskLine[] = [];
+  for (const stored of edits) {
+    const e = stored.edit;
+    const key = takeoffEditKey(e);
+    if (e.kind === 'add') {
+      const line: PricedLine = {
+        itemKey: `added:${e.id}`,
+        description: e.description,
+        quantity: e.quantity,
+        unit: e.unit,
+        category: e.category,
+        derivation: 'added by the estimator',
+        unitCostCents: e.unitCostCents,
+        extendedCostCents: extendCents({ quantity: e.quantity, unitCents: e.unitCostCents }),
+      };
+      added.push({ line, generated: null, origin: 'added' });
+      states.push({ key, stored, stale: null });
+      continue;
+    }
+    const now = byKey.get(e.itemKey);
+    let stale: string | null = null;
+    if (!now) stale = 'The design no longer generates this line.';
+    else if (e.kind === 'change' && stored.generated) {
+      if (e.quantity !== undefined && stored.generated.quantity !== now.quantity)
+        stale = `The generated quantity moved from ${stored.generated.quantity} to ${now.quantity} since the edit.`;
+      else if (e.unitCostCents !== undefined && stored.generated.unitCostCents !== now.unitCostCents)
+        stale = 'The price book’s unit cost changed since the edit.';
+    }
+    states.push({ key, stored, stale });
+    if (stale) continue;
+    if (e.kind === 'remove') removed.add(e.itemKey);
+    else changed.set(e.itemKey, stored);
+  }
+  const lines: DeskLine[] = [];
+  for (const g of generated) {
+    if (removed.has(g.itemKey)) continue;
+    const gen = { quantity: g.quantity, unitCostCents: g.unitCostCents };
+    const c = changed.get(g.itemKey)?.edit;
+    if (c && c.kind === 'change') {
+      const quantity = c.quantity ?? g.quantity;
+      const unitCostCents = c.unitCostCents ?? g.unitCostCents;
+      lines.push({
+        line: {
+          ...g,
+          quantity,
+          unitCostCents,
+          extendedCostCents: unitCostCents === null ? 0 : extendCents({ quantity, unitCents: unitCostCents }),
+        },
+        generated: gen,
+        origin: 'changed',
+      });
+    } else lines.push({ line: g, generated: gen, origin: 'generated' });
+  }
+  return { lines: [...lines, ...added], edits: states };
+}
+
+/** The models an option names that the company no longer offers: retired (inactive) or deleted from the catalog. */
+function discontinuedOf(option: DesignOption, desk: CompanyDesk): { key: string; name: string }[] {
+  return modelKeysOf(option.design).flatMap((key) => {
+    const now = desk.models.get(key);
+    if (now?.active) return [];
+    const then = now ?? option.chosenModels[key];
+    return [{ key, name: then?.name ?? key }];
+  });
+}
+
+/** The engine data for one option: the company's, plus the chosen models the catalog has lost. */
+function dataFor(option: DesignOption, data: EngineData): EngineData {
+  const missing = modelKeysOf(option.design).filter((k) => !data.desk.models.has(k) && option.chosenModels[k]);
+  if (missing.length === 0) return data;
+  const models = new Map<string, CatalogModel>(data.desk.models);
+  for (const k of missing) {
+    const m = option.chosenModels[k];
+    if (m) models.set(k, m);
+  }
+  return { desk: data.desk, catalog: engineCatalog(models), priceBook: enginePriceBook(data.desk, models) };
+}
+
+function problemsOf(e: unknown): FieldError[] {
+  if (e instanceof CalcError)
+    return e.details.length
+      ? e.details.map((d) => ({ path: d.path.map(String).join('.'), message: d.message }))
+      : [{ path: '', message: e.message }];
+  throw e;
+}
+
+/** Works one option out from its saved inputs (never from a figure a browser sent). */
+export function computeOption(
+  option: DesignOption,
+  home: HomeInput | { problem: FieldError },
+  data: EngineData,
+  discounts?: OptionPricing['discounts'],
+): ComputedOption {
+  const discontinued = discontinuedOf(option, data.desk);
+  const blockers: BlockerRecord[] = [];
+  const block = (code: BlockerRecord['code'], message: string) =>
+    blockers.push({ code, optionId: option.id, message: `${option.name}: ${message}` });
+  if (option.discountRequest?.state === 'pending') block('discount-pending', DESK_MESSAGES.discountPending);
+  if (option.preliminary) block('preliminary', DESK_MESSAGES.preliminary);
+  const noEdits = option.takeoffEdits.map((stored) => ({ key: takeoffEditKey(stored.edit), stored, stale: null }));
+  if ('problem' in home) {
+    block('cannot-calculate', home.problem.message);
+    return { figures: null, discontinued, problems: [home.problem], edits: noEdits, blockers };
+  }
+  if (!option.design) {
+    const problem = { path: 'design', message: 'Choose the equipment for this option.' };
+    block('cannot-calculate', problem.message);
+    return { figures: null, discontinued, problems: [problem], edits: noEdits, blockers };
+  }
+  const own = dataFor(option, data);
+  const { pricing, sellRule } = calcPricing(option.pricing, data.desk, discounts);
+  let design: DesignResult;
+  try {
+    design = computeDesign({ home, design: option.design, catalog: own.catalog, priceBook: own.priceBook, pricing });
+  } catch (e) {
+    const problems = problemsOf(e);
+    block('cannot-calculate', problems.map((p) => p.message).join(' '));
+    return { figures: null, discontinued, problems, edits: noEdits, blockers };
+  }
+  const applied = applyTakeoffEdits(design.takeoff, option.takeoffEdits);
+  const price = priceOption({ lines: applied.lines.map((l) => l.line), pricing });
+  if (applied.edits.some((e) => e.stale)) block('takeoff-edits-stale', DESK_MESSAGES.takeoffStale);
+  for (const s of design.systems) {
+    if (!s.combination.ok) block('combination-refused', s.combination.warnings.join(' ') || `${s.name}: refused.`);
+    for (const w of s.refrigerant.warnings) block('limit-exceeded', w);
+    if (s.electrical.breakerA === null || s.electrical.wireAwg === null || !s.electrical.disconnectWithinSight)
+      for (const w of s.electrical.warnings) block('limit-exceeded', w);
+  }
+  const monthly = data.desk.financing.map((f) => ({
+    planKey: f.key,
+    name: f.name,
+    aprPercent: f.aprPercent,
+    months: f.months,
+    monthlyPaymentCents: monthlyPaymentCents({
+      principalCents: price.balanceCents,
+      aprPercent: f.aprPercent,
+      months: f.months,
+    }),
+  }));
+  const discountPercent = price.sellCents > 0 ? roundHalfUp((price.discountCents / price.sellCents) * 100, 2) : 0;
+  return {
+    figures: { design, lines: applied.lines, price, discountPercent, sellRule, monthly },
+    discontinued,
+    problems: [],
+    edits: applied.edits,
+    blockers,
+  };
+}

@@ -1,0 +1,140 @@
+import {
+  maySeeCost,
+  maySeePrice,
+  takeoffEditKey,
+  type DeskResponse,
+  type OptionPriceRecord,
+  type OptionRecord,
+  type OptionResultRecord,
+  type Role,
+  type TakeoffLineRecord,
+} from '@contract';
+import type { OptionPrice } from '@calc';
+import type { DeskLine, OptionFigures } from './desk-compute';
+import type { DeskView, OptionView } from './desk.service';
+
+const person = (u: { id: string; name: string } | null | undefined) => (u ? { id: u.id, name: u.name } : null);
+
+/** The price as the role may see it: the office everything; salespeople the customer's figures; installers nothing. */
+function presentPrice(f: OptionFigures, role: Role): OptionPriceRecord | null {
+  if (!maySeePrice(role)) return null;
+  const p: OptionPrice = f.price;
+  const out: OptionPriceRecord = {
+    sellCents: p.sellCents,
+    discountCents: p.discountCents,
+    discountPercent: f.discountPercent,
+    subtotalCents: p.subtotalCents,
+    taxCents: p.taxCents,
+    totalCents: p.totalCents,
+    depositCents: p.depositCents,
+    balanceCents: p.balanceCents,
+    monthlyPaymentCents: p.monthlyPaymentCents,
+  };
+  if (!maySeeCost(role)) return out;
+  return {
+    ...out,
+    equipmentCostCents: p.equipmentCostCents,
+    materialsCostCents: p.materialsCostCents,
+    laborCostCents: p.laborCostCents,
+    costCents: p.costCents,
+    grossMarginCents: p.subtotalCents - p.costCents,
+    grossMarginPercent: p.grossMarginPercent,
+    sellRule: f.sellRule,
+  };
+}
+
+function presentLine(l: DeskLine, role: Role): TakeoffLineRecord {
+  const base = {
+    itemKey: l.line.itemKey,
+    description: l.line.description,
+    unit: l.line.unit,
+    category: l.line.category,
+    derivation: l.line.derivation,
+    quantity: l.line.quantity,
+    generatedQuantity: l.generated?.quantity ?? null,
+    origin: l.origin,
+  };
+  if (!maySeeCost(role)) return base;
+  return {
+    ...base,
+    unitCostCents: l.line.unitCostCents,
+    generatedUnitCostCents: l.generated?.unitCostCents ?? null,
+    extendedCostCents: l.line.extendedCostCents,
+  };
+}
+
+function presentResult(v: OptionView, role: Role): OptionResultRecord | null {
+  const f = v.computed.figures;
+  if (!f) return null;
+  return {
+    zones: f.design.zones.map((z) => ({ ...z })),
+    systems: f.design.systems.map((s) => ({ ...s })),
+    takeoff: f.lines.map((l) => presentLine(l, role)),
+    price: presentPrice(f, role),
+    monthly: maySeePrice(role) ? f.monthly : [],
+    discontinued: v.computed.discontinued,
+    // calc's pricing warnings name the price book's gaps (no cost for an item): the office's business.
+    warnings: maySeeCost(role)
+      ? [...f.design.warnings]
+      : f.design.warnings.filter((w) => !w.startsWith('No price for')),
+    cautions: [...f.design.cautions],
+    isEstimate: true,
+  };
+}
+
+/** The only shape an option leaves the server in, by role (installers: no cost, margin, discount or price). */
+export function presentOption(v: OptionView, role: Role): OptionRecord {
+  const o = v.option;
+  const office = maySeeCost(role);
+  const priced = maySeePrice(role);
+  const pricing = priced
+    ? office
+      ? { ...o.pricing }
+      : { discounts: o.pricing.discounts, deposit: o.pricing.deposit, financingPlanKey: o.pricing.financingPlanKey }
+    : null;
+  return {
+    id: o.id,
+    jobId: o.job.id,
+    position: o.position,
+    name: o.name,
+    design: o.design ? { ...o.design } : null,
+    pricing,
+    takeoffEdits: office
+      ? v.computed.edits.map((e) => ({
+          key: takeoffEditKey(e.stored.edit),
+          edit: { ...e.stored.edit },
+          generated: e.stored.generated,
+          stale: e.stale,
+        }))
+      : [],
+    discountRequest: priced ? (o.discountRequest ?? null) : null,
+    preliminary: o.preliminary,
+    reviewedBy: person(o.reviewedBy),
+    reviewedAt: o.reviewedAt ? o.reviewedAt.toISOString() : null,
+    result: presentResult(v, role),
+    problems: v.computed.problems,
+    blockers: priced ? v.computed.blockers : v.computed.blockers.filter((b) => b.code !== 'discount-pending'),
+    version: o.version,
+    createdBy: person(o.createdBy),
+    createdAt: o.createdAt.toISOString(),
+    updatedAt: o.updatedAt.toISOString(),
+  };
+}
+
+export function presentDesk(v: DeskView, role: Role): DeskResponse {
+  const job = v.desk.job;
+  const blockers = maySeePrice(role) ? v.blockers : v.blockers.filter((b) => b.code !== 'discount-pending');
+  return {
+    jobId: job.id,
+    jobStatus: job.status,
+    options: v.options.map((o) => presentOption(o, role)),
+    readiness: {
+      markedReady:
+        job.readyAt && job.readyBy
+          ? { at: job.readyAt.toISOString(), by: { id: job.readyBy.id, name: job.readyBy.name } }
+          : null,
+      ready: Boolean(job.readyAt) && v.blockers.length === 0,
+      blockers,
+    },
+  };
+}

@@ -1,0 +1,173 @@
+import { z } from 'zod';
+import {
+  createOptionBody,
+  deskResponse,
+  discountDecisionBody,
+  optionResponse,
+  regenerateBody,
+  takeoffEditsBody,
+  updateOptionBody,
+} from '@contract';
+import { ANY_STAFF, JOB_EDITORS, NO_CONTENT, OFFICE, OWNER, type ApiRouter } from '../../lib/route';
+import { uuidParam } from '../../lib/validate';
+import { presentDesk, presentOption } from './desk.presenter';
+import {
+  createOption,
+  decideDiscount,
+  deleteOption,
+  getDesk,
+  getOption,
+  markReady,
+  regenerateTakeoff,
+  reviewOption,
+  setTakeoffEdits,
+  unmarkReady,
+  updateOption,
+  type OptionView,
+} from './desk.service';
+
+const jobParams = z.strictObject({ jobId: uuidParam });
+const optionParams = z.strictObject({ jobId: uuidParam, optionId: uuidParam });
+const etag = (out: { option: { version: number } }) => out.option.version;
+
+/** The estimator's desk: a job's priced options, worked out by calc from saved inputs on every answer. */
+export function deskRoutes(api: ApiRouter): void {
+  api.route({
+    method: 'get',
+    path: '/:jobId/desk',
+    policy: ANY_STAFF,
+    summary: "The job's options, each recomputed, and whether the job may be proposed",
+    params: jobParams,
+    response: deskResponse,
+    handler: async ({ service, params, actor }) => presentDesk(await getDesk(service, params.jobId), actor.role),
+  });
+  api.route({
+    method: 'post',
+    path: '/:jobId/options',
+    policy: JOB_EDITORS,
+    summary: 'A new option (at most three per job), empty, with inputs, or a copy of another option',
+    params: jobParams,
+    body: createOptionBody,
+    status: 201,
+    response: optionResponse,
+    versioned: etag,
+    handler: async ({ service, params, body, actor }) => ({
+      option: presentOption(await createOption(service, params.jobId, body), actor.role),
+    }),
+  });
+  api.route({
+    method: 'get',
+    path: '/:jobId/options/:optionId',
+    policy: ANY_STAFF,
+    params: optionParams,
+    response: optionResponse,
+    versioned: etag,
+    handler: async ({ service, params, actor }) => ({
+      option: presentOption(await getOption(service, params.jobId, params.optionId), actor.role),
+    }),
+  });
+  api.route({
+    method: 'patch',
+    path: '/:jobId/options/:optionId',
+    policy: JOB_EDITORS,
+    summary: "An option's name, design or pricing inputs; totals are never inputs",
+    params: optionParams,
+    body: updateOptionBody,
+    response: optionResponse,
+    versioned: etag,
+    handler: async ({ service, params, body, actor, ifMatch }) => {
+      const present = (v: OptionView) => presentOption(v, actor.role);
+      return { option: present(await updateOption(service, params.jobId, params.optionId, ifMatch, body, present)) };
+    },
+  });
+  api.route({
+    method: 'delete',
+    path: '/:jobId/options/:optionId',
+    policy: JOB_EDITORS,
+    params: optionParams,
+    response: NO_CONTENT,
+    versioned: true,
+    handler: async ({ service, params, actor, ifMatch }) => {
+      await deleteOption(service, params.jobId, params.optionId, ifMatch, (v) => presentOption(v, actor.role));
+    },
+  });
+  api.route({
+    method: 'put',
+    path: '/:jobId/options/:optionId/takeoff-edits',
+    policy: OFFICE,
+    summary: "The option's takeoff edits (changed, added and removed lines); the generated values are kept beside them",
+    params: optionParams,
+    body: takeoffEditsBody,
+    response: optionResponse,
+    versioned: etag,
+    handler: async ({ service, params, body, actor, ifMatch }) => {
+      const present = (v: OptionView) => presentOption(v, actor.role);
+      return {
+        option: present(await setTakeoffEdits(service, params.jobId, params.optionId, ifMatch, body.edits, present)),
+      };
+    },
+  });
+  api.route({
+    method: 'post',
+    path: '/:jobId/options/:optionId/takeoff/regenerate',
+    policy: OFFICE,
+    summary: 'Regenerates the takeoff: keeps the edits that still apply; accepts or drops those that no longer do',
+    params: optionParams,
+    body: regenerateBody,
+    response: optionResponse,
+    versioned: etag,
+    handler: async ({ service, params, body, actor, ifMatch }) => {
+      const present = (v: OptionView) => presentOption(v, actor.role);
+      return {
+        option: present(await regenerateTakeoff(service, params.jobId, params.optionId, ifMatch, body, present)),
+      };
+    },
+  });
+  api.route({
+    method: 'post',
+    path: '/:jobId/options/:optionId/discount-decision',
+    policy: OWNER,
+    summary: "The owner approves or denies a discount beyond someone's limit",
+    params: optionParams,
+    body: discountDecisionBody,
+    response: optionResponse,
+    versioned: etag,
+    handler: async ({ service, params, body, actor, ifMatch }) => {
+      const present = (v: OptionView) => presentOption(v, actor.role);
+      return {
+        option: present(await decideDiscount(service, params.jobId, params.optionId, ifMatch, body.approve, present)),
+      };
+    },
+  });
+  api.route({
+    method: 'post',
+    path: '/:jobId/options/:optionId/review',
+    policy: OFFICE,
+    summary: 'The office has reviewed a first price: the option may be proposed',
+    params: optionParams,
+    response: optionResponse,
+    versioned: etag,
+    handler: async ({ service, params, actor, ifMatch }) => {
+      const present = (v: OptionView) => presentOption(v, actor.role);
+      return { option: present(await reviewOption(service, params.jobId, params.optionId, ifMatch, present)) };
+    },
+  });
+  api.route({
+    method: 'post',
+    path: '/:jobId/ready',
+    policy: OFFICE,
+    summary: 'Marks the job ready to propose, or answers 422 with every reason it cannot be',
+    params: jobParams,
+    response: deskResponse,
+    handler: async ({ service, params, actor }) => presentDesk(await markReady(service, params.jobId), actor.role),
+  });
+  api.route({
+    method: 'delete',
+    path: '/:jobId/ready',
+    policy: OFFICE,
+    summary: 'Takes the ready-to-propose mark off',
+    params: jobParams,
+    response: deskResponse,
+    handler: async ({ service, params, actor }) => presentDesk(await unmarkReady(service, params.jobId), actor.role),
+  });
+}

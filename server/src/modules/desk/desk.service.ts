@@ -1,0 +1,415 @@
+import { isDeepStrictEqual } from 'node:util';
+import {
+  DESK_MESSAGES,
+  MAX_OPTIONS,
+  mayDecideDiscount,
+  mayEditTakeoff,
+  mayMarkReady,
+  mayReviewOption,
+  takeoffEditKey,
+  optionPricingSchema,
+  type BlockerRecord,
+  type OptionPricing,
+  type TakeoffEditInput,
+} from '@contract';
+import type { CatalogModel, DesignInput } from '@calc';
+import { ConflictError, ForbiddenError, NotFoundError, UnprocessableError, ValidationError } from '../../lib/errors';
+import type { ServiceContext } from '../../lib/service-context';
+import { assertVersion } from '../../lib/version-lock';
+import { CompanySchema } from '../companies/company.entity';
+import { UserSchema } from '../users/user.entity';
+import { computeOption, modelKeysOf, type ComputedOption } from './desk-compute';
+import { compute, listOptions, readDeskJob, type DeskJob } from './desk-read';
+import { DesignOptionSchema, type DesignOption, type StoredTakeoffEdit } from './option.entity';
+
+export interface OptionView {
+  readonly option: DesignOption;
+  readonly computed: ComputedOption;
+}
+
+export interface DeskView {
+  readonly desk: DeskJob;
+  readonly options: OptionView[];
+  readonly blockers: BlockerRecord[];
+}
+
+/** Everything the desk shows for a job: each option worked out, and why the job cannot be proposed yet. */
+export async function getDesk(ctx: ServiceContext, jobId: string): Promise<DeskView> {
+  const desk = await readDeskJob(ctx, jobId);
+  const options = (await listOptions(ctx, desk.job.id)).map((option) => ({ option, computed: compute(desk, option) }));
+  const blockers: BlockerRecord[] = options.length
+    ? options.flatMap((o) => o.computed.blockers)
+    : [{ code: 'no-options', optionId: null, message: DESK_MESSAGES.noOptions }];
+  return { desk, options, blockers };
+}
+
+async function findOption(ctx: ServiceContext, desk: DeskJob, optionId: string): Promise<DesignOption> {
+  const o = await ctx.em.findOne(
+    DesignOptionSchema,
+    { id: optionId, job: desk.job.id, company: ctx.actor.companyId },
+    { populate: ['createdBy', 'reviewedBy'] },
+  );
+  if (!o) throw new NotFoundError('The option');
+  return o;
+}
+
+export async function getOption(ctx: ServiceContext, jobId: string, optionId: string): Promise<OptionView> {
+  const desk = await readDeskJob(ctx, jobId);
+  const option = await findOption(ctx, desk, optionId);
+  return { option, computed: compute(desk, option) };
+}
+
+/** A write changes what the office reviewed: the job's "ready to propose" mark goes. */
+function touched(ctx: ServiceContext, desk: DeskJob): void {
+  if (desk.job.readyAt) {
+    desk.job.readyAt = null;
+    desk.job.readyBy = null;
+  }
+  desk.job.lastActivityAt = ctx.clock.now();
+}
+
+/**
+ * Checks a new design against the job and the catalog before anything is stored: calc's references
+ * (rooms, zones, equipment) with field paths, and that a newly chosen model is one the company still offers.
+ */
+function checkDesign(desk: DeskJob, option: DesignOption, design: DesignInput): Record<string, CatalogModel> {
+  const before = new Set(modelKeysOf(option.design));
+  const models = desk.data.desk.models;
+  const errors: { path: string; message: string }[] = [];
+  design.zones.forEach((z, i) => {
+    const m = models.get(z.indoorUnitKey);
+    if (!before.has(z.indoorUnitKey) && (!m || !m.active || m.kind !== 'indoor'))
+      errors.push({ path: `design.zones.${i}.indoorUnitKey`, message: 'Choose an indoor unit the catalog offers.' });
+  });
+  design.systems.forEach((s, i) => {
+    const m = models.get(s.outdoorUnitKey);
+    if (!before.has(s.outdoorUnitKey) && (!m || !m.active || !m.kind.startsWith('outdoor-')))
+      errors.push({
+        path: `design.systems.${i}.outdoorUnitKey`,
+        message: 'Choose an outdoor unit the catalog offers.',
+      });
+  });
+  if (errors.length) throw new ValidationError(errors);
+  if ('problem' in desk.home) throw new UnprocessableError(desk.home.problem.message, { errors: [desk.home.problem] });
+  const trial = computeOption(
+    { ...option, design, takeoffEdits: [], preliminary: false, discountRequest: null },
+    desk.home,
+    desk.data,
+  );
+  if (trial.problems.length)
+    throw new ValidationError(
+      trial.problems.map((p) => ({ path: p.path ? `design.${p.path}` : 'design', message: p.message })),
+    );
+  const chosen: Record<string, CatalogModel> = {};
+  for (const k of modelKeysOf(design)) {
+    const m = models.get(k) ?? option.chosenModels[k];
+    if (m) chosen[k] = m;
+  }
+  return chosen;
+}
+
+/** Only the office sets the sell rule and the tax; anyone who prices may set discounts, deposit and plan. */
+function checkPricingRights(ctx: ServiceContext, before: OptionPricing | null, after: OptionPricing): void {
+  if (mayEditTakeoff(ctx.actor.role)) return;
+  const office = (p: OptionPricing | null) => ({ sellRule: p?.sellRule ?? null, tax: p?.tax ?? null });
+  if (!isDeepStrictEqual(office(before), office(after)))
+    throw new ForbiddenError('Only an estimator or the owner sets the markup, margin or tax of an option.');
+}
+
+/**
+ * Discounts within the person's limit (the price book's discount limits, by role) apply at once; beyond
+ * it the option records a request for the owner, and the discounts already applied stay until approved.
+ */
+function applyDiscounts(
+  ctx: ServiceContext,
+  desk: DeskJob,
+  option: DesignOption,
+  pricing: OptionPricing,
+  who: { id: string; name: string },
+): OptionPricing {
+  const applied = option.pricing?.discounts ?? [];
+  if (isDeepStrictEqual(applied, pricing.discounts)) return pricing;
+  const limit = desk.data.desk.discountLimits.get(ctx.actor.role)?.maxPercent ?? 0;
+  if (pricing.discounts.length === 0 || mayDecideDiscount(ctx.actor.role)) {
+    option.discountRequest = null;
+    return pricing;
+  }
+  const trial = computeOption({ ...option, pricing }, desk.home, desk.data);
+  const percent = trial.figures?.discountPercent ?? 100;
+  if (trial.figures && percent <= limit) {
+    option.discountRequest = null;
+    return pricing;
+  }
+  option.discountRequest = {
+    state: 'pending',
+    discounts: pricing.discounts,
+    percent,
+    limitPercent: limit,
+    requestedBy: who,
+    requestedAt: ctx.clock.now().toISOString(),
+    decidedBy: null,
+    decidedAt: null,
+  };
+  return { ...pricing, discounts: applied };
+}
+
+export interface OptionInput {
+  name?: string;
+  design?: DesignInput;
+  pricing?: OptionPricing;
+}
+
+const me = (ctx: ServiceContext) => ({ id: ctx.actor.userId, name: ctx.actor.name });
+
+export async function createOption(
+  ctx: ServiceContext,
+  jobId: string,
+  input: OptionInput & { name: string; copyFromOptionId?: string },
+): Promise<OptionView> {
+  const { em, actor } = ctx;
+  const desk = await readDeskJob(ctx, jobId);
+  const existing = await listOptions(ctx, desk.job.id);
+  if (existing.length >= MAX_OPTIONS) throw new ConflictError(DESK_MESSAGES.tooManyOptions);
+  const taken = new Set(existing.map((o) => o.position));
+  const position = [1, 2, 3].find((p) => !taken.has(p)) ?? MAX_OPTIONS;
+  const source = input.copyFromOptionId ? existing.find((o) => o.id === input.copyFromOptionId) : undefined;
+  if (input.copyFromOptionId && !source)
+    throw new ValidationError([{ path: 'copyFromOptionId', message: 'Choose an option of this job to copy.' }]);
+  const option = em.create(DesignOptionSchema, {
+    company: em.getReference(CompanySchema, actor.companyId),
+    job: desk.job,
+    position,
+    name: input.name,
+    design: source?.design ?? null,
+    pricing: source?.pricing ?? optionPricingSchema.parse({}),
+    takeoffEdits: source?.takeoffEdits ?? [],
+    chosenModels: source?.chosenModels ?? {},
+    discountRequest: null,
+    preliminary: source ? source.preliminary && !mayReviewOption(actor.role) : false,
+    createdBy: em.getReference(UserSchema, actor.userId),
+  });
+  await applyInputs(ctx, desk, option, { design: input.design, pricing: input.pricing });
+  if (desk.job.status === 'walkthrough') desk.job.status = 'design';
+  touched(ctx, desk);
+  await em.flush();
+  await em.populate(option, ['createdBy']);
+  return { option, computed: compute(desk, option) };
+}
+
+async function applyInputs(
+  ctx: ServiceContext,
+  desk: DeskJob,
+  option: DesignOption,
+  input: OptionInput,
+): Promise<void> {
+  if (input.name !== undefined) option.name = input.name;
+  if (input.design !== undefined) {
+    option.chosenModels = checkDesign(desk, option, input.design);
+    option.design = input.design;
+  }
+  if (input.pricing !== undefined) {
+    checkPricingRights(ctx, option.pricing, input.pricing);
+    const plan = input.pricing.financingPlanKey;
+    if (plan && !desk.data.desk.financing.some((f) => f.key === plan))
+      throw new ValidationError([
+        { path: 'pricing.financingPlanKey', message: 'Choose one of the company’s financing plans.' },
+      ]);
+    option.pricing = applyDiscounts(ctx, desk, option, input.pricing, me(ctx));
+  }
+}
+
+export async function updateOption(
+  ctx: ServiceContext,
+  jobId: string,
+  optionId: string,
+  version: number,
+  input: OptionInput,
+  present: (v: OptionView) => unknown,
+): Promise<OptionView> {
+  const desk = await readDeskJob(ctx, jobId);
+  const option = await findOption(ctx, desk, optionId);
+  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
+  await applyInputs(ctx, desk, option, input);
+  touched(ctx, desk);
+  await ctx.em.flush();
+  return { option, computed: compute(desk, option) };
+}
+
+export async function deleteOption(
+  ctx: ServiceContext,
+  jobId: string,
+  optionId: string,
+  version: number,
+  present: (v: OptionView) => unknown,
+): Promise<void> {
+  const desk = await readDeskJob(ctx, jobId);
+  const option = await findOption(ctx, desk, optionId);
+  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
+  ctx.em.remove(option);
+  touched(ctx, desk);
+  await ctx.em.flush();
+}
+
+/**
+ * Replaces the option's takeoff edits. Each change or remove must name a line calc generates now; the
+ * generated value it is made against is stored beside it, so the desk can show both.
+ */
+export async function setTakeoffEdits(
+  ctx: ServiceContext,
+  jobId: string,
+  optionId: string,
+  version: number,
+  edits: TakeoffEditInput[],
+  present: (v: OptionView) => unknown,
+): Promise<OptionView> {
+  if (!mayEditTakeoff(ctx.actor.role)) throw new ForbiddenError('Only an estimator or the owner edits the takeoff.');
+  const desk = await readDeskJob(ctx, jobId);
+  const option = await findOption(ctx, desk, optionId);
+  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
+  const now = computeOption({ ...option, takeoffEdits: [] }, desk.home, desk.data);
+  if (!now.figures)
+    throw new UnprocessableError('The option cannot be worked out yet, so its takeoff cannot be edited.', {
+      errors: now.problems,
+    });
+  const generated = new Map(now.figures.lines.map((l) => [l.line.itemKey, l.line]));
+  const previous = new Map(option.takeoffEdits.map((s) => [takeoffEditKey(s.edit), s]));
+  const errors: { path: string; message: string }[] = [];
+  const stored: StoredTakeoffEdit[] = edits.map((edit, i) => {
+    if (edit.kind === 'add') return { edit, generated: null };
+    const line = generated.get(edit.itemKey);
+    const kept = previous.get(takeoffEditKey(edit));
+    // An edit sent back unchanged keeps the value it was made against (it may be stale: regenerate decides).
+    if (kept && isDeepStrictEqual(kept.edit, edit)) return kept;
+    if (!line) {
+      errors.push({ path: `edits.${i}.itemKey`, message: 'This line is not in the takeoff.' });
+      return { edit, generated: null };
+    }
+    return { edit, generated: { quantity: line.quantity, unitCostCents: line.unitCostCents } };
+  });
+  if (errors.length) throw new ValidationError(errors);
+  option.takeoffEdits = stored;
+  touched(ctx, desk);
+  await ctx.em.flush();
+  return { option, computed: compute(desk, option) };
+}
+
+/**
+ * After a design change: edits that still apply are kept; of those that no longer do, `accept` re-bases
+ * each on the line as generated now (kept and applied), `drop` removes it, and the rest are returned.
+ */
+export async function regenerateTakeoff(
+  ctx: ServiceContext,
+  jobId: string,
+  optionId: string,
+  version: number,
+  choice: { accept: string[]; drop: string[] },
+  present: (v: OptionView) => unknown,
+): Promise<OptionView> {
+  if (!mayEditTakeoff(ctx.actor.role)) throw new ForbiddenError('Only an estimator or the owner edits the takeoff.');
+  const desk = await readDeskJob(ctx, jobId);
+  const option = await findOption(ctx, desk, optionId);
+  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
+  const now = computeOption(option, desk.home, desk.data);
+  if (!now.figures) throw new UnprocessableError('The option cannot be worked out yet.', { errors: now.problems });
+  const generated = new Map(now.figures.lines.filter((l) => l.generated).map((l) => [l.line.itemKey, l.generated]));
+  const next: StoredTakeoffEdit[] = [];
+  for (const s of now.edits) {
+    if (!s.stale || !(choice.accept.includes(s.key) || choice.drop.includes(s.key))) {
+      next.push(s.stored);
+      continue;
+    }
+    if (choice.drop.includes(s.key)) continue;
+    const e = s.stored.edit;
+    const g = e.kind === 'add' ? undefined : generated.get(e.itemKey);
+    // Accepting an edit whose line is gone is dropping it: there is nothing left to change or remove.
+    if (g) next.push({ edit: e, generated: g });
+  }
+  option.takeoffEdits = next;
+  touched(ctx, desk);
+  await ctx.em.flush();
+  return { option, computed: compute(desk, option) };
+}
+
+/** The owner approves or denies a discount beyond someone's limit; the decision is recorded with who and when. */
+export async function decideDiscount(
+  ctx: ServiceContext,
+  jobId: string,
+  optionId: string,
+  version: number,
+  approve: boolean,
+  present: (v: OptionView) => unknown,
+): Promise<OptionView> {
+  const desk = await readDeskJob(ctx, jobId);
+  const option = await findOption(ctx, desk, optionId);
+  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
+  const req = option.discountRequest;
+  if (!req || req.state !== 'pending') throw new ConflictError('No discount on this option is waiting for a decision.');
+  const decided = {
+    ...req,
+    state: approve ? ('approved' as const) : ('denied' as const),
+    decidedBy: me(ctx),
+    decidedAt: ctx.clock.now().toISOString(),
+  };
+  option.discountRequest = decided;
+  if (approve) option.pricing = { ...option.pricing, discounts: req.discounts };
+  touched(ctx, desk);
+  await ctx.em.flush();
+  return { option, computed: compute(desk, option) };
+}
+
+/** The office reviews a first price from the phone: from now on it may be proposed. */
+export async function reviewOption(
+  ctx: ServiceContext,
+  jobId: string,
+  optionId: string,
+  version: number,
+  present: (v: OptionView) => unknown,
+): Promise<OptionView> {
+  const desk = await readDeskJob(ctx, jobId);
+  const option = await findOption(ctx, desk, optionId);
+  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
+  if (option.preliminary) {
+    option.preliminary = false;
+    option.reviewedBy = ctx.em.getReference(UserSchema, ctx.actor.userId);
+    option.reviewedAt = ctx.clock.now();
+    touched(ctx, desk);
+    await ctx.em.flush();
+    await ctx.em.populate(option, ['reviewedBy']);
+  }
+  return { option, computed: compute(desk, option) };
+}
+
+/** Marks the job ready to propose, or refuses with every reason (422, the blockers listed). */
+export async function markReady(ctx: ServiceContext, jobId: string): Promise<DeskView> {
+  if (!mayMarkReady(ctx.actor.role))
+    throw new ForbiddenError('Only an estimator or the owner marks a job ready to propose.');
+  const view = await getDesk(ctx, jobId);
+  const { job } = view.desk;
+  if (job.status !== 'design')
+    throw new UnprocessableError(`A job is marked ready to propose while in design; this one is ${job.status}.`, {
+      errors: [{ path: 'status', message: 'The job is not in design.' }],
+    });
+  if (view.blockers.length)
+    throw new UnprocessableError('The job cannot be marked ready to propose yet.', {
+      errors: view.blockers.map((b) => ({
+        path: b.optionId ? `options.${b.optionId}` : 'options',
+        message: b.message,
+      })),
+      blockers: view.blockers,
+    });
+  job.readyAt = ctx.clock.now();
+  job.readyBy = ctx.em.getReference(UserSchema, ctx.actor.userId);
+  await ctx.em.flush();
+  await ctx.em.populate(job, ['readyBy']);
+  return view;
+}
+
+export async function unmarkReady(ctx: ServiceContext, jobId: string): Promise<DeskView> {
+  if (!mayMarkReady(ctx.actor.role))
+    throw new ForbiddenError('Only an estimator or the owner marks a job ready to propose.');
+  const view = await getDesk(ctx, jobId);
+  view.desk.job.readyAt = null;
+  view.desk.job.readyBy = null;
+  await ctx.em.flush();
+  return view;
+}

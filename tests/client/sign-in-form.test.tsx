@@ -16,14 +16,14 @@ const user = {
   createdAt: '2026-01-01T00:00:00.000Z',
 };
 
-function renderSignIn(onSignedIn = vi.fn()) {
+function renderSignIn(onSignedIn = vi.fn(), email = 'owner@example.com', password = 'not the password') {
   render(
     <QueryClientProvider client={createQueryClient()}>
       <SignInForm onSignedIn={onSignedIn} />
     </QueryClientProvider>,
   );
-  fireEvent.change(screen.getByLabelText('E-mail'), { target: { value: 'owner@example.com' } });
-  fireEvent.change(screen.getByLabelText('Password'), { target: { value: 'not the password' } });
+  fireEvent.change(screen.getByLabelText('E-mail'), { target: { value: email } });
+  fireEvent.change(screen.getByLabelText('Password'), { target: { value: password } });
   fireEvent.click(screen.getByRole('button', { name: 'Sign in' }));
   return onSignedIn;
 }
@@ -40,6 +40,32 @@ describe('sign-in form', () => {
     const onSignedIn = renderSignIn();
     expect(await screen.findByRole('alert')).toHaveTextContent('The e-mail or password is not right.');
     expect(onSignedIn).not.toHaveBeenCalled();
+  });
+
+  it('checks the contract’s sign-in rules before sending anything', async () => {
+    const fetch = mockFetch({});
+    const onSignedIn = renderSignIn(vi.fn(), 'owner at example', '');
+    // The words are the contract's emailRule and signInPasswordRule messages.
+    expect(await screen.findByText('Enter a valid e-mail address.')).toBeInTheDocument();
+    expect(screen.getByText('Enter your password.')).toBeInTheDocument();
+    expect(screen.getByLabelText('E-mail')).toHaveAttribute('aria-invalid', 'true');
+    expect(screen.getByLabelText('E-mail')).toHaveFocus();
+    expect(screen.getByRole('alert')).toHaveTextContent('Check the highlighted fields.');
+    expect(fetch).not.toHaveBeenCalled();
+    expect(onSignedIn).not.toHaveBeenCalled();
+  });
+
+  it('puts a 400’s field errors on their fields', async () => {
+    mockFetch({
+      'GET /api/auth/csrf': json(200, { token: 't' }),
+      'POST /api/auth/login': problem(400, 'validation', 'Some fields need attention.', {
+        errors: [{ path: 'email', message: 'The server refused this address.' }],
+      }),
+    });
+    renderSignIn();
+    expect(await screen.findByText('The server refused this address.')).toBeInTheDocument();
+    expect(screen.getByLabelText('E-mail')).toHaveAttribute('aria-invalid', 'true');
+    expect(screen.getByRole('alert')).toHaveTextContent('Check the highlighted fields.');
   });
 
   it('says how long to wait after a 429 and holds the button', async () => {

@@ -1,5 +1,3 @@
-import { z } from 'zod';
-
 export interface FieldError {
   path: string;
   message: string;
@@ -39,13 +37,41 @@ export function isApiError(e: unknown): e is ApiError {
   return e instanceof ApiError;
 }
 
-const problemSchema = z.looseObject({
-  type: z.string().optional(),
-  title: z.string().optional(),
-  status: z.number().optional(),
-  detail: z.string().optional(),
-  errors: z.array(z.object({ path: z.string(), message: z.string() })).optional(),
-});
+interface Problem {
+  type?: string;
+  title?: string;
+  detail?: string;
+  errors: FieldError[];
+}
+
+const optionalString = (v: unknown): v is string | undefined => v === undefined || typeof v === 'string';
+const isFieldError = (v: unknown): v is FieldError =>
+  typeof v === 'object' &&
+  v !== null &&
+  typeof Reflect.get(v, 'path') === 'string' &&
+  typeof Reflect.get(v, 'message') === 'string';
+
+/**
+ * The problem+json members we use, or null when the body is not one. Checked by hand rather than
+ * with zod: this file is in the first chunk every page loads, sign-in included (issue 11).
+ */
+function readProblem(body: unknown): Problem | null {
+  if (typeof body !== 'object' || body === null || Array.isArray(body)) return null;
+  const type: unknown = Reflect.get(body, 'type');
+  const title: unknown = Reflect.get(body, 'title');
+  const detail: unknown = Reflect.get(body, 'detail');
+  const status: unknown = Reflect.get(body, 'status');
+  const errors: unknown = Reflect.get(body, 'errors');
+  if (!optionalString(type) || !optionalString(title) || !optionalString(detail)) return null;
+  if (status !== undefined && typeof status !== 'number') return null;
+  if (errors !== undefined && !(Array.isArray(errors) && errors.every(isFieldError))) return null;
+  return {
+    type,
+    title,
+    detail,
+    errors: errors === undefined ? [] : errors.map((e: FieldError) => ({ path: e.path, message: e.message })),
+  };
+}
 
 function parseRetryAfter(header: string | null): number | null {
   if (!header) return null;
@@ -79,16 +105,15 @@ export async function apiErrorFromResponse(res: Response): Promise<ApiError> {
   } catch {
     return new ApiError(base);
   }
-  const parsed = problemSchema.safeParse(body);
-  if (!parsed.success) return new ApiError(base);
-  const p = parsed.data;
+  const p = readProblem(body);
+  if (!p) return new ApiError(base);
   const code = p.type?.split('/').filter(Boolean).pop() ?? base.code;
   return new ApiError({
     ...base,
     code,
     title: p.title ?? base.title,
     detail: p.detail ?? base.detail,
-    errors: p.errors ?? [],
+    errors: p.errors,
   });
 }
 

@@ -3,8 +3,6 @@ import { emailRule, newPasswordRule, PASSWORD_MAX, PASSWORD_MIN, signInPasswordR
 
 /** Accounts: changing one's password, the e-mailed reset link, and the e-mail the app sends. */
 
-/** The client page a reset e-mail links to; the token follows in the fragment (`#token=…`). */
-export const RESET_PASSWORD_PATH = '/reset-password';
 /** What the new-password fields say about length, from the one pair of bounds. */
 export const PASSWORD_HINT = `${PASSWORD_MIN} to ${PASSWORD_MAX} characters. A short sentence is easy to remember and hard to guess.`;
 

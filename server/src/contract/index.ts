@@ -11,3 +11,4 @@ export * from './accounts';
 export * from './records';
 export * from './desk';
 export * from './api-version';
+export * from './links';

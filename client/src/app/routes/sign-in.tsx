@@ -1,16 +1,21 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { Link, redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
-import { z } from 'zod';
 import { PublicPage } from '../../components/layout/public-page';
 import { paths, safeNext } from '../../config/paths';
-import { meQueryOptions } from '../../features/auth/api/get-me';
+import { authKeys } from '../../features/auth/query-keys';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
-import { searchParamsObject } from '../../lib/route-params';
+import { apiFetch } from '../../lib/api-client';
 
-const searchSchema = z.object({ next: z.string().optional() }).catch({});
+/**
+ * The sign-in page is the first page a phone opens, so it loads no zod (issue 11: ≤ 120 KB of
+ * JavaScript): the loader needs only to know whether someone is signed in, and the page it sends
+ * them to reads and checks who (the signed-in guard parses /api/auth/session with the contract).
+ */
+const nextFrom = (search: URLSearchParams): string => safeNext(search.get('next'));
 
-function nextFrom(search: URLSearchParams): string {
-  return safeNext(searchSchema.parse(searchParamsObject(search)).next);
+function someoneSignedIn(body: unknown): boolean {
+  const me: unknown = typeof body === 'object' && body !== null ? Reflect.get(body, 'me') : null;
+  return typeof me === 'object' && me !== null;
 }
 
 export const clientLoader =
@@ -18,8 +23,10 @@ export const clientLoader =
   async ({ request }: LoaderFunctionArgs) => {
     // Already signed in: no reason to show the form. Always ask the server here — a cached
     // user may belong to a session that has just expired.
-    const me = await queryClient.fetchQuery({ ...meQueryOptions(), staleTime: 0 });
-    if (me) throw redirect(nextFrom(new URL(request.url).searchParams));
+    if (someoneSignedIn(await apiFetch('/api/auth/session')))
+      throw redirect(nextFrom(new URL(request.url).searchParams));
+    // Nobody is: a user kept from before (an ended session) must not let the guard wave them in.
+    queryClient.setQueryData(authKeys.me(), null);
     return null;
   };
 

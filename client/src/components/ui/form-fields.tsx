@@ -1,38 +1,7 @@
 import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
 import { useFormContext, type RegisterOptions } from 'react-hook-form';
 import { Button, type ButtonProps } from './button';
-
-const inputClass =
-  'block min-h-touch w-full rounded-md border border-line bg-white px-3 text-base text-ink-950 placeholder:text-muted aria-[invalid=true]:border-danger aria-[invalid=true]:bg-danger-soft/40';
-
-interface FieldShellProps {
-  id: string;
-  label: string;
-  hint?: ReactNode;
-  error?: string;
-  children: ReactNode;
-}
-
-function FieldShell({ id, label, hint, error, children }: FieldShellProps) {
-  return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="text-sm font-semibold text-ink-900">
-        {label}
-      </label>
-      {children}
-      {hint ? (
-        <p id={`${id}-hint`} className="text-sm text-muted">
-          {hint}
-        </p>
-      ) : null}
-      {error ? (
-        <p id={`${id}-error`} className="text-sm font-semibold text-danger">
-          {error}
-        </p>
-      ) : null}
-    </div>
-  );
-}
+import { FieldShell, inputClass } from './field-shell';
 
 function useField(name: string, hasHint: boolean) {
   const id = useId();

@@ -1,0 +1,34 @@
+import type { ReactNode } from 'react';
+
+export const inputClass =
+  'block min-h-touch w-full rounded-md border border-line bg-white px-3 text-base text-ink-950 placeholder:text-muted aria-[invalid=true]:border-danger aria-[invalid=true]:bg-danger-soft/40';
+
+export interface FieldShellProps {
+  id: string;
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+  children: ReactNode;
+}
+
+/** A field's label, hint and error around its input: the Form's fields use it, and so does the sign-in page, which has no react-hook-form. */
+export function FieldShell({ id, label, hint, error, children }: FieldShellProps) {
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="text-sm font-semibold text-ink-900">
+        {label}
+      </label>
+      {children}
+      {hint ? (
+        <p id={`${id}-hint`} className="text-sm text-muted">
+          {hint}
+        </p>
+      ) : null}
+      {error ? (
+        <p id={`${id}-error`} className="text-sm font-semibold text-danger">
+          {error}
+        </p>
+      ) : null}
+    </div>
+  );
+}

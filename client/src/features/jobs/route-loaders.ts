@@ -1,0 +1,43 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router-dom';
+import { z } from 'zod';
+import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../../lib/job-queries';
+import { getCurrentPerson } from '../../lib/offline/person';
+import { sharedWalkthroughQueue } from '../walkthrough/sync/walkthrough-queue';
+import { jobsQueryOptions } from './api/get-jobs';
+import { filtersFromSearch } from './components/jobs-filters';
+
+/**
+ * The job screens' loaders. They live apart from routes.tsx so that the router (in the entry
+ * chunk every page loads, sign-in included) does not carry the offline kit, zod and the job
+ * queries: React Router loads this module beside the page's component (issue 11).
+ */
+const jobIdParams = z.object({ jobId: z.uuid() });
+
+function jobIdOf(params: LoaderFunctionArgs['params']): string {
+  const parsed = jobIdParams.safeParse(params);
+  if (!parsed.success) throw new Response('Not found', { status: 404, statusText: 'Not found' });
+  return parsed.data.jobId;
+}
+
+export const jobsListLoader =
+  (queryClient: QueryClient) =>
+  ({ request }: LoaderFunctionArgs) => {
+    // Starting the queue replays what an earlier visit left waiting.
+    if (getCurrentPerson()) sharedWalkthroughQueue(queryClient);
+    void queryClient.prefetchQuery(jobsQueryOptions(filtersFromSearch(new URL(request.url).searchParams)));
+    return null;
+  };
+
+export const jobWithRoomsLoader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const jobId = jobIdOf(params);
+    if (getCurrentPerson()) sharedWalkthroughQueue(queryClient);
+    void queryClient.prefetchQuery(companySettingsQueryOptions());
+    await Promise.all([
+      queryClient.ensureQueryData(jobQueryOptions(jobId)),
+      queryClient.ensureQueryData(roomsQueryOptions(jobId)),
+    ]);
+    return null;
+  };

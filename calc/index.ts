@@ -78,3 +78,5 @@ export * from './src/pricing/discount';
 export * from './src/pricing/preliminary';
 export * from './src/pricing/explain-price';
 export * from './src/takeoff/regenerate';
+export * from './src/refrigerant/rules';
+export * from './src/electrical/voltage-drop';

@@ -25,7 +25,9 @@ describe('A2L room-area estimate inside the refrigerant plan', () => {
     // [PUB: IEC 60335-2-40:2018 Annex GG room-area formula and m1 = 6 × LFL, reference §11; LFL 0.307 kg/m³ back-calculated there]
     // 120 oz = 3.402 kg > m1 1.842 kg; wall head h0 1.8 m: A_min = (3.402 / (2.5 × 0.307^1.25 × 1.8))² ≈ 10.9 m² > 5 m²
     expect(plan.notes.some((n) => n.includes('minimum room-area rules apply'))).toBe(true);
-    expect(plan.warnings.some((w) => w.includes('smaller than the estimated minimum 10.9 m²'))).toBe(true);
+    // a room too small for the charge is a blocker now (the design cannot be marked ready), with its worked formula
+    expect(plan.blockers.some((w) => w.includes('smaller than the estimated minimum 10.9 m²'))).toBe(true);
+    expect(plan.explanations.find((e) => e.key === 'a2l:z')?.status).toBe('blocker');
   });
   it('R-410A is A1: no A2L caution', () => {
     // [PUB: ASHRAE 34 safety classes via CoolProp's designation table, reference §11]

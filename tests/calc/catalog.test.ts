@@ -156,10 +156,14 @@ describe('catalog queries for the estimator', () => {
   it('heating at 10 °F interpolates linearly between the 17 °F and 5 °F points', () => {
     // Linear interpolation of the maker's expanded data [PUB (secondary): Manual S practice]:
     // 7200 + (10 − 5) / (17 − 5) × (9000 − 7200) = 7950 Btu/h.
-    expect(modelCapacityAt({ model, mode: 'heating', outdoorF: 10 })).toEqual({ btuh: 7950, extrapolated: false });
+    expect(modelCapacityAt({ model, mode: 'heating', outdoorF: 10 })).toMatchObject({
+      btuh: 7950,
+      extrapolated: false,
+    });
   });
-  it('outside the rated points the nearest is held and flagged; no points → null', () => {
-    expect(modelCapacityAt({ model, mode: 'heating', outdoorF: -5 })).toEqual({ btuh: 7200, extrapolated: true });
+  it('outside the rated points the nearest segment is extended and flagged; no points → null', () => {
+    // linear extrapolation along 5 → 17 °F: 7200 + (−5 − 5) × (9000 − 7200) / 12 = 5700 Btu/h (issue 9: no longer held flat)
+    expect(modelCapacityAt({ model, mode: 'heating', outdoorF: -5 })).toMatchObject({ btuh: 5700, extrapolated: true });
     expect(modelCapacityAt({ model: { ...model, heatingPoints: [] }, mode: 'heating', outdoorF: 17 })).toBeNull();
   });
   it('the charge adder is looked up by liquid-line size', () => {

@@ -27,10 +27,13 @@ describe('full design on the worked three-room house', () => {
   });
   it('refrigerant: R-32 per-circuit pre-charge 25 ft at 0.16 oz/ft', () => {
     const ref = run().systems[0]?.refrigerant;
-    // 40 ft → (40 − 25) × 0.16 = 2.4 oz; 20 ft → 0; total 2.4; system 60 + 2.4 = 62.4 oz (1.769 kg < m1 1.842 kg)
-    expect(ref?.circuits.map((c) => c.extraChargeOz)).toEqual([2.4, 0]);
-    expect(ref?.extraChargeOz).toBe(2.4);
-    expect(ref?.totalChargeOz).toBe(62.4);
+    // Reference §8: max(0, L − L_pre) × adder on the INSTALLED length (issue 9: a pre-flared kit's coiled surplus
+    // holds refrigerant). 40 ft run → 50 ft kit: (50 − 25) × 0.16 = 4.0 oz; 20 ft → 25 ft kit → 0; system 60 + 4 = 64 oz
+    // (1.814 kg < m1 1.842 kg). Was 2.4 oz when the charge used the run and the takeoff bought the 50 ft kit.
+    expect(ref?.circuits.map((c) => c.extraChargeOz)).toEqual([4, 0]);
+    expect(ref?.circuits.map((c) => c.coiledFt)).toEqual([10, 5]);
+    expect(ref?.extraChargeOz).toBe(4);
+    expect(ref?.totalChargeOz).toBe(64);
     expect(ref?.circuits[0]?.adderSource).toBe('equipment');
     expect(ref?.safetyClass).toBe('A2L');
     expect(ref?.cautions).toContain(CAUTIONS.a2l);

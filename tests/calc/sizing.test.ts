@@ -136,14 +136,24 @@ describe('capacity interpolation', () => {
     { outdoorF: 105, btuh: 22000 },
   ];
   it('interpolates linearly: 100 °F halfway between 95 and 105 → 23,000', () => {
-    expect(capacityAtOutdoorF({ points, outdoorF: 100 })).toEqual({ btuh: 23000, extrapolated: false });
+    expect(capacityAtOutdoorF({ points, outdoorF: 100 })).toMatchObject({ btuh: 23000, extrapolated: false });
     expect(capacityAtOutdoorF({ points, outdoorF: 95 }).btuh).toBe(24000);
   });
-  it('holds the nearest point outside the data and flags it', () => {
-    expect(capacityAtOutdoorF({ points, outdoorF: 115 })).toEqual({ btuh: 22000, extrapolated: true });
-    expect(capacityAtOutdoorF({ points: [...points].reverse(), outdoorF: 70 })).toEqual({
-      btuh: 25500,
+  it('extends the nearest segment outside the data and flags it (issue 9: holding the last rating overstated capacity)', () => {
+    // Straight line through the two nearest points [PUB: linear extrapolation]:
+    // 22,000 + (115 − 105) × (22,000 − 24,000) / (105 − 95) = 20,000 Btu/h
+    expect(capacityAtOutdoorF({ points, outdoorF: 115 })).toMatchObject({
+      btuh: 20000,
       extrapolated: true,
+      method: 'extended',
+    });
+    // 25,500 + (70 − 82) × (24,000 − 25,500) / (95 − 82) = 25,500 + 1,384.615… Btu/h
+    expect(capacityAtOutdoorF({ points: [...points].reverse(), outdoorF: 70 }).btuh).toBeCloseTo(26884.615, 2);
+    // one point: nothing to extend along, so it is held and flagged
+    expect(capacityAtOutdoorF({ points: [{ outdoorF: 95, btuh: 12000 }], outdoorF: 100 })).toMatchObject({
+      btuh: 12000,
+      extrapolated: true,
+      method: 'held',
     });
   });
   it('heat-pump heating below the heat loss warns about supplemental heat', () => {

@@ -206,6 +206,7 @@ export function computeDesignFromParsed({
       ...systems.flatMap((s) => [
         ...s.sizing.warnings,
         ...s.combination.warnings,
+        ...s.refrigerant.blockers,
         ...s.refrigerant.warnings,
         ...s.electrical.warnings,
       ]),

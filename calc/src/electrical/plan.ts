@@ -2,6 +2,12 @@ import { CAUTIONS } from '../refrigerant/cautions';
 import type { ElectricalInput } from '../schemas/design';
 import { breakerSizeA, copperAmpacityA, copperWireAwg, disconnectWithinSight } from './nec';
 import { CalcError } from '../errors';
+import { explanation, input as inputOf, type Explanation } from '../explain/explanation';
+import { formatNumber, formatPercent, formatQuantity } from '../explain/format';
+import { roundHalfUp } from '../rounding';
+import { COPPER_OHMS_PER_KFT_75C, VOLTAGE_DROP_ADVISED_PERCENT, awgForVoltageDrop, voltageDropV } from './voltage-drop';
+
+const COPPER_R = (awg: number): number => COPPER_OHMS_PER_KFT_75C[awg] ?? 0;
 
 /** Electrical estimate for one outdoor unit's branch circuit. */
 export interface ElectricalPlan {
@@ -12,7 +18,17 @@ export interface ElectricalPlan {
   readonly wireAmpacityA: number | null;
   readonly ampacityColumnC: 60 | 75;
   readonly disconnectWithinSight: boolean;
+  /** Disconnect rating, A: 60 A up to a 60 A breaker, else 100 A [TRADE: the common non-fused sizes]. */
+  readonly disconnectA: number;
+  readonly supplyVoltage: number;
+  /** Drop over the run at the MCA with the chosen conductor, V and % (2 decimals); null without a conductor. */
+  readonly voltageDropV: number | null;
+  readonly voltageDropPercent: number | null;
+  /** The smaller-drop conductor advised when the chosen one drops more than 3 %, else null. */
+  readonly voltageDropAwg: number | null;
   readonly warnings: readonly string[];
+  /** Conductor, breaker, disconnect and voltage drop, each with its why. */
+  readonly explanations: readonly Explanation[];
   readonly caution: string;
   readonly isEstimate: true;
 }
@@ -26,12 +42,19 @@ export interface ElectricalPlan {
 export function electricalPlan({
   mcaA,
   mocpA,
-  input,
+  input: wiring,
+  keyPrefix = '',
+  label = 'outdoor unit',
 }: {
   readonly mcaA: number;
   readonly mocpA: number;
   readonly input: ElectricalInput;
+  /** Prefix of the explanations' keys (e.g. "sys-1:"), so two circuits in one design stay apart. */
+  readonly keyPrefix?: string;
+  /** What the circuit feeds, for the words ("outdoor unit", "heat kit"). */
+  readonly label?: string;
 }): ElectricalPlan {
+  const input = wiring;
   const warnings: string[] = [];
   const column: 60 | 75 = input.wiringMethod === 'thhn-conduit' ? input.terminationC : 60;
   let wireAwg: number | null = null;
@@ -58,19 +81,107 @@ export function electricalPlan({
     warnings.push(
       'The disconnect must be within sight of the outdoor unit: visible from it and no more than 50 ft away (NEC 440.14).',
     );
-  if (input.circuitLengthFt > 100)
+  const volts = input.supplyVoltage ?? 240;
+  const amp = wireAwg === null ? null : copperAmpacityA({ awg: wireAwg, terminationC: column });
+  const dropV =
+    wireAwg === null ? null : voltageDropV({ awg: wireAwg, lengthFt: input.circuitLengthFt, currentA: mcaA });
+  const dropPct = dropV === null ? null : (dropV / volts) * 100;
+  const advised =
+    wireAwg !== null && dropPct !== null && dropPct > VOLTAGE_DROP_ADVISED_PERCENT + 1e-9
+      ? awgForVoltageDrop({ fromAwg: wireAwg, lengthFt: input.circuitLengthFt, currentA: mcaA, volts })
+      : null;
+  if (dropPct !== null && dropPct > VOLTAGE_DROP_ADVISED_PERCENT + 1e-9)
     warnings.push(
-      `The circuit runs ${input.circuitLengthFt} ft: the electrician should check voltage drop and may need a larger wire.`,
+      `The ${input.circuitLengthFt} ft run drops ${formatPercent(dropPct, 1)} of ${volts} V at the MCA on ${wireAwg} AWG: ${advised === null ? 'the electrician sizes a larger conductor' : `${advised} AWG keeps it within ${VOLTAGE_DROP_ADVISED_PERCENT} %`}.`,
+    );
+  const disconnectA = (breakerA ?? mocpA) <= 60 ? 60 : 100;
+  const A = (v: number) => formatQuantity(v, 'A', 1);
+  const method =
+    input.wiringMethod === 'thhn-conduit'
+      ? `THHN in conduit, ${input.terminationC} °C terminations`
+      : `${input.wiringMethod === 'nm-b' ? 'NM-B' : 'UF-B'} cable (60 °C column)`;
+  const explanations: Explanation[] = [
+    explanation({
+      key: `${keyPrefix}elec:conductor`,
+      label: `Conductor, ${label}`,
+      value: wireAwg ?? 0,
+      unit: 'AWG',
+      valueText: wireAwg === null ? 'sized by the electrician' : `${wireAwg} AWG copper`,
+      text:
+        wireAwg === null || amp === null
+          ? `MCA ${A(mcaA)} is beyond the table rows covered here`
+          : `MCA ${A(mcaA)} → smallest copper with ampacity ≥ MCA in the ${column} °C column: ${wireAwg} AWG (${A(amp)}), ${method}`,
+      inputs: [inputOf('MCA', mcaA, 'A', A(mcaA))],
+      status: wireAwg === null ? 'warning' : 'ok',
+      verdict: 'An estimate: a licensed electrician confirms it.',
+      source: 'NEC 440.4(B)/440.35 (nameplate MCA), Table 310.16, 110.14(C), 334.80',
+    }),
+    explanation({
+      key: `${keyPrefix}elec:breaker`,
+      label: `Breaker, ${label}`,
+      value: breakerA ?? 0,
+      unit: 'A',
+      valueText: breakerA === null ? 'none fits' : `${breakerA} A two-pole`,
+      text:
+        breakerA === null
+          ? `No standard rating lies between MCA ${A(mcaA)} and MOCP ${A(mocpA)}`
+          : `Largest standard rating ≤ MOCP ${A(mocpA)} and ≥ MCA ${A(mcaA)}: ${breakerA} A`,
+      inputs: [inputOf('MCA', mcaA, 'A', A(mcaA)), inputOf('MOCP', mocpA, 'A', A(mocpA))],
+      status: breakerA === null ? 'blocker' : 'ok',
+      source: 'NEC 440.22 / nameplate MOCP; standard ratings NEC 240.6(A)',
+    }),
+    explanation({
+      key: `${keyPrefix}elec:disconnect`,
+      label: `Disconnect, ${label}`,
+      value: disconnectA,
+      unit: 'A',
+      valueText: `${disconnectA} A non-fused`,
+      text: `${disconnectA} A non-fused for a ${breakerA ?? mocpA} A circuit, ${formatQuantity(input.disconnectDistanceFt, 'ft', 1)} from the unit${input.disconnectVisible ? ', in sight' : ', not in sight'}`,
+      status: withinSight ? 'ok' : 'blocker',
+      verdict: withinSight
+        ? 'Within sight (visible and ≤ 50 ft).'
+        : 'Not within sight: it must be visible from the unit and ≤ 50 ft away.',
+      source: 'NEC 440.14; "within sight" NEC Art. 100',
+    }),
+  ];
+  if (dropV !== null && dropPct !== null && wireAwg !== null)
+    explanations.push(
+      explanation({
+        key: `${keyPrefix}elec:voltage-drop`,
+        label: `Voltage drop, ${label}`,
+        value: roundHalfUp(dropPct, 2),
+        unit: '%',
+        valueText: formatPercent(dropPct, 1),
+        text: `2 × ${formatQuantity(input.circuitLengthFt, 'ft', 1)} × ${A(mcaA)} × ${formatNumber(COPPER_R(wireAwg), 3, { trim: true })} Ω/1000 ft = ${formatQuantity(dropV, 'V', 2)} = ${formatPercent(dropPct, 1)} of ${volts} V`,
+        inputs: [
+          inputOf('Run', input.circuitLengthFt, 'ft', formatQuantity(input.circuitLengthFt, 'ft', 1)),
+          inputOf('Current (MCA)', mcaA, 'A', A(mcaA)),
+          inputOf('Supply', volts, 'V', `${volts} V`),
+        ],
+        verdict:
+          dropPct <= VOLTAGE_DROP_ADVISED_PERCENT + 1e-9
+            ? `Within the advised ${VOLTAGE_DROP_ADVISED_PERCENT} %.`
+            : `Above the advised ${VOLTAGE_DROP_ADVISED_PERCENT} %${advised === null ? '' : `: ${advised} AWG keeps it within`}.`,
+        status: dropPct <= VOLTAGE_DROP_ADVISED_PERCENT + 1e-9 ? 'ok' : 'warning',
+        source:
+          'Ohm’s law over the loop; copper resistance at 75 °C, NEC Ch. 9 Table 8; 3 % advice, NEC 210.19(A) note',
+      }),
     );
   return {
     mcaA,
     mocpA,
     breakerA,
     wireAwg,
-    wireAmpacityA: wireAwg === null ? null : copperAmpacityA({ awg: wireAwg, terminationC: column }),
+    wireAmpacityA: amp,
     ampacityColumnC: column,
     disconnectWithinSight: withinSight,
+    disconnectA,
+    supplyVoltage: volts,
+    voltageDropV: dropV === null ? null : roundHalfUp(dropV, 2),
+    voltageDropPercent: dropPct === null ? null : roundHalfUp(dropPct, 2),
+    voltageDropAwg: advised,
     warnings,
+    explanations,
     caution: CAUTIONS.electrical,
     isEstimate: true,
   };

@@ -1,10 +1,13 @@
+import { explanation, input, type Explanation } from '../explain/explanation';
+import { formatNumber, formatQuantity } from '../explain/format';
 import { roundHalfUp } from '../rounding';
 import type { Circuit } from '../schemas/design';
 import type { IndoorUnit, OutdoorUnit } from '../schemas/equipment';
+import { TAKEOFF_DEFAULTS } from '../takeoff/defaults';
 import { gFromOz } from '../units';
 import { A2L_INSTALL_HEIGHT_M, REFRIGERANT_INFO, a2lM1Kg, a2lMinRoomAreaM2, isA2l } from './a2l';
 import { CAUTIONS } from './cautions';
-import { LIQUID_DENSITY_100F_LB_FT3, extraChargeOz, liquidLineChargeOzPerFt } from './charge';
+import { LIQUID_DENSITY_100F_LB_FT3, liquidLineChargeOzPerFt } from './charge';
 import { tubeLabel } from './tube';
 
 /** A circuit to plan: the line set and the indoor unit (and the floor area where it sits, m²). */
@@ -12,6 +15,8 @@ export interface CircuitToPlan {
   readonly circuit: Circuit;
   readonly indoor: IndoorUnit;
   readonly roomAreaM2: number;
+  /** The zone's name, for the words (else its key). */
+  readonly zoneName?: string;
 }
 
 export interface CircuitCharge {
@@ -20,34 +25,94 @@ export interface CircuitCharge {
   readonly suctionOdIn: number;
   readonly liquidLabel: string;
   readonly suctionLabel: string;
+  /** The run, ft. */
   readonly lengthFt: number;
+  /** The length installed, ft: the kit's length for a pre-flared kit (its surplus coiled), else the run. */
+  readonly installedLengthFt: number;
+  readonly lineSet: 'kit' | 'field-cut';
+  readonly kitLengthFt: number | null;
+  readonly coiledFt: number;
   readonly liftFt: number;
+  readonly liftDirection: 'indoor-above' | 'indoor-below';
+  /** Length charged beyond the pre-charge, ft (this circuit's share for a system-total pre-charge). */
+  readonly chargedLengthFt: number;
   readonly adderOzPerFt: number;
-  /** 'equipment' = maker's adder; 'estimate' = liquid-full tube volume at 100 °F. */
+  /** 'equipment' = maker's adder for this liquid size; 'estimate' = liquid-full tube volume at 100 °F. */
   readonly adderSource: 'equipment' | 'estimate';
   readonly extraChargeOz: number;
   readonly warnings: readonly string[];
+  /** Limits this circuit exceeds (the design cannot be marked ready). */
+  readonly blockers: readonly string[];
+  readonly explanation: Explanation;
 }
 
 export interface RefrigerantPlan {
   readonly refrigerant: OutdoorUnit['refrigerant'];
   readonly safetyClass: string;
   readonly circuits: readonly CircuitCharge[];
+  /** Sum of the runs, ft. */
   readonly totalLengthFt: number;
+  /** Sum of the installed lengths, ft (kits' coiled surplus included). */
+  readonly totalInstalledLengthFt: number;
+  /** Largest height between two indoor units of this system, ft (0 with one). */
+  readonly indoorHeightDifferenceFt: number;
   readonly extraChargeOz: number;
   readonly factoryChargeOz: number;
   readonly totalChargeOz: number;
   readonly warnings: readonly string[];
+  readonly blockers: readonly string[];
   readonly notes: readonly string[];
   readonly cautions: readonly string[];
+  /** Extra charge in total, total system charge, A2L check: each with its formula. */
+  readonly explanations: readonly Explanation[];
   readonly isEstimate: true;
 }
 
+/** Shortest stock kit at least as long as the run, ft; null when none is. [TRADE: stock kit lengths] */
+function stockKit(lengthFt: number): number | null {
+  for (const k of TAKEOFF_DEFAULTS.lineSetKitLengthsFt) if (k >= lengthFt) return k;
+  return null;
+}
+
+/** The installed length of a circuit: the kit's length for a pre-flared kit, else the run. */
+export function installedLength(c: Circuit): {
+  lineSet: 'kit' | 'field-cut';
+  kitLengthFt: number | null;
+  installedFt: number;
+} {
+  if (c.lineSet === 'field-cut') return { lineSet: 'field-cut', kitLengthFt: null, installedFt: c.lengthFt };
+  const kit = c.kitLengthFt !== undefined && c.kitLengthFt >= c.lengthFt ? c.kitLengthFt : stockKit(c.lengthFt);
+  if (kit === null) return { lineSet: 'field-cut', kitLengthFt: null, installedFt: c.lengthFt };
+  return { lineSet: 'kit', kitLengthFt: kit, installedFt: kit };
+}
+
 /**
- * Refrigerant plan for one outdoor unit: per-circuit extra charge beyond the pre-charged
- * length with the maker's adder (else a labelled tube-volume estimate), totals, length and
- * lift limits, A2L room-area check. Charges in oz, rounded half-up to 0.1 oz per circuit;
- * the system extra is the sum of the rounded circuits.
+ * The maker's adder for a liquid-line size, oz/ft: the per-size adder when the data lists that size,
+ * else the single adder when it is for that size (or names none); null → no maker figure for this size.
+ */
+export function adderForLiquid(outdoor: OutdoorUnit, liquidOdIn: number): number | null {
+  const listed = outdoor.chargeAdders?.find((a) => a.liquidOdIn === liquidOdIn);
+  if (listed) return listed.ozPerFt;
+  if (outdoor.adderOzPerFt === undefined) return null;
+  if (outdoor.liquidOdIn !== undefined && outdoor.liquidOdIn !== liquidOdIn) return null;
+  if (outdoor.chargeAdders !== undefined && outdoor.chargeAdders.length > 0) return null;
+  return outdoor.adderOzPerFt;
+}
+
+const ft = (v: number) => formatQuantity(v, 'ft', 1);
+const oz = (v: number) => formatQuantity(v, 'oz', 1);
+const rate = (v: number) => `${formatNumber(v, 3, { trim: true })} oz/ft`;
+
+/**
+ * Refrigerant plan for one outdoor unit. Per circuit: the installed length (a pre-flared kit's
+ * coiled surplus counts, it holds refrigerant too), the maker's adder for that circuit's liquid size
+ * (else a labelled tube-volume estimate), the extra charge beyond the pre-charged length
+ * [reference §8: max(0, L − L_pre) × adder, never negative]. A 'system-total' pre-charge is
+ * subtracted once from the sum of the installed lengths and the remainder shared by the circuits in
+ * proportion to their installed length, each at its own adder [OWN: the allocation; issue 9's
+ * correction]. Limits: run length (min/max), total length, lift, height between indoor units; A2L
+ * room-area check [IEC 60335-2-40:2018 Annex GG]. Charges in oz, rounded half-up to 0.1 oz per
+ * circuit; the system extra is the sum of the rounded circuits.
  */
 export function refrigerantPlan({
   outdoor,
@@ -56,46 +121,66 @@ export function refrigerantPlan({
   readonly outdoor: OutdoorUnit;
   readonly circuits: readonly CircuitToPlan[];
 }): RefrigerantPlan {
-  const totalLength = circuits.reduce((s, c) => s + c.circuit.lengthFt, 0);
+  let totalLength = 0;
+  let totalInstalled = 0;
+  const installed = circuits.map(({ circuit }) => {
+    const i = installedLength(circuit);
+    totalLength += circuit.lengthFt;
+    totalInstalled += i.installedFt;
+    return i;
+  });
   const warnings: string[] = [];
-  const systemExtraRaw =
-    outdoor.prechargeBasis === 'system-total' && outdoor.adderOzPerFt !== undefined
-      ? extraChargeOz({
-          lengthFt: totalLength,
-          prechargedLengthFt: outdoor.prechargedLengthFt,
-          ozPerFt: outdoor.adderOzPerFt,
-        })
-      : null;
-  const planned = circuits.map(({ circuit, indoor }): CircuitCharge => {
+  const blockers: string[] = [];
+  const systemBasis = outdoor.prechargeBasis === 'system-total';
+  const systemBeyond = systemBasis ? Math.max(0, totalInstalled - outdoor.prechargedLengthFt) : 0;
+  let anyEstimate = false;
+  const planned = circuits.map(({ circuit, indoor, zoneName }, idx): CircuitCharge => {
+    const name = zoneName ?? circuit.zoneKey;
+    const inst = installed[idx] ?? { lineSet: 'field-cut' as const, kitLengthFt: null, installedFt: circuit.lengthFt };
     const liquidOdIn = circuit.liquidOdIn ?? indoor.liquidOdIn;
     const suctionOdIn = circuit.suctionOdIn ?? indoor.suctionOdIn;
+    const maker = adderForLiquid(outdoor, liquidOdIn);
     const adder =
-      outdoor.adderOzPerFt ??
+      maker ??
       liquidLineChargeOzPerFt({
         odIn: liquidOdIn,
         liquidDensityLbPerFt3: LIQUID_DENSITY_100F_LB_FT3[outdoor.refrigerant],
       });
-    const raw =
-      systemExtraRaw !== null && totalLength > 0
-        ? systemExtraRaw * (circuit.lengthFt / totalLength)
-        : extraChargeOz({ lengthFt: circuit.lengthFt, prechargedLengthFt: outdoor.prechargedLengthFt, ozPerFt: adder });
+    if (maker === null) anyEstimate = true;
+    const charged = systemBasis
+      ? totalInstalled > 0
+        ? systemBeyond * (inst.installedFt / totalInstalled)
+        : 0
+      : Math.max(0, inst.installedFt - outdoor.prechargedLengthFt);
+    const extra = roundHalfUp(charged * adder, 1);
+    const coiled = inst.installedFt - circuit.lengthFt;
     const w: string[] = [];
+    const b: string[] = [];
     if (circuit.lengthFt > outdoor.maxLineLengthFt)
-      w.push(
-        `Line set for ${circuit.zoneKey} is ${circuit.lengthFt} ft; the maker allows at most ${outdoor.maxLineLengthFt} ft.`,
+      b.push(
+        `Line set for ${name} is ${ft(circuit.lengthFt)}; the maker allows at most ${ft(outdoor.maxLineLengthFt)}.`,
       );
-    if (circuit.lengthFt < outdoor.minLineLengthFt)
-      w.push(
-        `Line set for ${circuit.zoneKey} is ${circuit.lengthFt} ft; the maker asks for at least ${outdoor.minLineLengthFt} ft.`,
+    if (inst.installedFt < outdoor.minLineLengthFt)
+      b.push(
+        `Line set for ${name} is ${ft(inst.installedFt)}; the maker asks for at least ${ft(outdoor.minLineLengthFt)}.`,
       );
     if (circuit.liftFt > outdoor.maxLiftFt)
-      w.push(`Lift for ${circuit.zoneKey} is ${circuit.liftFt} ft; the maker allows at most ${outdoor.maxLiftFt} ft.`);
-    if (circuit.liftFt > circuit.lengthFt)
-      w.push(`Lift for ${circuit.zoneKey} is more than its line-set length: check both.`);
+      b.push(`Lift for ${name} is ${ft(circuit.liftFt)}; the maker allows at most ${ft(outdoor.maxLiftFt)}.`);
+    if (circuit.liftFt > circuit.lengthFt) b.push(`Lift for ${name} is more than its line-set length: check both.`);
     if (liquidOdIn !== indoor.liquidOdIn)
       w.push(
-        `Liquid line for ${circuit.zoneKey} differs from the indoor unit's connection: check the maker's charge rule for a changed line size.`,
+        `Liquid line for ${name} (${tubeLabel({ odIn: liquidOdIn })} in) differs from the indoor unit's connection (${tubeLabel({ odIn: indoor.liquidOdIn })} in): use reducers and the maker's charge rule for that size.`,
       );
+    const runText =
+      inst.lineSet === 'kit' && coiled > 0
+        ? `${ft(inst.installedFt)} installed (${ft(circuit.lengthFt)} run + ${ft(coiled)} of the ${ft(inst.installedFt)} kit coiled)`
+        : `${ft(inst.installedFt)} installed`;
+    const adderText = `${rate(adder)}${maker === null ? ' (estimate: liquid-full line at 100 °F)' : ''}`;
+    const text = systemBasis
+      ? `${runText}; system: ${ft(totalInstalled)} installed − ${ft(outdoor.prechargedLengthFt)} pre-charged = ${ft(systemBeyond)}, this circuit's share ${ft(inst.installedFt)} ÷ ${ft(totalInstalled)} = ${ft(roundHalfUp(charged, 1))} × ${adderText} = ${oz(extra)}`
+      : inst.installedFt <= outdoor.prechargedLengthFt
+        ? `${runText} ≤ ${ft(outdoor.prechargedLengthFt)} pre-charged: nothing to add (no charge is removed for a short run) = ${oz(0)}`
+        : `${runText} − ${ft(outdoor.prechargedLengthFt)} pre-charged = ${ft(roundHalfUp(charged, 1))} × ${adderText} = ${oz(extra)}`;
     return {
       zoneKey: circuit.zoneKey,
       liquidOdIn,
@@ -103,18 +188,64 @@ export function refrigerantPlan({
       liquidLabel: tubeLabel({ odIn: liquidOdIn }),
       suctionLabel: tubeLabel({ odIn: suctionOdIn }),
       lengthFt: circuit.lengthFt,
+      installedLengthFt: inst.installedFt,
+      lineSet: inst.lineSet,
+      kitLengthFt: inst.kitLengthFt,
+      coiledFt: coiled,
       liftFt: circuit.liftFt,
+      liftDirection: circuit.liftDirection ?? 'indoor-above',
+      chargedLengthFt: roundHalfUp(charged, 2),
       adderOzPerFt: roundHalfUp(adder, 3),
-      adderSource: outdoor.adderOzPerFt === undefined ? 'estimate' : 'equipment',
-      extraChargeOz: roundHalfUp(raw, 1),
+      adderSource: maker === null ? 'estimate' : 'equipment',
+      extraChargeOz: extra,
       warnings: w,
+      blockers: b,
+      explanation: explanation({
+        key: `charge:${circuit.zoneKey}`,
+        label: `Extra charge, ${name} circuit`,
+        value: extra,
+        unit: 'oz',
+        valueText: oz(extra),
+        text,
+        inputs: [
+          input('Run', circuit.lengthFt, 'ft', ft(circuit.lengthFt)),
+          input('Installed', inst.installedFt, 'ft', ft(inst.installedFt)),
+          input(
+            systemBasis ? 'System pre-charged length' : 'Pre-charged length',
+            outdoor.prechargedLengthFt,
+            'ft',
+            ft(outdoor.prechargedLengthFt),
+          ),
+          input('Adder', adder, 'oz/ft', rate(adder)),
+        ],
+        verdict:
+          inst.lineSet === 'kit' && coiled > 0
+            ? `The kit's ${ft(coiled)} surplus is coiled, not cut: it holds refrigerant, so it is charged.`
+            : undefined,
+        status: maker === null ? 'note' : 'ok',
+        source:
+          maker === null
+            ? 'Estimate from ASTM B280 tube volume and the liquid density at 100 °F; use the maker’s adder when you have it'
+            : "The maker's pre-charged length and adder for this liquid size",
+      }),
     };
   });
-  if (outdoor.maxTotalLineLengthFt !== undefined && totalLength > outdoor.maxTotalLineLengthFt) {
-    warnings.push(
-      `Total line-set length is ${totalLength} ft; the maker allows at most ${outdoor.maxTotalLineLengthFt} ft for this outdoor unit.`,
+  if (outdoor.maxTotalLineLengthFt !== undefined && totalInstalled > outdoor.maxTotalLineLengthFt)
+    blockers.push(
+      `Total line-set length is ${ft(totalInstalled)}; the maker allows at most ${ft(outdoor.maxTotalLineLengthFt)} for this outdoor unit.`,
     );
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const c of planned) {
+    const h = c.liftDirection === 'indoor-below' ? -c.liftFt : c.liftFt;
+    if (h < lo) lo = h;
+    if (h > hi) hi = h;
   }
+  const heightDiff = planned.length > 1 ? hi - lo : 0;
+  if (outdoor.maxIndoorHeightDiffFt !== undefined && heightDiff > outdoor.maxIndoorHeightDiffFt)
+    blockers.push(
+      `The indoor units are ${ft(heightDiff)} apart in height; the maker allows at most ${ft(outdoor.maxIndoorHeightDiffFt)} between indoor units.`,
+    );
   const extra = roundHalfUp(
     planned.reduce((s, c) => s + c.extraChargeOz, 0),
     1,
@@ -122,31 +253,88 @@ export function refrigerantPlan({
   const total = roundHalfUp(outdoor.factoryChargeOz + extra, 1);
   const notes: string[] = [];
   const cautions: string[] = [CAUTIONS.makerAndCode, CAUTIONS.refrigerant, CAUTIONS.pressureTest];
-  if (planned.some((c) => c.adderSource === 'estimate'))
+  if (anyEstimate)
     notes.push(
-      "Estimate: the equipment data has no charge adder, so the extra charge assumes a liquid-full line at 100 °F. Use the maker's figure when you have it.",
+      "Estimate: the equipment data has no charge adder for this liquid size, so the extra charge assumes a liquid-full line at 100 °F. Use the maker's figure when you have it.",
     );
+  const coiledKits = planned.filter((c) => c.coiledFt > 0);
+  if (coiledKits.length > 0)
+    notes.push(
+      `Pre-flared kits longer than the run: ${coiledKits.map((c) => `${ft(c.coiledFt)} coiled on the ${c.zoneKey} circuit`).join(', ')}. Coil the surplus horizontally near the outdoor unit as the maker shows; it is counted in the charge.`,
+    );
+  const explanations: Explanation[] = [
+    explanation({
+      key: 'charge:extra-total',
+      label: 'Extra charge, all circuits',
+      value: extra,
+      unit: 'oz',
+      valueText: oz(extra),
+      text:
+        planned.length === 0
+          ? `No circuits = ${oz(0)}`
+          : `${planned.map((c) => oz(c.extraChargeOz)).join(' + ')} = ${oz(extra)}`,
+      status: 'ok',
+    }),
+    explanation({
+      key: 'charge:system-total',
+      label: 'Total system charge',
+      value: total,
+      unit: 'oz',
+      valueText: `${oz(total)} (${formatQuantity(gFromOz({ oz: total }) / 1000, 'kg', 2)})`,
+      text: `${oz(outdoor.factoryChargeOz)} factory charge + ${oz(extra)} added = ${oz(total)}`,
+      inputs: [
+        input('Factory charge', outdoor.factoryChargeOz, 'oz', oz(outdoor.factoryChargeOz)),
+        input('Added', extra, 'oz', oz(extra)),
+      ],
+      source: "The maker's factory charge",
+    }),
+  ];
   const info = REFRIGERANT_INFO[outdoor.refrigerant];
   if (isA2l({ refrigerant: outdoor.refrigerant }) && info.lflKgPerM3 !== null) {
     cautions.push(CAUTIONS.a2l);
     const chargeKg = gFromOz({ oz: total }) / 1000;
     const m1 = a2lM1Kg({ lflKgPerM3: info.lflKgPerM3 });
     notes.push(`${outdoor.refrigerant} is an A2L refrigerant (lower flammability).`);
+    const kg = (v: number) => formatQuantity(v, 'kg', 2);
     if (chargeKg > m1) {
       notes.push(
-        `The total charge (${roundHalfUp(chargeKg, 2)} kg) is above ${roundHalfUp(m1, 2)} kg (6 m³ × LFL), so minimum room-area rules apply [IEC 60335-2-40:2018 Annex GG]; confirm with the maker's table and the edition adopted locally.`,
+        `The total charge (${kg(chargeKg)}) is above ${kg(m1)} (6 m³ × LFL), so minimum room-area rules apply. The check uses IEC 60335-2-40:2018 Annex GG as an estimate: confirm with the maker's table and the edition of UL 60335-2-40 / ASHRAE 15.2 adopted locally.`,
       );
-      for (const { circuit, indoor, roomAreaM2 } of circuits) {
-        const minArea = a2lMinRoomAreaM2({
-          chargeKg,
-          lflKgPerM3: info.lflKgPerM3,
-          h0M: A2L_INSTALL_HEIGHT_M[indoor.unitType],
-        });
-        if (roomAreaM2 < minArea)
-          warnings.push(
-            `The room with the ${circuit.zoneKey} indoor unit (${roundHalfUp(roomAreaM2, 1)} m²) is smaller than the estimated minimum ${roundHalfUp(minArea, 1)} m² for this charge: check the maker's room-size rules or mitigation.`,
-          );
-      }
+      circuits.forEach(({ circuit, indoor, roomAreaM2, zoneName }) => {
+        const h0 = A2L_INSTALL_HEIGHT_M[indoor.unitType];
+        const minArea = a2lMinRoomAreaM2({ chargeKg, lflKgPerM3: info.lflKgPerM3, h0M: h0 });
+        const ok = roomAreaM2 >= minArea;
+        const name = zoneName ?? circuit.zoneKey;
+        const msg = `The room with the ${name} indoor unit (${formatQuantity(roomAreaM2, 'm²', 1)}) is smaller than the estimated minimum ${formatQuantity(minArea, 'm²', 1)} for this charge: check the maker's room-size rules or mitigation (leak detection, ventilation).`;
+        if (!ok) blockers.push(msg);
+        explanations.push(
+          explanation({
+            key: `a2l:${circuit.zoneKey}`,
+            label: `A2L room size, ${name}`,
+            value: roundHalfUp(minArea, 1),
+            unit: 'm²',
+            valueText: formatQuantity(minArea, 'm²', 1),
+            text: `A_min = (${kg(chargeKg)} ÷ (2.5 × ${formatNumber(info.lflKgPerM3, 3)}^1.25 × ${formatQuantity(Math.max(0.6, h0), 'm', 1)}))² = ${formatQuantity(minArea, 'm²', 1)}; room ${formatQuantity(roomAreaM2, 'm²', 1)}`,
+            verdict: ok ? 'The room is large enough for this charge.' : msg,
+            status: ok ? 'ok' : 'blocker',
+            source: 'IEC 60335-2-40:2018 Annex GG (estimate; confirm the edition adopted locally)',
+          }),
+        );
+      });
+    } else {
+      explanations.push(
+        explanation({
+          key: 'a2l:m1',
+          label: 'A2L charge threshold',
+          value: roundHalfUp(chargeKg, 2),
+          unit: 'kg',
+          valueText: kg(chargeKg),
+          text: `${kg(chargeKg)} total ≤ m1 = 6 m³ × ${formatNumber(info.lflKgPerM3, 3)} kg/m³ = ${kg(m1)}`,
+          verdict: 'Below m1: no minimum room area applies.',
+          status: 'ok',
+          source: 'IEC 60335-2-40:2018 GG.2 (estimate; confirm the edition adopted locally)',
+        }),
+      );
     }
   }
   return {
@@ -154,12 +342,16 @@ export function refrigerantPlan({
     safetyClass: info.safetyClass,
     circuits: planned,
     totalLengthFt: totalLength,
+    totalInstalledLengthFt: totalInstalled,
+    indoorHeightDifferenceFt: heightDiff,
     extraChargeOz: extra,
     factoryChargeOz: outdoor.factoryChargeOz,
     totalChargeOz: total,
     warnings: [...warnings, ...planned.flatMap((c) => c.warnings)],
+    blockers: [...planned.flatMap((c) => c.blockers), ...blockers],
     notes,
     cautions,
+    explanations,
     isEstimate: true,
   };
 }

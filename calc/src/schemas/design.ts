@@ -18,6 +18,17 @@ export const circuitSchema = z.object({
   zoneKey: keyField('Zone'),
   lengthFt: bounded('Line-set length', 1, 300, 'ft'),
   liftFt: bounded('Vertical lift', 0, 200, 'ft').default(0),
+  /** Whether the indoor unit sits above or below the outdoor unit (for the height between heads); absent → above. */
+  liftDirection: z
+    .enum(['indoor-above', 'indoor-below'], { error: 'Choose above or below the outdoor unit' })
+    .optional(),
+  /**
+   * 'kit': a pre-flared, pre-insulated kit in a stock length (the surplus is coiled and holds refrigerant);
+   * 'field-cut': copper cut to the run. Absent → a kit when one is long enough (as the takeoff buys).
+   */
+  lineSet: z.enum(['kit', 'field-cut'], { error: 'Choose a kit or field-cut copper' }).optional(),
+  /** The kit length when the estimator picks one, ft (else the shortest stock kit at least as long as the run). */
+  kitLengthFt: bounded('Kit length', 1, 200, 'ft').optional(),
   liquidOdIn: tubeOdSchema.optional(),
   suctionOdIn: tubeOdSchema.optional(),
   wallPenetrations: boundedInt('Wall penetrations', 0, 6).default(1),
@@ -35,6 +46,10 @@ export const electricalInputSchema = z.object({
   circuitLengthFt: bounded('Circuit length', 1, 300, 'ft'),
   disconnectDistanceFt: bounded('Disconnect distance', 0, 500, 'ft').default(5),
   disconnectVisible: z.boolean().default(true),
+  /** Supply voltage for the voltage-drop check, V; absent → 240. */
+  supplyVoltage: z
+    .union([z.literal(208), z.literal(230), z.literal(240)], { error: 'Choose 208, 230 or 240 V' })
+    .optional(),
 });
 
 /** One outdoor unit and what it feeds. */
@@ -51,6 +66,13 @@ export const systemSchema = z.object({
 export const designSchema = z.object({
   zones: z.array(zoneSchema).min(1, 'Add at least one zone').max(40, 'At most 40 zones'),
   systems: z.array(systemSchema).min(1, 'Add at least one system').max(10, 'At most 10 systems'),
+  /** Planned install date (YYYY-MM-DD), for dated refrigerant rules; calc has no clock, so the caller gives it. */
+  installDate: z
+    .string()
+    .regex(/^\d{4}-\d{2}-\d{2}$/, 'Install date must be written YYYY-MM-DD')
+    .optional(),
+  /** All the system's components were made or imported before 1 Jan 2025 (the rule's one-year allowance). */
+  componentsMadeBefore2025: z.boolean().optional(),
 });
 
 export type Zone = z.output<typeof zoneSchema>;

@@ -74,8 +74,27 @@ export const outdoorUnitSchema = z.object({
     .default({ min: 50, max: 130 }),
   factoryChargeOz: bounded('Factory charge', 0, 1000, 'oz'),
   prechargedLengthFt: bounded('Pre-charged length', 0, 200, 'ft'),
-  /** Maker's adder, oz per ft of liquid line; absent → tube-volume estimate. */
+  /** Maker's adder, oz per ft of liquid line, for the unit's own liquid size; absent → tube-volume estimate. */
   adderOzPerFt: bounded('Charge adder', 0, 3, 'oz/ft').optional(),
+  /** Maker's adders per liquid-line size (win over adderOzPerFt for their size). */
+  chargeAdders: z
+    .array(z.object({ liquidOdIn: tubeOdSchema, ozPerFt: bounded('Charge adder', 0, 3, 'oz/ft') }))
+    .max(7, 'At most 7 charge adders')
+    .optional(),
+  /** The liquid size the single adderOzPerFt belongs to (the unit's service-valve size); absent → any. */
+  liquidOdIn: tubeOdSchema.optional(),
+  /** Largest height difference between two indoor units of this outdoor unit, ft. */
+  maxIndoorHeightDiffFt: bounded('Maximum height between indoor units', 0, 100, 'ft').optional(),
+  /** Indoor nominal sizes (Btu/h) each port accepts, port A first (multi-zone). */
+  portSizesBtuh: z
+    .array(
+      z
+        .array(bounded('Port size', 3000, 60000, 'Btu/h'))
+        .min(1)
+        .max(8),
+    )
+    .max(8)
+    .optional(),
   prechargeBasis: z.enum(['per-circuit', 'system-total']).default('per-circuit'),
   minLineLengthFt: bounded('Minimum line length', 0, 50, 'ft').default(10),
   maxLineLengthFt: bounded('Maximum line length', 10, 300, 'ft'),

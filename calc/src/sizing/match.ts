@@ -85,7 +85,7 @@ export function checkSizing({
   const cool = capacityAtOutdoorF({ points: unit.cooling, outdoorF: coolingDesignF });
   if (cool.extrapolated)
     warnings.push(
-      `${unit.description}: the cooling data does not reach ${coolingDesignF} °F; the nearest rating was used.`,
+      `${unit.description}: ${coolingDesignF} °F is outside the maker's cooling data; the capacity is extended from the nearest points. Ask the maker for data at this temperature.`,
     );
   const ratio = coolingLoad > 0 ? sizingRatio({ loadBtuh: coolingLoad, capacityBtuh: cool.btuh }) : null;
   const pct = ratio === null ? null : roundHalfUp(ratio * 100);
@@ -134,7 +134,7 @@ export function checkSizing({
     }
     if (heat.extrapolated)
       warnings.push(
-        `${unit.description}: the heating data does not reach ${heatingDesignF} °F; the nearest rating was used.`,
+        `${unit.description}: ${heatingDesignF} °F is outside the maker's heating data; the capacity is extended from the nearest points. Ask the maker for data at this temperature.`,
       );
   }
   return {

@@ -124,7 +124,14 @@ const ELECTRICAL_LABOR_TEXT = [`${L.electricalBase} h + `, ` ft × ${L.electrica
 const CHARGE_STARTUP_TEXT = [`${L.chargeStartupBase} h + `, ` circuit(s) × ${L.chargeStartupPerCircuit} h`] as const;
 
 /** Materials and labor lines for one circuit of a system (indoor unit, line set, accessories, labor), added to `out`. */
-function circuitLines(name: string, c: Circuit, indoor: IndoorUnit, plan: CircuitCharge, out: LineMerger): void {
+function circuitLines(
+  name: string,
+  c: Circuit,
+  indoor: IndoorUnit,
+  plan: CircuitCharge,
+  heatPump: boolean,
+  out: LineMerger,
+): void {
   const at = ` (${name}, zone ${c.zoneKey})`;
   out.add(
     `equipment:${indoor.key}`,
@@ -134,7 +141,8 @@ function circuitLines(name: string, c: Circuit, indoor: IndoorUnit, plan: Circui
     'equipment',
     `indoor unit for ${name}, zone ${c.zoneKey}`,
   );
-  const kit = stockKitLengthFt({ lengthFt: c.lengthFt });
+  // The refrigerant plan decided kit or field-cut (and the kit's length), so the charge and the purchase agree.
+  const kit = plan.lineSet === 'kit' ? plan.kitLengthFt : null;
   if (kit !== null) {
     out.mat(
       `line-set-kit:${plan.liquidLabel}x${plan.suctionLabel}:${kit}ft`,
@@ -150,7 +158,7 @@ function circuitLines(name: string, c: Circuit, indoor: IndoorUnit, plan: Circui
       `ACR copper ${plan.liquidLabel} in, coil`,
       ft,
       'ft',
-      `${c.lengthFt} ft run longer than any kit, rounded up to 5 ft${at}`,
+      `${c.lengthFt} ft run, field-cut copper rounded up to 5 ft${at}`,
     );
     out.mat(
       `copper-acr:${plan.suctionLabel}`,
@@ -166,6 +174,15 @@ function circuitLines(name: string, c: Circuit, indoor: IndoorUnit, plan: Circui
       'ft',
       `suction line insulation${at}`,
     );
+    // A heat pump's liquid line runs hot in heating and cold in cooling: both lines are insulated [TRADE; issue 9].
+    if (heatPump)
+      out.mat(
+        `pipe-insulation:${plan.liquidLabel}`,
+        `Pipe insulation for ${plan.liquidLabel} in`,
+        ft,
+        'ft',
+        `liquid line insulation (heat pump)${at}`,
+      );
   }
   out.mat('insulation-tape', 'Insulation tape for joints', 1, 'roll', `one roll per circuit${at}`);
   out.mat(
@@ -240,11 +257,12 @@ function systemLines(s: SystemForTakeoff, out: LineMerger): void {
   const name = s.system.name;
   out.add(`equipment:${s.outdoor.key}`, s.outdoor.description, 1, 'each', 'equipment', `outdoor unit of ${name}`);
   const circuits = s.system.circuits;
+  const heatPump = s.outdoor.equipmentType.startsWith('heat-pump');
   for (let i = 0; i < circuits.length; i += 1) {
     const c = circuits[i];
     const indoor = c && s.indoorByZone.get(c.zoneKey);
     const plan = s.refrigerant.circuits[i];
-    if (c && indoor && plan) circuitLines(name, c, indoor, plan, out);
+    if (c && indoor && plan) circuitLines(name, c, indoor, plan, heatPump, out);
   }
   const bracket = s.system.mounting === 'wall-bracket';
   out.mat(

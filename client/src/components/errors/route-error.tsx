@@ -1,10 +1,12 @@
 import { isRouteErrorResponse, Link, useLocation, useRouteError } from 'react-router-dom';
 import { paths, signInPath } from '../../config/paths';
 import { isApiError } from '../../lib/api-error';
+import { NOTHING_HELD } from '../../lib/offline/online';
 import { buttonClass } from '../ui/button';
 
 function describe(error: unknown): { title: string; detail: string; signIn: boolean } {
   if (isApiError(error)) {
+    if (error.code === 'network') return { title: 'No signal', detail: NOTHING_HELD, signIn: false };
     if (error.status === 401)
       return { title: 'Your session has ended', detail: 'Sign in again to carry on where you were.', signIn: true };
     if (error.status === 403) return { title: 'Not available to your role', detail: error.detail, signIn: false };

@@ -3,6 +3,7 @@ import type { LoaderFunctionArgs } from 'react-router-dom';
 import { z } from 'zod';
 import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../../lib/job-queries';
 import { getCurrentPerson } from '../../lib/offline/person';
+import { ensureHeld } from '../../lib/offline/online';
 import { sharedWalkthroughQueue } from '../walkthrough/sync/walkthrough-queue';
 import { jobsQueryOptions } from './api/get-jobs';
 import { filtersFromSearch } from './components/jobs-filters';
@@ -35,9 +36,12 @@ export const jobWithRoomsLoader =
     const jobId = jobIdOf(params);
     if (getCurrentPerson()) sharedWalkthroughQueue(queryClient);
     void queryClient.prefetchQuery(companySettingsQueryOptions());
+    const job = jobQueryOptions(jobId);
+    const rooms = roomsQueryOptions(jobId);
+    // With no signal and nothing held on the phone: words at once, not a fetch paused forever.
     await Promise.all([
-      queryClient.ensureQueryData(jobQueryOptions(jobId)),
-      queryClient.ensureQueryData(roomsQueryOptions(jobId)),
+      ensureHeld(queryClient, job.queryKey, () => queryClient.ensureQueryData(job)),
+      ensureHeld(queryClient, rooms.queryKey, () => queryClient.ensureQueryData(rooms)),
     ]);
     return null;
   };

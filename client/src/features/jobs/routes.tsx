@@ -19,7 +19,7 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
       ErrorBoundary: RouteError,
       lazy: {
         loader: async () => (await loaders()).jobsListLoader(queryClient),
-        Component: async () => (await import('./components/jobs-list-page')).JobsListPage,
+        Component: async () => (await import('./waiting-pages')).JobsListRoute,
       },
     },
     {
@@ -40,7 +40,7 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
       ErrorBoundary: RouteError,
       lazy: {
         loader: jobWithRooms,
-        Component: async () => (await import('../loads/components/loads-page')).LoadsPage,
+        Component: async () => (await import('./waiting-pages')).LoadsRoute,
       },
     },
     {

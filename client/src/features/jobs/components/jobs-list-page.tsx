@@ -11,6 +11,7 @@ import { jobPaths } from '../../../lib/job-paths';
 import { JOB_STATUSES, mayEditJob } from '@contract';
 import { jobStatusLabels } from '../../../lib/job-labels';
 import { useViewer } from '../../../lib/viewer';
+import { OfflineNotice } from '../../../lib/offline/offline-notice';
 import { useJobs } from '../api/get-jobs';
 import { filtersFromSearch } from './jobs-filters';
 import { JobsTable } from './jobs-table';
@@ -18,7 +19,7 @@ import { JobsTable } from './jobs-table';
 const field = 'block min-h-touch w-full rounded-md border border-line bg-white px-3 text-base';
 
 /** /jobs: search by customer, address or status; newest activity first; paged on the server. */
-export function JobsListPage() {
+export function JobsListPage({ waiting = 0 }: { waiting?: number }) {
   const [params, setParams] = useSearchParams();
   const filters = filtersFromSearch(params);
   const [typed, setTyped] = useState(filters.search);
@@ -94,6 +95,7 @@ export function JobsListPage() {
       <QueryWidgetBoundary name="the job list">
         <JobsResults
           filters={filters}
+          waiting={waiting}
           mayStart={mayStart}
           onPage={(page) => update({ page: page > 1 ? String(page) : '' })}
         />
@@ -105,13 +107,30 @@ export function JobsListPage() {
 function JobsResults({
   filters,
   mayStart,
+  waiting,
   onPage,
 }: {
   filters: ReturnType<typeof filtersFromSearch>;
   mayStart: boolean;
+  waiting: number;
   onPage: (page: number) => void;
 }) {
   const jobs = useJobs(filters);
+  // With no signal TanStack Query waits ("paused") instead of failing: say so instead of spinning.
+  if (jobs.isPending && jobs.fetchStatus === 'paused')
+    return (
+      <Alert tone="warning" title="No signal">
+        <p>
+          This phone has not saved this list{filters.search || filters.status ? ' for this search' : ''} yet. It loads
+          once the connection is back.
+        </p>
+        {waiting > 0 ? (
+          <p>
+            {waiting} {waiting === 1 ? 'change waits' : 'changes wait'} on this phone to be sent.
+          </p>
+        ) : null}
+      </Alert>
+    );
   if (jobs.isPending) return <Spinner label="Loading jobs…" />;
   if (jobs.isError)
     return (
@@ -131,5 +150,10 @@ function JobsResults({
       </EmptyState>
     );
   }
-  return <JobsTable jobs={items} total={total} page={page} pageSize={pageSize} onPage={onPage} />;
+  return (
+    <>
+      <OfflineNotice updatedAt={jobs.dataUpdatedAt} waiting={waiting} />
+      <JobsTable jobs={items} total={total} page={page} pageSize={pageSize} onPage={onPage} />
+    </>
+  );
 }

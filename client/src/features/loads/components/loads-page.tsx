@@ -7,6 +7,7 @@ import { buttonClass } from '../../../components/ui/button';
 import { PageHeader } from '../../../components/ui/page-header';
 import { jobPaths } from '../../../lib/job-paths';
 import { jobQueryOptions, roomsQueryOptions } from '../../../lib/job-queries';
+import { OfflineNotice } from '../../../lib/offline/offline-notice';
 import { computeHomeLoad } from '../model/compute';
 import { MethodNote } from './estimate-note';
 import { HomeTotals } from './home-totals';
@@ -15,10 +16,12 @@ import { RoomLoadCard } from './room-load-card';
 export const loadsParams = z.object({ jobId: z.uuid({ message: 'That is not a job address.' }) });
 
 /** /jobs/:jobId/loads — the saved rooms' loads worked out in the browser (the same calc the server runs). */
-export function LoadsPage() {
+export function LoadsPage({ waiting = 0 }: { waiting?: number }) {
   const { jobId } = loadsParams.parse(useParams());
-  const job = useSuspenseQuery(jobQueryOptions(jobId)).data;
-  const rooms = useSuspenseQuery(roomsQueryOptions(jobId)).data;
+  const jobQuery = useSuspenseQuery(jobQueryOptions(jobId));
+  const roomsQuery = useSuspenseQuery(roomsQueryOptions(jobId));
+  const job = jobQuery.data;
+  const rooms = roomsQuery.data;
   const result = computeHomeLoad(rooms, job.designConditions, job.tightness, job.house ?? {});
   const parsedRooms = new Map(
     rooms.flatMap((r) => {
@@ -45,6 +48,12 @@ export function LoadsPage() {
           </div>
         }
       />
+      <OfflineNotice updatedAt={Math.min(jobQuery.dataUpdatedAt, roomsQuery.dataUpdatedAt)} waiting={waiting} />
+      {waiting > 0 ? (
+        <p className="text-sm text-muted">
+          These figures are the saved rooms; changes still waiting on this phone are not in them yet.
+        </p>
+      ) : null}
       {!result.ok ? <p className="rounded-md border border-line bg-white p-4">{result.message}</p> : null}
       {result.ok ? (
         <>

@@ -37,7 +37,8 @@ describe('jobs routes', () => {
   it('answers a job address that is not an id with "not found"', async () => {
     mockFetch({});
     renderRoute('/jobs/not-a-job/loads');
-    expect(await screen.findByRole('heading', { name: 'Page not found' })).toBeInTheDocument();
+    // The loaders' module loads lazily on the first route: a slow machine may take more than a second.
+    expect(await screen.findByRole('heading', { name: 'Page not found' }, { timeout: 4000 })).toBeInTheDocument();
   });
 
   it('shows the route error when the job belongs to nobody we know', async () => {
@@ -57,6 +58,6 @@ describe('jobs routes', () => {
       }),
     });
     renderRoute(`/jobs/${JOB_ID}/loads`);
-    expect(await screen.findByRole('heading', { name: 'Not found' })).toBeInTheDocument();
+    expect(await screen.findByRole('heading', { name: 'Not found' }, { timeout: 4000 })).toBeInTheDocument();
   });
 });

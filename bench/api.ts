@@ -6,7 +6,9 @@
  * Prints requests/s, p50/p95/p99 and errors per route and each ratio to its floor. Never fails.
  *
  * BENCH_SECONDS (default 8) and BENCH_CONNECTIONS (default 50) change the load;
- * BENCH_APP_PORT / BENCH_FLOOR_PORT (default 4896 / 4897) the ports.
+ * BENCH_APP_PORT / BENCH_FLOOR_PORT (default 4896 / 4897) the ports; BENCH_ROUTES picks routes
+ * (comma-separated of jobs, rooms, loads, save, sign-in; default all); BENCH_CPU_PROF=<dir> runs the
+ * app server under `node --cpu-prof` and leaves its profile there (open it in Chrome's DevTools).
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomBytes, randomUUID } from 'node:crypto';
@@ -33,6 +35,8 @@ const FLOOR = `http://127.0.0.1:${FLOOR_PORT}`;
 const BENCH_MARK = 'made by npm run bench';
 // Another checkout's server and built client (e.g. an older commit, for a before/after in one sitting).
 const SERVER_DIR = resolve(process.env.BENCH_SERVER_DIR ?? '.');
+const ROUTES = new Set((process.env.BENCH_ROUTES ?? 'jobs,rooms,loads,save,sign-in').split(',').map((r) => r.trim()));
+const CPU_PROF = process.env.BENCH_CPU_PROF ? resolve(process.env.BENCH_CPU_PROF) : null;
 
 /** What one autocannon connection carries from one step of its sequence to the next. */
 interface Ctx {
@@ -43,8 +47,8 @@ interface Ctx {
 }
 
 const children: ChildProcess[] = [];
-function start(script: string, env: Record<string, string>, cwd = '.'): ChildProcess {
-  const child = spawn(process.execPath, ['--import', 'tsx', script], {
+function start(script: string, env: Record<string, string>, cwd = '.', nodeArgs: string[] = []): ChildProcess {
+  const child = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', script], {
     cwd,
     env: { ...process.env, ...env },
     stdio: ['ignore', 'ignore', 'inherit'],
@@ -207,6 +211,7 @@ try {
       CLIENT_DIST: join(SERVER_DIR, 'dist/client'),
     },
     SERVER_DIR,
+    CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${CPU_PROF}`] : [],
   );
   start('bench/lib/floor-server.ts', {
     DATABASE_URL: databaseUrl,
@@ -248,11 +253,12 @@ try {
   const get = (label: string, url: string, headers: Record<string, string>) =>
     load({ label, url, connections: CONNECTIONS, seconds: SECONDS, headers });
 
-  for (const [route, appPath, floorPath] of [
-    ['GET /api/jobs', '/api/jobs', `/floor/jobs?${q}`],
-    [`GET /api/jobs/:id/rooms`, `/api/jobs/${target.job_id}/rooms`, `/floor/jobs/${target.job_id}/rooms?${q}`],
-    [`GET /api/jobs/:id/loads`, `/api/jobs/${target.job_id}/loads`, `/floor/jobs/${target.job_id}/loads?${q}`],
+  for (const [key, route, appPath, floorPath] of [
+    ['jobs', 'GET /api/jobs', '/api/jobs', `/floor/jobs?${q}`],
+    ['rooms', `GET /api/jobs/:id/rooms`, `/api/jobs/${target.job_id}/rooms`, `/floor/jobs/${target.job_id}/rooms?${q}`],
+    ['loads', `GET /api/jobs/:id/loads`, `/api/jobs/${target.job_id}/loads`, `/floor/jobs/${target.job_id}/loads?${q}`],
   ] as const) {
+    if (!ROUTES.has(key)) continue;
     await warm(`${FLOOR}${floorPath}`, floorHeaders);
     await warm(`${APP}${appPath}`, appHeaders);
     await pair(
@@ -298,85 +304,87 @@ try {
       ],
     });
   };
-  await pair(
-    'PATCH /api/jobs/:id/rooms/:roomId',
-    () => saver(FLOOR, {}, floorRooms, '/floor'),
-    () => saver(APP, { ...appHeaders, 'x-csrf-token': s.csrf }, appRooms, '/api'),
-  );
+  if (ROUTES.has('save'))
+    await pair(
+      'PATCH /api/jobs/:id/rooms/:roomId',
+      () => saver(FLOOR, {}, floorRooms, '/floor'),
+      () => saver(APP, { ...appHeaders, 'x-csrf-token': s.csrf }, appRooms, '/api'),
+    );
 
   // Sign-in: GET /api/auth/csrf (a fresh anonymous session) then POST /api/auth/login; the login step is timed.
   const floorTimes: number[] = [];
   const appTimes: number[] = [];
   const body = JSON.stringify({ email: owner.email, password: owner.password });
-  await pair(
-    'POST /api/auth/login',
-    () =>
-      load({
-        label: 'sign-in floor',
-        url: FLOOR,
-        connections: SIGNIN_CONNECTIONS,
-        seconds: SECONDS,
-        timed: floorTimes,
-        requests: [
-          {
-            method: 'POST',
-            path: '/floor/login',
-            headers: { 'content-type': 'application/json' },
-            body,
-            setupRequest: (req, ctx) => {
-              const context = ctx as Ctx;
-              context.t0 = performance.now();
-              return req;
+  if (ROUTES.has('sign-in'))
+    await pair(
+      'POST /api/auth/login',
+      () =>
+        load({
+          label: 'sign-in floor',
+          url: FLOOR,
+          connections: SIGNIN_CONNECTIONS,
+          seconds: SECONDS,
+          timed: floorTimes,
+          requests: [
+            {
+              method: 'POST',
+              path: '/floor/login',
+              headers: { 'content-type': 'application/json' },
+              body,
+              setupRequest: (req, ctx) => {
+                const context = ctx as Ctx;
+                context.t0 = performance.now();
+                return req;
+              },
+              onResponse: (_status, _body, ctx) => {
+                floorTimes.push(performance.now() - ((ctx as Ctx).t0 ?? 0));
+              },
             },
-            onResponse: (_status, _body, ctx) => {
-              floorTimes.push(performance.now() - ((ctx as Ctx).t0 ?? 0));
+          ],
+        }),
+      () =>
+        load({
+          label: 'sign-in app',
+          url: APP,
+          connections: SIGNIN_CONNECTIONS,
+          seconds: SECONDS,
+          timed: appTimes,
+          requests: [
+            {
+              method: 'GET',
+              path: '/api/auth/csrf',
+              headers: { 'x-forwarded-proto': 'https' },
+              onResponse: (_status, resBody, ctx, headers) => {
+                const context = ctx as Ctx;
+                const h = headers as Record<string, string | string[]>;
+                context.cookie = cookieOf(h['set-cookie'] ?? h['Set-Cookie']);
+                context.token = (JSON.parse(resBody) as { token: string }).token;
+              },
             },
-          },
-        ],
-      }),
-    () =>
-      load({
-        label: 'sign-in app',
-        url: APP,
-        connections: SIGNIN_CONNECTIONS,
-        seconds: SECONDS,
-        timed: appTimes,
-        requests: [
-          {
-            method: 'GET',
-            path: '/api/auth/csrf',
-            headers: { 'x-forwarded-proto': 'https' },
-            onResponse: (_status, resBody, ctx, headers) => {
-              const context = ctx as Ctx;
-              const h = headers as Record<string, string | string[]>;
-              context.cookie = cookieOf(h['set-cookie'] ?? h['Set-Cookie']);
-              context.token = (JSON.parse(resBody) as { token: string }).token;
+            {
+              method: 'POST',
+              path: '/api/auth/login',
+              setupRequest: (req, ctx) => {
+                const context = ctx as Ctx;
+                context.t0 = performance.now();
+                return {
+                  ...req,
+                  headers: {
+                    'content-type': 'application/json',
+                    'x-forwarded-proto': 'https',
+                    cookie: context.cookie ?? '',
+                    'x-csrf-token': context.token ?? '',
+                  },
+                  body,
+                };
+              },
+              onResponse: (_status, _body, ctx) => {
+                appTimes.push(performance.now() - ((ctx as Ctx).t0 ?? 0));
+              },
             },
-          },
-          {
-            method: 'POST',
-            path: '/api/auth/login',
-            setupRequest: (req, ctx) => {
-              const context = ctx as Ctx;
-              context.t0 = performance.now();
-              return {
-                ...req,
-                headers: {
-                  'content-type': 'application/json',
-                  'x-forwarded-proto': 'https',
-                  cookie: context.cookie ?? '',
-                  'x-csrf-token': context.token ?? '',
-                },
-                body,
-              };
-            },
-            onResponse: (_status, _body, ctx) => {
-              appTimes.push(performance.now() - ((ctx as Ctx).t0 ?? 0));
-            },
-          },
-        ],
-      }),
-  );
+          ],
+        }),
+    );
 
   console.log('');
   table(rows);

@@ -81,6 +81,48 @@ describe('GET /api/jobs/:id/loads', () => {
     expect((await inst.agent.get(`/api/jobs/${job.id}/loads`)).body.loads).toEqual(expected);
   });
 
+  it('answers the current inputs after every change (results are kept by the inputs, so an edit is new figures)', async () => {
+    const job = await newJob(sales, { tightness: 'average' });
+    const room = await newRoom(sales, job.id, FIXTURE_ROOMS[1]);
+    const expectedFor = (rooms: RoomInput[], tightness: HomeInput['tightness']) =>
+      JSON.parse(JSON.stringify(homeLoad({ home: { id: job.id, designConditions: DESIGN, tightness, rooms } })));
+    const kitchen = { ...FIXTURE_ROOMS[1], id: room.id } as RoomInput;
+    const first = await sales.agent.get(`/api/jobs/${job.id}/loads`);
+    expect(first.body.loads).toEqual(expectedFor([kitchen], 'average'));
+    expect((await sales.agent.get(`/api/jobs/${job.id}/loads`)).body.loads).toEqual(first.body.loads);
+
+    // A room edit, then a job edit, then a room added and removed again: each answer is the inputs of that moment.
+    const bigger = { ...kitchen, areaFt2: 260 };
+    expect(
+      (await patch(sales, `/api/jobs/${job.id}/rooms/${room.id}`, room.version).send({ input: bigger })).status,
+    ).toBe(200);
+    const second = await sales.agent.get(`/api/jobs/${job.id}/loads`);
+    expect(second.body.loads).toEqual(expectedFor([bigger], 'average'));
+    expect(second.body.loads.totals.coolingBtuh).not.toBe(first.body.loads.totals.coolingBtuh);
+    const tight = await patch(sales, `/api/jobs/${job.id}`, job.version).send({ tightness: 'tight' });
+    expect(tight.status, JSON.stringify(tight.body)).toBe(200);
+    const third = await sales.agent.get(`/api/jobs/${job.id}/loads`);
+    expect(third.body.loads).toEqual(expectedFor([bigger], 'tight'));
+    expect(third.body.jobVersion).toBe(tight.body.job.version);
+    expect(third.body.tightness).toBe('tight');
+  });
+
+  it('jobs of two companies with the same rooms each get their own job and rooms in the answer, never the other’s', async () => {
+    const b = await makeCompany(t.orm.em.fork(), 'LoadsTwin');
+    const other = await login(t.app, b.users.salesperson.email);
+    const mine = await newJob(sales);
+    const theirs = await newJob(other);
+    const myRoom = await newRoom(sales, mine.id, FIXTURE_ROOMS[2]);
+    const theirRoom = await newRoom(other, theirs.id, FIXTURE_ROOMS[2]);
+    const r1 = await sales.agent.get(`/api/jobs/${mine.id}/loads`);
+    const r2 = await other.agent.get(`/api/jobs/${theirs.id}/loads`);
+    expect(r1.body.jobId).toBe(mine.id);
+    expect(r2.body.jobId).toBe(theirs.id);
+    expect(r1.body.loads.rooms.map((x: { roomId: string }) => x.roomId)).toEqual([myRoom.id]);
+    expect(r2.body.loads.rooms.map((x: { roomId: string }) => x.roomId)).toEqual([theirRoom.id]);
+    expectProblem(await other.agent.get(`/api/jobs/${mine.id}/loads`), 404);
+  });
+
   it('422 with a clear message when design conditions or rooms are missing', async () => {
     const bare = await post(sales, '/api/jobs').send({ customerId: await newCustomer(sales), ...SITE });
     expect(bare.status).toBe(201);

@@ -21,7 +21,7 @@ export function loadsRoutes(api: ApiRouter): void {
         jobVersion: r.job.version,
         tightness: r.job.tightness,
         house: { ...r.job.house },
-        designConditions: r.home.designConditions,
+        designConditions: r.designConditions,
         // calc's HomeLoad (readonly interfaces) is the document; the test app checks it against the schema.
         loads: r.load as unknown as LoadsResponse['loads'],
         warnings: r.warnings as LoadsResponse['warnings'],

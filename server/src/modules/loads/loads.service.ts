@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import {
   designConditionsWarnings,
@@ -9,15 +10,31 @@ import {
   type Room,
 } from '@calc';
 import { NotFoundError, UnprocessableError } from '../../lib/errors';
+import { PureMemo } from '../../lib/pure-memo';
 import type { Actor } from '../../lib/route';
 import { scopeSql } from '../jobs/job-reads';
 import type { Job } from '../jobs/job.entity';
 
 export interface JobLoads {
   job: Pick<Job, 'id' | 'version' | 'tightness' | 'house'>;
-  home: HomeInput;
+  designConditions: HomeInput['designConditions'];
   load: HomeLoad;
   warnings: { designConditions: PlausibilityWarning[]; rooms: Record<string, PlausibilityWarning[]> };
+}
+
+type Computed = Pick<JobLoads, 'load' | 'warnings'>;
+
+/**
+ * The recompute is a pure function of the job's saved inputs (design conditions, tightness, house,
+ * rooms), so its last results are kept by a hash of exactly those inputs as the database holds
+ * them, with the job's id: an edit anywhere in them is a new key. Looked up only after the scoped
+ * read below has found the job for this person. Profiled with the bench (issue 11): the recompute
+ * was most of the route's own CPU.
+ */
+const recent = new PureMemo<Computed>(200);
+
+function inputsKey(jobId: string, inputsText: string): string {
+  return `${jobId}:${createHash('sha256').update(inputsText).digest('base64url')}`;
 }
 
 /**
@@ -25,7 +42,8 @@ export interface JobLoads {
  * function the browser runs — so the numbers never depend on what a client sent.
  */
 export async function jobLoads(em: EntityManager, actor: Actor, jobId: string): Promise<JobLoads> {
-  // One statement: the job in scope and its rooms' saved inputs in order.
+  // One statement: the job in scope and its rooms' saved inputs in order, as text (parsed only when
+  // they have to be worked out), and every input the result depends on as one text for the key.
   const scope = scopeSql(actor);
   const [job] = await em.execute<
     {
@@ -34,13 +52,18 @@ export async function jobLoads(em: EntityManager, actor: Actor, jobId: string): 
       tightness: Job['tightness'];
       design_conditions: Job['designConditions'];
       house: Job['house'] | null;
-      rooms: Room[];
+      room_count: number;
+      rooms: string;
+      inputs: string;
     }[]
   >(
-    `select j.id, j.version, j.tightness, j.design_conditions, j.house,
+    `select q.id, q.version, q.tightness, q.design_conditions, q.house, q.room_count, q.rooms::text as rooms,
+       json_build_array(q.design_conditions, q.tightness, q.house, q.rooms)::text as inputs
+     from (select j.id, j.version, j.tightness, j.design_conditions, j.house,
+       (select count(*)::int from "room" r where r.job_id = j.id) as room_count,
        coalesce((select json_agg(r.input order by r.position, r.created_at, r.id) from "room" r where r.job_id = j.id),
          '[]'::json) as rooms
-     from "job" j where j.id = ? and ${scope.sql}`,
+     from "job" j where j.id = ? and ${scope.sql}) q`,
     [jobId, ...scope.params],
   );
   if (!job) throw new NotFoundError('The job');
@@ -50,26 +73,28 @@ export async function jobLoads(em: EntityManager, actor: Actor, jobId: string): 
       errors: [{ path: 'designConditions', message: 'Design conditions are missing.' }],
     });
   }
-  if (job.rooms.length === 0) {
+  if (job.room_count === 0) {
     throw new UnprocessableError('Add at least one room before the loads can be worked out.', {
       errors: [{ path: 'rooms', message: 'Add at least one room.' }],
     });
   }
   const house = job.house ?? {};
-  const home: HomeInput = {
-    id: job.id,
-    designConditions: conditions,
-    tightness: job.tightness,
-    ...house,
-    rooms: job.rooms,
-  };
-  const load = homeLoad({ home });
-  const rooms: Record<string, PlausibilityWarning[]> = {};
-  for (const r of job.rooms) rooms[r.id] = roomPlausibilityWarnings(r);
+  const key = inputsKey(job.id, job.inputs);
+  let computed = recent.get(key);
+  if (!computed) {
+    const rooms = JSON.parse(job.rooms) as Room[];
+    const home: HomeInput = { id: job.id, designConditions: conditions, tightness: job.tightness, ...house, rooms };
+    const warnings: Record<string, PlausibilityWarning[]> = {};
+    for (const r of rooms) warnings[r.id] = roomPlausibilityWarnings(r);
+    computed = {
+      load: homeLoad({ home }),
+      warnings: { designConditions: designConditionsWarnings(conditions), rooms: warnings },
+    };
+    recent.set(key, computed);
+  }
   return {
     job: { id: job.id, version: job.version, tightness: job.tightness, house },
-    home,
-    load,
-    warnings: { designConditions: designConditionsWarnings(conditions), rooms },
+    designConditions: conditions,
+    ...computed,
   };
 }

@@ -10,24 +10,15 @@ import { readdirSync } from 'node:fs';
 
 const noOurs = (patterns, message) => ['error', { patterns: patterns.map((group) => ({ group, message })) }];
 
-// Features do not import each other; app/routes compose them. The exceptions are deliberate:
-// the walk-through shows the loads feature's live panels, and jobs/routes.tsx composes the job screens
-// (with route-loaders.ts, its loaders, kept apart so the router's first chunk stays small, and
-// waiting-pages.tsx, the pages told how many walk-through changes wait on the device).
+// Features do not import each other; app/routes compose them. The one exception is deliberate:
+// the walk-through shows the loads feature's live panels. Entities (client/src/entities/<record>/: records'
+// keys, queries, paths, labels and ports) are shared by features and import none of them.
 const features = readdirSync(new URL('./client/src/features', import.meta.url)).filter((f) => !f.includes('.'));
 const allowed = { walkthrough: ['loads'] };
 const featureBoundaries = features.map((feature) => {
   const others = features.filter((f) => f !== feature && !(allowed[feature] ?? []).includes(f));
   return {
     files: [`client/src/features/${feature}/**/*.{ts,tsx}`],
-    ignores:
-      feature === 'jobs'
-        ? [
-            'client/src/features/jobs/routes.tsx',
-            'client/src/features/jobs/route-loaders.ts',
-            'client/src/features/jobs/waiting-pages.tsx',
-          ]
-        : [],
     rules: {
       'no-restricted-imports': [
         'error',
@@ -47,6 +38,24 @@ const featureBoundaries = features.map((feature) => {
     },
   };
 });
+
+const entityBoundary = {
+  files: ['client/src/entities/**/*.{ts,tsx}'],
+  rules: {
+    'no-restricted-imports': [
+      'error',
+      {
+        patterns: [
+          { group: ['**/features/**', '**/app/**'], message: 'Entities are shared by the features: they import none.' },
+          {
+            group: ['**/server/**', 'node:*'],
+            message: "The client imports only the server's contract, through @contract.",
+          },
+        ],
+      },
+    ],
+  },
+};
 
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', '.data/**', 'coverage/**'] },
@@ -87,6 +96,7 @@ export default tseslint.config(
     },
   },
   ...featureBoundaries,
+  entityBoundary,
   {
     files: ['server/**/*.ts'],
     rules: { 'no-restricted-imports': noOurs([['**/client/**']], 'The server does not import client code.') },

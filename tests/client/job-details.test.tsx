@@ -1,9 +1,10 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { JobDetailsPanel } from '../../client/src/features/walkthrough/components/job-details-panel';
+import { JobDetailsPanel } from '../../client/src/features/jobs/components/job-details-panel';
 import { useSuspenseQuery } from '@tanstack/react-query';
 import { act } from '@testing-library/react';
-import { jobKeys, jobQueryOptions } from '../../client/src/lib/job-queries';
+import { jobKeys } from '../../client/src/entities/job/query-keys';
+import { jobQueryOptions } from '../../client/src/entities/job/queries';
 import type { JobRecord } from '@contract';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { ViewerContext, type Viewer } from '../../client/src/lib/viewer';

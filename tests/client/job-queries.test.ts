@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { keepNewerRooms } from '../../client/src/lib/job-queries';
+import { keepNewerRooms } from '../../client/src/entities/job/queries';
 
 describe('rooms refetch', () => {
   it('never takes a room back to an older version than the one this tab already holds', () => {

@@ -2,7 +2,7 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { render, screen } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { createJobsRoutes } from '../../client/src/features/jobs/routes';
+import { createJobsRoutes } from '../../client/src/app/job-routes';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { json, mockFetch } from './helpers/fetch-mock';
 import { bedroomInput, JOB_ID, jobRecord, roomRecord } from './helpers/walkthrough-harness';

@@ -4,7 +4,7 @@ import { ConflictPanel } from '../../client/src/features/walkthrough/components/
 import { roomTarget } from '../../client/src/features/walkthrough/sync/edits';
 import { useQueueState } from '../../client/src/features/walkthrough/sync/queue-context';
 import { clearCsrfToken } from '../../client/src/lib/api-client';
-import { jobKeys } from '../../client/src/lib/job-queries';
+import { jobKeys } from '../../client/src/entities/job/query-keys';
 import type { RoomRecord } from '@contract';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { headerOf, json, mockFetch, problem } from './helpers/fetch-mock';

@@ -1,8 +1,8 @@
 import { act, fireEvent, screen, waitFor } from '@testing-library/react';
 import { Route, Routes } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { WalkthroughPage } from '../../client/src/features/walkthrough/components/walkthrough-page';
-import { jobKeys } from '../../client/src/lib/job-queries';
+import WalkthroughPage from '../../client/src/app/routes/job-walkthrough';
+import { jobKeys } from '../../client/src/entities/job/query-keys';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { bedroomInput, JOB_ID, jobRecord, renderWalkthrough, roomRecord } from './helpers/walkthrough-harness';
 

@@ -8,7 +8,7 @@ import { overlayRooms } from '../../client/src/features/walkthrough/sync/overlay
 import { memoryFileStorage } from '../../client/src/lib/offline/file-storage';
 import { useQueueState } from '../../client/src/features/walkthrough/sync/queue-context';
 import { clearCsrfToken } from '../../client/src/lib/api-client';
-import { jobKeys } from '../../client/src/lib/job-queries';
+import { jobKeys } from '../../client/src/entities/job/query-keys';
 import type { RoomRecord } from '@contract';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { json, mockFetch, problem } from './helpers/fetch-mock';

@@ -5,7 +5,7 @@ import { RoomPhotos } from '../../client/src/features/walkthrough/components/roo
 import { jobTarget } from '../../client/src/features/walkthrough/sync/edits';
 import { useQueueState } from '../../client/src/features/walkthrough/sync/queue-context';
 import { clearCsrfToken } from '../../client/src/lib/api-client';
-import { jobKeys } from '../../client/src/lib/job-queries';
+import { jobKeys } from '../../client/src/entities/job/query-keys';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { headerOf, json, mockFetch, problem } from './helpers/fetch-mock';
 import {

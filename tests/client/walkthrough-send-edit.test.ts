@@ -1,7 +1,8 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { roomTarget, type WalkthroughItem } from '../../client/src/features/walkthrough/sync/edits';
 import { createEditSender } from '../../client/src/features/walkthrough/sync/send-edit';
-import { jobKeys, roomsQueryOptions } from '../../client/src/lib/job-queries';
+import { jobKeys } from '../../client/src/entities/job/query-keys';
+import { roomsQueryOptions } from '../../client/src/entities/job/queries';
 import type { RoomRecord } from '@contract';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { bedroomInput, JOB_ID, roomRecord } from './helpers/walkthrough-harness';

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { WalkthroughView } from '../../client/src/features/walkthrough/components/walkthrough-view';
 import { roomTarget, type WalkthroughEdit } from '../../client/src/features/walkthrough/sync/edits';
 import { overlayRooms } from '../../client/src/features/walkthrough/sync/overlay';
-import { jobKeys } from '../../client/src/lib/job-queries';
+import { jobKeys } from '../../client/src/entities/job/query-keys';
 import type { QueueItem } from '../../client/src/lib/offline/queue';
 import { createQueryClient } from '../../client/src/lib/query-client';
 import { bedroomInput, JOB_ID, jobRecord, renderWalkthrough, ROOM_ID, roomRecord } from './helpers/walkthrough-harness';

@@ -4,7 +4,7 @@ import { createBrowserRouter, type LoaderFunction, type RouteObject } from 'reac
 import { RouteError } from '../components/errors/route-error';
 import { Spinner } from '../components/ui/spinner';
 import { paths } from '../config/paths';
-import { createJobsRoutes } from '../features/jobs/routes';
+import { createJobsRoutes } from './job-routes';
 
 /** What every file in app/routes/ exports. */
 export interface RouteModule {

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
 import { ApiError } from '../../../lib/api-error';
-import { jobKeys } from '../../../lib/job-queries';
+import { jobKeys } from '../../../entities/job/query-keys';
 import { jobResponse } from '@contract';
 import type { NewJobValues } from '../schemas';
 import { createCustomer } from './create-customer';

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
-import { jobKeys } from '../../../lib/job-queries';
+import { jobKeys } from '../../../entities/job/query-keys';
 import { customersResponse } from '@contract';
 
 /** GET /api/customers?search — the first page of matches, for picking a customer. */

@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiFetch } from '../../../lib/api-client';
-import { jobKeys, type JobListFilters } from '../../../lib/job-queries';
+import { jobKeys, type JobListFilters } from '../../../entities/job/query-keys';
 import { jobsResponse } from '@contract';
 
 /** GET /api/jobs?search&status&page&pageSize — sorted by last activity on the server. */

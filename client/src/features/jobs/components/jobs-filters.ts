@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { JobListFilters } from '../../../lib/job-queries';
+import type { JobListFilters } from '../../../entities/job/query-keys';
 import { JOB_STATUSES } from '@contract';
 
 export const JOBS_PAGE_SIZE = 25;

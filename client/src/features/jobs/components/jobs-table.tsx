@@ -1,9 +1,9 @@
 import { createColumnHelper, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { DataTableBody, DataTableHead } from '../../../components/ui/data-table';
 import { Link } from 'react-router-dom';
-import { jobPaths } from '../../../lib/job-paths';
+import { jobPaths } from '../../../entities/job/paths';
 import { type JobRecord } from '@contract';
-import { jobStatusLabels } from '../../../lib/job-labels';
+import { jobStatusLabels } from '../../../entities/job/labels';
 
 const col = createColumnHelper<JobRecord>();
 const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });

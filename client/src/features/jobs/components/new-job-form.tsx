@@ -2,7 +2,8 @@ import { useRef } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { Form } from '../../../components/ui/form';
 import { SelectField, SubmitButton, TextField } from '../../../components/ui/form-fields';
-import { jobPaths } from '../../../lib/job-paths';
+import { SiteFields } from './site-fields';
+import { jobPaths } from '../../../entities/job/paths';
 import { useCreateJob } from '../api/create-job';
 import { newJobSchema, type NewJobInput } from '../schemas';
 import { CustomerPicker } from './customer-picker';
@@ -68,15 +69,7 @@ export function NewJobForm() {
               </div>
             )}
           </fieldset>
-          <fieldset className="grid gap-4 sm:grid-cols-2">
-            <legend className="mb-2 text-lg font-semibold text-ink-900">Site</legend>
-            <TextField name="street" label="Street address" autoComplete="off" />
-            <TextField name="unit" label="Unit or apartment" autoComplete="off" />
-            <TextField name="city" label="City or town" autoComplete="off" />
-            <TextField name="region" label="State or region" autoComplete="off" />
-            <TextField name="postalCode" label="Postal code" autoComplete="off" />
-            <TextField name="notes" label="Job notes" autoComplete="off" />
-          </fieldset>
+          <SiteFields legendClass="mb-2 text-lg font-semibold text-ink-900" />
           <p className="text-sm text-muted">
             The site’s design conditions start from your company’s defaults; check them on the next screen.
           </p>

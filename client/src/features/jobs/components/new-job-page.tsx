@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import { Alert } from '../../../components/ui/alert';
 import { Card } from '../../../components/ui/card';
 import { PageHeader } from '../../../components/ui/page-header';
-import { jobPaths } from '../../../lib/job-paths';
+import { jobPaths } from '../../../entities/job/paths';
 import { useViewer } from '../../../lib/viewer';
 import { NewJobForm } from './new-job-form';
 

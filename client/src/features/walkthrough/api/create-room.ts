@@ -1,5 +1,5 @@
 import { apiFetch } from '../../../lib/api-client';
-import { roomsPath } from '../../../lib/job-queries';
+import { roomsPath } from '../../../entities/job/paths';
 import { roomResponse } from '@contract';
 import type { RoomInputValue } from '../sync/edits';
 

@@ -1,4 +1,4 @@
-import { roomPath } from '../../../lib/job-queries';
+import { roomPath } from '../../../entities/job/paths';
 import { apiFetch } from '../../../lib/api-client';
 
 /** DELETE /api/jobs/:jobId/rooms/:roomId, If-Match: the version the person saw. */

@@ -1,5 +1,5 @@
 import { apiFetch } from '../../../lib/api-client';
-import { roomPath } from '../../../lib/job-queries';
+import { roomPath } from '../../../entities/job/paths';
 import { roomResponse } from '@contract';
 import type { RoomInputValue } from '../sync/edits';
 

@@ -1,4 +1,4 @@
-import { roomPath } from '../../../lib/job-queries';
+import { roomPath } from '../../../entities/job/paths';
 import { apiFetch } from '../../../lib/api-client';
 import { photoResponse } from '@contract';
 

@@ -3,13 +3,15 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Spinner } from '../../../components/ui/spinner';
 import { errorMessage } from '../../../lib/api-error';
-import { getJob, jobKeys } from '../../../lib/job-queries';
+import { getJob } from '../../../entities/job/queries';
+import { jobKeys } from '../../../entities/job/query-keys';
 import type { JobRecord, RoomRecord } from '@contract';
 import { getRoom } from '../api/get-room';
 import { diffFields, mergeChoices, type Choice } from '../../../lib/offline/conflict';
 import { describe, JOB_FIELD_LABELS, ROOM_FIELD_LABELS } from '../model/conflict';
-import { DETAIL_FIELDS, type WalkthroughItem } from '../sync/edits';
-import { customerQueryOptions, getCustomer } from '../api/job-details';
+import { DETAIL_FIELDS } from '../../../entities/job/requests';
+import type { WalkthroughItem } from '../sync/edits';
+import { customerQueryOptions, getCustomer } from '../../../entities/job/queries';
 import { useWalkthroughQueue } from '../sync/queue-context';
 import { ConflictChoices } from '../../../lib/offline/conflict-choices';
 

@@ -2,11 +2,11 @@ import type { JobRecord, UnitSystem } from '@contract';
 import { Link } from 'react-router-dom';
 import { buttonClass } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
-import { jobPaths } from '../../../lib/job-paths';
-import { jobStatusLabels } from '../../../lib/job-labels';
+import { jobPaths } from '../../../entities/job/paths';
+import { jobStatusLabels } from '../../../entities/job/labels';
 import { toDisplay, unitLabel } from '../../../lib/unit-display';
 import type { RoomView } from '../sync/overlay';
-import { JobPeopleFacts } from './job-people';
+import { JobPeopleFacts } from '../../../entities/job/job-people';
 
 /**
  * The job as someone who may not change it sees it (an installer, by the contract's `mayEditJob`):

@@ -1,15 +1,15 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
-import { lazy, Suspense, useState } from 'react';
-import { mayEditJob } from '@contract';
+import { Suspense, useState, type ReactNode } from 'react';
+import { mayEditJob, type JobRecord } from '@contract';
 import { Link } from 'react-router-dom';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { Alert } from '../../../components/ui/alert';
 import { Button, buttonClass } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { Spinner } from '../../../components/ui/spinner';
-import { jobPaths } from '../../../lib/job-paths';
+import { jobPaths } from '../../../entities/job/paths';
 import { useViewer } from '../../../lib/viewer';
-import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../../../lib/job-queries';
+import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../../../entities/job/queries';
 import { LiveHomeTotals } from '../../loads/components/live-home-totals';
 import { roomTarget } from '../sync/edits';
 import { overlayJob, overlayRooms } from '../sync/overlay';
@@ -26,9 +26,6 @@ import { RoomTabs } from './room-tabs';
 import { UnitSystemContext } from './unit-system';
 import { clearUnsavedDraft } from '../../../lib/offline/drafts';
 
-// Folded under the walk-through and not needed to start typing a room: it loads after the page (issue 11).
-const JobDetailsPanel = lazy(async () => ({ default: (await import('./job-details-panel')).JobDetailsPanel }));
-
 /**
  * The walk-through of one job: design conditions, rooms one at a time, live loads.
  *
@@ -38,7 +35,14 @@ const JobDetailsPanel = lazy(async () => ({ default: (await import('./job-detail
  * room for one frame — the editor would show another room and remount, dropping the focus
  * and whatever was being typed. Both reads here see the same moment.
  */
-export function WalkthroughView({ jobId }: { jobId: string }) {
+export function WalkthroughView({
+  jobId,
+  jobDetails,
+}: {
+  jobId: string;
+  /** The job's own details (the jobs feature's panel), folded above the design conditions; the route composes it. */
+  jobDetails?: (job: JobRecord) => ReactNode;
+}) {
   const queue = useWalkthroughQueue();
   const photos = usePhotoQueue();
   const state = useQueueState();
@@ -109,11 +113,13 @@ export function WalkthroughView({ jobId }: { jobId: string }) {
         {/* A refused photo of a room not on screen (or no longer there) is told here. */}
         <PhotoRefusals show={(n) => n.jobId === job.id && n.roomId !== current?.id} />
 
-        <QueryWidgetBoundary name="the job details">
-          <Suspense fallback={<div className="min-h-touch rounded-lg border border-line bg-white p-4" />}>
-            <JobDetailsPanel job={job} />
-          </Suspense>
-        </QueryWidgetBoundary>
+        {jobDetails ? (
+          <QueryWidgetBoundary name="the job details">
+            <Suspense fallback={<div className="min-h-touch rounded-lg border border-line bg-white p-4" />}>
+              {jobDetails(job)}
+            </Suspense>
+          </QueryWidgetBoundary>
+        ) : null}
 
         <details className="rounded-lg border border-line bg-white p-4" open={job.designConditions === null}>
           <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">

@@ -1,44 +1,8 @@
+import type { CustomerChanges, JobChanges } from '../../../entities/job/requests';
 import type { Coalesce, QueueItem } from '../../../lib/offline/queue';
 
 /** A room's input as calc's schema reads it (validated before it is queued). */
 export type RoomInputValue = Record<string, unknown>;
-
-/** The job fields the walk-through writes: entered design values, their notes, tightness. */
-export interface JobChanges {
-  readonly designConditions?: Record<string, number | string>;
-  readonly designSourceNotes?: Record<string, string>;
-  readonly tightness?: string;
-  /** Whole-house facts, sent whole (bedrooms, blower door, ventilation). */
-  readonly house?: Record<string, unknown>;
-  /** Job details (the site, notes, who it is with): only the fields the person changed. */
-  readonly street?: string;
-  readonly unit?: string;
-  readonly city?: string;
-  readonly region?: string;
-  readonly postalCode?: string;
-  readonly notes?: string;
-  readonly salespersonId?: string;
-  readonly assignedInstallerId?: string | null;
-}
-
-/** The job-details fields of JobChanges (the rest are the walk-through's design edits). */
-export const DETAIL_FIELDS = [
-  'street',
-  'unit',
-  'city',
-  'region',
-  'postalCode',
-  'notes',
-  'salespersonId',
-  'assignedInstallerId',
-] as const;
-
-/** The customer's contact details as the job details form changes them. */
-export interface CustomerChanges {
-  readonly name?: string;
-  readonly email?: string | null;
-  readonly phone?: string | null;
-}
 
 /** One autosaved edit. Each carries the whole record as the person left it. */
 export type WalkthroughEdit =

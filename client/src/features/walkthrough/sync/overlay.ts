@@ -8,7 +8,8 @@ import {
   TIGHTNESS,
   type EnteredDesign,
 } from '@contract';
-import type { JobChanges, RoomInputValue, WalkthroughEdit } from './edits';
+import type { JobChanges } from '../../../entities/job/requests';
+import type { RoomInputValue, WalkthroughEdit } from './edits';
 
 /** A room as the screen shows it: the server's record with any waiting edit laid over it. */
 export interface RoomView {

@@ -1,13 +1,13 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { isApiError } from '../../../lib/api-error';
-import { getJob, jobKeys, roomsQueryOptions } from '../../../lib/job-queries';
+import { jobKeys } from '../../../entities/job/query-keys';
+import { customerQueryOptions, getCustomer, getJob, roomsQueryOptions } from '../../../entities/job/queries';
 import type { SendResult } from '../../../lib/offline/queue';
 import type { JobRecord, RoomRecord } from '@contract';
 import { createRoom } from '../api/create-room';
 import { deleteRoom } from '../api/delete-room';
 import { getRoom } from '../api/get-room';
-import { customerQueryOptions, getCustomer, saveCustomer } from '../api/job-details';
-import { updateJob } from '../api/update-job';
+import { saveCustomer, updateJob } from '../../../entities/job/requests';
 import { updateRoom } from '../api/update-room';
 import type { WalkthroughItem } from './edits';
 import { customerHolds, jobHolds, roomHolds } from './settle-replay';

@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { isApiError } from '../../../lib/api-error';
-import { jobKeys } from '../../../lib/job-queries';
+import { jobKeys } from '../../../entities/job/query-keys';
 import type { QueueState } from '../../../lib/offline/queue';
 import type { RoomRecord } from '@contract';
 import { uploadPhoto } from '../api/upload-photo';

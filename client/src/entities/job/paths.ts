@@ -15,3 +15,11 @@ export const jobRoutePatterns = {
   loads: '/jobs/:jobId/loads',
   print: '/jobs/:jobId/loads/print',
 } as const;
+
+/** The API's addresses for a job and the records hanging off it. */
+export const jobPath = (jobId: string) => `/api/jobs/${encodeURIComponent(jobId)}`;
+export const roomsPath = (jobId: string) => `${jobPath(jobId)}/rooms`;
+export const roomPath = (jobId: string, roomId: string) => `${roomsPath(jobId)}/${encodeURIComponent(roomId)}`;
+export const customerPath = (customerId: string) => `/api/customers/${encodeURIComponent(customerId)}`;
+export const STAFF_PATH = '/api/staff';
+export const COMPANY_SETTINGS_PATH = '/api/company/settings';

@@ -1,15 +1,15 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { z } from 'zod';
-import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../../lib/job-queries';
-import { getCurrentPerson } from '../../lib/offline/person';
-import { ensureHeld } from '../../lib/offline/online';
-import { sharedWalkthroughQueue } from '../walkthrough/sync/walkthrough-queue';
-import { jobsQueryOptions } from './api/get-jobs';
-import { filtersFromSearch } from './components/jobs-filters';
+import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../entities/job/queries';
+import { jobsQueryOptions } from '../features/jobs/api/get-jobs';
+import { filtersFromSearch } from '../features/jobs/components/jobs-filters';
+import { sharedWalkthroughQueue } from '../features/walkthrough/sync/walkthrough-queue';
+import { getCurrentPerson } from '../lib/offline/person';
+import { ensureHeld } from '../lib/offline/online';
 
 /**
- * The job screens' loaders. They live apart from routes.tsx so that the router (in the entry
+ * The job screens' loaders. They live apart from job-routes.tsx so that the router (in the entry
  * chunk every page loads, sign-in included) does not carry the offline kit, zod and the job
  * queries: React Router loads this module beside the page's component (issue 11).
  */

@@ -1,34 +1,10 @@
 import { queryOptions } from '@tanstack/react-query';
-import { apiFetch } from './api-client';
-import { jobResponse, roomsResponse, settingsResponse } from '@contract';
+import { customerResponse, jobResponse, roomsResponse, settingsResponse, staffResponse } from '@contract';
+import { apiFetch } from '../../lib/api-client';
+import { COMPANY_SETTINGS_PATH, customerPath, jobPath, roomsPath, STAFF_PATH } from './paths';
+import { jobKeys } from './query-keys';
 
-/**
- * Query keys and read queries for the job records that the jobs, walk-through and loads
- * features share (one key factory, so an edit in one invalidates the others' views).
- */
-export interface JobListFilters {
-  readonly search: string;
-  readonly status: string;
-  readonly page: number;
-  readonly pageSize: number;
-}
-
-export const jobKeys = {
-  all: ['jobs'] as const,
-  lists: () => [...jobKeys.all, 'list'] as const,
-  list: (filters: JobListFilters) => [...jobKeys.lists(), filters] as const,
-  detail: (jobId: string) => [...jobKeys.all, 'detail', jobId] as const,
-  rooms: (jobId: string) => [...jobKeys.detail(jobId), 'rooms'] as const,
-  serverLoads: (jobId: string) => [...jobKeys.detail(jobId), 'loads'] as const,
-  customers: (search: string) => [...jobKeys.all, 'customers', search] as const,
-  settings: () => ['company-settings'] as const,
-};
-
-export const jobPath = (jobId: string) => `/api/jobs/${encodeURIComponent(jobId)}`;
-export const roomsPath = (jobId: string) => `${jobPath(jobId)}/rooms`;
-export const roomPath = (jobId: string, roomId: string) => `${roomsPath(jobId)}/${encodeURIComponent(roomId)}`;
-export const COMPANY_SETTINGS_PATH = '/api/company/settings';
-
+/** Read queries for the job records (each parsed with the contract's schema by apiFetch). */
 export async function getJob(jobId: string, signal?: AbortSignal) {
   return (await apiFetch(jobPath(jobId), { schema: jobResponse, signal })).job;
 }
@@ -68,5 +44,20 @@ export const companySettingsQueryOptions = () =>
     queryKey: jobKeys.settings(),
     queryFn: async ({ signal }) =>
       (await apiFetch(COMPANY_SETTINGS_PATH, { schema: settingsResponse, signal })).settings,
+    staleTime: 5 * 60_000,
+  });
+
+export async function getCustomer(customerId: string, signal?: AbortSignal) {
+  return (await apiFetch(customerPath(customerId), { schema: customerResponse, signal })).customer;
+}
+
+export const customerQueryOptions = (customerId: string) =>
+  queryOptions({ queryKey: jobKeys.customer(customerId), queryFn: ({ signal }) => getCustomer(customerId, signal) });
+
+/** GET /api/staff — owner and estimator only; the people a job can be handed to. */
+export const staffQueryOptions = () =>
+  queryOptions({
+    queryKey: jobKeys.staff(),
+    queryFn: async ({ signal }) => (await apiFetch(STAFF_PATH, { schema: staffResponse, signal })).staff,
     staleTime: 5 * 60_000,
   });

@@ -1,0 +1,31 @@
+import { lazy } from 'react';
+import { useParams } from 'react-router-dom';
+import { z } from 'zod';
+import { JobEditsProvider } from '../../entities/job/job-edits';
+import { WalkthroughView } from '../../features/walkthrough/components/walkthrough-view';
+import { useWalkthroughJobEdits } from '../../features/walkthrough/sync/job-edits';
+
+// Folded under the walk-through and not needed to start typing a room: it loads after the page (issue 11).
+const JobDetailsPanel = lazy(async () => ({
+  default: (await import('../../features/jobs/components/job-details-panel')).JobDetailsPanel,
+}));
+
+const jobParams = z.object({ jobId: z.uuid({ message: 'That is not a job address.' }) });
+
+/**
+ * One job's walk-through with the job's own details (status moves, contact, site, people, delete)
+ * folded above it; the details write through the walk-through's queue (entities/job/job-edits.tsx).
+ */
+export function JobWalkthrough({ jobId }: { jobId: string }) {
+  return (
+    <JobEditsProvider useEdits={useWalkthroughJobEdits}>
+      <WalkthroughView jobId={jobId} jobDetails={(job) => <JobDetailsPanel job={job} />} />
+    </JobEditsProvider>
+  );
+}
+
+/** /jobs/:jobId — the loader is in app/job-routes.tsx. */
+export default function JobWalkthroughRoute() {
+  const { jobId } = jobParams.parse(useParams());
+  return <JobWalkthrough jobId={jobId} />;
+}

@@ -1,7 +1,8 @@
 import { enteredOf, notesOf, type CustomerRecord, type JobRecord } from '@contract';
 import { sameValue } from '../../../lib/offline/conflict';
 import { sameRoomInput } from '../model/saveable';
-import type { CustomerChanges, JobChanges, RoomInputValue } from './edits';
+import type { CustomerChanges, JobChanges } from '../../../entities/job/requests';
+import type { RoomInputValue } from './edits';
 
 /**
  * A 409 whose edit the record already holds is no conflict: the same change reached the server
@@ -27,6 +28,8 @@ function jobValue(job: JobRecord, key: keyof JobChanges): unknown {
       return job.salesperson?.id ?? '';
     case 'assignedInstallerId':
       return job.assignedInstaller?.id ?? null;
+    case 'status':
+      return job.status;
     default:
       return job.site[key] ?? '';
   }

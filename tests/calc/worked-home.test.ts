@@ -206,7 +206,7 @@ describe('worked example: three-room house, hour by hour', () => {
     const peak = peakOf(hours);
     expect(r.peakHour).toBe(peak + 1);
     const { total, ...parts } = hours[peak]!;
-    expect(r.sensibleGain).toEqual({ ...parts, floor: 0, ventilation: 0, total });
+    expect(r.sensibleGain).toEqual({ ...parts, floor: 0, ventilation: 0, ducts: 0, total });
     expect(r.hourlySensibleBtuh).toEqual(hours.map((h) => h.total));
     // Latent: 0.68 × 10 × 33.807 = 229.89 → 230; people 3 × 153.546 = 460.64 → 461
     expect(r.latentGain.infiltration).toBe(230);
@@ -225,6 +225,7 @@ describe('worked example: three-room house, hour by hour', () => {
       ventilation: 0,
       people: 0,
       appliances: 0,
+      ducts: 0,
       total: 5585,
     });
   });

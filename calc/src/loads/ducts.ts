@@ -56,7 +56,7 @@ export const DUCT_LEAKAGE: Readonly<
   leaky: { supply: 0.2, return: 0.2, label: 'Leaky (about 20 % each side)' },
 };
 
-/** Default blower airflow: 400 cfm per ton of the larger of the cooling and heating loads served. [TRADE: trade-facts §7, 400 CFM/ton] */
+/** Default blower airflow: 400 cfm per ton of the cooling load served (of the heat loss when there is no cooling load). [TRADE: trade-facts §7, 400 CFM/ton] */
 export const DUCT_CFM_PER_TON = 400;
 
 /**
@@ -155,7 +155,8 @@ export function ductLoadFromParsed(
   const ar = ducts.returnAreaFt2 ?? DUCT_AREA_DEFAULT.returnPerFt2 * served.floorAreaFt2;
   const coolingTotal = Math.max(0, served.sensibleBtuh) + Math.max(0, served.latentBtuh);
   const q =
-    ducts.airflowCfm ?? (DUCT_CFM_PER_TON * Math.max(coolingTotal, Math.max(0, served.heatingBtuh))) / BTUH_PER_TON;
+    ducts.airflowCfm ??
+    (DUCT_CFM_PER_TON * (coolingTotal > 0 ? coolingTotal : Math.max(0, served.heatingBtuh))) / BTUH_PER_TON;
   const cq = SENSIBLE_CONSTANT * psy.altitudeFactor * q;
   const r = ducts.insulationR + DUCT_FILM_R;
   const bs = cq > 0 ? Math.exp(-as / (cq * r)) : 0;

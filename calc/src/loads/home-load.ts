@@ -10,6 +10,7 @@ import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
 import { designDayContext, HOURS, type DesignDayContext } from './design-day-context';
 import { BLOWER_DOOR_N, DEFAULT_RECOVERY_SENSIBLE, RLF_INTERNAL, SUMMER_LEAKAGE_FRACTION } from './hourly-method';
 import { METHOD_NOTES } from './notes';
+import { applyDucts, type HomeDucts } from './home-ducts';
 import {
   exposedEnvelopeFt2,
   roomComponentsAt,
@@ -94,6 +95,8 @@ export interface HomeLoad {
     readonly deltaGrains: number;
     readonly indoorDewPointF: number;
   };
+  /** The ducted system's duct gains (at the block hour) and losses, or null when the home has none entered. */
+  readonly ducts: HomeDucts | null;
   readonly notes: readonly string[];
   readonly isEstimate: true;
 }
@@ -110,6 +113,7 @@ function sumComponents(sets: readonly LoadComponents[]): LoadComponents {
     ventilation = 0,
     people = 0,
     appliances = 0,
+    ducts = 0,
     total = 0;
   for (const c of sets) {
     walls += c.walls;
@@ -122,6 +126,7 @@ function sumComponents(sets: readonly LoadComponents[]): LoadComponents {
     ventilation += c.ventilation;
     people += c.people;
     appliances += c.appliances;
+    ducts += c.ducts;
     total += c.total;
   }
   return {
@@ -135,6 +140,7 @@ function sumComponents(sets: readonly LoadComponents[]): LoadComponents {
     ventilation,
     people,
     appliances,
+    ducts,
     total,
   };
 }
@@ -226,7 +232,7 @@ export function homeLoadFromParsed(
   const kitchens = home.rooms.filter((r) => /kitchen/i.test(r.name));
   const kitchenArea = kitchens.reduce((s, r) => s + floorAreaFt2(r), 0);
 
-  const work: RoomHourly[] = [];
+  let work: RoomHourly[] = [];
   const houseHourly = new Float64Array(HOURS);
   home.rooms.forEach((room, i) => {
     const a = areas[i] ?? 0;
@@ -255,10 +261,14 @@ export function homeLoadFromParsed(
       ventHeatingCfm: vent.heating * areaShare,
       defaultInternal,
     };
-    const w = roomHourly(room, psy, ctx, air);
-    for (let h = 0; h < HOURS; h += 1) houseHourly[h] = (houseHourly[h] ?? 0) + (w.hourly[h] ?? 0);
-    work.push(w);
+    work.push(roomHourly(room, psy, ctx, air));
   });
+  let ductsByHour: ReturnType<typeof applyDucts> | null = null;
+  if (home.ducts) {
+    ductsByHour = applyDucts(home.ducts, work, psy, ctx, areas);
+    work = ductsByHour.work;
+  }
+  for (const w of work) for (let h = 0; h < HOURS; h += 1) houseHourly[h] = (houseHourly[h] ?? 0) + (w.hourly[h] ?? 0);
   let block = 0;
   for (let h = 1; h < HOURS; h += 1) if ((houseHourly[h] ?? 0) > (houseHourly[block] ?? 0)) block = h;
 
@@ -348,9 +358,17 @@ export function homeLoadFromParsed(
       deltaGrains: roundHalfUp(psy.deltaGrains, 2),
       indoorDewPointF: roundHalfUp(psy.indoorDewPointF, 2),
     },
+    ducts: ductsFigures(ductsByHour, block),
     notes: METHOD_NOTES,
     isEstimate: true,
   };
+}
+
+/** The duct figures at the block hour (the served rooms' shares at that hour add up to its sensible gain). */
+function ductsFigures(d: ReturnType<typeof applyDucts> | null, block: number): HomeDucts | null {
+  const at = d?.byHour[block];
+  if (!d || !at) return null;
+  return { ...at, roomIds: d.roomIds };
 }
 
 /**

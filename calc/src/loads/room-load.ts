@@ -21,6 +21,7 @@ import { appliancesLoad, peopleLoad } from './internal';
 import { METHOD_NOTES } from './notes';
 import { designDayContext, HOURS, storeSolar, type DesignDayContext } from './design-day-context';
 import { GARAGE_COOLING_FRACTION, SUMMER_LEAKAGE_FRACTION, type MassClass } from './hourly-method';
+import { peakDetail, type PeakDetail } from './peak-detail';
 
 /** Load components, Btu/h, each rounded half-up to 1 Btu/h; `total` = sum of the rounded parts. */
 export interface LoadComponents {
@@ -34,6 +35,8 @@ export interface LoadComponents {
   readonly ventilation: number;
   readonly people: number;
   readonly appliances: number;
+  /** Duct gains or losses of a ducted system serving the room (0 when none). */
+  readonly ducts: number;
   readonly total: number;
 }
 
@@ -49,8 +52,11 @@ export const COMPONENT_KEYS: readonly ComponentKey[] = [
   'ventilation',
   'people',
   'appliances',
+  'ducts',
 ];
-const K = COMPONENT_KEYS.length;
+/** Columns of a room's hourly table (one per component). */
+export const COMPONENT_COUNT = COMPONENT_KEYS.length;
+const K = COMPONENT_COUNT;
 
 /** One room's estimated loads. Cooling figures are the room's own peak hour of the design day. */
 export interface RoomLoad {
@@ -76,6 +82,8 @@ export interface RoomLoad {
   readonly coolingTotalBtuh: number;
   /** The room's part of the home's block load: its sensible gain at the home's peak hour. */
   readonly atBlock: { readonly hour: number; readonly sensibleBtuh: number; readonly latentBtuh: number };
+  /** The drill-down at the room's peak hour: walls and windows by façade (they add up to the components). */
+  readonly atPeak: PeakDetail;
   readonly notes: readonly string[];
   readonly isEstimate: true;
 }
@@ -94,6 +102,7 @@ export function toComponents(parts: Parts): LoadComponents {
   const ventilation = roundHalfUp(parts.ventilation);
   const people = roundHalfUp(parts.people);
   const appliances = roundHalfUp(parts.appliances);
+  const ducts = roundHalfUp(parts.ducts);
   const total =
     walls +
     windowsConduction +
@@ -104,7 +113,8 @@ export function toComponents(parts: Parts): LoadComponents {
     infiltration +
     ventilation +
     people +
-    appliances;
+    appliances +
+    ducts;
   return {
     walls,
     windowsConduction,
@@ -116,6 +126,7 @@ export function toComponents(parts: Parts): LoadComponents {
     ventilation,
     people,
     appliances,
+    ducts,
     total,
   };
 }
@@ -123,7 +134,7 @@ export function toComponents(parts: Parts): LoadComponents {
 /** Components from a row of already-rounded parts (in COMPONENT_KEYS order). */
 function componentsFromRow(row: ArrayLike<number>, offset: number): LoadComponents {
   const v = (i: number) => row[offset + i] ?? 0;
-  const total = v(0) + v(1) + v(2) + v(3) + v(4) + v(5) + v(6) + v(7) + v(8) + v(9);
+  const total = v(0) + v(1) + v(2) + v(3) + v(4) + v(5) + v(6) + v(7) + v(8) + v(9) + v(10);
   return {
     walls: v(0),
     windowsConduction: v(1),
@@ -135,6 +146,7 @@ function componentsFromRow(row: ArrayLike<number>, offset: number): LoadComponen
     ventilation: v(7),
     people: v(8),
     appliances: v(9),
+    ducts: v(10),
     total,
   };
 }
@@ -174,10 +186,14 @@ const massOf = (construction: string): MassClass => (construction.startsWith('ma
 export interface RoomHourly {
   readonly room: Room;
   readonly air: RoomAir;
+  readonly ctx: DesignDayContext;
+  /** Hourly rounded parts; column `ducts` is filled by the home when a ducted system serves the room. */
   readonly table: Float64Array;
   readonly hourly: Float64Array;
   readonly peakIndex: number;
   readonly latent: LoadComponents;
+  /** The room's share of the ducted system's heating loss, Btu/h (rounded). */
+  readonly ductHeatingBtuh: number;
 }
 
 /**
@@ -286,6 +302,7 @@ export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayCo
     table[o + 7] = c7;
     table[o + 8] = peopleS;
     table[o + 9] = applS;
+    table[o + 10] = 0;
     const total = c0 + c1 + c2 + c3 + c4 + c5 + c6 + c7 + peopleS + applS;
     hourly[h] = total;
     if (total > peakValue) {
@@ -305,12 +322,13 @@ export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayCo
     ventilation: latCoef * air.ventLatentCfm,
     people: people.latent + (di?.peopleLatent ?? 0),
     appliances: appl.latent + (di?.otherLatent ?? 0),
+    ducts: 0,
   });
-  return { room, air, table, hourly, peakIndex: peak, latent };
+  return { room, air, ctx, table, hourly, peakIndex: peak, latent, ductHeatingBtuh: 0 };
 }
 
 /** Heating: conduction at the winter ΔT, winter leakage and ventilation; no sun, people or appliance credit. */
-function roomHeating(room: Room, p: DesignPsychrometrics, air: RoomAir): LoadComponents {
+export function roomHeating(room: Room, p: DesignPsychrometrics, air: RoomAir, ductsBtuh: number): LoadComponents {
   const { walls, windowsConduction, doors } = exposedWallsLoad(room, p);
   const af = p.altitudeFactor;
   return toComponents({
@@ -324,6 +342,7 @@ function roomHeating(room: Room, p: DesignPsychrometrics, air: RoomAir): LoadCom
     ventilation: SENSIBLE_CONSTANT * air.ventHeatingCfm * p.heatingDeltaTF * af,
     people: 0,
     appliances: 0,
+    ducts: ductsBtuh,
   });
 }
 
@@ -332,7 +351,7 @@ export function roomLoadFromHourly(w: RoomHourly, p: DesignPsychrometrics, block
   const room = w.room;
   const area = floorAreaFt2(room);
   const sensibleGain = componentsFromRow(w.table, w.peakIndex * K);
-  const heatLoss = roomHeating(room, p, w.air);
+  const heatLoss = roomHeating(room, p, w.air, w.ductHeatingBtuh);
   const hourlySensibleBtuh: number[] = [];
   for (let h = 0; h < HOURS; h += 1) hourlySensibleBtuh.push(w.hourly[h] ?? 0);
   return {
@@ -350,6 +369,7 @@ export function roomLoadFromHourly(w: RoomHourly, p: DesignPsychrometrics, block
     heatLoss,
     coolingTotalBtuh: sensibleGain.total + w.latent.total,
     atBlock: { hour: blockIndex + 1, sensibleBtuh: w.hourly[blockIndex] ?? 0, latentBtuh: w.latent.total },
+    atPeak: peakDetail(w, sensibleGain),
     notes: METHOD_NOTES,
     isEstimate: true,
   };

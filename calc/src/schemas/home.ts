@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { bounded, boundedInt, keyField, nameField } from './fields';
 import { designConditionsSchema } from './design-conditions';
 import { roomInputSchema } from './room-input';
+import { ductSystemSchema } from './ducts';
 
 /** Envelope tightness keys of the construction defaults. */
 export const tightnessSchema = z.enum(['very-tight', 'tight', 'average', 'leaky', 'very-leaky'], {
@@ -30,6 +31,8 @@ export const houseSchema = z.object({
   blowerDoorCfm50: bounded('Blower-door CFM50', 50, 20000, 'cfm').optional(),
   bedrooms: boundedInt('Bedrooms', 0, 20).optional(),
   ventilation: ventilationSchema.optional(),
+  /** A ducted system's ducts (location, insulation, leakage); absent when no ducted system serves the home. */
+  ducts: ductSystemSchema.optional(),
 });
 
 /** A home: its design conditions, its tightness and its rooms (unique ids). */
@@ -48,6 +51,10 @@ export const homeInputSchema = z
       if (seen.has(room.id))
         ctx.addIssue({ code: 'custom', path: ['rooms', i, 'id'], message: 'Each room needs its own id' });
       seen.add(room.id);
+    });
+    home.ducts?.roomIds?.forEach((id, i) => {
+      if (!seen.has(id))
+        ctx.addIssue({ code: 'custom', path: ['ducts', 'roomIds', i], message: `Room "${id}" is not in the home` });
     });
   });
 

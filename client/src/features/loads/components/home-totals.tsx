@@ -20,6 +20,25 @@ export function designDayLine(load: HomeLoad): string {
   return `Design day ${MONTHS[d.month - 1] ?? ''} 21 at ${lat}; ${sky}.`;
 }
 
+const DUCT_PLACE: Record<string, string> = {
+  attic: 'the attic',
+  crawlspace: 'a crawl space',
+  garage: 'the garage',
+  basement: 'an unheated basement',
+  conditioned: 'the conditioned space',
+};
+
+/** The ducts in words: where, how insulated and leaky, and what they add (ASHRAE 152 balance). */
+export function ductLine(d: NonNullable<HomeLoad['ducts']>): string {
+  const pct = (f: number) => `${Math.round(f * 100)} %`;
+  return (
+    `Ducts in ${DUCT_PLACE[d.location] ?? d.location} (R-${d.insulationR}, leakage ${pct(d.supplyLeakageFraction)} supply / ${pct(d.returnLeakageFraction)} return, ${n(d.airflowCfm)} cfm, ${n(d.supplyAreaFt2)} ft² supply): ` +
+    `+${n(d.cooling.sensibleBtuh)} Btu/h sensible and +${n(d.cooling.latentBtuh)} Btu/h latent at ${hourLabel(d.cooling.hour)} (surroundings ${d.cooling.surroundingsF} °F), ` +
+    `+${n(d.heating.btuh)} Btu/h heat loss (surroundings ${d.heating.surroundingsF} °F). ` +
+    `Delivery effectiveness ${d.cooling.deliveryEffectiveness.toFixed(2)} cooling, ${d.heating.deliveryEffectiveness.toFixed(2)} heating (ASHRAE Standard 152 balance).`
+  );
+}
+
 /**
  * Whole-home totals: the block (coincident) load at the home's peak hour beside the sum of the
  * rooms' own peaks, the sensible heat ratio, heat loss; on the loads page also the hour-by-hour curve.
@@ -69,6 +88,11 @@ export function HomeTotals({
         Btu/h if every room peaked at once ({share} %): rooms peak at different hours, so equipment is sized on the
         block load.
       </p>
+      {load.ducts && load.ducts.location !== 'conditioned' ? (
+        <p className="text-sm text-ink-950" data-testid="duct-line">
+          {ductLine(load.ducts)}
+        </p>
+      ) : null}
       <p className="text-sm text-muted">{designDayLine(load)}</p>
       {chart ? (
         <div className="flex flex-col gap-1">

@@ -1,4 +1,5 @@
 import { roomPlausibilityWarnings, type Room, type RoomLoad } from '@calc';
+import { ComponentDrilldown } from './component-drilldown';
 import { LazyComponentChart } from './lazy-component-chart';
 import { LoadFigures } from './load-figures';
 
@@ -20,6 +21,7 @@ export function RoomLoadCard({ load, room }: { load: RoomLoad; room: Room | unde
         heatLoss={load.heatLoss}
         roomName={load.roomName}
       />
+      <ComponentDrilldown load={load} />
       {warnings.length > 0 ? (
         <ul className="list-disc pl-5 text-sm text-amber-deep">
           {warnings.map((w) => (

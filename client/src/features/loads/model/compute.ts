@@ -28,6 +28,7 @@ export const COMPONENT_LABELS: Record<ComponentKey, string> = {
   ventilation: 'Ventilation',
   people: 'People',
   appliances: 'Appliances',
+  ducts: 'Ducts',
 };
 export { COMPONENT_KEYS };
 

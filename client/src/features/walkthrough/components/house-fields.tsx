@@ -12,7 +12,24 @@ const VENTILATION = [
   { value: 'erv-hrv', label: 'ERV or HRV (heat recovery)' },
 ];
 
+const DUCT_LOCATIONS = [
+  { value: 'none', label: 'No ducted system (ductless or none yet)' },
+  { value: 'conditioned', label: 'Ducts inside the conditioned space' },
+  { value: 'attic', label: 'Ducts in the attic' },
+  { value: 'crawlspace', label: 'Ducts in a crawl space' },
+  { value: 'garage', label: 'Ducts in the garage' },
+  { value: 'basement', label: 'Ducts in an unheated basement' },
+];
+
+const DUCT_LEAKAGE = [
+  { value: 'sealed', label: 'Sealed and tested (about 4 % each side)' },
+  { value: 'typical', label: 'Typical (about 10 % each side)' },
+  { value: 'leaky', label: 'Leaky (about 20 % each side)' },
+];
+
 const num = (v: unknown) => (typeof v === 'number' ? v : undefined);
+const ductsOf = (h: HouseDraft): Record<string, unknown> =>
+  typeof h.ducts === 'object' && h.ducts !== null ? (h.ducts as Record<string, unknown>) : {};
 const vent = (h: HouseDraft): Record<string, unknown> =>
   typeof h.ventilation === 'object' && h.ventilation !== null ? (h.ventilation as Record<string, unknown>) : {};
 
@@ -34,6 +51,14 @@ export function HouseFields({ value, onChange }: { value: HouseDraft; onChange: 
     if (x === undefined) delete next[key];
     else next[key] = x;
     onChange(next);
+  };
+  const d = ductsOf(value);
+  const ductLocation = typeof d.location === 'string' ? d.location : 'none';
+  const setDucts = (key: string, x: unknown) => {
+    const next: Record<string, unknown> = { ...d, location: ductLocation };
+    if (x === undefined) delete next[key];
+    else next[key] = x;
+    set('ducts', next);
   };
   const setVent = (key: string, x: unknown) => {
     const next: Record<string, unknown> = { ...v, kind };
@@ -92,6 +117,30 @@ export function HouseFields({ value, onChange }: { value: HouseDraft; onChange: 
               error={errors.get('ventilation.latentEffectiveness')}
               hint="Empty: 0 (no moisture recovered)."
               onChange={(x) => setVent('latentEffectiveness', x)}
+            />
+          </>
+        ) : null}
+        <SelectInput
+          label="Ducted system: where the ducts run"
+          value={ductLocation}
+          options={DUCT_LOCATIONS}
+          onChange={(k) => set('ducts', k === 'none' ? undefined : { ...d, location: k })}
+        />
+        {ductLocation !== 'none' && ductLocation !== 'conditioned' ? (
+          <>
+            <NumberInput
+              label="Duct insulation"
+              unit="R"
+              value={num(d.insulationR)}
+              error={errors.get('ducts.insulationR')}
+              hint="0 for bare metal. Empty: R-6."
+              onChange={(x) => setDucts('insulationR', x)}
+            />
+            <SelectInput
+              label="Duct leakage"
+              value={typeof d.leakage === 'string' ? d.leakage : 'typical'}
+              options={DUCT_LEAKAGE}
+              onChange={(k) => setDucts('leakage', k)}
             />
           </>
         ) : null}

@@ -1,0 +1,132 @@
+import { DOOR_TYPES, GLAZING_TYPES, INTERIOR_SHADING_IAC, WALL_CONSTRUCTIONS } from '../construction-defaults';
+import { doorAreaFt2, wallGrossAreaFt2, windowAreaFt2 } from '../geometry';
+import type { Wall } from '../schemas/room';
+
+type CompassDirection = Wall['direction'];
+import { HOURS, storeSolar } from './design-day-context';
+import type { LoadComponents, RoomHourly } from './room-load';
+
+/** One façade of a room at its peak hour, Btu/h; the façades add up to the room's components. */
+export interface FacadePart {
+  readonly direction: CompassDirection;
+  readonly netWallFt2: number;
+  readonly windowFt2: number;
+  readonly wallsBtuh: number;
+  readonly doorsBtuh: number;
+  readonly windowsConductionBtuh: number;
+  readonly windowsSolarBtuh: number;
+}
+
+/** The drill-down of a room's sensible gain at its peak hour. */
+export interface PeakDetail {
+  readonly hour: number;
+  readonly facades: readonly FacadePart[];
+}
+
+/**
+ * Shares an integer `total` among parts in proportion to `raws` (each ≥ 0) by largest remainder,
+ * so the parts are integers that add up to the total. [OWN: the screen's breakdown always adds up]
+ */
+export function apportion(total: number, raws: readonly number[]): number[] {
+  const clean = raws.map((r) => (r > 0 && Number.isFinite(r) ? r : 0));
+  const sum = clean.reduce((a, b) => a + b, 0);
+  if (raws.length === 0) return [];
+  if (!(sum > 0)) return clean.map((_, i) => (i === 0 ? total : 0));
+  const exact = clean.map((r) => (total * r) / sum);
+  const out = exact.map(Math.floor);
+  let left = total - out.reduce((a, b) => a + b, 0);
+  const order = exact.map((e, i) => ({ i, rem: e - Math.floor(e) })).sort((a, b) => b.rem - a.rem || a.i - b.i);
+  for (const { i } of order) {
+    if (left <= 0) break;
+    out[i] = (out[i] ?? 0) + 1;
+    left -= 1;
+  }
+  return out;
+}
+
+const massOf = (construction: string) => (construction.startsWith('masonry') ? 'masonry' : 'frame');
+const pos = (x: number): number => (x > 0 ? x : 0);
+
+/** Walls, doors and windows by façade at the room's peak hour, the same terms as the hourly method. */
+export function peakDetail(w: RoomHourly, gain: LoadComponents): PeakDetail {
+  const { room, ctx } = w;
+  const h = w.peakIndex;
+  const dt = ctx.outdoorDtF[h] ?? 0;
+  const order: CompassDirection[] = [];
+  const raw = new Map<
+    CompassDirection,
+    { net: number; glass: number; walls: number; doors: number; cond: number; sun: number }
+  >();
+  for (const wall of room.exposedWalls) {
+    const fs = ctx.facing[wall.direction];
+    const color = wall.color ?? 'medium';
+    let acc = raw.get(wall.direction);
+    if (!acc) {
+      acc = { net: 0, glass: 0, walls: 0, doors: 0, cond: 0, sun: 0 };
+      raw.set(wall.direction, acc);
+      order.push(wall.direction);
+    }
+    let openings = 0;
+    for (const win of wall.windows) {
+      const g = GLAZING_TYPES[win.glazing].value;
+      const a = windowAreaFt2(win);
+      openings += a;
+      acc.glass += a;
+      acc.cond += (win.uFactor ?? g.u) * a * dt;
+      const k = a * (win.shgc ?? g.shgc) * INTERIOR_SHADING_IAC[win.interiorShading].value;
+      const depth = win.overhangDepthFt ?? 0;
+      if (depth > 0) {
+        const heightFt = win.heightIn !== undefined ? win.heightIn / 12 : Math.sqrt(a / win.count);
+        const gap = win.overhangGapFt ?? 0;
+        const instant = new Float64Array(HOURS);
+        for (let i = 0; i < HOURS; i += 1) {
+          const shade = Math.min(heightFt, pos(depth * (fs.profileTan[i] ?? 0) - gap));
+          const sunlit = heightFt > 0 ? 1 - shade / heightFt : 1;
+          instant[i] = k * ((fs.glassBeam[i] ?? 0) * sunlit + (fs.glassDiffuse[i] ?? 0));
+        }
+        acc.sun += storeSolar(instant)[h] ?? 0;
+      } else acc.sun += k * (fs.stored[h] ?? 0);
+    }
+    for (const d of wall.doors) {
+      const a = doorAreaFt2(d);
+      openings += a;
+      acc.doors +=
+        (d.uFactor ?? DOOR_TYPES[d.doorType].value) * a * (ctx.wallDt(wall.direction, color, 'frame')[h] ?? 0);
+    }
+    const net = Math.max(0, wallGrossAreaFt2(wall, room.ceilingHeightFt) - openings);
+    acc.net += net;
+    acc.walls +=
+      (wall.uFactor ?? WALL_CONSTRUCTIONS[wall.construction].value) *
+      net *
+      (ctx.wallDt(wall.direction, color, massOf(wall.construction))[h] ?? 0);
+  }
+  const list = order.map((d) => raw.get(d) ?? { net: 0, glass: 0, walls: 0, doors: 0, cond: 0, sun: 0 });
+  const walls = apportion(
+    gain.walls,
+    list.map((x) => x.walls),
+  );
+  const doors = apportion(
+    gain.doors,
+    list.map((x) => x.doors),
+  );
+  const cond = apportion(
+    gain.windowsConduction,
+    list.map((x) => x.cond),
+  );
+  const sun = apportion(
+    gain.windowsSolar,
+    list.map((x) => x.sun),
+  );
+  return {
+    hour: h + 1,
+    facades: order.map((direction, i) => ({
+      direction,
+      netWallFt2: Math.round((list[i]?.net ?? 0) * 10) / 10,
+      windowFt2: Math.round((list[i]?.glass ?? 0) * 10) / 10,
+      wallsBtuh: walls[i] ?? 0,
+      doorsBtuh: doors[i] ?? 0,
+      windowsConductionBtuh: cond[i] ?? 0,
+      windowsSolarBtuh: sun[i] ?? 0,
+    })),
+  };
+}

@@ -1,5 +1,14 @@
 import { z } from 'zod';
-import { bounded, boundedInt, designSchema, discountSchema, keyField, nameField, sellRuleSchema } from '@calc';
+import {
+  bounded,
+  boundedInt,
+  designSchema,
+  discountSchema,
+  keyField,
+  nameField,
+  sellRuleSchema,
+  TAX_RULES,
+} from '@calc';
 import type { Role } from './enums';
 
 /**
@@ -45,7 +54,7 @@ export const depositSchema = z
 
 export const taxOverrideSchema = z.strictObject({
   taxRatePercent: bounded('Tax rate', 0, 20, '%'),
-  taxOn: z.enum(['materials', 'total', 'none'], { error: 'Choose what is taxed' }),
+  taxOn: z.enum(TAX_RULES, { error: 'Choose what is taxed' }),
 });
 
 /** A discount as typed: calc's shape, a percent at most 100. Amounts are cents. */
@@ -74,23 +83,17 @@ const quantity = bounded('Quantity', 0, 100_000);
 const unitCost = boundedInt('Unit cost', 0, 100_000_000, 'cents');
 
 /**
- * One change to the generated takeoff. `change` and `remove` name a generated line by its item key;
- * `add` is a line of the estimator's own (its `id` is theirs, unique in the option).
+ * One change to the generated takeoff, as the desk sends it: a new quantity or unit cost for a generated
+ * line (by its item key), a generated line removed, or a line of the estimator's own (`id` theirs, unique in
+ * the option). The server stores each with the generated value it replaced (calc's `TakeoffEdit`), so a
+ * later design change can tell whether the edit still applies (calc's `regenerateTakeoff`).
  */
 export const takeoffEditSchema = z.discriminatedUnion(
   'kind',
   [
-    z
-      .strictObject({
-        kind: z.literal('change'),
-        itemKey: keyField('Item'),
-        quantity: quantity.optional(),
-        unitCostCents: unitCost.optional(),
-      })
-      .refine((e) => e.quantity !== undefined || e.unitCostCents !== undefined, {
-        message: 'Change the quantity, the unit cost or both',
-        path: ['quantity'],
-      }),
+    z.strictObject({ kind: z.literal('quantity'), itemKey: keyField('Item'), quantity }),
+    z.strictObject({ kind: z.literal('unit-price'), itemKey: keyField('Item'), unitCostCents: unitCost }),
+    z.strictObject({ kind: z.literal('remove'), itemKey: keyField('Item') }),
     z.strictObject({
       kind: z.literal('add'),
       id: keyField('Line id'),
@@ -100,11 +103,21 @@ export const takeoffEditSchema = z.discriminatedUnion(
       category: z.enum(TAKEOFF_CATEGORIES, { error: 'Choose equipment, material or labor' }),
       unitCostCents: unitCost,
     }),
-    z.strictObject({ kind: z.literal('remove'), itemKey: keyField('Item') }),
   ],
-  { error: 'An edit is a change, an add or a remove' },
+  { error: 'An edit is a quantity, a unit price, a removal or an added line' },
 );
-export type TakeoffEditInput = z.input<typeof takeoffEditSchema>;
+export type TakeoffEditInput = z.output<typeof takeoffEditSchema>;
+
+/** The item key an added line gets: never one calc generates. */
+export const addedLineKey = (id: string): string => `added:${id}`;
+
+/** What names an edit in answers and in `regenerate`'s accept/drop: its kind and the line it is about. */
+export function takeoffEditKey(
+  e: { kind: 'add'; id: string } | { kind: 'add'; line: { itemKey: string } } | { kind: string; itemKey: string },
+): string {
+  if (e.kind !== 'add') return 'itemKey' in e ? `${e.kind}:${e.itemKey}` : e.kind;
+  return `add:${'id' in e ? addedLineKey(e.id) : 'line' in e ? e.line.itemKey : ''}`;
+}
 
 export const takeoffEditsSchema = z
   .array(takeoffEditSchema)
@@ -112,13 +125,9 @@ export const takeoffEditsSchema = z
   .superRefine((edits, ctx) => {
     const seen = new Set<string>();
     edits.forEach((e, i) => {
-      const k = e.kind === 'add' ? `add:${e.id}` : `line:${e.itemKey}`;
+      const k = takeoffEditKey(e);
       if (seen.has(k))
-        ctx.addIssue({
-          code: 'custom',
-          path: [i, e.kind === 'add' ? 'id' : 'itemKey'],
-          message: 'This line is edited twice',
-        });
+        ctx.addIssue({ code: 'custom', path: [i, e.kind === 'add' ? 'id' : 'itemKey'], message: 'This line is edited twice' });
       seen.add(k);
     });
   });
@@ -152,10 +161,6 @@ const id = z.string();
 const timestamp = z.string().describe('ISO 8601 date-time');
 const personRef = z.object({ id, name: z.string() });
 
-/** The key naming a takeoff edit in answers and in `regenerate.drop`: `add:<id>` or `line:<itemKey>`. */
-export const takeoffEditKey = (e: { kind: string; id?: string; itemKey?: string }): string =>
-  e.kind === 'add' ? `add:${e.id ?? ''}` : `line:${e.itemKey ?? ''}`;
-
 /** A takeoff line as the desk shows it: the generated value beside the edited one. Money only for the office. */
 export const takeoffLineRecord = z.object({
   itemKey: z.string(),
@@ -168,18 +173,20 @@ export const takeoffLineRecord = z.object({
   unitCostCents: z.number().nullable().optional(),
   generatedUnitCostCents: z.number().nullable().optional(),
   extendedCostCents: z.number().optional(),
-  /** 'generated' unchanged, 'changed' by an edit, 'added' by the estimator. */
-  origin: z.enum(['generated', 'changed', 'added']),
+  /** Set by an edit (generated values beside it); 'added' lines are the estimator's own. */
+  edited: z.boolean(),
+  source: z.enum(['generated', 'added']),
 });
 export type TakeoffLineRecord = z.output<typeof takeoffLineRecord>;
 
-/** A stored edit, with the generated value it was made against. Unit costs only for the office. */
+/** A stored edit (calc's TakeoffEdit, with the generated value it replaced). Office only. */
 export const takeoffEditRecord = z.object({
   key: z.string(),
   edit: z.record(z.string(), z.unknown()),
-  generated: z.object({ quantity: z.number(), unitCostCents: z.number().nullable().optional() }).nullable(),
-  /** Why it no longer applies (the line is gone, or the generated value moved since the edit); null if it applies. */
-  stale: z.string().nullable(),
+  /** Why it no longer applies, from calc's regenerateTakeoff; null while it applies. */
+  stale: z
+    .object({ reason: z.string(), message: z.string(), before: z.number().nullable(), now: z.number().nullable() })
+    .nullable(),
 });
 
 /** The option's price. Cost and margin fields only for the office; no price at all for installers. */
@@ -246,6 +253,17 @@ export type BlockerRecord = z.output<typeof blockerRecord>;
  * calc's results for an option (zones, systems with sizing, refrigerant, electrical; warnings, cautions)
  * pass as calc made them; only what the screens compare is named.
  */
+/** calc's Explanation: a computed number with its formula and inputs, the same words on every screen and paper. */
+export const explanationRecord = z.looseObject({
+  key: z.string(),
+  label: z.string(),
+  value: z.number(),
+  unit: z.string(),
+  valueText: z.string(),
+  text: z.string(),
+  status: z.enum(['ok', 'note', 'warning', 'blocker']),
+});
+
 export const optionResultRecord = z.object({
   zones: z.array(z.looseObject({ zoneKey: z.string(), name: z.string(), indoorUnitKey: z.string() })),
   systems: z.array(z.looseObject({ systemKey: z.string(), name: z.string(), outdoorUnitKey: z.string() })),
@@ -254,6 +272,8 @@ export const optionResultRecord = z.object({
   monthly: z.array(monthlyEstimateRecord),
   /** Models chosen in this option that the catalog no longer offers (retired or deleted); the option stays valid. */
   discontinued: z.array(z.object({ key: z.string(), name: z.string() })),
+  /** The why of each number the role may see. */
+  explanations: z.array(explanationRecord),
   warnings: z.array(z.string()),
   cautions: z.array(z.string()),
   isEstimate: z.literal(true),
@@ -303,11 +323,6 @@ export const deskResponse = z.object({
   readiness: readinessRecord,
 });
 export type DeskResponse = z.output<typeof deskResponse>;
-export const regenerateResponse = z.object({
-  option: optionRecord,
-  /** Edits that no longer apply, kept (not dropped) and not applied: for the estimator to accept (drop) or redo. */
-  notApplied: z.array(takeoffEditRecord),
-});
 export const firstPriceResponse = z.object({
   option: optionRecord,
   range: z.object({ lowCents: z.number(), highCents: z.number() }).nullable(),

@@ -15,24 +15,27 @@ import {
   type PriceBook,
   type Pricing,
   type SellRule,
+  regenerateTakeoff,
+  explainOptionPrice,
+  type Explanation,
+  type MergedLine,
+  type StaleEdit,
 } from '@calc';
 import { DESK_MESSAGES, takeoffEditKey, type BlockerRecord, type OptionPricing } from '@contract';
 import type { FieldError } from '../../lib/errors';
 import { engineCatalog, enginePriceBook, type CompanyDesk } from './desk-inputs';
 import type { DesignOption, StoredTakeoffEdit } from './option.entity';
 
-/** A takeoff line as the desk holds it: what is counted, and what calc generated beside it. */
-export interface DeskLine {
-  readonly line: PricedLine;
-  readonly generated: { readonly quantity: number; readonly unitCostCents: number | null } | null;
-  readonly origin: 'generated' | 'changed' | 'added';
+/** A takeoff line as the desk holds it: calc's merged line (generated value beside the edited one), priced. */
+export interface DeskLine extends MergedLine {
+  readonly extendedCostCents: number;
 }
 
 export interface EditState {
   readonly key: string;
   readonly stored: StoredTakeoffEdit;
-  /** Why the edit no longer applies; null when it is applied. */
-  readonly stale: string | null;
+  /** Why the edit no longer applies (calc's regenerateTakeoff); null when it is applied. */
+  readonly stale: StaleEdit | null;
 }
 
 export interface OptionFigures {
@@ -48,6 +51,8 @@ export interface OptionFigures {
     months: number;
     monthlyPaymentCents: number;
   }[];
+  /** calc's why of each number (the presenter passes on what the role may see). */
+  readonly explanations: readonly Explanation[];
 }
 
 export interface ComputedOption {
@@ -99,72 +104,21 @@ export function calcPricing(
 }
 
 /**
- * Lays the estimator's takeoff edits over calc's generated lines. An edit applies while the line it
- * names is generated and the value it changes is still what it was edited against; otherwise it is
- * kept, not applied, and said why (regenerate lets the estimator accept it on the new value or drop it).
+ * Lays the estimator's takeoff edits over calc's generated lines with calc's regenerateTakeoff: an edit
+ * applies while its line is generated with the value it replaced; otherwise it is kept, not applied,
+ * and said why (regenerate lets the estimator accept it on the new value or drop it).
  */
 export function applyTakeoffEdits(
   generated: readonly PricedLine[],
   edits: readonly StoredTakeoffEdit[],
 ): { lines: DeskLine[]; edits: EditState[] } {
-  const byKey = new Map(generated.map((l) => [l.itemKey, l]));
-  const states: EditState[] = [];
-  const changed = new Map<string, StoredTakeoffEdit>();
-  const removed = new Set<string>();
-  const added: DeskLine[] = [];
-  for (const stored of edits) {
-    const e = stored.edit;
-    const key = takeoffEditKey(e);
-    if (e.kind === 'add') {
-      const line: PricedLine = {
-        itemKey: `added:${e.id}`,
-        description: e.description,
-        quantity: e.quantity,
-        unit: e.unit,
-        category: e.category,
-        derivation: 'added by the estimator',
-        unitCostCents: e.unitCostCents,
-        extendedCostCents: extendCents({ quantity: e.quantity, unitCents: e.unitCostCents }),
-      };
-      added.push({ line, generated: null, origin: 'added' });
-      states.push({ key, stored, stale: null });
-      continue;
-    }
-    const now = byKey.get(e.itemKey);
-    let stale: string | null = null;
-    if (!now) stale = 'The design no longer generates this line.';
-    else if (e.kind === 'change' && stored.generated) {
-      if (e.quantity !== undefined && stored.generated.quantity !== now.quantity)
-        stale = `The generated quantity moved from ${stored.generated.quantity} to ${now.quantity} since the edit.`;
-      else if (e.unitCostCents !== undefined && stored.generated.unitCostCents !== now.unitCostCents)
-        stale = 'The price book’s unit cost changed since the edit.';
-    }
-    states.push({ key, stored, stale });
-    if (stale) continue;
-    if (e.kind === 'remove') removed.add(e.itemKey);
-    else changed.set(e.itemKey, stored);
-  }
-  const lines: DeskLine[] = [];
-  for (const g of generated) {
-    if (removed.has(g.itemKey)) continue;
-    const gen = { quantity: g.quantity, unitCostCents: g.unitCostCents };
-    const c = changed.get(g.itemKey)?.edit;
-    if (c && c.kind === 'change') {
-      const quantity = c.quantity ?? g.quantity;
-      const unitCostCents = c.unitCostCents ?? g.unitCostCents;
-      lines.push({
-        line: {
-          ...g,
-          quantity,
-          unitCostCents,
-          extendedCostCents: unitCostCents === null ? 0 : extendCents({ quantity, unitCents: unitCostCents }),
-        },
-        generated: gen,
-        origin: 'changed',
-      });
-    } else lines.push({ line: g, generated: gen, origin: 'generated' });
-  }
-  return { lines: [...lines, ...added], edits: states };
+  const merged = regenerateTakeoff({ next: generated, edits });
+  const stale = new Map(merged.staleEdits.map((s) => [s.edit, s]));
+  const lines = merged.lines.map((l) => ({
+    ...l,
+    extendedCostCents: l.unitCostCents === null ? 0 : extendCents({ quantity: l.quantity, unitCents: l.unitCostCents }),
+  }));
+  return { lines, edits: edits.map((e) => ({ key: takeoffEditKey(e), stored: e, stale: stale.get(e) ?? null })) };
 }
 
 /** The models an option names that the company no longer offers: retired (inactive) or deleted from the catalog. */
@@ -210,7 +164,7 @@ export function computeOption(
     blockers.push({ code, optionId: option.id, message: `${option.name}: ${message}` });
   if (option.discountRequest?.state === 'pending') block('discount-pending', DESK_MESSAGES.discountPending);
   if (option.preliminary) block('preliminary', DESK_MESSAGES.preliminary);
-  const noEdits = option.takeoffEdits.map((stored) => ({ key: takeoffEditKey(stored.edit), stored, stale: null }));
+  const noEdits = option.takeoffEdits.map((stored) => ({ key: takeoffEditKey(stored), stored, stale: null }));
   if ('problem' in home) {
     block('cannot-calculate', home.problem.message);
     return { figures: null, discontinued, problems: [home.problem], edits: noEdits, blockers };
@@ -231,7 +185,7 @@ export function computeOption(
     return { figures: null, discontinued, problems, edits: noEdits, blockers };
   }
   const applied = applyTakeoffEdits(design.takeoff, option.takeoffEdits);
-  const price = priceOption({ lines: applied.lines.map((l) => l.line), pricing });
+  const price = priceOption({ lines: applied.lines, pricing });
   if (applied.edits.some((e) => e.stale)) block('takeoff-edits-stale', DESK_MESSAGES.takeoffStale);
   for (const s of design.systems) {
     if (!s.combination.ok) block('combination-refused', s.combination.warnings.join(' ') || `${s.name}: refused.`);
@@ -252,7 +206,15 @@ export function computeOption(
   }));
   const discountPercent = price.sellCents > 0 ? roundHalfUp((price.discountCents / price.sellCents) * 100, 2) : 0;
   return {
-    figures: { design, lines: applied.lines, price, discountPercent, sellRule, monthly },
+    figures: {
+      design,
+      lines: applied.lines,
+      price,
+      discountPercent,
+      sellRule,
+      monthly,
+      explanations: explainOptionPrice({ price, pricing, plans: data.desk.financing }),
+    },
     discontinued,
     problems: [],
     edits: applied.edits,

@@ -1,7 +1,6 @@
 import {
   maySeeCost,
   maySeePrice,
-  takeoffEditKey,
   type DeskResponse,
   type OptionPriceRecord,
   type OptionRecord,
@@ -45,22 +44,33 @@ function presentPrice(f: OptionFigures, role: Role): OptionPriceRecord | null {
 
 function presentLine(l: DeskLine, role: Role): TakeoffLineRecord {
   const base = {
-    itemKey: l.line.itemKey,
-    description: l.line.description,
-    unit: l.line.unit,
-    category: l.line.category,
-    derivation: l.line.derivation,
-    quantity: l.line.quantity,
+    itemKey: l.itemKey,
+    description: l.description,
+    unit: l.unit,
+    category: l.category,
+    derivation: l.derivation,
+    quantity: l.quantity,
     generatedQuantity: l.generated?.quantity ?? null,
-    origin: l.origin,
+    edited: l.edited,
+    source: l.source,
   };
   if (!maySeeCost(role)) return base;
   return {
     ...base,
-    unitCostCents: l.line.unitCostCents,
+    unitCostCents: l.unitCostCents,
     generatedUnitCostCents: l.generated?.unitCostCents ?? null,
-    extendedCostCents: l.line.extendedCostCents,
+    extendedCostCents: l.extendedCostCents,
   };
+}
+
+/** The price explanations a salesperson may read: the customer's figures, not the cost or the sell rule. */
+const CUSTOMER_PRICE_KEYS = /^price:(discount|subtotal|tax|total|deposit|balance|monthly:.*)$/;
+
+function explanationsFor(f: OptionFigures, role: Role) {
+  if (maySeeCost(role)) return f.explanations.map((e) => ({ ...e }));
+  return f.explanations
+    .filter((e) => (e.key.startsWith('price:') ? maySeePrice(role) && CUSTOMER_PRICE_KEYS.test(e.key) : true))
+    .map((e) => ({ ...e }));
 }
 
 function presentResult(v: OptionView, role: Role): OptionResultRecord | null {
@@ -73,6 +83,7 @@ function presentResult(v: OptionView, role: Role): OptionResultRecord | null {
     price: presentPrice(f, role),
     monthly: maySeePrice(role) ? f.monthly : [],
     discontinued: v.computed.discontinued,
+    explanations: explanationsFor(f, role),
     // calc's pricing warnings name the price book's gaps (no cost for an item): the office's business.
     warnings: maySeeCost(role)
       ? [...f.design.warnings]
@@ -101,10 +112,11 @@ export function presentOption(v: OptionView, role: Role): OptionRecord {
     pricing,
     takeoffEdits: office
       ? v.computed.edits.map((e) => ({
-          key: takeoffEditKey(e.stored.edit),
-          edit: { ...e.stored.edit },
-          generated: e.stored.generated,
-          stale: e.stale,
+          key: e.key,
+          edit: { ...e.stored },
+          stale: e.stale
+            ? { reason: e.stale.reason, message: e.stale.message, before: e.stale.before, now: e.stale.now }
+            : null,
         }))
       : [],
     discountRequest: priced ? (o.discountRequest ?? null) : null,

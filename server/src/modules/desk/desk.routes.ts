@@ -10,6 +10,7 @@ import {
 } from '@contract';
 import { ANY_STAFF, JOB_EDITORS, NO_CONTENT, OFFICE, OWNER, type ApiRouter } from '../../lib/route';
 import { uuidParam } from '../../lib/validate';
+import { ifMatchVersion } from '../../lib/version-lock';
 import { presentDesk, presentOption } from './desk.presenter';
 import {
   createOption,
@@ -29,6 +30,9 @@ import {
 const jobParams = z.strictObject({ jobId: uuidParam });
 const optionParams = z.strictObject({ jobId: uuidParam, optionId: uuidParam });
 const etag = (out: { option: { version: number } }) => out.option.version;
+
+// Actions on an option (regenerate, discount decision, review) are POSTs that change a versioned row: they take
+// If-Match like a PATCH (the route declaration reads it for PUT/PATCH/DELETE only), read here with the same rule.
 
 /** The estimator's desk: a job's priced options, worked out by calc from saved inputs on every answer. */
 export function deskRoutes(api: ApiRouter): void {
@@ -116,10 +120,12 @@ export function deskRoutes(api: ApiRouter): void {
     body: regenerateBody,
     response: optionResponse,
     versioned: etag,
-    handler: async ({ service, params, body, actor, ifMatch }) => {
+    handler: async ({ service, params, body, actor, req }) => {
       const present = (v: OptionView) => presentOption(v, actor.role);
       return {
-        option: present(await regenerateTakeoff(service, params.jobId, params.optionId, ifMatch, body, present)),
+        option: present(
+          await regenerateTakeoff(service, params.jobId, params.optionId, ifMatchVersion(req), body, present),
+        ),
       };
     },
   });
@@ -132,10 +138,12 @@ export function deskRoutes(api: ApiRouter): void {
     body: discountDecisionBody,
     response: optionResponse,
     versioned: etag,
-    handler: async ({ service, params, body, actor, ifMatch }) => {
+    handler: async ({ service, params, body, actor, req }) => {
       const present = (v: OptionView) => presentOption(v, actor.role);
       return {
-        option: present(await decideDiscount(service, params.jobId, params.optionId, ifMatch, body.approve, present)),
+        option: present(
+          await decideDiscount(service, params.jobId, params.optionId, ifMatchVersion(req), body.approve, present),
+        ),
       };
     },
   });
@@ -147,9 +155,11 @@ export function deskRoutes(api: ApiRouter): void {
     params: optionParams,
     response: optionResponse,
     versioned: etag,
-    handler: async ({ service, params, actor, ifMatch }) => {
+    handler: async ({ service, params, actor, req }) => {
       const present = (v: OptionView) => presentOption(v, actor.role);
-      return { option: present(await reviewOption(service, params.jobId, params.optionId, ifMatch, present)) };
+      return {
+        option: present(await reviewOption(service, params.jobId, params.optionId, ifMatchVersion(req), present)),
+      };
     },
   });
   api.route({

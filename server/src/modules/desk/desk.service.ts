@@ -7,12 +7,13 @@ import {
   mayMarkReady,
   mayReviewOption,
   takeoffEditKey,
+  addedLineKey,
   optionPricingSchema,
   type BlockerRecord,
   type OptionPricing,
   type TakeoffEditInput,
 } from '@contract';
-import type { CatalogModel, DesignInput } from '@calc';
+import { checkDiscount, type CatalogModel, type DesignInput } from '@calc';
 import { ConflictError, ForbiddenError, NotFoundError, UnprocessableError, ValidationError } from '../../lib/errors';
 import type { ServiceContext } from '../../lib/service-context';
 import { assertVersion } from '../../lib/version-lock';
@@ -129,17 +130,22 @@ function applyDiscounts(
 ): OptionPricing {
   const applied = option.pricing?.discounts ?? [];
   if (isDeepStrictEqual(applied, pricing.discounts)) return pricing;
-  const limit = desk.data.desk.discountLimits.get(ctx.actor.role)?.maxPercent ?? 0;
   if (pricing.discounts.length === 0 || mayDecideDiscount(ctx.actor.role)) {
     option.discountRequest = null;
     return pricing;
   }
-  const trial = computeOption({ ...option, pricing }, desk.home, desk.data);
-  const percent = trial.figures?.discountPercent ?? 100;
-  if (trial.figures && percent <= limit) {
+  const trial = computeOption({ ...option, pricing }, desk.home, desk.data).figures;
+  const check = checkDiscount({
+    role: ctx.actor.role,
+    discountCents: trial?.price.discountCents ?? 1,
+    sellCents: trial?.price.sellCents ?? 0,
+    limits: [...desk.data.desk.discountLimits.values()],
+  });
+  if (!check.needsOwnerApproval) {
     option.discountRequest = null;
     return pricing;
   }
+  const { percent, limitPercent: limit } = check;
   option.discountRequest = {
     state: 'pending',
     discounts: pricing.discounts,
@@ -250,9 +256,48 @@ export async function deleteOption(
   await ctx.em.flush();
 }
 
+/** The calc edit for an edit as sent, made against the line as generated now (null: no such line). */
+function storedEdit(
+  edit: TakeoffEditInput,
+  generated: ReadonlyMap<string, { quantity: number; unitCostCents: number | null }>,
+): StoredTakeoffEdit | null {
+  if (edit.kind === 'add')
+    return {
+      kind: 'add',
+      line: {
+        itemKey: addedLineKey(edit.id),
+        description: edit.description,
+        quantity: edit.quantity,
+        unit: edit.unit,
+        category: edit.category,
+        derivation: 'added by the estimator',
+        unitCostCents: edit.unitCostCents,
+      },
+    };
+  const line = generated.get(edit.itemKey);
+  if (!line) return null;
+  if (edit.kind === 'quantity') return { ...edit, generatedQuantity: line.quantity };
+  if (edit.kind === 'unit-price') return { ...edit, generatedUnitCostCents: line.unitCostCents };
+  return edit;
+}
+
+/** What the edit sets, to tell an edit sent back unchanged from a new one. */
+const editValue = (e: TakeoffEditInput | StoredTakeoffEdit): unknown =>
+  e.kind === 'quantity' ? e.quantity : e.kind === 'unit-price' ? e.unitCostCents : e.kind === 'add' ? e : null;
+
+function generatedLines(desk: DeskJob, option: DesignOption) {
+  const now = computeOption({ ...option, takeoffEdits: [] }, desk.home, desk.data);
+  if (!now.figures)
+    throw new UnprocessableError('The option cannot be worked out yet, so its takeoff cannot be edited.', {
+      errors: now.problems,
+    });
+  return new Map(now.figures.lines.map((l) => [l.itemKey, { quantity: l.quantity, unitCostCents: l.unitCostCents }]));
+}
+
 /**
- * Replaces the option's takeoff edits. Each change or remove must name a line calc generates now; the
- * generated value it is made against is stored beside it, so the desk can show both.
+ * Replaces the option's takeoff edits. Each quantity, unit-price or remove edit must name a line calc
+ * generates now; the generated value it replaces is stored with it, so the desk shows both. An edit sent
+ * back unchanged keeps the value it was made against (it may no longer apply: regenerate decides).
  */
 export async function setTakeoffEdits(
   ctx: ServiceContext,
@@ -266,25 +311,15 @@ export async function setTakeoffEdits(
   const desk = await readDeskJob(ctx, jobId);
   const option = await findOption(ctx, desk, optionId);
   assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
-  const now = computeOption({ ...option, takeoffEdits: [] }, desk.home, desk.data);
-  if (!now.figures)
-    throw new UnprocessableError('The option cannot be worked out yet, so its takeoff cannot be edited.', {
-      errors: now.problems,
-    });
-  const generated = new Map(now.figures.lines.map((l) => [l.line.itemKey, l.line]));
-  const previous = new Map(option.takeoffEdits.map((s) => [takeoffEditKey(s.edit), s]));
+  const generated = generatedLines(desk, option);
+  const previous = new Map(option.takeoffEdits.map((s) => [takeoffEditKey(s), s]));
   const errors: { path: string; message: string }[] = [];
-  const stored: StoredTakeoffEdit[] = edits.map((edit, i) => {
-    if (edit.kind === 'add') return { edit, generated: null };
-    const line = generated.get(edit.itemKey);
+  const stored = edits.flatMap((edit, i): StoredTakeoffEdit[] => {
     const kept = previous.get(takeoffEditKey(edit));
-    // An edit sent back unchanged keeps the value it was made against (it may be stale: regenerate decides).
-    if (kept && isDeepStrictEqual(kept.edit, edit)) return kept;
-    if (!line) {
-      errors.push({ path: `edits.${i}.itemKey`, message: 'This line is not in the takeoff.' });
-      return { edit, generated: null };
-    }
-    return { edit, generated: { quantity: line.quantity, unitCostCents: line.unitCostCents } };
+    if (kept && edit.kind !== 'add' && isDeepStrictEqual(editValue(kept), editValue(edit))) return [kept];
+    const s = storedEdit(edit, generated);
+    if (!s) errors.push({ path: `edits.${i}.itemKey`, message: 'This line is not in the takeoff.' });
+    return s ? [s] : [];
   });
   if (errors.length) throw new ValidationError(errors);
   option.takeoffEdits = stored;
@@ -295,7 +330,8 @@ export async function setTakeoffEdits(
 
 /**
  * After a design change: edits that still apply are kept; of those that no longer do, `accept` re-bases
- * each on the line as generated now (kept and applied), `drop` removes it, and the rest are returned.
+ * each on the line as generated now (kept and applied; one whose line is gone goes), `drop` removes it,
+ * and the rest stay listed.
  */
 export async function regenerateTakeoff(
   ctx: ServiceContext,
@@ -309,22 +345,17 @@ export async function regenerateTakeoff(
   const desk = await readDeskJob(ctx, jobId);
   const option = await findOption(ctx, desk, optionId);
   assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
-  const now = computeOption(option, desk.home, desk.data);
-  if (!now.figures) throw new UnprocessableError('The option cannot be worked out yet.', { errors: now.problems });
-  const generated = new Map(now.figures.lines.filter((l) => l.generated).map((l) => [l.line.itemKey, l.generated]));
-  const next: StoredTakeoffEdit[] = [];
-  for (const s of now.edits) {
-    if (!s.stale || !(choice.accept.includes(s.key) || choice.drop.includes(s.key))) {
-      next.push(s.stored);
-      continue;
-    }
-    if (choice.drop.includes(s.key)) continue;
-    const e = s.stored.edit;
-    const g = e.kind === 'add' ? undefined : generated.get(e.itemKey);
-    // Accepting an edit whose line is gone is dropping it: there is nothing left to change or remove.
-    if (g) next.push({ edit: e, generated: g });
-  }
-  option.takeoffEdits = next;
+  const generated = generatedLines(desk, option);
+  const states = compute(desk, option).edits;
+  option.takeoffEdits = states.flatMap((s): StoredTakeoffEdit[] => {
+    if (!s.stale) return [s.stored];
+    if (choice.drop.includes(s.key)) return [];
+    if (!choice.accept.includes(s.key)) return [s.stored];
+    const e = s.stored;
+    if (e.kind === 'add') return [e];
+    const again = storedEdit(e, generated);
+    return again ? [again] : [];
+  });
   touched(ctx, desk);
   await ctx.em.flush();
   return { option, computed: compute(desk, option) };

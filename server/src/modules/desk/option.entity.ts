@@ -1,16 +1,13 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
 import { randomUUID } from 'node:crypto';
-import type { CatalogModel, DesignInput } from '@calc';
-import type { DiscountRequestRecord, OptionPricing, TakeoffEditInput } from '@contract';
+import type { CatalogModel, DesignInput, TakeoffEdit } from '@calc';
+import type { DiscountRequestRecord, OptionPricing } from '@contract';
 import { CompanySchema } from '../companies/company.entity';
 import { JobSchema } from '../jobs/job.entity';
 import { UserSchema } from '../users/user.entity';
 
-/** A takeoff edit as stored: the edit and the generated line it was made against (null for an added line). */
-export interface StoredTakeoffEdit {
-  readonly edit: TakeoffEditInput;
-  readonly generated: { readonly quantity: number; readonly unitCostCents: number | null } | null;
-}
+/** A takeoff edit as stored: calc's TakeoffEdit, carrying the generated value it replaced. */
+export type StoredTakeoffEdit = TakeoffEdit;
 
 /** A discount request as stored (ids and names of the people, ISO times). */
 export type StoredDiscountRequest = DiscountRequestRecord;

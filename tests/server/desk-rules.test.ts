@@ -1,0 +1,307 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { login, makeCompany, type Session, type TestCompany } from '../helpers/fixtures';
+import { buildTestApp, type TestApp } from '../helpers/test-app';
+import { routeRegistry } from '../../server/src/lib/route';
+import { expectProblem, patch, post } from './jobs-helpers';
+import { deskJob, multiZone, newOption, seedData, singleZone } from './desk-helpers';
+
+let t: TestApp;
+let a: TestCompany;
+let owner: Session;
+let estimator: Session;
+let sales: Session;
+let installer: Session;
+
+beforeAll(async () => {
+  t = await buildTestApp();
+  a = await makeCompany(t.orm.em.fork(), 'DeskRules');
+  await seedData(t.orm.em.fork(), a.id);
+  owner = await login(t.app, a.users.owner.email);
+  estimator = await login(t.app, a.users.estimator.email);
+  sales = await login(t.app, a.users.salesperson.email);
+  installer = await login(t.app, a.users.installer.email);
+});
+afterAll(async () => t.close());
+
+const optionUrl = (jobId: string, id: string) => `/api/jobs/${jobId}/options/${id}`;
+const pct = (kind: 'percent' | 'amount', value: number) => ({ label: 'Spring offer', kind, value });
+
+describe('discounts: per-role limits from the price book, the owner approves beyond them', () => {
+  it('applies within the limit; beyond it records a request that is not applied and blocks ready until the owner approves', async () => {
+    const { job, rooms } = await deskJob(sales);
+    const o = await newOption(sales, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '') });
+    const url = optionUrl(job.id, o.id);
+    // The demo price book allows a salesperson 10 %.
+    const within = await patch(sales, url, o.version).send({ pricing: { discounts: [pct('percent', 8)] } });
+    expect(within.status, JSON.stringify(within.body)).toBe(200);
+    expect(within.body.option.result.price.discountPercent).toBe(8);
+    expect(within.body.option.discountRequest).toBeNull();
+    const beyond = await patch(sales, url, within.body.option.version).send({
+      pricing: { discounts: [pct('percent', 12)] },
+    });
+    expect(beyond.status).toBe(200);
+    const req = beyond.body.option.discountRequest;
+    expect(req).toMatchObject({ state: 'pending', percent: 12, limitPercent: 10, decidedBy: null });
+    expect(req.requestedBy.id).toBe(a.users.salesperson.id);
+    // Not applied: the 8 % stays until the owner decides.
+    expect(beyond.body.option.result.price.discountPercent).toBe(8);
+    expect(beyond.body.option.pricing.discounts).toEqual([pct('percent', 8)]);
+    await post(estimator, `/api/jobs/${job.id}/options/${o.id}/review`).set(
+      'If-Match',
+      `"${beyond.body.option.version}"`,
+    );
+    const refused = await post(estimator, `/api/jobs/${job.id}/ready`).send();
+    expectProblem(refused, 422);
+    expect(refused.body.blockers.map((b: { code: string }) => b.code)).toContain('discount-pending');
+    // Only the owner decides.
+    expectProblem(
+      await post(estimator, `${url}/discount-decision`)
+        .set('If-Match', `"${beyond.body.option.version}"`)
+        .send({ approve: true }),
+      403,
+    );
+    const approved = await post(owner, `${url}/discount-decision`)
+      .set('If-Match', `"${beyond.body.option.version}"`)
+      .send({ approve: true });
+    expect(approved.status, JSON.stringify(approved.body)).toBe(200);
+    expect(approved.body.option.discountRequest).toMatchObject({
+      state: 'approved',
+      decidedBy: { id: a.users.owner.id },
+    });
+    expect(approved.body.option.result.price.discountPercent).toBe(12);
+    const ready = await post(estimator, `/api/jobs/${job.id}/ready`).send();
+    expect(ready.status, JSON.stringify(ready.body)).toBe(200);
+    expect(ready.body.readiness.markedReady.by.id).toBe(a.users.estimator.id);
+    expect(ready.body.readiness.ready).toBe(true);
+  });
+
+  it('each role has its own limit: the estimator 15 %, the owner any; a denial is recorded and changes nothing', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const o = await newOption(estimator, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '') });
+    const url = optionUrl(job.id, o.id);
+    const fourteen = await patch(estimator, url, o.version).send({ pricing: { discounts: [pct('percent', 14)] } });
+    expect(fourteen.body.option.discountRequest).toBeNull();
+    expect(fourteen.body.option.result.price.discountPercent).toBe(14);
+    const twenty = await patch(estimator, url, fourteen.body.option.version).send({
+      pricing: { discounts: [pct('percent', 20)] },
+    });
+    expect(twenty.body.option.discountRequest.state).toBe('pending');
+    const denied = await post(owner, `${url}/discount-decision`)
+      .set('If-Match', `"${twenty.body.option.version}"`)
+      .send({ approve: false });
+    expect(denied.body.option.discountRequest).toMatchObject({ state: 'denied', decidedBy: { id: a.users.owner.id } });
+    expect(denied.body.option.result.price.discountPercent).toBe(14);
+    const own = await patch(owner, url, denied.body.option.version).send({
+      pricing: { discounts: [pct('percent', 30)] },
+    });
+    expect(own.body.option.discountRequest).toBeNull();
+    expect(own.body.option.result.price.discountPercent).toBe(30);
+  });
+
+  it('an amount counts as its percent of the sell price', async () => {
+    const { job, rooms } = await deskJob(sales);
+    const o = await newOption(sales, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '') });
+    const sell = o.result as { price: { sellCents: number } };
+    const url = optionUrl(job.id, o.id);
+    const big = Math.round(sell.price.sellCents * 0.11);
+    const r = await patch(sales, url, o.version).send({ pricing: { discounts: [pct('amount', big)] } });
+    expect(r.body.option.discountRequest.state).toBe('pending');
+    expect(r.body.option.discountRequest.percent).toBeCloseTo(11, 1);
+  });
+
+  it('only the office sets the markup, margin or tax', async () => {
+    const { job, rooms } = await deskJob(sales);
+    const o = await newOption(sales, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '') });
+    expectProblem(
+      await patch(sales, optionUrl(job.id, o.id), o.version).send({
+        pricing: { sellRule: { method: 'markup', percent: 10 } },
+      }),
+      403,
+    );
+    const r = await patch(estimator, optionUrl(job.id, o.id), o.version).send({
+      pricing: { sellRule: { method: 'markup', percent: 10 }, tax: { taxRatePercent: 0, taxOn: 'none' } },
+    });
+    expect(r.status).toBe(200);
+    expect(r.body.option.result.price.sellRule).toEqual({ method: 'markup', percent: 10 });
+    expect(r.body.option.result.price.taxCents).toBe(0);
+  });
+});
+
+describe('takeoff edits and regenerate', () => {
+  it('keeps the generated value beside an edit; after a design change lists the edits that no longer apply; accept and drop', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const o = await newOption(estimator, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '', 30) });
+    const url = optionUrl(job.id, o.id);
+    const put = (version: number, edits: unknown[]) =>
+      estimator.agent
+        .put(`${url}/takeoff-edits`)
+        .set('X-CSRF-Token', estimator.csrf)
+        .set('If-Match', `"${version}"`)
+        .send({ edits });
+    const cable = (r: { body: { option: { result: { takeoff: { itemKey: string }[] } } } }) =>
+      r.body.option.result.takeoff.find((l) => l.itemKey === 'comm-cable:14-4');
+    const edited = await put(o.version, [
+      { kind: 'quantity', itemKey: 'comm-cable:14-4', quantity: 50 },
+      { kind: 'remove', itemKey: 'fasteners:kit' },
+      {
+        kind: 'add',
+        id: 'permit',
+        description: 'Permit fee',
+        quantity: 1,
+        unit: 'each',
+        category: 'material',
+        unitCostCents: 7500,
+      },
+    ]);
+    expect(edited.status, JSON.stringify(edited.body)).toBe(200);
+    // 30 ft + 5 ft slack, rounded up to 5 ft = 35 ft generated [calc takeoff rule]; the estimator's 50 ft counts.
+    expect(cable(edited)).toMatchObject({ quantity: 50, generatedQuantity: 35, edited: true });
+    const lines = edited.body.option.result.takeoff as { itemKey: string; source: string }[];
+    expect(lines.some((l) => l.itemKey === 'fasteners:kit')).toBe(false);
+    expect(lines.find((l) => l.itemKey === 'added:permit')?.source).toBe('added');
+    expectProblem(await put(edited.body.option.version, [{ kind: 'remove', itemKey: 'no-such-line' }]), 400);
+    // A longer run moves the generated cable: the edit no longer applies and is listed, not applied.
+    const longer = await patch(estimator, url, edited.body.option.version).send({
+      design: singleZone(rooms[0] ?? '', 50),
+    });
+    expect(cable(longer)).toMatchObject({ quantity: 55, generatedQuantity: 55 });
+    const stale = longer.body.option.takeoffEdits.filter((e: { stale: unknown }) => e.stale);
+    expect(stale.map((e: { key: string }) => e.key)).toEqual(['quantity:comm-cable:14-4']);
+    expect(longer.body.option.blockers.map((b: { code: string }) => b.code)).toContain('takeoff-edits-stale');
+    expectProblem(
+      await post(sales, `${url}/takeoff/regenerate`).set('If-Match', `"${longer.body.option.version}"`).send({}),
+      403,
+    );
+    const kept = await post(estimator, `${url}/takeoff/regenerate`)
+      .set('If-Match', `"${longer.body.option.version}"`)
+      .send({ accept: ['quantity:comm-cable:14-4'] });
+    expect(kept.status, JSON.stringify(kept.body)).toBe(200);
+    expect(cable(kept)).toMatchObject({ quantity: 50, generatedQuantity: 55, edited: true });
+    expect(kept.body.option.takeoffEdits.every((e: { stale: unknown }) => e.stale === null)).toBe(true);
+    expect(kept.body.option.takeoffEdits).toHaveLength(3);
+    const shorter = await patch(estimator, url, kept.body.option.version).send({
+      design: singleZone(rooms[0] ?? '', 20),
+    });
+    const dropped = await post(estimator, `${url}/takeoff/regenerate`)
+      .set('If-Match', `"${shorter.body.option.version}"`)
+      .send({ drop: ['quantity:comm-cable:14-4'] });
+    expect(dropped.body.option.takeoffEdits.map((e: { key: string }) => e.key)).toEqual([
+      'remove:fasteners:kit',
+      'add:added:permit',
+    ]);
+    expect(cable(dropped)).toMatchObject({ quantity: 25, edited: false });
+  });
+});
+
+describe('ready to propose', () => {
+  it('is refused with every reason, taken off by any option change, and only the office marks it', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const none = await post(estimator, `/api/jobs/${job.id}/ready`).send();
+    expectProblem(none, 422);
+    // An over-long run on a small unit breaks the maker's length limit.
+    const o = await newOption(estimator, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '', 120) });
+    const refused = await post(estimator, `/api/jobs/${job.id}/ready`).send();
+    expectProblem(refused, 422);
+    expect(refused.body.blockers.map((b: { code: string }) => b.code)).toContain('limit-exceeded');
+    const fixed = await patch(estimator, optionUrl(job.id, o.id), o.version).send({
+      design: singleZone(rooms[0] ?? '', 30),
+    });
+    expectProblem(await post(sales, `/api/jobs/${job.id}/ready`).send(), 403);
+    const ok = await post(estimator, `/api/jobs/${job.id}/ready`).send();
+    expect(ok.status, JSON.stringify(ok.body)).toBe(200);
+    expect(ok.body.readiness.ready).toBe(true);
+    await patch(estimator, optionUrl(job.id, o.id), fixed.body.option.version).send({ name: 'Essential plus' });
+    const desk = await estimator.agent.get(`/api/jobs/${job.id}/desk`);
+    expect(desk.body.readiness.markedReady).toBeNull();
+  });
+});
+
+describe('discontinued models', () => {
+  it('a model retired or deleted after it was chosen keeps the option valid and shows "discontinued"', async () => {
+    // Its own company: this test retires and deletes catalog rows.
+    const c = await makeCompany(t.orm.em.fork(), 'DeskRetired');
+    await seedData(t.orm.em.fork(), c.id);
+    const estimator = await login(t.app, c.users.estimator.email);
+    const { job, rooms } = await deskJob(estimator);
+    const o = await newOption(estimator, job.id, { name: 'Whole-home', design: multiZone(rooms) });
+    const em = t.orm.em.fork();
+    await em.execute(
+      `update company_data_row set data = jsonb_set(data, '{active}', 'false') where company_id = ? and dataset = 'models' and key = 'TSL-MH12-W'`,
+      [c.id],
+    );
+    const retired = await estimator.agent.get(optionUrl(job.id, o.id));
+    expect(retired.body.option.result.discontinued.map((d: { key: string }) => d.key)).toEqual(['TSL-MH12-W']);
+    const before = retired.body.option.result.price.totalCents;
+    await em.execute(
+      `delete from company_data_row where company_id = ? and dataset = 'models' and key = 'TSL-M24-3P'`,
+      [c.id],
+    );
+    const deleted = await estimator.agent.get(optionUrl(job.id, o.id));
+    expect(deleted.body.option.problems).toEqual([]);
+    expect(deleted.body.option.result.discontinued.map((d: { key: string }) => d.key).sort()).toEqual([
+      'TSL-M24-3P',
+      'TSL-MH12-W',
+    ]);
+    expect(deleted.body.option.result.price.totalCents).toBe(before);
+    // Choosing a retired model anew is refused.
+    const fresh = await newOption(estimator, job.id, { name: 'Another' });
+    const r = await patch(estimator, optionUrl(job.id, fresh.id), fresh.version).send({ design: multiZone(rooms) });
+    expectProblem(r, 400);
+    expect(r.body.errors.map((e: { path: string }) => e.path)).toContain('design.systems.0.outdoorUnitKey');
+  });
+});
+
+/** Every key that names money, and every value under it, anywhere in an answer. */
+function moneyIn(value: unknown, path = ''): string[] {
+  if (Array.isArray(value)) return value.flatMap((v, i) => moneyIn(v, `${path}.${i}`));
+  if (value && typeof value === 'object')
+    return Object.entries(value).flatMap(([k, v]) => {
+      const here = `${path}.${k}`;
+      const empty = v === null || (Array.isArray(v) && v.length === 0);
+      if (/cost|cents|margin|discount|price|sell|monthly|markup/i.test(k) && !empty) return [here];
+      return moneyIn(v, here);
+    });
+  if (typeof value === 'string' && /\$\s?\d/.test(value)) return [`${path} = ${value}`];
+  return [];
+}
+
+describe('who sees money', () => {
+  it('an installer sees no cost, margin, discount or price on any desk route; a salesperson no cost or margin', async () => {
+    const { job, rooms } = await deskJob(owner);
+    const j = await owner.agent.get(`/api/jobs/${job.id}`);
+    await patch(owner, `/api/jobs/${job.id}`, j.body.job.version).send({ assignedInstallerId: a.users.installer.id });
+    const o = await newOption(owner, job.id, { name: 'Whole-home', design: multiZone(rooms) });
+    await patch(owner, optionUrl(job.id, o.id), o.version).send({
+      pricing: { discounts: [pct('percent', 5)], financingPlanKey: 'low-rate-60' },
+    });
+    const deskRoutes = routeRegistry.filter((r) => /^\/api\/jobs\/:jobId\/(desk|options|ready)/.test(r.path));
+    expect(deskRoutes.length).toBeGreaterThanOrEqual(10);
+    const fill = (path: string) => path.replace(':jobId', job.id).replace(':optionId', o.id);
+    const current = await owner.agent.get(optionUrl(job.id, o.id));
+    for (const r of deskRoutes) {
+      const req = installer.agent[r.method](fill(r.path))
+        .set('X-CSRF-Token', installer.csrf)
+        .set('If-Match', `"${current.body.option.version}"`);
+      const res = r.method === 'get' ? await req : await req.send({});
+      expect(moneyIn(res.body), `${r.method} ${r.path}`).toEqual([]);
+      if (r.method === 'get') expect(res.status, `${r.method} ${r.path}`).toBe(200);
+      else expect(res.status, `${r.method} ${r.path}`).toBe(403);
+    }
+    const seen = await installer.agent.get(`/api/jobs/${job.id}/desk`);
+    expect(seen.body.options[0].result.systems[0].refrigerant.extraChargeOz).toBeGreaterThan(0);
+    expect(seen.body.options[0].result.takeoff.length).toBeGreaterThan(5);
+    // The salesperson (not theirs: the owner's job) → 404; on their own job: prices without cost.
+    expectProblem(await sales.agent.get(`/api/jobs/${job.id}/desk`), 404);
+    const own = await deskJob(sales);
+    await newOption(sales, own.job.id, { name: 'Essential', design: singleZone(own.rooms[0] ?? '') });
+    const view = await sales.agent.get(`/api/jobs/${own.job.id}/desk`);
+    const price = view.body.options[0].result.price;
+    expect(price.totalCents).toBeGreaterThan(0);
+    for (const k of ['costCents', 'equipmentCostCents', 'grossMarginPercent', 'grossMarginCents', 'sellRule'])
+      expect(price[k], k).toBeUndefined();
+    for (const line of view.body.options[0].result.takeoff) expect(line.unitCostCents).toBeUndefined();
+    expect(view.body.options[0].pricing.sellRule).toBeUndefined();
+    expect(view.body.options[0].result.explanations.some((e: { key: string }) => e.key === 'price:total')).toBe(true);
+    expect(view.body.options[0].result.explanations.some((e: { key: string }) => e.key === 'price:sell')).toBe(false);
+  });
+});

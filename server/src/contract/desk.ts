@@ -127,7 +127,11 @@ export const takeoffEditsSchema = z
     edits.forEach((e, i) => {
       const k = takeoffEditKey(e);
       if (seen.has(k))
-        ctx.addIssue({ code: 'custom', path: [i, e.kind === 'add' ? 'id' : 'itemKey'], message: 'This line is edited twice' });
+        ctx.addIssue({
+          code: 'custom',
+          path: [i, e.kind === 'add' ? 'id' : 'itemKey'],
+          message: 'This line is edited twice',
+        });
       seen.add(k);
     });
   });

@@ -189,7 +189,7 @@ export function computeOption(
   if (applied.edits.some((e) => e.stale)) block('takeoff-edits-stale', DESK_MESSAGES.takeoffStale);
   for (const s of design.systems) {
     if (!s.combination.ok) block('combination-refused', s.combination.warnings.join(' ') || `${s.name}: refused.`);
-    for (const w of s.refrigerant.warnings) block('limit-exceeded', w);
+    for (const b of s.refrigerant.blockers) block('limit-exceeded', b);
     if (s.electrical.breakerA === null || s.electrical.wireAwg === null || !s.electrical.disconnectWithinSight)
       for (const w of s.electrical.warnings) block('limit-exceeded', w);
   }

@@ -81,3 +81,5 @@ export * from './src/pricing/explain-price';
 export * from './src/takeoff/regenerate';
 export * from './src/refrigerant/rules';
 export * from './src/electrical/voltage-drop';
+export * from './src/sizing/ports';
+export * from './src/design/explain-sizing';

@@ -27,6 +27,20 @@ import { checkCombination, checkSizing, type CombinationCheck, type SizingCheck 
 import { DEFAULT_SIZING_POLICY, sizingPolicySchema, type SizingPolicy } from '../sizing/policy';
 import { buildTakeoff, type SystemForTakeoff } from '../takeoff/build';
 import { zoneLoads } from './zone-loads';
+import { explanation, type Explanation } from '../explain/explanation';
+import { explainExtension, explainOptionPrice } from '../pricing/explain-price';
+import { technologyTransitionsCheck, type RefrigerantRuleCheck } from '../refrigerant/rules';
+import { explainSizing, heatingBalance, type HeatingBalance } from './explain-sizing';
+import type { HeatKit } from '../schemas/equipment';
+
+/** Why a design cannot be marked "ready to propose": a maker's limit exceeded or a combination refused. */
+export interface DesignBlocker {
+  readonly code: 'limit-exceeded' | 'combination-refused';
+  /** What kind of limit: line lengths and lift, A2L room size, refrigerant rule, electrical, ports and capacity. */
+  readonly kind: 'lines' | 'a2l' | 'refrigerant-rule' | 'electrical' | 'combination' | 'connection';
+  readonly systemKey: string | null;
+  readonly message: string;
+}
 
 export interface ZoneResult {
   readonly zoneKey: string;
@@ -34,6 +48,8 @@ export interface ZoneResult {
   readonly roomIds: readonly string[];
   readonly indoorUnitKey: string;
   readonly sizing: SizingCheck;
+  /** Load against capacity, sizing ratio with its verdict, latent check, heating coverage. */
+  readonly explanations: readonly Explanation[];
 }
 
 export interface SystemResult {
@@ -44,6 +60,14 @@ export interface SystemResult {
   readonly combination: CombinationCheck;
   readonly refrigerant: RefrigerantPlan;
   readonly electrical: ElectricalPlan;
+  /** Balance point and backup heat (heat pumps with heating data), else null. */
+  readonly heating: HeatingBalance | null;
+  readonly heatKitKey: string | null;
+  /** The heat kit's own branch circuit, when one is chosen. */
+  readonly heatKitElectrical: ElectricalPlan | null;
+  readonly refrigerantRule: RefrigerantRuleCheck;
+  /** Sizing, combination, charge, electrical: every number of this system with its why. */
+  readonly explanations: readonly Explanation[];
 }
 
 export interface DesignResult {
@@ -53,6 +77,10 @@ export interface DesignResult {
   readonly takeoff: readonly PricedLine[];
   readonly price: OptionPrice;
   readonly warnings: readonly string[];
+  /** Limits exceeded and refused combinations: the design cannot be marked ready while any is listed. */
+  readonly blockers: readonly DesignBlocker[];
+  /** Takeoff lines and price, each with its why (systems and zones carry their own). */
+  readonly explanations: readonly Explanation[];
   readonly cautions: readonly string[];
   readonly isEstimate: true;
 }
@@ -152,8 +180,31 @@ export function computeDesignFromParsed({
       heatingDesignF: dc.outdoorHeatingDryBulbF,
       policy,
     });
-    return { zoneKey: z.key, name: z.name, roomIds: z.roomIds, indoorUnitKey: indoor.key, sizing };
+    const explanations = explainSizing({
+      keyPrefix: `zone:${z.key}:`,
+      who: z.name,
+      sizing,
+      cooling: indoor.cooling,
+      heating: indoor.heating,
+      equipmentType: outdoor?.equipmentType ?? 'heat-pump-variable-speed',
+      coolingDesignF: dc.outdoorCoolingDryBulbF,
+      heatingDesignF: dc.outdoorHeatingDryBulbF,
+      sensibleHeatRatio: indoor.sensibleHeatRatio,
+      sensibleLoadBtuh: load.sensibleBtuh,
+      latentLoadBtuh: load.latentBtuh,
+    });
+    return { zoneKey: z.key, name: z.name, roomIds: z.roomIds, indoorUnitKey: indoor.key, sizing, explanations };
   });
+  const heatKits = byKey<HeatKit>(catalog.heatKits ?? [], (k) => k.key);
+  const blockers: DesignBlocker[] = [];
+  for (const z of design.zones)
+    if (!systemOfZone.has(z.key))
+      blockers.push({
+        code: 'combination-refused',
+        kind: 'connection',
+        systemKey: null,
+        message: `Zone ${z.name} is not connected to any outdoor unit.`,
+      });
   const forTakeoff: SystemForTakeoff[] = [];
   const systems: SystemResult[] = design.systems.map((s, si) => {
     const outdoor = outdoorOfSystem[si] ?? lookup(outdoorUnits, s.outdoorUnitKey, 'UNKNOWN_EQUIPMENT', []);
@@ -165,7 +216,7 @@ export function computeDesignFromParsed({
       indoorByZone.set(c.zoneKey, indoor);
       const load = lookup(perZone, c.zoneKey, 'UNKNOWN_ZONE', []);
       for (const id of zone.roomIds) if (!servedRooms.includes(id)) servedRooms.push(id);
-      return { circuit: c, indoor, roomAreaM2: m2FromFt2({ ft2: load.headRoomAreaFt2 }) };
+      return { circuit: c, indoor, roomAreaM2: m2FromFt2({ ft2: load.headRoomAreaFt2 }), zoneName: zone.name };
     });
     // The outdoor unit meets the coincident load of every room it serves (one peak hour for all of them).
     const c = coincidentLoad({ loads, roomIds: servedRooms });
@@ -178,10 +229,101 @@ export function computeDesignFromParsed({
       heatingDesignF: dc.outdoorHeatingDryBulbF,
       policy,
     });
+    const p = `${s.key}:`;
     const combination = checkCombination({ outdoor, indoor: circuits.map((c) => c.indoor) });
-    const refrigerant = refrigerantPlan({ outdoor, circuits });
-    const electrical = electricalPlan({ mcaA: outdoor.mcaA, mocpA: outdoor.mocpA, input: s.electrical });
-    forTakeoff.push({ system: s, outdoor, indoorByZone, refrigerant, electrical });
+    const refrigerant = refrigerantPlan({ outdoor, circuits, keyPrefix: p });
+    const electrical = electricalPlan({ mcaA: outdoor.mcaA, mocpA: outdoor.mocpA, input: s.electrical, keyPrefix: p });
+    const kit =
+      s.heatKitKey === undefined
+        ? undefined
+        : lookup(heatKits, s.heatKitKey, 'UNKNOWN_EQUIPMENT', ['systems', si, 'heatKitKey']);
+    const kitElectrical = kit
+      ? electricalPlan({
+          mcaA: kit.mcaA,
+          mocpA: kit.mocpA,
+          input: s.electrical,
+          keyPrefix: `${p}heat-kit:`,
+          label: 'heat kit',
+        })
+      : null;
+    const heating =
+      outdoor.heating && outdoor.heating.length > 0 && outdoor.equipmentType.startsWith('heat-pump')
+        ? heatingBalance({
+            keyPrefix: p,
+            who: s.name,
+            heating: outdoor.heating,
+            heatLossBtuh: sum.heatingBtuh,
+            heatingDesignF: dc.outdoorHeatingDryBulbF,
+            indoorF: dc.indoorHeatingF,
+            heatKit: kit,
+          })
+        : null;
+    const rule = technologyTransitionsCheck({
+      refrigerant: outdoor.refrigerant,
+      installDate: design.installDate,
+      componentsMadeBefore2025: design.componentsMadeBefore2025,
+    });
+    for (const m of refrigerant.blockers)
+      blockers.push({
+        code: 'limit-exceeded',
+        kind: refrigerant.a2lBlockers.includes(m) ? 'a2l' : 'lines',
+        systemKey: s.key,
+        message: m,
+      });
+    for (const m of combination.refusals)
+      blockers.push({ code: 'combination-refused', kind: 'combination', systemKey: s.key, message: m });
+    if (rule.blocker)
+      blockers.push({ code: 'limit-exceeded', kind: 'refrigerant-rule', systemKey: s.key, message: rule.message });
+    for (const e of [electrical, ...(kitElectrical ? [kitElectrical] : [])])
+      for (const x of e.explanations)
+        if (x.status === 'blocker')
+          blockers.push({
+            code: 'limit-exceeded',
+            kind: 'electrical',
+            systemKey: s.key,
+            message: `${s.name}: ${x.verdict ?? x.text}`,
+          });
+    if (kitElectrical) warnings.push(...kitElectrical.warnings);
+    forTakeoff.push({
+      system: s,
+      outdoor,
+      indoorByZone,
+      refrigerant,
+      electrical,
+      heatKit: kit,
+      heatKitElectrical: kitElectrical,
+    });
+    const explanations: Explanation[] = [
+      ...explainSizing({
+        keyPrefix: `${p}`,
+        who: s.name,
+        sizing,
+        cooling: outdoor.cooling,
+        heating: outdoor.heating,
+        equipmentType: outdoor.equipmentType,
+        coolingDesignF: dc.outdoorCoolingDryBulbF,
+        heatingDesignF: dc.outdoorHeatingDryBulbF,
+        sensibleLoadBtuh: sum.sensibleBtuh,
+        latentLoadBtuh: sum.latentBtuh,
+      }),
+      ...(heating ? heating.explanations : []),
+      { ...combination.explanation, key: `${p}combination` },
+      ...refrigerant.circuits.map((c) => c.explanation),
+      ...refrigerant.explanations,
+      ...electrical.explanations,
+      ...(kitElectrical ? kitElectrical.explanations : []),
+      explanation({
+        key: `${p}refrigerant-rule`,
+        label: `Refrigerant rule, ${s.name}`,
+        value: rule.gwp,
+        unit: 'GWP',
+        valueText: `${outdoor.refrigerant}, GWP ${rule.gwp}`,
+        text: rule.message,
+        status: rule.blocker ? 'blocker' : rule.verdict === 'check-date' ? 'warning' : 'ok',
+        source: 'US EPA Technology Transitions rule, 40 CFR Part 84 Subpart B',
+      }),
+    ];
+    if (rule.verdict === 'check-date' || rule.verdict === 'allowed-old-components') warnings.push(rule.message);
     return {
       systemKey: s.key,
       name: s.name,
@@ -190,28 +332,60 @@ export function computeDesignFromParsed({
       combination,
       refrigerant,
       electrical,
+      heating,
+      heatKitKey: kit ? kit.key : null,
+      heatKitElectrical: kitElectrical,
+      refrigerantRule: rule,
+      explanations,
     };
   });
   const priced = priceLines({ lines: buildTakeoff({ systems: forTakeoff }), priceBook });
   const anyA2l = systems.some((s) => s.refrigerant.safetyClass === 'A2L');
+  const price = priceOption({ lines: priced.lines, pricing });
+  const explanations: Explanation[] = priced.lines.map((l) =>
+    explanation({
+      key: `line:${l.itemKey}`,
+      label: l.description,
+      value: l.extendedCostCents,
+      unit: 'cents',
+      valueText: explainExtension({
+        quantity: l.quantity,
+        unit: l.unit,
+        unitCents: l.unitCostCents,
+        extendedCents: l.extendedCostCents,
+      }),
+      text: `${l.quantity} ${l.unit}: ${l.derivation}; ${explainExtension({ quantity: l.quantity, unit: l.unit, unitCents: l.unitCostCents, extendedCents: l.extendedCostCents })}`,
+      status: l.unitCostCents === null ? 'warning' : 'ok',
+    }),
+  );
+  explanations.push(
+    ...explainOptionPrice({
+      price,
+      pricing,
+      plans: pricing.financing
+        ? [{ key: 'financing', name: `${pricing.financing.months} months`, ...pricing.financing }]
+        : [],
+    }),
+  );
   return {
     loads,
     zones,
     systems,
     takeoff: priced.lines,
-    price: priceOption({ lines: priced.lines, pricing }),
+    price,
     warnings: [
       ...warnings,
       ...zones.flatMap((z) => z.sizing.warnings),
       ...systems.flatMap((s) => [
         ...s.sizing.warnings,
         ...s.combination.warnings,
-        ...s.refrigerant.blockers,
         ...s.refrigerant.warnings,
         ...s.electrical.warnings,
       ]),
       ...priced.warnings,
     ],
+    blockers,
+    explanations,
     cautions: [
       CAUTIONS.estimate,
       CAUTIONS.makerAndCode,

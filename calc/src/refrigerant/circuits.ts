@@ -61,6 +61,8 @@ export interface RefrigerantPlan {
   readonly totalChargeOz: number;
   readonly warnings: readonly string[];
   readonly blockers: readonly string[];
+  /** The blockers that are A2L room-size checks (a subset of `blockers`). */
+  readonly a2lBlockers: readonly string[];
   readonly notes: readonly string[];
   readonly cautions: readonly string[];
   /** Extra charge in total, total system charge, A2L check: each with its formula. */
@@ -117,9 +119,12 @@ const rate = (v: number) => `${formatNumber(v, 3, { trim: true })} oz/ft`;
 export function refrigerantPlan({
   outdoor,
   circuits,
+  keyPrefix = '',
 }: {
   readonly outdoor: OutdoorUnit;
   readonly circuits: readonly CircuitToPlan[];
+  /** Prefix of the explanations' keys ("sys-1:"), so two systems of one design stay apart. */
+  readonly keyPrefix?: string;
 }): RefrigerantPlan {
   let totalLength = 0;
   let totalInstalled = 0;
@@ -201,7 +206,7 @@ export function refrigerantPlan({
       warnings: w,
       blockers: b,
       explanation: explanation({
-        key: `charge:${circuit.zoneKey}`,
+        key: `${keyPrefix}charge:${circuit.zoneKey}`,
         label: `Extra charge, ${name} circuit`,
         value: extra,
         unit: 'oz',
@@ -264,7 +269,7 @@ export function refrigerantPlan({
     );
   const explanations: Explanation[] = [
     explanation({
-      key: 'charge:extra-total',
+      key: `${keyPrefix}charge:extra-total`,
       label: 'Extra charge, all circuits',
       value: extra,
       unit: 'oz',
@@ -276,7 +281,7 @@ export function refrigerantPlan({
       status: 'ok',
     }),
     explanation({
-      key: 'charge:system-total',
+      key: `${keyPrefix}charge:system-total`,
       label: 'Total system charge',
       value: total,
       unit: 'oz',
@@ -290,6 +295,7 @@ export function refrigerantPlan({
     }),
   ];
   const info = REFRIGERANT_INFO[outdoor.refrigerant];
+  const a2lBlockers: string[] = [];
   if (isA2l({ refrigerant: outdoor.refrigerant }) && info.lflKgPerM3 !== null) {
     cautions.push(CAUTIONS.a2l);
     const chargeKg = gFromOz({ oz: total }) / 1000;
@@ -306,10 +312,13 @@ export function refrigerantPlan({
         const ok = roomAreaM2 >= minArea;
         const name = zoneName ?? circuit.zoneKey;
         const msg = `The room with the ${name} indoor unit (${formatQuantity(roomAreaM2, 'm²', 1)}) is smaller than the estimated minimum ${formatQuantity(minArea, 'm²', 1)} for this charge: check the maker's room-size rules or mitigation (leak detection, ventilation).`;
-        if (!ok) blockers.push(msg);
+        if (!ok) {
+          blockers.push(msg);
+          a2lBlockers.push(msg);
+        }
         explanations.push(
           explanation({
-            key: `a2l:${circuit.zoneKey}`,
+            key: `${keyPrefix}a2l:${circuit.zoneKey}`,
             label: `A2L room size, ${name}`,
             value: roundHalfUp(minArea, 1),
             unit: 'm²',
@@ -324,7 +333,7 @@ export function refrigerantPlan({
     } else {
       explanations.push(
         explanation({
-          key: 'a2l:m1',
+          key: `${keyPrefix}a2l:m1`,
           label: 'A2L charge threshold',
           value: roundHalfUp(chargeKg, 2),
           unit: 'kg',
@@ -337,6 +346,7 @@ export function refrigerantPlan({
       );
     }
   }
+  const blockersAll = [...planned.flatMap((c) => c.blockers), ...blockers];
   return {
     refrigerant: outdoor.refrigerant,
     safetyClass: info.safetyClass,
@@ -347,8 +357,10 @@ export function refrigerantPlan({
     extraChargeOz: extra,
     factoryChargeOz: outdoor.factoryChargeOz,
     totalChargeOz: total,
-    warnings: [...warnings, ...planned.flatMap((c) => c.warnings)],
-    blockers: [...planned.flatMap((c) => c.blockers), ...blockers],
+    // The blockers are listed among the warnings too (as before they had their own list), so a reader of warnings misses none.
+    warnings: [...warnings, ...blockersAll, ...planned.flatMap((c) => c.warnings)],
+    blockers: blockersAll,
+    a2lBlockers,
     notes,
     cautions,
     explanations,

@@ -60,6 +60,8 @@ export const systemSchema = z.object({
   mounting: z.enum(['pad', 'wall-bracket'], { error: 'Choose pad or wall bracket' }).default('pad'),
   circuits: z.array(circuitSchema).min(1, 'Add at least one line-set circuit').max(8, 'At most 8 circuits per system'),
   electrical: electricalInputSchema,
+  /** An electric heat kit from the catalog for backup heat (ducted systems), on its own circuit of the same run. */
+  heatKitKey: keyField('Heat kit').optional(),
 });
 
 /** The design: zones and systems. */

@@ -104,10 +104,20 @@ export const outdoorUnitSchema = z.object({
   mocpA: bounded('Maximum overcurrent protection', 15, 150, 'A'),
 });
 
+/** An electric heat kit (backup heat in an air handler), with its own branch circuit. */
+export const heatKitSchema = z.object({
+  key: keyField('Heat kit key'),
+  description: nameField('Description', 120),
+  kw: bounded('Heat kit', 1, 30, 'kW'),
+  mcaA: bounded('Minimum circuit ampacity', 1, 150, 'A'),
+  mocpA: bounded('Maximum overcurrent protection', 15, 200, 'A'),
+});
+
 /** The equipment catalog the design chooses from. */
 export const equipmentCatalogSchema = z.object({
   indoorUnits: z.array(indoorUnitSchema).max(500, 'At most 500 indoor units'),
   outdoorUnits: z.array(outdoorUnitSchema).max(500, 'At most 500 outdoor units'),
+  heatKits: z.array(heatKitSchema).max(100, 'At most 100 heat kits').optional(),
 });
 
 export type CapacityPoint = z.output<typeof capacityPointSchema>;
@@ -116,5 +126,6 @@ export type IndoorUnit = z.output<typeof indoorUnitSchema>;
 export type OutdoorUnit = z.output<typeof outdoorUnitSchema>;
 export type IndoorUnitInput = z.input<typeof indoorUnitSchema>;
 export type OutdoorUnitInput = z.input<typeof outdoorUnitSchema>;
+export type HeatKit = z.output<typeof heatKitSchema>;
 export type EquipmentCatalog = z.output<typeof equipmentCatalogSchema>;
 export type EquipmentCatalogInput = z.input<typeof equipmentCatalogSchema>;

@@ -2,6 +2,9 @@ import { roundHalfUp } from '../rounding';
 import type { EquipmentType, IndoorUnit, OutdoorUnit } from '../schemas/equipment';
 import { capacityAtOutdoorF, sizingRatio } from './capacity';
 import { isHeatPump, type SizingPolicy } from './policy';
+import { assignPorts, portLetter } from './ports';
+import { explanation, type Explanation } from '../explain/explanation';
+import { formatNumber, formatPercent, formatQuantity } from '../explain/format';
 
 /** The loads a piece of equipment must meet, Btu/h. */
 export interface LoadToMeet {
@@ -160,10 +163,21 @@ export interface CombinationCheck {
   readonly connectedPercent: number;
   readonly allowedPercent: { readonly min: number; readonly max: number };
   readonly ok: boolean;
+  /** The port each indoor unit sits on (0 = A), in circuit order; null without a port table or when refused. */
+  readonly ports: readonly number[] | null;
+  /** Why the combination is refused (too many heads, a size no port accepts, connected capacity out of range). */
+  readonly refusals: readonly string[];
   readonly warnings: readonly string[];
+  readonly explanation: Explanation;
 }
 
-/** Sum of connected indoor nominal capacity ÷ outdoor nominal, %, rounded half-up to 1 %; and the head count. [PUB: maker combination tables, typical] */
+const kBtuh = (v: number) => `${formatNumber(v / 1000, 1, { trim: true })}k`;
+
+/**
+ * Sum of connected indoor nominal capacity ÷ outdoor nominal, %, rounded half-up to 1 %; the head
+ * count against the ports; each indoor size against the port table when the maker gives one. Every
+ * failure refuses the combination (the design cannot be marked ready). [PUB: maker combination tables]
+ */
 export function checkCombination({
   outdoor,
   indoor,
@@ -174,25 +188,54 @@ export function checkCombination({
   const connected = indoor.reduce((s, u) => s + u.nominalBtuh, 0);
   const pct = roundHalfUp((connected / outdoor.nominalBtuh) * 100);
   const { min, max } = outdoor.connectedRatioPercent;
-  const warnings: string[] = [];
+  const refusals: string[] = [];
   if (indoor.length > outdoor.maxHeads)
-    warnings.push(
+    refusals.push(
       `${outdoor.description} takes at most ${outdoor.maxHeads} indoor unit(s); ${indoor.length} are connected.`,
     );
+  let ports: number[] | null = null;
+  const table = outdoor.portSizesBtuh;
+  if (table !== undefined && table.length > 0 && indoor.length <= table.length) {
+    ports = assignPorts({ portSizesBtuh: table, indoorNominalBtuh: indoor.map((u) => u.nominalBtuh) });
+    if (ports === null) {
+      const accepted = [...new Set(table.flat())].sort((a, b) => a - b);
+      const misfit = indoor.filter((u) => !accepted.includes(u.nominalBtuh));
+      refusals.push(
+        misfit.length > 0
+          ? `${misfit.map((u) => `${u.description} (${kBtuh(u.nominalBtuh)})`).join(', ')}: no port of ${outdoor.description} accepts that size (ports take ${table.map((p, i) => `${portLetter(i)} ${p.map(kBtuh).join('/')}`).join('; ')}).`
+          : `These indoor sizes cannot all be seated on ${outdoor.description}'s ports (${table.map((p, i) => `${portLetter(i)} ${p.map(kBtuh).join('/')}`).join('; ')}): change one of them.`,
+      );
+    }
+  }
   if (pct < min)
-    warnings.push(
+    refusals.push(
       `The connected indoor units add up to ${pct} % of ${outdoor.description}'s capacity; the maker allows ${min}–${max} %. Add or enlarge indoor units, or choose a smaller outdoor unit.`,
     );
   if (pct > max)
-    warnings.push(
+    refusals.push(
       `The connected indoor units add up to ${pct} % of ${outdoor.description}'s capacity; the maker allows ${min}–${max} %. Remove or shrink indoor units, or choose a larger outdoor unit.`,
     );
+  const ok = refusals.length === 0;
+  const sizes = indoor.map((u) => formatQuantity(u.nominalBtuh, 'Btu/h')).join(' + ');
   return {
     heads: indoor.length,
     maxHeads: outdoor.maxHeads,
     connectedPercent: pct,
     allowedPercent: { min, max },
-    ok: warnings.length === 0,
-    warnings,
+    ok,
+    ports,
+    refusals,
+    warnings: refusals,
+    explanation: explanation({
+      key: 'combination',
+      label: `Indoor units on ${outdoor.description}`,
+      value: pct,
+      unit: '%',
+      valueText: formatPercent(pct),
+      text: `${indoor.length} of ${outdoor.maxHeads} port(s) used${ports ? ` (${ports.map(portLetter).join(', ')})` : ''}; ${sizes || '0 Btu/h'} = ${formatQuantity(connected, 'Btu/h')} ÷ ${formatQuantity(outdoor.nominalBtuh, 'Btu/h')} nominal = ${formatPercent(pct)}`,
+      verdict: ok ? `Within the maker's ${min}–${max} % and its ports.` : refusals.join(' '),
+      status: ok ? 'ok' : 'blocker',
+      source: "The maker's combination table",
+    }),
   };
 }

@@ -2,7 +2,7 @@ import type { ElectricalPlan } from '../electrical/plan';
 import type { CircuitCharge, RefrigerantPlan } from '../refrigerant/circuits';
 import { roundHalfUp, roundUpTo } from '../rounding';
 import type { Circuit, System } from '../schemas/design';
-import type { IndoorUnit, OutdoorUnit } from '../schemas/equipment';
+import type { HeatKit, IndoorUnit, OutdoorUnit } from '../schemas/equipment';
 import { OZ_PER_LB } from '../units';
 import { LABOR_HOURS, TAKEOFF_DEFAULTS } from './defaults';
 import type { TakeoffLine } from './lines';
@@ -14,6 +14,8 @@ export interface SystemForTakeoff {
   readonly indoorByZone: ReadonlyMap<string, IndoorUnit>;
   readonly refrigerant: RefrigerantPlan;
   readonly electrical: ElectricalPlan;
+  readonly heatKit?: HeatKit | undefined;
+  readonly heatKitElectrical?: ElectricalPlan | null | undefined;
 }
 
 /** Lines with the same item key merged as they are produced (one key, one group). */
@@ -313,6 +315,26 @@ function systemLines(s: SystemForTakeoff, out: LineMerger): void {
     L.electricalBase + wiring.circuitLengthFt * L.electricalPerFt,
     `${ELECTRICAL_LABOR_TEXT[0]}${wiring.circuitLengthFt}${ELECTRICAL_LABOR_TEXT[1]} (${name})`,
   );
+  if (s.heatKit) {
+    out.add(`equipment:${s.heatKit.key}`, s.heatKit.description, 1, 'each', 'equipment', `backup heat for ${name}`);
+    const k = s.heatKitElectrical;
+    if (k && k.breakerA !== null)
+      out.mat(
+        `breaker:2p-${k.breakerA}a`,
+        `2-pole breaker ${k.breakerA} A`,
+        1,
+        'each',
+        `heat kit circuit, MOCP ${k.mocpA} A (${name})`,
+      );
+    if (k && k.wireAwg !== null)
+      out.mat(
+        `wire:${wiring.wiringMethod}:${k.wireAwg}awg`,
+        `${k.wireAwg} AWG copper, ${wiring.wiringMethod}`,
+        roundUpTo(wiring.circuitLengthFt + T.cableSlackFt, T.cableStepFt),
+        'ft',
+        `heat kit MCA ${k.mcaA} A → ${k.wireAwg} AWG (${name})`,
+      );
+  }
   const r = s.refrigerant;
   const cylLb = T.cylinderLb[r.refrigerant];
   const cylinders = cylindersToBuy({ extraOz: r.extraChargeOz, cylinderLb: cylLb });

@@ -186,3 +186,23 @@ describe('outdoor dry bulb through the design day (fraction of daily range, ASHR
     expect(() => outdoorDryBulbAtHour({ designDryBulbF: 95, dailyRangeF: 20, hour: 0 })).toThrow();
   });
 });
+
+describe('southern hemisphere design day', () => {
+  it('with no design month entered, a southern site takes January and a northern one July', async () => {
+    const { homeLoad } = await import('@calc');
+    const { ranchHome } = await import('./ranch-home');
+    const { designMonth: _m, ...rest } = ranchHome.designConditions;
+    const south = homeLoad({ home: { ...ranchHome, designConditions: { ...rest, latitudeDeg: -33.9 } } });
+    const north = homeLoad({ home: { ...ranchHome, designConditions: { ...rest, latitudeDeg: 33.9 } } });
+    expect(south.designDay.month).toBe(1);
+    // 21 January is day 21 of the year (ASHRAE ch. 14 monthly design day: the 21st)
+    expect(south.designDay.dayOfYear).toBe(21);
+    expect(north.designDay.month).toBe(7);
+    // Noon sun at 33.9° S on 21 January stands in the north: δ = 23.45·sin(360°·(21 + 284)/365) = −20.14°
+    // (ASHRAE ch. 14 declination), altitude 90 − |L − δ| = 90 − 13.76 = 76.24°, azimuth 0° (north).
+    const { solarPosition } = await import('@calc');
+    const noon = solarPosition({ latitudeDeg: -33.9, dayOfYear: 21, solarTimeHours: 12 });
+    expect(noon.altitudeDeg).toBeCloseTo(76.24, 1);
+    expect(Math.min(noon.azimuthDeg, 360 - noon.azimuthDeg)).toBeLessThan(0.01);
+  });
+});

@@ -100,7 +100,8 @@ function laggedDt(te: Float64Array, indoorF: number, lag: number, decrement: num
 export function designDayContext(c: DesignConditions): DesignDayContext {
   const latitudeAssumed = c.latitudeDeg === undefined;
   const latitudeDeg = c.latitudeDeg ?? DEFAULT_LATITUDE_DEG;
-  const month = c.designMonth;
+  // The summer design month by hemisphere when none is entered. [OWN: stated default]
+  const month = c.designMonth ?? (latitudeDeg < 0 ? 1 : 7);
   const n = designDayOfYear(month);
   const skyIsGeneric = c.clearSkyTauB === undefined || c.clearSkyTauD === undefined;
   const tauB = skyIsGeneric ? GENERIC_CLEAR_SKY.tauB : (c.clearSkyTauB ?? GENERIC_CLEAR_SKY.tauB);

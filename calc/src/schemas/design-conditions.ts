@@ -20,8 +20,8 @@ export const designConditionsSchema = z
     source: z.string().max(200, 'Source must be at most 200 characters').optional(),
     /** Site latitude, degrees (north positive). Unknown → calc assumes 40° N and says so. */
     latitudeDeg: bounded('Latitude', -60, 70, '°').optional(),
-    /** Month of the cooling design day (its 21st). [PUB: ASHRAE ch. 14 monthly design days] */
-    designMonth: boundedInt('Design month', 1, 12).default(7),
+    /** Month of the cooling design day (its 21st); unset: July north of the equator, January south. [PUB: ASHRAE ch. 14 monthly design days] */
+    designMonth: boundedInt('Design month', 1, 12).optional(),
     /** Clear-sky optical depths of the site and month (ASHRAE ch. 14 climatic data); both or neither. */
     clearSkyTauB: bounded('Beam optical depth τb', 0.1, 1.5).optional(),
     clearSkyTauD: bounded('Diffuse optical depth τd', 1, 3.5).optional(),

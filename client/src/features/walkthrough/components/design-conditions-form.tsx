@@ -10,6 +10,7 @@ import { useDebouncedSave } from '../../../lib/offline/use-debounced-save';
 import { markUnsavedFields } from '../../../lib/offline/unsaved-fields';
 import { NumberInput, SelectInput, TextInput } from './field-kit';
 import { HouseFields, type HouseDraft } from './house-fields';
+import { LatitudeField } from './latitude-field';
 
 const NOTICE =
   'Design values must come from the local code’s climate table or a recognised climatic data source for the site.';
@@ -94,6 +95,20 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
     });
   };
 
+  const hintOf = (f: (typeof DESIGN_FIELD_SPECS)[number], origin: keyof typeof sourceLabels, value: unknown) => (
+    <>
+      <span data-source={origin}>Source: {sourceLabels[origin]}</span>
+      {f.whenEmpty && value === undefined ? <span className="block">{f.whenEmpty}</span> : null}
+    </>
+  );
+  const change = (key: (typeof DESIGN_FIELD_SPECS)[number]['key'], v: number | undefined) => {
+    // Emptying a field with a company default must not snap the default back in while typing.
+    const typed = v === undefined && typeof companyDefaults?.[key] === 'number' ? Number.NaN : v;
+    const next = { ...entered, [key]: typed };
+    setEntered(next);
+    save({ entered: next });
+  };
+
   return (
     <section aria-label="Design conditions" className="flex flex-col gap-4">
       <p className="rounded-md border-l-4 border-amber-line bg-amber-soft px-4 py-3 text-ink-950">{notice ?? NOTICE}</p>
@@ -103,27 +118,25 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
           const origin = resolved.origin[f.key];
           return (
             <div key={f.key} className="flex flex-col gap-2 rounded-md border border-line p-3">
-              <NumberInput
-                label={f.label}
-                quantity={f.quantity}
-                unit={f.unit ?? ''}
-                value={typeof value === 'number' ? value : undefined}
-                error={errors.get(f.key)}
-                integer={f.integer ?? false}
-                hint={
-                  <>
-                    <span data-source={origin}>Source: {sourceLabels[origin]}</span>
-                    {f.whenEmpty && value === undefined ? <span className="block">{f.whenEmpty}</span> : null}
-                  </>
-                }
-                onChange={(v) => {
-                  // Emptying a field with a company default must not snap the default back in while typing.
-                  const typed = v === undefined && typeof companyDefaults?.[f.key] === 'number' ? Number.NaN : v;
-                  const next = { ...entered, [f.key]: typed };
-                  setEntered(next);
-                  save({ entered: next });
-                }}
-              />
+              {f.key === 'latitudeDeg' ? (
+                <LatitudeField
+                  value={typeof value === 'number' ? value : undefined}
+                  error={errors.get(f.key)}
+                  hint={hintOf(f, origin, value)}
+                  onChange={(v) => change(f.key, v)}
+                />
+              ) : (
+                <NumberInput
+                  label={f.label}
+                  quantity={f.quantity}
+                  unit={f.unit ?? ''}
+                  value={typeof value === 'number' ? value : undefined}
+                  error={errors.get(f.key)}
+                  integer={f.integer ?? false}
+                  hint={hintOf(f, origin, value)}
+                  onChange={(v) => change(f.key, v)}
+                />
+              )}
               {origin === 'entered' && typeof companyDefaults?.[f.key] === 'number' ? (
                 <Button
                   variant="ghost"

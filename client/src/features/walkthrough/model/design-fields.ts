@@ -29,10 +29,10 @@ export const DESIGN_FIELD_SPECS: readonly DesignFieldSpec[] = [
   { key: 'elevationFt', label: 'Elevation', quantity: 'elevation' },
   {
     key: 'latitudeDeg',
-    label: 'Latitude (south negative)',
+    label: 'Latitude',
     quantity: 'plain',
     unit: '°',
-    whenEmpty: 'Left empty: 40° N is assumed, and the loads say so.',
+    whenEmpty: 'Left empty: 40° N is assumed, and the loads say so. South of the equator press S.',
   },
   {
     key: 'designMonth',
@@ -40,7 +40,7 @@ export const DESIGN_FIELD_SPECS: readonly DesignFieldSpec[] = [
     quantity: 'plain',
     unit: '1–12',
     integer: true,
-    whenEmpty: 'Left empty: July (7). South of the equator use January (1).',
+    whenEmpty: 'Left empty: July (7) north of the equator, January (1) south of it.',
   },
   {
     key: 'clearSkyTauB',

@@ -35,7 +35,8 @@ export async function readDeskJob(ctx: ServiceContext, jobId: string): Promise<D
   };
 }
 
-function homeOf(job: Job, rooms: Room[]): HomeInput | { problem: FieldError } {
+/** The home calc works out, or why it cannot yet. */
+export function homeOf(job: Job, rooms: Room[]): HomeInput | { problem: FieldError } {
   if (!job.designConditions)
     return { problem: { path: 'designConditions', message: 'Enter the design conditions for the site first.' } };
   if (rooms.length === 0) return { problem: { path: 'rooms', message: 'Add the rooms of the walk-through first.' } };

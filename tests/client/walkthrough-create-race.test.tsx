@@ -65,7 +65,7 @@ describe('a new room whose create is answered while its name is being typed', ()
       { send: 'real', queryClient, path: `/jobs/${JOB_ID}` },
     );
 
-    fireEvent.click(await screen.findByRole('button', { name: 'Copy previous room' }));
+    fireEvent.click(await screen.findByRole('button', { name: 'Copy room' }));
     const nameField = await screen.findByDisplayValue('Bedroom 2 (copy)');
     // Every value the name field shows from here on, and whether it is still the same element.
     const shown: string[] = [];

@@ -94,7 +94,7 @@ describe('adding rooms', () => {
       queryClient: seeded(),
       online: () => false,
     });
-    fireEvent.click(await screen.findByRole('button', { name: 'Copy previous room' }));
+    fireEvent.click(await screen.findByRole('button', { name: 'Copy room' }));
     await waitFor(() => expect(screen.getByLabelText('Room name')).toHaveValue('Bedroom 2 (copy)'));
     expect(screen.getAllByLabelText('Wall length')).toHaveLength(1);
 
@@ -104,5 +104,47 @@ describe('adding rooms', () => {
     const kinds = queue.getSnapshot().items.map((i) => i.payload.kind);
     expect(kinds).toEqual(['room-create', 'room-create']);
     expect(queue.getSnapshot().items[0]?.payload).toMatchObject({ input: { name: 'Bedroom 2 (copy)', lengthFt: 12 } });
+  });
+});
+
+describe('one hand on a phone', () => {
+  const twoRooms = () => {
+    const queryClient = seeded();
+    queryClient.setQueryData(jobKeys.rooms(JOB_ID), [
+      roomRecord(bedroomInput, 3),
+      { ...roomRecord({ ...bedroomInput, id: NEW_ID, name: 'Den', lengthFt: 9 }, 1), id: NEW_ID, position: 1 },
+    ]);
+    return queryClient;
+  };
+
+  it('a reload opens the room last open, and "Copy room" copies the room that is open', async () => {
+    localStorage.clear();
+    const first = await renderWalkthrough(<WalkthroughView jobId={JOB_ID} />, {
+      queryClient: twoRooms(),
+      online: () => false,
+    });
+    fireEvent.click(await screen.findByRole('button', { name: 'Den' }));
+    await waitFor(() => expect(screen.getByLabelText('Room name')).toHaveValue('Den'));
+    first.unmount();
+
+    const { queue } = await renderWalkthrough(<WalkthroughView jobId={JOB_ID} />, {
+      queryClient: twoRooms(),
+      online: () => false,
+    });
+    await waitFor(() => expect(screen.getByLabelText('Room name')).toHaveValue('Den'));
+    fireEvent.click(screen.getByRole('button', { name: 'Copy room' }));
+    await waitFor(() => expect(screen.getByLabelText('Room name')).toHaveValue('Den (copy)'));
+    expect(queue.getSnapshot().items[0]?.payload).toMatchObject({ input: { name: 'Den (copy)', lengthFt: 9 } });
+  });
+
+  it('pins the room’s live loads in one line, and folds a complete wall to a summary', async () => {
+    await renderWalkthrough(<WalkthroughView jobId={JOB_ID} />, { queryClient: seeded(), online: () => false });
+    const bar = await screen.findByTestId('room-load-bar');
+    expect(bar.textContent).toMatch(/^Sensible [\d,]+ · Latent [\d,]+ · Heat loss [\d,]+ Btu\/h$/);
+    const wall = screen.getByText('Wall 1: faces W, 10 ft, 1 window, 0 doors').closest('details');
+    expect(wall).not.toHaveAttribute('open');
+    fireEvent.click(screen.getByRole('button', { name: 'Add wall' }));
+    const added = screen.getByText(/^Wall 2: faces N/).closest('details');
+    expect(added).toHaveAttribute('open');
   });
 });

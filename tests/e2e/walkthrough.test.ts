@@ -101,13 +101,15 @@ describe('a salesperson walks a home on a phone', () => {
     await addRoom(page, 'Bedroom');
     note(`added bedroom; editor shows ${await page.getByLabel('Room name').inputValue()}`);
     await page.getByLabel('Room name').fill('Bedroom east');
+    // The template's wall is complete, so it is folded to one line: a tap opens it.
+    await page.locator('summary', { hasText: /^Wall 1:/ }).click();
     await page.getByRole('button', { name: 'Add window' }).first().click();
     await page.getByLabel('Window width').last().fill('30');
     await page.getByLabel('Window height').last().fill('48');
     await waitSaved(page);
 
     // Room 3: a copy of the previous room, renamed
-    await page.getByRole('button', { name: 'Copy previous room' }).click();
+    await page.getByRole('button', { name: 'Copy room' }).click();
     note(`copied; editor shows ${await page.getByLabel('Room name').inputValue()}`);
     await page.getByLabel('Room name').fill('Bedroom west');
     await waitSaved(page);

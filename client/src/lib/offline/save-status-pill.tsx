@@ -56,6 +56,8 @@ function text(s: SaveStatus): string {
 export function focusFirstInvalidField(): void {
   const field = document.querySelector<HTMLElement>('main [aria-invalid="true"], [aria-invalid="true"]');
   if (!field) return;
+  // A folded section (a wall, the design conditions) opens to show the field.
+  for (let d = field.closest('details'); d; d = d.parentElement?.closest('details') ?? null) d.open = true;
   field.scrollIntoView?.({ block: 'center' });
   field.focus({ preventScroll: true });
 }

@@ -1,6 +1,7 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { Button } from '../../../components/ui/button';
+import { RoomLoadBar } from '../../loads/components/room-load-bar';
 import { RoomLoadPanel } from '../../loads/components/room-load-panel';
 import { asNumber, asRecords, asString, setIn, type PathPart } from '../model/draft';
 import { floorLevelOptions } from '../model/options';
@@ -77,6 +78,8 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
   const err = (path: readonly PathPart[]) => check.errors.get(pathKey(path));
   const props = { draft, set, err };
   const walls = asRecords(draft.exposedWalls);
+  // Walls the room came with fold once complete; one added now opens to be filled in.
+  const [wallsAtOpen] = useState(walls.length);
   const name = asString(draft.name) || 'Room';
 
   return (
@@ -141,7 +144,14 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
           <h3 className="text-lg font-semibold text-ink-900">Outside walls</h3>
           {err(['exposedWalls']) ? <p className="text-sm font-semibold text-danger">{err(['exposedWalls'])}</p> : null}
           {walls.map((_, i) => (
-            <WallFields key={i} index={i} replace={replace} {...props} />
+            <WallFields
+              key={i}
+              index={i}
+              replace={replace}
+              startOpen={i >= wallsAtOpen}
+              hasError={[...check.errors.keys()].some((k) => k.startsWith(`exposedWalls.${i}.`))}
+              {...props}
+            />
           ))}
           <div>
             <Button variant="secondary" onClick={() => replace(setIn(draft, ['exposedWalls'], [...walls, NEW_WALL]))}>
@@ -182,6 +192,8 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
           <RoomPhotos jobId={jobId} room={room} />
         </QueryWidgetBoundary>
       </div>
+      {/* On a phone the loads stay in sight as one line pinned to the bottom of the screen. */}
+      <RoomLoadBar room={check.ok ? check.room : null} designConditions={designConditions} tightness={tightness} />
       {/* On a wide screen the loads stay in view beside the form while it is filled in. */}
       <aside className="min-w-0 lg:sticky lg:top-20 lg:self-start">
         <QueryWidgetBoundary name="the room loads">

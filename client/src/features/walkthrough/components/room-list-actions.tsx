@@ -4,24 +4,24 @@ import { copyRoomInput, newRoomId, ROOM_TEMPLATES } from '../model/room-template
 import { roomTarget } from '../sync/edits';
 import type { RoomView } from '../sync/overlay';
 import { useWalkthroughQueue } from '../sync/queue-context';
-import { SelectInput } from './field-kit';
 
 const templateOptions = ROOM_TEMPLATES.map((t) => ({ value: t.key, label: t.label }));
 
-/** "Add room" from a template and "Copy previous room": a typical room in a tap or two. */
+/** "Add room" from a template and "Copy this room" (the one open): a typical room in a tap or two. */
 export function RoomListActions({
   jobId,
   rooms,
+  current,
   onCreated,
 }: {
   jobId: string;
   rooms: readonly RoomView[];
+  current: RoomView | null;
   onCreated: (id: string) => void;
 }) {
   const queue = useWalkthroughQueue();
   const [template, setTemplate] = useState('bedroom');
   const nextPosition = rooms.reduce((m, r) => Math.max(m, r.position + 1), 0);
-  const previous = rooms[rooms.length - 1];
 
   const create = (input: Record<string, unknown>, id: string) => {
     void queue.enqueue({
@@ -48,19 +48,31 @@ export function RoomListActions({
     );
   };
   const handleCopy = () => {
-    if (!previous) return;
+    if (!current) return;
     const id = newRoomId();
-    create(copyRoomInput(previous.input, id), id);
+    create(copyRoomInput(current.input, id), id);
   };
 
   return (
-    <div className="flex flex-wrap items-end gap-2">
-      <div className="min-w-44">
-        <SelectInput label="Room template" value={template} options={templateOptions} onChange={setTemplate} />
-      </div>
+    <div className="flex items-center gap-2">
+      <label className="sr-only" htmlFor="room-template">
+        Room template
+      </label>
+      <select
+        id="room-template"
+        className="min-h-touch min-w-0 flex-1 rounded-md border border-line bg-white px-2 text-base text-ink-950 sm:max-w-56"
+        value={template}
+        onChange={(e) => setTemplate(e.target.value)}
+      >
+        {templateOptions.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
       <Button onClick={handleAdd}>Add room</Button>
-      <Button variant="secondary" disabled={!previous} onClick={handleCopy}>
-        Copy previous room
+      <Button variant="secondary" disabled={!current} onClick={handleCopy}>
+        Copy room
       </Button>
     </div>
   );

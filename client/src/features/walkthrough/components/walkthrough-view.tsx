@@ -1,5 +1,5 @@
 import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
-import { Suspense, useState, type ReactNode } from 'react';
+import { Suspense, useEffect, useRef, useState, type ReactNode } from 'react';
 import { mayEditJob, type JobRecord } from '@contract';
 import { Link } from 'react-router-dom';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
@@ -25,6 +25,7 @@ import { RoomListActions } from './room-list-actions';
 import { RoomTabs } from './room-tabs';
 import { UnitSystemContext } from './unit-system';
 import { clearUnsavedDraft } from '../../../lib/offline/drafts';
+import { lastRoom, rememberRoom } from '../model/last-room';
 
 /**
  * The walk-through of one job: design conditions, rooms one at a time, live loads.
@@ -52,11 +53,31 @@ export function WalkthroughView({
   const settings = useQuery(companySettingsQueryOptions()).data ?? null;
   const rooms = overlayRooms(serverJob.id, serverRooms, state.items);
   const { job } = overlayJob(serverJob, state.items, settings?.defaultDesignConditions ?? null);
-  const [selected, setSelected] = useState<string | null>(null);
+  // A reload opens the room last open here (the person was in the middle of it).
+  const [selected, setSelected] = useState<string | null>(() => lastRoom(jobId));
+  const roomTop = useRef<HTMLDivElement>(null);
+  const scrollToRoom = useRef(false);
   const [revision, setRevision] = useState(0);
   const viewer = useViewer();
   const current = rooms.find((r) => r.id === selected) ?? rooms[0] ?? null;
   const conflict = state.conflict && state.conflict.payload.jobId === job.id ? state.conflict : null;
+  useEffect(() => {
+    if (current) rememberRoom(jobId, current.id);
+  }, [jobId, current?.id]); // eslint-disable-line react-hooks/exhaustive-deps
+  // A room picked or added starts at its top (its name), not wherever the last one was scrolled to;
+  // a reload returns to the room last open; a job opened fresh (after "Create job") starts at the top.
+  const firstRoom = useRef(current?.id === selected && selected !== null);
+  useEffect(() => {
+    if (!state.loaded) return;
+    if (scrollToRoom.current || firstRoom.current) roomTop.current?.scrollIntoView?.({ block: 'start' });
+    else window.scrollTo?.(0, 0);
+    scrollToRoom.current = false;
+    firstRoom.current = false;
+  }, [current?.id, state.loaded]); // eslint-disable-line react-hooks/exhaustive-deps
+  const openRoom = (id: string) => {
+    scrollToRoom.current = true;
+    setSelected(id);
+  };
   const address = [job.site.street, job.site.unit, job.site.city, job.site.region].filter(Boolean).join(', ');
 
   const handleDelete = () => {
@@ -81,17 +102,25 @@ export function WalkthroughView({
   return (
     <UnitSystemContext.Provider value={settings?.unitSystem ?? 'imperial'}>
       <div className="flex flex-col gap-6 pb-24">
-        <header className="sticky top-0 z-10 -mx-4 flex flex-wrap items-center justify-between gap-2 border-b border-line bg-paper/95 px-4 py-2 backdrop-blur">
-          <div>
-            <h1 className="text-xl font-semibold text-ink-900">{job.customer.name}</h1>
-            <p className="text-sm text-muted">{address}</p>
+        {/* Sticky on a phone: who, the save status, and the rooms with "Add room" and "Copy room",
+            so moving to the next room never needs a scroll back up. */}
+        <header className="sticky top-0 z-10 -mx-4 flex flex-col gap-2 border-b border-line bg-paper/95 px-4 py-2 backdrop-blur">
+          <div className="flex flex-wrap items-center justify-between gap-2">
+            <div className="min-w-0">
+              <h1 className="truncate text-xl font-semibold text-ink-900">{job.customer.name}</h1>
+              <p className="truncate text-sm text-muted">{address}</p>
+            </div>
+            <div className="flex flex-wrap items-center gap-2">
+              <LiveSaveStatus />
+              <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
+                Loads summary
+              </Link>
+            </div>
           </div>
-          <div className="flex flex-wrap items-center gap-2">
-            <LiveSaveStatus />
-            <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
-              Loads summary
-            </Link>
-          </div>
+          <nav aria-label="Rooms of this job" className="flex flex-col gap-2">
+            <RoomTabs rooms={rooms} selectedId={current?.id ?? null} onSelect={openRoom} />
+            <RoomListActions jobId={job.id} rooms={rooms} current={current} onCreated={openRoom} />
+          </nav>
         </header>
 
         {conflict ? (
@@ -137,10 +166,8 @@ export function WalkthroughView({
 
         <section aria-label="Walk-through rooms" className="flex flex-col gap-4">
           <h2 className="text-lg font-semibold text-ink-900">Rooms</h2>
-          <RoomTabs rooms={rooms} selectedId={current?.id ?? null} onSelect={setSelected} />
-          <RoomListActions jobId={job.id} rooms={rooms} onCreated={setSelected} />
           {current ? (
-            <div className="rounded-lg border border-line bg-white p-4">
+            <div ref={roomTop} className="scroll-mt-56 rounded-lg border border-line bg-white p-4">
               <QueryWidgetBoundary name="the room form">
                 <RoomEditor
                   key={`${current.id}:${revision}`}
@@ -156,7 +183,7 @@ export function WalkthroughView({
             </div>
           ) : (
             <EmptyState title="No rooms yet">
-              Pick a template and add the first room, then walk the house room by room.
+              Pick a template at the top and add the first room, then walk the house room by room.
             </EmptyState>
           )}
         </section>

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { append, asNumber, asRecords, asString, getIn, removeAt } from '../model/draft';
 import { constructionOptions, directionOptions } from '../model/options';
@@ -18,90 +19,108 @@ export const NEW_DOOR = { widthIn: 36, heightIn: 80, count: 1, doorType: 'insula
 interface WallProps extends EditorProps {
   index: number;
   replace: (next: unknown) => void;
+  /** Some field of this wall (or its windows and doors) shows an error. */
+  hasError: boolean;
+  /** Added during this visit: opens unfolded to be filled in. */
+  startOpen: boolean;
 }
 
 /** One exposed wall: facing, length, construction, and the windows and doors in it. */
-export function WallFields({ draft, set, err, index, replace }: WallProps) {
+export function WallFields({ draft, set, err, index, replace, hasError, startOpen }: WallProps) {
   const base = ['exposedWalls', index] as const;
   const p = (...k: (string | number)[]) => [...base, ...k];
   const v = (k: string) => getIn(draft, p(k));
   const windows = asRecords(v('windows'));
   const doors = asRecords(v('doors'));
+  // A complete wall folds to one line, so a phone scrolls past it; one with an error stays open.
+  const [open, setOpen] = useState(() => startOpen || hasError || asNumber(v('lengthFt')) === undefined);
+  const length = asNumber(v('lengthFt'));
+  const count = (n: number, one: string) => `${n} ${one}${n === 1 ? '' : 's'}`;
+  const summary = `Wall ${index + 1}: faces ${asString(v('direction'), 'N')}, ${length === undefined ? 'no length yet' : `${length} ft`}, ${count(windows.length, 'window')}, ${count(doors.length, 'door')}`;
   return (
-    <fieldset className="flex flex-col gap-3 rounded-lg border border-ink-200 bg-ink-50/40 p-3">
-      <legend className="px-1 font-semibold text-ink-900">Wall {index + 1}</legend>
-      <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-        <SelectInput
-          label="Wall faces"
-          value={asString(v('direction'), 'N')}
-          options={directionOptions}
-          onChange={(x) => set(p('direction'), x)}
-          error={err(p('direction'))}
-        />
-        <NumberInput
-          label="Wall length"
-          quantity="ft"
-          value={asNumber(v('lengthFt'))}
-          onChange={(x) => set(p('lengthFt'), x)}
-          error={err(p('lengthFt'))}
-        />
-        <NumberInput
-          label="Wall height"
-          hint="Blank uses the ceiling height"
-          quantity="ft"
-          value={asNumber(v('heightFt'))}
-          onChange={(x) => set(p('heightFt'), x)}
-          error={err(p('heightFt'))}
-        />
-        <SelectInput
-          label="Construction"
-          value={asString(v('construction'), 'wood-2x4-r13')}
-          options={constructionOptions}
-          onChange={(x) => set(p('construction'), x)}
-          error={err(p('construction'))}
-        />
-        <SelectInput
-          label="Outside colour"
-          value={asString(v('color'), 'medium')}
-          options={COLOR_OPTIONS}
-          onChange={(x) => set(p('color'), x)}
-          error={err(p('color'))}
-        />
-      </div>
-      {err(p('windows')) ? <p className="text-sm font-semibold text-danger">{err(p('windows'))}</p> : null}
-      {windows.map((_, wi) => (
-        <WindowFields
-          key={wi}
-          draft={draft}
-          set={set}
-          err={err}
-          base={p('windows', wi)}
-          index={wi}
-          onRemove={() => replace(removeAt(draft, p('windows'), wi))}
-        />
-      ))}
-      {doors.map((_, di) => (
-        <DoorFields
-          key={di}
-          draft={draft}
-          set={set}
-          err={err}
-          base={p('doors', di)}
-          index={di}
-          onRemove={() => replace(removeAt(draft, p('doors'), di))}
-        />
-      ))}
-      <div className="flex flex-wrap gap-2">
-        <Button variant="secondary" onClick={() => replace(append(draft, p('windows'), NEW_WINDOW))}>
-          Add window
-        </Button>
-        <Button variant="secondary" onClick={() => replace(append(draft, p('doors'), NEW_DOOR))}>
-          Add door
-        </Button>
-        <Button variant="ghost" onClick={() => replace(removeAt(draft, ['exposedWalls'], index))}>
-          Remove wall {index + 1}
-        </Button>
-      </div>
-    </fieldset>
+    <details
+      open={open || hasError}
+      onToggle={(e) => setOpen(e.currentTarget.open)}
+      className="rounded-lg border border-ink-200 bg-ink-50/40"
+    >
+      <summary className="flex min-h-touch cursor-pointer items-center px-3 font-semibold text-ink-900">
+        {summary}
+      </summary>
+      <fieldset className="flex flex-col gap-3 border-t border-ink-200 p-3">
+        <legend className="sr-only">Wall {index + 1}</legend>
+        <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+          <SelectInput
+            label="Wall faces"
+            value={asString(v('direction'), 'N')}
+            options={directionOptions}
+            onChange={(x) => set(p('direction'), x)}
+            error={err(p('direction'))}
+          />
+          <NumberInput
+            label="Wall length"
+            quantity="ft"
+            value={asNumber(v('lengthFt'))}
+            onChange={(x) => set(p('lengthFt'), x)}
+            error={err(p('lengthFt'))}
+          />
+          <NumberInput
+            label="Wall height"
+            hint="Blank uses the ceiling height"
+            quantity="ft"
+            value={asNumber(v('heightFt'))}
+            onChange={(x) => set(p('heightFt'), x)}
+            error={err(p('heightFt'))}
+          />
+          <SelectInput
+            label="Construction"
+            value={asString(v('construction'), 'wood-2x4-r13')}
+            options={constructionOptions}
+            onChange={(x) => set(p('construction'), x)}
+            error={err(p('construction'))}
+          />
+          <SelectInput
+            label="Outside colour"
+            value={asString(v('color'), 'medium')}
+            options={COLOR_OPTIONS}
+            onChange={(x) => set(p('color'), x)}
+            error={err(p('color'))}
+          />
+        </div>
+        {err(p('windows')) ? <p className="text-sm font-semibold text-danger">{err(p('windows'))}</p> : null}
+        {windows.map((_, wi) => (
+          <WindowFields
+            key={wi}
+            draft={draft}
+            set={set}
+            err={err}
+            base={p('windows', wi)}
+            index={wi}
+            onRemove={() => replace(removeAt(draft, p('windows'), wi))}
+          />
+        ))}
+        {doors.map((_, di) => (
+          <DoorFields
+            key={di}
+            draft={draft}
+            set={set}
+            err={err}
+            base={p('doors', di)}
+            index={di}
+            onRemove={() => replace(removeAt(draft, p('doors'), di))}
+          />
+        ))}
+        <div className="flex flex-wrap gap-2">
+          <Button variant="secondary" onClick={() => replace(append(draft, p('windows'), NEW_WINDOW))}>
+            Add window
+          </Button>
+          <Button variant="secondary" onClick={() => replace(append(draft, p('doors'), NEW_DOOR))}>
+            Add door
+          </Button>
+          <Button variant="ghost" onClick={() => replace(removeAt(draft, ['exposedWalls'], index))}>
+            Remove wall {index + 1}
+          </Button>
+        </div>
+      </fieldset>
+    </details>
   );
 }

@@ -1,0 +1,56 @@
+import type { Room } from '@calc';
+import { useState } from 'react';
+import { computeRoomLoad } from '../model/compute';
+import { LoadFigures } from './load-figures';
+
+const n = (v: number) => v.toLocaleString('en-US');
+
+interface Props {
+  room: Room | null;
+  designConditions: Record<string, unknown> | null;
+  tightness: string;
+}
+
+/**
+ * A phone's view of the room's live loads: one line pinned to the bottom of the screen while the
+ * form scrolls (sensible, latent, heat loss), which opens to the figures. Hidden on a wide screen,
+ * where the full panel stays beside the form.
+ */
+export function RoomLoadBar({ room, designConditions, tightness }: Props) {
+  const [open, setOpen] = useState(false);
+  const result = room ? computeRoomLoad(room, designConditions, tightness) : null;
+  const line = !room
+    ? 'Loads wait for the fields marked in red'
+    : result && !result.ok
+      ? result.message
+      : result?.ok
+        ? `Sensible ${n(result.value.sensibleGain.total)} · Latent ${n(result.value.latentGain.total)} · Heat loss ${n(result.value.heatLoss.total)} Btu/h`
+        : '';
+  return (
+    <aside
+      aria-label="This room’s loads, pinned"
+      className="fixed inset-x-0 bottom-0 z-20 border-t border-ink-200 bg-white/95 shadow-[0_-2px_8px_rgba(0,0,0,0.08)] backdrop-blur lg:hidden"
+    >
+      {open && result?.ok ? (
+        <div id="room-load-bar-figures" className="max-h-[55vh] overflow-y-auto px-4 pt-3">
+          <LoadFigures load={result.value} />
+        </div>
+      ) : null}
+      <button
+        type="button"
+        aria-expanded={open}
+        aria-controls={open ? 'room-load-bar-figures' : undefined}
+        disabled={!result?.ok}
+        onClick={() => setOpen((o) => !o)}
+        className="flex min-h-touch w-full items-center justify-between gap-2 px-4 py-2 text-left text-sm font-semibold text-ink-900 disabled:cursor-default"
+      >
+        <span data-testid="room-load-bar">{line}</span>
+        {result?.ok ? (
+          <span aria-hidden="true" className="shrink-0 text-muted">
+            {open ? '▾' : '▴'}
+          </span>
+        ) : null}
+      </button>
+    </aside>
+  );
+}

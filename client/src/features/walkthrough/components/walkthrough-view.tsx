@@ -73,7 +73,7 @@ export function WalkthroughView({
     else window.scrollTo?.(0, 0);
     scrollToRoom.current = false;
     firstRoom.current = false;
-  }, [current?.id, state.loaded]); // eslint-disable-line react-hooks/exhaustive-deps
+  }, [current?.id, state.loaded]);
   const openRoom = (id: string) => {
     scrollToRoom.current = true;
     setSelected(id);

@@ -51,7 +51,23 @@ async function cacheHolds(page: Page, jobId: string): Promise<boolean> {
         const db = open.result;
         if (!db.objectStoreNames.contains('queries')) return resolve(false);
         const get = db.transaction('queries').objectStore('queries').get('queries');
-        get.onsuccess = () => resolve(typeof get.result === 'string' && get.result.includes(id));
+        // Held means the walk-through's own two queries were saved with their data (the job and its
+        // rooms), not merely that the id appears somewhere in what was saved.
+        get.onsuccess = () => {
+          if (typeof get.result !== 'string') return resolve(false);
+          const saved = JSON.parse(get.result) as {
+            clientState?: { queries?: { queryKey: unknown; state: { status: string } }[] };
+          };
+          const held = new Set(
+            (saved.clientState?.queries ?? [])
+              .filter((q) => q.state.status === 'success')
+              .map((q) => JSON.stringify(q.queryKey)),
+          );
+          resolve(
+            held.has(JSON.stringify(['jobs', 'detail', id])) &&
+              held.has(JSON.stringify(['jobs', 'detail', id, 'rooms'])),
+          );
+        };
         get.onerror = () => resolve(false);
       };
     });

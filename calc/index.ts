@@ -83,3 +83,4 @@ export * from './src/refrigerant/rules';
 export * from './src/electrical/voltage-drop';
 export * from './src/sizing/ports';
 export * from './src/design/explain-sizing';
+export * from './src/catalog/design-bridge';

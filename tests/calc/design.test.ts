@@ -53,7 +53,7 @@ describe('full design on the worked three-room house', () => {
     expect(qty(r, 'condensate-line:3/4')).toBe(30); // 15 → 20, 8 → 10
     expect(qty(r, 'condensate-pump')).toBe(1);
     expect(qty(r, 'wire:nm-b:12awg')).toBe(50); // 42 + 5 → 50
-    expect(qty(r, 'refrigerant:R-32:20lb')).toBe(1); // 2.4 oz → one 20 lb cylinder
+    expect(qty(r, 'refrigerant:R-32')).toBe(0.25); // 4.0 oz ÷ 16 oz/lb, priced by the pound used (issue 9)
     expect(qty(r, 'labor:run-line-set')).toBe(2.7); // (0.75 + 0.8) + (0.75 + 0.4)
     expect(qty(r, 'labor:electrical')).toBe(2.84); // 2 + 42 × 0.02
     for (const l of r.takeoff) {
@@ -63,19 +63,20 @@ describe('full design on the worked three-room house', () => {
   });
   it('price: every step to the cent', () => {
     const p = run().price;
-    // Equipment 210,000 + 52,000 + 46,000 = 308,000; materials 99,550 (sum of the price-book lines); labor 16.64 h × 9,500 = 158,080
+    // Equipment 210,000 + 52,000 + 46,000 = 308,000; materials 81,825 (sum of the price-book lines; refrigerant is
+    // 0.25 lb × 1,100 = 275 since it is priced by the pound used, no longer an 18,000 cylinder); labor 16.64 h × 9,500 = 158,080
     expect(p.equipmentCostCents).toBe(308000);
-    expect(p.materialsCostCents).toBe(99550);
+    expect(p.materialsCostCents).toBe(81825);
     expect(p.laborCostCents).toBe(158080);
-    // Goods 407,550 / 0.6 = 679,250; labor 158,080 / 0.6 = 263,466.67 → 263,467; sell 942,717; − 25,000 = 917,717
-    expect(p.sellCents).toBe(942717);
-    expect(p.subtotalCents).toBe(917717);
-    // Taxable goods share 679,250 × 917,717 / 942,717 = 661,236.91 → 661,237; 6 % = 39,674.22 → 39,674; total 957,391
-    expect(p.taxCents).toBe(39674);
-    expect(p.totalCents).toBe(957391);
-    // Deposit 30 % = 287,217.3 → 287,217; balance 670,174; 9.99 % / 60 months → 14,235.92 → 14,236
-    expect(p.depositCents).toBe(287217);
-    expect(p.monthlyPaymentCents).toBe(14236);
+    // Goods 389,825 / 0.6 = 649,708.33 → 649,708; labor 158,080 / 0.6 = 263,466.67 → 263,467; sell 913,175; − 25,000 = 888,175
+    expect(p.sellCents).toBe(913175);
+    expect(p.subtotalCents).toBe(888175);
+    // Taxable goods share 649,708 × 888,175 / 913,175 = 631,920.94 → 631,921; 6 % = 37,915.26 → 37,915; total 926,090
+    expect(p.taxCents).toBe(37915);
+    expect(p.totalCents).toBe(926090);
+    // Deposit 30 % = 277,827; balance 648,263; 9.99 % / 60 months [PUB: annuity formula] → 13,770.48 → 13,770
+    expect(p.depositCents).toBe(277827);
+    expect(p.monthlyPaymentCents).toBe(13770);
   });
   it('cautions always include estimate, refrigerant, pressure test and electrician wording', () => {
     const r = run();

@@ -211,7 +211,7 @@ export const priceBook: PriceBookInput = {
     'whip:3/4x6ft': { unitCostCents: 1800 },
     'breaker:2p-30a': { unitCostCents: 1400 },
     'wire:nm-b:12awg': { unitCostCents: 110 },
-    'refrigerant:R-32:20lb': { unitCostCents: 18000 },
+    'refrigerant:R-32': { unitCostCents: 1100 },
     'nitrogen:test': { unitCostCents: 2500 },
   },
 };

@@ -303,6 +303,7 @@ export function computeDesignFromParsed({
         equipmentType: outdoor.equipmentType,
         coolingDesignF: dc.outdoorCoolingDryBulbF,
         heatingDesignF: dc.outdoorHeatingDryBulbF,
+        sensibleHeatRatio: outdoor.sensibleHeatRatio,
         sensibleLoadBtuh: sum.sensibleBtuh,
         latentLoadBtuh: sum.latentBtuh,
       }),

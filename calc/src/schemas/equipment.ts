@@ -65,6 +65,8 @@ export const outdoorUnitSchema = z.object({
   nominalBtuh: bounded('Nominal capacity', 6000, 120000, 'Btu/h'),
   cooling: capacityCurve('cooling'),
   heating: capacityCurve('heating').optional(),
+  /** Equipment sensible heat ratio at design (for the latent check of the whole system). */
+  sensibleHeatRatio: bounded('Sensible heat ratio', 0.5, 1).optional(),
   maxHeads: boundedInt('Maximum indoor units', 1, 8).default(1),
   connectedRatioPercent: z
     .object({

@@ -335,17 +335,18 @@ function systemLines(s: SystemForTakeoff, out: LineMerger): void {
         `heat kit MCA ${k.mcaA} A → ${k.wireAwg} AWG (${name})`,
       );
   }
+  // Refrigerant is priced by the pound put in (issue 9); the cylinder it comes from is the company's stock item.
   const r = s.refrigerant;
-  const cylLb = T.cylinderLb[r.refrigerant];
-  const cylinders = cylindersToBuy({ extraOz: r.extraChargeOz, cylinderLb: cylLb });
-  if (cylinders > 0)
+  if (r.extraChargeOz > 0) {
+    const lb = roundHalfUp(r.extraChargeOz / OZ_PER_LB, 2);
     out.mat(
-      `refrigerant:${r.refrigerant}:${cylLb}lb`,
-      `${r.refrigerant} refrigerant, ${cylLb} lb cylinder`,
-      cylinders,
-      'cylinder',
-      `${r.extraChargeOz} oz extra charge = ${roundHalfUp(r.extraChargeOz / OZ_PER_LB, 2)} lb → ${cylinders} × ${cylLb} lb (${name})`,
+      `refrigerant:${r.refrigerant}`,
+      `${r.refrigerant} refrigerant added on site`,
+      lb,
+      'lb',
+      `${r.extraChargeOz} oz extra charge ÷ 16 oz/lb = ${lb} lb (${name})`,
     );
+  }
   out.mat('nitrogen:test', 'Dry nitrogen for pressure test and purge', 1, 'each', `one test per system (${name})`);
   out.labor(
     'labor:pressure-test-evacuate',

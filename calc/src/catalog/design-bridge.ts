@@ -1,0 +1,238 @@
+import type { PriceBook } from '../pricing/schemas';
+import { tubeLabel } from '../refrigerant/tube';
+import type {
+  EquipmentCatalog,
+  EquipmentType,
+  HeatKit,
+  IndoorUnit,
+  OutdoorUnit,
+  CapacityPoint,
+} from '../schemas/equipment';
+import type { CatalogModel } from './model';
+import type { Kit, LaborTask, Material, RefrigerantCost } from './price-book';
+
+/**
+ * The bridge from the company's data (issue 12: catalog models and price-book rows, as calc's
+ * schemas parsed them) to what computeDesign reads, so the server hands over the active catalog and
+ * price book as they are. Pure field mapping; every model given is mapped whatever its `active`
+ * flag, so an option naming a retired model still computes (the caller says "discontinued").
+ */
+
+const INDOOR_TYPE: Record<NonNullable<CatalogModel['indoorType']>, IndoorUnit['unitType']> = {
+  wall: 'wall-head',
+  'ceiling-cassette': 'ceiling-cassette',
+  'floor-console': 'floor-console',
+  'slim-ducted': 'ducted-air-handler',
+  'air-handler': 'ducted-air-handler',
+};
+
+/** The sizing class of a model: heat pump or not, variable speed or single speed (the catalog has no two-stage flag). */
+export function equipmentTypeOf(m: Pick<CatalogModel, 'heatPump' | 'variableSpeed'>): EquipmentType {
+  if (m.heatPump) return m.variableSpeed ? 'heat-pump-variable-speed' : 'heat-pump-single-speed';
+  return m.variableSpeed ? 'ac-variable-speed' : 'ac-single-speed';
+}
+
+const curve = (points: CatalogModel['coolingPoints']): CapacityPoint[] =>
+  points.map((p) => ({ outdoorF: p.outdoorF, btuh: p.btuh }));
+
+/** An outdoor model as the engine's outdoor unit; null when a field the engine needs is missing. */
+export function outdoorUnitOf(m: CatalogModel): OutdoorUnit | null {
+  if (!m.kind.startsWith('outdoor-')) return null;
+  const nominal = m.nominalCoolingBtuh;
+  if (
+    nominal === undefined ||
+    m.refrigerant === undefined ||
+    m.factoryChargeOz === undefined ||
+    m.prechargedLengthFt === undefined ||
+    m.maxLineFt === undefined ||
+    m.maxLiftFt === undefined ||
+    m.mcaA === undefined ||
+    m.mocpA === undefined ||
+    m.coolingPoints.length === 0
+  )
+    return null;
+  const multi = m.kind === 'outdoor-multi-zone';
+  const u: OutdoorUnit = {
+    key: m.key,
+    description: m.name,
+    equipmentType: equipmentTypeOf(m),
+    refrigerant: m.refrigerant,
+    nominalBtuh: Math.max(6000, nominal),
+    cooling: curve(m.coolingPoints),
+    heating: m.heatingPoints.length > 0 ? curve(m.heatingPoints) : undefined,
+    maxHeads: multi ? (m.ports ?? 1) : 1,
+    connectedRatioPercent: {
+      min: m.connectedMinPercent ?? (multi ? 50 : 10),
+      max: m.connectedMaxPercent ?? (multi ? 130 : 200),
+    },
+    factoryChargeOz: m.factoryChargeOz,
+    prechargedLengthFt: Math.min(200, m.prechargedLengthFt),
+    chargeAdders: m.chargeAdders.map((a) => ({ liquidOdIn: a.liquidOdIn, ozPerFt: a.ozPerFt })),
+    prechargeBasis: m.prechargeBasis ?? 'per-circuit',
+    minLineLengthFt: Math.min(50, m.minLineFt ?? 10),
+    maxLineLengthFt: m.maxLineFt,
+    maxLiftFt: m.maxLiftFt,
+    mcaA: Math.max(1, m.mcaA),
+    mocpA: Math.max(15, m.mocpA),
+  };
+  const out: { -readonly [K in keyof OutdoorUnit]: OutdoorUnit[K] } = u;
+  if (m.liquidOdIn !== undefined) out.liquidOdIn = m.liquidOdIn;
+  if (m.maxTotalLineFt !== undefined) out.maxTotalLineLengthFt = Math.min(600, m.maxTotalLineFt);
+  if (m.maxIndoorHeightDiffFt !== undefined) out.maxIndoorHeightDiffFt = m.maxIndoorHeightDiffFt;
+  if (m.sensibleHeatRatio !== undefined) out.sensibleHeatRatio = m.sensibleHeatRatio;
+  if (multi && m.portSizesBtuh.length > 0) out.portSizesBtuh = m.portSizesBtuh.map((p) => [...p]);
+  return out;
+}
+
+/**
+ * An indoor model as the engine's indoor unit. A head with no capacity points of its own takes its
+ * single-zone pair's (the pair is rated as one), else its nominal at 95 °F; null without a type,
+ * nominal or connection sizes.
+ */
+export function indoorUnitOf(m: CatalogModel, models: ReadonlyMap<string, CatalogModel>): IndoorUnit | null {
+  if (m.kind !== 'indoor' || m.indoorType === undefined || m.nominalCoolingBtuh === undefined) return null;
+  if (m.liquidOdIn === undefined || m.suctionOdIn === undefined) return null;
+  let pair: CatalogModel | undefined;
+  for (const k of m.matchedKeys) {
+    const o = models.get(k);
+    if (o?.kind === 'outdoor-single-zone') {
+      pair = o;
+      break;
+    }
+  }
+  const cooling =
+    m.coolingPoints.length > 0
+      ? curve(m.coolingPoints)
+      : pair && pair.coolingPoints.length > 0
+        ? curve(pair.coolingPoints)
+        : [{ outdoorF: 95, btuh: m.nominalCoolingBtuh }];
+  const heating =
+    m.heatingPoints.length > 0
+      ? curve(m.heatingPoints)
+      : pair && pair.heatingPoints.length > 0
+        ? curve(pair.heatingPoints)
+        : undefined;
+  const u: { -readonly [K in keyof IndoorUnit]: IndoorUnit[K] } = {
+    key: m.key,
+    description: m.name,
+    unitType: INDOOR_TYPE[m.indoorType],
+    nominalBtuh: m.nominalCoolingBtuh,
+    cooling,
+    liquidOdIn: m.liquidOdIn,
+    suctionOdIn: m.suctionOdIn,
+    needsCondensatePump: false,
+  };
+  if (heating) u.heating = heating;
+  const shr = m.sensibleHeatRatio ?? pair?.sensibleHeatRatio;
+  if (shr !== undefined) u.sensibleHeatRatio = shr;
+  return u;
+}
+
+/** A heat-kit model as the engine's heat kit (its own MCA/MOCP, else 125 % of kW at 240 V and the next breaker up). */
+export function heatKitOf(m: CatalogModel): HeatKit | null {
+  if (m.kind !== 'heat-kit' || m.heatKitKw === undefined) return null;
+  // Resistance heat is a continuous load: 125 % of its current [PUB: NEC 424.3(B)], I = W / V.
+  const mca = m.mcaA ?? Math.round(((m.heatKitKw * 1000) / 240) * 1.25 * 10) / 10;
+  return {
+    key: m.key,
+    description: m.name,
+    kw: m.heatKitKw,
+    mcaA: Math.max(1, mca),
+    mocpA: Math.max(15, m.mocpA ?? mca),
+  };
+}
+
+/** The engine's catalog from the company's models (any iterable; a Map's values or an array). */
+export function designCatalogFromModels(models: Iterable<CatalogModel>): EquipmentCatalog {
+  const byKey = new Map<string, CatalogModel>();
+  for (const m of models) byKey.set(m.key, m);
+  const indoorUnits: IndoorUnit[] = [];
+  const outdoorUnits: OutdoorUnit[] = [];
+  const heatKits: HeatKit[] = [];
+  for (const m of byKey.values()) {
+    if (m.kind === 'indoor') {
+      const u = indoorUnitOf(m, byKey);
+      if (u) indoorUnits.push(u);
+    } else if (m.kind === 'heat-kit') {
+      const k = heatKitOf(m);
+      if (k) heatKits.push(k);
+    } else {
+      const u = outdoorUnitOf(m);
+      if (u) outdoorUnits.push(u);
+    }
+  }
+  return { indoorUnits, outdoorUnits, heatKits };
+}
+
+/**
+ * Which labor task prices each labor line of the takeoff (its hourly rate), by task key. The takeoff
+ * counts hours; a company whose task keys differ passes its own map.
+ */
+export const DEFAULT_LABOR_TASK_FOR: Readonly<Record<string, string>> = {
+  'labor:mount-indoor': 'mount-wall-head',
+  'labor:run-line-set': 'line-set-run',
+  'labor:wall-penetration': 'wall-penetration',
+  'labor:condensate-gravity': 'condensate-gravity',
+  'labor:condensate-pump': 'condensate-pump',
+  'labor:line-cover': 'line-cover',
+  'labor:set-outdoor': 'set-outdoor-pad',
+  'labor:electrical': 'electrical-base',
+  'labor:pressure-test-evacuate': 'pressure-test-evacuate',
+  'labor:charge-startup': 'charge-startup',
+};
+
+/**
+ * The engine's price book (cost per takeoff item key, cents) from the company's data:
+ * - `equipment:<model>` ← the model's cost; heat kits likewise;
+ * - `line-set-kit:<liquid>x<suction>:<n>ft` ← the line-set kit of those sizes and length;
+ * - `refrigerant:<R>` ← the refrigerant's cost per lb (the takeoff counts pounds);
+ * - `labor:*` ← the hourly rate of the task named in `laborTaskFor` (default DEFAULT_LABOR_TASK_FOR);
+ * - any other takeoff key ← the material whose SKU `itemMap` names for it, else a material whose SKU
+ *   is the takeoff key itself. Unmapped items stay unpriced (computeDesign warns "No price for …").
+ * `laborRateCents` (labor lines with no task) is the median hourly rate of the active tasks.
+ */
+export function designPriceBookFromCompany({
+  models,
+  materials = [],
+  labor = [],
+  kits = [],
+  refrigerants = [],
+  itemMap = {},
+  laborTaskFor = DEFAULT_LABOR_TASK_FOR,
+}: {
+  readonly models: Iterable<CatalogModel>;
+  readonly materials?: readonly Material[];
+  readonly labor?: readonly LaborTask[];
+  readonly kits?: readonly Kit[];
+  readonly refrigerants?: readonly RefrigerantCost[];
+  readonly itemMap?: Readonly<Record<string, string>>;
+  readonly laborTaskFor?: Readonly<Record<string, string>>;
+}): PriceBook {
+  const items: Record<string, { unitCostCents: number; description?: string }> = {};
+  for (const m of models) items[`equipment:${m.key}`] = { unitCostCents: m.costCents, description: m.name };
+  for (const k of kits)
+    if (k.kind === 'line-set' && k.liquidOdIn !== undefined && k.suctionOdIn !== undefined && k.lengthFt !== undefined)
+      items[`line-set-kit:${tubeLabel({ odIn: k.liquidOdIn })}x${tubeLabel({ odIn: k.suctionOdIn })}:${k.lengthFt}ft`] =
+        {
+          unitCostCents: k.costCents,
+          description: k.description,
+        };
+  for (const r of refrigerants) items[`refrigerant:${r.key}`] = { unitCostCents: r.costCentsPerLb };
+  const tasks = new Map<string, LaborTask>();
+  for (const t of labor) tasks.set(t.key, t);
+  for (const [line, task] of Object.entries(laborTaskFor)) {
+    const t = tasks.get(task);
+    if (t) items[line] = { unitCostCents: t.rateCentsPerHour, description: t.description };
+  }
+  const bySku = new Map<string, Material>();
+  for (const m of materials) bySku.set(m.key, m);
+  for (const m of materials)
+    if (items[m.key] === undefined) items[m.key] = { unitCostCents: m.costCents, description: m.description };
+  for (const [line, sku] of Object.entries(itemMap)) {
+    const m = bySku.get(sku);
+    if (m) items[line] = { unitCostCents: m.costCents, description: m.description };
+  }
+  const rates = labor.filter((t) => t.active).map((t) => t.rateCentsPerHour);
+  rates.sort((a, b) => a - b);
+  return { items, laborRateCents: rates[Math.floor(rates.length / 2)] ?? 0 };
+}

@@ -1,0 +1,92 @@
+import { describe, expect, it } from 'vitest';
+import {
+  catalogModelSchema,
+  computeDesign,
+  designCatalogFromModels,
+  designPriceBookFromCompany,
+  equipmentCatalogSchema,
+  kitSchema,
+  laborTaskSchema,
+  materialSchema,
+  refrigerantCostSchema,
+  type DesignInput,
+} from '@calc';
+import { demoCompanyData } from '../../fixtures/demo-company-data';
+import { pricing, threeRoomHome } from './sample-data';
+
+// A data mapping (issue 12 records → the engine's units): the checks compare each mapped field with the
+// company record it came from; the trade figures themselves are the (invented) demo data.
+const data = demoCompanyData();
+const models = data.models.map((m) => catalogModelSchema.parse(m));
+const catalog = designCatalogFromModels(models);
+
+describe('catalog records → the design engine', () => {
+  it('every active outdoor, indoor and heat-kit model maps to a unit the engine schema accepts', () => {
+    expect(equipmentCatalogSchema.safeParse(catalog).success).toBe(true);
+    const kinds = (k: string) => models.filter((m) => m.kind === k || m.kind.startsWith(k)).length;
+    expect(catalog.outdoorUnits).toHaveLength(kinds('outdoor-'));
+    expect(catalog.indoorUnits).toHaveLength(kinds('indoor'));
+    expect(catalog.heatKits).toHaveLength(kinds('heat-kit'));
+  });
+  it('multi-zone keeps its ports, per-size adders, system-total pre-charge and height limit', () => {
+    const src = models.find((m) => m.key === 'TSL-M36-4P');
+    const u = catalog.outdoorUnits.find((o) => o.key === 'TSL-M36-4P');
+    expect(u?.maxHeads).toBe(src?.ports);
+    expect(u?.portSizesBtuh).toEqual(src?.portSizesBtuh);
+    expect(u?.chargeAdders).toEqual(src?.chargeAdders);
+    expect(u?.prechargeBasis).toBe('system-total');
+    expect(u?.maxIndoorHeightDiffFt).toBe(src?.maxIndoorHeightDiffFt);
+    expect(u?.equipmentType).toBe('heat-pump-variable-speed');
+  });
+  it("a single-zone head with no points of its own takes its pair's ratings", () => {
+    const head = catalog.indoorUnits.find((i) => i.key === 'TSL-S12H-W');
+    const pair = models.find((m) => m.key === 'TSL-S12H-O');
+    expect(head?.cooling).toEqual(pair?.coolingPoints.map((p) => ({ outdoorF: p.outdoorF, btuh: p.btuh })));
+  });
+});
+
+describe('price book records → the engine price book, then a full design', () => {
+  const priceBook = designPriceBookFromCompany({
+    models,
+    materials: data.materials.map((m) => materialSchema.parse(m)),
+    labor: data.labor.map((m) => laborTaskSchema.parse(m)),
+    kits: data.kits.map((m) => kitSchema.parse(m)),
+    refrigerants: data.refrigerants.map((m) => refrigerantCostSchema.parse(m)),
+    itemMap: { 'comm-cable:14-4': 'WIRE-14-4' },
+  });
+  const design: DesignInput = {
+    zones: [
+      { key: 'z-living', name: 'Living', roomIds: ['living', 'kitchen'], indoorUnitKey: 'TSL-MH12-W' },
+      { key: 'z-bed', name: 'Bedroom', roomIds: ['bed'], indoorUnitKey: 'TSL-MH9-W' },
+    ],
+    systems: [
+      {
+        key: 's1',
+        name: 'Main',
+        outdoorUnitKey: 'TSL-M18-2P',
+        circuits: [
+          { zoneKey: 'z-living', lengthFt: 30 },
+          { zoneKey: 'z-bed', lengthFt: 40 },
+        ],
+        electrical: { circuitLengthFt: 40 },
+      },
+    ],
+  };
+  const r = computeDesign({ home: threeRoomHome, design, catalog, priceBook, pricing });
+  const line = (k: string) => r.takeoff.find((l) => l.itemKey === k);
+  it('prices kits, refrigerant by the pound, labor by its task and mapped materials from the company rows', () => {
+    expect(line('equipment:TSL-M18-2P')?.unitCostCents).toBe(models.find((m) => m.key === 'TSL-M18-2P')?.costCents);
+    expect(line('line-set-kit:1/4x3/8:35ft')?.unitCostCents).toBe(
+      data.kits.find((k) => k.key === 'LS-1438-35')?.costCents,
+    );
+    expect(line('comm-cable:14-4')?.unitCostCents).toBe(data.materials.find((m) => m.key === 'WIRE-14-4')?.costCents);
+    expect(line('labor:electrical')?.unitCostCents).toBe(
+      data.labor.find((t) => t.key === 'electrical-base')?.rateCentsPerHour,
+    );
+  });
+  it('the system-total pre-charge (2 × 25 ft) is subtracted once from the installed kits (35 + 50 ft)', () => {
+    // (35 + 50 − 50) ft × 0.2 oz/ft (the maker's 1/4 in adder) = 7.0 oz [reference §8 formula]
+    expect(r.systems[0]?.refrigerant.extraChargeOz).toBe(7);
+    expect(line('refrigerant:R-410A')?.quantity).toBe(0.44); // 7 oz ÷ 16 = 0.4375 → 0.44 lb
+  });
+});

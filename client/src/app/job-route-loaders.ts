@@ -2,6 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { z } from 'zod';
 import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../entities/job/queries';
+import { deskQueryOptions } from '../features/desk/api/get-desk';
 import { jobsQueryOptions } from '../features/jobs/api/get-jobs';
 import { filtersFromSearch } from '../features/jobs/components/jobs-filters';
 import { sharedWalkthroughQueue } from '../features/walkthrough/sync/walkthrough-queue';
@@ -42,6 +43,19 @@ export const jobWithRoomsLoader =
     await Promise.all([
       ensureHeld(queryClient, job.queryKey, () => queryClient.ensureQueryData(job)),
       ensureHeld(queryClient, rooms.queryKey, () => queryClient.ensureQueryData(rooms)),
+    ]);
+    return null;
+  };
+
+/** The desk: the job, its rooms (zones pick them) and its options, in parallel. */
+export const deskLoader =
+  (queryClient: QueryClient) =>
+  async ({ params }: LoaderFunctionArgs) => {
+    const jobId = jobIdOf(params);
+    await Promise.all([
+      queryClient.ensureQueryData(jobQueryOptions(jobId)),
+      queryClient.ensureQueryData(roomsQueryOptions(jobId)),
+      queryClient.ensureQueryData(deskQueryOptions(jobId)),
     ]);
     return null;
   };

@@ -38,6 +38,14 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
       lazy: { loader: jobWithRooms, Component: async () => (await import('./routes/job-loads')).default },
     },
     {
+      path: jobRoutePatterns.desk,
+      ErrorBoundary: RouteError,
+      lazy: {
+        loader: async () => (await loaders()).deskLoader(queryClient),
+        Component: async () => (await import('./routes/job-desk')).default,
+      },
+    },
+    {
       path: jobRoutePatterns.print,
       ErrorBoundary: RouteError,
       lazy: { loader: jobWithRooms, Component: async () => (await import('./routes/job-loads-print')).default },

@@ -5,6 +5,7 @@ export const jobPaths = {
   walkthrough: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}`,
   loads: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/loads`,
   print: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/loads/print`,
+  desk: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/desk`,
 } as const;
 
 /** Route patterns for the router, in step with jobPaths. */
@@ -14,6 +15,7 @@ export const jobRoutePatterns = {
   walkthrough: '/jobs/:jobId',
   loads: '/jobs/:jobId/loads',
   print: '/jobs/:jobId/loads/print',
+  desk: '/jobs/:jobId/desk',
 } as const;
 
 /** The API's addresses for a job and the records hanging off it. */

@@ -45,6 +45,9 @@ export function LoadsPage({ waiting = 0 }: { waiting?: number }) {
             <Link className={buttonClass('primary')} to={jobPaths.print(jobId)}>
               Printable summary
             </Link>
+            <Link className={buttonClass('secondary')} to={jobPaths.desk(jobId)}>
+              Options and price
+            </Link>
           </div>
         }
       />

@@ -1,0 +1,172 @@
+import { useState } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import { maySeeCost, mayEditOptions, mayDecideDiscount, type OptionRecord, type RoomRecord } from '@contract';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { errorMessage } from '../../../lib/api-error';
+import type { Viewer } from '../../../lib/viewer';
+import { useCreateOption } from '../api/create-option';
+import { useDeleteOption } from '../api/delete-option';
+import { financingQueryOptions } from '../api/get-financing';
+import type { DeskModel } from '../api/get-models';
+import { explanationView, viewOf, type ExplanationView } from '../model/result-view';
+import { Cautions } from './cautions';
+import { DesignForm } from './design-form';
+import { PricePanel } from './price-panel';
+import { PricingForm } from './pricing-form';
+import { SizingVerdict } from './sizing-verdict';
+import { SystemResults } from './system-results';
+import { TakeoffTable } from './takeoff-table';
+
+/** Every why the server sent for this option, by key (calc's explanations; a shape calc changes is left out). */
+function whysOf(option: OptionRecord): Map<string, ExplanationView> {
+  const out = new Map<string, ExplanationView>();
+  const raw: unknown = option.result ? Reflect.get(option.result, 'explanations') : undefined;
+  if (Array.isArray(raw))
+    for (const r of raw) {
+      const p = explanationView.safeParse(r);
+      if (p.success) out.set(p.data.key, p.data);
+    }
+  return out;
+}
+
+function Card({ title, children }: { title: string; children: React.ReactNode }) {
+  return (
+    <section aria-label={title} className="flex flex-col gap-3 rounded-lg border border-line bg-white p-4">
+      <h3 className="text-lg font-semibold text-ink-900">{title}</h3>
+      {children}
+    </section>
+  );
+}
+
+/** One option: its design on the left, what calc made of it on the right (sizing, lines, charge, electrical, takeoff, price). */
+export function OptionView({
+  jobId,
+  option,
+  count,
+  rooms,
+  models,
+  viewer,
+}: {
+  jobId: string;
+  option: OptionRecord;
+  count: number;
+  rooms: readonly RoomRecord[];
+  models: readonly DeskModel[];
+  viewer: Viewer;
+}) {
+  const canEdit = mayEditOptions(viewer.role);
+  const office = maySeeCost(viewer.role);
+  const plans = useQuery({ ...financingQueryOptions(), enabled: office }).data ?? [];
+  const copy = useCreateOption(jobId);
+  const remove = useDeleteOption(jobId);
+  const [copyName, setCopyName] = useState(`${option.name} (copy)`);
+  const view = option.result ? viewOf(option.result) : null;
+  const whys = whysOf(option);
+  return (
+    <div className="flex flex-col gap-4">
+      {option.preliminary ? (
+        <Alert tone="warning" title="Preliminary">
+          A first price from the walk-through; an estimator or the owner reviews it before it is proposed.
+        </Alert>
+      ) : null}
+      {option.problems.length > 0 ? (
+        <Alert tone="danger" title="This option cannot be worked out yet">
+          <ul className="list-disc pl-5">
+            {option.problems.map((p) => (
+              <li key={`${p.path}:${p.message}`}>{p.message}</li>
+            ))}
+          </ul>
+        </Alert>
+      ) : null}
+      {option.blockers.length > 0 ? (
+        <Alert tone="warning" title="Not ready to propose">
+          <ul className="list-disc pl-5">
+            {option.blockers.map((b) => (
+              <li key={`${b.code}:${b.message}`}>{b.message}</li>
+            ))}
+          </ul>
+        </Alert>
+      ) : null}
+      <div className="grid gap-4 xl:grid-cols-[minmax(0,5fr)_minmax(0,4fr)]">
+        <div className="flex flex-col gap-4">
+          <Card title="Design">
+            <DesignForm key={option.id} jobId={jobId} option={option} rooms={rooms} models={models} canEdit={canEdit} />
+          </Card>
+          {office ? (
+            <Card title="Pricing">
+              <PricingForm key={option.id} jobId={jobId} option={option} plans={plans} />
+            </Card>
+          ) : null}
+          {canEdit ? (
+            <Card title="Copy or delete">
+              <div className="flex flex-wrap items-end gap-2">
+                <label className="flex flex-col gap-1 text-sm font-semibold">
+                  Name of the copy
+                  <input
+                    className="min-h-touch rounded-md border border-line px-3 text-base font-normal"
+                    value={copyName}
+                    onChange={(e) => setCopyName(e.target.value)}
+                  />
+                </label>
+                <Button
+                  variant="secondary"
+                  busy={copy.isPending}
+                  disabled={count >= 3}
+                  onClick={() => copy.mutate({ name: copyName, copyFromOptionId: option.id })}
+                >
+                  Copy this option
+                </Button>
+                <Button
+                  variant="danger"
+                  busy={remove.isPending}
+                  onClick={() => {
+                    if (window.confirm(`Delete the option “${option.name}”?`)) remove.mutate(option);
+                  }}
+                >
+                  Delete option
+                </Button>
+              </div>
+              {count >= 3 ? <p className="text-sm text-muted">A job holds at most three options.</p> : null}
+              {copy.isError ? <p className="text-sm text-danger">{errorMessage(copy.error)}</p> : null}
+              {remove.isError ? <p className="text-sm text-danger">{errorMessage(remove.error)}</p> : null}
+            </Card>
+          ) : null}
+        </div>
+        <div className="flex flex-col gap-4">
+          {option.result?.price ? (
+            <Card title="Price">
+              <PricePanel jobId={jobId} option={option} whys={whys} owner={mayDecideDiscount(viewer.role)} />
+            </Card>
+          ) : null}
+          {view ? (
+            <Card title="Equipment, lines and charge, electrical">
+              {view.zones.map((z) => (
+                <div key={z.zoneKey} className="flex flex-col gap-1">
+                  <h4 className="font-semibold text-ink-900">
+                    {z.name}: {z.indoorUnitKey}
+                  </h4>
+                  {z.sizing ? <SizingVerdict sizing={z.sizing} /> : null}
+                </div>
+              ))}
+              {view.systems.map((s) => (
+                <SystemResults key={s.systemKey} system={s} zones={view.zones} models={models} />
+              ))}
+              {option.result && option.result.discontinued.length > 0 ? (
+                <p className="text-sm text-amber-deep">
+                  Discontinued: {option.result.discontinued.map((d) => `${d.key} (${d.name})`).join(', ')}
+                </p>
+              ) : null}
+              <Cautions title="Before installing" items={option.result?.cautions ?? []} />
+            </Card>
+          ) : null}
+          {option.result ? (
+            <Card title="Materials and labor">
+              <TakeoffTable lines={option.result.takeoff} />
+            </Card>
+          ) : null}
+        </div>
+      </div>
+    </div>
+  );
+}

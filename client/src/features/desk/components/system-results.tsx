@@ -1,0 +1,119 @@
+import { formatNumber, formatPercent, formatQuantity } from '@calc';
+import type { DeskModel } from '../api/get-models';
+import type { SystemView, ZoneView } from '../model/result-view';
+import { Cautions } from './cautions';
+import { SizingVerdict } from './sizing-verdict';
+import { Why } from './why';
+
+const modelName = (models: readonly DeskModel[], key: string) => {
+  const m = models.find((x) => x.key === key);
+  return m ? `${m.key} — ${m.name}` : key;
+};
+
+function Messages({ items, tone }: { items: readonly string[]; tone: 'warning' | 'blocker' }) {
+  if (items.length === 0) return null;
+  return (
+    <ul className={`list-disc pl-5 text-sm ${tone === 'blocker' ? 'text-danger' : 'text-amber-deep'}`}>
+      {[...new Set(items)].map((w) => (
+        <li key={w}>
+          {tone === 'blocker' ? 'Stops “ready to propose”: ' : ''}
+          {w}
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+/** One outdoor unit and what hangs off it: sizing, ports, each circuit's charge, the total, the electrical, with their whys. */
+export function SystemResults({
+  system,
+  zones,
+  models,
+}: {
+  system: SystemView;
+  zones: readonly ZoneView[];
+  models: readonly DeskModel[];
+}) {
+  const r = system.refrigerant;
+  const e = system.electrical;
+  const zoneName = (key: string) => zones.find((z) => z.zoneKey === key)?.name ?? key;
+  return (
+    <section
+      aria-label={`System ${system.name}`}
+      className="flex flex-col gap-3 rounded-lg border border-line bg-white p-4"
+    >
+      <h4 className="text-base font-semibold text-ink-900">
+        {system.name}: {modelName(models, system.outdoorUnitKey)}
+      </h4>
+      {system.sizing ? <SizingVerdict sizing={system.sizing} /> : null}
+      {system.combination ? (
+        <p className={`text-sm ${system.combination.ok ? 'text-ink-900' : 'font-semibold text-danger'}`}>
+          {system.combination.heads} of {system.combination.maxHeads} ports used; indoor units connected{' '}
+          {formatPercent(system.combination.connectedPercent)} of the outdoor unit’s nominal (the maker allows{' '}
+          {formatPercent(system.combination.allowedPercent.min)}–{formatPercent(system.combination.allowedPercent.max)}
+          ).
+        </p>
+      ) : null}
+      {system.combination ? <Messages items={system.combination.warnings} tone="warning" /> : null}
+
+      {r ? (
+        <div className="flex flex-col gap-2">
+          <h5 className="text-sm font-semibold uppercase tracking-wide text-muted">
+            Lines and charge ({r.refrigerant}
+            {r.safetyClass ? `, ${r.safetyClass}` : ''})
+          </h5>
+          {r.circuits.map((c) =>
+            c.explanation ? (
+              <Why
+                key={c.zoneKey}
+                e={c.explanation}
+                label={`${zoneName(c.zoneKey)}: ${formatQuantity(c.lengthFt, 'ft')} run, ${formatQuantity(c.liftFt, 'ft')} lift — extra charge`}
+              />
+            ) : (
+              <p key={c.zoneKey} className="text-sm">
+                {zoneName(c.zoneKey)}: extra charge {formatQuantity(c.extraChargeOz, 'oz', 1)}
+              </p>
+            ),
+          )}
+          {r.explanations.map((x) => (
+            <Why key={x.key} e={x} />
+          ))}
+          <p className="text-sm tabular-nums">
+            Total extra charge <strong>{formatQuantity(r.extraChargeOz, 'oz', 1)}</strong>; factory charge{' '}
+            {formatQuantity(r.factoryChargeOz, 'oz', 1)}; total system charge{' '}
+            <strong>{formatQuantity(r.totalChargeOz, 'oz', 1)}</strong>; total line length{' '}
+            {formatQuantity(r.totalLengthFt, 'ft')}.
+          </p>
+          <Messages items={[...r.blockers, ...r.circuits.flatMap((c) => c.blockers)]} tone="blocker" />
+          <Messages items={[...r.warnings, ...r.circuits.flatMap((c) => c.warnings)]} tone="warning" />
+          {r.notes.map((n) => (
+            <p key={n} className="text-sm text-muted">
+              {n}
+            </p>
+          ))}
+          <Cautions title="Refrigerant and pressure work" items={r.cautions} />
+        </div>
+      ) : null}
+
+      {e ? (
+        <div className="flex flex-col gap-2">
+          <h5 className="text-sm font-semibold uppercase tracking-wide text-muted">Electrical</h5>
+          <p className="text-sm tabular-nums">
+            MCA {formatNumber(e.mcaA, 1)} A, MOCP {formatNumber(e.mocpA)} A → breaker{' '}
+            <strong>{e.breakerA === null ? '—' : `${formatNumber(e.breakerA)} A`}</strong>, wire{' '}
+            <strong>{e.wireAwg === null ? '—' : `${e.wireAwg} AWG`}</strong>
+            {e.voltageDropPercent === null || e.voltageDropPercent === undefined
+              ? ''
+              : `, voltage drop ${formatPercent(e.voltageDropPercent, 1)}`}
+            .
+          </p>
+          {e.explanations.map((x) => (
+            <Why key={x.key} e={x} />
+          ))}
+          <Messages items={e.warnings} tone="warning" />
+          <Cautions title="Electrical" items={e.caution ? [e.caution] : []} />
+        </div>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,36 @@
+import { designSchema, type DesignInput } from '@calc';
+import type { OptionRecord, RoomRecord } from '@contract';
+import type { DeskModel } from '../api/get-models';
+
+/** The option's stored design as the form edits it, or a first zone and system to fill in. */
+export function designValues(option: OptionRecord): DesignInput {
+  const stored = designSchema.safeParse(option.design);
+  if (stored.success) return stored.data;
+  return {
+    zones: [{ key: 'zone-1', name: 'Zone 1', roomIds: [], indoorUnitKey: '' }],
+    systems: [
+      {
+        key: 'sys-1',
+        name: 'Outdoor unit 1',
+        outdoorUnitKey: '',
+        circuits: [{ zoneKey: 'zone-1', lengthFt: Number.NaN, liftFt: 0 }],
+        electrical: { circuitLengthFt: Number.NaN },
+      },
+    ],
+  };
+}
+
+/** A key not used yet among `used`: zone-2, zone-3, … */
+export function nextKey(prefix: string, used: readonly string[]): string {
+  for (let n = 1; ; n++) if (!used.includes(`${prefix}-${n}`)) return `${prefix}-${n}`;
+}
+
+export const roomName = (r: RoomRecord): string =>
+  typeof r.input.name === 'string' && r.input.name.trim() !== '' ? r.input.name : `Room ${r.position + 1}`;
+
+export const modelOptions = (models: readonly DeskModel[], outdoor: boolean) => [
+  { value: '', label: outdoor ? 'Choose an outdoor unit' : 'Choose an indoor unit' },
+  ...models
+    .filter((m) => (outdoor ? m.kind.startsWith('outdoor') : m.kind === 'indoor'))
+    .map((m) => ({ value: m.key, label: `${m.key} — ${m.name}` })),
+];

@@ -1,0 +1,125 @@
+import { randomUUID } from 'node:crypto';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { demoAccounts } from '../../fixtures/seed';
+import { axeViolations } from './axe';
+import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
+
+let e: E2E;
+beforeAll(async () => {
+  e = await startE2E();
+});
+afterAll(async () => e?.close());
+
+const account = (role: string) => {
+  const a = demoAccounts.find((x) => x.role === role && x.company.startsWith('Larkspur'));
+  if (!a) throw new Error(`no demo ${role}`);
+  return a;
+};
+
+/** A demo job with rooms and no options yet (the journey builds its own). */
+async function jobWithRooms(page: Page): Promise<string> {
+  const list = (await (await page.request.get('/api/jobs?page=1&pageSize=50')).json()) as {
+    items: { id: string; status: string }[];
+  };
+  for (const j of list.items) {
+    if (j.status !== 'walkthrough' && j.status !== 'design') continue;
+    const rooms = (await (await page.request.get(`/api/jobs/${j.id}/rooms`)).json()) as { rooms: unknown[] };
+    const desk = (await (await page.request.get(`/api/jobs/${j.id}/desk`)).json()) as { options: unknown[] };
+    if (rooms.rooms.length > 0 && desk.options.length === 0) return j.id;
+  }
+  throw new Error('no demo job with rooms and no options');
+}
+
+async function expectAccessible(page: Page) {
+  const found = await axeViolations(page);
+  expect(found, JSON.stringify(found, null, 2)).toEqual([]);
+}
+
+/** Picks the first real choice of a select (the first option is the "Choose …" prompt). */
+async function pickFirst(page: Page, label: string) {
+  const select = page.getByLabel(label).first();
+  const values = await select.locator('option').evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value));
+  const value = values.find((v) => v !== '');
+  if (!value) throw new Error(`nothing to choose in ${label}`);
+  await select.selectOption(value);
+}
+
+describe('the estimator’s desk', () => {
+  it('an estimator at 1440 px builds an option, sees the charge change with the line length, prices it, a discount beyond the limit waits for the owner, copies it and compares', async () => {
+    const est = account('estimator');
+    const { context, page } = await e.newPage(DESKTOP);
+    await signIn(page, est.email, est.password);
+    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    const jobId = await jobWithRooms(page);
+    await page.goto(`/jobs/${jobId}/desk`);
+    await page.getByText('No options yet').waitFor();
+    await expectAccessible(page);
+
+    const name = `Essential ${randomUUID().slice(0, 4)}`;
+    await page.getByLabel('New option name').fill(name);
+    await page.getByRole('button', { name: 'Add option' }).click();
+    await page.getByRole('tab', { name: new RegExp(name) }).waitFor();
+
+    const design = page.getByRole('form', { name: /^Design of/ });
+    // Design: every room in one zone, a single-zone outdoor unit, a 25 ft run.
+    const rooms = page.getByRole('group', { name: 'Rooms of zone 1' }).getByRole('checkbox');
+    for (const box of await rooms.all()) await box.check();
+    await pickFirst(page, 'Indoor unit');
+    await pickFirst(page, 'Outdoor unit');
+    await page.getByLabel('Line-set length (ft)').fill('25');
+    await page.getByLabel('Branch circuit length (ft)').fill('30');
+    await page.getByRole('button', { name: 'Save design' }).click();
+    await design.getByRole('status').filter({ hasText: 'Saved' }).waitFor();
+    const charge = page.getByText(/extra charge/).first();
+    await charge.waitFor();
+    const before = await page.getByText(/^Total extra charge/).textContent();
+
+    await page.getByLabel('Line-set length (ft)').fill('60');
+    await design.getByRole('status').filter({ hasText: 'Not saved yet' }).waitFor();
+    await page.getByRole('button', { name: 'Save design' }).click();
+    await design.getByRole('status').filter({ hasText: 'Saved' }).waitFor();
+    await expect.poll(() => page.getByText(/^Total extra charge/).textContent()).not.toBe(before);
+    // The charge opens to its why.
+    await page.getByText('why?').first().click();
+    await page.screenshot({ path: `${SHOTS}/desk-design-1440.png`, fullPage: true });
+    await expectAccessible(page);
+
+    const pricing = page.getByRole('form', { name: /^Pricing of/ });
+    // Pricing: 5 % within the estimator's limit applies; 40 % beyond it waits for the owner.
+    const totalBefore = await page.getByRole('tab', { name: new RegExp(name) }).textContent();
+    await page.getByRole('button', { name: 'Add a discount' }).click();
+    await page.getByLabel('Discount name').fill('Neighbour referral');
+    await page.getByLabel('Percent', { exact: true }).last().fill('5');
+    await page.getByRole('button', { name: 'Save pricing' }).click();
+    await pricing.getByRole('status').filter({ hasText: 'Saved' }).waitFor();
+    await expect.poll(() => page.getByRole('tab', { name: new RegExp(name) }).textContent()).not.toBe(totalBefore);
+    await page.getByLabel('Percent', { exact: true }).last().fill('40');
+    await page.getByRole('button', { name: 'Save pricing' }).click();
+    await page
+      .getByText('Discount awaiting the owner’s approval')
+      .waitFor()
+      .catch(async (err: unknown) => {
+        await page.screenshot({ path: `${SHOTS}/desk-fail.png`, fullPage: true });
+        throw err;
+      });
+
+    // Copy, then the two side by side.
+    await page.getByLabel('Name of the copy').fill(`${name} copy`);
+    await page.getByRole('button', { name: 'Copy this option' }).click();
+    await page.getByRole('tab', { name: new RegExp(`${name} copy`) }).waitFor();
+    await page.getByRole('heading', { name: 'Options side by side' }).waitFor();
+
+    // Not ready while the discount waits: the reason is said.
+    await page.getByRole('button', { name: 'Mark ready to propose' }).click();
+    await page.getByText('A discount is waiting for the owner’s approval.').first().waitFor();
+    await page.screenshot({ path: `${SHOTS}/desk-1440.png`, fullPage: true });
+    await expectAccessible(page);
+
+    await page.setViewportSize({ width: 768, height: 1024 });
+    await page.screenshot({ path: `${SHOTS}/desk-768.png`, fullPage: true });
+    await page.setViewportSize(PHONE);
+    await page.screenshot({ path: `${SHOTS}/desk-375.png`, fullPage: true });
+    await context.close();
+  });
+});

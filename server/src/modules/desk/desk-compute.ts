@@ -1,6 +1,12 @@
 import {
   CalcError,
-  computeDesign,
+  computeDesignFromParsed,
+  DEFAULT_SIZING_POLICY,
+  designSchema,
+  homeInputSchema,
+  parseOrThrow,
+  priceBookSchema,
+  type Home,
   extendCents,
   monthlyPaymentCents,
   priceOption,
@@ -71,7 +77,32 @@ export interface EngineData {
 }
 
 export function engineData(desk: CompanyDesk): EngineData {
-  return { desk, catalog: engineCatalog(desk.models), priceBook: enginePriceBook(desk, desk.models) };
+  return {
+    desk,
+    catalog: engineCatalog(desk.models),
+    priceBook: priceBookSchema.parse(enginePriceBook(desk, desk.models)),
+  };
+}
+
+/** A home parsed once for all of a job's options. */
+export interface ParsedHome {
+  readonly parsed: Home;
+}
+
+/** The job's home through calc's schema, once per request; a refusal is the options' problem. */
+export function parseHome(home: HomeInput | { problem: FieldError }): ParsedHome | { problem: FieldError } {
+  if ('problem' in home) return home;
+  try {
+    return { parsed: parseOrThrow(homeInputSchema, home) };
+  } catch (e) {
+    const [first] = problemsOf(e);
+    return {
+      problem: {
+        path: first?.path ? `rooms.${first.path}` : 'rooms',
+        message: first?.message ?? 'The home cannot be worked out.',
+      },
+    };
+  }
 }
 
 /** The models a design names (indoor units of its zones, outdoor units of its systems). */
@@ -140,7 +171,11 @@ function dataFor(option: DesignOption, data: EngineData): EngineData {
     const m = option.chosenModels[k];
     if (m) models.set(k, m);
   }
-  return { desk: data.desk, catalog: engineCatalog(models), priceBook: enginePriceBook(data.desk, models) };
+  return {
+    desk: data.desk,
+    catalog: engineCatalog(models),
+    priceBook: priceBookSchema.parse(enginePriceBook(data.desk, models)),
+  };
 }
 
 function problemsOf(e: unknown): FieldError[] {
@@ -154,7 +189,7 @@ function problemsOf(e: unknown): FieldError[] {
 /** Works one option out from its saved inputs (never from a figure a browser sent). */
 export function computeOption(
   option: DesignOption,
-  home: HomeInput | { problem: FieldError },
+  home: HomeInput | ParsedHome | { problem: FieldError },
   data: EngineData,
   discounts?: OptionPricing['discounts'],
 ): ComputedOption {
@@ -178,7 +213,15 @@ export function computeOption(
   const { pricing, sellRule } = calcPricing(option.pricing, data.desk, discounts);
   let design: DesignResult;
   try {
-    design = computeDesign({ home, design: option.design, catalog: own.catalog, priceBook: own.priceBook, pricing });
+    // The home is parsed once per request (parseHome); the catalog and price book are already schema outputs.
+    design = computeDesignFromParsed({
+      home: 'parsed' in home ? home.parsed : parseOrThrow(homeInputSchema, home),
+      design: parseOrThrow(designSchema, option.design),
+      catalog: own.catalog,
+      priceBook: own.priceBook,
+      pricing,
+      policy: DEFAULT_SIZING_POLICY,
+    });
   } catch (e) {
     const problems = problemsOf(e);
     block('cannot-calculate', problems.map((p) => p.message).join(' '));

@@ -5,13 +5,20 @@ import { findJob } from '../jobs/job-access';
 import type { Job } from '../jobs/job.entity';
 import { RoomSchema } from '../rooms/room.entity';
 import { loadCompanyDesk } from './desk-inputs';
-import { computeOption, engineData, type ComputedOption, type EngineData } from './desk-compute';
+import {
+  computeOption,
+  engineData,
+  parseHome,
+  type ComputedOption,
+  type EngineData,
+  type ParsedHome,
+} from './desk-compute';
 import { DesignOptionSchema, type DesignOption } from './option.entity';
 
 /** A job in the actor's scope with what its options are worked out from. */
 export interface DeskJob {
   readonly job: Job;
-  readonly home: HomeInput | { problem: FieldError };
+  readonly home: ParsedHome | { problem: FieldError };
   readonly data: EngineData;
 }
 
@@ -27,9 +34,11 @@ export async function readDeskJob(ctx: ServiceContext, jobId: string): Promise<D
   const data = engineData(await loadCompanyDesk(ctx.em, ctx.actor.companyId));
   return {
     job,
-    home: homeOf(
-      job,
-      rooms.map((r) => r.input),
+    home: parseHome(
+      homeOf(
+        job,
+        rooms.map((r) => r.input),
+      ),
     ),
     data,
   };

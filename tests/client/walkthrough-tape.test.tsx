@@ -44,3 +44,28 @@ describe('length fields take tape-measure entry', () => {
     expect(queue.getSnapshot().items).toHaveLength(0);
   });
 });
+
+describe('inch fields take tape-measure entry too', () => {
+  it(`stores a window 3'2" wide as 38 in, keeps a plain number as inches, and asks about 36,5`, async () => {
+    // 3 ft 2 in = 3 × 12 + 2 = 38 in (12 in per ft, definition).
+    const { queue } = await renderWalkthrough(editor(), { online: () => false });
+    const width = screen.getByLabelText('Window width');
+    fireEvent.change(width, { target: { value: `3'2"` } });
+    expect(screen.getByText('= 3 ft 2 in')).toBeInTheDocument();
+    expect(width).not.toHaveAttribute('aria-invalid');
+    await waitFor(() => expect(queue.getSnapshot().items).toHaveLength(1), { timeout: 2000 });
+    expect(queue.getSnapshot().items[0]?.payload).toMatchObject({
+      input: { exposedWalls: [{ windows: [{ widthIn: 38 }] }] },
+    });
+    fireEvent.change(width, { target: { value: '40' } });
+    await waitFor(
+      () =>
+        expect(queue.getSnapshot().items[0]?.payload).toMatchObject({
+          input: { exposedWalls: [{ windows: [{ widthIn: 40 }] }] },
+        }),
+      { timeout: 2000 },
+    );
+    fireEvent.change(width, { target: { value: '36,5' } });
+    expect(await screen.findByText('Did you mean 36.5 in?')).toBeInTheDocument();
+  });
+});

@@ -3,6 +3,7 @@ import type { JobRecord } from '@contract';
 import { designDayLine, hourLabel } from './home-totals';
 import { COMPONENT_KEYS, COMPONENT_LABELS, tons } from '../model/compute';
 import { withoutSourceTags } from '../model/print-text';
+import { monthName } from '../../../lib/months';
 
 const n = (v: number) => v.toLocaleString('en-US');
 const DESIGN_ROWS: [string, string, string][] = [
@@ -80,7 +81,7 @@ export function LoadSummarySheet({
             <div key={k} className="flex justify-between gap-2 border-b border-line py-0.5">
               <dt>{label}</dt>
               <dd className="text-right">
-                {String(dc[k])} {unit}
+                {k === 'designMonth' ? (monthName(dc[k]) ?? String(dc[k])) : `${String(dc[k])} ${unit}`}
                 <span className="pl-2 text-muted">{sourceWords[job.designSources[k]?.source ?? ''] ?? ''}</span>
               </dd>
             </div>

@@ -10,6 +10,7 @@ import { useDebouncedSave } from '../../../lib/offline/use-debounced-save';
 import { markUnsavedFields } from '../../../lib/offline/unsaved-fields';
 import { NumberInput, SelectInput, TextInput } from './field-kit';
 import { HouseFields, type HouseDraft } from './house-fields';
+import { MONTH_NAMES } from '../../../lib/months';
 import { LatitudeField } from './latitude-field';
 
 const NOTICE =
@@ -19,6 +20,11 @@ const sourceLabels = {
   'company-default': 'Company default',
   'standard-default': 'Standard default',
 } as const;
+// The design month as people say it; empty leaves calc's usual month for the latitude.
+const MONTH_OPTIONS = [
+  { value: '', label: 'Usual for the latitude' },
+  ...MONTH_NAMES.map((name, i) => ({ value: String(i + 1), label: name })),
+];
 const tightnessOptions = Object.entries(INFILTRATION_TIGHTNESS).map(([value, t]) => ({ value, label: t.label }));
 
 interface Props {
@@ -125,6 +131,17 @@ export function DesignConditionsForm({ job, companyDefaults, notice }: Props) {
                   hint={hintOf(f, origin, value)}
                   onChange={(v) => change(f.key, v)}
                 />
+              ) : f.key === 'designMonth' ? (
+                <>
+                  <SelectInput
+                    label={f.label}
+                    value={typeof value === 'number' ? String(value) : ''}
+                    options={MONTH_OPTIONS}
+                    error={errors.get(f.key)}
+                    onChange={(x) => change(f.key, x === '' ? undefined : Number(x))}
+                  />
+                  <p className="text-sm text-muted">{hintOf(f, origin, value)}</p>
+                </>
               ) : (
                 <NumberInput
                   label={f.label}

@@ -87,6 +87,23 @@ function readField(
     // Whole feet typed as a number need no echo: the unit beside the field already says "ft".
     return { value: r.feet, understood: /^\d+$/.test(t) ? undefined : `= ${formatTape(r.feet)}` };
   }
+  if (quantity === 'in') {
+    // A plain number is inches (cm for a metric company), as the unit beside the field says;
+    // anything else is read as a tape measure reads (3' 2", 3 ft 2 in, 38", 96 cm).
+    if (/^\d+(\.\d+)?$/.test(t)) return { value: fromDisplay(quantity, system, Number(t)) };
+    if (/^\d+,\d+$/.test(t))
+      return {
+        value: Number.NaN,
+        refusal: `Did you mean ${t.replace(',', '.')} ${system === 'metric' ? 'cm' : 'in'}?`,
+      };
+    const r = parseTape(t, system);
+    if (!r.ok) return { value: Number.NaN, refusal: r.message };
+    const inches = r.feet * 12;
+    return {
+      value: inches,
+      understood: system === 'metric' ? `= ${formatTapeCm(r.feet)}` : `= ${formatTape(r.feet)}`,
+    };
+  }
   const n = Number(t.replace(',', '.'));
   return { value: Number.isNaN(n) ? Number.NaN : fromDisplay(quantity, system, n) };
 }
@@ -128,7 +145,7 @@ export function NumberInput({
     onChange(readField(raw, quantity, system).value);
   };
   // Imperial lengths need the ' and " keys, so they get the full keyboard.
-  const tapeKeys = quantity === 'ft' && system === 'imperial';
+  const tapeKeys = (quantity === 'ft' || quantity === 'in') && system === 'imperial';
   const fieldHint =
     read.understood !== undefined && !error ? (
       <>

@@ -195,7 +195,7 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
       {/* On a phone the loads stay in sight as one line pinned to the bottom of the screen. */}
       <RoomLoadBar room={check.ok ? check.room : null} designConditions={designConditions} tightness={tightness} />
       {/* On a wide screen the loads stay in view beside the form while it is filled in. */}
-      <aside className="min-w-0 lg:sticky lg:top-20 lg:self-start">
+      <aside className="min-w-0 lg:sticky lg:top-36 lg:self-start">
         <QueryWidgetBoundary name="the room loads">
           <RoomLoadPanel
             room={check.ok ? check.room : null}

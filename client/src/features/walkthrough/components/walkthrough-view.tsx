@@ -105,23 +105,33 @@ export function WalkthroughView({
         {/* Sticky on a phone: who, the save status, and the rooms with "Add room" and "Copy room",
             so moving to the next room never needs a scroll back up. */}
         <header className="sticky top-0 z-10 -mx-4 flex flex-col gap-2 border-b border-line bg-paper/95 px-4 py-2 backdrop-blur">
-          <div className="flex flex-wrap items-center justify-between gap-2">
-            <div className="min-w-0">
+          <div className="flex flex-wrap items-center justify-between gap-x-3 gap-y-1">
+            <div className="min-w-0 flex-1 basis-40">
               <h1 className="truncate text-xl font-semibold text-ink-900">{job.customer.name}</h1>
-              <p className="truncate text-sm text-muted">{address}</p>
+              <p className="hidden truncate text-sm text-muted sm:block">{address}</p>
             </div>
             <div className="flex flex-wrap items-center gap-2">
               <LiveSaveStatus />
-              <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
+              {/* On a phone the pinned load bar and the link under the header take its place. */}
+              <Link className={`${buttonClass('secondary')} hidden sm:inline-flex`} to={jobPaths.loads(job.id)}>
                 Loads summary
               </Link>
             </div>
           </div>
-          <nav aria-label="Rooms of this job" className="flex flex-col gap-2">
-            <RoomTabs rooms={rooms} selectedId={current?.id ?? null} onSelect={openRoom} />
+          <nav aria-label="Rooms of this job" className="flex flex-col gap-2 lg:flex-row lg:items-center lg:gap-4">
+            <div className="min-w-0 lg:flex-1">
+              <RoomTabs rooms={rooms} selectedId={current?.id ?? null} onSelect={openRoom} />
+            </div>
             <RoomListActions jobId={job.id} rooms={rooms} current={current} onCreated={openRoom} />
           </nav>
         </header>
+
+        <div className="-mt-3 flex flex-wrap items-center justify-between gap-2 sm:hidden">
+          <p className="min-w-0 text-sm text-muted">{address}</p>
+          <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
+            Loads summary
+          </Link>
+        </div>
 
         {conflict ? (
           <ConflictPanel key={conflict.id} item={conflict} onResolved={() => setRevision((r) => r + 1)} />

@@ -40,7 +40,7 @@ export const DESIGN_FIELD_SPECS: readonly DesignFieldSpec[] = [
     quantity: 'plain',
     unit: '1–12',
     integer: true,
-    whenEmpty: 'Left empty: July (7) north of the equator, January (1) south of it.',
+    whenEmpty: 'Usual: July north of the equator, January south of it.',
   },
   {
     key: 'clearSkyTauB',

@@ -85,6 +85,20 @@ describe('the estimator’s desk', () => {
     await page.screenshot({ path: `${SHOTS}/desk-design-1440.png`, fullPage: true });
     await expectAccessible(page);
 
+    // A takeoff line edited: the generated value stays beside the edited one.
+    const takeoff = page.getByRole('region', { name: 'Materials and labor' });
+    await takeoff
+      .getByRole('button', { name: /^Edit / })
+      .first()
+      .click();
+    const qty = takeoff.getByLabel(/^Quantity/);
+    await qty.fill(String(Number(await qty.inputValue()) + 2));
+    await takeoff.getByRole('button', { name: 'Save line' }).click();
+    await takeoff
+      .getByText(/^generated /)
+      .first()
+      .waitFor();
+
     const pricing = page.getByRole('form', { name: /^Pricing of/ });
     // Pricing: 5 % within the estimator's limit applies; 40 % beyond it waits for the owner.
     const totalBefore = await page.getByRole('tab', { name: new RegExp(name) }).textContent();

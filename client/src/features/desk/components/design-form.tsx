@@ -174,9 +174,12 @@ export function DesignForm({
       defaultValues={designValues(option)}
       aria-label={`Design of ${option.name}`}
       onSubmit={async (design, form) => {
+        const sent = JSON.stringify(form.getValues());
         const saved = await update.mutateAsync({ option, changes: { design } });
-        // What was typed while the save was on its way stays (and stays unsaved).
-        form.reset(designValues(saved), { keepDirtyValues: true });
+        // What was typed while the save was on its way stays (and stays unsaved); otherwise the form
+        // shows what the server stored (a discount beyond the limit is not applied, for one).
+        const typedMeanwhile = JSON.stringify(form.getValues()) !== sent;
+        form.reset(designValues(saved), { keepDirtyValues: typedMeanwhile });
         setSavedVersion(saved.version);
       }}
     >

@@ -1,6 +1,13 @@
 import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { maySeeCost, mayEditOptions, mayDecideDiscount, type OptionRecord, type RoomRecord } from '@contract';
+import {
+  maySeeCost,
+  mayEditOptions,
+  mayEditTakeoff,
+  mayDecideDiscount,
+  type OptionRecord,
+  type RoomRecord,
+} from '@contract';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/api-error';
@@ -17,6 +24,7 @@ import { PricingForm } from './pricing-form';
 import { SizingVerdict } from './sizing-verdict';
 import { SystemResults } from './system-results';
 import { TakeoffTable } from './takeoff-table';
+import { Why } from './why';
 
 /** Every why the server sent for this option, by key (calc's explanations; a shape calc changes is left out). */
 function whysOf(option: OptionRecord): Map<string, ExplanationView> {
@@ -79,15 +87,6 @@ export function OptionView({
           </ul>
         </Alert>
       ) : null}
-      {option.blockers.length > 0 ? (
-        <Alert tone="warning" title="Not ready to propose">
-          <ul className="list-disc pl-5">
-            {option.blockers.map((b) => (
-              <li key={`${b.code}:${b.message}`}>{b.message}</li>
-            ))}
-          </ul>
-        </Alert>
-      ) : null}
       <div className="grid gap-4 xl:grid-cols-[minmax(0,5fr)_minmax(0,4fr)]">
         <div className="flex flex-col gap-4">
           <Card title="Design">
@@ -146,7 +145,11 @@ export function OptionView({
                   <h4 className="font-semibold text-ink-900">
                     {z.name}: {z.indoorUnitKey}
                   </h4>
-                  {z.sizing ? <SizingVerdict sizing={z.sizing} /> : null}
+                  {z.explanations.length > 0 ? (
+                    z.explanations.map((x) => <Why key={x.key} e={x} />)
+                  ) : z.sizing ? (
+                    <SizingVerdict sizing={z.sizing} />
+                  ) : null}
                 </div>
               ))}
               {view.systems.map((s) => (
@@ -162,7 +165,12 @@ export function OptionView({
           ) : null}
           {option.result ? (
             <Card title="Materials and labor">
-              <TakeoffTable lines={option.result.takeoff} />
+              <TakeoffTable
+                jobId={jobId}
+                option={option}
+                lines={option.result.takeoff}
+                canEdit={mayEditTakeoff(viewer.role)}
+              />
             </Card>
           ) : null}
         </div>

@@ -106,7 +106,13 @@ export function PricePanel({
       <Row label="Total" cents={p.totalCents} why={why('total')} strong />
       <Row label="Deposit" cents={p.depositCents} why={why('deposit')} />
       <Row label="Balance" cents={p.balanceCents} why={why('balance')} />
-      {p.grossMarginCents !== undefined ? (
+      {p.grossMarginCents !== undefined && why('gross-margin') ? (
+        <Row label="Gross margin" cents={p.grossMarginCents} why={why('gross-margin')} />
+      ) : null}
+      {p.grossMarginCents !== undefined && why('gross-margin-percent') ? (
+        <Row label="Gross margin, percent" cents={0} why={why('gross-margin-percent')} />
+      ) : null}
+      {p.grossMarginCents !== undefined && !why('gross-margin') ? (
         <div className="flex min-h-touch items-center justify-between gap-2 px-3">
           <span className="text-sm text-muted">Gross margin</span>
           <span className="tabular-nums">
@@ -117,12 +123,17 @@ export function PricePanel({
       {option.result && option.result.monthly.length > 0 ? (
         <div className="mt-2 flex flex-col gap-1 px-3">
           <p className="text-sm font-semibold text-ink-900">Monthly, with financing</p>
-          {option.result.monthly.map((m) => (
-            <p key={m.planKey} className="flex justify-between gap-2 text-sm">
-              <span>{m.name}</span>
-              <span className="tabular-nums">{formatMoney(m.monthlyPaymentCents)} / month</span>
-            </p>
-          ))}
+          {option.result.monthly.map((m) => {
+            const w = why(`monthly:${m.planKey}`);
+            return w ? (
+              <Why key={m.planKey} e={w} label={m.name} />
+            ) : (
+              <p key={m.planKey} className="flex justify-between gap-2 text-sm">
+                <span>{m.name}</span>
+                <span className="tabular-nums">{formatMoney(m.monthlyPaymentCents)} / month</span>
+              </p>
+            );
+          })}
         </div>
       ) : null}
       <DiscountRequest jobId={jobId} option={option} owner={owner} />

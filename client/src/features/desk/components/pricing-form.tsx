@@ -68,9 +68,12 @@ export function PricingForm({
       defaultValues={pricingValues(option)}
       aria-label={`Pricing of ${option.name}`}
       onSubmit={async (pricing, form) => {
+        const sent = JSON.stringify(form.getValues());
         const saved = await update.mutateAsync({ option, changes: { pricing } });
-        // What was typed while the save was on its way stays (and stays unsaved).
-        form.reset(pricingValues(saved), { keepDirtyValues: true });
+        // What was typed while the save was on its way stays (and stays unsaved); otherwise the form
+        // shows what the server stored (a discount beyond the limit is not applied, for one).
+        const typedMeanwhile = JSON.stringify(form.getValues()) !== sent;
+        form.reset(pricingValues(saved), { keepDirtyValues: typedMeanwhile });
         setSavedVersion(saved.version);
       }}
     >

@@ -1,6 +1,6 @@
 import { formatNumber, formatPercent, formatQuantity } from '@calc';
 import type { DeskModel } from '../api/get-models';
-import type { SystemView, ZoneView } from '../model/result-view';
+import type { ExplanationView, SystemView, ZoneView } from '../model/result-view';
 import { Cautions } from './cautions';
 import { SizingVerdict } from './sizing-verdict';
 import { Why } from './why';
@@ -36,6 +36,18 @@ export function SystemResults({
 }) {
   const r = system.refrigerant;
   const e = system.electrical;
+  // calc lists the system's whys together and again under refrigerant and electrical: each is shown once.
+  const shown = new Set<string>();
+  const once = (xs: readonly ExplanationView[]) =>
+    xs.filter((x) => {
+      if (shown.has(x.key)) return false;
+      shown.add(x.key);
+      return true;
+    });
+  const circuitWhys = once((r?.circuits ?? []).flatMap((c) => (c.explanation ? [c.explanation] : [])));
+  const chargeWhys = once(r?.explanations ?? []);
+  const electricalWhys = once(e?.explanations ?? []);
+  const otherWhys = once(system.explanations);
   const zoneName = (key: string) => zones.find((z) => z.zoneKey === key)?.name ?? key;
   return (
     <section
@@ -45,7 +57,10 @@ export function SystemResults({
       <h4 className="text-base font-semibold text-ink-900">
         {system.name}: {modelName(models, system.outdoorUnitKey)}
       </h4>
-      {system.sizing ? <SizingVerdict sizing={system.sizing} /> : null}
+      {system.sizing && otherWhys.length === 0 ? <SizingVerdict sizing={system.sizing} /> : null}
+      {otherWhys.map((x) => (
+        <Why key={x.key} e={x} />
+      ))}
       {system.combination ? (
         <p className={`text-sm ${system.combination.ok ? 'text-ink-900' : 'font-semibold text-danger'}`}>
           {system.combination.heads} of {system.combination.maxHeads} ports used; indoor units connected{' '}
@@ -63,7 +78,7 @@ export function SystemResults({
             {r.safetyClass ? `, ${r.safetyClass}` : ''})
           </h5>
           {r.circuits.map((c) =>
-            c.explanation ? (
+            c.explanation && circuitWhys.includes(c.explanation) ? (
               <Why
                 key={c.zoneKey}
                 e={c.explanation}
@@ -75,7 +90,7 @@ export function SystemResults({
               </p>
             ),
           )}
-          {r.explanations.map((x) => (
+          {chargeWhys.map((x) => (
             <Why key={x.key} e={x} />
           ))}
           <p className="text-sm tabular-nums">
@@ -107,7 +122,7 @@ export function SystemResults({
               : `, voltage drop ${formatPercent(e.voltageDropPercent, 1)}`}
             .
           </p>
-          {e.explanations.map((x) => (
+          {electricalWhys.map((x) => (
             <Why key={x.key} e={x} />
           ))}
           <Messages items={e.warnings} tone="warning" />

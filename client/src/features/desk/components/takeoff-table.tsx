@@ -1,12 +1,29 @@
+import { useState } from 'react';
 import { formatMoney, formatNumber } from '@calc';
-import type { TakeoffLineRecord } from '@contract';
+import type { OptionRecord, TakeoffLineRecord } from '@contract';
+import { Button } from '../../../components/ui/button';
+import { errorMessage } from '../../../lib/api-error';
+import { useRegenerateTakeoff, useSetTakeoffEdits } from '../api/set-takeoff-edits';
+import { editsOf } from '../model/takeoff-edits';
+import { TakeoffLineEditor } from './takeoff-line-editor';
 
 /**
  * The takeoff calc generated from the design, priced from the price book (unit costs for the office only).
  * Where an edit changed a line, the generated value stands beside the edited one.
  */
-export function TakeoffTable({ lines }: { lines: readonly TakeoffLineRecord[] }) {
+export function TakeoffTable({
+  jobId,
+  option,
+  lines,
+  canEdit,
+}: {
+  jobId: string;
+  option: OptionRecord;
+  lines: readonly TakeoffLineRecord[];
+  canEdit: boolean;
+}) {
   const costs = lines.some((l) => l.unitCostCents !== undefined);
+  const [editing, setEditing] = useState<string | null>(null);
   return (
     <div className="overflow-x-auto">
       <table className="w-full border-collapse text-sm">
@@ -64,14 +81,86 @@ export function TakeoffTable({ lines }: { lines: readonly TakeoffLineRecord[] })
                         </span>
                       ) : null}
                     </td>
-                    <td className="py-2 text-right tabular-nums">{formatMoney(l.extendedCostCents ?? 0)}</td>
+                    <td className="py-2 pr-3 text-right tabular-nums">{formatMoney(l.extendedCostCents ?? 0)}</td>
                   </>
+                ) : null}
+                {canEdit ? (
+                  <td className="py-2 text-right">
+                    {editing === l.itemKey ? (
+                      <TakeoffLineEditor jobId={jobId} option={option} line={l} onDone={() => setEditing(null)} />
+                    ) : (
+                      <Button
+                        variant="ghost"
+                        onClick={() => setEditing(l.itemKey)}
+                        aria-label={`Edit ${l.description}`}
+                      >
+                        Edit
+                      </Button>
+                    )}
+                  </td>
                 ) : null}
               </tr>
             );
           })}
         </tbody>
       </table>
+      {canEdit ? <EditsAside jobId={jobId} option={option} /> : null}
+    </div>
+  );
+}
+
+/** Removed lines (to put back) and edits that no longer match the design (keep on the new value, or drop). */
+function EditsAside({ jobId, option }: { jobId: string; option: OptionRecord }) {
+  const save = useSetTakeoffEdits(jobId);
+  const regenerate = useRegenerateTakeoff(jobId);
+  const removed = option.takeoffEdits.filter((e) => e.edit.kind === 'remove' && !e.stale);
+  const stale = option.takeoffEdits.filter((e) => e.stale);
+  if (removed.length === 0 && stale.length === 0) return null;
+  return (
+    <div className="mt-3 flex flex-col gap-2 text-sm">
+      {removed.map((e) => (
+        <p key={e.key} className="flex flex-wrap items-center gap-2">
+          Removed: {String(e.edit.itemKey)}
+          <Button
+            variant="secondary"
+            disabled={save.isPending}
+            onClick={() =>
+              save.mutate({
+                option,
+                edits: editsOf(option).filter((x) => !(x.kind === 'remove' && x.itemKey === e.edit.itemKey)),
+              })
+            }
+          >
+            Put back
+          </Button>
+        </p>
+      ))}
+      {stale.map((e) => (
+        <div key={e.key} className="rounded-md border border-amber-line bg-amber-soft p-2">
+          <p>{e.stale?.message}</p>
+          <div className="mt-1 flex flex-wrap gap-2">
+            <Button
+              variant="secondary"
+              busy={regenerate.isPending}
+              onClick={() => regenerate.mutate({ option, accept: [e.key] })}
+            >
+              Keep the edit
+            </Button>
+            <Button
+              variant="ghost"
+              disabled={regenerate.isPending}
+              onClick={() => regenerate.mutate({ option, drop: [e.key] })}
+            >
+              Drop it
+            </Button>
+          </div>
+        </div>
+      ))}
+      {save.isError || regenerate.isError ? (
+        <p role="alert" className="font-semibold text-danger">
+          {errorMessage(save.error ?? regenerate.error)}
+        </p>
+      ) : null}
     </div>
   );
 }

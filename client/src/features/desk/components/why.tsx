@@ -15,7 +15,12 @@ export function Why({ e, label = e.label }: { e: ExplanationView; label?: string
   return (
     <details className="group rounded-md border border-line bg-white px-3 py-2">
       <summary className="flex min-h-touch cursor-pointer flex-wrap items-center justify-between gap-2">
-        <span className="text-sm text-muted">{label}</span>
+        <span className="text-sm text-muted">
+          {label}
+          {e.verdict && e.status !== 'ok' ? (
+            <span className={`block font-semibold ${tone[e.status]}`}>{e.verdict}</span>
+          ) : null}
+        </span>
         <span className={`font-semibold tabular-nums ${tone[e.status]}`}>
           {e.valueText} <span className="text-sm font-normal text-ink-600 underline">why?</span>
         </span>
@@ -32,7 +37,7 @@ export function Why({ e, label = e.label }: { e: ExplanationView; label?: string
             ))}
           </dl>
         ) : null}
-        {e.verdict ? <p className={`font-semibold ${tone[e.status]}`}>{e.verdict}</p> : null}
+        {e.verdict && e.status === 'ok' ? <p className="font-semibold text-ok">{e.verdict}</p> : null}
         {e.source ? <p className="text-muted">Source: {e.source}</p> : null}
       </div>
     </details>

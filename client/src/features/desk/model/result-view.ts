@@ -83,6 +83,8 @@ export const zoneView = z.object({
   name: z.string(),
   indoorUnitKey: z.string(),
   sizing: sizingView.optional(),
+  /** calc's whys for the zone: load against capacity, the sizing verdict, latent check, heating coverage. */
+  explanations: z.array(explanationView).default([]),
 });
 export type ZoneView = z.output<typeof zoneView>;
 
@@ -94,6 +96,8 @@ export const systemView = z.object({
   combination: combinationView.optional(),
   refrigerant: refrigerantView.optional(),
   electrical: electricalView.optional(),
+  /** calc's whys for the system: sizing, combination, charge, electrical. */
+  explanations: z.array(explanationView).default([]),
 });
 export type SystemView = z.output<typeof systemView>;
 

@@ -13,6 +13,9 @@ import {
   discountLimitSchema,
   financingPlanSchema,
   laborTaskSchema,
+  materialSchema,
+  kitSchema,
+  refrigerantCostSchema,
   type DesignInput,
   type RoomInput,
 } from '../calc/index';
@@ -49,6 +52,9 @@ const data = demoCompanyData(1);
 const desk: CompanyDesk = {
   models: new Map(data.models.map((m) => catalogModelSchema.parse(m)).map((m) => [m.key, m])),
   laborTasks: data.labor.map((t) => laborTaskSchema.parse(t)),
+  materials: data.materials.map((m) => materialSchema.parse(m)),
+  kits: data.kits.map((k) => kitSchema.parse(k)),
+  refrigerants: data.refrigerants.map((r) => refrigerantCostSchema.parse(r)),
   financing: data.financing.map((f) => financingPlanSchema.parse(f)),
   discountLimits: new Map(data['discount-limits'].map((d) => discountLimitSchema.parse(d)).map((d) => [d.key, d])),
   settings: DEMO_PRICE_BOOK_SETTINGS,

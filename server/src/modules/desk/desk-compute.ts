@@ -7,6 +7,8 @@ import {
   parseOrThrow,
   priceBookSchema,
   type Home,
+  designCatalogFromModels,
+  designPriceBookFromCompany,
   extendCents,
   monthlyPaymentCents,
   priceOption,
@@ -29,7 +31,7 @@ import {
 } from '@calc';
 import { DESK_MESSAGES, takeoffEditKey, type BlockerRecord, type OptionPricing } from '@contract';
 import type { FieldError } from '../../lib/errors';
-import { engineCatalog, enginePriceBook, type CompanyDesk } from './desk-inputs';
+import type { CompanyDesk } from './desk-inputs';
 import type { DesignOption, StoredTakeoffEdit } from './option.entity';
 
 /** A takeoff line as the desk holds it: calc's merged line (generated value beside the edited one), priced. */
@@ -76,12 +78,24 @@ export interface EngineData {
   readonly priceBook: PriceBook;
 }
 
-export function engineData(desk: CompanyDesk): EngineData {
+/** calc's bridge from the company's data to the engine's catalog and price book (every model, active or not). */
+function bridge(desk: CompanyDesk, models: ReadonlyMap<string, CatalogModel>): Omit<EngineData, 'desk'> {
   return {
-    desk,
-    catalog: engineCatalog(desk.models),
-    priceBook: priceBookSchema.parse(enginePriceBook(desk, desk.models)),
+    catalog: designCatalogFromModels(models.values()),
+    priceBook: priceBookSchema.parse(
+      designPriceBookFromCompany({
+        models: models.values(),
+        materials: desk.materials.filter((m) => m.active),
+        labor: desk.laborTasks.filter((t) => t.active),
+        kits: desk.kits.filter((k) => k.active),
+        refrigerants: desk.refrigerants,
+      }),
+    ),
   };
+}
+
+export function engineData(desk: CompanyDesk): EngineData {
+  return { desk, ...bridge(desk, desk.models) };
 }
 
 /** A home parsed once for all of a job's options. */
@@ -171,11 +185,7 @@ function dataFor(option: DesignOption, data: EngineData): EngineData {
     const m = option.chosenModels[k];
     if (m) models.set(k, m);
   }
-  return {
-    desk: data.desk,
-    catalog: engineCatalog(models),
-    priceBook: priceBookSchema.parse(enginePriceBook(data.desk, models)),
-  };
+  return { desk: data.desk, ...bridge(data.desk, models) };
 }
 
 function problemsOf(e: unknown): FieldError[] {

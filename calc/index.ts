@@ -35,6 +35,7 @@ export * from './src/loads/home-load';
 export * from './src/loads/warnings';
 export * from './src/loads/ducts';
 export * from './src/loads/peak-detail';
+export * from './src/loads/below-grade';
 
 export * from './src/sizing/policy';
 export * from './src/sizing/capacity';

@@ -22,6 +22,14 @@ export function wallGrossAreaFt2(wall: Pick<Wall, 'lengthFt' | 'heightFt'>, ceil
   return wall.lengthFt * (wall.heightFt ?? ceilingHeightFt);
 }
 
+/** The part of a wall above grade, ft² (a basement wall's lower `belowGradeFt` is in the ground). */
+export function wallAboveGradeFt2(
+  wall: Pick<Wall, 'lengthFt' | 'heightFt' | 'belowGradeFt'>,
+  ceilingHeightFt: number,
+): number {
+  return wall.lengthFt * Math.max(0, (wall.heightFt ?? ceilingHeightFt) - (wall.belowGradeFt ?? 0));
+}
+
 /** Total window area on a wall, ft². */
 export function wallWindowAreaFt2(wall: Pick<Wall, 'windows'>): number {
   return wall.windows.reduce((sum, w) => sum + windowAreaFt2(w), 0);

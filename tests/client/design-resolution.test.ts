@@ -16,6 +16,7 @@ const companyDefault = {
   clearSkyTauB: 0.45,
   clearSkyTauD: 2.2,
   clearSkySource: 'Station table, July',
+  groundDesignF: 42,
 };
 
 describe('resolveDesign', () => {

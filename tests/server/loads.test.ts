@@ -166,6 +166,24 @@ describe('GET /api/jobs/:id/loads', () => {
     expect(again.body.job.house).toEqual(house);
   });
 
+  it('a ducted system in the house (ducts in the attic) is saved and its duct gains and losses are in the loads', async () => {
+    const job = await newJob(sales);
+    await newRoom(sales, job.id, { name: 'Main bedroom', areaFt2: 200, above: { kind: 'attic' } });
+    const house = { ducts: { location: 'attic' as const, insulationR: 6, leakage: 'typical' as const } };
+    const saved = await patch(sales, `/api/jobs/${job.id}`, job.version).send({ house });
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200);
+    expect(saved.body.job.house).toEqual(house);
+    const r = await sales.agent.get(`/api/jobs/${job.id}/loads`);
+    expect(r.status, JSON.stringify(r.body)).toBe(200);
+    expect(r.body.loads.ducts).toMatchObject({ location: 'attic', insulationR: 6, supplyLeakageFraction: 0.1 });
+    expect(r.body.loads.heatLoss.ducts).toBe(r.body.loads.ducts.heating.btuh);
+    expect(r.body.loads.heatLoss.ducts).toBeGreaterThan(0);
+    const bad = await patch(sales, `/api/jobs/${job.id}`, saved.body.job.version).send({
+      house: { ducts: { location: 'roof-top' } },
+    });
+    expectProblem(bad, 400);
+  });
+
   it('the database refuses a house that bypasses the API (CHECK constraints mirror calc’s bounds)', async () => {
     const job = await newJob(sales);
     const conn = t.orm.em.fork().getConnection();

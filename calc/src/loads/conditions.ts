@@ -27,6 +27,10 @@ export interface DesignPsychrometrics {
   readonly coolingDeltaTF: number;
   /** Indoor − outdoor heating, °F (> 0 by schema). */
   readonly heatingDeltaTF: number;
+  /** Indoor heating − design ground surface temperature, °F (basement walls and floors). */
+  readonly groundDeltaTF: number;
+  /** True when no ground temperature was entered and the outdoor heating design temperature stands in. */
+  readonly groundAssumed: boolean;
   readonly dailyRangeF: number;
   readonly outdoorCoolingF: number;
   readonly outdoorHeatingF: number;
@@ -65,6 +69,8 @@ export function designPsychrometrics(c: DesignConditions): DesignPsychrometrics 
     outdoorEnthalpyBtuPerLb: moistAirEnthalpyBtuPerLb({ dryBulbF: c.outdoorCoolingDryBulbF, humidityRatio: outdoorW }),
     coolingDeltaTF: c.outdoorCoolingDryBulbF - c.indoorCoolingF,
     heatingDeltaTF: c.indoorHeatingF - c.outdoorHeatingDryBulbF,
+    groundDeltaTF: Math.max(0, c.indoorHeatingF - (c.groundDesignF ?? c.outdoorHeatingDryBulbF)),
+    groundAssumed: c.groundDesignF === undefined,
     dailyRangeF: c.dailyRangeF,
     outdoorCoolingF: c.outdoorCoolingDryBulbF,
     outdoorHeatingF: c.outdoorHeatingDryBulbF,

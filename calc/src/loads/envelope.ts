@@ -10,7 +10,8 @@ import {
   SLAB_EDGE,
   WALL_CONSTRUCTIONS,
 } from '../construction-defaults';
-import { doorAreaFt2, floorAreaFt2, wallGrossAreaFt2, windowAreaFt2 } from '../geometry';
+import { doorAreaFt2, floorAreaFt2, wallAboveGradeFt2, windowAreaFt2 } from '../geometry';
+import { BASEMENT_FLOOR_BASE_R, basementFloorU, belowGradeWallU } from './below-grade';
 import type { Room } from '../schemas/room-input';
 import type { Window } from '../schemas/room';
 import type { DesignPsychrometrics } from './conditions';
@@ -107,10 +108,14 @@ export function exposedWallsLoad(room: Room, p: DesignPsychrometrics): ExposedWa
       doorsHeating += uaDt(u, a, p.heatingDeltaTF);
     }
     // = wallNetAreaFt2(wall, …), with the opening areas already summed above
-    const net = Math.max(0, wallGrossAreaFt2(wall, room.ceilingHeightFt) - windowsArea - doorsArea);
+    const net = Math.max(0, wallAboveGradeFt2(wall, room.ceilingHeightFt) - windowsArea - doorsArea);
     const u = wall.uFactor ?? WALL_CONSTRUCTIONS[wall.construction].value;
     wallsCooling += pos(uaDt(u, net, p.coolingDeltaTF));
     wallsHeating += uaDt(u, net, p.heatingDeltaTF);
+    const z = wall.belowGradeFt ?? 0;
+    // Below grade: the handbook's average U over the depth, the wall's own R as R_other; no summer gain.
+    if (z > 0)
+      wallsHeating += uaDt(belowGradeWallU({ z1Ft: 0, z2Ft: z, rOther: 1 / u }), wall.lengthFt * z, p.groundDeltaTF);
   }
   return {
     walls: { cooling: wallsCooling, heating: wallsHeating },
@@ -172,6 +177,13 @@ export function floorLoad(room: Room, p: DesignPsychrometrics): CoolHeat {
     const f = below.edgeInsulated ? SLAB_EDGE.insulated.value : SLAB_EDGE.uninsulated.value;
     const perimeterFt = room.exposedWalls.reduce((sum, w) => sum + w.lengthFt, 0);
     return { cooling: 0, heating: slabEdgeBtuh({ fFactor: f, perimeterFt, deltaTF: p.heatingDeltaTF }) };
+  }
+  if (below.kind === 'basement-floor') {
+    const area = floorAreaFt2(room);
+    const sides = [room.lengthFt, room.widthFt].filter((x): x is number => x !== undefined);
+    const widthFt = below.widthFt ?? (sides.length === 2 ? Math.min(...sides) : Math.sqrt(area));
+    const u = basementFloorU({ widthFt, depthFt: below.depthFt, rOther: BASEMENT_FLOOR_BASE_R + below.insulationR });
+    return { cooling: 0, heating: uaDt(u, area, p.groundDeltaTF) };
   }
   const fractions =
     below.kind === 'garage'

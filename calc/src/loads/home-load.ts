@@ -69,6 +69,11 @@ export interface HomeLoad {
     readonly tauD: number;
     readonly skySource: string;
     readonly skyIsGeneric: boolean;
+    /** Some room has basement walls or a basement floor below grade. */
+    readonly belowGrade: boolean;
+    /** Design ground surface temperature used below grade, °F, and whether it is the outdoor heating design stand-in. */
+    readonly groundDesignF: number;
+    readonly groundAssumed: boolean;
   };
   readonly air: {
     readonly winterAch: number;
@@ -333,6 +338,11 @@ export function homeLoadFromParsed(
       tauD: ctx.tauD,
       skySource: ctx.skySource,
       skyIsGeneric: ctx.skyIsGeneric,
+      belowGrade: home.rooms.some(
+        (r) => r.below.kind === 'basement-floor' || r.exposedWalls.some((w) => (w.belowGradeFt ?? 0) > 0),
+      ),
+      groundDesignF: home.designConditions.groundDesignF ?? home.designConditions.outdoorHeatingDryBulbF,
+      groundAssumed: psy.groundAssumed,
     },
     air: {
       winterAch: roundHalfUp(winterAch, 3),

@@ -1,5 +1,5 @@
 import { DOOR_TYPES, GLAZING_TYPES, INTERIOR_SHADING_IAC, WALL_CONSTRUCTIONS } from '../construction-defaults';
-import { doorAreaFt2, wallGrossAreaFt2, windowAreaFt2 } from '../geometry';
+import { doorAreaFt2, wallAboveGradeFt2, windowAreaFt2 } from '../geometry';
 import type { Wall } from '../schemas/room';
 
 type CompassDirection = Wall['direction'];
@@ -93,7 +93,7 @@ export function peakDetail(w: RoomHourly, gain: LoadComponents): PeakDetail {
       acc.doors +=
         (d.uFactor ?? DOOR_TYPES[d.doorType].value) * a * (ctx.wallDt(wall.direction, color, 'frame')[h] ?? 0);
     }
-    const net = Math.max(0, wallGrossAreaFt2(wall, room.ceilingHeightFt) - openings);
+    const net = Math.max(0, wallAboveGradeFt2(wall, room.ceilingHeightFt) - openings);
     acc.net += net;
     acc.walls +=
       (wall.uFactor ?? WALL_CONSTRUCTIONS[wall.construction].value) *

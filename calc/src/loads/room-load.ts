@@ -1,4 +1,4 @@
-import { floorAreaFt2, wallGrossAreaFt2 } from '../geometry';
+import { floorAreaFt2, wallAboveGradeFt2 } from '../geometry';
 import { parseOrThrow } from '../parse';
 import { roundHalfUp } from '../rounding';
 import { designConditionsSchema, type DesignConditionsInput } from '../schemas/design-conditions';
@@ -172,7 +172,7 @@ export interface RoomAir {
 /** Outside envelope area through which a room leaks, ft²: exposed walls gross + a ceiling under attic or roof. */
 export function exposedEnvelopeFt2(room: Room): number {
   let a = 0;
-  for (const w of room.exposedWalls) a += wallGrossAreaFt2(w, room.ceilingHeightFt);
+  for (const w of room.exposedWalls) a += wallAboveGradeFt2(w, room.ceilingHeightFt);
   if (room.above.kind !== 'conditioned') a += floorAreaFt2(room);
   return a;
 }
@@ -250,7 +250,7 @@ export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayCo
       const edt = ctx.wallDt(wall.direction, color, 'frame');
       for (let h = 0; h < HOURS; h += 1) doors[h] = (doors[h] ?? 0) + ua * (edt[h] ?? 0);
     }
-    const net = Math.max(0, wallGrossAreaFt2(wall, room.ceilingHeightFt) - openings);
+    const net = Math.max(0, wallAboveGradeFt2(wall, room.ceilingHeightFt) - openings);
     const ua = (wall.uFactor ?? WALL_CONSTRUCTIONS[wall.construction].value) * net;
     const edt = ctx.wallDt(wall.direction, color, massOf(wall.construction));
     for (let h = 0; h < HOURS; h += 1) walls[h] = (walls[h] ?? 0) + ua * (edt[h] ?? 0);

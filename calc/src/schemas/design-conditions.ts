@@ -18,6 +18,12 @@ export const designConditionsSchema = z
     dailyRangeF: bounded('Daily temperature range', 0, 50, '°F').default(20),
     elevationFt: bounded('Elevation', -300, 14000, 'ft').default(0),
     source: z.string().max(200, 'Source must be at most 200 characters').optional(),
+    /**
+     * Design ground surface temperature for basement walls and floors: the site's annual mean outdoor
+     * temperature less the ground surface temperature amplitude (ASHRAE ch. 18 below-grade method).
+     * Unknown → the outdoor heating design temperature, which overstates the loss, and the loads say so.
+     */
+    groundDesignF: bounded('Design ground surface temperature', -40, 80, '°F').optional(),
     /** Site latitude, degrees (north positive). Unknown → calc assumes 40° N and says so. */
     latitudeDeg: bounded('Latitude', -60, 70, '°').optional(),
     /** Month of the cooling design day (its 21st); unset: July north of the equator, January south. [PUB: ASHRAE ch. 14 monthly design days] */

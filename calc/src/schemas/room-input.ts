@@ -43,6 +43,15 @@ export const roomInputSchema = roomObjectSchema.superRefine((room, ctx) => {
     if (!wallSchema.safeParse(wall).success) return;
     if (wall.heightFt === undefined && !roomObjectSchema.shape.ceilingHeightFt.safeParse(room.ceilingHeightFt).success)
       return;
+    const height = wall.heightFt ?? room.ceilingHeightFt;
+    if (wall.belowGradeFt !== undefined && wall.belowGradeFt > height) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['exposedWalls', wi, 'belowGradeFt'],
+        message: `The depth below grade (${wall.belowGradeFt} ft) is more than the wall's height (${height} ft)`,
+      });
+      return;
+    }
     const gross = wallGrossAreaFt2(wall, room.ceilingHeightFt);
     const windows = wallWindowAreaFt2(wall);
     const openings = windows + wallDoorAreaFt2(wall);

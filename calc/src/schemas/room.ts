@@ -65,6 +65,8 @@ export const wallSchema = z.object({
   construction: wallConstructionSchema.default('wood-2x4-r13'),
   uFactor: bounded('Wall U-factor', 0.01, 1, 'Btu/h·ft²·°F').optional(),
   color: surfaceColorSchema.optional(),
+  /** How much of the wall's height is below grade (a basement wall); windows and doors sit above grade. */
+  belowGradeFt: bounded('Depth below grade', 0, 20, 'ft').optional(),
   windows: z.array(windowSchema).max(20, 'At most 20 window entries per wall').default([]),
   doors: z.array(doorSchema).max(6, 'At most 6 door entries per wall').default([]),
 });
@@ -100,6 +102,14 @@ export const belowSchema = z.discriminatedUnion(
       insulation: floorInsulationSchema.default('none'),
     }),
     z.object({ kind: z.literal('basement'), insulation: floorInsulationSchema.default('none') }),
+    /** The room is in a basement: its floor is a slab `depthFt` below grade. */
+    z.object({
+      kind: z.literal('basement-floor'),
+      depthFt: bounded('Floor depth below grade', 1, 20, 'ft'),
+      /** Shortest width of the whole basement; default the room's shorter side. */
+      widthFt: bounded('Basement width', 4, 200, 'ft').optional(),
+      insulationR: bounded('Floor insulation', 0, 30, 'R').default(0),
+    }),
     z.object({ kind: z.literal('garage'), insulation: floorInsulationSchema.default('none') }),
     z.object({ kind: z.literal('conditioned') }),
   ],

@@ -25,6 +25,7 @@ export const DESIGN_FIELDS = [
   'designMonth',
   'clearSkyTauB',
   'clearSkyTauD',
+  'groundDesignF',
 ] as const satisfies readonly DesignField[];
 
 export type DesignSources = Partial<Record<DesignField, { source: DesignValueSource; note: string }>>;
@@ -45,6 +46,7 @@ export const enteredDesignSchema = z.strictObject({
   designMonth: value,
   clearSkyTauB: value,
   clearSkyTauD: value,
+  groundDesignF: value,
   source: z.string().trim().max(200, { message: 'Source must be at most 200 characters' }).optional(),
   /** Where τb and τd come from (e.g. the climatic table's station and month). */
   clearSkySource: z.string().trim().max(200, { message: 'Source must be at most 200 characters' }).optional(),

@@ -17,7 +17,12 @@ export function designDayLine(load: HomeLoad): string {
   const sky = d.skyIsGeneric
     ? `generic clear sky τb ${d.tauB} / τd ${d.tauD} — not the site’s data`
     : `clear sky τb ${d.tauB} / τd ${d.tauD} (${d.skySource})`;
-  return `Design day ${MONTHS[d.month - 1] ?? ''} 21 at ${lat}; ${sky}.`;
+  const ground = !d.belowGrade
+    ? ''
+    : d.groundAssumed
+      ? ` Basement walls and floors: no ground temperature entered, so the outdoor heating design ${d.groundDesignF} °F stands in (overstates their loss).`
+      : ` Basement walls and floors: design ground temperature ${d.groundDesignF} °F.`;
+  return `Design day ${MONTHS[d.month - 1] ?? ''} 21 at ${lat}; ${sky}.${ground}`;
 }
 
 const DUCT_PLACE: Record<string, string> = {

@@ -1,7 +1,7 @@
-import { asRecord, asString } from '../model/draft';
+import { asNumber, asRecord, asString } from '../model/draft';
 import { aboveOptions, belowOptions, ceilingInsulationOptions, floorInsulationOptions } from '../model/options';
 import type { EditorProps } from './editor-props';
-import { SelectInput } from './field-kit';
+import { NumberInput, SelectInput } from './field-kit';
 import { COLOR_OPTIONS } from './wall-fields';
 
 const ABOVE_DEFAULTS: Record<string, object> = {
@@ -14,6 +14,7 @@ const BELOW_DEFAULTS: Record<string, object> = {
   crawlspace: { kind: 'crawlspace', vented: true, insulation: 'none' },
   basement: { kind: 'basement', insulation: 'none' },
   garage: { kind: 'garage', insulation: 'none' },
+  'basement-floor': { kind: 'basement-floor', depthFt: 6, insulationR: 0 },
   conditioned: { kind: 'conditioned' },
 };
 
@@ -89,6 +90,32 @@ export function AboveBelowFields({ draft, set, err }: EditorProps) {
           ]}
           onChange={(x) => set(['below', 'vented'], x === 'vented')}
         />
+      ) : null}
+      {belowKind === 'basement-floor' ? (
+        <>
+          <NumberInput
+            label="Floor depth below grade"
+            quantity="ft"
+            value={asNumber(below.depthFt)}
+            onChange={(x) => set(['below', 'depthFt'], x)}
+            error={err(['below', 'depthFt'])}
+          />
+          <NumberInput
+            label="Basement’s shortest width"
+            hint="The whole basement’s. Blank: this room’s shorter side."
+            quantity="ft"
+            value={asNumber(below.widthFt)}
+            onChange={(x) => set(['below', 'widthFt'], x)}
+            error={err(['below', 'widthFt'])}
+          />
+          <NumberInput
+            label="Insulation under the floor"
+            unit="R"
+            value={asNumber(below.insulationR)}
+            onChange={(x) => set(['below', 'insulationR'], x)}
+            error={err(['below', 'insulationR'])}
+          />
+        </>
       ) : null}
       {belowKind === 'crawlspace' || belowKind === 'basement' || belowKind === 'garage' ? (
         <SelectInput

@@ -85,6 +85,14 @@ export function WallFields({ draft, set, err, index, replace, hasError, startOpe
             onChange={(x) => set(p('color'), x)}
             error={err(p('color'))}
           />
+          <NumberInput
+            label="Below grade"
+            hint="Basement wall: how much of its height is in the ground. Blank: none."
+            quantity="ft"
+            value={asNumber(v('belowGradeFt'))}
+            onChange={(x) => set(p('belowGradeFt'), x)}
+            error={err(p('belowGradeFt'))}
+          />
         </div>
         {err(p('windows')) ? <p className="text-sm font-semibold text-danger">{err(p('windows'))}</p> : null}
         {windows.map((_, wi) => (

@@ -49,4 +49,11 @@ export const DESIGN_FIELD_SPECS: readonly DesignFieldSpec[] = [
     whenEmpty: 'Left empty (with τd): a generic clear sky, τb 0.40 / τd 2.30 — not the site’s data.',
   },
   { key: 'clearSkyTauD', label: 'Clear-sky diffuse optical depth τd', quantity: 'plain' },
+  {
+    key: 'groundDesignF',
+    label: 'Design ground temperature (basements)',
+    quantity: 'degF',
+    whenEmpty:
+      'The site’s annual mean temperature less the ground surface amplitude. Left empty: the outdoor heating design temperature, which overstates basement losses.',
+  },
 ];

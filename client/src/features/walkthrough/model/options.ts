@@ -31,6 +31,7 @@ export const belowOptions = [
   { value: 'slab', label: 'Slab on grade' },
   { value: 'crawlspace', label: 'Crawl space' },
   { value: 'basement', label: 'Unconditioned basement' },
+  { value: 'basement-floor', label: 'Ground (a basement room’s own floor)' },
   { value: 'garage', label: 'Garage' },
   { value: 'conditioned', label: 'Conditioned floor' },
 ];

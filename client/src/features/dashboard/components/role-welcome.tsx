@@ -9,49 +9,58 @@ interface Step {
   link?: { to: string; label: string };
 }
 
+/** What each role can do in Gaugeline today, and nothing it cannot do yet. */
 const guide: Record<Role, { lead: string; steps: Step[] }> = {
   owner: {
-    lead: 'You set up the company and see how its quotes do.',
+    lead: 'You set up the company: its people, its price book and the equipment it sells.',
     steps: [
       {
         text: 'Add your estimators, salespeople and installers so each can sign in.',
         link: { to: paths.users, label: 'Manage users' },
       },
       {
-        text: 'Fill in the price book and the equipment you sell; every takeoff is priced from it.',
+        text: 'Fill in the price book and the equipment catalog, by hand or from a CSV file.',
         link: { to: paths.priceBook, label: 'Open price book' },
       },
-      { text: 'Once proposals go out, win rate and average ticket appear under Reports.' },
+      {
+        text: 'Open any job to see its walk-through, room loads and priced options.',
+        link: { to: paths.jobs, label: 'Go to jobs' },
+      },
     ],
   },
   estimator: {
-    lead: 'You turn a walk-through into a system, a material list and a priced proposal.',
+    lead: 'You check a walk-through’s loads and shape the options the customer will choose from.',
     steps: [
       {
-        text: 'Open a job to check its room loads and choose equipment for each zone.',
+        text: 'Open a job to check its rooms and the loads worked out hour by hour, with a printable summary.',
         link: { to: paths.jobs, label: 'Go to jobs' },
       },
-      { text: 'Set each line-set run, review the takeoff and labor, then issue the proposal.' },
+      {
+        text: 'From a job’s loads page, “Options and price” sets up to three priced options: zones, equipment, takeoff and price.',
+      },
     ],
   },
   salesperson: {
-    lead: 'You walk the home, room by room, and leave with a first price.',
+    lead: 'You walk the home room by room; it saves on the phone if the signal drops.',
     steps: [
       {
-        text: 'Start a job for the customer and record each room as you go; it saves on the phone if the signal drops.',
+        text: 'Start a job for the customer (or pick one you already have) and record each room as you go.',
         link: { to: paths.jobs, label: 'Go to jobs' },
       },
-      { text: 'Note the customer’s comfort wishes so the estimator can shape the options.' },
+      { text: 'Each room’s loads show as you type; the loads summary prints for the homeowner.' },
     ],
   },
   installer: {
-    lead: 'You get the job packet and keep the commissioning record.',
+    lead: 'You read the jobs assigned to you.',
     steps: [
       {
-        text: 'Open your jobs to see equipment, line-set runs, the charge plan and materials.',
+        text: 'Open your jobs to read each one’s site, rooms with their sizes, notes and photos.',
         link: { to: paths.jobs, label: 'Go to jobs' },
       },
-      { text: 'Record the pressure test, evacuation reading and refrigerant added on site.' },
+      {
+        text: 'The equipment catalog lists the models and materials the company uses.',
+        link: { to: paths.priceBook, label: 'Open the catalog' },
+      },
     ],
   },
 };

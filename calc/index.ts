@@ -85,3 +85,5 @@ export * from './src/electrical/voltage-drop';
 export * from './src/sizing/ports';
 export * from './src/design/explain-sizing';
 export * from './src/catalog/design-bridge';
+export * from './src/design/suggest';
+export * from './src/design/first-price';

@@ -75,6 +75,19 @@ export default defineConfig({
       // calc and the contract are pure (no module-level effects), so a page that uses one schema or
       // constant does not pull the whole engine into its chunk: the engine loads with the walk-through.
       treeshake: { moduleSideEffects: [{ test: /[\\/](calc|server[\\/]src[\\/]contract)[\\/]/, sideEffects: false }] },
+      output: {
+        // What every page runs (React, the router, TanStack Query) in one file rather than a dozen small
+        // ones: the entry asks for the app and the page's modules at once (client/src/app/route-preload.ts),
+        // and many tiny shared chunks would cost a phone more requests and more gzip overhead.
+        codeSplitting: {
+          groups: [
+            {
+              name: 'framework',
+              test: /[\\/]node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom|@tanstack[\\/](query-core|react-query))[\\/]/,
+            },
+          ],
+        },
+      },
     },
   },
   server: { port: 5173, host: '127.0.0.1', proxy: { '/api': apiTarget } },

@@ -12,6 +12,11 @@ const CPU_SLOWDOWN = 4;
 export interface PhoneTiming {
   readonly coldMs: number;
   readonly warmMs: number;
+  /** Until the room-name field was on screen (the rest is the typed letter reaching it). */
+  readonly coldVisibleMs: number;
+  readonly warmVisibleMs: number;
+  /** Whether the service worker answered the warm load (it controlled the page). */
+  readonly warmFromWorker: boolean;
   readonly transferredKb: number;
   readonly foreign: number;
 }
@@ -68,12 +73,14 @@ export async function phoneTimings(base: string, cookie: { name: string; value: 
         console.log(`    +${(performance.now() - tNav).toFixed(0)} ms ✓ ${r.url().replace(base, '')}`),
       );
     }
+    let visibleMs = 0;
     const typeable = async (letter: string) => {
       const t0 = performance.now();
       tNav = t0;
       await page.goto(`${base}${path}`, { waitUntil: 'commit' });
       const field = page.getByLabel('Room name', { exact: true }).first();
       await field.waitFor({ state: 'visible' });
+      visibleMs = performance.now() - t0;
       await field.press('End');
       await field.pressSequentially(letter);
       await page.waitForFunction(
@@ -85,12 +92,23 @@ export async function phoneTimings(base: string, cookie: { name: string; value: 
       return ms;
     };
     const coldMs = await typeable('q');
+    const coldVisibleMs = visibleMs;
     const transferredKb = bytes / 1024;
     // Let the first visit's edit settle (it is typed back), then open the page again in the same tab.
     await page.waitForTimeout(1500);
     const warmMs = await typeable('z');
+    const warmVisibleMs = visibleMs;
+    const warmFromWorker = await page.evaluate(() => navigator.serviceWorker?.controller != null);
     await page.waitForTimeout(1500);
-    return { coldMs, warmMs, transferredKb, foreign } satisfies PhoneTiming;
+    return {
+      coldMs,
+      warmMs,
+      coldVisibleMs,
+      warmVisibleMs,
+      warmFromWorker,
+      transferredKb,
+      foreign,
+    } satisfies PhoneTiming;
   } finally {
     await context?.close().catch(() => undefined);
     await browser.close();

@@ -5,7 +5,7 @@ import { paths, signInPath } from '../config/paths';
 import { meQueryOptions } from '../features/auth/api/get-me';
 import { isApiError } from '../lib/api-error';
 import { setCurrentPerson } from '../lib/offline/person';
-import { isOffline } from '../lib/offline/persist-cache';
+import { isOffline, keepPersonCacheOnce } from '../lib/offline/persist-cache';
 import type { MeResponse } from '@contract';
 
 export const NOTICE_NOT_ALLOWED = 'not-allowed';
@@ -44,6 +44,7 @@ export async function requireUser(queryClient: QueryClient, request: Request): P
   }
   // From here on the device keeps and sends only this person's waiting changes.
   setCurrentPerson({ companyId: me.company.id, userId: me.user.id });
+  keepPersonCacheOnce(queryClient);
   return me;
 }
 

@@ -3,6 +3,7 @@ import { onlineManager, type QueryClient } from '@tanstack/react-query';
 import { persistQueryClientRestore, persistQueryClientSubscribe } from '@tanstack/react-query-persist-client';
 import { del, get, set } from 'idb-keyval';
 import { CLIENT_API_VERSION } from '../api-version';
+import { LAST_PERSON_KEY } from './last-person';
 import { getCurrentPerson, personKey, personStores, subscribePerson, type Person } from './person';
 
 /**
@@ -12,7 +13,6 @@ import { getCurrentPerson, personKey, personStores, subscribePerson, type Person
  * last signed in on this device; removed at sign-out. A cache made for another API version is
  * dropped rather than shown (`buster`).
  */
-const LAST_PERSON_KEY = 'gaugeline:last-person';
 const MAX_AGE_MS = 14 * 24 * 3_600_000;
 const BUSTER = `api-${CLIENT_API_VERSION}`;
 
@@ -86,6 +86,18 @@ export function keepPersonCache(queryClient: QueryClient): () => void {
     stopSaving?.();
     stopSaving = null;
   };
+}
+
+let keeping = false;
+
+/**
+ * keepPersonCache, started once per page: at start-up after a restore, or by the signed-in guard
+ * on a device where nobody was saved (start-up then loads none of this, see boot.tsx).
+ */
+export function keepPersonCacheOnce(queryClient: QueryClient): void {
+  if (keeping) return;
+  keeping = true;
+  keepPersonCache(queryClient);
 }
 
 /** Sign-out: this person's saved queries go, and the device forgets who was last signed in. */

@@ -1,13 +1,21 @@
 import { lazy, Suspense, type ComponentProps } from 'react';
+import { useAfterIdle } from '../../../lib/use-after-idle';
 
 // The chart library is the biggest thing the loads screens use: it loads only where a chart is drawn,
 // after the page can already be typed into (issue 11's first-load budgets).
 const ComponentChart = lazy(async () => ({ default: (await import('./component-chart')).ComponentChart }));
 
-/** ComponentChart, loaded on first use; the same height while it loads, so nothing below jumps. */
+const placeholder = <div className="h-[300px] w-full" aria-busy="true" aria-label="Loading the chart" />;
+
+/**
+ * ComponentChart, loaded on first use once the page has had an idle moment (its first render is the
+ * heaviest work on the walk-through); the same height while it waits, so nothing below jumps.
+ */
 export function LazyComponentChart(props: ComponentProps<typeof ComponentChart>) {
+  const idle = useAfterIdle();
+  if (!idle) return placeholder;
   return (
-    <Suspense fallback={<div className="h-[300px] w-full" aria-busy="true" aria-label="Loading the chart" />}>
+    <Suspense fallback={placeholder}>
       <ComponentChart {...props} />
     </Suspense>
   );

@@ -9,6 +9,7 @@ import { EmptyState } from '../../../components/ui/empty-state';
 import { Spinner } from '../../../components/ui/spinner';
 import { jobPaths } from '../../../entities/job/paths';
 import { useViewer } from '../../../lib/viewer';
+import { useAfterIdle } from '../../../lib/use-after-idle';
 import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../../../entities/job/queries';
 import { LiveHomeTotals } from '../../loads/components/live-home-totals';
 import { roomTarget } from '../sync/edits';
@@ -26,6 +27,8 @@ import { RoomTabs } from './room-tabs';
 import { UnitSystemContext } from './unit-system';
 import { clearUnsavedDraft } from '../../../lib/offline/drafts';
 import { lastRoom, rememberRoom } from '../model/last-room';
+
+const detailsPlaceholder = <div className="min-h-touch rounded-lg border border-line bg-white p-4" />;
 
 /**
  * The walk-through of one job: design conditions, rooms one at a time, live loads.
@@ -59,6 +62,8 @@ export function WalkthroughView({
   const scrollToRoom = useRef(false);
   const [revision, setRevision] = useState(0);
   const viewer = useViewer();
+  // The folded job details come once the rooms can be typed into (they load a chunk and fetch the customer and staff).
+  const detailsNow = useAfterIdle();
   const current = rooms.find((r) => r.id === selected) ?? rooms[0] ?? null;
   const conflict = state.conflict && state.conflict.payload.jobId === job.id ? state.conflict : null;
   useEffect(() => {
@@ -154,9 +159,7 @@ export function WalkthroughView({
 
         {jobDetails ? (
           <QueryWidgetBoundary name="the job details">
-            <Suspense fallback={<div className="min-h-touch rounded-lg border border-line bg-white p-4" />}>
-              {jobDetails(job)}
-            </Suspense>
+            <Suspense fallback={detailsPlaceholder}>{detailsNow ? jobDetails(job) : detailsPlaceholder}</Suspense>
           </QueryWidgetBoundary>
         ) : null}
 

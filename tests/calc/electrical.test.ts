@@ -74,7 +74,7 @@ describe('electrical check values (reference §10)', () => {
   });
   it('10.5: single compressor 18 A → conductor ≥ 22.5 A; OCPD ≤ 31.5 → 30 A', () => {
     // [PUB: NEC 440.32/440.22(A) via ecmweb Q&A]
-    expect(1.25 * 18).toBe(22.5);
+    expect(mcaFromNameplateA({ largestRlaA: 18, otherLoadsA: 0 })).toBe(22.5); // 125 % of RLA, NEC 440.32
     expect(copperWireAwg({ ampacityA: 22.5, terminationC: 60 })).toBe(10);
     expect(breakerSizeA({ mcaA: 22.5, mocpA: 1.75 * 18 })).toBe(30);
   });

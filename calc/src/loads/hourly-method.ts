@@ -57,7 +57,9 @@ export const ATTIC_RESPONSE = { vented: 0.45, radiantBarrier: 0.3, lagHours: 1 }
 /**
  * Design air leakage in summer as a fraction of the winter rate (less stack effect, lighter
  * design wind). [TRADE/MEM: residential tightness tables give summer rates about half the
- * winter ones] The tightness table's ACH is the winter figure.
+ * winter ones] The tightness table's ACH is the winter figure. (The ASHRAE ch. 16 stack-and-wind
+ * model Q = A_L·√(C_s·ΔT + C_w·U²) with its one-storey coefficients gives about 0.53 for 20 °F / 7.5 mph
+ * against 60 °F / 15 mph — but those coefficients are recalled too [MEM], so no source is claimed.)
  */
 export const SUMMER_LEAKAGE_FRACTION = 0.5;
 
@@ -92,7 +94,10 @@ export const DEFAULT_RECOVERY_SENSIBLE = 0.6;
  * θ = 0, 40, 50, 60, 70, 80, 90°, linear between; diffuse (sky and ground) sun uses the
  * hemispherical ratio. Applied to every glazing type (shape of clear double glazing).
  * [MEM: ASHRAE Handbook—Fundamentals ch. 15 Table 10, angular SHGC of double clear glazing
- * (ID 5a): 0.76, 0.74, 0.71, 0.64, 0.50, 0.26, 0 and hemispherical 0.66 — verify]
+ * (ID 5a): 0.76, 0.74, 0.71, 0.64, 0.50, 0.26, 0 and hemispherical 0.66 — verify]. Shape checked in
+ * tests/calc/method-constants.test.ts: each ratio within 0.05 of (and not above) the Fresnel transmittance
+ * ratio of two clear panes [PUB: Duffie and Beckman, Solar Engineering of Thermal Processes, ch. 5];
+ * the digits stay from memory.
  */
 export const SHGC_ANGLE_DEG: readonly number[] = [0, 40, 50, 60, 70, 80, 90];
 export const SHGC_ANGLE_RATIO: readonly number[] = [1, 0.974, 0.934, 0.842, 0.658, 0.342, 0];

@@ -1,0 +1,42 @@
+import { describe, expect, it } from 'vitest';
+import { SHGC_ANGLE_DEG, SHGC_ANGLE_RATIO } from '@calc';
+
+/*
+ * Outside checks of the hourly method's recalled constants, where a published equation exists.
+ * Angular SHGC: the Fresnel reflectance of each glass surface (Snell's law, parallel and
+ * perpendicular polarisation) and the transmittance of N parallel covers,
+ *   τ_r = ½·[(1 − r∥)/(1 + (2N − 1)·r∥) + (1 − r⊥)/(1 + (2N − 1)·r⊥)],  τ_a = exp(−N·K·L / cos θ_r)
+ * [PUB: Duffie and Beckman, Solar Engineering of Thermal Processes, ch. 5 transmittance of covers],
+ * for two panes of clear glass (n 1.526, K·L 0.03 per pane). The table calc uses is recalled
+ * [MEM: ASHRAE ch. 15 double clear glazing]; this checks its shape, not its digits.
+ */
+function twoPaneTransmittance(thetaDeg: number): number {
+  const n = 1.526;
+  const covers = 2;
+  const t = (thetaDeg * Math.PI) / 180;
+  let rPar: number;
+  let rPerp: number;
+  let tr = 0;
+  if (thetaDeg === 0) {
+    rPar = rPerp = ((n - 1) / (n + 1)) ** 2;
+  } else {
+    tr = Math.asin(Math.sin(t) / n);
+    rPerp = Math.sin(tr - t) ** 2 / Math.sin(tr + t) ** 2;
+    rPar = Math.tan(tr - t) ** 2 / Math.tan(tr + t) ** 2;
+  }
+  const tauR = 0.5 * ((1 - rPar) / (1 + (2 * covers - 1) * rPar) + (1 - rPerp) / (1 + (2 * covers - 1) * rPerp));
+  return tauR * Math.exp((-covers * 0.03) / Math.cos(tr));
+}
+
+describe('angular SHGC ratios against the Fresnel transmittance of two clear panes', () => {
+  it('each tabulated ratio (40–80°) is within 0.05 of, and not above, the two-pane transmittance ratio', () => {
+    const normal = twoPaneTransmittance(0);
+    SHGC_ANGLE_DEG.forEach((deg, i) => {
+      if (deg === 0 || deg === 90) return;
+      const fresnel = twoPaneTransmittance(deg) / normal;
+      const table = SHGC_ANGLE_RATIO[i] ?? 0;
+      expect(Math.abs(table - fresnel)).toBeLessThan(0.05);
+      expect(table).toBeLessThanOrEqual(fresnel + 0.005);
+    });
+  });
+});

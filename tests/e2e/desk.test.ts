@@ -137,3 +137,77 @@ describe('the estimator’s desk', () => {
     await context.close();
   });
 });
+
+/**
+ * Through the API as the estimator: a fresh option on a demo job with rooms (all rooms in one zone, the
+ * catalog's first indoor and single-zone outdoor unit), and the job handed to the demo installer, so the
+ * salesperson (whose job it is) and the installer both reach it.
+ */
+async function officeOption(page: Page): Promise<string> {
+  const jobId = await jobWithRooms(page);
+  const csrf = ((await (await page.request.get('/api/auth/csrf')).json()) as { token: string }).token;
+  const headers = { 'X-CSRF-Token': csrf };
+  const rooms = ((await (await page.request.get(`/api/jobs/${jobId}/rooms`)).json()) as { rooms: { id: string }[] })
+    .rooms;
+  const models = (
+    (await (await page.request.get('/api/company-data/models')).json()) as {
+      rows: { key: string; record: { kind: string } }[];
+    }
+  ).rows;
+  const indoor = models.find((m) => m.record.kind === 'indoor')?.key;
+  const outdoor = models.find((m) => m.record.kind === 'outdoor-single-zone')?.key;
+  const design = {
+    zones: [{ key: 'zone-1', name: 'Whole house', roomIds: rooms.map((r) => r.id), indoorUnitKey: indoor }],
+    systems: [
+      {
+        key: 'sys-1',
+        name: 'Outdoor unit',
+        outdoorUnitKey: outdoor,
+        circuits: [{ zoneKey: 'zone-1', lengthFt: 25 }],
+        electrical: { circuitLengthFt: 30 },
+      },
+    ],
+  };
+  for (const name of ['Essential', 'Quiet comfort']) {
+    const made = await page.request.post(`/api/jobs/${jobId}/options`, { headers, data: { name, design } });
+    expect(made.status(), await made.text()).toBe(201);
+  }
+  const staff = ((await (await page.request.get('/api/staff')).json()) as { staff: { id: string; role: string }[] })
+    .staff;
+  const job = ((await (await page.request.get(`/api/jobs/${jobId}`)).json()) as { job: { version: number } }).job;
+  const assigned = await page.request.patch(`/api/jobs/${jobId}`, {
+    headers: { ...headers, 'If-Match': `"${job.version}"` },
+    data: { assignedInstallerId: staff.find((p) => p.role === 'installer')?.id },
+  });
+  expect(assigned.status(), await assigned.text()).toBe(200);
+  return jobId;
+}
+
+describe('the desk per role, on a phone', () => {
+  it('a salesperson sees the price and no cost; an installer sees the equipment and no money', async () => {
+    const office = await e.newPage(DESKTOP);
+    const est = account('estimator');
+    await signIn(office.page, est.email, est.password);
+    await office.page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    const jobId = await officeOption(office.page);
+    await office.context.close();
+    for (const role of ['salesperson', 'installer'] as const) {
+      const who = account(role);
+      const { context, page } = await e.newPage(PHONE);
+      await signIn(page, who.email, who.password);
+      await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+      await page.goto(`/jobs/${jobId}/desk`);
+      await page.getByRole('tablist', { name: 'Options' }).waitFor();
+      await page.getByRole('region', { name: 'Equipment, lines and charge, electrical' }).waitFor();
+      expect(await page.getByText('Equipment cost').count()).toBe(0);
+      expect(await page.getByText('Gross margin').count()).toBe(0);
+      if (role === 'salesperson')
+        await page.getByRole('region', { name: 'Price' }).getByText('Total', { exact: true }).waitFor();
+      else expect(await page.getByRole('region', { name: 'Price' }).count()).toBe(0);
+      expect(await page.getByRole('form', { name: /^Pricing of/ }).count()).toBe(0);
+      await page.screenshot({ path: `${SHOTS}/desk-${role}-375.png`, fullPage: true });
+      await expectAccessible(page);
+      await context.close();
+    }
+  });
+});

@@ -3,6 +3,7 @@ import type { LoaderFunctionArgs } from 'react-router-dom';
 import { z } from 'zod';
 import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../entities/job/queries';
 import { deskQueryOptions } from '../features/desk/api/get-desk';
+import { modelsQueryOptions } from '../features/desk/api/get-models';
 import { jobsQueryOptions } from '../features/jobs/api/get-jobs';
 import { filtersFromSearch } from '../features/jobs/components/jobs-filters';
 import { sharedWalkthroughQueue } from '../features/walkthrough/sync/walkthrough-queue';
@@ -47,7 +48,7 @@ export const jobWithRoomsLoader =
     return null;
   };
 
-/** The desk: the job, its rooms (zones pick them) and its options, in parallel. */
+/** The desk: the job, its rooms (zones pick them), its options and the catalog, in parallel. */
 export const deskLoader =
   (queryClient: QueryClient) =>
   async ({ params }: LoaderFunctionArgs) => {
@@ -56,6 +57,8 @@ export const deskLoader =
       queryClient.ensureQueryData(jobQueryOptions(jobId)),
       queryClient.ensureQueryData(roomsQueryOptions(jobId)),
       queryClient.ensureQueryData(deskQueryOptions(jobId)),
+      // The pickers must hold the catalog before a stored design is laid into them.
+      queryClient.ensureQueryData(modelsQueryOptions()),
     ]);
     return null;
   };

@@ -1,4 +1,4 @@
-import { useQuery, useSuspenseQuery } from '@tanstack/react-query';
+import { useSuspenseQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { z } from 'zod';
@@ -57,7 +57,7 @@ export function DeskPage() {
   const job = useSuspenseQuery(jobQueryOptions(jobId)).data;
   const rooms = useSuspenseQuery(roomsQueryOptions(jobId)).data;
   const desk = useSuspenseQuery(deskQueryOptions(jobId)).data;
-  const models = useQuery(modelsQueryOptions()).data ?? [];
+  const models = useSuspenseQuery(modelsQueryOptions()).data;
   const ready = useSetReady(jobId);
   const [picked, setPicked] = useState<string | null>(null);
   const current = desk.options.find((o) => o.id === picked) ?? desk.options[0] ?? null;

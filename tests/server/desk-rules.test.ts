@@ -305,3 +305,50 @@ describe('who sees money', () => {
     expect(view.body.options[0].result.explanations.some((e: { key: string }) => e.key === 'price:sell')).toBe(false);
   });
 });
+
+describe('suggest and the first price', () => {
+  it('suggest proposes units from the active catalog and stores nothing', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const r = await post(estimator, `/api/jobs/${job.id}/suggest`).send({});
+    expect(r.status, JSON.stringify(r.body)).toBe(200);
+    const zoned = r.body.design.zones.flatMap((z: { roomIds: string[] }) => z.roomIds).sort();
+    expect(zoned).toEqual([...rooms].sort());
+    expect(r.body.reasons.length).toBeGreaterThan(0);
+    const desk = await estimator.agent.get(`/api/jobs/${job.id}/desk`);
+    expect(desk.body.options).toEqual([]);
+    // The suggestion is a design the option takes as it is.
+    const o = await newOption(estimator, job.id, { name: 'Suggested', design: r.body.design });
+    expect((o.result as { price: { totalCents: number } }).price.totalCents).toBeGreaterThan(0);
+    expectProblem(await post(installer, `/api/jobs/${job.id}/suggest`).send({}), 403);
+  });
+
+  it('a salesperson gets a preliminary price range right after the walk-through; not proposable until reviewed', async () => {
+    const { job } = await deskJob(sales);
+    const r = await post(sales, `/api/jobs/${job.id}/first-price`).send({});
+    expect(r.status, JSON.stringify(r.body)).toBe(201);
+    expect(r.body.preliminary).toBe(true);
+    expect(r.body.notice).toMatch(/preliminary/i);
+    const { range, option } = r.body;
+    expect(range.lowCents).toBeLessThanOrEqual(option.result.price.totalCents);
+    expect(range.highCents).toBeGreaterThanOrEqual(option.result.price.totalCents);
+    expect(range.text).toMatch(/^about \$/);
+    expect(option.preliminary).toBe(true);
+    expect(option.blockers.map((b: { code: string }) => b.code)).toContain('preliminary');
+    // Marked preliminary on every read too.
+    const read = await sales.agent.get(`/api/jobs/${job.id}/options/${option.id}`);
+    expect(read.body.option.result.preliminaryRange).toEqual(range);
+    expectProblem(await post(estimator, `/api/jobs/${job.id}/ready`).send(), 422);
+    expectProblem(
+      await post(sales, `/api/jobs/${job.id}/options/${option.id}/review`).set('If-Match', `"${option.version}"`),
+      403,
+    );
+    const reviewed = await post(estimator, `/api/jobs/${job.id}/options/${option.id}/review`).set(
+      'If-Match',
+      `"${option.version}"`,
+    );
+    expect(reviewed.status, JSON.stringify(reviewed.body)).toBe(200);
+    expect(reviewed.body.option.preliminary).toBe(false);
+    expect(reviewed.body.option.reviewedBy.id).toBe(a.users.estimator.id);
+    expect(reviewed.body.option.result.preliminaryRange).toBeNull();
+  });
+});

@@ -86,6 +86,27 @@ describe('bad input: problem+json with field paths, nothing stored', () => {
     expect(now.body.option.design).toEqual(o.design);
   });
 
+  it('refuses bad pricing fields with their paths and an unknown financing plan; nothing changes', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const o = await newOption(estimator, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '') });
+    const url = `/api/jobs/${job.id}/options/${o.id}`;
+    const bad = await patch(estimator, url, o.version).send({
+      pricing: { deposit: { kind: 'percent', value: 150 }, discounts: [{ label: '', kind: 'percent', value: 5 }] },
+    });
+    expectProblem(bad, 400);
+    expect(bad.body.errors).toContainEqual({
+      path: 'pricing.deposit.value',
+      message: 'Deposit must be between 0 and 100 %',
+    });
+    expect(bad.body.errors.map((e: { path: string }) => e.path)).toContain('pricing.discounts.0.label');
+    const plan = await patch(estimator, url, o.version).send({ pricing: { financingPlanKey: 'no-such-plan' } });
+    expectProblem(plan, 400);
+    expect(plan.body.errors[0].path).toBe('pricing.financingPlanKey');
+    const now = await estimator.agent.get(url);
+    expect(now.body.option.version).toBe(o.version);
+    expect(now.body.option.pricing).toEqual(o.pricing);
+  });
+
   it('ignores a total sent by the browser: the strict body refuses it and the stored figures are calc’s', async () => {
     const { job, rooms } = await deskJob(estimator);
     const r = await post(estimator, `/api/jobs/${job.id}/options`).send({

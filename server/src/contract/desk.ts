@@ -268,6 +268,16 @@ export const explanationRecord = z.looseObject({
   status: z.enum(['ok', 'note', 'warning', 'blocker']),
 });
 
+/** A first price's range ("about $11,800 – $13,900, subject to the estimator's review"), marked preliminary. */
+export const preliminaryRangeRecord = z.object({
+  lowCents: z.number(),
+  highCents: z.number(),
+  text: z.string(),
+  note: z.string(),
+  preliminary: z.literal(true),
+});
+export type PreliminaryRangeRecord = z.output<typeof preliminaryRangeRecord>;
+
 export const optionResultRecord = z.object({
   zones: z.array(z.looseObject({ zoneKey: z.string(), name: z.string(), indoorUnitKey: z.string() })),
   systems: z.array(z.looseObject({ systemKey: z.string(), name: z.string(), outdoorUnitKey: z.string() })),
@@ -278,6 +288,8 @@ export const optionResultRecord = z.object({
   discontinued: z.array(z.object({ key: z.string(), name: z.string() })),
   /** The why of each number the role may see. */
   explanations: z.array(explanationRecord),
+  /** For a preliminary option (a first price), the range shown to the homeowner; null otherwise and for installers. */
+  preliminaryRange: preliminaryRangeRecord.nullable(),
   warnings: z.array(z.string()),
   cautions: z.array(z.string()),
   isEstimate: z.literal(true),
@@ -327,9 +339,31 @@ export const deskResponse = z.object({
   readiness: readinessRecord,
 });
 export type DeskResponse = z.output<typeof deskResponse>;
+/** POST /api/jobs/:jobId/suggest: zones to keep (else calc groups the rooms), and the run to assume. */
+export const suggestBody = z.strictObject({
+  zones: z
+    .array(
+      z.strictObject({
+        key: keyField('Zone key'),
+        name: nameField('Zone name'),
+        roomIds: z.array(keyField('Room id')).min(1, 'Choose at least one room for the zone').max(50),
+      }),
+    )
+    .max(40, 'At most 40 zones')
+    .optional(),
+  lineLengthFt: bounded('Line-set length', 1, 300, 'ft').optional(),
+});
+/** calc's suggestion: a design the desk can put into an option, with why each unit was chosen. */
+export const suggestResponse = z.object({
+  design: z.record(z.string(), z.unknown()),
+  reasons: z.array(explanationRecord),
+  warnings: z.array(z.string()),
+});
+/** POST /api/jobs/:jobId/first-price: a salesperson's one tap after the walk-through. */
+export const firstPriceBody = z.strictObject({ name: optionNameRule.optional() });
 export const firstPriceResponse = z.object({
   option: optionRecord,
-  range: z.object({ lowCents: z.number(), highCents: z.number() }).nullable(),
+  range: preliminaryRangeRecord,
   preliminary: z.literal(true),
   notice: z.string(),
 });

@@ -7,6 +7,10 @@ import {
   parseOrThrow,
   priceBookSchema,
   type Home,
+  FIRST_PRICE_RUNS_FT,
+  preliminaryPriceRange,
+  type PreliminaryRange,
+  type Design,
   designCatalogFromModels,
   designPriceBookFromCompany,
   extendCents,
@@ -61,6 +65,8 @@ export interface OptionFigures {
   }[];
   /** calc's why of each number (the presenter passes on what the role may see). */
   readonly explanations: readonly Explanation[];
+  /** A preliminary option's range: the design priced with short and with long runs, widened (calc). */
+  readonly range: PreliminaryRange | null;
 }
 
 export interface ComputedOption {
@@ -222,16 +228,32 @@ export function computeOption(
   const own = dataFor(option, data);
   const { pricing, sellRule } = calcPricing(option.pricing, data.desk, discounts);
   let design: DesignResult;
+  let range: PreliminaryRange | null = null;
   try {
     // The home is parsed once per request (parseHome); the catalog and price book are already schema outputs.
-    design = computeDesignFromParsed({
-      home: 'parsed' in home ? home.parsed : parseOrThrow(homeInputSchema, home),
-      design: parseOrThrow(designSchema, option.design),
-      catalog: own.catalog,
-      priceBook: own.priceBook,
-      pricing,
-      policy: DEFAULT_SIZING_POLICY,
-    });
+    const parsedHome = 'parsed' in home ? home.parsed : parseOrThrow(homeInputSchema, home);
+    const parsedDesign = parseOrThrow(designSchema, option.design);
+    const run = (d: Design) =>
+      computeDesignFromParsed({
+        home: parsedHome,
+        design: d,
+        catalog: own.catalog,
+        priceBook: own.priceBook,
+        pricing,
+        policy: DEFAULT_SIZING_POLICY,
+      });
+    design = run(parsedDesign);
+    if (option.preliminary) {
+      // The walk-through measures no runs: the range prices every run short and long (calc's first-price rule).
+      const withRuns = (lengthFt: number): Design => ({
+        ...parsedDesign,
+        systems: parsedDesign.systems.map((s) => ({ ...s, circuits: s.circuits.map((c) => ({ ...c, lengthFt })) })),
+      });
+      range = preliminaryPriceRange({
+        lowTotalCents: run(withRuns(FIRST_PRICE_RUNS_FT.short)).price.totalCents,
+        highTotalCents: run(withRuns(FIRST_PRICE_RUNS_FT.long)).price.totalCents,
+      });
+    }
   } catch (e) {
     const problems = problemsOf(e);
     block('cannot-calculate', problems.map((p) => p.message).join(' '));
@@ -267,6 +289,7 @@ export function computeOption(
       sellRule,
       monthly,
       explanations: explainOptionPrice({ price, pricing, plans: data.desk.financing }),
+      range,
     },
     discontinued,
     problems: [],

@@ -84,6 +84,16 @@ function presentResult(v: OptionView, role: Role): OptionResultRecord | null {
     monthly: maySeePrice(role) ? f.monthly : [],
     discontinued: v.computed.discontinued,
     explanations: explanationsFor(f, role),
+    preliminaryRange:
+      f.range && maySeePrice(role)
+        ? {
+            lowCents: f.range.lowCents,
+            highCents: f.range.highCents,
+            text: f.range.text,
+            note: f.range.note,
+            preliminary: true,
+          }
+        : null,
     // calc's pricing warnings name the price book's gaps (no cost for an item): the office's business.
     warnings: maySeeCost(role)
       ? [...f.design.warnings]

@@ -1,19 +1,27 @@
 import { z } from 'zod';
 import {
   createOptionBody,
+  DESK_MESSAGES,
   deskResponse,
   discountDecisionBody,
+  firstPriceBody,
+  firstPriceResponse,
+  suggestBody,
+  suggestResponse,
   optionResponse,
   regenerateBody,
   takeoffEditsBody,
   updateOptionBody,
 } from '@contract';
 import { ANY_STAFF, JOB_EDITORS, NO_CONTENT, OFFICE, OWNER, type ApiRouter } from '../../lib/route';
+import { UnprocessableError } from '../../lib/errors';
 import { uuidParam } from '../../lib/validate';
 import { ifMatchVersion } from '../../lib/version-lock';
 import { presentDesk, presentOption } from './desk.presenter';
 import {
+  createFirstPrice,
   createOption,
+  suggestForJob,
   decideDiscount,
   deleteOption,
   getDesk,
@@ -160,6 +168,38 @@ export function deskRoutes(api: ApiRouter): void {
       return {
         option: present(await reviewOption(service, params.jobId, params.optionId, ifMatchVersion(req), present)),
       };
+    },
+  });
+  api.route({
+    method: 'post',
+    path: '/:jobId/suggest',
+    policy: JOB_EDITORS,
+    summary: "calc's suggestion from the active catalog (zones, indoor and outdoor units, with why); nothing is stored",
+    params: jobParams,
+    body: suggestBody,
+    response: suggestResponse,
+    handler: async ({ service, params, body }) => {
+      const s = await suggestForJob(service, params.jobId, body);
+      return { design: { ...s.design }, reasons: s.reasons.map((r) => ({ ...r })), warnings: [...s.warnings] };
+    },
+  });
+  api.route({
+    method: 'post',
+    path: '/:jobId/first-price',
+    policy: JOB_EDITORS,
+    summary: 'A first price after the walk-through: one preliminary option from the suggestion, with its range',
+    params: jobParams,
+    body: firstPriceBody,
+    status: 201,
+    response: firstPriceResponse,
+    handler: async ({ service, params, body, actor }) => {
+      const option = presentOption(
+        await createFirstPrice(service, params.jobId, body.name ?? 'First price'),
+        actor.role,
+      );
+      const range = option.result?.preliminaryRange;
+      if (!range) throw new UnprocessableError('The first price could not be worked out.', { errors: option.problems });
+      return { option, range, preliminary: true as const, notice: DESK_MESSAGES.firstPriceNotice };
     },
   });
   api.route({

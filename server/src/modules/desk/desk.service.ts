@@ -13,7 +13,7 @@ import {
   type OptionPricing,
   type TakeoffEditInput,
 } from '@contract';
-import { checkDiscount, type CatalogModel, type DesignInput } from '@calc';
+import { checkDiscount, suggestDesign, type CatalogModel, type DesignInput, type Suggestion } from '@calc';
 import { ConflictError, ForbiddenError, NotFoundError, UnprocessableError, ValidationError } from '../../lib/errors';
 import type { ServiceContext } from '../../lib/service-context';
 import { assertVersion } from '../../lib/version-lock';
@@ -170,7 +170,7 @@ const me = (ctx: ServiceContext) => ({ id: ctx.actor.userId, name: ctx.actor.nam
 export async function createOption(
   ctx: ServiceContext,
   jobId: string,
-  input: OptionInput & { name: string; copyFromOptionId?: string },
+  input: OptionInput & { name: string; copyFromOptionId?: string; preliminary?: boolean },
 ): Promise<OptionView> {
   const { em, actor } = ctx;
   const desk = await readDeskJob(ctx, jobId);
@@ -191,7 +191,7 @@ export async function createOption(
     takeoffEdits: source?.takeoffEdits ?? [],
     chosenModels: source?.chosenModels ?? {},
     discountRequest: null,
-    preliminary: source ? source.preliminary && !mayReviewOption(actor.role) : false,
+    preliminary: input.preliminary ?? (source ? source.preliminary && !mayReviewOption(actor.role) : false),
     createdBy: em.getReference(UserSchema, actor.userId),
   });
   await applyInputs(ctx, desk, option, { design: input.design, pricing: input.pricing });
@@ -443,4 +443,40 @@ export async function unmarkReady(ctx: ServiceContext, jobId: string): Promise<D
   view.desk.job.readyBy = null;
   await ctx.em.flush();
   return view;
+}
+
+function homeFor(desk: DeskJob) {
+  if ('problem' in desk.home) throw new UnprocessableError(desk.home.problem.message, { errors: [desk.home.problem] });
+  return desk.home.parsed;
+}
+
+const activeModels = (desk: DeskJob) => [...desk.data.desk.models.values()].filter((m) => m.active);
+
+/** calc's suggestion from the company's active catalog for this job (nothing is stored: the desk applies it). */
+export async function suggestForJob(
+  ctx: ServiceContext,
+  jobId: string,
+  input: { zones?: { key: string; name: string; roomIds: string[] }[]; lineLengthFt?: number },
+): Promise<Suggestion> {
+  const desk = await readDeskJob(ctx, jobId);
+  return suggestDesign({
+    home: homeFor(desk),
+    models: activeModels(desk),
+    ...(input.zones ? { zones: input.zones } : {}),
+    ...(input.lineLengthFt ? { lineLengthFt: input.lineLengthFt } : {}),
+  });
+}
+
+/**
+ * "A first price before leaving": one option filled from calc's suggestion and the price book, marked
+ * preliminary (not proposable until the office reviews it), with its range.
+ */
+export async function createFirstPrice(ctx: ServiceContext, jobId: string, name: string): Promise<OptionView> {
+  const desk = await readDeskJob(ctx, jobId);
+  const suggestion = suggestDesign({ home: homeFor(desk), models: activeModels(desk) });
+  if (suggestion.design.zones.length === 0 || suggestion.design.systems.length === 0)
+    throw new UnprocessableError('No unit in the catalog fits this home yet; the estimator chooses the equipment.', {
+      errors: suggestion.warnings.map((message) => ({ path: 'design', message })),
+    });
+  return createOption(ctx, jobId, { name, design: suggestion.design, preliminary: true });
 }

@@ -25,7 +25,7 @@ function asInput(edit: Record<string, unknown>): TakeoffEditInput | null {
   return parsed.success ? parsed.data : null;
 }
 
-export const editsOf = (option: OptionRecord): TakeoffEditInput[] =>
+export const editsOf = (option: Pick<OptionRecord, 'takeoffEdits'>): TakeoffEditInput[] =>
   option.takeoffEdits.flatMap((e) => {
     const i = asInput(e.edit);
     return i ? [i] : [];

@@ -139,4 +139,46 @@ describe('new job', () => {
     expect(bodies.filter((b) => typeof b === 'object' && b !== null && 'name' in b)).toHaveLength(1);
     expect(bodies.at(-1)).toMatchObject({ customerId: 'c9', street: '12 Sample Lane', postalCode: '00000' });
   });
+
+  it('asks "Use the existing customer?" for an e-mail already on file, and fills the site from their last job', async () => {
+    const wren = {
+      id: 'c7',
+      name: 'Wren Example',
+      email: 'Wren@Example.com',
+      phone: '555-0142',
+      notes: '',
+      version: 1,
+      createdAt: '',
+      updatedAt: '',
+    };
+    const lastJob = jobRecord({
+      customer: { id: 'c7', name: 'Wren Example' },
+      site: { street: '3 Example Row', unit: '', city: 'Testerby', region: 'Demo State', postalCode: '00001' },
+    });
+    const bodies: unknown[] = [];
+    mockFetch({
+      'GET /api/auth/csrf': json(200, { token: 't' }),
+      'GET /api/customers?page=1&pageSize=20&search=wren%40example.com': page([wren], 1),
+      'GET /api/customers?page=1&pageSize=20&search=Wren+Example': page([wren], 1),
+      'GET /api/jobs?page=1&pageSize=50&search=Wren+Example': page([lastJob], 1),
+      'POST /api/jobs': (init) => {
+        bodies.push(JSON.parse(String(init?.body)));
+        return json(201, { job: jobRecord() });
+      },
+    });
+    renderAt('/jobs/new');
+    fireEvent.change(await screen.findByLabelText('Customer name'), { target: { value: 'Wren E.' } });
+    fireEvent.change(screen.getByLabelText('Customer e-mail'), { target: { value: 'wren@example.com' } });
+    // Asked as soon as the e-mail is typed, before the address is.
+    expect(await screen.findByText('Use the existing customer?', undefined, { timeout: 3000 })).toBeInTheDocument();
+    expect(screen.getByText(/Wren Example already has Wren@Example.com · 555-0142/)).toBeInTheDocument();
+    fireEvent.click(screen.getByRole('button', { name: 'Use Wren Example' }));
+    await waitFor(() => expect(screen.getByLabelText('Street address')).toHaveValue('3 Example Row'));
+    expect(screen.getByLabelText('City or town')).toHaveValue('Testerby');
+    expect(await screen.findByRole('radio', { name: /Wren Example/ })).toBeChecked();
+    fireEvent.click(screen.getByRole('button', { name: 'Create job and start the walk-through' }));
+    expect(await screen.findByText('Walk-through open')).toBeInTheDocument();
+    // No second customer: the job is made for the one on file.
+    expect(bodies).toEqual([expect.objectContaining({ customerId: 'c7', street: '3 Example Row' })]);
+  });
 });

@@ -1,11 +1,18 @@
 import { useState } from 'react';
 import { useFormContext } from 'react-hook-form';
+import type { CustomerRecord } from '@contract';
 import { useCustomers } from '../api/get-customers';
 
-/** Search the company's customers and pick one (sets the form's customerId). */
-export function CustomerPicker() {
+/** Search the company's customers and pick one (sets the form's customerId; `onPick` fills the site). */
+export function CustomerPicker({
+  initialSearch = '',
+  onPick,
+}: {
+  initialSearch?: string;
+  onPick?: (customer: CustomerRecord) => void;
+}) {
   const { setValue, watch, getFieldState, formState } = useFormContext();
-  const [search, setSearch] = useState('');
+  const [search, setSearch] = useState(initialSearch);
   const customers = useCustomers(search.trim(), true);
   const chosen: unknown = watch('customerId');
   const error = getFieldState('customerId', formState).error?.message;
@@ -32,7 +39,10 @@ export function CustomerPicker() {
                 name="customer-choice"
                 className="size-5"
                 checked={chosen === c.id}
-                onChange={() => setValue('customerId', c.id, { shouldValidate: true })}
+                onChange={() => {
+                  setValue('customerId', c.id, { shouldValidate: true });
+                  onPick?.(c);
+                }}
               />
               <span>
                 <span className="block font-semibold">{c.name}</span>

@@ -1,4 +1,8 @@
-import { useRef } from 'react';
+import { useEffect, useRef, useState } from 'react';
+import type { CustomerRecord } from '@contract';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { findSameCustomer, lastSiteOf } from '../api/find-customer';
 import { useNavigate } from 'react-router-dom';
 import { Form } from '../../../components/ui/form';
 import { SelectField, SubmitButton, TextField } from '../../../components/ui/form-fields';
@@ -22,17 +26,44 @@ const empty: NewJobInput = {
   notes: '',
 };
 
+const SITE_FIELDS = ['street', 'unit', 'city', 'region', 'postalCode'] as const;
+
+/** An existing customer's last site fills the site fields still empty (all editable). */
+async function fillSite(
+  form: {
+    getValues: (k: (typeof SITE_FIELDS)[number]) => string;
+    setValue: (k: (typeof SITE_FIELDS)[number], v: string) => void;
+  },
+  customer: Pick<CustomerRecord, 'id' | 'name'>,
+) {
+  const site = await lastSiteOf(customer).catch(() => null);
+  if (!site) return;
+  if (SITE_FIELDS.some((k) => form.getValues(k).trim() !== '')) return;
+  for (const k of SITE_FIELDS) form.setValue(k, site[k]);
+}
+
 /** Customer (new or existing) and the site address; the walk-through opens next. */
 export function NewJobForm() {
   const createJob = useCreateJob();
   const navigate = useNavigate();
   const madeCustomer = useRef<string | null>(null);
+  // A customer with the same e-mail or phone: asked about before a second one is made.
+  const [same, setSame] = useState<CustomerRecord | null>(null);
+  const newAnyway = useRef(false);
+  const [picked, setPicked] = useState('');
   return (
     <Form
       schema={newJobSchema}
       defaultValues={empty}
       aria-label="New job"
       onSubmit={async (values) => {
+        if (values.customerMode === 'new' && !newAnyway.current && !madeCustomer.current) {
+          const found = await findSameCustomer(values.customerEmail, values.customerPhone).catch(() => null);
+          if (found) {
+            setSame(found);
+            return;
+          }
+        }
         const job = await createJob.mutateAsync({
           values,
           madeCustomerId: madeCustomer.current,
@@ -53,8 +84,37 @@ export function NewJobForm() {
                 { value: 'existing', label: 'Existing customer' },
               ]}
             />
+            <SameCustomerWatch
+              email={form.watch('customerEmail')}
+              phone={form.watch('customerPhone')}
+              active={form.watch('customerMode') === 'new' && !newAnyway.current}
+              onFound={setSame}
+            />
+            {same && form.watch('customerMode') === 'new' ? (
+              <Alert tone="warning" title="Use the existing customer?">
+                <p>
+                  {same.name} already has {[same.email, same.phone].filter(Boolean).join(' · ')}.
+                </p>
+                <div className="mt-2 flex flex-wrap gap-2">
+                  <Button
+                    onClick={() => {
+                      form.setValue('customerMode', 'existing');
+                      form.setValue('customerId', same.id, { shouldValidate: true });
+                      setPicked(same.name);
+                      setSame(null);
+                      void fillSite(form, same);
+                    }}
+                  >
+                    Use {same.name}
+                  </Button>
+                  <Button type="submit" variant="secondary" onClick={() => (newAnyway.current = true)}>
+                    No, a new customer
+                  </Button>
+                </div>
+              </Alert>
+            ) : null}
             {form.watch('customerMode') === 'existing' ? (
-              <CustomerPicker />
+              <CustomerPicker key={picked} initialSearch={picked} onPick={(c) => void fillSite(form, c)} />
             ) : (
               <div className="grid gap-4 sm:grid-cols-3">
                 <TextField name="customerName" label="Customer name" autoComplete="off" />
@@ -80,4 +140,34 @@ export function NewJobForm() {
       )}
     </Form>
   );
+}
+
+/** Asks the server, a moment after the e-mail or phone is typed, whether a customer already has it. */
+function SameCustomerWatch({
+  email,
+  phone,
+  active,
+  onFound,
+}: {
+  email: string;
+  phone: string;
+  active: boolean;
+  onFound: (c: CustomerRecord | null) => void;
+}) {
+  useEffect(() => {
+    if (!active || (email.trim() === '' && phone.trim() === '')) return;
+    let live = true;
+    const t = setTimeout(() => {
+      void findSameCustomer(email, phone)
+        .catch(() => null)
+        .then((c) => {
+          if (live && c) onFound(c);
+        });
+    }, 500);
+    return () => {
+      live = false;
+      clearTimeout(t);
+    };
+  }, [email, phone, active, onFound]);
+  return null;
 }

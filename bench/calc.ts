@@ -201,6 +201,9 @@ try {
       `  ${label}: median ${m.median.toFixed(3)} ms · p95 ${m.p95.toFixed(3)} ms (${m.runs} runs) — budget ≤ ${limitMs} ms median: ${m.median <= limitMs ? 'MET' : 'NOT MET'}`,
     );
   budget('40-room loads recompute incl. validation (homeLoad)', measure(loads40, { warmup: 500, runs: 3000 }), 1.6);
+  // The same home on a ducted system with its ducts in the attic (duct gains shared hour by hour).
+  const ducted = () => homeLoad({ home: { ...home, ducts: { location: 'attic', insulationR: 6 } } });
+  budget('40-room loads, ducts in the attic (homeLoad)', measure(ducted, { warmup: 500, runs: 3000 }), 1.6);
   report('full recompute incl. zod validation (computeDesign)', measure(full, { warmup: 500, runs: 3000 }));
   report('engine only, on validated inputs (computeDesignFromParsed)', measure(engine, { warmup: 2000, runs: 10000 }));
   // The incremental live path: one room re-parsed, its 24 hours recomputed (the home's air shares held

@@ -11,9 +11,7 @@ export function companySettingsRoutes(api: ApiRouter): void {
     policy: ANY_STAFF,
     response: settingsResponse,
     versioned: (out) => out.settings.version,
-    handler: async ({ em, actor }) => ({
-      settings: presentCompanySettings(await getCompanySettings(em, actor.companyId)),
-    }),
+    handler: async ({ service }) => ({ settings: presentCompanySettings(await getCompanySettings(service)) }),
   });
   api.route({
     method: 'put',
@@ -22,8 +20,8 @@ export function companySettingsRoutes(api: ApiRouter): void {
     body: putCompanySettingsSchema,
     response: settingsResponse,
     versioned: (out) => out.settings.version,
-    handler: async ({ em, actor, body, ifMatch }) => ({
-      settings: presentCompanySettings(await putCompanySettings(em, actor, ifMatch, body)),
+    handler: async ({ service, body, ifMatch }) => ({
+      settings: presentCompanySettings(await putCompanySettings(service, ifMatch, body)),
     }),
   });
 }

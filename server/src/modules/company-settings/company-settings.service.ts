@@ -1,14 +1,15 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import type { DesignConditions } from '@calc';
 import { NotFoundError } from '../../lib/errors';
-import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { CompanySchema } from '../companies/company.entity';
 import { assertVersion } from '../../lib/version-lock';
 import { presentCompanySettings, type SettingsView } from './company-settings.presenter';
 import { CompanySettingsSchema } from './company-settings.entity';
 import type { PutCompanySettingsInput } from './company-settings.schema';
 
-export async function getCompanySettings(em: EntityManager, companyId: string): Promise<SettingsView> {
+export async function getCompanySettings({ em, actor }: ServiceContext): Promise<SettingsView> {
+  const companyId = actor.companyId;
   const company = await em.findOne(CompanySchema, { id: companyId });
   if (!company) throw new NotFoundError('The company');
   const row = await em.findOne(CompanySettingsSchema, { company: companyId });
@@ -27,8 +28,7 @@ export async function companyDesignDefaults(em: EntityManager, companyId: string
 }
 
 export async function putCompanySettings(
-  em: EntityManager,
-  actor: Actor,
+  { em, actor }: ServiceContext,
   version: number,
   input: PutCompanySettingsInput,
 ): Promise<SettingsView> {

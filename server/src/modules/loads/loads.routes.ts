@@ -13,8 +13,8 @@ export function loadsRoutes(api: ApiRouter): void {
     policy: ANY_STAFF,
     params,
     response: loadsResponse,
-    handler: async ({ em, actor, params: p }) => {
-      const r = await jobLoads(em, actor, p.id);
+    handler: async ({ service, params: p }) => {
+      const r = await jobLoads(service, p.id);
       // calc's result is plain JSON by contract, so it is sent as calc made it.
       return {
         jobId: r.job.id,

@@ -1,5 +1,4 @@
 import { createHash } from 'node:crypto';
-import type { EntityManager } from '@mikro-orm/postgresql';
 import {
   designConditionsWarnings,
   homeLoad,
@@ -11,7 +10,7 @@ import {
 } from '@calc';
 import { NotFoundError, UnprocessableError } from '../../lib/errors';
 import { PureMemo } from '../../lib/pure-memo';
-import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { scopeSql } from '../jobs/job-reads';
 import type { Job } from '../jobs/job.entity';
 
@@ -41,7 +40,7 @@ function inputsKey(jobId: string, inputsText: string): string {
  * Recomputes the whole home from the saved inputs with calc's own homeLoad — the same
  * function the browser runs — so the numbers never depend on what a client sent.
  */
-export async function jobLoads(em: EntityManager, actor: Actor, jobId: string): Promise<JobLoads> {
+export async function jobLoads({ em, actor }: ServiceContext, jobId: string): Promise<JobLoads> {
   // One statement: the job in scope and its rooms' saved inputs in order, as text (parsed only when
   // they have to be worked out), and every input the result depends on as one text for the key.
   const scope = scopeSql(actor);

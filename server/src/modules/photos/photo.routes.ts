@@ -18,9 +18,9 @@ export function photoRoutes(api: ApiRouter): void {
     multipart: true,
     status: 201,
     response: photoResponse,
-    handler: async ({ em, actor, params, services, req, res }) => {
+    handler: async ({ service, params, services, req, res }) => {
       const file = await receiveUpload(req, res, services.config.UPLOAD_MAX_BYTES);
-      const photo = await addPhoto(em, actor, services.clock, services.storage, params, file);
+      const photo = await addPhoto({ ...service, storage: services.storage }, params, file);
       return { photo: presentPhoto(photo, params.jobId, params.roomId) };
     },
   });
@@ -31,8 +31,8 @@ export function photoRoutes(api: ApiRouter): void {
     params: photoParams,
     summary: 'The photo (JPEG, re-encoded without metadata)',
     response: rawResponse('image/jpeg'),
-    handler: async ({ em, actor, params, services, res }) => {
-      const photo = await findPhoto(em, actor, params);
+    handler: async ({ service, params, services, res }) => {
+      const photo = await findPhoto(service, params);
       const bytes = await photoBytes(services.storage, photo);
       res
         .status(200)
@@ -51,8 +51,8 @@ export function photoRoutes(api: ApiRouter): void {
     policy: JOB_EDITORS,
     params: photoParams,
     response: NO_CONTENT,
-    handler: async ({ em, actor, params, services }) => {
-      await deletePhoto(em, actor, services.clock, services.storage, params);
+    handler: async ({ service, params, services }) => {
+      await deletePhoto({ ...service, storage: services.storage }, params);
     },
   });
 }

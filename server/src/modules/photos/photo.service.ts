@@ -1,8 +1,6 @@
-import type { EntityManager } from '@mikro-orm/postgresql';
 import { randomUUID } from 'node:crypto';
 import { NotFoundError, UnprocessableError } from '../../lib/errors';
-import type { Actor } from '../../lib/route';
-import type { Clock } from '../../services/services';
+import type { ServiceContext } from '../../lib/service-context';
 import type { Storage } from '../../services/storage';
 import { touchJob } from '../jobs/job-access';
 import { findRoom } from '../rooms/room.service';
@@ -12,6 +10,11 @@ import { PhotoSchema, type Photo } from './photo.entity';
 
 const MAX_PHOTOS_PER_ROOM = 40;
 
+/** Photo writes also need the file storage. */
+export interface PhotoContext extends ServiceContext {
+  readonly storage: Storage;
+}
+
 export interface PhotoIds {
   jobId: string;
   roomId: string;
@@ -19,10 +22,7 @@ export interface PhotoIds {
 
 /** Cleans the image, stores the bytes under a fresh uuid, then records the row (removing the file if that fails). */
 export async function addPhoto(
-  em: EntityManager,
-  actor: Actor,
-  clock: Clock,
-  storage: Storage,
+  { em, actor, clock, storage }: PhotoContext,
   ids: PhotoIds,
   file: { buffer: Buffer; originalname: string },
 ): Promise<Photo> {
@@ -55,7 +55,7 @@ export async function addPhoto(
   }
 }
 
-export async function findPhoto(em: EntityManager, actor: Actor, ids: PhotoIds & { photoId: string }): Promise<Photo> {
+export async function findPhoto({ em, actor }: ServiceContext, ids: PhotoIds & { photoId: string }): Promise<Photo> {
   const { room } = await findRoom(em, actor, ids.jobId, ids.roomId);
   const photo = await em.findOne(PhotoSchema, { id: ids.photoId, room: room.id });
   if (!photo) throw new NotFoundError('The photo');
@@ -68,14 +68,9 @@ export async function photoBytes(storage: Storage, photo: Photo): Promise<Buffer
   return bytes;
 }
 
-export async function deletePhoto(
-  em: EntityManager,
-  actor: Actor,
-  clock: Clock,
-  storage: Storage,
-  ids: PhotoIds & { photoId: string },
-): Promise<void> {
-  const photo = await findPhoto(em, actor, ids);
+export async function deletePhoto(ctx: PhotoContext, ids: PhotoIds & { photoId: string }): Promise<void> {
+  const { em, clock, storage } = ctx;
+  const photo = await findPhoto(ctx, ids);
   await em.transactional(async (tx) => {
     await tx.nativeDelete(PhotoSchema, { id: photo.id });
     await touchJob(tx, ids.jobId, clock.now());

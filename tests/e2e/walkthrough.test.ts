@@ -178,7 +178,10 @@ describe('a salesperson walks a home on a phone', () => {
     // Each room's drill-down opens to its parts at its peak hour, walls and windows by façade
     const drill = page.getByText(/^What makes up the peak/).first();
     await drill.click();
-    await page.getByRole('row', { name: /^facing/ }).first().waitFor();
+    await page
+      .getByRole('row', { name: /^facing/ })
+      .first()
+      .waitFor();
     await drill.scrollIntoViewIfNeeded();
     await page.screenshot({ path: `${SHOTS}/loads-drilldown-375.png` });
     await context.close();

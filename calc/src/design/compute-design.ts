@@ -136,6 +136,8 @@ export interface ParsedDesignRequest {
   readonly priceBook: PriceBook;
   readonly pricing: Pricing;
   readonly policy: SizingPolicy;
+  /** The home's loads when the caller already has them (several options on one home): skips the recompute. */
+  readonly loads?: HomeLoad;
 }
 
 /**
@@ -150,8 +152,9 @@ export function computeDesignFromParsed({
   priceBook,
   pricing,
   policy,
+  loads: given,
 }: ParsedDesignRequest): DesignResult {
-  const loads = homeLoadFromParsed(home);
+  const loads = given ?? homeLoadFromParsed(home);
   const dc = home.designConditions;
   const indoorUnits = byKey(catalog.indoorUnits, (u) => u.key);
   const outdoorUnits = byKey(catalog.outdoorUnits, (u) => u.key);

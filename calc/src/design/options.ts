@@ -1,7 +1,12 @@
+import { homeLoadFromParsed } from '../loads/home-load';
+import { parseOrThrow } from '../parse';
 import { compareOptions } from '../pricing/price';
-import type { PricingInput } from '../pricing/schemas';
-import type { DesignInput } from '../schemas/design';
-import { computeDesign, type DesignRequest, type DesignResult } from './compute-design';
+import { priceBookSchema, pricingSchema, type PricingInput } from '../pricing/schemas';
+import { designSchema, type DesignInput } from '../schemas/design';
+import { equipmentCatalogSchema } from '../schemas/equipment';
+import { homeInputSchema } from '../schemas/home';
+import { DEFAULT_SIZING_POLICY, sizingPolicySchema } from '../sizing/policy';
+import { computeDesignFromParsed, type DesignRequest, type DesignResult } from './compute-design';
 
 /** One proposal option: its own design and pricing on the same home, catalog and price book. */
 export interface OptionRequest {
@@ -13,7 +18,9 @@ export interface OptionRequest {
 
 /**
  * Up to three (or more) options side by side: each option's full design result, and a
- * comparison row with its total and its difference from the first option, cents.
+ * comparison row with its total and its difference from the first option, cents. The home,
+ * catalog, price book and policy are validated once and the home's loads computed once for all
+ * options (they share the home); each option's design and pricing are validated on their own.
  */
 export function computeOptions({
   options,
@@ -22,10 +29,23 @@ export function computeOptions({
   results: { key: string; name: string; result: DesignResult }[];
   comparison: ReturnType<typeof compareOptions>;
 } {
+  const home = parseOrThrow(homeInputSchema, shared.home);
+  const catalog = parseOrThrow(equipmentCatalogSchema, shared.catalog);
+  const priceBook = parseOrThrow(priceBookSchema, shared.priceBook);
+  const policy = parseOrThrow(sizingPolicySchema, shared.policy ?? DEFAULT_SIZING_POLICY);
+  const loads = homeLoadFromParsed(home);
   const results = options.map((o) => ({
     key: o.key,
     name: o.name,
-    result: computeDesign({ ...shared, design: o.design, pricing: o.pricing }),
+    result: computeDesignFromParsed({
+      home,
+      design: parseOrThrow(designSchema, o.design),
+      catalog,
+      priceBook,
+      pricing: parseOrThrow(pricingSchema, o.pricing),
+      policy,
+      loads,
+    }),
   }));
   return {
     results,

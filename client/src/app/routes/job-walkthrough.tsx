@@ -1,4 +1,5 @@
-import { lazy } from 'react';
+import { lazy, Suspense } from 'react';
+import { QueryWidgetBoundary } from '../../components/errors/query-widget-boundary';
 import { useParams } from 'react-router-dom';
 import { z } from 'zod';
 import { JobEditsProvider } from '../../entities/job/job-edits';
@@ -8,6 +9,11 @@ import { useWalkthroughJobEdits } from '../../features/walkthrough/sync/job-edit
 // Folded under the walk-through and not needed to start typing a room: it loads after the page (issue 11).
 const JobDetailsPanel = lazy(async () => ({
   default: (await import('../../features/jobs/components/job-details-panel')).JobDetailsPanel,
+}));
+
+// After the rooms, on the phone: the salesperson's first price (desk feature), loaded after the page.
+const FirstPrice = lazy(async () => ({
+  default: (await import('../../features/desk/components/first-price')).FirstPrice,
 }));
 
 const jobParams = z.object({ jobId: z.uuid({ message: 'That is not a job address.' }) });
@@ -24,8 +30,17 @@ export function JobWalkthrough({ jobId }: { jobId: string }) {
   );
 }
 
-/** /jobs/:jobId — the loader is in app/job-routes.tsx. */
+/** /jobs/:jobId — the walk-through, then the first price; the loader is in app/job-route-loaders.ts. */
 export default function JobWalkthroughRoute() {
   const { jobId } = jobParams.parse(useParams());
-  return <JobWalkthrough jobId={jobId} />;
+  return (
+    <>
+      <JobWalkthrough jobId={jobId} />
+      <QueryWidgetBoundary name="the first price">
+        <Suspense fallback={null}>
+          <FirstPrice jobId={jobId} />
+        </Suspense>
+      </QueryWidgetBoundary>
+    </>
+  );
 }

@@ -13,7 +13,7 @@ export function mailRoutes(api: ApiRouter): void {
     path: '/',
     policy: OWNER,
     response: mailMessagesResponse,
-    handler: async ({ em, actor }) => ({ messages: (await listMessages(em, actor)).map(presentMessage) }),
+    handler: async ({ service }) => ({ messages: (await listMessages(service)).map(presentMessage) }),
   });
   api.route({
     method: 'post',
@@ -21,8 +21,8 @@ export function mailRoutes(api: ApiRouter): void {
     policy: OWNER,
     params: messageIdParams,
     response: mailMessageResponse,
-    handler: async ({ em, actor, params, services }) => ({
-      message: presentMessage(await retryMessage(em, services.queue, actor, params.id)),
+    handler: async ({ service, params, services }) => ({
+      message: presentMessage(await retryMessage({ ...service, queue: services.queue }, params.id)),
     }),
   });
 }

@@ -1,6 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { ConflictError, NotFoundError } from '../../lib/errors';
-import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import type { Mailer } from '../../services/mailer';
 import type { Queue } from '../../services/queue';
 import type { Clock } from '../../services/services';
@@ -18,6 +18,11 @@ export interface NewMessage {
   subject: string;
   /** Null only for kinds whose body is made when sent (password-reset). */
   text: string | null;
+}
+
+/** "Try again" also needs the job queue. */
+export interface MailContext extends ServiceContext {
+  readonly queue: Queue;
 }
 
 const jobKey = (messageId: string) => `email:${messageId}`;
@@ -106,7 +111,7 @@ export async function sendMessage(em: EntityManager, deps: SendDeps, messageId: 
   }
 }
 
-export function listMessages(em: EntityManager, actor: Actor): Promise<OutgoingMessage[]> {
+export function listMessages({ em, actor }: ServiceContext): Promise<OutgoingMessage[]> {
   return em.find(
     OutgoingMessageSchema,
     { company: actor.companyId },
@@ -115,7 +120,7 @@ export function listMessages(em: EntityManager, actor: Actor): Promise<OutgoingM
 }
 
 /** "Try again": sends a message that has not gone out now, with a fresh set of tries. */
-export async function retryMessage(em: EntityManager, queue: Queue, actor: Actor, id: string) {
+export async function retryMessage({ em, actor, queue }: MailContext, id: string) {
   return em.transactional(async (tx) => {
     const message = await tx.findOne(OutgoingMessageSchema, { id, company: actor.companyId });
     if (!message) throw new NotFoundError('The message');

@@ -26,3 +26,21 @@ export async function axeViolations(page: Page): Promise<AxeFinding[]> {
     }));
   });
 }
+
+/** Pages checked so far in this run, by path with ids as ":id" (what a journey can say it covered). */
+export const checkedPages = new Set<string>();
+
+const pattern = (path: string) => path.replace(/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/g, ':id');
+
+/**
+ * The issue's bar for every page a journey visits: no serious or critical WCAG 2 A/AA violation.
+ * Returns the lesser findings so a journey may print them.
+ */
+export async function expectNoSeriousViolations(page: Page): Promise<AxeFinding[]> {
+  const found = await axeViolations(page);
+  const serious = found.filter((f) => f.impact === 'serious' || f.impact === 'critical');
+  checkedPages.add(pattern(new URL(page.url()).pathname));
+  if (serious.length > 0)
+    throw new Error(`axe on ${new URL(page.url()).pathname}: ${JSON.stringify(serious, null, 2)}`);
+  return found.filter((f) => !serious.includes(f));
+}

@@ -3,6 +3,7 @@ import sharp from 'sharp';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it, onTestFailed } from 'vitest';
 import { demoAccounts } from '../../fixtures/seed';
+import { expectNoSeriousViolations } from './axe';
 import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
 
 let e: E2E;
@@ -61,6 +62,8 @@ describe('a salesperson walks a home on a phone', () => {
     // Customer and job
     const tag = randomUUID().slice(0, 6);
     await page.goto('/jobs');
+    await page.getByRole('heading', { name: 'Jobs' }).waitFor();
+    await expectNoSeriousViolations(page);
     await page
       .getByRole('link', { name: 'New job' })
       .or(page.getByRole('button', { name: 'New job' }))
@@ -74,6 +77,7 @@ describe('a salesperson walks a home on a phone', () => {
     await page.getByLabel('State or region').fill('Demo State');
     await page.getByLabel('Postal code').fill('00001');
     await page.screenshot({ path: `${SHOTS}/new-job-375.png`, fullPage: true });
+    await expectNoSeriousViolations(page);
     await page.getByRole('button', { name: 'Create job and start the walk-through' }).click();
     await page.waitForURL(/\/jobs\/[0-9a-f-]{36}$/);
     const jobId = new URL(page.url()).pathname.split('/').pop() ?? '';
@@ -123,6 +127,7 @@ describe('a salesperson walks a home on a phone', () => {
       .setInputFiles({ name: 'bedroom-west.jpg', mimeType: 'image/jpeg', buffer: jpeg });
     await page.getByRole('img', { name: /Photo 1 of 1/ }).waitFor({ timeout: 15_000 });
     await page.screenshot({ path: `${SHOTS}/walkthrough-375.png`, fullPage: true });
+    await expectNoSeriousViolations(page);
 
     // Room 4 is edited with the network cut, then the network comes back
     await addRoom(page, 'Kitchen');
@@ -184,6 +189,11 @@ describe('a salesperson walks a home on a phone', () => {
       .waitFor();
     await drill.scrollIntoViewIfNeeded();
     await page.screenshot({ path: `${SHOTS}/loads-drilldown-375.png` });
+    await expectNoSeriousViolations(page);
+    await page.goto(`/jobs/${jobId}/loads/print`);
+    await page.getByText('Heating and cooling load summary').waitFor();
+    await expectNoSeriousViolations(page);
+    await page.screenshot({ path: `${SHOTS}/print-375.png`, fullPage: true });
     await context.close();
 
     const desk = await e.newPage(DESKTOP);
@@ -197,6 +207,7 @@ describe('a salesperson walks a home on a phone', () => {
       await desk.page.goto(path);
       await desk.page.waitForLoadState('networkidle');
       await desk.page.screenshot({ path: `${SHOTS}/${name}-1440.png`, fullPage: true });
+      await expectNoSeriousViolations(desk.page);
     }
     await desk.context.close();
   });

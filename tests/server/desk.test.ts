@@ -77,6 +77,12 @@ describe('bad input: problem+json with field paths, nothing stored', () => {
     const unknown = await patch(estimator, url, o.version).send({ design });
     expectProblem(unknown, 400);
     expect(unknown.body.errors[0].path).toBe('design.zones.0.indoorUnitKey');
+    const kit = singleZone(rooms[0] ?? '');
+    const noKit = await patch(estimator, url, o.version).send({
+      design: { ...kit, systems: [{ ...kit.systems[0], heatKitKey: 'NO-SUCH-KIT' }] },
+    });
+    expectProblem(noKit, 400);
+    expect(noKit.body.errors[0].path).toBe('design.systems.0.heatKitKey');
     const ghost = singleZone('00000000-0000-4000-8000-000000000000');
     const noRoom = await patch(estimator, url, o.version).send({ design: ghost });
     expectProblem(noRoom, 400);

@@ -125,12 +125,15 @@ export function parseHome(home: HomeInput | { problem: FieldError }): ParsedHome
   }
 }
 
-/** The models a design names (indoor units of its zones, outdoor units of its systems). */
+/** The models a design names (indoor units of its zones, outdoor units and heat kits of its systems). */
 export function modelKeysOf(design: DesignOption['design']): string[] {
   if (!design) return [];
   const keys = new Set<string>();
   for (const z of design.zones ?? []) keys.add(z.indoorUnitKey);
-  for (const s of design.systems ?? []) keys.add(s.outdoorUnitKey);
+  for (const s of design.systems ?? []) {
+    keys.add(s.outdoorUnitKey);
+    if (s.heatKitKey) keys.add(s.heatKitKey);
+  }
   return [...keys];
 }
 

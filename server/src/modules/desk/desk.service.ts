@@ -89,6 +89,9 @@ function checkDesign(desk: DeskJob, option: DesignOption, design: DesignInput): 
         path: `design.systems.${i}.outdoorUnitKey`,
         message: 'Choose an outdoor unit the catalog offers.',
       });
+    const kit = s.heatKitKey ? models.get(s.heatKitKey) : undefined;
+    if (s.heatKitKey && !before.has(s.heatKitKey) && (!kit || !kit.active || kit.kind !== 'heat-kit'))
+      errors.push({ path: `design.systems.${i}.heatKitKey`, message: 'Choose a heat kit the catalog offers.' });
   });
   if (errors.length) throw new ValidationError(errors);
   if ('problem' in desk.home) throw new UnprocessableError(desk.home.problem.message, { errors: [desk.home.problem] });

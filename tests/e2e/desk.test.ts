@@ -141,6 +141,11 @@ describe('the estimator’s desk', () => {
     await page.getByRole('tab', { name: new RegExp(`${name} copy`) }).waitFor();
     await page.getByRole('heading', { name: 'Options side by side' }).waitFor();
 
+    // The copy takes calc's suggestion from the catalog, with why each unit was chosen.
+    await page.getByRole('tab', { name: new RegExp(`${name} copy`) }).click();
+    await page.getByRole('button', { name: 'Suggest units from the catalog' }).click();
+    await page.getByText('Why these units').waitFor();
+
     // Not ready while the discount waits: the reason is said.
     await page.getByRole('button', { name: 'Mark ready to propose' }).click();
     await page.getByText('A discount is waiting for the owner’s approval.').first().waitFor();

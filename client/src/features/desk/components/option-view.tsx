@@ -24,6 +24,9 @@ import { PricingForm } from './pricing-form';
 import { SizingVerdict } from './sizing-verdict';
 import { SystemResults } from './system-results';
 import { TakeoffTable } from './takeoff-table';
+import { useSuggest } from '../api/suggest';
+import { useUpdateOption } from '../api/update-option';
+import { designSchema } from '@calc';
 import { Why } from './why';
 
 /** Every why the server sent for this option, by key (calc's explanations; a shape calc changes is left out). */
@@ -69,6 +72,25 @@ export function OptionView({
   const copy = useCreateOption(jobId);
   const remove = useDeleteOption(jobId);
   const [copyName, setCopyName] = useState(`${option.name} (copy)`);
+  const suggest = useSuggest(jobId);
+  const update = useUpdateOption(jobId);
+  const [revision, setRevision] = useState(0);
+  const [reasons, setReasons] = useState<ExplanationView[]>([]);
+  const handleSuggest = async () => {
+    const stored = designSchema.safeParse(option.design);
+    const zones = stored.success
+      ? stored.data.zones.map((z) => ({ key: z.key, name: z.name, roomIds: [...z.roomIds] }))
+      : undefined;
+    const s = await suggest.mutateAsync(zones);
+    await update.mutateAsync({ option, changes: { design: s.design } });
+    setReasons(
+      s.reasons.flatMap((r) => {
+        const p = explanationView.safeParse(r);
+        return p.success ? [p.data] : [];
+      }),
+    );
+    setRevision((n) => n + 1);
+  };
   const view = option.result ? viewOf(option.result) : null;
   const whys = whysOf(option);
   return (
@@ -90,7 +112,45 @@ export function OptionView({
       <div className="grid gap-4 xl:grid-cols-[minmax(0,5fr)_minmax(0,4fr)]">
         <div className="flex flex-col gap-4">
           <Card title="Design">
-            <DesignForm key={option.id} jobId={jobId} option={option} rooms={rooms} models={models} canEdit={canEdit} />
+            {canEdit ? (
+              <div className="flex flex-col gap-2">
+                <div className="flex flex-wrap items-center gap-2">
+                  <Button
+                    variant="secondary"
+                    busy={suggest.isPending || update.isPending}
+                    onClick={() => void handleSuggest().catch(() => undefined)}
+                  >
+                    Suggest units from the catalog
+                  </Button>
+                  <span className="text-sm text-muted">
+                    Replaces this option’s units; you can change anything after.
+                  </span>
+                </div>
+                {suggest.isError || update.isError ? (
+                  <p role="alert" className="text-sm font-semibold text-danger">
+                    {errorMessage(suggest.error ?? update.error)}
+                  </p>
+                ) : null}
+                {reasons.length > 0 ? (
+                  <details className="rounded-md border border-line p-2">
+                    <summary className="min-h-touch cursor-pointer font-semibold">Why these units</summary>
+                    <div className="mt-2 flex flex-col gap-1">
+                      {reasons.map((r) => (
+                        <Why key={r.key} e={r} />
+                      ))}
+                    </div>
+                  </details>
+                ) : null}
+              </div>
+            ) : null}
+            <DesignForm
+              key={`${option.id}:${revision}`}
+              jobId={jobId}
+              option={option}
+              rooms={rooms}
+              models={models}
+              canEdit={canEdit}
+            />
           </Card>
           {office ? (
             <Card title="Pricing">

@@ -10,7 +10,7 @@ export function userRoutes(api: ApiRouter): void {
     path: '/',
     policy: OWNER,
     response: usersResponse,
-    handler: async ({ em, actor }) => ({ users: (await listUsers(em, actor)).map(presentUser) }),
+    handler: async ({ service }) => ({ users: (await listUsers(service)).map(presentUser) }),
   });
   api.route({
     method: 'get',
@@ -18,7 +18,7 @@ export function userRoutes(api: ApiRouter): void {
     policy: OWNER,
     params: userIdParams,
     response: userResponse,
-    handler: async ({ em, actor, params }) => ({ user: presentUser(await getUser(em, actor, params.id)) }),
+    handler: async ({ service, params }) => ({ user: presentUser(await getUser(service, params.id)) }),
   });
   api.route({
     method: 'post',
@@ -27,8 +27,8 @@ export function userRoutes(api: ApiRouter): void {
     body: createUserSchema,
     status: 201,
     response: userResponse,
-    handler: async ({ em, actor, body, services }) => ({
-      user: presentUser(await createUser(em, actor, services.queue, body)),
+    handler: async ({ service, body, services }) => ({
+      user: presentUser(await createUser({ ...service, queue: services.queue }, body)),
     }),
   });
   api.route({
@@ -38,8 +38,8 @@ export function userRoutes(api: ApiRouter): void {
     params: userIdParams,
     body: updateUserSchema,
     response: userResponse,
-    handler: async ({ em, actor, params, body }) => ({
-      user: presentUser(await updateUser(em, actor, params.id, body)),
+    handler: async ({ service, params, body }) => ({
+      user: presentUser(await updateUser(service, params.id, body)),
     }),
   });
   api.route({
@@ -48,8 +48,8 @@ export function userRoutes(api: ApiRouter): void {
     policy: OWNER,
     params: userIdParams,
     response: sessionsEndedResponse,
-    handler: async ({ em, actor, params, req }) => ({
-      ended: await endUserSessions(em, actor, params.id, req.sessionID),
+    handler: async ({ service, params, req }) => ({
+      ended: await endUserSessions(service, params.id, req.sessionID),
     }),
   });
 }

@@ -1,6 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { ConflictError, NotFoundError, UnprocessableError } from '../../lib/errors';
-import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { hashPassword } from '../../services/passwords';
 import type { Queue } from '../../services/queue';
 import { queueMessage } from '../mail/mail.service';
@@ -8,18 +8,23 @@ import { CompanySchema } from '../companies/company.entity';
 import { UserSchema, type User } from './user.entity';
 import type { CreateUserInput, UpdateUserInput } from './user.schema';
 
-export function listUsers(em: EntityManager, actor: Actor): Promise<User[]> {
+/** Adding a person also queues their welcome e-mail. */
+export interface UserContext extends ServiceContext {
+  readonly queue: Queue;
+}
+
+export function listUsers({ em, actor }: ServiceContext): Promise<User[]> {
   return em.find(UserSchema, { company: actor.companyId }, { orderBy: { name: 'asc' }, populate: ['company'] });
 }
 
 /** A user of the actor's company, or 404 — whether the id belongs to another company or to nobody. */
-export async function getUser(em: EntityManager, actor: Actor, id: string): Promise<User> {
+export async function getUser({ em, actor }: ServiceContext, id: string): Promise<User> {
   const user = await em.findOne(UserSchema, { id, company: actor.companyId }, { populate: ['company'] });
   if (!user) throw new NotFoundError('The user');
   return user;
 }
 
-export async function createUser(em: EntityManager, actor: Actor, queue: Queue, input: CreateUserInput): Promise<User> {
+export async function createUser({ em, actor, queue }: UserContext, input: CreateUserInput): Promise<User> {
   if (await em.count(UserSchema, { email: input.email }))
     throw new ConflictError('That e-mail address already has an account.');
   const user = em.create(UserSchema, {
@@ -61,13 +66,15 @@ export async function endSessionsOf(em: EntityManager, userId: string, exceptSid
 }
 
 /** The owner's "sign out everywhere" for one person; for the owner themself, every session but this one. */
-export async function endUserSessions(em: EntityManager, actor: Actor, id: string, currentSid: string) {
-  const user = await getUser(em, actor, id);
+export async function endUserSessions(ctx: ServiceContext, id: string, currentSid: string) {
+  const { em, actor } = ctx;
+  const user = await getUser(ctx, id);
   return endSessionsOf(em, user.id, user.id === actor.userId ? currentSid : undefined);
 }
 
-export async function updateUser(em: EntityManager, actor: Actor, id: string, input: UpdateUserInput): Promise<User> {
-  const user = await getUser(em, actor, id);
+export async function updateUser(ctx: ServiceContext, id: string, input: UpdateUserInput): Promise<User> {
+  const { em, actor } = ctx;
+  const user = await getUser(ctx, id);
   const losesOwner = user.role === 'owner' && ((input.role && input.role !== 'owner') || input.active === false);
   if (losesOwner) {
     if (user.id === actor.userId)

@@ -26,6 +26,7 @@ describe('a room’s load chart', () => {
         sensible={each((i) => 1000 + i)}
         latent={each(() => 10)}
         heatLoss={each((i) => 2000 + i)}
+        ducts
       />,
     );
     const figure = screen.getByRole('figure', { name: "Where Bedroom 2's load comes from" });
@@ -38,6 +39,13 @@ describe('a room’s load chart', () => {
     // first component: 1000 sensible + 10 latent = 1,010 Btu/h cooling; 2,000 Btu/h heat loss
     expect(rows[1]).toHaveTextContent('1,010 Btu/h');
     expect(rows[1]).toHaveTextContent('2,000 Btu/h');
+  });
+
+  it('has no Ducts row unless a ducted system serves the home', () => {
+    render(<ComponentChart sensible={each(() => 1)} latent={each(() => 0)} heatLoss={each(() => 1)} />);
+    const names = [...document.querySelectorAll('th[scope="row"]')].map((th) => th.textContent);
+    expect(names).toHaveLength(COMPONENT_KEYS.length - 1);
+    expect(names).not.toContain('Ducts');
   });
 });
 

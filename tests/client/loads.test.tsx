@@ -129,3 +129,44 @@ describe('loads page', () => {
     expect(after).not.toBe(before);
   });
 });
+
+/** The component names in a room card's breakdown table (the rows' headers). */
+async function breakdownRows() {
+  // the chart is its own lazily loaded chunk, drawn after an idle moment
+  const figure = await screen.findByRole('figure', { name: "Where Bedroom 2's load comes from" }, { timeout: 5000 });
+  return [...figure.querySelectorAll('th[scope="row"]')].map((th) => th.textContent);
+}
+
+describe('issue 9 gaps', () => {
+  it('leaves the Ducts row out of a room’s breakdown when no ducted system serves the home', async () => {
+    mockJob(jobRecord({ house: {} }));
+    renderAt(`/jobs/${JOB_ID}/loads`, <LoadsPage />);
+    const rows = await breakdownRows();
+    expect(rows).toContain('Walls');
+    expect(rows).not.toContain('Ducts');
+  });
+
+  it('shows the Ducts row when the home has ducts', async () => {
+    mockJob(jobRecord({ house: { ducts: { location: 'attic' } } }));
+    renderAt(`/jobs/${JOB_ID}/loads`, <LoadsPage />);
+    expect(await breakdownRows()).toContain('Ducts');
+  });
+
+  it('prints the caveat when no ground temperature is entered and the heating design stands in', async () => {
+    const basement = {
+      ...bedroomInput,
+      exposedWalls: [{ ...bedroomInput.exposedWalls[0], belowGradeFt: 4 }],
+      below: { kind: 'basement-floor', depthFt: 6 },
+    };
+    mockFetch({
+      [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord() }),
+      [`GET /api/jobs/${JOB_ID}/rooms`]: json(200, { rooms: [roomRecord(basement, 3)] }),
+    });
+    renderAt(`/jobs/${JOB_ID}/loads/print`, <LoadPrintPage />);
+    const sheet = await printedSheet();
+    // the same words the loads page shows (designDayLine), from calc's designDay.groundAssumed
+    expect(sheet).toHaveTextContent(
+      `no ground temperature entered, so the outdoor heating design ${designConditions.outdoorHeatingDryBulbF} °F stands in (overstates their loss)`,
+    );
+  });
+});

@@ -8,6 +8,8 @@ interface Props {
   heatLoss: LoadComponents;
   /** Names the chart for screen readers, e.g. "Bedroom 2". */
   roomName?: string | undefined;
+  /** True when a ducted system serves the home (house.ducts set); without one the "Ducts" row is left out. */
+  ducts?: boolean | undefined;
 }
 
 const btuh = (n: number) => `${Math.round(n).toLocaleString('en-US')} Btu/h`;
@@ -17,8 +19,8 @@ const btuh = (n: number) => `${Math.round(n).toLocaleString('en-US')} Btu/h`;
  * Cool colour for cooling, warm for heating (both ≥ 3:1 on white). The drawing is not a
  * keyboard stop (nothing in it does anything); its figures are in the table under it.
  */
-export function ComponentChart({ sensible, latent, heatLoss, roomName }: Props) {
-  const data = COMPONENT_KEYS.map((k) => ({
+export function ComponentChart({ sensible, latent, heatLoss, roomName, ducts = false }: Props) {
+  const data = COMPONENT_KEYS.filter((k) => ducts || k !== 'ducts').map((k) => ({
     name: COMPONENT_LABELS[k],
     cooling: sensible[k] + latent[k],
     heating: heatLoss[k],

@@ -29,6 +29,7 @@ export function LoadsPage({ waiting = 0 }: { waiting?: number }) {
       return p.success ? [[r.id, p.data] as const] : [];
     }),
   );
+  const ducted = job.house?.ducts != null;
   const conditions = designConditionsSchema.safeParse(job.designConditions ?? {});
   const conditionWarnings = conditions.success ? designConditionsWarnings(conditions.data) : [];
 
@@ -71,7 +72,7 @@ export function LoadsPage({ waiting = 0 }: { waiting?: number }) {
           <div className="grid gap-4 lg:grid-cols-2">
             {result.value.load.rooms.map((l) => (
               <QueryWidgetBoundary key={l.roomId} name={`the loads of ${l.roomName}`}>
-                <RoomLoadCard load={l} room={parsedRooms.get(l.roomId)} />
+                <RoomLoadCard load={l} room={parsedRooms.get(l.roomId)} ducts={ducted} />
               </QueryWidgetBoundary>
             ))}
           </div>

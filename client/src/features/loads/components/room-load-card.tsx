@@ -4,7 +4,16 @@ import { LazyComponentChart } from './lazy-component-chart';
 import { LoadFigures } from './load-figures';
 
 /** One room on the loads page: the figures, the breakdown and any plain-word warnings. */
-export function RoomLoadCard({ load, room }: { load: RoomLoad; room: Room | undefined }) {
+export function RoomLoadCard({
+  load,
+  room,
+  ducts = false,
+}: {
+  load: RoomLoad;
+  room: Room | undefined;
+  /** A ducted system serves the home: the breakdown has a "Ducts" row. */
+  ducts?: boolean;
+}) {
   const warnings = room ? roomPlausibilityWarnings(room) : [];
   return (
     <article
@@ -20,6 +29,7 @@ export function RoomLoadCard({ load, room }: { load: RoomLoad; room: Room | unde
         latent={load.latentGain}
         heatLoss={load.heatLoss}
         roomName={load.roomName}
+        ducts={ducts}
       />
       <ComponentDrilldown load={load} />
       {warnings.length > 0 ? (

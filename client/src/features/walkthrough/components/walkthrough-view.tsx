@@ -118,9 +118,11 @@ export function WalkthroughView({
             <div className="flex flex-wrap items-center gap-2">
               <LiveSaveStatus />
               {/* On a phone the pinned load bar and the link under the header take its place. */}
-              <Link className={`${buttonClass('secondary')} hidden sm:inline-flex`} to={jobPaths.loads(job.id)}>
-                Loads summary
-              </Link>
+              <span className="hidden sm:block">
+                <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
+                  Loads summary
+                </Link>
+              </span>
             </div>
           </div>
           <nav aria-label="Rooms of this job" className="flex flex-col gap-2 lg:flex-row lg:items-center lg:gap-4">

@@ -82,6 +82,11 @@ export default defineConfig({
         codeSplitting: {
           groups: [
             {
+              // Small app modules every page, sign-in included, loads: one file rather than five.
+              name: 'core',
+              test: /[\\/]client[\\/]src[\\/](lib[\\/](api-error|offline[\\/](last-person|online))|components[\\/]ui[\\/](button|spinner))\.tsx?$/,
+            },
+            {
               name: 'framework',
               test: /[\\/]node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom|@tanstack[\\/](query-core|react-query))[\\/]/,
             },

@@ -9,6 +9,8 @@ import {
   columnsForUnits,
   diffImport,
   metricVariant,
+  recordFromCells,
+  recordToCells,
   type CsvColumn,
 } from '@calc';
 
@@ -152,5 +154,47 @@ describe('metric CSV columns', () => {
     cells[3] = '25';
     const d = diffImport({ dataset: kits, header, rows: [{ line: 2, cells }], current: held, units: 'metric' });
     expect(d.rows.map((r) => r.status)).toEqual(['unchanged']);
+  });
+});
+
+describe('the materials takeoff_item column (issue 13)', () => {
+  const ds = DATASETS.materials;
+  const record = {
+    key: 'WIRE-10-2',
+    description: 'Branch circuit cable 10/2 with ground',
+    unit: 'ft',
+    category: 'electrical',
+    costCents: 145,
+    takeoffItem: 'wire:nm-b:10awg',
+    active: true,
+  };
+  it('exports and re-imports the takeoff item, in both unit systems, and empty stays absent', () => {
+    for (const units of ['imperial', 'metric'] as const) {
+      const columns = columnsForUnits(ds.columns, units);
+      expect(columns.map((c) => c.name)).toContain('takeoff_item');
+      const read = { ...ds, columns };
+      const cells = recordToCells(read, ds.schema.parse(record));
+      expect(cells[columns.findIndex((c) => c.name === 'takeoff_item')]).toBe('wire:nm-b:10awg');
+      const back = recordFromCells(read, Object.fromEntries(columns.map((c, i) => [c.name, cells[i] ?? ''])));
+      expect(back).toEqual({ ok: true, record: ds.schema.parse(record) });
+      const blank = recordFromCells(
+        read,
+        Object.fromEntries(columns.map((c, i) => [c.name, c.name === 'takeoff_item' ? '' : (cells[i] ?? '')])),
+      );
+      expect(blank.ok && 'takeoffItem' in blank.record).toBe(false);
+    }
+  });
+  it('refuses a takeoff item that breaks the key rule, naming the column', () => {
+    const cells = recordToCells(ds, ds.schema.parse(record));
+    const named = Object.fromEntries(ds.columns.map((c, i) => [c.name, cells[i] ?? '']));
+    expect(recordFromCells(ds, { ...named, takeoff_item: 'wire 10 awg' })).toEqual({
+      ok: false,
+      errors: [
+        {
+          column: 'takeoff_item',
+          message: 'Takeoff item may use letters, digits, dots, dashes, slashes and colons only',
+        },
+      ],
+    });
   });
 });

@@ -90,3 +90,79 @@ describe('price book records → the engine price book, then a full design', () 
     expect(line('refrigerant:R-410A')?.quantity).toBe(0.44); // 7 oz ÷ 16 = 0.4375 → 0.44 lb
   });
 });
+
+describe('a material naming its takeoff item (issue 13)', () => {
+  const mat = (key: string, costCents: number, takeoffItem?: string, active = true) =>
+    materialSchema.parse({
+      key,
+      description: `Material ${key}`,
+      unit: 'each',
+      category: 'materials',
+      costCents,
+      active,
+      ...(takeoffItem === undefined ? {} : { takeoffItem }),
+    });
+  it('prices the takeoff item it names, at its own cost and description', () => {
+    const pb = designPriceBookFromCompany({ models: [], materials: [mat('WS-3', 790, 'wall-sleeve')] });
+    expect(pb.items['wall-sleeve']).toEqual({ unitCostCents: 790, description: 'Material WS-3' });
+    expect(pb.items['WS-3']?.unitCostCents).toBe(790);
+  });
+  it('an explicit itemMap wins over the field; the field wins over a SKU equal to the key', () => {
+    const materials = [mat('wall-sleeve', 100), mat('WS-3', 790, 'wall-sleeve'), mat('WS-4', 950)];
+    expect(designPriceBookFromCompany({ models: [], materials }).items['wall-sleeve']?.unitCostCents).toBe(790);
+    const mapped = designPriceBookFromCompany({ models: [], materials, itemMap: { 'wall-sleeve': 'WS-4' } });
+    expect(mapped.items['wall-sleeve']?.unitCostCents).toBe(950);
+    // With no field at all, the SKU-equals-key rule still prices it.
+    expect(
+      designPriceBookFromCompany({ models: [], materials: [mat('wall-sleeve', 100)] }).items['wall-sleeve']
+        ?.unitCostCents,
+    ).toBe(100);
+  });
+  it('an active material is preferred over a retired one naming the same item', () => {
+    const pb = designPriceBookFromCompany({
+      models: [],
+      materials: [mat('OLD', 500, 'wire:nm-b:10awg', false), mat('NEW', 145, 'wire:nm-b:10awg')],
+    });
+    expect(pb.items['wire:nm-b:10awg']?.unitCostCents).toBe(145);
+  });
+  it('the field is checked with the key rule', () => {
+    const bad = materialSchema.safeParse({
+      key: 'WS-3',
+      description: 'Wall sleeve',
+      unit: 'each',
+      category: 'materials',
+      costCents: 790,
+      takeoffItem: 'wall sleeve',
+    });
+    expect(bad.success).toBe(false);
+    expect(bad.error?.issues[0]?.message).toBe(
+      'Takeoff item may use letters, digits, dots, dashes, slashes and colons only',
+    );
+  });
+  it('the demo price book leaves no takeoff line of the sample design unpriced', () => {
+    const priceBook = designPriceBookFromCompany({
+      models,
+      materials: data.materials.map((m) => materialSchema.parse(m)),
+      labor: data.labor.map((m) => laborTaskSchema.parse(m)),
+      kits: data.kits.map((m) => kitSchema.parse(m)),
+      refrigerants: data.refrigerants.map((m) => refrigerantCostSchema.parse(m)),
+    });
+    const design: DesignInput = {
+      zones: [{ key: 'z-living', name: 'Living', roomIds: ['living', 'kitchen', 'bed'], indoorUnitKey: 'TSL-MH12-W' }],
+      systems: [
+        {
+          key: 's1',
+          name: 'Main',
+          outdoorUnitKey: 'TSL-M18-2P',
+          circuits: [{ zoneKey: 'z-living', lengthFt: 30, wallPenetrations: 1, condensateLengthFt: 12 }],
+          electrical: { circuitLengthFt: 40 },
+        },
+      ],
+    };
+    const r = computeDesign({ home: threeRoomHome, design, catalog, priceBook, pricing });
+    expect(r.warnings.filter((w) => w.startsWith('No price for'))).toEqual([]);
+    expect(r.takeoff.find((l) => l.itemKey === 'wall-sleeve')?.unitCostCents).toBe(
+      data.materials.find((m) => m.key === 'WS-3')?.costCents,
+    );
+  });
+});

@@ -87,7 +87,17 @@ describe('CSV export and import', () => {
   });
 
   it('a file with one bad row among 500 imports nothing and reports that row and column', async () => {
-    const header = ['sku', 'description', 'unit', 'category', 'cost_usd', 'sell_method', 'sell_percent', 'active'];
+    const header = [
+      'sku',
+      'description',
+      'unit',
+      'category',
+      'cost_usd',
+      'sell_method',
+      'sell_percent',
+      'takeoff_item',
+      'active',
+    ];
     const rows = Array.from({ length: 500 }, (_, i) => [
       `BULK-${i}`,
       `Bulk item ${i}`,
@@ -96,6 +106,7 @@ describe('CSV export and import', () => {
       i === 249 ? '12,34' : `${(i + 1) / 4}`,
       '',
       '',
+      i === 0 ? 'wall-sleeve' : '',
       'yes',
     ]);
     const csv = csvText([header, ...rows]);

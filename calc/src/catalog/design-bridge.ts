@@ -187,8 +187,8 @@ export const DEFAULT_LABOR_TASK_FOR: Readonly<Record<string, string>> = {
  * - `line-set-kit:<liquid>x<suction>:<n>ft` ← the line-set kit of those sizes and length;
  * - `refrigerant:<R>` ← the refrigerant's cost per lb (the takeoff counts pounds);
  * - `labor:*` ← the hourly rate of the task named in `laborTaskFor` (default DEFAULT_LABOR_TASK_FOR);
- * - any other takeoff key ← the material whose SKU `itemMap` names for it, else a material whose SKU
- *   is the takeoff key itself. Unmapped items stay unpriced (computeDesign warns "No price for …").
+ * - any other takeoff key ← the material whose SKU `itemMap` names for it, else the material whose
+ *   `takeoffItem` names the key (an active one first), else a material whose SKU is the key itself. Unmapped items stay unpriced (computeDesign warns "No price for …").
  * `laborRateCents` (labor lines with no task) is the median hourly rate of the active tasks.
  */
 export function designPriceBookFromCompany({
@@ -228,6 +228,14 @@ export function designPriceBookFromCompany({
   for (const m of materials) bySku.set(m.key, m);
   for (const m of materials)
     if (items[m.key] === undefined) items[m.key] = { unitCostCents: m.costCents, description: m.description };
+  // A material naming its takeoff item prices it (the first such material wins; inactive ones last).
+  const named = [...materials.filter((m) => m.active), ...materials.filter((m) => !m.active)];
+  const claimed = new Set<string>();
+  for (const m of named)
+    if (m.takeoffItem !== undefined && !claimed.has(m.takeoffItem)) {
+      claimed.add(m.takeoffItem);
+      items[m.takeoffItem] = { unitCostCents: m.costCents, description: m.description };
+    }
   for (const [line, sku] of Object.entries(itemMap)) {
     const m = bySku.get(sku);
     if (m) items[line] = { unitCostCents: m.costCents, description: m.description };

@@ -17,6 +17,11 @@ export const MATERIAL_COLUMNS: readonly CsvColumn[] = [
   textCol('category', 'category', 'Category key'),
   moneyCol('cost_usd', 'costCents', 'Your cost per unit, dollars'),
   ...sellRuleCols('sell', 'sellRule', 'Overrides the category rule for this item (leave both empty to use it)'),
+  textCol(
+    'takeoff_item',
+    'takeoffItem',
+    'The takeoff item this material prices (e.g. wall-sleeve, wire:nm-b:10awg); empty if none',
+  ),
   boolCol('active', 'active', 'no to stop offering it'),
 ];
 

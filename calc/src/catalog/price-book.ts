@@ -26,6 +26,12 @@ export const materialSchema = z.object({
   costCents: money('Cost'),
   /** Overrides the category's rule for this item. */
   sellRule: sellRuleSchema.optional(),
+  /**
+   * The takeoff item this material prices (a takeoff key such as `wall-sleeve` or
+   * `wire:nm-b:10awg`), when its SKU is the company's own. A design's line of that key is costed
+   * at this material's cost (issue 13).
+   */
+  takeoffItem: keyField('Takeoff item').optional(),
   active: z.boolean().default(true),
 });
 

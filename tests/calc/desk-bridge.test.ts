@@ -43,6 +43,14 @@ describe('catalog records → the design engine', () => {
     const pair = models.find((m) => m.key === 'TSL-S12H-O');
     expect(head?.cooling).toEqual(pair?.coolingPoints.map((p) => ({ outdoorF: p.outdoorF, btuh: p.btuh })));
   });
+  it('every active multi-zone head carries its own cooling ratings, not a lone 95 °F nominal (issue 13)', () => {
+    // A lone point made every design temperature but 95 °F "outside the maker's data" on the demo desk.
+    for (const src of models.filter((m) => m.active && m.kind === 'indoor' && m.key.startsWith('TSL-MH'))) {
+      const head = catalog.indoorUnits.find((i) => i.key === src.key);
+      expect(src.coolingPoints.length, src.key).toBeGreaterThan(1);
+      expect(head?.cooling, src.key).toEqual(src.coolingPoints.map((p) => ({ outdoorF: p.outdoorF, btuh: p.btuh })));
+    }
+  });
 });
 
 describe('price book records → the engine price book, then a full design', () => {

@@ -37,13 +37,17 @@ describe('demo desk', () => {
       const me = await s.agent.get('/api/auth/me');
       const data = engineData(await loadCompanyDesk(t.orm.em.fork(), me.body.company.id));
       const jobs = (await s.agent.get('/api/jobs?status=design')).body.items as { id: string }[];
+      const curveTemps = [...data.desk.models.values()].flatMap((m) => m.coolingPoints.map((p) => p.outdoorF));
+      expect(curveTemps.length).toBeGreaterThan(0);
       let ready = 0;
       let pending = 0;
       let options = 0;
+      let readyOptions = 0;
       for (const job of jobs) {
         const desk = await s.agent.get(`/api/jobs/${job.id}/desk`);
         expect(desk.status).toBe(200);
-        if (desk.body.readiness.ready) ready += 1;
+        const isReady = desk.body.readiness.ready === true;
+        if (isReady) ready += 1;
         const jobBody = (await s.agent.get(`/api/jobs/${job.id}`)).body.job;
         const rooms = (await s.agent.get(`/api/jobs/${job.id}/rooms`)).body.rooms.map(
           (r: { input: unknown }) => r.input,
@@ -92,6 +96,27 @@ describe('demo desk', () => {
           ] as const)
             expect(o.result.price[k], `${o.name} ${k}`).toBe(direct.price[k]);
           expect(o.result.price.monthlyPaymentCents).toBe(direct.price.monthlyPaymentCents);
+          if (isReady) {
+            readyOptions += 1;
+            // An option ready to propose must be sized as the trade would: every head against its zone's load
+            // and every outdoor unit against its system's, within the sizing policy's range (default policy:
+            // variable-speed heat pump 90–130 % of the total cooling load [MEM: ACCA Manual S 2nd ed. Table N2]).
+            const coolingF = jobBody.designConditions.outdoorCoolingDryBulbF as number;
+            const units = [
+              ...direct.zones.map((z) => ({ name: z.name, key: z.indoorUnitKey, sizing: z.sizing })),
+              ...direct.systems.map((y) => ({ name: y.name, key: y.outdoorUnitKey, sizing: y.sizing })),
+            ];
+            for (const u of units) {
+              const what = `${acct.company} ${o.name} ${u.name} (${u.key})`;
+              expect(u.sizing.withinRange, `${what}: ${u.sizing.warnings.join(' | ')}`).toBe(true);
+              // The demo cooling curves span 75–115 °F: a design temperature inside them is the maker's data.
+              if (coolingF >= Math.min(...curveTemps) && coolingF <= Math.max(...curveTemps))
+                expect(
+                  u.sizing.warnings.filter((w) => w.includes("outside the maker's cooling data")),
+                  what,
+                ).toEqual([]);
+            }
+          }
           for (const m of o.result.monthly) {
             const f = data.desk.financing.find((x) => x.key === m.planKey);
             expect(f).toBeDefined();
@@ -108,6 +133,7 @@ describe('demo desk', () => {
       }
       expect(options).toBeGreaterThanOrEqual(5);
       expect(ready).toBeGreaterThanOrEqual(1);
+      expect(readyOptions).toBeGreaterThanOrEqual(3);
       expect(pending).toBeGreaterThanOrEqual(1);
     },
   );

@@ -5,7 +5,12 @@ import { useAfterIdle } from '../../../lib/use-after-idle';
 // after the page can already be typed into (issue 11's first-load budgets).
 const ComponentChart = lazy(async () => ({ default: (await import('./component-chart')).ComponentChart }));
 
-const placeholder = <div className="h-[300px] w-full" aria-busy="true" aria-label="Loading the chart" />;
+// The words are text, not aria-label: a div with no role may not carry a name (axe: aria-prohibited-attr).
+const placeholder = (
+  <div className="h-[300px] w-full" aria-busy="true">
+    <span className="sr-only">Loading the chart</span>
+  </div>
+);
 
 /**
  * ComponentChart, loaded on first use once the page has had an idle moment (its first render is the

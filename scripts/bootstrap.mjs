@@ -1,6 +1,7 @@
 // The one file that runs before dependencies exist, so it is plain JavaScript with
 // no imports outside Node itself. It makes sure node_modules matches package-lock.json
-// (npm ci when missing or stale), then hands over to the TypeScript script named.
+// (npm ci when missing or stale), then hands over to the TypeScript script named (or, for `deps`,
+// stops there).
 import { createHash } from 'node:crypto';
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { spawnSync, spawn } from 'node:child_process';
@@ -10,7 +11,7 @@ import { fileURLToPath } from 'node:url';
 const root = join(dirname(fileURLToPath(import.meta.url)), '..');
 const [task, ...rest] = process.argv.slice(2);
 if (!task) {
-  console.error('usage: node scripts/bootstrap.mjs <start|test|…> [args]');
+  console.error('usage: node scripts/bootstrap.mjs <deps|start|test|…> [args]');
   process.exit(2);
 }
 
@@ -29,6 +30,11 @@ if (want !== have) {
   writeFileSync(stamp, want + '\n');
   console.log(`[gaugeline] dependencies ready in ${((Date.now() - t0) / 1000).toFixed(1)} s`);
 }
+
+// `deps` only brings node_modules up to date: the package scripts that call a tool directly
+// (typecheck, lint, build, format) start with it, so a checkout whose lockfile moved never runs
+// them against old packages.
+if (task === 'deps') process.exit(0);
 
 const child = spawn(process.execPath, ['--import', 'tsx', join(root, 'scripts', `${task}.ts`), ...rest], {
   cwd: root,

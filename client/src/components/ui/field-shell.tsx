@@ -7,18 +7,29 @@ export interface FieldShellProps {
   id: string;
   label: string;
   hint?: ReactNode;
-  error?: string;
+  error?: string | undefined;
+  /** A unit shown beside the input (the walk-through's measures: "ft", "m²"); none when empty. */
+  unit?: string;
   children: ReactNode;
 }
 
 /** A field's label, hint and error around its input: the Form's fields use it, and so does the sign-in page, which has no react-hook-form. */
-export function FieldShell({ id, label, hint, error, children }: FieldShellProps) {
+export function FieldShell({ id, label, hint, error, unit, children }: FieldShellProps) {
   return (
-    <div className="flex flex-col gap-1">
+    <div className="flex min-w-0 flex-col gap-1">
       <label htmlFor={id} className="text-sm font-semibold text-ink-900">
         {label}
       </label>
-      {children}
+      {!unit ? (
+        children
+      ) : (
+        <div className="flex items-center gap-2">
+          {children}
+          <span id={`${id}-unit`} className="min-w-8 text-sm text-muted">
+            {unit}
+          </span>
+        </div>
+      )}
       {hint ? (
         <p id={`${id}-hint`} className="text-sm text-muted">
           {hint}

@@ -2,6 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { DATASETS, columnOfPath, recordFromCells, visibleColumns, type DataRole, type DatasetId } from '@calc';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
+import { inputClass as sharedInputClass } from '../../../components/ui/field-shell';
 import { isApiError } from '../../../lib/api-error';
 import { useSaveRow } from '../api/save-row';
 import { columnHeading } from '../model/table-view';
@@ -19,8 +20,8 @@ interface Props {
   onSaved: (key: string) => void;
 }
 
-const inputClass =
-  'block min-h-touch w-full rounded-md border border-line bg-white px-3 text-base text-ink-950 aria-[invalid=true]:border-danger aria-[invalid=true]:bg-danger-soft/40 disabled:bg-ink-50';
+// The shared input look, greyed when a key cannot change.
+const inputClass = `${sharedInputClass} disabled:bg-ink-50`;
 
 /**
  * One record, every column the role may see. Editors change the cells as text, the same cells as

@@ -1,49 +1,9 @@
 import { formatTape, formatTapeCm, parseTape } from '@calc';
 import type { UnitSystem } from '@contract';
 import { useEffect, useId, useState, type ReactNode } from 'react';
+import { FieldShell, inputClass } from '../../../components/ui/field-shell';
 import { fromDisplay, localiseBound, toDisplay, unitLabel, type Quantity } from '../../../lib/unit-display';
 import { useUnitSystem } from './unit-system';
-
-export const inputClass =
-  'block min-h-touch w-full rounded-md border border-line bg-white px-3 text-base text-ink-950 placeholder:text-muted aria-[invalid=true]:border-danger aria-[invalid=true]:bg-danger-soft/40';
-
-interface ShellProps {
-  id: string;
-  label: string;
-  error?: string | undefined;
-  hint?: ReactNode;
-  unit?: string;
-  children: ReactNode;
-}
-
-/** Label on top, unit beside the input, the error under it: the same look as components/ui/form-fields. */
-export function FieldShell({ id, label, error, hint, unit, children }: ShellProps) {
-  return (
-    <div className="flex min-w-0 flex-col gap-1">
-      <label htmlFor={id} className="text-sm font-semibold text-ink-900">
-        {label}
-      </label>
-      <div className="flex items-center gap-2">
-        {children}
-        {unit ? (
-          <span id={`${id}-unit`} className="min-w-8 text-sm text-muted">
-            {unit}
-          </span>
-        ) : null}
-      </div>
-      {hint ? (
-        <p id={`${id}-hint`} className="text-sm text-muted">
-          {hint}
-        </p>
-      ) : null}
-      {error ? (
-        <p id={`${id}-error`} className="text-sm font-semibold text-danger">
-          {error}
-        </p>
-      ) : null}
-    </div>
-  );
-}
 
 const aria = (id: string, error: string | undefined, hint: boolean, unit = false) => ({
   'aria-invalid': error ? true : undefined,

@@ -123,6 +123,7 @@ export function indoorUnitOf(m: CatalogModel, models: ReadonlyMap<string, Catalo
     needsCondensatePump: false,
   };
   if (heating) u.heating = heating;
+  if (m.refrigerantDetection) u.refrigerantDetection = true;
   const shr = m.sensibleHeatRatio ?? pair?.sensibleHeatRatio;
   if (shr !== undefined) u.sensibleHeatRatio = shr;
   return u;

@@ -195,6 +195,11 @@ export const MODEL_COLUMNS: readonly CsvColumn[] = [
   portSizesCol,
   listCol('matched_models', 'matchedKeys', 'Models this one pairs with, separated by "|"'),
   numberCol('heat_kit_kw', 'heatKitKw', 'Heat kits: size, kW'),
+  boolCol(
+    'refrigerant_detection',
+    'refrigerantDetection',
+    'Indoor units: yes when the maker fits refrigerant detection and mitigation (A2L), else no',
+  ),
   numberCol('mca_a', 'mcaA', 'Minimum circuit ampacity, A'),
   numberCol('mocp_a', 'mocpA', 'Maximum overcurrent protection, A'),
   textCol('voltage', 'voltage', '115, 208-230 or 460'),

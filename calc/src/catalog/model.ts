@@ -106,6 +106,8 @@ const modelObject = z.object({
   /** Models this one is matched with (the indoor of a single-zone pair, the air handlers of a ducted unit, what a heat kit fits). */
   matchedKeys: z.array(keyField('Matched model')).max(20, 'At most 20 matched models').default([]),
   heatKitKw: bounded('Heat kit', 1, 30, 'kW').optional(),
+  /** Indoor units: the maker fits refrigerant detection with mitigation at the factory (A2L room-size rules). */
+  refrigerantDetection: z.boolean().default(false),
   mcaA: bounded('Minimum circuit ampacity', 0.1, 150, 'A').optional(),
   mocpA: bounded('Maximum overcurrent protection', 1, 200, 'A').optional(),
   voltage: z.enum(VOLTAGES, { error: 'Choose 115, 208-230 or 460 V' }).optional(),
@@ -193,6 +195,12 @@ function checkModel(m: Draft, ctx: Ctx): void {
   if (m.kind === 'indoor') need(ctx, m, 'indoorType', 'Choose the indoor unit type');
   if (m.kind !== 'indoor' && m.indoorType !== undefined)
     ctx.addIssue({ code: 'custom', path: ['indoorType'], message: 'Only an indoor unit has an indoor type' });
+  if (m.kind !== 'indoor' && m.refrigerantDetection)
+    ctx.addIssue({
+      code: 'custom',
+      path: ['refrigerantDetection'],
+      message: 'Only an indoor unit has refrigerant detection',
+    });
   if (m.kind === 'heat-kit') need(ctx, m, 'heatKitKw', 'Enter the heat kit size in kW');
   if (isOutdoor(m.kind)) {
     need(ctx, m, 'refrigerant', 'Choose the refrigerant');

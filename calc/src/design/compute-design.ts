@@ -1,6 +1,6 @@
 import { CalcError } from '../errors';
 import { electricalPlan, type ElectricalPlan } from '../electrical/plan';
-import { m2FromFt2 } from '../units';
+import { m2FromFt2, mFromFt } from '../units';
 import { coincidentLoad, homeLoadFromParsed, type HomeLoad } from '../loads/home-load';
 import { parseOrThrow } from '../parse';
 import { priceLines, priceOption, type OptionPrice, type PricedLine } from '../pricing/price';
@@ -13,7 +13,7 @@ import {
   type PricingInput,
 } from '../pricing/schemas';
 import { CAUTIONS } from '../refrigerant/cautions';
-import { refrigerantPlan, type RefrigerantPlan } from '../refrigerant/circuits';
+import { refrigerantPlan, type CircuitToPlan, type RefrigerantPlan } from '../refrigerant/circuits';
 import { designSchema, type Design, type DesignInput } from '../schemas/design';
 import {
   equipmentCatalogSchema,
@@ -26,7 +26,7 @@ import { homeInputSchema, type Home, type HomeInput } from '../schemas/home';
 import { checkCombination, checkSizing, type CombinationCheck, type SizingCheck } from '../sizing/match';
 import { DEFAULT_SIZING_POLICY, sizingPolicySchema, type SizingPolicy } from '../sizing/policy';
 import { buildTakeoff, type SystemForTakeoff } from '../takeoff/build';
-import { zoneLoads } from './zone-loads';
+import { zoneLoads, type ZoneLoad } from './zone-loads';
 import { explanation, type Explanation } from '../explain/explanation';
 import { explainExtension, explainOptionPrice } from '../pricing/explain-price';
 import { technologyTransitionsCheck, type RefrigerantRuleCheck } from '../refrigerant/rules';
@@ -110,6 +110,36 @@ function byKey<T>(items: readonly T[], key: (item: T) => string): Map<string, T>
   const map = new Map<string, T>();
   for (const item of items) map.set(key(item), item);
   return map;
+}
+
+/**
+ * The space an A2L leak from this zone's indoor unit spreads over [IEC 60335-2-40:2018 Annex GG, reference §11]:
+ * a ducted unit → every room its ducts serve, with h0 the lowest duct opening (≥ 0.6 m; absent → 0.6 m);
+ * a ductless head → the room it is installed in, or all the zone's rooms when the zone says they are one open space.
+ */
+function a2lSpace(
+  zone: Design['zones'][number],
+  indoor: IndoorUnit,
+  load: ZoneLoad,
+): Omit<CircuitToPlan, 'circuit' | 'indoor'> {
+  if (indoor.unitType === 'ducted-air-handler')
+    return {
+      roomAreaM2: m2FromFt2({ ft2: load.servedAreaFt2 }),
+      space: {
+        basis: 'served-rooms',
+        roomNames: load.servedRoomNames,
+        ...(zone.lowestDuctOpeningFt === undefined ? {} : { h0M: mFromFt({ ft: zone.lowestDuctOpeningFt }) }),
+      },
+    };
+  if (zone.openSpace === true)
+    return {
+      roomAreaM2: m2FromFt2({ ft2: load.servedAreaFt2 }),
+      space: { basis: 'open-space', roomNames: load.servedRoomNames },
+    };
+  return {
+    roomAreaM2: m2FromFt2({ ft2: load.headRoomAreaFt2 }),
+    space: { basis: 'head-room', roomNames: load.headRoomName === '' ? [] : [load.headRoomName] },
+  };
 }
 
 /**
@@ -219,7 +249,7 @@ export function computeDesignFromParsed({
       indoorByZone.set(c.zoneKey, indoor);
       const load = lookup(perZone, c.zoneKey, 'UNKNOWN_ZONE', []);
       for (const id of zone.roomIds) if (!servedRooms.includes(id)) servedRooms.push(id);
-      return { circuit: c, indoor, roomAreaM2: m2FromFt2({ ft2: load.headRoomAreaFt2 }), zoneName: zone.name };
+      return { circuit: c, indoor, ...a2lSpace(zone, indoor, load), zoneName: zone.name };
     });
     // The outdoor unit meets the coincident load of every room it serves (one peak hour for all of them).
     const c = coincidentLoad({ loads, roomIds: servedRooms });

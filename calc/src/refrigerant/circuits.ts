@@ -10,11 +10,22 @@ import { CAUTIONS } from './cautions';
 import { LIQUID_DENSITY_100F_LB_FT3, liquidLineChargeOzPerFt } from './charge';
 import { tubeLabel } from './tube';
 
-/** A circuit to plan: the line set and the indoor unit (and the floor area where it sits, m²). */
+/** The space a leak from one indoor unit spreads over, for the A2L room-size check. */
+export interface A2lSpace {
+  /** 'head-room': the room a ductless head is installed in; 'open-space': the zone's rooms as one open space; 'served-rooms': every room a ducted unit's ducts serve. */
+  readonly basis: 'head-room' | 'open-space' | 'served-rooms';
+  readonly roomNames: readonly string[];
+  /** Release height h0, m (a ducted unit's lowest duct opening); absent → the unit type's reference height. */
+  readonly h0M?: number;
+}
+
+/** A circuit to plan: the line set and the indoor unit (and the floor area a leak from it spreads over, m²). */
 export interface CircuitToPlan {
   readonly circuit: Circuit;
   readonly indoor: IndoorUnit;
   readonly roomAreaM2: number;
+  /** What roomAreaM2 is (absent → the room holding the indoor unit). */
+  readonly space?: A2lSpace;
   /** The zone's name, for the words (else its key). */
   readonly zoneName?: string;
 }
@@ -104,6 +115,98 @@ export function adderForLiquid(outdoor: OutdoorUnit, liquidOdIn: number): number
 const ft = (v: number) => formatQuantity(v, 'ft', 1);
 const oz = (v: number) => formatQuantity(v, 'oz', 1);
 const rate = (v: number) => `${formatNumber(v, 3, { trim: true })} oz/ft`;
+
+const UNIT_WORDS: Record<IndoorUnit['unitType'], string> = {
+  'wall-head': 'wall head',
+  'ceiling-cassette': 'ceiling cassette',
+  'floor-console': 'floor console',
+  'ducted-air-handler': 'ducted unit',
+};
+
+const SPACE_WORDS: Record<A2lSpace['basis'], string> = {
+  'head-room': 'the room the indoor unit is in',
+  'open-space': "the zone's rooms, one open space",
+  'served-rooms': 'the rooms its ducts serve',
+};
+
+/**
+ * One indoor unit's A2L check against the whole system charge (every circuit is joined at the outdoor
+ * unit, so the system's charge can leak out at any indoor unit). Without factory detection:
+ * A_min = (M / (2.5 × LFL^1.25 × h0))², h0 ≥ 0.6 m [PUB: IEC 60335-2-40:2018 Annex GG, reference §11],
+ * against the space a leak spreads over (see A2lSpace). With the maker's refrigerant detection and
+ * mitigation the room-area limit gives way to the ceiling m2 = 52 m³ × LFL [MEM: the reference marks
+ * the multiplier "from memory"], and the mitigation must be installed as the maker instructs.
+ */
+function a2lCircuitCheck({
+  circuit,
+  indoor,
+  roomAreaM2,
+  space,
+  zoneName,
+  chargeKg,
+  lflKgPerM3,
+  keyPrefix,
+}: CircuitToPlan & { readonly chargeKg: number; readonly lflKgPerM3: number; readonly keyPrefix: string }): {
+  blocker: string | null;
+  note: string | null;
+  explanation: Explanation;
+} {
+  const kg = (v: number) => formatQuantity(v, 'kg', 2);
+  const name = zoneName ?? circuit.zoneKey;
+  const basis = space?.basis ?? 'head-room';
+  const rooms = space && space.roomNames.length > 0 ? ` (${space.roomNames.join(', ')})` : '';
+  const where = `${SPACE_WORDS[basis]}${rooms}`;
+  const key = `${keyPrefix}a2l:${circuit.zoneKey}`;
+  const label = `A2L room size, ${name}`;
+  const source = 'IEC 60335-2-40:2018 Annex GG (estimate; confirm the edition adopted locally)';
+  if (indoor.refrigerantDetection === true) {
+    const m2 = 52 * lflKgPerM3;
+    const ok = chargeKg <= m2;
+    const msg = `The ${name} indoor unit has the maker's refrigerant detection, but the system charge (${kg(chargeKg)}) is above the ${kg(m2)} ceiling (52 m³ × LFL) for any room: split the system or check the maker's rules.`;
+    return {
+      blocker: ok ? null : msg,
+      note: "An indoor unit with the maker's refrigerant detection relies on its mitigation (sensor, circulation airflow, shut-off): install and wire it as the maker instructs and test it at start-up.",
+      explanation: explanation({
+        key,
+        label,
+        value: roundHalfUp(chargeKg, 2),
+        unit: 'kg',
+        valueText: kg(chargeKg),
+        text: `Factory refrigerant detection: ${kg(chargeKg)} system charge ≤ m2 = 52 m³ × ${formatNumber(lflKgPerM3, 3)} kg/m³ = ${kg(m2)} (the room-area limit is replaced by the mitigation); ${where} ${formatQuantity(roomAreaM2, 'm²', 1)}`,
+        verdict: ok
+          ? 'Within the ceiling for a unit with refrigerant detection: the mitigation must be installed as the maker instructs.'
+          : msg,
+        status: ok ? 'ok' : 'blocker',
+        source: `${source}; the m2 multiplier is from memory`,
+      }),
+    };
+  }
+  const h0 = Math.max(0.6, space?.h0M ?? A2L_INSTALL_HEIGHT_M[indoor.unitType]);
+  const minArea = a2lMinRoomAreaM2({ chargeKg, lflKgPerM3, h0M: h0 });
+  const ok = roomAreaM2 >= minArea;
+  const h0Words =
+    basis === 'served-rooms'
+      ? space?.h0M === undefined
+        ? 'h0 0.6 m (the lowest duct opening is not given, so the least the standard allows)'
+        : `h0 ${formatQuantity(h0, 'm', 2)} (the lowest duct opening)`
+      : `h0 ${formatQuantity(h0, 'm', 1)} (${UNIT_WORDS[indoor.unitType]} reference height)`;
+  const msg = `The space a leak from the ${name} indoor unit spreads over, ${where}, is ${formatQuantity(roomAreaM2, 'm²', 1)}: smaller than the estimated minimum ${formatQuantity(minArea, 'm²', 1)} for this system's ${kg(chargeKg)}. Choose a unit with the maker's refrigerant detection, a smaller system, or check the maker's room-size rules.`;
+  return {
+    blocker: ok ? null : msg,
+    note: null,
+    explanation: explanation({
+      key,
+      label,
+      value: roundHalfUp(minArea, 1),
+      unit: 'm²',
+      valueText: formatQuantity(minArea, 'm²', 1),
+      text: `A_min = (${kg(chargeKg)} system charge ÷ (2.5 × ${formatNumber(lflKgPerM3, 3)}^1.25 × ${formatQuantity(h0, 'm', 2)}))² = ${formatQuantity(minArea, 'm²', 1)}; ${h0Words}; ${where}: ${formatQuantity(roomAreaM2, 'm²', 1)}`,
+      verdict: ok ? `Large enough for this charge: ${where}.` : msg,
+      status: ok ? 'ok' : 'blocker',
+      source,
+    }),
+  };
+}
 
 /**
  * Refrigerant plan for one outdoor unit. Per circuit: the installed length (a pre-flared kit's
@@ -306,29 +409,14 @@ export function refrigerantPlan({
       notes.push(
         `The total charge (${kg(chargeKg)}) is above ${kg(m1)} (6 m³ × LFL), so minimum room-area rules apply. The check uses IEC 60335-2-40:2018 Annex GG as an estimate: confirm with the maker's table and the edition of UL 60335-2-40 / ASHRAE 15.2 adopted locally.`,
       );
-      circuits.forEach(({ circuit, indoor, roomAreaM2, zoneName }) => {
-        const h0 = A2L_INSTALL_HEIGHT_M[indoor.unitType];
-        const minArea = a2lMinRoomAreaM2({ chargeKg, lflKgPerM3: info.lflKgPerM3, h0M: h0 });
-        const ok = roomAreaM2 >= minArea;
-        const name = zoneName ?? circuit.zoneKey;
-        const msg = `The room with the ${name} indoor unit (${formatQuantity(roomAreaM2, 'm²', 1)}) is smaller than the estimated minimum ${formatQuantity(minArea, 'm²', 1)} for this charge: check the maker's room-size rules or mitigation (leak detection, ventilation).`;
-        if (!ok) {
-          blockers.push(msg);
-          a2lBlockers.push(msg);
+      circuits.forEach((c) => {
+        const a = a2lCircuitCheck({ ...c, chargeKg, lflKgPerM3: info.lflKgPerM3, keyPrefix });
+        if (a.blocker !== null) {
+          blockers.push(a.blocker);
+          a2lBlockers.push(a.blocker);
         }
-        explanations.push(
-          explanation({
-            key: `${keyPrefix}a2l:${circuit.zoneKey}`,
-            label: `A2L room size, ${name}`,
-            value: roundHalfUp(minArea, 1),
-            unit: 'm²',
-            valueText: formatQuantity(minArea, 'm²', 1),
-            text: `A_min = (${kg(chargeKg)} ÷ (2.5 × ${formatNumber(info.lflKgPerM3, 3)}^1.25 × ${formatQuantity(Math.max(0.6, h0), 'm', 1)}))² = ${formatQuantity(minArea, 'm²', 1)}; room ${formatQuantity(roomAreaM2, 'm²', 1)}`,
-            verdict: ok ? 'The room is large enough for this charge.' : msg,
-            status: ok ? 'ok' : 'blocker',
-            source: 'IEC 60335-2-40:2018 Annex GG (estimate; confirm the edition adopted locally)',
-          }),
-        );
+        explanations.push(a.explanation);
+        if (a.note !== null && !notes.includes(a.note)) notes.push(a.note);
       });
     } else {
       explanations.push(

@@ -11,6 +11,15 @@ export const zoneSchema = z.object({
     .min(1, 'Choose at least one room for the zone')
     .max(50, 'At most 50 rooms per zone'),
   indoorUnitKey: keyField('Indoor unit'),
+  /** The room the indoor unit is installed in (one of roomIds); absent → the zone's first room. */
+  headRoomId: keyField('Room with the indoor unit').optional(),
+  /**
+   * The zone's rooms are one open space (no doors or full walls between them), so refrigerant leaked
+   * from a ductless head spreads over all of them (A2L room size); absent → the head's room alone.
+   */
+  openSpace: z.boolean().optional(),
+  /** Ducted units: height above the floor of the lowest duct opening into the served rooms, ft (A2L h0); absent → 0.6 m. */
+  lowestDuctOpeningFt: bounded('Lowest duct opening', 0, 20, 'ft').optional(),
 });
 
 /** One line-set circuit from the outdoor unit to a zone's indoor unit. Lengths in ft. */

@@ -54,6 +54,8 @@ export const indoorUnitSchema = z.object({
   liquidOdIn: tubeOdSchema,
   suctionOdIn: tubeOdSchema,
   needsCondensatePump: z.boolean().default(false),
+  /** The maker fits refrigerant detection with mitigation (circulation airflow, shut-off) at the factory (A2L). */
+  refrigerantDetection: z.boolean().optional(),
 });
 
 /** An outdoor unit in the catalog, with its charge and line-set data from the maker. */

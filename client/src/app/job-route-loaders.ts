@@ -2,8 +2,6 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { z } from 'zod';
 import { companySettingsQueryOptions, jobQueryOptions, roomsQueryOptions } from '../entities/job/queries';
-import { deskQueryOptions } from '../features/desk/api/get-desk';
-import { modelsQueryOptions } from '../features/desk/api/get-models';
 import { jobsQueryOptions } from '../features/jobs/api/get-jobs';
 import { filtersFromSearch } from '../features/jobs/components/jobs-filters';
 import { sharedWalkthroughQueue } from '../features/walkthrough/sync/walkthrough-queue';
@@ -13,11 +11,12 @@ import { ensureHeld } from '../lib/offline/online';
 /**
  * The job screens' loaders. They live apart from job-routes.tsx so that the router (in the entry
  * chunk every page loads, sign-in included) does not carry the offline kit, zod and the job
- * queries: React Router loads this module beside the page's component (issue 11).
+ * queries: React Router loads this module beside the page's component (issue 11). The desk's loader
+ * is in job-desk-loader.ts, so the walk-through does not download the desk's records.
  */
 const jobIdParams = z.object({ jobId: z.uuid() });
 
-function jobIdOf(params: LoaderFunctionArgs['params']): string {
+export function jobIdOf(params: LoaderFunctionArgs['params']): string {
   const parsed = jobIdParams.safeParse(params);
   if (!parsed.success) throw new Response('Not found', { status: 404, statusText: 'Not found' });
   return parsed.data.jobId;
@@ -44,21 +43,6 @@ export const jobWithRoomsLoader =
     await Promise.all([
       ensureHeld(queryClient, job.queryKey, () => queryClient.ensureQueryData(job)),
       ensureHeld(queryClient, rooms.queryKey, () => queryClient.ensureQueryData(rooms)),
-    ]);
-    return null;
-  };
-
-/** The desk: the job, its rooms (zones pick them), its options and the catalog, in parallel. */
-export const deskLoader =
-  (queryClient: QueryClient) =>
-  async ({ params }: LoaderFunctionArgs) => {
-    const jobId = jobIdOf(params);
-    await Promise.all([
-      queryClient.ensureQueryData(jobQueryOptions(jobId)),
-      queryClient.ensureQueryData(roomsQueryOptions(jobId)),
-      queryClient.ensureQueryData(deskQueryOptions(jobId)),
-      // The pickers must hold the catalog before a stored design is laid into them.
-      queryClient.ensureQueryData(modelsQueryOptions()),
     ]);
     return null;
   };

@@ -6,7 +6,7 @@ import { jobRoutePatterns } from '../entities/job/paths';
 /**
  * The job screens. This file is part of the router, which every page loads first (sign-in too), so
  * it holds only paths: each route's loader (job-route-loaders.ts: zod, the job queries, the offline
- * queue) and page (app/routes/job-*.tsx, where the features are composed) load lazily and in
+ * queue; the desk's in job-desk-loader.ts) and page (app/routes/job-*.tsx, where the features are composed) load lazily and in
  * parallel (React Router's lazy object), only where they are used.
  */
 const loaders = () => import('./job-route-loaders');
@@ -41,7 +41,7 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
       path: jobRoutePatterns.desk,
       ErrorBoundary: RouteError,
       lazy: {
-        loader: async () => (await loaders()).deskLoader(queryClient),
+        loader: async () => (await import('./job-desk-loader')).deskLoader(queryClient),
         Component: async () => (await import('./routes/job-desk')).default,
       },
     },

@@ -15,6 +15,7 @@ import {
 import { memoryFileStorage, type FileStorage } from '../../../client/src/lib/offline/file-storage';
 import { createEditSender } from '../../../client/src/features/walkthrough/sync/send-edit';
 import type { RoomView } from '../../../client/src/features/walkthrough/sync/overlay';
+import { loadEngine } from '../../../client/src/features/loads/components/live-engine';
 
 export const JOB_ID = '11111111-1111-4111-8111-111111111111';
 export const ROOM_ID = '22222222-2222-4222-8222-222222222222';
@@ -114,6 +115,8 @@ export async function renderWalkthrough(ui: ReactNode, options: RenderOptions = 
   });
   await queue.start();
   await photoQueue.start();
+  // The app fetches the live loads' engine after the page's first idle moment; here it is held from the start.
+  await loadEngine();
   const view = render(
     <QueryClientProvider client={queryClient}>
       <WalkthroughQueueProvider queue={queue}>

@@ -1,6 +1,6 @@
 import { lazy, Suspense } from 'react';
 import type { HomeLoad } from '@calc';
-import { EstimateBadge } from './estimate-note';
+import { EstimateBadge } from './estimate-badge';
 
 const HourlyChart = lazy(() => import('./hourly-chart'));
 

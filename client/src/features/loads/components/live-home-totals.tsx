@@ -1,5 +1,4 @@
-import { computeHomeLoad } from '../model/compute';
-import { HomeTotals } from './home-totals';
+import { engineWaitMessage, useLoadEngine } from './live-engine';
 
 interface Props {
   rooms: readonly { readonly id: string; readonly input: Record<string, unknown> }[];
@@ -10,7 +9,10 @@ interface Props {
 
 /** The whole home, recomputed in the browser from the rooms as they stand (saved or waiting). */
 export function LiveHomeTotals({ rooms, designConditions, tightness, house }: Props) {
-  const result = computeHomeLoad(rooms, designConditions, tightness, house ?? {});
+  const engine = useLoadEngine();
+  if (engine.status !== 'ready')
+    return <p className="rounded-md border border-line bg-white p-4 text-muted">{engineWaitMessage(engine)}</p>;
+  const result = engine.engine.computeHomeLoad(rooms, designConditions, tightness, house ?? {});
   if (!result.ok) return <p className="rounded-md border border-line bg-white p-4 text-muted">{result.message}</p>;
-  return <HomeTotals load={result.value.load} skipped={result.value.skipped} />;
+  return <engine.engine.HomeTotals load={result.value.load} skipped={result.value.skipped} />;
 }

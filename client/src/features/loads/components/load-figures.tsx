@@ -1,5 +1,5 @@
 import type { RoomLoad } from '@calc';
-import { tons } from '../model/compute';
+import { tons } from '../model/tons';
 
 const n = (v: number) => v.toLocaleString('en-US');
 

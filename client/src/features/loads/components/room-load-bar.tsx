@@ -1,7 +1,6 @@
 import type { Room } from '@calc';
 import { useState } from 'react';
-import { computeRoomLoad } from '../model/compute';
-import { LoadFigures } from './load-figures';
+import { engineWaitMessage, useLoadEngine } from './live-engine';
 
 const n = (v: number) => v.toLocaleString('en-US');
 
@@ -18,22 +17,26 @@ interface Props {
  */
 export function RoomLoadBar({ room, designConditions, tightness }: Props) {
   const [open, setOpen] = useState(false);
-  const result = room ? computeRoomLoad(room, designConditions, tightness) : null;
+  const engine = useLoadEngine();
+  const parts = engine.status === 'ready' ? engine.engine : null;
+  const result = room && parts ? parts.computeRoomLoad(room, designConditions, tightness) : null;
   const line = !room
     ? 'Loads wait for the fields marked in red'
-    : result && !result.ok
-      ? result.message
-      : result?.ok
-        ? `Sensible ${n(result.value.sensibleGain.total)} · Latent ${n(result.value.latentGain.total)} · Heat loss ${n(result.value.heatLoss.total)} Btu/h`
-        : '';
+    : engine.status !== 'ready'
+      ? engineWaitMessage(engine)
+      : result && !result.ok
+        ? result.message
+        : result?.ok
+          ? `Sensible ${n(result.value.sensibleGain.total)} · Latent ${n(result.value.latentGain.total)} · Heat loss ${n(result.value.heatLoss.total)} Btu/h`
+          : '';
   return (
     <aside
       aria-label="This room’s loads, pinned"
       className="fixed inset-x-0 bottom-0 z-20 border-t border-ink-200 bg-white/95 shadow-[0_-2px_8px_rgba(0,0,0,0.08)] backdrop-blur lg:hidden"
     >
-      {open && result?.ok ? (
+      {open && result?.ok && parts ? (
         <div id="room-load-bar-figures" className="max-h-[55vh] overflow-y-auto px-4 pt-3">
-          <LoadFigures load={result.value} />
+          <parts.LoadFigures load={result.value} />
         </div>
       ) : null}
       <button
@@ -45,7 +48,7 @@ export function RoomLoadBar({ room, designConditions, tightness }: Props) {
         className="flex min-h-touch w-full items-center justify-between gap-2 px-4 py-2 text-left text-sm font-semibold text-ink-900 disabled:cursor-default"
       >
         <span data-testid="room-load-bar">{line}</span>
-        {result?.ok ? (
+        {result?.ok && parts ? (
           <span aria-hidden="true" className="shrink-0 text-muted">
             {open ? '▾' : '▴'}
           </span>

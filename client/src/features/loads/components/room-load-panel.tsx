@@ -1,9 +1,8 @@
 import type { PlausibilityWarning, Room } from '@calc';
 import { Alert } from '../../../components/ui/alert';
-import { computeRoomLoad } from '../model/compute';
+import { engineWaitMessage, useLoadEngine } from './live-engine';
 import { LazyComponentChart } from './lazy-component-chart';
-import { EstimateBadge } from './estimate-note';
-import { LoadFigures } from './load-figures';
+import { EstimateBadge } from './estimate-badge';
 
 interface Props {
   /** The room as calc parsed it, or null while the form has errors. */
@@ -15,7 +14,9 @@ interface Props {
 
 /** This room's loads, recomputed in the browser on every change. */
 export function RoomLoadPanel({ room, warnings, designConditions, tightness }: Props) {
-  const result = room ? computeRoomLoad(room, designConditions, tightness) : null;
+  const engine = useLoadEngine();
+  const parts = engine.status === 'ready' ? engine.engine : null;
+  const result = room && parts ? parts.computeRoomLoad(room, designConditions, tightness) : null;
   return (
     <section aria-label="Room loads" className="flex flex-col gap-3 rounded-lg border border-ink-200 bg-white p-4">
       <div className="flex items-center gap-3">
@@ -23,10 +24,15 @@ export function RoomLoadPanel({ room, warnings, designConditions, tightness }: P
         <EstimateBadge />
       </div>
       {!room ? <p className="text-muted">Fix the fields marked in red to update the loads.</p> : null}
+      {room && engine.status !== 'ready' ? (
+        <p className="text-muted" aria-live="polite">
+          {engineWaitMessage(engine)}
+        </p>
+      ) : null}
       {result && !result.ok ? <p className="text-muted">{result.message}</p> : null}
-      {result?.ok ? (
+      {result?.ok && parts ? (
         <>
-          <LoadFigures load={result.value} />
+          <parts.LoadFigures load={result.value} />
           <LazyComponentChart
             sensible={result.value.sensibleGain}
             latent={result.value.latentGain}

@@ -1,5 +1,4 @@
 import {
-  BTUH_PER_TON,
   CalcError,
   COMPONENT_KEYS,
   designConditionsSchema,
@@ -7,7 +6,6 @@ import {
   houseSchema,
   roomInputSchema,
   roomLoad,
-  roundHalfUp,
   type ComponentKey,
   type HomeLoad,
   type Room,
@@ -34,7 +32,7 @@ export { COMPONENT_KEYS };
 
 export const toTightness = (t: string): Tightness => TIGHTNESS.find((x) => x === t) ?? 'average';
 
-export const tons = (btuh: number) => roundHalfUp(btuh / BTUH_PER_TON, 2);
+export { tons } from './tons';
 
 export type LoadResult<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly message: string };
 

@@ -1,0 +1,4 @@
+// What the walk-through's live loads load on their own (live-engine.ts): the engine and what shows its figures.
+export { computeHomeLoad, computeRoomLoad } from '../model/compute';
+export { HomeTotals } from './home-totals';
+export { LoadFigures } from './load-figures';

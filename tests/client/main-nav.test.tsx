@@ -24,6 +24,7 @@ describe('main navigation by role', () => {
       ['Users', '/users'],
       ['E-mail', '/mail'],
       ['Reports', '/reports'],
+      ['Settings', '/settings'],
       ['Price book & catalog', '/price-book'],
       ['Your account', '/account'],
     ];

@@ -50,6 +50,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             { path: paths.outbox, lazy: lazy(() => import('./routes/outbox')) },
             { path: paths.reports, lazy: lazy(() => import('./routes/reports')) },
             { path: paths.priceBook, lazy: lazy(() => import('./routes/price-book')) },
+            { path: paths.companySettings, lazy: lazy(() => import('./routes/company-settings')) },
             { path: '*', lazy: lazy(() => import('./routes/not-found')) },
           ],
         },

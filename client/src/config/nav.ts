@@ -20,6 +20,7 @@ export const navItems: readonly NavItem[] = [
   { id: 'users', label: 'Users', to: paths.users, roles: ['owner'] },
   { id: 'mail', label: 'E-mail', to: paths.mail, roles: ['owner'] },
   { id: 'reports', label: 'Reports', to: paths.reports, roles: ['owner'] },
+  { id: 'settings', label: 'Settings', to: paths.companySettings, roles: ['owner'] },
   { id: 'price-book', label: 'Price book & catalog', to: paths.priceBook, roles: STAFF_ROLES },
   { id: 'account', label: 'Your account', to: paths.account, roles: STAFF_ROLES },
   { id: 'outbox', label: 'Outbox', to: paths.outbox, roles: ['owner'], needsFeature: 'outbox' },

@@ -13,6 +13,7 @@ export const paths = {
   mail: '/mail',
   reports: '/reports',
   priceBook: '/price-book',
+  companySettings: '/settings',
 } as const;
 
 export type AppPath = (typeof paths)[keyof typeof paths];

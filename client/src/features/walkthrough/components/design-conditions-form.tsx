@@ -2,7 +2,7 @@ import { useEffect, useState } from 'react';
 import { Button } from '../../../components/ui/button';
 import { INFILTRATION_TIGHTNESS, houseSchema } from '@calc';
 import { enteredOf, notesOf, resolveDesign, type DesignNotes, type EnteredDesign, type JobRecord } from '@contract';
-import { DESIGN_FIELD_SPECS } from '../model/design-fields';
+import { DESIGN_FIELD_SPECS } from '../../../entities/job/design-fields';
 import type { JobChanges } from '../../../entities/job/requests';
 import { jobTarget } from '../sync/edits';
 import { useWalkthroughQueue } from '../sync/queue-context';

@@ -1,5 +1,5 @@
 import type { DesignField } from '@contract';
-import type { Quantity } from '../../../lib/unit-display';
+import type { Quantity } from '../../lib/unit-display';
 
 export interface DesignFieldSpec {
   readonly key: DesignField;

@@ -1,0 +1,43 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { LoaderFunctionArgs } from 'react-router-dom';
+import { QueryWidgetBoundary } from '../../components/errors/query-widget-boundary';
+import { Card } from '../../components/ui/card';
+import { PageHeader } from '../../components/ui/page-header';
+import { companySettingsQueryOptions } from '../../entities/job/queries';
+import { DesignDefaultsForm } from '../../features/company-settings/components/design-defaults-form';
+import { UnitSystemForm } from '../../features/company-settings/components/unit-system-form';
+import { requireArea } from '../guards';
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    await requireArea(queryClient, request, 'settings');
+    // The settings are edited here, so read what the server holds now, not a copy the device saved
+    // before the last save (the saved cache is written a beat later); with no signal the copy stands.
+    await queryClient.prefetchQuery({ ...companySettingsQueryOptions(), staleTime: 0 });
+    await queryClient.ensureQueryData(companySettingsQueryOptions());
+    return null;
+  };
+
+export default function CompanySettingsRoute() {
+  return (
+    <>
+      <PageHeader
+        title="Company settings"
+        lead="The units your people work in, and the design conditions every new job starts from. A job can still change any value for its own site."
+      />
+      <div className="flex flex-col gap-6">
+        <Card title="Units">
+          <QueryWidgetBoundary name="the units">
+            <UnitSystemForm />
+          </QueryWidgetBoundary>
+        </Card>
+        <Card title="Design defaults">
+          <QueryWidgetBoundary name="the design defaults">
+            <DesignDefaultsForm />
+          </QueryWidgetBoundary>
+        </Card>
+      </div>
+    </>
+  );
+}

@@ -1,8 +1,10 @@
 import { QueryClientProvider } from '@tanstack/react-query';
-import { fireEvent, render, screen, waitFor } from '@testing-library/react';
+import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
 import { Suspense, type ReactNode } from 'react';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { DataGrid } from '../../client/src/features/price-book/components/data-grid';
 import { RowPanel } from '../../client/src/features/price-book/components/row-panel';
+import { gridColumns } from '../../client/src/features/price-book/model/table-view';
 import { SettingsCard } from '../../client/src/features/price-book/components/settings-card';
 import { clearCsrfToken } from '../../client/src/lib/api-client';
 import { createQueryClient } from '../../client/src/lib/query-client';
@@ -60,6 +62,25 @@ describe('price-book record panel', () => {
     expect(screen.queryByRole('textbox')).toBeNull();
     expect(screen.queryByText('Cost $')).toBeNull();
     expect(screen.queryByText('1.35')).toBeNull();
+  });
+});
+
+describe('the materials grid', () => {
+  it('shows which takeoff item a material prices, for every role that reads materials', () => {
+    const priced = { ...row, record: { ...row.record, takeoffItem: 'lineset-liquid-3/8' } };
+    render(
+      <DataGrid
+        rows={[priced]}
+        columns={gridColumns('materials', 'salesperson')}
+        search=""
+        selectedKey={null}
+        onOpen={() => {}}
+        label="Materials"
+      />,
+    );
+    const table = screen.getByRole('table', { name: 'Materials' });
+    expect(within(table).getByRole('columnheader', { name: /Takeoff item/ })).toBeInTheDocument();
+    expect(within(table).getByText('lineset-liquid-3/8')).toBeInTheDocument();
   });
 });
 

@@ -121,11 +121,11 @@ describe('the estimator’s desk', () => {
     const totalBefore = await page.getByRole('tab', { name: new RegExp(name) }).textContent();
     await page.getByRole('button', { name: 'Add a discount' }).click();
     await page.getByLabel('Discount name').fill('Neighbour referral');
-    await page.getByLabel('Percent', { exact: true }).last().fill('5');
+    await page.getByLabel('Discount (%)').last().fill('5');
     await page.getByRole('button', { name: 'Save pricing' }).click();
     await pricing.getByRole('status').filter({ hasText: 'Saved' }).waitFor();
     await expect.poll(() => page.getByRole('tab', { name: new RegExp(name) }).textContent()).not.toBe(totalBefore);
-    await page.getByLabel('Percent', { exact: true }).last().fill('40');
+    await page.getByLabel('Discount (%)').last().fill('40');
     await page.getByRole('button', { name: 'Save pricing' }).click();
     await page
       .getByText('Discount awaiting the owner’s approval')

@@ -119,11 +119,76 @@ describe('discounts: per-role limits from the price book, the owner approves bey
       403,
     );
     const r = await patch(estimator, optionUrl(job.id, o.id), o.version).send({
-      pricing: { sellRule: { method: 'markup', percent: 10 }, tax: { taxRatePercent: 0, taxOn: 'none' } },
+      pricing: {
+        sellRule: { method: 'markup', percent: 10 },
+        tax: { taxRatePercent: 0, taxOn: 'none', reason: 'Exemption certificate on file' },
+      },
     });
     expect(r.status).toBe(200);
     expect(r.body.option.result.price.sellRule).toEqual({ method: 'markup', percent: 10 });
     expect(r.body.option.result.price.taxCents).toBe(0);
+  });
+});
+
+describe('money inputs: amount discounts and deposits, a tax override with its reason', () => {
+  it('a tax override without a reason is refused on its field and nothing changes; with one it is stored and applied', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const o = await newOption(estimator, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '') });
+    const url = optionUrl(job.id, o.id);
+    const noReason = await patch(estimator, url, o.version).send({
+      pricing: { tax: { taxRatePercent: 5, taxOn: 'total' } },
+    });
+    expectProblem(noReason, 400);
+    expect(noReason.body.errors.map((e: { path: string }) => e.path)).toContain('pricing.tax.reason');
+    const blank = await patch(estimator, url, o.version).send({
+      pricing: { tax: { taxRatePercent: 5, taxOn: 'total', reason: '   ' } },
+    });
+    expect(blank.body.errors).toContainEqual({
+      path: 'pricing.tax.reason',
+      message: 'Enter a reason for the tax change',
+    });
+    const tooHigh = await patch(estimator, url, o.version).send({
+      pricing: { tax: { taxRatePercent: 21, taxOn: 'total', reason: 'Another county' } },
+    });
+    expect(tooHigh.body.errors.map((e: { path: string }) => e.path)).toContain('pricing.tax.taxRatePercent');
+    const unchanged = await t.orm.em.fork().execute(`select pricing from design_option where id = ?`, [o.id]);
+    expect(unchanged[0]?.pricing.tax).toBeNull();
+
+    const r = await patch(estimator, url, o.version).send({
+      pricing: { tax: { taxRatePercent: 5, taxOn: 'total', reason: 'Work site in another county' } },
+    });
+    expect(r.status, JSON.stringify(r.body)).toBe(200);
+    expect(r.body.option.pricing.tax).toEqual({
+      taxRatePercent: 5,
+      taxOn: 'total',
+      reason: 'Work site in another county',
+    });
+    // 'total': the tax falls on the whole discounted price (calc's TAX_RULE_LABELS), here 5 % of the subtotal.
+    const price = r.body.option.result.price;
+    expect(price.taxCents).toBe(Math.round(price.subtotalCents * 0.05));
+    expect(price.totalCents).toBe(price.subtotalCents + price.taxCents);
+  });
+
+  it('an amount discount within the limit and an amount deposit are taken in cents as typed', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const o = await newOption(estimator, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '') });
+    const url = optionUrl(job.id, o.id);
+    const r = await patch(estimator, url, o.version).send({
+      pricing: { discounts: [pct('amount', 25_000)], deposit: { kind: 'amount', value: 100_000 } },
+    });
+    expect(r.status, JSON.stringify(r.body)).toBe(200);
+    const price = r.body.option.result.price;
+    expect(price.discountCents).toBe(25_000);
+    expect(price.subtotalCents).toBe(price.sellCents - 25_000);
+    expect(price.depositCents).toBe(100_000);
+    expect(price.balanceCents).toBe(price.totalCents - 100_000);
+    const over = await patch(estimator, url, r.body.option.version).send({
+      pricing: { deposit: { kind: 'percent', value: 120 } },
+    });
+    expect(over.body.errors).toContainEqual({
+      path: 'pricing.deposit.value',
+      message: 'Deposit must be between 0 and 100 %',
+    });
   });
 });
 

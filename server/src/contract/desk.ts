@@ -52,9 +52,14 @@ export const depositSchema = z
       ctx.addIssue({ code: 'custom', path: ['value'], message: 'Deposit must be between 0 and 100 %' });
   });
 
+/**
+ * This option's own tax instead of the company's rule (a tax-exempt customer is taxOn 'none'), always with
+ * the reason, which the office reads back beside the tax line (an exemption certificate, another county).
+ */
 export const taxOverrideSchema = z.strictObject({
   taxRatePercent: bounded('Tax rate', 0, 20, '%'),
   taxOn: z.enum(TAX_RULES, { error: 'Choose what is taxed' }),
+  reason: nameField('Reason for the tax change', 120),
 });
 
 /** A discount as typed: calc's shape, a percent at most 100. Amounts are cents. */

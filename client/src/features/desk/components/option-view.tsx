@@ -19,6 +19,7 @@ import type { DeskModel } from '../api/get-models';
 import { explanationView, viewOf, type ExplanationView } from '../model/result-view';
 import { Cautions } from './cautions';
 import { DesignForm } from './design-form';
+import { FirstPriceReview } from './first-price-review';
 import { PricePanel } from './price-panel';
 import { PricingForm } from './pricing-form';
 import { SizingVerdict } from './sizing-verdict';
@@ -95,11 +96,7 @@ export function OptionView({
   const whys = whysOf(option);
   return (
     <div className="flex flex-col gap-4">
-      {option.preliminary ? (
-        <Alert tone="warning" title="Preliminary">
-          A first price from the walk-through; an estimator or the owner reviews it before it is proposed.
-        </Alert>
-      ) : null}
+      <FirstPriceReview jobId={jobId} option={option} viewer={viewer} />
       {option.problems.length > 0 ? (
         <Alert tone="danger" title="This option cannot be worked out yet">
           <ul className="list-disc pl-5">

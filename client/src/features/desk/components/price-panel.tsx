@@ -1,5 +1,5 @@
 import { formatMoney, formatPercent } from '@calc';
-import type { OptionRecord } from '@contract';
+import { taxOverrideSchema, type OptionRecord } from '@contract';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/api-error';
@@ -78,6 +78,8 @@ export function PricePanel({
 }) {
   const p = option.result?.price;
   if (!p) return null;
+  const override = taxOverrideSchema.safeParse(option.pricing?.tax);
+  const tax = override.success ? override.data : null;
   const why = (k: string) => whys.get(`${option.id}:price:${k}`) ?? whys.get(`price:${k}`);
   return (
     <div className="flex flex-col gap-1">
@@ -103,6 +105,12 @@ export function PricePanel({
       ) : null}
       <Row label="Subtotal" cents={p.subtotalCents} why={why('subtotal')} />
       <Row label="Tax" cents={p.taxCents} why={why('tax')} />
+      {tax ? (
+        <p className="px-3 text-sm text-muted">
+          {tax.taxOn === 'none' ? 'Tax exempt' : `This option’s own tax: ${formatPercent(tax.taxRatePercent, 2)}`} —{' '}
+          {tax.reason}
+        </p>
+      ) : null}
       <Row label="Total" cents={p.totalCents} why={why('total')} strong />
       <Row label="Deposit" cents={p.depositCents} why={why('deposit')} />
       <Row label="Balance" cents={p.balanceCents} why={why('balance')} />

@@ -1,55 +1,109 @@
-import { useFieldArray, useFormContext } from 'react-hook-form';
+import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { useState } from 'react';
-import { z } from 'zod';
-import { optionPricingSchema, type OptionPricingInput, type OptionRecord } from '@contract';
-import { Button } from '../../../components/ui/button';
+import { TAX_RULE_LABELS, TAX_RULES } from '@calc';
+import type { OptionRecord } from '@contract';
 import { Form } from '../../../components/ui/form';
 import { SelectField, TextField } from '../../../components/ui/form-fields';
+import { ApiError, isApiError } from '../../../lib/api-error';
 import { useUpdateOption } from '../api/update-option';
+import {
+  pricingFieldPath,
+  pricingFormSchema,
+  pricingFormValues,
+  type PricingFormValues,
+} from '../model/pricing-values';
 import { AmountField } from './amount-field';
+import { RowList } from './row-list';
 import { SaveState } from './save-state';
 
-/** The contract's pricing rules; the plan select's "Every plan" ('') is no plan (null). */
-const pricingFormSchema = optionPricingSchema.extend({
-  financingPlanKey: z.preprocess((v) => (v === '' ? null : v), optionPricingSchema.shape.financingPlanKey),
-});
+const KINDS = [
+  { value: 'percent', label: 'Percent of the price' },
+  { value: 'amount', label: 'Amount in dollars' },
+];
+const DEPOSIT_KINDS = [
+  { value: 'percent', label: 'Percent of the total' },
+  { value: 'amount', label: 'Amount in dollars' },
+];
+const TAX_CHOICE_OPTIONS = [
+  { value: 'company', label: 'The company’s tax rule (price book)' },
+  { value: 'exempt', label: 'Tax exempt for this option' },
+  { value: 'rate', label: 'Another rate for this option' },
+];
+const TAXED = TAX_RULES.filter((r) => r !== 'none').map((r) => ({ value: r, label: TAX_RULE_LABELS[r] }));
 
-/** The option's pricing inputs as stored (the office reads them whole), or the company's rules. */
-export function pricingValues(option: OptionRecord): OptionPricingInput {
-  const p = optionPricingSchema.safeParse(option.pricing ?? {});
-  return p.success ? p.data : optionPricingSchema.parse({});
-}
+const valueLabel = (kind: string | undefined, what: string) => (kind === 'amount' ? `${what} ($)` : `${what} (%)`);
 
 function Discounts() {
-  const { control } = useFormContext<OptionPricingInput>();
+  const { control } = useFormContext<PricingFormValues>();
   const discounts = useFieldArray({ control, name: 'discounts' });
+  const kinds = useWatch({ control, name: 'discounts' }).map((d) => d.kind);
+  return (
+    <RowList
+      legend="Discounts"
+      rows={discounts.fields}
+      rowLabel={(i) => `Discount ${i + 1}`}
+      addLabel="Add a discount"
+      onAdd={() => discounts.append({ label: '', kind: 'percent', value: Number.NaN })}
+      onRemove={(i) => discounts.remove(i)}
+      rowClassName="grid gap-2 sm:grid-cols-[2fr_1.4fr_1fr]"
+    >
+      {(i) => (
+        <>
+          <TextField name={`discounts.${i}.label`} label="Discount name" autoComplete="off" />
+          <SelectField name={`discounts.${i}.kind`} label="Kind" options={KINDS} />
+          <AmountField name={`discounts.${i}.value`} label={valueLabel(kinds[i], 'Discount')} />
+        </>
+      )}
+    </RowList>
+  );
+}
+
+function TaxFields() {
+  const choice = useWatch<PricingFormValues, 'taxChoice'>({ name: 'taxChoice' });
   return (
     <fieldset className="flex flex-col gap-2">
-      <legend className="text-sm font-semibold text-ink-900">Discounts (percent of the price)</legend>
-      {discounts.fields.map((f, i) => (
-        <div key={f.id} className="grid grid-cols-[2fr_1fr_auto] items-end gap-2">
-          <TextField name={`discounts.${i}.label`} label="Discount name" autoComplete="off" />
-          <AmountField name={`discounts.${i}.value`} label="Percent" />
-          <Button variant="ghost" onClick={() => discounts.remove(i)} aria-label={`Remove discount ${i + 1}`}>
-            Remove
-          </Button>
-        </div>
-      ))}
-      <Button
-        variant="secondary"
-        className="self-start"
-        onClick={() => discounts.append({ label: '', kind: 'percent', value: Number.NaN })}
-      >
-        Add a discount
-      </Button>
+      <legend className="text-sm font-semibold text-ink-900">Tax</legend>
+      <div className="grid gap-3 sm:grid-cols-2">
+        <SelectField name="taxChoice" label="Tax for this option" options={TAX_CHOICE_OPTIONS} />
+        {choice === 'rate' ? <AmountField name="tax.taxRatePercent" label="Tax rate (%)" /> : null}
+        {choice === 'rate' ? (
+          <div className="sm:col-span-2">
+            <SelectField name="tax.taxOn" label="What is taxed" options={TAXED} />
+          </div>
+        ) : null}
+        {choice !== 'company' ? (
+          <div className="sm:col-span-2">
+            <TextField
+              name="tax.reason"
+              label="Reason for the tax change"
+              hint="For example the exemption certificate on file, or the county of the work site."
+              autoComplete="off"
+            />
+          </div>
+        ) : null}
+      </div>
     </fieldset>
   );
 }
 
+/** The server's field errors on the PATCH body (pricing.…) re-rooted onto this form's fields. */
+function onFormPaths(e: unknown): unknown {
+  if (!isApiError(e)) return e;
+  return new ApiError({
+    status: e.status,
+    code: e.code,
+    title: e.title,
+    detail: e.detail,
+    errors: e.errors.map((x) => ({ path: pricingFieldPath(x.path), message: x.message })),
+    retryAfter: e.retryAfter,
+  });
+}
+
 /**
- * Markup or margin (the company's rule unless set here), discounts, deposit and the financing plan shown.
- * The office's form (salespeople cannot change the sell rule or tax; the server refuses it). A discount beyond
- * the person's limit is not applied: the server records it for the owner's approval and says so.
+ * Markup or margin (the company's rule unless set here), discounts and the deposit as a percent or an
+ * amount, the option's own tax (exempt or another rate, with the reason) and the financing plan shown.
+ * The office's form (salespeople cannot change the sell rule or tax; the server refuses it). A discount
+ * beyond the person's limit is not applied: the server records it for the owner's approval and says so.
  */
 export function PricingForm({
   jobId,
@@ -65,20 +119,23 @@ export function PricingForm({
   return (
     <Form
       schema={pricingFormSchema}
-      defaultValues={pricingValues(option)}
+      defaultValues={pricingFormValues(option)}
       aria-label={`Pricing of ${option.name}`}
       onSubmit={async (pricing, form) => {
         const sent = JSON.stringify(form.getValues());
-        const saved = await update.mutateAsync({ option, changes: { pricing } });
+        const saved = await update.mutateAsync({ option, changes: { pricing } }).catch((e: unknown) => {
+          throw onFormPaths(e);
+        });
         // What was typed while the save was on its way stays (and stays unsaved); otherwise the form
         // shows what the server stored (a discount beyond the limit is not applied, for one).
         const typedMeanwhile = JSON.stringify(form.getValues()) !== sent;
-        form.reset(pricingValues(saved), { keepDirtyValues: typedMeanwhile });
+        form.reset(pricingFormValues(saved), { keepDirtyValues: typedMeanwhile });
         setSavedVersion(saved.version);
       }}
     >
       {(form) => {
         const rule = form.watch('sellRule');
+        const depositKind = form.watch('deposit.kind');
         return (
           <>
             <div className="grid gap-3 sm:grid-cols-2">
@@ -110,14 +167,19 @@ export function PricingForm({
               ) : null}
             </div>
             <Discounts />
-            <div className="grid gap-3 sm:grid-cols-2">
-              <AmountField name="deposit.value" label="Deposit (percent of the total)" />
-              <SelectField
-                name="financingPlanKey"
-                label="Monthly payment shown for"
-                options={[{ value: '', label: 'Every plan' }, ...plans.map((p) => ({ value: p.key, label: p.name }))]}
-              />
-            </div>
+            <TaxFields />
+            <fieldset className="grid gap-3 sm:grid-cols-2">
+              <legend className="text-sm font-semibold text-ink-900">Deposit and financing</legend>
+              <SelectField name="deposit.kind" label="Deposit as" options={DEPOSIT_KINDS} />
+              <AmountField name="deposit.value" label={valueLabel(depositKind, 'Deposit')} />
+              <div className="sm:col-span-2">
+                <SelectField
+                  name="financingPlanKey"
+                  label="Monthly payment shown for"
+                  options={[{ value: '', label: 'Every plan' }, ...plans.map((p) => ({ value: p.key, label: p.name }))]}
+                />
+              </div>
+            </fieldset>
             <SaveState
               label="Save pricing"
               dirty={form.formState.isDirty}

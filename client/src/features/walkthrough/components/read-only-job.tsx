@@ -32,9 +32,15 @@ export function ReadOnlyJob({
           <h1 className="text-xl font-semibold text-ink-900">{job.customer.name}</h1>
           <p className="text-sm text-muted">{address}</p>
         </div>
-        <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
-          Loads summary
-        </Link>
+        <div className="flex flex-wrap gap-2">
+          <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
+            Loads summary
+          </Link>
+          {/* The desk without money: the units, line sets, charge and electrical an installer works from. */}
+          <Link className={buttonClass('secondary')} to={jobPaths.desk(job.id)}>
+            Equipment and line sets
+          </Link>
+        </div>
       </header>
 
       <section aria-labelledby="job-facts" className="rounded-lg border border-line bg-white p-4">

@@ -118,9 +118,12 @@ export function WalkthroughView({
             <div className="flex flex-wrap items-center gap-2">
               <LiveSaveStatus />
               {/* On a phone the pinned load bar and the link under the header take its place. */}
-              <span className="hidden sm:block">
+              <span className="hidden gap-2 sm:flex">
                 <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
                   Loads summary
+                </Link>
+                <Link className={buttonClass('secondary')} to={jobPaths.desk(job.id)}>
+                  Options and price
                 </Link>
               </span>
             </div>
@@ -135,9 +138,14 @@ export function WalkthroughView({
 
         <div className="-mt-3 flex flex-wrap items-center justify-between gap-2 sm:hidden">
           <p className="min-w-0 text-sm text-muted">{address}</p>
-          <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
-            Loads summary
-          </Link>
+          <div className="flex flex-wrap gap-2">
+            <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
+              Loads summary
+            </Link>
+            <Link className={buttonClass('secondary')} to={jobPaths.desk(job.id)}>
+              Options and price
+            </Link>
+          </div>
         </div>
 
         {conflict ? (

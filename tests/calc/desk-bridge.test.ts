@@ -95,7 +95,7 @@ describe('price book records → the engine price book, then a full design', () 
   it('the system-total pre-charge (2 × 25 ft) is subtracted once from the installed kits (35 + 50 ft)', () => {
     // (35 + 50 − 50) ft × 0.2 oz/ft (the maker's 1/4 in adder) = 7.0 oz [reference §8 formula]
     expect(r.systems[0]?.refrigerant.extraChargeOz).toBe(7);
-    expect(line('refrigerant:R-410A')?.quantity).toBe(0.44); // 7 oz ÷ 16 = 0.4375 → 0.44 lb
+    expect(line('refrigerant:R-454B')?.quantity).toBe(0.44); // 7 oz ÷ 16 = 0.4375 → 0.44 lb
   });
 });
 

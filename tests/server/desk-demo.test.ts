@@ -39,6 +39,8 @@ describe('demo desk', () => {
       const jobs = (await s.agent.get('/api/jobs?status=design')).body.items as { id: string }[];
       const curveTemps = [...data.desk.models.values()].flatMap((m) => m.coolingPoints.map((p) => p.outdoorF));
       expect(curveTemps.length).toBeGreaterThan(0);
+      // The demo catalog sells no R-410A outdoor unit (reference §11 row 11.6: not allowed in a new split system in 2026).
+      expect(data.catalog.outdoorUnits.filter((u) => u.refrigerant === 'R-410A').map((u) => u.key)).toEqual([]);
       let ready = 0;
       let pending = 0;
       let options = 0;
@@ -85,6 +87,32 @@ describe('demo desk', () => {
             direct.warnings.filter((w) => w.startsWith('No price for')),
             o.name,
           ).toEqual([]);
+          // Issue 13: no demo system is R-410A (GWP 2088, above the 700 limit of the Technology Transitions rule for
+          // new split systems from 2025 [PUB: reference §11, row 11.6]), so calc's rule warning never shows on the demo.
+          for (const y of direct.systems) {
+            expect(y.refrigerantRule.verdict, `${o.name} ${y.name}`).toBe('allowed');
+            expect(y.refrigerant.safetyClass, `${o.name} ${y.name}`).toBe('A2L');
+          }
+          expect(
+            direct.warnings.filter((w) => w.includes('Technology Transitions')),
+            o.name,
+          ).toEqual([]);
+          // Every demo option passes the A2L room-size check on the space a leak spreads over
+          // [PUB: IEC 60335-2-40:2018 Annex GG, reference §11]; the multi-zone systems are above m1 = 6 × LFL, so the
+          // check is made (one explanation per indoor unit), not skipped.
+          expect(
+            direct.blockers.filter((b) => b.kind === 'a2l'),
+            o.name,
+          ).toEqual([]);
+          for (const y of direct.systems) {
+            const checks = y.explanations.filter((e) => e.key.startsWith(`${y.systemKey}:a2l:`));
+            expect(checks.length, `${o.name} ${y.name}`).toBeGreaterThan(0);
+            if (y.outdoorUnitKey.startsWith('TSL-M'))
+              expect(
+                checks.map((e) => e.key),
+                `${o.name} ${y.name}`,
+              ).not.toContain(`${y.systemKey}:a2l:m1`);
+          }
           for (const k of [
             'costCents',
             'sellCents',
@@ -96,11 +124,25 @@ describe('demo desk', () => {
           ] as const)
             expect(o.result.price[k], `${o.name} ${k}`).toBe(direct.price[k]);
           expect(o.result.price.monthlyPaymentCents).toBe(direct.price.monthlyPaymentCents);
+          // Every demo option is sized as the trade would (the job with a discount waiting too): every head against its
+          // zone's load and every outdoor unit against its system's, within the sizing policy's range (default policy:
+          // variable-speed heat pump 90–130 % of the total cooling load [MEM: ACCA Manual S 2nd ed. Table N2]).
+          for (const u of [...direct.zones, ...direct.systems])
+            expect(u.sizing.withinRange, `${acct.company} ${o.name} ${u.name}: ${u.sizing.warnings.join(' | ')}`).toBe(
+              true,
+            );
+          // A ductless head serves one room, or rooms that are one open space (common practice: its air does not
+          // reach a closed room); several closed rooms share a ducted unit.
+          for (const z of o.design.zones) {
+            const head = data.catalog.indoorUnits.find((u) => u.key === z.indoorUnitKey);
+            if (head?.unitType !== 'ducted-air-handler' && z.roomIds.length > 1)
+              expect(z.openSpace, `${o.name} ${z.name}: a ${head?.unitType} serving ${z.roomIds.length} rooms`).toBe(
+                true,
+              );
+          }
           if (isReady) {
             readyOptions += 1;
-            // An option ready to propose must be sized as the trade would: every head against its zone's load
-            // and every outdoor unit against its system's, within the sizing policy's range (default policy:
-            // variable-speed heat pump 90–130 % of the total cooling load [MEM: ACCA Manual S 2nd ed. Table N2]).
+            // An option ready to propose is rated at the job's design temperature by the maker's own data.
             const coolingF = jobBody.designConditions.outdoorCoolingDryBulbF as number;
             const units = [
               ...direct.zones.map((z) => ({ name: z.name, key: z.indoorUnitKey, sizing: z.sizing })),
@@ -108,7 +150,6 @@ describe('demo desk', () => {
             ];
             for (const u of units) {
               const what = `${acct.company} ${o.name} ${u.name} (${u.key})`;
-              expect(u.sizing.withinRange, `${what}: ${u.sizing.warnings.join(' | ')}`).toBe(true);
               // The demo cooling curves span 75–115 °F: a design temperature inside them is the maker's data.
               if (coolingF >= Math.min(...curveTemps) && coolingF <= Math.max(...curveTemps))
                 expect(

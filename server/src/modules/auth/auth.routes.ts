@@ -33,8 +33,8 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     policy: PUBLIC,
     body: loginSchema,
     response: userResponse,
-    handler: async ({ em, req, body, services }) => ({
-      user: presentUser(await signIn(em, req, limiter, services.clock, body)),
+    handler: async ({ service, req, body }) => ({
+      user: presentUser(await signIn({ ...service, req, limiter }, body)),
     }),
   });
 
@@ -80,8 +80,8 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     policy: ANY_STAFF,
     body: changePasswordSchema,
     response: passwordChangedResponse,
-    handler: async ({ em, req, actor, body, services }) =>
-      changePassword(em, req, { limiter, queue: services.queue, clock: services.clock }, actor, body),
+    handler: async ({ service, req, body, services }) =>
+      changePassword({ ...service, req, limiter, queue: services.queue }, body),
   });
 
   /** "Forgot password": always the same 202 answer, whether or not the address has an account. */
@@ -92,8 +92,8 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     body: passwordResetRequestSchema,
     response: accountMessageResponse,
     status: 202,
-    handler: async ({ em, req, body, services }) => {
-      await requestPasswordReset(em, req, { limiter: resetLimiter, queue: services.queue }, body.email);
+    handler: async ({ service, req, body, services }) => {
+      await requestPasswordReset({ ...service, req, limiter: resetLimiter, queue: services.queue }, body.email);
       return { message: RESET_REQUESTED_MESSAGE };
     },
   });
@@ -105,8 +105,8 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     policy: PUBLIC,
     body: passwordResetSchema,
     response: accountMessageResponse,
-    handler: async ({ em, body, services }) => {
-      await completePasswordReset(em, { queue: services.queue, clock: services.clock, limiter }, body);
+    handler: async ({ service, body, services }) => {
+      await completePasswordReset({ ...service, limiter, queue: services.queue }, body);
       return { message: 'Your new password is set. Sign in with it.' };
     },
   });

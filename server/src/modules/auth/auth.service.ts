@@ -1,9 +1,9 @@
-import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Request } from 'express';
 import { UnauthenticatedError } from '../../lib/errors';
+import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { newCsrfToken } from '../../lib/session';
 import { dummyHash, hashPassword, needsRehash, verifyPassword } from '../../services/passwords';
-import type { Clock } from '../../services/services';
 import { UserSchema, type User } from '../users/user.entity';
 import type { LoginLimiter } from './rate-limit';
 
@@ -17,12 +17,15 @@ function save(req: Request): Promise<void> {
   return new Promise((resolve, reject) => req.session.save((err) => (err ? reject(err) : resolve())));
 }
 
+/** Sign-in works on the request's session (no one is signed in yet) and counts failures. */
+export interface SignInContext extends ServiceContext<Actor | null> {
+  readonly req: Request;
+  readonly limiter: LoginLimiter;
+}
+
 /** Checks the password; on success starts a fresh session (new id, new CSRF token) for the user. */
 export async function signIn(
-  em: EntityManager,
-  req: Request,
-  limiter: LoginLimiter,
-  clock: Clock,
+  { em, clock, req, limiter }: SignInContext,
   input: { email: string; password: string },
 ): Promise<User> {
   const ip = req.ip ?? 'unknown';

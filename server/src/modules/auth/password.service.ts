@@ -4,6 +4,7 @@ import type { Request } from 'express';
 import { createHash, randomBytes } from 'node:crypto';
 import { BadRequestError, ValidationError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { hashPassword, verifyPassword } from '../../services/passwords';
 import type { Queue } from '../../services/queue';
 import type { Clock } from '../../services/services';
@@ -34,22 +35,39 @@ function queuePasswordChanged(em: EntityManager, queue: Queue, user: User, when:
   });
 }
 
+/** Changing one's own password: the session it stays in, the sign-in limit and the queue for the notice. */
+export interface PasswordChangeContext extends ServiceContext {
+  readonly req: Request;
+  readonly limiter: LoginLimiter;
+  readonly queue: Queue;
+}
+
+/** Asking for a reset link (no one signed in): the request (its IP), the reset limit and the queue. */
+export interface ResetRequestContext extends ServiceContext<Actor | null> {
+  readonly req: Request;
+  readonly limiter: ResetLimiter;
+  readonly queue: Queue;
+}
+
+/** Using a reset link (no one signed in): the sign-in limit it lifts and the queue for the notice. */
+export interface ResetContext extends ServiceContext<Actor | null> {
+  readonly limiter: LoginLimiter;
+  readonly queue: Queue;
+}
+
 /**
  * Changing one's own password: the current one is required (wrong tries count against the account's
  * sign-in limit), the user's other sessions and open reset links end, this one stays, and they are told by e-mail.
  */
 export async function changePassword(
-  em: EntityManager,
-  req: Request,
-  deps: { limiter: LoginLimiter; queue: Queue; clock: Clock },
-  actor: Actor,
+  { em, actor, clock, req, limiter, queue }: PasswordChangeContext,
   input: { currentPassword: string; newPassword: string },
 ): Promise<{ endedSessions: number }> {
   const ip = req.ip ?? 'unknown';
-  await deps.limiter.assertAllowed(actor.email, ip);
+  await limiter.assertAllowed(actor.email, ip);
   const user = await em.findOneOrFail(UserSchema, { id: actor.userId }, { populate: ['company', 'passwordHash'] });
   if (!(await verifyPassword(user.passwordHash, input.currentPassword))) {
-    await deps.limiter.recordFailure(actor.email, ip);
+    await limiter.recordFailure(actor.email, ip);
     throw new ValidationError([{ path: 'currentPassword', message: CURRENT_PASSWORD_WRONG }]);
   }
   if (input.newPassword === input.currentPassword) {
@@ -60,7 +78,7 @@ export async function changePassword(
   // A reset link asked for before the change must not undo it.
   await em.nativeDelete(PasswordResetTokenSchema, { user: user.id });
   const endedSessions = await endSessionsOf(em, user.id, req.sessionID);
-  await queuePasswordChanged(em, deps.queue, user, deps.clock.now(), 'from a signed-in session');
+  await queuePasswordChanged(em, queue, user, clock.now(), 'from a signed-in session');
   req.log?.info({ event: 'password_changed', userId: user.id, endedSessions }, 'password changed');
   return { endedSessions };
 }
@@ -70,18 +88,16 @@ export async function changePassword(
  * account) and, for an active account, queues the reset e-mail. The caller answers the same either way.
  */
 export async function requestPasswordReset(
-  em: EntityManager,
-  req: Request,
-  deps: { limiter: ResetLimiter; queue: Queue },
+  { em, req, limiter, queue }: ResetRequestContext,
   email: string,
 ): Promise<void> {
-  await deps.limiter.consume(email, req.ip ?? 'unknown');
+  await limiter.consume(email, req.ip ?? 'unknown');
   const user = await em.findOne(UserSchema, { email }, { populate: ['company'] });
   if (!user || !user.active) {
     req.log?.info({ event: 'password_reset_unknown' }, 'password reset asked for an address without an account');
     return;
   }
-  await queueMessage(em, deps.queue, {
+  await queueMessage(em, queue, {
     companyId: user.company.id,
     userId: user.id,
     kind: 'password-reset',
@@ -128,11 +144,10 @@ export async function composeResetMessage(
  * every other token of the user, every session of the user ends, and they are told by e-mail.
  */
 export async function completePasswordReset(
-  em: EntityManager,
-  deps: { queue: Queue; clock: Clock; limiter: LoginLimiter },
+  { em, clock, limiter, queue }: ResetContext,
   input: { token: string; password: string },
 ): Promise<void> {
-  const now = deps.clock.now();
+  const now = clock.now();
   const row = await em.findOne(PasswordResetTokenSchema, { tokenHash: sha256(input.token) });
   if (!row || row.expiresAt.getTime() <= now.getTime()) throw new BadRequestError(RESET_LINK_INVALID);
   // Deleting is what uses it up: of two requests racing with one token, only one deletes the row.
@@ -146,6 +161,6 @@ export async function completePasswordReset(
   await em.nativeDelete(PasswordResetTokenSchema, { user: user.id });
   await endSessionsOf(em, user.id);
   // Whoever was locked out by failed sign-ins may sign in with the new password at once.
-  await deps.limiter.recordSuccess(user.email);
-  await queuePasswordChanged(em, deps.queue, user, now, 'with an e-mailed reset link');
+  await limiter.recordSuccess(user.email);
+  await queuePasswordChanged(em, queue, user, now, 'with an e-mailed reset link');
 }

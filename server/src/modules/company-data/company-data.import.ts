@@ -15,7 +15,7 @@ import {
   type ImportRowIn,
 } from '@calc';
 import { ConflictError, UnprocessableError } from '../../lib/errors';
-import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { CompanySchema } from '../companies/company.entity';
 import { UserSchema } from '../users/user.entity';
 import { CompanyDataChangeSchema, CompanyDataRowSchema, type CompanyDataRow } from './company-data.entity';
@@ -76,8 +76,10 @@ export async function companyUnits(em: EntityManager, companyId: string): Promis
   return company.unitSystem === 'metric' ? 'metric' : 'imperial';
 }
 
-async function diffAgainst(em: EntityManager, companyId: string, dataset: DatasetId, csv: string) {
-  const held = await listRows(em, companyId, dataset);
+async function diffAgainst(ctx: ServiceContext, dataset: DatasetId, csv: string) {
+  const { em } = ctx;
+  const companyId = ctx.actor.companyId;
+  const held = await listRows(ctx, dataset);
   const units = await companyUnits(em, companyId);
   const parsed = parseCsv(csv);
   if ('error' in parsed) return { held, diff: EMPTY_DIFF(parsed.error) };
@@ -118,8 +120,8 @@ function presentDiff(diff: ImportDiff) {
   };
 }
 
-export async function previewImport(em: EntityManager, actor: Actor, dataset: DatasetId, csv: string) {
-  const { held, diff } = await diffAgainst(em, actor.companyId, dataset, csv);
+export async function previewImport(ctx: ServiceContext, dataset: DatasetId, csv: string) {
+  const { held, diff } = await diffAgainst(ctx, dataset, csv);
   return { ...presentDiff(diff), token: fingerprint(dataset, csv, held) };
 }
 
@@ -129,10 +131,11 @@ export async function previewImport(em: EntityManager, actor: Actor, dataset: Da
  * as it was at the preview (same keys, same versions) and no row is refused. Anything else
  * changes nothing.
  */
-export async function applyImport(em: EntityManager, actor: Actor, dataset: DatasetId, csv: string, token: string) {
-  return em.transactional(async (tx) => {
+export async function applyImport(ctx: ServiceContext, dataset: DatasetId, csv: string, token: string) {
+  const { actor } = ctx;
+  return ctx.em.transactional(async (tx) => {
     await lockTable(tx, actor.companyId, dataset);
-    const { held, diff } = await diffAgainst(tx, actor.companyId, dataset, csv);
+    const { held, diff } = await diffAgainst({ ...ctx, em: tx }, dataset, csv);
     if (fingerprint(dataset, csv, held) !== token)
       throw new ConflictError(
         `The ${DATASETS[dataset].label.toLowerCase()} changed after your preview (someone saved or imported). Nothing was imported: preview the file again to see the changes as they are now.`,
@@ -176,15 +179,15 @@ function toCsv(dataset: DatasetId, records: ReadonlyArray<Record<string, unknown
   return `\uFEFF${stringify([ds.columns.map((c) => c.name), ...rows], { record_delimiter: '\r\n' })}`;
 }
 
-export async function exportCsv(em: EntityManager, companyId: string, dataset: DatasetId): Promise<string> {
-  const rows = await listRows(em, companyId, dataset);
+export async function exportCsv(ctx: ServiceContext, dataset: DatasetId): Promise<string> {
+  const rows = await listRows(ctx, dataset);
   return toCsv(
     dataset,
     rows.map((r) => r.data),
-    await companyUnits(em, companyId),
+    await companyUnits(ctx.em, ctx.actor.companyId),
   );
 }
 
-export async function templateCsv(em: EntityManager, companyId: string, dataset: DatasetId): Promise<string> {
-  return toCsv(dataset, [templateExample(dataset)], await companyUnits(em, companyId));
+export async function templateCsv({ em, actor }: ServiceContext, dataset: DatasetId): Promise<string> {
+  return toCsv(dataset, [templateExample(dataset)], await companyUnits(em, actor.companyId));
 }

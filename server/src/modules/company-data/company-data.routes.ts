@@ -50,8 +50,8 @@ export function companyDataRoutes(api: ApiRouter): void {
     body: z.strictObject({ settings: priceBookSettingsSchema.strict() }),
     response: priceBookSettingsResponse,
     versioned: (out) => out.settings.version,
-    handler: async ({ em, actor, body, ifMatch }) => ({
-      settings: presentSettings(await putSettings(em, actor, ifMatch, body.settings), actor.role),
+    handler: async ({ service, actor, body, ifMatch }) => ({
+      settings: presentSettings(await putSettings(service, ifMatch, body.settings), actor.role),
     }),
   });
   api.route({
@@ -60,9 +60,9 @@ export function companyDataRoutes(api: ApiRouter): void {
     policy: ANY_STAFF,
     params: datasetParams,
     response: companyDataTableResponse,
-    handler: async ({ em, actor, params }) => {
+    handler: async ({ service, actor, params }) => {
       assertReader(actor, params.dataset);
-      const rows = await listRows(em, actor.companyId, params.dataset);
+      const rows = await listRows(service, params.dataset);
       return { dataset: params.dataset, rows: rows.map((r) => presentRow(r, actor.role)) };
     },
   });
@@ -72,8 +72,8 @@ export function companyDataRoutes(api: ApiRouter): void {
     policy: OFFICE,
     params: datasetParams,
     response: rawResponse('text/csv'),
-    handler: async ({ em, actor, params, res }) => {
-      const csv = await exportCsv(em, actor.companyId, params.dataset);
+    handler: async ({ service, params, res }) => {
+      const csv = await exportCsv(service, params.dataset);
       res.type('text/csv; charset=utf-8').attachment(`${params.dataset}.csv`).send(csv);
       return undefined;
     },
@@ -84,11 +84,11 @@ export function companyDataRoutes(api: ApiRouter): void {
     policy: OFFICE,
     params: datasetParams,
     response: rawResponse('text/csv'),
-    handler: async ({ em, actor, params, res }) => {
+    handler: async ({ service, params, res }) => {
       res
         .type('text/csv; charset=utf-8')
         .attachment(`${params.dataset}-template.csv`)
-        .send(await templateCsv(em, actor.companyId, params.dataset));
+        .send(await templateCsv(service, params.dataset));
       return undefined;
     },
   });
@@ -99,8 +99,8 @@ export function companyDataRoutes(api: ApiRouter): void {
     params: datasetParams,
     body: importPreviewBody,
     response: importPreviewResponse,
-    handler: async ({ em, actor, params, body }) => ({
-      preview: await previewImport(em, actor, params.dataset, body.csv),
+    handler: async ({ service, params, body }) => ({
+      preview: await previewImport(service, params.dataset, body.csv),
     }),
   });
   api.route({
@@ -110,8 +110,8 @@ export function companyDataRoutes(api: ApiRouter): void {
     params: datasetParams,
     body: importApplyBody,
     response: importApplyResponse,
-    handler: async ({ em, actor, params, body }) => ({
-      applied: await applyImport(em, actor, params.dataset, body.csv, body.token),
+    handler: async ({ service, params, body }) => ({
+      applied: await applyImport(service, params.dataset, body.csv, body.token),
     }),
   });
   api.route({
@@ -123,8 +123,8 @@ export function companyDataRoutes(api: ApiRouter): void {
     status: 201,
     response: companyDataRowResponse,
     versioned: (out) => out.row.version,
-    handler: async ({ em, actor, params, body }) => ({
-      row: presentRow(await createRow(em, actor, params.dataset, body.record), actor.role),
+    handler: async ({ service, actor, params, body }) => ({
+      row: presentRow(await createRow(service, params.dataset, body.record), actor.role),
     }),
   });
   api.route({
@@ -134,9 +134,9 @@ export function companyDataRoutes(api: ApiRouter): void {
     params: rowParams,
     response: companyDataRowResponse,
     versioned: (out) => out.row.version,
-    handler: async ({ em, actor, params }) => {
+    handler: async ({ service, actor, params }) => {
       assertReader(actor, params.dataset);
-      return { row: presentRow(await getRow(em, actor.companyId, params.dataset, params.key), actor.role) };
+      return { row: presentRow(await getRow(service, params.dataset, params.key), actor.role) };
     },
   });
   api.route({
@@ -147,8 +147,8 @@ export function companyDataRoutes(api: ApiRouter): void {
     body: recordBody,
     response: companyDataRowResponse,
     versioned: (out) => out.row.version,
-    handler: async ({ em, actor, params, body, ifMatch }) => ({
-      row: presentRow(await updateRow(em, actor, params.dataset, params.key, ifMatch, body.record), actor.role),
+    handler: async ({ service, actor, params, body, ifMatch }) => ({
+      row: presentRow(await updateRow(service, params.dataset, params.key, ifMatch, body.record), actor.role),
     }),
   });
   api.route({
@@ -157,8 +157,8 @@ export function companyDataRoutes(api: ApiRouter): void {
     policy: OFFICE,
     params: rowParams,
     response: companyDataHistoryResponse,
-    handler: async ({ em, actor, params }) => ({
-      history: (await rowHistory(em, actor.companyId, params.dataset, params.key)).map(presentChange),
+    handler: async ({ service, params }) => ({
+      history: (await rowHistory(service, params.dataset, params.key)).map(presentChange),
     }),
   });
 }

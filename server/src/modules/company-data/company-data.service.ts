@@ -2,6 +2,7 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { DATASETS, recordToCells, type CellChange, type CellError, type DatasetId, type DataRole } from '@calc';
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { zodToFieldErrors } from '../../lib/validate';
 import { CompanySchema } from '../companies/company.entity';
 import { UserSchema } from '../users/user.entity';
@@ -21,8 +22,9 @@ export async function lockTable(em: EntityManager, companyId: string, dataset: D
   await em.execute('select pg_advisory_xact_lock(hashtext(?))', [`company-data:${companyId}:${dataset}`]);
 }
 
-export async function listRows(em: EntityManager, companyId: string, dataset: DatasetId) {
-  return em.find(CompanyDataRowSchema, { company: companyId, dataset }, { orderBy: { key: 'asc' } });
+/** The records of one of the actor's company's tables, by key. */
+export async function listRows({ em, actor }: ServiceContext, dataset: DatasetId) {
+  return em.find(CompanyDataRowSchema, { company: actor.companyId, dataset }, { orderBy: { key: 'asc' } });
 }
 
 /** Each cell that differs between two records of a table, in column order. */
@@ -89,15 +91,14 @@ async function checkReferences(em: EntityManager, companyId: string, dataset: Da
     throw new ValidationError(errors.map((e) => ({ path: `record.${e.field}`, message: e.message })));
 }
 
-export async function getRow(em: EntityManager, companyId: string, dataset: DatasetId, key: string) {
-  const row = await em.findOne(CompanyDataRowSchema, { company: companyId, dataset, key });
+export async function getRow({ em, actor }: ServiceContext, dataset: DatasetId, key: string) {
+  const row = await em.findOne(CompanyDataRowSchema, { company: actor.companyId, dataset, key });
   if (!row) throw new NotFoundError(`The ${DATASETS[dataset].noun} ${key}`);
   return row;
 }
 
 export async function createRow(
-  em: EntityManager,
-  actor: Actor,
+  { em, actor }: ServiceContext,
   dataset: DatasetId,
   raw: Record<string, unknown>,
 ): Promise<CompanyDataRow> {
@@ -124,13 +125,13 @@ export async function createRow(
 }
 
 export async function updateRow(
-  em: EntityManager,
-  actor: Actor,
+  ctx: ServiceContext,
   dataset: DatasetId,
   key: string,
   version: number,
   raw: Record<string, unknown>,
 ): Promise<CompanyDataRow> {
+  const { em, actor } = ctx;
   const record = parseRecord(dataset, raw);
   if (record.key !== key)
     throw new ValidationError([
@@ -138,7 +139,7 @@ export async function updateRow(
     ]);
   return em.transactional(async (tx) => {
     await lockTable(tx, actor.companyId, dataset);
-    const row = await getRow(tx, actor.companyId, dataset, key);
+    const row = await getRow({ ...ctx, em: tx }, dataset, key);
     assertVersion(version, row.version, `The ${DATASETS[dataset].noun} ${key}`, () =>
       presentRow(row, actor.role as DataRole),
     );
@@ -160,11 +161,11 @@ export async function updateRow(
   });
 }
 
-export async function rowHistory(em: EntityManager, companyId: string, dataset: DatasetId, key: string) {
-  await getRow(em, companyId, dataset, key);
-  return em.find(
+export async function rowHistory(ctx: ServiceContext, dataset: DatasetId, key: string) {
+  await getRow(ctx, dataset, key);
+  return ctx.em.find(
     CompanyDataChangeSchema,
-    { company: companyId, dataset, key },
+    { company: ctx.actor.companyId, dataset, key },
     { orderBy: { changedAt: 'desc', id: 'asc' }, populate: ['changedBy'], limit: 200 },
   );
 }

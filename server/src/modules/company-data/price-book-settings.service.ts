@@ -1,6 +1,6 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { priceBookSettingsSchema, type DataRole, type PriceBookSettings } from '@calc';
-import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { CompanySchema } from '../companies/company.entity';
 import { assertVersion } from '../../lib/version-lock';
 import { PriceBookSettingsSchema } from './company-data.entity';
@@ -22,12 +22,13 @@ export function presentSettings(s: { data: PriceBookSettings; version: number },
   };
 }
 
+/** A company's settings (keyed by company: the desk reads them too). */
 export async function getSettings(em: EntityManager, companyId: string) {
   const row = await em.findOne(PriceBookSettingsSchema, { company: companyId });
   return row ? { data: row.data, version: row.version } : { data: DEFAULT_PRICE_BOOK_SETTINGS, version: 0 };
 }
 
-export async function putSettings(em: EntityManager, actor: Actor, version: number, input: PriceBookSettings) {
+export async function putSettings({ em, actor }: ServiceContext, version: number, input: PriceBookSettings) {
   const data = priceBookSettingsSchema.parse(input);
   const row = await em.findOne(PriceBookSettingsSchema, { company: actor.companyId });
   assertVersion(version, row?.version ?? 0, 'The price-book settings', () =>

@@ -24,7 +24,7 @@ export interface DeskJob {
 
 /** The job (404 outside the actor's scope: another company, a salesperson's colleague's job, an installer's unassigned job). */
 export async function readDeskJob(ctx: ServiceContext, jobId: string): Promise<DeskJob> {
-  const job = await findJob(ctx.em, ctx.actor, jobId);
+  const job = await findJob(ctx, jobId);
   await ctx.em.populate(job, ['readyBy']);
   const rooms = await ctx.em.find(
     RoomSchema,

@@ -2,6 +2,7 @@ import type { FilterQuery } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { NotFoundError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { JobSchema, type Job } from './job.entity';
 
 /**
@@ -16,7 +17,8 @@ export function jobScope(actor: Actor): FilterQuery<Job> {
 
 export const JOB_POPULATE = ['customer', 'salesperson', 'assignedInstaller'] as const;
 
-export async function findJob(em: EntityManager, actor: Actor, id: string): Promise<Job> {
+/** A job the actor may see, as an entity to change; 404 otherwise (inside a transaction: `{ ...ctx, em: tx }`). */
+export async function findJob({ em, actor }: ServiceContext, id: string): Promise<Job> {
   const job = await em.findOne(JobSchema, { $and: [jobScope(actor), { id }] }, { populate: JOB_POPULATE });
   if (!job) throw new NotFoundError('The job');
   return job;

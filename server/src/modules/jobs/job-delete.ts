@@ -1,7 +1,6 @@
-import type { EntityManager } from '@mikro-orm/postgresql';
 import { DELETABLE_JOB_STATUSES, mayDeleteJob, type JobStatus } from '@contract';
 import { ConflictError, ForbiddenError } from '../../lib/errors';
-import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import type { Storage } from '../../services/storage';
 import { PhotoSchema } from '../photos/photo.entity';
 import { RoomSchema } from '../rooms/room.entity';
@@ -9,6 +8,11 @@ import { findJob } from './job-access';
 import { JobSchema } from './job.entity';
 import { presentJob } from './job.presenter';
 import { assertVersion } from '../../lib/version-lock';
+
+/** Deleting a job also removes its photos' files. */
+export interface JobDeleteContext extends ServiceContext {
+  readonly storage: Storage;
+}
 
 function notDeletable(status: JobStatus): ConflictError {
   const instead = status === 'proposed' ? 'mark it lost instead' : 'won, lost and installed jobs stay for the reports';
@@ -24,15 +28,10 @@ function notDeletable(status: JobStatus): ConflictError {
  * Photos, then rooms, then the job, so a photo upload racing this waits on its room instead of
  * deadlocking on the job row; the job goes only at the version the person saw.
  */
-export async function deleteJob(
-  em: EntityManager,
-  actor: Actor,
-  storage: Storage,
-  id: string,
-  version: number,
-): Promise<void> {
+export async function deleteJob(ctx: JobDeleteContext, id: string, version: number): Promise<void> {
+  const { em, actor, storage } = ctx;
   const keys = await em.transactional(async (tx) => {
-    const job = await findJob(tx, actor, id);
+    const job = await findJob({ ...ctx, em: tx }, id);
     assertVersion(version, job.version, 'The job', () => presentJob(job));
     if (!DELETABLE_JOB_STATUSES.includes(job.status)) throw notDeletable(job.status);
     if (!mayDeleteJob({ id: actor.userId, role: actor.role }, job)) throw new ForbiddenError();

@@ -1,7 +1,7 @@
-import type { EntityManager } from '@mikro-orm/postgresql';
 import type { DesignConditions } from '@calc';
 import { NotFoundError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { likePattern } from '../customers/customer.schema';
 import type { DesignSources, JobStatus } from '@contract';
 import type { JobView } from './job.presenter';
@@ -82,8 +82,7 @@ function toView(r: JobRow): JobView {
 
 /** One page of the jobs the actor may see and how many there are, in one statement (a window count). */
 export async function listJobViews(
-  em: EntityManager,
-  actor: Actor,
+  { em, actor }: ServiceContext,
   q: ListJobsQuery,
 ): Promise<{ items: JobView[]; total: number }> {
   const scope = scopeSql(actor);
@@ -117,7 +116,7 @@ export async function listJobViews(
 }
 
 /** A job the actor may see, for reading; 404 otherwise. */
-export async function findJobView(em: EntityManager, actor: Actor, id: string): Promise<JobView> {
+export async function findJobView({ em, actor }: ServiceContext, id: string): Promise<JobView> {
   const scope = scopeSql(actor);
   const [row] = await em.execute<JobRow[]>(`select ${JOB_COLUMNS} ${JOB_FROM} where ${scope.sql} and j.id = ?`, [
     ...scope.params,

@@ -16,8 +16,8 @@ export function jobRoutes(api: ApiRouter): void {
     summary: 'The jobs the person may see, newest activity first',
     query: listJobsQuery,
     response: jobsResponse,
-    handler: async ({ em, actor, query }) => {
-      const { items, total } = await listJobViews(em, actor, query);
+    handler: async ({ service, query }) => {
+      const { items, total } = await listJobViews(service, query);
       return { items: items.map(presentJob), total, page: query.page, pageSize: query.pageSize };
     },
   });
@@ -28,7 +28,7 @@ export function jobRoutes(api: ApiRouter): void {
     params: jobIdParams,
     response: jobResponse,
     versioned: etag,
-    handler: async ({ em, actor, params }) => ({ job: presentJob(await findJobView(em, actor, params.id)) }),
+    handler: async ({ service, params }) => ({ job: presentJob(await findJobView(service, params.id)) }),
   });
   api.route({
     method: 'post',
@@ -38,9 +38,7 @@ export function jobRoutes(api: ApiRouter): void {
     status: 201,
     response: jobResponse,
     versioned: etag,
-    handler: async ({ em, actor, body, services }) => ({
-      job: presentJob(await createJob(em, actor, services.clock, body)),
-    }),
+    handler: async ({ service, body }) => ({ job: presentJob(await createJob(service, body)) }),
   });
   api.route({
     method: 'patch',
@@ -50,8 +48,8 @@ export function jobRoutes(api: ApiRouter): void {
     body: updateJobSchema,
     response: jobResponse,
     versioned: etag,
-    handler: async ({ em, actor, params, body, services, ifMatch }) => ({
-      job: presentJob(await updateJob(em, actor, services.clock, params.id, ifMatch, body)),
+    handler: async ({ service, params, body, ifMatch }) => ({
+      job: presentJob(await updateJob(service, params.id, ifMatch, body)),
     }),
   });
   api.route({
@@ -62,8 +60,8 @@ export function jobRoutes(api: ApiRouter): void {
     params: jobIdParams,
     response: NO_CONTENT,
     versioned: true,
-    handler: async ({ em, actor, params, services, ifMatch }) => {
-      await deleteJob(em, actor, services.storage, params.id, ifMatch);
+    handler: async ({ service, params, services, ifMatch }) => {
+      await deleteJob({ ...service, storage: services.storage }, params.id, ifMatch);
     },
   });
 }

@@ -1,4 +1,3 @@
-import type { EntityManager } from '@mikro-orm/postgresql';
 import {
   enteredOf,
   JOB_OWNER_ROLES,
@@ -13,8 +12,7 @@ import {
   type JobStatus,
 } from '@contract';
 import { ForbiddenError, UnprocessableError, ValidationError } from '../../lib/errors';
-import type { Actor } from '../../lib/route';
-import type { Clock } from '../../services/services';
+import type { ServiceContext } from '../../lib/service-context';
 import { CompanySchema } from '../companies/company.entity';
 import { companyDesignDefaults } from '../company-settings/company-settings.service';
 import { CustomerSchema, type Customer } from '../customers/customer.entity';
@@ -26,13 +24,13 @@ import { presentJob } from './job.presenter';
 import type { CreateJobInput, UpdateJobInput } from './job.schema';
 import { assertVersion } from '../../lib/version-lock';
 
-async function customerOf(em: EntityManager, actor: Actor, id: string): Promise<Customer> {
+async function customerOf({ em, actor }: ServiceContext, id: string): Promise<Customer> {
   const c = await em.findOne(CustomerSchema, { id, company: actor.companyId });
   if (!c) throw new ValidationError([{ path: 'customerId', message: 'Choose a customer of your company.' }]);
   return c;
 }
 
-async function salespersonOf(em: EntityManager, actor: Actor, id: string | undefined): Promise<User> {
+async function salespersonOf({ em, actor }: ServiceContext, id: string | undefined): Promise<User> {
   const wanted = id ?? actor.userId;
   if (!mayChooseSalesperson({ id: actor.userId, role: actor.role }, wanted))
     throw new ForbiddenError('A salesperson can only own their own jobs.');
@@ -49,7 +47,7 @@ async function salespersonOf(em: EntityManager, actor: Actor, id: string | undef
   return u;
 }
 
-async function installerOf(em: EntityManager, actor: Actor, id: string | null): Promise<User | null> {
+async function installerOf({ em, actor }: ServiceContext, id: string | null): Promise<User | null> {
   if (!mayAssignInstaller(actor.role)) throw new ForbiddenError('Only an owner or estimator assigns installers.');
   if (id === null) return null;
   const u = await em.findOne(UserSchema, { id, company: actor.companyId, active: true, role: 'installer' });
@@ -60,11 +58,12 @@ async function installerOf(em: EntityManager, actor: Actor, id: string | null): 
   return u;
 }
 
-export async function createJob(em: EntityManager, actor: Actor, clock: Clock, input: CreateJobInput): Promise<Job> {
-  const customer = await customerOf(em, actor, input.customerId);
-  const salesperson = await salespersonOf(em, actor, input.salespersonId);
+export async function createJob(ctx: ServiceContext, input: CreateJobInput): Promise<Job> {
+  const { em, actor, clock } = ctx;
+  const customer = await customerOf(ctx, input.customerId);
+  const salesperson = await salespersonOf(ctx, input.salespersonId);
   const installer =
-    input.assignedInstallerId === undefined ? null : await installerOf(em, actor, input.assignedInstallerId);
+    input.assignedInstallerId === undefined ? null : await installerOf(ctx, input.assignedInstallerId);
   const defaults = await companyDesignDefaults(em, actor.companyId);
   const design =
     input.designConditions || defaults
@@ -94,14 +93,13 @@ export async function createJob(em: EntityManager, actor: Actor, clock: Clock, i
 }
 
 export async function updateJob(
-  em: EntityManager,
-  actor: Actor,
-  clock: Clock,
+  ctx: ServiceContext,
   id: string,
   version: number,
   input: UpdateJobInput,
 ): Promise<Job> {
-  const job = await findJob(em, actor, id);
+  const { em, actor, clock } = ctx;
+  const job = await findJob(ctx, id);
   assertVersion(version, job.version, 'The job', () => presentJob(job));
   const from: JobStatus = job.status;
   if (input.status !== undefined && input.status !== from) {
@@ -119,10 +117,10 @@ export async function updateJob(
       });
     job.status = input.status;
   }
-  if (input.customerId !== undefined) job.customer = await customerOf(em, actor, input.customerId);
-  if (input.salespersonId !== undefined) job.salesperson = await salespersonOf(em, actor, input.salespersonId);
+  if (input.customerId !== undefined) job.customer = await customerOf(ctx, input.customerId);
+  if (input.salespersonId !== undefined) job.salesperson = await salespersonOf(ctx, input.salespersonId);
   if (input.assignedInstallerId !== undefined)
-    job.assignedInstaller = await installerOf(em, actor, input.assignedInstallerId);
+    job.assignedInstaller = await installerOf(ctx, input.assignedInstallerId);
   if (input.street !== undefined) job.street = input.street;
   if (input.unit !== undefined) job.unit = input.unit;
   if (input.city !== undefined) job.city = input.city;

@@ -22,11 +22,12 @@ export interface PhotoIds {
 
 /** Cleans the image, stores the bytes under a fresh uuid, then records the row (removing the file if that fails). */
 export async function addPhoto(
-  { em, actor, clock, storage }: PhotoContext,
+  ctx: PhotoContext,
   ids: PhotoIds,
   file: { buffer: Buffer; originalname: string },
 ): Promise<Photo> {
-  const { job, room } = await findRoom(em, actor, ids.jobId, ids.roomId);
+  const { em, actor, clock, storage } = ctx;
+  const { job, room } = await findRoom(ctx, ids.jobId, ids.roomId);
   if ((await em.count(PhotoSchema, { room: room.id })) >= MAX_PHOTOS_PER_ROOM) {
     throw new UnprocessableError(`A room can have at most ${MAX_PHOTOS_PER_ROOM} photos.`);
   }
@@ -55,8 +56,9 @@ export async function addPhoto(
   }
 }
 
-export async function findPhoto({ em, actor }: ServiceContext, ids: PhotoIds & { photoId: string }): Promise<Photo> {
-  const { room } = await findRoom(em, actor, ids.jobId, ids.roomId);
+export async function findPhoto(ctx: ServiceContext, ids: PhotoIds & { photoId: string }): Promise<Photo> {
+  const { em } = ctx;
+  const { room } = await findRoom(ctx, ids.jobId, ids.roomId);
   const photo = await em.findOne(PhotoSchema, { id: ids.photoId, room: room.id });
   if (!photo) throw new NotFoundError('The photo');
   return photo;

@@ -1,6 +1,5 @@
-import type { EntityManager } from '@mikro-orm/postgresql';
 import type { Room as RoomInput } from '@calc';
-import type { Actor } from '../../lib/route';
+import type { ServiceContext } from '../../lib/service-context';
 import { findJobView, scopeSql } from '../jobs/job-reads';
 import type { PhotoView } from '../photos/photo.presenter';
 import type { RoomView } from './room.presenter';
@@ -60,14 +59,15 @@ function toViews(r: RoomRowSql): RoomWithPhotoViews {
 }
 
 /** The rooms of a job the actor may see, with their photos, in order; 404 for a job out of scope. */
-export async function listRoomViews(em: EntityManager, actor: Actor, jobId: string): Promise<RoomWithPhotoViews[]> {
+export async function listRoomViews(ctx: ServiceContext, jobId: string): Promise<RoomWithPhotoViews[]> {
+  const { em, actor } = ctx;
   const scope = scopeSql(actor);
   const rows = await em.execute<RoomRowSql[]>(
     `select ${ROOM_COLUMNS} from "room" r join "job" j on j.id = r.job_id
      where r.job_id = ? and ${scope.sql} order by r.position, r.created_at, r.id`,
     [jobId, ...scope.params],
   );
-  if (rows.length === 0) await findJobView(em, actor, jobId); // no rooms, or no such job for this person (404)
+  if (rows.length === 0) await findJobView(ctx, jobId); // no rooms, or no such job for this person (404)
   return rows.map(toViews);
 }
 
@@ -78,9 +78,7 @@ export async function listRoomViews(em: EntityManager, actor: Actor, jobId: stri
  * which tells 404 from 409 and answers the conflict with the current room.
  */
 export async function updateRoomIfCurrent(
-  em: EntityManager,
-  actor: Actor,
-  at: Date,
+  { em, actor, clock }: ServiceContext,
   jobId: string,
   roomId: string,
   version: number,
@@ -103,7 +101,7 @@ export async function updateRoomIfCurrent(
       jobId,
       version,
       ...scope.params,
-      at,
+      clock.now(),
     ],
   );
   const row = rows[0];

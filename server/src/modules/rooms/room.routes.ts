@@ -15,8 +15,8 @@ export function roomRoutes(api: ApiRouter): void {
     policy: ANY_STAFF,
     params: jobRoomsParams,
     response: roomsResponse,
-    handler: async ({ em, actor, params }) => ({
-      rooms: (await listRoomViews(em, actor, params.jobId)).map((r) => presentRoom(r.room, params.jobId, r.photos)),
+    handler: async ({ service, params }) => ({
+      rooms: (await listRoomViews(service, params.jobId)).map((r) => presentRoom(r.room, params.jobId, r.photos)),
     }),
   });
   api.route({
@@ -26,8 +26,8 @@ export function roomRoutes(api: ApiRouter): void {
     params: roomParams,
     response: roomResponse,
     versioned: etag,
-    handler: async ({ em, actor, params }) => {
-      const r = await getRoom(em, actor, params.jobId, params.roomId);
+    handler: async ({ service, params }) => {
+      const r = await getRoom(service, params.jobId, params.roomId);
       return { room: presentRoom(r.room, params.jobId, r.photos) };
     },
   });
@@ -40,8 +40,8 @@ export function roomRoutes(api: ApiRouter): void {
     status: 201,
     response: roomResponse,
     versioned: etag,
-    handler: async ({ em, actor, params, body, services }) => {
-      const r = await createRoom(em, actor, services.clock, params.jobId, body);
+    handler: async ({ service, params, body }) => {
+      const r = await createRoom(service, params.jobId, body);
       return { room: presentRoom(r.room, params.jobId, r.photos) };
     },
   });
@@ -53,10 +53,10 @@ export function roomRoutes(api: ApiRouter): void {
     body: updateRoomSchema,
     response: roomResponse,
     versioned: etag,
-    handler: async ({ em, actor, params, body, services, ifMatch }) => {
+    handler: async ({ service, params, body, ifMatch }) => {
       const r =
-        (await updateRoomIfCurrent(em, actor, services.clock.now(), params.jobId, params.roomId, ifMatch, body)) ??
-        (await updateRoom(em, actor, services.clock, params.jobId, params.roomId, ifMatch, body));
+        (await updateRoomIfCurrent(service, params.jobId, params.roomId, ifMatch, body)) ??
+        (await updateRoom(service, params.jobId, params.roomId, ifMatch, body));
       return { room: presentRoom(r.room, params.jobId, r.photos) };
     },
   });
@@ -67,8 +67,8 @@ export function roomRoutes(api: ApiRouter): void {
     params: roomParams,
     response: NO_CONTENT,
     versioned: true,
-    handler: async ({ em, actor, params, services, ifMatch }) => {
-      await deleteRoom(em, actor, services.clock, services.storage, params.jobId, params.roomId, ifMatch);
+    handler: async ({ service, params, services, ifMatch }) => {
+      await deleteRoom({ ...service, storage: services.storage }, params.jobId, params.roomId, ifMatch);
     },
   });
 }

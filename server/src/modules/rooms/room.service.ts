@@ -1,8 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { randomUUID } from 'node:crypto';
 import { NotFoundError, UnprocessableError } from '../../lib/errors';
-import type { Actor } from '../../lib/route';
-import type { Clock } from '../../services/services';
+import type { ServiceContext } from '../../lib/service-context';
 import type { Storage } from '../../services/storage';
 import { findJob, touchJob } from '../jobs/job-access';
 import type { Job } from '../jobs/job.entity';
@@ -36,81 +35,67 @@ export async function roomsOf(em: EntityManager, job: Job): Promise<RoomWithPhot
   return rooms.map((room) => ({ room, photos: photos.filter((p) => p.room.id === room.id) }));
 }
 
-/** A room of a job the actor may see; 404 otherwise. */
-export async function findRoom(
-  em: EntityManager,
-  actor: Actor,
-  jobId: string,
-  roomId: string,
-): Promise<{ job: Job; room: RoomRow }> {
-  const job = await findJob(em, actor, jobId);
+/** A room of a job the actor may see; 404 otherwise (inside a transaction: `{ ...ctx, em: tx }`). */
+export async function findRoom(ctx: ServiceContext, jobId: string, roomId: string): Promise<{ job: Job; room: RoomRow }> {
+  const { em } = ctx;
+  const job = await findJob(ctx, jobId);
   const room = await em.findOne(RoomSchema, { id: roomId, job: job.id });
   if (!room) throw new NotFoundError('The room');
   return { job, room };
 }
 
-export async function getRoom(em: EntityManager, actor: Actor, jobId: string, roomId: string): Promise<RoomWithPhotos> {
-  const { room } = await findRoom(em, actor, jobId, roomId);
-  return { room, photos: await em.find(PhotoSchema, { room: room.id }, { orderBy: { createdAt: 'asc', id: 'asc' } }) };
+export async function getRoom(ctx: ServiceContext, jobId: string, roomId: string): Promise<RoomWithPhotos> {
+  const { room } = await findRoom(ctx, jobId, roomId);
+  return { room, photos: await ctx.em.find(PhotoSchema, { room: room.id }, { orderBy: { createdAt: 'asc', id: 'asc' } }) };
 }
 
-export function createRoom(
-  em: EntityManager,
-  actor: Actor,
-  clock: Clock,
-  jobId: string,
-  input: CreateRoomInput,
-): Promise<RoomWithPhotos> {
-  return em.transactional(async (tx) => {
-    const job = await findJob(tx, actor, jobId);
+export function createRoom(ctx: ServiceContext, jobId: string, input: CreateRoomInput): Promise<RoomWithPhotos> {
+  return ctx.em.transactional(async (tx) => {
+    const job = await findJob({ ...ctx, em: tx }, jobId);
     const count = await tx.count(RoomSchema, { job: job.id });
     if (count >= MAX_ROOMS) throw new UnprocessableError(`A job can have at most ${MAX_ROOMS} rooms.`);
     const id = input.id ?? randomUUID();
     const room = tx.create(RoomSchema, { id, job, position: input.position ?? count, input: { ...input.input, id } });
     await tx.flush();
-    await touchJob(tx, job.id, clock.now());
+    await touchJob(tx, job.id, ctx.clock.now());
     return { room, photos: [] };
   });
 }
 
 export function updateRoom(
-  em: EntityManager,
-  actor: Actor,
-  clock: Clock,
+  ctx: ServiceContext,
   jobId: string,
   roomId: string,
   version: number,
   input: UpdateRoomInput,
 ): Promise<RoomWithPhotos> {
-  return em.transactional(async (tx) => {
-    const { job, room } = await findRoom(tx, actor, jobId, roomId);
+  return ctx.em.transactional(async (tx) => {
+    const { job, room } = await findRoom({ ...ctx, em: tx }, jobId, roomId);
     const photos = await tx.find(PhotoSchema, { room: room.id }, { orderBy: { createdAt: 'asc', id: 'asc' } });
     assertVersion(version, room.version, 'The room', () => presentRoom(room, job.id, photos));
     if (input.input !== undefined) room.input = { ...input.input, id: room.id };
     if (input.position !== undefined) room.position = input.position;
     await tx.flush();
-    await touchJob(tx, job.id, clock.now());
+    await touchJob(tx, job.id, ctx.clock.now());
     return { room, photos };
   });
 }
 
-export async function deleteRoom(
-  em: EntityManager,
-  actor: Actor,
-  clock: Clock,
-  storage: Storage,
-  jobId: string,
-  roomId: string,
-  version: number,
-): Promise<void> {
-  const keys = await em.transactional(async (tx) => {
-    const { job, room } = await findRoom(tx, actor, jobId, roomId);
+/** Deleting a room also removes its photos' files. */
+export interface RoomDeleteContext extends ServiceContext {
+  readonly storage: Storage;
+}
+
+export async function deleteRoom(ctx: RoomDeleteContext, jobId: string, roomId: string, version: number): Promise<void> {
+  const { storage } = ctx;
+  const keys = await ctx.em.transactional(async (tx) => {
+    const { job, room } = await findRoom({ ...ctx, em: tx }, jobId, roomId);
     const photos = await tx.find(PhotoSchema, { room: room.id });
     assertVersion(version, room.version, 'The room', () => presentRoom(room, job.id, photos));
     tx.remove(photos);
     tx.remove(room);
     await tx.flush();
-    await touchJob(tx, job.id, clock.now());
+    await touchJob(tx, job.id, ctx.clock.now());
     return photos.map((p) => p.storageKey);
   });
   // Files go after the rows are gone: a failed delete leaves an orphan file, never a row without its file.

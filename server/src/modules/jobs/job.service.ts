@@ -62,8 +62,7 @@ export async function createJob(ctx: ServiceContext, input: CreateJobInput): Pro
   const { em, actor, clock } = ctx;
   const customer = await customerOf(ctx, input.customerId);
   const salesperson = await salespersonOf(ctx, input.salespersonId);
-  const installer =
-    input.assignedInstallerId === undefined ? null : await installerOf(ctx, input.assignedInstallerId);
+  const installer = input.assignedInstallerId === undefined ? null : await installerOf(ctx, input.assignedInstallerId);
   const defaults = await companyDesignDefaults(em, actor.companyId);
   const design =
     input.designConditions || defaults
@@ -92,12 +91,7 @@ export async function createJob(ctx: ServiceContext, input: CreateJobInput): Pro
   return job;
 }
 
-export async function updateJob(
-  ctx: ServiceContext,
-  id: string,
-  version: number,
-  input: UpdateJobInput,
-): Promise<Job> {
+export async function updateJob(ctx: ServiceContext, id: string, version: number, input: UpdateJobInput): Promise<Job> {
   const { em, actor, clock } = ctx;
   const job = await findJob(ctx, id);
   assertVersion(version, job.version, 'The job', () => presentJob(job));

@@ -36,7 +36,11 @@ export async function roomsOf(em: EntityManager, job: Job): Promise<RoomWithPhot
 }
 
 /** A room of a job the actor may see; 404 otherwise (inside a transaction: `{ ...ctx, em: tx }`). */
-export async function findRoom(ctx: ServiceContext, jobId: string, roomId: string): Promise<{ job: Job; room: RoomRow }> {
+export async function findRoom(
+  ctx: ServiceContext,
+  jobId: string,
+  roomId: string,
+): Promise<{ job: Job; room: RoomRow }> {
   const { em } = ctx;
   const job = await findJob(ctx, jobId);
   const room = await em.findOne(RoomSchema, { id: roomId, job: job.id });
@@ -46,7 +50,10 @@ export async function findRoom(ctx: ServiceContext, jobId: string, roomId: strin
 
 export async function getRoom(ctx: ServiceContext, jobId: string, roomId: string): Promise<RoomWithPhotos> {
   const { room } = await findRoom(ctx, jobId, roomId);
-  return { room, photos: await ctx.em.find(PhotoSchema, { room: room.id }, { orderBy: { createdAt: 'asc', id: 'asc' } }) };
+  return {
+    room,
+    photos: await ctx.em.find(PhotoSchema, { room: room.id }, { orderBy: { createdAt: 'asc', id: 'asc' } }),
+  };
 }
 
 export function createRoom(ctx: ServiceContext, jobId: string, input: CreateRoomInput): Promise<RoomWithPhotos> {
@@ -86,7 +93,12 @@ export interface RoomDeleteContext extends ServiceContext {
   readonly storage: Storage;
 }
 
-export async function deleteRoom(ctx: RoomDeleteContext, jobId: string, roomId: string, version: number): Promise<void> {
+export async function deleteRoom(
+  ctx: RoomDeleteContext,
+  jobId: string,
+  roomId: string,
+  version: number,
+): Promise<void> {
   const { storage } = ctx;
   const keys = await ctx.em.transactional(async (tx) => {
     const { job, room } = await findRoom({ ...ctx, em: tx }, jobId, roomId);

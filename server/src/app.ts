@@ -11,7 +11,7 @@ import { requestLog } from './lib/request-log';
 import { notFoundApi, problemHandler } from './lib/problem';
 import { PayloadTooLargeError } from './lib/errors';
 import { IMPORT_LIMITS } from '@calc';
-import { apiVersionGuard, csrfGuard, personGuard, sessionMiddleware } from './lib/session';
+import { apiVersionGuard, csrfGuard, deviceGuard, personGuard, sessionMiddleware } from './lib/session';
 import { loadActor } from './modules/auth/load-actor';
 import { mountHooks, mountModules, type ModuleMount } from './modules';
 import type { Services } from './services/services';
@@ -134,6 +134,7 @@ export function createApp(services: Services, extras: AppExtras = {}): Express {
   app.use((req, _res, next) => RequestContext.create(orm.em, next));
   app.use('/api', csrfGuard);
   app.use('/api', personGuard);
+  app.use('/api', deviceGuard);
 
   mountModules(app, services, extras.modules);
   app.use('/api', notFoundApi);

@@ -2,7 +2,9 @@ import { randomUUID } from 'node:crypto';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it, onTestFailed } from 'vitest';
 import { demoAccounts } from '../../fixtures/seed';
-import { PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
+import { sampleRoom } from '../server/jobs-helpers';
+import { expectNoSeriousViolations } from './axe';
+import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
 
 /**
  * Opens with no signal: the production build's service worker keeps the shell and assets, the
@@ -16,6 +18,7 @@ beforeAll(async () => {
 afterAll(async () => e?.close());
 
 const salesperson = demoAccounts.find((a) => a.role === 'salesperson' && a.company.startsWith('Larkspur'));
+const owner = demoAccounts.find((a) => a.role === 'owner' && a.company.startsWith('Larkspur'));
 
 const pill = (page: Page) =>
   page.getByRole('status').filter({ hasText: /Saved|Saving|Offline|Not saved|Needs your choice/ });
@@ -133,6 +136,73 @@ describe('the app opens with no signal', () => {
         { timeout: 20_000 },
       )
       .toContain(`Cellar den ${tag}`);
+    await context.close();
+  });
+
+  it('a change made elsewhere while this phone had no signal: the panel says which device, when and by whom', async () => {
+    if (!salesperson || !owner) throw new Error('no demo salesperson or owner');
+    const { context, page } = await e.newPage(PHONE);
+    await signIn(page, salesperson.email, salesperson.password);
+    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    const tag = randomUUID().slice(0, 6);
+    const jobId = await newJob(page, tag);
+    const csrf = ((await (await page.request.get('/api/auth/csrf')).json()) as { token: string }).token;
+    const made = await page.request.post(`/api/jobs/${jobId}/rooms`, {
+      headers: { 'X-CSRF-Token': csrf },
+      data: { input: sampleRoom(`Bedroom ${tag}`) },
+    });
+    expect(made.status()).toBe(201);
+    const roomId = ((await made.json()) as { room: { id: string } }).room.id;
+    await page.goto(`/jobs/${jobId}`);
+    await expect(page.getByLabel('Room name').inputValue()).resolves.toBe(`Bedroom ${tag}`);
+    // The parts that load a beat later (job details, the room's loads) are in before the signal goes:
+    // without the service worker (blocked here) a chunk asked for offline would fail.
+    await page.waitForLoadState('networkidle');
+
+    // The phone loses signal and renames the room; the edit waits on the phone.
+    await context.setOffline(true);
+    await page.getByLabel('Room name').fill(`Den ${tag}`);
+    await pill(page)
+      .filter({ hasText: /Offline — 1 change waiting/ })
+      .waitFor({ timeout: 20_000 });
+
+    // Meanwhile the owner, at the office desk, renames it too.
+    const desk = await e.newPage(DESKTOP);
+    await signIn(desk.page, owner.email, owner.password);
+    await desk.page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    const me = (await (await desk.page.request.get('/api/auth/me')).json()) as { user: { name: string } };
+    const deskCsrf = ((await (await desk.page.request.get('/api/auth/csrf')).json()) as { token: string }).token;
+    const now = (await (await desk.page.request.get(`/api/jobs/${jobId}/rooms/${roomId}`)).json()) as {
+      room: { version: number; input: Record<string, unknown> };
+    };
+    const renamed = await desk.page.request.patch(`/api/jobs/${jobId}/rooms/${roomId}`, {
+      headers: { 'X-CSRF-Token': deskCsrf, 'If-Match': `"${now.room.version}"`, 'X-Gaugeline-Device': 'desk-e2e-0042' },
+      data: { input: { ...now.room.input, name: `Study ${tag}` } },
+    });
+    expect(renamed.status()).toBe(200);
+    await desk.context.close();
+
+    // Signal again: the phone's rename meets the owner's, and the panel says where and when it was made.
+    await context.setOffline(false);
+    const panel = page.getByRole('region', { name: 'Resolve conflicting changes' });
+    await panel.waitFor({ timeout: 30_000 });
+    const said = (await panel.textContent()) ?? '';
+    expect(said).toMatch(/Changed on another device at \d{1,2}:\d\d/);
+    expect(said).toContain(`by ${me.user.name}.`);
+    await expect(pill(page).filter({ hasText: 'Needs your choice' }).count()).resolves.toBe(1);
+    await page.screenshot({ path: `${SHOTS}/conflict-375.png`, fullPage: true });
+    await expectNoSeriousViolations(page);
+    await page.setViewportSize(DESKTOP);
+    await page.screenshot({ path: `${SHOTS}/conflict-1440.png`, fullPage: true });
+
+    await panel.getByRole('button', { name: 'Keep all mine' }).click();
+    await pill(page)
+      .filter({ hasText: /^\s*Saved\s*$/ })
+      .waitFor({ timeout: 20_000 });
+    const after = (await (await page.request.get(`/api/jobs/${jobId}/rooms/${roomId}`)).json()) as {
+      room: { input: { name: string } };
+    };
+    expect(after.room.input.name).toBe(`Den ${tag}`);
     await context.close();
   });
 });

@@ -1,7 +1,8 @@
-import { API_VERSION_HEADER } from '@contract';
+import { API_VERSION_HEADER, DEVICE_HEADER } from '@contract';
 import type { z } from 'zod';
 import { CLIENT_API_VERSION, noteServerApiVersion } from './api-version';
 import { ApiError, apiErrorFromResponse, networkError } from './api-error';
+import { deviceLabel } from './device';
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
@@ -50,6 +51,7 @@ async function send(path: string, options: ApiOptions, csrf?: string): Promise<R
   const form = typeof FormData !== 'undefined' && options.body instanceof FormData ? options.body : null;
   if (options.body !== undefined && !form) headers['Content-Type'] = 'application/json';
   if (csrf) headers['X-CSRF-Token'] = csrf;
+  if ((options.method ?? 'GET') !== 'GET') headers[DEVICE_HEADER] = deviceLabel();
   if (options.version !== undefined && options.version !== null) headers['If-Match'] = `"${options.version}"`;
   if (options.person !== undefined) headers['X-Gaugeline-Person'] = options.person;
   let res: Response;

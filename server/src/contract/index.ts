@@ -12,3 +12,4 @@ export * from './records';
 export * from './desk';
 export * from './api-version';
 export * from './links';
+export * from './device';

@@ -15,6 +15,14 @@ const timestamp = z.string().describe('ISO 8601 date-time');
 export const personRef = z.object({ id, name: z.string() });
 
 /**
+ * Who made a record's latest change and on which device (the opaque label that browser made for itself),
+ * when the server knows: null for a record last changed before it kept this, or by the demo seed. The time
+ * is the record's `updatedAt`. A conflict panel says "Changed on another device at 14:32 by …" from it.
+ */
+export const lastChangeRecord = z.object({ byName: z.string().nullable(), device: z.string().nullable() });
+export type LastChangeRecord = z.output<typeof lastChangeRecord>;
+
+/**
  * Design conditions as a job or the company settings hold them: the numbers calc resolved, read back without
  * calc's bounds (calc checks them where they are used), so a stored value calc now refuses still shows up.
  */
@@ -31,6 +39,7 @@ export const customerRecord = z.object({
   version: z.number().int(),
   createdAt: timestamp,
   updatedAt: timestamp,
+  lastChange: lastChangeRecord.nullable().optional(),
 });
 export type CustomerRecord = z.output<typeof customerRecord>;
 
@@ -57,6 +66,7 @@ export const jobRecord = z.object({
   createdAt: timestamp,
   updatedAt: timestamp,
   lastActivityAt: timestamp,
+  lastChange: lastChangeRecord.nullable().optional(),
 });
 export type JobRecord = z.output<typeof jobRecord>;
 
@@ -82,6 +92,7 @@ export const roomRecord = z.object({
   version: z.number().int(),
   createdAt: timestamp,
   updatedAt: timestamp,
+  lastChange: lastChangeRecord.nullable().optional(),
   photos: z.array(photoRecord),
 });
 export type RoomRecord = z.output<typeof roomRecord>;

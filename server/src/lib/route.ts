@@ -15,6 +15,8 @@ export interface Actor {
   role: Role;
   name: string;
   email: string;
+  /** The device label the request came with (`X-Gaugeline-Device`, checked by deviceGuard), kept with what it changes. */
+  device?: string;
 }
 
 /**

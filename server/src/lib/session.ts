@@ -4,8 +4,8 @@ import type { Request, RequestHandler } from 'express';
 import { randomBytes, timingSafeEqual } from 'node:crypto';
 import type pg from 'pg';
 import type { Config } from '../config';
-import { API_VERSION, API_VERSION_HEADER } from '@contract';
-import { ApiVersionError, CsrfError, OtherPersonError } from './errors';
+import { API_VERSION, API_VERSION_HEADER, DEVICE_HEADER, DEVICE_LABEL_PATTERN } from '@contract';
+import { ApiVersionError, BadRequestError, CsrfError, OtherPersonError } from './errors';
 
 /** The signed-in person as read with the session (one statement); loadActor turns it into `req.actor`. */
 export interface SessionUser {
@@ -157,6 +157,19 @@ export const personGuard: RequestHandler = (req, _res, next) => {
   const person = req.get(PERSON_HEADER);
   if (person === undefined || !req.actor) return next();
   if (person !== req.actor.userId) return next(new OtherPersonError());
+  next();
+};
+
+/**
+ * The device a write comes from (an opaque label the browser made, contract/device.ts) goes onto the actor,
+ * so the record it changes keeps it. A malformed label is refused before anything changes.
+ */
+export const deviceGuard: RequestHandler = (req, _res, next) => {
+  const device = req.get(DEVICE_HEADER);
+  if (device === undefined) return next();
+  if (!DEVICE_LABEL_PATTERN.test(device))
+    return next(new BadRequestError(`${DEVICE_HEADER} must be 8 to 40 letters, digits or hyphens.`));
+  if (req.actor) req.actor.device = device;
   next();
 };
 

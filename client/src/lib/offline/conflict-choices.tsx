@@ -9,6 +9,8 @@ interface Props {
   busy?: boolean;
   /** How a field's value reads to the person. */
   describe?: (key: string, value: unknown) => string;
+  /** Where and when the other change was made (`changedLine`). */
+  changed: string;
 }
 
 function plain(_key: string, v: unknown): string {
@@ -17,7 +19,7 @@ function plain(_key: string, v: unknown): string {
 }
 
 /** Yours and theirs side by side, per field, with a choice for each. */
-export function ConflictChoices({ title, diffs, onResolve, busy = false, describe = plain }: Props) {
+export function ConflictChoices({ title, diffs, onResolve, busy = false, describe = plain, changed }: Props) {
   const [choices, setChoices] = useState<Record<string, Choice>>(() =>
     Object.fromEntries(diffs.map((d) => [d.key, 'mine'])),
   );
@@ -28,7 +30,9 @@ export function ConflictChoices({ title, diffs, onResolve, busy = false, describ
       className="flex flex-col gap-3 rounded-lg border-2 border-danger bg-white p-4"
     >
       <h2 className="text-lg font-semibold text-danger">{title}</h2>
-      <p>Someone else saved this while you were editing. Choose which value to keep for each field.</p>
+      <p>
+        <strong className="font-semibold">{changed}</strong> Choose which value to keep for each field.
+      </p>
       {diffs.length === 0 ? (
         <p className="text-muted">Their version and yours are the same; nothing to choose.</p>
       ) : null}

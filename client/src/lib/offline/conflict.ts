@@ -55,3 +55,28 @@ export function mergeChoices(
   }
   return out;
 }
+
+/** What the server says about a record's latest change (contract `lastChangeRecord`) with its time. */
+export interface ChangeFacts {
+  readonly updatedAt: string;
+  readonly lastChange?: { readonly byName: string | null; readonly device: string | null } | null;
+}
+
+/**
+ * One sentence on where and when the other change was made: "Changed on another device at 14:32 by
+ * Dana Reyes." `thisDevice` is this browser's label (lib/device.ts): an edit from another tab here reads
+ * "on this device". Older than today, the date comes first ("on 3 Dec at 14:32"). Nothing known about
+ * the person or device (a record changed before they were kept) still gives the time.
+ */
+export function changedLine(facts: ChangeFacts, thisDevice: string, now: Date = new Date()): string {
+  const at = new Date(facts.updatedAt);
+  const time = at.toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });
+  const sameDay = at.toDateString() === now.toDateString();
+  const when = sameDay
+    ? `at ${time}`
+    : `on ${at.toLocaleDateString([], { day: 'numeric', month: 'short' })} at ${time}`;
+  const device = facts.lastChange?.device;
+  const where = device ? (device === thisDevice ? ' on this device' : ' on another device') : '';
+  const by = facts.lastChange?.byName ? ` by ${facts.lastChange.byName}` : '';
+  return `Changed${where} ${when}${by}.`;
+}

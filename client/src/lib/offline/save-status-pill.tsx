@@ -43,7 +43,7 @@ const changes = (n: number) => `${n} ${n === 1 ? 'change' : 'changes'}`;
 function text(s: SaveStatus): string {
   if (s.kind === 'saved') return 'Saved';
   if (s.kind === 'saving') return 'Saving…';
-  if (s.kind === 'conflict') return 'Needs your choice — changed by someone else';
+  if (s.kind === 'conflict') return 'Needs your choice — changed elsewhere meanwhile';
   if (s.kind === 'blocked') return `Not saved — sign in again; ${changes(s.waiting)} kept`;
   if (s.kind === 'invalid') {
     const fix = `Not saved — ${s.fields} ${s.fields === 1 ? 'field' : 'fields'} to fix`;

@@ -18,6 +18,10 @@ export const CustomerSchema = defineEntity({
     notes: p.text().default(''),
     /** Optimistic lock (jobs/version-lock.ts): every update and delete names the version it was made against. */
     version: p.integer().version(),
+    /** Who made the latest change and on which device (lib/change-stamp.ts); null before stamps were kept. */
+    changedById: p.uuid().nullable(),
+    changedByName: p.string().length(120).nullable(),
+    changedOnDevice: p.string().length(40).nullable(),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p
       .datetime()

@@ -1,4 +1,5 @@
 import type { CustomerRecord } from '@contract';
+import { presentLastChange } from '../../lib/change-stamp';
 import type { Customer } from './customer.entity';
 
 /** The only shape a customer leaves the server in. */
@@ -12,5 +13,6 @@ export function presentCustomer(c: Customer): CustomerRecord {
     version: c.version,
     createdAt: c.createdAt.toISOString(),
     updatedAt: c.updatedAt.toISOString(),
+    lastChange: presentLastChange(c),
   };
 }

@@ -3,6 +3,7 @@ import type { ServiceContext } from '../../lib/service-context';
 import { CompanySchema } from '../companies/company.entity';
 import { JobSchema } from '../jobs/job.entity';
 import { assertVersion } from '../../lib/version-lock';
+import { stampOf } from '../../lib/change-stamp';
 import { presentCustomer } from './customer.presenter';
 import { CustomerSchema, type Customer } from './customer.entity';
 import {
@@ -44,6 +45,7 @@ export async function createCustomer({ em, actor }: ServiceContext, input: Creat
     email: input.email ?? null,
     phone: input.phone ?? null,
     notes: input.notes ?? '',
+    ...stampOf(actor),
   });
   await em.flush();
   return c;
@@ -61,6 +63,7 @@ export async function updateCustomer(
   if (input.email !== undefined) c.email = input.email;
   if (input.phone !== undefined) c.phone = input.phone;
   if (input.notes !== undefined) c.notes = input.notes;
+  Object.assign(c, stampOf(ctx.actor));
   await ctx.em.flush();
   return c;
 }

@@ -37,6 +37,10 @@ export const JobSchema = defineEntity({
     readyAt: p.datetime().nullable(),
     readyBy: p.manyToOne(UserSchema).nullable(),
     version: p.integer().version(),
+    /** Who made the latest change and on which device (lib/change-stamp.ts); null before stamps were kept. */
+    changedById: p.uuid().nullable(),
+    changedByName: p.string().length(120).nullable(),
+    changedOnDevice: p.string().length(40).nullable(),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p
       .datetime()

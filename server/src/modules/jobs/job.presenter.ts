@@ -1,4 +1,5 @@
 import type { JobRecord } from '@contract';
+import { presentLastChange, type ChangeStamp } from '../../lib/change-stamp';
 import type { Job } from './job.entity';
 
 /** What presentJob reads: a Job entity, or a plain row read for a hot path (job-reads.ts). */
@@ -24,7 +25,7 @@ export type JobView = Pick<
   customer: { id: string; name: string };
   salesperson: { id: string; name: string } | null | undefined;
   assignedInstaller: { id: string; name: string } | null | undefined;
-};
+} & ChangeStamp;
 
 const person = (u: { id: string; name: string } | null | undefined) => (u ? { id: u.id, name: u.name } : null);
 
@@ -46,5 +47,6 @@ export function presentJob(j: JobView): JobRecord {
     createdAt: j.createdAt.toISOString(),
     updatedAt: j.updatedAt.toISOString(),
     lastActivityAt: j.lastActivityAt.toISOString(),
+    lastChange: presentLastChange(j),
   };
 }

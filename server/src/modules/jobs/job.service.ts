@@ -23,6 +23,7 @@ import { JobSchema, type Job } from './job.entity';
 import { presentJob } from './job.presenter';
 import type { CreateJobInput, UpdateJobInput } from './job.schema';
 import { assertVersion } from '../../lib/version-lock';
+import { stampOf } from '../../lib/change-stamp';
 
 async function customerOf({ em, actor }: ServiceContext, id: string): Promise<Customer> {
   const c = await em.findOne(CustomerSchema, { id, company: actor.companyId });
@@ -86,6 +87,7 @@ export async function createJob(ctx: ServiceContext, input: CreateJobInput): Pro
     tightness: input.tightness ?? 'average',
     house: input.house ?? {},
     lastActivityAt: now,
+    ...stampOf(actor),
   });
   await em.flush();
   return job;
@@ -131,6 +133,7 @@ export async function updateJob(ctx: ServiceContext, id: string, version: number
     job.designSources = design.sources;
   }
   job.lastActivityAt = clock.now();
+  Object.assign(job, stampOf(actor));
   await em.flush();
   return job;
 }

@@ -17,6 +17,8 @@ interface RoomRowSql {
   version: number;
   created_at: Date | string;
   updated_at: Date | string;
+  changed_by_name: string | null;
+  changed_on_device: string | null;
   photos: Array<{
     id: string;
     contentType: string;
@@ -30,7 +32,7 @@ interface RoomRowSql {
 
 const date = (d: Date | string) => (d instanceof Date ? d : new Date(d));
 
-const ROOM_COLUMNS = `r.id, r.position, r.input, r.version, r.created_at, r.updated_at,
+const ROOM_COLUMNS = `r.id, r.position, r.input, r.version, r.created_at, r.updated_at, r.changed_by_name, r.changed_on_device,
   coalesce((select json_agg(json_build_object('id', p.id, 'contentType', p.content_type, 'byteSize', p.byte_size,
       'width', p.width, 'height', p.height, 'originalName', p.original_name, 'createdAt', p.created_at)
     order by p.created_at, p.id) from "photo" p where p.room_id = r.id), '[]'::json) as photos`;
@@ -49,6 +51,8 @@ function toViews(r: RoomRowSql): RoomWithPhotoViews {
       version: r.version,
       createdAt: date(r.created_at),
       updatedAt: date(r.updated_at),
+      changedByName: r.changed_by_name,
+      changedOnDevice: r.changed_on_device,
     },
     photos: r.photos.map((p) => ({
       ...p,
@@ -88,15 +92,19 @@ export async function updateRoomIfCurrent(
   const rows = await em.execute<RoomRowSql[]>(
     `with r as (
        update "room" r set input = coalesce(?::jsonb, r.input), position = coalesce(?::int, r.position),
-         version = r.version + 1, updated_at = ?
+         version = r.version + 1, updated_at = ?, changed_by_id = ?, changed_by_name = ?, changed_on_device = ?
        from "job" j where j.id = r.job_id and r.id = ? and r.job_id = ? and r.version = ? and ${scope.sql}
-       returning r.id, r.job_id, r.position, r.input, r.version, r.created_at, r.updated_at
+       returning r.id, r.job_id, r.position, r.input, r.version, r.created_at, r.updated_at, r.changed_by_name,
+         r.changed_on_device
      ), touched as (update "job" set last_activity_at = ? where id in (select job_id from r))
      select ${ROOM_COLUMNS} from r`,
     [
       input.input === undefined ? null : JSON.stringify({ ...input.input, id: roomId }),
       input.position ?? null,
       new Date(),
+      actor.userId,
+      actor.name,
+      actor.device ?? null,
       roomId,
       jobId,
       version,

@@ -16,6 +16,10 @@ export const RoomSchema = defineEntity({
     position: p.integer().default(0),
     input: p.json<RoomInput>(),
     version: p.integer().version(),
+    /** Who made the latest change and on which device (lib/change-stamp.ts); null before stamps were kept. */
+    changedById: p.uuid().nullable(),
+    changedByName: p.string().length(120).nullable(),
+    changedOnDevice: p.string().length(40).nullable(),
     createdAt: p.datetime().onCreate(() => new Date()),
     updatedAt: p
       .datetime()

@@ -6,6 +6,7 @@ import type { Storage } from '../../services/storage';
 import { findJob, touchJob } from '../jobs/job-access';
 import type { Job } from '../jobs/job.entity';
 import { assertVersion } from '../../lib/version-lock';
+import { stampOf } from '../../lib/change-stamp';
 import { PhotoSchema, type Photo } from '../photos/photo.entity';
 import { RoomSchema, type RoomRow } from './room.entity';
 import { presentRoom } from './room.presenter';
@@ -62,7 +63,13 @@ export function createRoom(ctx: ServiceContext, jobId: string, input: CreateRoom
     const count = await tx.count(RoomSchema, { job: job.id });
     if (count >= MAX_ROOMS) throw new UnprocessableError(`A job can have at most ${MAX_ROOMS} rooms.`);
     const id = input.id ?? randomUUID();
-    const room = tx.create(RoomSchema, { id, job, position: input.position ?? count, input: { ...input.input, id } });
+    const room = tx.create(RoomSchema, {
+      id,
+      job,
+      position: input.position ?? count,
+      input: { ...input.input, id },
+      ...stampOf(actor),
+    });
     await tx.flush();
     await touchJob(tx, job.id, ctx.clock.now());
     return { room, photos: [] };
@@ -82,6 +89,7 @@ export function updateRoom(
     assertVersion(version, room.version, 'The room', () => presentRoom(room, job.id, photos));
     if (input.input !== undefined) room.input = { ...input.input, id: room.id };
     if (input.position !== undefined) room.position = input.position;
+    Object.assign(room, stampOf(actor));
     await tx.flush();
     await touchJob(tx, job.id, ctx.clock.now());
     return { room, photos };

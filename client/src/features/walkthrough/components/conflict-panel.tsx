@@ -7,7 +7,8 @@ import { getJob } from '../../../entities/job/queries';
 import { jobKeys } from '../../../entities/job/query-keys';
 import type { JobRecord, RoomRecord } from '@contract';
 import { getRoom } from '../api/get-room';
-import { diffFields, mergeChoices, type Choice } from '../../../lib/offline/conflict';
+import { changedLine, diffFields, mergeChoices, type Choice } from '../../../lib/offline/conflict';
+import { deviceLabel } from '../../../lib/device';
 import { describe, JOB_FIELD_LABELS, ROOM_FIELD_LABELS } from '../model/conflict';
 import { DETAIL_FIELDS } from '../../../entities/job/requests';
 import type { WalkthroughItem } from '../sync/edits';
@@ -72,10 +73,8 @@ function RoomConflict({
   const theirs = current.data;
   if (edit.kind === 'room-delete') {
     return (
-      <Alert
-        tone="danger"
-        title={`Someone changed “${String(theirs.input.name ?? 'this room')}” after you deleted it.`}
-      >
+      <Alert tone="danger" title={`“${String(theirs.input.name ?? 'This room')}” was changed after you deleted it.`}>
+        <p>{changedLine(theirs, deviceLabel())}</p>
         <div className="mt-2 flex flex-wrap gap-2">
           <Button
             variant="danger"
@@ -113,7 +112,8 @@ function RoomConflict({
   return (
     <ConflictChoices
       key={item.id}
-      title={`“${String(theirs.input.name ?? 'Room')}” was changed by someone else`}
+      title={`“${String(theirs.input.name ?? 'Room')}” was changed meanwhile`}
+      changed={changedLine(theirs, deviceLabel())}
       diffs={diffs}
       describe={describe}
       onResolve={handleResolve}
@@ -175,7 +175,8 @@ function JobConflict({ item, jobId, onResolved }: { item: WalkthroughItem; jobId
   return (
     <ConflictChoices
       key={item.id}
-      title="The site’s design conditions were changed by someone else"
+      title="The job was changed meanwhile"
+      changed={changedLine(theirs, deviceLabel())}
       diffs={diffs}
       describe={describe}
       onResolve={handleResolve}
@@ -243,7 +244,8 @@ function CustomerConflict({
   return (
     <ConflictChoices
       key={item.id}
-      title={`The contact details of ${theirs.name} were changed by someone else`}
+      title={`The contact details of ${theirs.name} were changed meanwhile`}
+      changed={changedLine(theirs, deviceLabel())}
       diffs={diffs}
       onResolve={handleResolve}
     />

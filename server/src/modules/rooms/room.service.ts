@@ -68,7 +68,7 @@ export function createRoom(ctx: ServiceContext, jobId: string, input: CreateRoom
       job,
       position: input.position ?? count,
       input: { ...input.input, id },
-      ...stampOf(actor),
+      ...stampOf(ctx.actor),
     });
     await tx.flush();
     await touchJob(tx, job.id, ctx.clock.now());
@@ -89,7 +89,7 @@ export function updateRoom(
     assertVersion(version, room.version, 'The room', () => presentRoom(room, job.id, photos));
     if (input.input !== undefined) room.input = { ...input.input, id: room.id };
     if (input.position !== undefined) room.position = input.position;
-    Object.assign(room, stampOf(actor));
+    Object.assign(room, stampOf(ctx.actor));
     await tx.flush();
     await touchJob(tx, job.id, ctx.clock.now());
     return { room, photos };

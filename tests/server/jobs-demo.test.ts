@@ -44,4 +44,41 @@ describe('demo data', () => {
       expect(photos).toBeGreaterThan(0);
     },
   );
+
+  it('Larkspur: a ducted ranch (attic ducts, R-6, tested leakage) whose loads carry the "Ducts" part in every room', async () => {
+    const acct = demoAccounts.find((d) => d.role === 'salesperson' && d.company.startsWith('Larkspur'));
+    if (!acct) throw new Error('no Larkspur salesperson');
+    const s = await login(t.app, acct.email, acct.password);
+    const items: Array<JobItem & { house?: { ducts?: Record<string, unknown> } }> = (
+      await s.agent.get('/api/jobs?pageSize=100')
+    ).body.items;
+    const ducted = [];
+    for (const j of items) {
+      const job = (await s.agent.get(`/api/jobs/${j.id}`)).body.job as { id: string; house?: { ducts?: object } };
+      if (job.house?.ducts) ducted.push(job);
+    }
+    expect(ducted).toHaveLength(1);
+    const [job] = ducted;
+    if (!job) throw new Error('no ducted demo job');
+    // Invented demo values (fixtures/demo-jobs.ts): attic, R-6 flex, 8 % supply / 6 % return leakage.
+    expect(job.house?.ducts).toMatchObject({ location: 'attic', insulationR: 6, supplyLeakageFraction: 0.08 });
+    const r = await s.agent.get(`/api/jobs/${job.id}/loads`);
+    expect(r.status).toBe(200);
+    const load = r.body.loads as {
+      rooms: Array<{ roomName: string; sensibleGain: { ducts: number }; heatLoss: { ducts: number } }>;
+      sensibleGain: { ducts: number; total: number };
+      ducts: { location: string; cooling: { sensibleBtuh: number }; heating: { btuh: number } };
+      blockHour: number;
+    };
+    expect(load.ducts.location).toBe('attic');
+    // The loads page shows a "Ducts" row for a room when its duct share is above zero (component-drilldown.tsx).
+    for (const room of load.rooms) {
+      expect(room.sensibleGain.ducts, room.roomName).toBeGreaterThan(0);
+      expect(room.heatLoss.ducts, room.roomName).toBeGreaterThan(0);
+    }
+    // The home's block figure carries the duct gain of the block hour; the rooms' heat-loss shares add up to
+    // the duct loss (apportioned by largest remainder, home-ducts.ts).
+    expect(load.sensibleGain.ducts).toBe(load.ducts.cooling.sensibleBtuh);
+    expect(load.rooms.reduce((n, x) => n + x.heatLoss.ducts, 0)).toBe(load.ducts.heating.btuh);
+  });
 });

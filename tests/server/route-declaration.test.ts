@@ -61,6 +61,25 @@ function testRoutes(api: ApiRouter): void {
     use: [stamp],
     handler: async ({ link: grant }) => ({ proposalId: grant?.proposalId ?? '' }),
   });
+  // A POST action on a versioned record takes If-Match like a PATCH; a POST create (201) only sends the ETag.
+  api.route({
+    method: 'post',
+    path: '/counters/:id/bump',
+    policy: PUBLIC,
+    params: z.strictObject({ id: z.string() }),
+    response: z.object({ version: z.number() }),
+    versioned: (out) => out.version,
+    handler: async ({ ifMatch }) => ({ version: ifMatch + 1 }),
+  });
+  api.route({
+    method: 'post',
+    path: '/counters',
+    policy: PUBLIC,
+    status: 201,
+    response: z.object({ version: z.number() }),
+    versioned: (out) => out.version,
+    handler: async ({ ifMatch }) => ({ version: Number.isNaN(ifMatch) ? 1 : -1 }),
+  });
   api.route({
     method: 'get',
     path: '/wrong-shape',
@@ -127,6 +146,39 @@ describe('the proposal-link policy', () => {
   it('is refused to staff sessions (they hold no link)', async () => {
     const owner = await login(t.app, a.users.owner.email);
     expectProblem(await owner.agent.get(`/api/route-test/proposals/${PROPOSAL_A}`), 401);
+  });
+});
+
+describe('versioned POST routes', () => {
+  const post = async (path: string, ifMatch?: string) => {
+    const agent = browserAgent(t.app);
+    const { body: csrf } = await agent.get('/api/auth/csrf').set(HTTPS);
+    const req = agent.post(path).set(HTTPS).set('X-CSRF-Token', String(csrf.token));
+    return ifMatch === undefined ? req : req.set('If-Match', ifMatch);
+  };
+
+  it('an action (not a 201 create) requires If-Match: 428 without, 400 malformed, the version handed on', async () => {
+    expectProblem(await post('/api/route-test/counters/c1/bump'), 428);
+    const bad = await post('/api/route-test/counters/c1/bump', 'three');
+    expectProblem(bad, 400);
+    expect(bad.body.errors).toEqual([{ path: 'If-Match', message: expect.stringContaining('quoted version') }]);
+    const ok = await post('/api/route-test/counters/c1/bump', '"3"');
+    expect(ok.status, JSON.stringify(ok.body)).toBe(200);
+    expect(ok.body).toEqual({ version: 4 });
+    expect(ok.headers.etag).toBe('"4"');
+  });
+
+  it('a create (201) takes no If-Match and sends the new ETag; the API document says which take it', async () => {
+    const created = await post('/api/route-test/counters');
+    expect(created.status, JSON.stringify(created.body)).toBe(201);
+    expect(created.headers.etag).toBe('"1"');
+    const doc = (await browserAgent(t.app).get('/api/openapi.json').set(HTTPS)).body as {
+      paths: Record<string, Record<string, { parameters?: Array<{ name: string; in: string }> }>>;
+    };
+    const header = (path: string) =>
+      (doc.paths[path]?.post?.parameters ?? []).some((p) => p.in === 'header' && p.name === 'If-Match');
+    expect(header('/api/route-test/counters/{id}/bump')).toBe(true);
+    expect(header('/api/route-test/counters')).toBe(false);
   });
 });
 

@@ -99,7 +99,7 @@ export interface RouteContext<P, Q, B, A> {
   actor: A;
   em: EntityManager;
   services: Services;
-  /** The version the person edited (If-Match), on `versioned` updates and deletes. */
+  /** The version the person edited (If-Match), on `versioned` routes that take it (`readsIfMatch`). */
   ifMatch: number;
   /** The grant of a `link` route's session. */
   link: LinkGrant | null;
@@ -131,8 +131,10 @@ export interface RouteSpec<
   /** 200 unless said (201 for creates, 202 for accepted work). */
   status?: 200 | 201 | 202;
   /**
-   * Optimistic locking: updates and deletes require `If-Match: "N"` (428 without, 400 malformed), given
-   * to the handler as `ctx.ifMatch`; a function reads the record's version from the answer for `ETag: "N"`.
+   * Optimistic locking: writes to an existing record — PUT, PATCH, DELETE, and a POST action such as
+   * "review this option" (any POST but a 201 create) — require `If-Match: "N"` (428 without, 400
+   * malformed), given to the handler as `ctx.ifMatch`; a function reads the record's version from the
+   * answer for `ETag: "N"` (all a create does with it).
    */
   versioned?: true | ((out: Out<RS>) => number);
   /** Routes that take multipart uploads skip the JSON content-type gate. */
@@ -157,6 +159,8 @@ export interface RegisteredRoute {
   response: ResponseSpec;
   status: number;
   versioned: boolean;
+  /** The route requires If-Match (see `readsIfMatch`). */
+  ifMatch: boolean;
 }
 
 /** All routes of the API: the deny-by-default test and the OpenAPI document read it. */
@@ -180,7 +184,14 @@ const hasBody = (req: Request): boolean =>
   (req.headers['content-length'] !== undefined && req.headers['content-length'] !== '0') ||
   req.headers['transfer-encoding'] !== undefined;
 
-const WRITES: readonly Method[] = ['put', 'patch', 'delete'];
+/**
+ * Which versioned routes take If-Match: every write to an existing record. A POST is one unless it
+ * answers 201 (a create has no version yet; it only sends the new record's ETag).
+ */
+export function readsIfMatch(method: Method, status: number): boolean {
+  if (method === 'put' || method === 'patch' || method === 'delete') return true;
+  return method === 'post' && status !== 201;
+}
 
 function checkPolicy(policy: Policy, req: Request): LinkGrant | null {
   const actor = req.actor ?? null;
@@ -213,6 +224,7 @@ export function createApiRouter(prefix: string, getServices: () => Services, opt
         throw new Error(`${spec.method.toUpperCase()} ${fullPath}: signed routes, and only they, go on a raw router`);
       }
       const status = spec.response === NO_CONTENT ? 204 : (spec.status ?? 200);
+      const takesIfMatch = spec.versioned !== undefined && readsIfMatch(spec.method, status);
       if (!routeRegistry.some((r) => r.method === spec.method && r.path === fullPath)) {
         routeRegistry.push({
           method: spec.method,
@@ -227,6 +239,7 @@ export function createApiRouter(prefix: string, getServices: () => Services, opt
           response: spec.response,
           status,
           versioned: spec.versioned !== undefined,
+          ifMatch: takesIfMatch,
         });
       }
       const schema = 'safeParse' in spec.response ? (spec.response as ZodType) : null;
@@ -250,7 +263,7 @@ export function createApiRouter(prefix: string, getServices: () => Services, opt
         const params = spec.params ? parseInput(spec.params, req.params) : req.params;
         const query = spec.query ? parseInput(spec.query, req.query) : {};
         const body = spec.body && !opts.raw ? parseInput(spec.body, req.body ?? {}) : undefined;
-        const ifMatch = spec.versioned !== undefined && WRITES.includes(spec.method) ? ifMatchVersion(req) : NaN;
+        const ifMatch = takesIfMatch ? ifMatchVersion(req) : NaN;
         const em = RequestContext.getEntityManager();
         if (!em) throw new Error('no request context');
         const services = getServices();

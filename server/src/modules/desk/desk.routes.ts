@@ -16,7 +16,6 @@ import {
 import { ANY_STAFF, JOB_EDITORS, NO_CONTENT, OFFICE, OWNER, type ApiRouter } from '../../lib/route';
 import { UnprocessableError } from '../../lib/errors';
 import { uuidParam } from '../../lib/validate';
-import { ifMatchVersion } from '../../lib/version-lock';
 import { presentDesk, presentOption } from './desk.presenter';
 import {
   createFirstPrice,
@@ -39,8 +38,8 @@ const jobParams = z.strictObject({ jobId: uuidParam });
 const optionParams = z.strictObject({ jobId: uuidParam, optionId: uuidParam });
 const etag = (out: { option: { version: number } }) => out.option.version;
 
-// Actions on an option (regenerate, discount decision, review) are POSTs that change a versioned row: they take
-// If-Match like a PATCH (the route declaration reads it for PUT/PATCH/DELETE only), read here with the same rule.
+// Actions on an option (regenerate, discount decision, review) are POSTs that change a versioned row: declared
+// `versioned`, they take If-Match like a PATCH (the declaration reads it for every versioned POST but a 201 create).
 
 /** The estimator's desk: a job's priced options, worked out by calc from saved inputs on every answer. */
 export function deskRoutes(api: ApiRouter): void {
@@ -128,12 +127,10 @@ export function deskRoutes(api: ApiRouter): void {
     body: regenerateBody,
     response: optionResponse,
     versioned: etag,
-    handler: async ({ service, params, body, actor, req }) => {
+    handler: async ({ service, params, body, actor, ifMatch }) => {
       const present = (v: OptionView) => presentOption(v, actor.role);
       return {
-        option: present(
-          await regenerateTakeoff(service, params.jobId, params.optionId, ifMatchVersion(req), body, present),
-        ),
+        option: present(await regenerateTakeoff(service, params.jobId, params.optionId, ifMatch, body, present)),
       };
     },
   });
@@ -146,12 +143,10 @@ export function deskRoutes(api: ApiRouter): void {
     body: discountDecisionBody,
     response: optionResponse,
     versioned: etag,
-    handler: async ({ service, params, body, actor, req }) => {
+    handler: async ({ service, params, body, actor, ifMatch }) => {
       const present = (v: OptionView) => presentOption(v, actor.role);
       return {
-        option: present(
-          await decideDiscount(service, params.jobId, params.optionId, ifMatchVersion(req), body.approve, present),
-        ),
+        option: present(await decideDiscount(service, params.jobId, params.optionId, ifMatch, body.approve, present)),
       };
     },
   });
@@ -163,11 +158,9 @@ export function deskRoutes(api: ApiRouter): void {
     params: optionParams,
     response: optionResponse,
     versioned: etag,
-    handler: async ({ service, params, actor, req }) => {
+    handler: async ({ service, params, actor, ifMatch }) => {
       const present = (v: OptionView) => presentOption(v, actor.role);
-      return {
-        option: present(await reviewOption(service, params.jobId, params.optionId, ifMatchVersion(req), present)),
-      };
+      return { option: present(await reviewOption(service, params.jobId, params.optionId, ifMatch, present)) };
     },
   });
   api.route({

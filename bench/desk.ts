@@ -10,6 +10,7 @@ import { availableParallelism, loadavg } from 'node:os';
 import { performance } from 'node:perf_hooks';
 import {
   catalogModelSchema,
+  categorySchema,
   discountLimitSchema,
   financingPlanSchema,
   laborTaskSchema,
@@ -55,6 +56,7 @@ const desk: CompanyDesk = {
   materials: data.materials.map((m) => materialSchema.parse(m)),
   kits: data.kits.map((k) => kitSchema.parse(k)),
   refrigerants: data.refrigerants.map((r) => refrigerantCostSchema.parse(r)),
+  categories: data.categories.map((c) => categorySchema.parse(c)),
   financing: data.financing.map((f) => financingPlanSchema.parse(f)),
   discountLimits: new Map(data['discount-limits'].map((d) => discountLimitSchema.parse(d)).map((d) => [d.key, d])),
   settings: DEMO_PRICE_BOOK_SETTINGS,

@@ -201,8 +201,15 @@ describe('demo company data', () => {
 describe('who sees what', () => {
   it('salespeople lose cost and sell rules, installers also the list price; office sees all', () => {
     expect(hiddenFields(DATASETS.models, 'owner')).toEqual([]);
-    expect(hiddenFields(DATASETS.models, 'salesperson')).toEqual(['costCents']);
-    expect(hiddenFields(DATASETS.models, 'installer')).toEqual(['costCents', 'listCents']);
+    expect(hiddenFields(DATASETS.models, 'salesperson')).toEqual(['costCents', 'sellRule']);
+    expect(hiddenFields(DATASETS.models, 'installer')).toEqual(['costCents', 'sellRule', 'listCents']);
+    // Issue 13: a model's and a labor task's own sell rule is the office's, like a material's.
+    for (const d of [DATASETS.models, DATASETS.labor]) {
+      const sales = visibleColumns(d, 'salesperson').map((c) => c.name);
+      expect(sales).not.toContain('sell_method');
+      expect(sales).not.toContain('sell_percent');
+      expect(visibleColumns(d, 'owner').map((c) => c.name)).toContain('sell_percent');
+    }
     const names = visibleColumns(DATASETS.materials, 'installer').map((c) => c.name);
     expect(names).not.toContain('cost_usd');
     expect(names).not.toContain('sell_method');

@@ -63,6 +63,8 @@ describe('demo desk', () => {
           const pricing = pricingSchema.parse({
             method: rule.method,
             percent: rule.percent,
+            // Issue 13: an option without its own rule sells each line at its price-book rule.
+            sellRulesBy: o.pricing.sellRule ? 'option' : 'line',
             discounts: o.pricing.discounts,
             taxRatePercent: data.desk.settings.taxRatePercent,
             taxOn: data.desk.settings.taxAppliesTo,

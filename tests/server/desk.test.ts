@@ -5,6 +5,7 @@ import { buildTestApp, type TestApp } from '../helpers/test-app';
 import { loadCompanyDesk } from '../../server/src/modules/desk/desk-inputs';
 import { engineData } from '../../server/src/modules/desk/desk-compute';
 import { del, expectProblem, patch, post } from './jobs-helpers';
+import { BASE, put } from './company-data-helpers';
 import { deskJob, multiZone, newOption, seedData, singleZone } from './desk-helpers';
 
 let t: TestApp;
@@ -133,42 +134,123 @@ describe('bad input: problem+json with field paths, nothing stored', () => {
 });
 
 describe('server totals equal calc’s', () => {
-  it('computes each option with calc from the saved inputs', async () => {
-    const { job, rooms } = await deskJob(estimator);
-    const o = await newOption(estimator, job.id, { name: 'Whole-home', design: multiZone(rooms) });
-    const em = t.orm.em.fork();
-    const data = engineData(await loadCompanyDesk(em, a.id));
-    const jobRow = await estimator.agent.get(`/api/jobs/${job.id}`);
-    const roomRows = await estimator.agent.get(`/api/jobs/${job.id}/rooms`);
+  /** calc's own answer for a design on the job, from the company's data as the server reads it now. */
+  async function direct(
+    jobId: string,
+    design: Parameters<typeof computeDesign>[0]['design'],
+    own?: { method: 'markup' | 'margin'; percent: number },
+  ) {
+    const data = engineData(await loadCompanyDesk(t.orm.em.fork(), a.id));
+    const jobRow = await estimator.agent.get(`/api/jobs/${jobId}`);
+    const roomRows = await estimator.agent.get(`/api/jobs/${jobId}/rooms`);
     const settings = data.desk.settings;
+    const rule = own ?? settings.defaultSellRule;
     const pricing = pricingSchema.parse({
-      method: settings.defaultSellRule.method,
-      percent: settings.defaultSellRule.percent,
+      method: rule.method,
+      percent: rule.percent,
+      // Issue 13: with no rule of its own an option sells each line at its price-book rule.
+      sellRulesBy: own ? 'option' : 'line',
       taxRatePercent: settings.taxRatePercent,
       taxOn: settings.taxAppliesTo,
     });
-    const direct = computeDesign({
+    const result = computeDesign({
       home: {
-        id: job.id,
+        id: jobId,
         designConditions: jobRow.body.job.designConditions,
         tightness: jobRow.body.job.tightness,
         ...jobRow.body.job.house,
         rooms: roomRows.body.rooms.map((r: { input: unknown }) => r.input),
       },
-      design: multiZone(rooms),
+      design,
       catalog: data.catalog,
       priceBook: data.priceBook,
       pricing,
     });
+    return { result, pricing, data };
+  }
+
+  it('computes each option with calc from the saved inputs, each line at its price-book rule', async () => {
+    // The salesperson's own job, so that they can read it too (below).
+    const { job, rooms } = await deskJob(sales);
+    const o = await newOption(estimator, job.id, { name: 'Whole-home', design: multiZone(rooms) });
+    const { result, pricing, data } = await direct(job.id, multiZone(rooms));
     const read = await estimator.agent.get(`/api/jobs/${job.id}/options/${o.id}`);
     const price = read.body.option.result.price;
-    expect(price.totalCents).toBe(direct.price.totalCents);
-    expect(price.costCents).toBe(direct.price.costCents);
-    expect(price.grossMarginPercent).toBe(direct.price.grossMarginPercent);
-    expect(priceOption({ lines: direct.takeoff, pricing }).totalCents).toBe(price.totalCents);
-    expect(read.body.option.result.systems[0].refrigerant.extraChargeOz).toBe(
-      direct.systems[0]?.refrigerant.extraChargeOz,
+    expect(price.sellRulesBy).toBe('line');
+    expect(price.totalCents).toBe(result.price.totalCents);
+    expect(price.sellCents).toBe(result.price.sellCents);
+    expect(price.costCents).toBe(result.price.costCents);
+    expect(price.grossMarginPercent).toBe(result.price.grossMarginPercent);
+    expect(priceOption({ lines: result.takeoff, pricing, priceBook: data.priceBook }).totalCents).toBe(
+      price.totalCents,
     );
+    expect(read.body.option.result.systems[0].refrigerant.extraChargeOz).toBe(
+      result.systems[0]?.refrigerant.extraChargeOz,
+    );
+    // Each line carries calc's sell price and rule; the sums are the option's sell.
+    const lines = read.body.option.result.takeoff as {
+      itemKey: string;
+      category: string;
+      sellCents: number;
+      sellRule: { source: string; from: string | null };
+    }[];
+    expect(lines.map((l) => l.sellCents)).toEqual(result.price.lineSells.map((l) => l.sellCents));
+    expect(lines.reduce((sum, l) => sum + l.sellCents, 0)).toBe(price.sellCents);
+    const outdoor = lines.find((l) => l.itemKey === 'equipment:TSL-M24-3P');
+    expect(outdoor?.sellRule).toMatchObject({ source: 'category', from: 'Equipment' });
+    const why = (read.body.option.result.explanations as { key: string; text: string }[]).find(
+      (e) => e.key === 'sell:equipment:TSL-M24-3P',
+    );
+    expect(why?.text).toContain('category "Equipment"');
+    // A salesperson sees neither the line's sell rule nor its why (they show our cost).
+    const salesRead = await sales.agent.get(`/api/jobs/${job.id}/options/${o.id}`);
+    expect(salesRead.status).toBe(200);
+    const salesLines = salesRead.body.option.result.takeoff as Record<string, unknown>[];
+    expect(salesLines.every((l) => !('sellRule' in l) && !('sellCents' in l))).toBe(true);
+    expect(salesRead.body.option.result.explanations.some((e: { key: string }) => e.key.startsWith('sell:'))).toBe(
+      false,
+    );
+  });
+
+  it("a category's new rule reprices its lines on the next read; an option's own rule overrides every line", async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const o = await newOption(estimator, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '') });
+    const url = `/api/jobs/${job.id}/options/${o.id}`;
+    const before = (await estimator.agent.get(url)).body.option.result;
+    const category = (await owner.agent.get(`${BASE}/categories/equipment`)).body.row;
+    const changed = await put(owner, `${BASE}/categories/equipment`, category.version).send({
+      record: { ...category.record, sellRule: { method: 'markup', percent: 90 } },
+    });
+    expect(changed.status, JSON.stringify(changed.body)).toBe(200);
+    try {
+      const after = (await estimator.agent.get(url)).body.option.result;
+      const eq = (r: typeof before) =>
+        (r.takeoff as { itemKey: string; extendedCostCents: number; sellCents: number }[]).find(
+          (l) => l.itemKey === 'equipment:TSL-S12H-O',
+        );
+      const cost = eq(after)?.extendedCostCents ?? 0;
+      // markup 90 %: price = cost × 1.9, half-up to the cent [PUB: definition of markup]
+      expect(eq(after)?.sellCents).toBe(Math.round(cost * 1.9));
+      expect(eq(after)?.sellCents).not.toBe(eq(before)?.sellCents);
+      const { result } = await direct(job.id, singleZone(rooms[0] ?? ''));
+      expect(after.price.totalCents).toBe(result.price.totalCents);
+      // The option's own rule: one rule for every line, as calc's 'option' mode.
+      const current = (await estimator.agent.get(url)).body.option;
+      const own = { method: 'margin' as const, percent: 30 };
+      const patched = await patch(estimator, url, current.version).send({
+        pricing: { ...current.pricing, sellRule: own },
+      });
+      expect(patched.status, JSON.stringify(patched.body)).toBe(200);
+      const mine = patched.body.option.result;
+      expect(mine.price.sellRulesBy).toBe('option');
+      expect(mine.takeoff.every((l: { sellRule: { source: string } }) => l.sellRule.source === 'option')).toBe(true);
+      expect(mine.price.totalCents).toBe(
+        (await direct(job.id, singleZone(rooms[0] ?? ''), own)).result.price.totalCents,
+      );
+    } finally {
+      const now = (await owner.agent.get(`${BASE}/categories/equipment`)).body.row;
+      await put(owner, `${BASE}/categories/equipment`, now.version).send({ record: category.record });
+    }
   });
 });
 

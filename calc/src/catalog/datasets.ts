@@ -68,7 +68,7 @@ export const DATASETS: Readonly<Record<DatasetId, Dataset>> = {
     schema: catalogModelSchema,
     columns: MODEL_COLUMNS,
     readers: ALL,
-    costFields: ['costCents'],
+    costFields: ['costCents', 'sellRule'],
     priceFields: ['listCents'],
   },
   materials: {
@@ -88,7 +88,7 @@ export const DATASETS: Readonly<Record<DatasetId, Dataset>> = {
     schema: laborTaskSchema,
     columns: LABOR_COLUMNS,
     readers: ALL,
-    costFields: ['rateCentsPerHour'],
+    costFields: ['rateCentsPerHour', 'sellRule'],
     priceFields: [],
   },
   kits: {

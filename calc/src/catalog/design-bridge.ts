@@ -9,7 +9,8 @@ import type {
   CapacityPoint,
 } from '../schemas/equipment';
 import type { CatalogModel } from './model';
-import type { Kit, LaborTask, Material, RefrigerantCost } from './price-book';
+import type { Category, Kit, LaborTask, Material, RefrigerantCost } from './price-book';
+import type { SellRule } from './sell-rule';
 
 /**
  * The bridge from the company's data (issue 12: catalog models and price-book rows, as calc's
@@ -165,6 +166,8 @@ export function designCatalogFromModels(models: Iterable<CatalogModel>): Equipme
   return { indoorUnits, outdoorUnits, heatKits };
 }
 
+type PriceBookItem = { -readonly [K in keyof PriceBook['items'][string]]: PriceBook['items'][string][K] };
+
 /**
  * Which labor task prices each labor line of the takeoff (its hourly rate), by task key. The takeoff
  * counts hours; a company whose task keys differ passes its own map.
@@ -191,6 +194,9 @@ export const DEFAULT_LABOR_TASK_FOR: Readonly<Record<string, string>> = {
  * - any other takeoff key ← the material whose SKU `itemMap` names for it, else the material whose
  *   `takeoffItem` names the key (an active one first), else a material whose SKU is the key itself. Unmapped items stay unpriced (computeDesign warns "No price for …").
  * `laborRateCents` (labor lines with no task) is the median hourly rate of the active tasks.
+ * Each item carries its sell rule: the row's own override (`ruleSource` 'item'), else its category's
+ * ('category', `ruleFrom` = the category's name); a row with neither (or a category not in
+ * `categories`) sells at the company default, which pricing applies (issue 13).
  */
 export function designPriceBookFromCompany({
   models,
@@ -198,6 +204,7 @@ export function designPriceBookFromCompany({
   labor = [],
   kits = [],
   refrigerants = [],
+  categories = [],
   itemMap = {},
   laborTaskFor = DEFAULT_LABOR_TASK_FOR,
 }: {
@@ -206,40 +213,59 @@ export function designPriceBookFromCompany({
   readonly labor?: readonly LaborTask[];
   readonly kits?: readonly Kit[];
   readonly refrigerants?: readonly RefrigerantCost[];
+  readonly categories?: readonly Category[];
   readonly itemMap?: Readonly<Record<string, string>>;
   readonly laborTaskFor?: Readonly<Record<string, string>>;
 }): PriceBook {
-  const items: Record<string, { unitCostCents: number; description?: string }> = {};
-  for (const m of models) items[`equipment:${m.key}`] = { unitCostCents: m.costCents, description: m.name };
+  const items: Record<string, PriceBookItem> = {};
+  const categoryByKey = new Map<string, Category>();
+  for (const c of categories) categoryByKey.set(c.key, c);
+  /** A row's cost with the rule that sells it: its own, else its category's, else none (company default). */
+  const item = (
+    unitCostCents: number,
+    description: string | undefined,
+    row: { readonly category?: string | undefined; readonly sellRule?: SellRule | undefined },
+  ): PriceBookItem => {
+    const out: PriceBookItem = { unitCostCents };
+    if (description !== undefined) out.description = description;
+    const category = row.category === undefined ? undefined : categoryByKey.get(row.category);
+    if (row.sellRule) {
+      out.sellRule = row.sellRule;
+      out.ruleSource = 'item';
+      if (description !== undefined) out.ruleFrom = description;
+    } else if (category) {
+      out.sellRule = category.sellRule;
+      out.ruleSource = 'category';
+      out.ruleFrom = category.name;
+    }
+    return out;
+  };
+  for (const m of models) items[`equipment:${m.key}`] = item(m.costCents, m.name, m);
   for (const k of kits)
     if (k.kind === 'line-set' && k.liquidOdIn !== undefined && k.suctionOdIn !== undefined && k.lengthFt !== undefined)
       items[`line-set-kit:${tubeLabel({ odIn: k.liquidOdIn })}x${tubeLabel({ odIn: k.suctionOdIn })}:${k.lengthFt}ft`] =
-        {
-          unitCostCents: k.costCents,
-          description: k.description,
-        };
+        item(k.costCents, k.description, k);
   for (const r of refrigerants) items[`refrigerant:${r.key}`] = { unitCostCents: r.costCentsPerLb };
   const tasks = new Map<string, LaborTask>();
   for (const t of labor) tasks.set(t.key, t);
   for (const [line, task] of Object.entries(laborTaskFor)) {
     const t = tasks.get(task);
-    if (t) items[line] = { unitCostCents: t.rateCentsPerHour, description: t.description };
+    if (t) items[line] = item(t.rateCentsPerHour, t.description, t);
   }
   const bySku = new Map<string, Material>();
   for (const m of materials) bySku.set(m.key, m);
-  for (const m of materials)
-    if (items[m.key] === undefined) items[m.key] = { unitCostCents: m.costCents, description: m.description };
+  for (const m of materials) if (items[m.key] === undefined) items[m.key] = item(m.costCents, m.description, m);
   // A material naming its takeoff item prices it (the first such material wins; inactive ones last).
   const named = [...materials.filter((m) => m.active), ...materials.filter((m) => !m.active)];
   const claimed = new Set<string>();
   for (const m of named)
     if (m.takeoffItem !== undefined && !claimed.has(m.takeoffItem)) {
       claimed.add(m.takeoffItem);
-      items[m.takeoffItem] = { unitCostCents: m.costCents, description: m.description };
+      items[m.takeoffItem] = item(m.costCents, m.description, m);
     }
   for (const [line, sku] of Object.entries(itemMap)) {
     const m = bySku.get(sku);
-    if (m) items[line] = { unitCostCents: m.costCents, description: m.description };
+    if (m) items[line] = item(m.costCents, m.description, m);
   }
   const rates = labor.filter((t) => t.active).map((t) => t.rateCentsPerHour);
   rates.sort((a, b) => a - b);

@@ -3,6 +3,7 @@ import {
   listCol,
   moneyCol,
   numberCol,
+  sellRuleCols,
   readNumberCell,
   textCol,
   tubeCol,
@@ -211,5 +212,7 @@ export const MODEL_COLUMNS: readonly CsvColumn[] = [
   numberCol('weight_lb', 'weightLb', 'Weight, lb'),
   moneyCol('cost_usd', 'costCents', 'Your cost, dollars'),
   moneyCol('list_usd', 'listCents', 'List price, dollars'),
+  textCol('category', 'category', 'Price-book category whose sell rule prices it; empty for the company default'),
+  ...sellRuleCols('sell', 'sellRule', 'Overrides the category rule for this model (leave both empty to use it)'),
   boolCol('active', 'active', 'no for a discontinued model (it stays on proposals that used it)'),
 ];

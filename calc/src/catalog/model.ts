@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { refrigerantSchema, tubeOdSchema } from '../schemas/equipment';
 import { bounded, boundedInt, keyField, nameField } from '../schemas/fields';
+import { sellRuleSchema } from './sell-rule';
 
 /**
  * One model in a company's equipment catalog: an outdoor unit (single-zone, multi-zone or
@@ -119,6 +120,10 @@ const modelObject = z.object({
   weightLb: bounded('Weight', 1, 1000, 'lb').optional(),
   costCents: money('Cost'),
   listCents: money('List price').optional(),
+  /** The price-book category whose sell rule prices this model (issue 13); none: the company default. */
+  category: keyField('Category').optional(),
+  /** Overrides the category's rule for this model. */
+  sellRule: sellRuleSchema.optional(),
   active: z.boolean().default(true),
 });
 

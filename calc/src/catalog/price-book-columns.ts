@@ -32,6 +32,7 @@ export const LABOR_COLUMNS: readonly CsvColumn[] = [
   numberCol('hours_per_unit', 'hoursPerUnit', 'Hours per unit'),
   moneyCol('rate_usd_per_hour', 'rateCentsPerHour', 'Labor rate (your cost of an hour), dollars'),
   textCol('category', 'category', 'Category key'),
+  ...sellRuleCols('sell', 'sellRule', 'Overrides the category rule for this task (leave both empty to use it)'),
   boolCol('active', 'active', 'no to stop using it'),
 ];
 

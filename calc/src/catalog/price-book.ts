@@ -45,6 +45,8 @@ export const laborTaskSchema = z.object({
   hoursPerUnit: bounded('Hours per unit', 0, 100, 'h'),
   rateCentsPerHour: money('Labor rate'),
   category: keyField('Category'),
+  /** Overrides the category's rule for this task's hours. */
+  sellRule: sellRuleSchema.optional(),
   active: z.boolean().default(true),
 });
 

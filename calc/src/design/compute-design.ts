@@ -28,7 +28,7 @@ import { DEFAULT_SIZING_POLICY, sizingPolicySchema, type SizingPolicy } from '..
 import { buildTakeoff, type SystemForTakeoff } from '../takeoff/build';
 import { zoneLoads, type ZoneLoad } from './zone-loads';
 import { explanation, type Explanation } from '../explain/explanation';
-import { explainExtension, explainOptionPrice } from '../pricing/explain-price';
+import { explainExtension, explainLineSell, explainOptionPrice } from '../pricing/explain-price';
 import { technologyTransitionsCheck, type RefrigerantRuleCheck } from '../refrigerant/rules';
 import { explainSizing, heatingBalance, type HeatingBalance } from './explain-sizing';
 import type { HeatKit } from '../schemas/equipment';
@@ -375,7 +375,7 @@ export function computeDesignFromParsed({
   });
   const priced = priceLines({ lines: buildTakeoff({ systems: forTakeoff }), priceBook });
   const anyA2l = systems.some((s) => s.refrigerant.safetyClass === 'A2L');
-  const price = priceOption({ lines: priced.lines, pricing });
+  const price = priceOption({ lines: priced.lines, pricing, priceBook });
   const explanations: Explanation[] = priced.lines.map((l) =>
     explanation({
       key: `line:${l.itemKey}`,
@@ -392,6 +392,7 @@ export function computeDesignFromParsed({
       status: l.unitCostCents === null ? 'warning' : 'ok',
     }),
   );
+  for (const line of price.lineSells) explanations.push(explainLineSell({ line }));
   explanations.push(
     ...explainOptionPrice({
       price,

@@ -4,7 +4,7 @@ import { formatMoney, formatNumber, formatPercent } from '../explain/format';
 import { roundHalfUp } from '../rounding';
 import { marginFromMarkup, markupFromMargin } from '../catalog/sell-rule';
 import { monthlyPaymentCents } from './money';
-import type { OptionPrice } from './price';
+import type { LineSell, OptionPrice } from './price';
 import { TAX_RULE_LABELS, type Pricing } from './schemas';
 
 /**
@@ -66,6 +66,55 @@ export function explainSellRule({
   return `markup ${formatPercent(percent, 2)} on cost = margin ${formatPercent(g, 2)} of the price (price = cost × (1 + ${formatPercent(percent, 2)}))`;
 }
 
+/** Where a line's rule came from, in words. */
+function ruleOrigin(l: LineSell): string {
+  switch (l.source) {
+    case 'item':
+      return "this item's own rule in the price book";
+    case 'category':
+      return `the rule of the price-book category "${l.from ?? ''}"`;
+    case 'company':
+      return "the company's default rule (the price book gives this item no rule of its own or of a category)";
+    case 'option':
+      return "this option's own rule, on every line";
+  }
+}
+
+/**
+ * One line's sell price and the rule behind it: "$120.00 cost → $200.00: margin 40 % of the price =
+ * markup 66.67 % on cost (price = cost ÷ (1 − 40 %)), the rule of the price-book category "Line sets"".
+ * Keyed `sell:<item key>` (with the prefix). [PUB: the definitions of markup and gross margin]
+ */
+export function explainLineSell({
+  prefix = '',
+  line,
+}: {
+  readonly prefix?: string;
+  readonly line: LineSell;
+}): Explanation {
+  const rule = explainSellRule(line.rule);
+  const option = line.source === 'option';
+  return explanation({
+    key: `${prefix}sell:${line.itemKey}`,
+    label: `Sell price, ${line.description}`,
+    value: line.sellCents,
+    unit: 'cents',
+    valueText: formatMoney(line.sellCents),
+    text: `${formatMoney(line.costCents)} cost → ${formatMoney(line.sellCents)}: ${rule}; ${ruleOrigin(line)}${option ? ' (the option rounds its goods and its labor once each, so these lines may differ from its price by a cent)' : ''}`,
+    inputs: [
+      input('Cost', line.costCents, 'cents', formatMoney(line.costCents)),
+      input(
+        line.rule.method === 'margin' ? 'Margin' : 'Markup',
+        line.rule.percent,
+        '%',
+        formatPercent(line.rule.percent, 2),
+      ),
+    ],
+    status: 'ok',
+    source: 'Markup = (price − cost) ÷ cost; margin = (price − cost) ÷ price',
+  });
+}
+
 const money = (key: string, label: string, cents: number, text: string, extra: Partial<Explanation> = {}) =>
   explanation({
     key,
@@ -102,7 +151,10 @@ export function explainOptionPrice({
   }[];
 }): Explanation[] {
   const m = formatMoney;
-  const rule = explainSellRule(pricing);
+  const rule =
+    price.sellRulesBy === 'line'
+      ? `each line at its price-book rule (${lineRuleCounts(price.lineSells)}; each line's why names its rule)`
+      : explainSellRule(pricing);
   const out: Explanation[] = [
     money(
       `${prefix}price:equipment`,
@@ -214,6 +266,17 @@ export function explainOptionPrice({
       }),
     );
   return out;
+}
+
+/** "12 lines by their own rule, 5 by their category's, 2 at the company default". */
+function lineRuleCounts(lines: readonly LineSell[]): string {
+  const n = (s: LineSell['source']) => lines.filter((l) => l.source === s).length;
+  const parts: string[] = [];
+  const lines_ = (k: number) => `${k} line${k === 1 ? '' : 's'}`;
+  if (n('item') > 0) parts.push(`${lines_(n('item'))} by their own rule`);
+  if (n('category') > 0) parts.push(`${lines_(n('category'))} by their category's`);
+  if (n('company') > 0) parts.push(`${lines_(n('company'))} at the company default`);
+  return parts.length > 0 ? parts.join(', ') : 'no lines';
 }
 
 /** "$1,234.56" with its quantity × unit price, for a takeoff line's explanation. */

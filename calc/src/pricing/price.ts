@@ -2,6 +2,7 @@ import type { TakeoffLine } from '../takeoff/lines';
 import { roundCentsHalfUp, roundHalfUp } from '../rounding';
 import { extendCents, monthlyPaymentCents, percentOfCents, priceFromMarginCents, priceFromMarkupCents } from './money';
 import type { PriceBook, Pricing } from './schemas';
+import { sellPriceCents, type SellRule } from '../catalog/sell-rule';
 
 /** A takeoff line with its cost. `unitCostCents` null when the price book lacks the item (extended 0, with a warning). */
 export interface PricedLine extends TakeoffLine {
@@ -40,6 +41,57 @@ export function priceLines({
   return { lines: priced, warnings };
 }
 
+/** Where a line's sell rule came from: its item's override, its category, the company default, or the option's own rule. */
+export type LineRuleSource = 'item' | 'category' | 'company' | 'option';
+
+/** One line at its sell price: the rule that priced it and where that rule came from. */
+export interface LineSell {
+  readonly itemKey: string;
+  readonly description: string;
+  readonly category: TakeoffLine['category'];
+  readonly costCents: number;
+  /** cost → price by `rule`, half-up to the cent. In 'option' mode a view only: the option rounds its two sums once. */
+  readonly sellCents: number;
+  readonly rule: SellRule;
+  readonly source: LineRuleSource;
+  /** The category's name (source 'category') or the item's description (source 'item'); null otherwise. */
+  readonly from: string | null;
+}
+
+/**
+ * Each line at its sell price. Pricing 'line': the price book's rule for the line's item (its own
+ * override, else its category's), else the company default (`pricing.method`/`percent`); 'option':
+ * the option's own rule on every line.
+ */
+export function sellLines({
+  lines,
+  pricing,
+  priceBook,
+}: {
+  readonly lines: readonly PricedLine[];
+  readonly pricing: Pricing;
+  readonly priceBook?: PriceBook | undefined;
+}): LineSell[] {
+  const fallback: SellRule = { method: pricing.method, percent: pricing.percent };
+  const byLine = pricing.sellRulesBy === 'line';
+  return lines.map((l): LineSell => {
+    const item = byLine ? priceBook?.items[l.itemKey] : undefined;
+    const own = item?.sellRule;
+    const rule = own ?? fallback;
+    const source: LineRuleSource = !byLine ? 'option' : own ? (item?.ruleSource ?? 'item') : 'company';
+    return {
+      itemKey: l.itemKey,
+      description: l.description,
+      category: l.category,
+      costCents: l.extendedCostCents,
+      sellCents: sellPriceCents({ costCents: l.extendedCostCents, rule }),
+      rule,
+      source,
+      from: own ? (item?.ruleFrom ?? null) : null,
+    };
+  });
+}
+
 /** The price of one option, all cents. */
 export interface OptionPrice {
   readonly equipmentCostCents: number;
@@ -61,6 +113,10 @@ export interface OptionPrice {
   readonly monthlyPaymentCents: number | null;
   /** (subtotal − cost) ÷ subtotal, %, 2 decimals half-up; 0 when the subtotal is 0. */
   readonly grossMarginPercent: number;
+  /** How the sell price was made: one rule for the option, or each line by its own rule. */
+  readonly sellRulesBy: Pricing['sellRulesBy'];
+  /** Every line at its sell price with its rule (in 'line' mode their sums are the goods and labor sell). */
+  readonly lineSells: readonly LineSell[];
 }
 
 /** Materials' share of the goods sell price, cents (half-up): goods sell × materials cost ÷ (equipment + materials cost). */
@@ -73,16 +129,19 @@ const sum = (xs: readonly number[]): number => xs.reduce((a, b) => a + b, 0);
 
 /**
  * Rolls priced lines up into an option price: sell = markup or margin on goods (equipment +
- * materials) and on labor separately; discounts (percents of the sell price, then fixed
+ * materials) and on labor separately ('option'), or the sum of each line at its own price-book
+ * rule ('line', `priceBook` gives the rules); discounts (percents of the sell price, then fixed
  * amounts, capped at the sell price); tax on goods (their share of the discounted price) or
  * on the total; deposit; monthly payment on the balance. Every step rounds half-up to the cent.
  */
 export function priceOption({
   lines,
   pricing,
+  priceBook,
 }: {
   readonly lines: readonly PricedLine[];
   readonly pricing: Pricing;
+  readonly priceBook?: PriceBook | undefined;
 }): OptionPrice {
   const of = (c: TakeoffLine['category']) => sum(lines.filter((l) => l.category === c).map((l) => l.extendedCostCents));
   const equipment = of('equipment');
@@ -92,8 +151,11 @@ export function priceOption({
     pricing.method === 'margin'
       ? priceFromMarginCents({ costCents, marginPercent: pricing.percent })
       : priceFromMarkupCents({ costCents, markupPercent: pricing.percent });
-  const goodsSell = sell(equipment + materials);
-  const laborSell = sell(laborCost);
+  const lineSells = sellLines({ lines, pricing, priceBook });
+  const byLine = pricing.sellRulesBy === 'line';
+  const sold = (c: TakeoffLine['category']) => sum(lineSells.filter((l) => l.category === c).map((l) => l.sellCents));
+  const goodsSell = byLine ? sold('equipment') + sold('material') : sell(equipment + materials);
+  const laborSell = byLine ? sold('labor') : sell(laborCost);
   const sellCents = goodsSell + laborSell;
   const percentOff = sum(
     pricing.discounts
@@ -109,7 +171,9 @@ export function priceOption({
     rule === 'materials'
       ? goodsSell
       : rule === 'materials-only'
-        ? materialsSellShare(goodsSell, equipment, materials)
+        ? byLine
+          ? sold('material')
+          : materialsSellShare(goodsSell, equipment, materials)
         : 0;
   const taxable =
     rule === 'none' || rule === 'materials-cost'
@@ -153,6 +217,8 @@ export function priceOption({
         })
       : null,
     grossMarginPercent: subtotal > 0 ? roundHalfUp(((subtotal - cost) / subtotal) * 100, 2) : 0,
+    sellRulesBy: pricing.sellRulesBy,
+    lineSells,
   };
 }
 

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { bounded, boundedInt, keyField, nameField } from '../schemas/fields';
+import { sellRuleSchema } from '../catalog/sell-rule';
 
 /** The tax rules an option can use (see pricingSchema.taxOn). */
 export const TAX_RULES = ['materials', 'materials-only', 'total', 'materials-cost', 'none'] as const;
@@ -15,11 +16,21 @@ export const TAX_RULE_LABELS: Record<TaxRule, string> = {
 
 const cents = (label: string) => boundedInt(label, 0, 100_000_000, 'cents');
 
-/** The company's price book: cost per item key, labor rate per hour. All cents. */
+/**
+ * The company's price book: cost per item key, labor rate per hour. All cents. An item may carry the
+ * sell rule the price book gives it (its own override, or its category's: `ruleSource`, with the
+ * category's name in `ruleFrom`); an item without one sells at the company default (issue 13).
+ */
 export const priceBookSchema = z.object({
   items: z.record(
     keyField('Item key'),
-    z.object({ unitCostCents: cents('Unit cost'), description: nameField('Description', 120).optional() }),
+    z.object({
+      unitCostCents: cents('Unit cost'),
+      description: nameField('Description', 120).optional(),
+      sellRule: sellRuleSchema.optional(),
+      ruleSource: z.enum(['item', 'category']).optional(),
+      ruleFrom: nameField('Rule from', 120).optional(),
+    }),
   ),
   laborRateCents: cents('Labor rate'),
 });
@@ -36,6 +47,13 @@ export const pricingSchema = z
   .object({
     method: z.enum(['markup', 'margin'], { error: 'Choose markup or margin' }).default('margin'),
     percent: bounded('Markup or margin', 0, 500, '%'),
+    /**
+     * 'option': `method`/`percent` price all goods together and all labor together (one rule for
+     * the option). 'line': every line sells at the price book's rule for its item (item override →
+     * category → `method`/`percent` as the company default), rounded per line, and the sums are
+     * the option's sell (issue 13).
+     */
+    sellRulesBy: z.enum(['option', 'line'], { error: 'Choose option or line' }).default('option'),
     discounts: z.array(discountSchema).max(10, 'At most 10 discounts').default([]),
     taxRatePercent: bounded('Tax rate', 0, 20, '%').default(0),
     /**

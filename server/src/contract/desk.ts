@@ -182,6 +182,17 @@ export const takeoffLineRecord = z.object({
   unitCostCents: z.number().nullable().optional(),
   generatedUnitCostCents: z.number().nullable().optional(),
   extendedCostCents: z.number().optional(),
+  /** The line's sell price and the price-book rule behind it (office only; issue 13). */
+  sellCents: z.number().optional(),
+  sellRule: z
+    .object({
+      method: z.enum(['markup', 'margin']),
+      percent: z.number(),
+      /** item: its own override; category: its category's (named in `from`); company: the default; option: the option's own. */
+      source: z.enum(['item', 'category', 'company', 'option']),
+      from: z.string().nullable(),
+    })
+    .optional(),
   /** Set by an edit (generated values beside it); 'added' lines are the estimator's own. */
   edited: z.boolean(),
   source: z.enum(['generated', 'added']),
@@ -216,6 +227,8 @@ export const optionPriceRecord = z.object({
   grossMarginCents: z.number().optional(),
   grossMarginPercent: z.number().optional(),
   sellRule: z.object({ method: z.enum(['markup', 'margin']), percent: z.number() }).optional(),
+  /** 'line': each line at its price-book rule (sellRule is the company default for lines without one); 'option': the option's own rule. */
+  sellRulesBy: z.enum(['option', 'line']).optional(),
 });
 export type OptionPriceRecord = z.output<typeof optionPriceRecord>;
 

@@ -29,8 +29,10 @@ import {
   type SellRule,
   regenerateTakeoff,
   explainOptionPrice,
+  explainLineSell,
   type Explanation,
   type MergedLine,
+  type LineSell,
   type StaleEdit,
 } from '@calc';
 import { DESK_MESSAGES, takeoffEditKey, type BlockerRecord, type OptionPricing } from '@contract';
@@ -41,6 +43,8 @@ import type { DesignOption, StoredTakeoffEdit } from './option.entity';
 /** A takeoff line as the desk holds it: calc's merged line (generated value beside the edited one), priced. */
 export interface DeskLine extends MergedLine {
   readonly extendedCostCents: number;
+  /** The line at its sell price with the rule that priced it (set once the option is priced). */
+  readonly sell?: LineSell;
 }
 
 export interface EditState {
@@ -95,6 +99,7 @@ function bridge(desk: CompanyDesk, models: ReadonlyMap<string, CatalogModel>): O
         labor: desk.laborTasks.filter((t) => t.active),
         kits: desk.kits.filter((k) => k.active),
         refrigerants: desk.refrigerants,
+        categories: desk.categories,
       }),
     ),
   };
@@ -137,7 +142,11 @@ export function modelKeysOf(design: DesignOption['design']): string[] {
   return [...keys];
 }
 
-/** calc's pricing from the option's inputs and the company's rules (sell rule and tax unless the option overrides). */
+/**
+ * calc's pricing from the option's inputs and the company's rules (tax unless the option overrides it). The
+ * sell price: an option with its own rule prices every line by it ('option'); otherwise each line sells at
+ * the price book's rule for its item, its category's, or the company default ('line', issue 13).
+ */
 export function calcPricing(
   p: OptionPricing,
   desk: CompanyDesk,
@@ -148,6 +157,7 @@ export function calcPricing(
   const pricing = pricingSchema.parse({
     method: sellRule.method,
     percent: sellRule.percent,
+    sellRulesBy: p.sellRule ? 'option' : 'line',
     discounts,
     taxRatePercent: p.tax?.taxRatePercent ?? desk.settings.taxRatePercent,
     taxOn: p.tax?.taxOn ?? desk.settings.taxAppliesTo,
@@ -263,7 +273,11 @@ export function computeOption(
     return { figures: null, discontinued, problems, edits: noEdits, blockers };
   }
   const applied = applyTakeoffEdits(design.takeoff, option.takeoffEdits);
-  const price = priceOption({ lines: applied.lines, pricing });
+  const price = priceOption({ lines: applied.lines, pricing, priceBook: own.priceBook });
+  const lines: DeskLine[] = applied.lines.map((l, i) => {
+    const sell = price.lineSells[i];
+    return sell ? { ...l, sell } : l;
+  });
   if (applied.edits.some((e) => e.stale)) block('takeoff-edits-stale', DESK_MESSAGES.takeoffStale);
   for (const s of design.systems) {
     if (!s.combination.ok) block('combination-refused', s.combination.warnings.join(' ') || `${s.name}: refused.`);
@@ -286,12 +300,15 @@ export function computeOption(
   return {
     figures: {
       design,
-      lines: applied.lines,
+      lines,
       price,
       discountPercent,
       sellRule,
       monthly,
-      explanations: explainOptionPrice({ price, pricing, plans: data.desk.financing }),
+      explanations: [
+        ...price.lineSells.map((line) => explainLineSell({ line })),
+        ...explainOptionPrice({ price, pricing, plans: data.desk.financing }),
+      ],
       range,
     },
     discontinued,

@@ -1,6 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import {
   catalogModelSchema,
+  categorySchema,
   discountLimitSchema,
   financingPlanSchema,
   kitSchema,
@@ -8,6 +9,7 @@ import {
   materialSchema,
   refrigerantCostSchema,
   type CatalogModel,
+  type Category,
   type DiscountLimit,
   type FinancingPlan,
   type Kit,
@@ -28,6 +30,8 @@ export interface CompanyDesk {
   readonly materials: readonly Material[];
   readonly kits: readonly Kit[];
   readonly refrigerants: readonly RefrigerantCost[];
+  /** The price book's categories: the sell rule of every item that names one (issue 13). */
+  readonly categories: readonly Category[];
   readonly financing: readonly FinancingPlan[];
   readonly discountLimits: ReadonlyMap<string, DiscountLimit>;
   readonly settings: PriceBookSettings;
@@ -37,7 +41,7 @@ type Row = { dataset: string; data: unknown };
 
 export async function loadCompanyDesk(em: EntityManager, companyId: string): Promise<CompanyDesk> {
   const rows = await em.execute<Row[]>(
-    `select dataset, data from "company_data_row" where company_id = ? and dataset in ('models', 'labor', 'materials', 'kits', 'refrigerants', 'financing', 'discount-limits')
+    `select dataset, data from "company_data_row" where company_id = ? and dataset in ('models', 'labor', 'materials', 'kits', 'refrigerants', 'categories', 'financing', 'discount-limits')
      order by key`,
     [companyId],
   );
@@ -46,6 +50,7 @@ export async function loadCompanyDesk(em: EntityManager, companyId: string): Pro
   const materials: Material[] = [];
   const kits: Kit[] = [];
   const refrigerants: RefrigerantCost[] = [];
+  const categories: Category[] = [];
   const financing: FinancingPlan[] = [];
   const discountLimits = new Map<string, DiscountLimit>();
   // Rows were checked by calc when written; parsing again applies defaults and keeps the types honest.
@@ -65,6 +70,9 @@ export async function loadCompanyDesk(em: EntityManager, companyId: string): Pro
     } else if (r.dataset === 'refrigerants') {
       const c = refrigerantCostSchema.safeParse(r.data);
       if (c.success) refrigerants.push(c.data);
+    } else if (r.dataset === 'categories') {
+      const c = categorySchema.safeParse(r.data);
+      if (c.success) categories.push(c.data);
     } else if (r.dataset === 'financing') {
       const f = financingPlanSchema.safeParse(r.data);
       if (f.success && f.data.active) financing.push(f.data);
@@ -74,5 +82,5 @@ export async function loadCompanyDesk(em: EntityManager, companyId: string): Pro
     }
   }
   const settings = (await getSettings(em, companyId)).data;
-  return { models, laborTasks, materials, kits, refrigerants, financing, discountLimits, settings };
+  return { models, laborTasks, materials, kits, refrigerants, categories, financing, discountLimits, settings };
 }

@@ -39,6 +39,7 @@ function presentPrice(f: OptionFigures, role: Role): OptionPriceRecord | null {
     grossMarginCents: p.subtotalCents - p.costCents,
     grossMarginPercent: p.grossMarginPercent,
     sellRule: f.sellRule,
+    sellRulesBy: p.sellRulesBy,
   };
 }
 
@@ -60,16 +61,36 @@ function presentLine(l: DeskLine, role: Role): TakeoffLineRecord {
     unitCostCents: l.unitCostCents,
     generatedUnitCostCents: l.generated?.unitCostCents ?? null,
     extendedCostCents: l.extendedCostCents,
+    ...(l.sell
+      ? {
+          sellCents: l.sell.sellCents,
+          sellRule: {
+            method: l.sell.rule.method,
+            percent: l.sell.rule.percent,
+            source: l.sell.source,
+            from: l.sell.from,
+          },
+        }
+      : {}),
   };
 }
 
-/** The price explanations a salesperson may read: the customer's figures, not the cost or the sell rule. */
+/**
+ * The price explanations a salesperson may read: the customer's figures, not the cost or the sell rule
+ * (each line's sell price, `sell:<item>`, shows its cost and rule: office only).
+ */
 const CUSTOMER_PRICE_KEYS = /^price:(discount|subtotal|tax|total|deposit|balance|monthly:.*)$/;
 
 function explanationsFor(f: OptionFigures, role: Role) {
   if (maySeeCost(role)) return f.explanations.map((e) => ({ ...e }));
   return f.explanations
-    .filter((e) => (e.key.startsWith('price:') ? maySeePrice(role) && CUSTOMER_PRICE_KEYS.test(e.key) : true))
+    .filter((e) =>
+      e.key.startsWith('sell:')
+        ? false
+        : e.key.startsWith('price:')
+          ? maySeePrice(role) && CUSTOMER_PRICE_KEYS.test(e.key)
+          : true,
+    )
     .map((e) => ({ ...e }));
 }
 

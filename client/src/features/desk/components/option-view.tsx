@@ -226,6 +226,7 @@ export function OptionView({
                 jobId={jobId}
                 option={option}
                 lines={option.result.takeoff}
+                whys={whys}
                 canEdit={mayEditTakeoff(viewer.role)}
               />
             </Card>

@@ -5,24 +5,64 @@ import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/api-error';
 import { useRegenerateTakeoff, useSetTakeoffEdits } from '../api/set-takeoff-edits';
 import { editsOf } from '../model/takeoff-edits';
+import type { ExplanationView } from '../model/result-view';
 import { TakeoffLineEditor } from './takeoff-line-editor';
 
+const RULE_FROM: Record<NonNullable<TakeoffLineRecord['sellRule']>['source'], string> = {
+  item: 'own rule',
+  category: 'category',
+  company: 'company default',
+  option: "option's rule",
+};
+
+/** "margin 35 % · Equipment": the rule that sold a line and where it came from, in a few words. */
+function ruleWords(rule: NonNullable<TakeoffLineRecord['sellRule']>): string {
+  const where = rule.source === 'category' && rule.from ? rule.from : RULE_FROM[rule.source];
+  return `${rule.method} ${formatNumber(rule.percent, 2, { trim: true })} % · ${where}`;
+}
+
+/** A line's sell price that opens to calc's why (cost → price, the rule and where it came from). */
+function LineSell({ line, why }: { line: TakeoffLineRecord; why: ExplanationView | undefined }) {
+  if (line.sellCents === undefined) return null;
+  const rule = line.sellRule ? <span className="block text-muted">{ruleWords(line.sellRule)}</span> : null;
+  if (!why)
+    return (
+      <>
+        {formatMoney(line.sellCents)}
+        {rule}
+      </>
+    );
+  return (
+    <details className="text-right">
+      <summary className="min-h-touch cursor-pointer list-none">
+        {formatMoney(line.sellCents)} <span className="text-ink-600 underline">why?</span>
+        {rule}
+      </summary>
+      <p className="mt-1 max-w-xs text-left font-mono text-xs text-ink-900">{why.text}</p>
+    </details>
+  );
+}
+
 /**
- * The takeoff calc generated from the design, priced from the price book (unit costs for the office only).
- * Where an edit changed a line, the generated value stands beside the edited one.
+ * The takeoff calc generated from the design, priced from the price book (unit costs and each line's sell
+ * price with its rule for the office only). Where an edit changed a line, the generated value stands
+ * beside the edited one.
  */
 export function TakeoffTable({
   jobId,
   option,
   lines,
+  whys,
   canEdit,
 }: {
   jobId: string;
   option: OptionRecord;
   lines: readonly TakeoffLineRecord[];
+  whys?: ReadonlyMap<string, ExplanationView>;
   canEdit: boolean;
 }) {
   const costs = lines.some((l) => l.unitCostCents !== undefined);
+  const sells = lines.some((l) => l.sellCents !== undefined);
   const [editing, setEditing] = useState<string | null>(null);
   return (
     <div className="overflow-x-auto">
@@ -41,10 +81,15 @@ export function TakeoffTable({
                 <th scope="col" className="py-2 pr-3 text-right">
                   Unit cost
                 </th>
-                <th scope="col" className="py-2 text-right">
+                <th scope="col" className="py-2 pr-3 text-right">
                   Cost
                 </th>
               </>
+            ) : null}
+            {sells ? (
+              <th scope="col" className="py-2 pr-3 text-right">
+                Sell
+              </th>
             ) : null}
           </tr>
         </thead>
@@ -83,6 +128,11 @@ export function TakeoffTable({
                     </td>
                     <td className="py-2 pr-3 text-right tabular-nums">{formatMoney(l.extendedCostCents ?? 0)}</td>
                   </>
+                ) : null}
+                {sells ? (
+                  <td className="py-2 pr-3 text-right tabular-nums">
+                    <LineSell line={l} why={whys?.get(`sell:${l.itemKey}`)} />
+                  </td>
                 ) : null}
                 {canEdit ? (
                   <td className="py-2 text-right">

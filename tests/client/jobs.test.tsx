@@ -181,4 +181,58 @@ describe('new job', () => {
     // No second customer: the job is made for the one on file.
     expect(bodies).toEqual([expect.objectContaining({ customerId: 'c7', street: '3 Example Row' })]);
   });
+
+  it('the server’s 409 asks "Use the existing customer?" where the browser’s look-up missed; "No, a new customer" sends createAnyway', async () => {
+    const customerBodies: unknown[] = [];
+    const jobBodies: unknown[] = [];
+    mockFetch({
+      'GET /api/auth/csrf': json(200, { token: 't' }),
+      // The browser searches the text as typed; the customer on file wrote the number with dashes.
+      'GET /api/customers?page=1&pageSize=20&search=555+0188': page([], 0),
+      'POST /api/customers': (init, call) => {
+        customerBodies.push(JSON.parse(String(init?.body)));
+        if (call === 1)
+          return problem(409, 'duplicate', 'Linnea Marsh already has this phone number.', {
+            title: 'Use the existing customer?',
+            existing: { id: 'c5', name: 'Linnea Marsh', email: null, phone: '555-0188' },
+            matched: 'phone',
+          });
+        return json(201, {
+          customer: {
+            id: 'c6',
+            name: 'Linnea Marsh-Oduya',
+            email: null,
+            phone: '555 0188',
+            notes: '',
+            version: 1,
+            createdAt: '',
+            updatedAt: '',
+          },
+        });
+      },
+      'POST /api/jobs': (init) => {
+        jobBodies.push(JSON.parse(String(init?.body)));
+        return json(201, { job: jobRecord() });
+      },
+    });
+    renderAt('/jobs/new');
+    fireEvent.change(await screen.findByLabelText('Customer name'), { target: { value: 'Linnea Marsh-Oduya' } });
+    fireEvent.change(screen.getByLabelText('Customer phone'), { target: { value: '555 0188' } });
+    fireEvent.change(screen.getByLabelText('Street address'), { target: { value: '12 Sample Lane' } });
+    fireEvent.change(screen.getByLabelText('City or town'), { target: { value: 'Testville' } });
+    fireEvent.change(screen.getByLabelText('State or region'), { target: { value: 'TS' } });
+    fireEvent.change(screen.getByLabelText('Postal code'), { target: { value: '00000' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Create job and start the walk-through' }));
+    expect(await screen.findByText('Use the existing customer?')).toBeInTheDocument();
+    expect(screen.getByText(/Linnea Marsh already has 555-0188/)).toBeInTheDocument();
+    expect(jobBodies).toHaveLength(0);
+
+    fireEvent.click(screen.getByRole('button', { name: 'No, a new customer' }));
+    expect(await screen.findByText('Walk-through open')).toBeInTheDocument();
+    expect(customerBodies).toEqual([
+      { name: 'Linnea Marsh-Oduya', email: null, phone: '555 0188' },
+      { name: 'Linnea Marsh-Oduya', email: null, phone: '555 0188', createAnyway: true },
+    ]);
+    expect(jobBodies).toEqual([expect.objectContaining({ customerId: 'c6' })]);
+  });
 });

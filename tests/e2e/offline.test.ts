@@ -29,7 +29,7 @@ async function newJob(page: Page, tag: string): Promise<string> {
   const headers = { 'X-CSRF-Token': csrf };
   const customer = await page.request.post('/api/customers', {
     headers,
-    data: { name: `Basil Offline-${tag}`, phone: '555-0160' },
+    data: { name: `Basil Offline-${tag}`, email: `basil-${tag}@example.com` },
   });
   expect(customer.status()).toBe(201);
   const customerId = ((await customer.json()) as { customer: { id: string } }).customer.id;

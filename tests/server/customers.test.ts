@@ -140,3 +140,90 @@ describe('customers', () => {
     expect(await t.orm.em.fork().count(CustomerSchema, { id })).toBe(1);
   });
 });
+
+describe('a second customer with the same e-mail or phone (issue 10: "Use the existing customer?")', () => {
+  it('asks with a 409 naming the existing customer, by e-mail in any case or by phone digits; nothing is made', async () => {
+    const first = await post(sales, '/api/customers').send({
+      name: 'Ignatia Ravensworth',
+      email: 'ignatia.r@example.com',
+      phone: '555 014-7701',
+    });
+    expect(first.status).toBe(201);
+    const existing = {
+      id: first.body.customer.id,
+      name: 'Ignatia Ravensworth',
+      email: 'ignatia.r@example.com',
+      phone: '555 014-7701',
+    };
+    const before = await t.orm.em.fork().count(CustomerSchema, { company: a.id });
+
+    const byEmail = await post(sales, '/api/customers').send({
+      name: 'I. Ravensworth',
+      email: 'Ignatia.R@Example.COM',
+    });
+    expectProblem(byEmail, 409);
+    expect(byEmail.body).toMatchObject({
+      type: '/problems/duplicate',
+      title: 'Use the existing customer?',
+      existing,
+      matched: 'email',
+    });
+    expect(byEmail.body.detail).toContain('Ignatia Ravensworth already has this e-mail address.');
+
+    const byPhone = await post(sales, '/api/customers').send({ name: 'Iggy R', phone: '555.014.7701' });
+    expectProblem(byPhone, 409);
+    expect(byPhone.body).toMatchObject({ existing, matched: 'phone' });
+
+    // Both match: the e-mail is named.
+    const both = await post(sales, '/api/customers').send({
+      name: 'Ignatia',
+      email: 'ignatia.r@example.com',
+      phone: '5550147701',
+    });
+    expect(both.body.matched).toBe('email');
+    expect(await t.orm.em.fork().count(CustomerSchema, { company: a.id })).toBe(before);
+  });
+
+  it('createAnyway: true makes the second one; a flag that is not true or false is a 400', async () => {
+    const first = await post(sales, '/api/customers').send({ name: 'Cassius Wendeborn', phone: '555-014-7702' });
+    expect(first.status).toBe(201);
+    const second = await post(sales, '/api/customers').send({
+      name: 'Cassius Wendeborn Jr',
+      phone: '555 014 7702',
+      createAnyway: true,
+    });
+    expect(second.status, JSON.stringify(second.body)).toBe(201);
+    expect(second.body.customer.id).not.toBe(first.body.customer.id);
+    const bad = await post(sales, '/api/customers').send({ name: 'Flagged', createAnyway: 'yes' });
+    expectProblem(bad, 400);
+    expect(bad.body.errors).toContainEqual({ path: 'createAnyway', message: 'createAnyway must be true or false.' });
+  });
+
+  it('another company’s customers never match, and its answer never names them', async () => {
+    const inA = await post(sales, '/api/customers').send({
+      name: 'Philippa Dunmore',
+      email: 'philippa.d@example.com',
+      phone: '555-014-7703',
+    });
+    expect(inA.status).toBe(201);
+    const ownerB = await login(t.app, b.users.owner.email);
+    const inB = await post(ownerB, '/api/customers').send({
+      name: 'P. Dunmore',
+      email: 'philippa.d@example.com',
+      phone: '555-014-7703',
+    });
+    expect(inB.status, JSON.stringify(inB.body)).toBe(201);
+    // B's own second one is asked about, naming B's customer only.
+    const againInB = await post(ownerB, '/api/customers').send({ name: 'Pip', email: 'philippa.d@example.com' });
+    expectProblem(againInB, 409);
+    expect(againInB.body.existing.id).toBe(inB.body.customer.id);
+    expect(JSON.stringify(againInB.body)).not.toContain(inA.body.customer.id);
+    expect(JSON.stringify(againInB.body)).not.toContain('Philippa Dunmore');
+  });
+
+  it('no e-mail and no phone: nothing to compare, made at once', async () => {
+    const a1 = await post(sales, '/api/customers').send({ name: 'Nameonly Person' });
+    const a2 = await post(sales, '/api/customers').send({ name: 'Nameonly Person' });
+    expect([a1.status, a2.status]).toEqual([201, 201]);
+  });
+});

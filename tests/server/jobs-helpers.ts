@@ -1,4 +1,5 @@
 import type { RoomInput } from '@calc';
+import { randomInt } from 'node:crypto';
 import { expect } from 'vitest';
 import type request from 'supertest';
 import type { Session } from '../helpers/fixtures';
@@ -55,8 +56,10 @@ export function expectProblem(r: request.Response, status: number): void {
   expect(isProblem(r)).toBe(true);
 }
 
+/** A customer with an e-mail and phone of its own (the same ones twice would be asked "Use the existing customer?"). */
 export async function newCustomer(s: Session, name = 'Perpetua Windlestraw'): Promise<string> {
-  const r = await post(s, '/api/customers').send({ name, email: 'perpetua@example.com', phone: '555-0142' });
+  const n = randomInt(1_000_000, 10_000_000);
+  const r = await post(s, '/api/customers').send({ name, email: `perpetua-${n}@example.com`, phone: `555-${n}` });
   expect(r.status, JSON.stringify(r.body)).toBe(201);
   return String(r.body.customer.id);
 }

@@ -14,6 +14,8 @@ export class ApiError extends Error {
   readonly errors: FieldError[];
   /** Seconds from the Retry-After header (429), when the server sent one. */
   readonly retryAfter: number | null;
+  /** The problem body's other members as sent (e.g. `existing` on a 409 duplicate); read them with a check. */
+  readonly extra: Readonly<Record<string, unknown>>;
 
   constructor(init: {
     status: number;
@@ -22,6 +24,7 @@ export class ApiError extends Error {
     detail: string;
     errors?: FieldError[];
     retryAfter?: number | null;
+    extra?: Readonly<Record<string, unknown>>;
   }) {
     super(init.detail);
     this.status = init.status;
@@ -30,6 +33,7 @@ export class ApiError extends Error {
     this.detail = init.detail;
     this.errors = init.errors ?? [];
     this.retryAfter = init.retryAfter ?? null;
+    this.extra = init.extra ?? {};
   }
 }
 
@@ -42,7 +46,10 @@ interface Problem {
   title?: string;
   detail?: string;
   errors: FieldError[];
+  extra: Record<string, unknown>;
 }
+
+const PROBLEM_MEMBERS = new Set(['type', 'title', 'status', 'detail', 'instance', 'errors']);
 
 const optionalString = (v: unknown): v is string | undefined => v === undefined || typeof v === 'string';
 const isFieldError = (v: unknown): v is FieldError =>
@@ -70,6 +77,7 @@ function readProblem(body: unknown): Problem | null {
     title,
     detail,
     errors: errors === undefined ? [] : errors.map((e: FieldError) => ({ path: e.path, message: e.message })),
+    extra: Object.fromEntries(Object.entries(body).filter(([k]) => !PROBLEM_MEMBERS.has(k))),
   };
 }
 
@@ -114,6 +122,7 @@ export async function apiErrorFromResponse(res: Response): Promise<ApiError> {
     title: p.title ?? base.title,
     detail: p.detail ?? base.detail,
     errors: p.errors,
+    extra: p.extra,
   });
 }
 

@@ -91,6 +91,13 @@ export class ConflictError extends AppError {
   }
 }
 
+/** A new record would repeat one the company has (same e-mail or phone); `existing` names it so the person can use it. */
+export class DuplicateError extends AppError {
+  constructor(title: string, detail: string, extra: Record<string, unknown>) {
+    super(409, 'duplicate', title, detail, extra);
+  }
+}
+
 export class PreconditionRequiredError extends AppError {
   constructor(detail: string) {
     super(428, 'precondition-required', 'Precondition required', detail);

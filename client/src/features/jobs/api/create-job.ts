@@ -4,7 +4,7 @@ import { ApiError } from '../../../lib/api-error';
 import { jobKeys } from '../../../entities/job/query-keys';
 import { jobResponse } from '@contract';
 import type { NewJobValues } from '../schemas';
-import { createCustomer } from './create-customer';
+import { createCustomer, sameCustomerOf } from './create-customer';
 
 export interface CreateJobBody {
   customerId: string;
@@ -32,20 +32,28 @@ async function createCustomerAndJob({
   values: v,
   madeCustomerId,
   onCustomer,
+  createAnyway = false,
 }: {
   values: NewJobValues;
   madeCustomerId: string | null;
   onCustomer: (id: string) => void;
+  /** The person answered "No, a new customer" to "Use the existing customer?". */
+  createAnyway?: boolean;
 }) {
   let customerId = v.customerMode === 'existing' ? v.customerId : (madeCustomerId ?? '');
   if (v.customerMode === 'new' && !madeCustomerId) {
     try {
       customerId = (
-        await createCustomer({ name: v.customerName, email: v.customerEmail || null, phone: v.customerPhone || null })
+        await createCustomer({
+          name: v.customerName,
+          email: v.customerEmail || null,
+          phone: v.customerPhone || null,
+          ...(createAnyway ? { createAnyway: true } : {}),
+        })
       ).id;
       onCustomer(customerId);
     } catch (e) {
-      if (!(e instanceof ApiError)) throw e;
+      if (!(e instanceof ApiError) || sameCustomerOf(e)) throw e;
       throw new ApiError({ ...e, errors: e.errors.map((f) => ({ ...f, path: customerField[f.path] ?? f.path })) });
     }
   }

@@ -3,6 +3,7 @@ import type { CustomerRecord } from '@contract';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { findSameCustomer, lastSiteOf } from '../api/find-customer';
+import { sameCustomerOf, type SameCustomer } from '../api/create-customer';
 import { useNavigate } from 'react-router-dom';
 import { Form } from '../../../components/ui/form';
 import { SelectField, SubmitButton, TextField } from '../../../components/ui/form-fields';
@@ -47,28 +48,36 @@ export function NewJobForm() {
   const createJob = useCreateJob();
   const navigate = useNavigate();
   const madeCustomer = useRef<string | null>(null);
-  // A customer with the same e-mail or phone: asked about before a second one is made.
-  const [same, setSame] = useState<CustomerRecord | null>(null);
+  // A customer with the same e-mail or phone: asked about before a second one is made (the browser asks
+  // the server while the contact is typed; the server's 409 on create is the check that counts).
+  const [same, setSame] = useState<SameCustomer | null>(null);
   const newAnyway = useRef(false);
   const [picked, setPicked] = useState('');
+  // Asked after "Create job" the question sits above the fold of a phone: bring it into view.
+  const question = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    if (same) question.current?.scrollIntoView?.({ block: 'center', behavior: 'smooth' });
+  }, [same]);
   return (
     <Form
       schema={newJobSchema}
       defaultValues={empty}
       aria-label="New job"
       onSubmit={async (values) => {
-        if (values.customerMode === 'new' && !newAnyway.current && !madeCustomer.current) {
-          const found = await findSameCustomer(values.customerEmail, values.customerPhone).catch(() => null);
-          if (found) {
-            setSame(found);
-            return;
-          }
+        let job;
+        try {
+          job = await createJob.mutateAsync({
+            values,
+            madeCustomerId: madeCustomer.current,
+            onCustomer: (id) => (madeCustomer.current = id),
+            createAnyway: newAnyway.current,
+          });
+        } catch (e) {
+          const existing = sameCustomerOf(e);
+          if (!existing) throw e;
+          setSame(existing);
+          return;
         }
-        const job = await createJob.mutateAsync({
-          values,
-          madeCustomerId: madeCustomer.current,
-          onCustomer: (id) => (madeCustomer.current = id),
-        });
         await navigate(jobPaths.walkthrough(job.id));
       }}
     >
@@ -91,27 +100,29 @@ export function NewJobForm() {
               onFound={setSame}
             />
             {same && form.watch('customerMode') === 'new' ? (
-              <Alert tone="warning" title="Use the existing customer?">
-                <p>
-                  {same.name} already has {[same.email, same.phone].filter(Boolean).join(' · ')}.
-                </p>
-                <div className="mt-2 flex flex-wrap gap-2">
-                  <Button
-                    onClick={() => {
-                      form.setValue('customerMode', 'existing');
-                      form.setValue('customerId', same.id, { shouldValidate: true });
-                      setPicked(same.name);
-                      setSame(null);
-                      void fillSite(form, same);
-                    }}
-                  >
-                    Use {same.name}
-                  </Button>
-                  <Button type="submit" variant="secondary" onClick={() => (newAnyway.current = true)}>
-                    No, a new customer
-                  </Button>
-                </div>
-              </Alert>
+              <div ref={question}>
+                <Alert tone="warning" title="Use the existing customer?">
+                  <p>
+                    {same.name} already has {[same.email, same.phone].filter(Boolean).join(' · ')}.
+                  </p>
+                  <div className="mt-2 flex flex-wrap gap-2">
+                    <Button
+                      onClick={() => {
+                        form.setValue('customerMode', 'existing');
+                        form.setValue('customerId', same.id, { shouldValidate: true });
+                        setPicked(same.name);
+                        setSame(null);
+                        void fillSite(form, same);
+                      }}
+                    >
+                      Use {same.name}
+                    </Button>
+                    <Button type="submit" variant="secondary" onClick={() => (newAnyway.current = true)}>
+                      No, a new customer
+                    </Button>
+                  </div>
+                </Alert>
+              </div>
             ) : null}
             {form.watch('customerMode') === 'existing' ? (
               <CustomerPicker key={picked} initialSearch={picked} onPick={(c) => void fillSite(form, c)} />
@@ -152,7 +163,7 @@ function SameCustomerWatch({
   email: string;
   phone: string;
   active: boolean;
-  onFound: (c: CustomerRecord | null) => void;
+  onFound: (c: SameCustomer | null) => void;
 }) {
   useEffect(() => {
     if (!active || (email.trim() === '' && phone.trim() === '')) return;

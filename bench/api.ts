@@ -11,6 +11,7 @@
  * app server under `node --cpu-prof` and leaves its profile there (open it in Chrome's DevTools).
  */
 import { spawn, type ChildProcess } from 'node:child_process';
+import { readFileSync } from 'node:fs';
 import { randomBytes, randomUUID } from 'node:crypto';
 import { availableParallelism, loadavg } from 'node:os';
 import { join, resolve } from 'node:path';
@@ -110,10 +111,42 @@ async function signIn(email: string, password: string): Promise<{ cookie: string
   return { cookie, csrf: csrf.token };
 }
 
+/**
+ * CPU time a process has used so far (user + system, ms), from /proc (Linux; NaN elsewhere). Per request
+ * it says what the route costs the server whatever else the machine runs: on a loaded machine latencies
+ * wait for the CPU, but the CPU a request needs hardly changes.
+ */
+function cpuMs(pid: number | undefined): number {
+  try {
+    const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+    const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+    // utime and stime are fields 14 and 15 of stat(5), in clock ticks (USER_HZ, 100 on Linux).
+    return ((Number(fields[11]) + Number(fields[12])) * 1000) / 100;
+  } catch {
+    return Number.NaN;
+  }
+}
+
 const f = (n: number, d = 0) => (Number.isFinite(n) ? n.toFixed(d) : '—');
-function table(rows: Array<{ route: string; floor: LoadResult; app: LoadResult }>): void {
-  const head = ['route', 'floor req/s', 'app req/s', 'floor p50/p95/p99 ms', 'app p50/p95/p99 ms', 'errors', 'p95 ×'];
-  const lines = rows.map(({ route, floor, app }) => [
+interface Row {
+  route: string;
+  floor: LoadResult;
+  app: LoadResult;
+  floorCpu: number;
+  appCpu: number;
+}
+function table(rows: Row[]): void {
+  const head = [
+    'route',
+    'floor req/s',
+    'app req/s',
+    'floor p50/p95/p99 ms',
+    'app p50/p95/p99 ms',
+    'errors',
+    'p95 ×',
+    'CPU ms/req floor/app',
+  ];
+  const lines = rows.map(({ route, floor, app, floorCpu, appCpu }) => [
     route,
     f(floor.rps),
     f(app.rps),
@@ -121,6 +154,7 @@ function table(rows: Array<{ route: string; floor: LoadResult; app: LoadResult }
     `${f(app.p50)}/${f(app.p95)}/${f(app.p99)}`,
     `${floor.errors}/${app.errors}`,
     `${f(app.p95 / floor.p95, 2)}`,
+    `${f(floorCpu, 2)}/${f(appCpu, 2)} (${f(appCpu / floorCpu, 2)}×)`,
   ]);
   const widths = head.map((h, i) => Math.max(h.length, ...lines.map((l) => (l[i] ?? '').length)));
   const fmt = (cells: string[]) => cells.map((c, i) => c.padEnd(widths[i] ?? 0)).join('  ');
@@ -194,7 +228,7 @@ try {
   const appRooms = await makeRooms(CONNECTIONS);
   const floorRooms = await makeRooms(CONNECTIONS);
 
-  start(
+  const appProcess = start(
     'server/src/main.ts',
     {
       NODE_ENV: 'production',
@@ -213,7 +247,7 @@ try {
     SERVER_DIR,
     CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${CPU_PROF}`] : [],
   );
-  start('bench/lib/floor-server.ts', {
+  const floorProcess = start('bench/lib/floor-server.ts', {
     DATABASE_URL: databaseUrl,
     PORT: String(FLOOR_PORT),
     DB_POOL_MAX: String(POOL_MAX),
@@ -221,7 +255,11 @@ try {
   await Promise.all([waitFor(`${APP}/api/health`), waitFor(`${FLOOR}/floor/nothing`)]);
 
   const s = await signIn(owner.email, owner.password);
-  const appHeaders = { cookie: s.cookie, 'x-forwarded-proto': 'https', 'accept-encoding': 'gzip, deflate, br' };
+  const appHeaders = {
+    cookie: s.cookie,
+    'x-forwarded-proto': 'https',
+    'accept-encoding': process.env.XAE ?? 'gzip, deflate, br',
+  };
   const floorHeaders = { 'accept-encoding': 'gzip, deflate, br' };
   const q = `company=${target.company_id}`;
 
@@ -241,11 +279,17 @@ try {
   const warm = async (url: string, headers: Record<string, string>) =>
     load({ label: 'warm-up', url, connections: 10, seconds: 1, headers });
 
-  const rows: Array<{ route: string; floor: LoadResult; app: LoadResult }> = [];
+  const rows: Row[] = [];
+  // Each side's CPU per request: the process's CPU time over the run divided by the requests answered.
+  const measured = async (pid: number | undefined, run: () => Promise<LoadResult>) => {
+    const before = cpuMs(pid);
+    const result = await run();
+    return { result, cpu: (cpuMs(pid) - before) / Math.max(1, result.total) };
+  };
   const pair = async (route: string, floorRun: () => Promise<LoadResult>, appRun: () => Promise<LoadResult>) => {
-    const floor = await floorRun();
-    const app = await appRun();
-    rows.push({ route, floor, app });
+    const { result: floor, cpu: floorCpu } = await measured(floorProcess.pid, floorRun);
+    const { result: app, cpu: appCpu } = await measured(appProcess.pid, appRun);
+    rows.push({ route, floor, app, floorCpu, appCpu });
     console.log(
       `  ${route}: app ${f(app.rps)} req/s p95 ${f(app.p95)} ms (${app.errors} errors) · floor ${f(floor.rps)} req/s p95 ${f(floor.p95)} ms (${floor.errors} errors)`,
     );
@@ -392,6 +436,9 @@ try {
     `load average after: ${loadavg()
       .map((l) => l.toFixed(2))
       .join(' / ')}. Goals (issue 11): read routes p95 ≤ 2× floor with 0 errors, room save ≤ 3×.`,
+  );
+  console.log(
+    "CPU ms/req: the server process's CPU time per answered request (the database's is not in it); it moves far less with the machine's load than the latencies do.",
   );
   console.log(
     'Sign-in: autocannon counts csrf + login as one sign-in on the app side; latencies are the login step; argon2id dominates both.',

@@ -20,6 +20,7 @@ const JSON_LIMIT = '256kb';
 const IMPORT_JSON_LIMIT = '3mb';
 const IMPORT_PATH = /^\/api\/company-data\/[a-z-]+\/import\/(preview|apply)$/;
 const COMPRESS_ABOVE_BYTES = 1024;
+const BROTLI_WINDOW_BITS = 18;
 
 /**
  * The built client: files precompressed at build time (brotli, gzip) chosen by the request's
@@ -73,6 +74,9 @@ export function createApp(services: Services, extras: AppExtras = {}): Express {
   app.disable('x-powered-by');
   app.set('trust proxy', config.TRUST_PROXY === 'false' ? false : config.TRUST_PROXY);
   app.set('json spaces', 0);
+  // No body-hash ETag on every JSON answer (a SHA-1 of each body): /api answers are no-store, and the routes
+  // that take If-Match send their record's version as the ETag themselves (lib/route.ts).
+  app.set('etag', false);
 
   app.use(requestLog(logger));
   app.use(
@@ -120,12 +124,17 @@ export function createApp(services: Services, extras: AppExtras = {}): Express {
   );
   // JSON answers above ~1 KB go compressed (gzip or brotli as the request accepts; Vary: Accept-Encoding).
   // Fast settings (gzip 3, brotli 2): on JSON they compress nearly as well as the defaults for a fraction of the CPU.
+  // Brotli's window is 256 KB (lgwin 18) instead of its 4 MB default: every answer gets a new encoder, and with
+  // 50 answers in flight the default's buffers cost the jobs list 6.6 ms of CPU per request instead of 2.4 ms
+  // (bench, CPU ms/req); our answers are far smaller than the window, so they compress the same.
   app.use(
     '/api',
     compression({
       threshold: COMPRESS_ABOVE_BYTES,
       level: 3,
-      brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 2 } },
+      brotli: {
+        params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 2, [zlibConstants.BROTLI_PARAM_LGWIN]: BROTLI_WINDOW_BITS },
+      },
     }),
   );
   app.use('/api', express.json({ limit: JSON_LIMIT, strict: true }));

@@ -69,7 +69,10 @@ describe('discounts: per-role limits from the price book, the owner approves bey
       decidedBy: { id: a.users.owner.id },
     });
     expect(approved.body.option.result.price.discountPercent).toBe(12);
-    const ready = await post(estimator, `/api/jobs/${job.id}/ready`).send();
+    // One 12k pair on one small room is outside its sizing range: the estimator says why it is proposed anyway.
+    const ready = await post(estimator, `/api/jobs/${job.id}/ready`).send({
+      sizingOverride: { reason: 'The owner plans to open this room to the hall next year.' },
+    });
     expect(ready.status, JSON.stringify(ready.body)).toBe(200);
     expect(ready.body.readiness.markedReady.by.id).toBe(a.users.estimator.id);
     expect(ready.body.readiness.ready).toBe(true);
@@ -272,7 +275,15 @@ describe('ready to propose', () => {
       design: singleZone(rooms[0] ?? '', 30),
     });
     expectProblem(await post(sales, `/api/jobs/${job.id}/ready`).send(), 403);
-    const ok = await post(estimator, `/api/jobs/${job.id}/ready`).send();
+    // Within the maker's limits now, but a 12k pair on one small room is outside the sizing range.
+    const oversized = await post(estimator, `/api/jobs/${job.id}/ready`).send();
+    expectProblem(oversized, 422);
+    expect(new Set(oversized.body.blockers.map((b: { code: string }) => b.code))).toEqual(
+      new Set(['sizing-outside-range']),
+    );
+    const ok = await post(estimator, `/api/jobs/${job.id}/ready`).send({
+      sizingOverride: { reason: 'The owner plans to open this room to the hall next year.' },
+    });
     expect(ok.status, JSON.stringify(ok.body)).toBe(200);
     expect(ok.body.readiness.ready).toBe(true);
     await patch(estimator, optionUrl(job.id, o.id), fixed.body.option.version).send({ name: 'Essential plus' });

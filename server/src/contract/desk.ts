@@ -251,6 +251,8 @@ export const discountRequestRecord = z.object({
   requestedAt: timestamp,
   decidedBy: personRef.nullable(),
   decidedAt: timestamp.nullable(),
+  /** Why it waits again after an approval (the price dropped); absent for a first request. */
+  reason: z.string().optional(),
 });
 export type DiscountRequestRecord = z.output<typeof discountRequestRecord>;
 
@@ -263,6 +265,8 @@ export const BLOCKER_CODES = [
   'discount-pending',
   'preliminary',
   'takeoff-edits-stale',
+  /** A unit outside its allowed sizing range: the office may still mark the job ready, giving a reason. */
+  'sizing-outside-range',
 ] as const;
 export const blockerRecord = z.object({
   code: z.enum(BLOCKER_CODES),
@@ -340,9 +344,35 @@ export const optionRecord = z.object({
 });
 export type OptionRecord = z.output<typeof optionRecord>;
 
+/** The office's reason to propose units outside their sizing range, with who, when and the units it covers. */
+export const readyOverrideRecord = z.object({
+  reason: z.string(),
+  by: personRef,
+  at: timestamp,
+  /** The sizing blockers' messages the reason was given for. */
+  units: z.array(z.string()),
+});
+export type ReadyOverride = z.output<typeof readyOverrideRecord>;
+
+/** POST /api/jobs/:jobId/ready: with units outside their sizing range, the reason to propose them anyway. */
+export const readyBody = z.strictObject({
+  sizingOverride: z
+    .strictObject({
+      reason: z
+        .string({ error: 'Say why these sizes are right for this home' })
+        .trim()
+        .min(10, 'Say why these sizes are right for this home (at least 10 characters)')
+        .max(500, 'At most 500 characters'),
+    })
+    .optional(),
+});
+export type ReadyBody = z.input<typeof readyBody>;
+
 export const readinessRecord = z.object({
   /** Marked ready to propose by the office, and by whom; null when not marked. */
   markedReady: z.object({ at: timestamp, by: personRef }).nullable(),
+  /** Marked ready with units outside their sizing range: the office's reason; null otherwise. */
+  sizingOverride: readyOverrideRecord.nullable(),
   /** Marked and nothing blocks it now. */
   ready: z.boolean(),
   blockers: z.array(blockerRecord),
@@ -394,6 +424,8 @@ export const DESK_MESSAGES = {
   discountPending: 'A discount is waiting for the owner’s approval.',
   preliminary: 'This is a first price from the walk-through; an estimator or the owner reviews it first.',
   takeoffStale: 'Some takeoff edits no longer match the design; regenerate the takeoff and accept or drop them.',
+  sizingOverrideNeeded:
+    'Some units are outside their sizing range. Change them, or give the reason they are right for this home.',
   firstPriceNotice: 'Preliminary price, subject to the estimator’s review. Not a proposal.',
   discontinued: 'discontinued',
 } as const;

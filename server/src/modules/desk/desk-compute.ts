@@ -1,3 +1,4 @@
+import { isDeepStrictEqual } from 'node:util';
 import {
   CalcError,
   computeDesignFromParsed,
@@ -79,6 +80,28 @@ export interface ComputedOption {
   readonly problems: FieldError[];
   readonly edits: EditState[];
   readonly blockers: BlockerRecord[];
+  /**
+   * An approved discount the price has since outgrown: beyond the approved percent and the requester's
+   * limit, so it is not applied and waits for the owner again (the percent now and why); else null.
+   */
+  readonly discountRecheck: { percent: number; reason: string } | null;
+}
+
+/**
+ * Issue 13: an owner approved a discount at some percent of the price; when the price later drops (a
+ * smaller design, a cheaper price book), an amount discount becomes a larger share. Beyond both the
+ * approved percent and the requester's limit, the approval no longer covers it.
+ */
+function recheckDiscount(option: DesignOption, price: OptionPrice): { percent: number; reason: string } | null {
+  const req = option.discountRequest;
+  if (req?.state !== 'approved' || price.discountCents <= 0) return null;
+  if (!isDeepStrictEqual(option.pricing.discounts, req.discounts)) return null;
+  const percent = price.sellCents > 0 ? roundHalfUp((price.discountCents / price.sellCents) * 100, 2) : 100;
+  if (percent <= req.percent || percent <= req.limitPercent) return null;
+  return {
+    percent,
+    reason: `The price has dropped since the owner approved this discount: it is now ${percent} % of the price (approved at ${req.percent} %; the limit is ${req.limitPercent} %), so it waits for the owner again and is not applied.`,
+  };
 }
 
 /** The company's catalog and price book as the engine reads them, built once per request. */
@@ -226,20 +249,23 @@ export function computeOption(
   const blockers: BlockerRecord[] = [];
   const block = (code: BlockerRecord['code'], message: string) =>
     blockers.push({ code, optionId: option.id, message: `${option.name}: ${message}` });
-  if (option.discountRequest?.state === 'pending') block('discount-pending', DESK_MESSAGES.discountPending);
+  if (option.discountRequest?.state === 'pending')
+    block('discount-pending', option.discountRequest.reason ?? DESK_MESSAGES.discountPending);
   if (option.preliminary) block('preliminary', DESK_MESSAGES.preliminary);
   const noEdits = option.takeoffEdits.map((stored) => ({ key: takeoffEditKey(stored), stored, stale: null }));
   if ('problem' in home) {
     block('cannot-calculate', home.problem.message);
-    return { figures: null, discontinued, problems: [home.problem], edits: noEdits, blockers };
+    return { figures: null, discontinued, problems: [home.problem], edits: noEdits, blockers, discountRecheck: null };
   }
   if (!option.design) {
     const problem = { path: 'design', message: 'Choose the equipment for this option.' };
     block('cannot-calculate', problem.message);
-    return { figures: null, discontinued, problems: [problem], edits: noEdits, blockers };
+    return { figures: null, discontinued, problems: [problem], edits: noEdits, blockers, discountRecheck: null };
   }
   const own = dataFor(option, data);
-  const { pricing, sellRule } = calcPricing(option.pricing, data.desk, discounts);
+  const asked = calcPricing(option.pricing, data.desk, discounts);
+  const { sellRule } = asked;
+  let { pricing } = asked;
   let design: DesignResult;
   let range: PreliminaryRange | null = null;
   try {
@@ -270,15 +296,27 @@ export function computeOption(
   } catch (e) {
     const problems = problemsOf(e);
     block('cannot-calculate', problems.map((p) => p.message).join(' '));
-    return { figures: null, discontinued, problems, edits: noEdits, blockers };
+    return { figures: null, discontinued, problems, edits: noEdits, blockers, discountRecheck: null };
   }
   const applied = applyTakeoffEdits(design.takeoff, option.takeoffEdits);
-  const price = priceOption({ lines: applied.lines, pricing, priceBook: own.priceBook });
+  let price = priceOption({ lines: applied.lines, pricing, priceBook: own.priceBook });
+  const discountRecheck = discounts === undefined ? recheckDiscount(option, price) : null;
+  if (discountRecheck) {
+    pricing = calcPricing(option.pricing, data.desk, []).pricing;
+    price = priceOption({ lines: applied.lines, pricing, priceBook: own.priceBook });
+    block('discount-pending', discountRecheck.reason);
+  }
   const lines: DeskLine[] = applied.lines.map((l, i) => {
     const sell = price.lineSells[i];
     return sell ? { ...l, sell } : l;
   });
   if (applied.edits.some((e) => e.stale)) block('takeoff-edits-stale', DESK_MESSAGES.takeoffStale);
+  // Issue 13: a unit outside its allowed sizing range holds the ready mark unless the office gives a reason.
+  for (const u of [...design.zones, ...design.systems]) {
+    if (u.sizing.withinRange) continue;
+    const ratio = u.explanations.find((e) => e.key.endsWith('cooling-ratio'));
+    block('sizing-outside-range', `${u.name}: ${ratio?.verdict ?? 'outside the allowed sizing range'}.`);
+  }
   for (const s of design.systems) {
     if (!s.combination.ok) block('combination-refused', s.combination.warnings.join(' ') || `${s.name}: refused.`);
     for (const b of s.refrigerant.blockers) block('limit-exceeded', b);
@@ -315,5 +353,6 @@ export function computeOption(
     problems: [],
     edits: applied.edits,
     blockers,
+    discountRecheck,
   };
 }

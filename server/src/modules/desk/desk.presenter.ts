@@ -5,6 +5,7 @@ import {
   type OptionPriceRecord,
   type OptionRecord,
   type OptionResultRecord,
+  type ReadyOverride,
   type Role,
   type TakeoffLineRecord,
 } from '@contract';
@@ -164,19 +165,52 @@ export function presentOption(v: OptionView, role: Role): OptionRecord {
   };
 }
 
+/**
+ * A sizing verdict the office chose to propose anyway says so in its explanation: who, when and why
+ * (the same words wherever the explanation is shown).
+ */
+function withOverride(o: OptionRecord, override: ReadyOverride | null): OptionRecord {
+  if (!override || !o.result) return o;
+  const note = `Proposed anyway by ${override.by.name} on ${override.at.slice(0, 10)}: “${override.reason}”`;
+  const annotate = (list: unknown): unknown => {
+    if (!Array.isArray(list)) return list;
+    return list.map((e: { key?: unknown; status?: unknown; verdict?: unknown }) => {
+      const verdict = e.verdict;
+      if (typeof e.key !== 'string' || !e.key.endsWith('cooling-ratio') || e.status !== 'warning') return e;
+      if (typeof verdict !== 'string' || !override.units.some((u) => u.includes(verdict))) return e;
+      return { ...e, verdict: `${verdict}. ${note}`, override: { ...override, by: { ...override.by } } };
+    });
+  };
+  const r = o.result;
+  return {
+    ...o,
+    result: {
+      ...r,
+      zones: r.zones.map((z) => ({ ...z, explanations: annotate(z['explanations']) })),
+      systems: r.systems.map((y) => ({ ...y, explanations: annotate(y['explanations']) })),
+    },
+  };
+}
+
 export function presentDesk(v: DeskView, role: Role): DeskResponse {
   const job = v.desk.job;
   const blockers = maySeePrice(role) ? v.blockers : v.blockers.filter((b) => b.code !== 'discount-pending');
+  const override = job.readyAt ? (job.readyOverride ?? null) : null;
+  // Ready: marked, and nothing blocks it but the units outside their sizing range the office's reason covers.
+  const uncovered = v.blockers.filter(
+    (b) => !(b.code === 'sizing-outside-range' && override?.units.includes(b.message) === true),
+  );
   return {
     jobId: job.id,
     jobStatus: job.status,
-    options: v.options.map((o) => presentOption(o, role)),
+    options: v.options.map((o) => withOverride(presentOption(o, role), override)),
     readiness: {
       markedReady:
         job.readyAt && job.readyBy
           ? { at: job.readyAt.toISOString(), by: { id: job.readyBy.id, name: job.readyBy.name } }
           : null,
-      ready: Boolean(job.readyAt) && v.blockers.length === 0,
+      sizingOverride: override ? { ...override, by: { ...override.by }, units: [...override.units] } : null,
+      ready: Boolean(job.readyAt) && uncovered.length === 0,
       blockers,
     },
   };

@@ -3,6 +3,7 @@ import {
   createOptionBody,
   DESK_MESSAGES,
   deskResponse,
+  readyBody,
   discountDecisionBody,
   firstPriceBody,
   firstPriceResponse,
@@ -199,10 +200,13 @@ export function deskRoutes(api: ApiRouter): void {
     method: 'post',
     path: '/:jobId/ready',
     policy: OFFICE,
-    summary: 'Marks the job ready to propose, or answers 422 with every reason it cannot be',
+    summary:
+      'Marks the job ready to propose, or answers 422 with every reason it cannot be; units outside their sizing range need sizingOverride.reason',
     params: jobParams,
+    body: readyBody,
     response: deskResponse,
-    handler: async ({ service, params, actor }) => presentDesk(await markReady(service, params.jobId), actor.role),
+    handler: async ({ service, params, actor, body }) =>
+      presentDesk(await markReady(service, params.jobId, body), actor.role),
   });
   api.route({
     method: 'delete',

@@ -62,11 +62,70 @@ export async function getOption(ctx: ServiceContext, jobId: string, optionId: st
 
 /** A write changes what the office reviewed: the job's "ready to propose" mark goes. */
 function touched(ctx: ServiceContext, desk: DeskJob): void {
-  if (desk.job.readyAt) {
+  if (desk.job.readyAt || desk.job.readyOverride) {
     desk.job.readyAt = null;
     desk.job.readyBy = null;
+    desk.job.readyOverride = null;
   }
   desk.job.lastActivityAt = ctx.clock.now();
+}
+
+interface OptionIds {
+  readonly jobId: string;
+  readonly optionId: string;
+}
+
+/** Reads the job and the option of a write and checks the version the writer saw (412 with the option as it is now). */
+async function lockedOption(
+  ctx: ServiceContext,
+  ids: OptionIds,
+  version: number,
+  present: (v: OptionView) => unknown,
+): Promise<{ desk: DeskJob; option: DesignOption }> {
+  const desk = await readDeskJob(ctx, ids.jobId);
+  const option = await findOption(ctx, desk, ids.optionId);
+  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
+  return { desk, option };
+}
+
+/**
+ * An approved discount the new price has outgrown waits for the owner again and stops applying
+ * (the reason stored with the request, shown on the desk).
+ */
+function recheckApproval(option: DesignOption, computed: ComputedOption): void {
+  const again = computed.discountRecheck;
+  const req = option.discountRequest;
+  if (!again || !req) return;
+  option.discountRequest = {
+    ...req,
+    state: 'pending',
+    percent: again.percent,
+    decidedBy: null,
+    decidedAt: null,
+    reason: again.reason,
+  };
+  option.pricing = { ...option.pricing, discounts: [] };
+}
+
+/**
+ * One write to an option: read the job and the option, check the version, make the change, take the
+ * ready mark off, re-check an approved discount against the new price, store, and answer with the
+ * option worked out again. A change that returns false stored nothing (no flush, the mark stays).
+ */
+async function changeOption(
+  ctx: ServiceContext,
+  ids: OptionIds,
+  version: number,
+  present: (v: OptionView) => unknown,
+  change: (desk: DeskJob, option: DesignOption) => void | boolean | Promise<void | boolean>,
+): Promise<OptionView> {
+  const { desk, option } = await lockedOption(ctx, ids, version, present);
+  if ((await change(desk, option)) === false) return { option, computed: compute(desk, option) };
+  touched(ctx, desk);
+  recheckApproval(option, compute(desk, option));
+  await ctx.em.flush();
+  await ctx.em.populate(option, ['createdBy', 'reviewedBy']);
+  return { option, computed: compute(desk, option) };
 }
 
 /**
@@ -235,13 +294,9 @@ export async function updateOption(
   input: OptionInput,
   present: (v: OptionView) => unknown,
 ): Promise<OptionView> {
-  const desk = await readDeskJob(ctx, jobId);
-  const option = await findOption(ctx, desk, optionId);
-  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
-  await applyInputs(ctx, desk, option, input);
-  touched(ctx, desk);
-  await ctx.em.flush();
-  return { option, computed: compute(desk, option) };
+  return changeOption(ctx, { jobId, optionId }, version, present, (desk, option) =>
+    applyInputs(ctx, desk, option, input),
+  );
 }
 
 export async function deleteOption(
@@ -251,9 +306,7 @@ export async function deleteOption(
   version: number,
   present: (v: OptionView) => unknown,
 ): Promise<void> {
-  const desk = await readDeskJob(ctx, jobId);
-  const option = await findOption(ctx, desk, optionId);
-  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
+  const { desk, option } = await lockedOption(ctx, { jobId, optionId }, version, present);
   ctx.em.remove(option);
   touched(ctx, desk);
   await ctx.em.flush();
@@ -311,24 +364,20 @@ export async function setTakeoffEdits(
   present: (v: OptionView) => unknown,
 ): Promise<OptionView> {
   if (!mayEditTakeoff(ctx.actor.role)) throw new ForbiddenError('Only an estimator or the owner edits the takeoff.');
-  const desk = await readDeskJob(ctx, jobId);
-  const option = await findOption(ctx, desk, optionId);
-  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
-  const generated = generatedLines(desk, option);
-  const previous = new Map(option.takeoffEdits.map((s) => [takeoffEditKey(s), s]));
-  const errors: { path: string; message: string }[] = [];
-  const stored = edits.flatMap((edit, i): StoredTakeoffEdit[] => {
-    const kept = previous.get(takeoffEditKey(edit));
-    if (kept && edit.kind !== 'add' && isDeepStrictEqual(editValue(kept), editValue(edit))) return [kept];
-    const s = storedEdit(edit, generated);
-    if (!s) errors.push({ path: `edits.${i}.itemKey`, message: 'This line is not in the takeoff.' });
-    return s ? [s] : [];
+  return changeOption(ctx, { jobId, optionId }, version, present, (desk, option) => {
+    const generated = generatedLines(desk, option);
+    const previous = new Map(option.takeoffEdits.map((s) => [takeoffEditKey(s), s]));
+    const errors: { path: string; message: string }[] = [];
+    const stored = edits.flatMap((edit, i): StoredTakeoffEdit[] => {
+      const kept = previous.get(takeoffEditKey(edit));
+      if (kept && edit.kind !== 'add' && isDeepStrictEqual(editValue(kept), editValue(edit))) return [kept];
+      const s = storedEdit(edit, generated);
+      if (!s) errors.push({ path: `edits.${i}.itemKey`, message: 'This line is not in the takeoff.' });
+      return s ? [s] : [];
+    });
+    if (errors.length) throw new ValidationError(errors);
+    option.takeoffEdits = stored;
   });
-  if (errors.length) throw new ValidationError(errors);
-  option.takeoffEdits = stored;
-  touched(ctx, desk);
-  await ctx.em.flush();
-  return { option, computed: compute(desk, option) };
 }
 
 /**
@@ -345,26 +394,25 @@ export async function regenerateTakeoff(
   present: (v: OptionView) => unknown,
 ): Promise<OptionView> {
   if (!mayEditTakeoff(ctx.actor.role)) throw new ForbiddenError('Only an estimator or the owner edits the takeoff.');
-  const desk = await readDeskJob(ctx, jobId);
-  const option = await findOption(ctx, desk, optionId);
-  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
-  const generated = generatedLines(desk, option);
-  const states = compute(desk, option).edits;
-  option.takeoffEdits = states.flatMap((s): StoredTakeoffEdit[] => {
-    if (!s.stale) return [s.stored];
-    if (choice.drop.includes(s.key)) return [];
-    if (!choice.accept.includes(s.key)) return [s.stored];
-    const e = s.stored;
-    if (e.kind === 'add') return [e];
-    const again = storedEdit(e, generated);
-    return again ? [again] : [];
+  return changeOption(ctx, { jobId, optionId }, version, present, (desk, option) => {
+    const generated = generatedLines(desk, option);
+    const states = compute(desk, option).edits;
+    option.takeoffEdits = states.flatMap((s): StoredTakeoffEdit[] => {
+      if (!s.stale) return [s.stored];
+      if (choice.drop.includes(s.key)) return [];
+      if (!choice.accept.includes(s.key)) return [s.stored];
+      const e = s.stored;
+      if (e.kind === 'add') return [e];
+      const again = storedEdit(e, generated);
+      return again ? [again] : [];
+    });
   });
-  touched(ctx, desk);
-  await ctx.em.flush();
-  return { option, computed: compute(desk, option) };
 }
 
-/** The owner approves or denies a discount beyond someone's limit; the decision is recorded with who and when. */
+/**
+ * The owner approves or denies a discount beyond someone's limit; the decision is recorded with who and
+ * when. An approved discount the price has since outgrown (see computeOption) is decided again.
+ */
 export async function decideDiscount(
   ctx: ServiceContext,
   jobId: string,
@@ -373,22 +421,19 @@ export async function decideDiscount(
   approve: boolean,
   present: (v: OptionView) => unknown,
 ): Promise<OptionView> {
-  const desk = await readDeskJob(ctx, jobId);
-  const option = await findOption(ctx, desk, optionId);
-  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
-  const req = option.discountRequest;
-  if (!req || req.state !== 'pending') throw new ConflictError('No discount on this option is waiting for a decision.');
-  const decided = {
-    ...req,
-    state: approve ? ('approved' as const) : ('denied' as const),
-    decidedBy: me(ctx),
-    decidedAt: ctx.clock.now().toISOString(),
-  };
-  option.discountRequest = decided;
-  if (approve) option.pricing = { ...option.pricing, discounts: req.discounts };
-  touched(ctx, desk);
-  await ctx.em.flush();
-  return { option, computed: compute(desk, option) };
+  return changeOption(ctx, { jobId, optionId }, version, present, (desk, option) => {
+    recheckApproval(option, compute(desk, option));
+    const req = option.discountRequest;
+    if (!req || req.state !== 'pending')
+      throw new ConflictError('No discount on this option is waiting for a decision.');
+    option.discountRequest = {
+      ...req,
+      state: approve ? 'approved' : 'denied',
+      decidedBy: me(ctx),
+      decidedAt: ctx.clock.now().toISOString(),
+    };
+    if (approve) option.pricing = { ...option.pricing, discounts: req.discounts };
+  });
 }
 
 /** The office reviews a first price from the phone: from now on it may be proposed. */
@@ -399,22 +444,27 @@ export async function reviewOption(
   version: number,
   present: (v: OptionView) => unknown,
 ): Promise<OptionView> {
-  const desk = await readDeskJob(ctx, jobId);
-  const option = await findOption(ctx, desk, optionId);
-  assertVersion(version, option.version, 'The option', () => present({ option, computed: compute(desk, option) }));
-  if (option.preliminary) {
+  return changeOption(ctx, { jobId, optionId }, version, present, (_desk, option) => {
+    if (!option.preliminary) return false;
     option.preliminary = false;
     option.reviewedBy = ctx.em.getReference(UserSchema, ctx.actor.userId);
     option.reviewedAt = ctx.clock.now();
-    touched(ctx, desk);
-    await ctx.em.flush();
-    await ctx.em.populate(option, ['reviewedBy']);
-  }
-  return { option, computed: compute(desk, option) };
+    return true;
+  });
 }
 
-/** Marks the job ready to propose, or refuses with every reason (422, the blockers listed). */
-export async function markReady(ctx: ServiceContext, jobId: string): Promise<DeskView> {
+const isSizing = (b: BlockerRecord) => b.code === 'sizing-outside-range';
+
+/**
+ * Marks the job ready to propose, or refuses with every reason (422, the blockers listed). Units outside
+ * their sizing range hold it unless the office gives the reason to propose them anyway; that reason is
+ * kept with the mark (who, when, the units it covers) and goes with it.
+ */
+export async function markReady(
+  ctx: ServiceContext,
+  jobId: string,
+  body: { sizingOverride?: { reason: string } } = {},
+): Promise<DeskView> {
   if (!mayMarkReady(ctx.actor.role))
     throw new ForbiddenError('Only an estimator or the owner marks a job ready to propose.');
   const view = await getDesk(ctx, jobId);
@@ -423,16 +473,31 @@ export async function markReady(ctx: ServiceContext, jobId: string): Promise<Des
     throw new UnprocessableError(`A job is marked ready to propose while in design; this one is ${job.status}.`, {
       errors: [{ path: 'status', message: 'The job is not in design.' }],
     });
-  if (view.blockers.length)
-    throw new UnprocessableError('The job cannot be marked ready to propose yet.', {
-      errors: view.blockers.map((b) => ({
-        path: b.optionId ? `options.${b.optionId}` : 'options',
-        message: b.message,
-      })),
-      blockers: view.blockers,
-    });
+  const sizing = view.blockers.filter(isSizing);
+  const reason = body.sizingOverride?.reason;
+  const hard = view.blockers.filter((b) => !isSizing(b));
+  if (hard.length || (sizing.length && reason === undefined))
+    throw new UnprocessableError(
+      hard.length ? 'The job cannot be marked ready to propose yet.' : DESK_MESSAGES.sizingOverrideNeeded,
+      {
+        errors: [
+          ...view.blockers.map((b) => ({
+            path: b.optionId ? `options.${b.optionId}` : 'options',
+            message: b.message,
+          })),
+          ...(hard.length === 0
+            ? [{ path: 'sizingOverride.reason', message: DESK_MESSAGES.sizingOverrideNeeded }]
+            : []),
+        ],
+        blockers: view.blockers,
+      },
+    );
   job.readyAt = ctx.clock.now();
   job.readyBy = ctx.em.getReference(UserSchema, ctx.actor.userId);
+  job.readyOverride =
+    sizing.length && reason !== undefined
+      ? { reason, by: me(ctx), at: job.readyAt.toISOString(), units: sizing.map((b) => b.message) }
+      : null;
   await ctx.em.flush();
   await ctx.em.populate(job, ['readyBy']);
   return view;
@@ -444,6 +509,7 @@ export async function unmarkReady(ctx: ServiceContext, jobId: string): Promise<D
   const view = await getDesk(ctx, jobId);
   view.desk.job.readyAt = null;
   view.desk.job.readyBy = null;
+  view.desk.job.readyOverride = null;
   await ctx.em.flush();
   return view;
 }

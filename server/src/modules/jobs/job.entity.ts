@@ -1,7 +1,7 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
 import { randomUUID } from 'node:crypto';
 import type { DesignConditions, House } from '@calc';
-import { JOB_STATUSES, TIGHTNESS, type DesignSources } from '@contract';
+import { JOB_STATUSES, TIGHTNESS, type DesignSources, type ReadyOverride } from '@contract';
 import { CompanySchema } from '../companies/company.entity';
 import { CustomerSchema } from '../customers/customer.entity';
 import { UserSchema } from '../users/user.entity';
@@ -36,6 +36,8 @@ export const JobSchema = defineEntity({
     /** Marked "ready to propose" by the office (the desk module sets and clears it; null when not marked). */
     readyAt: p.datetime().nullable(),
     readyBy: p.manyToOne(UserSchema).nullable(),
+    /** Units outside their sizing range the office proposes anyway, with its reason (kept and cleared with the mark). */
+    readyOverride: p.json<ReadyOverride>().nullable(),
     version: p.integer().version(),
     /** Who made the latest change and on which device (lib/change-stamp.ts); null before stamps were kept. */
     changedById: p.uuid().nullable(),

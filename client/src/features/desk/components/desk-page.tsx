@@ -16,6 +16,7 @@ import { useCreateOption } from '../api/create-option';
 import { deskQueryOptions } from '../api/get-desk';
 import { modelsQueryOptions } from '../api/get-models';
 import { useSetReady } from '../api/set-ready';
+import { SizingOverride } from './sizing-override';
 import { CompareOptions } from './compare-options';
 import { OptionView } from './option-view';
 
@@ -105,6 +106,14 @@ export function DeskPage() {
           <Alert tone="danger" title="Not marked ready">
             {errorMessage(ready.error)}
           </Alert>
+        ) : null}
+        {mayMarkReady(viewer.role) ? (
+          <SizingOverride
+            readiness={r}
+            error={ready.error}
+            busy={ready.isPending}
+            onMark={(reason) => ready.mutate({ reason })}
+          />
         ) : null}
       </section>
 

@@ -32,7 +32,7 @@ export function SizingOverride({
   const fieldError = isApiError(error) ? error.errors.find((e) => e.path === 'sizingOverride.reason') : undefined;
   return (
     <form
-      className="flex w-full flex-col gap-2 sm:flex-row sm:items-end"
+      className="flex w-full flex-col gap-2 sm:flex-row sm:items-start"
       onSubmit={(e) => {
         e.preventDefault();
         onMark(reason);
@@ -56,7 +56,7 @@ export function SizingOverride({
           />
         </FieldShell>
       </div>
-      <Button type="submit" variant="secondary" busy={busy}>
+      <Button type="submit" variant="secondary" busy={busy} className="sm:mt-6">
         Mark ready with this reason
       </Button>
     </form>

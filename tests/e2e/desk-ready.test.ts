@@ -1,0 +1,83 @@
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { demoAccounts } from '../../fixtures/seed';
+import { axeViolations } from './axe';
+import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
+
+let e: E2E;
+beforeAll(async () => {
+  e = await startE2E();
+});
+afterAll(async () => e?.close());
+
+// Quillbrook's demo (the desk journey works on Larkspur's), so the two files never share a job.
+const estimator = demoAccounts.find((x) => x.role === 'estimator' && x.company.startsWith('Quillbrook'));
+
+/** A Quillbrook walk-through job with rooms and no options, given one oversized option (an 18k pair on one room). */
+async function oversizedJob(page: Page): Promise<string> {
+  const list = (await (await page.request.get('/api/jobs?page=1&pageSize=50')).json()) as {
+    items: { id: string; status: string }[];
+  };
+  const csrf = ((await (await page.request.get('/api/auth/csrf')).json()) as { token: string }).token;
+  for (const j of list.items) {
+    if (j.status !== 'walkthrough') continue;
+    const rooms = (await (await page.request.get(`/api/jobs/${j.id}/rooms`)).json()) as {
+      rooms: { id: string; input: { name: string } }[];
+    };
+    const room = rooms.rooms[0];
+    if (!room) continue;
+    const made = await page.request.post(`/api/jobs/${j.id}/options`, {
+      headers: { 'X-CSRF-Token': csrf },
+      data: {
+        name: 'Oversized on purpose',
+        design: {
+          zones: [{ key: 'z1', name: room.input.name, roomIds: [room.id], indoorUnitKey: 'TSL-S18H-W' }],
+          systems: [
+            {
+              key: 's1',
+              name: 'Main',
+              outdoorUnitKey: 'TSL-S18H-O',
+              circuits: [{ zoneKey: 'z1', lengthFt: 25 }],
+              electrical: { circuitLengthFt: 40 },
+            },
+          ],
+        },
+      },
+    });
+    expect(made.status(), await made.text()).toBe(201);
+    return j.id;
+  }
+  throw new Error('no Quillbrook walk-through job with rooms');
+}
+
+describe('ready to propose with units outside their sizing range', () => {
+  it('the estimator is refused, gives the reason beside the refusal, and the desk shows the mark with who and why (1440 and 375 px)', async () => {
+    if (!estimator) throw new Error('no demo estimator');
+    const { context, page } = await e.newPage(DESKTOP);
+    await signIn(page, estimator.email, estimator.password);
+    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    const jobId = await oversizedJob(page);
+    await page.goto(`/jobs/${jobId}/desk`);
+    const ready = page.getByRole('region', { name: 'Ready to propose' });
+    await ready
+      .getByText(/cooling \d+ % of the load: above the/)
+      .first()
+      .waitFor();
+    await ready.getByRole('button', { name: 'Mark ready to propose' }).click();
+    await ready.getByText('Not marked ready').waitFor();
+    const reason = ready.getByLabel('Why these sizes are right for this home');
+    await reason.fill('short');
+    await ready.getByRole('button', { name: 'Mark ready with this reason' }).click();
+    await ready.getByText('at least 10 characters').waitFor();
+    await page.screenshot({ path: `${SHOTS}/desk-ready-override-1440.png`, fullPage: true });
+    expect(await axeViolations(page)).toEqual([]);
+    await reason.fill('The owner wants the larger unit for a sunroom addition planned next spring.');
+    await ready.getByRole('button', { name: 'Mark ready with this reason' }).click();
+    await ready.getByText(/^Ready to propose — marked by .+\.$/).waitFor();
+    await ready.getByText(/Sizes outside the range proposed anyway by .* sunroom addition/).waitFor();
+    await page.setViewportSize(PHONE);
+    await page.screenshot({ path: `${SHOTS}/desk-ready-override-375.png`, fullPage: true });
+    expect(await axeViolations(page)).toEqual([]);
+    await context.close();
+  });
+});

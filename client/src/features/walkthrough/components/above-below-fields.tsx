@@ -2,7 +2,30 @@ import { asNumber, asRecord, asString } from '../model/draft';
 import { aboveOptions, belowOptions, ceilingInsulationOptions, floorInsulationOptions } from '../model/options';
 import type { EditorProps } from './editor-props';
 import { NumberInput, SelectInput } from './field-kit';
+import { optionLabel } from './fold';
 import { COLOR_OPTIONS } from './wall-fields';
+
+/** "Above: Attic, R-38 · Below: Crawl space, vented, no insulation": the section's folded line. */
+export function aboveBelowSummary(draft: Record<string, unknown>): { text: string; complete: boolean } {
+  const above = asRecord(draft.above);
+  const below = asRecord(draft.below);
+  const aboveKind = asString(above.kind);
+  const belowKind = asString(below.kind);
+  const up = [optionLabel(aboveOptions, aboveKind || 'conditioned')];
+  if (aboveKind === 'attic' || aboveKind === 'roof')
+    up.push(optionLabel(ceilingInsulationOptions, asString(above.insulation, 'r30')));
+  const down = [optionLabel(belowOptions, belowKind || 'conditioned')];
+  if (belowKind === 'crawlspace') down.push(below.vented === false ? 'closed' : 'vented');
+  if (belowKind === 'slab') down.push(below.edgeInsulated === true ? 'edge insulated' : 'edge not insulated');
+  if (belowKind === 'crawlspace' || belowKind === 'basement' || belowKind === 'garage')
+    down.push(optionLabel(floorInsulationOptions, asString(below.insulation, 'none')).toLowerCase());
+  const depth = asNumber(below.depthFt);
+  if (belowKind === 'basement-floor') down.push(depth === undefined ? 'no depth yet' : `${depth} ft down`);
+  return {
+    text: `Above: ${up.join(', ')} · Below: ${down.join(', ')}`,
+    complete: aboveKind !== '' && belowKind !== '' && (belowKind !== 'basement-floor' || depth !== undefined),
+  };
+}
 
 const ABOVE_DEFAULTS: Record<string, object> = {
   attic: { kind: 'attic', insulation: 'r30' },

@@ -3,6 +3,24 @@ import { append, asNumber, asRecords, asString, removeAt } from '../model/draft'
 import type { EditorProps } from './editor-props';
 import { NumberInput, SelectInput, TextInput } from './field-kit';
 
+/** "2 people · 1 appliance (Lamp 100 W)": the people section's folded line. */
+export function peopleSummary(draft: Record<string, unknown>): { text: string; complete: boolean } {
+  const occupants = asNumber(draft.occupants);
+  const items = asRecords(draft.appliances);
+  const people = occupants === undefined ? 'no occupants yet' : `${occupants} ${occupants === 1 ? 'person' : 'people'}`;
+  const list = items.map(
+    (a) => `${asString(a.label, 'Appliance')} ${asNumber(a.gain) ?? '?'} ${asString(a.unit, 'W')}`,
+  );
+  const appliances =
+    items.length === 0
+      ? 'no appliances'
+      : `${items.length} appliance${items.length === 1 ? '' : 's'} (${list.join(', ')})`;
+  return {
+    text: `${people} · ${appliances}`,
+    complete: occupants !== undefined && items.every((a) => asString(a.label) !== '' && asNumber(a.gain) !== undefined),
+  };
+}
+
 /** Heat-producing appliances and lights of the room. */
 export function ApplianceFields({ draft, set, err, replace }: EditorProps & { replace: (next: unknown) => void }) {
   const items = asRecords(draft.appliances);

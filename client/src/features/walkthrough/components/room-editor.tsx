@@ -14,8 +14,9 @@ import { roomTarget } from '../sync/edits';
 import { useDebouncedSave } from '../../../lib/offline/use-debounced-save';
 import { useWalkthroughQueue } from '../sync/queue-context';
 import { clearUnsavedDraft, keepUnsavedDraft, takeUnsavedDraft } from '../../../lib/offline/drafts';
-import { AboveBelowFields } from './above-below-fields';
-import { ApplianceFields } from './appliance-fields';
+import { aboveBelowSummary, AboveBelowFields } from './above-below-fields';
+import { ApplianceFields, peopleSummary } from './appliance-fields';
+import { Fold } from './fold';
 import { NumberInput, SelectInput, TextInput } from './field-kit';
 import { RoomPhotos } from './room-photos';
 import { WallFields } from './wall-fields';
@@ -81,6 +82,11 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
   // Walls the room came with fold once complete; one added now opens to be filled in.
   const [wallsAtOpen] = useState(walls.length);
   const name = asString(draft.name) || 'Room';
+  const errorKeys = [...check.errors.keys()];
+  const errorUnder = (...prefixes: string[]) =>
+    errorKeys.some((k) => prefixes.some((prefix) => k === prefix || k.startsWith(`${prefix}.`)));
+  const aboveBelow = aboveBelowSummary(draft);
+  const people = peopleSummary(draft);
 
   return (
     <section aria-label={`Room: ${name}`} className="grid gap-5 lg:grid-cols-[minmax(0,1fr)_24rem]">
@@ -149,7 +155,8 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
               index={i}
               replace={replace}
               startOpen={i >= wallsAtOpen}
-              hasError={[...check.errors.keys()].some((k) => k.startsWith(`exposedWalls.${i}.`))}
+              hasError={errorUnder(`exposedWalls.${i}`)}
+              errorKeys={errorKeys}
               {...props}
             />
           ))}
@@ -160,25 +167,48 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
           </div>
         </div>
 
-        <div className="flex flex-col gap-3">
-          <h3 className="text-lg font-semibold text-ink-900">Above and below</h3>
-          <AboveBelowFields {...props} />
-        </div>
-
-        <div className="flex flex-col gap-3">
-          <h3 className="text-lg font-semibold text-ink-900">People and appliances</h3>
-          <div className="max-w-48">
-            <NumberInput
-              label="Occupants"
-              integer
-              unit="people"
-              value={asNumber(draft.occupants)}
-              onChange={(x) => set(['occupants'], x)}
-              error={err(['occupants'])}
-            />
+        {/* Complete sections fold to one line (as walls do): a tap on the line opens them. */}
+        <Fold
+          summary={
+            <>
+              <h3 className="shrink-0 text-lg font-semibold text-ink-900">Above and below</h3>
+              <span className="min-w-0 text-sm text-muted">{aboveBelow.text}</span>
+            </>
+          }
+          complete={aboveBelow.complete}
+          hasError={errorUnder('above', 'below')}
+          summaryClassName="flex-wrap gap-x-3"
+        >
+          <div className="pt-2">
+            <AboveBelowFields {...props} />
           </div>
-          <ApplianceFields replace={replace} {...props} />
-        </div>
+        </Fold>
+
+        <Fold
+          summary={
+            <>
+              <h3 className="shrink-0 text-lg font-semibold text-ink-900">People and appliances</h3>
+              <span className="min-w-0 text-sm text-muted">{people.text}</span>
+            </>
+          }
+          complete={people.complete}
+          hasError={errorUnder('occupants', 'appliances')}
+          summaryClassName="flex-wrap gap-x-3"
+        >
+          <div className="flex flex-col gap-3 pt-2">
+            <div className="max-w-48">
+              <NumberInput
+                label="Occupants"
+                integer
+                unit="people"
+                value={asNumber(draft.occupants)}
+                onChange={(x) => set(['occupants'], x)}
+                error={err(['occupants'])}
+              />
+            </div>
+            <ApplianceFields replace={replace} {...props} />
+          </div>
+        </Fold>
 
         <TextInput
           label="Notes"

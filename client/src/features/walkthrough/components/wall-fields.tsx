@@ -5,6 +5,7 @@ import { constructionOptions, directionOptions } from '../model/options';
 import { DoorFields } from './door-fields';
 import type { EditorProps } from './editor-props';
 import { NumberInput, SelectInput } from './field-kit';
+import { Fold } from './fold';
 import { WindowFields } from './window-fields';
 
 /** Outside colour of a wall or roof: sets how much sun it absorbs (sol-air temperature). */
@@ -23,29 +24,31 @@ interface WallProps extends EditorProps {
   hasError: boolean;
   /** Added during this visit: opens unfolded to be filled in. */
   startOpen: boolean;
+  /** The room's fields showing an error, by path key ("exposedWalls.0.windows.1.widthIn"). */
+  errorKeys: readonly string[];
 }
 
 /** One exposed wall: facing, length, construction, and the windows and doors in it. */
-export function WallFields({ draft, set, err, index, replace, hasError, startOpen }: WallProps) {
+export function WallFields({ draft, set, err, index, replace, hasError, startOpen, errorKeys }: WallProps) {
   const base = ['exposedWalls', index] as const;
   const p = (...k: (string | number)[]) => [...base, ...k];
   const v = (k: string) => getIn(draft, p(k));
   const windows = asRecords(v('windows'));
   const doors = asRecords(v('doors'));
-  // A complete wall folds to one line, so a phone scrolls past it; one with an error stays open.
-  const [open, setOpen] = useState(() => startOpen || hasError || asNumber(v('lengthFt')) === undefined);
+  // Windows the wall came with fold once complete; one added now opens to be filled in.
+  const [windowsAtOpen] = useState(windows.length);
   const length = asNumber(v('lengthFt'));
   const count = (n: number, one: string) => `${n} ${one}${n === 1 ? '' : 's'}`;
   const summary = `Wall ${index + 1}: faces ${asString(v('direction'), 'N')}, ${length === undefined ? 'no length yet' : `${length} ft`}, ${count(windows.length, 'window')}, ${count(doors.length, 'door')}`;
   return (
-    <details
-      open={open || hasError}
-      onToggle={(e) => setOpen(e.currentTarget.open)}
+    <Fold
+      summary={summary}
+      complete={length !== undefined}
+      hasError={hasError}
+      startOpen={startOpen}
       className="rounded-lg border border-ink-200 bg-ink-50/40"
+      summaryClassName="px-3 font-semibold text-ink-900"
     >
-      <summary className="flex min-h-touch cursor-pointer items-center px-3 font-semibold text-ink-900">
-        {summary}
-      </summary>
       <fieldset className="flex flex-col gap-3 border-t border-ink-200 p-3">
         <legend className="sr-only">Wall {index + 1}</legend>
         <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
@@ -103,6 +106,8 @@ export function WallFields({ draft, set, err, index, replace, hasError, startOpe
             err={err}
             base={p('windows', wi)}
             index={wi}
+            startOpen={wi >= windowsAtOpen}
+            hasError={errorKeys.some((k) => k.startsWith(`exposedWalls.${index}.windows.${wi}.`))}
             onRemove={() => replace(removeAt(draft, p('windows'), wi))}
           />
         ))}
@@ -129,6 +134,6 @@ export function WallFields({ draft, set, err, index, replace, hasError, startOpe
           </Button>
         </div>
       </fieldset>
-    </details>
+    </Fold>
   );
 }

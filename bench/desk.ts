@@ -3,7 +3,11 @@
  * line sets and charge, electrical, takeoff, edits, price and explanations — worked out the way the
  * server answers GET /api/jobs/:id/desk (modules/desk/desk-compute.ts computeOption per option, every
  * input validated), with the invented demo catalog and price book. Prints median and p95 beside the
- * 16 ms frame the desk must recompute within as the estimator types (the goal: median ≤ 16 ms).
+ * 16 ms frame the desk must recompute within as the estimator types (the goal: p95 ≤ 16 ms). The home's
+ * loads are worked out once per request and shared by the options (ParsedHome.loads).
+ * Two clocks: wall time (what a user waits, which on a shared, loaded machine includes waiting for a
+ * core) and this process's CPU time per run (process.cpuUsage: the work itself, GC threads included),
+ * with the load average, so a figure from a busy machine can be read for what it is.
  * The database read is not included (see bench/api.ts for the routes). Informational, never fails.
  */
 import { availableParallelism, loadavg } from 'node:os';
@@ -147,15 +151,22 @@ const recompute = () => {
 
 function measure(run: () => unknown, warmup: number, runs: number) {
   for (let i = 0; i < warmup; i += 1) run();
-  const times: number[] = [];
+  const wall: number[] = [];
+  const cpu: number[] = [];
   for (let i = 0; i < runs; i += 1) {
+    const c0 = process.cpuUsage();
     const t0 = performance.now();
     run();
-    times.push(performance.now() - t0);
+    wall.push(performance.now() - t0);
+    const c = process.cpuUsage(c0);
+    cpu.push((c.user + c.system) / 1000);
   }
-  times.sort((a, b) => a - b);
-  const at = (q: number) => times[Math.min(times.length - 1, Math.floor(times.length * q))] ?? 0;
-  return { median: at(0.5), p95: at(0.95), min: times[0] ?? 0, runs };
+  const stats = (times: number[]) => {
+    times.sort((a, b) => a - b);
+    const at = (q: number) => times[Math.min(times.length - 1, Math.floor(times.length * q))] ?? 0;
+    return { median: at(0.5), p95: at(0.95), min: times[0] ?? 0 };
+  };
+  return { ...stats(wall), cpu: stats(cpu), runs };
 }
 
 try {
@@ -177,9 +188,14 @@ try {
     '  three-option recompute (loads, sizing, lines, charge, electrical, takeoff, edits, price, explanations)',
   );
   console.log(
-    `    median ${m.median.toFixed(2)} ms · p95 ${m.p95.toFixed(2)} ms · min ${m.min.toFixed(2)} ms (${m.runs} runs)`,
+    `    wall: median ${m.median.toFixed(2)} ms · p95 ${m.p95.toFixed(2)} ms · min ${m.min.toFixed(2)} ms (${m.runs} runs)`,
   );
-  console.log(`    → goal median ≤ ${FRAME_MS} ms (one frame): ${m.median <= FRAME_MS ? 'MET' : 'NOT MET'}`);
+  console.log(
+    `    CPU:  median ${m.cpu.median.toFixed(2)} ms · p95 ${m.cpu.p95.toFixed(2)} ms · min ${m.cpu.min.toFixed(2)} ms`,
+  );
+  const verdict = (x: { median: number; p95: number }) =>
+    x.p95 <= FRAME_MS ? 'MET at p95' : x.median <= FRAME_MS ? 'MET at the median only' : 'NOT MET';
+  console.log(`    → budget p95 ≤ ${FRAME_MS} ms (one frame): wall ${verdict(m)}; CPU ${verdict(m.cpu)}`);
 } catch (e) {
   console.log('desk benchmark could not run:', e instanceof Error ? e.message : String(e));
 }

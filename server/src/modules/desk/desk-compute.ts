@@ -8,6 +8,8 @@ import {
   parseOrThrow,
   priceBookSchema,
   type Home,
+  type HomeLoad,
+  homeLoadFromParsed,
   FIRST_PRICE_RUNS_FT,
   preliminaryPriceRange,
   type PreliminaryRange,
@@ -132,9 +134,13 @@ export function engineData(desk: CompanyDesk): EngineData {
   return { desk, ...bridge(desk, desk.models) };
 }
 
-/** A home parsed once for all of a job's options. */
+/**
+ * A home parsed once for all of a job's options, and its loads worked out once for all of them (the
+ * first option to need them fills `loads`; the others and the preliminary range reuse them).
+ */
 export interface ParsedHome {
   readonly parsed: Home;
+  loads?: HomeLoad;
 }
 
 /** The job's home through calc's schema, once per request; a refusal is the options' problem. */
@@ -270,16 +276,20 @@ export function computeOption(
   let range: PreliminaryRange | null = null;
   try {
     // The home is parsed once per request (parseHome); the catalog and price book are already schema outputs.
-    const parsedHome = 'parsed' in home ? home.parsed : parseOrThrow(homeInputSchema, home);
+    const shared: ParsedHome = 'parsed' in home ? home : { parsed: parseOrThrow(homeInputSchema, home) };
+    // The home's loads do not depend on the option: computed once, shared by every option of the request.
+    shared.loads ??= homeLoadFromParsed(shared.parsed);
+    const loads = shared.loads;
     const parsedDesign = parseOrThrow(designSchema, option.design);
     const run = (d: Design) =>
       computeDesignFromParsed({
-        home: parsedHome,
+        home: shared.parsed,
         design: d,
         catalog: own.catalog,
         priceBook: own.priceBook,
         pricing,
         policy: DEFAULT_SIZING_POLICY,
+        loads,
       });
     design = run(parsedDesign);
     if (option.preliminary) {

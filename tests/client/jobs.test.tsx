@@ -78,6 +78,31 @@ describe('jobs list', () => {
     );
   });
 
+  it('shows the ready-to-propose mark in words on the table and on the phone cards, only on marked jobs', async () => {
+    mockFetch({
+      'GET /api/jobs?page=1&pageSize=25': page(
+        [
+          jobRecord({ status: 'design', readyToProposeAt: '2026-12-04T15:00:00.000Z' }),
+          jobRecord({
+            id: '44444444-4444-4444-8444-444444444444',
+            customer: { id: 'c2', name: 'Avery Sample' },
+            status: 'design',
+            readyToProposeAt: null,
+          }),
+        ],
+        2,
+      ),
+    });
+    renderAt('/jobs');
+    const table = await screen.findByRole('table');
+    const rows = within(table).getAllByRole('row');
+    const rowOf = (name: string) => rows.find((r) => within(r).queryByRole('link', { name }));
+    expect(within(rowOf('Rowan Example') ?? table).getByText('Ready to propose')).toBeInTheDocument();
+    expect(within(rowOf('Avery Sample') ?? table).queryByText('Ready to propose')).toBeNull();
+    const cards = screen.getByRole('list', { name: 'Jobs' });
+    expect(within(cards).getAllByText('Ready to propose')).toHaveLength(1);
+  });
+
   it('has a "New job" link', async () => {
     mockFetch({ 'GET /api/jobs?page=1&pageSize=25': page([], 0) });
     renderAt('/jobs');

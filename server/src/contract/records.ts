@@ -67,6 +67,8 @@ export const jobRecord = z.object({
   updatedAt: timestamp,
   lastActivityAt: timestamp,
   lastChange: lastChangeRecord.nullable().optional(),
+  /** When the office marked the job ready to propose (the desk's mark; a later change to an option takes it off); null if not marked. */
+  readyToProposeAt: timestamp.nullable().optional(),
 });
 export type JobRecord = z.output<typeof jobRecord>;
 

@@ -38,12 +38,13 @@ interface JobRow {
   installer_name: string | null;
   changed_by_name: string | null;
   changed_on_device: string | null;
+  ready_at: Date | string | null;
 }
 
 const JOB_COLUMNS = `j.id, j.status, j.street, j.unit, j.city, j.region, j.postal_code, j.notes, j.design_conditions,
   j.design_sources, j.tightness, j.house, j.version, j.created_at, j.updated_at, j.last_activity_at,
   c.id as customer_id, c.name as customer_name, s.id as salesperson_id, s.name as salesperson_name,
-  i.id as installer_id, i.name as installer_name, j.changed_by_name, j.changed_on_device`;
+  i.id as installer_id, i.name as installer_name, j.changed_by_name, j.changed_on_device, j.ready_at`;
 const JOB_FROM = `from "job" j join "customer" c on c.id = j.customer_id join "app_user" s on s.id = j.salesperson_id
   left join "app_user" i on i.id = j.assigned_installer_id`;
 
@@ -81,6 +82,7 @@ function toView(r: JobRow): JobView {
     lastActivityAt: date(r.last_activity_at),
     changedByName: r.changed_by_name,
     changedOnDevice: r.changed_on_device,
+    readyAt: r.ready_at === null ? null : date(r.ready_at),
   };
 }
 

@@ -21,6 +21,7 @@ export type JobView = Pick<
   | 'createdAt'
   | 'updatedAt'
   | 'lastActivityAt'
+  | 'readyAt'
 > & {
   customer: { id: string; name: string };
   salesperson: { id: string; name: string } | null | undefined;
@@ -48,5 +49,6 @@ export function presentJob(j: JobView): JobRecord {
     updatedAt: j.updatedAt.toISOString(),
     lastActivityAt: j.lastActivityAt.toISOString(),
     lastChange: presentLastChange(j),
+    readyToProposeAt: j.readyAt ? j.readyAt.toISOString() : null,
   };
 }

@@ -4,6 +4,7 @@ import { Link } from 'react-router-dom';
 import { jobPaths } from '../../../entities/job/paths';
 import { type JobRecord } from '@contract';
 import { jobStatusLabels } from '../../../entities/job/labels';
+import { ReadyBadge } from './ready-badge';
 
 const col = createColumnHelper<JobRecord>();
 const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
@@ -25,7 +26,15 @@ const columns = [
     id: 'address',
     header: 'Site address',
   }),
-  col.accessor('status', { header: 'Status', cell: (c) => jobStatusLabels[c.getValue()] }),
+  col.accessor('status', {
+    header: 'Status',
+    cell: (c) => (
+      <span className="flex flex-col items-start gap-1">
+        {jobStatusLabels[c.getValue()]}
+        <ReadyBadge at={c.row.original.readyToProposeAt} />
+      </span>
+    ),
+  }),
   col.accessor((j) => j.salesperson?.name ?? '—', { id: 'salesperson', header: 'Salesperson' }),
   col.accessor('lastActivityAt', { header: 'Last activity', cell: (c) => when.format(new Date(c.getValue())) }),
 ];
@@ -68,6 +77,11 @@ export function JobsTable({ jobs, total, page, pageSize, onPage }: Props) {
                 <span className="text-sm text-muted">
                   {jobStatusLabels[j.status]} · {when.format(new Date(j.lastActivityAt))}
                 </span>
+                {j.readyToProposeAt ? (
+                  <span className="mt-1">
+                    <ReadyBadge at={j.readyToProposeAt} />
+                  </span>
+                ) : null}
               </Link>
             </li>
           );

@@ -205,4 +205,44 @@ describe('the app opens with no signal', () => {
     expect(after.room.input.name).toBe(`Den ${tag}`);
     await context.close();
   });
+
+  it('the owner’s Users, E-mail and Outbox pages opened with no signal say so in words', async () => {
+    if (!owner) throw new Error('no demo owner');
+    // The service worker holds the app's code (as on a phone that opened Gaugeline before); no page's data is held.
+    const { context, page } = await e.newPage(DESKTOP, { serviceWorkers: 'allow' });
+    onTestFailed(async () => {
+      await page.screenshot({ path: `${SHOTS}/offline-office-failed.png`, fullPage: true }).catch(() => undefined);
+    });
+    await signIn(page, owner.email, owner.password);
+    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    await page.evaluate(async () => navigator.serviceWorker.ready);
+    await page.reload();
+    await page.getByRole('link', { name: 'Users' }).first().waitFor();
+    expect(await page.evaluate(() => navigator.serviceWorker.controller?.scriptURL ?? '')).toMatch(/\/sw\.js$/);
+    await context.setOffline(true);
+    // The start page read the e-mail list ("N e-mails have not gone out") and the shell the outbox (whether this
+    // server has one), so those two show what the device held; Users holds nothing.
+    for (const [link, shot, held] of [
+      ['Users', 'users', false],
+      ['E-mail', 'mail', true],
+      ['Outbox', 'outbox', true],
+    ] as const) {
+      await page.getByRole('link', { name: link, exact: true }).first().click();
+      if (held) {
+        await page.getByText('No signal — showing what this phone last saw').waitFor({ timeout: 10_000 });
+      } else {
+        await page.getByRole('heading', { name: 'No signal' }).waitFor({ timeout: 10_000 });
+        await expect(page.getByText(/nothing of this page is saved on this phone yet/).count()).resolves.toBe(1);
+      }
+      await expectNoSeriousViolations(page);
+      await page.screenshot({ path: `${SHOTS}/offline-${shot}-1440.png`, fullPage: true });
+      await page.setViewportSize(PHONE);
+      await page.screenshot({ path: `${SHOTS}/offline-${shot}-375.png`, fullPage: true });
+      await page.setViewportSize(DESKTOP);
+      // Back to the start page for the next link.
+      await page.getByRole('link', { name: 'Gaugeline, start page' }).click();
+      await page.getByRole('link', { name: 'Users' }).first().waitFor();
+    }
+    await context.close();
+  });
 });

@@ -5,12 +5,16 @@ import { PageHeader } from '../../components/ui/page-header';
 import { messagesQueryOptions } from '../../features/mail/api/get-messages';
 import { MailList } from '../../features/mail/components/mail-list';
 import { requireArea } from '../guards';
+import { ensureHeld } from '../../lib/offline/online';
+import { OfflineNoticeFor } from '../../lib/offline/offline-notice';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     await requireArea(queryClient, request, 'mail');
-    await queryClient.ensureQueryData(messagesQueryOptions());
+    // With no signal and nothing held on the device: "No signal" in words at once, not a wait with no end.
+    const options = messagesQueryOptions();
+    await ensureHeld(queryClient, options.queryKey, () => queryClient.ensureQueryData(options));
     return null;
   };
 
@@ -21,6 +25,7 @@ export default function MailRoute() {
         title="E-mail"
         lead="What Gaugeline sent for your company, and anything the mail server has not accepted yet."
       />
+      <OfflineNoticeFor queryKey={messagesQueryOptions().queryKey} />
       <QueryWidgetBoundary name="the e-mail list">
         <MailList />
       </QueryWidgetBoundary>

@@ -7,12 +7,16 @@ import { outboxQueryOptions } from '../../features/outbox/api/get-outbox';
 import { OutboxView } from '../../features/outbox/components/outbox-view';
 import { isApiError } from '../../lib/api-error';
 import { requireArea } from '../guards';
+import { ensureHeld } from '../../lib/offline/online';
+import { OfflineNoticeFor } from '../../lib/offline/offline-notice';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     await requireArea(queryClient, request, 'outbox');
-    await queryClient.ensureQueryData(outboxQueryOptions());
+    // With no signal and nothing held on the device: "No signal" in words at once, not a wait with no end.
+    const options = outboxQueryOptions();
+    await ensureHeld(queryClient, options.queryKey, () => queryClient.ensureQueryData(options));
     return null;
   };
 
@@ -22,6 +26,7 @@ export default function OutboxRoute() {
   return (
     <>
       <PageHeader title="Outbox" lead={lead} />
+      <OfflineNoticeFor queryKey={outboxQueryOptions().queryKey} />
       <OutboxView />
     </>
   );

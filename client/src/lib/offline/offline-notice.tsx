@@ -1,3 +1,4 @@
+import { useQueryClient, type QueryKey } from '@tanstack/react-query';
 import { Alert } from '../../components/ui/alert';
 import { useOnline } from './online';
 
@@ -24,4 +25,10 @@ export function OfflineNotice({ updatedAt, waiting = 0 }: { updatedAt: number; w
       )}
     </Alert>
   );
+}
+
+/** OfflineNotice for a page showing one query held on the device (users, e-mail, outbox): when it was saved. */
+export function OfflineNoticeFor({ queryKey }: { queryKey: QueryKey }) {
+  const updatedAt = useQueryClient().getQueryState(queryKey)?.dataUpdatedAt ?? 0;
+  return <OfflineNotice updatedAt={updatedAt} />;
 }

@@ -9,6 +9,7 @@ import {
   movesFor,
   NEEDS_PROPOSAL_MESSAGE,
   NO_PROPOSAL_YET,
+  PRICE_SETTINGS_ROLES,
   roleMayMoveJob,
   nextStatuses,
   ROLES,
@@ -16,6 +17,8 @@ import {
   UNIT_SYSTEMS,
   type JobStatus,
 } from '../../server/src/contract';
+import { rolesFor } from '../../client/src/config/nav';
+import { routeRegistry } from '../../server/src/lib/route';
 import { JobSchema } from '../../server/src/modules/jobs/job.entity';
 import { login, makeCompany, type Session, type TestCompany } from '../helpers/fixtures';
 import { buildTestApp, type TestApp } from '../helpers/test-app';
@@ -114,5 +117,29 @@ describe('the database agrees with the contract', () => {
     ['outgoing_message', 'state', MESSAGE_STATES],
   ] as const)('%s.%s allows exactly the contract list', async (table, column, list) => {
     expect((await checkValues(table, column)).sort()).toEqual([...list].sort());
+  });
+});
+
+describe("the client's areas and the server's policies are the same groups", () => {
+  /** The roles a registered route's policy lets in. */
+  const policyOf = (method: string, path: string): readonly string[] => {
+    const r = routeRegistry.find((x) => x.method === method && x.path === path);
+    expect(r, `${method} ${path} is registered`).toBeDefined();
+    return r?.policy.kind === 'roles' ? r.policy.roles : [];
+  };
+
+  it.each([
+    ['users', 'get', '/api/users/'],
+    ['mail', 'get', '/api/mail/'],
+    ['settings', 'put', '/api/company/settings'],
+    ['outbox', 'get', '/api/dev/outbox'],
+    ['price-book', 'get', '/api/company-data/tables'],
+    ['jobs', 'get', '/api/jobs/'],
+  ] as const)('the %s area is shown to exactly the roles %s %s lets in', (area, method, path) => {
+    expect([...rolesFor(area)].sort()).toEqual([...policyOf(method, path)].sort());
+  });
+
+  it('the price-book settings card is shown to exactly who may read the settings', () => {
+    expect([...PRICE_SETTINGS_ROLES].sort()).toEqual([...policyOf('get', '/api/company-data/settings')].sort());
   });
 });

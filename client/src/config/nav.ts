@@ -1,5 +1,5 @@
 import { paths } from './paths';
-import { STAFF_ROLES, type Role } from '@contract';
+import { OWNER_ROLES, STAFF_ROLES, type Role } from '@contract';
 
 /**
  * The one list of signed-in areas: the navigation and the route guards both read it,
@@ -17,13 +17,13 @@ export interface NavItem {
 
 export const navItems: readonly NavItem[] = [
   { id: 'jobs', label: 'Jobs', to: paths.jobs, roles: STAFF_ROLES },
-  { id: 'users', label: 'Users', to: paths.users, roles: ['owner'] },
-  { id: 'mail', label: 'E-mail', to: paths.mail, roles: ['owner'] },
-  { id: 'reports', label: 'Reports', to: paths.reports, roles: ['owner'] },
-  { id: 'settings', label: 'Settings', to: paths.companySettings, roles: ['owner'] },
+  { id: 'users', label: 'Users', to: paths.users, roles: OWNER_ROLES },
+  { id: 'mail', label: 'E-mail', to: paths.mail, roles: OWNER_ROLES },
+  { id: 'reports', label: 'Reports', to: paths.reports, roles: OWNER_ROLES },
+  { id: 'settings', label: 'Settings', to: paths.companySettings, roles: OWNER_ROLES },
   { id: 'price-book', label: 'Price book & catalog', to: paths.priceBook, roles: STAFF_ROLES },
   { id: 'account', label: 'Your account', to: paths.account, roles: STAFF_ROLES },
-  { id: 'outbox', label: 'Outbox', to: paths.outbox, roles: ['owner'], needsFeature: 'outbox' },
+  { id: 'outbox', label: 'Outbox', to: paths.outbox, roles: OWNER_ROLES, needsFeature: 'outbox' },
 ];
 
 export type Feature = NonNullable<NavItem['needsFeature']>;

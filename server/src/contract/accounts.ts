@@ -27,6 +27,13 @@ export const passwordResetFields = {
   password: newPasswordRule,
 };
 
+/** The request bodies of sign-in, changing one's password, asking for a reset link and using it (strict: the server
+ * refuses any other key; the client's forms check the same objects before sending). */
+export const signInBody = z.strictObject({ email: emailRule, password: signInPasswordRule });
+export const changePasswordBody = z.strictObject(changePasswordFields);
+export const passwordResetRequestBody = z.strictObject(passwordResetRequestFields);
+export const passwordResetBody = z.strictObject(passwordResetFields);
+
 /** The same answer whether or not an account uses the address (nobody learns who has one). */
 export const RESET_REQUESTED_MESSAGE = `If an account uses that address, an e-mail with a link to set a new password is on its way. The link works for ${RESET_LINK_MINUTES} minutes.`;
 export const RESET_LINK_INVALID = 'This link has expired or has already been used. Ask for a new one.';

@@ -15,10 +15,16 @@ export const OFFICE_ROLES = ['owner', 'estimator'] as const satisfies readonly R
 export const JOB_EDITOR_ROLES = ['owner', 'estimator', 'salesperson'] as const satisfies readonly Role[];
 /** Who may own a job as its salesperson. */
 export const JOB_OWNER_ROLES = ['salesperson', 'estimator', 'owner'] as const satisfies readonly Role[];
-/** Who manages the company's people and settings. */
+/** Who manages the company's people, settings and e-mail. */
 export const OWNER_ROLES = ['owner'] as const satisfies readonly Role[];
+/** Who may be assigned to a job as its installer. */
+export const INSTALLER_ROLES = ['installer'] as const satisfies readonly Role[];
+/** Who reads the price book's settings (tax; the sell rule only the office): everyone who sells. */
+export const PRICE_SETTINGS_ROLES = ['owner', 'estimator', 'salesperson'] as const satisfies readonly Role[];
 
-const has = (list: readonly Role[], role: Role): boolean => list.includes(role);
+/** Whether a role is in one of the groups above (the server's policies are made from the same groups). */
+export const roleIn = (list: readonly Role[], role: Role): boolean => list.includes(role);
+const has = roleIn;
 
 /** Who is acting, as both ends know them: the signed-in person's id and role. */
 export interface Viewer {

@@ -1,6 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { Suspense, useMemo, useState } from 'react';
 import { Outlet, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { OWNER_ROLES, roleIn } from '@contract';
 import { AppShell } from '../../components/layout/app-shell';
 import { Alert } from '../../components/ui/alert';
 import { Button } from '../../components/ui/button';
@@ -45,7 +46,7 @@ function RoleNotice() {
 export default function AppRoot() {
   const { user, company } = useSignedIn();
   const signOut = useSignOut();
-  const outbox = useOutboxAvailable(user.role === 'owner');
+  const outbox = useOutboxAvailable(roleIn(OWNER_ROLES, user.role));
   const viewer = useMemo(() => ({ id: user.id, role: user.role }), [user.id, user.role]);
   const companyIdentity = useMemo(() => ({ id: company.id, name: company.name }), [company.id, company.name]);
   const features = useMemo<ReadonlySet<Feature>>(() => new Set(outbox ? ['outbox'] : []), [outbox]);

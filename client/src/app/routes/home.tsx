@@ -1,3 +1,4 @@
+import { OWNER_ROLES, roleIn } from '@contract';
 import { useSignedIn } from '../../features/auth/api/get-me';
 import { RoleWelcome } from '../../features/dashboard/components/role-welcome';
 import { MailTrouble } from '../../features/mail/components/mail-trouble';
@@ -7,7 +8,7 @@ export default function HomeRoute() {
   const firstName = user.name.trim().split(/\s+/)[0] ?? user.name;
   return (
     <>
-      {user.role === 'owner' ? <MailTrouble /> : null}
+      {roleIn(OWNER_ROLES, user.role) ? <MailTrouble /> : null}
       <RoleWelcome role={user.role} firstName={firstName} />
     </>
   );

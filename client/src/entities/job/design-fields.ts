@@ -1,3 +1,4 @@
+import { DEFAULT_LATITUDE_DEG, GENERIC_CLEAR_SKY } from '@calc';
 import type { DesignField } from '@contract';
 import type { Quantity } from '../../lib/unit-display';
 
@@ -32,7 +33,7 @@ export const DESIGN_FIELD_SPECS: readonly DesignFieldSpec[] = [
     label: 'Latitude',
     quantity: 'plain',
     unit: '°',
-    whenEmpty: 'Left empty: 40° N is assumed, and the loads say so. South of the equator press S.',
+    whenEmpty: `Left empty: ${DEFAULT_LATITUDE_DEG}° N is assumed, and the loads say so. South of the equator press S.`,
   },
   {
     key: 'designMonth',
@@ -46,7 +47,7 @@ export const DESIGN_FIELD_SPECS: readonly DesignFieldSpec[] = [
     key: 'clearSkyTauB',
     label: 'Clear-sky beam optical depth τb',
     quantity: 'plain',
-    whenEmpty: 'Left empty (with τd): a generic clear sky, τb 0.40 / τd 2.30 — not the site’s data.',
+    whenEmpty: `Left empty (with τd): a generic clear sky, τb ${GENERIC_CLEAR_SKY.tauB.toFixed(2)} / τd ${GENERIC_CLEAR_SKY.tauD.toFixed(2)} — not the site’s data.`,
   },
   { key: 'clearSkyTauD', label: 'Clear-sky diffuse optical depth τd', quantity: 'plain' },
   {

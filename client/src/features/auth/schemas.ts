@@ -1,14 +1,8 @@
 import { z } from 'zod';
-import {
-  changePasswordFields,
-  emailRule,
-  passwordResetFields,
-  passwordResetRequestFields,
-  signInPasswordRule,
-} from '@contract';
+import { changePasswordFields, passwordResetFields, passwordResetRequestBody, signInBody } from '@contract';
 
-/** The server's sign-in rules (the contract's), so the page reads the same either way. */
-export const signInSchema = z.object({ email: emailRule, password: signInPasswordRule });
+/** The server's sign-in body (the contract's), so the page reads the same either way. */
+export const signInSchema = signInBody;
 export type SignInInput = z.infer<typeof signInSchema>;
 
 const confirmRule = z.string().min(1, { message: 'Type the new password again.' });
@@ -20,7 +14,7 @@ export const changePasswordFormSchema = z
   .refine((v) => v.newPassword === v.confirmPassword, sameTwice);
 export type ChangePasswordForm = z.input<typeof changePasswordFormSchema>;
 
-export const forgotPasswordSchema = z.object(passwordResetRequestFields);
+export const forgotPasswordSchema = passwordResetRequestBody;
 
 /** The reset page's form; the token comes from the link, not from a field. */
 export const resetPasswordFormSchema = z

@@ -11,8 +11,11 @@ import {
   passwordChangedResponse,
   RESET_REQUESTED_MESSAGE,
   userResponse,
+  signInBody,
+  changePasswordBody,
+  passwordResetRequestBody,
+  passwordResetBody,
 } from '@contract';
-import { changePasswordSchema, loginSchema, passwordResetRequestSchema, passwordResetSchema } from './auth.schema';
 import { csrfToken, signIn, signOut } from './auth.service';
 import { changePassword, completePasswordReset, requestPasswordReset } from './password.service';
 import type { LoginLimiter } from './rate-limit';
@@ -31,7 +34,7 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     method: 'post',
     path: '/login',
     policy: PUBLIC,
-    body: loginSchema,
+    body: signInBody,
     response: userResponse,
     handler: async ({ service, req, body }) => ({
       user: presentUser(await signIn({ ...service, req, limiter }, body)),
@@ -78,7 +81,7 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     method: 'post',
     path: '/password',
     policy: ANY_STAFF,
-    body: changePasswordSchema,
+    body: changePasswordBody,
     response: passwordChangedResponse,
     handler: async ({ service, req, body, services }) =>
       changePassword({ ...service, req, limiter, queue: services.queue }, body),
@@ -89,7 +92,7 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     method: 'post',
     path: '/password-reset',
     policy: PUBLIC,
-    body: passwordResetRequestSchema,
+    body: passwordResetRequestBody,
     response: accountMessageResponse,
     status: 202,
     handler: async ({ service, req, body, services }) => {
@@ -103,7 +106,7 @@ export function authRoutes(api: ApiRouter, limiter: LoginLimiter, resetLimiter: 
     method: 'post',
     path: '/password-reset/complete',
     policy: PUBLIC,
-    body: passwordResetSchema,
+    body: passwordResetBody,
     response: accountMessageResponse,
     handler: async ({ service, body, services }) => {
       await completePasswordReset({ ...service, limiter, queue: services.queue }, body);

@@ -7,6 +7,7 @@ import {
   companyDataTablesResponse,
   importApplyResponse,
   importPreviewResponse,
+  PRICE_SETTINGS_ROLES,
   priceBookSettingsResponse,
 } from '@contract';
 import { ANY_STAFF, OFFICE, rawResponse, roles, type ApiRouter } from '../../lib/route';
@@ -16,7 +17,7 @@ import { datasetParams, importApplyBody, importPreviewBody, recordBody, rowParam
 import { assertReader, createRow, getRow, listRows, rowHistory, updateRow } from './company-data.service';
 import { getSettings, presentSettings, putSettings } from './price-book-settings.service';
 
-const PRICE_READERS = roles('owner', 'estimator', 'salesperson');
+const PRICE_READERS = roles(...PRICE_SETTINGS_ROLES);
 
 /** The equipment catalog and price book: /api/company-data/... */
 export function companyDataRoutes(api: ApiRouter): void {

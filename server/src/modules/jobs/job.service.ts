@@ -1,5 +1,6 @@
 import {
   enteredOf,
+  INSTALLER_ROLES,
   JOB_OWNER_ROLES,
   mayAssignInstaller,
   mayChooseSalesperson,
@@ -51,7 +52,12 @@ async function salespersonOf({ em, actor }: ServiceContext, id: string | undefin
 async function installerOf({ em, actor }: ServiceContext, id: string | null): Promise<User | null> {
   if (!mayAssignInstaller(actor.role)) throw new ForbiddenError('Only an owner or estimator assigns installers.');
   if (id === null) return null;
-  const u = await em.findOne(UserSchema, { id, company: actor.companyId, active: true, role: 'installer' });
+  const u = await em.findOne(UserSchema, {
+    id,
+    company: actor.companyId,
+    active: true,
+    role: { $in: [...INSTALLER_ROLES] },
+  });
   if (!u)
     throw new ValidationError([
       { path: 'assignedInstallerId', message: 'Choose an active installer of your company.' },

@@ -1,5 +1,6 @@
 import { useId, type ReactNode } from 'react';
 import { useController, useFormContext, type FieldValues } from 'react-hook-form';
+import { DEFAULT_LATITUDE_DEG } from '@calc';
 import type { DesignField, UnitSystem } from '@contract';
 import { FieldShell, inputClass } from '../../../components/ui/field-shell';
 import { localiseBound, unitLabel } from '../../../lib/unit-display';
@@ -74,7 +75,7 @@ export function LatitudeDefault({ system }: { system: UnitSystem }) {
       <DefaultNumberField
         field="latitudeDeg"
         system={system}
-        extraHint="Left empty: jobs assume 40° N and their loads say so."
+        extraHint={`Left empty: jobs assume ${DEFAULT_LATITUDE_DEG}° N and their loads say so.`}
       />
       <div role="group" aria-label="Hemisphere" className="flex gap-2">
         {(['N', 'S'] as const satisfies readonly Hemisphere[]).map((h) => (

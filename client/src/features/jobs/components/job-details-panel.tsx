@@ -4,10 +4,14 @@ import { z } from 'zod';
 import {
   blankOr,
   customerRules,
+  INSTALLER_ROLES,
   isOfficeRole,
+  JOB_OWNER_ROLES,
   mayDeleteJob,
   mayEditJob,
+  roleIn,
   siteRules,
+  type Role,
   type StaffMember,
   type CustomerRecord,
   type JobRecord,
@@ -88,10 +92,10 @@ function customerChanges(c: CustomerRecord, v: DetailsValues, dirty: ReadonlySet
 
 const peopleOptions = (
   staff: readonly StaffMember[],
-  roles: readonly string[],
+  roles: readonly Role[],
   current: { id: string; name: string } | null,
 ) => {
-  const list = staff.filter((s) => roles.includes(s.role)).map((s) => ({ value: s.id, label: s.name }));
+  const list = staff.filter((s) => roleIn(roles, s.role)).map((s) => ({ value: s.id, label: s.name }));
   // Someone no longer active still shows as the one the job is with until it is handed on.
   if (current && !list.some((o) => o.value === current.id))
     list.unshift({ value: current.id, label: `${current.name} (inactive)` });
@@ -139,14 +143,14 @@ function DetailsForm({ job, customer, office }: { job: JobRecord; customer: Cust
             <SelectField
               name="salespersonId"
               label="Salesperson"
-              options={peopleOptions(staff.data, ['salesperson', 'estimator', 'owner'], job.salesperson)}
+              options={peopleOptions(staff.data, JOB_OWNER_ROLES, job.salesperson)}
             />
             <SelectField
               name="assignedInstallerId"
               label="Installer"
               options={[
                 { value: '', label: 'Not assigned yet' },
-                ...peopleOptions(staff.data, ['installer'], job.assignedInstaller),
+                ...peopleOptions(staff.data, INSTALLER_ROLES, job.assignedInstaller),
               ]}
             />
           </fieldset>

@@ -1,6 +1,7 @@
 import { Suspense, useCallback } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { DATASETS, EDITORS, isDatasetId, MODEL_KIND_LABELS, type DataRole, type DatasetId } from '@calc';
+import { PRICE_SETTINGS_ROLES, roleIn } from '@contract';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { Button } from '../../../components/ui/button';
 import { Spinner } from '../../../components/ui/spinner';
@@ -100,7 +101,7 @@ function TableView({ dataset, role, params, set }: ViewProps) {
   return (
     <div className={`grid gap-4 ${side ? 'xl:grid-cols-[minmax(0,1fr)_minmax(26rem,34rem)]' : ''}`}>
       <div className="order-2 flex min-w-0 flex-col gap-3 xl:order-1">
-        {dataset === 'categories' ? <SettingsCard canEdit={canEdit} /> : null}
+        {dataset === 'categories' && roleIn(PRICE_SETTINGS_ROLES, role) ? <SettingsCard canEdit={canEdit} /> : null}
         <div className="flex flex-col gap-2 md:flex-row md:items-end">
           <label className="flex flex-1 flex-col gap-1 text-sm font-semibold text-ink-900">
             Search {DATASETS[dataset].label.toLowerCase()}

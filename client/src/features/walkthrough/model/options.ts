@@ -1,17 +1,21 @@
+import type { z } from 'zod';
 import {
+  compassDirectionSchema,
   CEILING_INSULATION,
   DOOR_TYPES,
   FLOOR_INSULATION,
   GLAZING_TYPES,
   INTERIOR_SHADING_IAC,
   WALL_CONSTRUCTIONS,
+  type aboveSchema,
+  type belowSchema,
 } from '@calc';
 
 /** Select options built from calc's construction defaults, so labels and keys stay in step with calc. */
 const fromTable = (table: Record<string, { readonly label: string }>) =>
   Object.entries(table).map(([value, t]) => ({ value, label: t.label }));
 
-export const directionOptions = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'].map((d) => ({ value: d, label: d }));
+export const directionOptions = compassDirectionSchema.options.map((d) => ({ value: d, label: d }));
 export const constructionOptions = fromTable(WALL_CONSTRUCTIONS);
 export const glazingOptions = fromTable(GLAZING_TYPES);
 export const shadingOptions = fromTable(INTERIOR_SHADING_IAC);
@@ -22,19 +26,24 @@ export const floorLevelOptions = [-2, -1, 0, 1, 2, 3, 4, 5].map((n) => ({
   value: String(n),
   label: n < 0 ? `Basement ${-n}` : n === 0 ? 'Ground (at grade)' : `Floor ${n}`,
 }));
-export const aboveOptions = [
-  { value: 'attic', label: 'Attic' },
-  { value: 'roof', label: 'Roof (no attic)' },
-  { value: 'conditioned', label: 'Conditioned floor' },
-];
-export const belowOptions = [
-  { value: 'slab', label: 'Slab on grade' },
-  { value: 'crawlspace', label: 'Crawl space' },
-  { value: 'basement', label: 'Unconditioned basement' },
-  { value: 'basement-floor', label: 'Ground (a basement room’s own floor)' },
-  { value: 'garage', label: 'Garage' },
-  { value: 'conditioned', label: 'Conditioned floor' },
-];
+/** A label for each of calc's kinds: a kind calc adds fails the typecheck here until it has its words. */
+const ABOVE_LABELS: Record<z.output<typeof aboveSchema>['kind'], string> = {
+  attic: 'Attic',
+  roof: 'Roof (no attic)',
+  conditioned: 'Conditioned floor',
+};
+const BELOW_LABELS: Record<z.output<typeof belowSchema>['kind'], string> = {
+  slab: 'Slab on grade',
+  crawlspace: 'Crawl space',
+  basement: 'Unconditioned basement',
+  'basement-floor': 'Ground (a basement room’s own floor)',
+  garage: 'Garage',
+  conditioned: 'Conditioned floor',
+};
+const fromLabels = (labels: Record<string, string>) =>
+  Object.entries(labels).map(([value, label]) => ({ value, label }));
+export const aboveOptions = fromLabels(ABOVE_LABELS);
+export const belowOptions = fromLabels(BELOW_LABELS);
 
 export function glazingDefaults(key: string): { u: number; shgc: number; label: string } | null {
   const entry = Object.entries(GLAZING_TYPES).find(([k]) => k === key)?.[1];

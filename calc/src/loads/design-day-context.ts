@@ -1,10 +1,9 @@
-import type { DesignConditions } from '../schemas/design-conditions';
+import { DEFAULT_LATITUDE_DEG, GENERIC_CLEAR_SKY, type DesignConditions } from '../schemas/design-conditions';
 import type { SurfaceColor } from '../schemas/room';
 import {
   DAILY_RANGE_FRACTION,
   FACINGS,
   FACING_AZIMUTH_DEG,
-  GENERIC_CLEAR_SKY,
   designDayOfYear,
   extraterrestrialIrradiance,
   airMassExponents,
@@ -15,7 +14,6 @@ import {
 } from '../solar/design-day';
 import {
   ATTIC_RESPONSE,
-  DEFAULT_LATITUDE_DEG,
   MASS_RESPONSE,
   SOLAR_RTS,
   SOL_AIR_ALPHA_OVER_HO,

@@ -3,9 +3,6 @@
  * are our own simplification say so ([OWN]); see METHOD_NOTES for the plain-word statement.
  */
 
-/** Latitude assumed when the job has none, degrees north. [OWN: a stated assumption, shown with the result] */
-export const DEFAULT_LATITUDE_DEG = 40;
-
 /**
  * Heat storage of transmitted sun (a room's furnishings and floor absorb it and give it to
  * the air over the next hours). Gaugeline simplification of the radiant time series (RTS)

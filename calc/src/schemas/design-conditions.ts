@@ -1,6 +1,21 @@
 import { z } from 'zod';
 import { bounded, boundedInt } from './fields';
 
+/** Latitude assumed when the job has none, degrees north. [OWN: a stated assumption, shown with the result] */
+export const DEFAULT_LATITUDE_DEG = 40;
+
+/**
+ * Clear-sky optical depths used when the site's are unknown: τb 0.40, τd 2.30. A Gaugeline
+ * generic value, NOT a station's data: typical of mid-latitude summer months in the
+ * handbook's climatic tables [MEM]. Enter the station's τb/τd from ASHRAE ch. 14 climatic data.
+ * (Here beside the schema, not in the solar model, so a form can say them without loading the engine.)
+ */
+export const GENERIC_CLEAR_SKY = {
+  tauB: 0.4,
+  tauD: 2.3,
+  source: 'Generic default (not the site’s data): τb 0.40, τd 2.30, typical mid-latitude summer [MEM]',
+} as const;
+
 /**
  * Site design conditions (°F, %, ft). Cooling outdoor humidity is given either as the
  * coincident wet bulb or directly as grains per lb. [PUB: IRC R301.2(1) design criteria

@@ -216,17 +216,6 @@ export function outdoorDryBulbAtHour({
   return num(designDryBulbF) - f * num(dailyRangeF, 'nonNegative');
 }
 
-/**
- * Clear-sky optical depths used when the site's are unknown: τb 0.40, τd 2.30. A Gaugeline
- * generic value, NOT a station's data: typical of mid-latitude summer months in the
- * handbook's climatic tables [MEM]. Enter the station's τb/τd from ASHRAE ch. 14 climatic data.
- */
-export const GENERIC_CLEAR_SKY = {
-  tauB: 0.4,
-  tauD: 2.3,
-  source: 'Generic default (not the site’s data): τb 0.40, τd 2.30, typical mid-latitude summer [MEM]',
-} as const;
-
 /** The azimuth (clockwise from north) of each compass facing. */
 export const FACING_AZIMUTH_DEG = { N: 0, NE: 45, E: 90, SE: 135, S: 180, SW: 225, W: 270, NW: 315 } as const;
 export type Facing = keyof typeof FACING_AZIMUTH_DEG;

@@ -97,6 +97,7 @@ describe('the app opens with no signal', () => {
     // Visit the walk-through once with signal; the service worker installs from the built client.
     await page.goto(`/jobs/${jobId}`);
     await page.getByRole('button', { name: 'Add room' }).waitFor();
+    await expectNoSeriousViolations(page);
     const worker = await page.evaluate(async () => {
       const reg = await navigator.serviceWorker.ready;
       return reg.active?.scriptURL ?? '';
@@ -120,6 +121,7 @@ describe('the app opens with no signal', () => {
       .filter({ hasText: /Offline — \d+ changes? waiting/ })
       .waitFor({ timeout: 20_000 });
     await page.screenshot({ path: `${SHOTS}/offline-reload-375.png`, fullPage: true });
+    await expectNoSeriousViolations(page);
 
     // Signal again: the room lands on the server.
     await context.setOffline(false);

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoAccounts } from '../../fixtures/seed';
 import type { StoredMail } from '../../server/src/fakes/smtp-fake';
+import { checkedPages, expectNoSeriousViolations } from './axe';
 import { PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
 
 let e: E2E;
@@ -32,6 +33,7 @@ describe('a person who forgot their password', () => {
     await office.page.getByTestId('user-name').first().waitFor();
     await office.page.goto('/users');
     const add = office.page.getByRole('form', { name: 'Add a user' });
+    await expectNoSeriousViolations(office.page);
     await add.getByLabel('Name').fill(name);
     await add.getByLabel('E-mail').fill(email);
     await add.getByLabel('First password').fill('first-password-from-owner');
@@ -41,13 +43,17 @@ describe('a person who forgot their password', () => {
     // On their phone: sign-in page → "Forgot your password?"
     const phone = await e.newPage(PHONE);
     await phone.page.goto('/sign-in');
+    await phone.page.getByRole('link', { name: 'Forgot your password?' }).waitFor();
+    await expectNoSeriousViolations(phone.page);
     await phone.page.getByRole('link', { name: 'Forgot your password?' }).click();
     await phone.page.getByRole('heading', { name: 'Forgot your password?' }).waitFor();
     await phone.page.getByLabel('E-mail').fill(email);
     await phone.page.screenshot({ path: `${SHOTS}/forgot-password-375.png`, fullPage: true });
+    await expectNoSeriousViolations(phone.page);
     await phone.page.getByRole('button', { name: 'Send me a link' }).click();
     await phone.page.getByText('Check your e-mail').waitFor();
     await phone.page.screenshot({ path: `${SHOTS}/forgot-password-sent-375.png`, fullPage: true });
+    await expectNoSeriousViolations(phone.page);
 
     // The e-mail, as the SMTP fake received it, holds the one-time link.
     const mail = await mailFor(email, /new Gaugeline password/);
@@ -57,6 +63,7 @@ describe('a person who forgot their password', () => {
     await phone.page.getByRole('heading', { name: 'Set a new password' }).waitFor();
     // The token leaves the address bar as soon as the page has read it.
     expect(new URL(phone.page.url()).hash).toBe('');
+    await expectNoSeriousViolations(phone.page);
 
     await phone.page.getByLabel('New password', { exact: true }).fill('short');
     await phone.page.getByLabel('New password again').fill('different');
@@ -64,19 +71,23 @@ describe('a person who forgot their password', () => {
     await phone.page.getByText('Password must be at least 12 characters.').waitFor();
     await phone.page.getByText('The two new passwords are not the same.').waitFor();
     await phone.page.screenshot({ path: `${SHOTS}/reset-password-errors-375.png`, fullPage: true });
+    await expectNoSeriousViolations(phone.page);
 
     await phone.page.getByLabel('New password', { exact: true }).fill('my-own-new-password');
     await phone.page.getByLabel('New password again').fill('my-own-new-password');
     await phone.page.getByRole('button', { name: 'Set new password' }).click();
     await phone.page.getByText('Your new password is set.').waitFor();
     await phone.page.screenshot({ path: `${SHOTS}/reset-password-done-375.png`, fullPage: true });
+    await expectNoSeriousViolations(phone.page);
     await phone.page.getByRole('link', { name: 'Sign in' }).click();
 
     // The old password no longer works; the new one does.
     await signIn(phone.page, email, 'first-password-from-owner');
     await phone.page.getByText('The e-mail or password is not right.').waitFor();
+    await expectNoSeriousViolations(phone.page);
     await signIn(phone.page, email, 'my-own-new-password');
     await phone.page.getByTestId('user-name').filter({ hasText: name }).first().waitFor();
+    await expectNoSeriousViolations(phone.page);
 
     // Then they change it again from their account page.
     await phone.page.goto('/account');
@@ -86,6 +97,7 @@ describe('a person who forgot their password', () => {
     await phone.page.getByRole('button', { name: 'Change password' }).click();
     await phone.page.getByText('Your password is changed.').waitFor();
     await phone.page.screenshot({ path: `${SHOTS}/account-password-changed-375.png`, fullPage: true });
+    await expectNoSeriousViolations(phone.page);
     await mailFor(email, /password was changed/);
 
     // The owner signs them out everywhere; their next page load lands on sign-in.
@@ -94,6 +106,7 @@ describe('a person who forgot their password', () => {
     await button.click();
     await office.page.getByText('Signed out of 1 device.').waitFor();
     await office.page.screenshot({ path: `${SHOTS}/users-signed-out-everywhere-375.png`, fullPage: true });
+    await expectNoSeriousViolations(office.page);
     await phone.page.goto('/jobs');
     await phone.page.waitForURL((u) => u.pathname.startsWith('/sign-in'));
 
@@ -104,7 +117,11 @@ describe('a person who forgot their password', () => {
     await recent.getByText('Set a new Gaugeline password').first().waitFor();
     expect(await office.page.getByText('reset-password#token').count()).toBe(0);
     await office.page.screenshot({ path: `${SHOTS}/mail-375.png`, fullPage: true });
+    await expectNoSeriousViolations(office.page);
 
+    // Every page of the journey had the accessibility check (serious or critical WCAG 2 A/AA findings fail).
+    for (const path of ['/users', '/sign-in', '/forgot-password', '/reset-password', '/account', '/mail', '/'])
+      expect([...checkedPages], path).toContain(path);
     await office.context.close();
     await phone.context.close();
   });

@@ -61,6 +61,7 @@ export * from './src/pricing/price';
 
 export * from './src/design/zone-loads';
 export * from './src/design/compute-design';
+export * from './src/design/design-ducts';
 export * from './src/design/options';
 
 export * from './src/catalog/sell-rule';

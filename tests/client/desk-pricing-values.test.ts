@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { fieldPathIn } from '../../client/src/features/desk/model/field-paths';
 import {
-  pricingFieldPath,
   pricingFormSchema,
   pricingFormValues,
   type PricingFormValues,
@@ -87,7 +87,10 @@ describe('the desk’s pricing form: dollars on screen, cents in the contract', 
   });
 
   it('puts the server’s field errors on the form’s fields', () => {
-    expect(pricingFieldPath('pricing.tax.reason')).toBe('tax.reason');
-    expect(pricingFieldPath('pricing.discounts.0.value')).toBe('discounts.0.value');
+    expect(fieldPathIn('pricing', 'pricing.tax.reason')).toBe('tax.reason');
+    expect(fieldPathIn('pricing', 'pricing.discounts.0.value')).toBe('discounts.0.value');
+    expect(fieldPathIn('design', 'design.systems.0.heatKitKey')).toBe('systems.0.heatKitKey');
+    // A path outside the member stays as it was (the form lists it above its fields).
+    expect(fieldPathIn('design', 'name')).toBe('name');
   });
 });

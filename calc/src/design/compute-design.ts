@@ -27,6 +27,7 @@ import { checkCombination, checkSizing, type CombinationCheck, type SizingCheck 
 import { DEFAULT_SIZING_POLICY, sizingPolicySchema, type SizingPolicy } from '../sizing/policy';
 import { buildTakeoff, type SystemForTakeoff } from '../takeoff/build';
 import { zoneLoads, type ZoneLoad } from './zone-loads';
+import { explainDuctLoads, homeWithDesignDucts } from './design-ducts';
 import { explanation, type Explanation } from '../explain/explanation';
 import { explainExtension, explainLineSell, explainOptionPrice } from '../pricing/explain-price';
 import { technologyTransitionsCheck, type RefrigerantRuleCheck } from '../refrigerant/rules';
@@ -184,7 +185,9 @@ export function computeDesignFromParsed({
   policy,
   loads: given,
 }: ParsedDesignRequest): DesignResult {
-  const loads = given ?? homeLoadFromParsed(home);
+  // A ducted system's ducts are this option's own: its loads are worked with them (the shared loads stand otherwise).
+  const withDucts = homeWithDesignDucts(home, design);
+  const loads = withDucts ? homeLoadFromParsed(withDucts.home) : (given ?? homeLoadFromParsed(home));
   const dc = home.designConditions;
   const indoorUnits = byKey(catalog.indoorUnits, (u) => u.key);
   const outdoorUnits = byKey(catalog.outdoorUnits, (u) => u.key);
@@ -343,6 +346,7 @@ export function computeDesignFromParsed({
       ...(heating ? heating.explanations : []),
       { ...combination.explanation, key: `${p}combination` },
       ...refrigerant.circuits.map((c) => c.explanation),
+      ...(withDucts?.systemKey === s.key && loads.ducts ? [explainDuctLoads(s.key, s.name, loads.ducts)] : []),
       ...refrigerant.explanations,
       ...electrical.explanations,
       ...(kitElectrical ? kitElectrical.explanations : []),

@@ -1,6 +1,13 @@
 import { z } from 'zod';
 import { bounded, boundedInt, keyField, nameField } from './fields';
 import { tubeOdSchema } from './equipment';
+import { ductSystemSchema } from './ducts';
+
+/**
+ * A ducted system's ducts (air handler or ducted unit): where they run, their insulation and leakage. The
+ * rooms they serve are the system's zones' rooms, so the home's own list is not taken here.
+ */
+export const systemDuctsSchema = ductSystemSchema.pick({ location: true, insulationR: true, leakage: true });
 
 /** A zone: the rooms one indoor unit serves. */
 export const zoneSchema = z.object({
@@ -71,6 +78,8 @@ export const systemSchema = z.object({
   electrical: electricalInputSchema,
   /** An electric heat kit from the catalog for backup heat (ducted systems), on its own circuit of the same run. */
   heatKitKey: keyField('Heat kit').optional(),
+  /** The ducts of a ducted system: they add the duct loads to this option's rooms (design-ducts.ts). */
+  ducts: systemDuctsSchema.optional(),
 });
 
 /** The design: zones and systems. */

@@ -13,6 +13,10 @@ export interface DeskModel {
   readonly soundDba: number | null;
   readonly nominalCoolingBtuh: number | null;
   readonly ports: number | null;
+  /** Indoor units: wall, ceiling-cassette, floor-console, slim-ducted, air-handler ('' for other kinds). */
+  readonly indoorType: string;
+  /** Heat kits: the electric heat, kW. */
+  readonly heatKitKw: number | null;
 }
 
 const num = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
@@ -35,6 +39,8 @@ export const modelsQueryOptions = () =>
           soundDba: num(r.record.soundDba),
           nominalCoolingBtuh: num(r.record.nominalCoolingBtuh),
           ports: num(r.record.ports),
+          indoorType: str(r.record.indoorType),
+          heatKitKw: num(r.record.heatKitKw),
         }));
     },
     staleTime: 5 * 60_000,

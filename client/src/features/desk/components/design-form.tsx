@@ -1,20 +1,41 @@
 import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { useState } from 'react';
 import { optionDesignSchema, type OptionRecord, type RoomRecord } from '@contract';
-import type { DesignInput } from '@calc';
-import { Button } from '../../../components/ui/button';
+import { DUCT_LOCATION_WORDS, ductLocationSchema, ductLeakageSchema, type DesignInput } from '@calc';
 import { Form } from '../../../components/ui/form';
 import { SelectField, TextField } from '../../../components/ui/form-fields';
 import { AmountField } from './amount-field';
 import type { DeskModel } from '../api/get-models';
 import { useUpdateOption } from '../api/update-option';
-import { designValues, modelOptions, nextKey, roomName } from '../model/design-values';
+import {
+  designValues,
+  DUCTED_INDOOR_TYPES,
+  heatKitOptions,
+  modelOptions,
+  nextKey,
+  roomName,
+} from '../model/design-values';
+import type { ExplanationView } from '../model/result-view';
+import { errorOnFields } from '../model/field-paths';
+import { OptionalSelect } from './optional-select';
+import { RowList } from './row-list';
 import { SaveState } from './save-state';
+import { Why } from './why';
 
 const LIFT_DIRECTIONS = [
   { value: 'indoor-above', label: 'Indoor unit above the outdoor unit' },
   { value: 'indoor-below', label: 'Indoor unit below the outdoor unit' },
 ];
+const DUCT_CHOICES = [
+  { value: '', label: 'No ducts (ductless indoor units)' },
+  ...ductLocationSchema.options.map((l) => ({ value: l, label: `Ducts ${DUCT_LOCATION_WORDS[l]}` })),
+];
+const LEAKAGE_WORDS: Record<(typeof ductLeakageSchema.options)[number], string> = {
+  sealed: 'Sealed and tested tight',
+  typical: 'Typical',
+  leaky: 'Leaky (old or unsealed)',
+};
+const LEAKAGE = ductLeakageSchema.options.map((l) => ({ value: l, label: LEAKAGE_WORDS[l] }));
 
 function Zones({
   rooms,
@@ -27,44 +48,73 @@ function Zones({
 }) {
   const { control, register } = useFormContext<DesignInput>();
   const zones = useFieldArray({ control, name: 'zones' });
-  const keys = useWatch({ control, name: 'zones' }).map((z) => z.key);
+  const values = useWatch({ control, name: 'zones' });
+  const nameOf = (id: string) => {
+    const r = rooms.find((x) => x.id === id);
+    return r ? roomName(r) : id;
+  };
   return (
-    <fieldset className="flex flex-col gap-3" disabled={disabled}>
-      <legend className="text-base font-semibold text-ink-900">Zones: rooms → indoor unit</legend>
-      {zones.fields.map((f, i) => (
-        <div key={f.id} className="grid gap-3 rounded-md border border-line p-3 lg:grid-cols-[1fr_2fr]">
-          <TextField name={`zones.${i}.name`} label="Zone name" autoComplete="off" />
-          <SelectField name={`zones.${i}.indoorUnitKey`} label="Indoor unit" options={modelOptions(models, false)} />
-          <div
-            role="group"
-            aria-label={`Rooms of zone ${i + 1}`}
-            className="flex flex-wrap gap-x-4 gap-y-1 lg:col-span-2"
-          >
-            {rooms.map((r) => (
-              <label key={r.id} className="flex min-h-touch items-center gap-2">
-                <input type="checkbox" value={r.id} className="h-5 w-5" {...register(`zones.${i}.roomIds`)} />
-                {roomName(r)}
-              </label>
-            ))}
-          </div>
-          {zones.fields.length > 1 ? (
-            <Button variant="ghost" className="justify-self-start" onClick={() => zones.remove(i)}>
-              Remove this zone
-            </Button>
-          ) : null}
-        </div>
-      ))}
-      <Button
-        variant="secondary"
-        className="self-start"
-        onClick={() => {
-          const key = nextKey('zone', keys);
-          zones.append({ key, name: `Zone ${zones.fields.length + 1}`, roomIds: [], indoorUnitKey: '' });
-        }}
-      >
-        Add a zone
-      </Button>
-    </fieldset>
+    <RowList
+      legend="Zones: rooms → indoor unit"
+      rows={zones.fields}
+      rowLabel={(i) => `Zone ${i + 1}`}
+      addLabel="Add a zone"
+      minRows={1}
+      maxRows={40}
+      disabled={disabled}
+      onAdd={() =>
+        zones.append({
+          key: nextKey(
+            'zone',
+            values.map((z) => z.key),
+          ),
+          name: `Zone ${zones.fields.length + 1}`,
+          roomIds: [],
+          indoorUnitKey: '',
+        })
+      }
+      onRemove={(i) => zones.remove(i)}
+      rowClassName="grid gap-3 lg:grid-cols-[1fr_2fr]"
+    >
+      {(i) => {
+        const chosen = values[i]?.roomIds ?? [];
+        return (
+          <>
+            <TextField name={`zones.${i}.name`} label="Zone name" autoComplete="off" />
+            <SelectField name={`zones.${i}.indoorUnitKey`} label="Indoor unit" options={modelOptions(models, false)} />
+            <div
+              role="group"
+              aria-label={`Rooms of zone ${i + 1}`}
+              className="flex flex-wrap gap-x-4 gap-y-1 lg:col-span-2"
+            >
+              {rooms.map((r) => (
+                <label key={r.id} className="flex min-h-touch items-center gap-2">
+                  <input type="checkbox" value={r.id} className="h-5 w-5" {...register(`zones.${i}.roomIds`)} />
+                  {roomName(r)}
+                </label>
+              ))}
+            </div>
+            {chosen.length > 1 ? (
+              <>
+                <OptionalSelect
+                  name={`zones.${i}.headRoomId`}
+                  label="Indoor unit is in"
+                  hint="For the refrigerant room-size check."
+                  options={[
+                    { value: '', label: `The zone’s first room (${nameOf(chosen[0] ?? '')})` },
+                    ...chosen.map((id) => ({ value: id, label: nameOf(id) })),
+                  ]}
+                />
+                <label className="flex min-h-touch items-center gap-2 self-end">
+                  <input type="checkbox" className="h-5 w-5" {...register(`zones.${i}.openSpace`)} />
+                  These rooms are one open space (no doors or full walls between them)
+                </label>
+              </>
+            ) : null}
+          </>
+        );
+      }}
+    </RowList>
   );
 }
 
@@ -74,9 +124,20 @@ function Circuits({ s }: { s: number }) {
   const zones = useWatch({ control, name: 'zones' });
   const zoneOptions = zones.map((z) => ({ value: z.key, label: z.name || z.key }));
   return (
-    <div className="flex flex-col gap-2">
-      {circuits.fields.map((f, c) => (
-        <div key={f.id} className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
+    <RowList
+      legend="Line sets"
+      nested
+      rows={circuits.fields}
+      rowLabel={(c) => `Circuit ${c + 1}`}
+      addLabel="Add a circuit"
+      minRows={1}
+      maxRows={8}
+      onAdd={() => circuits.append({ zoneKey: zones[0]?.key ?? '', lengthFt: Number.NaN, liftFt: 0 })}
+      onRemove={(c) => circuits.remove(c)}
+      rowClassName="grid gap-3 sm:grid-cols-2 lg:grid-cols-4"
+    >
+      {(c) => (
+        <>
           <SelectField name={`systems.${s}.circuits.${c}.zoneKey`} label="Circuit to zone" options={zoneOptions} />
           <AmountField name={`systems.${s}.circuits.${c}.lengthFt`} label="Line-set length (ft)" />
           <AmountField name={`systems.${s}.circuits.${c}.liftFt`} label="Vertical lift (ft)" />
@@ -85,33 +146,116 @@ function Circuits({ s }: { s: number }) {
             label="Indoor unit is"
             options={LIFT_DIRECTIONS}
           />
-          {circuits.fields.length > 1 ? (
-            <Button variant="ghost" className="justify-self-start" onClick={() => circuits.remove(c)}>
-              Remove this circuit
-            </Button>
-          ) : null}
-        </div>
-      ))}
-      <Button
-        variant="secondary"
-        className="self-start"
-        onClick={() => circuits.append({ zoneKey: zones[0]?.key ?? '', lengthFt: Number.NaN, liftFt: 0 })}
-      >
-        Add a circuit
-      </Button>
-    </div>
+        </>
+      )}
+    </RowList>
   );
 }
 
-function Systems({ models, disabled }: { models: readonly DeskModel[]; disabled: boolean }) {
+/**
+ * A ducted system's ducts (they add the duct loads to the rooms it serves) and its backup heat: the heat kit
+ * from the catalog with the backup heat the server worked out beside it. Shown when one of the system's
+ * zones has a ducted indoor unit, or when either is already set.
+ */
+function DuctsAndHeat({
+  s,
+  models,
+  whys,
+}: {
+  s: number;
+  models: readonly DeskModel[];
+  whys: ReadonlyMap<string, ExplanationView>;
+}) {
+  const { control } = useFormContext<DesignInput>();
+  const system = useWatch({ control, name: `systems.${s}` });
+  const zones = useWatch({ control, name: 'zones' });
+  const served = new Set(system.circuits.map((c) => c.zoneKey));
+  const ductedUnit = zones.some(
+    (z) =>
+      served.has(z.key) &&
+      DUCTED_INDOOR_TYPES.includes(models.find((m) => m.key === z.indoorUnitKey)?.indoorType ?? ''),
+  );
+  if (!ductedUnit && !system.ducts && !system.heatKitKey) return null;
+  const backup = whys.get(`${system.key}:backup-heat`);
+  return (
+    <fieldset className="flex flex-col gap-3 border-l-4 border-line pl-3">
+      <legend className="text-sm font-semibold text-ink-900">Ducts and backup heat</legend>
+      <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+        <OptionalSelect
+          name={`systems.${s}.ducts`}
+          label="Where the ducts run"
+          hint="Their gains and losses are added to the rooms this system serves."
+          options={DUCT_CHOICES}
+          fromValue={(v) => (typeof v === 'object' && v !== null ? String(Reflect.get(v, 'location') ?? '') : '')}
+          toValue={(chosen, current) =>
+            chosen === ''
+              ? undefined
+              : {
+                  insulationR: 6,
+                  leakage: 'typical',
+                  ...(typeof current === 'object' && current !== null ? current : {}),
+                  location: chosen,
+                }
+          }
+        />
+        {system.ducts ? (
+          <>
+            <AmountField name={`systems.${s}.ducts.insulationR`} label="Duct insulation (R-value)" />
+            <SelectField name={`systems.${s}.ducts.leakage`} label="Duct leakage" options={LEAKAGE} />
+          </>
+        ) : null}
+      </div>
+      <div className="grid items-end gap-3 lg:grid-cols-2">
+        <OptionalSelect
+          name={`systems.${s}.heatKitKey`}
+          label="Heat kit (backup heat)"
+          options={heatKitOptions(models)}
+        />
+        {backup ? (
+          <Why e={backup} label="Backup heat needed at the design temperature" />
+        ) : (
+          <p className="text-sm text-muted">Save the design to see the backup heat this system needs.</p>
+        )}
+      </div>
+    </fieldset>
+  );
+}
+
+function Systems({
+  models,
+  disabled,
+  whys,
+}: {
+  models: readonly DeskModel[];
+  disabled: boolean;
+  whys: ReadonlyMap<string, ExplanationView>;
+}) {
   const { control } = useFormContext<DesignInput>();
   const systems = useFieldArray({ control, name: 'systems' });
   const keys = useWatch({ control, name: 'systems' }).map((x) => x.key);
   return (
-    <fieldset className="flex flex-col gap-3" disabled={disabled}>
-      <legend className="text-base font-semibold text-ink-900">Systems: outdoor unit, line sets, electrical</legend>
-      {systems.fields.map((f, s) => (
-        <div key={f.id} className="flex flex-col gap-3 rounded-md border border-line p-3">
+    <RowList
+      legend="Systems: outdoor unit, line sets, electrical"
+      rows={systems.fields}
+      rowLabel={(s) => `System ${s + 1}`}
+      addLabel="Add a system"
+      minRows={1}
+      maxRows={10}
+      disabled={disabled}
+      onAdd={() =>
+        systems.append({
+          key: nextKey('sys', keys),
+          name: `Outdoor unit ${systems.fields.length + 1}`,
+          outdoorUnitKey: '',
+          circuits: [{ zoneKey: '', lengthFt: Number.NaN, liftFt: 0 }],
+          electrical: { circuitLengthFt: Number.NaN },
+        })
+      }
+      onRemove={(s) => systems.remove(s)}
+      rowClassName="flex flex-col gap-3"
+    >
+      {(s) => (
+        <>
           <div className="grid gap-3 lg:grid-cols-[1fr_2fr_1fr]">
             <TextField name={`systems.${s}.name`} label="System name" autoComplete="off" />
             <SelectField
@@ -122,36 +266,17 @@ function Systems({ models, disabled }: { models: readonly DeskModel[]; disabled:
             <AmountField name={`systems.${s}.electrical.circuitLengthFt`} label="Branch circuit length (ft)" />
           </div>
           <Circuits s={s} />
-          {systems.fields.length > 1 ? (
-            <Button variant="ghost" className="self-start" onClick={() => systems.remove(s)}>
-              Remove this system
-            </Button>
-          ) : null}
-        </div>
-      ))}
-      <Button
-        variant="secondary"
-        className="self-start"
-        onClick={() =>
-          systems.append({
-            key: nextKey('sys', keys),
-            name: `Outdoor unit ${systems.fields.length + 1}`,
-            outdoorUnitKey: '',
-            circuits: [{ zoneKey: '', lengthFt: Number.NaN, liftFt: 0 }],
-            electrical: { circuitLengthFt: Number.NaN },
-          })
-        }
-      >
-        Add a system
-      </Button>
-    </fieldset>
+          <DuctsAndHeat s={s} models={models} whys={whys} />
+        </>
+      )}
+    </RowList>
   );
 }
 
 /**
  * The option's design: zones of rooms with their indoor unit, systems with their outdoor unit, circuits
- * (length, lift) and branch circuit. Checked with calc's design schema (the server's), saved with If-Match;
- * the server works out every number from what it stored.
+ * (length, lift), branch circuit, and for a ducted system its ducts and heat kit. Checked with calc's design
+ * schema (the server's), saved with If-Match; the server works out every number from what it stored.
  */
 export function DesignForm({
   jobId,
@@ -159,12 +284,14 @@ export function DesignForm({
   rooms,
   models,
   canEdit,
+  whys,
 }: {
   jobId: string;
   option: OptionRecord;
   rooms: readonly RoomRecord[];
   models: readonly DeskModel[];
   canEdit: boolean;
+  whys: ReadonlyMap<string, ExplanationView>;
 }) {
   const update = useUpdateOption(jobId);
   const [savedVersion, setSavedVersion] = useState<number | null>(null);
@@ -175,9 +302,11 @@ export function DesignForm({
       aria-label={`Design of ${option.name}`}
       onSubmit={async (design, form) => {
         const sent = JSON.stringify(form.getValues());
-        const saved = await update.mutateAsync({ option, changes: { design } });
+        const saved = await update.mutateAsync({ option, changes: { design } }).catch((e: unknown) => {
+          throw errorOnFields(e, 'design');
+        });
         // What was typed while the save was on its way stays (and stays unsaved); otherwise the form
-        // shows what the server stored (a discount beyond the limit is not applied, for one).
+        // shows what the server stored.
         const typedMeanwhile = JSON.stringify(form.getValues()) !== sent;
         form.reset(designValues(saved), { keepDirtyValues: typedMeanwhile });
         setSavedVersion(saved.version);
@@ -186,7 +315,7 @@ export function DesignForm({
       {(form) => (
         <>
           <Zones rooms={rooms} models={models} disabled={!canEdit} />
-          <Systems models={models} disabled={!canEdit} />
+          <Systems models={models} disabled={!canEdit} whys={whys} />
           {canEdit ? (
             <SaveState
               label="Save design"

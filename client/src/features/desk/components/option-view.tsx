@@ -94,6 +94,8 @@ export function OptionView({
   };
   const view = option.result ? viewOf(option.result) : null;
   const whys = whysOf(option);
+  // The systems' own whys (backup heat, duct loads), for the design form to show beside the heat kit.
+  const systemWhys = new Map((view?.systems ?? []).flatMap((s) => s.explanations.map((x) => [x.key, x] as const)));
   return (
     <div className="flex flex-col gap-4">
       <FirstPriceReview jobId={jobId} option={option} viewer={viewer} />
@@ -147,6 +149,7 @@ export function OptionView({
               rooms={rooms}
               models={models}
               canEdit={canEdit}
+              whys={systemWhys}
             />
           </Card>
           {office ? (

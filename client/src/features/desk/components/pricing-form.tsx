@@ -4,14 +4,9 @@ import { TAX_RULE_LABELS, TAX_RULES } from '@calc';
 import type { OptionRecord } from '@contract';
 import { Form } from '../../../components/ui/form';
 import { SelectField, TextField } from '../../../components/ui/form-fields';
-import { ApiError, isApiError } from '../../../lib/api-error';
+import { errorOnFields } from '../model/field-paths';
 import { useUpdateOption } from '../api/update-option';
-import {
-  pricingFieldPath,
-  pricingFormSchema,
-  pricingFormValues,
-  type PricingFormValues,
-} from '../model/pricing-values';
+import { pricingFormSchema, pricingFormValues, type PricingFormValues } from '../model/pricing-values';
 import { AmountField } from './amount-field';
 import { RowList } from './row-list';
 import { SaveState } from './save-state';
@@ -86,19 +81,6 @@ function TaxFields() {
   );
 }
 
-/** The server's field errors on the PATCH body (pricing.…) re-rooted onto this form's fields. */
-function onFormPaths(e: unknown): unknown {
-  if (!isApiError(e)) return e;
-  return new ApiError({
-    status: e.status,
-    code: e.code,
-    title: e.title,
-    detail: e.detail,
-    errors: e.errors.map((x) => ({ path: pricingFieldPath(x.path), message: x.message })),
-    retryAfter: e.retryAfter,
-  });
-}
-
 /**
  * Markup or margin (the company's rule unless set here), discounts and the deposit as a percent or an
  * amount, the option's own tax (exempt or another rate, with the reason) and the financing plan shown.
@@ -124,7 +106,7 @@ export function PricingForm({
       onSubmit={async (pricing, form) => {
         const sent = JSON.stringify(form.getValues());
         const saved = await update.mutateAsync({ option, changes: { pricing } }).catch((e: unknown) => {
-          throw onFormPaths(e);
+          throw errorOnFields(e, 'pricing');
         });
         // What was typed while the save was on its way stays (and stays unsaved); otherwise the form
         // shows what the server stored (a discount beyond the limit is not applied, for one).

@@ -34,3 +34,16 @@ export const modelOptions = (models: readonly DeskModel[], outdoor: boolean) => 
     .filter((m) => (outdoor ? m.kind.startsWith('outdoor') : m.kind === 'indoor'))
     .map((m) => ({ value: m.key, label: `${m.key} — ${m.name}` })),
 ];
+
+/** Indoor units whose air goes through ducts (their system may carry ducts and a heat kit). */
+export const DUCTED_INDOOR_TYPES: readonly string[] = ['slim-ducted', 'air-handler'];
+
+export const heatKitOptions = (models: readonly DeskModel[]) => [
+  { value: '', label: 'No heat kit' },
+  ...models
+    .filter((m) => m.kind === 'heat-kit')
+    .map((m) => ({
+      value: m.key,
+      label: `${m.key} — ${m.name}${m.heatKitKw === null ? '' : ` (${m.heatKitKw} kW)`}`,
+    })),
+];

@@ -110,6 +110,3 @@ export function pricingFormValues(option: Pick<OptionRecord, 'pricing'>): Pricin
     financingPlanKey: p.financingPlanKey ?? '',
   };
 }
-
-/** A server error's path on the PATCH body ("pricing.discounts.0.value") as the form's field ("discounts.0.value"). */
-export const pricingFieldPath = (path: string): string => path.replace(/^pricing\./, '');

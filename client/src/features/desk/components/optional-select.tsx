@@ -1,0 +1,49 @@
+import { useId } from 'react';
+import { useController, useFormContext } from 'react-hook-form';
+import { FieldShell, inputClass } from '../../../components/ui/field-shell';
+
+/**
+ * A select for an optional field: its first choice ('') leaves the field out (undefined), as calc's schema
+ * wants for "no heat kit", "no ducts" or "the zone's first room"; `onPick` may set more than the field.
+ */
+export function OptionalSelect({
+  name,
+  label,
+  hint,
+  options,
+  toValue = (v) => (v === '' ? undefined : v),
+  fromValue = (v) => (typeof v === 'string' ? v : ''),
+}: {
+  name: string;
+  label: string;
+  hint?: string;
+  options: readonly { value: string; label: string }[];
+  toValue?: (chosen: string, current: unknown) => unknown;
+  fromValue?: (value: unknown) => string;
+}) {
+  const id = useId();
+  const { control } = useFormContext();
+  const { field, fieldState } = useController({ name, control });
+  const error = fieldState.error?.message;
+  return (
+    <FieldShell id={id} label={label} hint={hint} error={error}>
+      <select
+        id={id}
+        ref={field.ref}
+        name={field.name}
+        className={inputClass}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
+        value={fromValue(field.value)}
+        onChange={(e) => field.onChange(toValue(e.target.value, field.value))}
+        onBlur={field.onBlur}
+      >
+        {options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+    </FieldShell>
+  );
+}

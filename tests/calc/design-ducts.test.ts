@@ -1,0 +1,69 @@
+import { describe, expect, it } from 'vitest';
+import { CalcError, computeDesign, homeLoad, type DesignInput, type HomeInput } from '@calc';
+import { catalog, design, priceBook, pricing, threeRoomHome } from './sample-data';
+
+/** The sample design with its one system ducted (as an air handler's would be). */
+const ducted = (ducts: NonNullable<DesignInput['systems'][number]['ducts']>): DesignInput => ({
+  ...design,
+  systems: design.systems.map((s) => ({ ...s, ducts })),
+});
+const run = (d: DesignInput, home: HomeInput = threeRoomHome) =>
+  computeDesign({ home, design: d, catalog, priceBook, pricing });
+const allRooms = ['living', 'bed', 'kitchen'];
+
+describe('a ducted system’s ducts feed this option’s loads', () => {
+  it('attic ducts on the system give the loads of the duct method with those ducts on the rooms the system serves', () => {
+    const ducts = { location: 'attic' as const, insulationR: 6, leakage: 'typical' as const };
+    const withDucts = run(ducted(ducts));
+    // The same ducts entered on the walk-through's home for the same rooms: the method checked in ducts.test.ts
+    // (ASHRAE 152 delivery effectiveness against an energy balance marched through the ducts).
+    const walked = run(design, { ...threeRoomHome, ducts: { ...ducts, roomIds: allRooms } });
+    expect(withDucts.zones).toEqual(walked.zones);
+    expect(withDucts.systems[0]?.sizing).toEqual(walked.systems[0]?.sizing);
+    // Attic air above the outdoor design temperature in the afternoon (ASHRAE 152): the ducts add gain.
+    const bare = run(design);
+    expect(withDucts.loads.block.sensibleBtuh).toBeGreaterThan(bare.loads.block.sensibleBtuh);
+    // The desk's line says the duct figures of the method, on the system.
+    const method = homeLoad({ home: { ...threeRoomHome, ducts: { ...ducts, roomIds: allRooms } } }).ducts;
+    const why = withDucts.systems[0]?.explanations.find((e) => e.key === 's1:ducts');
+    expect(why?.value).toBe(Math.round(method?.cooling.sensibleBtuh ?? Number.NaN));
+    expect(why?.label).toBe('Duct loads, Main system (ducts in the attic, R-6)');
+    expect(why?.status).toBe('note');
+  });
+
+  it('ducts inside the conditioned space change nothing (ASHRAE 152: what they lose stays in the house)', () => {
+    const inside = run(ducted({ location: 'conditioned', insulationR: 6, leakage: 'typical' }));
+    expect(inside.zones).toEqual(run(design).zones);
+  });
+
+  it('the option’s ducts stand in for the walk-through’s: a ductless option keeps the walk-through’s', () => {
+    const home = { ...threeRoomHome, ducts: { location: 'garage' as const, insulationR: 4 } };
+    const attic = { location: 'attic' as const, insulationR: 8, leakage: 'sealed' as const };
+    expect(run(ducted(attic), home).zones).toEqual(
+      run(design, { ...threeRoomHome, ducts: { ...attic, roomIds: allRooms } }).zones,
+    );
+    expect(run(design, home).loads.ducts?.location).toBe('garage');
+  });
+
+  it('refuses two ducted systems in one option, on the second one’s ducts', () => {
+    const [first] = design.systems;
+    if (!first) throw new Error('sample design has a system');
+    const two: DesignInput = {
+      ...design,
+      systems: [
+        { ...first, circuits: first.circuits.slice(0, 1), ducts: { location: 'attic' } },
+        { ...first, key: 's2', name: 'Second', circuits: first.circuits.slice(1), ducts: { location: 'garage' } },
+      ],
+    };
+    let thrown: unknown;
+    try {
+      run(two);
+    } catch (e) {
+      thrown = e;
+    }
+    expect(thrown).toBeInstanceOf(CalcError);
+    expect((thrown as CalcError).details).toEqual([
+      { path: ['systems', 1, 'ducts'], message: 'One ducted system per option: the loads count one set of ducts' },
+    ]);
+  });
+});

@@ -1,8 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoAccounts } from '../../fixtures/seed';
-import { axeViolations } from './axe';
+import { account, expectAccessible, jobWithRooms, pickFirst } from './desk-helpers';
 import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
 
 let e: E2E;
@@ -10,57 +9,6 @@ beforeAll(async () => {
   e = await startE2E();
 });
 afterAll(async () => e?.close());
-
-const account = (role: string) => {
-  const a = demoAccounts.find((x) => x.role === role && x.company.startsWith('Larkspur'));
-  if (!a) throw new Error(`no demo ${role}`);
-  return a;
-};
-
-/**
- * A demo job with rooms and no options (the journey builds its own). When every such job already holds
- * options (an earlier run on the same database), the newest one's options are deleted through the API.
- */
-async function jobWithRooms(page: Page): Promise<string> {
-  const list = (await (await page.request.get('/api/jobs?page=1&pageSize=50')).json()) as {
-    items: { id: string; status: string }[];
-  };
-  const candidates: { id: string; options: { id: string; version: number }[] }[] = [];
-  for (const j of list.items) {
-    if (j.status !== 'walkthrough' && j.status !== 'design') continue;
-    const rooms = (await (await page.request.get(`/api/jobs/${j.id}/rooms`)).json()) as { rooms: unknown[] };
-    const desk = (await (await page.request.get(`/api/jobs/${j.id}/desk`)).json()) as {
-      options: { id: string; version: number }[];
-    };
-    if (rooms.rooms.length === 0) continue;
-    if (desk.options.length === 0) return j.id;
-    candidates.push({ id: j.id, options: desk.options });
-  }
-  const reuse = candidates[0];
-  if (!reuse) throw new Error('no demo job with rooms');
-  const csrf = ((await (await page.request.get('/api/auth/csrf')).json()) as { token: string }).token;
-  for (const o of reuse.options) {
-    const gone = await page.request.delete(`/api/jobs/${reuse.id}/options/${o.id}`, {
-      headers: { 'X-CSRF-Token': csrf, 'If-Match': `"${o.version}"` },
-    });
-    expect(gone.status(), await gone.text()).toBe(204);
-  }
-  return reuse.id;
-}
-
-async function expectAccessible(page: Page) {
-  const found = await axeViolations(page);
-  expect(found, JSON.stringify(found, null, 2)).toEqual([]);
-}
-
-/** Picks the first real choice of a select (the first option is the "Choose …" prompt). */
-async function pickFirst(page: Page, label: string) {
-  const select = page.getByLabel(label).first();
-  const values = await select.locator('option').evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value));
-  const value = values.find((v) => v !== '');
-  if (!value) throw new Error(`nothing to choose in ${label}`);
-  await select.selectOption(value);
-}
 
 describe('the estimator’s desk', () => {
   it('an estimator at 1440 px builds an option, sees the charge change with the line length, prices it, a discount beyond the limit waits for the owner, copies it and compares', async () => {
@@ -254,5 +202,18 @@ describe('a first price before leaving', () => {
     };
     expect(desk.options.map((o) => o.preliminary)).toEqual([true]);
     await context.close();
+
+    // The office reviews it: the preliminary mark goes and the desk says who reviewed it and when.
+    const est = account('estimator');
+    const office = await e.newPage(DESKTOP);
+    await signIn(office.page, est.email, est.password);
+    await office.page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    await office.page.goto(`/jobs/${jobId}/desk`);
+    await office.page.getByText('Preliminary', { exact: true }).waitFor();
+    await office.page.getByRole('button', { name: 'Review first price' }).click();
+    await office.page.getByText(/^First price from the walk-through, reviewed by .+ on /).waitFor();
+    expect(await office.page.getByRole('button', { name: 'Review first price' }).count()).toBe(0);
+    await expectAccessible(office.page);
+    await office.context.close();
   });
 });

@@ -84,6 +84,35 @@ describe('bad input: problem+json with field paths, nothing stored', () => {
     });
     expectProblem(noKit, 400);
     expect(noKit.body.errors[0].path).toBe('design.systems.0.heatKitKey');
+    const ducted = singleZone(rooms[0] ?? '');
+    const sys = ducted.systems[0];
+    const twoDucted = await patch(estimator, url, o.version).send({
+      design: {
+        ...ducted,
+        systems: [
+          { ...sys, ducts: { location: 'attic' } },
+          { ...sys, key: 'sys-2', name: 'Second', ducts: { location: 'bathtub' } },
+        ],
+      },
+    });
+    expectProblem(twoDucted, 400);
+    expect(twoDucted.body.errors).toContainEqual({
+      path: 'design.systems.1.ducts.location',
+      message: 'Choose where the ducts run',
+    });
+    const twoValid = await patch(estimator, url, o.version).send({
+      design: {
+        ...ducted,
+        systems: [
+          { ...sys, ducts: { location: 'attic' } },
+          { ...sys, key: 'sys-2', name: 'Second', ducts: { location: 'garage' } },
+        ],
+      },
+    });
+    expect(twoValid.body.errors).toContainEqual({
+      path: 'design.systems.1.ducts',
+      message: 'One ducted system per option: the loads count one set of ducts',
+    });
     const ghost = singleZone('00000000-0000-4000-8000-000000000000');
     const noRoom = await patch(estimator, url, o.version).send({ design: ghost });
     expectProblem(noRoom, 400);
@@ -130,6 +159,27 @@ describe('bad input: problem+json with field paths, nothing stored', () => {
     expectProblem(sneaky, 400);
     const read = await estimator.agent.get(url);
     expect(read.body.option.result.price.totalCents).toBeGreaterThan(100_000);
+  });
+});
+
+describe('ducted systems', () => {
+  it('a ducted system’s ducts are stored with the design and their loads explained on the system', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const plain = singleZone(rooms[0] ?? '');
+    const o = await newOption(estimator, job.id, { name: 'Essential', design: plain });
+    const url = `/api/jobs/${job.id}/options/${o.id}`;
+    const ducts = { location: 'attic', insulationR: 6, leakage: 'typical' };
+    const r = await patch(estimator, url, o.version).send({
+      design: { ...plain, systems: [{ ...plain.systems[0], ducts }] },
+    });
+    expect(r.status, JSON.stringify(r.body)).toBe(200);
+    expect(r.body.option.design.systems[0].ducts).toEqual(ducts);
+    const why = r.body.option.result.systems[0].explanations.find((e: { key: string }) => e.key === 's1:ducts');
+    expect(why.label).toMatch(/^Duct loads, .* \(ducts in the attic, R-6\)$/);
+    // Attic ducts add gain to the rooms they serve (ASHRAE 152: attic air above the room in the afternoon).
+    const load = (x: { body: { option: { result: { zones: { sizing: { coolingLoadBtuh: number } }[] } } } }) =>
+      x.body.option.result.zones[0]?.sizing.coolingLoadBtuh ?? Number.NaN;
+    expect(load(r)).toBeGreaterThan(load({ body: { option: o } as never }));
   });
 });
 

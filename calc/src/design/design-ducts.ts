@@ -3,7 +3,7 @@ import { explanation, input, type Explanation } from '../explain/explanation';
 import { formatNumber, formatQuantity } from '../explain/format';
 import type { HomeDucts } from '../loads/home-ducts';
 import { roundHalfUp } from '../rounding';
-import type { Design } from '../schemas/design';
+import { ONE_DUCTED_SYSTEM, type Design } from '../schemas/design';
 import type { DuctLocation } from '../schemas/ducts';
 import type { Home } from '../schemas/home';
 
@@ -31,7 +31,7 @@ export function homeWithDesignDucts(home: Home, design: Design): { home: Home; s
     throw new CalcError('INVALID_INPUT', [
       {
         path: ['systems', second.i, 'ducts'],
-        message: 'One ducted system per option: the loads count one set of ducts',
+        message: ONE_DUCTED_SYSTEM,
       },
     ]);
   const zones = new Set(first.s.circuits.map((c) => c.zoneKey));

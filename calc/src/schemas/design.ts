@@ -82,18 +82,28 @@ export const systemSchema = z.object({
   ducts: systemDuctsSchema.optional(),
 });
 
+export const ONE_DUCTED_SYSTEM = 'One ducted system per option: the loads count one set of ducts';
+
 /** The design: zones and systems. */
-export const designSchema = z.object({
-  zones: z.array(zoneSchema).min(1, 'Add at least one zone').max(40, 'At most 40 zones'),
-  systems: z.array(systemSchema).min(1, 'Add at least one system').max(10, 'At most 10 systems'),
-  /** Planned install date (YYYY-MM-DD), for dated refrigerant rules; calc has no clock, so the caller gives it. */
-  installDate: z
-    .string()
-    .regex(/^\d{4}-\d{2}-\d{2}$/, 'Install date must be written YYYY-MM-DD')
-    .optional(),
-  /** All the system's components were made or imported before 1 Jan 2025 (the rule's one-year allowance). */
-  componentsMadeBefore2025: z.boolean().optional(),
-});
+export const designSchema = z
+  .object({
+    zones: z.array(zoneSchema).min(1, 'Add at least one zone').max(40, 'At most 40 zones'),
+    systems: z.array(systemSchema).min(1, 'Add at least one system').max(10, 'At most 10 systems'),
+    /** Planned install date (YYYY-MM-DD), for dated refrigerant rules; calc has no clock, so the caller gives it. */
+    installDate: z
+      .string()
+      .regex(/^\d{4}-\d{2}-\d{2}$/, 'Install date must be written YYYY-MM-DD')
+      .optional(),
+    /** All the system's components were made or imported before 1 Jan 2025 (the rule's one-year allowance). */
+    componentsMadeBefore2025: z.boolean().optional(),
+  })
+  .superRefine((d, ctx) => {
+    // The load method carries one set of ducts (loads/home-ducts.ts): one ducted system per option.
+    d.systems.forEach((s, i) => {
+      if (s.ducts && d.systems.findIndex((x) => x.ducts) !== i)
+        ctx.addIssue({ code: 'custom', path: ['systems', i, 'ducts'], message: ONE_DUCTED_SYSTEM });
+    });
+  });
 
 export type Zone = z.output<typeof zoneSchema>;
 export type Circuit = z.output<typeof circuitSchema>;

@@ -22,7 +22,7 @@ import { OptionView } from './option-view';
 
 export const deskParams = z.object({ jobId: z.uuid({ message: 'That is not a job address.' }) });
 
-function NewOption({ jobId, count }: { jobId: string; count: number }) {
+function NewOption({ jobId, count, onCreated }: { jobId: string; count: number; onCreated: (id: string) => void }) {
   const create = useCreateOption(jobId);
   const [name, setName] = useState('');
   if (count >= MAX_OPTIONS) return null;
@@ -31,7 +31,16 @@ function NewOption({ jobId, count }: { jobId: string; count: number }) {
       className="flex flex-wrap items-end gap-2"
       onSubmit={(e) => {
         e.preventDefault();
-        create.mutate({ name: name.trim() }, { onSuccess: () => setName('') });
+        // The new option opens at once: it is what the person is about to design.
+        create.mutate(
+          { name: name.trim() },
+          {
+            onSuccess: (option) => {
+              setName('');
+              onCreated(option.id);
+            },
+          },
+        );
       }}
     >
       <label className="flex flex-col gap-1 text-sm font-semibold text-ink-900">
@@ -138,7 +147,9 @@ export function DeskPage() {
           ))}
         </div>
       )}
-      {mayEditOptions(viewer.role) ? <NewOption jobId={jobId} count={desk.options.length} /> : null}
+      {mayEditOptions(viewer.role) ? (
+        <NewOption jobId={jobId} count={desk.options.length} onCreated={setPicked} />
+      ) : null}
       {current ? (
         <div role="tabpanel" aria-label={current.name}>
           <OptionView

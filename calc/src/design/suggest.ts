@@ -4,7 +4,8 @@ import { explanation, type Explanation } from '../explain/explanation';
 import { formatPercent, formatQuantity } from '../explain/format';
 import { coincidentLoad, homeLoadFromParsed, type HomeLoad } from '../loads/home-load';
 import { parseOrThrow } from '../parse';
-import type { DesignInput } from '../schemas/design';
+import type { CircuitInput, DesignInput } from '../schemas/design';
+import { floorAreaFt2 } from '../geometry';
 import type { IndoorUnit, OutdoorUnit } from '../schemas/equipment';
 import { homeInputSchema, type HomeInput } from '../schemas/home';
 import { checkCombination, checkSizing, type LoadToMeet, type SizingCheck } from '../sizing/match';
@@ -134,13 +135,43 @@ function reason(key: string, who: string, p: Chosen<IndoorUnit | OutdoorUnit>, w
   });
 }
 
+/** A zone the estimator already has: its rooms, and what the A2L check needs to know of them (kept as given). */
+export interface GivenZone {
+  readonly key: string;
+  readonly name: string;
+  readonly roomIds: readonly string[];
+  readonly headRoomId?: string;
+  readonly openSpace?: boolean;
+  readonly lowestDuctOpeningFt?: number;
+}
+
 /**
- * Suggests equipment from the active catalog for a home (issue 13, "suggest"): zones by the grouping
- * rule above (or the ones given), for each zone the smallest active head within the sizing range at
- * the job's design temperatures; then one multi-zone outdoor unit for all zones when one fits (ports,
- * port sizes, connected %, sizing on the coincident load of every room) — the smallest such — else a
- * single-zone pair per zone. Candidates are ordered by nominal size, cost, then key, so the same
- * inputs always give the same suggestion. Runs default to SUGGEST_LINE_FT.
+ * A single room at least this large (ft²) gets a ceiling cassette when the catalog has one in range.
+ * [OWN: common practice — a four-way cassette spreads air over a large open room better than a wall head]
+ */
+export const CASSETTE_MIN_FT2 = 300;
+
+/** Btu/h per kW of electric heat. [PUB: 1 W = 3.412 142 Btu/h, the IT Btu definition] */
+const BTUH_PER_KW = 3412.142;
+
+type HeadKind = 'ducted' | 'cassette' | 'wall';
+
+/**
+ * Suggests equipment from the active catalog for a home (issue 13, "suggest"):
+ * - Ducted: the rooms the home's ducts serve (house.ducts, all rooms when it names none), and any zone no
+ *   ductless head can meet, go on a ducted heat pump — the smallest in range on their coincident load —
+ *   with the air handler it is matched with; when the heat pump falls short of the heat loss at the
+ *   design temperature, the smallest matched heat kit that covers the shortfall.
+ * - Ductless: zones by the grouping rule above (or the ones given). Each zone's head: a slim ducted
+ *   unit for a zone of several closed rooms (a wall head's air does not reach a closed room — common
+ *   practice), a ceiling cassette for one room of at least CASSETTE_MIN_FT2, else a wall head — the
+ *   smallest of that kind in range, a wall head when none of the kind is. Then multi-zone outdoor
+ *   units: one for all zones when one fits (ports, port sizes, connected %, sizing on the coincident
+ *   load of its rooms) — the smallest such — else two, three… units over consecutive zones; else a
+ *   single-zone pair per zone, with why no multi-zone unit took them.
+ * Candidates are ordered by nominal size, cost, then key, so the same inputs always give the same
+ * suggestion. A circuit the estimator already entered for a zone (`circuits`) is kept as entered; new
+ * ones run SUGGEST_LINE_FT.
  */
 export function suggestDesign({
   home: homeIn,
@@ -148,12 +179,14 @@ export function suggestDesign({
   policy = DEFAULT_SIZING_POLICY,
   zones: givenZones,
   lineLengthFt = SUGGEST_LINE_FT,
+  circuits: entered = [],
 }: {
   readonly home: HomeInput;
   readonly models: readonly CatalogModel[];
   readonly policy?: SizingPolicy;
-  readonly zones?: readonly { readonly key: string; readonly name: string; readonly roomIds: readonly string[] }[];
+  readonly zones?: readonly GivenZone[];
   readonly lineLengthFt?: number;
+  readonly circuits?: readonly CircuitInput[];
 }): Suggestion {
   const home = parseOrThrow(homeInputSchema, homeIn);
   const loads = homeLoadFromParsed(home);
@@ -163,37 +196,172 @@ export function suggestDesign({
   const engine = designCatalogFromModels(active);
   const indoorByKey = new Map(engine.indoorUnits.map((u) => [u.key, u]));
   const outdoorByKey = new Map(engine.outdoorUnits.map((u) => [u.key, u]));
+  const roomsById = new Map(home.rooms.map((r) => [r.id, r]));
   const pairOf = (m: CatalogModel) =>
     m.matchedKeys.map((k) => active.find((o) => o.key === k)).find((o) => o?.kind === 'outdoor-single-zone');
-  const walls = active.filter((m) => m.kind === 'indoor' && (m.indoorType === 'wall' || m.indoorType === undefined));
-  const multiHeads = walls.filter((m) => pairOf(m) === undefined);
+  const kindOf = (m: CatalogModel): HeadKind | null =>
+    m.indoorType === 'slim-ducted'
+      ? 'ducted'
+      : m.indoorType === 'ceiling-cassette'
+        ? 'cassette'
+        : m.indoorType === 'wall' || m.indoorType === undefined
+          ? 'wall'
+          : null;
+  const heads = active.filter((m) => m.kind === 'indoor' && kindOf(m) !== null);
   const headsOf = (list: CatalogModel[]) =>
     list.flatMap((m) => {
       const unit = indoorByKey.get(m.key);
       return unit ? [{ model: m, unit }] : [];
     });
-  const smallest = headsOf(multiHeads)[0] ?? headsOf(walls)[0];
+  const walls = heads.filter((m) => kindOf(m) === 'wall');
+  const multiHeads = heads.filter((m) => pairOf(m) === undefined);
+  const smallest = headsOf(walls.filter((m) => pairOf(m) === undefined))[0] ?? headsOf(walls)[0];
   const minZone = smallest ? (smallest.model.minCoolingBtuh ?? smallest.unit.nominalBtuh * HEAD_TURNDOWN) : 0;
-  const zones: ZoneDraft[] = givenZones
-    ? givenZones.map((z) => ({ key: z.key, name: z.name, roomIds: [...z.roomIds], load: loadOf(loads, z.roomIds) }))
-    : groupRooms(loads, home, minZone);
   const reasons: Explanation[] = [];
   const warnings: string[] = [];
   const electrical = { circuitLengthFt: 30 };
-  const circuit = (zoneKey: string) => ({ zoneKey, lengthFt: lineLengthFt });
-  // Multi-zone: heads for each zone, then the smallest outdoor unit that takes them and meets the whole load.
-  if (zones.length > 1) {
-    const heads = zones.map((z) => choose(headsOf(multiHeads), z.load, designF, policy));
+  const enteredByZone = new Map(entered.map((c) => [c.zoneKey, c]));
+  const circuit = (zoneKey: string): CircuitInput => enteredByZone.get(zoneKey) ?? { zoneKey, lengthFt: lineLengthFt };
+  const zoneInput = (z: ZoneDraft & { given?: GivenZone }, indoorUnitKey: string): DesignInput['zones'][number] => ({
+    key: z.key,
+    name: z.name,
+    roomIds: z.roomIds,
+    indoorUnitKey,
+    ...(z.given?.headRoomId !== undefined ? { headRoomId: z.given.headRoomId } : {}),
+    ...(z.given?.openSpace !== undefined ? { openSpace: z.given.openSpace } : {}),
+    ...(z.given?.lowestDuctOpeningFt !== undefined ? { lowestDuctOpeningFt: z.given.lowestDuctOpeningFt } : {}),
+  });
+  const dz: DesignInput['zones'] = [];
+  const ds: DesignInput['systems'] = [];
+  const systemKey = () => `s${ds.length + 1}`;
+  /** The suggestion, saying which ducted zones still need their lowest duct opening for the A2L check. */
+  const finish = (): Suggestion => {
+    for (const z of dz) {
+      const t = active.find((m) => m.key === z.indoorUnitKey)?.indoorType;
+      if ((t === 'slim-ducted' || t === 'air-handler') && z.lowestDuctOpeningFt === undefined)
+        warnings.push(
+          `Enter the height of the lowest duct opening for ${z.name}: until then the A2L room-size check takes 0.6 m, the least the standard allows.`,
+        );
+    }
+    return { design: { zones: dz, systems: ds }, reasons, warnings };
+  };
+
+  // The rooms a ducted system serves: the home's ducts (house.ducts), else none.
+  const ductRooms = home.ducts ? (home.ducts.roomIds ?? home.rooms.map((r) => r.id)) : [];
+  let zones: Array<ZoneDraft & { given?: GivenZone }> = givenZones
+    ? givenZones.map((z) => ({
+        key: z.key,
+        name: z.name,
+        roomIds: [...z.roomIds],
+        load: loadOf(loads, z.roomIds),
+        given: z,
+      }))
+    : groupRooms(loads, { ...home, rooms: home.rooms.filter((r) => !ductRooms.includes(r.id)) }, minZone);
+  if (!givenZones && ductRooms.length > 0)
+    zones = [
+      {
+        key: 'zd',
+        name: 'Ducted rooms',
+        roomIds: ductRooms.filter((id) => roomsById.has(id)),
+        load: loadOf(loads, ductRooms),
+      },
+      ...zones,
+    ];
+
+  // Ducted heat pumps with their air handlers (and heat kits) for the ducted rooms and zones too big for any head.
+  const largestHead = Math.max(0, ...headsOf(heads).map((h) => h.unit.nominalBtuh));
+  const ductedOutdoors = active.filter((m) => m.kind === 'outdoor-ducted');
+  const airHandlers = active.filter((m) => m.kind === 'indoor' && m.indoorType === 'air-handler');
+  const ducted = (z: ZoneDraft & { given?: GivenZone }): boolean => {
+    const candidates = ductedOutdoors.flatMap((o) => {
+      const unit = outdoorByKey.get(o.key);
+      const handler = airHandlers.find((a) => o.matchedKeys.includes(a.key) || a.matchedKeys.includes(o.key));
+      return unit && handler ? [{ model: o, unit, handler }] : [];
+    });
+    const p = choose(candidates, z.load, designF, policy);
+    if (!p || !p.sizing.withinRange) return false;
+    const handler = candidates.find((c) => c.model.key === p.model.key)?.handler;
+    if (!handler) return false;
+    const key = systemKey();
+    let heatKitKey: string | undefined;
+    const capacity = p.sizing.heatingCapacityBtuh;
+    const shortfall = capacity === null ? 0 : z.load.heatingBtuh - capacity;
+    if (shortfall > 0) {
+      const kits = active
+        .filter((k) => k.kind === 'heat-kit' && k.heatKitKw !== undefined && k.matchedKeys.includes(handler.key))
+        .sort((a, b) => (a.heatKitKw ?? 0) - (b.heatKitKw ?? 0) || byNominal(a, b));
+      const kit = kits.find((k) => (k.heatKitKw ?? 0) * BTUH_PER_KW >= shortfall) ?? kits[kits.length - 1];
+      if (kit) {
+        heatKitKey = kit.key;
+        reasons.push(
+          explanation({
+            key: `suggest:${key}:heat-kit`,
+            label: `Backup heat for ${z.name}`,
+            value: kit.heatKitKw ?? 0,
+            unit: 'kW',
+            valueText: kit.name,
+            text: `${btuh(z.load.heatingBtuh)} heat loss − ${btuh(capacity ?? 0)} from ${p.model.name} at ${designF.heating} °F = ${btuh(shortfall)} short; ${kit.name}: ${formatQuantity(kit.heatKitKw ?? 0, 'kW')} × 3,412 = ${btuh((kit.heatKitKw ?? 0) * BTUH_PER_KW)}`,
+            status: (kit.heatKitKw ?? 0) * BTUH_PER_KW >= shortfall ? 'ok' : 'warning',
+            source: 'Active catalog; 1 W = 3.412 Btu/h',
+          }),
+        );
+      } else
+        warnings.push(
+          `${p.model.name} falls ${btuh(shortfall)} short of the heat loss of ${z.name} at ${designF.heating} °F, and no heat kit in the catalog fits ${handler.name}.`,
+        );
+    }
+    reasons.push(reason(`suggest:${z.key}`, z.name, p, `the smallest ducted heat pump in range, with ${handler.name}`));
+    dz.push(zoneInput(z, handler.key));
+    ds.push({
+      key,
+      name: `${z.name} ducted system`.slice(0, 80),
+      outdoorUnitKey: p.model.key,
+      circuits: [circuit(z.key)],
+      electrical,
+      ...(heatKitKey ? { heatKitKey } : {}),
+    });
+    return true;
+  };
+  zones = zones.filter((z) => {
+    const wantsDucts =
+      z.roomIds.every((id) => ductRooms.includes(id)) || z.load.sensibleBtuh + z.load.latentBtuh > largestHead * 1.3;
+    return !(wantsDucts && ducted(z));
+  });
+
+  // Ductless: the kind of head that suits each zone, the smallest of it in range.
+  const areaOf = (z: ZoneDraft) => z.roomIds.reduce((sum, id) => sum + floorAreaFt2(roomsById.get(id) ?? {}), 0);
+  const suits = (z: ZoneDraft & { given?: GivenZone }): HeadKind =>
+    z.roomIds.length > 1 && z.given?.openSpace !== true
+      ? 'ducted'
+      : areaOf(z) >= CASSETTE_MIN_FT2
+        ? 'cassette'
+        : 'wall';
+  const pick = <U extends IndoorUnit | OutdoorUnit>(
+    z: ZoneDraft & { given?: GivenZone },
+    options: (kind: HeadKind) => readonly { model: CatalogModel; unit: U }[],
+  ): Chosen<U> | null => {
+    const kind = suits(z);
+    const first = choose(options(kind), z.load, designF, policy);
+    if (first?.sizing.withinRange || kind === 'wall') return first ?? choose(options('wall'), z.load, designF, policy);
+    const wall = choose(options('wall'), z.load, designF, policy);
+    return wall?.sizing.withinRange ? wall : (first ?? wall);
+  };
+  const refusals: string[] = [];
+  /** The smallest multi-zone unit for these zones' heads, or null (its refusals kept). */
+  const multiFor = (group: typeof zones, chosen: Array<Chosen<IndoorUnit> | null>) => {
+    if (chosen.some((h) => h === null)) return null;
     const all = loadOf(
       loads,
-      zones.flatMap((z) => z.roomIds),
+      group.flatMap((z) => z.roomIds),
     );
-    const outdoors = active.filter((m) => m.kind === 'outdoor-multi-zone' && (m.ports ?? 0) >= zones.length);
-    for (const m of outdoors) {
+    for (const m of active.filter((x) => x.kind === 'outdoor-multi-zone')) {
       const unit = outdoorByKey.get(m.key);
-      if (!unit || heads.some((h) => h === null)) continue;
-      const combo = checkCombination({ outdoor: unit, indoor: heads.flatMap((h) => (h ? [h.unit] : [])) });
-      if (!combo.ok) continue;
+      if (!unit) continue;
+      const combo = checkCombination({ outdoor: unit, indoor: chosen.flatMap((h) => (h ? [h.unit] : [])) });
+      if (!combo.ok) {
+        refusals.push(`${m.name}: ${combo.refusals.join(' ')}`);
+        continue;
+      }
       const sizing = checkSizing({
         unit,
         equipmentType: unit.equipmentType,
@@ -203,70 +371,101 @@ export function suggestDesign({
         policy,
       });
       if ((sizing.coolingRatio ?? 0) * 100 < sizing.allowedPercent.min) continue;
-      zones.forEach((z, i) => {
-        const h = heads[i];
-        if (h) reasons.push(reason(`suggest:${z.key}`, z.name, h, 'the smallest head in range'));
-        if (h && !h.sizing.withinRange)
-          warnings.push(`No head fits ${z.name} inside the sizing range; ${h.model.name} is the closest.`);
-      });
-      reasons.push(
-        reason(
-          'suggest:outdoor',
-          'the whole home',
-          { model: m, unit, sizing },
-          `the smallest multi-zone unit whose ports take these heads (${combo.connectedPercent} % connected) and that meets the home's coincident load`,
+      return { model: m, unit, sizing, connected: combo.connectedPercent };
+    }
+    return null;
+  };
+  if (zones.length > 1) {
+    const chosen = zones.map((z) => pick(z, (k) => headsOf(multiHeads.filter((m) => kindOf(m) === k))));
+    // One unit for all, else two, three… over consecutive zones (each unit takes two zones or more).
+    for (let units = 1; units <= Math.floor(zones.length / 2); units += 1) {
+      const size = Math.ceil(zones.length / units);
+      const groups = Array.from({ length: units }, (_, g) => zones.slice(g * size, (g + 1) * size));
+      if (groups.some((g) => g.length < 2)) continue;
+      const outs = groups.map((g) =>
+        multiFor(
+          g,
+          g.map((z) => chosen[zones.indexOf(z)] ?? null),
         ),
       );
-      return {
-        design: {
-          zones: zones.map((z, i) => ({
-            key: z.key,
-            name: z.name,
-            roomIds: z.roomIds,
-            indoorUnitKey: heads[i]?.model.key ?? '',
-          })),
-          systems: [
-            {
-              key: 's1',
-              name: 'Multi-zone system',
-              outdoorUnitKey: m.key,
-              circuits: zones.map((z) => circuit(z.key)),
-              electrical,
-            },
-          ],
-        },
-        reasons,
-        warnings,
-      };
+      if (outs.some((o) => o === null)) continue;
+      groups.forEach((g, gi) => {
+        const o = outs[gi];
+        if (!o) return;
+        const key = systemKey();
+        for (const z of g) {
+          const h = chosen[zones.indexOf(z)];
+          if (!h) continue;
+          reasons.push(
+            reason(`suggest:${z.key}`, z.name, h, `the smallest ${kindOf(h.model) ?? 'head'} in range for this zone`),
+          );
+          if (!h.sizing.withinRange)
+            warnings.push(`No head fits ${z.name} inside the sizing range; ${h.model.name} is the closest.`);
+          dz.push(zoneInput(z, h.model.key));
+        }
+        reasons.push(
+          reason(
+            `suggest:outdoor:${key}`,
+            units === 1 ? 'the whole home' : g.map((z) => z.name).join(', '),
+            o,
+            `the smallest multi-zone unit whose ports take these heads (${o.connected} % connected) and that meets their rooms' coincident load${units > 1 ? `; one unit of ${units}, as no single unit takes every head` : ''}`,
+          ),
+        );
+        ds.push({
+          key,
+          name: (units === 1 ? 'Multi-zone system' : `Multi-zone system ${gi + 1}`).slice(0, 80),
+          outdoorUnitKey: o.model.key,
+          circuits: g.map((z) => circuit(z.key)),
+          electrical,
+        });
+      });
+      return finish();
     }
+    if (refusals.length > 0)
+      warnings.push(
+        `No multi-zone unit takes these heads: ${[...new Set(refusals)].join('; ')} So each zone gets its own pair.`,
+      );
   }
   // Single-zone pairs: the head and the outdoor unit it is rated with, the smallest pair in range.
-  const pairs = headsOf(walls.filter((m) => pairOf(m) !== undefined));
-  const dz: DesignInput['zones'] = [];
-  const ds: DesignInput['systems'] = [];
-  zones.forEach((z, i) => {
-    const candidates = pairs.flatMap((h) => {
-      const o = pairOf(h.model);
-      const unit = o ? outdoorByKey.get(o.key) : undefined;
-      return o && unit ? [{ model: o, unit, head: h.model }] : [];
-    });
-    const p = choose(candidates, z.load, designF, policy);
-    const head = p ? candidates.find((c) => c.model.key === p.model.key)?.head : undefined;
-    if (!p || !head) {
+  zones.forEach((z) => {
+    const candidatesOf = (kind: HeadKind) =>
+      headsOf(heads.filter((m) => pairOf(m) !== undefined && kindOf(m) === kind)).flatMap((h) => {
+        const o = pairOf(h.model);
+        const unit = o ? outdoorByKey.get(o.key) : undefined;
+        return o && unit ? [{ model: o, unit, head: h.model }] : [];
+      });
+    const p = pick(z, candidatesOf);
+    const chosenHead = p ? pairHead(p, candidatesOf, suits(z)) : undefined;
+    if (!p || !chosenHead) {
       warnings.push(`No single-zone pair in the active catalog for ${z.name}.`);
       return;
     }
     if (!p.sizing.withinRange)
       warnings.push(`No pair fits ${z.name} inside the sizing range; ${p.model.name} is the closest.`);
-    reasons.push(reason(`suggest:${z.key}`, z.name, p, `the smallest single-zone pair in range, with ${head.name}`));
-    dz.push({ key: z.key, name: z.name, roomIds: z.roomIds, indoorUnitKey: head.key });
+    reasons.push(
+      reason(`suggest:${z.key}`, z.name, p, `the smallest single-zone pair in range, with ${chosenHead.name}`),
+    );
+    dz.push(zoneInput(z, chosenHead.key));
     ds.push({
-      key: `s${i + 1}`,
+      key: systemKey(),
       name: `${z.name} system`.slice(0, 80),
       outdoorUnitKey: p.model.key,
       circuits: [circuit(z.key)],
       electrical,
     });
   });
-  return { design: { zones: dz, systems: ds }, reasons, warnings };
+  return finish();
+}
+
+/** The head of the chosen pair: of the kind that suits the zone when the pair has one, else a wall head. */
+function pairHead(
+  p: Chosen<OutdoorUnit>,
+  candidatesOf: (kind: HeadKind) => readonly { model: CatalogModel; head: CatalogModel }[],
+  kind: HeadKind,
+): CatalogModel | undefined {
+  for (const k of [kind, 'wall'] as const) {
+    const c = candidatesOf(k).find((x) => x.model.key === p.model.key);
+    if (c) return c.head;
+  }
+  return undefined;
 }

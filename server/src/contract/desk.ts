@@ -2,12 +2,14 @@ import { z } from 'zod';
 import {
   bounded,
   boundedInt,
+  circuitSchema,
   designSchema,
   discountSchema,
   keyField,
   nameField,
   sellRuleSchema,
   TAX_RULES,
+  zoneSchema,
 } from '@calc';
 import type { Role } from './enums';
 
@@ -395,11 +397,16 @@ export const suggestBody = z.strictObject({
         key: keyField('Zone key'),
         name: nameField('Zone name'),
         roomIds: z.array(keyField('Room id')).min(1, 'Choose at least one room for the zone').max(50),
+        headRoomId: zoneSchema.shape.headRoomId,
+        openSpace: zoneSchema.shape.openSpace,
+        lowestDuctOpeningFt: zoneSchema.shape.lowestDuctOpeningFt,
       }),
     )
     .max(40, 'At most 40 zones')
     .optional(),
   lineLengthFt: bounded('Line-set length', 1, 300, 'ft').optional(),
+  /** Circuits the estimator already entered (by zone): the suggestion keeps them as they are. */
+  circuits: z.array(circuitSchema).max(80, 'At most 80 circuits').optional(),
 });
 /** calc's suggestion: a design the desk can put into an option, with why each unit was chosen. */
 export const suggestResponse = z.object({

@@ -13,7 +13,15 @@ import {
   type OptionPricing,
   type TakeoffEditInput,
 } from '@contract';
-import { checkDiscount, suggestDesign, type CatalogModel, type DesignInput, type Suggestion } from '@calc';
+import {
+  checkDiscount,
+  suggestDesign,
+  type CatalogModel,
+  type CircuitInput,
+  type DesignInput,
+  type GivenZone,
+  type Suggestion,
+} from '@calc';
 import { ConflictError, ForbiddenError, NotFoundError, UnprocessableError, ValidationError } from '../../lib/errors';
 import type { ServiceContext } from '../../lib/service-context';
 import { assertVersion } from '../../lib/version-lock';
@@ -525,7 +533,7 @@ const activeModels = (desk: DeskJob) => [...desk.data.desk.models.values()].filt
 export async function suggestForJob(
   ctx: ServiceContext,
   jobId: string,
-  input: { zones?: { key: string; name: string; roomIds: string[] }[]; lineLengthFt?: number },
+  input: { zones?: GivenZone[]; lineLengthFt?: number; circuits?: CircuitInput[] },
 ): Promise<Suggestion> {
   const desk = await readDeskJob(ctx, jobId);
   return suggestDesign({
@@ -533,6 +541,7 @@ export async function suggestForJob(
     models: activeModels(desk),
     ...(input.zones ? { zones: input.zones } : {}),
     ...(input.lineLengthFt ? { lineLengthFt: input.lineLengthFt } : {}),
+    ...(input.circuits ? { circuits: input.circuits } : {}),
   });
 }
 

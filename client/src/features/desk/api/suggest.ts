@@ -1,6 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
 import { suggestResponse } from '@contract';
-import { designSchema } from '@calc';
+import { designSchema, type Design } from '@calc';
 import { jobPath } from '../../../entities/job/paths';
 import { apiFetch } from '../../../lib/api-client';
 import { ApiError } from '../../../lib/api-error';
@@ -11,10 +11,17 @@ import { ApiError } from '../../../lib/api-error';
  */
 export function useSuggest(jobId: string) {
   return useMutation({
-    mutationFn: async (zones: { key: string; name: string; roomIds: string[] }[] | undefined) => {
+    // The option's stored design: its zones are kept, and the line sets already entered are not overwritten.
+    mutationFn: async (stored: Design | undefined) => {
       const answer = await apiFetch(`${jobPath(jobId)}/suggest`, {
         method: 'POST',
-        body: zones && zones.length > 0 ? { zones } : {},
+        body:
+          stored && stored.zones.length > 0
+            ? {
+                zones: stored.zones.map(({ indoorUnitKey: _, ...z }) => z),
+                circuits: stored.systems.flatMap((s) => s.circuits),
+              }
+            : {},
         schema: suggestResponse,
       });
       const design = designSchema.safeParse(answer.design);

@@ -79,10 +79,7 @@ export function OptionView({
   const [reasons, setReasons] = useState<ExplanationView[]>([]);
   const handleSuggest = async () => {
     const stored = designSchema.safeParse(option.design);
-    const zones = stored.success
-      ? stored.data.zones.map((z) => ({ key: z.key, name: z.name, roomIds: [...z.roomIds] }))
-      : undefined;
-    const s = await suggest.mutateAsync(zones);
+    const s = await suggest.mutateAsync(stored.success ? stored.data : undefined);
     await update.mutateAsync({ option, changes: { design: s.design } });
     setReasons(
       s.reasons.flatMap((r) => {

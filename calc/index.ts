@@ -32,6 +32,7 @@ export * from './src/loads/internal';
 export * from './src/loads/notes';
 export * from './src/loads/room-load';
 export * from './src/loads/home-load';
+export * from './src/loads/live-home';
 export * from './src/loads/warnings';
 export * from './src/loads/ducts';
 export * from './src/loads/peak-detail';

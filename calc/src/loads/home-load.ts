@@ -197,13 +197,28 @@ export function recombineBlock(profiles: readonly ArrayLike<number>[]): { index:
   return { index: best, sensibleBtuh: sum[best] ?? 0 };
 }
 
-/** Whole-home loads from a parsed home (engine path; no validation). */
-export function homeLoadFromParsed(
-  home: Home,
-  psy: DesignPsychrometrics = designPsychrometrics(home.designConditions),
-  ctx: DesignDayContext = designDayContext(home.designConditions),
-): HomeLoad {
-  // House leakage (winter ACH from tightness or blower door; summer half), shared by exposed envelope.
+/** The house-level air and internal-gain figures and each room's share of them (before any hourly work). */
+export interface HouseAir {
+  readonly airs: readonly RoomAir[];
+  readonly areas: readonly number[];
+  readonly floorArea: number;
+  readonly winterAch: number;
+  readonly winterHouse: number;
+  readonly summerHouse: number;
+  readonly leakageBasis: 'tightness' | 'blower-door';
+  readonly bedrooms: number;
+  readonly ventKind: VentilationKind;
+  readonly ventCfm: number;
+  readonly anyInternal: boolean;
+  readonly occupants: number;
+}
+
+/**
+ * The house's leakage (winter ACH from tightness or blower door; summer half) shared by exposed
+ * envelope, its ventilation and (when no room has people or appliances) the default internal gains,
+ * as each room's air: no hourly work, so the live path can tell which rooms' hours must be redone.
+ */
+export function houseAir(home: Home): HouseAir {
   let volume = 0;
   let floorArea = 0;
   let exposedTotal = 0;
@@ -237,8 +252,7 @@ export function homeLoadFromParsed(
   const kitchens = home.rooms.filter((r) => /kitchen/i.test(r.name));
   const kitchenArea = kitchens.reduce((s, r) => s + floorAreaFt2(r), 0);
 
-  let work: RoomHourly[] = [];
-  const houseHourly = new Float64Array(HOURS);
+  const airs: RoomAir[] = [];
   home.rooms.forEach((room, i) => {
     const a = areas[i] ?? 0;
     const areaShare = floorArea > 0 ? a / floorArea : 0;
@@ -257,7 +271,7 @@ export function homeLoadFromParsed(
         otherLatent: RLF_INTERNAL.latentBase * baseShare + RLF_INTERNAL.latentPerFt2 * a,
       };
     }
-    const air: RoomAir = {
+    airs.push({
       summerCfm,
       winterCfm,
       ventCfm: q * areaShare,
@@ -265,9 +279,64 @@ export function homeLoadFromParsed(
       ventLatentCfm: vent.latent * areaShare,
       ventHeatingCfm: vent.heating * areaShare,
       defaultInternal,
-    };
-    work.push(roomHourly(room, psy, ctx, air));
+    });
   });
+  return {
+    airs,
+    areas,
+    floorArea,
+    winterAch,
+    winterHouse,
+    summerHouse,
+    leakageBasis,
+    bedrooms,
+    ventKind,
+    ventCfm: q,
+    anyInternal,
+    occupants,
+  };
+}
+
+/** Whole-home loads from a parsed home (engine path; no validation). */
+export function homeLoadFromParsed(
+  home: Home,
+  psy: DesignPsychrometrics = designPsychrometrics(home.designConditions),
+  ctx: DesignDayContext = designDayContext(home.designConditions),
+): HomeLoad {
+  const air = houseAir(home);
+  return homeLoadFromWork(
+    home,
+    psy,
+    ctx,
+    air,
+    home.rooms.map((room, i) => roomHourly(room, psy, ctx, air.airs[i] ?? NO_AIR)),
+  );
+}
+
+const NO_AIR: RoomAir = {
+  summerCfm: 0,
+  winterCfm: 0,
+  ventCfm: 0,
+  ventCoolingSensibleCfm: 0,
+  ventLatentCfm: 0,
+  ventHeatingCfm: 0,
+};
+
+/** The rooms' hours with the ducted system's shares added (tables changed in place), the house's hours and the block hour. */
+export function blockOfWork(
+  home: Home,
+  psy: DesignPsychrometrics,
+  ctx: DesignDayContext,
+  areas: readonly number[],
+  roomWork: readonly RoomHourly[],
+): {
+  work: RoomHourly[];
+  ductsByHour: ReturnType<typeof applyDucts> | null;
+  houseHourly: Float64Array;
+  block: number;
+} {
+  let work: RoomHourly[] = roomWork.slice();
+  const houseHourly = new Float64Array(HOURS);
   let ductsByHour: ReturnType<typeof applyDucts> | null = null;
   if (home.ducts) {
     ductsByHour = applyDucts(home.ducts, work, psy, ctx, areas);
@@ -276,6 +345,25 @@ export function homeLoadFromParsed(
   for (const w of work) for (let h = 0; h < HOURS; h += 1) houseHourly[h] = (houseHourly[h] ?? 0) + (w.hourly[h] ?? 0);
   let block = 0;
   for (let h = 1; h < HOURS; h += 1) if ((houseHourly[h] ?? 0) > (houseHourly[block] ?? 0)) block = h;
+  return { work, ductsByHour, houseHourly, block };
+}
+
+/**
+ * The home's result from each room's hourly work (before ducts, in the home's room order): the ducts
+ * added to the served rooms, the block hour, and every figure. The work's tables are changed in place
+ * by the ducts; the live path hands in copies.
+ */
+export function homeLoadFromWork(
+  home: Home,
+  psy: DesignPsychrometrics,
+  ctx: DesignDayContext,
+  air: HouseAir,
+  roomWork: readonly RoomHourly[],
+): HomeLoad {
+  const { areas, floorArea, winterAch, winterHouse, summerHouse, leakageBasis, bedrooms, ventKind, anyInternal } = air;
+  const q = air.ventCfm;
+  const occupants = air.occupants;
+  const { work, ductsByHour, houseHourly, block } = blockOfWork(home, psy, ctx, areas, roomWork);
 
   const rooms = work.map((w) => roomLoadFromHourly(w, psy, block));
   const sensibleGain = sumComponents(work.map((w) => roomComponentsAt(w, block)));

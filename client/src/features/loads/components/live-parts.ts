@@ -1,4 +1,5 @@
 // What the walk-through's live loads load on their own (live-engine.ts): the engine and what shows its figures.
-export { computeHomeLoad, computeRoomLoad } from '../model/compute';
+export { computeHomeLoad } from '../model/compute';
+export { computeLiveRoomLoad } from '../model/live-room';
 export { HomeTotals } from './home-totals';
 export { LoadFigures } from './load-figures';

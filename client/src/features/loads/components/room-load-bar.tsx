@@ -1,6 +1,7 @@
 import type { Room } from '@calc';
 import { useState } from 'react';
 import { engineWaitMessage, useLoadEngine } from './live-engine';
+import type { LiveHomeInputs } from '../model/live-room';
 
 const n = (v: number) => v.toLocaleString('en-US');
 
@@ -8,6 +9,8 @@ interface Props {
   room: Room | null;
   designConditions: Record<string, unknown> | null;
   tightness: string;
+  /** The other rooms and the house facts (see RoomLoadPanel). */
+  home: LiveHomeInputs;
 }
 
 /**
@@ -15,11 +18,11 @@ interface Props {
  * form scrolls (sensible, latent, heat loss), which opens to the figures. Hidden on a wide screen,
  * where the full panel stays beside the form.
  */
-export function RoomLoadBar({ room, designConditions, tightness }: Props) {
+export function RoomLoadBar({ room, designConditions, tightness, home }: Props) {
   const [open, setOpen] = useState(false);
   const engine = useLoadEngine();
   const parts = engine.status === 'ready' ? engine.engine : null;
-  const result = room && parts ? parts.computeRoomLoad(room, designConditions, tightness) : null;
+  const result = room && parts ? parts.computeLiveRoomLoad(room, home, designConditions, tightness) : null;
   const line = !room
     ? 'Loads wait for the fields marked in red'
     : engine.status !== 'ready'

@@ -3,6 +3,7 @@ import { Alert } from '../../../components/ui/alert';
 import { engineWaitMessage, useLoadEngine } from './live-engine';
 import { LazyComponentChart } from './lazy-component-chart';
 import { EstimateBadge } from './estimate-badge';
+import type { LiveHomeInputs } from '../model/live-room';
 
 interface Props {
   /** The room as calc parsed it, or null while the form has errors. */
@@ -10,13 +11,18 @@ interface Props {
   warnings: readonly PlausibilityWarning[];
   designConditions: Record<string, unknown> | null;
   tightness: string;
+  /** The other rooms and the house facts: the room's figures are its figures in the whole home. */
+  home: LiveHomeInputs;
 }
 
-/** This room's loads, recomputed in the browser on every change. */
-export function RoomLoadPanel({ room, warnings, designConditions, tightness }: Props) {
+/**
+ * This room's loads, recomputed in the browser on every change, as the whole home will have them:
+ * with its share of the house's leakage, ventilation and default gains, and of the ducts when there are.
+ */
+export function RoomLoadPanel({ room, warnings, designConditions, tightness, home }: Props) {
   const engine = useLoadEngine();
   const parts = engine.status === 'ready' ? engine.engine : null;
-  const result = room && parts ? parts.computeRoomLoad(room, designConditions, tightness) : null;
+  const result = room && parts ? parts.computeLiveRoomLoad(room, home, designConditions, tightness) : null;
   return (
     <section aria-label="Room loads" className="flex flex-col gap-3 rounded-lg border border-ink-200 bg-white p-4">
       <div className="flex items-center gap-3">
@@ -38,6 +44,7 @@ export function RoomLoadPanel({ room, warnings, designConditions, tightness }: P
             latent={result.value.latentGain}
             heatLoss={result.value.heatLoss}
             roomName={result.value.roomName}
+            ducts={result.ducts}
           />
         </>
       ) : null}

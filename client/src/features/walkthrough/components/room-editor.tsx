@@ -3,6 +3,7 @@ import { QueryWidgetBoundary } from '../../../components/errors/query-widget-bou
 import { Button } from '../../../components/ui/button';
 import { RoomLoadBar } from '../../loads/components/room-load-bar';
 import { RoomLoadPanel } from '../../loads/components/room-load-panel';
+import type { LiveHomeInputs } from '../../loads/model/live-room';
 import { asNumber, asRecords, asString, setIn, type PathPart } from '../model/draft';
 import { floorLevelOptions } from '../model/options';
 import { NEW_WALL } from '../model/room-templates';
@@ -26,10 +27,15 @@ interface Props {
   room: RoomView;
   designConditions: Record<string, unknown> | null;
   tightness: string;
+  /** The home around the room (rooms as they stand, house facts): the live loads are the room's in the home. */
+  home?: LiveHomeInputs;
 }
 
+/** No other rooms known: the room's loads as a home of its own. */
+const ALONE: LiveHomeInputs = { rooms: [] };
+
 /** One room, saved as it is typed: every valid change goes to the queue after a short pause. */
-export function RoomEditor({ jobId, room, designConditions, tightness }: Props) {
+export function RoomEditor({ jobId, room, designConditions, tightness, home = ALONE }: Props) {
   const queue = useWalkthroughQueue();
   // A draft the schema refused last time (still being fixed) comes back instead of the saved room,
   // also after the server moved on by this draft's own partial saves.
@@ -223,7 +229,12 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
         </QueryWidgetBoundary>
       </div>
       {/* On a phone the loads stay in sight as one line pinned to the bottom of the screen. */}
-      <RoomLoadBar room={check.ok ? check.room : null} designConditions={designConditions} tightness={tightness} />
+      <RoomLoadBar
+        room={check.ok ? check.room : null}
+        designConditions={designConditions}
+        tightness={tightness}
+        home={home}
+      />
       {/* On a wide screen the loads stay in view beside the form while it is filled in. */}
       <aside className="min-w-0 lg:sticky lg:top-36 lg:self-start">
         <QueryWidgetBoundary name="the room loads">
@@ -232,6 +243,7 @@ export function RoomEditor({ jobId, room, designConditions, tightness }: Props) 
             warnings={check.ok ? check.warnings : []}
             designConditions={designConditions}
             tightness={tightness}
+            home={home}
           />
         </QueryWidgetBoundary>
       </aside>

@@ -198,6 +198,7 @@ export function WalkthroughView({
                   room={current}
                   designConditions={job.designConditions}
                   tightness={job.tightness}
+                  home={{ rooms, house: job.house }}
                 />
               </QueryWidgetBoundary>
               <Button variant="danger" className="mt-6" onClick={handleDelete}>

@@ -1,0 +1,83 @@
+import {
+  designConditionsSchema,
+  liveHome,
+  roomInputSchema,
+  type DesignConditions,
+  type Home,
+  type Room,
+  type RoomLoad,
+} from '@calc';
+import { houseOf, toTightness, type LoadResult } from './compute';
+
+/** The rest of the home the edited room sits in: the rooms as they stand (saved or waiting) and the house facts. */
+export interface LiveHomeInputs {
+  readonly rooms: readonly { readonly id: string; readonly input: Record<string, unknown> }[];
+  readonly house?: Record<string, unknown> | undefined;
+}
+
+/**
+ * One engine for the page: each call reworks only the rooms whose hours changed (calc's liveHome), so
+ * the room panel and the pinned bar can both ask on every keystroke.
+ */
+const live = liveHome();
+/** Each stored room input parsed once (the rooms' records keep their objects until they change). */
+const parsedRooms = new WeakMap<object, Room | null>();
+const parsedConditions = new WeakMap<object, DesignConditions | null>();
+
+function parseRoom(id: string, input: Record<string, unknown>): Room | null {
+  const held = parsedRooms.get(input);
+  if (held !== undefined && (held === null || held.id === id)) return held;
+  const parsed = roomInputSchema.safeParse({ ...input, id });
+  const room = parsed.success ? parsed.data : null;
+  parsedRooms.set(input, room);
+  return room;
+}
+
+function parseConditions(c: Record<string, unknown>): DesignConditions | null {
+  const held = parsedConditions.get(c);
+  if (held !== undefined) return held;
+  const parsed = designConditionsSchema.safeParse(c);
+  const out = parsed.success ? parsed.data : null;
+  parsedConditions.set(c, out);
+  return out;
+}
+
+/**
+ * The edited room's loads as the whole home will have them once it is saved: its share of the house's
+ * leakage, ventilation and default gains, and of the ducted system's gains and losses when the home has
+ * ducts — the same figures the server's full recompute gives (`homeLoadFromParsed`), with the draft in
+ * place of the room's saved input. Rooms calc refuses are left out, as the whole-home totals leave them.
+ */
+export function computeLiveRoomLoad(
+  room: Room,
+  home: LiveHomeInputs,
+  designConditions: Record<string, unknown> | null,
+  tightness: string,
+): LoadResult<RoomLoad> & { readonly ducts?: boolean } {
+  if (!designConditions)
+    return { ok: false, message: 'Enter the design conditions for the site to see this room’s loads.' };
+  const conditions = parseConditions(designConditions);
+  if (!conditions) return { ok: false, message: 'Check the design conditions to see this room’s loads.' };
+  const rooms: Room[] = [];
+  let placed = false;
+  for (const r of home.rooms) {
+    if (r.id === room.id) {
+      rooms.push(room);
+      placed = true;
+      continue;
+    }
+    const parsed = parseRoom(r.id, r.input);
+    if (parsed) rooms.push(parsed);
+  }
+  if (!placed) rooms.push(room);
+  const house = houseOf(home.house ?? {});
+  const ducts = house.ducts !== undefined && house.ducts.roomIds?.includes(room.id) !== false;
+  const whole: Home = { ...house, designConditions: conditions, tightness: toTightness(tightness), rooms };
+  try {
+    const load = live.room(whole, room.id);
+    if (!load) return { ok: false, message: 'The loads could not be worked out from these inputs.' };
+    return { ok: true, value: load, ducts };
+  } catch {
+    return { ok: false, message: 'The loads could not be worked out from these inputs.' };
+  }
+}

@@ -51,6 +51,13 @@ describe('pages opened with no signal say so instead of staying blank', () => {
     expect(screen.getByRole('heading', { name: /Loads — Rowan Example/ })).toBeInTheDocument();
   });
 
+  it('Options and price (the desk) with nothing held: "No signal", not a wait', async () => {
+    mockFetch({});
+    onlineManager.setOnline(false);
+    renderRoute(`/jobs/${JOB_ID}/desk`);
+    expect(await screen.findByRole('heading', { name: 'No signal' }, { timeout: 4000 })).toBeInTheDocument();
+  });
+
   it('Jobs with no list held: words, not an endless spinner', async () => {
     mockFetch({});
     onlineManager.setOnline(false);
@@ -60,7 +67,7 @@ describe('pages opened with no signal say so instead of staying blank', () => {
     ).toBeInTheDocument();
   });
 
-  describe('the office pages: users, e-mail and outbox', () => {
+  describe('the office pages: users, e-mail, outbox and settings', () => {
     const me = {
       user: {
         id: 'u1',
@@ -77,6 +84,7 @@ describe('pages opened with no signal say so instead of staying blank', () => {
       ['/users', () => import('../../client/src/app/routes/users')],
       ['/mail', () => import('../../client/src/app/routes/mail')],
       ['/outbox', () => import('../../client/src/app/routes/outbox')],
+      ['/settings', () => import('../../client/src/app/routes/company-settings')],
     ];
 
     function renderPage(path: string, load: () => Promise<RouteModule>, seed?: (q: QueryClient) => void) {

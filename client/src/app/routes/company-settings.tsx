@@ -1,4 +1,4 @@
-import type { QueryClient } from '@tanstack/react-query';
+import { onlineManager, type QueryClient } from '@tanstack/react-query';
 import type { LoaderFunctionArgs } from 'react-router-dom';
 import { QueryWidgetBoundary } from '../../components/errors/query-widget-boundary';
 import { Card } from '../../components/ui/card';
@@ -7,6 +7,7 @@ import { companySettingsQueryOptions } from '../../entities/job/queries';
 import { DesignDefaultsForm } from '../../features/company-settings/components/design-defaults-form';
 import { UnitSystemForm } from '../../features/company-settings/components/unit-system-form';
 import { requireArea } from '../guards';
+import { ensureHeld } from '../../lib/offline/online';
 
 export const clientLoader =
   (queryClient: QueryClient) =>
@@ -14,8 +15,10 @@ export const clientLoader =
     await requireArea(queryClient, request, 'settings');
     // The settings are edited here, so read what the server holds now, not a copy the device saved
     // before the last save (the saved cache is written a beat later); with no signal the copy stands.
-    await queryClient.prefetchQuery({ ...companySettingsQueryOptions(), staleTime: 0 });
-    await queryClient.ensureQueryData(companySettingsQueryOptions());
+    const settings = companySettingsQueryOptions();
+    if (onlineManager.isOnline()) await queryClient.prefetchQuery({ ...settings, staleTime: 0 });
+    // Nothing held and no signal: "No signal" in words at once, not a fetch paused until the signal is back.
+    await ensureHeld(queryClient, settings.queryKey, () => queryClient.ensureQueryData(settings));
     return null;
   };
 

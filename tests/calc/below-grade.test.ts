@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { basementFloorU, belowGradeWallU, CalcError, roomLoad, type RoomInput } from '@calc';
+import { basementFloorU, belowGradeWallU, CalcError, roomLoad, SOIL_CONDUCTIVITY, type RoomInput } from '@calc';
 import { conditions } from './sample-data';
 
 /*
@@ -116,5 +116,15 @@ describe('basement floors [MEM: ASHRAE ch. 18 floor form, not re-checked]', () =
         },
       ),
     );
+  });
+});
+
+describe('soil conductivity', () => {
+  it('lies inside the published range for soils, 0.3–1.4 Btu/h·ft·°F; the 0.8 itself stays from memory', () => {
+    // [PUB: "Heat Loss from Basement Walls and Floors", engineer-educators.com/topic/7-heat-loss-from-basement-walls-and-floors:
+    // soil conductivity 0.5–2.5 W/m·°C, or 0.3–1.4 Btu/h·ft·°F, by composition and moisture]
+    // 1 W/m·K = 0.5778 Btu/h·ft·°F [PUB: NIST SP 811 conversion factors]
+    expect(SOIL_CONDUCTIVITY).toBeGreaterThanOrEqual(0.5 * 0.5778);
+    expect(SOIL_CONDUCTIVITY).toBeLessThanOrEqual(2.5 * 0.5778);
   });
 });

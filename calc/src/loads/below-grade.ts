@@ -18,7 +18,12 @@ import { num } from '../errors';
 export const BELOW_GRADE_SOURCE =
   'ASHRAE Handbook—Fundamentals ch. 18 below-grade walls and floors (circular heat-flow paths, Latta and Boileau) [MEM]';
 
-/** Soil conductivity, Btu/h·ft·°F. [MEM: the handbook's basis value 0.8 for the below-grade tables, verify] */
+/**
+ * Soil conductivity, Btu/h·ft·°F. [MEM: the handbook's basis value 0.8 for the below-grade tables, verify]
+ * It lies inside the published range for soils, 0.3–1.4 Btu/h·ft·°F (0.5–2.5 W/m·K) by composition and
+ * moisture [PUB: "Heat Loss from Basement Walls and Floors", engineer-educators.com/topic/7-heat-loss-from-
+ * basement-walls-and-floors, a heat-transfer course text], which the tests check; the exact figure stays from memory.
+ */
 export const SOIL_CONDUCTIVITY = 0.8;
 
 /** Average U of a below-grade wall between depths z1 and z2 (ft, z2 > z1 ≥ 0), R_other the wall's own resistance. */

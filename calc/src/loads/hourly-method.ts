@@ -46,8 +46,9 @@ export type MassClass = keyof typeof MASS_RESPONSE;
 /**
  * Vented attic air temperature: outdoor + k × (roof sol-air − outdoor), one hour behind the
  * roof; k 0.45 for a vented attic, 0.30 with a radiant barrier under the roof deck.
- * [OWN/TRADE: a stated simplification in place of the flat +30 °F; verify against the
- * attic model of ASHRAE ch. 17 RHB where it matters]
+ * [OWN/TRADE: a stated simplification in place of the flat +30 °F; the factors are from memory —
+ * no citable public source was found (issue 9, 5 Dec 2026); verify against the attic model of
+ * ASHRAE ch. 17 RHB where it matters]
  */
 export const ATTIC_RESPONSE = { vented: 0.45, radiantBarrier: 0.3, lagHours: 1 } as const;
 

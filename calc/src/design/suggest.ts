@@ -158,8 +158,8 @@ type HeadKind = 'ducted' | 'cassette' | 'wall';
 
 /**
  * Suggests equipment from the active catalog for a home (issue 13, "suggest"):
- * - Ducted: the rooms the home's ducts serve (house.ducts, all rooms when it names none), and any zone no
- *   ductless head can meet, go on a ducted heat pump — the smallest in range on their coincident load —
+ * - Ducted: when calc groups the rooms, those the home's ducts serve (house.ducts, all rooms when it
+ *   names none); and any zone (given or not) no ductless head can meet, go on a ducted heat pump — the smallest in range on their coincident load —
  *   with the air handler it is matched with; when the heat pump falls short of the heat loss at the
  *   design temperature, the smallest matched heat kit that covers the shortfall.
  * - Ductless: zones by the grouping rule above (or the ones given). Each zone's head: a slim ducted
@@ -323,8 +323,10 @@ export function suggestDesign({
     return true;
   };
   zones = zones.filter((z) => {
+    // Zones the estimator gave keep their grouping: only one too big for any head goes ducted.
     const wantsDucts =
-      z.roomIds.every((id) => ductRooms.includes(id)) || z.load.sensibleBtuh + z.load.latentBtuh > largestHead * 1.3;
+      (!givenZones && z.roomIds.every((id) => ductRooms.includes(id))) ||
+      z.load.sensibleBtuh + z.load.latentBtuh > largestHead * 1.3;
     return !(wantsDucts && ducted(z));
   });
 

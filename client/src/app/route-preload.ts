@@ -1,4 +1,5 @@
-import { jobRoutePatterns } from '../entities/job/paths';
+import { COMPANY_SETTINGS_PATH, jobPath, jobRoutePatterns, roomsPath } from '../entities/job/paths';
+import { fetchEarly } from '../lib/early-fetch';
 
 /**
  * The modules the first screen of a page needs, asked for as soon as the entry runs, before React
@@ -29,8 +30,28 @@ const table: ReadonlyArray<readonly [RegExp, () => ReadonlyArray<Promise<unknown
   [patternOf(jobRoutePatterns.loads), () => [appRoot(), jobLoaders(), import('./routes/job-loads')]],
 ];
 
+/** The job's id in a walk-through or loads address, as the router will read it; null elsewhere. */
+function jobIdIn(pathname: string): string | null {
+  const m = /^\/jobs\/([^/]+)(?:\/loads)?\/?$/.exec(pathname);
+  if (!m?.[1] || m[1] === 'new') return null;
+  try {
+    return decodeURIComponent(m[1]);
+  } catch {
+    return null;
+  }
+}
+
 export function preloadRoute(pathname: string): void {
   const match = table.find(([pattern]) => pattern.test(pathname));
   // A failed download here is not an error: the router asks again and shows its own error if it must.
   for (const p of match?.[1]() ?? []) p.catch(() => undefined);
+  // The same pages' first reads (the signed-in guard's session check, the job loader's job, rooms and
+  // company settings) leave now too, beside the code, instead of after it (lib/early-fetch.ts).
+  const jobId = match ? jobIdIn(pathname) : null;
+  if (jobId) {
+    fetchEarly('/api/auth/session');
+    fetchEarly(jobPath(jobId));
+    fetchEarly(roomsPath(jobId));
+    fetchEarly(COMPANY_SETTINGS_PATH);
+  }
 }

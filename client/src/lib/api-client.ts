@@ -2,6 +2,7 @@ import { API_VERSION_HEADER, DEVICE_HEADER } from '@contract';
 import type { z } from 'zod';
 import { CLIENT_API_VERSION, noteServerApiVersion } from './api-version';
 import { ApiError, apiErrorFromResponse, networkError } from './api-error';
+import { forgetEarly, takeEarly } from './early-fetch';
 import { deviceLabel } from './device';
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -54,15 +55,21 @@ async function send(path: string, options: ApiOptions, csrf?: string): Promise<R
   if ((options.method ?? 'GET') !== 'GET') headers[DEVICE_HEADER] = deviceLabel();
   if (options.version !== undefined && options.version !== null) headers['If-Match'] = `"${options.version}"`;
   if (options.person !== undefined) headers['X-Gaugeline-Person'] = options.person;
+  const method = options.method ?? 'GET';
+  if (method !== 'GET') forgetEarly();
+  // A plain read the entry already asked for (lib/early-fetch.ts) takes that answer, checked like any other.
+  const early =
+    method === 'GET' && options.version == null && options.person === undefined ? takeEarly(path) : undefined;
   let res: Response;
   try {
-    res = await fetch(path, {
-      method: options.method ?? 'GET',
-      credentials: 'same-origin',
-      headers,
-      body: options.body === undefined ? undefined : (form ?? JSON.stringify(options.body)),
-      signal: options.signal,
-    });
+    res = await (early ??
+      fetch(path, {
+        method,
+        credentials: 'same-origin',
+        headers,
+        body: options.body === undefined ? undefined : (form ?? JSON.stringify(options.body)),
+        signal: options.signal,
+      }));
   } catch (e) {
     if (e instanceof DOMException && e.name === 'AbortError') throw e;
     throw networkError();

@@ -1,8 +1,27 @@
-import { lazy, Suspense } from 'react';
+import { lazy, Suspense, type ComponentProps } from 'react';
+import { useNearView } from '../../../lib/use-near-view';
 import type { HomeLoad } from '@calc';
 import { EstimateBadge } from './estimate-badge';
 
 const HourlyChart = lazy(() => import('./hourly-chart'));
+
+const drawing = <p className="h-[220px] text-sm text-muted">Drawing the design day…</p>;
+
+/** The hour-by-hour chart, fetched and drawn once its place is on or near the screen (lib/use-near-view.ts). */
+function NearHourlyChart(props: ComponentProps<typeof HourlyChart>) {
+  const [ref, near] = useNearView<HTMLDivElement>();
+  if (!near)
+    return (
+      <div ref={ref} className="h-[220px]">
+        {drawing}
+      </div>
+    );
+  return (
+    <Suspense fallback={drawing}>
+      <HourlyChart {...props} />
+    </Suspense>
+  );
+}
 
 const n = (v: number) => v.toLocaleString('en-US');
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
@@ -105,9 +124,7 @@ export function HomeTotals({
           <p className="text-sm text-muted">
             Grey: the whole home’s sensible gain. Amber: sun through glass. Dashed line: the block hour.
           </p>
-          <Suspense fallback={<p className="h-[220px] text-sm text-muted">Drawing the design day…</p>}>
-            <HourlyChart hours={load.hourly} blockHour={b.hour} />
-          </Suspense>
+          <NearHourlyChart hours={load.hourly} blockHour={b.hour} />
         </div>
       ) : null}
       {skipped.length > 0 ? (

@@ -1,7 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { problemRecord } from '../../server/src/contract';
 import { openApiPath } from '../../server/src/lib/openapi';
+import { escapeHtml, openApiPage } from '../../server/src/lib/openapi-page';
 import { routeRegistry } from '../../server/src/lib/route';
-import { browserAgent, HTTPS } from '../helpers/fixtures';
+import { browserAgent, HTTPS, login, makeCompany } from '../helpers/fixtures';
 import { buildTestApp, type TestApp } from '../helpers/test-app';
 
 /**
@@ -58,5 +60,73 @@ describe('the OpenAPI document', () => {
     expect(op.requestBody.content['application/json']).toBeDefined();
     expect(op.responses['200']?.headers?.ETag).toBeDefined();
     expect(Object.keys(op.responses)).toEqual(expect.arrayContaining(['400', '401', '403', '404', '409', '428']));
+  });
+});
+
+describe('problem answers', () => {
+  it('match the documented Problem schema, with a status the route documents', async () => {
+    const a = await makeCompany(t.orm.em.fork(), 'OpenApiProblems');
+    const installer = await login(t.app, a.users.installer.email);
+    const salesperson = await login(t.app, a.users.salesperson.email);
+    const cases = [
+      { method: 'get', path: '/api/jobs/{id}', res: await browserAgent(t.app).get(`/api/jobs/${crypto.randomUUID()}`) },
+      {
+        method: 'post',
+        path: '/api/jobs',
+        res: await installer.agent.post('/api/jobs').set('X-CSRF-Token', installer.csrf).send({}),
+      },
+      {
+        method: 'post',
+        path: '/api/jobs',
+        res: await salesperson.agent.post('/api/jobs').set('X-CSRF-Token', salesperson.csrf).send({ street: 1 }),
+      },
+      {
+        method: 'patch',
+        path: '/api/jobs/{id}',
+        res: await salesperson.agent
+          .patch(`/api/jobs/${crypto.randomUUID()}`)
+          .set('X-CSRF-Token', salesperson.csrf)
+          .send({ notes: 'x' }),
+      },
+    ] as const;
+    expect(cases.map((c) => c.res.status)).toEqual([401, 403, 400, 428]);
+    for (const c of cases) {
+      expect(c.res.headers['content-type']).toContain('application/problem+json');
+      expect(problemRecord.safeParse(c.res.body).success, JSON.stringify(c.res.body)).toBe(true);
+      expect(Object.keys(doc.paths[c.path]?.[c.method]?.responses ?? {}), `${c.method} ${c.path}`).toContain(
+        String(c.res.status),
+      );
+    }
+  });
+});
+
+describe('the page for developers (GET /api/docs)', () => {
+  it('shows every operation of the document, with no script and nothing from another host', async () => {
+    const r = await browserAgent(t.app).get('/api/docs').set(HTTPS);
+    expect(r.status).toBe(200);
+    expect(r.headers['content-type']).toContain('text/html');
+    expect(r.headers['content-security-policy']).toContain("default-src 'self'");
+    const html = r.text;
+    for (const ops of Object.values(doc.paths))
+      for (const op of Object.values(ops) as unknown as { operationId: string }[])
+        expect(html, op.operationId).toContain(`id="${op.operationId}"`);
+    expect(html).not.toMatch(/<script/i);
+    expect(html).not.toMatch(/(src|href)="(https?:)?\/\//i);
+    expect(html).toContain('Signed in as owner, estimator, salesperson');
+  });
+
+  it('escapes what the document says (a summary is text, never markup)', () => {
+    const html = openApiPage({
+      openapi: '3.1.0',
+      info: { title: 'T', version: '1', description: '<b>d</b>' },
+      paths: {
+        '/api/x': {
+          get: { operationId: 'getX', summary: '<img src=x onerror=alert(1)>', 'x-policy': { kind: 'public' } },
+        },
+      },
+    });
+    expect(html).toContain(escapeHtml('<img src=x onerror=alert(1)>'));
+    expect(html).not.toContain('<img');
+    expect(html).not.toContain('<b>d</b>');
   });
 });

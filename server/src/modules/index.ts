@@ -6,7 +6,7 @@ import { authRoutes } from './auth/auth.routes';
 import { createLoginLimiter } from './auth/rate-limit';
 import { createResetLimiter } from './auth/reset-limit';
 import { outboxRoutes } from './dev/outbox.routes';
-import { docsRoutes } from './docs/docs.routes';
+import { docsPageRoutes, docsRoutes } from './docs/docs.routes';
 import { healthRoutes } from './health/health.routes';
 import { staffRoutes } from './users/staff.routes';
 import { userRoutes } from './users/user.routes';
@@ -48,6 +48,7 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   const limiter = createLoginLimiter(services.config, services.sessionPool);
   mount('/health', healthRoutes);
   mount('/openapi.json', docsRoutes);
+  mount('/docs', docsPageRoutes);
   const resetLimiter = createResetLimiter(services.config, services.sessionPool);
   mount('/auth', (api) => authRoutes(api, limiter, resetLimiter));
   mount('/users', userRoutes);

@@ -49,6 +49,7 @@ export * from './src/refrigerant/cautions';
 export * from './src/refrigerant/circuits';
 
 export * from './src/electrical/nec';
+export * from './src/electrical/raceway';
 export * from './src/electrical/plan';
 export * from './src/commissioning/checks';
 

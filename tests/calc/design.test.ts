@@ -52,7 +52,7 @@ describe('full design on the worked three-room house', () => {
     expect(qty(r, 'line-cover:straight')).toBe(2); // 12 ft ÷ 8 ft → 2
     expect(qty(r, 'condensate-line:3/4')).toBe(30); // 15 → 20, 8 → 10
     expect(qty(r, 'condensate-pump')).toBe(1);
-    expect(qty(r, 'wire:nm-b:12awg')).toBe(50); // 42 + 5 → 50
+    expect(qty(r, 'wire:nm-b:12awg')).toBe(50); // one cable: (42 + 2 × 1.5) × 1.1 = 49.5 → 50 (common practice)
     expect(qty(r, 'refrigerant:R-32')).toBe(0.25); // 4.0 oz ÷ 16 oz/lb, priced by the pound used (issue 9)
     expect(qty(r, 'labor:run-line-set')).toBe(2.7); // (0.75 + 0.8) + (0.75 + 0.4)
     expect(qty(r, 'labor:electrical')).toBe(2.84); // 2 + 42 × 0.02

@@ -208,7 +208,7 @@ export const priceBook: PriceBookInput = {
     'fasteners:kit': { unitCostCents: 900 },
     'mount:pad': { unitCostCents: 4500 },
     'disconnect:60a': { unitCostCents: 2200 },
-    'whip:3/4x6ft': { unitCostCents: 1800 },
+    'whip:1/2x6ft': { unitCostCents: 1800 },
     'breaker:2p-30a': { unitCostCents: 1400 },
     'wire:nm-b:12awg': { unitCostCents: 110 },
     'refrigerant:R-32': { unitCostCents: 1100 },

@@ -1,4 +1,5 @@
 import type { ElectricalPlan } from '../electrical/plan';
+import { branchConductors, racewaySize } from '../electrical/raceway';
 import type { CircuitCharge, RefrigerantPlan } from '../refrigerant/circuits';
 import { roundHalfUp, roundUpTo } from '../rounding';
 import type { Circuit, System } from '../schemas/design';
@@ -254,6 +255,69 @@ function circuitLines(
   );
 }
 
+const WIRING_LABEL: Record<System['electrical']['wiringMethod'], string> = {
+  'nm-b': 'NM-B',
+  'uf-b': 'UF-B',
+  'thhn-conduit': 'THHN in conduit',
+};
+
+/**
+ * The branch circuit's wire by its conductors: two hots and an equipment ground (a 240 V-class circuit).
+ * Cable (NM-B, UF-B) holds all three: one cable the length of the run. THHN in conduit: each conductor
+ * the length of the run, so 2 × the hots' size and 1 × the ground's (NEC Table 250.122), and the EMT
+ * that carries them, sized by fill and sold by the 10 ft length. Every length is the run plus a
+ * termination allowance at both ends, plus waste, rounded up to 5 ft (common practice).
+ */
+function branchWiring(
+  why: string,
+  awg: number,
+  ocpdA: number,
+  wiring: System['electrical'],
+  name: string,
+  out: LineMerger,
+): void {
+  const run = wiring.circuitLengthFt;
+  const each = run + 2 * T.terminationAllowanceFtPerEnd;
+  const waste = 1 + T.wireWastePercent / 100;
+  const lengthText = `(${run} ft run + 2 × ${T.terminationAllowanceFtPerEnd} ft terminations) × ${waste} waste`;
+  const set = branchConductors({ awg, ocpdA });
+  const method = wiring.wiringMethod;
+  if (method !== 'thhn-conduit') {
+    const ft = roundUpTo(roundHalfUp(each * waste, 2), T.cableStepFt);
+    out.mat(
+      `wire:${method}:${awg}awg`,
+      `${awg}/2 with ground copper cable, ${WIRING_LABEL[method]}`,
+      ft,
+      'ft',
+      `${why}; 1 cable (2 × ${awg} AWG + ground) × ${lengthText} = ${roundHalfUp(each * waste, 2)} ft, rounded up to 5 ft (${name})`,
+    );
+    return;
+  }
+  const conductorFt = (count: number) => roundUpTo(roundHalfUp(count * each * waste, 2), T.cableStepFt);
+  out.mat(
+    `wire:thhn-conduit:${awg}awg`,
+    `${awg} AWG copper THHN`,
+    conductorFt(set.hot.count),
+    'ft',
+    `${why}; ${set.hot.count} conductors × ${lengthText} = ${roundHalfUp(set.hot.count * each * waste, 2)} ft, rounded up to 5 ft (${name})`,
+  );
+  out.mat(
+    `wire:thhn-conduit-ground:${set.ground.awg}awg`,
+    `${set.ground.awg} AWG copper THHN, green (equipment ground)`,
+    conductorFt(set.ground.count),
+    'ft',
+    `equipment ground for a ${ocpdA} A breaker → ${set.ground.awg} AWG (NEC Table 250.122); ${set.ground.count} conductor × ${lengthText} = ${roundHalfUp(set.ground.count * each * waste, 2)} ft, rounded up to 5 ft (${name})`,
+  );
+  const emt = racewaySize({ kind: 'emt', set });
+  out.mat(
+    `raceway:emt:${emt.size}`,
+    `EMT ${emt.size} in`,
+    roundUpTo(run, T.emtStickFt),
+    'ft',
+    `${emt.text}; ${run} ft run, rounded up to ${T.emtStickFt} ft lengths (${name})`,
+  );
+}
+
 /** Materials and labor lines for one system (equipment, line sets, accessories, electrical, refrigerant, labor), added to `out`. */
 function systemLines(s: SystemForTakeoff, out: LineMerger): void {
   const name = s.system.name;
@@ -290,7 +354,17 @@ function systemLines(s: SystemForTakeoff, out: LineMerger): void {
     'each',
     `within sight of ${name}; breaker ${e.breakerA ?? '?'} A`,
   );
-  out.mat('whip:3/4x6ft', 'Liquid-tight whip 3/4 in × 6 ft', 1, 'each', `disconnect to unit (${name})`);
+  if (e.breakerA !== null && e.wireAwg !== null) {
+    const set = branchConductors({ awg: e.wireAwg, ocpdA: e.breakerA });
+    const whip = racewaySize({ kind: 'lfmc', set });
+    out.mat(
+      `whip:${whip.size}x${T.whipLengthFt}ft`,
+      `Liquid-tight whip ${whip.size} in × ${T.whipLengthFt} ft`,
+      1,
+      'each',
+      `disconnect to unit; ${whip.text} (${name})`,
+    );
+  }
   if (e.breakerA !== null)
     out.mat(
       `breaker:2p-${e.breakerA}a`,
@@ -299,16 +373,15 @@ function systemLines(s: SystemForTakeoff, out: LineMerger): void {
       'each',
       `largest standard rating ≤ MOCP ${e.mocpA} A and ≥ MCA ${e.mcaA} A (${name})`,
     );
-  if (e.wireAwg !== null) {
-    const ft = roundUpTo(wiring.circuitLengthFt + T.cableSlackFt, T.cableStepFt);
-    out.mat(
-      `wire:${wiring.wiringMethod}:${e.wireAwg}awg`,
-      `${e.wireAwg} AWG copper, ${wiring.wiringMethod}`,
-      ft,
-      'ft',
-      `MCA ${e.mcaA} A → ${e.wireAwg} AWG at ${e.ampacityColumnC} °C; ${wiring.circuitLengthFt} ft + slack, rounded up to 5 ft (${name})`,
+  if (e.wireAwg !== null && e.breakerA !== null)
+    branchWiring(
+      `MCA ${e.mcaA} A → ${e.wireAwg} AWG at ${e.ampacityColumnC} °C`,
+      e.wireAwg,
+      e.breakerA,
+      wiring,
+      name,
+      out,
     );
-  }
   out.labor(
     'labor:electrical',
     'Branch circuit, disconnect and whip',
@@ -326,13 +399,14 @@ function systemLines(s: SystemForTakeoff, out: LineMerger): void {
         'each',
         `heat kit circuit, MOCP ${k.mocpA} A (${name})`,
       );
-    if (k && k.wireAwg !== null)
-      out.mat(
-        `wire:${wiring.wiringMethod}:${k.wireAwg}awg`,
-        `${k.wireAwg} AWG copper, ${wiring.wiringMethod}`,
-        roundUpTo(wiring.circuitLengthFt + T.cableSlackFt, T.cableStepFt),
-        'ft',
-        `heat kit MCA ${k.mcaA} A → ${k.wireAwg} AWG (${name})`,
+    if (k && k.wireAwg !== null && k.breakerA !== null)
+      branchWiring(
+        `heat kit MCA ${k.mcaA} A → ${k.wireAwg} AWG`,
+        k.wireAwg,
+        k.breakerA,
+        wiring,
+        `${name}, heat kit`,
+        out,
       );
   }
   // Refrigerant is priced by the pound put in (issue 9); the cylinder it comes from is the company's stock item.

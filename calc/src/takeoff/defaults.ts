@@ -9,9 +9,21 @@ export const TAKEOFF_DEFAULTS = {
   lineCoverPieceFt: 8,
   /** Condensate line sold by 10 ft. */
   condensateStepFt: 10,
-  /** Wire and communication cable: slack added, then rounded up to 5 ft. */
+  /** Communication cable: slack added, then rounded up to 5 ft. Branch-circuit wire and cable too are sold by 5 ft here. */
   cableSlackFt: 5,
   cableStepFt: 5,
+  /**
+   * Branch-circuit wire and cable: each conductor (or cable) is the run plus this much at each of its two
+   * ends for the termination (panel, disconnect or unit), then waste on the total. [common practice;
+   * NEC 300.14 asks at least 6 in of free conductor at each box — from memory — and a termination
+   * at a panel or disconnect takes more]
+   */
+  terminationAllowanceFtPerEnd: 1.5,
+  wireWastePercent: 10,
+  /** EMT is sold in 10 ft lengths [common practice]. */
+  emtStickFt: 10,
+  /** A pre-made liquid-tight whip from the disconnect to the unit [common practice]. */
+  whipLengthFt: 6,
   /** Refrigerant sold in cylinders of this many lb. */
   cylinderLb: { 'R-410A': 25, 'R-32': 20, 'R-454B': 20 },
 } as const;

@@ -15,16 +15,23 @@ const RULE_FROM: Record<NonNullable<TakeoffLineRecord['sellRule']>['source'], st
   option: "option's rule",
 };
 
-/** "margin 35 % · Equipment": the rule that sold a line and where it came from, in a few words. */
-function ruleWords(rule: NonNullable<TakeoffLineRecord['sellRule']>): string {
+/** "margin 35 %" over "Equipment": the rule that sold a line and where it came from, in a few words. */
+function RuleWords({ rule }: { rule: NonNullable<TakeoffLineRecord['sellRule']> }) {
   const where = rule.source === 'category' && rule.from ? rule.from : RULE_FROM[rule.source];
-  return `${rule.method} ${formatNumber(rule.percent, 2, { trim: true })} % · ${where}`;
+  return (
+    <span className="block text-muted">
+      <span className="block whitespace-nowrap">
+        {rule.method} {formatNumber(rule.percent, 2, { trim: true })}&nbsp;%
+      </span>
+      <span className="block">{where}</span>
+    </span>
+  );
 }
 
 /** A line's sell price that opens to calc's why (cost → price, the rule and where it came from). */
 function LineSell({ line, why }: { line: TakeoffLineRecord; why: ExplanationView | undefined }) {
   if (line.sellCents === undefined) return null;
-  const rule = line.sellRule ? <span className="block text-muted">{ruleWords(line.sellRule)}</span> : null;
+  const rule = line.sellRule ? <RuleWords rule={line.sellRule} /> : null;
   if (!why)
     return (
       <>
@@ -35,7 +42,7 @@ function LineSell({ line, why }: { line: TakeoffLineRecord; why: ExplanationView
   return (
     <details className="text-right">
       <summary className="min-h-touch cursor-pointer list-none">
-        {formatMoney(line.sellCents)} <span className="text-ink-600 underline">why?</span>
+        {formatMoney(line.sellCents)} <span className="block text-ink-600 underline">why?</span>
         {rule}
       </summary>
       <p className="mt-1 max-w-xs text-left font-mono text-xs text-ink-900">{why.text}</p>

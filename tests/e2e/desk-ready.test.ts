@@ -13,8 +13,8 @@ afterAll(async () => e?.close());
 // Quillbrook's demo (the desk journey works on Larkspur's), so the two files never share a job.
 const estimator = demoAccounts.find((x) => x.role === 'estimator' && x.company.startsWith('Quillbrook'));
 
-/** A Quillbrook walk-through job with rooms and no options, given one oversized option (an 18k pair on one room). */
-async function oversizedJob(page: Page): Promise<string> {
+/** A Quillbrook walk-through job with rooms and no options, given one option (an 18k pair on its first room by default). */
+async function oversizedJob(page: Page, designOf = oversized): Promise<string> {
   const list = (await (await page.request.get('/api/jobs?page=1&pageSize=50')).json()) as {
     items: { id: string; status: string }[];
   };
@@ -24,30 +24,44 @@ async function oversizedJob(page: Page): Promise<string> {
     const rooms = (await (await page.request.get(`/api/jobs/${j.id}/rooms`)).json()) as {
       rooms: { id: string; input: { name: string } }[];
     };
-    const room = rooms.rooms[0];
-    if (!room) continue;
+    if (rooms.rooms.length === 0) continue;
     const made = await page.request.post(`/api/jobs/${j.id}/options`, {
       headers: { 'X-CSRF-Token': csrf },
-      data: {
-        name: 'Oversized on purpose',
-        design: {
-          zones: [{ key: 'z1', name: room.input.name, roomIds: [room.id], indoorUnitKey: 'TSL-S18H-W' }],
-          systems: [
-            {
-              key: 's1',
-              name: 'Main',
-              outdoorUnitKey: 'TSL-S18H-O',
-              circuits: [{ zoneKey: 'z1', lengthFt: 25 }],
-              electrical: { circuitLengthFt: 40 },
-            },
-          ],
-        },
-      },
+      data: designOf(rooms.rooms),
     });
     expect(made.status(), await made.text()).toBe(201);
     return j.id;
   }
   throw new Error('no Quillbrook walk-through job with rooms');
+}
+
+type Rooms = { id: string; input: { name: string } }[];
+const system = (outdoorUnitKey: string) => ({
+  key: 's1',
+  name: 'Main',
+  outdoorUnitKey,
+  circuits: [{ zoneKey: 'z1', lengthFt: 25 }],
+  electrical: { circuitLengthFt: 40 },
+});
+function oversized(rooms: Rooms) {
+  const room = rooms[0];
+  return {
+    name: 'Oversized on purpose',
+    design: {
+      zones: [{ key: 'z1', name: room?.input.name ?? 'Zone', roomIds: [room?.id], indoorUnitKey: 'TSL-S18H-W' }],
+      systems: [system('TSL-S18H-O')],
+    },
+  };
+}
+/** Every room on one slim ducted head of the R-454B 24k multi-zone: above m1, so the A2L room check applies. */
+function ductedAll(rooms: Rooms) {
+  return {
+    name: 'Ducted',
+    design: {
+      zones: [{ key: 'z1', name: 'Whole floor', roomIds: rooms.map((r) => r.id), indoorUnitKey: 'TSL-MH12-D' }],
+      systems: [system('TSL-M24-3P')],
+    },
+  };
 }
 
 describe('ready to propose with units outside their sizing range', () => {
@@ -77,6 +91,26 @@ describe('ready to propose with units outside their sizing range', () => {
     await ready.getByText(/Sizes outside the range proposed anyway by .* sunroom addition/).waitFor();
     await page.setViewportSize(PHONE);
     await page.screenshot({ path: `${SHOTS}/desk-ready-override-375.png`, fullPage: true });
+    expect(await axeViolations(page)).toEqual([]);
+    await context.close();
+  });
+
+  it('a slim ducted zone refused for its room size at 0.6 m passes once the lowest duct opening is entered', async () => {
+    if (!estimator) throw new Error('no demo estimator');
+    const { context, page } = await e.newPage(DESKTOP);
+    await signIn(page, estimator.email, estimator.password);
+    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    const jobId = await oversizedJob(page, ductedAll);
+    await page.goto(`/jobs/${jobId}/desk`);
+    const ready = page.getByRole('region', { name: 'Ready to propose' });
+    // IEC 60335-2-40:2018 Annex GG via calc: 2.55 kg at h0 0.6 m needs about 61 m², more than these rooms.
+    await ready.getByText(/the rooms its ducts serve .* smaller than the estimated minimum/).waitFor();
+    const form = page.getByRole('form', { name: 'Design of Ducted' });
+    await form.getByLabel('Lowest duct opening above the floor (ft)').fill('8');
+    await form.getByRole('button', { name: 'Save design' }).click();
+    await form.getByRole('status').filter({ hasText: 'Saved' }).waitFor();
+    await expect.poll(() => ready.getByText(/smaller than the estimated minimum/).count()).toBe(0);
+    await page.screenshot({ path: `${SHOTS}/desk-duct-opening-1440.png`, fullPage: true });
     expect(await axeViolations(page)).toEqual([]);
     await context.close();
   });

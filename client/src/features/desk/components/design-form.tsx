@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { optionDesignSchema, type OptionRecord, type RoomRecord } from '@contract';
 import { DUCT_LOCATION_WORDS, ductLocationSchema, ductLeakageSchema, type DesignInput } from '@calc';
 import { Form } from '../../../components/ui/form';
-import { SelectField, TextField } from '../../../components/ui/form-fields';
+import { NumberField, SelectField, TextField } from '../../../components/ui/form-fields';
 import { AmountField } from './amount-field';
 import type { DeskModel } from '../api/get-models';
 import { useUpdateOption } from '../api/update-option';
@@ -78,10 +78,20 @@ function Zones({
     >
       {(i) => {
         const chosen = values[i]?.roomIds ?? [];
+        const ducted = DUCTED_INDOOR_TYPES.includes(
+          models.find((m) => m.key === values[i]?.indoorUnitKey)?.indoorType ?? '',
+        );
         return (
           <>
             <TextField name={`zones.${i}.name`} label="Zone name" autoComplete="off" />
             <SelectField name={`zones.${i}.indoorUnitKey`} label="Indoor unit" options={modelOptions(models, false)} />
+            {ducted ? (
+              <NumberField
+                name={`zones.${i}.lowestDuctOpeningFt`}
+                label="Lowest duct opening above the floor (ft)"
+                hint="Supply or return grille, for the refrigerant room-size check; empty counts as 2 ft (0.6 m)."
+              />
+            ) : null}
             <div
               role="group"
               aria-label={`Rooms of zone ${i + 1}`}
@@ -94,7 +104,8 @@ function Zones({
                 </label>
               ))}
             </div>
-            {chosen.length > 1 ? (
+            {/* A ducted unit's leak spreads over every room it serves: which room holds it does not matter. */}
+            {chosen.length > 1 && !ducted ? (
               <>
                 <OptionalSelect
                   name={`zones.${i}.headRoomId`}

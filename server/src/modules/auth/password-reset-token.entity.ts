@@ -1,6 +1,6 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
-import { randomUUID } from 'node:crypto';
 import { UserSchema } from '../users/user.entity';
+import { uuidKey } from '../../lib/entity-columns';
 
 /**
  * A password-reset link's token, stored only as its SHA-256 (hex): the database never holds a token
@@ -10,10 +10,7 @@ export const PasswordResetTokenSchema = defineEntity({
   name: 'PasswordResetToken',
   tableName: 'password_reset_token',
   properties: {
-    id: p
-      .uuid()
-      .primary()
-      .onCreate(() => randomUUID()),
+    id: uuidKey(),
     user: p.manyToOne(UserSchema).deleteRule('cascade').index(),
     tokenHash: p.string().length(64).unique(),
     expiresAt: p.datetime(),

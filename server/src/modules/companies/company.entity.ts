@@ -1,23 +1,16 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
-import { randomUUID } from 'node:crypto';
 import { UNIT_SYSTEMS } from '@contract';
+import { timestamps, uuidKey } from '../../lib/entity-columns';
 
 /** A tenant: one contracting firm. Every other record belongs to exactly one company. */
 export const CompanySchema = defineEntity({
   name: 'Company',
   tableName: 'company',
   properties: {
-    id: p
-      .uuid()
-      .primary()
-      .onCreate(() => randomUUID()),
+    id: uuidKey(),
     name: p.string().length(160),
     unitSystem: p.enum([...UNIT_SYSTEMS]).default('imperial'),
-    createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p
-      .datetime()
-      .onCreate(() => new Date())
-      .onUpdate(() => new Date()),
+    ...timestamps(),
   },
 });
 

@@ -1,28 +1,21 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
-import { randomUUID } from 'node:crypto';
 import type { CellChange, DatasetId, PriceBookSettings } from '@calc';
 import { CompanySchema } from '../companies/company.entity';
 import { UserSchema } from '../users/user.entity';
+import { timestamps, uuidKey } from '../../lib/entity-columns';
 
 /** One record of one table of a company's catalog or price book; `data` is calc's parsed record. */
 export const CompanyDataRowSchema = defineEntity({
   name: 'CompanyDataRow',
   tableName: 'company_data_row',
   properties: {
-    id: p
-      .uuid()
-      .primary()
-      .onCreate(() => randomUUID()),
+    id: uuidKey(),
     company: p.manyToOne(CompanySchema).deleteRule('cascade'),
     dataset: p.string().$type<DatasetId>(),
     key: p.string().length(80),
     data: p.json<Record<string, unknown> & { key: string }>(),
     version: p.integer().version(),
-    createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p
-      .datetime()
-      .onCreate(() => new Date())
-      .onUpdate(() => new Date()),
+    ...timestamps(),
   },
 });
 export type CompanyDataRow = InferEntity<typeof CompanyDataRowSchema>;
@@ -32,10 +25,7 @@ export const CompanyDataChangeSchema = defineEntity({
   name: 'CompanyDataChange',
   tableName: 'company_data_change',
   properties: {
-    id: p
-      .uuid()
-      .primary()
-      .onCreate(() => randomUUID()),
+    id: uuidKey(),
     company: p.manyToOne(CompanySchema).deleteRule('cascade'),
     dataset: p.string().$type<DatasetId>(),
     key: p.string().length(80),
@@ -53,10 +43,7 @@ export const PriceBookSettingsSchema = defineEntity({
   name: 'PriceBookSettings',
   tableName: 'price_book_settings',
   properties: {
-    id: p
-      .uuid()
-      .primary()
-      .onCreate(() => randomUUID()),
+    id: uuidKey(),
     company: p.manyToOne(CompanySchema).unique().deleteRule('cascade'),
     data: p.json<PriceBookSettings>(),
     version: p.integer().version(),

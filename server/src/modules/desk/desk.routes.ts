@@ -13,6 +13,8 @@ import {
   regenerateBody,
   takeoffEditsBody,
   updateOptionBody,
+  type OptionRecord,
+  type Role,
 } from '@contract';
 import { ANY_STAFF, JOB_EDITORS, NO_CONTENT, OFFICE, OWNER, type ApiRouter } from '../../lib/route';
 import { UnprocessableError } from '../../lib/errors';
@@ -38,6 +40,15 @@ import {
 const jobParams = z.strictObject({ jobId: uuidParam });
 const optionParams = z.strictObject({ jobId: uuidParam, optionId: uuidParam });
 const etag = (out: { option: { version: number } }) => out.option.version;
+
+/**
+ * The answer to a change of one option: the service gets the role's presenter (a 409 carries the option
+ * as it is now, as this person may see it) and the changed option is presented with it.
+ */
+async function changed(role: Role, change: (present: (v: OptionView) => OptionRecord) => Promise<OptionView>) {
+  const present = (v: OptionView) => presentOption(v, role);
+  return { option: present(await change(present)) };
+}
 
 // Actions on an option (regenerate, discount decision, review) are POSTs that change a versioned row: declared
 // `versioned`, they take If-Match like a PATCH (the declaration reads it for every versioned POST but a 201 create).
@@ -88,8 +99,9 @@ export function deskRoutes(api: ApiRouter): void {
     response: optionResponse,
     versioned: etag,
     handler: async ({ service, params, body, actor, ifMatch }) => {
-      const present = (v: OptionView) => presentOption(v, actor.role);
-      return { option: present(await updateOption(service, params.jobId, params.optionId, ifMatch, body, present)) };
+      return changed(actor.role, (present) =>
+        updateOption(service, params.jobId, params.optionId, ifMatch, body, present),
+      );
     },
   });
   api.route({
@@ -113,10 +125,9 @@ export function deskRoutes(api: ApiRouter): void {
     response: optionResponse,
     versioned: etag,
     handler: async ({ service, params, body, actor, ifMatch }) => {
-      const present = (v: OptionView) => presentOption(v, actor.role);
-      return {
-        option: present(await setTakeoffEdits(service, params.jobId, params.optionId, ifMatch, body.edits, present)),
-      };
+      return changed(actor.role, (present) =>
+        setTakeoffEdits(service, params.jobId, params.optionId, ifMatch, body.edits, present),
+      );
     },
   });
   api.route({
@@ -129,10 +140,9 @@ export function deskRoutes(api: ApiRouter): void {
     response: optionResponse,
     versioned: etag,
     handler: async ({ service, params, body, actor, ifMatch }) => {
-      const present = (v: OptionView) => presentOption(v, actor.role);
-      return {
-        option: present(await regenerateTakeoff(service, params.jobId, params.optionId, ifMatch, body, present)),
-      };
+      return changed(actor.role, (present) =>
+        regenerateTakeoff(service, params.jobId, params.optionId, ifMatch, body, present),
+      );
     },
   });
   api.route({
@@ -145,10 +155,9 @@ export function deskRoutes(api: ApiRouter): void {
     response: optionResponse,
     versioned: etag,
     handler: async ({ service, params, body, actor, ifMatch }) => {
-      const present = (v: OptionView) => presentOption(v, actor.role);
-      return {
-        option: present(await decideDiscount(service, params.jobId, params.optionId, ifMatch, body.approve, present)),
-      };
+      return changed(actor.role, (present) =>
+        decideDiscount(service, params.jobId, params.optionId, ifMatch, body.approve, present),
+      );
     },
   });
   api.route({
@@ -160,8 +169,7 @@ export function deskRoutes(api: ApiRouter): void {
     response: optionResponse,
     versioned: etag,
     handler: async ({ service, params, actor, ifMatch }) => {
-      const present = (v: OptionView) => presentOption(v, actor.role);
-      return { option: present(await reviewOption(service, params.jobId, params.optionId, ifMatch, present)) };
+      return changed(actor.role, (present) => reviewOption(service, params.jobId, params.optionId, ifMatch, present));
     },
   });
   api.route({

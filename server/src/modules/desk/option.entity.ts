@@ -1,10 +1,10 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
-import { randomUUID } from 'node:crypto';
 import type { CatalogModel, DesignInput, TakeoffEdit } from '@calc';
 import type { DiscountRequestRecord, OptionPricing } from '@contract';
 import { CompanySchema } from '../companies/company.entity';
 import { JobSchema } from '../jobs/job.entity';
 import { UserSchema } from '../users/user.entity';
+import { timestamps, uuidKey } from '../../lib/entity-columns';
 
 /** A takeoff edit as stored: calc's TakeoffEdit, carrying the generated value it replaced. */
 export type StoredTakeoffEdit = TakeoffEdit;
@@ -20,10 +20,7 @@ export const DesignOptionSchema = defineEntity({
   name: 'DesignOption',
   tableName: 'design_option',
   properties: {
-    id: p
-      .uuid()
-      .primary()
-      .onCreate(() => randomUUID()),
+    id: uuidKey(),
     company: p.manyToOne(CompanySchema).index(),
     job: p.manyToOne(JobSchema).deleteRule('cascade'),
     position: p.smallint(),
@@ -40,11 +37,7 @@ export const DesignOptionSchema = defineEntity({
     reviewedAt: p.datetime().nullable(),
     createdBy: p.manyToOne(UserSchema).nullable(),
     version: p.integer().version(),
-    createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p
-      .datetime()
-      .onCreate(() => new Date())
-      .onUpdate(() => new Date()),
+    ...timestamps(),
   },
 });
 

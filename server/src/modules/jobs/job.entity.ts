@@ -1,19 +1,16 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
-import { randomUUID } from 'node:crypto';
 import type { DesignConditions, House } from '@calc';
 import { JOB_STATUSES, TIGHTNESS, type DesignSources, type ReadyOverride } from '@contract';
 import { CompanySchema } from '../companies/company.entity';
 import { CustomerSchema } from '../customers/customer.entity';
 import { UserSchema } from '../users/user.entity';
+import { changeStamp, timestamps, uuidKey } from '../../lib/entity-columns';
 
 export const JobSchema = defineEntity({
   name: 'Job',
   tableName: 'job',
   properties: {
-    id: p
-      .uuid()
-      .primary()
-      .onCreate(() => randomUUID()),
+    id: uuidKey(),
     company: p.manyToOne(CompanySchema).index(),
     customer: p.manyToOne(CustomerSchema).index(),
     /** The salesperson who owns the job; a salesperson sees only their own. */
@@ -39,15 +36,8 @@ export const JobSchema = defineEntity({
     /** Units outside their sizing range the office proposes anyway, with its reason (kept and cleared with the mark). */
     readyOverride: p.json<ReadyOverride>().nullable(),
     version: p.integer().version(),
-    /** Who made the latest change and on which device (lib/change-stamp.ts); null before stamps were kept. */
-    changedById: p.uuid().nullable(),
-    changedByName: p.string().length(120).nullable(),
-    changedOnDevice: p.string().length(40).nullable(),
-    createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p
-      .datetime()
-      .onCreate(() => new Date())
-      .onUpdate(() => new Date()),
+    ...changeStamp(),
+    ...timestamps(),
     /** Bumped by any change to the job, its rooms or photos: the jobs list sorts on it (index (company_id, last_activity_at desc) in the migration). */
     lastActivityAt: p.datetime().onCreate(() => new Date()),
   },

@@ -1,8 +1,8 @@
 import { MESSAGE_KINDS, MESSAGE_STATES } from '@contract';
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
-import { randomUUID } from 'node:crypto';
 import { CompanySchema } from '../companies/company.entity';
 import { UserSchema } from '../users/user.entity';
+import { timestamps, uuidKey } from '../../lib/entity-columns';
 
 /**
  * One e-mail the app sends, with its delivery state. The job queue's `send-email` task sends it;
@@ -13,10 +13,7 @@ export const OutgoingMessageSchema = defineEntity({
   name: 'OutgoingMessage',
   tableName: 'outgoing_message',
   properties: {
-    id: p
-      .uuid()
-      .primary()
-      .onCreate(() => randomUUID()),
+    id: uuidKey(),
     company: p.manyToOne(CompanySchema),
     user: p.manyToOne(UserSchema).nullable().deleteRule('set null'),
     kind: p.enum([...MESSAGE_KINDS]),
@@ -28,11 +25,7 @@ export const OutgoingMessageSchema = defineEntity({
     lastError: p.string().length(500).nullable(),
     nextAttemptAt: p.datetime().nullable(),
     sentAt: p.datetime().nullable(),
-    createdAt: p.datetime().onCreate(() => new Date()),
-    updatedAt: p
-      .datetime()
-      .onCreate(() => new Date())
-      .onUpdate(() => new Date()),
+    ...timestamps(),
   },
 });
 

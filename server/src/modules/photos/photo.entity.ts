@@ -1,17 +1,14 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
-import { randomUUID } from 'node:crypto';
 import { RoomSchema } from '../rooms/room.entity';
 import { UserSchema } from '../users/user.entity';
+import { uuidKey } from '../../lib/entity-columns';
 
 /** A room photo. The bytes live in the storage service under `storageKey` (a uuid, never the file name). */
 export const PhotoSchema = defineEntity({
   name: 'Photo',
   tableName: 'photo',
   properties: {
-    id: p
-      .uuid()
-      .primary()
-      .onCreate(() => randomUUID()),
+    id: uuidKey(),
     room: p.manyToOne(RoomSchema).deleteRule('cascade').index(),
     storageKey: p.uuid().unique(),
     contentType: p.string().length(40),

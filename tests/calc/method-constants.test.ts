@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { METHOD_NOTES, SHGC_ANGLE_DEG, SHGC_ANGLE_RATIO } from '@calc';
+import {
+  ATTIC_RESPONSE,
+  designConditionsSchema,
+  designDayContext,
+  METHOD_NOTES,
+  SHGC_ANGLE_DEG,
+  SHGC_ANGLE_RATIO,
+} from '@calc';
 
 /*
  * Outside checks of the hourly method's recalled constants, where a published equation exists.
@@ -63,5 +70,35 @@ describe('recalled constants are flagged in the method statement the loads page 
     const note = noteOf(words);
     expect(note).not.toBe('');
     expect(note).toMatch(/MEM|from memory/);
+  });
+});
+
+describe('vented attic air against measured attics', () => {
+  it('dark shingles at 26.6° N in July: the peak attic air is about 40 °F over outdoor, as measured', () => {
+    // [PUB: Parker, Sonne and Sherwin, "Comparative Evaluation of the Impact of Roofing Systems on Residential
+    // Cooling Energy Demand in Florida", FSEC-CR-1220-00 (ACEEE Summer Study 2002): in the control home (standard
+    // dark shingles, vented attic, Ft. Myers, 26.6° N) the attic air at the peak summer hour was 40 °F above ambient.]
+    // The site's design day here (92 °F, 15 °F daily range, generic clear sky) is our own approximation [MEM],
+    // so the check allows 15 %.
+    const c = designConditionsSchema.parse({
+      outdoorCoolingDryBulbF: 92,
+      outdoorCoolingWetBulbF: 78,
+      outdoorHeatingDryBulbF: 44,
+      dailyRangeF: 15,
+      latitudeDeg: 26.6,
+      designMonth: 7,
+    });
+    const ctx = designDayContext(c);
+    const overOutdoor = [...ctx.atticDt('dark', false)].map((dt, h) => c.indoorCoolingF + dt - (ctx.outdoorF[h] ?? 0));
+    const peak = Math.max(...overOutdoor);
+    expect(peak).toBeGreaterThan(40 * 0.85);
+    expect(peak).toBeLessThan(40 * 1.15);
+  });
+
+  it('the attic air lags the roof by 1–2 h', () => {
+    // [PUB: TenWolde, "FPL Roof Temperature and Moisture Model", USDA Forest Products Laboratory FPL-RP-561:
+    // heat storage often delays attic air temperatures by 1 to 2 h]
+    expect(ATTIC_RESPONSE.lagHours).toBeGreaterThanOrEqual(1);
+    expect(ATTIC_RESPONSE.lagHours).toBeLessThanOrEqual(2);
   });
 });

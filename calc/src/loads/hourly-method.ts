@@ -46,9 +46,11 @@ export type MassClass = keyof typeof MASS_RESPONSE;
 /**
  * Vented attic air temperature: outdoor + k × (roof sol-air − outdoor), one hour behind the
  * roof; k 0.45 for a vented attic, 0.30 with a radiant barrier under the roof deck.
- * [OWN/TRADE: a stated simplification in place of the flat +30 °F; the factors are from memory —
- * no citable public source was found (issue 9, 5 Dec 2026); verify against the attic model of
- * ASHRAE ch. 17 RHB where it matters]
+ * [OWN/TRADE: a stated simplification in place of the flat +30 °F. The vented 0.45 gives a dark-shingle
+ * attic at 26.6° N in July a peak 38 °F over outdoor, against 40 °F measured (PUB: Parker, Sonne and
+ * Sherwin, FSEC-CR-1220-00, control home, Ft. Myers) — checked in tests/calc/method-constants.test.ts;
+ * the 1 h lag is inside the 1–2 h delay measured by the USDA Forest Products Laboratory (PUB: TenWolde,
+ * FPL-RP-561). The radiant-barrier 0.30 is from memory: no citable source found (issue 9, 5 Dec 2026).]
  */
 export const ATTIC_RESPONSE = { vented: 0.45, radiantBarrier: 0.3, lagHours: 1 } as const;
 

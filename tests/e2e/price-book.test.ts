@@ -3,6 +3,7 @@ import { stringify } from 'csv-stringify/sync';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoAccounts } from '../../fixtures/seed';
+import { expectNoSeriousViolations } from './axe';
 import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
 
 let e: E2E;
@@ -54,6 +55,7 @@ describe('price book and catalog', () => {
     await page.getByText('cost_usd: "six fifty" is not an amount in dollars').waitFor();
     expect(await page.getByRole('button', { name: 'Confirm import' }).isDisabled()).toBe(true);
     await page.screenshot({ path: `${SHOTS}/price-book-import-refused-1440.png`, fullPage: true });
+    await expectNoSeriousViolations(page);
     expect(await materialCost(page, 'CU-38')).toBe(before.cu);
 
     await chooseFile(page, twoNew);
@@ -61,6 +63,7 @@ describe('price book and catalog', () => {
     await preview.getByRole('cell', { name: 'CU-38', exact: true }).waitFor();
     expect(await preview.getByRole('row').count()).toBe(3); // header + two changed rows
     await page.screenshot({ path: `${SHOTS}/price-book-import-preview-1440.png`, fullPage: true });
+    await expectNoSeriousViolations(page);
     await page.getByRole('button', { name: 'Confirm import' }).click();
     await page.getByText('Imported materials.csv: 0 new, 2 changed.').waitFor();
     expect(await materialCost(page, 'CU-38')).toBe(152);
@@ -73,6 +76,7 @@ describe('price book and catalog', () => {
     await history.getByText('imported').first().waitFor();
     await history.getByText('1.52').first().waitFor();
     await page.screenshot({ path: `${SHOTS}/price-book-history-1440.png`, fullPage: true });
+    await expectNoSeriousViolations(page);
     await context.close();
   });
 
@@ -92,6 +96,7 @@ describe('price book and catalog', () => {
     expect(await panel.getByText('Cost $', { exact: true }).count()).toBe(0);
     expect(await page.getByRole('button', { name: 'Save changes' }).count()).toBe(0);
     await page.screenshot({ path: `${SHOTS}/price-book-catalog-375.png`, fullPage: true });
+    await expectNoSeriousViolations(page);
     const width = await page.evaluate(() => document.documentElement.scrollWidth);
     expect(width).toBeLessThanOrEqual(375);
     await context.close();

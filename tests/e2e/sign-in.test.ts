@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoAccounts } from '../../fixtures/seed';
+import { expectNoSeriousViolations } from './axe';
 import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
 
 let e: E2E;
@@ -34,6 +35,8 @@ describe('sign in as every demo role, see the right navigation, sign out', () =>
         for (const label of rule.hides)
           expect(await nav.getByRole('link', { name: label, exact: true }).count()).toBe(0);
         await page.screenshot({ path: `${SHOTS}/home-${account.role}-${viewport.width}.png`, fullPage: true });
+        // Each role's start page (menu open on a phone) has no serious or critical accessibility finding.
+        await expectNoSeriousViolations(page);
         await page.getByRole('button', { name: 'Sign out' }).first().click();
         await page.waitForURL((u) => u.pathname.startsWith('/sign-in'));
         const me = await page.request.get('/api/auth/me');
@@ -50,6 +53,7 @@ describe('sign in as every demo role, see the right navigation, sign out', () =>
     await signIn(page, first.email, 'definitely-not-it');
     await page.getByText('The e-mail or password is not right.').waitFor();
     await page.screenshot({ path: `${SHOTS}/sign-in-error-375.png` });
+    await expectNoSeriousViolations(page);
     await context.close();
   });
 });

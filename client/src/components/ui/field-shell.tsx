@@ -43,3 +43,21 @@ export function FieldShell({ id, label, hint, error, unit, children }: FieldShel
     </div>
   );
 }
+
+export interface SelectOption {
+  readonly value: string;
+  readonly label: string;
+}
+
+/** The `<option>`s of a select from value/label pairs: every select of the app lists them this way. */
+export function SelectOptions({ options }: { options: readonly SelectOption[] }) {
+  return (
+    <>
+      {options.map((o) => (
+        <option key={o.value} value={o.value}>
+          {o.label}
+        </option>
+      ))}
+    </>
+  );
+}

@@ -1,7 +1,7 @@
 import { useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
 import { useFormContext, type RegisterOptions } from 'react-hook-form';
 import { Button, type ButtonProps } from './button';
-import { FieldShell, inputClass } from './field-shell';
+import { FieldShell, inputClass, SelectOptions } from './field-shell';
 
 function useField(name: string, hasHint: boolean) {
   const id = useId();
@@ -68,11 +68,7 @@ export function SelectField({ name, label, hint, options, ...rest }: SelectProps
   return (
     <FieldShell id={id} label={label} hint={hint} error={error}>
       <select id={id} className={inputClass} {...aria} {...rest} {...register(name)}>
-        {options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
+        <SelectOptions options={options} />
       </select>
     </FieldShell>
   );

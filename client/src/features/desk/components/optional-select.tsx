@@ -1,6 +1,6 @@
 import { useId } from 'react';
 import { useController, useFormContext } from 'react-hook-form';
-import { FieldShell, inputClass } from '../../../components/ui/field-shell';
+import { FieldShell, inputClass, SelectOptions } from '../../../components/ui/field-shell';
 
 /**
  * A select for an optional field: its first choice ('') leaves the field out (undefined), as calc's schema
@@ -38,11 +38,7 @@ export function OptionalSelect({
         onChange={(e) => field.onChange(toValue(e.target.value, field.value))}
         onBlur={field.onBlur}
       >
-        {options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
+        <SelectOptions options={options} />
       </select>
     </FieldShell>
   );

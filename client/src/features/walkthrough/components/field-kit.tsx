@@ -1,7 +1,7 @@
 import { formatTape, formatTapeCm, parseTape } from '@calc';
 import type { UnitSystem } from '@contract';
 import { useEffect, useId, useState, type ReactNode } from 'react';
-import { FieldShell, inputClass } from '../../../components/ui/field-shell';
+import { FieldShell, inputClass, SelectOptions } from '../../../components/ui/field-shell';
 import { fromDisplay, localiseBound, toDisplay, unitLabel, type Quantity } from '../../../lib/unit-display';
 import { useUnitSystem } from './unit-system';
 
@@ -185,11 +185,7 @@ export function SelectInput({ label, value, onChange, options, error }: SelectPr
         onChange={(e) => onChange(e.target.value)}
         {...aria(id, error, false)}
       >
-        {options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
+        <SelectOptions options={options} />
       </select>
     </FieldShell>
   );

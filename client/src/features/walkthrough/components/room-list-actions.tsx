@@ -4,6 +4,7 @@ import { copyRoomInput, newRoomId, ROOM_TEMPLATES } from '../model/room-template
 import { roomTarget } from '../sync/edits';
 import type { RoomView } from '../sync/overlay';
 import { useWalkthroughQueue } from '../sync/queue-context';
+import { SelectOptions } from '../../../components/ui/field-shell';
 
 const templateOptions = ROOM_TEMPLATES.map((t) => ({ value: t.key, label: t.label }));
 
@@ -64,11 +65,7 @@ export function RoomListActions({
         value={template}
         onChange={(e) => setTemplate(e.target.value)}
       >
-        {templateOptions.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
+        <SelectOptions options={templateOptions} />
       </select>
       <Button onClick={handleAdd}>Add room</Button>
       <Button variant="secondary" disabled={!current} onClick={handleCopy}>

@@ -164,3 +164,23 @@ describe('an approved discount is checked again when the price drops', () => {
     expect(dearer.body.option.result.price.discountCents).toBe(amount);
   });
 });
+
+describe('every blocker calc names holds the ready mark', () => {
+  it('a zone on no outdoor unit is refused with its reason', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const d = singleZone(rooms[0] ?? '');
+    const design = {
+      ...d,
+      zones: [...d.zones, { key: 'z2', name: 'Office', roomIds: [rooms[2] ?? ''], indoorUnitKey: 'TSL-S9H-W' }],
+    };
+    await newOption(estimator, job.id, { name: 'Half done', design });
+    const refused = await post(estimator, `/api/jobs/${job.id}/ready`).send({ sizingOverride: { reason: REASON } });
+    expectProblem(refused, 422);
+    expect(refused.body.blockers).toContainEqual(
+      expect.objectContaining({
+        code: 'combination-refused',
+        message: 'Half done: Zone Office is not connected to any outdoor unit.',
+      }),
+    );
+  });
+});

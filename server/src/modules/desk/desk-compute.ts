@@ -327,6 +327,9 @@ export function computeOption(
     const ratio = u.explanations.find((e) => e.key.endsWith('cooling-ratio'));
     block('sizing-outside-range', `${u.name}: ${ratio?.verdict ?? 'outside the allowed sizing range'}.`);
   }
+  // calc's blockers that belong to no one system's plans: a zone on no outdoor unit, a refrigerant past its rule's dates.
+  for (const b of design.blockers)
+    if (b.kind === 'connection' || b.kind === 'refrigerant-rule') block(b.code, b.message);
   for (const s of design.systems) {
     if (!s.combination.ok) block('combination-refused', s.combination.warnings.join(' ') || `${s.name}: refused.`);
     for (const b of s.refrigerant.blockers) block('limit-exceeded', b);

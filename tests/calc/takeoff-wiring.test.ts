@@ -1,5 +1,19 @@
 import { describe, expect, it } from 'vitest';
-import { branchConductors, computeDesign, egcCopperAwg, racewaySize, type DesignInput, type DesignResult } from '@calc';
+import {
+  branchConductors,
+  computeDesign,
+  computeDesignFromParsed,
+  DEFAULT_SIZING_POLICY,
+  designSchema,
+  egcCopperAwg,
+  equipmentCatalogSchema,
+  homeInputSchema,
+  priceBookSchema,
+  pricingSchema,
+  racewaySize,
+  type DesignInput,
+  type DesignResult,
+} from '@calc';
 import { catalog, design, pricing, priceBook, threeRoomHome } from './sample-data';
 
 const qty = (r: DesignResult, key: string) => r.takeoff.find((l) => l.itemKey === key)?.quantity;
@@ -103,5 +117,25 @@ describe('the takeoff counts wire by its conductors', () => {
     expect(qty(conduit, 'wire:thhn-conduit:12awg')).toBe(230);
     expect(qty(conduit, 'wire:thhn-conduit-ground:12awg')).toBe(115);
     expect(qty(conduit, 'raceway:emt:1/2')).toBe(100);
+  });
+});
+
+describe('explainPrice: false (the server explains its own price after the estimator’s edits)', () => {
+  it('the same takeoff and price, without the takeoff and price explanations', () => {
+    const full = run(design);
+    const lean = computeDesignFromParsed({
+      home: homeInputSchema.parse(threeRoomHome),
+      design: designSchema.parse(design),
+      catalog: equipmentCatalogSchema.parse(catalog),
+      priceBook: priceBookSchema.parse(priceBook),
+      pricing: pricingSchema.parse(pricing),
+      policy: DEFAULT_SIZING_POLICY,
+      explainPrice: false,
+    });
+    expect(lean.takeoff).toEqual(full.takeoff);
+    expect(lean.price).toEqual(full.price);
+    expect(lean.systems).toEqual(full.systems);
+    expect(full.explanations.length).toBeGreaterThan(0);
+    expect(lean.explanations).toEqual([]);
   });
 });

@@ -169,6 +169,11 @@ export interface ParsedDesignRequest {
   readonly policy: SizingPolicy;
   /** The home's loads when the caller already has them (several options on one home): skips the recompute. */
   readonly loads?: HomeLoad;
+  /**
+   * false: leave out the takeoff lines' and the price's explanations (`explanations` is empty), for a caller
+   * that prices the takeoff again after its own edits and explains that price itself (the server's desk).
+   */
+  readonly explainPrice?: boolean;
 }
 
 /**
@@ -184,6 +189,7 @@ export function computeDesignFromParsed({
   pricing,
   policy,
   loads: given,
+  explainPrice = true,
 }: ParsedDesignRequest): DesignResult {
   // A ducted system's ducts are this option's own: its loads are worked with them (the shared loads stand otherwise).
   const withDucts = homeWithDesignDucts(home, design);
@@ -380,32 +386,36 @@ export function computeDesignFromParsed({
   const priced = priceLines({ lines: buildTakeoff({ systems: forTakeoff }), priceBook });
   const anyA2l = systems.some((s) => s.refrigerant.safetyClass === 'A2L');
   const price = priceOption({ lines: priced.lines, pricing, priceBook });
-  const explanations: Explanation[] = priced.lines.map((l) =>
-    explanation({
-      key: `line:${l.itemKey}`,
-      label: l.description,
-      value: l.extendedCostCents,
-      unit: 'cents',
-      valueText: explainExtension({
-        quantity: l.quantity,
-        unit: l.unit,
-        unitCents: l.unitCostCents,
-        extendedCents: l.extendedCostCents,
+  const explanations: Explanation[] = !explainPrice
+    ? []
+    : priced.lines.map((l) =>
+        explanation({
+          key: `line:${l.itemKey}`,
+          label: l.description,
+          value: l.extendedCostCents,
+          unit: 'cents',
+          valueText: explainExtension({
+            quantity: l.quantity,
+            unit: l.unit,
+            unitCents: l.unitCostCents,
+            extendedCents: l.extendedCostCents,
+          }),
+          text: `${l.quantity} ${l.unit}: ${l.derivation}; ${explainExtension({ quantity: l.quantity, unit: l.unit, unitCents: l.unitCostCents, extendedCents: l.extendedCostCents })}`,
+          status: l.unitCostCents === null ? 'warning' : 'ok',
+        }),
+      );
+  if (explainPrice) {
+    for (const line of price.lineSells) explanations.push(explainLineSell({ line }));
+    explanations.push(
+      ...explainOptionPrice({
+        price,
+        pricing,
+        plans: pricing.financing
+          ? [{ key: 'financing', name: `${pricing.financing.months} months`, ...pricing.financing }]
+          : [],
       }),
-      text: `${l.quantity} ${l.unit}: ${l.derivation}; ${explainExtension({ quantity: l.quantity, unit: l.unit, unitCents: l.unitCostCents, extendedCents: l.extendedCostCents })}`,
-      status: l.unitCostCents === null ? 'warning' : 'ok',
-    }),
-  );
-  for (const line of price.lineSells) explanations.push(explainLineSell({ line }));
-  explanations.push(
-    ...explainOptionPrice({
-      price,
-      pricing,
-      plans: pricing.financing
-        ? [{ key: 'financing', name: `${pricing.financing.months} months`, ...pricing.financing }]
-        : [],
-    }),
-  );
+    );
+  }
   return {
     loads,
     zones,

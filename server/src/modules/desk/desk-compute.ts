@@ -290,6 +290,8 @@ export function computeOption(
         pricing,
         policy: DEFAULT_SIZING_POLICY,
         loads,
+        // The desk prices the takeoff again after the estimator's edits and explains that price itself.
+        explainPrice: false,
       });
     design = run(parsedDesign);
     if (option.preliminary) {

@@ -3,6 +3,7 @@ import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it, onTestFailed } from 'vitest';
 import { demoAccounts } from '../../fixtures/seed';
 import { expectNoSeriousViolations } from './axe';
+import { sampleRoom } from '../server/jobs-helpers';
 import { PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
 
 /**
@@ -45,6 +46,7 @@ class Hand {
 }
 
 interface SavedRoom {
+  version: number;
   input: {
     name: string;
     lengthFt: number;
@@ -121,6 +123,58 @@ describe('a bedroom on a slow phone', () => {
     console.log(`a 12 × 11 ft bedroom, two outside walls, one window: ${hand.taps} taps, ${hand.fields} fields`);
     expect(hand.taps).toBeLessThan(24);
     expect(hand.fields).toBeLessThan(15);
+    await context.close();
+  });
+
+  it('typing 1000 into Length (limit 200 ft) never stores 100, the prefix typed on the way: checked on the server', async () => {
+    if (!salesperson) throw new Error('no demo salesperson');
+    const { context, page } = await e.newPage(PHONE);
+    await signIn(page, salesperson.email, salesperson.password);
+    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    const tag = randomUUID().slice(0, 6);
+    const csrf = ((await (await page.request.get('/api/auth/csrf')).json()) as { token: string }).token;
+    const headers = { 'X-CSRF-Token': csrf };
+    const customer = await page.request.post('/api/customers', {
+      headers,
+      data: { name: `Ansel Typethrough-${tag}`, email: `ansel-${tag}@example.com` },
+    });
+    const customerId = ((await customer.json()) as { customer: { id: string } }).customer.id;
+    const job = await page.request.post('/api/jobs', {
+      headers,
+      data: { customerId, street: '6 Ember Row', city: 'Testerby', region: 'Demo State', postalCode: '00006' },
+    });
+    const jobId = ((await job.json()) as { job: { id: string } }).job.id;
+    const made = await page.request.post(`/api/jobs/${jobId}/rooms`, { headers, data: { input: sampleRoom('Den') } });
+    const roomId = ((await made.json()) as { room: { id: string } }).room.id;
+    const server = async () =>
+      ((await (await page.request.get(`/api/jobs/${jobId}/rooms/${roomId}`)).json()) as { room: SavedRoom }).room;
+
+    await page.goto(`/jobs/${jobId}`);
+    const length = page.getByLabel('Length', { exact: true });
+    await length.waitFor();
+    await pill(page)
+      .filter({ hasText: /^\s*Saved\s*$/ })
+      .waitFor();
+    // The page's clock stands still while the keys go in, so however slow this machine is, no pause
+    // happens between "100" and "1000" (a real pause there would rightly save 100).
+    await page.clock.install();
+    await length.fill('');
+    await length.pressSequentially('1000');
+    await page.getByText('Length must be between 1 and 200 ft').waitFor();
+    // Then well past the autosave pause.
+    await page.clock.runFor(5000);
+    await pill(page).filter({ hasText: 'Not saved — 1 field to fix' }).waitFor();
+    const before = await server();
+    expect(before.input.lengthFt).toBe(16);
+    expect(before.version).toBe(1);
+
+    // Fixed: saved, and the server has it.
+    await length.fill('14');
+    await page.clock.runFor(5000);
+    await pill(page)
+      .filter({ hasText: /^\s*Saved\s*$/ })
+      .waitFor({ timeout: 20_000 });
+    expect((await server()).input.lengthFt).toBe(14);
     await context.close();
   });
 });

@@ -3,6 +3,7 @@ import { login, makeCompany, type Session, type TestCompany } from '../helpers/f
 import { buildTestApp, type TestApp } from '../helpers/test-app';
 import { expectProblem, patch, post } from './jobs-helpers';
 import { deskJob, newOption, seedData, singleZone } from './desk-helpers';
+import { CompanyDataRowSchema } from '../../server/src/modules/company-data/company-data.entity';
 
 let t: TestApp;
 let a: TestCompany;
@@ -182,5 +183,43 @@ describe('every blocker calc names holds the ready mark', () => {
         message: 'Half done: Zone Office is not connected to any outdoor unit.',
       }),
     );
+  });
+});
+
+describe('an approved discount and a cheaper price book', () => {
+  it('when the catalog cost drops with no write to the option, the desk no longer applies it and the owner decides again', async () => {
+    const { job, rooms } = await deskJob(sales);
+    const o = await newOption(sales, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '') });
+    const url = optionUrl(job.id, o.id);
+    const amount = Math.round((o.result as { price: { sellCents: number } }).price.sellCents * 0.11);
+    const asked = await patch(sales, url, o.version).send({
+      pricing: { discounts: [{ label: 'Neighbour referral', kind: 'amount', value: amount }] },
+    });
+    const approved = await post(owner, `${url}/discount-decision`)
+      .set('If-Match', `"${asked.body.option.version}"`)
+      .send({ approve: true });
+    expect(approved.body.option.discountRequest.state).toBe('approved');
+    // The company's cost for the outdoor unit halves (a price-book change, not a desk write).
+    const em = t.orm.em.fork();
+    const row = await em.findOneOrFail(CompanyDataRowSchema, { company: a.id, dataset: 'models', key: 'TSL-S12H-O' });
+    row.data = { ...row.data, costCents: Math.round(Number(row.data['costCents']) / 2) };
+    await em.flush();
+    const desk = (await estimator.agent.get(`/api/jobs/${job.id}/desk`)).body;
+    const now = desk.options.find((x: { id: string }) => x.id === o.id);
+    expect(now.result.price.discountCents).toBe(0);
+    expect(
+      desk.readiness.blockers.some(
+        (b: { code: string; message: string }) =>
+          b.code === 'discount-pending' && b.message.includes('price has dropped'),
+      ),
+    ).toBe(true);
+    // The owner decides again from the same screen: approved at the new share, applied.
+    const again = await post(owner, `${url}/discount-decision`)
+      .set('If-Match', `"${now.version}"`)
+      .send({ approve: true });
+    expect(again.status, JSON.stringify(again.body)).toBe(200);
+    expect(again.body.option.discountRequest.state).toBe('approved');
+    expect(again.body.option.discountRequest.percent).toBeGreaterThan(approved.body.option.discountRequest.percent);
+    expect(again.body.option.result.price.discountCents).toBe(amount);
   });
 });

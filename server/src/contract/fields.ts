@@ -82,6 +82,15 @@ export const siteRules = {
   notes,
 };
 
+/** The address fields of a site (its rules without the notes), in the order a form shows them. */
+export const ADDRESS_FIELDS = [
+  'street',
+  'unit',
+  'city',
+  'region',
+  'postalCode',
+] as const satisfies readonly (keyof typeof siteRules)[];
+
 /** Blank text in a form means "not given"; the server takes null (or leaves the field out) for those. */
 export const blankOr = <S extends z.ZodType<string, string>>(rule: S) => z.union([z.literal(''), rule]);
 

@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
-import type { CustomerRecord } from '@contract';
+import { ADDRESS_FIELDS, type CustomerRecord } from '@contract';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { findSameCustomer, lastSiteOf } from '../api/find-customer';
@@ -27,7 +27,7 @@ const empty: NewJobInput = {
   notes: '',
 };
 
-const SITE_FIELDS = ['street', 'unit', 'city', 'region', 'postalCode'] as const;
+const SITE_FIELDS = ADDRESS_FIELDS;
 
 /** An existing customer's last site fills the site fields still empty (all editable). */
 async function fillSite(

@@ -1,5 +1,6 @@
 import type { QueueItem } from '../../../lib/offline/queue';
 import {
+  ADDRESS_FIELDS,
   type CustomerRecord,
   type JobRecord,
   type RoomRecord,
@@ -104,7 +105,7 @@ export function overlayJob(
 /** Job details waiting in the queue, laid over the job (a person's name stays until the server answers). */
 function withDetails(job: JobRecord, c: JobChanges): JobRecord {
   const site = { ...job.site };
-  for (const k of ['street', 'unit', 'city', 'region', 'postalCode'] as const) {
+  for (const k of ADDRESS_FIELDS) {
     const v = c[k];
     if (v !== undefined) site[k] = v;
   }

@@ -28,7 +28,11 @@ const ZONES = [
 const MULTI = 'TSL-M36-4P';
 
 const tab = (page: Page, name: string) => page.getByRole('tab', { name: new RegExp(`^${name}`) });
-const saved = (form: Locator) => form.getByRole('status').filter({ hasText: 'Saved' }).waitFor();
+const saved = (form: Locator) =>
+  form
+    .getByRole('status')
+    .filter({ hasText: /^Saved$/ })
+    .waitFor();
 
 async function signedIn(role: string, viewport: { width: number; height: number } = DESKTOP) {
   const who = account(role);
@@ -254,6 +258,8 @@ describe('the estimator’s desk to a ready job', () => {
       .first()
       .waitFor();
     await system3.getByText('Backup heat needed at the design temperature').waitFor();
+    // What the server stored is what the form shows: it still says "Saved", not "Not saved yet".
+    expect(await design3.getByRole('status').textContent()).toBe('Saved');
     await design3.screenshot({ path: `${SHOTS}/desk-ducted-design-1440.png` });
     await expectAccessible(page);
     await page.setViewportSize({ width: 768, height: 1024 });

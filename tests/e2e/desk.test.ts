@@ -35,7 +35,10 @@ describe('the estimator’s desk', () => {
     await page.getByLabel('Line-set length (ft)').fill('25');
     await page.getByLabel('Branch circuit length (ft)').fill('30');
     await page.getByRole('button', { name: 'Save design' }).click();
-    await design.getByRole('status').filter({ hasText: 'Saved' }).waitFor();
+    await design
+      .getByRole('status')
+      .filter({ hasText: /^Saved$/ })
+      .waitFor();
     const charge = page.getByText(/extra charge/).first();
     await charge.waitFor();
     const before = await page.getByText(/^Total extra charge/).textContent();
@@ -43,7 +46,10 @@ describe('the estimator’s desk', () => {
     await page.getByLabel('Line-set length (ft)').fill('60');
     await design.getByRole('status').filter({ hasText: 'Not saved yet' }).waitFor();
     await page.getByRole('button', { name: 'Save design' }).click();
-    await design.getByRole('status').filter({ hasText: 'Saved' }).waitFor();
+    await design
+      .getByRole('status')
+      .filter({ hasText: /^Saved$/ })
+      .waitFor();
     await expect.poll(() => page.getByText(/^Total extra charge/).textContent()).not.toBe(before);
     // The charge opens to its why.
     await page.getByText('why?').first().click();
@@ -71,7 +77,10 @@ describe('the estimator’s desk', () => {
     await page.getByLabel('Discount name').fill('Neighbour referral');
     await page.getByLabel('Discount (%)').last().fill('5');
     await page.getByRole('button', { name: 'Save pricing' }).click();
-    await pricing.getByRole('status').filter({ hasText: 'Saved' }).waitFor();
+    await pricing
+      .getByRole('status')
+      .filter({ hasText: /^Saved$/ })
+      .waitFor();
     await expect.poll(() => page.getByRole('tab', { name: new RegExp(name) }).textContent()).not.toBe(totalBefore);
     await page.getByLabel('Discount (%)').last().fill('40');
     await page.getByRole('button', { name: 'Save pricing' }).click();

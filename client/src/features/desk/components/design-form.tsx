@@ -1,9 +1,9 @@
-import { useFieldArray, useFormContext, useWatch } from 'react-hook-form';
+import { useController, useFieldArray, useFormContext, useWatch } from 'react-hook-form';
 import { useState } from 'react';
 import { optionDesignSchema, type OptionRecord, type RoomRecord } from '@contract';
 import { DUCT_LOCATION_WORDS, ductLocationSchema, ductLeakageSchema, type DesignInput } from '@calc';
 import { Form } from '../../../components/ui/form';
-import { NumberField, SelectField, TextField } from '../../../components/ui/form-fields';
+import { NumberField, TextField } from '../../../components/ui/form-fields';
 import { AmountField } from './amount-field';
 import type { DeskModel } from '../api/get-models';
 import { useUpdateOption } from '../api/update-option';
@@ -17,14 +17,14 @@ import {
 } from '../model/design-values';
 import type { ExplanationView } from '../model/result-view';
 import { errorOnFields } from '../model/field-paths';
-import { OptionalSelect } from './optional-select';
+import { Choice, OptionalSelect } from './optional-select';
 import { RowList } from './row-list';
 import { SaveState } from './save-state';
 import { Why } from './why';
 
 const LIFT_DIRECTIONS = [
-  { value: 'indoor-above', label: 'Indoor unit above the outdoor unit' },
-  { value: 'indoor-below', label: 'Indoor unit below the outdoor unit' },
+  { value: 'indoor-above', label: 'Above the outdoor unit' },
+  { value: 'indoor-below', label: 'Below the outdoor unit' },
 ];
 const DUCT_CHOICES = [
   { value: '', label: 'No ducts (ductless indoor units)' },
@@ -36,6 +36,29 @@ const LEAKAGE_WORDS: Record<(typeof ductLeakageSchema.options)[number], string> 
   leaky: 'Leaky (old or unsealed)',
 };
 const LEAKAGE = ductLeakageSchema.options.map((l) => ({ value: l, label: LEAKAGE_WORDS[l] }));
+
+/**
+ * "One open space" is true or absent (never false): an unticked box leaves the design as saved, so the form
+ * does not call itself changed after a save.
+ */
+function OpenSpace({ name }: { name: `zones.${number}.openSpace` }) {
+  const { control } = useFormContext<DesignInput>();
+  const { field } = useController({ control, name });
+  return (
+    <label className="flex min-h-touch items-center gap-2">
+      <input
+        type="checkbox"
+        className="h-5 w-5"
+        ref={field.ref}
+        name={field.name}
+        checked={field.value === true}
+        onChange={(e) => field.onChange(e.target.checked ? true : undefined)}
+        onBlur={field.onBlur}
+      />
+      These rooms are one open space (no doors or full walls between them)
+    </label>
+  );
+}
 
 function Zones({
   rooms,
@@ -84,7 +107,7 @@ function Zones({
         return (
           <>
             <TextField name={`zones.${i}.name`} label="Zone name" autoComplete="off" />
-            <SelectField name={`zones.${i}.indoorUnitKey`} label="Indoor unit" options={modelOptions(models, false)} />
+            <Choice name={`zones.${i}.indoorUnitKey`} label="Indoor unit" options={modelOptions(models, false)} />
             {ducted ? (
               <NumberField
                 name={`zones.${i}.lowestDuctOpeningFt`}
@@ -106,7 +129,7 @@ function Zones({
             </div>
             {/* A ducted unit's leak spreads over every room it serves: which room holds it does not matter. */}
             {chosen.length > 1 && !ducted ? (
-              <>
+              <div className="grid items-end gap-3 sm:grid-cols-2 lg:col-span-2">
                 <OptionalSelect
                   name={`zones.${i}.headRoomId`}
                   label="Indoor unit is in"
@@ -116,11 +139,8 @@ function Zones({
                     ...chosen.map((id) => ({ value: id, label: nameOf(id) })),
                   ]}
                 />
-                <label className="flex min-h-touch items-center gap-2 self-end">
-                  <input type="checkbox" className="h-5 w-5" {...register(`zones.${i}.openSpace`)} />
-                  These rooms are one open space (no doors or full walls between them)
-                </label>
-              </>
+                <OpenSpace name={`zones.${i}.openSpace`} />
+              </div>
             ) : null}
           </>
         );
@@ -143,20 +163,23 @@ function Circuits({ s }: { s: number }) {
       addLabel="Add a circuit"
       minRows={1}
       maxRows={8}
-      onAdd={() => circuits.append({ zoneKey: zones[0]?.key ?? '', lengthFt: Number.NaN, liftFt: 0 })}
+      onAdd={() =>
+        circuits.append({
+          zoneKey: zones[0]?.key ?? '',
+          lengthFt: Number.NaN,
+          liftFt: 0,
+          liftDirection: 'indoor-above',
+        })
+      }
       onRemove={(c) => circuits.remove(c)}
       rowClassName="grid gap-3 sm:grid-cols-2 lg:grid-cols-4"
     >
       {(c) => (
         <>
-          <SelectField name={`systems.${s}.circuits.${c}.zoneKey`} label="Circuit to zone" options={zoneOptions} />
+          <Choice name={`systems.${s}.circuits.${c}.zoneKey`} label="Circuit to zone" options={zoneOptions} />
           <AmountField name={`systems.${s}.circuits.${c}.lengthFt`} label="Line-set length (ft)" />
           <AmountField name={`systems.${s}.circuits.${c}.liftFt`} label="Vertical lift (ft)" />
-          <SelectField
-            name={`systems.${s}.circuits.${c}.liftDirection`}
-            label="Indoor unit is"
-            options={LIFT_DIRECTIONS}
-          />
+          <Choice name={`systems.${s}.circuits.${c}.liftDirection`} label="Indoor unit is" options={LIFT_DIRECTIONS} />
         </>
       )}
     </RowList>
@@ -212,7 +235,7 @@ function DuctsAndHeat({
         {system.ducts ? (
           <>
             <AmountField name={`systems.${s}.ducts.insulationR`} label="Duct insulation (R-value)" />
-            <SelectField name={`systems.${s}.ducts.leakage`} label="Duct leakage" options={LEAKAGE} />
+            <Choice name={`systems.${s}.ducts.leakage`} label="Duct leakage" options={LEAKAGE} />
           </>
         ) : null}
       </div>
@@ -258,7 +281,7 @@ function Systems({
           key: nextKey('sys', keys),
           name: `Outdoor unit ${systems.fields.length + 1}`,
           outdoorUnitKey: '',
-          circuits: [{ zoneKey: '', lengthFt: Number.NaN, liftFt: 0 }],
+          circuits: [{ zoneKey: '', lengthFt: Number.NaN, liftFt: 0, liftDirection: 'indoor-above' }],
           electrical: { circuitLengthFt: Number.NaN },
         })
       }
@@ -269,11 +292,7 @@ function Systems({
         <>
           <div className="grid gap-3 lg:grid-cols-[1fr_2fr_1fr]">
             <TextField name={`systems.${s}.name`} label="System name" autoComplete="off" />
-            <SelectField
-              name={`systems.${s}.outdoorUnitKey`}
-              label="Outdoor unit"
-              options={modelOptions(models, true)}
-            />
+            <Choice name={`systems.${s}.outdoorUnitKey`} label="Outdoor unit" options={modelOptions(models, true)} />
             <AmountField name={`systems.${s}.electrical.circuitLengthFt`} label="Branch circuit length (ft)" />
           </div>
           <Circuits s={s} />

@@ -43,3 +43,17 @@ export function OptionalSelect({
     </FieldShell>
   );
 }
+
+/**
+ * A select that holds its value through the form (controlled). The desk's forms use it rather than a
+ * registered select: in field-array rows a registered select took its first choice on mount ("Choose an
+ * indoor unit"), so a stored design looked changed right after it was saved.
+ */
+export function Choice(props: {
+  name: string;
+  label: string;
+  hint?: string;
+  options: readonly { value: string; label: string }[];
+}) {
+  return <OptionalSelect {...props} toValue={(v) => v} />;
+}

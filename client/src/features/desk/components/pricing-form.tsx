@@ -3,11 +3,12 @@ import { useState } from 'react';
 import { TAX_RULE_LABELS, TAX_RULES } from '@calc';
 import type { OptionRecord } from '@contract';
 import { Form } from '../../../components/ui/form';
-import { SelectField, TextField } from '../../../components/ui/form-fields';
+import { TextField } from '../../../components/ui/form-fields';
 import { errorOnFields } from '../model/field-paths';
 import { useUpdateOption } from '../api/update-option';
 import { pricingFormSchema, pricingFormValues, type PricingFormValues } from '../model/pricing-values';
 import { AmountField } from './amount-field';
+import { Choice } from './optional-select';
 import { RowList } from './row-list';
 import { SaveState } from './save-state';
 
@@ -45,7 +46,7 @@ function Discounts() {
       {(i) => (
         <>
           <TextField name={`discounts.${i}.label`} label="Discount name" autoComplete="off" />
-          <SelectField name={`discounts.${i}.kind`} label="Kind" options={KINDS} />
+          <Choice name={`discounts.${i}.kind`} label="Kind" options={KINDS} />
           <AmountField name={`discounts.${i}.value`} label={valueLabel(kinds[i], 'Discount')} />
         </>
       )}
@@ -57,13 +58,13 @@ function TaxFields() {
   const choice = useWatch<PricingFormValues, 'taxChoice'>({ name: 'taxChoice' });
   return (
     <fieldset className="flex flex-col gap-2">
-      <legend className="text-sm font-semibold text-ink-900">Tax</legend>
+      <legend className="text-base font-semibold text-ink-900">Tax</legend>
       <div className="grid gap-3 sm:grid-cols-2">
-        <SelectField name="taxChoice" label="Tax for this option" options={TAX_CHOICE_OPTIONS} />
+        <Choice name="taxChoice" label="Tax for this option" options={TAX_CHOICE_OPTIONS} />
         {choice === 'rate' ? <AmountField name="tax.taxRatePercent" label="Tax rate (%)" /> : null}
         {choice === 'rate' ? (
           <div className="sm:col-span-2">
-            <SelectField name="tax.taxOn" label="What is taxed" options={TAXED} />
+            <Choice name="tax.taxOn" label="What is taxed" options={TAXED} />
           </div>
         ) : null}
         {choice !== 'company' ? (
@@ -136,7 +137,7 @@ export function PricingForm({
               </label>
               {rule ? (
                 <>
-                  <SelectField
+                  <Choice
                     name="sellRule.method"
                     label="Sell by"
                     options={[
@@ -151,11 +152,11 @@ export function PricingForm({
             <Discounts />
             <TaxFields />
             <fieldset className="grid gap-3 sm:grid-cols-2">
-              <legend className="text-sm font-semibold text-ink-900">Deposit and financing</legend>
-              <SelectField name="deposit.kind" label="Deposit as" options={DEPOSIT_KINDS} />
+              <legend className="text-base font-semibold text-ink-900">Deposit and financing</legend>
+              <Choice name="deposit.kind" label="Deposit as" options={DEPOSIT_KINDS} />
               <AmountField name="deposit.value" label={valueLabel(depositKind, 'Deposit')} />
               <div className="sm:col-span-2">
-                <SelectField
+                <Choice
                   name="financingPlanKey"
                   label="Monthly payment shown for"
                   options={[{ value: '', label: 'Every plan' }, ...plans.map((p) => ({ value: p.key, label: p.name }))]}

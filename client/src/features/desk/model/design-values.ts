@@ -5,7 +5,25 @@ import type { DeskModel } from '../api/get-models';
 /** The option's stored design as the form edits it, or a first zone and system to fill in. */
 export function designValues(option: OptionRecord): DesignInput {
   const stored = designSchema.safeParse(option.design);
-  if (stored.success) return stored.data;
+  // Every field the form shows is a key of the values, even when absent (undefined): the form compares its
+  // values with these whole, and a field that appears on screen would otherwise make a just-saved design look
+  // changed. A circuit's lift direction absent means above (calc's rule) and is shown so.
+  if (stored.success)
+    return {
+      ...stored.data,
+      zones: stored.data.zones.map((z) => ({
+        ...z,
+        headRoomId: z.headRoomId,
+        openSpace: z.openSpace,
+        lowestDuctOpeningFt: z.lowestDuctOpeningFt,
+      })),
+      systems: stored.data.systems.map((s) => ({
+        ...s,
+        ducts: s.ducts,
+        heatKitKey: s.heatKitKey,
+        circuits: s.circuits.map((c) => ({ ...c, liftDirection: c.liftDirection ?? 'indoor-above' })),
+      })),
+    };
   return {
     zones: [{ key: 'zone-1', name: 'Zone 1', roomIds: [], indoorUnitKey: '' }],
     systems: [
@@ -13,7 +31,7 @@ export function designValues(option: OptionRecord): DesignInput {
         key: 'sys-1',
         name: 'Outdoor unit 1',
         outdoorUnitKey: '',
-        circuits: [{ zoneKey: 'zone-1', lengthFt: Number.NaN, liftFt: 0 }],
+        circuits: [{ zoneKey: 'zone-1', lengthFt: Number.NaN, liftFt: 0, liftDirection: 'indoor-above' }],
         electrical: { circuitLengthFt: Number.NaN },
       },
     ],

@@ -1,0 +1,129 @@
+import { QueryClientProvider, useQuery } from '@tanstack/react-query';
+import { fireEvent, render, screen, waitFor } from '@testing-library/react';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { clearCsrfToken } from '../../client/src/lib/api-client';
+import { json, mockFetch } from './helpers/fetch-mock';
+import type { OptionRecord, RoomRecord } from '@contract';
+import { DesignForm } from '../../client/src/features/desk/components/design-form';
+import type { DeskModel } from '../../client/src/features/desk/api/get-models';
+import { deskQueryOptions } from '../../client/src/features/desk/api/get-desk';
+import { createQueryClient } from '../../client/src/lib/query-client';
+
+const model = (key: string, kind: string, indoorType = ''): DeskModel => ({
+  key,
+  name: key,
+  kind,
+  seer2: null,
+  hspf2: null,
+  soundDba: null,
+  nominalCoolingBtuh: null,
+  ports: null,
+  indoorType,
+  heatKitKw: null,
+});
+const models = [model('IN-9', 'indoor', 'wall'), model('OUT-9', 'outdoor-single-zone')];
+const room = (id: string, position: number): RoomRecord =>
+  ({ id, position, input: { name: `Room ${id}` } }) as unknown as RoomRecord;
+const rooms = [room('r1', 0), room('r2', 1)];
+
+/** An option as the server answers with it: the design as calc's schema stored it (defaults filled). */
+const option = {
+  id: 'o1',
+  jobId: 'j1',
+  position: 0,
+  name: 'Essential',
+  version: 3,
+  pricing: null,
+  takeoffEdits: [],
+  discountRequest: null,
+  preliminary: false,
+  reviewedBy: null,
+  reviewedAt: null,
+  result: null,
+  problems: [],
+  blockers: [],
+  createdBy: null,
+  createdAt: '2026-12-01T00:00:00.000Z',
+  updatedAt: '2026-12-01T00:00:00.000Z',
+  design: {
+    zones: [{ key: 'zone-1', name: 'Zone 1', roomIds: ['r1', 'r2'], indoorUnitKey: 'IN-9' }],
+    systems: [
+      {
+        key: 'sys-1',
+        name: 'Outdoor unit 1',
+        outdoorUnitKey: 'OUT-9',
+        mounting: 'pad',
+        circuits: [
+          {
+            zoneKey: 'zone-1',
+            lengthFt: 25,
+            liftFt: 0,
+            wallPenetrations: 1,
+            lineCoverFt: 0,
+            condensate: 'gravity',
+            condensateLengthFt: 10,
+          },
+        ],
+        electrical: {
+          terminationC: 60,
+          wiringMethod: 'nm-b',
+          circuitLengthFt: 30,
+          disconnectDistanceFt: 5,
+          disconnectVisible: true,
+        },
+      },
+    ],
+  },
+} as unknown as OptionRecord;
+
+beforeEach(() => clearCsrfToken());
+afterEach(() => vi.unstubAllGlobals());
+
+describe('the desk’s design form', () => {
+  it('a stored design opens unchanged: nothing says "Not saved yet" before anyone types', async () => {
+    render(
+      <QueryClientProvider client={createQueryClient()}>
+        <DesignForm jobId="j1" option={option} rooms={rooms} models={models} canEdit whys={new Map()} />
+      </QueryClientProvider>,
+    );
+    await screen.findByRole('button', { name: 'Save design' });
+    // Every select shows the stored unit (an uncontrolled select in a field-array row took its first choice).
+    expect(screen.getByLabelText('Indoor unit')).toHaveValue('IN-9');
+    expect(screen.getByLabelText('Outdoor unit')).toHaveValue('OUT-9');
+    expect(screen.getByRole('status').textContent).toBe('');
+  });
+
+  it('after a save it says "Saved": the form holds what the server stored', async () => {
+    let stored: OptionRecord = option;
+    mockFetch({
+      'GET /api/auth/csrf': json(200, { token: 't' }),
+      'PATCH /api/jobs/j1/options/o1': (init) => {
+        const sent = JSON.parse(String(init?.body)) as { design: Record<string, unknown> };
+        stored = { ...stored, version: stored.version + 1, design: sent.design };
+        return json(200, { option: stored });
+      },
+      'GET /api/jobs/j1/desk': () =>
+        json(200, {
+          jobId: 'j1',
+          jobStatus: 'design',
+          options: [stored],
+          readiness: { markedReady: null, sizingOverride: null, ready: false, blockers: [] },
+        }),
+    });
+    // As the desk does: the option on screen is the one in the desk's query.
+    function Desk() {
+      const o = useQuery(deskQueryOptions('j1')).data?.options[0];
+      return o ? <DesignForm jobId="j1" option={o} rooms={rooms} models={models} canEdit whys={new Map()} /> : null;
+    }
+    render(
+      <QueryClientProvider client={createQueryClient()}>
+        <Desk />
+      </QueryClientProvider>,
+    );
+    fireEvent.change(await screen.findByLabelText('Line-set length (ft)'), { target: { value: '40' } });
+    expect(screen.getByRole('status').textContent).toBe('Not saved yet');
+    fireEvent.click(screen.getByRole('button', { name: 'Save design' }));
+    await waitFor(() => expect(screen.getByRole('status').textContent).toBe('Saved'));
+    expect(stored.design).toMatchObject({ systems: [{ circuits: [{ lengthFt: 40 }] }] });
+  });
+});

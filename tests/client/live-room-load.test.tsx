@@ -45,7 +45,7 @@ describe('live room loads in a ducted home', () => {
     const props = {
       room,
       designConditions: ranchHome.designConditions as Record<string, unknown>,
-      tightness: 'average',
+      tightness: 'average' as const,
       home: { rooms: saved, house },
     };
     render(

@@ -5,6 +5,7 @@ import type { RouteModule } from '../../client/src/app/router';
 import { RouteError } from '../../client/src/components/errors/route-error';
 import { authKeys } from '../../client/src/features/auth/query-keys';
 import { mailKeys } from '../../client/src/features/mail/query-keys';
+import { priceBookKeys } from '../../client/src/features/price-book/query-keys';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { createJobsRoutes } from '../../client/src/app/job-routes';
 import { jobKeys } from '../../client/src/entities/job/query-keys';
@@ -67,7 +68,7 @@ describe('pages opened with no signal say so instead of staying blank', () => {
     ).toBeInTheDocument();
   });
 
-  describe('the office pages: users, e-mail, outbox and settings', () => {
+  describe('the office pages: users, e-mail, outbox, settings and the price book', () => {
     const me = {
       user: {
         id: 'u1',
@@ -85,6 +86,7 @@ describe('pages opened with no signal say so instead of staying blank', () => {
       ['/mail', () => import('../../client/src/app/routes/mail')],
       ['/outbox', () => import('../../client/src/app/routes/outbox')],
       ['/settings', () => import('../../client/src/app/routes/company-settings')],
+      ['/price-book', () => import('../../client/src/app/routes/price-book')],
     ];
 
     function renderPage(path: string, load: () => Promise<RouteModule>, seed?: (q: QueryClient) => void) {
@@ -119,6 +121,16 @@ describe('pages opened with no signal say so instead of staying blank', () => {
         expect(screen.getByText(/nothing of this page is saved on this phone yet/)).toBeInTheDocument();
       },
     );
+
+    it('Price book with one table held: that table opens; another says "No signal" in its panel, not a spinner', async () => {
+      mockFetch({});
+      onlineManager.setOnline(false);
+      renderPage('/price-book', pages[4]![1], (q) => q.setQueryData(priceBookKeys.table('models'), []));
+      expect(await screen.findByRole('button', { name: 'Materials' }, { timeout: 4000 })).toBeInTheDocument();
+      screen.getByRole('button', { name: 'Materials' }).click();
+      expect(await screen.findByText(/Could not show materials/, undefined, { timeout: 4000 })).toBeInTheDocument();
+      expect(screen.getByText(/nothing of this page is saved on this phone yet/)).toBeInTheDocument();
+    });
 
     it('E-mail held on the phone: the list, with "showing what this phone last saw"', async () => {
       mockFetch({});

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { FACINGS } from '../solar/facings';
 
 /**
  * Field builders shared by every calc schema so each bound has one human message,
@@ -39,6 +40,6 @@ export function keyField(label: string) {
 }
 
 /** Compass directions a wall or window can face. */
-export const compassDirectionSchema = z.enum(['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'], {
+export const compassDirectionSchema = z.enum(FACINGS, {
   error: 'Choose a direction: N, NE, E, SE, S, SW, W or NW',
 });

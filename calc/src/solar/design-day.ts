@@ -216,7 +216,4 @@ export function outdoorDryBulbAtHour({
   return num(designDryBulbF) - f * num(dailyRangeF, 'nonNegative');
 }
 
-/** The azimuth (clockwise from north) of each compass facing. */
-export const FACING_AZIMUTH_DEG = { N: 0, NE: 45, E: 90, SE: 135, S: 180, SW: 225, W: 270, NW: 315 } as const;
-export type Facing = keyof typeof FACING_AZIMUTH_DEG;
-export const FACINGS: readonly Facing[] = ['N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'];
+export { FACINGS, FACING_AZIMUTH_DEG, type Facing } from './facings';

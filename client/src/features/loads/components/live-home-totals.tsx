@@ -1,9 +1,10 @@
+import type { Tightness } from '@calc';
 import { engineWaitMessage, useLoadEngine } from './live-engine';
 
 interface Props {
   rooms: readonly { readonly id: string; readonly input: Record<string, unknown> }[];
   designConditions: Record<string, unknown> | null;
-  tightness: string;
+  tightness: Tightness;
   house?: Record<string, unknown> | undefined;
 }
 

@@ -1,4 +1,4 @@
-import type { Room } from '@calc';
+import type { Room, Tightness } from '@calc';
 import { useState } from 'react';
 import { engineWaitMessage, useLoadEngine } from './live-engine';
 import type { LiveHomeInputs } from '../model/live-room';
@@ -8,7 +8,7 @@ const n = (v: number) => v.toLocaleString('en-US');
 interface Props {
   room: Room | null;
   designConditions: Record<string, unknown> | null;
-  tightness: string;
+  tightness: Tightness;
   /** The other rooms and the house facts (see RoomLoadPanel). */
   home: LiveHomeInputs;
 }

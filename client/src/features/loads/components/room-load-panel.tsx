@@ -1,4 +1,4 @@
-import type { PlausibilityWarning, Room } from '@calc';
+import type { PlausibilityWarning, Room, Tightness } from '@calc';
 import { Alert } from '../../../components/ui/alert';
 import { engineWaitMessage, useLoadEngine } from './live-engine';
 import { LazyComponentChart } from './lazy-component-chart';
@@ -10,7 +10,7 @@ interface Props {
   room: Room | null;
   warnings: readonly PlausibilityWarning[];
   designConditions: Record<string, unknown> | null;
-  tightness: string;
+  tightness: Tightness;
   /** The other rooms and the house facts: the room's figures are its figures in the whole home. */
   home: LiveHomeInputs;
 }

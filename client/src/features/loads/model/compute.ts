@@ -12,7 +12,6 @@ import {
   type RoomLoad,
   type Tightness,
 } from '@calc';
-import { TIGHTNESS } from '@contract';
 
 /** Our words for calc's load components (chart labels and the printout). */
 export const COMPONENT_LABELS: Record<ComponentKey, string> = {
@@ -30,8 +29,6 @@ export const COMPONENT_LABELS: Record<ComponentKey, string> = {
 };
 export { COMPONENT_KEYS };
 
-export const toTightness = (t: string): Tightness => TIGHTNESS.find((x) => x === t) ?? 'average';
-
 export { tons } from './tons';
 
 export type LoadResult<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly message: string };
@@ -45,7 +42,7 @@ function fail(e: unknown): { ok: false; message: string } {
 export function computeRoomLoad(
   room: Room,
   designConditions: Record<string, unknown> | null,
-  tightness: string,
+  tightness: Tightness,
 ): LoadResult<RoomLoad> {
   if (!designConditions)
     return { ok: false, message: 'Enter the design conditions for the site to see this room’s loads.' };
@@ -55,7 +52,7 @@ export function computeRoomLoad(
       value: roomLoad({
         room,
         designConditions: designConditionsSchema.parse(designConditions),
-        tightness: toTightness(tightness),
+        tightness,
       }),
     };
   } catch (e) {
@@ -76,7 +73,7 @@ export function houseOf(house: Record<string, unknown>) {
 export function computeHomeLoad(
   inputs: readonly { readonly id: string; readonly input: Record<string, unknown> }[],
   designConditions: Record<string, unknown> | null,
-  tightness: string,
+  tightness: Tightness,
   house: Record<string, unknown> = {},
 ): LoadResult<{ load: HomeLoad; skipped: readonly string[] }> {
   if (!designConditions) return { ok: false, message: 'Enter the design conditions for the site to see the loads.' };
@@ -98,7 +95,7 @@ export function computeHomeLoad(
         load: homeLoad({
           home: {
             designConditions: parsedConditions.data,
-            tightness: toTightness(tightness),
+            tightness,
             ...houseOf(house),
             rooms,
           },

@@ -6,8 +6,9 @@ import {
   type Home,
   type Room,
   type RoomLoad,
+  type Tightness,
 } from '@calc';
-import { houseOf, toTightness, type LoadResult } from './compute';
+import { houseOf, type LoadResult } from './compute';
 
 /** The rest of the home the edited room sits in: the rooms as they stand (saved or waiting) and the house facts. */
 export interface LiveHomeInputs {
@@ -52,7 +53,7 @@ export function computeLiveRoomLoad(
   room: Room,
   home: LiveHomeInputs,
   designConditions: Record<string, unknown> | null,
-  tightness: string,
+  tightness: Tightness,
 ): LoadResult<RoomLoad> & { readonly ducts?: boolean } {
   if (!designConditions)
     return { ok: false, message: 'Enter the design conditions for the site to see this room’s loads.' };
@@ -72,7 +73,7 @@ export function computeLiveRoomLoad(
   if (!placed) rooms.push(room);
   const house = houseOf(home.house ?? {});
   const ducts = house.ducts !== undefined && house.ducts.roomIds?.includes(room.id) !== false;
-  const whole: Home = { ...house, designConditions: conditions, tightness: toTightness(tightness), rooms };
+  const whole: Home = { ...house, designConditions: conditions, tightness, rooms };
   try {
     const load = live.room(whole, room.id);
     if (!load) return { ok: false, message: 'The loads could not be worked out from these inputs.' };

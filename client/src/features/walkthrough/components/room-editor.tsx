@@ -1,3 +1,4 @@
+import type { Tightness } from '@calc';
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { Button } from '../../../components/ui/button';
@@ -26,7 +27,7 @@ interface Props {
   jobId: string;
   room: RoomView;
   designConditions: Record<string, unknown> | null;
-  tightness: string;
+  tightness: Tightness;
   /** The home around the room (rooms as they stand, house facts): the live loads are the room's in the home. */
   home?: LiveHomeInputs;
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { OptionResultRecord } from '@contract';
+import type { SystemResult, ZoneResult } from '@calc';
 
 /**
  * calc's results pass through the contract as loose objects (zones, systems); this is the parse
@@ -114,3 +115,16 @@ export function viewOf(result: OptionResultRecord): { zones: ZoneView[]; systems
     }),
   };
 }
+
+/**
+ * The views above are calc's results as the desk reads them; a calc result that no longer fits its view (a
+ * field renamed or retyped) fails the typecheck here instead of quietly dropping out of the screen.
+ */
+type Frozen<T> = T extends readonly (infer U)[]
+  ? readonly Frozen<U>[]
+  : T extends object
+    ? { readonly [K in keyof T]: Frozen<T[K]> }
+    : T;
+type Fits<Result extends Frozen<View>, View> = Result;
+export type ZoneResultFitsView = Fits<ZoneResult, z.input<typeof zoneView>>;
+export type SystemResultFitsView = Fits<SystemResult, z.input<typeof systemView>>;

@@ -1,4 +1,4 @@
-import { computeDesign, monthlyPaymentCents, pricingSchema } from '@calc';
+import { computeDesign, monthlyPaymentCents, pricingSchema, TAKEOFF_DEFAULTS } from '@calc';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoAccounts } from '../../fixtures/seed';
 import { login } from '../helpers/fixtures';
@@ -89,6 +89,35 @@ describe('demo desk', () => {
             direct.warnings.filter((w) => w.startsWith('No price for')),
             o.name,
           ).toEqual([]);
+          // …and stays priced as the estimator lengthens a line: each kit length the takeoff picks for a circuit, up
+          // to the outdoor unit's longest allowed line, is in the price book (the desk journey's 60 ft run on a
+          // 1/4 × 1/2 circuit once showed "no price" for the 75 ft kit).
+          for (const [si, y] of o.design.systems.entries()) {
+            const maxFt = data.catalog.outdoorUnits.find((u) => u.key === y.outdoorUnitKey)?.maxLineLengthFt ?? 0;
+            for (const [ci, c] of y.circuits.entries())
+              for (const lengthFt of TAKEOFF_DEFAULTS.lineSetKitLengthsFt.filter((l) => l <= maxFt)) {
+                const longer = structuredClone(o.design);
+                const circuit = longer.systems[si]?.circuits[ci];
+                if (circuit) circuit.lengthFt = lengthFt;
+                const r = computeDesign({
+                  home: {
+                    id: job.id,
+                    designConditions: jobBody.designConditions,
+                    tightness: jobBody.tightness,
+                    ...jobBody.house,
+                    rooms,
+                  },
+                  design: longer,
+                  catalog: data.catalog,
+                  priceBook: data.priceBook,
+                  pricing,
+                });
+                expect(
+                  r.warnings.filter((w) => w.startsWith('No price for')),
+                  `${o.name} ${y.name} circuit to ${c.zoneKey} at ${lengthFt} ft`,
+                ).toEqual([]);
+              }
+          }
           // Issue 13: no demo system is R-410A (GWP 2088, above the 700 limit of the Technology Transitions rule for
           // new split systems from 2025 [PUB: reference §11, row 11.6]), so calc's rule warning never shows on the demo.
           for (const y of direct.systems) {

@@ -85,3 +85,22 @@ export async function jobWithRoomsNamed(page: Page, names: readonly string[]): P
   }
   throw new Error(`no demo job with rooms ${names.join(', ')}`);
 }
+
+/**
+ * The page fits the viewport: no sideways scroll of the whole page (a select's longest model name or a wide
+ * table once made the desk 507 px wide at 375), and the takeoff reads as stacked lines, not a table to scroll.
+ */
+export async function expectFitsWidth(page: Page) {
+  const widths = await page.evaluate(() => {
+    const takeoff = document.querySelector('section[aria-label="Materials and labor"] table');
+    return {
+      page: document.documentElement.scrollWidth,
+      viewport: document.documentElement.clientWidth,
+      takeoff: takeoff ? takeoff.scrollWidth - (takeoff.parentElement?.clientWidth ?? 0) : 0,
+    };
+  });
+  expect(widths.page, `the page is ${widths.page} px wide in a ${widths.viewport} px window`).toBeLessThanOrEqual(
+    widths.viewport,
+  );
+  expect(widths.takeoff, 'the takeoff is wider than its card').toBeLessThanOrEqual(0);
+}

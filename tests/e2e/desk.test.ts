@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { account, expectAccessible, jobWithRooms, pickFirst } from './desk-helpers';
+import { account, expectAccessible, expectFitsWidth, jobWithRooms, pickFirst } from './desk-helpers';
 import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
 
 let e: E2E;
@@ -111,8 +111,12 @@ describe('the estimator’s desk', () => {
 
     await page.setViewportSize({ width: 768, height: 1024 });
     await page.screenshot({ path: `${SHOTS}/desk-768.png`, fullPage: true });
+    await expectFitsWidth(page);
     await page.setViewportSize(PHONE);
     await page.screenshot({ path: `${SHOTS}/desk-375.png`, fullPage: true });
+    // The estimator's own desk on a phone: the design form, the takeoff and the comparison fit 375 px.
+    await expectFitsWidth(page);
+    await expectAccessible(page);
     await context.close();
   });
 });
@@ -185,6 +189,7 @@ describe('the desk per role, on a phone', () => {
       else expect(await page.getByRole('region', { name: 'Price' }).count()).toBe(0);
       expect(await page.getByRole('form', { name: /^Pricing of/ }).count()).toBe(0);
       await page.screenshot({ path: `${SHOTS}/desk-${role}-375.png`, fullPage: true });
+      await expectFitsWidth(page);
       await expectAccessible(page);
       await context.close();
     }

@@ -78,7 +78,8 @@ export function CompareOptions({
         Options side by side
       </h2>
       <p className="text-sm text-muted">Rows where the options differ are highlighted.</p>
-      <div className="overflow-x-auto">
+      {/* Three options may not fit a phone: the table scrolls in its own region, reachable by keyboard. */}
+      <div role="region" aria-label="Options compared" tabIndex={0} className="overflow-x-auto">
         <table className="mt-2 w-full border-collapse text-sm">
           <thead>
             <tr className="border-b border-line text-left">
@@ -104,7 +105,7 @@ export function CompareOptions({
                   {r.values.map((v, i) => (
                     <td
                       key={options[i]?.id ?? i}
-                      className={`py-2 pr-3 tabular-nums ${differs ? 'font-semibold' : ''}`}
+                      className={`py-2 pr-3 whitespace-nowrap tabular-nums ${differs ? 'font-semibold' : ''}`}
                     >
                       {v}
                     </td>

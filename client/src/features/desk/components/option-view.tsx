@@ -105,8 +105,9 @@ export function OptionView({
           </ul>
         </Alert>
       ) : null}
-      <div className="grid gap-4 xl:grid-cols-[minmax(0,5fr)_minmax(0,4fr)]">
-        <div className="flex flex-col gap-4">
+      {/* minmax(0, …) tracks: a select's longest model name must not widen the page on a phone. */}
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 xl:grid-cols-[minmax(0,5fr)_minmax(0,4fr)]">
+        <div className="flex min-w-0 flex-col gap-4">
           <Card title="Design">
             {canEdit ? (
               <div className="flex flex-col gap-2">
@@ -189,7 +190,7 @@ export function OptionView({
             </Card>
           ) : null}
         </div>
-        <div className="flex flex-col gap-4">
+        <div className="flex min-w-0 flex-col gap-4">
           {option.result?.price ? (
             <Card title="Price">
               <PricePanel jobId={jobId} option={option} whys={whys} owner={mayDecideDiscount(viewer.role)} />

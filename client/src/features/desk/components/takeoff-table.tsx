@@ -50,6 +50,15 @@ function LineSell({ line, why }: { line: TakeoffLineRecord; why: ExplanationView
   );
 }
 
+/** A figure's name beside it on a phone, where the column headers are not shown (they stay for screen readers). */
+function CellLabel({ children }: { children: string }) {
+  return (
+    <span aria-hidden="true" className="text-muted sm:hidden">
+      {children}
+    </span>
+  );
+}
+
 /**
  * The takeoff calc generated from the design, priced from the price book (unit costs and each line's sell
  * price with its rule for the office only). Where an edit changed a line, the generated value stands
@@ -71,11 +80,13 @@ export function TakeoffTable({
   const costs = lines.some((l) => l.unitCostCents !== undefined);
   const sells = lines.some((l) => l.sellCents !== undefined);
   const [editing, setEditing] = useState<string | null>(null);
+  // On a phone each line is a small card (item, then one labelled row per figure); from 640 px up, a table.
+  const cell = 'flex items-start justify-between gap-3 py-1 sm:table-cell sm:py-2 sm:pr-3 sm:text-right';
   return (
     <div className="overflow-x-auto">
-      <table className="w-full border-collapse text-sm">
+      <table className="block w-full border-collapse text-sm sm:table">
         <caption className="sr-only">Materials and labor</caption>
-        <thead>
+        <thead className="sr-only sm:not-sr-only">
           <tr className="border-b border-line text-left text-muted">
             <th scope="col" className="py-2 pr-3">
               Item
@@ -100,7 +111,7 @@ export function TakeoffTable({
             ) : null}
           </tr>
         </thead>
-        <tbody>
+        <tbody className="block sm:table-row-group">
           {lines.map((l) => {
             const qtyEdited = l.generatedQuantity !== null && l.generatedQuantity !== l.quantity;
             const costEdited =
@@ -108,41 +119,53 @@ export function TakeoffTable({
               l.generatedUnitCostCents !== null &&
               l.generatedUnitCostCents !== l.unitCostCents;
             return (
-              <tr key={l.itemKey} className="border-b border-line align-top">
-                <th scope="row" className="py-2 pr-3 text-left font-normal">
-                  <span className="font-semibold text-ink-900">{l.description}</span>
-                  <span className="block text-muted">{l.derivation}</span>
+              <tr key={l.itemKey} className="flex flex-col border-b border-line py-2 align-top sm:table-row sm:py-0">
+                <th scope="row" className="block pb-1 text-left font-normal sm:table-cell sm:py-2 sm:pr-3">
+                  <span className="font-semibold break-words text-ink-900">{l.description}</span>
+                  <span className="block break-words text-muted">{l.derivation}</span>
                 </th>
-                <td className="py-2 pr-3 text-right tabular-nums">
-                  {formatNumber(l.quantity, 2, { trim: true })} {l.unit}
-                  {qtyEdited ? (
-                    <span className="block text-amber-deep">
-                      generated {formatNumber(l.generatedQuantity ?? 0, 2, { trim: true })}
-                    </span>
-                  ) : null}
+                <td className={`${cell} tabular-nums`}>
+                  <CellLabel>Quantity</CellLabel>
+                  <span className="block text-right">
+                    {formatNumber(l.quantity, 2, { trim: true })} {l.unit}
+                    {qtyEdited ? (
+                      <span className="block text-amber-deep">
+                        generated {formatNumber(l.generatedQuantity ?? 0, 2, { trim: true })}
+                      </span>
+                    ) : null}
+                  </span>
                 </td>
                 {costs ? (
                   <>
-                    <td className="py-2 pr-3 text-right tabular-nums">
-                      {l.unitCostCents === null || l.unitCostCents === undefined
-                        ? 'no price'
-                        : formatMoney(l.unitCostCents)}
-                      {costEdited ? (
-                        <span className="block text-amber-deep">
-                          generated {formatMoney(l.generatedUnitCostCents ?? 0)}
-                        </span>
-                      ) : null}
+                    <td className={`${cell} tabular-nums`}>
+                      <CellLabel>Unit cost</CellLabel>
+                      <span className="block text-right">
+                        {l.unitCostCents === null || l.unitCostCents === undefined
+                          ? 'no price'
+                          : formatMoney(l.unitCostCents)}
+                        {costEdited ? (
+                          <span className="block text-amber-deep">
+                            generated {formatMoney(l.generatedUnitCostCents ?? 0)}
+                          </span>
+                        ) : null}
+                      </span>
                     </td>
-                    <td className="py-2 pr-3 text-right tabular-nums">{formatMoney(l.extendedCostCents ?? 0)}</td>
+                    <td className={`${cell} tabular-nums`}>
+                      <CellLabel>Cost</CellLabel>
+                      <span className="block text-right">{formatMoney(l.extendedCostCents ?? 0)}</span>
+                    </td>
                   </>
                 ) : null}
                 {sells ? (
-                  <td className="py-2 pr-3 text-right tabular-nums">
-                    <LineSell line={l} why={whys?.get(`sell:${l.itemKey}`)} />
+                  <td className={`${cell} tabular-nums`}>
+                    <CellLabel>Sell</CellLabel>
+                    <span className="block text-right">
+                      <LineSell line={l} why={whys?.get(`sell:${l.itemKey}`)} />
+                    </span>
                   </td>
                 ) : null}
                 {canEdit ? (
-                  <td className="py-2 text-right">
+                  <td className="block py-1 text-left sm:table-cell sm:py-2 sm:text-right">
                     {editing === l.itemKey ? (
                       <TakeoffLineEditor jobId={jobId} option={option} line={l} onDone={() => setEditing(null)} />
                     ) : (

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { login, makeCompany, type Session, type TestCompany } from '../helpers/fixtures';
 import { buildTestApp, type TestApp } from '../helpers/test-app';
-import { expectProblem, patch, post } from './jobs-helpers';
+import { del, expectProblem, newRoom, patch, post, sampleRoom } from './jobs-helpers';
 import { deskJob, newOption, seedData, singleZone } from './desk-helpers';
 import { CompanyDataRowSchema } from '../../server/src/modules/company-data/company-data.entity';
 
@@ -183,6 +183,60 @@ describe('every blocker calc names holds the ready mark', () => {
         message: 'Half done: Zone Office is not connected to any outdoor unit.',
       }),
     );
+  });
+});
+
+describe('the ready mark follows the loads it was given on (issue 13)', () => {
+  it('a room changed, added or removed, or the home’s facts changed, takes the mark off; a replay of the same values does not', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    await newOption(estimator, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '') });
+    const markReady = async () => {
+      const ok = await post(estimator, `/api/jobs/${job.id}/ready`).send({ sizingOverride: { reason: REASON } });
+      expect(ok.status, JSON.stringify(ok.body)).toBe(200);
+    };
+    const marked = async () => {
+      const desk = (await estimator.agent.get(`/api/jobs/${job.id}/desk`)).body;
+      const list = (await estimator.agent.get('/api/jobs?pageSize=100')).body.items as {
+        id: string;
+        readyToProposeAt: string | null;
+      }[];
+      const row = list.find((j) => j.id === job.id);
+      // The jobs list and the desk always say the same.
+      expect(row?.readyToProposeAt ?? null).toBe(desk.readiness.markedReady?.at ?? null);
+      return desk.readiness.markedReady !== null;
+    };
+    const roomUrl = (id: string) => `/api/jobs/${job.id}/rooms/${id}`;
+    const roomNow = async (id: string) =>
+      (await estimator.agent.get(`/api/jobs/${job.id}/rooms`)).body.rooms.find((r: { id: string }) => r.id === id);
+
+    await markReady();
+    expect(await marked()).toBe(true);
+    // The same values sent again (a phone's replay) change nothing the loads use: the mark stays.
+    const living = await roomNow(rooms[0] ?? '');
+    const same = await patch(estimator, roomUrl(living.id), living.version).send({ input: living.input });
+    expect(same.status, JSON.stringify(same.body)).toBe(200);
+    expect(await marked()).toBe(true);
+    // A taller ceiling changes the room's loads: the office must look again.
+    const taller = await patch(estimator, roomUrl(living.id), same.body.room.version).send({
+      input: { ...living.input, ceilingHeightFt: 10 },
+    });
+    expect(taller.status, JSON.stringify(taller.body)).toBe(200);
+    expect(await marked()).toBe(false);
+
+    await markReady();
+    const added = await newRoom(estimator, job.id, sampleRoom('Den'));
+    expect(await marked()).toBe(false);
+
+    await markReady();
+    const removed = await del(estimator, roomUrl(added.id), added.version);
+    expect(removed.status).toBe(204);
+    expect(await marked()).toBe(false);
+
+    await markReady();
+    const current = (await estimator.agent.get(`/api/jobs/${job.id}`)).body.job;
+    const leaky = await patch(estimator, `/api/jobs/${job.id}`, current.version).send({ tightness: 'leaky' });
+    expect(leaky.status, JSON.stringify(leaky.body)).toBe(200);
+    expect(await marked()).toBe(false);
   });
 });
 

@@ -32,3 +32,16 @@ export async function findJob({ em, actor }: ServiceContext, id: string): Promis
 export async function touchJob(em: EntityManager, jobId: string, at: Date): Promise<void> {
   await em.execute('update "job" set "last_activity_at" = ? where "id" = ?', [at, jobId], 'run');
 }
+
+/**
+ * touchJob for a change to what the loads are worked out from (a room added, changed or removed): the
+ * loads the office reviewed are not the loads now, so the job's "ready to propose" mark (and any sizing
+ * override given with it) goes, as it does when an option changes. Without a version bump, like touchJob.
+ */
+export async function touchJobLoads(em: EntityManager, jobId: string, at: Date): Promise<void> {
+  await em.execute(
+    'update "job" set "last_activity_at" = ?, "ready_at" = null, "ready_by_id" = null, "ready_override" = null where "id" = ?',
+    [at, jobId],
+    'run',
+  );
+}

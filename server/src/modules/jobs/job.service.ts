@@ -1,3 +1,4 @@
+import { isDeepStrictEqual } from 'node:util';
 import {
   enteredOf,
   INSTALLER_ROLES,
@@ -129,6 +130,7 @@ export async function updateJob(ctx: ServiceContext, id: string, version: number
   if (input.region !== undefined) job.region = input.region;
   if (input.postalCode !== undefined) job.postalCode = input.postalCode;
   if (input.notes !== undefined) job.notes = input.notes;
+  const loadsBefore = { tightness: job.tightness, house: job.house, design: job.designConditions ?? null };
   if (input.tightness !== undefined) job.tightness = input.tightness;
   if (input.house !== undefined) job.house = input.house;
   if (input.designConditions !== undefined || input.designSourceNotes !== undefined) {
@@ -137,6 +139,14 @@ export async function updateJob(ctx: ServiceContext, id: string, version: number
     const design = resolveDesignConditions(entered, notes, await companyDesignDefaults(em, actor.companyId));
     job.designConditions = design.conditions;
     job.designSources = design.sources;
+  }
+  // The home's facts or design conditions changed: the loads the office reviewed are not the loads now,
+  // so the "ready to propose" mark goes (as with a room change; see touchJobLoads).
+  const loadsAfter = { tightness: job.tightness, house: job.house, design: job.designConditions ?? null };
+  if (!isDeepStrictEqual(loadsBefore, loadsAfter)) {
+    job.readyAt = null;
+    job.readyBy = null;
+    job.readyOverride = null;
   }
   job.lastActivityAt = clock.now();
   Object.assign(job, stampOf(actor));

@@ -77,7 +77,9 @@ export async function listRoomViews(ctx: ServiceContext, jobId: string): Promise
 
 /**
  * Saves a room in one statement when the job is in scope and the version matches: the room's new
- * input/position, version and updatedAt, and the job's last activity at `at` (not its version). Null when nothing was
+ * input/position, version and updatedAt, and the job's last activity at `at` (not its version); when the input
+ * really changed (jsonb equality, so a replay of the same values does not count), the job's "ready to propose"
+ * mark goes too, as touchJobLoads does on the ORM path. Null when nothing was
  * written (no such room for this person, or another version): the caller then takes the ORM path,
  * which tells 404 from 409 and answers the conflict with the current room.
  */
@@ -90,15 +92,22 @@ export async function updateRoomIfCurrent(
 ): Promise<RoomWithPhotoViews | null> {
   const scope = scopeSql(actor);
   const rows = await em.execute<RoomRowSql[]>(
-    `with r as (
+    `with old as (select input from "room" where id = ?), r as (
        update "room" r set input = coalesce(?::jsonb, r.input), position = coalesce(?::int, r.position),
          version = r.version + 1, updated_at = ?, changed_by_id = ?, changed_by_name = ?, changed_on_device = ?
        from "job" j where j.id = r.job_id and r.id = ? and r.job_id = ? and r.version = ? and ${scope.sql}
        returning r.id, r.job_id, r.position, r.input, r.version, r.created_at, r.updated_at, r.changed_by_name,
          r.changed_on_device
-     ), touched as (update "job" set last_activity_at = ? where id in (select job_id from r))
+     ), loads as (select (select input from r) is distinct from (select input from old) as changed),
+     touched as (
+       update "job" set last_activity_at = ?,
+         ready_at = case when loads.changed then null else ready_at end,
+         ready_by_id = case when loads.changed then null else ready_by_id end,
+         ready_override = case when loads.changed then null else ready_override end
+       from loads where id in (select job_id from r))
      select ${ROOM_COLUMNS} from r`,
     [
+      roomId,
       input.input === undefined ? null : JSON.stringify({ ...input.input, id: roomId }),
       input.position ?? null,
       new Date(),

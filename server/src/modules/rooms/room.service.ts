@@ -3,7 +3,8 @@ import { randomUUID } from 'node:crypto';
 import { NotFoundError, UnprocessableError } from '../../lib/errors';
 import type { ServiceContext } from '../../lib/service-context';
 import type { Storage } from '../../services/storage';
-import { findJob, touchJob } from '../jobs/job-access';
+import { isDeepStrictEqual } from 'node:util';
+import { findJob, touchJob, touchJobLoads } from '../jobs/job-access';
 import type { Job } from '../jobs/job.entity';
 import { assertVersion } from '../../lib/version-lock';
 import { stampOf } from '../../lib/change-stamp';
@@ -71,7 +72,7 @@ export function createRoom(ctx: ServiceContext, jobId: string, input: CreateRoom
       ...stampOf(ctx.actor),
     });
     await tx.flush();
-    await touchJob(tx, job.id, ctx.clock.now());
+    await touchJobLoads(tx, job.id, ctx.clock.now());
     return { room, photos: [] };
   });
 }
@@ -87,11 +88,14 @@ export function updateRoom(
     const { job, room } = await findRoom({ ...ctx, em: tx }, jobId, roomId);
     const photos = await tx.find(PhotoSchema, { room: room.id }, { orderBy: { createdAt: 'asc', id: 'asc' } });
     assertVersion(version, room.version, 'The room', () => presentRoom(room, job.id, photos));
+    const before = room.input;
     if (input.input !== undefined) room.input = { ...input.input, id: room.id };
     if (input.position !== undefined) room.position = input.position;
     Object.assign(room, stampOf(ctx.actor));
     await tx.flush();
-    await touchJob(tx, job.id, ctx.clock.now());
+    // A replay of the same values, or a move in the list, leaves the loads (and the ready mark) as they were.
+    if (!isDeepStrictEqual(room.input, before)) await touchJobLoads(tx, job.id, ctx.clock.now());
+    else await touchJob(tx, job.id, ctx.clock.now());
     return { room, photos };
   });
 }
@@ -115,7 +119,7 @@ export async function deleteRoom(
     tx.remove(photos);
     tx.remove(room);
     await tx.flush();
-    await touchJob(tx, job.id, ctx.clock.now());
+    await touchJobLoads(tx, job.id, ctx.clock.now());
     return photos.map((p) => p.storageKey);
   });
   // Files go after the rows are gone: a failed delete leaves an orphan file, never a row without its file.

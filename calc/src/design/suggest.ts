@@ -95,15 +95,33 @@ interface Chosen<U> {
   sizing: SizingCheck;
 }
 
-/** The smallest candidate within the sizing range, else the smallest that covers the load, else the largest. */
+/**
+ * How far a unit's cooling capacity at design falls outside the allowed range, in percentage points of the load
+ * (0 when inside): 89 % against 90–130 % misses by 1, 134 % by 4.
+ */
+export function sizingMiss(s: SizingCheck): number {
+  const pct = (s.coolingRatio ?? 0) * 100;
+  return pct < s.allowedPercent.min ? s.allowedPercent.min - pct : Math.max(0, pct - s.allowedPercent.max);
+}
+
+/** The closer of two choices to their sizing range (the first on a tie). */
+function closer<C extends { sizing: SizingCheck }>(a: C | null, b: C | null): C | null {
+  if (a === null || b === null) return a ?? b;
+  return sizingMiss(b.sizing) < sizingMiss(a.sizing) ? b : a;
+}
+
+/**
+ * The smallest candidate within the sizing range, else the one closest to the range (the larger on a tie, as it
+ * covers more of the load): a catalog whose sizes step past the load's range — 24k at 89 %, 36k at 134 % — gives
+ * the 24k, one point short, not the 36k, four points over.
+ */
 function choose<U extends IndoorUnit | OutdoorUnit>(
   candidates: readonly { model: CatalogModel; unit: U }[],
   load: LoadToMeet,
   designF: { cooling: number; heating: number },
   policy: SizingPolicy,
 ): Chosen<U> | null {
-  let covering: Chosen<U> | null = null;
-  let last: Chosen<U> | null = null;
+  let best: Chosen<U> | null = null;
   for (const c of candidates) {
     const sizing = checkSizing({
       unit: c.unit,
@@ -115,10 +133,19 @@ function choose<U extends IndoorUnit | OutdoorUnit>(
     });
     const p = { model: c.model, unit: c.unit, sizing };
     if (sizing.withinRange) return p;
-    if (covering === null && (sizing.coolingRatio ?? 0) * 100 >= sizing.allowedPercent.min) covering = p;
-    last = p;
+    if (best === null || sizingMiss(sizing) <= sizingMiss(best.sizing)) best = p;
   }
-  return covering ?? last;
+  return best;
+}
+
+/** "the smallest wall head in range", or "the wall head closest to the range" when none is in it. */
+const smallestOr = (p: { sizing: SizingCheck }, what: string) =>
+  p.sizing.withinRange ? `the smallest ${what} in range` : `the ${what} closest to the range`;
+
+/** Why a unit outside its range is still the suggestion: the range, the load and how far the unit is from it. */
+function outOfRange(what: string, zone: string, p: { model: CatalogModel; sizing: SizingCheck }): string {
+  const pct = (p.sizing.coolingRatio ?? 0) * 100;
+  return `No ${what} in the active catalog sizes ${zone} inside ${p.sizing.allowedPercent.min}–${formatPercent(p.sizing.allowedPercent.max)} of its ${btuh(p.sizing.coolingLoadBtuh)} cooling load: ${p.model.name} is the closest, at ${formatPercent(pct)} (the sizes either side of the load fall outside the range).`;
 }
 
 function reason(key: string, who: string, p: Chosen<IndoorUnit | OutdoorUnit>, why: string): Explanation {
@@ -272,16 +299,33 @@ export function suggestDesign({
   const largestHead = Math.max(0, ...headsOf(heads).map((h) => h.unit.nominalBtuh));
   const ductedOutdoors = active.filter((m) => m.kind === 'outdoor-ducted');
   const airHandlers = active.filter((m) => m.kind === 'indoor' && m.indoorType === 'air-handler');
-  const ducted = (z: ZoneDraft & { given?: GivenZone }): boolean => {
-    const candidates = ductedOutdoors.flatMap((o) => {
-      const unit = outdoorByKey.get(o.key);
-      const handler = airHandlers.find((a) => o.matchedKeys.includes(a.key) || a.matchedKeys.includes(o.key));
-      return unit && handler ? [{ model: o, unit, handler }] : [];
+  const ductedCandidates = ductedOutdoors.flatMap((o) => {
+    const unit = outdoorByKey.get(o.key);
+    const handler = airHandlers.find((a) => o.matchedKeys.includes(a.key) || a.matchedKeys.includes(o.key));
+    return unit && handler ? [{ model: o, unit, handler }] : [];
+  });
+  /** The ducted heat pump for a zone (the smallest in range, else the closest) with its air handler. */
+  const ductedChoice = (z: ZoneDraft) => {
+    const p = choose(ductedCandidates, z.load, designF, policy);
+    const handler = p ? ductedCandidates.find((c) => c.model.key === p.model.key)?.handler : undefined;
+    const handlerUnit = handler ? indoorByKey.get(handler.key) : undefined;
+    if (!p || !handler || !handlerUnit) return null;
+    // The zone's verdict is the air handler's own sizing (as computeDesign checks it), the system's the heat pump's.
+    const handlerSizing = checkSizing({
+      unit: handlerUnit,
+      equipmentType: equipmentTypeOf(handler),
+      load: z.load,
+      coolingDesignF: designF.cooling,
+      heatingDesignF: designF.heating,
+      policy,
     });
-    const p = choose(candidates, z.load, designF, policy);
-    if (!p || !p.sizing.withinRange) return false;
-    const handler = candidates.find((c) => c.model.key === p.model.key)?.handler;
-    if (!handler) return false;
+    return { p, handler, miss: Math.max(sizingMiss(p.sizing), sizingMiss(handlerSizing)) };
+  };
+  const ducted = (
+    z: ZoneDraft & { given?: GivenZone },
+    { p, handler }: NonNullable<ReturnType<typeof ductedChoice>>,
+  ) => {
+    if (!p.sizing.withinRange) warnings.push(outOfRange('ducted heat pump', z.name, p));
     const key = systemKey();
     let heatKitKey: string | undefined;
     const capacity = p.sizing.heatingCapacityBtuh;
@@ -310,7 +354,7 @@ export function suggestDesign({
           `${p.model.name} falls ${btuh(shortfall)} short of the heat loss of ${z.name} at ${designF.heating} °F, and no heat kit in the catalog fits ${handler.name}.`,
         );
     }
-    reasons.push(reason(`suggest:${z.key}`, z.name, p, `the smallest ducted heat pump in range, with ${handler.name}`));
+    reasons.push(reason(`suggest:${z.key}`, z.name, p, `${smallestOr(p, 'ducted heat pump')}, with ${handler.name}`));
     dz.push(zoneInput(z, handler.key));
     ds.push({
       key,
@@ -320,14 +364,30 @@ export function suggestDesign({
       electrical,
       ...(heatKitKey ? { heatKitKey } : {}),
     });
-    return true;
   };
   zones = zones.filter((z) => {
-    // Zones the estimator gave keep their grouping: only one too big for any head goes ducted.
+    // Zones the estimator gave keep their grouping: only one too big for any head goes ducted when a ducted heat
+    // pump is in range…
     const wantsDucts =
       (!givenZones && z.roomIds.every((id) => ductRooms.includes(id))) ||
       z.load.sensibleBtuh + z.load.latentBtuh > largestHead * 1.3;
-    return !(wantsDucts && ducted(z));
+    // …or several closed rooms the home's ducts serve, when no head is in range for them.
+    const ductable =
+      z.roomIds.length > 1 && z.given?.openSpace !== true && z.roomIds.every((id) => ductRooms.includes(id));
+    if (!wantsDucts && !ductable) return true;
+    const d = ductedChoice(z);
+    if (!d) return true;
+    if (wantsDucts && d.p.sizing.withinRange) {
+      ducted(z, d);
+      return false;
+    }
+    // No ducted system in range: it still serves the zone when no head comes closer to the range (the air handler's
+    // sizing and the heat pump's, the farther of the two).
+    const head = choose(headsOf(heads), z.load, designF, policy);
+    if (head && sizingMiss(head.sizing) < d.miss) return true;
+    if (head?.sizing.withinRange) return true;
+    ducted(z, d);
+    return false;
   });
 
   // Ductless: the kind of head that suits each zone, the smallest of it in range.
@@ -346,7 +406,9 @@ export function suggestDesign({
     const first = choose(options(kind), z.load, designF, policy);
     if (first?.sizing.withinRange || kind === 'wall') return first ?? choose(options('wall'), z.load, designF, policy);
     const wall = choose(options('wall'), z.load, designF, policy);
-    return wall?.sizing.withinRange ? wall : (first ?? wall);
+    // Neither in range: the one closer to it (the kind that suits the zone on a tie), never a far-off size of the
+    // suited kind when a wall head comes closer.
+    return wall?.sizing.withinRange ? wall : closer(first, wall);
   };
   const refusals: string[] = [];
   /** The smallest multi-zone unit for these zones' heads, or null (its refusals kept). */
@@ -356,6 +418,8 @@ export function suggestDesign({
       loads,
       group.flatMap((z) => z.roomIds),
     );
+    // The smallest in range, else the closest to it (as choose).
+    let best: { model: CatalogModel; unit: OutdoorUnit; sizing: SizingCheck; connected: number } | null = null;
     for (const m of active.filter((x) => x.kind === 'outdoor-multi-zone')) {
       const unit = outdoorByKey.get(m.key);
       if (!unit) continue;
@@ -372,14 +436,18 @@ export function suggestDesign({
         heatingDesignF: designF.heating,
         policy,
       });
-      if ((sizing.coolingRatio ?? 0) * 100 < sizing.allowedPercent.min) continue;
-      return { model: m, unit, sizing, connected: combo.connectedPercent };
+      const p = { model: m, unit, sizing, connected: combo.connectedPercent };
+      if (sizing.withinRange) return p;
+      if (best === null || sizingMiss(sizing) <= sizingMiss(best.sizing)) best = p;
     }
-    return null;
+    return best;
   };
   if (zones.length > 1) {
     const chosen = zones.map((z) => pick(z, (k) => headsOf(multiHeads.filter((m) => kindOf(m) === k))));
-    // One unit for all, else two, three… over consecutive zones (each unit takes two zones or more).
+    // One unit for all, else two, three… over consecutive zones (each unit takes two zones or more): the fewest
+    // units all in range, else the fewest that take the heads (each the closest to its range).
+    type Out = NonNullable<ReturnType<typeof multiFor>>;
+    let plan: { units: number; groups: (typeof zones)[]; outs: Out[] } | null = null;
     for (let units = 1; units <= Math.floor(zones.length / 2); units += 1) {
       const size = Math.ceil(zones.length / units);
       const groups = Array.from({ length: units }, (_, g) => zones.slice(g * size, (g + 1) * size));
@@ -391,28 +459,38 @@ export function suggestDesign({
         ),
       );
       if (outs.some((o) => o === null)) continue;
+      const found = { units, groups, outs: outs.flatMap((o) => (o ? [o] : [])) };
+      if (found.outs.every((o) => o.sizing.withinRange)) {
+        plan = found;
+        break;
+      }
+      plan ??= found;
+    }
+    if (plan) {
+      const { units, groups, outs } = plan;
       groups.forEach((g, gi) => {
         const o = outs[gi];
         if (!o) return;
         const key = systemKey();
+        const who = units === 1 ? 'the whole home' : g.map((z) => z.name).join(', ');
         for (const z of g) {
           const h = chosen[zones.indexOf(z)];
           if (!h) continue;
           reasons.push(
-            reason(`suggest:${z.key}`, z.name, h, `the smallest ${kindOf(h.model) ?? 'head'} in range for this zone`),
+            reason(`suggest:${z.key}`, z.name, h, `${smallestOr(h, kindOf(h.model) ?? 'head')} for this zone`),
           );
-          if (!h.sizing.withinRange)
-            warnings.push(`No head fits ${z.name} inside the sizing range; ${h.model.name} is the closest.`);
+          if (!h.sizing.withinRange) warnings.push(outOfRange('head', z.name, h));
           dz.push(zoneInput(z, h.model.key));
         }
         reasons.push(
           reason(
             `suggest:outdoor:${key}`,
-            units === 1 ? 'the whole home' : g.map((z) => z.name).join(', '),
+            who,
             o,
             `the smallest multi-zone unit whose ports take these heads (${o.connected} % connected) and that meets their rooms' coincident load${units > 1 ? `; one unit of ${units}, as no single unit takes every head` : ''}`,
           ),
         );
+        if (!o.sizing.withinRange) warnings.push(outOfRange('multi-zone unit that takes these heads', who, o));
         ds.push({
           key,
           name: (units === 1 ? 'Multi-zone system' : `Multi-zone system ${gi + 1}`).slice(0, 80),
@@ -442,10 +520,9 @@ export function suggestDesign({
       warnings.push(`No single-zone pair in the active catalog for ${z.name}.`);
       return;
     }
-    if (!p.sizing.withinRange)
-      warnings.push(`No pair fits ${z.name} inside the sizing range; ${p.model.name} is the closest.`);
+    if (!p.sizing.withinRange) warnings.push(outOfRange('single-zone pair', z.name, p));
     reasons.push(
-      reason(`suggest:${z.key}`, z.name, p, `the smallest single-zone pair in range, with ${chosenHead.name}`),
+      reason(`suggest:${z.key}`, z.name, p, `${smallestOr(p, 'single-zone pair')}, with ${chosenHead.name}`),
     );
     dz.push(zoneInput(z, chosenHead.key));
     ds.push({

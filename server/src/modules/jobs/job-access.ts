@@ -10,9 +10,18 @@ import { JobSchema, type Job } from './job.entity';
  * jobs they own, an installer the jobs assigned to them. Anything else answers 404.
  */
 export function jobScope(actor: Actor): FilterQuery<Job> {
-  if (actor.role === 'salesperson') return { company: actor.companyId, salesperson: actor.userId };
-  if (actor.role === 'installer') return { company: actor.companyId, assignedInstaller: actor.userId };
-  return { company: actor.companyId };
+  const own = ownJobsBy(actor);
+  return own ? { company: actor.companyId, [own.property]: actor.userId } : { company: actor.companyId };
+}
+
+/**
+ * The one rule behind jobScope() and its SQL twin scopeSql(): which of a job's people a role is limited
+ * to (null: the whole company's jobs), as the entity's property and its column.
+ */
+export function ownJobsBy(actor: Actor): { property: 'salesperson' | 'assignedInstaller'; column: string } | null {
+  if (actor.role === 'salesperson') return { property: 'salesperson', column: 'salesperson_id' };
+  if (actor.role === 'installer') return { property: 'assignedInstaller', column: 'assigned_installer_id' };
+  return null;
 }
 
 export const JOB_POPULATE = ['customer', 'salesperson', 'assignedInstaller'] as const;

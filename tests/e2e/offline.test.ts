@@ -19,6 +19,12 @@ afterAll(async () => e?.close());
 
 const salesperson = demoAccounts.find((a) => a.role === 'salesperson' && a.company.startsWith('Larkspur'));
 const owner = demoAccounts.find((a) => a.role === 'owner' && a.company.startsWith('Larkspur'));
+/**
+ * Full-page screenshots are for people to look at, not checks. With the network cut and the other e2e files running
+ * beside this one on two cores, one took longer than the 15 s action timeout (a clean-clone CI run); alone it takes
+ * about a second. Give them room rather than fail the journey on a slow capture.
+ */
+const SHOT_TIMEOUT = 45_000;
 
 const pill = (page: Page) =>
   page.getByRole('status').filter({ hasText: /Saved|Saving|Offline|Not saved|Needs your choice/ });
@@ -120,7 +126,7 @@ describe('the app opens with no signal', () => {
     await pill(page)
       .filter({ hasText: /Offline — \d+ changes? waiting/ })
       .waitFor({ timeout: 20_000 });
-    await page.screenshot({ path: `${SHOTS}/offline-reload-375.png`, fullPage: true });
+    await page.screenshot({ path: `${SHOTS}/offline-reload-375.png`, fullPage: true, timeout: SHOT_TIMEOUT });
     await expectNoSeriousViolations(page);
 
     // Signal again: the room lands on the server.
@@ -192,10 +198,10 @@ describe('the app opens with no signal', () => {
     expect(said).toMatch(/Changed on another device at \d{1,2}:\d\d/);
     expect(said).toContain(`by ${me.user.name}.`);
     await expect(pill(page).filter({ hasText: 'Needs your choice' }).count()).resolves.toBe(1);
-    await page.screenshot({ path: `${SHOTS}/conflict-375.png`, fullPage: true });
+    await page.screenshot({ path: `${SHOTS}/conflict-375.png`, fullPage: true, timeout: SHOT_TIMEOUT });
     await expectNoSeriousViolations(page);
     await page.setViewportSize(DESKTOP);
-    await page.screenshot({ path: `${SHOTS}/conflict-1440.png`, fullPage: true });
+    await page.screenshot({ path: `${SHOTS}/conflict-1440.png`, fullPage: true, timeout: SHOT_TIMEOUT });
 
     await panel.getByRole('button', { name: 'Keep all mine' }).click();
     await pill(page)
@@ -237,9 +243,9 @@ describe('the app opens with no signal', () => {
         await expect(page.getByText(/nothing of this page is saved on this phone yet/).count()).resolves.toBe(1);
       }
       await expectNoSeriousViolations(page);
-      await page.screenshot({ path: `${SHOTS}/offline-${shot}-1440.png`, fullPage: true });
+      await page.screenshot({ path: `${SHOTS}/offline-${shot}-1440.png`, fullPage: true, timeout: SHOT_TIMEOUT });
       await page.setViewportSize(PHONE);
-      await page.screenshot({ path: `${SHOTS}/offline-${shot}-375.png`, fullPage: true });
+      await page.screenshot({ path: `${SHOTS}/offline-${shot}-375.png`, fullPage: true, timeout: SHOT_TIMEOUT });
       await page.setViewportSize(DESKTOP);
       // Back to the start page for the next link.
       await page.getByRole('link', { name: 'Gaugeline, start page' }).click();

@@ -28,6 +28,9 @@ afterAll(async () => t.close());
 const optionUrl = (jobId: string, id: string) => `/api/jobs/${jobId}/options/${id}`;
 const REASON = 'The owner keeps this room at 68 °F for a home studio; the larger unit is wanted.';
 const codes = (r: { body: { blockers: { code: string }[] } }) => new Set(r.body.blockers.map((b) => b.code));
+/** The desk holds the approved discount back for the owner again because the price under it dropped. */
+const waitsBecausePriceDropped = (desk: { readiness: { blockers: { code: string; message: string }[] } }) =>
+  desk.readiness.blockers.some((b) => b.code === 'discount-pending' && b.message.includes('price has dropped'));
 
 /** A 9k single-zone pair (cheaper than the 12k of singleZone). */
 function nineK(roomId: string) {
@@ -145,12 +148,7 @@ describe('an approved discount is checked again when the price drops', () => {
     expect(opt.result.price.discountCents).toBe(0);
     expect(opt.pricing.discounts).toEqual([]);
     const desk = (await estimator.agent.get(`/api/jobs/${job.id}/desk`)).body;
-    expect(
-      desk.readiness.blockers.some(
-        (b: { code: string; message: string }) =>
-          b.code === 'discount-pending' && b.message.includes('price has dropped'),
-      ),
-    ).toBe(true);
+    expect(waitsBecausePriceDropped(desk)).toBe(true);
 
     const again = await post(owner, `${url}/discount-decision`)
       .set('If-Match', `"${opt.version}"`)
@@ -261,12 +259,7 @@ describe('an approved discount and a cheaper price book', () => {
     const desk = (await estimator.agent.get(`/api/jobs/${job.id}/desk`)).body;
     const now = desk.options.find((x: { id: string }) => x.id === o.id);
     expect(now.result.price.discountCents).toBe(0);
-    expect(
-      desk.readiness.blockers.some(
-        (b: { code: string; message: string }) =>
-          b.code === 'discount-pending' && b.message.includes('price has dropped'),
-      ),
-    ).toBe(true);
+    expect(waitsBecausePriceDropped(desk)).toBe(true);
     // The owner decides again from the same screen: approved at the new share, applied.
     const again = await post(owner, `${url}/discount-decision`)
       .set('If-Match', `"${now.version}"`)

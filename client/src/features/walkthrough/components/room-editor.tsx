@@ -1,5 +1,5 @@
 import type { Tightness } from '@calc';
-import { useEffect, useMemo, useRef, useState } from 'react';
+import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { Button } from '../../../components/ui/button';
 import { RoomLoadBar } from '../../loads/components/room-load-bar';
@@ -175,33 +175,13 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
         </div>
 
         {/* Complete sections fold to one line (as walls do): a tap on the line opens them. */}
-        <Fold
-          summary={
-            <>
-              <h3 className="shrink-0 text-lg font-semibold text-ink-900">Above and below</h3>
-              <span className="min-w-0 text-sm text-muted">{aboveBelow.text}</span>
-            </>
-          }
-          complete={aboveBelow.complete}
-          hasError={errorUnder('above', 'below')}
-          summaryClassName="flex-wrap gap-x-3"
-        >
+        <SectionFold title="Above and below" summary={aboveBelow} hasError={errorUnder('above', 'below')}>
           <div className="pt-2">
             <AboveBelowFields {...props} />
           </div>
-        </Fold>
+        </SectionFold>
 
-        <Fold
-          summary={
-            <>
-              <h3 className="shrink-0 text-lg font-semibold text-ink-900">People and appliances</h3>
-              <span className="min-w-0 text-sm text-muted">{people.text}</span>
-            </>
-          }
-          complete={people.complete}
-          hasError={errorUnder('occupants', 'appliances')}
-          summaryClassName="flex-wrap gap-x-3"
-        >
+        <SectionFold title="People and appliances" summary={people} hasError={errorUnder('occupants', 'appliances')}>
           <div className="flex flex-col gap-3 pt-2">
             <div className="max-w-48">
               <NumberInput
@@ -215,7 +195,7 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
             </div>
             <ApplianceFields replace={replace} {...props} />
           </div>
-        </Fold>
+        </SectionFold>
 
         <TextInput
           label="Notes"
@@ -249,5 +229,34 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
         </QueryWidgetBoundary>
       </aside>
     </section>
+  );
+}
+
+/** A room section that folds to its heading and a one-line summary once complete (as walls do). */
+function SectionFold({
+  title,
+  summary,
+  hasError,
+  children,
+}: {
+  title: string;
+  summary: { readonly text: string; readonly complete: boolean };
+  hasError: boolean;
+  children: ReactNode;
+}) {
+  return (
+    <Fold
+      summary={
+        <>
+          <h3 className="shrink-0 text-lg font-semibold text-ink-900">{title}</h3>
+          <span className="min-w-0 text-sm text-muted">{summary.text}</span>
+        </>
+      }
+      complete={summary.complete}
+      hasError={hasError}
+      summaryClassName="flex-wrap gap-x-3"
+    >
+      {children}
+    </Fold>
   );
 }

@@ -119,12 +119,7 @@ export function WalkthroughView({
               <LiveSaveStatus />
               {/* On a phone the pinned load bar and the link under the header take its place. */}
               <span className="hidden gap-2 sm:flex">
-                <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
-                  Loads summary
-                </Link>
-                <Link className={buttonClass('secondary')} to={jobPaths.desk(job.id)}>
-                  Options and price
-                </Link>
+                <JobPageLinks jobId={job.id} />
               </span>
             </div>
           </div>
@@ -139,12 +134,7 @@ export function WalkthroughView({
         <div className="-mt-3 flex flex-wrap items-center justify-between gap-2 sm:hidden">
           <p className="min-w-0 text-sm text-muted">{address}</p>
           <div className="flex flex-wrap gap-2">
-            <Link className={buttonClass('secondary')} to={jobPaths.loads(job.id)}>
-              Loads summary
-            </Link>
-            <Link className={buttonClass('secondary')} to={jobPaths.desk(job.id)}>
-              Options and price
-            </Link>
+            <JobPageLinks jobId={job.id} />
           </div>
         </div>
 
@@ -222,5 +212,19 @@ export function WalkthroughView({
         </QueryWidgetBoundary>
       </div>
     </UnitSystemContext.Provider>
+  );
+}
+
+/** The job's other pages, beside the save status on a wide screen and under the header on a phone. */
+function JobPageLinks({ jobId }: { jobId: string }) {
+  return (
+    <>
+      <Link className={buttonClass('secondary')} to={jobPaths.loads(jobId)}>
+        Loads summary
+      </Link>
+      <Link className={buttonClass('secondary')} to={jobPaths.desk(jobId)}>
+        Options and price
+      </Link>
+    </>
   );
 }

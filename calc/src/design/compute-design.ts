@@ -23,7 +23,7 @@ import {
   type OutdoorUnit,
 } from '../schemas/equipment';
 import { homeInputSchema, type Home, type HomeInput } from '../schemas/home';
-import { checkCombination, checkSizing, type CombinationCheck, type SizingCheck } from '../sizing/match';
+import { checkCombination, checkSizing, zoneRating, type CombinationCheck, type SizingCheck } from '../sizing/match';
 import { DEFAULT_SIZING_POLICY, sizingPolicySchema, type SizingPolicy } from '../sizing/policy';
 import { buildTakeoff, type SystemForTakeoff } from '../takeoff/build';
 import { zoneLoads, type ZoneLoad } from './zone-loads';
@@ -201,11 +201,14 @@ export function computeDesignFromParsed({
   const perZone = zoneLoads({ loads, zones: design.zones, roomsById: byKey(home.rooms, (r) => r.id) });
   const warnings: string[] = [];
   const systemOfZone = new Map<string, OutdoorUnit>();
+  /** How many indoor units the system of each zone carries (a one-to-one system is sized as its matched pair). */
+  const circuitsOfZone = new Map<string, number>();
   const outdoorOfSystem = design.systems.map((s, si) => {
     const outdoor = lookup(outdoorUnits, s.outdoorUnitKey, 'UNKNOWN_EQUIPMENT', ['systems', si, 'outdoorUnitKey']);
     s.circuits.forEach((c, ci) => {
       lookup(zoneByKey, c.zoneKey, 'UNKNOWN_ZONE', ['systems', si, 'circuits', ci, 'zoneKey']);
       systemOfZone.set(c.zoneKey, outdoor);
+      circuitsOfZone.set(c.zoneKey, s.circuits.length);
     });
     return outdoor;
   });
@@ -214,8 +217,10 @@ export function computeDesignFromParsed({
     const load = lookup(perZone, z.key, 'UNKNOWN_ROOM', ['zones', zi, 'roomIds']);
     const outdoor = systemOfZone.get(z.key);
     if (!outdoor) warnings.push(`Zone ${z.name} is not connected to any outdoor unit.`);
+    // A one-to-one system (single-zone pair, ducted heat pump with its air handler) is sized on the pair's rating.
+    const rated = zoneRating({ indoor, outdoor, indoorUnitsOnSystem: circuitsOfZone.get(z.key) ?? 0 });
     const sizing = checkSizing({
-      unit: indoor,
+      unit: rated.unit,
       equipmentType: outdoor?.equipmentType ?? 'heat-pump-variable-speed',
       load,
       coolingDesignF: dc.outdoorCoolingDryBulbF,
@@ -226,12 +231,13 @@ export function computeDesignFromParsed({
       keyPrefix: `zone:${z.key}:`,
       who: z.name,
       sizing,
-      cooling: indoor.cooling,
-      heating: indoor.heating,
+      cooling: rated.unit.cooling,
+      heating: rated.unit.heating,
+      ratedAs: rated.matched ? rated.unit.description : undefined,
       equipmentType: outdoor?.equipmentType ?? 'heat-pump-variable-speed',
       coolingDesignF: dc.outdoorCoolingDryBulbF,
       heatingDesignF: dc.outdoorHeatingDryBulbF,
-      sensibleHeatRatio: indoor.sensibleHeatRatio,
+      sensibleHeatRatio: rated.unit.sensibleHeatRatio,
       sensibleLoadBtuh: load.sensibleBtuh,
       latentLoadBtuh: load.latentBtuh,
     });

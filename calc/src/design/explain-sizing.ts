@@ -46,7 +46,10 @@ export function explainSizing({
   sensibleHeatRatio,
   sensibleLoadBtuh,
   latentLoadBtuh,
+  ratedAs,
 }: {
+  /** A one-to-one system's pair ("heat pump with air handler"), when the zone is sized on the pair's rating. */
+  readonly ratedAs?: string | undefined;
   readonly keyPrefix: string;
   readonly who: string;
   readonly sizing: SizingCheck;
@@ -68,12 +71,14 @@ export function explainSizing({
       value: sizing.coolingCapacityBtuh,
       unit: 'Btu/h',
       valueText: btuh(sizing.coolingCapacityBtuh),
-      text: `${btuh(cool.btuh)} ${capacityWords(cool, coolingDesignF)}`,
+      text: `${btuh(cool.btuh)} ${capacityWords(cool, coolingDesignF)}${ratedAs ? `; the matched system's rating (${ratedAs}), which is what the pair delivers` : ''}`,
       status: cool.extrapolated ? 'warning' : 'ok',
       verdict: cool.extrapolated
         ? "Outside the maker's data: ask the maker for a rating at this temperature."
         : undefined,
-      source: "The maker's expanded capacity data, interpolated linearly",
+      source: ratedAs
+        ? "The maker's expanded capacity data of the matched system, interpolated linearly"
+        : "The maker's expanded capacity data, interpolated linearly",
     }),
     explanation({
       key: `${keyPrefix}cooling-load`,

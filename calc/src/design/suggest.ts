@@ -310,16 +310,8 @@ export function suggestDesign({
     const handler = p ? ductedCandidates.find((c) => c.model.key === p.model.key)?.handler : undefined;
     const handlerUnit = handler ? indoorByKey.get(handler.key) : undefined;
     if (!p || !handler || !handlerUnit) return null;
-    // The zone's verdict is the air handler's own sizing (as computeDesign checks it), the system's the heat pump's.
-    const handlerSizing = checkSizing({
-      unit: handlerUnit,
-      equipmentType: equipmentTypeOf(handler),
-      load: z.load,
-      coolingDesignF: designF.cooling,
-      heatingDesignF: designF.heating,
-      policy,
-    });
-    return { p, handler, miss: Math.max(sizingMiss(p.sizing), sizingMiss(handlerSizing)) };
+    // The zone is sized on the matched pair (computeDesign's zoneRating): the heat pump with this air handler.
+    return { p, handler, miss: sizingMiss(p.sizing) };
   };
   const ducted = (
     z: ZoneDraft & { given?: GivenZone },

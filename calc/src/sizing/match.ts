@@ -45,11 +45,42 @@ const COOLING_LIMIT_OF: Record<EquipmentType, EquipmentType> = {
   'heat-pump-variable-speed': 'ac-variable-speed',
 };
 
-interface Rated {
+/** What a sizing check reads of a unit: its name, its capacity points and its SHR. */
+export interface Rated {
   readonly description: string;
   readonly cooling: IndoorUnit['cooling'];
   readonly heating?: IndoorUnit['heating'] | undefined;
   readonly sensibleHeatRatio?: number | undefined;
+}
+
+/**
+ * What an indoor unit's zone is sized on. A one-to-one system (a single-zone pair, or a ducted outdoor unit with its
+ * air handler: one indoor unit on an outdoor unit that takes one) delivers the capacity of the pair, which the
+ * catalog carries as the outdoor unit's expanded data: an air handler's own nominal (e.g. 36k for a "24k–36k" handler)
+ * is the largest system it suits, not what it delivers on a 24k heat pump. [PUB (secondary): Manual S explainers —
+ * select from the maker's expanded performance data of the system at design conditions (reference §7); common
+ * practice: a split system is rated as the outdoor unit with its matched indoor coil.] On a multi-zone unit each head
+ * keeps its own rating (the outdoor unit's is shared among them and checked on its own).
+ */
+export function zoneRating({
+  indoor,
+  outdoor,
+  indoorUnitsOnSystem,
+}: {
+  readonly indoor: IndoorUnit;
+  readonly outdoor: OutdoorUnit | undefined;
+  readonly indoorUnitsOnSystem: number;
+}): { readonly unit: Rated; readonly matched: boolean } {
+  if (!outdoor || outdoor.maxHeads !== 1 || indoorUnitsOnSystem !== 1) return { unit: indoor, matched: false };
+  return {
+    matched: true,
+    unit: {
+      description: `${outdoor.description} with ${indoor.description}`,
+      cooling: outdoor.cooling,
+      heating: outdoor.heating ?? indoor.heating,
+      sensibleHeatRatio: outdoor.sensibleHeatRatio ?? indoor.sensibleHeatRatio,
+    },
+  };
 }
 
 /**

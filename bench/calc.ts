@@ -130,6 +130,8 @@ interface Timing {
   readonly p95: number;
   readonly min: number;
   readonly runs: number;
+  /** CPU time of this process per call (user + system, all its threads, GC included): the figure a busy machine inflates least. */
+  readonly cpu: number;
 }
 
 const quantile = (sorted: readonly number[], q: number): number =>
@@ -142,26 +144,36 @@ const quantile = (sorted: readonly number[], q: number): number =>
 function measure(run: () => unknown, { warmup, runs }: { readonly warmup: number; readonly runs: number }): Timing {
   for (let i = 0; i < warmup; i += 1) run();
   const times = new Float64Array(runs);
+  const cpu0 = process.cpuUsage();
   for (let i = 0; i < runs; i += 1) {
     const t0 = performance.now();
     run();
     times[i] = performance.now() - t0;
   }
+  const cpuUsed = process.cpuUsage(cpu0);
   const sorted = [...times].sort((a, b) => a - b);
   const mid = Math.floor(runs / 2);
   const median = runs % 2 ? (sorted[mid] ?? 0) : ((sorted[mid - 1] ?? 0) + (sorted[mid] ?? 0)) / 2;
-  return { median, p95: quantile(sorted, 0.95), min: sorted[0] ?? 0, runs };
+  return {
+    median,
+    p95: quantile(sorted, 0.95),
+    min: sorted[0] ?? 0,
+    runs,
+    cpu: (cpuUsed.user + cpuUsed.system) / 1000 / runs,
+  };
 }
 
 const GOAL_RATIO = 100;
 const GOAL_MS = FRAME_MS / GOAL_RATIO;
 
+/** A per-keystroke goal is judged on the median and the p95 (a keystroke that misses its frame now and then is felt). */
 function reportGoal(label: string, m: Timing, goalMs: number): void {
   console.log(`  ${label}`);
   console.log(
-    `    median ${m.median.toFixed(3)} ms · p95 ${m.p95.toFixed(3)} ms · min ${m.min.toFixed(3)} ms (${m.runs} runs)`,
+    `    median ${m.median.toFixed(3)} ms · p95 ${m.p95.toFixed(3)} ms · min ${m.min.toFixed(3)} ms · CPU ${m.cpu.toFixed(3)} ms per call (${m.runs} runs)`,
   );
-  console.log(`    → goal median ≤ ${goalMs} ms: ${m.median <= goalMs ? 'MET' : 'NOT MET'}`);
+  const verdict = m.p95 <= goalMs ? 'MET (median and p95)' : m.median <= goalMs ? 'MET at the median only' : 'NOT MET';
+  console.log(`    → goal median and p95 ≤ ${goalMs} ms: ${verdict}`);
 }
 
 function report(label: string, m: Timing): void {
@@ -266,7 +278,7 @@ try {
   };
   reportGoal(
     'per keystroke, exact whole home with attic ducts (liveHome: one room re-parsed and reworked)',
-    measure(keystrokeExact, { warmup: 500, runs: 3000 }),
+    measure(keystrokeExact, { warmup: 2000, runs: 10000 }),
     0.16,
   );
 } catch (e) {

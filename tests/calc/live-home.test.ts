@@ -1,6 +1,16 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { homeInputSchema, homeLoadFromParsed, liveHome, roomInputSchema, type Home, type Room } from '@calc';
+import {
+  designConditionsSchema,
+  ductSystemSchema,
+  homeInputSchema,
+  homeLoadFromParsed,
+  liveHome,
+  roomInputSchema,
+  ventilationSchema,
+  type Home,
+  type Room,
+} from '@calc';
 import { ranchHome } from './ranch-home';
 
 /**
@@ -124,4 +134,187 @@ describe('live home (per keystroke) equals the full recompute', () => {
       { numRuns: 25 },
     );
   });
+
+  it('property: random sequences of house and room edits on ducted homes (rooms added and removed, tightness, ducts, ventilation)', () => {
+    // Each step changes one thing as the walk-through would (unchanged rooms keep their parsed objects),
+    // then every room's live figures and the whole home's must be the full recompute's, duct shares and
+    // block hour included. The figures are integers (each part rounded to 1 Btu/h), so equal means equal.
+    const roomArb = fc.record({
+      name: fc.constantFrom('Bedroom', 'Kitchen', 'Den', 'Bath', 'Office'),
+      lengthFt: fc.integer({ min: 6, max: 30 }),
+      widthFt: fc.integer({ min: 6, max: 24 }),
+      direction: fc.constantFrom('N', 'NE', 'E', 'SE', 'S', 'SW', 'W', 'NW'),
+      glass: fc.integer({ min: 0, max: 60 }),
+      overhangFt: fc.constantFrom(0, 0, 2),
+      above: fc.constantFrom('attic', 'conditioned', 'roof'),
+      below: fc.constantFrom('slab', 'crawlspace', 'garage'),
+      occupants: fc.constantFrom(0, 0, 0, 2),
+      achOverride: fc.constantFrom(undefined, undefined, 0.5),
+    });
+    type RoomSpec = typeof roomArb extends fc.Arbitrary<infer T> ? T : never;
+    let serial = 0;
+    const newRoom = (r: RoomSpec): Room => {
+      serial += 1;
+      return roomInputSchema.parse({
+        id: `added-${serial}`,
+        name: `${r.name} ${serial}`,
+        lengthFt: r.lengthFt,
+        widthFt: r.widthFt,
+        ceilingHeightFt: 8,
+        exposedWalls:
+          r.glass === 0 && r.above === 'conditioned'
+            ? []
+            : [
+                {
+                  direction: r.direction,
+                  lengthFt: r.lengthFt,
+                  windows:
+                    r.glass > 0
+                      ? [
+                          {
+                            widthIn: 36,
+                            heightIn: 48,
+                            count: 1 + (r.glass % 3),
+                            glazing: 'double-clear',
+                            ...(r.overhangFt > 0 ? { overhangDepthFt: r.overhangFt, overhangGapFt: 1 } : {}),
+                          },
+                        ]
+                      : [],
+                },
+              ],
+        above: r.above === 'conditioned' ? { kind: 'conditioned' } : { kind: r.above, insulation: 'r30' },
+        below:
+          r.below === 'slab'
+            ? { kind: 'slab', edgeInsulated: false }
+            : r.below === 'garage'
+              ? { kind: 'garage', insulation: 'r19' }
+              : { kind: 'crawlspace', vented: true, insulation: 'r19' },
+        occupants: r.occupants,
+        ...(r.achOverride !== undefined ? { achOverride: r.achOverride } : {}),
+      });
+    };
+    const ductsArb = fc.option(
+      fc.record({
+        location: fc.constantFrom('attic', 'crawlspace', 'garage', 'basement', 'conditioned'),
+        insulationR: fc.constantFrom(0, 4, 6, 8),
+        leakage: fc.constantFrom('sealed', 'typical', 'leaky'),
+        roofColor: fc.constantFrom('light', 'medium', 'dark'),
+        radiantBarrier: fc.boolean(),
+        airflowCfm: fc.option(fc.integer({ min: 400, max: 2000 }), { nil: undefined }),
+        someRooms: fc.boolean(),
+      }),
+      { nil: undefined },
+    );
+    const step = fc.oneof(
+      fc.record({
+        kind: fc.constant('edit' as const),
+        at: fc.nat(),
+        glass: fc.integer({ min: 0, max: 40 }),
+        wallFt: fc.integer({ min: 8, max: 30 }),
+        occupants: fc.integer({ min: 0, max: 4 }),
+        color: fc.constantFrom('light', 'medium', 'dark'),
+      }),
+      fc.record({ kind: fc.constant('add' as const), room: roomArb }),
+      fc.record({ kind: fc.constant('remove' as const), at: fc.nat() }),
+      fc.record({
+        kind: fc.constant('tightness' as const),
+        tightness: fc.constantFrom('very-tight', 'tight', 'average', 'leaky', 'very-leaky'),
+        blowerDoor: fc.option(fc.integer({ min: 800, max: 4000 }), { nil: undefined }),
+      }),
+      fc.record({ kind: fc.constant('ducts' as const), ducts: ductsArb }),
+      fc.record({
+        kind: fc.constant('ventilation' as const),
+        vent: fc.constantFrom('none', 'exhaust', 'supply', 'balanced', 'erv-hrv'),
+        bedrooms: fc.option(fc.integer({ min: 1, max: 5 }), { nil: undefined }),
+      }),
+      fc.record({ kind: fc.constant('conditions' as const), hotter: fc.integer({ min: 0, max: 8 }) }),
+    );
+    type Step = typeof step extends fc.Arbitrary<infer T> ? T : never;
+
+    const apply = (home: Home, s: Step): Home => {
+      const rooms = home.rooms;
+      switch (s.kind) {
+        case 'edit': {
+          const r = rooms[s.at % rooms.length];
+          if (!r) return home;
+          return withRoom(
+            home,
+            edit(r, {
+              occupants: s.occupants,
+              exposedWalls: r.exposedWalls.map((w, i) =>
+                i === 0
+                  ? {
+                      ...w,
+                      lengthFt: s.wallFt,
+                      color: s.color,
+                      windows: [{ areaFt2: s.glass + 1, glazing: 'double-clear' }],
+                    }
+                  : w,
+              ),
+            }),
+          );
+        }
+        case 'add':
+          return { ...home, rooms: [...rooms, newRoom(s.room)] };
+        case 'remove': {
+          if (rooms.length <= 1) return home;
+          const gone = rooms[s.at % rooms.length]?.id;
+          const kept = home.ducts?.roomIds?.filter((id) => id !== gone);
+          return {
+            ...home,
+            rooms: rooms.filter((r) => r.id !== gone),
+            ducts: home.ducts && { ...home.ducts, roomIds: kept && kept.length > 0 ? kept : undefined },
+          };
+        }
+        case 'tightness':
+          return { ...home, tightness: s.tightness, blowerDoorCfm50: s.blowerDoor };
+        case 'ducts': {
+          if (!s.ducts) return { ...home, ducts: undefined };
+          const { someRooms, ...d } = s.ducts;
+          // Some rooms on the ducted system (every other one), or all of them.
+          const roomIds = someRooms ? rooms.filter((_, i) => i % 2 === 0).map((r) => r.id) : undefined;
+          return { ...home, ducts: ductSystemSchema.parse({ ...d, roomIds }) };
+        }
+        case 'ventilation':
+          return {
+            ...home,
+            bedrooms: s.bedrooms,
+            ventilation: s.vent === 'none' ? undefined : ventilationSchema.parse({ kind: s.vent }),
+          };
+        case 'conditions':
+          // A new object every time; the same values when `hotter` is 0 (the live path must not redo the rooms).
+          return {
+            ...home,
+            designConditions: designConditionsSchema.parse({
+              ...ducted.designConditions,
+              outdoorCoolingDryBulbF: ducted.designConditions.outdoorCoolingDryBulbF + s.hotter,
+            }),
+          };
+      }
+    };
+
+    fc.assert(
+      fc.property(fc.array(step, { minLength: 1, maxLength: 8 }), (steps) => {
+        const live = liveHome();
+        let home = ducted;
+        expect(live.load(home)).toEqual(homeLoadFromParsed(home));
+        for (const s of steps) {
+          const before = home;
+          home = apply(home, s);
+          const full = homeLoadFromParsed(home);
+          // The room editor's question first (the live path's cheap one), for every room, then the whole home.
+          home.rooms.forEach((r, i) => {
+            expect(live.room(home, r.id), `${s.kind}: ${r.id}`).toEqual(full.rooms.find((x) => x.roomId === r.id));
+            if (i > 0) return;
+            // The ducts, and design conditions that read the same, leave every room's own hours as they were.
+            const sameDay = JSON.stringify(before.designConditions) === JSON.stringify(home.designConditions);
+            if (s.kind === 'ducts' || (s.kind === 'conditions' && sameDay)) expect(live.lastRecomputed).toBe(0);
+          });
+          expect(live.load(home)).toEqual(full);
+        }
+      }),
+      { numRuns: 40 },
+    );
+    // A generous limit: the machine that runs the suite may be busy (this is not a speed check).
+  }, 60_000);
 });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { apportion, homeLoad } from '@calc';
+import { apportion, apportionShare, homeLoad } from '@calc';
 import { ranchHome } from './ranch-home';
 
 describe('drill-down at each room’s peak hour: walls and windows by façade', () => {
@@ -40,6 +40,27 @@ describe('drill-down at each room’s peak hour: walls and windows by façade', 
           if (sum > 0) out.forEach((x, i) => expect(Math.abs(x - (total * (raws[i] ?? 0)) / sum)).toBeLessThan(1));
         },
       ),
+    );
+  });
+
+  it('apportionShare gives each part exactly what apportion gives it (ties, zeros, negatives and non-finite parts included)', () => {
+    // Source of truth: apportion, the largest-remainder sharing the home's duct figures use (home-ducts.ts).
+    // Small integer parts make equal remainders (ties go to the earlier part), zeros and negatives count as 0.
+    const part = fc.oneof(
+      fc.integer({ min: -3, max: 12 }),
+      fc.double({ min: -10, max: 1e5, noNaN: true }),
+      fc.constantFrom(0, Number.NaN, Number.POSITIVE_INFINITY),
+    );
+    fc.assert(
+      fc.property(
+        fc.oneof(fc.integer({ min: 0, max: 50 }), fc.integer({ min: 0, max: 100000 })),
+        fc.array(part, { maxLength: 12 }),
+        (total, raws) => {
+          const all = apportion(total, raws);
+          for (let j = -1; j <= raws.length; j += 1) expect(apportionShare(total, raws, j)).toBe(all[j] ?? 0);
+        },
+      ),
+      { numRuns: 400 },
     );
   });
 });

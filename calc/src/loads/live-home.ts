@@ -2,18 +2,23 @@ import type { DesignConditions } from '../schemas/design-conditions';
 import type { Home } from '../schemas/home';
 import type { Room } from '../schemas/room-input';
 import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
-import { designDayContext, type DesignDayContext } from './design-day-context';
-import { blockOfWork, homeLoadFromWork, houseAir, type HomeLoad, type HouseAir } from './home-load';
-import { roomHourly, roomLoadFromHourly, type RoomAir, type RoomHourly, type RoomLoad } from './room-load';
+import { designDayContext, HOURS, type DesignDayContext } from './design-day-context';
+import { ductHours, roomWithDucts } from './home-ducts';
+import { homeLoadFromWork, houseAir, type HomeLoad, type HouseAir } from './home-load';
+import { roomHeating, roomHourly, roomLoadFromHourly, type RoomAir, type RoomHourly, type RoomLoad } from './room-load';
 
 /**
  * The per-keystroke path, exact: the whole home's loads with every whole-house term (leakage shared by
  * envelope, ventilation, default internal gains, and the ducted system's share), equal to
  * `homeLoadFromParsed` of the same home — only cheaper. A room's hourly work (the costly part) is
  * kept between calls and redone only when the room itself (a new object) or its share of the house
- * air changed; the ducts, the block hour and the figures are recombined every call from copies.
+ * air changed (its heat loss before ducts is kept with it); the ducts, the block hour and the figures
+ * are recombined every call. `room` does not share the ducts out among every room: the block hour
+ * needs only the house's hours plus the duct gain of each hour (the served rooms' shares add up to
+ * it), and the asked room's shares are worked out alone (`roomWithDucts`, `apportionShare`) — the
+ * same integers the full recompute's largest-remainder sharing gives it.
  * Give it the same Room objects for rooms that did not change (the walk-through parses each saved
- * room once); the design day is kept while the design conditions read the same.
+ * room once); the design day is kept while the design conditions are the same object or read the same.
  */
 export interface LiveHome {
   /** The home's loads, exactly as `homeLoadFromParsed(home)` gives them. */
@@ -30,7 +35,10 @@ export interface LiveHome {
 interface Held {
   readonly room: Room;
   readonly air: RoomAir;
+  /** The room's hours before ducts (never changed: the ducts' shares go into copies). */
   readonly work: RoomHourly;
+  /** The room's heat loss before ducts, worked out when a ducted system first needs it. */
+  heat: number | undefined;
 }
 
 function sameAir(a: RoomAir, b: RoomAir): boolean {
@@ -58,43 +66,50 @@ function sameAir(a: RoomAir, b: RoomAir): boolean {
 const copyOf = (w: RoomHourly): RoomHourly => ({ ...w, table: w.table.slice(), hourly: w.hourly.slice() });
 
 export function liveHome(): LiveHome {
+  let conditionsSeen: DesignConditions | null = null;
   let conditionsKey = '';
   let psy: DesignPsychrometrics | null = null;
   let ctx: DesignDayContext | null = null;
   let held = new Map<string, Held>();
   let lastRecomputed = 0;
   const dayFor = (c: DesignConditions): [DesignPsychrometrics, DesignDayContext] => {
-    const key = JSON.stringify(c);
-    if (key !== conditionsKey || !psy || !ctx) {
-      conditionsKey = key;
-      psy = designPsychrometrics(c);
-      ctx = designDayContext(c);
-      held = new Map();
+    // The same object read the same last time (the walk-through parses the conditions once); else compare by value.
+    if (c !== conditionsSeen || !psy || !ctx) {
+      const key = JSON.stringify(c);
+      if (key !== conditionsKey || !psy || !ctx) {
+        conditionsKey = key;
+        psy = designPsychrometrics(c);
+        ctx = designDayContext(c);
+        held = new Map();
+      }
+      conditionsSeen = c;
     }
     return [psy, ctx];
   };
   /** Each room's hourly work before ducts: kept when the room and its air are the same, else redone. */
-  const prepare = (home: Home): { p: DesignPsychrometrics; c: DesignDayContext; air: HouseAir; work: RoomHourly[] } => {
+  const prepare = (
+    home: Home,
+  ): { p: DesignPsychrometrics; c: DesignDayContext; air: HouseAir; work: RoomHourly[]; kept: Held[] } => {
     const [p, c] = dayFor(home.designConditions);
     const air = houseAir(home);
     const next = new Map<string, Held>();
     const work: RoomHourly[] = [];
+    const kept: Held[] = [];
     lastRecomputed = 0;
     home.rooms.forEach((room, i) => {
       const a = air.airs[i];
       if (!a) return;
-      const kept = held.get(room.id);
-      let w: RoomHourly;
-      if (kept && kept.room === room && sameAir(kept.air, a)) w = kept.work;
-      else {
-        w = roomHourly(room, p, c, a);
+      let h = held.get(room.id);
+      if (!h || h.room !== room || !sameAir(h.air, a)) {
+        h = { room, air: a, work: roomHourly(room, p, c, a), heat: undefined };
         lastRecomputed += 1;
       }
-      next.set(room.id, { room, air: a, work: w });
-      work.push(home.ducts ? copyOf(w) : w);
+      next.set(room.id, h);
+      work.push(h.work);
+      kept.push(h);
     });
     held = next;
-    return { p, c, air, work };
+    return { p, c, air, work, kept };
   };
   return {
     get lastRecomputed() {
@@ -102,14 +117,31 @@ export function liveHome(): LiveHome {
     },
     load(home) {
       const { p, c, air, work } = prepare(home);
-      return homeLoadFromWork(home, p, c, air, work);
+      return homeLoadFromWork(home, p, c, air, home.ducts ? work.map(copyOf) : work);
     },
     room(home, roomId) {
       const i = home.rooms.findIndex((r) => r.id === roomId);
       if (i < 0) return null;
-      const { p, c, air, work } = prepare(home);
-      const { work: done, block } = blockOfWork(home, p, c, air.areas, work);
-      const w = done[i];
+      const { p, c, air, work, kept } = prepare(home);
+      // The house's hours: every room's before ducts, plus the ducts' gain each hour (the served rooms'
+      // shares of it add up to it, so no room's share is needed for the block hour).
+      const house = new Float64Array(HOURS);
+      for (const w of work) for (let h = 0; h < HOURS; h += 1) house[h] = (house[h] ?? 0) + (w.hourly[h] ?? 0);
+      let w = work[i];
+      if (home.ducts) {
+        const heatOf = (k: number): number => {
+          const x = kept[k];
+          if (!x) return 0;
+          x.heat ??= roomHeating(x.room, p, x.air, 0).total;
+          return x.heat;
+        };
+        const d = ductHours(home.ducts, work, p, c, air.areas, heatOf);
+        if (d.served.length > 0)
+          for (let h = 0; h < HOURS; h += 1) house[h] = (house[h] ?? 0) + (d.byHour[h]?.cooling.sensibleBtuh ?? 0);
+        w = roomWithDucts(d, work, i);
+      }
+      let block = 0;
+      for (let h = 1; h < HOURS; h += 1) if ((house[h] ?? 0) > (house[block] ?? 0)) block = h;
       return w ? roomLoadFromHourly(w, p, block) : null;
     },
   };

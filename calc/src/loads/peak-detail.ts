@@ -44,6 +44,36 @@ export function apportion(total: number, raws: readonly number[]): number[] {
   return out;
 }
 
+const cleanRaw = (r: number): number => (r > 0 && Number.isFinite(r) ? r : 0);
+
+/**
+ * `apportion(total, raws)[j]` without sharing among the others: the same arithmetic in the same
+ * order, and part j gets its extra 1 when fewer than the leftover parts rank before it (larger
+ * remainder, or the same remainder and an earlier index) — no arrays and no sort, two passes over
+ * the parts, so one room's share of a house figure is cheap. 0 for an index outside `raws`.
+ */
+export function apportionShare(total: number, raws: ArrayLike<number>, j: number): number {
+  const n = raws.length;
+  if (j < 0 || j >= n) return 0;
+  let sum = 0;
+  for (let k = 0; k < n; k += 1) sum += cleanRaw(raws[k] ?? 0);
+  if (!(sum > 0)) return j === 0 ? total : 0;
+  const exact = (total * cleanRaw(raws[j] ?? 0)) / sum;
+  const base = Math.floor(exact);
+  const rem = exact - base;
+  let floors = 0;
+  let before = 0;
+  for (let k = 0; k < n; k += 1) {
+    const e = (total * cleanRaw(raws[k] ?? 0)) / sum;
+    const f = Math.floor(e);
+    floors += f;
+    const r = e - f;
+    if (r > rem || (r === rem && k < j)) before += 1;
+  }
+  // apportion hands the leftover 1s out in remainder order while any is left.
+  return before < total - floors ? base + 1 : base;
+}
+
 const massOf = (construction: string) => (construction.startsWith('masonry') ? 'masonry' : 'frame');
 const pos = (x: number): number => (x > 0 ? x : 0);
 

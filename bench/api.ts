@@ -10,8 +10,6 @@
  * (comma-separated of jobs, rooms, loads, save, sign-in; default all); BENCH_CPU_PROF=<dir> runs the
  * app server under `node --cpu-prof` and leaves its profile there (open it in Chrome's DevTools).
  */
-import { spawn, type ChildProcess } from 'node:child_process';
-import { readFileSync } from 'node:fs';
 import { randomBytes, randomUUID } from 'node:crypto';
 import { availableParallelism, loadavg } from 'node:os';
 import { join, resolve } from 'node:path';
@@ -20,6 +18,7 @@ import { demoAccounts, isEmpty, seedDemo } from '../fixtures/seed';
 import { buildClientIfStale } from '../scripts/lib/client-build';
 import { migrate, withOrm } from '../scripts/lib/db';
 import { DEMO, startCluster } from '../scripts/lib/stack';
+import { cookieOf, cpuMs, signIn as signInAt, startProcess as start, stopAll, waitFor } from './lib/app-process';
 import { load, type LoadResult } from './lib/load';
 import { phoneTimings } from './lib/phone';
 import { printBudgets } from '../scripts/bundle-budget';
@@ -45,86 +44,6 @@ interface Ctx {
   t0?: number;
   cookie?: string;
   token?: string;
-}
-
-const children: ChildProcess[] = [];
-function start(script: string, env: Record<string, string>, cwd = '.', nodeArgs: string[] = []): ChildProcess {
-  const child = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', script], {
-    cwd,
-    env: { ...process.env, ...env },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
-  children.push(child);
-  return child;
-}
-async function waitFor(url: string): Promise<void> {
-  for (let i = 0; i < 300; i += 1) {
-    try {
-      const r = await fetch(url);
-      await r.arrayBuffer();
-      if (r.status < 500) return;
-    } catch {
-      /* not listening yet */
-    }
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`${url} did not answer within 30 s`);
-}
-async function stopAll(): Promise<void> {
-  await Promise.all(
-    children.map(
-      (c) =>
-        new Promise<void>((resolve) => {
-          if (c.exitCode !== null) return resolve();
-          c.once('exit', () => resolve());
-          c.kill('SIGTERM');
-          setTimeout(() => {
-            c.kill('SIGKILL');
-            resolve();
-          }, 5000).unref();
-        }),
-    ),
-  );
-}
-
-const cookieOf = (setCookie: string | string[] | undefined | null) =>
-  (Array.isArray(setCookie) ? setCookie : setCookie ? [setCookie] : []).map((c) => c.split(';')[0] ?? '').join('; ');
-
-async function signIn(email: string, password: string): Promise<{ cookie: string; csrf: string }> {
-  const pre = await fetch(`${APP}/api/auth/csrf`, { headers: { 'x-forwarded-proto': 'https' } });
-  const { token } = (await pre.json()) as { token: string };
-  const res = await fetch(`${APP}/api/auth/login`, {
-    method: 'POST',
-    headers: {
-      'content-type': 'application/json',
-      cookie: cookieOf(pre.headers.getSetCookie()),
-      'x-csrf-token': token,
-      'x-forwarded-proto': 'https',
-    },
-    body: JSON.stringify({ email, password }),
-  });
-  if (res.status !== 200) throw new Error(`sign-in answered ${res.status}`);
-  const cookie = cookieOf(res.headers.getSetCookie());
-  const csrf = (await (
-    await fetch(`${APP}/api/auth/csrf`, { headers: { cookie, 'x-forwarded-proto': 'https' } })
-  ).json()) as { token: string };
-  return { cookie, csrf: csrf.token };
-}
-
-/**
- * CPU time a process has used so far (user + system, ms), from /proc (Linux; NaN elsewhere). Per request
- * it says what the route costs the server whatever else the machine runs: on a loaded machine latencies
- * wait for the CPU, but the CPU a request needs hardly changes.
- */
-function cpuMs(pid: number | undefined): number {
-  try {
-    const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
-    const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
-    // utime and stime are fields 14 and 15 of stat(5), in clock ticks (USER_HZ, 100 on Linux).
-    return ((Number(fields[11]) + Number(fields[12])) * 1000) / 100;
-  } catch {
-    return Number.NaN;
-  }
 }
 
 const f = (n: number, d = 0) => (Number.isFinite(n) ? n.toFixed(d) : '—');
@@ -255,7 +174,7 @@ try {
   });
   await Promise.all([waitFor(`${APP}/api/health`), waitFor(`${FLOOR}/floor/nothing`)]);
 
-  const s = await signIn(owner.email, owner.password);
+  const s = await signInAt(APP, owner.email, owner.password);
   const appHeaders = {
     cookie: s.cookie,
     'x-forwarded-proto': 'https',

@@ -5,6 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/api-error';
 import { useDecideDiscount } from '../api/decide-discount';
 import type { ExplanationView } from '../model/result-view';
+import { DeskFold } from './desk-fold';
 import { Why } from './why';
 
 function Row({
@@ -58,6 +59,45 @@ function DiscountRequest({ jobId, option, owner }: { jobId: string; option: Opti
     <p className="text-sm text-muted">
       Discount {req.state === 'approved' ? 'approved' : 'denied'} by {req.decidedBy?.name ?? 'the owner'}: {what}.
     </p>
+  );
+}
+
+/** The financing plans' monthly estimates, folded on a phone to the lowest one. */
+function Monthly({
+  plans,
+  why,
+}: {
+  plans: NonNullable<OptionRecord['result']>['monthly'];
+  why: (key: string) => ExplanationView | undefined;
+}) {
+  const lowest = Math.min(...plans.map((m) => m.monthlyPaymentCents));
+  return (
+    <DeskFold
+      className="mt-2 px-3"
+      summary={
+        <span className="font-semibold text-ink-900">
+          Monthly, with financing: from {formatMoney(lowest)} a month
+          <span className="font-normal text-muted">
+            {' '}
+            ({plans.length} {plans.length === 1 ? 'plan' : 'plans'})
+          </span>
+        </span>
+      }
+    >
+      <div className="flex flex-col gap-1">
+        {plans.map((m) => {
+          const w = why(`monthly:${m.planKey}`);
+          return w ? (
+            <Why key={m.planKey} e={w} label={m.name} />
+          ) : (
+            <p key={m.planKey} className="flex justify-between gap-2 text-sm">
+              <span>{m.name}</span>
+              <span className="tabular-nums">{formatMoney(m.monthlyPaymentCents)} / month</span>
+            </p>
+          );
+        })}
+      </div>
+    </DeskFold>
   );
 }
 
@@ -128,22 +168,7 @@ export function PricePanel({
           </span>
         </div>
       ) : null}
-      {option.result && option.result.monthly.length > 0 ? (
-        <div className="mt-2 flex flex-col gap-1 px-3">
-          <p className="text-sm font-semibold text-ink-900">Monthly, with financing</p>
-          {option.result.monthly.map((m) => {
-            const w = why(`monthly:${m.planKey}`);
-            return w ? (
-              <Why key={m.planKey} e={w} label={m.name} />
-            ) : (
-              <p key={m.planKey} className="flex justify-between gap-2 text-sm">
-                <span>{m.name}</span>
-                <span className="tabular-nums">{formatMoney(m.monthlyPaymentCents)} / month</span>
-              </p>
-            );
-          })}
-        </div>
-      ) : null}
+      {option.result && option.result.monthly.length > 0 ? <Monthly plans={option.result.monthly} why={why} /> : null}
       <DiscountRequest jobId={jobId} option={option} owner={owner} />
     </div>
   );

@@ -2,7 +2,8 @@ import { formatNumber, formatPercent, formatQuantity } from '@calc';
 import type { DeskModel } from '../api/get-models';
 import type { ExplanationView, SystemView, ZoneView } from '../model/result-view';
 import { Cautions } from './cautions';
-import { SizingVerdict } from './sizing-verdict';
+import { DeskFold } from './desk-fold';
+import { UnitWhys } from './unit-whys';
 import { Why } from './why';
 
 const modelName = (models: readonly DeskModel[], key: string) => {
@@ -48,6 +49,8 @@ export function SystemResults({
   const chargeWhys = once(r?.explanations ?? []);
   const electricalWhys = once(e?.explanations ?? []);
   const otherWhys = once(system.explanations);
+  const chargeCount = (r?.circuits.length ?? 0) + chargeWhys.length + (r?.notes.length ?? 0);
+  const a2l = chargeWhys.some((x) => x.key.includes('a2l'));
   const zoneName = (key: string) => zones.find((z) => z.zoneKey === key)?.name ?? key;
   return (
     <section
@@ -57,10 +60,7 @@ export function SystemResults({
       <h4 className="text-base font-semibold text-ink-900">
         {system.name}: {modelName(models, system.outdoorUnitKey)}
       </h4>
-      {system.sizing && otherWhys.length === 0 ? <SizingVerdict sizing={system.sizing} /> : null}
-      {otherWhys.map((x) => (
-        <Why key={x.key} e={x} />
-      ))}
+      <UnitWhys whys={otherWhys} sizing={system.sizing} name={system.name} />
       {system.combination ? (
         <p className={`text-sm ${system.combination.ok ? 'text-ink-900' : 'font-semibold text-danger'}`}>
           {system.combination.heads} of {system.combination.maxHeads} ports used; indoor units connected{' '}
@@ -77,22 +77,6 @@ export function SystemResults({
             Lines and charge ({r.refrigerant}
             {r.safetyClass ? `, ${r.safetyClass}` : ''})
           </h5>
-          {r.circuits.map((c) =>
-            c.explanation && circuitWhys.includes(c.explanation) ? (
-              <Why
-                key={c.zoneKey}
-                e={c.explanation}
-                label={`${zoneName(c.zoneKey)}: ${formatQuantity(c.lengthFt, 'ft')} run, ${formatQuantity(c.liftFt, 'ft')} lift — extra charge`}
-              />
-            ) : (
-              <p key={c.zoneKey} className="text-sm">
-                {zoneName(c.zoneKey)}: extra charge {formatQuantity(c.extraChargeOz, 'oz', 1)}
-              </p>
-            ),
-          )}
-          {chargeWhys.map((x) => (
-            <Why key={x.key} e={x} />
-          ))}
           <p className="text-sm tabular-nums">
             Total extra charge <strong>{formatQuantity(r.extraChargeOz, 'oz', 1)}</strong>; factory charge{' '}
             {formatQuantity(r.factoryChargeOz, 'oz', 1)}; total system charge{' '}
@@ -101,11 +85,37 @@ export function SystemResults({
           </p>
           <Messages items={[...r.blockers, ...r.circuits.flatMap((c) => c.blockers)]} tone="blocker" />
           <Messages items={[...r.warnings, ...r.circuits.flatMap((c) => c.warnings)]} tone="warning" />
-          {r.notes.map((n) => (
-            <p key={n} className="text-sm text-muted">
-              {n}
-            </p>
-          ))}
+          <DeskFold
+            summary={
+              <span className="text-ink-700">
+                Each circuit’s charge{a2l ? ', the A2L room checks' : ''} and their why ({chargeCount})
+              </span>
+            }
+          >
+            <div className="flex flex-col gap-1">
+              {r.circuits.map((c) =>
+                c.explanation && circuitWhys.includes(c.explanation) ? (
+                  <Why
+                    key={c.zoneKey}
+                    e={c.explanation}
+                    label={`${zoneName(c.zoneKey)}: ${formatQuantity(c.lengthFt, 'ft')} run, ${formatQuantity(c.liftFt, 'ft')} lift — extra charge`}
+                  />
+                ) : (
+                  <p key={c.zoneKey} className="text-sm">
+                    {zoneName(c.zoneKey)}: extra charge {formatQuantity(c.extraChargeOz, 'oz', 1)}
+                  </p>
+                ),
+              )}
+              {chargeWhys.map((x) => (
+                <Why key={x.key} e={x} />
+              ))}
+              {r.notes.map((n) => (
+                <p key={n} className="text-sm text-muted">
+                  {n}
+                </p>
+              ))}
+            </div>
+          </DeskFold>
           <Cautions title="Refrigerant and pressure work" items={r.cautions} />
         </div>
       ) : null}
@@ -122,9 +132,15 @@ export function SystemResults({
               : `, voltage drop ${formatPercent(e.voltageDropPercent, 1)}`}
             .
           </p>
-          {electricalWhys.map((x) => (
-            <Why key={x.key} e={x} />
-          ))}
+          {electricalWhys.length > 0 ? (
+            <DeskFold summary={<span className="text-ink-700">How each size was found ({electricalWhys.length})</span>}>
+              <div className="flex flex-col gap-1">
+                {electricalWhys.map((x) => (
+                  <Why key={x.key} e={x} />
+                ))}
+              </div>
+            </DeskFold>
+          ) : null}
           <Messages items={e.warnings} tone="warning" />
           <Cautions title="Electrical" items={e.caution ? [e.caution] : []} />
         </div>

@@ -6,27 +6,10 @@ import { errorMessage } from '../../../lib/api-error';
 import { useRegenerateTakeoff, useSetTakeoffEdits } from '../api/set-takeoff-edits';
 import { editsOf } from '../model/takeoff-edits';
 import type { ExplanationView } from '../model/result-view';
+import { usePhone } from '../../../lib/use-phone';
+import { RuleWords } from './sell-rule';
+import { TakeoffGroups } from './takeoff-phone';
 import { TakeoffLineEditor } from './takeoff-line-editor';
-
-const RULE_FROM: Record<NonNullable<TakeoffLineRecord['sellRule']>['source'], string> = {
-  item: 'own rule',
-  category: 'category',
-  company: 'company default',
-  option: "option's rule",
-};
-
-/** "margin 35 %" over "Equipment": the rule that sold a line and where it came from, in a few words. */
-function RuleWords({ rule }: { rule: NonNullable<TakeoffLineRecord['sellRule']> }) {
-  const where = rule.source === 'category' && rule.from ? rule.from : RULE_FROM[rule.source];
-  return (
-    <span className="block text-muted">
-      <span className="block whitespace-nowrap">
-        {rule.method} {formatNumber(rule.percent, 2, { trim: true })}&nbsp;%
-      </span>
-      <span className="block">{where}</span>
-    </span>
-  );
-}
 
 /** A line's sell price that opens to calc's why (cost → price, the rule and where it came from). */
 function LineSell({ line, why }: { line: TakeoffLineRecord; why: ExplanationView | undefined }) {
@@ -47,15 +30,6 @@ function LineSell({ line, why }: { line: TakeoffLineRecord; why: ExplanationView
       </summary>
       <p className="mt-1 max-w-xs text-left font-mono text-xs text-ink-900">{why.text}</p>
     </details>
-  );
-}
-
-/** A figure's name beside it on a phone, where the column headers are not shown (they stay for screen readers). */
-function CellLabel({ children }: { children: string }) {
-  return (
-    <span aria-hidden="true" className="text-muted sm:hidden">
-      {children}
-    </span>
   );
 }
 
@@ -80,13 +54,29 @@ export function TakeoffTable({
   const costs = lines.some((l) => l.unitCostCents !== undefined);
   const sells = lines.some((l) => l.sellCents !== undefined);
   const [editing, setEditing] = useState<string | null>(null);
-  // On a phone each line is a small card (item, then one labelled row per figure); from 640 px up, a table.
-  const cell = 'flex items-start justify-between gap-3 py-1 sm:table-cell sm:py-2 sm:pr-3 sm:text-right';
+  const phone = usePhone();
+  const cell = 'py-2 pr-3 text-right align-top';
+  // On a phone, one line per category opening to compact lines; from 640 px up, the table with every column.
+  if (phone)
+    return (
+      <div>
+        <TakeoffGroups
+          jobId={jobId}
+          option={option}
+          lines={lines}
+          whys={whys}
+          canEdit={canEdit}
+          editing={editing}
+          onEdit={setEditing}
+        />
+        {canEdit ? <EditsAside jobId={jobId} option={option} /> : null}
+      </div>
+    );
   return (
     <div className="overflow-x-auto">
-      <table className="block w-full border-collapse text-sm sm:table">
+      <table className="w-full border-collapse text-sm">
         <caption className="sr-only">Materials and labor</caption>
-        <thead className="sr-only sm:not-sr-only">
+        <thead>
           <tr className="border-b border-line text-left text-muted">
             <th scope="col" className="py-2 pr-3">
               Item
@@ -111,7 +101,7 @@ export function TakeoffTable({
             ) : null}
           </tr>
         </thead>
-        <tbody className="block sm:table-row-group">
+        <tbody>
           {lines.map((l) => {
             const qtyEdited = l.generatedQuantity !== null && l.generatedQuantity !== l.quantity;
             const costEdited =
@@ -119,13 +109,12 @@ export function TakeoffTable({
               l.generatedUnitCostCents !== null &&
               l.generatedUnitCostCents !== l.unitCostCents;
             return (
-              <tr key={l.itemKey} className="flex flex-col border-b border-line py-2 align-top sm:table-row sm:py-0">
-                <th scope="row" className="block pb-1 text-left font-normal sm:table-cell sm:py-2 sm:pr-3">
+              <tr key={l.itemKey} className="border-b border-line align-top">
+                <th scope="row" className="py-2 pr-3 text-left font-normal">
                   <span className="font-semibold break-words text-ink-900">{l.description}</span>
                   <span className="block break-words text-muted">{l.derivation}</span>
                 </th>
                 <td className={`${cell} tabular-nums`}>
-                  <CellLabel>Quantity</CellLabel>
                   <span className="block text-right">
                     {formatNumber(l.quantity, 2, { trim: true })} {l.unit}
                     {qtyEdited ? (
@@ -138,7 +127,6 @@ export function TakeoffTable({
                 {costs ? (
                   <>
                     <td className={`${cell} tabular-nums`}>
-                      <CellLabel>Unit cost</CellLabel>
                       <span className="block text-right">
                         {l.unitCostCents === null || l.unitCostCents === undefined
                           ? 'no price'
@@ -151,21 +139,19 @@ export function TakeoffTable({
                       </span>
                     </td>
                     <td className={`${cell} tabular-nums`}>
-                      <CellLabel>Cost</CellLabel>
                       <span className="block text-right">{formatMoney(l.extendedCostCents ?? 0)}</span>
                     </td>
                   </>
                 ) : null}
                 {sells ? (
                   <td className={`${cell} tabular-nums`}>
-                    <CellLabel>Sell</CellLabel>
                     <span className="block text-right">
                       <LineSell line={l} why={whys?.get(`sell:${l.itemKey}`)} />
                     </span>
                   </td>
                 ) : null}
                 {canEdit ? (
-                  <td className="block py-1 text-left sm:table-cell sm:py-2 sm:text-right">
+                  <td className="py-2 text-right">
                     {editing === l.itemKey ? (
                       <TakeoffLineEditor jobId={jobId} option={option} line={l} onDone={() => setEditing(null)} />
                     ) : (

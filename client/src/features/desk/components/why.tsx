@@ -11,13 +11,22 @@ const tone: Record<ExplanationView['status'], string> = {
  * A computed number that opens to its why: the worked formula, the inputs, the verdict and the source,
  * as calc wrote them (the proposal and the installer's packet print the same words).
  */
-export function Why({ e, label = e.label }: { e: ExplanationView; label?: string }) {
+export function Why({
+  e,
+  label = e.label,
+  verdictShown = false,
+}: {
+  e: ExplanationView;
+  label?: string;
+  /** The verdict already stands in sight above (UnitWhys): the line does not repeat it. */
+  verdictShown?: boolean;
+}) {
   return (
     <details className="group rounded-md border border-line bg-white px-3 py-2">
       <summary className="flex min-h-touch cursor-pointer flex-wrap items-center justify-between gap-2">
         <span className="text-sm text-muted">
           {label}
-          {e.verdict && e.status !== 'ok' ? (
+          {e.verdict && e.status !== 'ok' && !verdictShown ? (
             <span className={`block font-semibold ${tone[e.status]}`}>{e.verdict}</span>
           ) : null}
         </span>

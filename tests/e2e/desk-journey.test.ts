@@ -283,6 +283,8 @@ describe('the estimator’s desk to a ready job', () => {
     await page.setViewportSize(PHONE);
     await design3.screenshot({ path: `${SHOTS}/desk-ducted-design-375.png` });
     await tab(page, whole).click();
+    // On a phone the pricing form folds to one line under its heading: a tap opens it.
+    await page.getByRole('region', { name: 'Pricing' }).locator('summary').click();
     await page.getByRole('form', { name: `Pricing of ${whole}` }).screenshot({ path: `${SHOTS}/desk-pricing-375.png` });
     await context.close();
   });

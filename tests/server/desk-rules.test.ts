@@ -166,9 +166,14 @@ describe('money inputs: amount discounts and deposits, a tax override with its r
       taxOn: 'total',
       reason: 'Work site in another county',
     });
-    // 'total': the tax falls on the whole discounted price (calc's TAX_RULE_LABELS), here 5 % of the subtotal.
+    // 'total': the tax falls on the whole discounted price (calc's TAX_RULE_LABELS), here 5 %, except the lines of a
+    // category the price book marks not taxable (the demo's Labor, issue 13): their share of the price stays out.
     const price = r.body.option.result.price;
-    expect(price.taxCents).toBe(Math.round(price.subtotalCents * 0.05));
+    const lines = r.body.option.result.takeoff as { category: string; sellCents: number; taxed: boolean }[];
+    const taxedSell = lines.filter((l) => l.taxed).reduce((a, l) => a + l.sellCents, 0);
+    expect(lines.filter((l) => !l.taxed).every((l) => l.category === 'labor')).toBe(true);
+    expect(price.taxableCents).toBe(Math.round((taxedSell * price.subtotalCents) / price.sellCents));
+    expect(price.taxCents).toBe(Math.round(price.taxableCents * 0.05));
     expect(price.totalCents).toBe(price.subtotalCents + price.taxCents);
   });
 

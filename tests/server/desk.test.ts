@@ -304,6 +304,57 @@ describe('server totals equal calc’s', () => {
   });
 });
 
+describe("the price book's categories and labor tasks, line by line (issue 13)", () => {
+  it('a non-taxable category stays out of the tax base and says so; a labor task gives its line its hours', async () => {
+    const { job, rooms } = await deskJob(sales);
+    const url = `/api/jobs/${job.id}`;
+    const task = (await owner.agent.get(`${BASE}/labor/mount-wall-head`)).body.row;
+    const changed = await put(owner, `${BASE}/labor/mount-wall-head`, task.version).send({
+      record: { ...task.record, hoursPerUnit: 2.25 },
+    });
+    expect(changed.status, JSON.stringify(changed.body)).toBe(200);
+    try {
+      const o = await newOption(estimator, job.id, {
+        name: 'Taxed whole',
+        design: singleZone(rooms[0] ?? ''),
+        pricing: { tax: { taxRatePercent: 8, taxOn: 'total', reason: 'County rule taxes the whole job' } },
+      });
+      const r = (await estimator.agent.get(`${url}/options/${o.id}`)).body.option.result;
+      const lines = r.takeoff as {
+        itemKey: string;
+        category: string;
+        sellCents: number;
+        taxed: boolean;
+        quantity: number;
+        derivation: string;
+      }[];
+      // The demo's Labor category is not taxable: every labor line is out, everything else in.
+      for (const l of lines) expect(l.taxed, l.itemKey).toBe(l.category !== 'labor');
+      const taxedSell = lines.filter((l) => l.taxed).reduce((a, l) => a + l.sellCents, 0);
+      // Tax on the taxed lines' share of the discounted price [definition; no discount here, so their sell].
+      expect(r.price.taxableCents).toBe(Math.round((taxedSell * r.price.subtotalCents) / r.price.sellCents));
+      expect(r.price.taxableCents).toBeLessThan(r.price.subtotalCents);
+      const whys = r.explanations as { key: string; text: string }[];
+      expect(whys.find((e) => e.key === 'tax:labor:set-outdoor')?.text).toContain('"Labor" is not taxable');
+      expect(whys.find((e) => e.key === 'price:tax')?.text).toContain('lines of "Labor" are left out');
+      // The task's 2.25 h per wall unit, named in the line's derivation.
+      const mount = lines.find((l) => l.itemKey === 'labor:mount-indoor:wall-head');
+      expect(mount?.quantity).toBe(2.25);
+      expect(mount?.derivation).toContain('price-book task "Mount a wall unit"');
+      // A salesperson sees the tax, not each line's treatment (it sits with the cost and rule).
+      const salesRead = await sales.agent.get(`${url}/options/${o.id}`);
+      expect(salesRead.status).toBe(200);
+      const salesLines = salesRead.body.option.result.takeoff as Record<string, unknown>[];
+      expect(salesLines.length).toBe(lines.length);
+      expect(salesLines.every((l) => !('taxed' in l))).toBe(true);
+      expect(salesRead.body.option.result.price.taxCents).toBe(r.price.taxCents);
+    } finally {
+      const now = (await owner.agent.get(`${BASE}/labor/mount-wall-head`)).body.row;
+      await put(owner, `${BASE}/labor/mount-wall-head`, now.version).send({ record: task.record });
+    }
+  });
+});
+
 describe('scoping', () => {
   it('401 signed out, 404 for another company, another salesperson’s job and an unassigned installer', async () => {
     const { job, rooms } = await deskJob(owner);

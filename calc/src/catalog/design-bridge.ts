@@ -11,6 +11,7 @@ import type {
 import type { CatalogModel } from './model';
 import type { Category, Kit, LaborTask, Material, RefrigerantCost } from './price-book';
 import type { SellRule } from './sell-rule';
+import type { LaborHoursKey } from '../takeoff/defaults';
 
 /**
  * The bridge from the company's data (issue 12: catalog models and price-book rows, as calc's
@@ -173,7 +174,10 @@ type PriceBookItem = { -readonly [K in keyof PriceBook['items'][string]]: PriceB
  * counts hours; a company whose task keys differ passes its own map.
  */
 export const DEFAULT_LABOR_TASK_FOR: Readonly<Record<string, string>> = {
-  'labor:mount-indoor': 'mount-wall-head',
+  'labor:mount-indoor:wall-head': 'mount-wall-head',
+  'labor:mount-indoor:ceiling-cassette': 'mount-cassette',
+  'labor:mount-indoor:floor-console': 'mount-floor-console',
+  'labor:mount-indoor:ducted-air-handler': 'mount-air-handler',
   'labor:run-line-set': 'line-set-run',
   'labor:wall-penetration': 'wall-penetration',
   'labor:condensate-gravity': 'condensate-gravity',
@@ -186,6 +190,30 @@ export const DEFAULT_LABOR_TASK_FOR: Readonly<Record<string, string>> = {
 };
 
 /**
+ * Which labor task gives each entry of the takeoff's labor table its hours (the task's hours per unit),
+ * by task key. A line made of two entries (a base and a per-foot part) takes each from its own task.
+ */
+export const DEFAULT_LABOR_HOURS_TASK: Readonly<Record<LaborHoursKey, string>> = {
+  mountWallHead: 'mount-wall-head',
+  mountCassette: 'mount-cassette',
+  mountFloorConsole: 'mount-floor-console',
+  mountAirHandler: 'mount-air-handler',
+  setOutdoorPad: 'set-outdoor-pad',
+  setOutdoorBracket: 'set-outdoor-bracket',
+  lineSetBase: 'line-set-base',
+  lineSetPerFt: 'line-set-run',
+  wallPenetration: 'wall-penetration',
+  condensateGravity: 'condensate-gravity',
+  condensatePump: 'condensate-pump',
+  lineCoverPerFt: 'line-cover',
+  electricalBase: 'electrical-base',
+  electricalPerFt: 'electrical-run',
+  pressureTestEvacuate: 'pressure-test-evacuate',
+  chargeStartupBase: 'charge-startup',
+  chargeStartupPerCircuit: 'charge-circuit',
+};
+
+/**
  * The engine's price book (cost per takeoff item key, cents) from the company's data:
  * - `equipment:<model>` ← the model's cost; heat kits likewise;
  * - `line-set-kit:<liquid>x<suction>:<n>ft` ← the line-set kit of those sizes and length;
@@ -194,6 +222,10 @@ export const DEFAULT_LABOR_TASK_FOR: Readonly<Record<string, string>> = {
  * - any other takeoff key ← the material whose SKU `itemMap` names for it, else the material whose
  *   `takeoffItem` names the key (an active one first), else a material whose SKU is the key itself. Unmapped items stay unpriced (computeDesign warns "No price for …").
  * `laborRateCents` (labor lines with no task) is the median hourly rate of the active tasks.
+ * `labor`: the hours of each labor-table entry from its task (`laborHoursTask`, default
+ * DEFAULT_LABOR_HOURS_TASK), so the takeoff counts the company's hours, not the default table's.
+ * Each item names its category and whether it is taxable (a category with `taxable: false` keeps its
+ * lines out of the tax base).
  * Each item carries its sell rule: the row's own override (`ruleSource` 'item'), else its category's
  * ('category', `ruleFrom` = the category's name); a row with neither (or a category not in
  * `categories`) sells at the company default, which pricing applies (issue 13).
@@ -207,6 +239,7 @@ export function designPriceBookFromCompany({
   categories = [],
   itemMap = {},
   laborTaskFor = DEFAULT_LABOR_TASK_FOR,
+  laborHoursTask = DEFAULT_LABOR_HOURS_TASK,
 }: {
   readonly models: Iterable<CatalogModel>;
   readonly materials?: readonly Material[];
@@ -216,6 +249,7 @@ export function designPriceBookFromCompany({
   readonly categories?: readonly Category[];
   readonly itemMap?: Readonly<Record<string, string>>;
   readonly laborTaskFor?: Readonly<Record<string, string>>;
+  readonly laborHoursTask?: Readonly<Partial<Record<LaborHoursKey, string>>>;
 }): PriceBook {
   const items: Record<string, PriceBookItem> = {};
   const categoryByKey = new Map<string, Category>();
@@ -229,6 +263,10 @@ export function designPriceBookFromCompany({
     const out: PriceBookItem = { unitCostCents };
     if (description !== undefined) out.description = description;
     const category = row.category === undefined ? undefined : categoryByKey.get(row.category);
+    if (category) {
+      out.categoryName = category.name;
+      out.taxable = category.taxable;
+    }
     if (row.sellRule) {
       out.sellRule = row.sellRule;
       out.ruleSource = 'item';
@@ -269,5 +307,18 @@ export function designPriceBookFromCompany({
   }
   const rates = labor.filter((t) => t.active).map((t) => t.rateCentsPerHour);
   rates.sort((a, b) => a - b);
-  return { items, laborRateCents: rates[Math.floor(rates.length / 2)] ?? 0 };
+  const hours: Partial<Record<LaborHoursKey, number>> = {};
+  const from: Partial<Record<LaborHoursKey, string>> = {};
+  for (const [entry, task] of Object.entries(laborHoursTask) as [LaborHoursKey, string | undefined][]) {
+    const t = task === undefined ? undefined : tasks.get(task);
+    if (t) {
+      hours[entry] = t.hoursPerUnit;
+      from[entry] = t.description;
+    }
+  }
+  return {
+    items,
+    laborRateCents: rates[Math.floor(rates.length / 2)] ?? 0,
+    ...(Object.keys(hours).length > 0 ? { labor: { hours, from } } : {}),
+  };
 }

@@ -5,6 +5,7 @@ import { coincidentLoad, homeLoadFromParsed, type HomeLoad } from '../loads/home
 import { parseOrThrow } from '../parse';
 import { priceLines, priceOption, type OptionPrice, type PricedLine } from '../pricing/price';
 import {
+  laborTableOf,
   priceBookSchema,
   pricingSchema,
   type PriceBook,
@@ -29,7 +30,7 @@ import { buildTakeoff, type SystemForTakeoff } from '../takeoff/build';
 import { zoneLoads, type ZoneLoad } from './zone-loads';
 import { explainDuctLoads, homeWithDesignDucts } from './design-ducts';
 import { explanation, type Explanation } from '../explain/explanation';
-import { explainExtension, explainLineSell, explainOptionPrice } from '../pricing/explain-price';
+import { explainExtension, explainLineSell, explainLineTax, explainOptionPrice } from '../pricing/explain-price';
 import { technologyTransitionsCheck, type RefrigerantRuleCheck } from '../refrigerant/rules';
 import { explainSizing, heatingBalance, type HeatingBalance } from './explain-sizing';
 import type { HeatKit } from '../schemas/equipment';
@@ -389,7 +390,10 @@ export function computeDesignFromParsed({
       explanations,
     };
   });
-  const priced = priceLines({ lines: buildTakeoff({ systems: forTakeoff }), priceBook });
+  const priced = priceLines({
+    lines: buildTakeoff({ systems: forTakeoff, labor: laborTableOf(priceBook) }),
+    priceBook,
+  });
   const anyA2l = systems.some((s) => s.refrigerant.safetyClass === 'A2L');
   const price = priceOption({ lines: priced.lines, pricing, priceBook });
   const explanations: Explanation[] = !explainPrice
@@ -411,7 +415,8 @@ export function computeDesignFromParsed({
         }),
       );
   if (explainPrice) {
-    for (const line of price.lineSells) explanations.push(explainLineSell({ line }));
+    for (const line of price.lineSells)
+      explanations.push(explainLineSell({ line }), explainLineTax({ line, taxOn: pricing.taxOn }));
     explanations.push(
       ...explainOptionPrice({
         price,

@@ -4,7 +4,7 @@ import { formatMoney, formatNumber, formatPercent } from '../explain/format';
 import { roundHalfUp } from '../rounding';
 import { marginFromMarkup, markupFromMargin } from '../catalog/sell-rule';
 import { monthlyPaymentCents } from './money';
-import type { LineSell, OptionPrice } from './price';
+import { taxRuleCovers, type LineSell, type OptionPrice } from './price';
 import { TAX_RULE_LABELS, type Pricing } from './schemas';
 
 /**
@@ -115,6 +115,45 @@ export function explainLineSell({
   });
 }
 
+/**
+ * Whether one line is in the tax base, and why: the option's tax rule and the line's price-book category
+ * ("Not taxed: its price-book category "Labor" is not taxable"). Keyed `tax:<item key>` (with the prefix).
+ */
+export function explainLineTax({
+  prefix = '',
+  line,
+  taxOn,
+}: {
+  readonly prefix?: string;
+  readonly line: LineSell;
+  readonly taxOn: Pricing['taxOn'];
+}): Explanation {
+  const ruleText = TAX_RULE_LABELS[taxOn];
+  const covered = taxRuleCovers(taxOn, line.category);
+  const category = line.categoryName === null ? null : `"${line.categoryName}"`;
+  let text: string;
+  if (!covered)
+    text =
+      taxOn === 'none'
+        ? 'Not taxed: this option charges no tax'
+        : `Not taxed: the rule is "${ruleText}", which leaves ${line.category} lines out`;
+  else if (!line.categoryTaxable)
+    text = `Not taxed: its price-book category ${category ?? ''} is not taxable (the rule "${ruleText}" would cover it)`;
+  else
+    text = `${taxOn === 'materials-cost' ? 'Tax paid on its cost' : 'Taxed'}: the rule is "${ruleText}"${category === null ? ' and the price book gives this item no category (taxable unless a category says otherwise)' : ` and its category ${category} is taxable`}`;
+  return explanation({
+    key: `${prefix}tax:${line.itemKey}`,
+    label: `Tax, ${line.description}`,
+    value: line.taxed ? 1 : 0,
+    unit: 'flag',
+    valueText: line.taxed ? (taxOn === 'materials-cost' ? 'Tax on our cost' : 'Taxed') : 'Not taxed',
+    text,
+    inputs: [],
+    status: 'ok',
+    source: "The company's tax rule and the price book's taxable flag per category",
+  });
+}
+
 const money = (key: string, label: string, cents: number, text: string, extra: Partial<Explanation> = {}) =>
   explanation({
     key,
@@ -209,8 +248,19 @@ export function explainOptionPrice({
       : pricing.taxOn === 'materials-cost'
         ? `${taxLabel}: ${m(price.equipmentCostCents + price.materialsCostCents)} × ${rate} = ${m(price.contractorTaxCents)}, counted in our cost`
         : `${taxLabel}: ${m(price.taxableCents)} taxable × ${rate} = ${m(price.taxCents)}`;
+  const exempt = [
+    ...new Set(
+      price.lineSells
+        .filter((l) => !l.categoryTaxable && taxRuleCovers(pricing.taxOn, l.category))
+        .map((l) => `"${l.categoryName ?? ''}"`),
+    ),
+  ];
+  const exemptText =
+    exempt.length === 0 ? '' : `; lines of ${exempt.join(', ')} are left out (not taxable in the price book)`;
   out.push(
-    money(`${prefix}price:tax`, 'Tax', price.taxCents, taxText, { source: "The company's tax rule" }),
+    money(`${prefix}price:tax`, 'Tax', price.taxCents, `${taxText}${exemptText}`, {
+      source: "The company's tax rule and the price book's taxable flag per category",
+    }),
     money(
       `${prefix}price:total`,
       'Total',

@@ -1,7 +1,7 @@
 import type { TakeoffLine } from '../takeoff/lines';
 import { roundCentsHalfUp, roundHalfUp } from '../rounding';
 import { extendCents, monthlyPaymentCents, percentOfCents, priceFromMarginCents, priceFromMarkupCents } from './money';
-import type { PriceBook, Pricing } from './schemas';
+import type { PriceBook, Pricing, TaxRule } from './schemas';
 import { sellPriceCents, type SellRule } from '../catalog/sell-rule';
 
 /** A takeoff line with its cost. `unitCostCents` null when the price book lacks the item (extended 0, with a warning). */
@@ -56,6 +56,27 @@ export interface LineSell {
   readonly source: LineRuleSource;
   /** The category's name (source 'category') or the item's description (source 'item'); null otherwise. */
   readonly from: string | null;
+  /** The price-book category the line's item belongs to, by name; null when the book names none. */
+  readonly categoryName: string | null;
+  /** false when the item's category is not taxable (true when the book says nothing). */
+  readonly categoryTaxable: boolean;
+  /** In the tax base: the option's tax rule covers lines of this kind and its category is taxable. */
+  readonly taxed: boolean;
+}
+
+/** Whether the tax rule covers a line of this kind (before its category's own flag). */
+export function taxRuleCovers(rule: TaxRule, category: TakeoffLine['category']): boolean {
+  switch (rule) {
+    case 'none':
+      return false;
+    case 'total':
+      return true;
+    case 'materials':
+    case 'materials-cost':
+      return category !== 'labor';
+    case 'materials-only':
+      return category === 'material';
+  }
 }
 
 /**
@@ -75,8 +96,10 @@ export function sellLines({
   const fallback: SellRule = { method: pricing.method, percent: pricing.percent };
   const byLine = pricing.sellRulesBy === 'line';
   return lines.map((l): LineSell => {
-    const item = byLine ? priceBook?.items[l.itemKey] : undefined;
+    const book = priceBook?.items[l.itemKey];
+    const item = byLine ? book : undefined;
     const own = item?.sellRule;
+    const categoryTaxable = book?.taxable !== false;
     const rule = own ?? fallback;
     const source: LineRuleSource = !byLine ? 'option' : own ? (item?.ruleSource ?? 'item') : 'company';
     return {
@@ -88,6 +111,9 @@ export function sellLines({
       rule,
       source,
       from: own ? (item?.ruleFrom ?? null) : null,
+      categoryName: book?.categoryName ?? null,
+      categoryTaxable,
+      taxed: categoryTaxable && taxRuleCovers(pricing.taxOn, l.category),
     };
   });
 }
@@ -117,12 +143,6 @@ export interface OptionPrice {
   readonly sellRulesBy: Pricing['sellRulesBy'];
   /** Every line at its sell price with its rule (in 'line' mode their sums are the goods and labor sell). */
   readonly lineSells: readonly LineSell[];
-}
-
-/** Materials' share of the goods sell price, cents (half-up): goods sell × materials cost ÷ (equipment + materials cost). */
-function materialsSellShare(goodsSell: number, equipmentCost: number, materialsCost: number): number {
-  const goodsCost = equipmentCost + materialsCost;
-  return goodsCost === 0 ? 0 : roundCentsHalfUp((goodsSell * materialsCost) / goodsCost);
 }
 
 const sum = (xs: readonly number[]): number => xs.reduce((a, b) => a + b, 0);
@@ -166,26 +186,34 @@ export function priceOption({
   const discount = Math.min(sellCents, percentOff + amountOff);
   const subtotal = sellCents - discount;
   const rule = pricing.taxOn;
-  // Goods (or materials alone) carry their share of the discounted price: discounts fall on every line alike.
-  const taxedSell =
-    rule === 'materials'
-      ? goodsSell
-      : rule === 'materials-only'
-        ? byLine
-          ? sold('material')
-          : materialsSellShare(goodsSell, equipment, materials)
-        : 0;
-  const taxable =
-    rule === 'none' || rule === 'materials-cost'
+  // The tax base: the lines the rule covers whose category is taxable (issue 13), at their share of the
+  // discounted price (discounts fall on every line alike). Line by line: each taxed line's own sell price;
+  // one rule for the option: goods and labor each sell at one rule, so a taxed part's share of their sell
+  // is its share of their cost.
+  const taxedCost = (c: TakeoffLine['category'] | 'goods') =>
+    sum(
+      lineSells
+        .filter((l) => l.taxed && (c === 'goods' ? l.category !== 'labor' : l.category === c))
+        .map((l) => l.costCents),
+    );
+  const share = (sellPart: number, taxedPartCost: number, partCost: number) =>
+    partCost === 0
       ? 0
-      : rule === 'total'
+      : taxedPartCost === partCost
+        ? sellPart
+        : roundCentsHalfUp((sellPart * taxedPartCost) / partCost);
+  const taxedSell = byLine
+    ? sum(lineSells.filter((l) => l.taxed).map((l) => l.sellCents))
+    : share(goodsSell, taxedCost('goods'), equipment + materials) + share(laborSell, taxedCost('labor'), laborCost);
+  const taxable =
+    rule === 'none' || rule === 'materials-cost' || sellCents === 0
+      ? 0
+      : taxedSell === sellCents
         ? subtotal
-        : sellCents === 0
-          ? 0
-          : roundCentsHalfUp((taxedSell * subtotal) / sellCents);
+        : roundCentsHalfUp((taxedSell * subtotal) / sellCents);
   const tax = percentOfCents({ cents: taxable, percent: pricing.taxRatePercent });
   const contractorTax =
-    rule === 'materials-cost' ? percentOfCents({ cents: equipment + materials, percent: pricing.taxRatePercent }) : 0;
+    rule === 'materials-cost' ? percentOfCents({ cents: taxedCost('goods'), percent: pricing.taxRatePercent }) : 0;
   const total = subtotal + tax;
   const deposit =
     pricing.deposit.kind === 'percent'

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { bounded, boundedInt, keyField, nameField } from '../schemas/fields';
 import { sellRuleSchema } from '../catalog/sell-rule';
+import { LABOR_HOURS, type LaborHoursKey, type LaborTable } from '../takeoff/defaults';
 
 /** The tax rules an option can use (see pricingSchema.taxOn). */
 export const TAX_RULES = ['materials', 'materials-only', 'total', 'materials-cost', 'none'] as const;
@@ -13,6 +14,8 @@ export const TAX_RULE_LABELS: Record<TaxRule, string> = {
   'materials-cost': 'We pay the tax on our cost of equipment and materials (no tax line for the customer)',
   none: 'No tax',
 };
+
+const LABOR_HOURS_KEYS = Object.keys(LABOR_HOURS) as [LaborHoursKey, ...LaborHoursKey[]];
 
 const cents = (label: string) => boundedInt(label, 0, 100_000_000, 'cents');
 
@@ -30,10 +33,31 @@ export const priceBookSchema = z.object({
       sellRule: sellRuleSchema.optional(),
       ruleSource: z.enum(['item', 'category']).optional(),
       ruleFrom: nameField('Rule from', 120).optional(),
+      /** The price-book category the item belongs to (its name), when it names one the book has. */
+      categoryName: nameField('Category', 60).optional(),
+      /** false: its category is not taxable, so the line stays out of the tax base whatever the rule. */
+      taxable: z.boolean().optional(),
     }),
   ),
   laborRateCents: cents('Labor rate'),
+  /**
+   * The company's labor tasks as the takeoff's labor table: hours per entry and the task's description,
+   * for the entries the price book has a task for (the rest count at the default table).
+   */
+  labor: z
+    .object({
+      hours: z.partialRecord(z.enum(LABOR_HOURS_KEYS), bounded('Hours per unit', 0, 100, 'h')),
+      from: z.partialRecord(z.enum(LABOR_HOURS_KEYS), nameField('Labor task', 120)),
+    })
+    .optional(),
 });
+
+/** The labor table a price book counts with: its tasks' hours over the defaults. */
+export function laborTableOf(priceBook: PriceBook): LaborTable | undefined {
+  const l = priceBook.labor;
+  if (!l) return undefined;
+  return { hours: { ...LABOR_HOURS, ...l.hours }, from: l.from };
+}
 
 /** A discount: a percent of the sell price or a fixed amount in cents. */
 export const discountSchema = z.object({

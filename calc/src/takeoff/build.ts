@@ -5,7 +5,7 @@ import { roundHalfUp, roundUpTo } from '../rounding';
 import type { Circuit, System } from '../schemas/design';
 import type { HeatKit, IndoorUnit, OutdoorUnit } from '../schemas/equipment';
 import { OZ_PER_LB } from '../units';
-import { LABOR_HOURS, TAKEOFF_DEFAULTS } from './defaults';
+import { DEFAULT_LABOR_TABLE, TAKEOFF_DEFAULTS, type LaborHoursKey, type LaborTable } from './defaults';
 import type { TakeoffLine } from './lines';
 
 /** What the takeoff needs to know about one system. */
@@ -98,11 +98,12 @@ export function cylindersToBuy({
   return extraOz <= 0 ? 0 : Math.ceil(extraOz / OZ_PER_LB / cylinderLb - 1e-9);
 }
 
-const MOUNT_LABOR: Record<IndoorUnit['unitType'], number> = {
-  'wall-head': LABOR_HOURS.mountWallHead,
-  'ceiling-cassette': LABOR_HOURS.mountCassette,
-  'floor-console': LABOR_HOURS.mountFloorConsole,
-  'ducted-air-handler': LABOR_HOURS.mountAirHandler,
+/** Which entry of the labor table mounts each kind of indoor unit. */
+const MOUNT_LABOR: Record<IndoorUnit['unitType'], LaborHoursKey> = {
+  'wall-head': 'mountWallHead',
+  'ceiling-cassette': 'mountCassette',
+  'floor-console': 'mountFloorConsole',
+  'ducted-air-handler': 'mountAirHandler',
 };
 const MOUNT_DESCRIPTION: Record<IndoorUnit['unitType'], string> = {
   'wall-head': 'Mount indoor unit (wall-head)',
@@ -116,15 +117,30 @@ const MOUNT_DESCRIPTION: Record<IndoorUnit['unitType'], string> = {
  * line's text is its own numbers plus these pieces and the circuit's "(system, zone)" suffix.
  */
 const T = TAKEOFF_DEFAULTS;
-const L = LABOR_HOURS;
 const CABLE_SLACK_TEXT = ` ft + ${T.cableSlackFt} ft slack, rounded up to 5 ft`;
 const LINE_COVER_PIECE_TEXT = ` ft ÷ ${T.lineCoverPieceFt} ft, rounded up`;
 const LINE_COVER_DESCRIPTION = `Line cover ${T.lineCoverPieceFt} ft section`;
-const LINE_COVER_LABOR_TEXT = ` ft × ${L.lineCoverPerFt} h/ft`;
-const LINE_SET_LABOR_TEXT = [`${L.lineSetBase} h + `, ` ft × ${L.lineSetPerFt} h/ft`] as const;
-const WALL_PENETRATION_LABOR_TEXT = ` × ${L.wallPenetration} h`;
-const ELECTRICAL_LABOR_TEXT = [`${L.electricalBase} h + `, ` ft × ${L.electricalPerFt} h/ft`] as const;
-const CHARGE_STARTUP_TEXT = [`${L.chargeStartupBase} h + `, ` circuit(s) × ${L.chargeStartupPerCircuit} h`] as const;
+
+/**
+ * The labor table a takeoff counts with, and where each entry came from: "default labor table", or the
+ * price book's task by its description ("price-book task "Mount a wall unit"") — so every labor line says
+ * whose hours it used (issue 13: the price book's labor tasks give each line its labor).
+ */
+class Labor {
+  readonly h: LaborTable['hours'];
+  private readonly from: LaborTable['from'];
+  constructor(table: LaborTable) {
+    this.h = table.hours;
+    this.from = table.from;
+  }
+  /** "(default labor table)" or "(price-book task "A"; default labor table for …)". */
+  by(...keys: LaborHoursKey[]): string {
+    const named = keys.map((k) => this.from[k]).filter((x): x is string => x !== undefined);
+    if (named.length === 0) return 'default labor table';
+    const tasks = [...new Set(named)].map((n) => `"${n}"`).join(' and ');
+    return `price-book task${named.length > 1 ? 's' : ''} ${tasks}${named.length < keys.length ? ' and the default labor table' : ''}`;
+  }
+}
 
 /** Materials and labor lines for one circuit of a system (indoor unit, line set, accessories, labor), added to `out`. */
 function circuitLines(
@@ -134,8 +150,10 @@ function circuitLines(
   plan: CircuitCharge,
   heatPump: boolean,
   out: LineMerger,
+  labor: Labor,
 ): void {
   const at = ` (${name}, zone ${c.zoneKey})`;
+  const L = labor.h;
   out.add(
     `equipment:${indoor.key}`,
     indoor.description,
@@ -217,7 +235,7 @@ function circuitLines(
       'labor:line-cover',
       'Install line cover',
       c.lineCoverFt * L.lineCoverPerFt,
-      `${c.lineCoverFt}${LINE_COVER_LABOR_TEXT}${at}`,
+      `${c.lineCoverFt} ft × ${L.lineCoverPerFt} h/ft, ${labor.by('lineCoverPerFt')}${at}`,
     );
   }
   const pump = c.condensate === 'pump' || indoor.needsCondensatePump;
@@ -232,26 +250,33 @@ function circuitLines(
     );
   }
   out.mat('fasteners:kit', 'Fastener and strap kit', 1, 'each', `one per circuit${at}`);
-  const laborTable = `labor table${at}`;
-  out.labor('labor:mount-indoor', MOUNT_DESCRIPTION[indoor.unitType], MOUNT_LABOR[indoor.unitType], laborTable);
+  // Each kind of indoor unit is its own line, at its own task's hours and rate.
+  const mount = MOUNT_LABOR[indoor.unitType];
+  out.labor(
+    `labor:mount-indoor:${indoor.unitType}`,
+    MOUNT_DESCRIPTION[indoor.unitType],
+    L[mount],
+    `${L[mount]} h, ${labor.by(mount)}${at}`,
+  );
   out.labor(
     'labor:run-line-set',
     'Run, flare/braze and support line set',
     L.lineSetBase + c.lengthFt * L.lineSetPerFt,
-    `${LINE_SET_LABOR_TEXT[0]}${c.lengthFt}${LINE_SET_LABOR_TEXT[1]}${at}`,
+    `${L.lineSetBase} h + ${c.lengthFt} ft × ${L.lineSetPerFt} h/ft, ${labor.by('lineSetBase', 'lineSetPerFt')}${at}`,
   );
   if (c.wallPenetrations > 0)
     out.labor(
       'labor:wall-penetration',
       'Core wall penetration',
       c.wallPenetrations * L.wallPenetration,
-      `${c.wallPenetrations}${WALL_PENETRATION_LABOR_TEXT}${at}`,
+      `${c.wallPenetrations} × ${L.wallPenetration} h, ${labor.by('wallPenetration')}${at}`,
     );
+  const drain: LaborHoursKey = pump ? 'condensatePump' : 'condensateGravity';
   out.labor(
     pump ? 'labor:condensate-pump' : 'labor:condensate-gravity',
     pump ? 'Condensate pump and line' : 'Gravity condensate line',
-    pump ? L.condensatePump : L.condensateGravity,
-    laborTable,
+    L[drain],
+    `${L[drain]} h, ${labor.by(drain)}${at}`,
   );
 }
 
@@ -319,8 +344,9 @@ function branchWiring(
 }
 
 /** Materials and labor lines for one system (equipment, line sets, accessories, electrical, refrigerant, labor), added to `out`. */
-function systemLines(s: SystemForTakeoff, out: LineMerger): void {
+function systemLines(s: SystemForTakeoff, out: LineMerger, labor: Labor): void {
   const name = s.system.name;
+  const L = labor.h;
   out.add(`equipment:${s.outdoor.key}`, s.outdoor.description, 1, 'each', 'equipment', `outdoor unit of ${name}`);
   const circuits = s.system.circuits;
   const heatPump = s.outdoor.equipmentType.startsWith('heat-pump');
@@ -328,7 +354,7 @@ function systemLines(s: SystemForTakeoff, out: LineMerger): void {
     const c = circuits[i];
     const indoor = c && s.indoorByZone.get(c.zoneKey);
     const plan = s.refrigerant.circuits[i];
-    if (c && indoor && plan) circuitLines(name, c, indoor, plan, heatPump, out);
+    if (c && indoor && plan) circuitLines(name, c, indoor, plan, heatPump, out, labor);
   }
   const bracket = s.system.mounting === 'wall-bracket';
   out.mat(
@@ -338,12 +364,8 @@ function systemLines(s: SystemForTakeoff, out: LineMerger): void {
     'each',
     `${name} mounting`,
   );
-  out.labor(
-    'labor:set-outdoor',
-    'Set outdoor unit',
-    bracket ? L.setOutdoorBracket : L.setOutdoorPad,
-    `labor table (${name})`,
-  );
+  const set: LaborHoursKey = bracket ? 'setOutdoorBracket' : 'setOutdoorPad';
+  out.labor('labor:set-outdoor', 'Set outdoor unit', L[set], `${L[set]} h, ${labor.by(set)} (${name})`);
   const e = s.electrical;
   const wiring = s.system.electrical;
   const disconnectA = (e.breakerA ?? e.mocpA) <= 60 ? 60 : 100;
@@ -386,7 +408,7 @@ function systemLines(s: SystemForTakeoff, out: LineMerger): void {
     'labor:electrical',
     'Branch circuit, disconnect and whip',
     L.electricalBase + wiring.circuitLengthFt * L.electricalPerFt,
-    `${ELECTRICAL_LABOR_TEXT[0]}${wiring.circuitLengthFt}${ELECTRICAL_LABOR_TEXT[1]} (${name})`,
+    `${L.electricalBase} h + ${wiring.circuitLengthFt} ft × ${L.electricalPerFt} h/ft, ${labor.by('electricalBase', 'electricalPerFt')} (${name})`,
   );
   if (s.heatKit) {
     out.add(`equipment:${s.heatKit.key}`, s.heatKit.description, 1, 'each', 'equipment', `backup heat for ${name}`);
@@ -426,20 +448,30 @@ function systemLines(s: SystemForTakeoff, out: LineMerger): void {
     'labor:pressure-test-evacuate',
     'Pressure test and evacuation',
     L.pressureTestEvacuate,
-    `labor table (${name})`,
+    `${L.pressureTestEvacuate} h, ${labor.by('pressureTestEvacuate')} (${name})`,
   );
   const count = circuits.length;
   out.labor(
     'labor:charge-startup',
     'Charge and start-up',
     L.chargeStartupBase + count * L.chargeStartupPerCircuit,
-    `${CHARGE_STARTUP_TEXT[0]}${count}${CHARGE_STARTUP_TEXT[1]} (${name})`,
+    `${L.chargeStartupBase} h + ${count} circuit(s) × ${L.chargeStartupPerCircuit} h, ${labor.by('chargeStartupBase', 'chargeStartupPerCircuit')} (${name})`,
   );
 }
 
-/** The full takeoff for a design: every system's lines, merged by item key (quantities summed). */
-export function buildTakeoff({ systems }: { readonly systems: readonly SystemForTakeoff[] }): TakeoffLine[] {
+/**
+ * The full takeoff for a design: every system's lines, merged by item key (quantities summed). Labor is
+ * counted with `labor` (the price book's tasks where it has them; default: the default labor table).
+ */
+export function buildTakeoff({
+  systems,
+  labor = DEFAULT_LABOR_TABLE,
+}: {
+  readonly systems: readonly SystemForTakeoff[];
+  readonly labor?: LaborTable | undefined;
+}): TakeoffLine[] {
   const out = new LineMerger();
-  for (const s of systems) systemLines(s, out);
+  const table = new Labor(labor);
+  for (const s of systems) systemLines(s, out, table);
   return out.lines();
 }

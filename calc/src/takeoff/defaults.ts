@@ -48,3 +48,18 @@ export const LABOR_HOURS = {
   chargeStartupBase: 1,
   chargeStartupPerCircuit: 0.25,
 } as const;
+
+/** One entry of the labor table: the hours the takeoff counts per unit of work. */
+export type LaborHoursKey = keyof typeof LABOR_HOURS;
+
+/**
+ * The labor table a takeoff is counted with: hours per entry, and where each came from when it is not
+ * the default table (the price book's labor task, by its description), for the line's derivation.
+ */
+export interface LaborTable {
+  readonly hours: { readonly [K in LaborHoursKey]: number };
+  readonly from: { readonly [K in LaborHoursKey]?: string };
+}
+
+/** The default table, named as such in every labor line's derivation. */
+export const DEFAULT_LABOR_TABLE: LaborTable = { hours: LABOR_HOURS, from: {} };

@@ -195,6 +195,8 @@ export const takeoffLineRecord = z.object({
       from: z.string().nullable(),
     })
     .optional(),
+  /** In the tax base: the option's tax rule covers it and its price-book category is taxable (office only). */
+  taxed: z.boolean().optional(),
   /** Set by an edit (generated values beside it); 'added' lines are the estimator's own. */
   edited: z.boolean(),
   source: z.enum(['generated', 'added']),
@@ -217,6 +219,8 @@ export const optionPriceRecord = z.object({
   discountCents: z.number(),
   discountPercent: z.number(),
   subtotalCents: z.number(),
+  /** The tax base: the lines the tax rule covers whose price-book category is taxable, their share of the subtotal. */
+  taxableCents: z.number(),
   taxCents: z.number(),
   totalCents: z.number(),
   depositCents: z.number(),

@@ -33,6 +33,7 @@ import {
   regenerateTakeoff,
   explainOptionPrice,
   explainLineSell,
+  explainLineTax,
   type Explanation,
   type MergedLine,
   type LineSell,
@@ -359,7 +360,10 @@ export function computeOption(
       sellRule,
       monthly,
       explanations: [
-        ...price.lineSells.map((line) => explainLineSell({ line })),
+        ...price.lineSells.flatMap((line) => [
+          explainLineSell({ line }),
+          explainLineTax({ line, taxOn: pricing.taxOn }),
+        ]),
         ...explainOptionPrice({ price, pricing, plans: data.desk.financing }),
       ],
       range,

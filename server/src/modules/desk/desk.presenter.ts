@@ -24,6 +24,7 @@ function presentPrice(f: OptionFigures, role: Role): OptionPriceRecord | null {
     discountCents: p.discountCents,
     discountPercent: f.discountPercent,
     subtotalCents: p.subtotalCents,
+    taxableCents: p.taxableCents,
     taxCents: p.taxCents,
     totalCents: p.totalCents,
     depositCents: p.depositCents,
@@ -71,6 +72,7 @@ function presentLine(l: DeskLine, role: Role): TakeoffLineRecord {
             source: l.sell.source,
             from: l.sell.from,
           },
+          taxed: l.sell.taxed,
         }
       : {}),
   };
@@ -78,7 +80,7 @@ function presentLine(l: DeskLine, role: Role): TakeoffLineRecord {
 
 /**
  * The price explanations a salesperson may read: the customer's figures, not the cost or the sell rule
- * (each line's sell price, `sell:<item>`, shows its cost and rule: office only).
+ * (each line's sell price, `sell:<item>`, shows its cost and rule, and its tax treatment `tax:<item>`: office only).
  */
 const CUSTOMER_PRICE_KEYS = /^price:(discount|subtotal|tax|total|deposit|balance|monthly:.*)$/;
 
@@ -86,7 +88,7 @@ function explanationsFor(f: OptionFigures, role: Role) {
   if (maySeeCost(role)) return f.explanations.map((e) => ({ ...e }));
   return f.explanations
     .filter((e) =>
-      e.key.startsWith('sell:')
+      e.key.startsWith('sell:') || e.key.startsWith('tax:')
         ? false
         : e.key.startsWith('price:')
           ? maySeePrice(role) && CUSTOMER_PRICE_KEYS.test(e.key)

@@ -12,9 +12,22 @@ import { TakeoffGroups } from './takeoff-phone';
 import { TakeoffLineEditor } from './takeoff-line-editor';
 
 /** A line's sell price that opens to calc's why (cost → price, the rule and where it came from). */
-function LineSell({ line, why }: { line: TakeoffLineRecord; why: ExplanationView | undefined }) {
+function LineSell({
+  line,
+  why,
+  taxWhy,
+}: {
+  line: TakeoffLineRecord;
+  why: ExplanationView | undefined;
+  taxWhy: ExplanationView | undefined;
+}) {
   if (line.sellCents === undefined) return null;
-  const rule = line.sellRule ? <RuleWords rule={line.sellRule} /> : null;
+  const rule = (
+    <>
+      {line.sellRule ? <RuleWords rule={line.sellRule} /> : null}
+      {line.taxed === false ? <span className="block text-muted">not taxed</span> : null}
+    </>
+  );
   if (!why)
     return (
       <>
@@ -29,6 +42,7 @@ function LineSell({ line, why }: { line: TakeoffLineRecord; why: ExplanationView
         {rule}
       </summary>
       <p className="mt-1 max-w-xs text-left font-mono text-xs text-ink-900">{why.text}</p>
+      {taxWhy ? <p className="mt-1 max-w-xs text-left font-mono text-xs text-ink-900">{taxWhy.text}</p> : null}
     </details>
   );
 }
@@ -146,7 +160,7 @@ export function TakeoffTable({
                 {sells ? (
                   <td className={`${cell} tabular-nums`}>
                     <span className="block text-right">
-                      <LineSell line={l} why={whys?.get(`sell:${l.itemKey}`)} />
+                      <LineSell line={l} why={whys?.get(`sell:${l.itemKey}`)} taxWhy={whys?.get(`tax:${l.itemKey}`)} />
                     </span>
                   </td>
                 ) : null}

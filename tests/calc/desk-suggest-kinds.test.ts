@@ -182,7 +182,8 @@ describe('more than one multi-zone unit, and refusals that keep their reasons', 
     ],
   };
   it('seven zones (the largest unit has five ports) go on two multi-zone units, every zone connected, nothing refused', () => {
-    const s = suggestDesign({ home: sevenRooms, models });
+    const zones = sevenRooms.rooms.map((r, i) => ({ key: `z${i + 1}`, name: r.name, roomIds: [r.id] }));
+    const s = suggestDesign({ home: sevenRooms, models, zones });
     expect(s.design.zones).toHaveLength(7);
     expect(s.design.systems).toHaveLength(2);
     for (const x of s.design.systems) expect(byKey.get(x.outdoorUnitKey)?.kind).toBe('outdoor-multi-zone');

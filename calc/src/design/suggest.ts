@@ -1,7 +1,7 @@
 import { designCatalogFromModels, equipmentTypeOf } from '../catalog/design-bridge';
 import type { CatalogModel } from '../catalog/model';
 import { explanation, type Explanation } from '../explain/explanation';
-import { formatPercent, formatQuantity } from '../explain/format';
+import { formatNumber, formatPercent, formatQuantity } from '../explain/format';
 import { coincidentLoad, homeLoadFromParsed, type HomeLoad } from '../loads/home-load';
 import { parseOrThrow } from '../parse';
 import type { CircuitInput, DesignInput } from '../schemas/design';
@@ -39,55 +39,6 @@ function loadOf(loads: HomeLoad, roomIds: readonly string[]): LoadToMeet {
   const c = coincidentLoad({ loads, roomIds });
   return { sensibleBtuh: c.sensibleBtuh, latentBtuh: c.latentBtuh, heatingBtuh: c.heatingBtuh };
 }
-
-/**
- * Rooms into zones: each room gets its own head, except a room whose coincident cooling load is
- * below `minZoneBtuh` — the smallest head's minimum output, where it would only cycle — which shares
- * the previous room's zone on its floor (the next one's when it comes first). [OWN: grouping rule —
- * common practice is a head in each main room, with small rooms (baths, halls) served by a neighbour's;
- * inverter heads turn down to about 30 % of nominal, common practice]
- */
-function groupRooms(loads: HomeLoad, home: HomeInput, minZoneBtuh: number): ZoneDraft[] {
-  const floors = new Map<number, string[]>();
-  for (const r of home.rooms) {
-    const f = r.floorLevel ?? 1;
-    const list = floors.get(f) ?? [];
-    list.push(r.id);
-    floors.set(f, list);
-  }
-  const names = new Map(home.rooms.map((r) => [r.id, r.name]));
-  const zones: ZoneDraft[] = [];
-  for (const f of [...floors.keys()].sort((a, b) => a - b)) {
-    const floorZones: string[][] = [];
-    let waiting: string[] = [];
-    for (const id of floors.get(f) ?? []) {
-      const l = loadOf(loads, [id]);
-      if (l.sensibleBtuh + l.latentBtuh >= minZoneBtuh) {
-        floorZones.push([...waiting, id]);
-        waiting = [];
-      } else {
-        const last = floorZones[floorZones.length - 1];
-        if (last) last.push(id);
-        else waiting.push(id);
-      }
-    }
-    if (waiting.length > 0) floorZones.push(waiting);
-    for (const ids of floorZones)
-      zones.push({
-        key: `z${zones.length + 1}`,
-        name: ids
-          .map((id) => names.get(id) ?? id)
-          .join(' + ')
-          .slice(0, 80),
-        roomIds: ids,
-        load: loadOf(loads, ids),
-      });
-  }
-  return zones;
-}
-
-/** Smallest output a head turns down to when the catalog gives none, as a share of nominal. [TRADE: inverter turndown ≈ 30 %] */
-export const HEAD_TURNDOWN = 0.3;
 
 interface Chosen<U> {
   model: CatalogModel;
@@ -181,24 +132,124 @@ export const CASSETTE_MIN_FT2 = 300;
 /** Btu/h per kW of electric heat. [PUB: 1 W = 3.412 142 Btu/h, the IT Btu definition] */
 const BTUH_PER_KW = 3412.142;
 
+/** A ductless head's or unit's candidate kind: a head across closed rooms must be a ducted one. */
 type HeadKind = 'ducted' | 'cassette' | 'wall';
 
 /**
- * Suggests equipment from the active catalog for a home (issue 13, "suggest"):
- * - Ducted: when calc groups the rooms, those the home's ducts serve (house.ducts, all rooms when it
- *   names none); and any zone (given or not) no ductless head can meet, go on a ducted heat pump — the smallest in range on their coincident load —
- *   with the air handler it is matched with; when the heat pump falls short of the heat loss at the
- *   design temperature, the smallest matched heat kit that covers the shortfall.
- * - Ductless: zones by the grouping rule above (or the ones given). Each zone's head: a slim ducted
- *   unit for a zone of several closed rooms (a wall head's air does not reach a closed room — common
- *   practice), a ceiling cassette for one room of at least CASSETTE_MIN_FT2, else a wall head — the
- *   smallest of that kind in range, a wall head when none of the kind is. Then multi-zone outdoor
- *   units: one for all zones when one fits (ports, port sizes, connected %, sizing on the coincident
- *   load of its rooms) — the smallest such — else two, three… units over consecutive zones; else a
- *   single-zone pair per zone, with why no multi-zone unit took them.
- * Candidates are ordered by nominal size, cost, then key, so the same inputs always give the same
- * suggestion. A circuit the estimator already entered for a zone (`circuits`) is kept as entered; new
- * ones run SUGGEST_LINE_FT.
+ * One way to serve some zones: the design's zones and systems with why, and every sizing verdict computeDesign will
+ * give them (the zone's and the system's), so candidates compare on the same verdicts the desk shows.
+ */
+interface Plan {
+  readonly zones: DesignInput['zones'];
+  readonly systems: DesignInput['systems'];
+  readonly reasons: Explanation[];
+  readonly warnings: string[];
+  readonly sizings: SizingCheck[];
+  /** Zones whose head is not of the kind that suits them (a wall head where a cassette suits a large room). */
+  unsuited: number;
+  /** Equipment cost of the plan, cents (the last tie-breaker between plans equally close to their ranges). */
+  costCents: number;
+}
+
+const emptyPlan = (): Plan => ({
+  zones: [],
+  systems: [],
+  reasons: [],
+  warnings: [],
+  sizings: [],
+  unsuited: 0,
+  costCents: 0,
+});
+
+function joinPlans(plans: readonly Plan[]): Plan {
+  const out = emptyPlan();
+  for (const p of plans) {
+    out.zones.push(...p.zones);
+    out.systems.push(...p.systems);
+    out.reasons.push(...p.reasons);
+    out.warnings.push(...p.warnings);
+    out.sizings.push(...p.sizings);
+    out.unsuited += p.unsuited;
+    out.costCents += p.costCents;
+  }
+  return out;
+}
+
+/**
+ * How a plan compares (lower is better, in this order): units outside their range, percentage points outside, heads not
+ * of the kind that suits their zone, equipment cost.
+ */
+export interface PlanScore {
+  readonly outOfRange: number;
+  readonly missPoints: number;
+  readonly unsuited: number;
+  readonly costCents: number;
+}
+
+function scoreOf(p: Plan): PlanScore {
+  return {
+    outOfRange: p.sizings.filter((x) => !x.withinRange).length,
+    missPoints: Math.round(p.sizings.reduce((s, x) => s + sizingMiss(x), 0) * 10) / 10,
+    unsuited: p.unsuited,
+    costCents: p.costCents,
+  };
+}
+
+/** Negative when a is the better plan. */
+function compareScores(a: PlanScore, b: PlanScore): number {
+  return (
+    a.outOfRange - b.outOfRange || a.missPoints - b.missPoints || a.unsuited - b.unsuited || a.costCents - b.costCents
+  );
+}
+
+/** The better of two plans (the first on a tie). */
+function better(a: Plan | null, b: Plan | null): Plan | null {
+  if (a === null || b === null) return a ?? b;
+  return compareScores(scoreOf(b), scoreOf(a)) < 0 ? b : a;
+}
+
+/**
+ * Zones into groups for `units` multi-zone outdoor units, by capacity: the largest zone first, each to the group with
+ * the least load so far that still has a port free (at most `ports` zones in a group) — the groups' loads come out
+ * about even, so each outdoor unit can be sized near its share. [OWN: longest-processing-time-first, a standard
+ * balancing heuristic; common practice: spread heads so each outdoor unit carries a similar load]
+ */
+export function groupByCapacity<Z>(zones: readonly Z[], loadOf: (z: Z) => number, units: number, ports: number): Z[][] {
+  const groups: { zones: Z[]; load: number }[] = Array.from({ length: units }, () => ({ zones: [], load: 0 }));
+  const order = zones.map((z, i) => ({ z, i, load: loadOf(z) })).sort((a, b) => b.load - a.load || a.i - b.i);
+  for (const { z, load } of order) {
+    let best: { zones: Z[]; load: number } | null = null;
+    for (const g of groups) if (g.zones.length < ports && (best === null || g.load < best.load)) best = g;
+    if (best === null) return [];
+    best.zones.push(z);
+    best.load += load;
+  }
+  // Each group keeps its zones in the home's order (the design lists them as the walk-through does).
+  return groups.map((g) => g.zones.sort((a, b) => zones.indexOf(a) - zones.indexOf(b)));
+}
+
+/**
+ * Suggests equipment from the active catalog for a home (issue 13, "suggest"). Every plan it considers keeps the rule
+ * that a ductless head (wall, cassette, console) serves the room it is in, or rooms the estimator marked as one open
+ * space; several closed rooms share a ducted unit (slim ducted head or air handler), whose ducts reach each room
+ * [OWN: common practice — a head's air does not reach a closed room; the A2L room-size check takes the head's room].
+ * - No zones given: the candidates are (a) a ducted heat pump with its matched air handler on the rooms the home's ducts
+ *   serve (house.ducts), the other rooms ductless, when the home has ducts; (b) every room ductless: one head per room,
+ *   except rooms too small for any head in range (the smallest head would be oversized), which share a slim ducted
+ *   head with other small rooms of their floor. Each candidate's heads go on multi-zone outdoor units (one, else two,
+ *   three…, grouped by capacity and, as a second try, in the home's order — each within its ports, port sizes and
+ *   connected range) or single-zone pairs, whichever is closer to the sizing ranges. The plan chosen has the fewest
+ *   units outside their range, then the fewest percentage points outside, then the fewest heads not of the kind that suits their zone,
+ *   then the lowest equipment cost; the reasons
+ *   list every candidate's verdict.
+ * - Zones given: kept as given. A zone no head can meet, or several closed rooms the home's ducts serve, goes on a
+ *   ducted heat pump when that comes closer to the range than a head of the kind the zone suits; a zone of several
+ *   closed rooms gets a slim ducted head (never a wall head), or when the catalog has none, is split into its rooms.
+ * Each unit is the smallest of its kind in range, else the closest to it, with a warning saying so. A ducted heat pump
+ * that falls short of the heat loss at the design temperature gets the smallest matched heat kit covering the
+ * shortfall. Candidates are ordered by nominal size, cost, then key, so the same inputs always give the same
+ * suggestion. A circuit the estimator already entered for a zone (`circuits`) is kept as entered; new ones run
+ * SUGGEST_LINE_FT.
  */
 export function suggestDesign({
   home: homeIn,
@@ -224,6 +275,7 @@ export function suggestDesign({
   const indoorByKey = new Map(engine.indoorUnits.map((u) => [u.key, u]));
   const outdoorByKey = new Map(engine.outdoorUnits.map((u) => [u.key, u]));
   const roomsById = new Map(home.rooms.map((r) => [r.id, r]));
+  const roomOrder = new Map(home.rooms.map((r, i) => [r.id, i]));
   const pairOf = (m: CatalogModel) =>
     m.matchedKeys.map((k) => active.find((o) => o.key === k)).find((o) => o?.kind === 'outdoor-single-zone');
   const kindOf = (m: CatalogModel): HeadKind | null =>
@@ -240,16 +292,21 @@ export function suggestDesign({
       const unit = indoorByKey.get(m.key);
       return unit ? [{ model: m, unit }] : [];
     });
-  const walls = heads.filter((m) => kindOf(m) === 'wall');
   const multiHeads = heads.filter((m) => pairOf(m) === undefined);
-  const smallest = headsOf(walls.filter((m) => pairOf(m) === undefined))[0] ?? headsOf(walls)[0];
-  const minZone = smallest ? (smallest.model.minCoolingBtuh ?? smallest.unit.nominalBtuh * HEAD_TURNDOWN) : 0;
-  const reasons: Explanation[] = [];
-  const warnings: string[] = [];
+  const multiOutdoors = active.flatMap((m) => {
+    const unit = m.kind === 'outdoor-multi-zone' ? outdoorByKey.get(m.key) : undefined;
+    return unit ? [{ model: m, unit }] : [];
+  });
+  const maxPorts = Math.max(0, ...multiOutdoors.map((o) => o.unit.maxHeads));
+  const costOf = (...keys: (string | undefined)[]) =>
+    keys.reduce((s, k) => s + (active.find((m) => m.key === k)?.costCents ?? 0), 0);
   const electrical = { circuitLengthFt: 30 };
+  let tokens = 0;
+  /** A placeholder key for a plan's system (and its reasons) until the chosen plan numbers its systems s1, s2… */
+  const token = () => `#system-${(tokens += 1)}#`;
   const enteredByZone = new Map(entered.map((c) => [c.zoneKey, c]));
   const circuit = (zoneKey: string): CircuitInput => enteredByZone.get(zoneKey) ?? { zoneKey, lengthFt: lineLengthFt };
-  const zoneInput = (z: ZoneDraft & { given?: GivenZone }, indoorUnitKey: string): DesignInput['zones'][number] => ({
+  const zoneInput = (z: Draft, indoorUnitKey: string): DesignInput['zones'][number] => ({
     key: z.key,
     name: z.name,
     roomIds: z.roomIds,
@@ -258,67 +315,66 @@ export function suggestDesign({
     ...(z.given?.openSpace !== undefined ? { openSpace: z.given.openSpace } : {}),
     ...(z.given?.lowestDuctOpeningFt !== undefined ? { lowestDuctOpeningFt: z.given.lowestDuctOpeningFt } : {}),
   });
-  const dz: DesignInput['zones'] = [];
-  const ds: DesignInput['systems'] = [];
-  const systemKey = () => `s${ds.length + 1}`;
-  /** The suggestion, saying which ducted zones still need their lowest duct opening for the A2L check. */
-  const finish = (): Suggestion => {
-    for (const z of dz) {
-      const t = active.find((m) => m.key === z.indoorUnitKey)?.indoorType;
-      if ((t === 'slim-ducted' || t === 'air-handler') && z.lowestDuctOpeningFt === undefined)
-        warnings.push(
-          `Enter the height of the lowest duct opening for ${z.name}: until then the A2L room-size check takes 0.6 m, the least the standard allows.`,
-        );
-    }
-    return { design: { zones: dz, systems: ds }, reasons, warnings };
-  };
-
-  // The rooms a ducted system serves: the home's ducts (house.ducts), else none.
-  const ductRooms = home.ducts ? (home.ducts.roomIds ?? home.rooms.map((r) => r.id)) : [];
-  let zones: Array<ZoneDraft & { given?: GivenZone }> = givenZones
-    ? givenZones.map((z) => ({
-        key: z.key,
-        name: z.name,
-        roomIds: [...z.roomIds],
-        load: loadOf(loads, z.roomIds),
-        given: z,
-      }))
-    : groupRooms(loads, { ...home, rooms: home.rooms.filter((r) => !ductRooms.includes(r.id)) }, minZone);
-  if (!givenZones && ductRooms.length > 0)
-    zones = [
-      {
-        key: 'zd',
-        name: 'Ducted rooms',
-        roomIds: ductRooms.filter((id) => roomsById.has(id)),
-        load: loadOf(loads, ductRooms),
-      },
-      ...zones,
-    ];
-
-  // Ducted heat pumps with their air handlers (and heat kits) for the ducted rooms and zones too big for any head.
-  const largestHead = Math.max(0, ...headsOf(heads).map((h) => h.unit.nominalBtuh));
-  const ductedOutdoors = active.filter((m) => m.kind === 'outdoor-ducted');
-  const airHandlers = active.filter((m) => m.kind === 'indoor' && m.indoorType === 'air-handler');
-  const ductedCandidates = ductedOutdoors.flatMap((o) => {
-    const unit = outdoorByKey.get(o.key);
-    const handler = airHandlers.find((a) => o.matchedKeys.includes(a.key) || a.matchedKeys.includes(o.key));
-    return unit && handler ? [{ model: o, unit, handler }] : [];
+  type Draft = ZoneDraft & { given?: GivenZone };
+  const draft = (key: string, roomIds: string[], given?: GivenZone, name?: string): Draft => ({
+    key,
+    name:
+      given?.name ??
+      name ??
+      roomIds
+        .map((id) => roomsById.get(id)?.name ?? id)
+        .join(' + ')
+        .slice(0, 80),
+    roomIds,
+    load: loadOf(loads, roomIds),
+    ...(given ? { given } : {}),
   });
-  /** The ducted heat pump for a zone (the smallest in range, else the closest) with its air handler. */
-  const ductedChoice = (z: ZoneDraft) => {
-    const p = choose(ductedCandidates, z.load, designF, policy);
-    const handler = p ? ductedCandidates.find((c) => c.model.key === p.model.key)?.handler : undefined;
-    const handlerUnit = handler ? indoorByKey.get(handler.key) : undefined;
-    if (!p || !handler || !handlerUnit) return null;
-    // The zone is sized on the matched pair (computeDesign's zoneRating): the heat pump with this air handler.
-    return { p, handler, miss: sizingMiss(p.sizing) };
+  const coolingOf = (z: ZoneDraft) => z.load.sensibleBtuh + z.load.latentBtuh;
+  /** Several rooms not marked as one open space: only a ducted unit serves them all. */
+  const closedRooms = (z: Draft) => z.roomIds.length > 1 && z.given?.openSpace !== true;
+  const areaOf = (z: ZoneDraft) => z.roomIds.reduce((sum, id) => sum + floorAreaFt2(roomsById.get(id) ?? {}), 0);
+  const suits = (z: Draft): HeadKind =>
+    closedRooms(z) ? 'ducted' : areaOf(z) >= CASSETTE_MIN_FT2 ? 'cassette' : 'wall';
+  const size = <U extends IndoorUnit | OutdoorUnit>(c: readonly { model: CatalogModel; unit: U }[], load: LoadToMeet) =>
+    choose(c, load, designF, policy);
+  /**
+   * The head for a zone among `options(kind)`: of the kind that suits it, the smallest in range. A zone of closed
+   * rooms takes a ducted head or none; a one-room zone takes a wall head when the suited kind has none in range and a
+   * wall head comes closer.
+   */
+  const pick = <U extends IndoorUnit | OutdoorUnit>(
+    z: Draft,
+    options: (kind: HeadKind) => readonly { model: CatalogModel; unit: U }[],
+  ): Chosen<U> | null => {
+    const kind = suits(z);
+    const first = size(options(kind), z.load);
+    if (kind === 'ducted' || first?.sizing.withinRange) return first;
+    if (kind === 'wall') return first;
+    const wall = size(options('wall'), z.load);
+    return wall?.sizing.withinRange ? wall : closer(first, wall);
   };
-  const ducted = (
-    z: ZoneDraft & { given?: GivenZone },
-    { p, handler }: NonNullable<ReturnType<typeof ductedChoice>>,
-  ) => {
-    if (!p.sizing.withinRange) warnings.push(outOfRange('ducted heat pump', z.name, p));
-    const key = systemKey();
+
+  // ---- Ducted heat pumps with their matched air handlers (and heat kits).
+  const ductRooms = home.ducts
+    ? (home.ducts.roomIds ?? home.rooms.map((r) => r.id)).filter((id) => roomsById.has(id))
+    : [];
+  const largestHead = Math.max(0, ...headsOf(heads).map((h) => h.unit.nominalBtuh));
+  const airHandlers = active.filter((m) => m.kind === 'indoor' && m.indoorType === 'air-handler');
+  const ductedCandidates = active
+    .filter((m) => m.kind === 'outdoor-ducted')
+    .flatMap((o) => {
+      const unit = outdoorByKey.get(o.key);
+      const handler = airHandlers.find((a) => o.matchedKeys.includes(a.key) || a.matchedKeys.includes(o.key));
+      return unit && handler && indoorByKey.has(handler.key) ? [{ model: o, unit, handler }] : [];
+    });
+  /** A ducted heat pump with its air handler for a zone: sized as the matched pair (computeDesign's zoneRating). */
+  const ductedPlan = (z: Draft): Plan | null => {
+    const p = size(ductedCandidates, z.load);
+    const handler = p ? ductedCandidates.find((c) => c.model.key === p.model.key)?.handler : undefined;
+    if (!p || !handler) return null;
+    const plan = emptyPlan();
+    const key = token();
+    if (!p.sizing.withinRange) plan.warnings.push(outOfRange('ducted heat pump', z.name, p));
     let heatKitKey: string | undefined;
     const capacity = p.sizing.heatingCapacityBtuh;
     const shortfall = capacity === null ? 0 : z.load.heatingBtuh - capacity;
@@ -329,7 +385,7 @@ export function suggestDesign({
       const kit = kits.find((k) => (k.heatKitKw ?? 0) * BTUH_PER_KW >= shortfall) ?? kits[kits.length - 1];
       if (kit) {
         heatKitKey = kit.key;
-        reasons.push(
+        plan.reasons.push(
           explanation({
             key: `suggest:${key}:heat-kit`,
             label: `Backup heat for ${z.name}`,
@@ -342,13 +398,20 @@ export function suggestDesign({
           }),
         );
       } else
-        warnings.push(
+        plan.warnings.push(
           `${p.model.name} falls ${btuh(shortfall)} short of the heat loss of ${z.name} at ${designF.heating} °F, and no heat kit in the catalog fits ${handler.name}.`,
         );
     }
-    reasons.push(reason(`suggest:${z.key}`, z.name, p, `${smallestOr(p, 'ducted heat pump')}, with ${handler.name}`));
-    dz.push(zoneInput(z, handler.key));
-    ds.push({
+    plan.reasons.push(
+      reason(
+        `suggest:${z.key}`,
+        z.name,
+        p,
+        `${smallestOr(p, 'ducted heat pump')}, with ${handler.name} (the matched pair's rating)`,
+      ),
+    );
+    plan.zones.push(zoneInput(z, handler.key));
+    plan.systems.push({
       key,
       name: `${z.name} ducted system`.slice(0, 80),
       outdoorUnitKey: p.model.key,
@@ -356,68 +419,25 @@ export function suggestDesign({
       electrical,
       ...(heatKitKey ? { heatKitKey } : {}),
     });
+    // The zone and the system are the same pair: computeDesign gives both this verdict.
+    plan.sizings.push(p.sizing, p.sizing);
+    plan.costCents = costOf(p.model.key, handler.key, heatKitKey);
+    return plan;
   };
-  zones = zones.filter((z) => {
-    // Zones the estimator gave keep their grouping: only one too big for any head goes ducted when a ducted heat
-    // pump is in range…
-    const wantsDucts =
-      (!givenZones && z.roomIds.every((id) => ductRooms.includes(id))) ||
-      z.load.sensibleBtuh + z.load.latentBtuh > largestHead * 1.3;
-    // …or several closed rooms the home's ducts serve, when no head is in range for them.
-    const ductable =
-      z.roomIds.length > 1 && z.given?.openSpace !== true && z.roomIds.every((id) => ductRooms.includes(id));
-    if (!wantsDucts && !ductable) return true;
-    const d = ductedChoice(z);
-    if (!d) return true;
-    if (wantsDucts && d.p.sizing.withinRange) {
-      ducted(z, d);
-      return false;
-    }
-    // No ducted system in range: it still serves the zone when no head comes closer to the range (the air handler's
-    // sizing and the heat pump's, the farther of the two).
-    const head = choose(headsOf(heads), z.load, designF, policy);
-    if (head && sizingMiss(head.sizing) < d.miss) return true;
-    if (head?.sizing.withinRange) return true;
-    ducted(z, d);
-    return false;
-  });
 
-  // Ductless: the kind of head that suits each zone, the smallest of it in range.
-  const areaOf = (z: ZoneDraft) => z.roomIds.reduce((sum, id) => sum + floorAreaFt2(roomsById.get(id) ?? {}), 0);
-  const suits = (z: ZoneDraft & { given?: GivenZone }): HeadKind =>
-    z.roomIds.length > 1 && z.given?.openSpace !== true
-      ? 'ducted'
-      : areaOf(z) >= CASSETTE_MIN_FT2
-        ? 'cassette'
-        : 'wall';
-  const pick = <U extends IndoorUnit | OutdoorUnit>(
-    z: ZoneDraft & { given?: GivenZone },
-    options: (kind: HeadKind) => readonly { model: CatalogModel; unit: U }[],
-  ): Chosen<U> | null => {
-    const kind = suits(z);
-    const first = choose(options(kind), z.load, designF, policy);
-    if (first?.sizing.withinRange || kind === 'wall') return first ?? choose(options('wall'), z.load, designF, policy);
-    const wall = choose(options('wall'), z.load, designF, policy);
-    // Neither in range: the one closer to it (the kind that suits the zone on a tie), never a far-off size of the
-    // suited kind when a wall head comes closer.
-    return wall?.sizing.withinRange ? wall : closer(first, wall);
-  };
+  // ---- Ductless: heads on multi-zone units or single-zone pairs.
   const refusals: string[] = [];
-  /** The smallest multi-zone unit for these zones' heads, or null (its refusals kept). */
-  const multiFor = (group: typeof zones, chosen: Array<Chosen<IndoorUnit> | null>) => {
-    if (chosen.some((h) => h === null)) return null;
+  /** The smallest multi-zone unit in range for these zones' heads, else the closest; null when none takes them. */
+  const multiFor = (group: readonly Draft[], chosen: readonly Chosen<IndoorUnit>[]) => {
     const all = loadOf(
       loads,
       group.flatMap((z) => z.roomIds),
     );
-    // The smallest in range, else the closest to it (as choose).
     let best: { model: CatalogModel; unit: OutdoorUnit; sizing: SizingCheck; connected: number } | null = null;
-    for (const m of active.filter((x) => x.kind === 'outdoor-multi-zone')) {
-      const unit = outdoorByKey.get(m.key);
-      if (!unit) continue;
-      const combo = checkCombination({ outdoor: unit, indoor: chosen.flatMap((h) => (h ? [h.unit] : [])) });
+    for (const { model, unit } of multiOutdoors) {
+      const combo = checkCombination({ outdoor: unit, indoor: chosen.map((h) => h.unit) });
       if (!combo.ok) {
-        refusals.push(`${m.name}: ${combo.refusals.join(' ')}`);
+        refusals.push(`${model.name}: ${combo.refusals.join(' ')}`);
         continue;
       }
       const sizing = checkSizing({
@@ -428,104 +448,284 @@ export function suggestDesign({
         heatingDesignF: designF.heating,
         policy,
       });
-      const p = { model: m, unit, sizing, connected: combo.connectedPercent };
+      const p = { model, unit, sizing, connected: combo.connectedPercent };
       if (sizing.withinRange) return p;
       if (best === null || sizingMiss(sizing) <= sizingMiss(best.sizing)) best = p;
     }
     return best;
   };
-  if (zones.length > 1) {
-    const chosen = zones.map((z) => pick(z, (k) => headsOf(multiHeads.filter((m) => kindOf(m) === k))));
-    // One unit for all, else two, three… over consecutive zones (each unit takes two zones or more): the fewest
-    // units all in range, else the fewest that take the heads (each the closest to its range).
-    type Out = NonNullable<ReturnType<typeof multiFor>>;
-    let plan: { units: number; groups: (typeof zones)[]; outs: Out[] } | null = null;
+  /** Heads of these zones on multi-zone units: the fewest units all in range, else the plan closest to the ranges. */
+  const multiPlan = (zones: readonly Draft[]): Plan | null => {
+    if (zones.length < 2 || maxPorts < 2) return null;
+    const chosenAll = zones.map((z) => pick(z, (k) => headsOf(multiHeads.filter((m) => kindOf(m) === k))));
+    const chosenOf = new Map<Draft, Chosen<IndoorUnit>>();
+    zones.forEach((z, i) => {
+      const h = chosenAll[i];
+      if (h) chosenOf.set(z, h);
+    });
+    if (chosenOf.size < zones.length) return null;
+    let found: Plan | null = null;
     for (let units = 1; units <= Math.floor(zones.length / 2); units += 1) {
-      const size = Math.ceil(zones.length / units);
-      const groups = Array.from({ length: units }, (_, g) => zones.slice(g * size, (g + 1) * size));
-      if (groups.some((g) => g.length < 2)) continue;
-      const outs = groups.map((g) =>
-        multiFor(
-          g,
-          g.map((z) => chosen[zones.indexOf(z)] ?? null),
-        ),
-      );
-      if (outs.some((o) => o === null)) continue;
-      const found = { units, groups, outs: outs.flatMap((o) => (o ? [o] : [])) };
-      if (found.outs.every((o) => o.sizing.withinRange)) {
-        plan = found;
-        break;
-      }
-      plan ??= found;
-    }
-    if (plan) {
-      const { units, groups, outs } = plan;
-      groups.forEach((g, gi) => {
-        const o = outs[gi];
-        if (!o) return;
-        const key = systemKey();
-        const who = units === 1 ? 'the whole home' : g.map((z) => z.name).join(', ');
-        for (const z of g) {
-          const h = chosen[zones.indexOf(z)];
-          if (!h) continue;
-          reasons.push(
-            reason(`suggest:${z.key}`, z.name, h, `${smallestOr(h, kindOf(h.model) ?? 'head')} for this zone`),
+      const per = Math.ceil(zones.length / units);
+      const ways = [
+        groupByCapacity(zones, coolingOf, units, maxPorts),
+        Array.from({ length: units }, (_, g) => zones.slice(g * per, (g + 1) * per)),
+      ];
+      for (const groups of ways) {
+        // One group of every zone is tried even past the ports, so the refusal says why no single unit takes them.
+        if (groups.length !== units || (units > 1 && groups.some((g) => g.length < 2 || g.length > maxPorts))) continue;
+        const parts: Plan[] = [];
+        for (const [gi, g] of groups.entries()) {
+          const hs = g.flatMap((z) => {
+            const h = chosenOf.get(z);
+            return h ? [h] : [];
+          });
+          const o = multiFor(g, hs);
+          if (!o) break;
+          const plan = emptyPlan();
+          const key = token();
+          const who = units === 1 ? 'the whole home' : g.map((z) => z.name).join(', ');
+          g.forEach((z, i) => {
+            const h = hs[i];
+            if (!h) return;
+            plan.reasons.push(
+              reason(`suggest:${z.key}`, z.name, h, `${smallestOr(h, kindOf(h.model) ?? 'head')} for this zone`),
+            );
+            if (!h.sizing.withinRange) plan.warnings.push(outOfRange('head', z.name, h));
+            plan.zones.push(zoneInput(z, h.model.key));
+            plan.sizings.push(h.sizing);
+            if (kindOf(h.model) !== suits(z)) plan.unsuited += 1;
+          });
+          plan.reasons.push(
+            reason(
+              `suggest:outdoor:${key}`,
+              who,
+              o,
+              `the smallest multi-zone unit whose ports take these heads (${o.connected} % connected) and that meets their rooms' coincident load${units > 1 ? `; one unit of ${units}, the heads spread so each unit carries a similar load` : ''}`,
+            ),
           );
-          if (!h.sizing.withinRange) warnings.push(outOfRange('head', z.name, h));
-          dz.push(zoneInput(z, h.model.key));
+          if (!o.sizing.withinRange) plan.warnings.push(outOfRange('multi-zone unit that takes these heads', who, o));
+          plan.systems.push({
+            key,
+            name: (units === 1 ? 'Multi-zone system' : `Multi-zone system ${gi + 1}`).slice(0, 80),
+            outdoorUnitKey: o.model.key,
+            circuits: g.map((z) => circuit(z.key)),
+            electrical,
+          });
+          plan.sizings.push(o.sizing);
+          plan.costCents = costOf(o.model.key, ...hs.map((h) => h.model.key));
+          parts.push(plan);
         }
-        reasons.push(
-          reason(
-            `suggest:outdoor:${key}`,
-            who,
-            o,
-            `the smallest multi-zone unit whose ports take these heads (${o.connected} % connected) and that meets their rooms' coincident load${units > 1 ? `; one unit of ${units}, as no single unit takes every head` : ''}`,
-          ),
-        );
-        if (!o.sizing.withinRange) warnings.push(outOfRange('multi-zone unit that takes these heads', who, o));
-        ds.push({
-          key,
-          name: (units === 1 ? 'Multi-zone system' : `Multi-zone system ${gi + 1}`).slice(0, 80),
-          outdoorUnitKey: o.model.key,
-          circuits: g.map((z) => circuit(z.key)),
-          electrical,
-        });
-      });
-      return finish();
+        if (parts.length === units) found = better(found, joinPlans(parts));
+      }
+      if (found && scoreOf(found).outOfRange === 0) break;
     }
-    if (refusals.length > 0)
-      warnings.push(
+    return found;
+  };
+  /** Each zone on its own single-zone pair (the head and the outdoor unit it is rated with); null when one has none. */
+  const pairsPlan = (zones: readonly Draft[]): Plan | null => {
+    const parts: Plan[] = [];
+    for (const z of zones) {
+      const candidatesOf = (kind: HeadKind) =>
+        headsOf(heads.filter((m) => pairOf(m) !== undefined && kindOf(m) === kind)).flatMap((h) => {
+          const o = pairOf(h.model);
+          const unit = o ? outdoorByKey.get(o.key) : undefined;
+          return o && unit ? [{ model: o, unit, head: h.model }] : [];
+        });
+      const p = pick(z, candidatesOf);
+      const chosenHead = p ? pairHead(p, candidatesOf, suits(z)) : undefined;
+      if (!p || !chosenHead) return null;
+      const plan = emptyPlan();
+      if (!p.sizing.withinRange) plan.warnings.push(outOfRange('single-zone pair', z.name, p));
+      plan.reasons.push(
+        reason(`suggest:${z.key}`, z.name, p, `${smallestOr(p, 'single-zone pair')}, with ${chosenHead.name}`),
+      );
+      plan.zones.push(zoneInput(z, chosenHead.key));
+      plan.systems.push({
+        key: token(),
+        name: `${z.name} system`.slice(0, 80),
+        outdoorUnitKey: p.model.key,
+        circuits: [circuit(z.key)],
+        electrical,
+      });
+      plan.sizings.push(p.sizing, p.sizing);
+      if (kindOf(chosenHead) !== suits(z)) plan.unsuited += 1;
+      plan.costCents = costOf(p.model.key, chosenHead.key);
+      parts.push(plan);
+    }
+    return joinPlans(parts);
+  };
+  const ductlessPlan = (zones: readonly Draft[]): Plan | null => {
+    if (zones.length === 0) return emptyPlan();
+    refusals.length = 0;
+    const multi = multiPlan(zones);
+    const pairs = pairsPlan(zones);
+    const plan = better(multi, pairs);
+    if (plan && plan === pairs && multi === null && refusals.length > 0)
+      plan.warnings.push(
         `No multi-zone unit takes these heads: ${[...new Set(refusals)].join('; ')} So each zone gets its own pair.`,
       );
-  }
-  // Single-zone pairs: the head and the outdoor unit it is rated with, the smallest pair in range.
-  zones.forEach((z) => {
-    const candidatesOf = (kind: HeadKind) =>
-      headsOf(heads.filter((m) => pairOf(m) !== undefined && kindOf(m) === kind)).flatMap((h) => {
-        const o = pairOf(h.model);
-        const unit = o ? outdoorByKey.get(o.key) : undefined;
-        return o && unit ? [{ model: o, unit, head: h.model }] : [];
-      });
-    const p = pick(z, candidatesOf);
-    const chosenHead = p ? pairHead(p, candidatesOf, suits(z)) : undefined;
-    if (!p || !chosenHead) {
-      warnings.push(`No single-zone pair in the active catalog for ${z.name}.`);
-      return;
+    return plan;
+  };
+  /** Zones that go ducted (too big for any head, or closed rooms on the home's ducts when that comes closer) and the rest ductless. */
+  const servePlan = (zones: readonly Draft[]): Plan | null => {
+    const parts: Plan[] = [];
+    const rest: Draft[] = [];
+    for (const z of zones) {
+      const tooBig = coolingOf(z) > largestHead * 1.3;
+      const ductable = closedRooms(z) && z.roomIds.every((id) => ductRooms.includes(id));
+      const d = tooBig || ductable ? ductedPlan(z) : null;
+      if (d) {
+        // A head of the kind the zone suits, on its own, against the ducted pair: the closer to its range serves it.
+        const kind = suits(z);
+        const head = size(headsOf(heads.filter((m) => kindOf(m) === kind)), z.load);
+        if (tooBig || !head || sizingMiss(head.sizing) >= sizingMiss(d.sizings[0] ?? head.sizing)) {
+          parts.push(d);
+          continue;
+        }
+      }
+      rest.push(z);
     }
-    if (!p.sizing.withinRange) warnings.push(outOfRange('single-zone pair', z.name, p));
-    reasons.push(
-      reason(`suggest:${z.key}`, z.name, p, `${smallestOr(p, 'single-zone pair')}, with ${chosenHead.name}`),
+    const ductless = ductlessPlan(rest);
+    return ductless ? joinPlans([...parts, ductless]) : null;
+  };
+
+  /**
+   * Rooms into ductless zones: one per room, except rooms too small for any head in range (the smallest head that
+   * suits them is oversized), which share a slim ducted head with other small rooms of their floor — largest first,
+   * a group closing once a ducted head is in range for it, a leftover joining the last group when that stays in range.
+   */
+  const roomZones = (roomIds: readonly string[], prefix: string): Draft[] => {
+    const ducted = headsOf(heads.filter((m) => kindOf(m) === 'ducted'));
+    const inRange = (ids: readonly string[]) => size(ducted, loadOf(loads, ids))?.sizing.withinRange === true;
+    const floors = new Map<number, string[]>();
+    for (const id of roomIds) {
+      const f = roomsById.get(id)?.floorLevel ?? 1;
+      floors.set(f, [...(floors.get(f) ?? []), id]);
+    }
+    const groups: string[][] = [];
+    for (const f of [...floors.keys()].sort((a, b) => a - b)) {
+      const small: string[] = [];
+      for (const id of floors.get(f) ?? []) {
+        const z = draft('x', [id]);
+        const h = pick(z, (k) => headsOf(heads.filter((m) => kindOf(m) === k)));
+        const over =
+          h !== null && !h.sizing.withinRange && (h.sizing.coolingRatio ?? 0) * 100 > h.sizing.allowedPercent.max;
+        if (over && ducted.length > 0) small.push(id);
+        else groups.push([id]);
+      }
+      small.sort((a, b) => coolingOf(draft('x', [b])) - coolingOf(draft('x', [a])));
+      const closed: string[][] = [];
+      let open: string[] = [];
+      for (const id of small) {
+        open.push(id);
+        if (inRange(open)) {
+          closed.push(open);
+          open = [];
+        }
+      }
+      const last = closed[closed.length - 1];
+      if (open.length > 0 && last && inRange([...last, ...open])) last.push(...open);
+      else if (open.length > 0) closed.push(open);
+      groups.push(...closed);
+    }
+    groups.sort((a, b) => (roomOrder.get(a[0] ?? '') ?? 0) - (roomOrder.get(b[0] ?? '') ?? 0));
+    return groups.map((ids, i) =>
+      draft(
+        `${prefix}${i + 1}`,
+        ids.sort((a, b) => (roomOrder.get(a) ?? 0) - (roomOrder.get(b) ?? 0)),
+      ),
     );
-    dz.push(zoneInput(z, chosenHead.key));
-    ds.push({
-      key: systemKey(),
-      name: `${z.name} system`.slice(0, 80),
-      outdoorUnitKey: p.model.key,
-      circuits: [circuit(z.key)],
-      electrical,
-    });
+  };
+
+  const candidates: { label: string; plan: Plan }[] = [];
+  if (givenZones) {
+    // A zone of closed rooms with no ducted unit in the catalog to serve it is split into its rooms.
+    const anyDucted = heads.some((m) => kindOf(m) === 'ducted') || ductedCandidates.length > 0;
+    const zones: Draft[] = [];
+    const notes: string[] = [];
+    for (const g of givenZones) {
+      const z = draft(g.key, [...g.roomIds], g);
+      if (closedRooms(z) && !anyDucted) {
+        notes.push(
+          `${g.name}: its rooms are not marked as one open space and the active catalog has no ducted unit, so each room gets its own head (a ductless head's air does not reach a closed room).`,
+        );
+        z.roomIds.forEach((id, i) => zones.push(draft(`${g.key}-${i + 1}`, [id])));
+      } else zones.push(z);
+    }
+    const plan = servePlan(zones);
+    if (plan) {
+      plan.warnings.push(...notes);
+      candidates.push({ label: 'The zones as given', plan });
+    }
+  } else {
+    const all = home.rooms.map((r) => r.id);
+    if (ductRooms.length > 0) {
+      const d = ductedPlan(draft('zd', ductRooms, undefined, 'Ducted rooms'));
+      const rest = servePlan(
+        roomZones(
+          all.filter((id) => !ductRooms.includes(id)),
+          'z',
+        ),
+      );
+      if (d && rest)
+        candidates.push({
+          label:
+            ductRooms.length === all.length
+              ? "A ducted heat pump on the home's ducts"
+              : "A ducted heat pump on the home's ducts, ductless heads for the other rooms",
+          plan: joinPlans([d, rest]),
+        });
+    }
+    const ductless = servePlan(roomZones(all, 'z'));
+    if (ductless)
+      candidates.push({ label: 'Ductless, a head for each room (small rooms sharing a ducted head)', plan: ductless });
+  }
+  let chosen: { label: string; plan: Plan } | null = null;
+  for (const c of candidates)
+    if (chosen === null || compareScores(scoreOf(c.plan), scoreOf(chosen.plan)) < 0) chosen = c;
+  if (!chosen)
+    return {
+      design: { zones: [], systems: [] },
+      reasons: [],
+      warnings: ['No unit of the active catalog serves these rooms: add indoor and outdoor models to the catalog.'],
+    };
+  const plan = chosen.plan;
+  // System keys s1, s2… in order (each plan marked its systems, and their reasons, with a placeholder token).
+  const keyOf = new Map(plan.systems.map((s, i) => [s.key, `s${i + 1}`]));
+  const systems = plan.systems.map((s) => ({ ...s, key: keyOf.get(s.key) ?? s.key }));
+  const reasons = plan.reasons.map((r) => {
+    const t = [...keyOf.keys()].find((k) => r.key.includes(k));
+    return t === undefined ? r : { ...r, key: r.key.replace(t, keyOf.get(t) ?? t) };
   });
-  return finish();
+  if (candidates.length > 1) {
+    const words = (c: { label: string; plan: Plan }) => {
+      const sc = scoreOf(c.plan);
+      const units = c.plan.sizings.length;
+      return `${c.label}: ${sc.outOfRange === 0 ? `all ${units} sizing checks in range` : `${sc.outOfRange} of ${units} sizing checks outside their range (${formatNumber(sc.missPoints, 1, { trim: true })} points in all)`}`;
+    };
+    reasons.unshift(
+      explanation({
+        key: 'suggest:compared',
+        label: 'Plans compared',
+        value: candidates.length,
+        unit: '',
+        valueText: chosen.label,
+        text: `${candidates.map(words).join('; ')}. Chosen: ${chosen.label} — the fewest units outside their range, then the fewest points outside, then the kind of head that suits each zone, then the lower equipment cost.`,
+        status: scoreOf(plan).outOfRange === 0 ? 'ok' : 'warning',
+        source: 'Active catalog, company sizing policy',
+      }),
+    );
+  }
+  const warnings = [...plan.warnings];
+  for (const z of plan.zones) {
+    const t = active.find((m) => m.key === z.indoorUnitKey)?.indoorType;
+    if ((t === 'slim-ducted' || t === 'air-handler') && z.lowestDuctOpeningFt === undefined)
+      warnings.push(
+        `Enter the height of the lowest duct opening for ${z.name}: until then the A2L room-size check takes 0.6 m, the least the standard allows.`,
+      );
+  }
+  return { design: { zones: plan.zones, systems }, reasons, warnings };
 }
 
 /** The head of the chosen pair: of the kind that suits the zone when the pair has one, else a wall head. */

@@ -43,8 +43,30 @@ describe('drill-down at each room’s peak hour: walls and windows by façade', 
     );
   });
 
-  it('apportionShare gives each part exactly what apportion gives it (ties, zeros, negatives and non-finite parts included)', () => {
-    // Source of truth: apportion, the largest-remainder sharing the home's duct figures use (home-ducts.ts).
+  /**
+   * Largest remainder (Hamilton's method) written out plainly as the reference: each part gets the
+   * floor of its exact share, then the parts with the largest remainders get one more each (the earlier
+   * part first on equal remainders) until the total is reached; parts that are not positive finite
+   * numbers count as 0, and with nothing to share by, the first part takes the total.
+   */
+  function largestRemainder(total: number, raws: readonly number[]): number[] {
+    const clean = raws.map((r) => (r > 0 && Number.isFinite(r) ? r : 0));
+    const sum = clean.reduce((a, b) => a + b, 0);
+    if (raws.length === 0) return [];
+    if (!(sum > 0)) return clean.map((_, i) => (i === 0 ? total : 0));
+    const exact = clean.map((r) => (total * r) / sum);
+    const out = exact.map(Math.floor);
+    let left = total - out.reduce((a, b) => a + b, 0);
+    const order = exact.map((e, i) => ({ i, rem: e - Math.floor(e) })).sort((a, b) => b.rem - a.rem || a.i - b.i);
+    for (const { i } of order) {
+      if (left <= 0) break;
+      out[i] = (out[i] ?? 0) + 1;
+      left -= 1;
+    }
+    return out;
+  }
+
+  it('apportion and apportionShare give each part what largest remainder gives it (ties, zeros, negatives, non-finite)', () => {
     // Small integer parts make equal remainders (ties go to the earlier part), zeros and negatives count as 0.
     const part = fc.oneof(
       fc.integer({ min: -3, max: 12 }),
@@ -56,8 +78,10 @@ describe('drill-down at each room’s peak hour: walls and windows by façade', 
         fc.oneof(fc.integer({ min: 0, max: 50 }), fc.integer({ min: 0, max: 100000 })),
         fc.array(part, { maxLength: 12 }),
         (total, raws) => {
-          const all = apportion(total, raws);
-          for (let j = -1; j <= raws.length; j += 1) expect(apportionShare(total, raws, j)).toBe(all[j] ?? 0);
+          const want = largestRemainder(total, raws);
+          expect(apportion(total, raws)).toEqual(want);
+          expect(apportion(total, Float64Array.from(raws))).toEqual(want);
+          for (let j = -1; j <= raws.length; j += 1) expect(apportionShare(total, raws, j)).toBe(want[j] ?? 0);
         },
       ),
       { numRuns: 400 },

@@ -141,11 +141,12 @@ export function applyDucts(
   areas: readonly number[],
 ): { work: RoomHourly[]; byHour: DuctLoad[]; roomIds: string[] } {
   const { served, byHour, peak, heat } = ductHours(ducts, work, psy, ctx, areas);
+  const raws = new Float64Array(served.length);
   for (let h = 0; h < HOURS; h += 1) {
-    const shares = apportion(
-      byHour[h]?.cooling.sensibleBtuh ?? 0,
-      served.map((i) => work[i]?.hourly[h] ?? 0),
-    );
+    served.forEach((i, k) => {
+      raws[k] = work[i]?.hourly[h] ?? 0;
+    });
+    const shares = apportion(byHour[h]?.cooling.sensibleBtuh ?? 0, raws);
     served.forEach((i, j) => {
       const w = work[i];
       const x = shares[j] ?? 0;

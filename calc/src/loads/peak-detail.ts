@@ -23,28 +23,43 @@ export interface PeakDetail {
   readonly facades: readonly FacadePart[];
 }
 
+/** A part's raw figure, or 0 when it is not a positive finite number. */
+const cleanRaw = (r: number): number => (r > 0 && Number.isFinite(r) ? r : 0);
+
 /**
  * Shares an integer `total` among parts in proportion to `raws` (each ≥ 0) by largest remainder,
  * so the parts are integers that add up to the total. [OWN: the screen's breakdown always adds up]
  */
-export function apportion(total: number, raws: readonly number[]): number[] {
-  const clean = raws.map((r) => (r > 0 && Number.isFinite(r) ? r : 0));
-  const sum = clean.reduce((a, b) => a + b, 0);
-  if (raws.length === 0) return [];
-  if (!(sum > 0)) return clean.map((_, i) => (i === 0 ? total : 0));
-  const exact = clean.map((r) => (total * r) / sum);
-  const out = exact.map(Math.floor);
-  let left = total - out.reduce((a, b) => a + b, 0);
-  const order = exact.map((e, i) => ({ i, rem: e - Math.floor(e) })).sort((a, b) => b.rem - a.rem || a.i - b.i);
-  for (const { i } of order) {
+export function apportion(total: number, raws: ArrayLike<number>): number[] {
+  const n = raws.length;
+  if (n === 0) return [];
+  let sum = 0;
+  for (let k = 0; k < n; k += 1) sum += cleanRaw(raws[k] ?? 0);
+  const out = new Array<number>(n).fill(0);
+  if (!(sum > 0)) {
+    out[0] = total;
+    return out;
+  }
+  // Each part's floor and remainder; the leftover 1s go to the largest remainders (the earlier part on a tie).
+  const rems = new Float64Array(n);
+  let floors = 0;
+  for (let k = 0; k < n; k += 1) {
+    const e = (total * cleanRaw(raws[k] ?? 0)) / sum;
+    const f = Math.floor(e);
+    out[k] = f;
+    floors += f;
+    rems[k] = e - f;
+  }
+  let left = total - floors;
+  if (!(left > 0)) return out;
+  const order = Array.from({ length: n }, (_, k) => k).sort((x, y) => (rems[y] ?? 0) - (rems[x] ?? 0) || x - y);
+  for (const k of order) {
     if (left <= 0) break;
-    out[i] = (out[i] ?? 0) + 1;
+    out[k] = (out[k] ?? 0) + 1;
     left -= 1;
   }
   return out;
 }
-
-const cleanRaw = (r: number): number => (r > 0 && Number.isFinite(r) ? r : 0);
 
 /**
  * `apportion(total, raws)[j]` without sharing among the others: the same arithmetic in the same

@@ -65,15 +65,28 @@ const onWall = (dir: Dir, i: number) => {
   const Y = Math.max(0.45, 0.55 + 0.437 * c + 0.313 * c * c);
   return { beam: s.Eb * Math.max(0, c), diffuse: s.Ed * Y + (s.Eb * Math.sin(s.beta) + s.Ed) * 0.1, cos: c };
 };
-/** Angular SHGC ÷ normal for double clear glazing [MEM: ASHRAE ch. 15 Table 10, ID 5a]: 0°…90° by 40/50/60/70/80. */
-const shgcRatio = (cos: number) => {
-  const th = Math.acos(Math.min(1, Math.max(-1, cos))) / RAD;
-  const x = [0, 40, 50, 60, 70, 80, 90];
-  const y = [1, 0.974, 0.934, 0.842, 0.658, 0.342, 0];
-  for (let k = 1; k < x.length; k += 1)
-    if (th <= x[k]!) return y[k - 1]! + ((y[k]! - y[k - 1]!) * (th - x[k - 1]!)) / (x[k]! - x[k - 1]!);
-  return 0;
+/**
+ * Angular SHGC ÷ normal: the solar transmittance of two clear panes (n 1.525, K·L 0.03 each) at θ over that at 0°,
+ * worked here with the Fresnel equations in cosine form [PUB: Fresnel equations; N-cover and absorption forms of
+ * Duffie and Beckman, Solar Engineering of Thermal Processes, ch. 5; n from Rubin, Solar Energy Materials 12 (1985)].
+ */
+const twoPanes = (cosI: number) => {
+  const n = 1.525;
+  const cosR = Math.sqrt(1 - (1 - cosI * cosI) / (n * n));
+  const perp = ((cosI - n * cosR) / (cosI + n * cosR)) ** 2;
+  const par = ((n * cosI - cosR) / (n * cosI + cosR)) ** 2;
+  return 0.5 * ((1 - par) / (1 + 3 * par) + (1 - perp) / (1 + 3 * perp)) * Math.exp(-0.06 / cosR);
 };
+const shgcRatio = (cos: number) => (cos <= 0 ? 0 : twoPanes(Math.min(1, cos)) / twoPanes(1));
+/** Hemispherical ratio for diffuse sun: 2·∫ ratio(θ)·cos θ·sin θ dθ = ∫ ratio(c)·2c dc over c = cos θ in 0…1 (midpoint rule). */
+const DIFFUSE_RATIO = (() => {
+  let s = 0;
+  for (let i = 0; i < 2000; i += 1) {
+    const c = (i + 0.5) / 2000;
+    s += shgcRatio(c) * 2 * c;
+  }
+  return s / 2000;
+})();
 /** Solar storage: r_j = ½^(j+1) / (1 − ½^24), a periodic 24-hour convolution (Gaugeline's RTS simplification). */
 const store = (q: number[]) =>
   q.map((_, h) => {
@@ -123,7 +136,7 @@ function hand(r: HandRoom) {
   const solarInstant = To.map((_, i) =>
     r.windows.reduce((s, w) => {
       const e = onWall(w.dir, i);
-      return s + w.ft2 * w.shgc * w.iac * (e.beam * shgcRatio(e.cos) + e.diffuse * 0.868);
+      return s + w.ft2 * w.shgc * w.iac * (e.beam * shgcRatio(e.cos) + e.diffuse * DIFFUSE_RATIO);
     }, 0),
   );
   const solar = store(solarInstant);

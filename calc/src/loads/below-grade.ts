@@ -13,7 +13,10 @@ import { num } from '../errors';
  * site's annual mean less the ground surface amplitude). No cooling gain below grade: the ground
  * is cooler than the room in summer. [MEM: ASHRAE Handbook—Fundamentals ch. 18 below-grade
  * equations — the wall form is checked in the tests by integrating U(z) numerically and against the
- * older tabulated per-foot values; the floor form is recalled, verify]
+ * older tabulated per-foot values. Assumption (no published source found): the floor form, recalled. It is
+ * the average over the half-width of U(x) = 1/(R_other + π·(x + z_f/2)/k) — heat from a floor point x from
+ * the nearest wall along a half circle of radius x + z_f/2 — which tests/calc/method-constants.test.ts
+ * checks by integrating; that path model is the recalled part. No effect on the review ranch (slab on grade).]
  */
 export const BELOW_GRADE_SOURCE =
   'ASHRAE Handbook—Fundamentals ch. 18 below-grade walls and floors (circular heat-flow paths, Latta and Boileau) [MEM]';

@@ -28,8 +28,9 @@ import { designDayContext, HOURS, type DesignDayContext } from './design-day-con
  * loop (the return picks up heat by conduction and draws leakage air from the surroundings; the
  * supply loses heat by conduction along its whole length and then part of the air leaks out),
  * which the tests check by marching the air through each duct in small steps.
- * [MEM: ANSI/ASHRAE Standard 152-2004 §6 design delivery effectiveness; the equation re-derived
- * here, the clause number not re-checked]
+ * [The equation is re-derived here from the energy balance (the tests march the air through each duct);
+ * it is the design-condition form of ANSI/ASHRAE Standard 152 as recalled. No clause of the standard
+ * is cited: its text was not found in a public copy.]
  *
  * Since ΔT_e = E/(1.08·Q) for an equipment output E, the output that delivers a load L is
  *   E = (L + 1.08·Q·[a_s·B_s·(1 − a_r·B_r)·D_r + a_s·(1 − B_s)·D_s]) / (a_s·B_s)
@@ -39,9 +40,14 @@ import { designDayContext, HOURS, type DesignDayContext } from './design-day-con
  * output is L/a_s + C_l·f_r·Q·Δgr. Supply leakage that makes the house draw in more outdoor air is not counted (stated).
  */
 export const DUCT_METHOD_SOURCE =
-  'ASHRAE Standard 152 design delivery effectiveness (steady energy balance of the duct loop) [MEM: ANSI/ASHRAE 152-2004 §6]';
+  'Design delivery effectiveness after ANSI/ASHRAE Standard 152: the steady energy balance of the duct loop, re-derived and checked by marching the air through each duct';
 
-/** Default duct surface areas as fractions of the floor area served, one-storey house, one return. [MEM: ANSI/ASHRAE 152-2004 default duct surface areas: supply 27 %, return 5 % per return — verify] */
+/**
+ * Default duct surface areas as fractions of the floor area served, one-storey house, one return.
+ * [Assumption (no published source found): supply 27 %, return 5 %, recalled as Standard 152's defaults;
+ * their effect on the review ranch with R-6 attic ducts is stated in METHOD_ASSUMPTIONS and checked in
+ * tests/calc/method-constants.test.ts. Enter the measured areas where known.]
+ */
 export const DUCT_AREA_DEFAULT = { supplyPerFt2: 0.27, returnPerFt2: 0.05 } as const;
 
 /** Combined surface film resistance added to the duct insulation R. [MEM: ASHRAE ch. 26 still-air film 0.68, trade-facts §2] */

@@ -6,11 +6,13 @@
 /**
  * Heat storage of transmitted sun (a room's furnishings and floor absorb it and give it to
  * the air over the next hours). Gaugeline simplification of the radiant time series (RTS)
- * method of ASHRAE Handbook—Fundamentals 2013 ch. 18 (Spitler, Fisher and Pedersen 1997):
- * transmitted solar is taken as wholly radiant and reaches the cooling load through a
- * 24-term periodic series r_j = (1 − p)·p^j, normalised to sum to 1, with p = 0.5 — about
- * half in the hour it arrives, as the handbook's light-construction solar RTS give
- * [MEM: ch. 18 representative solar RTS for light wood-frame construction, verify].
+ * method of ASHRAE Handbook—Fundamentals ch. 18 (Spitler, Fisher and Pedersen, "The Radiant Time
+ * Series Cooling Load Calculation Procedure", ASHRAE Transactions 103(2), 1997): transmitted solar is
+ * taken as wholly radiant and reaches the cooling load through a 24-term periodic series
+ * r_j = (1 − p)·p^j, normalised to sum to 1, with p = 0.5 — about half in the hour it arrives.
+ * [Assumption (no published source found): the ratio p. The handbook's solar RTS tables were not
+ * found in a public copy; its effect on the review ranch is stated in METHOD_ASSUMPTIONS and checked
+ * in tests/calc/method-constants.test.ts.]
  */
 export const SOLAR_RTS_RATIO = 0.5;
 export const SOLAR_RTS: readonly number[] = (() => {
@@ -20,7 +22,7 @@ export const SOLAR_RTS: readonly number[] = (() => {
   return raw.map((r) => r / sum);
 })();
 export const SOLAR_STORAGE_SOURCE =
-  '[OWN simplification of the ASHRAE ch. 18 radiant time series: r_j = ½ · ½^j; MEM: light-construction solar RTS]';
+  '[OWN simplification of the ASHRAE ch. 18 radiant time series: r_j = ½ · ½^j; the ½ is an assumption, see below]';
 
 /**
  * Sol-air temperature: T_e = T_o + (α/h_o)·E_t − ε·ΔR/h_o. α/h_o in h·ft²·°F/Btu: light 0.15,
@@ -34,8 +36,10 @@ export const SOL_AIR_HORIZONTAL_LONGWAVE_F = 7;
 /**
  * Time lag and damping of opaque walls, roofs and doors (decrement-factor method): the heat
  * reaching the room at hour h is U·A·[(T̄e − Ti) + λ·(Te(h − δ) − T̄e)], T̄e the daily mean
- * sol-air temperature. [MEM: Threlkeld's decrement-factor/time-lag method as in ASHRAE
- * Fundamentals (pre-2001 ch. 26); light frame ≈ 2 h and 0.9, heavy masonry ≈ 6 h and 0.45 — verify]
+ * sol-air temperature. Light frame 2 h and 0.9, heavy masonry 6 h and 0.45.
+ * [Assumption (no published source found): the lags and decrement factors (recalled from the
+ * decrement-factor/time-lag method of older ASHRAE Fundamentals editions); the frame values' effect on
+ * the review ranch is stated in METHOD_ASSUMPTIONS and checked in tests/calc/method-constants.test.ts.]
  */
 export const MASS_RESPONSE = {
   frame: { lagHours: 2, decrement: 0.9 },
@@ -50,16 +54,23 @@ export type MassClass = keyof typeof MASS_RESPONSE;
  * attic at 26.6° N in July a peak 38 °F over outdoor, against 40 °F measured (PUB: Parker, Sonne and
  * Sherwin, FSEC-CR-1220-00, control home, Ft. Myers) — checked in tests/calc/method-constants.test.ts;
  * the 1 h lag is inside the 1–2 h delay measured by the USDA Forest Products Laboratory (PUB: TenWolde,
- * FPL-RP-561). The radiant-barrier 0.30 is from memory: no citable source found (issue 9, 5 Dec 2026).]
+ * FPL-RP-561).] [Assumption (no published source found): the radiant-barrier 0.30. It cuts the ceiling's
+ * peak-hour gain by about 16–23 % (light to dark roof), at or below the lowest peak-hour cut, 23 %, that
+ * Medina and Young simulated for R-19 attics across US climates (PUB: "A perspective on the effect of
+ * climate and local environmental variables on the performance of attic radiant barriers in the United
+ * States", Building and Environment 41 (2006) 1767–1778: 23 % desert to almost 100 % marine west coast),
+ * so it credits the barrier no more than that study — checked in the same test file.]
  */
 export const ATTIC_RESPONSE = { vented: 0.45, radiantBarrier: 0.3, lagHours: 1 } as const;
 
 /**
  * Design air leakage in summer as a fraction of the winter rate (less stack effect, lighter
- * design wind). [TRADE/MEM: residential tightness tables give summer rates about half the
- * winter ones] The tightness table's ACH is the winter figure. (The ASHRAE ch. 16 stack-and-wind
- * model Q = A_L·√(C_s·ΔT + C_w·U²) with its one-storey coefficients gives about 0.53 for 20 °F / 7.5 mph
- * against 60 °F / 15 mph — but those coefficients are recalled too [MEM], so no source is claimed.)
+ * design wind). The tightness table's ACH is the winter figure.
+ * [Assumption (no published source found): ½. Residential tightness tables give summer rates about
+ * half the winter ones, as recalled; the ASHRAE ch. 16 stack-and-wind model gives about 0.53 for 20 °F /
+ * 7.5 mph against 60 °F / 15 mph with its one-storey coefficients as recalled — neither was found in a
+ * public copy. Its effect on the review ranch (the largest of the assumptions) is stated in
+ * METHOD_ASSUMPTIONS and checked in tests/calc/method-constants.test.ts.]
  */
 export const SUMMER_LEAKAGE_FRACTION = 0.5;
 
@@ -90,31 +101,71 @@ export const GARAGE_COOLING_FRACTION = 0.6;
 export const DEFAULT_RECOVERY_SENSIBLE = 0.6;
 
 /**
- * SHGC at an angle of incidence θ, as a fraction of the label (normal-incidence) SHGC, at
- * θ = 0, 40, 50, 60, 70, 80, 90°, linear between; diffuse (sky and ground) sun uses the
- * hemispherical ratio. Applied to every glazing type (shape of clear double glazing).
- * [MEM: ASHRAE Handbook—Fundamentals ch. 15 Table 10, angular SHGC of double clear glazing
- * (ID 5a): 0.76, 0.74, 0.71, 0.64, 0.50, 0.26, 0 and hemispherical 0.66 — verify]. Shape checked in
- * tests/calc/method-constants.test.ts: each ratio within 0.05 of (and not above) the Fresnel transmittance
- * ratio of two clear panes [PUB: Duffie and Beckman, Solar Engineering of Thermal Processes, ch. 5];
- * the digits stay from memory.
+ * How the SHGC falls off with the angle of incidence θ, as a fraction of the label (normal-incidence)
+ * SHGC: the solar transmittance of two clear panes at θ over that at 0°, from the physics of the glass
+ * (no recalled table). Each air–glass surface reflects by Fresnel's equations (Snell's law for the
+ * refraction angle θr, sin θ = n·sin θr; perpendicular and parallel polarisation averaged):
+ *   r⊥ = sin²(θr − θ)/sin²(θr + θ),  r∥ = tan²(θr − θ)/tan²(θr + θ)
+ * N parallel panes with the inter-reflections between them transmit, by reflection alone,
+ *   τr = ½·[(1 − r∥)/(1 + (2N − 1)·r∥) + (1 − r⊥)/(1 + (2N − 1)·r⊥)]
+ * and absorb along the slanted path, τa = exp(−N·K·L / cos θr).
+ * [PUB: the Fresnel equations; the N-cover and absorption forms of Duffie and Beckman, Solar Engineering
+ * of Thermal Processes (Wiley), ch. 5 "Radiation transmission through glazing"; the refractive index
+ * n = 1.525 of soda-lime window glass at 0.55 µm from Rubin's dispersion fit n = 1.5130 − 0.003169·λ² +
+ * 0.003962·λ⁻² (M. Rubin, "Optical properties of soda lime silica glasses", Solar Energy Materials 12
+ * (1985) 275–288, LBL-13572; refractiveindex.info "soda-lime glass"), which the tests check.]
+ * [Assumption (no published source found): K·L = 0.03 per clear pane; the ratio at 60° moves by less
+ * than 0.015 either way between K·L 0 and 0.06, which the tests check.] The transmittance ratio stands for the SHGC
+ * ratio: the inward-flowing absorbed part of clear glass is small. Applied to every glazing type (the
+ * shape of clear double glazing). Diffuse (sky and ground) sun uses the hemispherical average
+ * 2·∫ τ(θ)/τ(0)·cos θ·sin θ dθ over 0–90° [PUB: isotropic diffuse, the same chapter].
  */
-export const SHGC_ANGLE_DEG: readonly number[] = [0, 40, 50, 60, 70, 80, 90];
-export const SHGC_ANGLE_RATIO: readonly number[] = [1, 0.974, 0.934, 0.842, 0.658, 0.342, 0];
-export const SHGC_DIFFUSE_RATIO = 0.868;
+export const GLASS_REFRACTIVE_INDEX = 1.525;
+export const GLASS_KL_PER_PANE = 0.03;
+export const GLASS_PANES_FOR_ANGLE = 2;
 
-/** Angular SHGC ratio for an angle of incidence θ (degrees). */
+/** Solar transmittance of `panes` parallel clear panes at angle of incidence θ (degrees), Fresnel optics. */
+export function glassTransmittance(
+  thetaDeg: number,
+  panes: number = GLASS_PANES_FOR_ANGLE,
+  n: number = GLASS_REFRACTIVE_INDEX,
+  klPerPane: number = GLASS_KL_PER_PANE,
+): number {
+  if (!(thetaDeg < 90)) return 0;
+  const t = (Math.max(0, thetaDeg) * Math.PI) / 180;
+  let rPar: number;
+  let rPerp: number;
+  let cosR = 1;
+  if (t < 1e-6) {
+    rPar = rPerp = ((n - 1) / (n + 1)) ** 2;
+  } else {
+    const tr = Math.asin(Math.sin(t) / n);
+    cosR = Math.cos(tr);
+    rPerp = Math.sin(tr - t) ** 2 / Math.sin(tr + t) ** 2;
+    rPar = Math.tan(tr - t) ** 2 / Math.tan(tr + t) ** 2;
+  }
+  const k = 2 * panes - 1;
+  const tauR = 0.5 * ((1 - rPar) / (1 + k * rPar) + (1 - rPerp) / (1 + k * rPerp));
+  return tauR * Math.exp((-panes * klPerPane) / cosR);
+}
+
+const GLASS_NORMAL_TRANSMITTANCE = glassTransmittance(0);
+
+/** Angular SHGC ratio for an angle of incidence θ (degrees): τ(θ)/τ(0) of two clear panes. */
 export function shgcAngleRatio(thetaDeg: number): number {
   if (!(thetaDeg > 0)) return 1;
   if (thetaDeg >= 90) return 0;
-  for (let i = 1; i < SHGC_ANGLE_DEG.length; i += 1) {
-    const hi = SHGC_ANGLE_DEG[i] ?? 90;
-    if (thetaDeg <= hi) {
-      const lo = SHGC_ANGLE_DEG[i - 1] ?? 0;
-      const a = SHGC_ANGLE_RATIO[i - 1] ?? 1;
-      const b = SHGC_ANGLE_RATIO[i] ?? 0;
-      return a + ((b - a) * (thetaDeg - lo)) / (hi - lo);
-    }
-  }
-  return 0;
+  return glassTransmittance(thetaDeg) / GLASS_NORMAL_TRANSMITTANCE;
 }
+
+/** Hemispherical (diffuse) ratio: 2·∫ ratio(θ)·cos θ·sin θ dθ, midpoint rule over 0.1° steps. */
+export const SHGC_DIFFUSE_RATIO = (() => {
+  const steps = 900;
+  const d = Math.PI / 2 / steps;
+  let s = 0;
+  for (let i = 0; i < steps; i += 1) {
+    const t = (i + 0.5) * d;
+    s += shgcAngleRatio((t * 180) / Math.PI) * Math.cos(t) * Math.sin(t) * d;
+  }
+  return 2 * s;
+})();

@@ -8,15 +8,115 @@ export const METHOD_NOTES: readonly string[] = [
   'Cooling is worked out for every hour of the design day (the 21st of the design month, solar time). Each room shows its own peak hour; the whole-home figure is the block load — the hour at which all rooms together peak.',
   `Outdoor temperature each hour: design dry bulb − fraction × daily range ${DAILY_RANGE_SOURCE}.`,
   'Sun position and clear-sky sun: ASHRAE Handbook—Fundamentals 2013 ch. 14 equations and its 2013 clear-sky model with the site’s optical depths τb and τd (or a generic default, labelled as such).',
-  `Sun through glass: area × SHGC × interior shading × (beam on the glass, less an overhang’s shadow, + sky and ground diffuse); the angle of incidence lowers the SHGC as for double clear glass [MEM: ASHRAE ch. 15 angular SHGC; its shape checked against two-pane Fresnel optics, its digits from memory]; part of it is stored by the room and reaches the load in later hours ${SOLAR_STORAGE_SOURCE}.`,
-  'Walls, doors and roofs: U × area × sol-air temperature difference (absorptance from the colour), with a time lag and damping for the construction’s mass [PUB: ASHRAE ch. 18 sol-air; MEM: decrement-factor method]. Attic air from the roof’s sol-air temperature: 0.45 of the way from outdoor air, one hour behind [OWN, checked against attics measured in Florida: FSEC-CR-1220-00], 0.30 with a radiant barrier [from memory, no published source found]; a garage 0.6 of the way from indoor to outdoor [TRADE].',
+  `Sun through glass: area × SHGC × interior shading × (beam on the glass, less an overhang’s shadow, + sky and ground diffuse); the angle of incidence lowers the SHGC as it lowers the solar transmittance of two clear panes — Fresnel reflection at each surface and absorption along the slanted path [PUB: Duffie and Beckman, Solar Engineering of Thermal Processes, ch. 5; glass refractive index 1.525 from Rubin, Solar Energy Materials 12 (1985)]; part of it is stored by the room and reaches the load in later hours ${SOLAR_STORAGE_SOURCE}.`,
+  'Walls, doors and roofs: U × area × sol-air temperature difference (absorptance from the colour), with a time lag and damping for the construction’s mass [PUB: ASHRAE ch. 18 sol-air; the lag and damping are an assumption, see below]. Attic air from the roof’s sol-air temperature: 0.45 of the way from outdoor air, one hour behind [OWN, checked against attics measured in Florida: FSEC-CR-1220-00], 0.30 with a radiant barrier [an assumption, see below]; a garage 0.6 of the way from indoor to outdoor [TRADE].',
   'Window conduction: U × area × (outdoor that hour − indoor).',
   'Slab floors lose heat at the exposed edge: F-factor × exposed perimeter × temperature difference [MEM: ASHRAE 90.1/IECC F-factors].',
-  'Air leakage: winter air changes from the tightness (or a blower-door CFM50 ÷ 20 [TRADE]), summer half of it [TRADE/MEM]; the house’s leakage is shared among rooms by outside envelope area, so interior rooms get none. Sensible 1.08 × CFM × ΔT, latent 0.68 × CFM × Δgrains, both × altitude factor.',
+  'Air leakage: winter air changes from the tightness (or a blower-door CFM50 ÷ 20 [TRADE]), summer half of it [an assumption, see below]; the house’s leakage is shared among rooms by outside envelope area, so interior rooms get none. Sensible 1.08 × CFM × ΔT, latent 0.68 × CFM × Δgrains, both × altitude factor.',
   'Ventilation: the ASHRAE 62.2 rate 0.03 cfm/ft² + 7.5 cfm × (bedrooms + 1) unless entered; balanced in full, ERV/HRV after recovery, exhaust or supply only the part above leakage [MEM: ASHRAE ch. 16]; shared to rooms by floor area.',
   `People: ${PEOPLE_SOURCE}. When no room has people or appliances entered, the whole-home default 464 + 0.7 × ft² + 75 × occupants sensible and 68 + 0.07 × ft² + 41 × occupants latent is used, occupants = bedrooms + 1 [MEM: ASHRAE ch. 17 RLF]; its fixed part goes to the kitchen, the rest by floor area.`,
-  'Ducts (a ducted system outside the conditioned space): the extra output needed to deliver the rooms’ load through ducts that gain or lose heat along their surface (area, insulation R) and leak air to or from the space they run in, by the ASHRAE Standard 152 design delivery-effectiveness balance; attic air of the hour in cooling, outdoor air in heating; crawl space, garage and basement as buffer spaces [TRADE]. Shared to the rooms the system serves by their load. Unless entered: duct surface 27 % (supply) and 5 % (return) of the floor served, surface film R-0.68 [MEM: Standard 152 defaults and the clause, not re-checked]; leakage 4 / 10 / 20 % each side for sealed / typical / leaky [TRADE]; blower 400 cfm per ton [TRADE].',
-  'Basements: walls below grade and basement floors lose heat to the ground by the ASHRAE Handbook—Fundamentals below-grade method (average U over the depth along circular heat-flow paths through soil of conductivity 0.8 Btu/h·ft·°F) at indoor − design ground surface temperature (annual mean less the ground amplitude; the outdoor heating design temperature when none is entered, which overstates the loss) [MEM]; no summer gain below grade.',
+  'Ducts (a ducted system outside the conditioned space): the extra output needed to deliver the rooms’ load through ducts that gain or lose heat along their surface (area, insulation R) and leak air to or from the space they run in, by a design delivery-effectiveness energy balance after ASHRAE Standard 152 (re-derived, no clause cited); attic air of the hour in cooling, outdoor air in heating; crawl space, garage and basement as buffer spaces [TRADE]. Shared to the rooms the system serves by their load. Unless entered: duct surface 27 % (supply) and 5 % (return) of the floor served, surface film R-0.68 [the areas are an assumption, see below; the film MEM: ASHRAE ch. 26]; leakage 4 / 10 / 20 % each side for sealed / typical / leaky [TRADE]; blower 400 cfm per ton [TRADE].',
+  'Basements: walls below grade and basement floors lose heat to the ground by the ASHRAE Handbook—Fundamentals below-grade method (average U over the depth along circular heat-flow paths through soil of conductivity 0.8 Btu/h·ft·°F) at indoor − design ground surface temperature (annual mean less the ground amplitude; the outdoor heating design temperature when none is entered, which overstates the loss) [MEM; the basement-floor form is an assumption, see below]; no summer gain below grade.',
   'Heating: conduction, slab edge, winter leakage and ventilation at the heating design temperature; no credit for sun, people or appliances.',
   'Humidity ratios: ASHRAE Handbook—Fundamentals 2017 ch. 1 psychrometric equations at the station pressure for the elevation.',
 ];
+
+/** A constant of the method for which no citable public source was found (issue 9), and what it does to the review ranch. */
+export interface MethodAssumption {
+  readonly key:
+    | 'summer-leakage'
+    | 'wall-mass'
+    | 'solar-storage'
+    | 'daily-range'
+    | 'radiant-barrier'
+    | 'duct-areas'
+    | 'glass-absorption'
+    | 'basement-floor';
+  /** The constant and the value used. */
+  readonly what: string;
+  /** The plausible low and high values tried, as a phrase ("at 0.3 to 0.7"). */
+  readonly range: string;
+  /**
+   * The review ranch's cooling block (tests/calc/ranch-home.ts: 1,800 ft², 95/75 °F, 36° N), Btu/h, as used
+   * and with the constant at its low and high values; `variant` names a change to the ranch where the
+   * ranch itself does not use the constant. Null where the ranch has nothing the constant touches.
+   * tests/calc/method-constants.test.ts recomputes every figure.
+   */
+  readonly ranch: {
+    readonly variant?: string;
+    readonly asUsed: number;
+    readonly low: number;
+    readonly high: number;
+  } | null;
+  /** Where there is no ranch figure, or a bound instead of one: what is said. */
+  readonly effect?: string;
+}
+
+/** Ordered by how much they move the review ranch's cooling block. */
+export const METHOD_ASSUMPTIONS: readonly MethodAssumption[] = [
+  {
+    key: 'summer-leakage',
+    what: 'summer air leakage ½ of the winter rate',
+    range: 'at ⅓ to 1 (summer equal to winter)',
+    ranch: { asUsed: 26435, low: 25544, high: 29110 },
+  },
+  {
+    key: 'wall-mass',
+    what: 'time lag and damping of frame walls, roofs and doors 2 h and 0.9 (masonry 6 h and 0.45)',
+    range: 'at 1 h and 1.0 to 4 h and 0.7 for frame',
+    ranch: { asUsed: 26435, low: 26806, high: 25648 },
+  },
+  {
+    key: 'solar-storage',
+    what: 'solar heat storage ratio ½ (half the sun through glass reaches the load in the hour it arrives)',
+    range: 'at 0.3 to 0.7',
+    ranch: { asUsed: 26435, low: 26627, high: 25788 },
+  },
+  {
+    key: 'radiant-barrier',
+    what: 'attic air 0.30 of the way to the roof’s sol-air temperature with a radiant barrier (0.45 without)',
+    range: 'at 0.20 to 0.45 (no credit)',
+    ranch: { variant: 'with a radiant barrier over every ceiling', asUsed: 25925, low: 25584, high: 26435 },
+  },
+  {
+    key: 'duct-areas',
+    what: 'duct surface 27 % (supply) and 5 % (return) of the floor served when not entered',
+    range: 'at a supply 20 % to 35 %',
+    ranch: { variant: 'with R-6 ducts in the attic', asUsed: 41568, low: 40105, high: 43275 },
+  },
+  {
+    key: 'daily-range',
+    what: 'the hourly fractions of the daily range (ASHRAE 1997 table, digits recalled)',
+    range: 'with the published diurnal curve of Campbell and Norman (1998) instead',
+    ranch: { asUsed: 26435, low: 26487, high: 26487 },
+  },
+  {
+    key: 'glass-absorption',
+    what: 'glass absorption K·L 0.03 per clear pane in the angle-of-incidence optics',
+    range: 'at 0 to 0.06',
+    ranch: null,
+    effect:
+      'the angular ratio moves by at most 2 % at any angle, so the review ranch’s block moves by at most about 250 Btu/h (2 % of its 12,311 Btu/h of sun through glass)',
+  },
+  {
+    key: 'basement-floor',
+    what: 'the basement-floor heat-loss formula (heat paths from the floor along half circles to the ground outside)',
+    range: '—',
+    ranch: null,
+    effect: 'no effect on the review ranch (slab on grade); it sets the heat loss of basement floors only',
+  },
+];
+
+const btuh = (n: number): string => String(Math.round(n)).replace(/\B(?=(\d{3})+(?!\d))/g, ',');
+
+/** One assumption in plain words, as the loads page prints it. */
+export function methodAssumptionText(a: MethodAssumption): string {
+  const head = `Assumption (no published source found): ${a.what}.`;
+  if (!a.ranch) return a.effect ? `${head} ${a.effect.charAt(0).toUpperCase()}${a.effect.slice(1)}.` : head;
+  const r = a.ranch;
+  const figures = r.low === r.high ? `${btuh(r.low)} Btu/h` : `${btuh(r.low)} to ${btuh(r.high)} Btu/h`;
+  return (
+    `${head} ${a.range.charAt(0).toUpperCase()}${a.range.slice(1)}, the review ranch’s block cooling load${r.variant ? ` ${r.variant}` : ''} is ` +
+    `${figures} (${btuh(r.asUsed)} as used).`
+  );
+}

@@ -1,4 +1,4 @@
-import { METHOD_NOTES } from '@calc';
+import { METHOD_ASSUMPTIONS, METHOD_NOTES, methodAssumptionText } from '@calc';
 
 export { EstimateBadge } from './estimate-badge';
 
@@ -12,6 +12,15 @@ export function MethodNote({ open = false }: { open?: boolean }) {
       <ul className="mt-1 list-disc pl-5 text-ink-950">
         {METHOD_NOTES.map((n) => (
           <li key={n}>{n}</li>
+        ))}
+      </ul>
+      <h3 className="mt-3 font-semibold text-ink-900">Figures with no published source</h3>
+      <p className="mt-1 text-ink-950">
+        These are stated assumptions. Each shows how far it moves the cooling load of an example 1,800 ft² ranch.
+      </p>
+      <ul className="mt-1 list-disc pl-5 text-ink-950">
+        {METHOD_ASSUMPTIONS.map((a) => (
+          <li key={a.key}>{methodAssumptionText(a)}</li>
         ))}
       </ul>
     </details>

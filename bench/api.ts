@@ -21,6 +21,7 @@ import { DEMO, startCluster } from '../scripts/lib/stack';
 import { cookieOf, cpuMs, signIn as signInAt, startProcess as start, stopAll, waitFor } from './lib/app-process';
 import { load, type LoadResult } from './lib/load';
 import { phoneTimings } from './lib/phone';
+import { formatTrace } from './lib/phone-trace';
 import { printBudgets } from '../scripts/bundle-budget';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 8);
@@ -37,6 +38,8 @@ const BENCH_MARK = 'made by npm run bench';
 const SERVER_DIR = resolve(process.env.BENCH_SERVER_DIR ?? '.');
 const ROUTES = new Set((process.env.BENCH_ROUTES ?? 'jobs,rooms,loads,save,sign-in').split(',').map((r) => r.trim()));
 const CPU_PROF = process.env.BENCH_CPU_PROF ? resolve(process.env.BENCH_CPU_PROF) : null;
+// BENCH_PHONE_PROFILE=1 traces each phone load and prints what its main thread did; =<dir> also keeps the traces there.
+const PHONE_PROFILE = process.env.BENCH_PHONE_PROFILE;
 
 /** What one autocannon connection carries from one step of its sequence to the next. */
 interface Ctx {
@@ -378,6 +381,12 @@ try {
           { name: s.cookie.slice(0, eq), value: s.cookie.slice(eq + 1) },
           // The bench's own job (its rooms go when the bench ends), so typing leaves no trace in the demo data.
           `/jobs/${benchJobId}`,
+          PHONE_PROFILE
+            ? {
+                assetsDir: join(SERVER_DIR, 'dist/client/assets'),
+                ...(PHONE_PROFILE === '1' ? {} : { saveDir: PHONE_PROFILE }),
+              }
+            : undefined,
         );
         console.log(
           `phone (Chromium, 375 px, CPU 4× slower, 1.6 Mbps / 150 ms): walk-through until a room field takes typing — ` +
@@ -388,6 +397,9 @@ try {
             (p.foreign ? `; ${p.foreign} requests to other hosts (a bug)` : '') +
             ` (load average ${f(loadavg()[0] ?? 0, 2)})`,
         );
+        if (p.traces)
+          for (const line of [...formatTrace('cold', p.traces.cold), ...formatTrace('warm', p.traces.warm)])
+            console.log(line);
       } catch (e) {
         console.log('phone timings could not run:', e instanceof Error ? e.message.split('\n')[0] : String(e));
       }

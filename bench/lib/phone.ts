@@ -1,4 +1,7 @@
+import { writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { chromium, type BrowserContext } from 'playwright-core';
+import { summariseTrace, type TraceEvent, type TraceSummary } from './phone-trace';
 
 /** A phone on weak 4G, as issue 11 sets it: 4× CPU slowdown, 1.6 Mbps down, 750 kbps up, 150 ms round trip. */
 const NETWORK = {
@@ -8,6 +11,8 @@ const NETWORK = {
   uploadThroughput: (750 * 1024) / 8,
 };
 const CPU_SLOWDOWN = 4;
+/** With a trace: how long it goes on after the letter arrived, to show what the page kept for later. */
+const AFTER_TYPED_MS = 3000;
 
 export interface PhoneTiming {
   readonly coldMs: number;
@@ -19,7 +24,21 @@ export interface PhoneTiming {
   readonly warmFromWorker: boolean;
   readonly transferredKb: number;
   readonly foreign: number;
+  /** With BENCH_PHONE_PROFILE: what the main thread did on each load (bench/lib/phone-trace.ts). */
+  readonly traces?: { readonly cold: TraceSummary; readonly warm: TraceSummary };
 }
+
+/** The Chromium trace categories the summary reads: tasks, timeline events and V8's sampling profiler. */
+const TRACE_CATEGORIES = [
+  'toplevel',
+  'devtools.timeline',
+  'disabled-by-default-devtools.timeline',
+  'v8',
+  'v8.execute',
+  'disabled-by-default-v8.cpu_profiler',
+  'blink.user_timing',
+  'loading',
+];
 
 /**
  * Time from navigation until the walk-through's room-name field takes a typed letter, on a
@@ -27,7 +46,12 @@ export interface PhoneTiming {
  * (the same tab opening the page again). Signs in with the given cookie (sent as a browser
  * behind the TLS proxy would, X-Forwarded-Proto: https).
  */
-export async function phoneTimings(base: string, cookie: { name: string; value: string }, path: string) {
+export async function phoneTimings(
+  base: string,
+  cookie: { name: string; value: string },
+  path: string,
+  profile?: { assetsDir: string; saveDir?: string },
+) {
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
@@ -74,7 +98,8 @@ export async function phoneTimings(base: string, cookie: { name: string; value: 
       );
     }
     let visibleMs = 0;
-    const typeable = async (letter: string) => {
+    const traces: Partial<Record<'cold' | 'warm', TraceSummary>> = {};
+    const typeable = async (letter: string, label: 'cold' | 'warm') => {
       const t0 = performance.now();
       tNav = t0;
       await page.goto(`${base}${path}`, { waitUntil: 'commit' });
@@ -88,15 +113,31 @@ export async function phoneTimings(base: string, cookie: { name: string; value: 
         letter,
       );
       const ms = performance.now() - t0;
+      if (profile) {
+        // What the page does next (the work kept until after the first keystroke) is in the trace too.
+        await page.waitForTimeout(AFTER_TYPED_MS);
+        const raw = await browser.stopTracing();
+        if (profile.saveDir) writeFileSync(join(profile.saveDir, `phone-${label}-${Date.now()}.json`), raw);
+        const events = (JSON.parse(raw.toString('utf8')) as { traceEvents: TraceEvent[] }).traceEvents;
+        traces[label] = summariseTrace(events, {
+          visibleMs,
+          typedMs: ms,
+          endMs: ms + AFTER_TYPED_MS,
+          assetsDir: profile.assetsDir,
+        });
+      }
       await field.press('Backspace');
       return ms;
     };
-    const coldMs = await typeable('q');
+    // The profiler starts before the measured navigation (starting it costs the page it starts in a moment).
+    if (profile) await browser.startTracing(page, { categories: TRACE_CATEGORIES });
+    const coldMs = await typeable('q', 'cold');
     const coldVisibleMs = visibleMs;
     const transferredKb = bytes / 1024;
     // Let the first visit's edit settle (it is typed back), then open the page again in the same tab.
+    if (profile) await browser.startTracing(page, { categories: TRACE_CATEGORIES });
     await page.waitForTimeout(1500);
-    const warmMs = await typeable('z');
+    const warmMs = await typeable('z', 'warm');
     const warmVisibleMs = visibleMs;
     const warmFromWorker = await page.evaluate(() => navigator.serviceWorker?.controller != null);
     await page.waitForTimeout(1500);
@@ -108,6 +149,7 @@ export async function phoneTimings(base: string, cookie: { name: string; value: 
       warmFromWorker,
       transferredKb,
       foreign,
+      ...(traces.cold && traces.warm ? { traces: { cold: traces.cold, warm: traces.warm } } : {}),
     } satisfies PhoneTiming;
   } finally {
     await context?.close().catch(() => undefined);

@@ -35,6 +35,9 @@ export const houseSchema = z.object({
   ducts: ductSystemSchema.optional(),
 });
 
+/** The most rooms one home may have. */
+export const MOST_ROOMS_IN_HOME = 200;
+
 /** A home: its design conditions, its tightness and its rooms (unique ids). */
 export const homeInputSchema = z
   .object({
@@ -43,20 +46,35 @@ export const homeInputSchema = z
     designConditions: designConditionsSchema,
     tightness: tightnessSchema.default('average'),
     ...houseSchema.shape,
-    rooms: z.array(roomInputSchema).min(1, 'Add at least one room').max(200, 'At most 200 rooms'),
+    rooms: z
+      .array(roomInputSchema)
+      .min(1, 'Add at least one room')
+      .max(MOST_ROOMS_IN_HOME, `At most ${MOST_ROOMS_IN_HOME} rooms`),
   })
   .superRefine((home, ctx) => {
-    const seen = new Set<string>();
-    home.rooms.forEach((room, i) => {
-      if (seen.has(room.id))
-        ctx.addIssue({ code: 'custom', path: ['rooms', i, 'id'], message: 'Each room needs its own id' });
-      seen.add(room.id);
-    });
-    home.ducts?.roomIds?.forEach((id, i) => {
-      if (!seen.has(id))
-        ctx.addIssue({ code: 'custom', path: ['ducts', 'roomIds', i], message: `Room "${id}" is not in the home` });
-    });
+    for (const issue of homeRoomIssues(home)) ctx.addIssue({ code: 'custom', ...issue });
   });
+
+/**
+ * What a home's rooms must agree on beyond each room's own fields: every room its own id, and the ducts
+ * serving only rooms of the home. The home schema refuses a home with any of these; the walk-through's
+ * live totals, which parse each room once and never the whole home, ask this directly.
+ */
+export function homeRoomIssues(home: {
+  readonly rooms: readonly { readonly id: string }[];
+  readonly ducts?: { readonly roomIds?: readonly string[] | undefined } | undefined;
+}): Array<{ path: Array<string | number>; message: string }> {
+  const issues: Array<{ path: Array<string | number>; message: string }> = [];
+  const seen = new Set<string>();
+  home.rooms.forEach((room, i) => {
+    if (seen.has(room.id)) issues.push({ path: ['rooms', i, 'id'], message: 'Each room needs its own id' });
+    seen.add(room.id);
+  });
+  home.ducts?.roomIds?.forEach((id, i) => {
+    if (!seen.has(id)) issues.push({ path: ['ducts', 'roomIds', i], message: `Room "${id}" is not in the home` });
+  });
+  return issues;
+}
 
 export type HomeInput = z.input<typeof homeInputSchema>;
 export type Home = z.output<typeof homeInputSchema>;

@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { startTransition, useEffect, useState } from 'react';
 
 /**
  * False until the browser has had an idle moment after this page's first render (or `timeoutMs`
@@ -15,7 +15,11 @@ function askOnce(timeoutMs: number): void {
   asked = true;
   const done = () => {
     idleSeen = true;
-    for (const w of waiting) w();
+    // A transition: React renders what was waiting in slices and lets a keystroke in between them, so
+    // the first letter typed is not held behind the charts' or the job details' first render (issue 11).
+    startTransition(() => {
+      for (const w of waiting) w();
+    });
     waiting.clear();
   };
   if (typeof window !== 'undefined' && 'requestIdleCallback' in window)

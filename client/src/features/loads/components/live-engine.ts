@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { startTransition, useEffect, useState } from 'react';
 import { useAfterIdle } from '../../../lib/use-after-idle';
 
 /**
@@ -40,7 +40,8 @@ export function useLoadEngine(): EngineState {
     if (state.status !== 'loading' || !idle) return;
     let live = true;
     loadEngine().then(
-      (engine) => live && setState({ status: 'ready', engine }),
+      // The first figures render as a transition (in slices a keystroke can come between).
+      (engine) => live && startTransition(() => setState({ status: 'ready', engine })),
       () => live && setState({ status: 'failed' }),
     );
     return () => {

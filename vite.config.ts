@@ -86,6 +86,30 @@ function preloadApp(): Plugin {
   };
 }
 
+/**
+ * The app's own fonts (woff2) named in index.html, so they arrive with the code instead of after the first
+ * paint: with `font-display: swap` a late font re-wraps every line and the whole page jumps (the desk measured
+ * a 0.26 layout shift on a slow phone, header and all, when the text face swapped in).
+ */
+function preloadFonts(): Plugin {
+  return {
+    name: 'gaugeline-preload-fonts',
+    apply: 'build',
+    transformIndexHtml: {
+      order: 'post',
+      handler(_html, ctx) {
+        return Object.values(ctx.bundle ?? {})
+          .filter((a) => a.type === 'asset' && a.fileName.endsWith('.woff2'))
+          .map((a) => ({
+            tag: 'link',
+            attrs: { rel: 'preload', as: 'font', type: 'font/woff2', crossorigin: '', href: `/${a.fileName}` },
+            injectTo: 'head' as const,
+          }));
+      },
+    },
+  };
+}
+
 // One file for the client build, the dev server and the test projects.
 export default defineConfig({
   root: here('./client'),
@@ -93,6 +117,7 @@ export default defineConfig({
     react(),
     tailwindcss(),
     preloadApp(),
+    preloadFonts(),
     pwa,
     // Every text file of the build also as .br and .gz: the server picks one by Accept-Encoding (server/src/app.ts).
     compression({

@@ -25,6 +25,46 @@ function Messages({ items, tone }: { items: readonly string[]; tone: 'warning' |
   );
 }
 
+/**
+ * A branch circuit's sizes in one line (breaker, wire, voltage drop) with the electrical caution beside them; how
+ * each size was found folds behind one line on a phone.
+ */
+function ElectricalBlock({
+  title,
+  e,
+  whys,
+}: {
+  title: string;
+  e: NonNullable<SystemView['electrical']>;
+  whys: readonly ExplanationView[];
+}) {
+  return (
+    <div className="flex flex-col gap-2">
+      <h5 className="text-sm font-semibold uppercase tracking-wide text-muted">{title}</h5>
+      <p className="text-sm tabular-nums">
+        MCA {formatNumber(e.mcaA, 1)} A, MOCP {formatNumber(e.mocpA)} A → breaker{' '}
+        <strong>{e.breakerA === null ? '—' : `${formatNumber(e.breakerA)} A`}</strong>, wire{' '}
+        <strong>{e.wireAwg === null ? '—' : `${e.wireAwg} AWG`}</strong>
+        {e.voltageDropPercent === null || e.voltageDropPercent === undefined
+          ? ''
+          : `, voltage drop ${formatPercent(e.voltageDropPercent, 1)}`}
+        .
+      </p>
+      {whys.length > 0 ? (
+        <DeskFold summary={<span className="text-ink-700">How each size was found ({whys.length})</span>}>
+          <div className="flex flex-col gap-1">
+            {whys.map((x) => (
+              <Why key={x.key} e={x} />
+            ))}
+          </div>
+        </DeskFold>
+      ) : null}
+      <Messages items={e.warnings} tone="warning" />
+      <Cautions title={title} items={e.caution ? [e.caution] : []} />
+    </div>
+  );
+}
+
 /** One outdoor unit and what hangs off it: sizing, ports, each circuit's charge, the total, the electrical, with their whys. */
 export function SystemResults({
   system,
@@ -48,6 +88,8 @@ export function SystemResults({
   const circuitWhys = once((r?.circuits ?? []).flatMap((c) => (c.explanation ? [c.explanation] : [])));
   const chargeWhys = once(r?.explanations ?? []);
   const electricalWhys = once(e?.explanations ?? []);
+  const kit = system.heatKitElectrical;
+  const kitWhys = once(kit?.explanations ?? []);
   const otherWhys = once(system.explanations);
   const chargeCount = (r?.circuits.length ?? 0) + chargeWhys.length + (r?.notes.length ?? 0);
   const a2l = chargeWhys.some((x) => x.key.includes('a2l'));
@@ -120,31 +162,8 @@ export function SystemResults({
         </div>
       ) : null}
 
-      {e ? (
-        <div className="flex flex-col gap-2">
-          <h5 className="text-sm font-semibold uppercase tracking-wide text-muted">Electrical</h5>
-          <p className="text-sm tabular-nums">
-            MCA {formatNumber(e.mcaA, 1)} A, MOCP {formatNumber(e.mocpA)} A → breaker{' '}
-            <strong>{e.breakerA === null ? '—' : `${formatNumber(e.breakerA)} A`}</strong>, wire{' '}
-            <strong>{e.wireAwg === null ? '—' : `${e.wireAwg} AWG`}</strong>
-            {e.voltageDropPercent === null || e.voltageDropPercent === undefined
-              ? ''
-              : `, voltage drop ${formatPercent(e.voltageDropPercent, 1)}`}
-            .
-          </p>
-          {electricalWhys.length > 0 ? (
-            <DeskFold summary={<span className="text-ink-700">How each size was found ({electricalWhys.length})</span>}>
-              <div className="flex flex-col gap-1">
-                {electricalWhys.map((x) => (
-                  <Why key={x.key} e={x} />
-                ))}
-              </div>
-            </DeskFold>
-          ) : null}
-          <Messages items={e.warnings} tone="warning" />
-          <Cautions title="Electrical" items={e.caution ? [e.caution] : []} />
-        </div>
-      ) : null}
+      {e ? <ElectricalBlock title="Electrical" e={e} whys={electricalWhys} /> : null}
+      {kit ? <ElectricalBlock title="Electrical, heat kit" e={kit} whys={kitWhys} /> : null}
     </section>
   );
 }

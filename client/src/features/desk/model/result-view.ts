@@ -97,6 +97,8 @@ export const systemView = z.object({
   combination: combinationView.optional(),
   refrigerant: refrigerantView.optional(),
   electrical: electricalView.optional(),
+  /** The heat kit's own branch circuit (null without a kit). */
+  heatKitElectrical: electricalView.nullable().optional(),
   /** calc's whys for the system: sizing, combination, charge, electrical. */
   explanations: z.array(explanationView).default([]),
 });

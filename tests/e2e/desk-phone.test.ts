@@ -80,9 +80,15 @@ describe('the desk on a phone', () => {
       .getByText(/^Cooling \d+ % of the load: (within|above|below) the/)
       .first()
       .waitFor();
-    await results.getByText(/^Total extra charge/).waitFor();
-    await results.getByRole('complementary', { name: 'Refrigerant and pressure work' }).waitFor();
-    await results.getByRole('complementary', { name: 'Electrical', exact: true }).waitFor();
+    // Each outdoor unit: its charge and its wire in sight, each with its caution beside it.
+    const systems = await results.getByRole('region', { name: /^System / }).all();
+    expect(systems.length).toBeGreaterThan(0);
+    for (const system of systems) {
+      await system.getByText(/^Total extra charge/).waitFor();
+      await system.getByRole('complementary', { name: 'Refrigerant and pressure work' }).waitFor();
+      await system.getByText(/^MCA .* → breaker/).waitFor();
+      await system.getByRole('complementary', { name: 'Electrical', exact: true }).waitFor();
+    }
     await expectFoldedLines(results);
 
     // The takeoff: one line per category, no item drawn until one is opened.

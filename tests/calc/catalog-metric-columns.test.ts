@@ -56,6 +56,8 @@ describe('metric CSV columns', () => {
     expect(adder).toEqual([{ liquidOdIn: 0.25, ozPerFt: expect.closeTo(18.6 / 93.0102, 5) as number }]);
     // $24.25 per kg × 0.45359237 kg/lb = $10.9996 per lb → 1100 cents (whole cents are stored)
     expect(writeCell(metricOf('refrigerants', 'cost_usd_per_lb'), '24.25')).toEqual({ costCentsPerLb: 1100 });
+    // $2.65 per 100 g × 28.349523125 g/oz ÷ 100 = $0.7513/oz → 75 whole cents [PUB: 1 oz = 28.349523125 g]
+    expect(writeCell(metricOf('refrigerants', 'cost_usd_per_oz'), '2.65')).toEqual({ costCentsPerOz: 75 });
   });
 
   it('write the stored imperial values as metric cells at the column precision', () => {
@@ -63,6 +65,7 @@ describe('metric CSV columns', () => {
     expect(metricOf('models', 'height_in').read({ heightIn: 12 })).toBe('305'); // 12 × 25.4 = 304.8 → mm
     expect(metricOf('models', 'weight_lb').read({ weightLb: 100 })).toBe('45.36'); // 100 × 0.45359237
     expect(metricOf('refrigerants', 'cost_usd_per_lb').read({ costCentsPerLb: 1100 })).toBe('24.25'); // 11 ÷ 0.45359237
+    expect(metricOf('refrigerants', 'cost_usd_per_oz').read({ costCentsPerOz: 75 })).toBe('2.65'); // 0.75 ÷ 0.28349523125 = 2.6455
     expect(metricOf('models', 'weight_lb').read({})).toBe('');
   });
 

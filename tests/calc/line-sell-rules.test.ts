@@ -79,9 +79,16 @@ describe('price-book rules reach each item: own override → category → compan
     expect(book.items['labor:charge-startup']?.sellRule).toEqual({ method: 'markup', percent: 120 });
     expect(book.items['labor:charge-startup']?.ruleSource).toBe('item');
   });
-  it('an item with neither (refrigerant has no category) carries no rule: the company default applies', () => {
-    expect(book.items['refrigerant:R-32']?.sellRule).toBeUndefined();
-    expect(book.items['refrigerant:R-32']?.ruleSource).toBeUndefined();
+  it("refrigerant sells at its category's rule; an item with neither carries no rule: the company default applies", () => {
+    const refrigerant = categories.find((c) => c.key === 'refrigerant');
+    expect(book.items['refrigerant:R-32']).toMatchObject({ sellRule: refrigerant?.sellRule, ruleSource: 'category' });
+    const bare = designPriceBookFromCompany({
+      models: [],
+      refrigerants: [refrigerantCostSchema.parse({ key: 'R-32', costCentsPerLb: 1100 })],
+      categories,
+    });
+    expect(bare.items['refrigerant:R-32']?.sellRule).toBeUndefined();
+    expect(bare.items['refrigerant:R-32']?.ruleSource).toBeUndefined();
   });
 });
 

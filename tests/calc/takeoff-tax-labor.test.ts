@@ -10,6 +10,7 @@ import {
   materialSchema,
   priceOption,
   pricingSchema,
+  refrigerantCostSchema,
   type PriceBook,
   type PricedLine,
 } from '@calc';
@@ -213,5 +214,71 @@ describe("labor from the price book's tasks, line by line (issue 13)", () => {
     });
     expect(book2.items['labor:mount-indoor:ceiling-cassette']?.description).toBe('Cassette');
     expect(book2.labor?.hours).toMatchObject({ mountWallHead: 1.5, mountCassette: 3 });
+  });
+});
+
+describe('refrigerant in the price book: its category, by the lb or the oz (issue 13)', () => {
+  const refrigerants = [
+    refrigerantCostSchema.parse({ key: 'R-32', costCentsPerOz: 75, category: 'gas' }),
+    refrigerantCostSchema.parse({ key: 'R-454B', costCentsPerLb: 1900 }),
+  ];
+  const categories = [
+    categorySchema.parse({
+      key: 'gas',
+      name: 'Refrigerant',
+      sellRule: { method: 'markup', percent: 80 },
+      taxable: false,
+    }),
+  ];
+  const company = designPriceBookFromCompany({ models: [], refrigerants, categories });
+
+  it('a row gives its cost per lb or per oz, never both or neither', () => {
+    expect(refrigerantCostSchema.safeParse({ key: 'R-32' }).success).toBe(false);
+    const both = refrigerantCostSchema.safeParse({ key: 'R-32', costCentsPerLb: 1100, costCentsPerOz: 70 });
+    expect(both.success).toBe(false);
+    expect(both.error?.issues[0]?.message).toBe('Give the cost either per lb or per oz (one of the two)');
+  });
+
+  it("the book's item is in the row's unit, at its category's rule and tax", () => {
+    expect(company.items['refrigerant:R-32']).toMatchObject({
+      unitCostCents: 75,
+      soldBy: 'oz',
+      sellRule: { method: 'markup', percent: 80 },
+      ruleSource: 'category',
+      categoryName: 'Refrigerant',
+      taxable: false,
+    });
+    expect(company.items['refrigerant:R-454B']).toMatchObject({ unitCostCents: 1900, soldBy: 'lb' });
+  });
+
+  const withBook = (items: PriceBook['items']) =>
+    computeDesign({ home: threeRoomHome, design, catalog, priceBook: { ...priceBook, items }, pricing });
+
+  it('priced by the ounce: the extra charge is counted in oz at the per-oz cost', () => {
+    const r = withBook({
+      ...priceBook.items,
+      'refrigerant:R-32': company.items['refrigerant:R-32'] ?? { unitCostCents: 0 },
+    });
+    const gas = r.takeoff.find((l) => l.itemKey === 'refrigerant:R-32');
+    // The sample design's extra charge is 4.0 oz (design.test: (50 − 25) ft × 0.16 oz/ft); 4 oz × $0.75 = $3.00.
+    expect(gas).toMatchObject({ quantity: 4, unit: 'oz', unitCostCents: 75, extendedCostCents: 300 });
+    expect(gas?.derivation).toContain('priced by the ounce');
+    // Its category is not taxable here: out of the base under the materials rule.
+    expect(r.price.lineSells.find((l) => l.itemKey === 'refrigerant:R-32')?.taxed).toBe(false);
+  });
+
+  it('priced by the pound: 4 oz ÷ 16 oz/lb = 0.25 lb [1 lb = 16 oz]', () => {
+    const gas = withBook(priceBook.items).takeoff.find((l) => l.itemKey === 'refrigerant:R-32');
+    expect(gas).toMatchObject({ quantity: 0.25, unit: 'lb', unitCostCents: 1100, extendedCostCents: 275 });
+  });
+
+  it('a book without the refrigerant says "No price for" it and counts it at $0', () => {
+    const items = { ...priceBook.items };
+    delete items['refrigerant:R-32'];
+    const r = withBook(items);
+    expect(r.takeoff.find((l) => l.itemKey === 'refrigerant:R-32')?.extendedCostCents).toBe(0);
+    expect(r.warnings).toContain(
+      'No price for "R-32 refrigerant added on site" (refrigerant:R-32) in the price book; it is counted at $0.',
+    );
   });
 });

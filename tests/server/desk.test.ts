@@ -355,6 +355,48 @@ describe("the price book's categories and labor tasks, line by line (issue 13)",
   });
 });
 
+describe('refrigerant in the price book (issue 13)', () => {
+  it('a row priced by the ounce in its category prices the extra charge by the ounce at the category rule', async () => {
+    const row = (await owner.agent.get(`${BASE}/refrigerants/R-32`)).body.row;
+    const missing = await put(owner, `${BASE}/refrigerants/R-32`, row.version).send({
+      record: { key: 'R-32', costCentsPerOz: 70, category: 'no-such' },
+    });
+    expectProblem(missing, 400);
+    expect(missing.body.errors).toEqual([
+      { path: 'record.category', message: 'No category "no-such": add it under categories first' },
+    ]);
+    const both = await put(owner, `${BASE}/refrigerants/R-32`, row.version).send({
+      record: { key: 'R-32', costCentsPerOz: 70, costCentsPerLb: 1100 },
+    });
+    expectProblem(both, 400);
+    expect(JSON.stringify(both.body.errors)).toContain('Give the cost either per lb or per oz');
+    const changed = await put(owner, `${BASE}/refrigerants/R-32`, row.version).send({
+      record: { key: 'R-32', costCentsPerOz: 70, category: 'refrigerant' },
+    });
+    expect(changed.status, JSON.stringify(changed.body)).toBe(200);
+    try {
+      const { job, rooms } = await deskJob(estimator);
+      const o = await newOption(estimator, job.id, { name: 'Long run', design: singleZone(rooms[0] ?? '', 60) });
+      const r = (await estimator.agent.get(`/api/jobs/${job.id}/options/${o.id}`)).body.option.result;
+      const extraOz = r.systems[0].refrigerant.extraChargeOz as number;
+      expect(extraOz).toBeGreaterThan(0);
+      const gas = (r.takeoff as Record<string, unknown>[]).find((l) => l['itemKey'] === 'refrigerant:R-32');
+      // By the ounce: the extra charge itself, at 70 ¢/oz; the demo's Refrigerant category's markup 80 %.
+      expect(gas).toMatchObject({ unit: 'oz', quantity: extraOz, unitCostCents: 70 });
+      expect(gas?.['extendedCostCents']).toBe(Math.round(extraOz * 70));
+      expect(gas?.['sellRule']).toMatchObject({
+        method: 'markup',
+        percent: 80,
+        source: 'category',
+        from: 'Refrigerant',
+      });
+    } finally {
+      const now = (await owner.agent.get(`${BASE}/refrigerants/R-32`)).body.row;
+      await put(owner, `${BASE}/refrigerants/R-32`, now.version).send({ record: row.record });
+    }
+  });
+});
+
 describe('scoping', () => {
   it('401 signed out, 404 for another company, another salesperson’s job and an unassigned installer', async () => {
     const { job, rooms } = await deskJob(owner);

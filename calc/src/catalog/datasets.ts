@@ -128,7 +128,7 @@ export const DATASETS: Readonly<Record<DatasetId, Dataset>> = {
     schema: refrigerantCostSchema,
     columns: REFRIGERANT_COLUMNS,
     readers: OFFICE,
-    costFields: ['costCentsPerLb'],
+    costFields: ['costCentsPerLb', 'costCentsPerOz'],
     priceFields: [],
   },
   'discount-limits': {

@@ -217,7 +217,7 @@ export const DEFAULT_LABOR_HOURS_TASK: Readonly<Record<LaborHoursKey, string>> =
  * The engine's price book (cost per takeoff item key, cents) from the company's data:
  * - `equipment:<model>` ← the model's cost; heat kits likewise;
  * - `line-set-kit:<liquid>x<suction>:<n>ft` ← the line-set kit of those sizes and length;
- * - `refrigerant:<R>` ← the refrigerant's cost per lb (the takeoff counts pounds);
+ * - `refrigerant:<R>` ← the refrigerant's cost per lb or per oz (`soldBy`: the takeoff counts that unit), in its category;
  * - `labor:*` ← the hourly rate of the task named in `laborTaskFor` (default DEFAULT_LABOR_TASK_FOR);
  * - any other takeoff key ← the material whose SKU `itemMap` names for it, else the material whose
  *   `takeoffItem` names the key (an active one first), else a material whose SKU is the key itself. Unmapped items stay unpriced (computeDesign warns "No price for …").
@@ -283,7 +283,14 @@ export function designPriceBookFromCompany({
     if (k.kind === 'line-set' && k.liquidOdIn !== undefined && k.suctionOdIn !== undefined && k.lengthFt !== undefined)
       items[`line-set-kit:${tubeLabel({ odIn: k.liquidOdIn })}x${tubeLabel({ odIn: k.suctionOdIn })}:${k.lengthFt}ft`] =
         item(k.costCents, k.description, k);
-  for (const r of refrigerants) items[`refrigerant:${r.key}`] = { unitCostCents: r.costCentsPerLb };
+  // Refrigerant by the unit the book gives (lb or oz), at its category's rule and tax (issue 13).
+  for (const r of refrigerants) {
+    const perOz = r.costCentsPerOz !== undefined;
+    items[`refrigerant:${r.key}`] = {
+      ...item(perOz ? (r.costCentsPerOz ?? 0) : (r.costCentsPerLb ?? 0), `${r.key} refrigerant`, r),
+      soldBy: perOz ? 'oz' : 'lb',
+    };
+  }
   const tasks = new Map<string, LaborTask>();
   for (const t of labor) tasks.set(t.key, t);
   for (const [line, task] of Object.entries(laborTaskFor)) {

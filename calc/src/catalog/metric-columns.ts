@@ -50,7 +50,8 @@ function numberVariant(imperial: CsvColumn, v: NumberVariant): CsvColumn {
 }
 
 /** Dollars per kg ↔ the stored cents per lb (whole cents, so a per-kg price resolves to about 2 cents). */
-function moneyPerKgVariant(imperial: CsvColumn, name: string, help: string): CsvColumn {
+/** A cost per imperial mass unit shown per metric unit; `perImperial` = metric units in one imperial unit (kg per lb). */
+function moneyPerKgVariant(imperial: CsvColumn, name: string, help: string, perImperial = KG_PER_LB): CsvColumn {
   return {
     name,
     help,
@@ -58,13 +59,13 @@ function moneyPerKgVariant(imperial: CsvColumn, name: string, help: string): Csv
       const cell = imperial.read(r);
       if (cell === '') return '';
       const centsPerLb = dollarsToCents(cell);
-      return typeof centsPerLb === 'number' ? centsToDollars(Math.round(centsPerLb / KG_PER_LB)) : '';
+      return typeof centsPerLb === 'number' ? centsToDollars(Math.round(centsPerLb / perImperial)) : '';
     },
     write: (d, cell) => {
       const centsPerKg = dollarsToCents(cell);
       if (typeof centsPerKg === 'string') return centsPerKg;
       if (centsPerKg === undefined) return imperial.write(d, '');
-      return imperial.write(d, centsToDollars(Math.round(centsPerKg * KG_PER_LB)));
+      return imperial.write(d, centsToDollars(Math.round(centsPerKg * perImperial)));
     },
     owns: imperial.owns,
   };
@@ -115,6 +116,8 @@ export function metricVariant(column: CsvColumn): CsvColumn | null {
     });
   if (column.name === 'cost_usd_per_lb')
     return moneyPerKgVariant(column, 'cost_usd_per_kg', 'Your cost of one kilogram, dollars');
+  if (column.name === 'cost_usd_per_oz')
+    return moneyPerKgVariant(column, 'cost_usd_per_100g', 'Your cost of 100 grams, dollars', G_PER_OZ / 100);
   return null;
 }
 

@@ -86,7 +86,13 @@ export const FINANCING_COLUMNS: readonly CsvColumn[] = [
 
 export const REFRIGERANT_COLUMNS: readonly CsvColumn[] = [
   textCol('refrigerant', 'key', 'R-410A, R-32 or R-454B'),
-  moneyCol('cost_usd_per_lb', 'costCentsPerLb', 'Your cost of one pound, dollars'),
+  moneyCol('cost_usd_per_lb', 'costCentsPerLb', 'Your cost of one pound, dollars (or fill cost_usd_per_oz instead)'),
+  moneyCol(
+    'cost_usd_per_oz',
+    'costCentsPerOz',
+    'Your cost of one ounce, dollars (the charge is then priced by the ounce)',
+  ),
+  textCol('category', 'category', 'Category key (its sell rule and tax); empty for the company default'),
 ];
 
 export const DISCOUNT_LIMIT_COLUMNS: readonly CsvColumn[] = [

@@ -92,10 +92,25 @@ export const financingPlanSchema = z.object({
   active: z.boolean().default(true),
 });
 
-export const refrigerantCostSchema = z.object({
-  key: refrigerantSchema,
-  costCentsPerLb: money('Refrigerant cost'),
-});
+/**
+ * What the company pays for a refrigerant, by the pound or by the ounce (exactly one: the extra charge is
+ * then counted and priced in that unit), and the category that gives its sell rule and tax (issue 13).
+ */
+export const refrigerantCostSchema = z
+  .object({
+    key: refrigerantSchema,
+    costCentsPerLb: money('Refrigerant cost per lb').optional(),
+    costCentsPerOz: money('Refrigerant cost per oz').optional(),
+    category: keyField('Category').optional(),
+  })
+  .superRefine((r, ctx) => {
+    if ((r.costCentsPerLb === undefined) === (r.costCentsPerOz === undefined))
+      ctx.addIssue({
+        code: 'custom',
+        path: [r.costCentsPerLb === undefined ? 'costCentsPerLb' : 'costCentsPerOz'],
+        message: 'Give the cost either per lb or per oz (one of the two)',
+      });
+  });
 
 export const discountLimitSchema = z.object({
   key: z.enum(['owner', 'estimator', 'salesperson', 'installer'], { error: 'Choose a role' }),

@@ -391,7 +391,11 @@ export function computeDesignFromParsed({
     };
   });
   const priced = priceLines({
-    lines: buildTakeoff({ systems: forTakeoff, labor: laborTableOf(priceBook) }),
+    lines: buildTakeoff({
+      systems: forTakeoff,
+      labor: laborTableOf(priceBook),
+      refrigerantSoldBy: (r) => priceBook.items[`refrigerant:${r}`]?.soldBy ?? 'lb',
+    }),
     priceBook,
   });
   const anyA2l = systems.some((s) => s.refrigerant.safetyClass === 'A2L');

@@ -37,6 +37,8 @@ export const priceBookSchema = z.object({
       categoryName: nameField('Category', 60).optional(),
       /** false: its category is not taxable, so the line stays out of the tax base whatever the rule. */
       taxable: z.boolean().optional(),
+      /** A refrigerant's unit in the book: its extra charge is counted and priced by the lb (default) or the oz. */
+      soldBy: z.enum(['lb', 'oz']).optional(),
     }),
   ),
   laborRateCents: cents('Labor rate'),

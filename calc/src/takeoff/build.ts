@@ -344,7 +344,12 @@ function branchWiring(
 }
 
 /** Materials and labor lines for one system (equipment, line sets, accessories, electrical, refrigerant, labor), added to `out`. */
-function systemLines(s: SystemForTakeoff, out: LineMerger, labor: Labor): void {
+function systemLines(
+  s: SystemForTakeoff,
+  out: LineMerger,
+  labor: Labor,
+  refrigerantSoldBy: (r: OutdoorUnit['refrigerant']) => 'lb' | 'oz',
+): void {
   const name = s.system.name;
   const L = labor.h;
   out.add(`equipment:${s.outdoor.key}`, s.outdoor.description, 1, 'each', 'equipment', `outdoor unit of ${name}`);
@@ -431,17 +436,28 @@ function systemLines(s: SystemForTakeoff, out: LineMerger, labor: Labor): void {
         out,
       );
   }
-  // Refrigerant is priced by the pound put in (issue 9); the cylinder it comes from is the company's stock item.
+  // Refrigerant is priced by what is put in (issue 9), in the unit the price book sells it by (lb unless it says oz);
+  // the cylinder it comes from is the company's stock item.
   const r = s.refrigerant;
   if (r.extraChargeOz > 0) {
-    const lb = roundHalfUp(r.extraChargeOz / OZ_PER_LB, 2);
-    out.mat(
-      `refrigerant:${r.refrigerant}`,
-      `${r.refrigerant} refrigerant added on site`,
-      lb,
-      'lb',
-      `${r.extraChargeOz} oz extra charge ÷ 16 oz/lb = ${lb} lb (${name})`,
-    );
+    if (refrigerantSoldBy(r.refrigerant) === 'oz')
+      out.mat(
+        `refrigerant:${r.refrigerant}`,
+        `${r.refrigerant} refrigerant added on site`,
+        r.extraChargeOz,
+        'oz',
+        `${r.extraChargeOz} oz extra charge, priced by the ounce as the price book gives it (${name})`,
+      );
+    else {
+      const lb = roundHalfUp(r.extraChargeOz / OZ_PER_LB, 2);
+      out.mat(
+        `refrigerant:${r.refrigerant}`,
+        `${r.refrigerant} refrigerant added on site`,
+        lb,
+        'lb',
+        `${r.extraChargeOz} oz extra charge ÷ 16 oz/lb = ${lb} lb (${name})`,
+      );
+    }
   }
   out.mat('nitrogen:test', 'Dry nitrogen for pressure test and purge', 1, 'each', `one test per system (${name})`);
   out.labor(
@@ -466,12 +482,15 @@ function systemLines(s: SystemForTakeoff, out: LineMerger, labor: Labor): void {
 export function buildTakeoff({
   systems,
   labor = DEFAULT_LABOR_TABLE,
+  refrigerantSoldBy = () => 'lb',
 }: {
   readonly systems: readonly SystemForTakeoff[];
   readonly labor?: LaborTable | undefined;
+  /** The unit the price book sells each refrigerant by: the extra charge's line is counted in it. */
+  readonly refrigerantSoldBy?: (r: OutdoorUnit['refrigerant']) => 'lb' | 'oz';
 }): TakeoffLine[] {
   const out = new LineMerger();
   const table = new Labor(labor);
-  for (const s of systems) systemLines(s, out, table);
+  for (const s of systems) systemLines(s, out, table, refrigerantSoldBy);
   return out.lines();
 }

@@ -5,7 +5,7 @@ export interface TakeoffLine {
   readonly itemKey: string;
   readonly description: string;
   readonly quantity: number;
-  readonly unit: 'each' | 'ft' | 'h' | 'cylinder' | 'roll' | 'lb';
+  readonly unit: 'each' | 'ft' | 'h' | 'cylinder' | 'roll' | 'lb' | 'oz';
   readonly category: 'equipment' | 'material' | 'labor';
   readonly derivation: string;
 }

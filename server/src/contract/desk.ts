@@ -84,7 +84,7 @@ export type OptionPricingInput = z.input<typeof optionPricingSchema>;
 /** calc's design (zones → indoor units, systems → outdoor unit, circuits, electrical), checked by calc's schema. */
 export const optionDesignSchema = designSchema;
 
-const TAKEOFF_UNITS = ['each', 'ft', 'h', 'cylinder', 'roll', 'lb'] as const;
+const TAKEOFF_UNITS = ['each', 'ft', 'h', 'cylinder', 'roll', 'lb', 'oz'] as const;
 const TAKEOFF_CATEGORIES = ['equipment', 'material', 'labor'] as const;
 const quantity = bounded('Quantity', 0, 100_000);
 const unitCost = boundedInt('Unit cost', 0, 100_000_000, 'cents');

@@ -52,7 +52,9 @@ export async function referenceChecker(
     new Set(
       (await em.find(CompanyDataRowSchema, { company: companyId, dataset: d }, { fields: ['key'] })).map((r) => r.key),
     );
-  const categories = ['materials', 'labor', 'kits', 'models'].includes(dataset) ? await keysOf('categories') : null;
+  const categories = ['materials', 'labor', 'kits', 'models', 'refrigerants'].includes(dataset)
+    ? await keysOf('categories')
+    : null;
   const materials = dataset === 'kits' ? await keysOf('materials') : null;
   const models = dataset === 'models' ? await keysOf('models') : null;
   return (record) => {

@@ -235,6 +235,24 @@ describe('assumptions with no published source: the method statement’s figures
   });
 });
 
+describe('summer leakage ½ of winter against the stack-and-wind model', () => {
+  it('the basic model gives 0.53 for the review ranch’s 20 °F summer and 60 °F winter differences', () => {
+    // Q = A_L·√(Cs·ΔT + Cw·U²), one storey [MEM: ASHRAE Handbook—Fundamentals ch. 16 basic model and its
+    // stack coefficient Cs 0.0150; design winds 7.5 mph summer and 15 mph winter, also recalled]
+    // Cw 0.0065, one storey, shielding class 3 [PUB: wind-coefficient table "From ASHRAE, 1989", CRC Press
+    // companion material K10576, crcpress.com/downloads/K14361/K10576_Companion_CD.zip]
+    const cs = 0.015;
+    const cw = 0.0065;
+    const dtSummer = ranchHome.designConditions.outdoorCoolingDryBulbF - 75; // 20 °F
+    const dtWinter = 70 - ranchHome.designConditions.outdoorHeatingDryBulbF; // 60 °F
+    // √(0.015 × 20 + 0.0065 × 56.25) / √(0.015 × 60 + 0.0065 × 225) = √0.6656 / √2.3625 = 0.8159 / 1.5370
+    const ratio = Math.sqrt(cs * dtSummer + cw * 7.5 ** 2) / Math.sqrt(cs * dtWinter + cw * 15 ** 2);
+    expect(ratio).toBeCloseTo(0.531, 3);
+    const used = homeLoad({ home: ranchHome }).air;
+    expect(Math.abs(used.summerCfm / used.winterCfm - ratio)).toBeLessThan(0.05);
+  });
+});
+
 describe('daily-range fractions against a published diurnal curve', () => {
   it('the recalled ASHRAE table has the published curve’s shape: low at 04:00–05:00, top in the mid-afternoon, within 0.16 at every hour', () => {
     const cn = campbellNormanFractions();

@@ -67,9 +67,11 @@ export const ATTIC_RESPONSE = { vented: 0.45, radiantBarrier: 0.3, lagHours: 1 }
  * Design air leakage in summer as a fraction of the winter rate (less stack effect, lighter
  * design wind). The tightness table's ACH is the winter figure.
  * [Assumption (no published source found): ½. Residential tightness tables give summer rates about
- * half the winter ones, as recalled; the ASHRAE ch. 16 stack-and-wind model gives about 0.53 for 20 °F /
- * 7.5 mph against 60 °F / 15 mph with its one-storey coefficients as recalled — neither was found in a
- * public copy. Its effect on the review ranch (the largest of the assumptions) is stated in
+ * half the winter ones, as recalled. The ASHRAE basic stack-and-wind model Q = A_L·√(Cs·ΔT + Cw·U²)
+ * gives 0.53 for 20 °F / 7.5 mph against 60 °F / 15 mph on a one-storey house: its wind coefficient
+ * 0.0065 (shielding class 3) was seen in a public copy of the table (from ASHRAE 1989, CRC Press
+ * companion material K10576); the stack coefficient 0.0150 and the design winds are recalled. The test
+ * file works that ratio; the assumption's effect on the review ranch (the largest of them) is stated in
  * METHOD_ASSUMPTIONS and checked in tests/calc/method-constants.test.ts.]
  */
 export const SUMMER_LEAKAGE_FRACTION = 0.5;

@@ -96,14 +96,14 @@ export const METHOD_ASSUMPTIONS: readonly MethodAssumption[] = [
     range: 'at 0 to 0.06',
     ranch: null,
     effect:
-      'the angular ratio moves by at most 2 % at any angle, so the review ranch’s block moves by at most about 250 Btu/h (2 % of its 12,311 Btu/h of sun through glass)',
+      'the angular ratio moves by at most 2 % at any angle, so the example ranch’s block moves by at most about 250 Btu/h (2 % of its 12,311 Btu/h of sun through glass)',
   },
   {
     key: 'basement-floor',
     what: 'the basement-floor heat-loss formula (heat paths from the floor along half circles to the ground outside)',
     range: '—',
     ranch: null,
-    effect: 'no effect on the review ranch (slab on grade); it sets the heat loss of basement floors only',
+    effect: 'no effect on the example ranch (slab on grade); it sets the heat loss of basement floors only',
   },
 ];
 
@@ -116,7 +116,7 @@ export function methodAssumptionText(a: MethodAssumption): string {
   const r = a.ranch;
   const figures = r.low === r.high ? `${btuh(r.low)} Btu/h` : `${btuh(r.low)} to ${btuh(r.high)} Btu/h`;
   return (
-    `${head} ${a.range.charAt(0).toUpperCase()}${a.range.slice(1)}, the review ranch’s block cooling load${r.variant ? ` ${r.variant}` : ''} is ` +
+    `${head} ${a.range.charAt(0).toUpperCase()}${a.range.slice(1)}, the example ranch’s block cooling load${r.variant ? ` ${r.variant}` : ''} is ` +
     `${figures} (${btuh(r.asUsed)} as used).`
   );
 }

@@ -16,7 +16,8 @@ export function MethodNote({ open = false }: { open?: boolean }) {
       </ul>
       <h3 className="mt-3 font-semibold text-ink-900">Figures with no published source</h3>
       <p className="mt-1 text-ink-950">
-        These are stated assumptions. Each shows how far it moves the cooling load of an example 1,800 ft² ranch.
+        These are stated assumptions. Each shows how far it moves the cooling load of an example ranch: 1,800 ft², slab
+        on grade, 95 °F outdoors at 36° N.
       </p>
       <ul className="mt-1 list-disc pl-5 text-ink-950">
         {METHOD_ASSUMPTIONS.map((a) => (

@@ -133,6 +133,7 @@ describe('the desk on a phone', () => {
     await line.getByRole('button', { name: 'Save line' }).click();
     await line.getByText(/^generated /).waitFor();
     await line.locator('summary').getByText('edited', { exact: true }).waitFor();
+    await line.screenshot({ path: `${SHOTS}/desk-phone-line-edited-375.png` });
     await expectFitsWidth(page);
     await expectAccessible(page);
     await context.close();

@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { z } from 'zod';
 import { formatMoney } from '@calc';
-import { MAX_OPTIONS, mayEditOptions, mayMarkReady } from '@contract';
+import { MAX_OPTIONS, mayEditOptions, mayMarkReady, type BlockerRecord } from '@contract';
 import { Alert } from '../../../components/ui/alert';
 import { Button, buttonClass } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
@@ -18,6 +18,7 @@ import { modelsQueryOptions } from '../api/get-models';
 import { useSetReady } from '../api/set-ready';
 import { SizingOverride } from './sizing-override';
 import { CompareOptions } from './compare-options';
+import { DeskFold } from './desk-fold';
 import { OptionView } from './option-view';
 
 export const deskParams = z.object({ jobId: z.uuid({ message: 'That is not a job address.' }) });
@@ -57,6 +58,54 @@ function NewOption({ jobId, count, onCreated }: { jobId: string; count: number; 
       </Button>
       {create.isError ? <p className="w-full text-sm text-danger">{errorMessage(create.error)}</p> : null}
     </form>
+  );
+}
+
+const blockerKey = (b: BlockerRecord) => `${b.code}:${b.optionId ?? ''}:${b.message}`;
+
+/**
+ * What stops "ready to propose". Units outside their sizing range (each also said beside its unit) fold on a
+ * phone to one line that counts them per option; everything else stays listed in full.
+ */
+function Blockers({
+  blockers,
+  options,
+}: {
+  blockers: readonly BlockerRecord[];
+  options: readonly { id: string; name: string }[];
+}) {
+  if (blockers.length === 0) return null;
+  const sizing = blockers.filter((b) => b.code === 'sizing-outside-range');
+  const rest = blockers.filter((b) => b.code !== 'sizing-outside-range');
+  const perOption = options
+    .map((o) => ({ name: o.name, n: sizing.filter((b) => b.optionId === o.id).length }))
+    .filter((x) => x.n > 0)
+    .map((x) => `${x.name} ${x.n}`)
+    .join(', ');
+  const list = (bs: readonly BlockerRecord[]) => (
+    <ul className="w-full list-disc pl-5 text-sm text-amber-deep">
+      {bs.map((b) => (
+        <li key={blockerKey(b)}>{b.message}</li>
+      ))}
+    </ul>
+  );
+  return (
+    <>
+      {rest.length > 0 ? list(rest) : null}
+      {sizing.length > 0 ? (
+        <DeskFold
+          className="w-full"
+          summary={
+            <span className="font-semibold text-amber-deep">
+              {sizing.length === 1 ? '1 unit' : `${sizing.length} units`} sized outside the allowed range
+              {perOption ? ` (${perOption})` : ''}
+            </span>
+          }
+        >
+          {list(sizing)}
+        </DeskFold>
+      ) : null}
+    </>
   );
 }
 
@@ -104,13 +153,7 @@ export function DeskPage() {
             {r.markedReady ? 'Take the ready mark off' : 'Mark ready to propose'}
           </Button>
         ) : null}
-        {r.blockers.length > 0 ? (
-          <ul className="w-full list-disc pl-5 text-sm text-amber-deep">
-            {r.blockers.map((b) => (
-              <li key={`${b.code}:${b.optionId ?? ''}:${b.message}`}>{b.message}</li>
-            ))}
-          </ul>
-        ) : null}
+        <Blockers blockers={r.blockers} options={desk.options} />
         {ready.isError ? (
           <Alert tone="danger" title="Not marked ready">
             {errorMessage(ready.error)}

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
   ATTIC_RESPONSE,
@@ -58,6 +59,20 @@ describe('angular SHGC from the optics of two clear panes', () => {
     const tauA = Math.exp((-2 * 0.03) / Math.cos(tr));
     expect(glassTransmittance(60, 2, n, 0.03)).toBeCloseTo(tauR * tauA, 6);
     expect(shgcAngleRatio(60)).toBeCloseTo((tauR * tauA) / glassTransmittance(0, 2, n, 0.03), 6);
+  });
+
+  it('property: the ratio is 1 at normal incidence, 0 at grazing, and never rises with the angle', () => {
+    // Fresnel reflectance grows and the slanted path lengthens with θ, so transmittance can only fall
+    expect(shgcAngleRatio(0)).toBe(1);
+    expect(shgcAngleRatio(90)).toBe(0);
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 90, noNaN: true }), fc.double({ min: 0, max: 90, noNaN: true }), (a, b) => {
+        const [lo, hi] = a <= b ? [a, b] : [b, a];
+        const rLo = shgcAngleRatio(lo);
+        const rHi = shgcAngleRatio(hi);
+        return rHi <= rLo + 1e-12 && rHi >= 0 && rLo <= 1;
+      }),
+    );
   });
 
   it('the hemispherical (diffuse) ratio is 2·∫ ratio·cos θ·sin θ dθ (Simpson’s rule here)', () => {

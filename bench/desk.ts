@@ -13,7 +13,7 @@
  * printed with the load average. BENCH_CPU_PROF=<dir> runs the server under `node --cpu-prof` and prints
  * its profile by area and by function (those requests are slower: read the summary, not the figures).
  * BENCH_DESK_PORT (default 4898) is the server's port, BENCH_DESK_RUNS (default 200) the requests per
- * route. The bench job (40 rooms, three options) is deleted when it ends. Informational, never fails.
+ * route; BENCH_SERVER_DIR=<checkout> runs that checkout's server (a before/after in one sitting). The bench job (40 rooms, three options) is deleted when it ends. Informational, never fails.
  */
 import { randomBytes, randomUUID } from 'node:crypto';
 import { availableParallelism, loadavg } from 'node:os';
@@ -54,6 +54,8 @@ const FRAME_MS = 16;
 const RUNS = Number(process.env.BENCH_DESK_RUNS ?? 200);
 const PORT = Number(process.env.BENCH_DESK_PORT ?? 4898);
 const APP = `http://127.0.0.1:${PORT}`;
+// Another checkout's server (e.g. an older commit, for a before/after in one sitting).
+const SERVER_DIR = resolve(process.env.BENCH_SERVER_DIR ?? '.');
 const CPU_PROF = process.env.BENCH_CPU_PROF ? resolve(process.env.BENCH_CPU_PROF) : null;
 const BENCH_MARK = 'made by bench/desk.ts';
 const directions = ['N', 'E', 'S', 'W'] as const;
@@ -284,22 +286,34 @@ async function benchJob(db: pg.Pool, ownerEmail: string): Promise<{ jobId: strin
   return { jobId, companyId, ids };
 }
 
-/** Sequential requests; wall time at this client, the server process's CPU per request from /proc. */
+/**
+ * Sequential requests, each after its `prepare` step (not measured): wall time at this client, and the server
+ * process's CPU (from /proc) summed over the measured requests only, per request.
+ */
 async function requests(
   pid: number | undefined,
   send: (i: number) => Promise<Response>,
+  prepare?: (i: number) => Promise<void>,
 ): Promise<{ wall: Stats; cpu: { mean: number } }> {
-  for (let i = 0; i < 20; i += 1) await (await send(i)).arrayBuffer();
-  const wall: number[] = [];
-  const before = cpuMs(pid);
-  for (let i = 0; i < RUNS; i += 1) {
+  const one = async (i: number) => {
+    if (prepare) await prepare(i);
+    const c0 = cpuMs(pid);
     const t0 = performance.now();
     const r = await send(i);
     await r.arrayBuffer();
-    wall.push(performance.now() - t0);
+    const wall = performance.now() - t0;
     if (r.status >= 300) throw new Error(`the server answered ${r.status}`);
+    return { wall, cpu: cpuMs(pid) - c0 };
+  };
+  for (let i = 0; i < 20; i += 1) await one(RUNS + i);
+  const wall: number[] = [];
+  let cpu = 0;
+  for (let i = 0; i < RUNS; i += 1) {
+    const m = await one(i);
+    wall.push(m.wall);
+    cpu += m.cpu;
   }
-  return { wall: stats(wall), cpu: { mean: (cpuMs(pid) - before) / RUNS } };
+  return { wall: stats(wall), cpu: { mean: cpu / RUNS } };
 }
 
 /** The same rows the route reads, by node-pg with no ORM: the job in scope, its rooms and options, the company's catalog, price book and settings. */
@@ -344,7 +358,7 @@ async function throughServer(): Promise<Row[]> {
         LOG_LEVEL: 'info',
         QUEUE_WORKERS: 'off',
       },
-      '.',
+      SERVER_DIR,
       CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${CPU_PROF}`] : [],
     );
     await waitFor(`${APP}/api/health`);
@@ -389,21 +403,48 @@ async function throughServer(): Promise<Row[]> {
     );
 
     const floor = await measure(() => bareRead(db, jobId, companyId), 20, RUNS);
-    const getFrom = profileClockUs();
-    const get = await requests(app.pid, () => send('GET', `/api/jobs/${jobId}/desk`));
-    const getTo = profileClockUs();
-    // The estimator changes one option's deposit: the PATCH answers that option worked out again.
-    const patch = await requests(app.pid, async (i) => {
-      const r = await send(
+    const getDesk = () => send('GET', `/api/jobs/${jobId}/desk`);
+    const windows: { label: string; fromUs: number; toUs: number }[] = [];
+    const phase = async <T>(label: string, run: () => Promise<T>): Promise<T> => {
+      const fromUs = profileClockUs();
+      const out = await run();
+      windows.push({ label, fromUs, toUs: profileClockUs() });
+      return out;
+    };
+    const get = await phase('GET …/desk, nothing changed', () => requests(app.pid, getDesk));
+    // A room changes before each read (a length never used before in the run): every option is worked out afresh.
+    const firstRoom = ids[0] ?? '';
+    let roomVersion = 1;
+    const afresh = await phase('GET …/desk after a room changed', () =>
+      requests(app.pid, getDesk, async (i) => {
+        const r = await send(
+          'PATCH',
+          `/api/jobs/${jobId}/rooms/${firstRoom}`,
+          { input: { ...room(0, firstRoom), lengthFt: 10 + (i % 400) / 20 } },
+          { 'if-match': `"${roomVersion}"` },
+        );
+        if (r.status !== 200) throw new Error(`the room save answered ${r.status}: ${await r.text()}`);
+        roomVersion = ((await r.json()) as { room: { version: number } }).room.version;
+      }),
+    );
+    // The estimator changes one option's deposit (a value not used before in the run): the PATCH answers that
+    // option worked out again; then the desk is read again, as the desk's screen does after a save.
+    const patchOption = (i: number) =>
+      send(
         'PATCH',
         `/api/jobs/${jobId}/options/${first.id}`,
-        { pricing: { ...pricingOf(0), deposit: { kind: 'percent', value: i % 2 ? 10 : 20 } } },
+        { pricing: { ...pricingOf(0), deposit: { kind: 'percent', value: (i % 1000) / 10 } } },
         { 'if-match': `"${version}"` },
-      );
-      version += 1;
-      return r;
-    });
-    const patchTo = profileClockUs();
+      ).then(async (r) => {
+        version += 1;
+        return r;
+      });
+    const patch = await phase('PATCH of an option', () => requests(app.pid, patchOption));
+    const after = await phase('GET …/desk after an option changed', () =>
+      requests(app.pid, getDesk, async (i) => {
+        await (await patchOption(500 + i)).arrayBuffer();
+      }),
+    );
     await stopAll();
     if (CPU_PROF) {
       // CPU.<date>.<time>.<pid>.<thread>.<n>.cpuprofile: the server's main thread (0), not tsx's loader thread.
@@ -414,14 +455,15 @@ async function throughServer(): Promise<Row[]> {
       if (newest) {
         const file = join(CPU_PROF, newest);
         console.log(`  profile: ${file}`);
-        summariseProfile(file, 25, `${RUNS + 20} GET …/desk`, { fromUs: getFrom, toUs: getTo });
-        summariseProfile(file, 15, `${RUNS + 20} PATCH of an option`, { fromUs: getTo, toUs: patchTo });
+        for (const w of windows) summariseProfile(file, 20, `${RUNS + 20} × ${w.label}`, w);
       }
     }
     return [
       { what: 'floor: bare SQL read of the same rows (node-pg)', ...floor },
-      { what: 'GET …/desk, server process (from /proc)', ...get },
-      { what: 'PATCH an option (pricing) with its answer', ...patch },
+      { what: 'GET …/desk, nothing changed (server CPU from /proc)', ...get },
+      { what: 'GET …/desk after a room changed (all worked out)', ...afresh },
+      { what: "PATCH of an option's deposit, with its answer", ...patch },
+      { what: 'GET …/desk after that PATCH', ...after },
     ];
   } finally {
     await stopAll();
@@ -433,7 +475,9 @@ async function throughServer(): Promise<Row[]> {
 console.log(
   'desk benchmark — three options of a 40-room home (loads, sizing, lines, charge, electrical, takeoff, edits, price, explanations)',
 );
-console.log(`  load average (1/5/15 min) before: ${load()} on ${availableParallelism()} CPU(s); ${RUNS} runs each`);
+console.log(
+  `  load average (1/5/15 min) before: ${load()} on ${availableParallelism()} CPU(s); ${RUNS} runs each; server from ${SERVER_DIR}`,
+);
 const rows: Row[] = [];
 try {
   rows.push(...(await inMemory()));

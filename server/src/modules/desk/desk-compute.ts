@@ -44,6 +44,12 @@ import type { FieldError } from '../../lib/errors';
 import type { CompanyDesk } from './desk-inputs';
 import type { DesignOption, StoredTakeoffEdit } from './option.entity';
 
+/** What an option's figures are worked out from: its inputs (an entity, a row, or a trial copy of either). */
+export type OptionInputs = Pick<
+  DesignOption,
+  'id' | 'name' | 'design' | 'pricing' | 'takeoffEdits' | 'chosenModels' | 'discountRequest' | 'preliminary'
+>;
+
 /** A takeoff line as the desk holds it: calc's merged line (generated value beside the edited one), priced. */
 export interface DeskLine extends MergedLine {
   readonly extendedCostCents: number;
@@ -95,7 +101,7 @@ export interface ComputedOption {
  * smaller design, a cheaper price book), an amount discount becomes a larger share. Beyond both the
  * approved percent and the requester's limit, the approval no longer covers it.
  */
-function recheckDiscount(option: DesignOption, price: OptionPrice): { percent: number; reason: string } | null {
+function recheckDiscount(option: OptionInputs, price: OptionPrice): { percent: number; reason: string } | null {
   const req = option.discountRequest;
   if (req?.state !== 'approved' || price.discountCents <= 0) return null;
   if (!isDeepStrictEqual(option.pricing.discounts, req.discounts)) return null;
@@ -216,7 +222,7 @@ export function applyTakeoffEdits(
 }
 
 /** The models an option names that the company no longer offers: retired (inactive) or deleted from the catalog. */
-function discontinuedOf(option: DesignOption, desk: CompanyDesk): { key: string; name: string }[] {
+function discontinuedOf(option: OptionInputs, desk: CompanyDesk): { key: string; name: string }[] {
   return modelKeysOf(option.design).flatMap((key) => {
     const now = desk.models.get(key);
     if (now?.active) return [];
@@ -226,7 +232,7 @@ function discontinuedOf(option: DesignOption, desk: CompanyDesk): { key: string;
 }
 
 /** The engine data for one option: the company's, plus the chosen models the catalog has lost. */
-function dataFor(option: DesignOption, data: EngineData): EngineData {
+function dataFor(option: OptionInputs, data: EngineData): EngineData {
   const missing = modelKeysOf(option.design).filter((k) => !data.desk.models.has(k) && option.chosenModels[k]);
   if (missing.length === 0) return data;
   const models = new Map<string, CatalogModel>(data.desk.models);
@@ -247,7 +253,7 @@ function problemsOf(e: unknown): FieldError[] {
 
 /** Works one option out from its saved inputs (never from a figure a browser sent). */
 export function computeOption(
-  option: DesignOption,
+  option: OptionInputs,
   home: HomeInput | ParsedHome | { problem: FieldError },
   data: EngineData,
   discounts?: OptionPricing['discounts'],

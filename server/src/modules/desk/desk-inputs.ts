@@ -37,14 +37,23 @@ export interface CompanyDesk {
   readonly settings: PriceBookSettings;
 }
 
-type Row = { dataset: string; data: unknown };
+/** One row of the company's catalog and price book as stored (`company_data_row`). */
+export type CompanyDataRow = { dataset: string; data: unknown };
+
+/** The datasets an option is worked out from, in the order the reads list them (by key). */
+export const DESK_DATASETS_SQL = `('models', 'labor', 'materials', 'kits', 'refrigerants', 'categories', 'financing', 'discount-limits')`;
 
 export async function loadCompanyDesk(em: EntityManager, companyId: string): Promise<CompanyDesk> {
-  const rows = await em.execute<Row[]>(
-    `select dataset, data from "company_data_row" where company_id = ? and dataset in ('models', 'labor', 'materials', 'kits', 'refrigerants', 'categories', 'financing', 'discount-limits')
+  const rows = await em.execute<CompanyDataRow[]>(
+    `select dataset, data from "company_data_row" where company_id = ? and dataset in ${DESK_DATASETS_SQL}
      order by key`,
     [companyId],
   );
+  return companyDeskFromRows(rows, (await getSettings(em, companyId)).data);
+}
+
+/** The company's rows (ordered by key) and price-book settings as the engine's inputs. */
+export function companyDeskFromRows(rows: readonly CompanyDataRow[], settings: PriceBookSettings): CompanyDesk {
   const models = new Map<string, CatalogModel>();
   const laborTasks: LaborTask[] = [];
   const materials: Material[] = [];
@@ -81,6 +90,5 @@ export async function loadCompanyDesk(em: EntityManager, companyId: string): Pro
       if (d.success) discountLimits.set(d.data.key, d.data);
     }
   }
-  const settings = (await getSettings(em, companyId)).data;
   return { models, laborTasks, materials, kits, refrigerants, categories, financing, discountLimits, settings };
 }

@@ -26,30 +26,51 @@ import { ConflictError, ForbiddenError, NotFoundError, UnprocessableError, Valid
 import type { ServiceContext } from '../../lib/service-context';
 import { assertVersion } from '../../lib/version-lock';
 import { CompanySchema } from '../companies/company.entity';
+import type { Job } from '../jobs/job.entity';
 import { UserSchema } from '../users/user.entity';
 import { computeOption, modelKeysOf, type ComputedOption } from './desk-compute';
-import { compute, listOptions, readDeskJob, type DeskJob } from './desk-read';
+import {
+  compute,
+  listOptions,
+  readDeskJob,
+  readDeskView,
+  type DeskJob,
+  type DeskJobState,
+  type OptionRow,
+} from './desk-read';
 import { DesignOptionSchema, type DesignOption, type StoredTakeoffEdit } from './option.entity';
 
 export interface OptionView {
-  readonly option: DesignOption;
+  readonly option: OptionRow;
   readonly computed: ComputedOption;
 }
 
-export interface DeskView {
-  readonly desk: DeskJob;
+/** The desk of a job: its job as a row (GET) or as the entity a write changes (J = Job). */
+export interface DeskView<J extends DeskJobState = DeskJobState> {
+  readonly desk: DeskJob<J>;
   readonly options: OptionView[];
   readonly blockers: BlockerRecord[];
 }
 
-/** Everything the desk shows for a job: each option worked out, and why the job cannot be proposed yet. */
-export async function getDesk(ctx: ServiceContext, jobId: string): Promise<DeskView> {
-  const desk = await readDeskJob(ctx, jobId);
-  const options = (await listOptions(ctx, desk.job.id)).map((option) => ({ option, computed: compute(desk, option) }));
+/** Each option worked out, and why the job cannot be proposed yet. */
+function viewOf<J extends DeskJobState>(desk: DeskJob<J>, rows: readonly OptionRow[]): DeskView<J> {
+  const options = rows.map((option) => ({ option, computed: compute(desk, option) }));
   const blockers: BlockerRecord[] = options.length
     ? options.flatMap((o) => o.computed.blockers)
     : [{ code: 'no-options', optionId: null, message: DESK_MESSAGES.noOptions }];
   return { desk, options, blockers };
+}
+
+/** Everything the desk shows for a job (GET …/desk: read by SQL, no entities). */
+export async function getDesk(ctx: ServiceContext, jobId: string): Promise<DeskView> {
+  const { desk, options } = await readDeskView(ctx, jobId);
+  return viewOf(desk, options);
+}
+
+/** The desk with the job as an entity, for the ready mark to change. */
+async function getDeskToChange(ctx: ServiceContext, jobId: string): Promise<DeskView<Job>> {
+  const desk = await readDeskJob(ctx, jobId);
+  return viewOf(desk, await listOptions(ctx, desk.job.id));
 }
 
 async function findOption(ctx: ServiceContext, desk: DeskJob, optionId: string): Promise<DesignOption> {
@@ -472,10 +493,10 @@ export async function markReady(
   ctx: ServiceContext,
   jobId: string,
   body: { sizingOverride?: { reason: string } } = {},
-): Promise<DeskView> {
+): Promise<DeskView<Job>> {
   if (!mayMarkReady(ctx.actor.role))
     throw new ForbiddenError('Only an estimator or the owner marks a job ready to propose.');
-  const view = await getDesk(ctx, jobId);
+  const view = await getDeskToChange(ctx, jobId);
   const { job } = view.desk;
   if (job.status !== 'design')
     throw new UnprocessableError(`A job is marked ready to propose while in design; this one is ${job.status}.`, {
@@ -511,10 +532,10 @@ export async function markReady(
   return view;
 }
 
-export async function unmarkReady(ctx: ServiceContext, jobId: string): Promise<DeskView> {
+export async function unmarkReady(ctx: ServiceContext, jobId: string): Promise<DeskView<Job>> {
   if (!mayMarkReady(ctx.actor.role))
     throw new ForbiddenError('Only an estimator or the owner marks a job ready to propose.');
-  const view = await getDesk(ctx, jobId);
+  const view = await getDeskToChange(ctx, jobId);
   view.desk.job.readyAt = null;
   view.desk.job.readyBy = null;
   view.desk.job.readyOverride = null;

@@ -1,4 +1,4 @@
-import { homeLoad } from '@calc';
+import { homeLoad, METHOD_ASSUMPTIONS, methodAssumptionText } from '@calc';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { cleanup, render, screen, within } from '@testing-library/react';
 import { Suspense } from 'react';
@@ -81,6 +81,10 @@ describe('loads page', () => {
     expect(within(totals).getByText('Estimate')).toBeInTheDocument();
     expect(screen.getByRole('article', { name: 'Loads for Bedroom 2' })).toBeInTheDocument();
     expect(screen.getByText('How these numbers are worked out')).toBeInTheDocument();
+    // The method states each figure with no published source, with what it does to the example ranch
+    const assumptions = screen.getByRole('list', { name: 'Figures with no published source', hidden: true });
+    for (const a of METHOD_ASSUMPTIONS) expect(assumptions).toHaveTextContent(methodAssumptionText(a));
+    expect(assumptions).toHaveTextContent('summer air leakage ½ of the winter rate');
     expect(document.body.textContent).not.toMatch(/Checked against server|Checking against the server/);
   });
 

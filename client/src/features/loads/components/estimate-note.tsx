@@ -1,8 +1,10 @@
 import { METHOD_ASSUMPTIONS, METHOD_NOTES, methodAssumptionText } from '@calc';
+import { useId } from 'react';
 
 export { EstimateBadge } from './estimate-badge';
 
 export function MethodNote({ open = false }: { open?: boolean }) {
+  const assumptionsId = useId();
   return (
     <details open={open} className="rounded-md border border-line bg-paper p-3 text-sm">
       <summary className="min-h-touch cursor-pointer font-semibold text-ink-900">
@@ -14,12 +16,14 @@ export function MethodNote({ open = false }: { open?: boolean }) {
           <li key={n}>{n}</li>
         ))}
       </ul>
-      <h3 className="mt-3 font-semibold text-ink-900">Figures with no published source</h3>
+      <h3 id={assumptionsId} className="mt-3 font-semibold text-ink-900">
+        Figures with no published source
+      </h3>
       <p className="mt-1 text-ink-950">
         These are stated assumptions. Each shows how far it moves the cooling load of an example ranch: 1,800 ft², slab
         on grade, 95 °F outdoors at 36° N.
       </p>
-      <ul className="mt-1 list-disc pl-5 text-ink-950">
+      <ul aria-labelledby={assumptionsId} className="mt-1 list-disc pl-5 text-ink-950">
         {METHOD_ASSUMPTIONS.map((a) => (
           <li key={a.key}>{methodAssumptionText(a)}</li>
         ))}

@@ -76,9 +76,14 @@ function designSummary(option: OptionRecord): string {
   const d = designSchema.safeParse(option.design);
   if (!d.success || d.data.zones.length === 0) return 'Not designed yet';
   const zones = d.data.zones.length;
-  const systems = d.data.systems.map((s) => s.outdoorUnitKey).filter((k): k is string => Boolean(k));
+  const systems = d.data.systems.map((s) => s.outdoorUnitKey);
   const units = systems.length === 1 ? '1 outdoor unit' : `${systems.length} outdoor units`;
-  return `${zones} ${zones === 1 ? 'zone' : 'zones'} on ${units}${systems.length > 0 ? ` (${systems.join(', ')})` : ''} — open to change`;
+  // "2 × TSL-S9H-O" rather than the same model named twice.
+  const models = [...new Set(systems)].map((k) => {
+    const n = systems.filter((x) => x === k).length;
+    return n > 1 ? `${n} × ${k}` : k;
+  });
+  return `${zones} ${zones === 1 ? 'zone' : 'zones'} on ${units}${models.length > 0 ? ` (${models.join(', ')})` : ''} — open to change`;
 }
 
 /** One option: its design on the left, what calc made of it on the right (sizing, lines, charge, electrical, takeoff, price). */

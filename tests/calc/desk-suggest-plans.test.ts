@@ -95,6 +95,31 @@ describe('suggest on the demo ranch with no zones given (issue 13: a first price
   });
 });
 
+describe('a plan the desk would block loses to one it would not', () => {
+  // The desk journey's zones (tests/e2e/desk-journey.test.ts): closed rooms, so ducted heads.
+  const zones = (lowestDuctOpeningFt?: number) =>
+    [
+      ['z1', 'Great room and bedroom two', ['room-1', 'room-4']],
+      ['z2', 'Kitchen and bedrooms', ['room-2', 'room-3', 'room-5']],
+    ].map(([key, name, roomIds]) => ({
+      key: key as string,
+      name: name as string,
+      roomIds: roomIds as string[],
+      ...(lowestDuctOpeningFt === undefined ? {} : { lowestDuctOpeningFt }),
+    }));
+  it('without the lowest duct opening (the A2L check takes 0.6 m) the multi-zone plan fails the room-size check, so it is not the suggestion', () => {
+    const s = suggestDesign({ home: ranch, models, zones: zones() });
+    expect(run(ranch, s.design).blockers).toEqual([]);
+    expect(s.warnings.filter((w) => w.startsWith('Enter the height of the lowest duct opening'))).toHaveLength(2);
+  });
+  it('with the openings 7 ft up the multi-zone plan passes, and every unit is in range', () => {
+    const s = suggestDesign({ home: ranch, models, zones: zones(7) });
+    expect(run(ranch, s.design).blockers).toEqual([]);
+    expect(s.design.systems.map((y) => byKey.get(y.outdoorUnitKey)?.kind)).toEqual(['outdoor-multi-zone']);
+    for (const u of verdicts(ranch, s.design)) expect(u.sizing.withinRange, `${u.name} ${u.key}`).toBe(true);
+  });
+});
+
 describe('a zone of closed rooms when the catalog has no ducted unit', () => {
   it('is split into its rooms, each with its own head, and the warning says why', () => {
     const ductless = models.filter((m) => m.indoorType !== 'slim-ducted' && m.kind !== 'outdoor-ducted');

@@ -110,17 +110,27 @@ describe('suggest on the demo ranch (issue 13: "proposes units from the active c
       heating: job.designConditions.outdoorHeatingDryBulbF as number,
     };
     const idOf = (n: string) => ranch?.rooms.find((r) => r.input.name === n)?.id ?? n;
-    const cases: Record<string, { zones?: { key: string; name: string; roomIds: string[] }[] }> = {
+    const cases: Record<
+      string,
+      { zones?: { key: string; name: string; roomIds: string[]; lowestDuctOpeningFt?: number }[] }
+    > = {
       'no zones given': {},
       'the whole house as one zone': { zones: [{ key: 'z1', name: 'Whole house', roomIds: RANCH.map(idOf) }] },
       // The desk journey's zones (tests/e2e/desk-journey.test.ts).
       'two zones': {
         zones: [
-          { key: 'z1', name: 'Great room and bedroom two', roomIds: ['Great room', 'Bedroom two'].map(idOf) },
+          // Ducted heads over closed rooms, with their lowest duct opening 7 ft up (the A2L room-size check's h0).
+          {
+            key: 'z1',
+            name: 'Great room and bedroom two',
+            roomIds: ['Great room', 'Bedroom two'].map(idOf),
+            lowestDuctOpeningFt: 7,
+          },
           {
             key: 'z2',
             name: 'Kitchen and bedrooms',
             roomIds: ['Kitchen and dining', 'Main bedroom', 'Bedroom three'].map(idOf),
+            lowestDuctOpeningFt: 7,
           },
         ],
       },

@@ -4,12 +4,14 @@ import { explanation, type Explanation } from '../explain/explanation';
 import { formatNumber, formatPercent, formatQuantity } from '../explain/format';
 import { coincidentLoad, homeLoadFromParsed, type HomeLoad } from '../loads/home-load';
 import { parseOrThrow } from '../parse';
-import type { CircuitInput, DesignInput } from '../schemas/design';
+import { designSchema, type CircuitInput, type DesignInput } from '../schemas/design';
 import { floorAreaFt2 } from '../geometry';
-import type { IndoorUnit, OutdoorUnit } from '../schemas/equipment';
+import { equipmentCatalogSchema, type IndoorUnit, type OutdoorUnit } from '../schemas/equipment';
 import { homeInputSchema, type HomeInput } from '../schemas/home';
 import { checkCombination, checkSizing, type LoadToMeet, type SizingCheck } from '../sizing/match';
-import { DEFAULT_SIZING_POLICY, type SizingPolicy } from '../sizing/policy';
+import { DEFAULT_SIZING_POLICY, sizingPolicySchema, type SizingPolicy } from '../sizing/policy';
+import { computeDesignFromParsed } from './compute-design';
+import { priceBookSchema, pricingSchema } from '../pricing/schemas';
 
 /** A suggested design: the input computeDesign takes, with why each unit was chosen. */
 export interface Suggestion {
@@ -176,18 +178,21 @@ function joinPlans(plans: readonly Plan[]): Plan {
 }
 
 /**
- * How a plan compares (lower is better, in this order): units outside their range, percentage points outside, heads not
- * of the kind that suits their zone, equipment cost.
+ * How a plan compares (lower is better, in this order): what would stop the job being marked ready (an A2L room too
+ * small for the system's charge, a line past its limit, a refused combination — computeDesign's blockers), units outside
+ * their range, percentage points outside, heads not of the kind that suits their zone, equipment cost.
  */
 export interface PlanScore {
+  readonly blockers: number;
   readonly outOfRange: number;
   readonly missPoints: number;
   readonly unsuited: number;
   readonly costCents: number;
 }
 
-function scoreOf(p: Plan): PlanScore {
+function scoreOf(p: Plan, blockers: number): PlanScore {
   return {
+    blockers,
     outOfRange: p.sizings.filter((x) => !x.withinRange).length,
     missPoints: Math.round(p.sizings.reduce((s, x) => s + sizingMiss(x), 0) * 10) / 10,
     unsuited: p.unsuited,
@@ -198,14 +203,12 @@ function scoreOf(p: Plan): PlanScore {
 /** Negative when a is the better plan. */
 function compareScores(a: PlanScore, b: PlanScore): number {
   return (
-    a.outOfRange - b.outOfRange || a.missPoints - b.missPoints || a.unsuited - b.unsuited || a.costCents - b.costCents
+    a.blockers - b.blockers ||
+    a.outOfRange - b.outOfRange ||
+    a.missPoints - b.missPoints ||
+    a.unsuited - b.unsuited ||
+    a.costCents - b.costCents
   );
-}
-
-/** The better of two plans (the first on a tie). */
-function better(a: Plan | null, b: Plan | null): Plan | null {
-  if (a === null || b === null) return a ?? b;
-  return compareScores(scoreOf(b), scoreOf(a)) < 0 ? b : a;
 }
 
 /**
@@ -238,10 +241,10 @@ export function groupByCapacity<Z>(zones: readonly Z[], loadOf: (z: Z) => number
  *   except rooms too small for any head in range (the smallest head would be oversized), which share a slim ducted
  *   head with other small rooms of their floor. Each candidate's heads go on multi-zone outdoor units (one, else two,
  *   three…, grouped by capacity and, as a second try, in the home's order — each within its ports, port sizes and
- *   connected range) or single-zone pairs, whichever is closer to the sizing ranges. The plan chosen has the fewest
- *   units outside their range, then the fewest percentage points outside, then the fewest heads not of the kind that suits their zone,
- *   then the lowest equipment cost; the reasons
- *   list every candidate's verdict.
+ *   connected range) or single-zone pairs, whichever plan scores better. Plans score (PlanScore) on computeDesign's
+ *   blockers (an A2L room too small for the charge, a line past its limit, a refused combination), then units outside
+ *   their range, percentage points outside, heads not of the kind that suits their zone, and equipment cost; the
+ *   reasons list every candidate's verdict.
  * - Zones given: kept as given. A zone no head can meet, or several closed rooms the home's ducts serve, goes on a
  *   ducted heat pump when that comes closer to the range than a head of the kind the zone suits; a zone of several
  *   closed rooms gets a slim ducted head (never a wall head), or when the catalog has none, is split into its rooms.
@@ -303,7 +306,41 @@ export function suggestDesign({
   const electrical = { circuitLengthFt: 30 };
   let tokens = 0;
   /** A placeholder key for a plan's system (and its reasons) until the chosen plan numbers its systems s1, s2… */
-  const token = () => `#system-${(tokens += 1)}#`;
+  const token = () => `plan.${(tokens += 1)}.system`;
+  // What computeDesign needs to judge a plan: the prices play no part in its blockers.
+  const parsedCatalog = parseOrThrow(equipmentCatalogSchema, engine);
+  const parsedPolicy = parseOrThrow(sizingPolicySchema, policy);
+  const noPrices = parseOrThrow(priceBookSchema, { items: {}, laborRateCents: 0 });
+  const noPricing = parseOrThrow(pricingSchema, { method: 'margin', percent: 0 });
+  /** computeDesign's blockers for a plan (its zones and systems alone), as the desk will find them. */
+  const blockersOf = (p: Plan): number => {
+    if (p.zones.length === 0) return 0;
+    try {
+      return computeDesignFromParsed({
+        home,
+        design: parseOrThrow(designSchema, { zones: p.zones, systems: p.systems }),
+        catalog: parsedCatalog,
+        priceBook: noPrices,
+        pricing: noPricing,
+        policy: parsedPolicy,
+        loads,
+        explainPrice: false,
+      }).blockers.length;
+    } catch {
+      return Number.POSITIVE_INFINITY;
+    }
+  };
+  const scores = new WeakMap<Plan, PlanScore>();
+  const score = (p: Plan): PlanScore => {
+    let sc = scores.get(p);
+    if (!sc) scores.set(p, (sc = scoreOf(p, blockersOf(p))));
+    return sc;
+  };
+  /** The better of two plans (the first on a tie). */
+  const better = (a: Plan | null, b: Plan | null): Plan | null => {
+    if (a === null || b === null) return a ?? b;
+    return compareScores(score(b), score(a)) < 0 ? b : a;
+  };
   const enteredByZone = new Map(entered.map((c) => [c.zoneKey, c]));
   const circuit = (zoneKey: string): CircuitInput => enteredByZone.get(zoneKey) ?? { zoneKey, lengthFt: lineLengthFt };
   const zoneInput = (z: Draft, indoorUnitKey: string): DesignInput['zones'][number] => ({
@@ -518,7 +555,7 @@ export function suggestDesign({
         }
         if (parts.length === units) found = better(found, joinPlans(parts));
       }
-      if (found && scoreOf(found).outOfRange === 0) break;
+      if (found && score(found).blockers === 0 && score(found).outOfRange === 0) break;
     }
     return found;
   };
@@ -682,8 +719,7 @@ export function suggestDesign({
       candidates.push({ label: 'Ductless, a head for each room (small rooms sharing a ducted head)', plan: ductless });
   }
   let chosen: { label: string; plan: Plan } | null = null;
-  for (const c of candidates)
-    if (chosen === null || compareScores(scoreOf(c.plan), scoreOf(chosen.plan)) < 0) chosen = c;
+  for (const c of candidates) if (chosen === null || compareScores(score(c.plan), score(chosen.plan)) < 0) chosen = c;
   if (!chosen)
     return {
       design: { zones: [], systems: [] },
@@ -700,7 +736,7 @@ export function suggestDesign({
   });
   if (candidates.length > 1) {
     const words = (c: { label: string; plan: Plan }) => {
-      const sc = scoreOf(c.plan);
+      const sc = score(c.plan);
       const units = c.plan.sizings.length;
       return `${c.label}: ${sc.outOfRange === 0 ? `all ${units} sizing checks in range` : `${sc.outOfRange} of ${units} sizing checks outside their range (${formatNumber(sc.missPoints, 1, { trim: true })} points in all)`}`;
     };
@@ -712,7 +748,7 @@ export function suggestDesign({
         unit: '',
         valueText: chosen.label,
         text: `${candidates.map(words).join('; ')}. Chosen: ${chosen.label} — the fewest units outside their range, then the fewest points outside, then the kind of head that suits each zone, then the lower equipment cost.`,
-        status: scoreOf(plan).outOfRange === 0 ? 'ok' : 'warning',
+        status: score(plan).blockers === 0 && score(plan).outOfRange === 0 ? 'ok' : 'warning',
         source: 'Active catalog, company sizing policy',
       }),
     );

@@ -51,6 +51,7 @@ export * from './src/refrigerant/circuits';
 export * from './src/electrical/nec';
 export * from './src/electrical/raceway';
 export * from './src/electrical/plan';
+export * from './src/electrical/disconnect-run';
 export * from './src/commissioning/checks';
 
 export * from './src/takeoff/defaults';

@@ -183,6 +183,68 @@ describe('ducted systems', () => {
   });
 });
 
+describe('disconnects beyond a whip and the heat kit’s circuit (issue 13)', () => {
+  it('a far disconnect gets a priced liquid-tight run and a warning; a bad distance is refused; the heat kit has its own', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const plain = singleZone(rooms[0] ?? '');
+    const o = await newOption(estimator, job.id, { name: 'Far disconnect', design: plain });
+    const url = `/api/jobs/${job.id}/options/${o.id}`;
+    const withElectrical = (electrical: Record<string, unknown>, extra: Record<string, unknown> = {}) => ({
+      ...plain,
+      systems: [{ ...plain.systems[0], ...extra, electrical: { ...plain.systems[0]?.electrical, ...electrical } }],
+    });
+    const bad = await patch(estimator, url, o.version).send({ design: withElectrical({ disconnectDistanceFt: 600 }) });
+    expectProblem(bad, 400);
+    expect(bad.body.errors.map((e: { path: string }) => e.path)).toContain(
+      'design.systems.0.electrical.disconnectDistanceFt',
+    );
+    const stored = await t.orm.em.fork().execute(`select design from design_option where id = ?`, [o.id]);
+    expect(stored[0]?.design.systems[0].electrical.disconnectDistanceFt).toBe(5); // unchanged: the default
+
+    const far = await patch(estimator, url, o.version).send({ design: withElectrical({ disconnectDistanceFt: 20 }) });
+    expect(far.status, JSON.stringify(far.body)).toBe(200);
+    const r = far.body.option.result;
+    const lines = r.takeoff as { itemKey: string; quantity: number; unitCostCents: number | null }[];
+    const line = (k: string) => lines.find((l) => l.itemKey === k);
+    // 20 ft + 2 × 1 ft → 25 ft of liquid-tight; (25 − 2) ÷ 4.5 → 6 spans → 7 supports [NEC 350.30(A)].
+    expect(line('raceway:lfmc:1/2')).toMatchObject({ quantity: 25 });
+    expect(line('raceway:lfmc:1/2')?.unitCostCents).not.toBeNull();
+    expect(line('fitting:lfmc:1/2')?.quantity).toBe(2);
+    expect(line('strap:lfmc:1/2')?.quantity).toBe(7);
+    expect(lines.some((l) => l.itemKey.startsWith('whip:'))).toBe(false);
+    expect(r.warnings.some((w: string) => w.includes('a 6 ft whip does not reach'))).toBe(true);
+    expect(r.warnings.some((w: string) => w.startsWith('No price for'))).toBe(false);
+    const e = r.systems[0].electrical;
+    expect(e.explanations.find((x: { key: string }) => x.key === 's1:elec:disconnect-run').status).toBe('warning');
+    expect(e.caution).toContain('licensed electrician');
+
+    // A ducted system with a heat kit whose disconnect is out of sight of the air handler: it blocks "ready".
+    const ducted = {
+      zones: [{ key: 'z1', name: 'House', roomIds: rooms, indoorUnitKey: 'TSL-AH36' }],
+      systems: [
+        {
+          key: 's1',
+          name: 'Ducted',
+          outdoorUnitKey: 'TSL-HP24',
+          heatKitKey: 'TSL-HK5',
+          circuits: [{ zoneKey: 'z1', lengthFt: 25 }],
+          electrical: { circuitLengthFt: 40, heatKitDisconnectDistanceFt: 60 },
+        },
+      ],
+    };
+    const kit = await patch(estimator, url, far.body.option.version).send({ design: ducted });
+    expect(kit.status, JSON.stringify(kit.body)).toBe(200);
+    const k = kit.body.option.result.systems[0].heatKitElectrical;
+    expect(k.disconnectRun).toMatchObject({ kind: 'field-run' });
+    expect(
+      kit.body.option.result.takeoff.find((l: { itemKey: string }) => l.itemKey === 'disconnect:60a').quantity,
+    ).toBe(2);
+    const ready = await post(estimator, `/api/jobs/${job.id}/ready`).send();
+    expectProblem(ready, 422);
+    expect(JSON.stringify(ready.body)).toContain('The disconnect must be within sight');
+  });
+});
+
 describe('server totals equal calc’s', () => {
   /** calc's own answer for a design on the job, from the company's data as the server reads it now. */
   async function direct(

@@ -286,11 +286,16 @@ export function computeDesignFromParsed({
       s.heatKitKey === undefined
         ? undefined
         : lookup(heatKits, s.heatKitKey, 'UNKNOWN_EQUIPMENT', ['systems', si, 'heatKitKey']);
+    // The heat kit's circuit runs to the air handler: its disconnect is the air handler's, not the outdoor unit's.
     const kitElectrical = kit
       ? electricalPlan({
           mcaA: kit.mcaA,
           mocpA: kit.mocpA,
-          input: s.electrical,
+          input: {
+            ...s.electrical,
+            disconnectDistanceFt: s.electrical.heatKitDisconnectDistanceFt ?? 0,
+            disconnectVisible: true,
+          },
           keyPrefix: `${p}heat-kit:`,
           label: 'heat kit',
         })

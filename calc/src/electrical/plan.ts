@@ -1,6 +1,8 @@
 import { CAUTIONS } from '../refrigerant/cautions';
 import type { ElectricalInput } from '../schemas/design';
 import { breakerSizeA, copperAmpacityA, copperWireAwg, disconnectWithinSight } from './nec';
+import { disconnectRun, WHIP_LENGTH_FT, type DisconnectRun } from './disconnect-run';
+import { branchConductors } from './raceway';
 import { CalcError } from '../errors';
 import { explanation, input as inputOf, type Explanation } from '../explain/explanation';
 import { formatNumber, formatPercent, formatQuantity } from '../explain/format';
@@ -26,6 +28,8 @@ export interface ElectricalPlan {
   readonly voltageDropPercent: number | null;
   /** The smaller-drop conductor advised when the chosen one drops more than 3 %, else null. */
   readonly voltageDropAwg: number | null;
+  /** From the disconnect to the equipment: a whip, or a field-made liquid-tight run beyond its reach; null without a conductor and breaker. */
+  readonly disconnectRun: DisconnectRun | null;
   readonly warnings: readonly string[];
   /** Conductor, breaker, disconnect and voltage drop, each with its why. */
   readonly explanations: readonly Explanation[];
@@ -95,6 +99,17 @@ export function electricalPlan({
       `The ${input.circuitLengthFt} ft run drops ${formatPercent(dropPct, 1)} of ${volts} V at the MCA on ${wireAwg} AWG: ${advised === null ? 'the electrician sizes a larger conductor' : `${advised} AWG keeps it within ${VOLTAGE_DROP_ADVISED_PERCENT} %`}.`,
     );
   const disconnectA = (breakerA ?? mocpA) <= 60 ? 60 : 100;
+  const run =
+    wireAwg === null || breakerA === null
+      ? null
+      : disconnectRun({
+          distanceFt: input.disconnectDistanceFt,
+          set: branchConductors({ awg: wireAwg, ocpdA: breakerA }),
+        });
+  if (run?.kind === 'field-run')
+    warnings.push(
+      `The disconnect is ${formatQuantity(run.distanceFt, 'ft', 1)} from the ${label}: a ${WHIP_LENGTH_FT} ft whip does not reach, so the takeoff counts ${run.lengthFt} ft of ${run.size} in liquid-tight flexible metal conduit with its conductors, two connectors and ${run.supports} supports (secured within 1 ft of each end and at least every 4½ ft, NEC 350.30(A)). A disconnect beside the unit is the usual practice; it must stay within sight of the unit (visible and no more than 50 ft away, NEC 440.14 and Art. 100). A licensed electrician confirms.`,
+    );
   const A = (v: number) => formatQuantity(v, 'A', 1);
   const method =
     input.wiringMethod === 'thhn-conduit'
@@ -141,9 +156,32 @@ export function electricalPlan({
       verdict: withinSight
         ? 'Within sight (visible and ≤ 50 ft).'
         : 'Not within sight: it must be visible from the unit and ≤ 50 ft away.',
-      source: 'NEC 440.14; "within sight" NEC Art. 100',
+      source:
+        'NEC 440.14 (within sight from and readily accessible from the equipment); "within sight" = visible and ≤ 50 ft, NEC Art. 100 (as quoted in EC&M Code Q&A)',
     }),
   ];
+  if (run)
+    explanations.push(
+      explanation({
+        key: `${keyPrefix}elec:disconnect-run`,
+        label: `Disconnect to ${label}`,
+        value: run.lengthFt,
+        unit: 'ft',
+        valueText:
+          run.kind === 'whip'
+            ? `${WHIP_LENGTH_FT} ft whip, ${run.size} in`
+            : `${run.lengthFt} ft liquid-tight run, ${run.size} in`,
+        text: `${run.text}; ${run.fillText}`,
+        inputs: [inputOf('Disconnect from the unit', run.distanceFt, 'ft', formatQuantity(run.distanceFt, 'ft', 1))],
+        status: run.kind === 'whip' ? 'ok' : 'warning',
+        verdict:
+          run.kind === 'whip'
+            ? 'A pre-made whip reaches.'
+            : 'Beyond a whip: a field-made liquid-tight run, secured along its length. A disconnect beside the unit is the usual practice.',
+        source:
+          'NEC 350.30(A) (LFMC secured within 1 ft of each end and every 4½ ft), as quoted in EC&M Code Q&A 2021; 6 ft whip and 1 ft end allowances common practice; NEC Ch. 9 Table 1 fill',
+      }),
+    );
   if (dropV !== null && dropPct !== null && wireAwg !== null)
     explanations.push(
       explanation({
@@ -180,6 +218,7 @@ export function electricalPlan({
     voltageDropV: dropV === null ? null : roundHalfUp(dropV, 2),
     voltageDropPercent: dropPct === null ? null : roundHalfUp(dropPct, 2),
     voltageDropAwg: advised,
+    disconnectRun: run,
     warnings,
     explanations,
     caution: CAUTIONS.electrical,

@@ -62,6 +62,11 @@ export const electricalInputSchema = z.object({
   circuitLengthFt: bounded('Circuit length', 1, 300, 'ft'),
   disconnectDistanceFt: bounded('Disconnect distance', 0, 500, 'ft').default(5),
   disconnectVisible: z.boolean().default(true),
+  /**
+   * The heat kit's disconnect from the air handler, ft (a system with a heat kit); absent → beside it, within
+   * a whip's reach. Beyond 50 ft it is not within sight.
+   */
+  heatKitDisconnectDistanceFt: bounded('Heat kit disconnect distance', 0, 500, 'ft').optional(),
   /** Supply voltage for the voltage-drop check, V; absent → 240. */
   supplyVoltage: z
     .union([z.literal(208), z.literal(230), z.literal(240)], { error: 'Choose 208, 230 or 240 V' })

@@ -343,6 +343,86 @@ function branchWiring(
   );
 }
 
+/**
+ * The disconnect of one branch circuit and what joins it to the equipment (calc's `disconnectRun`): a
+ * pre-made whip within its reach, else liquid-tight flexible metal conduit by the foot with its conductors
+ * (two hots and the ground, each the run + terminations + waste, rounded up to 5 ft), two connectors and
+ * its supports.
+ */
+function disconnectLines(e: ElectricalPlan, name: string, equipment: string, out: LineMerger): void {
+  out.mat(
+    `disconnect:${e.disconnectA}a`,
+    `AC disconnect, ${e.disconnectA} A non-fused`,
+    1,
+    'each',
+    `within sight of ${equipment}; breaker ${e.breakerA ?? '?'} A (${name})`,
+  );
+  const run = e.disconnectRun;
+  if (!run || e.breakerA === null || e.wireAwg === null) return;
+  if (run.kind === 'whip') {
+    out.mat(
+      `whip:${run.size}x${run.lengthFt}ft`,
+      `Liquid-tight whip ${run.size} in × ${run.lengthFt} ft`,
+      1,
+      'each',
+      `disconnect to ${equipment}; ${run.text}; ${run.fillText} (${name})`,
+    );
+    return;
+  }
+  out.mat(
+    `raceway:lfmc:${run.size}`,
+    `Liquid-tight flexible metal conduit ${run.size} in`,
+    run.lengthFt,
+    'ft',
+    `disconnect to ${equipment}; ${run.text}; ${run.fillText} (${name})`,
+  );
+  out.mat(
+    `fitting:lfmc:${run.size}`,
+    `Liquid-tight connector ${run.size} in`,
+    2,
+    'each',
+    `one at each end of the liquid-tight run (${name})`,
+  );
+  out.mat(
+    `strap:lfmc:${run.size}`,
+    `Conduit strap ${run.size} in`,
+    run.supports,
+    'each',
+    `supports of the ${run.lengthFt} ft liquid-tight run (${name})`,
+  );
+  const set = branchConductors({ awg: e.wireAwg, ocpdA: e.breakerA });
+  const each = run.lengthFt + 2 * T.terminationAllowanceFtPerEnd;
+  const waste = 1 + T.wireWastePercent / 100;
+  const lengthText = `(${run.lengthFt} ft run + 2 × ${T.terminationAllowanceFtPerEnd} ft terminations) × ${waste} waste`;
+  const ft = (count: number) => roundUpTo(roundHalfUp(count * each * waste, 2), T.cableStepFt);
+  out.mat(
+    `wire:thhn-conduit:${set.hot.awg}awg`,
+    `${set.hot.awg} AWG copper THHN`,
+    ft(set.hot.count),
+    'ft',
+    `liquid-tight run to ${equipment}: ${set.hot.count} conductors × ${lengthText}, rounded up to 5 ft (${name})`,
+  );
+  out.mat(
+    `wire:thhn-conduit-ground:${set.ground.awg}awg`,
+    `${set.ground.awg} AWG copper THHN, green (equipment ground)`,
+    ft(set.ground.count),
+    'ft',
+    `liquid-tight run to ${equipment}: equipment ground (NEC Table 250.122), ${set.ground.count} conductor × ${lengthText}, rounded up to 5 ft (${name})`,
+  );
+}
+
+/** A branch circuit's labor: base + its run by the foot, plus a field-made liquid-tight run by the foot. */
+function electricalLabor(e: ElectricalPlan, circuitFt: number, name: string, out: LineMerger, labor: Labor): void {
+  const L = labor.h;
+  const run = e.disconnectRun?.kind === 'field-run' ? e.disconnectRun.lengthFt : 0;
+  out.labor(
+    'labor:electrical',
+    'Branch circuit, disconnect and whip',
+    L.electricalBase + (circuitFt + run) * L.electricalPerFt,
+    `${L.electricalBase} h + ${run > 0 ? `(${circuitFt} ft circuit + ${run} ft liquid-tight run)` : `${circuitFt} ft`} × ${L.electricalPerFt} h/ft, ${labor.by('electricalBase', 'electricalPerFt')} (${name})`,
+  );
+}
+
 /** Materials and labor lines for one system (equipment, line sets, accessories, electrical, refrigerant, labor), added to `out`. */
 function systemLines(
   s: SystemForTakeoff,
@@ -373,25 +453,7 @@ function systemLines(
   out.labor('labor:set-outdoor', 'Set outdoor unit', L[set], `${L[set]} h, ${labor.by(set)} (${name})`);
   const e = s.electrical;
   const wiring = s.system.electrical;
-  const disconnectA = (e.breakerA ?? e.mocpA) <= 60 ? 60 : 100;
-  out.mat(
-    `disconnect:${disconnectA}a`,
-    `AC disconnect, ${disconnectA} A non-fused`,
-    1,
-    'each',
-    `within sight of ${name}; breaker ${e.breakerA ?? '?'} A`,
-  );
-  if (e.breakerA !== null && e.wireAwg !== null) {
-    const set = branchConductors({ awg: e.wireAwg, ocpdA: e.breakerA });
-    const whip = racewaySize({ kind: 'lfmc', set });
-    out.mat(
-      `whip:${whip.size}x${T.whipLengthFt}ft`,
-      `Liquid-tight whip ${whip.size} in × ${T.whipLengthFt} ft`,
-      1,
-      'each',
-      `disconnect to unit; ${whip.text} (${name})`,
-    );
-  }
+  disconnectLines(e, `${name}`, 'the outdoor unit', out);
   if (e.breakerA !== null)
     out.mat(
       `breaker:2p-${e.breakerA}a`,
@@ -409,15 +471,15 @@ function systemLines(
       name,
       out,
     );
-  out.labor(
-    'labor:electrical',
-    'Branch circuit, disconnect and whip',
-    L.electricalBase + wiring.circuitLengthFt * L.electricalPerFt,
-    `${L.electricalBase} h + ${wiring.circuitLengthFt} ft × ${L.electricalPerFt} h/ft, ${labor.by('electricalBase', 'electricalPerFt')} (${name})`,
-  );
+  electricalLabor(e, wiring.circuitLengthFt, name, out, labor);
   if (s.heatKit) {
     out.add(`equipment:${s.heatKit.key}`, s.heatKit.description, 1, 'each', 'equipment', `backup heat for ${name}`);
     const k = s.heatKitElectrical;
+    // The heat kit's own branch circuit: its disconnect at the air handler and the whip (or run) to it, and its labor.
+    if (k) {
+      disconnectLines(k, `${name}, heat kit`, 'the air handler', out);
+      electricalLabor(k, wiring.circuitLengthFt, `${name}, heat kit`, out, labor);
+    }
     if (k && k.breakerA !== null)
       out.mat(
         `breaker:2p-${k.breakerA}a`,

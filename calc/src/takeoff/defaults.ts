@@ -22,8 +22,6 @@ export const TAKEOFF_DEFAULTS = {
   wireWastePercent: 10,
   /** EMT is sold in 10 ft lengths [common practice]. */
   emtStickFt: 10,
-  /** A pre-made liquid-tight whip from the disconnect to the unit [common practice]. */
-  whipLengthFt: 6,
   /** Refrigerant sold in cylinders of this many lb. */
   cylinderLb: { 'R-410A': 25, 'R-32': 20, 'R-454B': 20 },
 } as const;

@@ -342,8 +342,10 @@ export function computeOption(
   for (const s of design.systems) {
     if (!s.combination.ok) block('combination-refused', s.combination.warnings.join(' ') || `${s.name}: refused.`);
     for (const b of s.refrigerant.blockers) block('limit-exceeded', b);
-    if (s.electrical.breakerA === null || s.electrical.wireAwg === null || !s.electrical.disconnectWithinSight)
-      for (const w of s.electrical.warnings) block('limit-exceeded', w);
+    // The outdoor unit's branch circuit and the heat kit's: no breaker or wire fits, or a disconnect out of sight.
+    for (const e of s.heatKitElectrical ? [s.electrical, s.heatKitElectrical] : [s.electrical])
+      if (e.breakerA === null || e.wireAwg === null || !e.disconnectWithinSight)
+        for (const w of e.warnings) block('limit-exceeded', w);
   }
   const monthly = data.desk.financing.map((f) => ({
     planKey: f.key,

@@ -4,9 +4,20 @@ import { FieldShell, inputClass } from '../../../components/ui/field-shell';
 
 /**
  * A number the estimator types, held as a number in the form. A value not entered yet is NaN in the
- * form (the schema's "enter a number" names it) and an empty box on screen, never the text "NaN".
+ * form (the schema's "enter a number" names it) and an empty box on screen, never the text "NaN". An
+ * `optional` field left empty is absent (undefined): the schema's default or "not given" applies.
  */
-export function AmountField({ name, label, hint }: { name: string; label: string; hint?: string }) {
+export function AmountField({
+  name,
+  label,
+  hint,
+  optional = false,
+}: {
+  name: string;
+  label: string;
+  hint?: string;
+  optional?: boolean;
+}) {
   const id = useId();
   const { control } = useFormContext();
   const { field, fieldState } = useController({ name, control });
@@ -28,7 +39,8 @@ export function AmountField({ name, label, hint }: { name: string; label: string
         value={typed ?? shown}
         onChange={(e) => {
           setTyped(e.target.value);
-          field.onChange(e.target.value.trim() === '' ? Number.NaN : Number(e.target.value));
+          const empty = e.target.value.trim() === '';
+          field.onChange(empty ? (optional ? undefined : Number.NaN) : Number(e.target.value));
         }}
         onBlur={() => {
           setTyped(null);

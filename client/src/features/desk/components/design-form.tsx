@@ -245,6 +245,14 @@ function DuctsAndHeat({
           label="Heat kit (backup heat)"
           options={heatKitOptions(models)}
         />
+        {system.heatKitKey ? (
+          <AmountField
+            name={`systems.${s}.electrical.heatKitDisconnectDistanceFt`}
+            label="Heat kit disconnect from the air handler (ft)"
+            hint="Leave empty when it sits beside the air handler."
+            optional
+          />
+        ) : null}
         {backup ? (
           <Why e={backup} label="Backup heat needed at the design temperature" />
         ) : (
@@ -282,7 +290,7 @@ function Systems({
           name: `Outdoor unit ${systems.fields.length + 1}`,
           outdoorUnitKey: '',
           circuits: [{ zoneKey: '', lengthFt: Number.NaN, liftFt: 0, liftDirection: 'indoor-above' }],
-          electrical: { circuitLengthFt: Number.NaN },
+          electrical: { circuitLengthFt: Number.NaN, disconnectDistanceFt: 5 },
         })
       }
       onRemove={(s) => systems.remove(s)}
@@ -294,6 +302,10 @@ function Systems({
             <TextField name={`systems.${s}.name`} label="System name" autoComplete="off" />
             <Choice name={`systems.${s}.outdoorUnitKey`} label="Outdoor unit" options={modelOptions(models, true)} />
             <AmountField name={`systems.${s}.electrical.circuitLengthFt`} label="Branch circuit length (ft)" />
+            <AmountField
+              name={`systems.${s}.electrical.disconnectDistanceFt`}
+              label="Disconnect from the outdoor unit (ft)"
+            />
           </div>
           <Circuits s={s} />
           <DuctsAndHeat s={s} models={models} whys={whys} />

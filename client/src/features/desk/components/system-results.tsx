@@ -48,6 +48,12 @@ function ElectricalBlock({
         {e.voltageDropPercent === null || e.voltageDropPercent === undefined
           ? ''
           : `, voltage drop ${formatPercent(e.voltageDropPercent, 1)}`}
+        {e.disconnectA === undefined ? '' : `; disconnect ${formatNumber(e.disconnectA)} A`}
+        {e.disconnectRun
+          ? e.disconnectRun.kind === 'whip'
+            ? ` with a ${formatNumber(e.disconnectRun.lengthFt)} ft whip`
+            : ` with ${formatNumber(e.disconnectRun.lengthFt)} ft of liquid-tight conduit`
+          : ''}
         .
       </p>
       {whys.length > 0 ? (

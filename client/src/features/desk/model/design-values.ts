@@ -21,6 +21,7 @@ export function designValues(option: OptionRecord): DesignInput {
         ...s,
         ducts: s.ducts,
         heatKitKey: s.heatKitKey,
+        electrical: { ...s.electrical, heatKitDisconnectDistanceFt: s.electrical.heatKitDisconnectDistanceFt },
         circuits: s.circuits.map((c) => ({ ...c, liftDirection: c.liftDirection ?? 'indoor-above' })),
       })),
     };
@@ -32,7 +33,7 @@ export function designValues(option: OptionRecord): DesignInput {
         name: 'Outdoor unit 1',
         outdoorUnitKey: '',
         circuits: [{ zoneKey: 'zone-1', lengthFt: Number.NaN, liftFt: 0, liftDirection: 'indoor-above' }],
-        electrical: { circuitLengthFt: Number.NaN },
+        electrical: { circuitLengthFt: Number.NaN, disconnectDistanceFt: 5 },
       },
     ],
   };

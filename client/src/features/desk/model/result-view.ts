@@ -64,6 +64,10 @@ const electricalView = z.object({
   breakerA: z.number().nullable(),
   wireAwg: z.number().nullable(),
   disconnectA: z.number().optional(),
+  disconnectRun: z
+    .object({ kind: z.enum(['whip', 'field-run']), size: z.string(), lengthFt: z.number() })
+    .nullable()
+    .optional(),
   voltageDropPercent: z.number().nullable().optional(),
   warnings: z.array(z.string()).default([]),
   explanations: z.array(explanationView).default([]),

@@ -86,7 +86,11 @@ describe('the desk on a phone', () => {
     for (const system of systems) {
       await system.getByText(/^Total extra charge/).waitFor();
       await system.getByRole('complementary', { name: 'Refrigerant and pressure work' }).waitFor();
-      await system.getByText(/^MCA .* → breaker/).waitFor();
+      // The outdoor unit's circuit first (a heat kit's own circuit follows it with its own caution).
+      await system
+        .getByText(/^MCA .* → breaker/)
+        .first()
+        .waitFor();
       await system.getByRole('complementary', { name: 'Electrical', exact: true }).waitFor();
     }
     await expectFoldedLines(results);

@@ -3,6 +3,7 @@ import { QueryWidgetBoundary } from '../../components/errors/query-widget-bounda
 import { useParams } from 'react-router-dom';
 import { z } from 'zod';
 import { JobEditsProvider } from '../../entities/job/job-edits';
+import { useAfterIdle } from '../../lib/use-after-idle';
 import { WalkthroughView } from '../../features/walkthrough/components/walkthrough-view';
 import { useWalkthroughJobEdits } from '../../features/walkthrough/sync/job-edits';
 
@@ -33,14 +34,18 @@ export function JobWalkthrough({ jobId }: { jobId: string }) {
 /** /jobs/:jobId — the walk-through, then the first price; the loader is in app/job-route-loaders.ts. */
 export default function JobWalkthroughRoute() {
   const { jobId } = jobParams.parse(useParams());
+  // The first price (its code, its schemas and the desk it reads) comes once the rooms take typing (issue 11).
+  const firstPriceNow = useAfterIdle();
   return (
     <>
       <JobWalkthrough jobId={jobId} />
-      <QueryWidgetBoundary name="the first price">
-        <Suspense fallback={null}>
-          <FirstPrice jobId={jobId} />
-        </Suspense>
-      </QueryWidgetBoundary>
+      {firstPriceNow ? (
+        <QueryWidgetBoundary name="the first price">
+          <Suspense fallback={null}>
+            <FirstPrice jobId={jobId} />
+          </Suspense>
+        </QueryWidgetBoundary>
+      ) : null}
     </>
   );
 }

@@ -196,38 +196,48 @@ export function JobDetailsPanel({ job }: { job: JobRecord }) {
   const canEdit = viewer !== null && mayEditJob(viewer.role);
   const customer = useQuery({ ...customerQueryOptions(job.customer.id), enabled: canEdit });
   const edits = useJobEdits();
+  // The form is made when the fold is first opened: folded, it is only its line, so the walk-through's
+  // first seconds on a phone do not pay for a form nobody has opened yet (issue 11). Once made it stays.
+  const [opened, setOpened] = useState(false);
   return (
-    <details className="rounded-lg border border-line bg-white p-4">
+    <details
+      className="rounded-lg border border-line bg-white p-4"
+      onToggle={(e) => {
+        if (e.currentTarget.open) setOpened(true);
+      }}
+    >
       <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">
         Job details{' '}
         <span className="ml-2 rounded-full bg-ink-50 px-3 py-1 text-sm font-semibold text-ink-800">
           {jobStatusLabels[job.status]}
         </span>
       </summary>
-      <div className="mt-4 flex flex-col gap-6">
-        {canEdit ? <StatusMoves job={job} viewer={viewer} /> : null}
-        {!canEdit ? (
-          <ReadOnlyPeople job={job} />
-        ) : customer.data ? (
-          <DetailsForm
-            job={job}
-            customer={edits.overlayCustomer(customer.data)}
-            office={viewer !== null && isOfficeRole(viewer.role)}
-          />
-        ) : customer.isError ? (
-          <Alert tone="danger" title="Could not load the customer’s details.">
-            {errorMessage(customer.error)}
-          </Alert>
-        ) : (
-          <Spinner label="Loading the customer’s details…" />
-        )}
-        {/* Kept apart from Save, so a thumb on a phone does not find it by accident. */}
-        {viewer && mayDeleteJob(viewer, job) ? (
-          <div className="border-t border-line pt-4">
-            <DeleteJobButton job={job} />
-          </div>
-        ) : null}
-      </div>
+      {opened ? (
+        <div className="mt-4 flex flex-col gap-6">
+          {canEdit ? <StatusMoves job={job} viewer={viewer} /> : null}
+          {!canEdit ? (
+            <ReadOnlyPeople job={job} />
+          ) : customer.data ? (
+            <DetailsForm
+              job={job}
+              customer={edits.overlayCustomer(customer.data)}
+              office={viewer !== null && isOfficeRole(viewer.role)}
+            />
+          ) : customer.isError ? (
+            <Alert tone="danger" title="Could not load the customer’s details.">
+              {errorMessage(customer.error)}
+            </Alert>
+          ) : (
+            <Spinner label="Loading the customer’s details…" />
+          )}
+          {/* Kept apart from Save, so a thumb on a phone does not find it by accident. */}
+          {viewer && mayDeleteJob(viewer, job) ? (
+            <div className="border-t border-line pt-4">
+              <DeleteJobButton job={job} />
+            </div>
+          ) : null}
+        </div>
+      ) : null}
     </details>
   );
 }

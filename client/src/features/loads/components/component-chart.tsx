@@ -1,6 +1,7 @@
 import type { LoadComponents } from '@calc';
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { COMPONENT_KEYS, COMPONENT_LABELS } from '../model/compute';
+import { groupedNumber } from '../../../lib/grouped-number';
 
 interface Props {
   sensible: LoadComponents;
@@ -12,7 +13,7 @@ interface Props {
   ducts?: boolean | undefined;
 }
 
-const btuh = (n: number) => `${Math.round(n).toLocaleString('en-US')} Btu/h`;
+const btuh = (n: number) => `${groupedNumber(Math.round(n))} Btu/h`;
 
 /**
  * Where the load comes from, one bar pair per component (cooling gain vs heat loss), Btu/h.

@@ -1,7 +1,8 @@
 import type { RoomLoad } from '@calc';
 import { hourLabel } from './home-totals';
+import { groupedNumber } from '../../../lib/grouped-number';
 
-const n = (v: number) => v.toLocaleString('en-US');
+const n = groupedNumber;
 const FACING: Record<string, string> = {
   N: 'north',
   NE: 'north-east',

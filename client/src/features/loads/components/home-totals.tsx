@@ -2,6 +2,7 @@ import { lazy, Suspense, type ComponentProps } from 'react';
 import { useNearView } from '../../../lib/use-near-view';
 import type { HomeLoad } from '@calc';
 import { EstimateBadge } from './estimate-badge';
+import { groupedNumber } from '../../../lib/grouped-number';
 
 const HourlyChart = lazy(() => import('./hourly-chart'));
 
@@ -23,7 +24,7 @@ function NearHourlyChart(props: ComponentProps<typeof HourlyChart>) {
   );
 }
 
-const n = (v: number) => v.toLocaleString('en-US');
+const n = groupedNumber;
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
 /** "15:00" for a design-day hour (solar time). */

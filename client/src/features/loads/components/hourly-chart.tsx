@@ -1,7 +1,8 @@
 import type { HomeHour } from '@calc';
 import { Area, AreaChart, CartesianGrid, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { groupedNumber } from '../../../lib/grouped-number';
 
-const n = (v: number) => v.toLocaleString('en-US');
+const n = groupedNumber;
 
 /** The whole home's sensible gain through the design day, with the block hour marked. Loaded on demand. */
 export default function HourlyChart({ hours, blockHour }: { hours: readonly HomeHour[]; blockHour: number }) {

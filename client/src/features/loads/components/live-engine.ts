@@ -1,4 +1,5 @@
-import { startTransition, useEffect, useState } from 'react';
+import { startTransition, useEffect, useRef, useState } from 'react';
+import type { LivePrime } from '../model/live-room';
 import { useAfterIdle } from '../../../lib/use-after-idle';
 
 /**
@@ -9,37 +10,62 @@ import { useAfterIdle } from '../../../lib/use-after-idle';
  */
 export type LoadEngine = typeof import('./live-parts');
 
-let loaded: LoadEngine | null = null;
 let loading: Promise<LoadEngine> | null = null;
 
 /** The engine, fetched once per page; a failed fetch (no signal, no cached copy) may be asked again. */
 export function loadEngine(): Promise<LoadEngine> {
-  loading ??= import('./live-parts').then(
-    (m) => (loaded = m),
-    (e: unknown) => {
-      loading = null;
-      throw e;
-    },
-  );
+  loading ??= import('./live-parts').catch((e: unknown) => {
+    loading = null;
+    throw e;
+  });
   return loading;
 }
 
 export type EngineState =
   { readonly status: 'ready'; readonly engine: LoadEngine } | { readonly status: 'loading' | 'failed' };
 
+let ready: Promise<LoadEngine> | null = null;
+/** The engine once it has been got ready (what a live part mounted later starts with). */
+let readyEngine: LoadEngine | null = null;
+
+/**
+ * The engine, got ready once per page for the home the first asker gives (`primeLive`: the rooms
+ * parsed and the hours worked out in slices a keystroke can come between), so the first figures' render
+ * only recombines. Every live part waits for the same promise and turns ready in the same moment.
+ */
+function engineReady(home: LivePrime | undefined): Promise<LoadEngine> {
+  ready ??= loadEngine().then(
+    async (engine) => {
+      // Getting ready is only a head start: if it fails, the render works the figures out (or says why not).
+      if (home) await engine.primeLive(home).catch(() => undefined);
+      readyEngine = engine;
+      return engine;
+    },
+    (e: unknown) => {
+      ready = null;
+      throw e;
+    },
+  );
+  return ready;
+}
+
 /**
  * The engine once the page has had its first idle moment (the form first), at once when it is already
  * here (every editor after the first, a room switched to). 'failed' when it could not be fetched.
+ * `prime`: the home it will be asked about (see engineReady).
  */
-export function useLoadEngine(): EngineState {
+export function useLoadEngine(prime?: LivePrime): EngineState {
   const idle = useAfterIdle();
   const [state, setState] = useState<EngineState>(() =>
-    loaded ? { status: 'ready', engine: loaded } : { status: 'loading' },
+    readyEngine ? { status: 'ready', engine: readyEngine } : { status: 'loading' },
   );
+  // The home as it stands when the engine arrives (a ref: asking does not start again on each render).
+  const home = useRef(prime);
+  home.current = prime;
   useEffect(() => {
     if (state.status !== 'loading' || !idle) return;
     let live = true;
-    loadEngine().then(
+    engineReady(home.current).then(
       // The first figures render as a transition (in slices a keystroke can come between).
       (engine) => live && startTransition(() => setState({ status: 'ready', engine })),
       () => live && setState({ status: 'failed' }),

@@ -28,7 +28,7 @@ function useSteadyRooms(rooms: Rooms): Rooms {
 
 /** The whole home, recomputed in the browser from the rooms as they stand (saved or waiting). */
 export function LiveHomeTotals({ rooms, designConditions, tightness, house }: Props) {
-  const engine = useLoadEngine();
+  const engine = useLoadEngine({ rooms, house, designConditions, tightness });
   const steady = useSteadyRooms(rooms);
   const parts = engine.status === 'ready' ? engine.engine : null;
   const result = useMemo(

@@ -1,7 +1,8 @@
 import type { RoomLoad } from '@calc';
 import { tons } from '../model/tons';
+import { groupedNumber } from '../../../lib/grouped-number';
 
-const n = (v: number) => v.toLocaleString('en-US');
+const n = groupedNumber;
 
 /** The headline numbers of one room. */
 export function LoadFigures({ load }: { load: RoomLoad }) {

@@ -4,8 +4,9 @@ import { designDayLine, hourLabel } from './home-totals';
 import { COMPONENT_KEYS, COMPONENT_LABELS, tons } from '../model/compute';
 import { withoutSourceTags } from '../model/print-text';
 import { monthName } from '../../../lib/months';
+import { groupedNumber } from '../../../lib/grouped-number';
 
-const n = (v: number) => v.toLocaleString('en-US');
+const n = groupedNumber;
 const DESIGN_ROWS: [string, string, string][] = [
   ['outdoorCoolingDryBulbF', 'Outdoor cooling dry bulb', '°F'],
   ['outdoorCoolingWetBulbF', 'Outdoor coincident wet bulb', '°F'],

@@ -2,8 +2,9 @@ import type { Room, Tightness } from '@calc';
 import { useState } from 'react';
 import { engineWaitMessage, useLoadEngine } from './live-engine';
 import type { LiveHomeInputs } from '../model/live-room';
+import { groupedNumber } from '../../../lib/grouped-number';
 
-const n = (v: number) => v.toLocaleString('en-US');
+const n = groupedNumber;
 
 interface Props {
   room: Room | null;
@@ -20,7 +21,7 @@ interface Props {
  */
 export function RoomLoadBar({ room, designConditions, tightness, home }: Props) {
   const [open, setOpen] = useState(false);
-  const engine = useLoadEngine();
+  const engine = useLoadEngine({ ...home, designConditions, tightness });
   const parts = engine.status === 'ready' ? engine.engine : null;
   const result = room && parts ? parts.computeLiveRoomLoad(room, home, designConditions, tightness) : null;
   const line = !room

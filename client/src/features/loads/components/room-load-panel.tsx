@@ -20,7 +20,7 @@ interface Props {
  * with its share of the house's leakage, ventilation and default gains, and of the ducts when there are.
  */
 export function RoomLoadPanel({ room, warnings, designConditions, tightness, home }: Props) {
-  const engine = useLoadEngine();
+  const engine = useLoadEngine({ ...home, designConditions, tightness });
   const parts = engine.status === 'ready' ? engine.engine : null;
   const result = room && parts ? parts.computeLiveRoomLoad(room, home, designConditions, tightness) : null;
   return (

@@ -196,6 +196,8 @@ export function JobDetailsPanel({ job }: { job: JobRecord }) {
   const canEdit = viewer !== null && mayEditJob(viewer.role);
   const customer = useQuery({ ...customerQueryOptions(job.customer.id), enabled: canEdit });
   const edits = useJobEdits();
+  // The people to choose from are asked for now, as the customer is, so the form has them when it opens.
+  useQuery({ ...staffQueryOptions(), enabled: canEdit && viewer !== null && isOfficeRole(viewer.role) });
   // The form is made when the fold is first opened: folded, it is only its line, so the walk-through's
   // first seconds on a phone do not pay for a form nobody has opened yet (issue 11). Once made it stays.
   const [opened, setOpened] = useState(false);

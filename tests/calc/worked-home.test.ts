@@ -96,7 +96,7 @@ const store = (q: number[]) =>
   });
 /** Sol-air, medium colour: T_e = T_o + 0.225 × E_t (− 7 °F on a horizontal surface) [ASHRAE ch. 18 sol-air]. */
 const wallTe = (dir: Dir) => To.map((t, i) => t + 0.225 * (onWall(dir, i).beam + onWall(dir, i).diffuse));
-/** Light frame: lag 2 h, decrement 0.9 about the daily mean: ΔT(h) = T̄e − 75 + 0.9 × (T_e(h − 2) − T̄e). */
+/** Light frame: lag 1 h, decrement 0.98 about the daily mean (the periodic conduction solution of a stuccoed R-13 frame wall, tests/calc/method-constants.test.ts): ΔT(h) = T̄e − 75 + 0.98 × (T_e(h − 1) − T̄e). */
 const lagged = (te: number[], lag: number, d: number) => {
   const mean = te.reduce((a, b) => a + b, 0) / 24;
   return te.map((_, h) => mean - 75 + d * (te[(h - lag + 24) % 24]! - mean));
@@ -142,9 +142,9 @@ function hand(r: HandRoom) {
   const solar = store(solarInstant);
   const glassUA = r.windows.reduce((s, w) => s + w.ft2 * w.u, 0);
   return To.map((t, i) => {
-    const walls = r.walls.reduce((s, w) => s + w.u * w.netFt2 * lagged(wallTe(w.dir), 2, 0.9)[i]!, 0);
+    const walls = r.walls.reduce((s, w) => s + w.u * w.netFt2 * lagged(wallTe(w.dir), 1, 0.98)[i]!, 0);
     const doors = r.walls.reduce(
-      (s, w) => s + (w.doors ?? []).reduce((d, x) => d + x.u * x.ft2 * lagged(wallTe(w.dir), 2, 0.9)[i]!, 0),
+      (s, w) => s + (w.doors ?? []).reduce((d, x) => d + x.u * x.ft2 * lagged(wallTe(w.dir), 1, 0.98)[i]!, 0),
       0,
     );
     const parts = {

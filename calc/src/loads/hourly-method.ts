@@ -36,14 +36,22 @@ export const SOL_AIR_HORIZONTAL_LONGWAVE_F = 7;
 /**
  * Time lag and damping of opaque walls, roofs and doors (decrement-factor method): the heat
  * reaching the room at hour h is U·A·[(T̄e − Ti) + λ·(Te(h − δ) − T̄e)], T̄e the daily mean
- * sol-air temperature. Light frame 2 h and 0.9, heavy masonry 6 h and 0.45.
- * [Assumption (no published source found): the lags and decrement factors (recalled from the
- * decrement-factor/time-lag method of older ASHRAE Fundamentals editions); the frame values' effect on
- * the review ranch is stated in METHOD_ASSUMPTIONS and checked in tests/calc/method-constants.test.ts.]
+ * sol-air temperature. The lag δ (whole hours) and decrement λ are those of the exact periodic
+ * (24 h) conduction solution through the layers of a representative wall — each layer's transfer
+ * matrix [[cosh γL, sinh γL/(kγ)], [kγ·sinh γL, cosh γL]], γ = √(iω/α), with the surface films in
+ * series; λ = U_dynamic/U and δ = the phase of the air-to-air transmittance — using the material
+ * properties the Oak Ridge National Laboratory published for its wall studies [PUB: Kosny et al.,
+ * "Dynamic Thermal Performance and Energy Benefits of Using Massive Walls in Residential Buildings",
+ * ORNL, Table 3: concrete k 1.44 W/m·K, ρ 2240 kg/m³, c 0.84 kJ/kg·K; insulating foam 0.036, 25.6, 1.21;
+ * gypsum board 0.16, 800, 1.09; stucco 0.72, 1856, 0.84]. Frame: ⅞ in stucco, R-13 of insulation,
+ * ½ in gypsum → 1.3 h and 0.98 (taken as 1 h and 0.98); masonry: 8 in concrete and ½ in gypsum →
+ * 5.9 h and 0.50 (6 h and 0.50). tests/calc/method-constants.test.ts works both. [Assumption (no
+ * published source found): the make-up of the two representative walls and the films (outside
+ * 0.044, inside 0.12 m²·K/W, MEM: ASHRAE ch. 26); a sided frame wall lags less than a stuccoed one.]
  */
 export const MASS_RESPONSE = {
-  frame: { lagHours: 2, decrement: 0.9 },
-  masonry: { lagHours: 6, decrement: 0.45 },
+  frame: { lagHours: 1, decrement: 0.98 },
+  masonry: { lagHours: 6, decrement: 0.5 },
 } as const;
 export type MassClass = keyof typeof MASS_RESPONSE;
 

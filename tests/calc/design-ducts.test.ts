@@ -67,3 +67,63 @@ describe('a ducted system’s ducts feed this option’s loads', () => {
     ]);
   });
 });
+
+describe('tested duct leakage on a ducted system (issue 13)', () => {
+  const tested = {
+    location: 'attic' as const,
+    insulationR: 6,
+    leakage: 'typical' as const,
+    supplyLeakageFraction: 0.06,
+    returnLeakageFraction: 0.04,
+    leakageTest: '2026-11-12, leakage to outside at 25 Pa',
+  };
+  const problems = (ducts: Record<string, unknown>) => {
+    try {
+      run(ducted(ducts as never));
+    } catch (e) {
+      if (e instanceof CalcError) return e.details.map((d) => `${d.path.join('.')}: ${d.message}`);
+      throw e;
+    }
+    return [];
+  };
+
+  it('the tested fractions are used instead of the tightness’s defaults: the method with those fractions', () => {
+    const r = run(ducted(tested));
+    // The same fractions on the walk-through's ducts (the method checked in ducts.test.ts against an energy
+    // balance marched through the ducts, ASHRAE 152 delivery effectiveness).
+    const { leakageTest: _words, ...fractions } = tested;
+    const method = homeLoad({ home: { ...threeRoomHome, ducts: { ...fractions, roomIds: allRooms } } }).ducts;
+    expect(r.loads.ducts?.supplyLeakageFraction).toBe(0.06);
+    expect(r.loads.ducts?.returnLeakageFraction).toBe(0.04);
+    expect(r.loads.ducts?.cooling.sensibleBtuh).toBe(method?.cooling.sensibleBtuh);
+    // Tighter than the "typical" defaults: less supply air lost to the attic, a smaller duct gain (ASHRAE 152:
+    // the delivered share of the supply falls with its leakage fraction).
+    const typical = run(ducted({ location: 'attic', insulationR: 6, leakage: 'typical' }));
+    expect(r.loads.ducts?.cooling.sensibleBtuh).toBeLessThan(typical.loads.ducts?.cooling.sensibleBtuh ?? 0);
+    const why = r.systems[0]?.explanations.find((e) => e.key === 's1:ducts');
+    expect(why?.text).toContain('supply 0.06 tested (2026-11-12, leakage to outside at 25 Pa)');
+    expect(why?.text).toContain('return 0.04 tested');
+    expect(typical.systems[0]?.explanations.find((e) => e.key === 's1:ducts')?.text).toContain(
+      'the "typical" defaults (common practice, from memory)',
+    );
+  });
+
+  it('one fraction tested: the other keeps the default and says so', () => {
+    const r = run(ducted({ ...tested, returnLeakageFraction: undefined }));
+    const why = r.systems[0]?.explanations.find((e) => e.key === 's1:ducts')?.text ?? '';
+    expect(why).toContain('supply 0.06 tested');
+    expect(why).toMatch(/return 0\.\d\d from the "typical" defaults/);
+  });
+
+  it('clear errors: the bounds of calc’s duct schema, and the test named whenever a fraction is entered', () => {
+    expect(problems({ ...tested, supplyLeakageFraction: 0.6 })).toEqual([
+      'systems.0.ducts.supplyLeakageFraction: Supply duct leakage must be between 0 and 0.5',
+    ]);
+    expect(problems({ ...tested, leakageTest: undefined })).toEqual([
+      'systems.0.ducts.leakageTest: Say when and how the ducts were tested (date and method)',
+    ]);
+    expect(problems({ location: 'attic', leakageTest: '2026-11-12' })).toEqual([
+      'systems.0.ducts.supplyLeakageFraction: Enter the tested supply or return leakage, or clear the test',
+    ]);
+  });
+});

@@ -183,6 +183,47 @@ describe('ducted systems', () => {
   });
 });
 
+describe('tested duct leakage (issue 13)', () => {
+  it('stores the tested fractions with the test, works the loads with them, and refuses bad ones with their paths', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const plain = singleZone(rooms[0] ?? '');
+    const o = await newOption(estimator, job.id, { name: 'Tested ducts', design: plain });
+    const url = `/api/jobs/${job.id}/options/${o.id}`;
+    const withDucts = (ducts: Record<string, unknown>) => ({ ...plain, systems: [{ ...plain.systems[0], ducts }] });
+    const base = { location: 'attic', insulationR: 6, leakage: 'typical' };
+    const bad = await patch(estimator, url, o.version).send({
+      design: withDucts({ ...base, supplyLeakageFraction: 0.7, returnLeakageFraction: 0.04 }),
+    });
+    expectProblem(bad, 400);
+    expect(bad.body.errors).toEqual(
+      expect.arrayContaining([
+        {
+          path: 'design.systems.0.ducts.supplyLeakageFraction',
+          message: 'Supply duct leakage must be between 0 and 0.5',
+        },
+        {
+          path: 'design.systems.0.ducts.leakageTest',
+          message: 'Say when and how the ducts were tested (date and method)',
+        },
+      ]),
+    );
+    const unchanged = await t.orm.em.fork().execute(`select design from design_option where id = ?`, [o.id]);
+    expect(unchanged[0]?.design.systems[0].ducts).toBeUndefined();
+    const tested = {
+      ...base,
+      supplyLeakageFraction: 0.05,
+      returnLeakageFraction: 0.03,
+      leakageTest: '2026-11-20, blower test at 25 Pa',
+    };
+    const r = await patch(estimator, url, o.version).send({ design: withDucts(tested) });
+    expect(r.status, JSON.stringify(r.body)).toBe(200);
+    expect(r.body.option.design.systems[0].ducts).toEqual(tested);
+    const why = r.body.option.result.systems[0].explanations.find((e: { key: string }) => e.key === 's1:ducts');
+    expect(why.text).toContain('supply 0.05 tested (2026-11-20, blower test at 25 Pa)');
+    expect(why.inputs.find((i: { label: string }) => i.label === 'Supply leakage').value).toBe(0.05);
+  });
+});
+
 describe('disconnects beyond a whip and the heat kit’s circuit (issue 13)', () => {
   it('a far disconnect gets a priced liquid-tight run and a warning; a bad distance is refused; the heat kit has its own', async () => {
     const { job, rooms } = await deskJob(estimator);

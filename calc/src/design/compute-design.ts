@@ -364,7 +364,7 @@ export function computeDesignFromParsed({
       ...(heating ? heating.explanations : []),
       { ...combination.explanation, key: `${p}combination` },
       ...refrigerant.circuits.map((c) => c.explanation),
-      ...(withDucts?.systemKey === s.key && loads.ducts ? [explainDuctLoads(s.key, s.name, loads.ducts)] : []),
+      ...(withDucts?.systemKey === s.key && loads.ducts ? [explainDuctLoads(s.key, s.name, loads.ducts, s.ducts)] : []),
       ...refrigerant.explanations,
       ...electrical.explanations,
       ...(kitElectrical ? kitElectrical.explanations : []),

@@ -3,9 +3,11 @@ import { explanation, input, type Explanation } from '../explain/explanation';
 import { formatNumber, formatQuantity } from '../explain/format';
 import type { HomeDucts } from '../loads/home-ducts';
 import { roundHalfUp } from '../rounding';
-import { ONE_DUCTED_SYSTEM, type Design } from '../schemas/design';
+import { ONE_DUCTED_SYSTEM, type Design, type System } from '../schemas/design';
 import type { DuctLocation } from '../schemas/ducts';
 import type { Home } from '../schemas/home';
+
+type SystemDucts = NonNullable<System['ducts']>;
 
 /** Where the ducts run, in the words the desk and the proposal print. */
 export const DUCT_LOCATION_WORDS: Record<DuctLocation, string> = {
@@ -36,13 +38,37 @@ export function homeWithDesignDucts(home: Home, design: Design): { home: Home; s
     ]);
   const zones = new Set(first.s.circuits.map((c) => c.zoneKey));
   const roomIds = [...new Set(design.zones.filter((z) => zones.has(z.key)).flatMap((z) => z.roomIds))];
-  return { home: { ...home, ducts: { ...first.ducts, roomIds } }, systemKey: first.s.key };
+  // The test's words are for the why; the load method takes the fractions themselves.
+  const { leakageTest: _words, ...ducts } = first.ducts;
+  return { home: { ...home, ducts: { ...ducts, roomIds } }, systemKey: first.s.key };
 }
 
 const btuh = (v: number) => formatQuantity(roundHalfUp(v), 'Btu/h');
 
+/**
+ * Where the leakage fractions came from: the test (with its date and method) for each fraction entered, else
+ * the tightness's defaults — "supply 0.06 and return 0.04 tested (2026-11-12, …)".
+ */
+function leakageWords(d: HomeDucts, given: SystemDucts | undefined): string {
+  const f = (v: number) => formatNumber(v, 2);
+  const fromTest = (v: number | undefined) => v !== undefined;
+  const s = fromTest(given?.supplyLeakageFraction);
+  const r = fromTest(given?.returnLeakageFraction);
+  const defaults = `the "${given?.leakage ?? 'typical'}" defaults (common practice, from memory)`;
+  if (!s && !r)
+    return `leakage to outside: supply ${f(d.supplyLeakageFraction)} and return ${f(d.returnLeakageFraction)} of the airflow, ${defaults}`;
+  const test = `tested (${given?.leakageTest ?? ''})`;
+  const part = (label: string, v: number, tested: boolean) => `${label} ${f(v)} ${tested ? test : `from ${defaults}`}`;
+  return `leakage to outside: ${part('supply', d.supplyLeakageFraction, s)}; ${part('return', d.returnLeakageFraction, r)}`;
+}
+
 /** The duct loads of a ducted system as the desk shows them, from the load method's figures at the block hour. */
-export function explainDuctLoads(systemKey: string, systemName: string, d: HomeDucts): Explanation {
+export function explainDuctLoads(
+  systemKey: string,
+  systemName: string,
+  d: HomeDucts,
+  given?: SystemDucts,
+): Explanation {
   const where = DUCT_LOCATION_WORDS[d.location];
   return explanation({
     key: `${systemKey}:ducts`,
@@ -55,7 +81,8 @@ export function explainDuctLoads(systemKey: string, systemName: string, d: HomeD
       `${btuh(d.cooling.sensibleBtuh)} sensible and ${btuh(d.cooling.latentBtuh)} latent gain at the block hour ` +
       `(delivery effectiveness ${formatNumber(d.cooling.deliveryEffectiveness, 2)}); ` +
       `${btuh(d.heating.btuh)} heat loss at ${formatNumber(d.heating.surroundingsF)} °F ` +
-      `(delivery effectiveness ${formatNumber(d.heating.deliveryEffectiveness, 2)}). ` +
+      `(delivery effectiveness ${formatNumber(d.heating.deliveryEffectiveness, 2)}); ` +
+      `${leakageWords(d, given)}. ` +
       'Added to the rooms these ducts serve, so the sizing above includes them.',
     inputs: [
       input('Insulation', d.insulationR, 'R', `R-${formatNumber(d.insulationR, 1, { trim: true })}`),

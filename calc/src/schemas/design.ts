@@ -3,11 +3,38 @@ import { bounded, boundedInt, keyField, nameField } from './fields';
 import { tubeOdSchema } from './equipment';
 import { ductSystemSchema } from './ducts';
 
+/** The message when tested leakage is entered without saying when and how the ducts were tested. */
+export const LEAKAGE_TEST_NEEDED = 'Say when and how the ducts were tested (date and method)';
+
 /**
- * A ducted system's ducts (air handler or ducted unit): where they run, their insulation and leakage. The
- * rooms they serve are the system's zones' rooms, so the home's own list is not taken here.
+ * A ducted system's ducts (air handler or ducted unit): where they run, their insulation and leakage — the
+ * tightness in words, or the fractions a duct-leakage test measured (supply and return leakage to outside as
+ * fractions of the blower airflow, with when and how it was tested), used instead of the tightness's defaults.
+ * The rooms they serve are the system's zones' rooms, so the home's own list is not taken here.
  */
-export const systemDuctsSchema = ductSystemSchema.pick({ location: true, insulationR: true, leakage: true });
+export const systemDuctsSchema = ductSystemSchema
+  .pick({
+    location: true,
+    insulationR: true,
+    leakage: true,
+    supplyLeakageFraction: true,
+    returnLeakageFraction: true,
+  })
+  .extend({
+    /** When and how the fractions were measured, as text ("2026-11-12, leakage to outside at 25 Pa"). */
+    leakageTest: nameField('Leakage test', 120).optional(),
+  })
+  .superRefine((d, ctx) => {
+    const tested = d.supplyLeakageFraction !== undefined || d.returnLeakageFraction !== undefined;
+    if (tested && d.leakageTest === undefined)
+      ctx.addIssue({ code: 'custom', path: ['leakageTest'], message: LEAKAGE_TEST_NEEDED });
+    if (!tested && d.leakageTest !== undefined)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['supplyLeakageFraction'],
+        message: 'Enter the tested supply or return leakage, or clear the test',
+      });
+  });
 
 /** A zone: the rooms one indoor unit serves. */
 export const zoneSchema = z.object({

@@ -50,3 +50,28 @@ export function AmountField({
     </FieldShell>
   );
 }
+
+/** A short text the estimator may leave empty: empty is absent (undefined), so the schema's "not given" applies. */
+export function OptionalTextField({ name, label, hint }: { name: string; label: string; hint?: string }) {
+  const id = useId();
+  const { control } = useFormContext();
+  const { field, fieldState } = useController({ name, control });
+  const error = fieldState.error?.message;
+  return (
+    <FieldShell id={id} label={label} hint={hint} error={error}>
+      <input
+        id={id}
+        ref={field.ref}
+        name={field.name}
+        type="text"
+        autoComplete="off"
+        className={inputClass}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
+        value={typeof field.value === 'string' ? field.value : ''}
+        onChange={(e) => field.onChange(e.target.value === '' ? undefined : e.target.value)}
+        onBlur={field.onBlur}
+      />
+    </FieldShell>
+  );
+}

@@ -4,7 +4,7 @@ import { optionDesignSchema, type OptionRecord, type RoomRecord } from '@contrac
 import { DUCT_LOCATION_WORDS, ductLocationSchema, ductLeakageSchema, type DesignInput } from '@calc';
 import { Form } from '../../../components/ui/form';
 import { NumberField, TextField } from '../../../components/ui/form-fields';
-import { AmountField } from './amount-field';
+import { AmountField, OptionalTextField } from './amount-field';
 import type { DeskModel } from '../api/get-models';
 import { useUpdateOption } from '../api/update-option';
 import {
@@ -239,6 +239,27 @@ function DuctsAndHeat({
           </>
         ) : null}
       </div>
+      {system.ducts ? (
+        <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+          <AmountField
+            name={`systems.${s}.ducts.supplyLeakageFraction`}
+            label="Tested supply leakage (fraction of airflow)"
+            hint="From a duct-leakage test, e.g. 0.06. Empty: the leakage chosen above."
+            optional
+          />
+          <AmountField
+            name={`systems.${s}.ducts.returnLeakageFraction`}
+            label="Tested return leakage (fraction of airflow)"
+            hint="Leakage to outside, 0 to 0.5."
+            optional
+          />
+          <OptionalTextField
+            name={`systems.${s}.ducts.leakageTest`}
+            label="Leakage test: date and method"
+            hint="e.g. 2026-11-12, leakage to outside at 25 Pa"
+          />
+        </div>
+      ) : null}
       <div className="grid items-end gap-3 lg:grid-cols-2">
         <OptionalSelect
           name={`systems.${s}.heatKitKey`}

@@ -19,7 +19,12 @@ export function designValues(option: OptionRecord): DesignInput {
       })),
       systems: stored.data.systems.map((s) => ({
         ...s,
-        ducts: s.ducts,
+        ducts: s.ducts && {
+          ...s.ducts,
+          supplyLeakageFraction: s.ducts.supplyLeakageFraction,
+          returnLeakageFraction: s.ducts.returnLeakageFraction,
+          leakageTest: s.ducts.leakageTest,
+        },
         heatKitKey: s.heatKitKey,
         electrical: { ...s.electrical, heatKitDisconnectDistanceFt: s.electrical.heatKitDisconnectDistanceFt },
         circuits: s.circuits.map((c) => ({ ...c, liftDirection: c.liftDirection ?? 'indoor-above' })),

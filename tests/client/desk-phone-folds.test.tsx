@@ -4,6 +4,8 @@ import type { OptionRecord, TakeoffLineRecord } from '@contract';
 import { formatMoney } from '@calc';
 import { DeskFold } from '../../client/src/features/desk/components/desk-fold';
 import { TakeoffGroups } from '../../client/src/features/desk/components/takeoff-phone';
+import { UnitWhys } from '../../client/src/features/desk/components/unit-whys';
+import type { ExplanationView } from '../../client/src/features/desk/model/result-view';
 
 /** The window's width as the media query sees it (happy-dom's own matchMedia is swapped for one we steer). */
 let width = 1440;
@@ -112,5 +114,45 @@ describe('the takeoff on a phone', () => {
     const labor = screen.getByText('Labor').closest('summary');
     expect(labor?.textContent).toContain('2 lines');
     expect(labor?.textContent).not.toContain('$');
+  });
+});
+
+const why = (key: string, verdict: string, valueText = '99 %'): ExplanationView => ({
+  key,
+  label: `Sizing, ${key.split(':')[0]}`,
+  valueText,
+  text: '24,000 Btu/h ÷ 24,242 Btu/h = 99 %',
+  inputs: [],
+  verdict,
+  status: 'ok',
+});
+
+describe('a unit’s verdicts', () => {
+  const within = 'cooling 99 % of the load: within the 90–130 % range';
+
+  it('are said once for an indoor unit alone on its outdoor unit, where the pair says the same', () => {
+    width = 375;
+    render(
+      <UnitWhys
+        name="Whole house"
+        whys={[why('z1:cooling-ratio', within)]}
+        pairedWith={{ name: 'Whole house system', whys: [why('s1:cooling-ratio', within)] }}
+      />,
+    );
+    expect(screen.getByText(/the verdicts stand under Whole house system below/)).toBeTruthy();
+    expect(screen.queryByText(/^Cooling 99 %/)).toBeNull();
+  });
+
+  it('stay beside the indoor unit when the pair’s differ', () => {
+    width = 375;
+    render(
+      <UnitWhys
+        name="Whole house"
+        whys={[why('z1:cooling-ratio', within)]}
+        pairedWith={{ name: 'Whole house system', whys: [why('s1:cooling-ratio', within, '98 %')] }}
+      />,
+    );
+    expect(screen.getByText(/^Cooling 99 % of the load: within/)).toBeTruthy();
+    expect(screen.queryByText(/stand under/)).toBeNull();
   });
 });

@@ -135,6 +135,13 @@ export function OptionView({
       ...(s.electrical?.caution ? [s.electrical.caution] : []),
     ]),
   );
+  // The outdoor unit a zone's indoor unit is alone on (a one-to-one pair), if any.
+  const pairOf = (zoneKey: string) => {
+    const s = view?.systems.find(
+      (x) => x.refrigerant?.circuits.length === 1 && x.refrigerant.circuits[0]?.zoneKey === zoneKey,
+    );
+    return s ? { name: s.name, whys: s.explanations } : undefined;
+  };
   const generalCautions = (option.result?.cautions ?? []).filter((c) => !besideNumbers.has(c));
   const forms = (
     <div key="forms" className="flex min-w-0 flex-col gap-4">
@@ -236,7 +243,7 @@ export function OptionView({
               <h4 className="font-semibold text-ink-900">
                 {z.name}: {z.indoorUnitKey}
               </h4>
-              <UnitWhys whys={z.explanations} sizing={z.sizing} name={z.name} />
+              <UnitWhys whys={z.explanations} sizing={z.sizing} name={z.name} pairedWith={pairOf(z.zoneKey)} />
             </div>
           ))}
           {view.systems.map((s) => (

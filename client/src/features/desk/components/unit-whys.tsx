@@ -24,20 +24,38 @@ export function UnitWhys({
   whys,
   sizing,
   name,
+  pairedWith,
 }: {
   whys: readonly ExplanationView[];
   sizing?: SizingView;
   /** Whose figures they are, for the fold's line (several units fold on one screen). */
   name: string;
+  /** An indoor unit alone on its outdoor unit: rated as the pair, its verdicts may be the system's word for word. */
+  pairedWith?: { name: string; whys: readonly ExplanationView[] };
 }) {
   if (whys.length === 0) return sizing ? <SizingVerdict sizing={sizing} /> : null;
   const verdicts = whys.filter(
     (x) => x.verdict && (ALWAYS.some((k) => x.key.endsWith(k)) || x.status === 'warning' || x.status === 'blocker'),
   );
-  const shown = new Set(verdicts.map((x) => x.key));
+  // Said once: where the pair's outdoor unit says the same verdicts (same figure, same words), they stand under it.
+  const sameAsPair =
+    pairedWith !== undefined &&
+    verdicts.length > 0 &&
+    verdicts.every((v) => {
+      const suffix = ALWAYS.find((k) => v.key.endsWith(k));
+      return (
+        suffix !== undefined &&
+        pairedWith.whys.some((p) => p.key.endsWith(suffix) && p.verdict === v.verdict && p.valueText === v.valueText)
+      );
+    });
+  const shown = new Set(sameAsPair ? [] : verdicts.map((x) => x.key));
   return (
     <div className="flex flex-col gap-1">
-      {verdicts.length > 0 ? (
+      {sameAsPair ? (
+        <p className="text-sm text-ink-700">
+          Rated as a pair with its outdoor unit: the verdicts stand under {pairedWith.name} below.
+        </p>
+      ) : verdicts.length > 0 ? (
         <ul className="flex flex-col gap-1 text-sm">
           {verdicts.map((x) => (
             <li key={x.key} className={TONE[x.status]}>

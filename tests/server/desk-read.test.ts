@@ -17,9 +17,10 @@ import { BASE, put } from './company-data-helpers';
 import { deskJob, multiZone, newOption, seedData, singleZone } from './desk-helpers';
 
 /**
- * GET …/desk reads by SQL and keeps what it worked out by a hash of exactly its inputs (desk-read.ts). These
- * checks hold its answer, byte for byte, to the desk as the ORM path built it: the job, its rooms and options
- * as entities, the company's rows parsed, every option worked out afresh, the same presenter.
+ * GET …/desk reads by SQL and keeps what it worked out, and each option's JSON, by a hash of exactly its inputs
+ * (desk-read.ts, desk.presenter.ts presentDeskBytes). These checks hold its answer, byte for byte, to the desk
+ * as the ORM path built it: the job, its rooms and options as entities, the company's rows parsed, every
+ * option worked out afresh, presentDesk and JSON.stringify.
  */
 let t: TestApp;
 
@@ -69,6 +70,8 @@ async function ormDesk(em: EntityManager, actor: Actor, jobId: string): Promise<
 async function sameDesk(s: Session, actor: Actor, jobId: string): Promise<string> {
   const res = await s.agent.get(`/api/jobs/${jobId}/desk`);
   expect(res.status, res.text.slice(0, 300)).toBe(200);
+  // The headers res.json sends; the options' bytes may be kept ones (desk.presenter.ts presentDeskBytes).
+  expect(res.headers['content-type']).toBe('application/json; charset=utf-8');
   expect(res.text).toBe(await ormDesk(t.orm.em.fork(), actor, jobId));
   return res.text;
 }

@@ -81,6 +81,16 @@ export class Reply<T> {
 }
 export const reply = <T>(status: number, body: T): Reply<T> => new Reply(status, body);
 
+/**
+ * A JSON answer already written out: the UTF-8 bytes of exactly `JSON.stringify` of a value of the route's
+ * schema, sent with the headers `res.json` would send. For a hot route that keeps the text of what did not
+ * change (GET …/desk: issue 13); checked like any other answer where RESPONSE_VALIDATION is on.
+ */
+export class JsonBytes<T> {
+  declare readonly of?: T;
+  constructor(readonly bytes: Buffer) {}
+}
+
 type Out<RS> = RS extends ZodType ? z.input<RS> : RS extends NoContent ? void : undefined;
 /** A handler may answer with readonly arrays (calc's results are readonly); the JSON is the same. */
 type DeepReadonly<T> = T extends readonly (infer U)[]
@@ -143,7 +153,7 @@ export interface RouteSpec<
   use?: readonly RequestHandler[];
   handler: (
     ctx: RouteContext<z.output<PS>, z.output<QS>, z.output<BS>, ActorOf<Pol>>,
-  ) => Promise<DeepReadonly<Out<RS>> | Reply<DeepReadonly<Out<RS>>>>;
+  ) => Promise<DeepReadonly<Out<RS>> | Reply<DeepReadonly<Out<RS>>> | JsonBytes<Out<RS>>>;
 }
 
 export interface RegisteredRoute {
@@ -287,7 +297,13 @@ export function createApiRouter(prefix: string, getServices: () => Services, opt
           return;
         }
         if (!schema) return; // the handler wrote a raw answer
-        const [code, out] = result instanceof Reply ? [result.status, result.body] : [status, result];
+        const bytes = result instanceof JsonBytes ? result.bytes : null;
+        const [code, out] =
+          result instanceof Reply
+            ? [result.status, result.body]
+            : bytes && (services.config.RESPONSE_VALIDATION === 'on' || typeof spec.versioned === 'function')
+              ? [status, JSON.parse(bytes.toString('utf8')) as unknown]
+              : [status, result];
         if (services.config.RESPONSE_VALIDATION === 'on' && code < 300) {
           const check = schema.safeParse(out);
           if (!check.success) {
@@ -298,7 +314,9 @@ export function createApiRouter(prefix: string, getServices: () => Services, opt
           }
         }
         if (typeof spec.versioned === 'function') setEtag(res, spec.versioned(out as never));
-        if (!res.headersSent) res.status(code).json(out);
+        if (res.headersSent) return;
+        if (bytes) res.status(code).set('Content-Type', 'application/json; charset=utf-8').send(bytes);
+        else res.status(code).json(out);
       };
       handlers.push(main);
       router[spec.method](spec.path, ...handlers);

@@ -244,28 +244,58 @@ export async function listOptions(ctx: ServiceContext, jobId: string): Promise<D
   );
 }
 
+/** The key of an option's figures: the home's and the company's keys and every input of the option. */
+function figuresKey(d: DeskInputs, o: OptionInputs): string {
+  const inputs = [
+    o.id,
+    o.name,
+    o.design,
+    o.pricing,
+    o.takeoffEdits,
+    o.chosenModels,
+    o.discountRequest ?? null,
+    o.preliminary,
+  ];
+  return `${d.homeKey}|${d.dataKey}|${hash(stableJson(inputs) ?? '')}`;
+}
+
 /**
  * An option worked out from its saved inputs, or the figures already worked out from exactly these inputs
- * (the home's, the company's and every input of the option). Callers only read a ComputedOption.
+ * (the home's, the company's and every input of the option), with the key they are kept by. Callers only
+ * read a ComputedOption.
  */
-export function compute(d: DeskInputs, o: OptionInputs): ComputedOption {
-  const key = `${d.homeKey}|${d.dataKey}|${hash(
-    stableJson([
-      o.id,
-      o.name,
-      o.design,
-      o.pricing,
-      o.takeoffEdits,
-      o.chosenModels,
-      o.discountRequest ?? null,
-      o.preliminary,
-    ]) ?? '',
-  )}`;
+export function computeKeyed(d: DeskInputs, o: OptionInputs): { computed: ComputedOption; key: string } {
+  const key = figuresKey(d, o);
   const known = figures.get(key);
   if (known)
     // The edits as this option holds them (same values; the option's own objects, in its own key order).
-    return { ...known, edits: known.edits.map((e, i) => ({ ...e, stored: o.takeoffEdits[i] ?? e.stored })) };
+    return {
+      key,
+      computed: { ...known, edits: known.edits.map((e, i) => ({ ...e, stored: o.takeoffEdits[i] ?? e.stored })) },
+    };
   const computed = computeOption(o, d.home, d.data);
   figures.set(key, computed);
-  return computed;
+  return { computed, key };
 }
+
+export const compute = (d: DeskInputs, o: OptionInputs): ComputedOption => computeKeyed(d, o).computed;
+
+const presented = new PureMemo<Buffer>(120);
+
+/**
+ * An option's JSON as GET …/desk presents it, kept by a key of everything the presentation reads (its
+ * figures' key, the role, the option's row and the job's ready override: desk.presenter.ts says which),
+ * made by `make` when not seen before. Only for rows read by SQL (their JSON objects come back from the
+ * database in one key order, so the same key always means the same bytes).
+ */
+export function keptOptionBytes(key: string, make: () => Buffer): Buffer {
+  let bytes = presented.get(key);
+  if (!bytes) {
+    bytes = make();
+    presented.set(key, bytes);
+  }
+  return bytes;
+}
+
+/** A stable key of values (canonical JSON, hashed). */
+export const keyOf = (value: unknown): string => hash(stableJson(value) ?? '');

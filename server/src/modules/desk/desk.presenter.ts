@@ -11,6 +11,7 @@ import {
 } from '@contract';
 import type { OptionPrice } from '@calc';
 import type { DeskLine, OptionFigures } from './desk-compute';
+import { keyOf } from './desk-read';
 import type { DeskView, OptionView } from './desk.service';
 
 const person = (u: { id: string; name: string } | null | undefined) => (u ? { id: u.id, name: u.name } : null);
@@ -194,10 +195,13 @@ function withOverride(o: OptionRecord, override: ReadyOverride | null): OptionRe
   };
 }
 
+/** The ready override the desk's explanations carry (only while the job is marked ready). */
+const overrideOf = (v: DeskView) => (v.desk.job.readyAt ? (v.desk.job.readyOverride ?? null) : null);
+
 export function presentDesk(v: DeskView, role: Role): DeskResponse {
   const job = v.desk.job;
   const blockers = maySeePrice(role) ? v.blockers : v.blockers.filter((b) => b.code !== 'discount-pending');
-  const override = job.readyAt ? (job.readyOverride ?? null) : null;
+  const override = overrideOf(v);
   // Ready: marked, and nothing blocks it but the units outside their sizing range the office's reason covers.
   const uncovered = v.blockers.filter(
     (b) => !(b.code === 'sizing-outside-range' && override?.units.includes(b.message) === true),
@@ -216,4 +220,40 @@ export function presentDesk(v: DeskView, role: Role): DeskResponse {
       blockers,
     },
   };
+}
+
+/**
+ * GET …/desk as bytes: exactly `JSON.stringify(presentDesk(v, role))`, each option's part from `keep` under a
+ * key of everything its presentation reads — the figures' key (every input the figures are worked out from),
+ * the role, the option's row (position, version, times, people) and the job's ready override — so an option
+ * whose key was seen before is not presented, serialised and encoded again (tests/server/desk-read.test.ts
+ * holds the bytes to presentDesk's).
+ */
+export function presentDeskBytes(v: DeskView, role: Role, keep: (key: string, make: () => Buffer) => Buffer): Buffer {
+  const override = overrideOf(v);
+  const shell = presentDesk({ ...v, options: [] }, role);
+  const parts = v.options.map((o) => {
+    const make = () => Buffer.from(JSON.stringify(withOverride(presentOption(o, role), override)));
+    if (!o.key) return make();
+    const r = o.option;
+    const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
+    const row = [r.job.id, r.position, r.version, iso(r.createdAt), iso(r.updatedAt), iso(r.reviewedAt)];
+    return keep(`${o.key}|${keyOf([role, row, person(r.createdBy), person(r.reviewedBy), override])}`, make);
+  });
+  const out: Buffer[] = [];
+  let sep = '{';
+  for (const [k, value] of Object.entries(shell)) {
+    if (value === undefined) continue;
+    out.push(Buffer.from(`${sep}${JSON.stringify(k)}:`));
+    sep = ',';
+    if (k !== 'options') {
+      out.push(Buffer.from(JSON.stringify(value)));
+      continue;
+    }
+    out.push(Buffer.from('['));
+    parts.forEach((p, i) => out.push(...(i ? [Buffer.from(','), p] : [p])));
+    out.push(Buffer.from(']'));
+  }
+  out.push(Buffer.from(sep === '{' ? '{}' : '}'));
+  return Buffer.concat(out);
 }

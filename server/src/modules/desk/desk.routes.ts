@@ -13,13 +13,15 @@ import {
   regenerateBody,
   takeoffEditsBody,
   updateOptionBody,
+  type DeskResponse,
   type OptionRecord,
   type Role,
 } from '@contract';
-import { ANY_STAFF, JOB_EDITORS, NO_CONTENT, OFFICE, OWNER, type ApiRouter } from '../../lib/route';
+import { ANY_STAFF, JOB_EDITORS, JsonBytes, NO_CONTENT, OFFICE, OWNER, type ApiRouter } from '../../lib/route';
 import { UnprocessableError } from '../../lib/errors';
 import { uuidParam } from '../../lib/validate';
-import { presentDesk, presentOption } from './desk.presenter';
+import { presentDesk, presentDeskBytes, presentOption } from './desk.presenter';
+import { keptOptionBytes } from './desk-read';
 import {
   createFirstPrice,
   createOption,
@@ -62,7 +64,9 @@ export function deskRoutes(api: ApiRouter): void {
     summary: "The job's options, each recomputed, and whether the job may be proposed",
     params: jobParams,
     response: deskResponse,
-    handler: async ({ service, params, actor }) => presentDesk(await getDesk(service, params.jobId), actor.role),
+    // The options' JSON is kept while nothing it is made from changes (desk-read.ts keptOptionBytes).
+    handler: async ({ service, params, actor }) =>
+      new JsonBytes<DeskResponse>(presentDeskBytes(await getDesk(service, params.jobId), actor.role, keptOptionBytes)),
   });
   api.route({
     method: 'post',

@@ -31,6 +31,7 @@ import { UserSchema } from '../users/user.entity';
 import { computeOption, modelKeysOf, type ComputedOption } from './desk-compute';
 import {
   compute,
+  computeKeyed,
   listOptions,
   readDeskJob,
   readDeskView,
@@ -43,6 +44,8 @@ import { DesignOptionSchema, type DesignOption, type StoredTakeoffEdit } from '.
 export interface OptionView {
   readonly option: OptionRow;
   readonly computed: ComputedOption;
+  /** The key its figures are kept by (desk-read.ts computeKeyed). */
+  readonly key?: string;
 }
 
 /** The desk of a job: its job as a row (GET) or as the entity a write changes (J = Job). */
@@ -54,7 +57,7 @@ export interface DeskView<J extends DeskJobState = DeskJobState> {
 
 /** Each option worked out, and why the job cannot be proposed yet. */
 function viewOf<J extends DeskJobState>(desk: DeskJob<J>, rows: readonly OptionRow[]): DeskView<J> {
-  const options = rows.map((option) => ({ option, computed: compute(desk, option) }));
+  const options = rows.map((option) => ({ option, ...computeKeyed(desk, option) }));
   const blockers: BlockerRecord[] = options.length
     ? options.flatMap((o) => o.computed.blockers)
     : [{ code: 'no-options', optionId: null, message: DESK_MESSAGES.noOptions }];

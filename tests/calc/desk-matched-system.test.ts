@@ -8,6 +8,7 @@ import {
   type HomeInput,
 } from '@calc';
 import { demoCompanyData } from '../../fixtures/demo-company-data';
+import { DEMO_DESIGN_DEFAULTS, DUCTED_HOME, DUCTED_HOUSE } from '../../fixtures/demo-homes';
 import { pricing, threeRoomHome } from './sample-data';
 
 // Issue 13: a ducted system delivers the capacity of the matched pair (outdoor unit with that air handler) at the
@@ -26,7 +27,7 @@ const home: HomeInput = {
   ...threeRoomHome,
   designConditions: { ...threeRoomHome.designConditions, outdoorCoolingDryBulbF: 92, outdoorHeatingDryBulbF: 18 },
 };
-const ducted = (outdoorUnitKey: string) =>
+const ducted = (outdoorUnitKey: string, heatKitKey?: string) =>
   computeDesign({
     home,
     design: {
@@ -38,6 +39,7 @@ const ducted = (outdoorUnitKey: string) =>
           outdoorUnitKey,
           circuits: [{ zoneKey: 'z1', lengthFt: 25 }],
           electrical: { circuitLengthFt: 30 },
+          ...(heatKitKey ? { heatKitKey } : {}),
         },
       ],
     },
@@ -81,5 +83,54 @@ describe('a ducted system is sized on its matched pair, not on the air handler�
     const alone = zoneRating({ indoor: head, outdoor: unit('TSL-HP24') as typeof outdoor, indoorUnitsOnSystem: 1 });
     expect(alone.matched).toBe(true);
     expect(alone.unit.cooling).toBe((unit('TSL-HP24') as typeof outdoor).cooling);
+  });
+  it('a shortfall at the design temperature that the system’s heat kit covers is said to be covered, not left as a warning', () => {
+    // 5 °F: the 24k heat pump's demo heating points fall to 58 % of its rating there (the last point of its data).
+    const cold = computeDesign({
+      // The demo ranch (fixtures/demo-homes.ts) in a colder place.
+      home: {
+        id: 'demo-ranch',
+        designConditions: { ...DEMO_DESIGN_DEFAULTS, outdoorHeatingDryBulbF: 5 },
+        tightness: 'average',
+        ...DUCTED_HOUSE,
+        rooms: DUCTED_HOME.map((r, i) => ({ ...r, id: `room-${i + 1}` })),
+      },
+      design: {
+        zones: [
+          {
+            key: 'z1',
+            name: 'Whole house',
+            roomIds: DUCTED_HOME.map((_, i) => `room-${i + 1}`),
+            indoorUnitKey: 'TSL-AH36',
+          },
+        ],
+        systems: [
+          {
+            key: 's1',
+            name: 'Ducted system',
+            outdoorUnitKey: 'TSL-HP24',
+            circuits: [{ zoneKey: 'z1', lengthFt: 25 }],
+            electrical: { circuitLengthFt: 30 },
+            heatKitKey: 'TSL-HK8',
+          },
+        ],
+      },
+      catalog,
+      priceBook,
+      pricing,
+    });
+    const y = cold.systems[0];
+    const coverage = y?.explanations.find((e) => e.key === 's1:heating-coverage');
+    const loss = y?.sizing.heatingLoadBtuh ?? 0;
+    const capacity = y?.sizing.heatingCapacityBtuh ?? 0;
+    expect(capacity).toBeLessThan(loss);
+    // 8 kW × 3,412.142 Btu/h per kW [PUB: the IT Btu definition] = 27,297 Btu/h of backup.
+    expect(capacity + 8 * 3412.142).toBeGreaterThanOrEqual(loss);
+    expect(coverage?.verdict).toMatch(
+      /^Short by .* at 5 °F, covered by Tessaline 8 kW electric heat kit \(8 kW = 27,297 Btu\/h\)\.$/,
+    );
+    expect(coverage?.status).toBe('ok');
+    const zone = cold.zones[0]?.explanations.find((e) => e.key === 'zone:z1:heating-coverage');
+    expect(zone?.status).toBe('ok');
   });
 });

@@ -12,22 +12,29 @@ afterAll(async () => e?.close());
 
 /**
  * The Larkspur ranch (invented demo data): five rooms. Units picked by hand as calc's suggestion sizes them for
- * the same zones (checked through the API below): a 12k and an 18k head on the 24k three-port multi-zone, and
- * calc's suggestion for the whole house. The demo catalog steps past some of these loads' ranges (the first zone's
- * 12k head gives 89 %, the 18k 134 %; the suggestion takes the closer): then the ready mark is made with the
- * office's reason (the readiness rule's override).
+ * the same zones (checked through the API below): two 15k slim ducted heads (the zones are closed rooms, so ducted
+ * heads, with their lowest duct opening 7 ft up for the A2L room-size check) on the 30k four-port multi-zone, and
+ * calc's suggestion for the whole house (the 30k ducted heat pump with its air handler). Every unit is within its
+ * sizing range, so the job is marked ready without the office's override (desk-ready covers the override).
  */
 const RANCH = ['Great room', 'Kitchen and dining', 'Main bedroom', 'Bedroom two', 'Bedroom three'];
 const ZONES = [
-  { name: 'Great room and bedroom two', rooms: ['Great room', 'Bedroom two'], head: 'TSL-MH12-W', lengthFt: 25 },
+  { name: 'Great room and bedroom two', rooms: ['Great room', 'Bedroom two'], head: 'TSL-MH15-D', lengthFt: 25 },
   {
     name: 'Kitchen and bedrooms',
     rooms: ['Kitchen and dining', 'Main bedroom', 'Bedroom three'],
-    head: 'TSL-MH18-W',
+    head: 'TSL-MH15-D',
     lengthFt: 35,
   },
 ];
-const MULTI = 'TSL-M24-3P';
+const MULTI = 'TSL-M30-4P';
+/** Height of the zones' lowest duct opening above the floor, ft (ceiling grilles of an 8 ft room, less a foot). */
+const OPENING_FT = 7;
+
+interface SizingLike {
+  withinRange: boolean;
+  warnings: string[];
+}
 
 const tab = (page: Page, name: string) => page.getByRole('tab', { name: new RegExp(`^${name}`) });
 const saved = (form: Locator) =>
@@ -74,12 +81,18 @@ describe('the estimator’s desk to a ready job', () => {
     const suggested = (await (
       await page.request.post(`/api/jobs/${jobId}/suggest`, {
         headers: { 'X-CSRF-Token': csrf },
-        data: { zones: ZONES.map((z, i) => ({ key: `zone-${i + 1}`, name: z.name, roomIds: z.rooms.map(idOf) })) },
+        data: {
+          zones: ZONES.map((z, i) => ({
+            key: `zone-${i + 1}`,
+            name: z.name,
+            roomIds: z.rooms.map(idOf),
+            lowestDuctOpeningFt: OPENING_FT,
+          })),
+        },
       })
     ).json()) as { design: { zones: { indoorUnitKey: string }[]; systems: { outdoorUnitKey: string }[] } };
-    // calc suggests the same size for each zone (a slim ducted head for closed rooms, where the journey hangs wall heads).
-    const size = (key: string) => key.replace(/-[A-Z]$/, '');
-    expect(suggested.design.zones.map((z) => size(z.indoorUnitKey))).toEqual(ZONES.map((z) => size(z.head)));
+    // calc suggests the units the journey hangs by hand.
+    expect(suggested.design.zones.map((z) => z.indoorUnitKey)).toEqual(ZONES.map((z) => z.head));
     expect(suggested.design.systems.map((s) => s.outdoorUnitKey)).toEqual([MULTI]);
 
     await openDesk(page, jobId);
@@ -102,6 +115,7 @@ describe('the estimator’s desk to a ready job', () => {
           .getByLabel(r)
           .check();
       await row.getByLabel('Indoor unit', { exact: true }).selectOption(z.head);
+      await row.getByLabel('Lowest duct opening above the floor (ft)').fill(String(OPENING_FT));
     }
     const system = design.getByRole('group', { name: 'System 1', exact: true });
     await system.getByLabel('Outdoor unit').selectOption(MULTI);
@@ -114,7 +128,7 @@ describe('the estimator’s desk to a ready job', () => {
     }
     await design.getByRole('button', { name: 'Save design' }).click();
     await saved(design);
-    await page.getByText(/^2 of 3 ports used/).waitFor();
+    await page.getByText(/^2 of 4 ports used/).waitFor();
 
     // One line longer: the charge and the price follow.
     const charge = () => page.getByText(/^Total extra charge/).textContent();
@@ -197,6 +211,16 @@ describe('the estimator’s desk to a ready job', () => {
           .inputValue(),
       )
       .not.toBe('TSL-S9H-W');
+    // The suggestion for the whole house as one zone of closed rooms: a ducted unit, never a wall head.
+    await expect
+      .poll(() =>
+        page
+          .getByRole('form', { name: `Design of ${single}` })
+          .getByLabel('Indoor unit', { exact: true })
+          .inputValue(),
+      )
+      .toBe('TSL-AH36');
+    await page.screenshot({ path: `${SHOTS}/desk-suggested-1440.png`, fullPage: true });
     // 40 % is beyond the estimator's limit: it waits too.
     const pricing2 = page.getByRole('form', { name: `Pricing of ${single}` });
     await pricing2.getByRole('button', { name: 'Add a discount' }).click();
@@ -226,28 +250,29 @@ describe('the estimator’s desk to a ready job', () => {
     await page.getByText(/^Discount approved by /).waitFor();
     await tab(page, single).click();
     await page.getByText(/^Discount denied by /).waitFor();
+    // Every unit of both options is within its sizing range (calc's verdict on the desk): the mark is made at once,
+    // with no reason asked for.
+    const desk = (await (await page.request.get(`/api/jobs/${jobId}/desk`)).json()) as {
+      options: { name: string; result: { zones: { sizing: SizingLike }[]; systems: { sizing: SizingLike }[] } }[];
+    };
+    for (const o of desk.options)
+      for (const u of [...o.result.zones, ...o.result.systems])
+        expect(u.sizing.withinRange, `${o.name}: ${u.sizing.warnings.join(' | ')}`).toBe(true);
     await page.getByRole('button', { name: 'Mark ready to propose' }).click();
-    // On this home's loads (which other work keeps refining) a unit can sit outside the sizing range: then the
-    // office says why (the readiness rule's override) and the mark is made with the reason.
     const ready = page.getByRole('region', { name: 'Ready to propose' });
-    const why = ready.getByLabel('Why these sizes are right for this home');
     await ready
-      .getByText(/^Ready to propose — marked by /)
-      .or(why)
-      .first()
-      .waitFor();
-    if (await why.isVisible()) {
-      await why.fill('The owners keep the house cooler than the design; these sizes were agreed with them.');
-      await ready.getByRole('button', { name: 'Mark ready with this reason' }).click();
-    }
-    await page
       .getByText(/^Ready to propose — marked by /)
       .waitFor()
       .catch(async (err: unknown) => {
         await page.screenshot({ path: `${SHOTS}/desk-ready-fail.png`, fullPage: true });
-        const desk = (await (await page.request.get(`/api/jobs/${jobId}/desk`)).json()) as { readiness: unknown };
-        throw new Error(`not ready: ${JSON.stringify(desk.readiness)}`, { cause: err });
+        const now = (await (await page.request.get(`/api/jobs/${jobId}/desk`)).json()) as { readiness: unknown };
+        throw new Error(`not ready: ${JSON.stringify(now.readiness)}`, { cause: err });
       });
+    expect(await ready.getByLabel('Why these sizes are right for this home').count()).toBe(0);
+    const marked = (await (await page.request.get(`/api/jobs/${jobId}/desk`)).json()) as {
+      readiness: { ready: boolean; sizingOverride: unknown };
+    };
+    expect(marked.readiness).toMatchObject({ ready: true, sizingOverride: null });
     await page.screenshot({ path: `${SHOTS}/desk-ready-1440.png`, fullPage: true });
     await expectAccessible(page);
 
@@ -261,7 +286,7 @@ describe('the estimator’s desk to a ready job', () => {
     for (const r of RANCH) await zone3.getByRole('group', { name: 'Rooms of zone 1' }).getByLabel(r).check();
     await zone3.getByLabel('Indoor unit', { exact: true }).selectOption('TSL-AH36');
     const system3 = design3.getByRole('group', { name: 'System 1', exact: true });
-    await system3.getByLabel('Outdoor unit').selectOption('TSL-HP36');
+    await system3.getByLabel('Outdoor unit').selectOption('TSL-HP30');
     await system3.getByLabel('Line-set length (ft)').fill('25');
     await system3.getByLabel('Branch circuit length (ft)').fill('30');
     await system3.getByLabel('Where the ducts run').selectOption('attic');
@@ -282,6 +307,8 @@ describe('the estimator’s desk to a ready job', () => {
     await page.screenshot({ path: `${SHOTS}/desk-ducted-768.png`, fullPage: true });
     await page.setViewportSize(PHONE);
     await design3.screenshot({ path: `${SHOTS}/desk-ducted-design-375.png` });
+    await tab(page, single).click();
+    await page.screenshot({ path: `${SHOTS}/desk-suggested-375.png`, fullPage: true });
     await tab(page, whole).click();
     // On a phone the pricing form folds to one line under its heading: a tap opens it.
     await page.getByRole('region', { name: 'Pricing' }).locator('summary').click();

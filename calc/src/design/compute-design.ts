@@ -204,12 +204,16 @@ export function computeDesignFromParsed({
   const systemOfZone = new Map<string, OutdoorUnit>();
   /** How many indoor units the system of each zone carries (a one-to-one system is sized as its matched pair). */
   const circuitsOfZone = new Map<string, number>();
+  /** The heat kit of each zone's system, when it has one (the backup heat below the balance point). */
+  const zoneKit = new Map<string, HeatKit>();
   const outdoorOfSystem = design.systems.map((s, si) => {
     const outdoor = lookup(outdoorUnits, s.outdoorUnitKey, 'UNKNOWN_EQUIPMENT', ['systems', si, 'outdoorUnitKey']);
     s.circuits.forEach((c, ci) => {
       lookup(zoneByKey, c.zoneKey, 'UNKNOWN_ZONE', ['systems', si, 'circuits', ci, 'zoneKey']);
       systemOfZone.set(c.zoneKey, outdoor);
       circuitsOfZone.set(c.zoneKey, s.circuits.length);
+      const kit = s.heatKitKey === undefined ? undefined : catalog.heatKits?.find((k) => k.key === s.heatKitKey);
+      if (kit) zoneKit.set(c.zoneKey, kit);
     });
     return outdoor;
   });
@@ -241,6 +245,7 @@ export function computeDesignFromParsed({
       sensibleHeatRatio: rated.unit.sensibleHeatRatio,
       sensibleLoadBtuh: load.sensibleBtuh,
       latentLoadBtuh: load.latentBtuh,
+      backupHeat: zoneKit.get(z.key),
     });
     return { zoneKey: z.key, name: z.name, roomIds: z.roomIds, indoorUnitKey: indoor.key, sizing, explanations };
   });
@@ -360,6 +365,7 @@ export function computeDesignFromParsed({
         sensibleHeatRatio: outdoor.sensibleHeatRatio,
         sensibleLoadBtuh: sum.sensibleBtuh,
         latentLoadBtuh: sum.latentBtuh,
+        backupHeat: kit,
       }),
       ...(heating ? heating.explanations : []),
       { ...combination.explanation, key: `${p}combination` },

@@ -47,7 +47,10 @@ export function explainSizing({
   sensibleLoadBtuh,
   latentLoadBtuh,
   ratedAs,
+  backupHeat,
 }: {
+  /** The system's heat kit: a shortfall at the design temperature it covers is said to be covered. */
+  readonly backupHeat?: { readonly description: string; readonly kw: number } | undefined;
   /** A one-to-one system's pair ("heat pump with air handler"), when the zone is sized on the pair's rating. */
   readonly ratedAs?: string | undefined;
   readonly keyPrefix: string;
@@ -156,6 +159,9 @@ export function explainSizing({
     const heat = capacityAtOutdoorF({ points: heating, outdoorF: heatingDesignF });
     const loss = sizing.heatingLoadBtuh;
     const pct = loss > 0 ? (heat.btuh / loss) * 100 : null;
+    // Resistance heat: 1 kW = 3,412.142 Btu/h [PUB: the IT Btu definition].
+    const backupBtuh = (backupHeat?.kw ?? 0) * 3412.142;
+    const covered = backupHeat !== undefined && heat.btuh + backupBtuh >= loss;
     out.push(
       explanation({
         key: `${keyPrefix}heating-coverage`,
@@ -172,8 +178,10 @@ export function explainSizing({
             ? undefined
             : pct >= 100
               ? 'Covers the heat loss at the design temperature.'
-              : `Short by ${btuh(loss - heat.btuh)} at ${degF(heatingDesignF)}: plan backup heat or a larger unit.`,
-        status: pct !== null && pct < 100 ? 'warning' : heat.extrapolated ? 'warning' : 'ok',
+              : covered
+                ? `Short by ${btuh(loss - heat.btuh)} at ${degF(heatingDesignF)}, covered by ${backupHeat?.description ?? 'the heat kit'} (${formatNumber(backupHeat?.kw ?? 0, 1, { trim: true })} kW = ${btuh(backupBtuh)}).`
+                : `Short by ${btuh(loss - heat.btuh)} at ${degF(heatingDesignF)}: plan backup heat or a larger unit.`,
+        status: pct !== null && pct < 100 && !covered ? 'warning' : heat.extrapolated ? 'warning' : 'ok',
         source: "The maker's heating capacity data",
       }),
     );

@@ -292,8 +292,21 @@ describe('the estimator’s desk to a ready job', () => {
     await system3.getByLabel('Where the ducts run').selectOption('attic');
     await system3.getByLabel('Duct insulation (R-value)').fill('8');
     await system3.getByLabel('Heat kit (backup heat)').selectOption('TSL-HK8');
+    // A duct-leakage test's fractions and the heat kit's disconnect across the basement from the air handler.
+    await system3.getByLabel('Tested supply leakage (fraction of airflow)').fill('0.06');
+    await system3.getByLabel('Tested return leakage (fraction of airflow)').fill('0.04');
+    await system3.getByLabel('Leakage test: date and method').fill('2026-11-12, leakage to outside at 25 Pa');
+    await system3.getByLabel('Heat kit disconnect from the air handler (ft)').fill('12');
     await design3.getByRole('button', { name: 'Save design' }).click();
     await saved(design3);
+    await page
+      .getByText(/disconnect 60 A with 15 ft of liquid-tight conduit/)
+      .first()
+      .waitFor();
+    await page
+      .getByText(/a 6 ft whip does not reach/)
+      .first()
+      .waitFor();
     await page
       .getByText(/^Duct loads, /)
       .first()

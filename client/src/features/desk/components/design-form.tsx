@@ -325,7 +325,7 @@ function Systems({
             <AmountField name={`systems.${s}.electrical.circuitLengthFt`} label="Branch circuit length (ft)" />
             <AmountField
               name={`systems.${s}.electrical.disconnectDistanceFt`}
-              label="Disconnect from the outdoor unit (ft)"
+              label="Disconnect distance from the unit (ft)"
             />
           </div>
           <Circuits s={s} />

@@ -164,7 +164,7 @@ export function electricalPlan({
     explanations.push(
       explanation({
         key: `${keyPrefix}elec:disconnect-run`,
-        label: `Disconnect to ${label}`,
+        label: `From the disconnect to the ${label}`,
         value: run.lengthFt,
         unit: 'ft',
         valueText:

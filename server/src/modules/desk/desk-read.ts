@@ -7,9 +7,9 @@ import { NotFoundError } from '../../lib/errors';
 import { PureMemo } from '../../lib/pure-memo';
 import type { ServiceContext } from '../../lib/service-context';
 import { DEFAULT_PRICE_BOOK_SETTINGS } from '../company-data/price-book-settings.service';
-import { findJob } from '../jobs/job-access';
+import { jobScope } from '../jobs/job-access';
 import { scopeSql } from '../jobs/job-reads';
-import type { Job } from '../jobs/job.entity';
+import { JobSchema, type Job } from '../jobs/job.entity';
 import { companyDeskFromRows, DESK_DATASETS_SQL, type CompanyDataRow } from './desk-inputs';
 import {
   computeOption,
@@ -152,8 +152,13 @@ function inputsOf(row: InputsRow): DeskInputs {
  * unassigned job) as an entity to change, with what its options are worked out from.
  */
 export async function readDeskJob(ctx: ServiceContext, jobId: string): Promise<DeskJob> {
-  const job = await findJob(ctx, jobId);
-  await ctx.em.populate(job, ['readyBy']);
+  // The job with who marked it ready, nothing else: every entity the request holds is one more for the flush to diff.
+  const job = await ctx.em.findOne(
+    JobSchema,
+    { $and: [jobScope(ctx.actor), { id: jobId }] },
+    { populate: ['readyBy'] },
+  );
+  if (!job) throw new NotFoundError('The job');
   return { job, ...inputsOf(await readInputsRow(ctx, job.id)) };
 }
 

@@ -61,15 +61,12 @@ function printPhoneTable(runs: ReadonlyArray<PhoneTiming & { load: number }>): v
     return s.length % 2 ? (s[m] ?? Number.NaN) : ((s[m - 1] ?? 0) + (s[m] ?? 0)) / 2;
   };
   const gap = (r: PhoneTiming, k: 'cold' | 'warm') => r.traces?.[k].busyVisibleToTypedMs ?? Number.NaN;
-  const wait = (r: PhoneTiming, k: 'cold' | 'warm') =>
-    (k === 'cold' ? r.coldFirstKeyWaitMs : r.warmFirstKeyWaitMs) ?? Number.NaN;
   const rows = runs.map((r, i) => [
     `run ${i + 1}`,
     f(r.coldVisibleMs),
     f(r.coldMs),
     f(r.warmVisibleMs),
     f(r.warmMs),
-    `${f(wait(r, 'cold'))} / ${f(wait(r, 'warm'))}`,
     `${f(gap(r, 'cold'))} / ${f(gap(r, 'warm'))}`,
     f(r.load, 1),
   ]);
@@ -80,21 +77,19 @@ function printPhoneTable(runs: ReadonlyArray<PhoneTiming & { load: number }>): v
     f(pick((r) => r.coldMs)),
     f(pick((r) => r.warmVisibleMs)),
     f(pick((r) => r.warmMs)),
-    `${f(pick((r) => wait(r, 'cold')))} / ${f(pick((r) => wait(r, 'warm')))}`,
     `${f(pick((r) => gap(r, 'cold')))} / ${f(pick((r) => gap(r, 'warm')))}`,
     f(
       pick((r) => r.load),
       1,
     ),
   ]);
-  rows.push(['goal', '', '≤ 3000', '', '≤ 1000', '', '', '']);
+  rows.push(['goal', '', '≤ 3000', '', '≤ 1000', '', '']);
   const head = [
     'phone',
     'cold shown ms',
     'cold typed ms',
     'warm shown ms',
     'warm typed ms',
-    'first key waited ms cold/warm',
     'CPU ms shown→typed cold/warm',
     'load',
   ];

@@ -20,12 +20,6 @@ export interface PhoneTiming {
   /** Until the room-name field was on screen (the rest is the typed letter reaching it). */
   readonly coldVisibleMs: number;
   readonly warmVisibleMs: number;
-  /**
-   * How long the first key pressed in the field waited before the page handled it (Event Timing's
-   * first-input: processingStart − startTime), cold and warm: what the keystroke sat behind.
-   */
-  readonly coldFirstKeyWaitMs: number | null;
-  readonly warmFirstKeyWaitMs: number | null;
   /** Whether the service worker answered the warm load (it controlled the page). */
   readonly warmFromWorker: boolean;
   readonly transferredKb: number;
@@ -104,7 +98,6 @@ export async function phoneTimings(
       );
     }
     let visibleMs = 0;
-    let firstKeyWaitMs: number | null = null;
     const traces: Partial<Record<'cold' | 'warm', TraceSummary>> = {};
     const typeable = async (letter: string, label: 'cold' | 'warm') => {
       const t0 = performance.now();
@@ -120,18 +113,6 @@ export async function phoneTimings(
         letter,
       );
       const ms = performance.now() - t0;
-      firstKeyWaitMs = await page.evaluate(
-        () =>
-          new Promise<number | null>((resolve) => {
-            const observer = new PerformanceObserver((list) => {
-              const entry = list.getEntries()[0] as PerformanceEventTiming | undefined;
-              resolve(entry ? entry.processingStart - entry.startTime : null);
-              observer.disconnect();
-            });
-            observer.observe({ type: 'first-input', buffered: true });
-            setTimeout(() => resolve(null), 1000);
-          }),
-      );
       if (profile) {
         // What the page does next (the work kept until after the first keystroke) is in the trace too.
         await page.waitForTimeout(AFTER_TYPED_MS);
@@ -152,14 +133,12 @@ export async function phoneTimings(
     if (profile) await browser.startTracing(page, { categories: TRACE_CATEGORIES });
     const coldMs = await typeable('q', 'cold');
     const coldVisibleMs = visibleMs;
-    const coldFirstKeyWaitMs = firstKeyWaitMs;
     const transferredKb = bytes / 1024;
     // Let the first visit's edit settle (it is typed back), then open the page again in the same tab.
     if (profile) await browser.startTracing(page, { categories: TRACE_CATEGORIES });
     await page.waitForTimeout(1500);
     const warmMs = await typeable('z', 'warm');
     const warmVisibleMs = visibleMs;
-    const warmFirstKeyWaitMs = firstKeyWaitMs;
     const warmFromWorker = await page.evaluate(() => navigator.serviceWorker?.controller != null);
     await page.waitForTimeout(1500);
     return {
@@ -167,8 +146,6 @@ export async function phoneTimings(
       warmMs,
       coldVisibleMs,
       warmVisibleMs,
-      coldFirstKeyWaitMs,
-      warmFirstKeyWaitMs,
       warmFromWorker,
       transferredKb,
       foreign,

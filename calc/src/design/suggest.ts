@@ -738,7 +738,13 @@ export function suggestDesign({
     const words = (c: { label: string; plan: Plan }) => {
       const sc = score(c.plan);
       const units = c.plan.sizings.length;
-      return `${c.label}: ${sc.outOfRange === 0 ? `all ${units} sizing checks in range` : `${sc.outOfRange} of ${units} sizing checks outside their range (${formatNumber(sc.missPoints, 1, { trim: true })} points in all)`}`;
+      const blocked =
+        sc.blockers === 0
+          ? ''
+          : Number.isFinite(sc.blockers)
+            ? `, ${sc.blockers} problem${sc.blockers === 1 ? '' : 's'} that would stop the ready mark (A2L room size, line limits or combinations)`
+            : ', not a valid design';
+      return `${c.label}: ${sc.outOfRange === 0 ? `all ${units} sizing checks in range` : `${sc.outOfRange} of ${units} sizing checks outside their range (${formatNumber(sc.missPoints, 1, { trim: true })} points in all)`}${blocked}`;
     };
     reasons.unshift(
       explanation({
@@ -747,7 +753,7 @@ export function suggestDesign({
         value: candidates.length,
         unit: '',
         valueText: chosen.label,
-        text: `${candidates.map(words).join('; ')}. Chosen: ${chosen.label} — the fewest units outside their range, then the fewest points outside, then the kind of head that suits each zone, then the lower equipment cost.`,
+        text: `${candidates.map(words).join('; ')}. Chosen: ${chosen.label} — the fewest problems that would stop the ready mark, then the fewest units outside their range, then the fewest points outside, then the kind of head that suits each zone, then the lower equipment cost.`,
         status: score(plan).blockers === 0 && score(plan).outOfRange === 0 ? 'ok' : 'warning',
         source: 'Active catalog, company sizing policy',
       }),

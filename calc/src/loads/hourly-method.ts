@@ -78,7 +78,11 @@ export const ATTIC_RESPONSE = { vented: 0.45, radiantBarrier: 0.3, lagHours: 1 }
  * half the winter ones, as recalled. The ASHRAE basic stack-and-wind model Q = A_L·√(Cs·ΔT + Cw·U²)
  * gives 0.53 for 20 °F / 7.5 mph against 60 °F / 15 mph on a one-storey house: its wind coefficient
  * 0.0065 (shielding class 3) was seen in a public copy of the table (from ASHRAE 1989, CRC Press
- * companion material K10576); the stack coefficient 0.0150 and the design winds are recalled. The test
+ * companion material K10576); the stack coefficient 0.0150 and the design winds are recalled. The
+ * stack-and-wind model itself is Sherman and Grimsrud's (LBL-10163, ASHRAE Transactions 1980, pp. 778–807;
+ * its AIVC abstract, https://aivc.org/node/13801, read 5 Dec 2026: stack and wind regimes treated apart,
+ * inputs the fan-pressurization leakage area, wind speed, terrain class and temperature difference); the
+ * paper's coefficient tables were not found in a public copy in the second search either. The test
  * file works that ratio; the assumption's effect on the review ranch (the largest of them) is stated in
  * METHOD_ASSUMPTIONS and checked in tests/calc/method-constants.test.ts.]
  */

@@ -151,13 +151,6 @@ const campbellNormanFractions = (): number[] => {
   return g.map((x) => (top - x) / (top - low));
 };
 
-const withRadiantBarrier: HomeInput = {
-  ...ranchHome,
-  rooms: ranchHome.rooms.map((r) => ({
-    ...r,
-    above: { kind: 'attic' as const, insulation: 'r30' as const, radiantBarrier: true },
-  })),
-};
 const withAtticDucts = (supplyShare?: number): HomeInput => ({
   ...ranchHome,
   ducts: { location: 'attic', insulationR: 6, ...(supplyShare ? { supplyAreaFt2: supplyShare * 1800 } : {}) },
@@ -183,11 +176,6 @@ const recompute: Record<string, () => [number, number, number] | null> = {
     patchedArray(SOLAR_RTS, solarSeries(0.3), block),
     patchedArray(SOLAR_RTS, solarSeries(0.7), block),
   ],
-  'radiant-barrier': () => {
-    const attic = ATTIC_RESPONSE as { radiantBarrier: number };
-    const rb = () => block(withRadiantBarrier);
-    return [rb(), patched(attic, { radiantBarrier: 0.2 }, rb), patched(attic, { radiantBarrier: 0.45 }, rb)];
-  },
   'duct-areas': () => [block(withAtticDucts()), block(withAtticDucts(0.2)), block(withAtticDucts(0.35))],
   'daily-range': () => {
     const cn = patchedArray(DAILY_RANGE_FRACTION, campbellNormanFractions(), block);
@@ -239,7 +227,6 @@ describe('assumptions with no published source: the method statement’s figures
       /daily range/,
       /stored by the room/,
       /time lag and damping/,
-      /Attic air/,
       /summer half/,
       /27 %/,
       /below-grade method/,
@@ -378,22 +365,42 @@ describe('daily-range fractions against a published diurnal curve', () => {
   });
 });
 
-describe('radiant barrier against simulated attics', () => {
-  it('cuts the ceiling’s peak-hour gain no more than the lowest cut Medina and Young found (23 %, desert)', () => {
+describe('radiant barrier against measured and simulated attics', () => {
+  const c = designConditionsSchema.parse(ranchHome.designConditions);
+  const ctx = designDayContext(c);
+  const peakOf = (xs: Float64Array): number => xs.indexOf(Math.max(...xs));
+
+  it('the attic air over outdoor with a barrier is the measured 36.1 / 42.9 of that without', () => {
+    // [PUB: Parker and Sherwin, "Comparative Summer Attic Thermal Performance of Six Roof Constructions", FSEC 1998,
+    // as tabulated at builditsolar.com/Projects/Cooling/FSECRoofPaperSummary.htm: black shingles, vented 1 in 300,
+    // peak attic 134.9 °F without a radiant barrier and 128.1 °F with one, 92 °F outdoors]
+    // 128.1 − 92 = 36.1 °F; 134.9 − 92 = 42.9 °F; 36.1 / 42.9 = 0.8415
+    for (const color of ['light', 'medium', 'dark'] as const) {
+      const vented = ctx.atticDt(color, false);
+      const barrier = ctx.atticDt(color, true);
+      const h = peakOf(vented);
+      const over = (dt: number) => c.indoorCoolingF + dt - (ctx.outdoorF[(h - 1 + 24) % 24] ?? 0);
+      expect(over(barrier[h] ?? 0) / over(vented[h] ?? 0)).toBeCloseTo(36.1 / 42.9, 3);
+    }
+    expect(ATTIC_RESPONSE.radiantBarrier).toBeCloseTo(0.45 * 0.8415, 3);
+  });
+
+  it('cuts a dark roof’s peak-hour ceiling gain by about the 12 % measured, and any roof’s by less than the 23 % Medina and Young simulated', () => {
+    // [PUB: as above, "% reduction in attic to living space temperature difference": 12 % for the barrier alone;
+    // the measured 12 % is at the site's 92 °F and about 77 °F indoors, here 95 °F and 75 °F, so ±4 points.]
     // [PUB: Medina and Young, "A perspective on the effect of climate and local environmental variables on the
     // performance of attic radiant barriers in the United States", Building and Environment 41 (2006) 1767–1778,
     // abstract: peak-hour reductions in ceiling heat flux, R-19 vented attic, 23 % (desert) to almost 100 %.]
     // Ceiling gain is U·A·(attic − indoor), so the cut is 1 − (attic − indoor with barrier)/(without) at the peak hour.
-    const c = designConditionsSchema.parse(ranchHome.designConditions);
-    const ctx = designDayContext(c);
     for (const color of ['light', 'medium', 'dark'] as const) {
       const vented = ctx.atticDt(color, false);
       const barrier = ctx.atticDt(color, true);
-      let peak = 0;
-      for (let h = 1; h < 24; h += 1) if ((vented[h] ?? 0) > (vented[peak] ?? 0)) peak = h;
-      const cut = 1 - (barrier[peak] ?? 0) / (vented[peak] ?? 1);
-      expect(cut).toBeGreaterThan(0.1);
-      expect(cut).toBeLessThanOrEqual(0.235);
+      const h = peakOf(vented);
+      const cut = 1 - (barrier[h] ?? 0) / (vented[h] ?? 1);
+      console.log(`radiant barrier, ${color} roof: peak-hour ceiling gain cut ${(cut * 100).toFixed(1)} %`);
+      expect(cut).toBeGreaterThan(0);
+      expect(cut).toBeLessThan(0.23);
+      if (color === 'dark') expect(Math.abs(cut - 0.12)).toBeLessThanOrEqual(0.04);
     }
   });
 });

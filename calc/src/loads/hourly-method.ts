@@ -56,20 +56,39 @@ export const MASS_RESPONSE = {
 export type MassClass = keyof typeof MASS_RESPONSE;
 
 /**
+ * Peak attic air in two side-by-side Florida attics under black shingles, both vented 1 in 300, one with
+ * a radiant barrier, on a typical mid-June day with a 92 °F peak outdoors: 134.9 °F without the barrier,
+ * 128.1 °F with it. [PUB: Parker and Sherwin, "Comparative Summer Attic Thermal Performance of Six Roof
+ * Constructions", Florida Solar Energy Center, 1998 — as tabulated in the summary at
+ * https://www.builditsolar.com/Projects/Cooling/FSECRoofPaperSummary.htm (read 5 Dec 2026; the paper itself
+ * was not found in a public copy), which gives the barrier's cut of the attic-to-living-space difference as 12 %.]
+ */
+export const FSEC_RADIANT_BARRIER_ATTICS = { outdoorPeakF: 92, withoutBarrierF: 134.9, withBarrierF: 128.1 } as const;
+
+/**
  * Vented attic air temperature: outdoor + k × (roof sol-air − outdoor), one hour behind the
- * roof; k 0.45 for a vented attic, 0.30 with a radiant barrier under the roof deck.
+ * roof; k 0.45 for a vented attic; with a radiant barrier under the roof deck, k × the measured
+ * ratio of the two attics' excess over outdoor air, (128.1 − 92)/(134.9 − 92) = 0.842 → 0.379.
  * [OWN/TRADE: a stated simplification in place of the flat +30 °F. The vented 0.45 gives a dark-shingle
  * attic at 26.6° N in July a peak 38 °F over outdoor, against 40 °F measured (PUB: Parker, Sonne and
  * Sherwin, FSEC-CR-1220-00, control home, Ft. Myers) — checked in tests/calc/method-constants.test.ts;
  * the 1 h lag is inside the 1–2 h delay measured by the USDA Forest Products Laboratory (PUB: TenWolde,
- * FPL-RP-561).] [Assumption (no published source found): the radiant-barrier 0.30. It cuts the ceiling's
- * peak-hour gain by about 16–23 % (light to dark roof), at or below the lowest peak-hour cut, 23 %, that
- * Medina and Young simulated for R-19 attics across US climates (PUB: "A perspective on the effect of
- * climate and local environmental variables on the performance of attic radiant barriers in the United
- * States", Building and Environment 41 (2006) 1767–1778: 23 % desert to almost 100 % marine west coast),
- * so it credits the barrier no more than that study — checked in the same test file.]
+ * FPL-RP-561).] [PUB, the radiant barrier: FSEC_RADIANT_BARRIER_ATTICS. The model's attic excess over outdoor
+ * is proportional to k at every hour, so the measured ratio carries over whatever the site. The barrier then
+ * cuts a dark roof's peak-hour ceiling gain by about 11 %, under the lowest peak-hour cut of ceiling heat
+ * flux, 23 %, that Medina and Young simulated for R-19 attics (PUB: "A perspective on the effect of climate
+ * and local environmental variables on the performance of attic radiant barriers in the United States",
+ * Building and Environment 41 (2006) 1767–1778) — the barrier's cut of the radiation reaching the insulation
+ * is not modelled apart from the attic air, so the ceiling credit is on the low side; both checked in the
+ * same test file.]
  */
-export const ATTIC_RESPONSE = { vented: 0.45, radiantBarrier: 0.3, lagHours: 1 } as const;
+export const ATTIC_RESPONSE = {
+  vented: 0.45,
+  radiantBarrier:
+    (0.45 * (FSEC_RADIANT_BARRIER_ATTICS.withBarrierF - FSEC_RADIANT_BARRIER_ATTICS.outdoorPeakF)) /
+    (FSEC_RADIANT_BARRIER_ATTICS.withoutBarrierF - FSEC_RADIANT_BARRIER_ATTICS.outdoorPeakF),
+  lagHours: 1,
+} as const;
 
 /**
  * Design air leakage in summer as a fraction of the winter rate (less stack effect, lighter

@@ -9,7 +9,7 @@ export const METHOD_NOTES: readonly string[] = [
   `Outdoor temperature each hour: design dry bulb − fraction × daily range ${DAILY_RANGE_SOURCE}.`,
   'Sun position and clear-sky sun: ASHRAE Handbook—Fundamentals 2013 ch. 14 equations and its 2013 clear-sky model with the site’s optical depths τb and τd (or a generic default, labelled as such).',
   `Sun through glass: area × SHGC × interior shading × (beam on the glass, less an overhang’s shadow, + sky and ground diffuse); the angle of incidence lowers the SHGC as it lowers the solar transmittance of two clear panes — Fresnel reflection at each surface and absorption along the slanted path [PUB: Duffie and Beckman, Solar Engineering of Thermal Processes, ch. 5; glass refractive index 1.525 from Rubin, Solar Energy Materials 12 (1985)]; part of it is stored by the room and reaches the load in later hours ${SOLAR_STORAGE_SOURCE}.`,
-  'Walls, doors and roofs: U × area × sol-air temperature difference (absorptance from the colour), with a time lag and damping for the construction’s mass [PUB: ASHRAE ch. 18 sol-air; lag and damping from the periodic conduction through representative walls with the material properties ORNL published; the walls’ make-up is an assumption, see below]. Attic air from the roof’s sol-air temperature: 0.45 of the way from outdoor air, one hour behind [OWN, checked against attics measured in Florida: FSEC-CR-1220-00], 0.30 with a radiant barrier [an assumption, see below]; a garage 0.6 of the way from indoor to outdoor [TRADE].',
+  'Walls, doors and roofs: U × area × sol-air temperature difference (absorptance from the colour), with a time lag and damping for the construction’s mass [PUB: ASHRAE ch. 18 sol-air; lag and damping from the periodic conduction through representative walls with the material properties ORNL published; the walls’ make-up is an assumption, see below]. Attic air from the roof’s sol-air temperature: 0.45 of the way from outdoor air, one hour behind [OWN, checked against attics measured in Florida: FSEC-CR-1220-00], 0.38 with a radiant barrier [PUB: the ratio of two side-by-side vented attics’ peak excess over outdoor air measured with and without a barrier, 36.1 and 42.9 °F: Parker and Sherwin, Comparative Summer Attic Thermal Performance of Six Roof Constructions, Florida Solar Energy Center 1998]; a garage 0.6 of the way from indoor to outdoor [TRADE].',
   'Window conduction: U × area × (outdoor that hour − indoor).',
   'Slab floors lose heat at the exposed edge: F-factor × exposed perimeter × temperature difference [MEM: ASHRAE 90.1/IECC F-factors].',
   'Air leakage: winter air changes from the tightness (or a blower-door CFM50 ÷ 20 [TRADE]), summer half of it [an assumption, see below]; the house’s leakage is shared among rooms by outside envelope area, so interior rooms get none. Sensible 1.08 × CFM × ΔT, latent 0.68 × CFM × Δgrains, both × altitude factor.',
@@ -28,7 +28,6 @@ export interface MethodAssumption {
     | 'wall-mass'
     | 'solar-storage'
     | 'daily-range'
-    | 'radiant-barrier'
     | 'duct-areas'
     | 'glass-absorption'
     | 'basement-floor';
@@ -71,12 +70,6 @@ export const METHOD_ASSUMPTIONS: readonly MethodAssumption[] = [
     what: 'the make-up of the two representative walls whose periodic conduction gives the time lag and damping (frame: stucco, R-13, gypsum → 1 h and 0.98; masonry: 8 in concrete, gypsum → 6 h and 0.50)',
     range: 'at no lag or damping to the older recalled 2 h and 0.9 for frame',
     ranch: { asUsed: 26764, low: 26703, high: 26435 },
-  },
-  {
-    key: 'radiant-barrier',
-    what: 'attic air 0.30 of the way to the roof’s sol-air temperature with a radiant barrier (0.45 without)',
-    range: 'at 0.20 to 0.45 (no credit)',
-    ranch: { variant: 'with a radiant barrier over every ceiling', asUsed: 26254, low: 25913, high: 26764 },
   },
   {
     key: 'duct-areas',

@@ -45,14 +45,68 @@ describe('a ducted system’s ducts feed this option’s loads', () => {
     expect(run(design, home).loads.ducts?.location).toBe('garage');
   });
 
-  it('refuses two ducted systems in one option, on the second one’s ducts', () => {
+  it('two ducted systems, each on its own rooms: each system’s duct loads are the one-system method’s for its rooms alone', () => {
+    const [first] = design.systems;
+    if (!first) throw new Error('sample design has a system');
+    const attic = { location: 'attic' as const, insulationR: 6, leakage: 'typical' as const };
+    const basement = { location: 'basement' as const, insulationR: 4, leakage: 'leaky' as const };
+    const two: DesignInput = {
+      ...design,
+      systems: [
+        { ...first, circuits: first.circuits.slice(0, 1), ducts: attic },
+        { ...first, key: 's2', name: 'Downstairs', circuits: first.circuits.slice(1), ducts: basement },
+      ],
+    };
+    const r = run(two);
+    // The reference: the one-system method (ASHRAE 152 delivery effectiveness, checked in ducts.test.ts against
+    // an energy balance marched through the ducts) with only that system's ducts, on only its rooms.
+    const up = homeLoad({ home: { ...threeRoomHome, ducts: { ...attic, roomIds: ['living', 'kitchen'] } } });
+    const down = homeLoad({ home: { ...threeRoomHome, ducts: { ...basement, roomIds: ['bed'] } } });
+    expect(r.loads.ductSystems.map((d) => [d.location, d.roomIds])).toEqual([
+      ['attic', ['living', 'kitchen']],
+      ['basement', ['bed']],
+    ]);
+    const [mine1, mine2] = r.loads.ductSystems;
+    for (const [mine, alone] of [
+      [mine1, up.ducts],
+      [mine2, down.ducts],
+    ] as const) {
+      // Heating loss and latent gain are the system's own rooms' (at their own peak), whatever the other system does.
+      expect(mine?.heating).toEqual(alone?.heating);
+      expect(mine?.cooling.latentBtuh).toBe(alone?.cooling.latentBtuh);
+      expect(mine?.airflowCfm).toBe(alone?.airflowCfm);
+      expect(mine?.supplyLeakageFraction).toBe(alone?.supplyLeakageFraction);
+    }
+    // Each room's duct shares (at its own peak hour) are those of its own system's method alone.
+    const room = (l: typeof up, id: string) => l.rooms.find((x) => x.roomId === id);
+    for (const [id, alone] of [
+      ['living', up],
+      ['kitchen', up],
+      ['bed', down],
+    ] as const) {
+      expect(room(r.loads, id)?.sensibleGain.ducts, id).toBe(room(alone, id)?.sensibleGain.ducts);
+      expect(room(r.loads, id)?.latentGain.ducts, id).toBe(room(alone, id)?.latentGain.ducts);
+      expect(room(r.loads, id)?.heatLoss.ducts, id).toBe(room(alone, id)?.heatLoss.ducts);
+      expect(room(alone, id)?.heatLoss.ducts, `${id} has duct loss`).toBeGreaterThan(0);
+    }
+    // The desk's line on each system says its own figures, at the whole option's block hour.
+    const why1 = r.systems[0]?.explanations.find((e) => e.key === 's1:ducts');
+    const why2 = r.systems[1]?.explanations.find((e) => e.key === 's2:ducts');
+    expect(why1?.label).toBe('Duct loads, Main system (ducts in the attic, R-6)');
+    expect(why2?.label).toBe('Duct loads, Downstairs (ducts in an unheated basement, R-4)');
+    expect(why1?.value).toBe(Math.round(mine1?.cooling.sensibleBtuh ?? Number.NaN));
+    expect(why2?.value).toBe(Math.round(mine2?.cooling.sensibleBtuh ?? Number.NaN));
+    expect(r.systems[1]?.explanations.some((e) => e.key === 's1:ducts')).toBe(false);
+  });
+
+  it('refuses a room on two ducted systems’ ducts, on the second one’s ducts', () => {
     const [first] = design.systems;
     if (!first) throw new Error('sample design has a system');
     const two: DesignInput = {
       ...design,
       systems: [
         { ...first, circuits: first.circuits.slice(0, 1), ducts: { location: 'attic' } },
-        { ...first, key: 's2', name: 'Second', circuits: first.circuits.slice(1), ducts: { location: 'garage' } },
+        { ...first, key: 's2', name: 'Second', ducts: { location: 'garage' } },
       ],
     };
     let thrown: unknown;
@@ -63,7 +117,10 @@ describe('a ducted system’s ducts feed this option’s loads', () => {
     }
     expect(thrown).toBeInstanceOf(CalcError);
     expect((thrown as CalcError).details).toEqual([
-      { path: ['systems', 1, 'ducts'], message: 'One ducted system per option: the loads count one set of ducts' },
+      {
+        path: ['systems', 1, 'ducts'],
+        message: 'Room "living" is already served by the ducts of Main system: a room is on one ducted system\'s ducts',
+      },
     ]);
   });
 });

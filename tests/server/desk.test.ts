@@ -109,9 +109,11 @@ describe('bad input: problem+json with field paths, nothing stored', () => {
         ],
       },
     });
+    // The same room on both systems' ducts: it would take two systems' duct loads.
+    expectProblem(twoValid, 400);
     expect(twoValid.body.errors).toContainEqual({
       path: 'design.systems.1.ducts',
-      message: 'One ducted system per option: the loads count one set of ducts',
+      message: `Room "${rooms[0]}" is already served by the ducts of Living system: a room is on one ducted system's ducts`,
     });
     const ghost = singleZone('00000000-0000-4000-8000-000000000000');
     const noRoom = await patch(estimator, url, o.version).send({ design: ghost });
@@ -180,6 +182,41 @@ describe('ducted systems', () => {
     const load = (x: { body: { option: { result: { zones: { sizing: { coolingLoadBtuh: number } }[] } } } }) =>
       x.body.option.result.zones[0]?.sizing.coolingLoadBtuh ?? Number.NaN;
     expect(load(r)).toBeGreaterThan(load({ body: { option: o } as never }));
+  });
+
+  it('two ducted systems on different rooms (attic upstairs, basement downstairs): accepted, each with its own duct loads', async () => {
+    const { job, rooms } = await deskJob(estimator);
+    const up = singleZone(rooms[0] ?? '');
+    const down = singleZone(rooms[1] ?? '');
+    const plain = {
+      zones: [...up.zones, { ...down.zones[0], key: 'z2', name: 'Bedroom' }],
+      systems: [
+        { ...up.systems[0], name: 'Upstairs' },
+        { ...down.systems[0], key: 's2', name: 'Downstairs', circuits: [{ zoneKey: 'z2', lengthFt: 30 }] },
+      ],
+    };
+    const o = await newOption(estimator, job.id, { name: 'Two storeys', design: plain });
+    const url = `/api/jobs/${job.id}/options/${o.id}`;
+    const attic = { location: 'attic', insulationR: 6, leakage: 'typical' };
+    const basement = { location: 'basement', insulationR: 4, leakage: 'leaky' };
+    const [s1, s2] = plain.systems;
+    const r = await patch(estimator, url, o.version).send({
+      design: { ...plain, systems: [{ ...s1, ducts: attic }, { ...s2, ducts: basement }] },
+    });
+    expect(r.status, JSON.stringify(r.body)).toBe(200);
+    expect(r.body.option.design.systems.map((s: { ducts: unknown }) => s.ducts)).toEqual([attic, basement]);
+    type Why = { key: string; label: string; value: number };
+    const whys = (i: number): Why[] =>
+      r.body.option.result.systems[i].explanations.filter((e: Why) => e.key.endsWith(':ducts'));
+    expect(whys(0).map((e) => e.label)).toEqual(['Duct loads, Upstairs (ducts in the attic, R-6)']);
+    expect(whys(1).map((e) => e.label)).toEqual(['Duct loads, Downstairs (ducts in an unheated basement, R-4)']);
+    // Each system's ducts add to its own room only (ASHRAE 152: the ducts' losses go to the rooms they serve).
+    const before = o as unknown as { result: { zones: { sizing: { heatingLoadBtuh: number } }[] } };
+    const heat = (zs: { sizing: { heatingLoadBtuh: number } }[], i: number) => zs[i]?.sizing.heatingLoadBtuh ?? Number.NaN;
+    for (const i of [0, 1])
+      expect(heat(r.body.option.result.zones, i)).toBeGreaterThan(heat(before.result.zones, i));
+    const read = await estimator.agent.get(url);
+    expect(read.body.option.result.systems[1].explanations.some((e: Why) => e.key === 's2:ducts')).toBe(true);
   });
 });
 

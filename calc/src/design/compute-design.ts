@@ -195,6 +195,12 @@ export function computeDesignFromParsed({
   // A ducted system's ducts are this option's own: its loads are worked with them (the shared loads stand otherwise).
   const withDucts = homeWithDesignDucts(home, design);
   const loads = withDucts ? homeLoadFromParsed(withDucts.home) : (given ?? homeLoadFromParsed(home));
+  /** A ducted system's duct loads (none for a system without ducts on this option). */
+  const ductsOfSystem = (key: string) => {
+    const at = withDucts?.systemKeys.indexOf(key) ?? -1;
+    const d = at >= 0 ? loads.ductSystems[at] : undefined;
+    return d ? [d] : [];
+  };
   const dc = home.designConditions;
   const indoorUnits = byKey(catalog.indoorUnits, (u) => u.key);
   const outdoorUnits = byKey(catalog.outdoorUnits, (u) => u.key);
@@ -370,7 +376,7 @@ export function computeDesignFromParsed({
       ...(heating ? heating.explanations : []),
       { ...combination.explanation, key: `${p}combination` },
       ...refrigerant.circuits.map((c) => c.explanation),
-      ...(withDucts?.systemKey === s.key && loads.ducts ? [explainDuctLoads(s.key, s.name, loads.ducts, s.ducts)] : []),
+      ...ductsOfSystem(s.key).map((d) => explainDuctLoads(s.key, s.name, d, s.ducts)),
       ...refrigerant.explanations,
       ...electrical.explanations,
       ...(kitElectrical ? kitElectrical.explanations : []),

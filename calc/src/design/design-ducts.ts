@@ -3,7 +3,7 @@ import { explanation, input, type Explanation } from '../explain/explanation';
 import { formatNumber, formatQuantity } from '../explain/format';
 import type { HomeDucts } from '../loads/home-ducts';
 import { roundHalfUp } from '../rounding';
-import { ONE_DUCTED_SYSTEM, type Design, type System } from '../schemas/design';
+import { ductedRoomIds, roomOnTwoDuctedSystems, type Design, type System } from '../schemas/design';
 import type { DuctLocation } from '../schemas/ducts';
 import type { Home } from '../schemas/home';
 
@@ -19,28 +19,35 @@ export const DUCT_LOCATION_WORDS: Record<DuctLocation, string> = {
 };
 
 /**
- * The home an option's loads are worked on. A ducted system of the design carries its ducts (where they run,
- * their insulation and leakage); they replace the walk-through's ducts for this option and serve the rooms of
- * the zones the system's circuits reach, so a ductless option of the same job has no duct loads and a ducted
- * one has its own. A design without ducts leaves the home as walked through (null: the caller's loads stand).
- * One ducted system per option: the load method carries one set of ducts (calc/src/loads/home-ducts.ts).
+ * The home an option's loads are worked on. Each ducted system of the design carries its ducts (where they run,
+ * their insulation and leakage); together they replace the walk-through's ducts for this option, each serving the
+ * rooms of the zones that system's circuits reach (the schema keeps a room on one system's ducts), so a ductless
+ * option of the same job has no duct loads and each ducted system has its own. A design without ducts leaves the
+ * home as walked through (null: the caller's loads stand). `systemKeys[i]` is the system of the loads'
+ * `ductSystems[i]`.
  */
-export function homeWithDesignDucts(home: Home, design: Design): { home: Home; systemKey: string } | null {
+export function homeWithDesignDucts(home: Home, design: Design): { home: Home; systemKeys: string[] } | null {
   const ducted = design.systems.flatMap((s, i) => (s.ducts ? [{ s, i, ducts: s.ducts }] : []));
-  const [first, second] = ducted;
-  if (!first) return null;
-  if (second)
-    throw new CalcError('INVALID_INPUT', [
-      {
-        path: ['systems', second.i, 'ducts'],
-        message: ONE_DUCTED_SYSTEM,
-      },
-    ]);
-  const zones = new Set(first.s.circuits.map((c) => c.zoneKey));
-  const roomIds = [...new Set(design.zones.filter((z) => zones.has(z.key)).flatMap((z) => z.roomIds))];
-  // The test's words are for the why; the load method takes the fractions themselves.
-  const { leakageTest: _words, ...ducts } = first.ducts;
-  return { home: { ...home, ducts: { ...ducts, roomIds } }, systemKey: first.s.key };
+  if (ducted.length === 0) return null;
+  const owner = new Map<string, string>();
+  const ductSystems = ducted.map(({ s, i, ducts: given }) => {
+    const roomIds = ductedRoomIds(design, s);
+    for (const id of roomIds) {
+      const other = owner.get(id);
+      if (other !== undefined)
+        throw new CalcError('INVALID_INPUT', [
+          { path: ['systems', i, 'ducts'], message: roomOnTwoDuctedSystems(id, other) },
+        ]);
+      owner.set(id, s.name);
+    }
+    // The test's words are for the why; the load method takes the fractions themselves.
+    const { leakageTest: _words, ...ducts } = given;
+    return { ...ducts, roomIds };
+  });
+  return {
+    home: { ...home, ducts: undefined, ductSystems },
+    systemKeys: ducted.map((d) => d.s.key),
+  };
 }
 
 const btuh = (v: number) => formatQuantity(roundHalfUp(v), 'Btu/h');

@@ -1,4 +1,5 @@
 import type { DuctSystem } from '../schemas/ducts';
+import type { Home } from '../schemas/home';
 import { BTUH_PER_TON } from '../units';
 import type { DesignPsychrometrics } from './conditions';
 import { HOURS, type DesignDayContext } from './design-day-context';
@@ -12,6 +13,16 @@ export interface HomeDucts extends DuctLoad {
 }
 
 const DUCT_COLUMN = COMPONENT_COUNT - 1;
+
+/**
+ * The home's ducted systems' ducts, in order: an option's list (one per ducted system, each with its rooms), else
+ * the walk-through's one entry, else none. The schema keeps each room on one system's ducts at most, so each
+ * system's figures come from its own rooms alone — the same as the one-system method for those rooms.
+ */
+export function ductSystemsOf(home: Pick<Home, 'ducts' | 'ductSystems'>): readonly DuctSystem[] {
+  if (home.ductSystems && home.ductSystems.length > 0) return home.ductSystems;
+  return home.ducts ? [home.ducts] : [];
+}
 
 /** The ducted system's figures for the home's rooms before any room's share: what depends only on the served rooms' sums. */
 export interface HomeDuctHours {

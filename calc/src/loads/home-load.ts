@@ -10,7 +10,7 @@ import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
 import { designDayContext, HOURS, type DesignDayContext } from './design-day-context';
 import { BLOWER_DOOR_N, DEFAULT_RECOVERY_SENSIBLE, RLF_INTERNAL, SUMMER_LEAKAGE_FRACTION } from './hourly-method';
 import { METHOD_NOTES } from './notes';
-import { applyDucts, type HomeDucts } from './home-ducts';
+import { applyDucts, ductSystemsOf, type HomeDucts } from './home-ducts';
 import {
   exposedEnvelopeFt2,
   roomComponentsAt,
@@ -100,8 +100,10 @@ export interface HomeLoad {
     readonly deltaGrains: number;
     readonly indoorDewPointF: number;
   };
-  /** The ducted system's duct gains (at the block hour) and losses, or null when the home has none entered. */
+  /** The (first) ducted system's duct gains (at the block hour) and losses, or null when the home has none entered. */
   readonly ducts: HomeDucts | null;
+  /** Each ducted system's duct gains (at the block hour) and losses, in the order of the home's ducts (`ductSystemsOf`). */
+  readonly ductSystems: readonly HomeDucts[];
   readonly notes: readonly string[];
   readonly isEstimate: true;
 }
@@ -331,16 +333,18 @@ export function blockOfWork(
   roomWork: readonly RoomHourly[],
 ): {
   work: RoomHourly[];
-  ductsByHour: ReturnType<typeof applyDucts> | null;
+  ductsByHour: ReturnType<typeof applyDucts>[];
   houseHourly: Float64Array;
   block: number;
 } {
   let work: RoomHourly[] = roomWork.slice();
   const houseHourly = new Float64Array(HOURS);
-  let ductsByHour: ReturnType<typeof applyDucts> | null = null;
-  if (home.ducts) {
-    ductsByHour = applyDucts(home.ducts, work, psy, ctx, areas);
-    work = ductsByHour.work;
+  // Each system in turn: its rooms are no other system's, so it reads only its own rooms' work before ducts.
+  const ductsByHour: ReturnType<typeof applyDucts>[] = [];
+  for (const ducts of ductSystemsOf(home)) {
+    const applied = applyDucts(ducts, work, psy, ctx, areas);
+    ductsByHour.push(applied);
+    work = applied.work;
   }
   for (const w of work) for (let h = 0; h < HOURS; h += 1) houseHourly[h] = (houseHourly[h] ?? 0) + (w.hourly[h] ?? 0);
   let block = 0;
@@ -366,6 +370,7 @@ export function homeLoadFromWork(
   const { work, ductsByHour, houseHourly, block } = blockOfWork(home, psy, ctx, areas, roomWork);
 
   const rooms = work.map((w) => roomLoadFromHourly(w, psy, block));
+  const ductSystems = ductsByHour.flatMap((d) => ductsFigures(d, block) ?? []);
   const sensibleGain = sumComponents(work.map((w) => roomComponentsAt(w, block)));
   const latentGain = sumComponents(rooms.map((r) => r.latentGain));
   const heatLoss = sumComponents(rooms.map((r) => r.heatLoss));
@@ -456,16 +461,17 @@ export function homeLoadFromWork(
       deltaGrains: roundHalfUp(psy.deltaGrains, 2),
       indoorDewPointF: roundHalfUp(psy.indoorDewPointF, 2),
     },
-    ducts: ductsFigures(ductsByHour, block),
+    ducts: ductSystems[0] ?? null,
+    ductSystems,
     notes: METHOD_NOTES,
     isEstimate: true,
   };
 }
 
 /** The duct figures at the block hour (the served rooms' shares at that hour add up to its sensible gain). */
-function ductsFigures(d: ReturnType<typeof applyDucts> | null, block: number): HomeDucts | null {
-  const at = d?.byHour[block];
-  if (!d || !at) return null;
+function ductsFigures(d: ReturnType<typeof applyDucts>, block: number): HomeDucts | null {
+  const at = d.byHour[block];
+  if (!at) return null;
   return { ...at, roomIds: d.roomIds };
 }
 

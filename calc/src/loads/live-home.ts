@@ -3,7 +3,7 @@ import type { Home } from '../schemas/home';
 import type { Room } from '../schemas/room-input';
 import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
 import { designDayContext, HOURS, type DesignDayContext } from './design-day-context';
-import { ductHours, roomWithDucts, type HomeDuctHours } from './home-ducts';
+import { ductHours, ductSystemsOf, roomWithDucts, type HomeDuctHours } from './home-ducts';
 import { homeLoadFromWork, houseAir, type HomeLoad, type HouseAir } from './home-load';
 import { roomHeating, roomHourly, roomLoadFromHourly, type RoomAir, type RoomHourly, type RoomLoad } from './room-load';
 
@@ -77,7 +77,7 @@ export function liveHome(): LiveHome {
    * work is the same object (same room, same air, same design day) and the ducts read the same: the
    * room panel and the pinned bar ask about the same keystroke, and other rooms of an unchanged home.
    */
-  let combined: { work: readonly RoomHourly[]; ducts: string; d: HomeDuctHours | null; block: number } | null = null;
+  let combined: { work: readonly RoomHourly[]; ducts: string; ds: HomeDuctHours[]; block: number } | null = null;
   const dayFor = (c: DesignConditions): [DesignPsychrometrics, DesignDayContext] => {
     // The same object read the same last time (the walk-through parses the conditions once); else compare by value.
     if (c !== conditionsSeen || !psy || !ctx) {
@@ -123,36 +123,43 @@ export function liveHome(): LiveHome {
     },
     load(home) {
       const { p, c, air, work } = prepare(home);
-      return homeLoadFromWork(home, p, c, air, home.ducts ? work.map(copyOf) : work);
+      return homeLoadFromWork(home, p, c, air, ductSystemsOf(home).length > 0 ? work.map(copyOf) : work);
     },
     room(home, roomId) {
       const i = home.rooms.findIndex((r) => r.id === roomId);
       if (i < 0) return null;
       const { p, c, air, work, kept } = prepare(home);
-      const ductsKey = home.ducts ? JSON.stringify(home.ducts) : '';
+      const systems = ductSystemsOf(home);
+      const ductsKey = systems.length > 0 ? JSON.stringify(systems) : '';
       let k = combined;
       if (!k || k.ducts !== ductsKey || k.work.length !== work.length || k.work.some((x, j) => x !== work[j])) {
         // The house's hours: every room's before ducts, plus the ducts' gain each hour (the served rooms'
         // shares of it add up to it, so no room's share is needed for the block hour).
         const house = new Float64Array(HOURS);
         for (const x of work) for (let h = 0; h < HOURS; h += 1) house[h] = (house[h] ?? 0) + (x.hourly[h] ?? 0);
-        let d: HomeDuctHours | null = null;
-        if (home.ducts) {
+        // Each system from its own rooms' work before ducts: no room is on two systems' ducts (the schema), so
+        // this is what homeLoad's systems-in-turn read.
+        const ds: HomeDuctHours[] = [];
+        if (systems.length > 0) {
           const heatOf = (j: number): number => {
             const x = kept[j];
             if (!x) return 0;
             x.heat ??= roomHeating(x.room, p, x.air, 0).total;
             return x.heat;
           };
-          d = ductHours(home.ducts, work, p, c, air.areas, heatOf);
-          if (d.served.length > 0)
-            for (let h = 0; h < HOURS; h += 1) house[h] = (house[h] ?? 0) + (d.byHour[h]?.cooling.sensibleBtuh ?? 0);
+          for (const ducts of systems) {
+            const d = ductHours(ducts, work, p, c, air.areas, heatOf);
+            ds.push(d);
+            if (d.served.length > 0)
+              for (let h = 0; h < HOURS; h += 1) house[h] = (house[h] ?? 0) + (d.byHour[h]?.cooling.sensibleBtuh ?? 0);
+          }
         }
         let block = 0;
         for (let h = 1; h < HOURS; h += 1) if ((house[h] ?? 0) > (house[block] ?? 0)) block = h;
-        k = combined = { work, ducts: ductsKey, d, block };
+        k = combined = { work, ducts: ductsKey, ds, block };
       }
-      const w = k.d ? roomWithDucts(k.d, work, i) : work[i];
+      const d = k.ds.find((x) => x.served.includes(i));
+      const w = d ? roomWithDucts(d, work, i) : work[i];
       const block = k.block;
       return w ? roomLoadFromHourly(w, p, block) : null;
     },

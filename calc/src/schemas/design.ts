@@ -114,7 +114,9 @@ export const systemSchema = z.object({
   ducts: systemDuctsSchema.optional(),
 });
 
-export const ONE_DUCTED_SYSTEM = 'One ducted system per option: the loads count one set of ducts';
+/** The refusal of a room on two ducted systems' ducts: each system's duct loads go to the rooms it alone serves. */
+export const roomOnTwoDuctedSystems = (roomId: string, other: string): string =>
+  `Room "${roomId}" is already served by the ducts of ${other}: a room is on one ducted system's ducts`;
 
 /** The design: zones and systems. */
 export const designSchema = z
@@ -130,12 +132,30 @@ export const designSchema = z
     componentsMadeBefore2025: z.boolean().optional(),
   })
   .superRefine((d, ctx) => {
-    // The load method carries one set of ducts (loads/home-ducts.ts): one ducted system per option.
+    // Each ducted system's ducts serve the rooms of the zones its circuits reach (design-ducts.ts); a room on
+    // two systems' ducts would take two systems' duct loads.
+    const byRoom = new Map<string, string>();
     d.systems.forEach((s, i) => {
-      if (s.ducts && d.systems.findIndex((x) => x.ducts) !== i)
-        ctx.addIssue({ code: 'custom', path: ['systems', i, 'ducts'], message: ONE_DUCTED_SYSTEM });
+      if (!s.ducts) return;
+      for (const id of ductedRoomIds(d, s)) {
+        const other = byRoom.get(id);
+        if (other === undefined) byRoom.set(id, s.name);
+        else {
+          ctx.addIssue({ code: 'custom', path: ['systems', i, 'ducts'], message: roomOnTwoDuctedSystems(id, other) });
+          return;
+        }
+      }
     });
   });
+
+/** The rooms a system serves: those of the zones its circuits reach, each once, in the zones' order. */
+export function ductedRoomIds(
+  design: { readonly zones: readonly { readonly key: string; readonly roomIds: readonly string[] }[] },
+  system: { readonly circuits: readonly { readonly zoneKey: string }[] },
+): string[] {
+  const zones = new Set(system.circuits.map((c) => c.zoneKey));
+  return [...new Set(design.zones.filter((z) => zones.has(z.key)).flatMap((z) => z.roomIds))];
+}
 
 export type Zone = z.output<typeof zoneSchema>;
 export type Circuit = z.output<typeof circuitSchema>;

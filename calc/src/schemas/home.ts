@@ -46,6 +46,11 @@ export const homeInputSchema = z
     designConditions: designConditionsSchema,
     tightness: tightnessSchema.default('average'),
     ...houseSchema.shape,
+    /**
+     * The ducts of each ducted system of an option (design-ducts.ts), each with the rooms it serves; in place
+     * of `ducts` (the walk-through's one entry), never beside it. A room is on one system's ducts at most.
+     */
+    ductSystems: z.array(ductSystemSchema).max(10, 'At most 10 ducted systems').optional(),
     rooms: z
       .array(roomInputSchema)
       .min(1, 'Add at least one room')
@@ -63,6 +68,7 @@ export const homeInputSchema = z
 export function homeRoomIssues(home: {
   readonly rooms: readonly { readonly id: string }[];
   readonly ducts?: { readonly roomIds?: readonly string[] | undefined } | undefined;
+  readonly ductSystems?: readonly { readonly roomIds?: readonly string[] | undefined }[] | undefined;
 }): Array<{ path: Array<string | number>; message: string }> {
   const issues: Array<{ path: Array<string | number>; message: string }> = [];
   const seen = new Set<string>();
@@ -72,6 +78,22 @@ export function homeRoomIssues(home: {
   });
   home.ducts?.roomIds?.forEach((id, i) => {
     if (!seen.has(id)) issues.push({ path: ['ducts', 'roomIds', i], message: `Room "${id}" is not in the home` });
+  });
+  const systems = home.ductSystems ?? [];
+  if (systems.length > 0 && home.ducts)
+    issues.push({ path: ['ductSystems'], message: 'Give the ducts once: the house ducts or each system’s, not both' });
+  const onDucts = new Map<string, number>();
+  systems.forEach((d, s) => {
+    if (!d.roomIds && systems.length > 1)
+      issues.push({ path: ['ductSystems', s, 'roomIds'], message: 'Each ducted system names the rooms it serves' });
+    d.roomIds?.forEach((id, i) => {
+      const path = ['ductSystems', s, 'roomIds', i];
+      if (!seen.has(id)) issues.push({ path, message: `Room "${id}" is not in the home` });
+      const other = onDucts.get(id);
+      if (other !== undefined && other !== s)
+        issues.push({ path, message: `Room "${id}" is already on the ducts of ducted system ${other + 1}` });
+      else onDucts.set(id, s);
+    });
   });
   return issues;
 }

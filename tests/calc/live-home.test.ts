@@ -287,9 +287,7 @@ describe('live home (per keystroke) equals the full recompute', () => {
           const systems = [s.upstairs, s.downstairs].flatMap((x, parity) => {
             if (!x) return [];
             const { someRooms, ...d } = x;
-            const roomIds = rooms
-              .filter((_, i) => i % 2 === parity && (!someRooms || i % 4 < 2))
-              .map((r) => r.id);
+            const roomIds = rooms.filter((_, i) => i % 2 === parity && (!someRooms || i % 4 < 2)).map((r) => r.id);
             return roomIds.length > 0 ? [ductSystemSchema.parse({ ...d, roomIds })] : [];
           });
           return { ...home, ducts: undefined, ductSystems: systems.length > 0 ? systems : undefined };
@@ -327,7 +325,8 @@ describe('live home (per keystroke) equals the full recompute', () => {
             if (i > 0) return;
             // The ducts, and design conditions that read the same, leave every room's own hours as they were.
             const sameDay = JSON.stringify(before.designConditions) === JSON.stringify(home.designConditions);
-            if (s.kind === 'ducts' || s.kind === 'two-ducts' || (s.kind === 'conditions' && sameDay)) expect(live.lastRecomputed).toBe(0);
+            if (s.kind === 'ducts' || s.kind === 'two-ducts' || (s.kind === 'conditions' && sameDay))
+              expect(live.lastRecomputed).toBe(0);
           });
           expect(live.load(home)).toEqual(full);
         }

@@ -201,7 +201,13 @@ describe('ducted systems', () => {
     const basement = { location: 'basement', insulationR: 4, leakage: 'leaky' };
     const [s1, s2] = plain.systems;
     const r = await patch(estimator, url, o.version).send({
-      design: { ...plain, systems: [{ ...s1, ducts: attic }, { ...s2, ducts: basement }] },
+      design: {
+        ...plain,
+        systems: [
+          { ...s1, ducts: attic },
+          { ...s2, ducts: basement },
+        ],
+      },
     });
     expect(r.status, JSON.stringify(r.body)).toBe(200);
     expect(r.body.option.design.systems.map((s: { ducts: unknown }) => s.ducts)).toEqual([attic, basement]);
@@ -212,9 +218,9 @@ describe('ducted systems', () => {
     expect(whys(1).map((e) => e.label)).toEqual(['Duct loads, Downstairs (ducts in an unheated basement, R-4)']);
     // Each system's ducts add to its own room only (ASHRAE 152: the ducts' losses go to the rooms they serve).
     const before = o as unknown as { result: { zones: { sizing: { heatingLoadBtuh: number } }[] } };
-    const heat = (zs: { sizing: { heatingLoadBtuh: number } }[], i: number) => zs[i]?.sizing.heatingLoadBtuh ?? Number.NaN;
-    for (const i of [0, 1])
-      expect(heat(r.body.option.result.zones, i)).toBeGreaterThan(heat(before.result.zones, i));
+    const heat = (zs: { sizing: { heatingLoadBtuh: number } }[], i: number) =>
+      zs[i]?.sizing.heatingLoadBtuh ?? Number.NaN;
+    for (const i of [0, 1]) expect(heat(r.body.option.result.zones, i)).toBeGreaterThan(heat(before.result.zones, i));
     const read = await estimator.agent.get(url);
     expect(read.body.option.result.systems[1].explanations.some((e: Why) => e.key === 's2:ducts')).toBe(true);
   });

@@ -28,7 +28,7 @@ import { checkCombination, checkSizing, zoneRating, type CombinationCheck, type 
 import { DEFAULT_SIZING_POLICY, sizingPolicySchema, type SizingPolicy } from '../sizing/policy';
 import { buildTakeoff, type SystemForTakeoff } from '../takeoff/build';
 import { zoneLoads, type ZoneLoad } from './zone-loads';
-import { explainDuctLoads, homeWithDesignDucts } from './design-ducts';
+import { explainDuctLoads, homeForDesign, walkThroughDucts } from './design-ducts';
 import { explanation, type Explanation } from '../explain/explanation';
 import { explainExtension, explainLineSell, explainLineTax, explainOptionPrice } from '../pricing/explain-price';
 import { technologyTransitionsCheck, type RefrigerantRuleCheck } from '../refrigerant/rules';
@@ -193,16 +193,21 @@ export function computeDesignFromParsed({
   explainPrice = true,
 }: ParsedDesignRequest): DesignResult {
   // A ducted system's ducts are this option's own: its loads are worked with them (the shared loads stand otherwise).
-  const withDucts = homeWithDesignDucts(home, design);
-  const loads = withDucts ? homeLoadFromParsed(withDucts.home) : (given ?? homeLoadFromParsed(home));
+  // The walk-through's ducts count only for the rooms a ducted unit of this option serves (none: no duct loads).
+  const indoorUnits = byKey(catalog.indoorUnits, (u) => u.key);
+  const withDucts = homeForDesign(
+    home,
+    design,
+    (z) => indoorUnits.get(z.indoorUnitKey)?.unitType === 'ducted-air-handler',
+  );
+  const loads = withDucts.changed ? homeLoadFromParsed(withDucts.home) : (given ?? homeLoadFromParsed(home));
   /** A ducted system's duct loads (none for a system without ducts on this option). */
   const ductsOfSystem = (key: string) => {
-    const at = withDucts?.systemKeys.indexOf(key) ?? -1;
+    const at = withDucts.systemKeys.indexOf(key);
     const d = at >= 0 ? loads.ductSystems[at] : undefined;
     return d ? [d] : [];
   };
   const dc = home.designConditions;
-  const indoorUnits = byKey(catalog.indoorUnits, (u) => u.key);
   const outdoorUnits = byKey(catalog.outdoorUnits, (u) => u.key);
   const zoneByKey = byKey(design.zones, (z) => z.key);
   const perZone = zoneLoads({ loads, zones: design.zones, roomsById: byKey(home.rooms, (r) => r.id) });
@@ -376,7 +381,7 @@ export function computeDesignFromParsed({
       ...(heating ? heating.explanations : []),
       { ...combination.explanation, key: `${p}combination` },
       ...refrigerant.circuits.map((c) => c.explanation),
-      ...ductsOfSystem(s.key).map((d) => explainDuctLoads(s.key, s.name, d, s.ducts)),
+      ...ductsOfSystem(s.key).map((d) => explainDuctLoads(s.key, s.name, d, s.ducts ?? walkThroughDucts(home))),
       ...refrigerant.explanations,
       ...electrical.explanations,
       ...(kitElectrical ? kitElectrical.explanations : []),

@@ -50,6 +50,57 @@ export function homeWithDesignDucts(home: Home, design: Design): { home: Home; s
   };
 }
 
+/**
+ * The home an option's loads are worked on, whatever its systems: a ducted system's own ducts
+ * (homeWithDesignDucts); else the walk-through's ducts on the rooms of the zones a ducted unit serves (air handler
+ * or slim ducted head: `ductedZone`) that are also on the walk-through's ducts; else, no ducted unit in the option,
+ * the home without ducts — no conditioned air moves through ducts no system of the option uses, so they add no
+ * gain or loss (ASHRAE Standard 152 works the losses of the distribution system in use; common practice).
+ * `changed` false: the walk-through's home stands as it is (the caller's shared loads may be used). `systemKey`:
+ * the system whose duct loads are explained (the first ducted one; null when none is).
+ */
+export function homeForDesign(
+  home: Home,
+  design: Design,
+  ductedZone: (zone: Design['zones'][number]) => boolean,
+): { home: Home; systemKeys: string[]; changed: boolean } {
+  const own = homeWithDesignDucts(home, design);
+  if (own) return { ...own, changed: true };
+  if (!home.ducts) return { home, systemKeys: [], changed: false };
+  const zones = design.zones.filter(ductedZone);
+  const keys = new Set(zones.map((z) => z.key));
+  const system = design.systems.find((s) => s.circuits.some((c) => keys.has(c.zoneKey)));
+  const systemKeys = system ? [system.key] : [];
+  const onWalked = home.ducts.roomIds ? new Set(home.ducts.roomIds) : null;
+  const served = [...new Set(zones.flatMap((z) => z.roomIds))].filter((id) => !onWalked || onWalked.has(id));
+  if (served.length === 0) return { home: { ...home, ducts: undefined }, systemKeys: [], changed: true };
+  const all = !home.ducts.roomIds && home.rooms.every((r) => served.includes(r.id));
+  if (all) return { home, systemKeys, changed: false };
+  return { home: { ...home, ducts: { ...home.ducts, roomIds: served } }, systemKeys, changed: true };
+}
+
+/**
+ * The walk-through's ducts in a system's words (where they run, insulation, tightness; tested fractions with the
+ * note that they were entered on the walk-through), for a ducted system that sets none of its own. Undefined: the
+ * home has no ducts.
+ */
+export function walkThroughDucts(home: Home): SystemDucts | undefined {
+  const d = home.ducts;
+  if (!d) return undefined;
+  const tested = d.supplyLeakageFraction !== undefined || d.returnLeakageFraction !== undefined;
+  return {
+    location: d.location,
+    insulationR: d.insulationR,
+    leakage: d.leakage,
+    ...(d.supplyLeakageFraction === undefined ? {} : { supplyLeakageFraction: d.supplyLeakageFraction }),
+    ...(d.returnLeakageFraction === undefined ? {} : { returnLeakageFraction: d.returnLeakageFraction }),
+    ...(tested ? { leakageTest: WALK_THROUGH_TEST } : {}),
+  };
+}
+
+/** The test note of leakage fractions taken from the walk-through (which records the fractions, not the test). */
+export const WALK_THROUGH_TEST = 'as entered on the walk-through';
+
 const btuh = (v: number) => formatQuantity(roundHalfUp(v), 'Btu/h');
 
 /**

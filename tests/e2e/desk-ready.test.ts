@@ -14,17 +14,22 @@ afterAll(async () => e?.close());
 const estimator = demoAccounts.find((x) => x.role === 'estimator' && x.company.startsWith('Quillbrook'));
 
 /** A Quillbrook walk-through job with rooms and no options, given one option (an 18k pair on its first room by default). */
-async function oversizedJob(page: Page, designOf = oversized): Promise<string> {
+async function oversizedJob(page: Page, designOf = oversized, minRooms = 1): Promise<string> {
   const list = (await (await page.request.get('/api/jobs?page=1&pageSize=50')).json()) as {
     items: { id: string; status: string }[];
   };
   const csrf = ((await (await page.request.get('/api/auth/csrf')).json()) as { token: string }).token;
   for (const j of list.items) {
-    if (j.status !== 'walkthrough') continue;
+    // Two rooms are found on a job already in design too (a walk-through job of the demo has one room or none).
+    if (j.status !== 'walkthrough' && !(minRooms > 1 && j.status === 'design')) continue;
     const rooms = (await (await page.request.get(`/api/jobs/${j.id}/rooms`)).json()) as {
       rooms: { id: string; input: { name: string } }[];
     };
-    if (rooms.rooms.length === 0) continue;
+    if (rooms.rooms.length < minRooms) continue;
+    if (minRooms > 1) {
+      const desk = (await (await page.request.get(`/api/jobs/${j.id}/desk`)).json()) as { options?: unknown[] };
+      if ((desk.options?.length ?? 3) >= 3) continue;
+    }
     const made = await page.request.post(`/api/jobs/${j.id}/options`, {
       headers: { 'X-CSRF-Token': csrf },
       data: designOf(rooms.rooms),
@@ -32,7 +37,7 @@ async function oversizedJob(page: Page, designOf = oversized): Promise<string> {
     expect(made.status(), await made.text()).toBe(201);
     return j.id;
   }
-  throw new Error('no Quillbrook walk-through job with rooms');
+  throw new Error(`no Quillbrook walk-through job with ${minRooms} rooms or more`);
 }
 
 type Rooms = { id: string; input: { name: string } }[];
@@ -60,6 +65,33 @@ function ductedAll(rooms: Rooms) {
     design: {
       zones: [{ key: 'z1', name: 'Whole floor', roomIds: rooms.map((r) => r.id), indoorUnitKey: 'TSL-MH12-D' }],
       systems: [system('TSL-M24-3P')],
+    },
+  };
+}
+
+/** Two storeys: the first room on an attic air handler's pair, the second on a basement one's, each with its ducts. */
+function twoDucted(rooms: Rooms) {
+  const [up, down] = rooms;
+  const zone = (key: string, room: Rooms[number] | undefined) => ({
+    key,
+    name: room?.input.name ?? 'Zone',
+    roomIds: [room?.id],
+    indoorUnitKey: 'TSL-S12H-W',
+  });
+  return {
+    name: 'Two ducted systems',
+    design: {
+      zones: [zone('z1', up), zone('z2', down)],
+      systems: [
+        { ...system('TSL-S12H-O'), name: 'Upstairs', ducts: { location: 'attic', insulationR: 6 } },
+        {
+          ...system('TSL-S12H-O'),
+          key: 's2',
+          name: 'Downstairs',
+          circuits: [{ zoneKey: 'z2', lengthFt: 25 }],
+          ducts: { location: 'basement', insulationR: 4, leakage: 'leaky' },
+        },
+      ],
     },
   };
 }
@@ -111,6 +143,27 @@ describe('ready to propose with units outside their sizing range', () => {
     await form.getByRole('status').filter({ hasText: 'Saved' }).waitFor();
     await expect.poll(() => ready.getByText(/smaller than the estimated minimum/).count()).toBe(0);
     await page.screenshot({ path: `${SHOTS}/desk-duct-opening-1440.png`, fullPage: true });
+    expect(await axeViolations(page)).toEqual([]);
+    await context.close();
+  });
+});
+
+describe('several ducted systems in one option', () => {
+  it('each system shows its own duct loads (1440 and 375 px)', async () => {
+    if (!estimator) throw new Error('no demo estimator');
+    const { context, page } = await e.newPage(DESKTOP);
+    await signIn(page, estimator.email, estimator.password);
+    await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
+    const jobId = await oversizedJob(page, twoDucted, 2);
+    await page.goto(`/jobs/${jobId}/desk`);
+    // The job may hold other options of this file's tests: open this one's tab.
+    await page.getByRole('tab', { name: /Two ducted systems/ }).click();
+    await page.getByText('Duct loads, Upstairs (ducts in the attic, R-6)').first().waitFor();
+    await page.getByText('Duct loads, Downstairs (ducts in an unheated basement, R-4)').first().waitFor();
+    await page.screenshot({ path: `${SHOTS}/desk-two-ducted-1440.png`, fullPage: true });
+    await page.setViewportSize(PHONE);
+    await page.getByText('Duct loads, Downstairs (ducts in an unheated basement, R-4)').first().waitFor();
+    await page.screenshot({ path: `${SHOTS}/desk-two-ducted-375.png`, fullPage: true });
     expect(await axeViolations(page)).toEqual([]);
     await context.close();
   });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   catalogModelSchema,
+  checkCombination,
   computeDesign,
   designCatalogFromModels,
   designPriceBookFromCompany,
@@ -132,5 +133,41 @@ describe('a ducted system is sized on its matched pair, not on the air handler�
     expect(coverage?.status).toBe('ok');
     const zone = cold.zones[0]?.explanations.find((e) => e.key === 'zone:z1:heating-coverage');
     expect(zone?.status).toBe('ok');
+  });
+});
+
+describe('a one-to-one pair is not judged on connected capacity (issue 13)', () => {
+  // Connected indoor capacity against the outdoor nominal is the multi-zone check of the maker's combination table;
+  // a ducted heat pump with its matched air handler (or a single-zone pair) is rated as the pair [common practice:
+  // a split system is rated as the outdoor unit with its matched indoor coil], so 36k ÷ 24k is not a finding.
+  it('the 36k air handler on the 24k heat pump: no connected percentage judged or explained, the pair still sized', () => {
+    const r = ducted('TSL-HP24');
+    const c = r.systems[0]?.combination;
+    expect(unit('TSL-AH36').nominalBtuh / unit('TSL-HP24').nominalBtuh).toBe(1.5);
+    expect(c?.multiZone).toBe(false);
+    expect(c?.ok).toBe(true);
+    expect(c?.refusals).toEqual([]);
+    expect(r.blockers.filter((b) => b.kind === 'combination')).toEqual([]);
+    const why = r.systems[0]?.explanations.find((e) => e.key === 's1:combination');
+    expect(why?.text).not.toContain('%');
+    expect(why?.text).toContain('rated together');
+  });
+  it('a second indoor unit on a one-to-one outdoor unit is still refused, with the reason', () => {
+    const hp = unit('TSL-HP24');
+    const ah = unit('TSL-AH36');
+    if (!('maxHeads' in hp) || 'maxHeads' in ah) throw new Error('TSL-HP24 is an outdoor unit, TSL-AH36 indoor');
+    const c = checkCombination({ outdoor: hp, indoor: [ah, ah] });
+    expect(c.multiZone).toBe(false);
+    expect(c.refusals).toEqual([`${hp.description} takes at most 1 indoor unit(s); 2 are connected.`]);
+  });
+  it('a multi-zone unit keeps its connected-capacity check', () => {
+    const multi = catalog.outdoorUnits.find((o) => o.maxHeads > 1);
+    const head = catalog.indoorUnits.find((u) => u.unitType === 'wall-head');
+    if (!multi || !head) throw new Error('the demo catalog has a multi-zone unit and a wall head');
+    const c = checkCombination({ outdoor: multi, indoor: [head] });
+    expect(c.multiZone).toBe(true);
+    // Σ indoor nominal ÷ outdoor nominal, % [PUB: maker combination tables].
+    expect(c.connectedPercent).toBe(Math.round((head.nominalBtuh / multi.nominalBtuh) * 100));
+    expect(c.explanation.text).toContain(`of ${multi.maxHeads} port(s) used`);
   });
 });

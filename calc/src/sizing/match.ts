@@ -191,6 +191,11 @@ export function checkSizing({
 export interface CombinationCheck {
   readonly heads: number;
   readonly maxHeads: number;
+  /**
+   * false: a one-to-one outdoor unit (one port: a single-zone pair, a ducted heat pump with its air handler),
+   * rated as the matched pair — the connected-capacity range is a multi-zone check, so it is neither judged nor shown.
+   */
+  readonly multiZone: boolean;
   readonly connectedPercent: number;
   readonly allowedPercent: { readonly min: number; readonly max: number };
   readonly ok: boolean;
@@ -238,19 +243,46 @@ export function checkCombination({
       );
     }
   }
-  if (pct < min)
+  // Connected capacity against the outdoor nominal is a multi-zone check (the maker's combination table); a
+  // one-to-one pair is rated as the pair (compute-design's zoneRating) [common practice].
+  const multiZone = outdoor.maxHeads > 1;
+  if (multiZone && pct < min)
     refusals.push(
       `The connected indoor units add up to ${pct} % of ${outdoor.description}'s capacity; the maker allows ${min}–${max} %. Add or enlarge indoor units, or choose a smaller outdoor unit.`,
     );
-  if (pct > max)
+  if (multiZone && pct > max)
     refusals.push(
       `The connected indoor units add up to ${pct} % of ${outdoor.description}'s capacity; the maker allows ${min}–${max} %. Remove or shrink indoor units, or choose a larger outdoor unit.`,
     );
   const ok = refusals.length === 0;
   const sizes = indoor.map((u) => formatQuantity(u.nominalBtuh, 'Btu/h')).join(' + ');
+  if (!multiZone)
+    return {
+      heads: indoor.length,
+      maxHeads: outdoor.maxHeads,
+      multiZone,
+      connectedPercent: pct,
+      allowedPercent: { min, max },
+      ok,
+      ports: null,
+      refusals,
+      warnings: refusals,
+      explanation: explanation({
+        key: 'combination',
+        label: `Indoor unit on ${outdoor.description}`,
+        value: indoor.length,
+        unit: '',
+        valueText: `${indoor.length} of 1`,
+        text: `${sizes || 'No indoor unit'} on a one-to-one outdoor unit: the pair is rated together (the sizing above), so the connected-capacity range of a multi-zone unit does not apply.`,
+        verdict: ok ? 'One indoor unit, as the pair is made.' : refusals.join(' '),
+        status: ok ? 'ok' : 'blocker',
+        source: "The maker's matched-pair rating",
+      }),
+    };
   return {
     heads: indoor.length,
     maxHeads: outdoor.maxHeads,
+    multiZone,
     connectedPercent: pct,
     allowedPercent: { min, max },
     ok,

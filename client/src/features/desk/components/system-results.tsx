@@ -109,7 +109,7 @@ export function SystemResults({
         {system.name}: {modelName(models, system.outdoorUnitKey)}
       </h4>
       <UnitWhys whys={otherWhys} sizing={system.sizing} name={system.name} />
-      {system.combination ? (
+      {system.combination?.multiZone ? (
         <p className={`text-sm ${system.combination.ok ? 'text-ink-900' : 'font-semibold text-danger'}`}>
           {system.combination.heads} of {system.combination.maxHeads} ports used; indoor units connected{' '}
           {formatPercent(system.combination.connectedPercent)} of the outdoor unit’s nominal (the maker allows{' '}

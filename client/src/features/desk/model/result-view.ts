@@ -77,6 +77,8 @@ const electricalView = z.object({
 const combinationView = z.object({
   heads: z.number(),
   maxHeads: z.number(),
+  /** false: a one-to-one pair, whose connected capacity is not a check (calc's checkCombination). */
+  multiZone: z.boolean().default(true),
   connectedPercent: z.number(),
   allowedPercent: z.object({ min: z.number(), max: z.number() }),
   ok: z.boolean(),

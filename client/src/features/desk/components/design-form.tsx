@@ -211,6 +211,21 @@ function DuctsAndHeat({
   );
   if (!ductedUnit && !system.ducts && !system.heatKitKey) return null;
   const backup = whys.get(`${system.key}:backup-heat`);
+  // A ducted unit with no ducts of its own runs on the walk-through's: calc explains their loads on the system
+  // ("Duct loads, … (ducts in the attic, R-6)"), so the empty choice names them instead of "no ducts".
+  const walked = !system.ducts && ductedUnit ? whys.get(`${system.key}:ducts`) : undefined;
+  const walkedWhere = walked ? /\((ducts [^)]*)\)$/.exec(walked.label)?.[1] : undefined;
+  const ductChoices = ductedUnit
+    ? [
+        {
+          value: '',
+          label: walkedWhere
+            ? `The walk-through’s ${walkedWhere}`
+            : 'Not set here: the walk-through’s ducts, if it has any',
+        },
+        ...DUCT_CHOICES.slice(1),
+      ]
+    : DUCT_CHOICES;
   return (
     <fieldset className="flex flex-col gap-3 border-l-4 border-line pl-3">
       <legend className="text-sm font-semibold text-ink-900">Ducts and backup heat</legend>
@@ -219,7 +234,7 @@ function DuctsAndHeat({
           name={`systems.${s}.ducts`}
           label="Where the ducts run"
           hint="Their gains and losses are added to the rooms this system serves."
-          options={DUCT_CHOICES}
+          options={ductChoices}
           fromValue={(v) => (typeof v === 'object' && v !== null ? String(Reflect.get(v, 'location') ?? '') : '')}
           toValue={(chosen, current) =>
             chosen === ''
@@ -239,6 +254,7 @@ function DuctsAndHeat({
           </>
         ) : null}
       </div>
+      {walked ? <Why e={walked} label="Duct loads of the walk-through’s ducts" /> : null}
       {system.ducts ? (
         <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
           <AmountField

@@ -221,6 +221,15 @@ describe('the estimator’s desk to a ready job', () => {
       )
       .toBe('TSL-AH36');
     await page.screenshot({ path: `${SHOTS}/desk-suggested-1440.png`, fullPage: true });
+    // The suggested ducted pair sets no ducts of its own: the desk names the walk-through's it runs on.
+    const suggestedDucts = page
+      .getByRole('form', { name: `Design of ${single}` })
+      .getByRole('group', { name: 'Ducts and backup heat' });
+    await expect
+      .poll(() => suggestedDucts.getByLabel('Where the ducts run').locator('option:checked').textContent())
+      .toBe('The walk-through’s');
+    await suggestedDucts.getByText(/^The walk-through’s ducts in the attic, R-6: their gains and losses/).waitFor();
+    await suggestedDucts.screenshot({ path: `${SHOTS}/desk-suggested-ducts-1440.png` });
     // 40 % is beyond the estimator's limit: it waits too.
     const pricing2 = page.getByRole('form', { name: `Pricing of ${single}` });
     await pricing2.getByRole('button', { name: 'Add a discount' }).click();

@@ -219,9 +219,7 @@ function DuctsAndHeat({
     ? [
         {
           value: '',
-          label: walkedWhere
-            ? `The walk-through’s ${walkedWhere}`
-            : 'Not set here: the walk-through’s ducts, if it has any',
+          label: walkedWhere ? 'The walk-through’s' : 'Not set here: the walk-through’s ducts, if it has any',
         },
         ...DUCT_CHOICES.slice(1),
       ]
@@ -233,7 +231,7 @@ function DuctsAndHeat({
         <OptionalSelect
           name={`systems.${s}.ducts`}
           label="Where the ducts run"
-          hint="Their gains and losses are added to the rooms this system serves."
+          hint={`${walkedWhere ? `The walk-through’s ${walkedWhere}: their` : 'Their'} gains and losses are added to the rooms this system serves.`}
           options={ductChoices}
           fromValue={(v) => (typeof v === 'object' && v !== null ? String(Reflect.get(v, 'location') ?? '') : '')}
           toValue={(chosen, current) =>

@@ -331,6 +331,8 @@ describe('the estimator’s desk to a ready job', () => {
     await design3.screenshot({ path: `${SHOTS}/desk-ducted-design-375.png` });
     await tab(page, single).click();
     await page.screenshot({ path: `${SHOTS}/desk-suggested-375.png`, fullPage: true });
+    await page.getByText(/^1 zone on 1 outdoor unit .*open to change$/).click();
+    await suggestedDucts.screenshot({ path: `${SHOTS}/desk-suggested-ducts-375.png` });
     await tab(page, whole).click();
     // On a phone the pricing form folds to one line under its heading: a tap opens it.
     await page.getByRole('region', { name: 'Pricing' }).locator('summary').click();

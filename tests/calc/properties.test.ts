@@ -160,11 +160,17 @@ describe('load invariants (fast-check)', () => {
           const dc = { ...conditions, latitudeDeg: lat };
           const a = roomLoad({ room: room(false), designConditions: dc });
           const b = roomLoad({ room: room(true), designConditions: dc });
-          expect(b.sensibleGain.windowsSolar).toBeLessThanOrEqual(a.sensibleGain.windowsSolar);
+          // The components are the peak hour's; the shadow may move the peak (a tie an hour earlier,
+          // when the sun through the glass is higher), so they compare only at the same hour.
+          expect(b.sensibleGain.total).toBeLessThanOrEqual(a.sensibleGain.total);
+          if (b.peakHour === a.peakHour)
+            expect(b.sensibleGain.windowsSolar).toBeLessThanOrEqual(a.sensibleGain.windowsSolar);
           for (let h = 0; h < 24; h += 1)
             expect(b.hourlySensibleBtuh[h] ?? 0).toBeLessThanOrEqual(a.hourlySensibleBtuh[h] ?? 0);
         },
       ),
+      // CI's counterexample (2026-12-05): at 70° N the shadow moved a NE window's peak an hour earlier.
+      { examples: [['NE', 0.030367900823213053, 0, 69.98429727554321]] },
     );
   });
   it('turning the house 180° moves the peak, not the heating load; mirroring east↔west mirrors the day about noon', () => {

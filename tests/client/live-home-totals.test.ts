@@ -54,5 +54,14 @@ describe('live whole-home totals', () => {
       expect(live).toEqual(computeHomeLoad(rooms, bad, 'average'));
     }
     expect(computeLiveHomeLoad([], conditions, 'average')).toEqual(computeHomeLoad([], conditions, 'average'));
+    // Past the most rooms a home may have (calc's home schema), with the conditions good and bad.
+    const first = rooms[0];
+    if (!first) throw new Error('the ranch has no rooms');
+    const crowded = Array.from({ length: 201 }, (_, i) => ({ id: `room-${i}`, input: first.input }));
+    for (const c of [conditions, { ...conditions, indoorCoolingF: 200 }]) {
+      const live = computeLiveHomeLoad(crowded, c, 'average');
+      expect(live).toMatchObject({ ok: false });
+      expect(live).toEqual(computeHomeLoad(crowded, c, 'average'));
+    }
   });
 });

@@ -7,6 +7,8 @@ import {
   roomInputSchema,
   roomLoad,
   type ComponentKey,
+  type DesignConditions,
+  type Home,
   type HomeLoad,
   type Room,
   type RoomLoad,
@@ -66,44 +68,69 @@ export function houseOf(house: Record<string, unknown>) {
   return parsed.success ? parsed.data : {};
 }
 
-/**
- * The whole home from the rooms calc accepts; rooms it refuses are named in `skipped`
- * so the totals never silently leave one out.
- */
-export function computeHomeLoad(
+/** A stored room as calc reads it, or null when calc refuses it. */
+export type ParseRoom = (id: string, input: Record<string, unknown>) => Room | null;
+
+/** The ways a whole-home path reads its inputs and works out the loads; only these differ between paths. */
+export interface WholeHomePath {
+  readonly parseRoom: ParseRoom;
+  readonly parseConditions: (designConditions: Record<string, unknown>) => DesignConditions | null;
+  /** The loads of a home whose rooms and conditions calc accepts (may refuse it with its own words). */
+  readonly load: (home: Home) => LoadResult<HomeLoad>;
+}
+
+/** A whole-home path as the pages call it: the rooms as stored, the job's conditions, tightness and house facts. */
+export type WholeHomeLoad = (
   inputs: readonly { readonly id: string; readonly input: Record<string, unknown> }[],
   designConditions: Record<string, unknown> | null,
   tightness: Tightness,
-  house: Record<string, unknown> = {},
-): LoadResult<{ load: HomeLoad; skipped: readonly string[] }> {
-  if (!designConditions) return { ok: false, message: 'Enter the design conditions for the site to see the loads.' };
-  const rooms: Room[] = [];
-  const skipped: string[] = [];
-  for (const r of inputs) {
-    const parsed = roomInputSchema.safeParse({ ...r.input, id: r.id });
-    if (parsed.success) rooms.push(parsed.data);
-    else skipped.push(typeof r.input.name === 'string' ? r.input.name : r.id);
-  }
-  if (rooms.length === 0) return { ok: false, message: 'Add a room to see the loads.' };
-  const parsedConditions = designConditionsSchema.safeParse(designConditions);
-  if (!parsedConditions.success)
-    return { ok: false, message: parsedConditions.error.issues[0]?.message ?? 'Check the design conditions.' };
-  try {
-    return {
-      ok: true,
-      value: {
-        load: homeLoad({
-          home: {
-            designConditions: parsedConditions.data,
-            tightness,
-            ...houseOf(house),
-            rooms,
-          },
-        }),
-        skipped,
-      },
-    };
-  } catch (e) {
-    return fail(e);
-  }
+  house?: Record<string, unknown>,
+) => LoadResult<{ load: HomeLoad; skipped: readonly string[] }>;
+
+/**
+ * The whole home from the rooms calc accepts; rooms it refuses are named in `skipped`
+ * so the totals never silently leave one out. The one frame of both whole-home paths: the full
+ * recompute below and the walk-through's live engine (`computeLiveHomeLoad`).
+ */
+export function wholeHomeLoad(path: WholeHomePath): WholeHomeLoad {
+  return (inputs, designConditions, tightness, house = {}) => {
+    if (!designConditions) return { ok: false, message: 'Enter the design conditions for the site to see the loads.' };
+    const rooms: Room[] = [];
+    const skipped: string[] = [];
+    for (const r of inputs) {
+      const parsed = path.parseRoom(r.id, r.input);
+      if (parsed) rooms.push(parsed);
+      else skipped.push(typeof r.input.name === 'string' ? r.input.name : r.id);
+    }
+    if (rooms.length === 0) return { ok: false, message: 'Add a room to see the loads.' };
+    const conditions = path.parseConditions(designConditions);
+    if (!conditions)
+      return {
+        ok: false,
+        message:
+          designConditionsSchema.safeParse(designConditions).error?.issues[0]?.message ??
+          'Check the design conditions.',
+      };
+    try {
+      const load = path.load({ ...houseOf(house), designConditions: conditions, tightness, rooms });
+      return load.ok ? { ok: true, value: { load: load.value, skipped } } : load;
+    } catch (e) {
+      return fail(e);
+    }
+  };
 }
+
+const fullRecompute: WholeHomePath = {
+  parseRoom: (id, input) => {
+    const parsed = roomInputSchema.safeParse({ ...input, id });
+    return parsed.success ? parsed.data : null;
+  },
+  parseConditions: (c) => {
+    const parsed = designConditionsSchema.safeParse(c);
+    return parsed.success ? parsed.data : null;
+  },
+  load: (home) => ({ ok: true, value: homeLoad({ home }) }),
+};
+
+/** The whole home with calc's `homeLoad`, every room parsed afresh (the loads page and its printout). */
+export const computeHomeLoad = wholeHomeLoad(fullRecompute);

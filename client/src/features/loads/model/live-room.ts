@@ -1,5 +1,4 @@
 import {
-  CalcError,
   designConditionsSchema,
   homeRoomIssues,
   liveHome,
@@ -7,14 +6,13 @@ import {
   roomInputSchema,
   type DesignConditions,
   type Home,
-  type HomeLoad,
   type Room,
   type RoomLoad,
   type Tightness,
 } from '@calc';
 import { groupedNumber } from '../../../lib/grouped-number';
 import { inSlices, yieldToMain } from '../../../lib/yield-to-main';
-import { houseOf, type LoadResult } from './compute';
+import { houseOf, wholeHomeLoad, type LoadResult, type WholeHomePath } from './compute';
 
 /** The rest of the home the edited room sits in: the rooms as they stand (saved or waiting) and the house facts. */
 export interface LiveHomeInputs {
@@ -89,6 +87,18 @@ export function computeLiveRoomLoad(
   }
 }
 
+/** The live engine's side of the whole-home frame: rooms and conditions parsed once, calc's checks first. */
+const livePath: WholeHomePath = {
+  parseRoom,
+  parseConditions,
+  load: (home) => {
+    if (home.rooms.length > MOST_ROOMS_IN_HOME) return { ok: false, message: `At most ${MOST_ROOMS_IN_HOME} rooms` };
+    const issue = homeRoomIssues(home)[0];
+    if (issue) return { ok: false, message: issue.message };
+    return { ok: true, value: live.load(home) };
+  },
+};
+
 /**
  * The whole home's loads, live: exactly `computeHomeLoad` (calc's `homeLoad` of the rooms calc accepts,
  * with the others named in `skipped`), but through the page's one engine — each room parsed once and its
@@ -96,39 +106,7 @@ export function computeLiveRoomLoad(
  * again instead of a full parse and recompute of every room (issue 11: on a phone that was 50–100 ms of
  * main-thread work on every save status change).
  */
-export function computeLiveHomeLoad(
-  inputs: readonly { readonly id: string; readonly input: Record<string, unknown> }[],
-  designConditions: Record<string, unknown> | null,
-  tightness: Tightness,
-  house: Record<string, unknown> = {},
-): LoadResult<{ load: HomeLoad; skipped: readonly string[] }> {
-  if (!designConditions) return { ok: false, message: 'Enter the design conditions for the site to see the loads.' };
-  const rooms: Room[] = [];
-  const skipped: string[] = [];
-  for (const r of inputs) {
-    const parsed = parseRoom(r.id, r.input);
-    if (parsed) rooms.push(parsed);
-    else skipped.push(typeof r.input.name === 'string' ? r.input.name : r.id);
-  }
-  if (rooms.length === 0) return { ok: false, message: 'Add a room to see the loads.' };
-  if (rooms.length > MOST_ROOMS_IN_HOME) return { ok: false, message: `At most ${MOST_ROOMS_IN_HOME} rooms` };
-  const conditions = parseConditions(designConditions);
-  if (!conditions)
-    return {
-      ok: false,
-      message:
-        designConditionsSchema.safeParse(designConditions).error?.issues[0]?.message ?? 'Check the design conditions.',
-    };
-  const whole: Home = { ...houseOf(house), designConditions: conditions, tightness, rooms };
-  const issue = homeRoomIssues(whole)[0];
-  if (issue) return { ok: false, message: issue.message };
-  try {
-    return { ok: true, value: { load: live.load(whole), skipped } };
-  } catch (e) {
-    if (e instanceof CalcError) return { ok: false, message: e.details[0]?.message ?? e.message };
-    return { ok: false, message: 'The loads could not be worked out from these inputs.' };
-  }
-}
+export const computeLiveHomeLoad = wholeHomeLoad(livePath);
 
 /** What the page's live figures will be asked for: the home as it stands. */
 export interface LivePrime extends LiveHomeInputs {

@@ -10,7 +10,6 @@ import {
   type RoomLoad,
   type Tightness,
 } from '@calc';
-import { groupedNumber } from '../../../lib/grouped-number';
 import { inSlices, yieldToMain } from '../../../lib/yield-to-main';
 import { houseOf, wholeHomeLoad, type LoadResult, type WholeHomePath } from './compute';
 
@@ -116,8 +115,7 @@ export interface LivePrime extends LiveHomeInputs {
 
 /**
  * Gets the engine ready for a home before its first figures render, in slices a keystroke can come
- * between: each room parsed (a few at a time), then the home's hourly work done once in a task of its own,
- * then the figures' number formatter made.
+ * between: each room parsed (a few at a time), then the home's hourly work done once in a task of its own.
  * The first render then only recombines, instead of one long task doing it all (on the 100-room bench job
  * at 4× CPU that task was 110–240 ms, and a letter typed meanwhile waited for it).
  */
@@ -127,7 +125,4 @@ export async function primeLive(home: LivePrime, stillWanted: () => boolean = ()
   await yieldToMain();
   if (!stillWanted()) return;
   computeLiveHomeLoad(home.rooms, home.designConditions, home.tightness, home.house ?? {});
-  // The figures' number formatter too (its locale data is the first render's other big cost).
-  await yieldToMain();
-  groupedNumber(0);
 }

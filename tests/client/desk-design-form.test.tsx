@@ -127,3 +127,55 @@ describe('the desk’s design form', () => {
     expect(stored.design).toMatchObject({ systems: [{ circuits: [{ lengthFt: 40 }] }] });
   });
 });
+
+describe('the heat kit’s own circuit (issue 13)', () => {
+  const ductedModels = [
+    model('AH-36', 'indoor', 'air-handler'),
+    model('HP-24', 'outdoor-ducted'),
+    { ...model('HK-5', 'heat-kit'), heatKitKw: 5 },
+  ];
+  const withKit = (electrical: Record<string, unknown>) =>
+    ({
+      ...option,
+      design: {
+        zones: [{ key: 'zone-1', name: 'House', roomIds: ['r1', 'r2'], indoorUnitKey: 'AH-36' }],
+        systems: [
+          {
+            ...(option.design as { systems: Record<string, unknown>[] }).systems[0],
+            outdoorUnitKey: 'HP-24',
+            heatKitKey: 'HK-5',
+            electrical: {
+              ...(option.design as { systems: { electrical: object }[] }).systems[0]?.electrical,
+              ...electrical,
+            },
+          },
+        ],
+      },
+    }) as unknown as OptionRecord;
+  const show = (o: OptionRecord) =>
+    render(
+      <QueryClientProvider client={createQueryClient()}>
+        <DesignForm jobId="j1" option={o} rooms={rooms} models={ductedModels} canEdit whys={new Map()} />
+      </QueryClientProvider>,
+    );
+
+  it('not entered: the field is empty and says which run is assumed; a stored run opens unchanged', async () => {
+    show(withKit({}));
+    const field = await screen.findByLabelText('Panel to air handler, heat kit circuit (ft)');
+    expect(field).toHaveValue('');
+    expect(
+      screen.getByText('Its own run for the wire and voltage drop. Empty: the outdoor unit’s 30 ft is assumed.'),
+    ).toBeTruthy();
+    expect(screen.getByRole('status').textContent).toBe('');
+  });
+
+  it('a stored run shows as stored, and one out of bounds is refused beside the field', async () => {
+    show(withKit({ heatKitCircuitLengthFt: 85 }));
+    const field = await screen.findByLabelText('Panel to air handler, heat kit circuit (ft)');
+    expect(field).toHaveValue('85');
+    expect(screen.getByRole('status').textContent).toBe('');
+    fireEvent.change(field, { target: { value: '400' } });
+    fireEvent.click(screen.getByRole('button', { name: 'Save design' }));
+    expect(await screen.findByText('Panel to air handler must be between 1 and 300 ft')).toBeTruthy();
+  });
+});

@@ -321,6 +321,18 @@ describe('the estimator’s desk to a ready job', () => {
       .first()
       .waitFor();
     await system3.getByText('Backup heat needed at the design temperature').waitFor();
+    // The heat kit's own run from the panel, not entered yet: the outdoor unit's 30 ft is assumed and said so.
+    const kitBlock = page
+      .getByRole('region', { name: 'System Outdoor unit 1' })
+      .filter({ hasText: 'Electrical, heat kit' })
+      .first();
+    await kitBlock.getByText(/^Panel to air handler not entered: the heat kit's circuit is taken as 30 ft/).waitFor();
+    await system3.getByLabel('Panel to air handler, heat kit circuit (ft)').fill('110');
+    await design3.getByRole('button', { name: 'Save design' }).click();
+    await saved(design3);
+    await kitBlock.getByText(/voltage drop [\d.]+ % over 110 ft\b/).waitFor();
+    expect(await kitBlock.getByText(/^Panel to air handler not entered/).count()).toBe(0);
+    await kitBlock.screenshot({ path: `${SHOTS}/desk-ducted-results-1440.png` });
     // What the server stored is what the form shows: it still says "Saved", not "Not saved yet".
     expect(await design3.getByRole('status').textContent()).toBe('Saved');
     await design3.screenshot({ path: `${SHOTS}/desk-ducted-design-1440.png` });

@@ -326,6 +326,33 @@ describe('disconnects beyond a whip and the heat kit’s circuit (issue 13)', ()
     const ready = await post(estimator, `/api/jobs/${job.id}/ready`).send();
     expectProblem(ready, 422);
     expect(JSON.stringify(ready.body)).toContain('The disconnect must be within sight');
+    // The heat kit's run from the panel, not entered: the outdoor unit's 40 ft is assumed and said so; a note,
+    // not a reason to hold the ready mark.
+    expect(k.circuitLengthFt).toBe(40);
+    expect(k.warnings).toContain(k.circuitLengthAssumed);
+    expect(JSON.stringify(ready.body)).not.toContain('Panel to air handler not entered');
+
+    // Its own run: bounded like the outdoor unit's (1–300 ft), refused with the field's message and nothing stored.
+    const withKitRun = (ft: number) => ({
+      ...ducted,
+      systems: [{ ...ducted.systems[0], electrical: { ...ducted.systems[0]?.electrical, heatKitCircuitLengthFt: ft } }],
+    });
+    const tooLong = await patch(estimator, url, kit.body.option.version).send({ design: withKitRun(301) });
+    expectProblem(tooLong, 400);
+    expect(tooLong.body.errors).toContainEqual({
+      path: 'design.systems.0.electrical.heatKitCircuitLengthFt',
+      message: 'Panel to air handler must be between 1 and 300 ft',
+    });
+    const kept = await t.orm.em.fork().execute(`select design from design_option where id = ?`, [o.id]);
+    expect(kept[0]?.design.systems[0].electrical.heatKitCircuitLengthFt).toBeUndefined();
+    const own = await patch(estimator, url, kit.body.option.version).send({ design: withKitRun(120) });
+    expect(own.status, JSON.stringify(own.body)).toBe(200);
+    const saved = await t.orm.em.fork().execute(`select design from design_option where id = ?`, [o.id]);
+    expect(saved[0]?.design.systems[0].electrical.heatKitCircuitLengthFt).toBe(120);
+    const ownKit = own.body.option.result.systems[0].heatKitElectrical;
+    // 2 × 120 ft × 26.0 A × 1.24 Ω/1000 ft (10 AWG, NEC Ch. 9 Table 8, from memory) = 7.74 V = 3.22 % of 240 V.
+    expect(ownKit).toMatchObject({ circuitLengthFt: 120, circuitLengthAssumed: null, voltageDropPercent: 3.22 });
+    expect(own.body.option.result.systems[0].electrical.circuitLengthFt).toBe(40);
   });
 });
 

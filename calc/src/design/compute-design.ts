@@ -28,8 +28,9 @@ import { checkCombination, checkSizing, zoneRating, type CombinationCheck, type 
 import { DEFAULT_SIZING_POLICY, sizingPolicySchema, type SizingPolicy } from '../sizing/policy';
 import { buildTakeoff, type SystemForTakeoff } from '../takeoff/build';
 import { zoneLoads, type ZoneLoad } from './zone-loads';
-import { explainDuctLoads, homeForDesign, walkThroughDucts } from './design-ducts';
+import { explainDuctLoads, homeForDesign, walkThroughDucts, walkThroughDuctShares } from './design-ducts';
 import { explanation, type Explanation } from '../explain/explanation';
+import { formatQuantity } from '../explain/format';
 import { explainExtension, explainLineSell, explainLineTax, explainOptionPrice } from '../pricing/explain-price';
 import { technologyTransitionsCheck, type RefrigerantRuleCheck } from '../refrigerant/rules';
 import { explainSizing, heatingBalance, type HeatingBalance } from './explain-sizing';
@@ -144,6 +145,10 @@ function a2lSpace(
   };
 }
 
+/** The heat kit's run from the panel to the air handler, not entered: what is assumed instead, in plain words. */
+export const heatKitRunAssumed = (outdoorRunFt: number): string =>
+  `Panel to air handler not entered: the heat kit's circuit is taken as ${formatQuantity(outdoorRunFt, 'ft', 1)}, the outdoor unit's run. Enter the run from the panel to the air handler for the heat kit's wire, voltage drop and labor.`;
+
 /**
  * The full recompute behind the screens: loads → zone and system sizing → refrigerant per
  * circuit → electrical → takeoff → priced option. Validates every input with its schema
@@ -195,17 +200,18 @@ export function computeDesignFromParsed({
   // A ducted system's ducts are this option's own: its loads are worked with them (the shared loads stand otherwise).
   // The walk-through's ducts count only for the rooms a ducted unit of this option serves (none: no duct loads).
   const indoorUnits = byKey(catalog.indoorUnits, (u) => u.key);
-  const withDucts = homeForDesign(
-    home,
-    design,
-    (z) => indoorUnits.get(z.indoorUnitKey)?.unitType === 'ducted-air-handler',
-  );
+  const ductedZone = (z: Design['zones'][number]) =>
+    indoorUnits.get(z.indoorUnitKey)?.unitType === 'ducted-air-handler';
+  const withDucts = homeForDesign(home, design, ductedZone);
   const loads = withDucts.changed ? homeLoadFromParsed(withDucts.home) : (given ?? homeLoadFromParsed(home));
-  /** A ducted system's duct loads (none for a system without ducts on this option). */
+  // Several ducted systems on the walk-through's one set of ducts: each explains its own rooms' share of them.
+  const shares = walkThroughDuctShares({ home, design, loads, ductedZone });
+  /** A ducted system's duct loads (none for a system without ducts on this option), with its share when shared. */
   const ductsOfSystem = (key: string) => {
-    const at = withDucts.systemKeys.indexOf(key);
+    const share = shares?.get(key);
+    const at = share ? 0 : withDucts.systemKeys.indexOf(key);
     const d = at >= 0 ? loads.ductSystems[at] : undefined;
-    return d ? [d] : [];
+    return d ? [{ d, share }] : [];
   };
   const dc = home.designConditions;
   const outdoorUnits = byKey(catalog.outdoorUnits, (u) => u.key);
@@ -302,18 +308,22 @@ export function computeDesignFromParsed({
       s.heatKitKey === undefined
         ? undefined
         : lookup(heatKits, s.heatKitKey, 'UNKNOWN_EQUIPMENT', ['systems', si, 'heatKitKey']);
-    // The heat kit's circuit runs to the air handler: its disconnect is the air handler's, not the outdoor unit's.
+    // The heat kit's circuit runs from the panel to the air handler: its run and its disconnect are the air
+    // handler's, not the outdoor unit's. A run not entered is taken as the outdoor unit's, and the plan says so.
+    const kitRunFt = s.electrical.heatKitCircuitLengthFt;
     const kitElectrical = kit
       ? electricalPlan({
           mcaA: kit.mcaA,
           mocpA: kit.mocpA,
           input: {
             ...s.electrical,
+            circuitLengthFt: kitRunFt ?? s.electrical.circuitLengthFt,
             disconnectDistanceFt: s.electrical.heatKitDisconnectDistanceFt ?? 0,
             disconnectVisible: true,
           },
           keyPrefix: `${p}heat-kit:`,
           label: 'heat kit',
+          ...(kitRunFt === undefined ? { assumedRun: heatKitRunAssumed(s.electrical.circuitLengthFt) } : {}),
         })
       : null;
     const heating =
@@ -381,7 +391,9 @@ export function computeDesignFromParsed({
       ...(heating ? heating.explanations : []),
       { ...combination.explanation, key: `${p}combination` },
       ...refrigerant.circuits.map((c) => c.explanation),
-      ...ductsOfSystem(s.key).map((d) => explainDuctLoads(s.key, s.name, d, s.ducts ?? walkThroughDucts(home))),
+      ...ductsOfSystem(s.key).map(({ d, share }) =>
+        explainDuctLoads(s.key, s.name, d, s.ducts ?? walkThroughDucts(home), share),
+      ),
       ...refrigerant.explanations,
       ...electrical.explanations,
       ...(kitElectrical ? kitElectrical.explanations : []),

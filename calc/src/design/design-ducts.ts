@@ -2,6 +2,8 @@ import { CalcError } from '../errors';
 import { explanation, input, type Explanation } from '../explain/explanation';
 import { formatNumber, formatQuantity } from '../explain/format';
 import type { HomeDucts } from '../loads/home-ducts';
+import type { HomeLoad } from '../loads/home-load';
+import { apportion } from '../loads/peak-detail';
 import { roundHalfUp } from '../rounding';
 import { ductedRoomIds, roomOnTwoDuctedSystems, type Design, type System } from '../schemas/design';
 import type { DuctLocation } from '../schemas/ducts';
@@ -79,6 +81,81 @@ export function homeForDesign(
   return { home: { ...home, ducts: { ...home.ducts, roomIds: served } }, systemKeys, changed: true };
 }
 
+/** One system's part of the walk-through's ducts, Btu/h (whole numbers), when several ducted systems run on them. */
+export interface DuctShare {
+  readonly roomNames: readonly string[];
+  readonly sensibleBtuh: number;
+  readonly latentBtuh: number;
+  readonly heatingBtuh: number;
+  /** How many systems share the ducts. */
+  readonly systems: number;
+}
+
+/**
+ * Each system's share of the walk-through's one set of ducts, by system key, when two or more ducted systems of the
+ * option run on them (none has ducts of its own); null otherwise (one system: the whole set is its own). The ducts'
+ * loads are worked once for all the rooms they serve and shared among those rooms by each room's gain and loss
+ * (home-ducts.ts), so a system takes its own rooms' shares: the latent gain and heat loss the load method gave
+ * them, and the sensible gain at the block hour in proportion to their sensible gain that hour (largest
+ * remainder, so the systems add up to the ducts' figure). A room on two systems' zones counts for the first.
+ */
+export function walkThroughDuctShares({
+  home,
+  design,
+  loads,
+  ductedZone,
+}: {
+  readonly home: Home;
+  readonly design: Design;
+  readonly loads: Pick<HomeLoad, 'rooms' | 'block' | 'ductSystems'>;
+  readonly ductedZone: (zone: Design['zones'][number]) => boolean;
+}): Map<string, DuctShare> | null {
+  const d = loads.ductSystems[0];
+  if (!home.ducts || !d || loads.ductSystems.length !== 1 || design.systems.some((s) => s.ducts)) return null;
+  const served = new Set(d.roomIds);
+  const taken = new Set<string>();
+  const bySystem = design.systems.flatMap((s) => {
+    const reached = new Set(s.circuits.map((c) => c.zoneKey));
+    const ids = design.zones
+      .filter((z) => reached.has(z.key) && ductedZone(z))
+      .flatMap((z) => z.roomIds)
+      .filter((id) => served.has(id) && !taken.has(id));
+    for (const id of ids) taken.add(id);
+    return ids.length > 0 ? [{ key: s.key, ids: [...new Set(ids)] }] : [];
+  });
+  if (bySystem.length < 2) return null;
+  const rooms = new Map(loads.rooms.map((r) => [r.roomId, r]));
+  const at = loads.block.hour - 1;
+  const sum = (ids: readonly string[], f: (r: HomeLoad['rooms'][number]) => number) =>
+    ids.reduce((t, id) => {
+      const r = rooms.get(id);
+      return t + (r ? f(r) : 0);
+    }, 0);
+  // Rooms on the ducts that no system's zone reaches keep their part of the sensible gain (it is theirs).
+  const rest = [...served].filter((id) => !taken.has(id));
+  const sensible = apportion(
+    roundHalfUp(d.cooling.sensibleBtuh),
+    [...bySystem.map((s) => s.ids), rest].map((ids) =>
+      Math.max(
+        0,
+        sum(ids, (r) => r.hourlySensibleBtuh[at] ?? 0),
+      ),
+    ),
+  );
+  return new Map(
+    bySystem.map((s, i) => [
+      s.key,
+      {
+        roomNames: s.ids.map((id) => rooms.get(id)?.roomName ?? id),
+        sensibleBtuh: sensible[i] ?? 0,
+        latentBtuh: sum(s.ids, (r) => r.latentGain.ducts),
+        heatingBtuh: sum(s.ids, (r) => r.heatLoss.ducts),
+        systems: bySystem.length,
+      },
+    ]),
+  );
+}
+
 /**
  * The walk-through's ducts in a system's words (where they run, insulation, tightness; tested fractions with the
  * note that they were entered on the walk-through), for a ducted system that sets none of its own. Undefined: the
@@ -120,21 +197,40 @@ function leakageWords(d: HomeDucts, given: SystemDucts | undefined): string {
   return `leakage to outside: ${part('supply', d.supplyLeakageFraction, s)}; ${part('return', d.returnLeakageFraction, r)}`;
 }
 
-/** The duct loads of a ducted system as the desk shows them, from the load method's figures at the block hour. */
+/**
+ * The duct loads of a ducted system as the desk shows them, from the load method's figures at the block hour; with
+ * `share`, the system's own rooms' part of ducts that several systems run on (walkThroughDuctShares).
+ */
 export function explainDuctLoads(
   systemKey: string,
   systemName: string,
   d: HomeDucts,
   given?: SystemDucts,
+  share?: DuctShare,
 ): Explanation {
   const where = DUCT_LOCATION_WORDS[d.location];
+  const shareInputs = share
+    ? [
+        input('Sensible gain, this system’s rooms', share.sensibleBtuh, 'Btu/h', btuh(share.sensibleBtuh)),
+        input('Latent gain, this system’s rooms', share.latentBtuh, 'Btu/h', btuh(share.latentBtuh)),
+        input('Heat loss, this system’s rooms', share.heatingBtuh, 'Btu/h', btuh(share.heatingBtuh)),
+      ]
+    : [];
+  const shareText = share
+    ? `${systemName}: ${share.roomNames.join(', ')} — ${btuh(share.sensibleBtuh)} sensible and ` +
+      `${btuh(share.latentBtuh)} latent gain of the ducts’ ${btuh(d.cooling.sensibleBtuh)} and ` +
+      `${btuh(d.cooling.latentBtuh)} at the block hour, and ${btuh(share.heatingBtuh)} of their ` +
+      `${btuh(d.heating.btuh)} heat loss: the walk-through’s ducts serve the rooms of ${share.systems} systems, ` +
+      'so their loads are worked once for all those rooms and each room takes its part by its own gain and loss. '
+    : '';
   return explanation({
     key: `${systemKey}:ducts`,
     label: `Duct loads, ${systemName} (ducts ${where}, R-${formatNumber(d.insulationR, 1, { trim: true })})`,
-    value: roundHalfUp(d.cooling.sensibleBtuh),
+    value: share ? share.sensibleBtuh : roundHalfUp(d.cooling.sensibleBtuh),
     unit: 'Btu/h',
-    valueText: btuh(d.cooling.sensibleBtuh),
+    valueText: btuh(share ? share.sensibleBtuh : d.cooling.sensibleBtuh),
     text:
+      shareText +
       `Ducts ${where} at ${formatNumber(d.cooling.surroundingsF)} °F around them: ` +
       `${btuh(d.cooling.sensibleBtuh)} sensible and ${btuh(d.cooling.latentBtuh)} latent gain at the block hour ` +
       `(delivery effectiveness ${formatNumber(d.cooling.deliveryEffectiveness, 2)}); ` +
@@ -143,6 +239,7 @@ export function explainDuctLoads(
       `${leakageWords(d, given)}. ` +
       'Added to the rooms these ducts serve, so the sizing above includes them.',
     inputs: [
+      ...shareInputs,
       input('Insulation', d.insulationR, 'R', `R-${formatNumber(d.insulationR, 1, { trim: true })}`),
       input('Blower airflow', d.airflowCfm, 'cfm', formatQuantity(roundHalfUp(d.airflowCfm), 'cfm')),
       input('Supply leakage', d.supplyLeakageFraction, '', formatNumber(d.supplyLeakageFraction, 2)),

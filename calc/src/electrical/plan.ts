@@ -23,6 +23,10 @@ export interface ElectricalPlan {
   /** Disconnect rating, A: 60 A up to a 60 A breaker, else 100 A [TRADE: the common non-fused sizes]. */
   readonly disconnectA: number;
   readonly supplyVoltage: number;
+  /** The run from the panel to the equipment the drop, wire and labor are worked over, ft. */
+  readonly circuitLengthFt: number;
+  /** Why that run is assumed rather than entered (e.g. the heat kit's run taken as the outdoor unit's), else null. */
+  readonly circuitLengthAssumed: string | null;
   /** Drop over the run at the MCA with the chosen conductor, V and % (2 decimals); null without a conductor. */
   readonly voltageDropV: number | null;
   readonly voltageDropPercent: number | null;
@@ -49,6 +53,7 @@ export function electricalPlan({
   input: wiring,
   keyPrefix = '',
   label = 'outdoor unit',
+  assumedRun,
 }: {
   readonly mcaA: number;
   readonly mocpA: number;
@@ -57,9 +62,11 @@ export function electricalPlan({
   readonly keyPrefix?: string;
   /** What the circuit feeds, for the words ("outdoor unit", "heat kit"). */
   readonly label?: string;
+  /** The run was not entered: what is assumed, in plain words (shown as a warning and in the drop's why). */
+  readonly assumedRun?: string;
 }): ElectricalPlan {
   const input = wiring;
-  const warnings: string[] = [];
+  const warnings: string[] = assumedRun === undefined ? [] : [assumedRun];
   const column: 60 | 75 = input.wiringMethod === 'thhn-conduit' ? input.terminationC : 60;
   let wireAwg: number | null = null;
   let breakerA: number | null = null;
@@ -190,9 +197,14 @@ export function electricalPlan({
         value: roundHalfUp(dropPct, 2),
         unit: '%',
         valueText: formatPercent(dropPct, 1),
-        text: `2 × ${formatQuantity(input.circuitLengthFt, 'ft', 1)} × ${A(mcaA)} × ${formatNumber(COPPER_R(wireAwg), 3, { trim: true })} Ω/1000 ft = ${formatQuantity(dropV, 'V', 2)} = ${formatPercent(dropPct, 1)} of ${volts} V`,
+        text: `2 × ${formatQuantity(input.circuitLengthFt, 'ft', 1)} × ${A(mcaA)} × ${formatNumber(COPPER_R(wireAwg), 3, { trim: true })} Ω/1000 ft = ${formatQuantity(dropV, 'V', 2)} = ${formatPercent(dropPct, 1)} of ${volts} V${assumedRun === undefined ? '' : `. ${assumedRun}`}`,
         inputs: [
-          inputOf('Run', input.circuitLengthFt, 'ft', formatQuantity(input.circuitLengthFt, 'ft', 1)),
+          inputOf(
+            assumedRun === undefined ? 'Run' : 'Run (assumed)',
+            input.circuitLengthFt,
+            'ft',
+            formatQuantity(input.circuitLengthFt, 'ft', 1),
+          ),
           inputOf('Current (MCA)', mcaA, 'A', A(mcaA)),
           inputOf('Supply', volts, 'V', `${volts} V`),
         ],
@@ -215,6 +227,8 @@ export function electricalPlan({
     disconnectWithinSight: withinSight,
     disconnectA,
     supplyVoltage: volts,
+    circuitLengthFt: input.circuitLengthFt,
+    circuitLengthAssumed: assumedRun ?? null,
     voltageDropV: dropV === null ? null : roundHalfUp(dropV, 2),
     voltageDropPercent: dropPct === null ? null : roundHalfUp(dropPct, 2),
     voltageDropAwg: advised,

@@ -94,6 +94,11 @@ export const electricalInputSchema = z.object({
    * a whip's reach. Beyond 50 ft it is not within sight.
    */
   heatKitDisconnectDistanceFt: bounded('Heat kit disconnect distance', 0, 500, 'ft').optional(),
+  /**
+   * The heat kit's own branch circuit, from the panel to the air handler, ft (a system with a heat kit): its
+   * voltage drop, wire length and labor. Absent → the outdoor unit's run is assumed, and the plan says so.
+   */
+  heatKitCircuitLengthFt: bounded('Panel to air handler', 1, 300, 'ft').optional(),
   /** Supply voltage for the voltage-drop check, V; absent → 240. */
   supplyVoltage: z
     .union([z.literal(208), z.literal(230), z.literal(240)], { error: 'Choose 208, 230 or 240 V' })

@@ -298,10 +298,11 @@ function branchWiring(
   awg: number,
   ocpdA: number,
   wiring: System['electrical'],
+  runFt: number,
   name: string,
   out: LineMerger,
 ): void {
-  const run = wiring.circuitLengthFt;
+  const run = runFt;
   const each = run + 2 * T.terminationAllowanceFtPerEnd;
   const waste = 1 + T.wireWastePercent / 100;
   const lengthText = `(${run} ft run + 2 × ${T.terminationAllowanceFtPerEnd} ft terminations) × ${waste} waste`;
@@ -468,17 +469,18 @@ function systemLines(
       e.wireAwg,
       e.breakerA,
       wiring,
+      e.circuitLengthFt,
       name,
       out,
     );
-  electricalLabor(e, wiring.circuitLengthFt, name, out, labor);
+  electricalLabor(e, e.circuitLengthFt, name, out, labor);
   if (s.heatKit) {
     out.add(`equipment:${s.heatKit.key}`, s.heatKit.description, 1, 'each', 'equipment', `backup heat for ${name}`);
     const k = s.heatKitElectrical;
     // The heat kit's own branch circuit: its disconnect at the air handler and the whip (or run) to it, and its labor.
     if (k) {
       disconnectLines(k, `${name}, heat kit`, 'the air handler', out);
-      electricalLabor(k, wiring.circuitLengthFt, `${name}, heat kit`, out, labor);
+      electricalLabor(k, k.circuitLengthFt, `${name}, heat kit`, out, labor);
     }
     if (k && k.breakerA !== null)
       out.mat(
@@ -494,6 +496,7 @@ function systemLines(
         k.wireAwg,
         k.breakerA,
         wiring,
+        k.circuitLengthFt,
         `${name}, heat kit`,
         out,
       );

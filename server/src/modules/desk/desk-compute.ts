@@ -345,7 +345,7 @@ export function computeOption(
     // The outdoor unit's branch circuit and the heat kit's: no breaker or wire fits, or a disconnect out of sight.
     for (const e of s.heatKitElectrical ? [s.electrical, s.heatKitElectrical] : [s.electrical])
       if (e.breakerA === null || e.wireAwg === null || !e.disconnectWithinSight)
-        for (const w of e.warnings) block('limit-exceeded', w);
+        for (const w of e.warnings) if (w !== e.circuitLengthAssumed) block('limit-exceeded', w);
   }
   const monthly = data.desk.financing.map((f) => ({
     planKey: f.key,

@@ -274,19 +274,27 @@ function DuctsAndHeat({
           />
         </div>
       ) : null}
-      <div className="grid items-end gap-3 lg:grid-cols-2">
+      <div className="grid items-start gap-3 lg:grid-cols-2">
         <OptionalSelect
           name={`systems.${s}.heatKitKey`}
           label="Heat kit (backup heat)"
           options={heatKitOptions(models)}
         />
         {system.heatKitKey ? (
-          <AmountField
-            name={`systems.${s}.electrical.heatKitDisconnectDistanceFt`}
-            label="Heat kit disconnect from the air handler (ft)"
-            hint="Leave empty when it sits beside the air handler."
-            optional
-          />
+          <>
+            <AmountField
+              name={`systems.${s}.electrical.heatKitCircuitLengthFt`}
+              label="Panel to air handler, heat kit circuit (ft)"
+              hint={`Its own run for the wire and voltage drop. Empty: the outdoor unit’s ${Number.isFinite(system.electrical.circuitLengthFt) ? `${system.electrical.circuitLengthFt} ft` : 'run'} is assumed.`}
+              optional
+            />
+            <AmountField
+              name={`systems.${s}.electrical.heatKitDisconnectDistanceFt`}
+              label="Heat kit disconnect from the air handler (ft)"
+              hint="Leave empty when it sits beside the air handler."
+              optional
+            />
+          </>
         ) : null}
         {backup ? (
           <Why e={backup} label="Backup heat needed at the design temperature" />

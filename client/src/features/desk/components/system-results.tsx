@@ -47,7 +47,7 @@ function ElectricalBlock({
         <strong>{e.wireAwg === null ? '—' : `${e.wireAwg} AWG`}</strong>
         {e.voltageDropPercent === null || e.voltageDropPercent === undefined
           ? ''
-          : `, voltage drop ${formatPercent(e.voltageDropPercent, 1)}`}
+          : `, voltage drop ${formatPercent(e.voltageDropPercent, 1)}${e.circuitLengthFt === undefined ? '' : ` over ${formatNumber(e.circuitLengthFt)} ft${e.circuitLengthAssumed ? ' (assumed)' : ''}`}`}
         {e.disconnectA === undefined ? '' : `; disconnect ${formatNumber(e.disconnectA)} A`}
         {e.disconnectRun
           ? e.disconnectRun.kind === 'whip'

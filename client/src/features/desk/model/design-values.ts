@@ -26,7 +26,11 @@ export function designValues(option: OptionRecord): DesignInput {
           leakageTest: s.ducts.leakageTest,
         },
         heatKitKey: s.heatKitKey,
-        electrical: { ...s.electrical, heatKitDisconnectDistanceFt: s.electrical.heatKitDisconnectDistanceFt },
+        electrical: {
+          ...s.electrical,
+          heatKitDisconnectDistanceFt: s.electrical.heatKitDisconnectDistanceFt,
+          heatKitCircuitLengthFt: s.electrical.heatKitCircuitLengthFt,
+        },
         circuits: s.circuits.map((c) => ({ ...c, liftDirection: c.liftDirection ?? 'indoor-above' })),
       })),
     };

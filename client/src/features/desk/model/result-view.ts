@@ -69,6 +69,9 @@ const electricalView = z.object({
     .nullable()
     .optional(),
   voltageDropPercent: z.number().nullable().optional(),
+  /** The run the drop is worked over, ft, and why it is assumed when it was not entered. */
+  circuitLengthFt: z.number().optional(),
+  circuitLengthAssumed: z.string().nullable().optional(),
   warnings: z.array(z.string()).default([]),
   explanations: z.array(explanationView).default([]),
   caution: z.string().optional(),

@@ -22,26 +22,19 @@ import { join, resolve } from 'node:path';
 import { performance } from 'node:perf_hooks';
 import pg from 'pg';
 import {
-  catalogModelSchema,
-  categorySchema,
   computeDesignFromParsed,
+  DATASET_IDS,
   DEFAULT_SIZING_POLICY,
   designSchema,
-  discountLimitSchema,
-  financingPlanSchema,
   homeInputSchema,
   homeLoadFromParsed,
-  laborTaskSchema,
-  materialSchema,
-  kitSchema,
-  refrigerantCostSchema,
   roomInputSchema,
   type DesignInput,
   type RoomInput,
 } from '../calc/index';
 import { optionPricingSchema } from '../server/src/contract';
 import { calcPricing, computeOption, engineData, parseHome } from '../server/src/modules/desk/desk-compute';
-import type { CompanyDesk } from '../server/src/modules/desk/desk-inputs';
+import { companyDeskFromRows, type CompanyDesk } from '../server/src/modules/desk/desk-inputs';
 import type { DesignOption } from '../server/src/modules/desk/option.entity';
 import { DEMO_PRICE_BOOK_SETTINGS, demoCompanyData } from '../fixtures/demo-company-data';
 import { demoAccounts, isEmpty, seedDemo } from '../fixtures/seed';
@@ -80,18 +73,12 @@ function room(i: number, id = `room-${i}`): RoomInput {
   };
 }
 
+// The demo price book as the server reads it from its rows (desk-inputs.ts).
 const data = demoCompanyData(1);
-const desk: CompanyDesk = {
-  models: new Map(data.models.map((m) => catalogModelSchema.parse(m)).map((m) => [m.key, m])),
-  laborTasks: data.labor.map((t) => laborTaskSchema.parse(t)),
-  materials: data.materials.map((m) => materialSchema.parse(m)),
-  kits: data.kits.map((k) => kitSchema.parse(k)),
-  refrigerants: data.refrigerants.map((r) => refrigerantCostSchema.parse(r)),
-  categories: data.categories.map((c) => categorySchema.parse(c)),
-  financing: data.financing.map((f) => financingPlanSchema.parse(f)),
-  discountLimits: new Map(data['discount-limits'].map((d) => discountLimitSchema.parse(d)).map((d) => [d.key, d])),
-  settings: DEMO_PRICE_BOOK_SETTINGS,
-};
+const desk: CompanyDesk = companyDeskFromRows(
+  DATASET_IDS.flatMap((dataset) => data[dataset].map((row) => ({ dataset, data: row }))),
+  DEMO_PRICE_BOOK_SETTINGS,
+);
 const engine = engineData(desk);
 const designConditions = {
   outdoorCoolingDryBulbF: 94,

@@ -1,23 +1,18 @@
 import { describe, expect, it } from 'vitest';
 import {
-  catalogModelSchema,
   computeDesign,
   designCatalogFromModels,
   designPriceBookFromCompany,
   equipmentCatalogSchema,
-  kitSchema,
-  laborTaskSchema,
   materialSchema,
-  refrigerantCostSchema,
   type DesignInput,
 } from '@calc';
-import { demoCompanyData } from '../../fixtures/demo-company-data';
+import { demoPriceBookRows } from './price-fixtures';
 import { pricing, threeRoomHome } from './sample-data';
 
 // A data mapping (issue 12 records → the engine's units): the checks compare each mapped field with the
 // company record it came from; the trade figures themselves are the (invented) demo data.
-const data = demoCompanyData();
-const models = data.models.map((m) => catalogModelSchema.parse(m));
+const { data, models, materials, labor, kits, refrigerants } = demoPriceBookRows();
 const catalog = designCatalogFromModels(models);
 
 describe('catalog records → the design engine', () => {
@@ -56,10 +51,10 @@ describe('catalog records → the design engine', () => {
 describe('price book records → the engine price book, then a full design', () => {
   const priceBook = designPriceBookFromCompany({
     models,
-    materials: data.materials.map((m) => materialSchema.parse(m)),
-    labor: data.labor.map((m) => laborTaskSchema.parse(m)),
-    kits: data.kits.map((m) => kitSchema.parse(m)),
-    refrigerants: data.refrigerants.map((m) => refrigerantCostSchema.parse(m)),
+    materials,
+    labor,
+    kits,
+    refrigerants,
     itemMap: { 'comm-cable:14-4': 'WIRE-14-4' },
   });
   const design: DesignInput = {
@@ -150,10 +145,10 @@ describe('a material naming its takeoff item (issue 13)', () => {
   it('the demo price book leaves no takeoff line of the sample design unpriced', () => {
     const priceBook = designPriceBookFromCompany({
       models,
-      materials: data.materials.map((m) => materialSchema.parse(m)),
-      labor: data.labor.map((m) => laborTaskSchema.parse(m)),
-      kits: data.kits.map((m) => kitSchema.parse(m)),
-      refrigerants: data.refrigerants.map((m) => refrigerantCostSchema.parse(m)),
+      materials,
+      labor,
+      kits,
+      refrigerants,
     });
     const design: DesignInput = {
       zones: [{ key: 'z-living', name: 'Living', roomIds: ['living', 'kitchen', 'bed'], indoorUnitKey: 'TSL-MH12-W' }],

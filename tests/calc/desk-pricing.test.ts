@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { create, all } from 'mathjs';
 import {
   checkDiscount,
   explainMonthlyPayment,
@@ -16,10 +15,10 @@ import {
   pricingSchema,
   type PricedLine,
 } from '@calc';
+import { m, pricedLine } from './price-fixtures';
 
 // Outside reference: mathjs with 64-digit BigNumbers evaluating the standard annuity formula
 // A = P·r / (1 − (1 + r)^−n), r = APR/12 [PUB: standard annuity (amortised loan) formula].
-const m = create(all ?? {}, { number: 'BigNumber', precision: 64 });
 function annuityCents(principalCents: number, apr: number, months: number): number {
   if (apr === 0) return Number(m.evaluate(`round(${principalCents} / ${months})`).toString());
   const a = m.evaluate(`p * r / (1 - (1 + r)^(-n))`, {
@@ -30,16 +29,7 @@ function annuityCents(principalCents: number, apr: number, months: number): numb
   return Number(m.round(a).toString());
 }
 
-const line = (category: PricedLine['category'], cents: number): PricedLine => ({
-  itemKey: `x:${category}`,
-  description: category,
-  quantity: 1,
-  unit: 'each',
-  category,
-  derivation: 'test',
-  unitCostCents: cents,
-  extendedCostCents: cents,
-});
+const line = (category: PricedLine['category'], cents: number) => pricedLine(`x:${category}`, category, cents);
 
 describe('monthly payment against mathjs (to the cent)', () => {
   it('the demo plans: 60 months at 7.99 % and 120 at 9.99 % on $12,345.67', () => {

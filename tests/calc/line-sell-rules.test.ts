@@ -1,55 +1,25 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { all, create } from 'mathjs';
 import {
-  categorySchema,
-  catalogModelSchema,
   designPriceBookFromCompany,
   explainLineSell,
-  laborTaskSchema,
-  materialSchema,
   priceBookSchema,
   priceOption,
   pricingSchema,
   refrigerantCostSchema,
   type PriceBook,
-  type PricedLine,
 } from '@calc';
-import { demoCompanyData } from '../../fixtures/demo-company-data';
+import { demoPriceBookRows, exactCents, pricedLine as line } from './price-fixtures';
 
 // Outside reference: mathjs with 64-digit BigNumbers evaluating the definitions
 //   markup = (P − C) / C  →  P = C × (1 + markup)
 //   margin = (P − C) / P  →  P = C / (1 − margin)
 // [PUB: the standard definitions of markup and gross margin, any managerial accounting text],
 // each line rounded half-up to the cent, as the line-by-line rule says.
-const m = create(all ?? {}, { number: 'BigNumber', precision: 64 });
-function sellCentsExact(costCents: number, rule: { method: 'markup' | 'margin'; percent: number }): number {
-  const c = m.bignumber(costCents);
-  const p = m.divide(m.bignumber(rule.percent), m.bignumber(100));
-  const one = m.bignumber(1);
-  const price = m.evaluate(rule.method === 'markup' ? 'c * (one + p)' : 'c / (one - p)', { c, p, one }) as ReturnType<
-    typeof m.bignumber
-  >;
-  // mathjs rounds half away from zero: half-up for these non-negative amounts.
-  return Number(m.round(price).toString());
-}
+const sellCentsExact = (costCents: number, rule: { method: 'markup' | 'margin'; percent: number }): number =>
+  exactCents(rule.method === 'markup' ? 'c * (1 + p / 100)' : 'c / (1 - p / 100)', { c: costCents, p: rule.percent });
 
-const line = (itemKey: string, category: PricedLine['category'], cents: number): PricedLine => ({
-  itemKey,
-  description: itemKey,
-  quantity: 1,
-  unit: 'each',
-  category,
-  derivation: 'test',
-  unitCostCents: cents,
-  extendedCostCents: cents,
-});
-
-const data = demoCompanyData();
-const categories = data.categories.map((c) => categorySchema.parse(c));
-const models = data.models.map((x) => catalogModelSchema.parse(x));
-const materials = data.materials.map((x) => materialSchema.parse(x));
-const labor = data.labor.map((x) => laborTaskSchema.parse(x));
+const { categories, models, materials, labor, refrigerants } = demoPriceBookRows();
 
 describe('price-book rules reach each item: own override → category → company default (issue 13)', () => {
   const withOverride = labor.map((t) =>
@@ -60,7 +30,7 @@ describe('price-book rules reach each item: own override → category → compan
       models,
       materials,
       labor: withOverride,
-      refrigerants: data.refrigerants.map((r) => refrigerantCostSchema.parse(r)),
+      refrigerants,
       categories,
     }),
   );
@@ -142,7 +112,7 @@ describe('line-by-line sell price [PUB: P = C(1 + markup), P = C / (1 − margin
     expect(price.sellCents).toBe(eq + nut + sleeve + lab);
     // no discount: the taxable amount is the material lines at sell, tax = taxable × 7.25 % half-up
     expect(price.taxableCents).toBe(nut + sleeve);
-    expect(price.taxCents).toBe(Number(m.round(m.evaluate(`${nut + sleeve} * 0.0725`)).toString()));
+    expect(price.taxCents).toBe(exactCents('t * 0.0725', { t: nut + sleeve }));
   });
   it("each line's why names its rule and where the rule came from", () => {
     const [eq, nut, sleeve] = price.lineSells;

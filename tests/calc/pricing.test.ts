@@ -11,17 +11,9 @@ import {
   CALC_ERROR_MESSAGES,
   type PricedLine,
 } from '@calc';
+import { pricedLine } from './price-fixtures';
 
-const line = (category: PricedLine['category'], cents: number): PricedLine => ({
-  itemKey: `x:${category}:${cents}`,
-  description: 'test',
-  quantity: 1,
-  unit: 'each',
-  category,
-  derivation: 'test',
-  unitCostCents: cents,
-  extendedCostCents: cents,
-});
+const line = (category: PricedLine['category'], cents: number) => pricedLine(`x:${category}:${cents}`, category, cents);
 
 describe('money helpers (integer cents, half-up)', () => {
   it('roundHalfUp rounds .5 up, including binary near-misses (1.005 → 1.01)', () => {

@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import { all, create } from 'mathjs';
 import {
   categorySchema,
   computeDesign,
@@ -12,36 +11,14 @@ import {
   pricingSchema,
   refrigerantCostSchema,
   type PriceBook,
-  type PricedLine,
 } from '@calc';
+import { exactCents as cents, pricedLine as line } from './price-fixtures';
 import { design, priceBook, pricing, catalog, threeRoomHome } from './sample-data';
 
 // Outside reference for the money: mathjs BigNumbers, rounded half-up to the cent (mathjs rounds half away
 // from zero, the same for these non-negative amounts). Sales tax = rate × taxable base [definition of an ad
 // valorem sales tax]; a discount on the whole price falls on every line alike, so the taxable base is the
 // taxed lines' share of the discounted subtotal: base = taxed sell × subtotal ÷ sell.
-const m = create(all ?? {}, { number: 'BigNumber', precision: 64 });
-const cents = (expr: string, scope: Record<string, number>) =>
-  Number(
-    m
-      .round(
-        m.evaluate(expr, Object.fromEntries(Object.entries(scope).map(([k, v]) => [k, m.bignumber(v)]))) as ReturnType<
-          typeof m.bignumber
-        >,
-      )
-      .toString(),
-  );
-
-const line = (itemKey: string, category: PricedLine['category'], c: number): PricedLine => ({
-  itemKey,
-  description: itemKey,
-  quantity: 1,
-  unit: 'each',
-  category,
-  derivation: 'test',
-  unitCostCents: c,
-  extendedCostCents: c,
-});
 
 /** A price book with a taxable and a non-taxable category, as designPriceBookFromCompany makes it. */
 const book: PriceBook = {

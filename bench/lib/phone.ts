@@ -117,7 +117,15 @@ export async function phoneTimings(
         // What the page does next (the work kept until after the first keystroke) is in the trace too.
         await page.waitForTimeout(AFTER_TYPED_MS);
         const raw = await browser.stopTracing();
-        if (profile.saveDir) writeFileSync(join(profile.saveDir, `phone-${label}-${Date.now()}.json`), raw);
+        // The file's name carries when the field showed and took the letter (ms), for reading it again later.
+        if (profile.saveDir)
+          writeFileSync(
+            join(
+              profile.saveDir,
+              `phone-${label}-${Date.now()}-shown${Math.round(visibleMs)}-typed${Math.round(ms)}.json`,
+            ),
+            raw,
+          );
         const events = (JSON.parse(raw.toString('utf8')) as { traceEvents: TraceEvent[] }).traceEvents;
         traces[label] = summariseTrace(events, {
           visibleMs,

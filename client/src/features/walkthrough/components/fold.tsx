@@ -1,4 +1,5 @@
 import { useState, type ReactNode } from 'react';
+import { useAfterIdle } from '../../../lib/use-after-idle';
 
 interface FoldProps {
   /** The one line shown folded (and above the fields when open). */
@@ -18,6 +19,10 @@ interface FoldProps {
  * A part of the room form that folds to one line once complete (walls, windows, above/below, people), so a
  * phone scrolls past what is done. It starts open when incomplete, just added or wrong, and never folds
  * while a field inside shows an error; a tap on the line opens or closes it.
+ *
+ * A fold that starts closed renders its fields after the page's first idle moment (or at once when opened):
+ * on a phone the folded walls, windows and sections were a third of the walk-through's first render, all
+ * hidden, and they held the room name from taking typing (issue 11).
  */
 export function Fold({
   summary,
@@ -29,6 +34,7 @@ export function Fold({
   children,
 }: FoldProps) {
   const [open, setOpen] = useState(() => startOpen || hasError || !complete);
+  const later = useAfterIdle();
   return (
     <details
       open={open || hasError}
@@ -48,7 +54,7 @@ export function Fold({
         />
         {summary}
       </summary>
-      {children}
+      {open || hasError || later ? children : null}
     </details>
   );
 }

@@ -64,6 +64,9 @@ export function WalkthroughView({
   const viewer = useViewer();
   // The folded job details come once the rooms can be typed into (they load a chunk and fetch the customer and staff).
   const detailsNow = useAfterIdle();
+  // The design conditions' form (a fold of its own, closed once they are entered) renders when opened or
+  // once the rooms take typing: closed, it was a quarter of the page's first render (issue 11).
+  const [designOpen, setDesignOpen] = useState(() => job.designConditions === null);
   const current = rooms.find((r) => r.id === selected) ?? rooms[0] ?? null;
   const conflict = state.conflict && state.conflict.payload.jobId === job.id ? state.conflict : null;
   useEffect(() => {
@@ -163,18 +166,24 @@ export function WalkthroughView({
           </QueryWidgetBoundary>
         ) : null}
 
-        <details className="rounded-lg border border-line bg-white p-4" open={job.designConditions === null}>
+        <details
+          className="rounded-lg border border-line bg-white p-4"
+          open={job.designConditions === null}
+          onToggle={(e) => setDesignOpen(e.currentTarget.open)}
+        >
           <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">
             Site design conditions
           </summary>
-          <QueryWidgetBoundary name="the design conditions">
-            <DesignConditionsForm
-              key={`${job.id}:${revision}`}
-              job={job}
-              companyDefaults={settings?.defaultDesignConditions ?? null}
-              notice={settings?.designConditionsNotice}
-            />
-          </QueryWidgetBoundary>
+          {designOpen || detailsNow || job.designConditions === null ? (
+            <QueryWidgetBoundary name="the design conditions">
+              <DesignConditionsForm
+                key={`${job.id}:${revision}`}
+                job={job}
+                companyDefaults={settings?.defaultDesignConditions ?? null}
+                notice={settings?.designConditionsNotice}
+              />
+            </QueryWidgetBoundary>
+          ) : null}
         </details>
 
         <section aria-label="Walk-through rooms" className="flex flex-col gap-4">

@@ -3,12 +3,15 @@ import { describe, expect, it } from 'vitest';
 import {
   catalogModelSchema,
   checkCombination,
+  coincidentLoad,
   computeDesign,
   designCatalogFromModels,
   designPriceBookFromCompany,
   groupByCapacity,
+  homeLoad,
   suggestDesign,
   type DesignInput,
+  type Explanation,
   type HomeInput,
   type RoomInput,
 } from '@calc';
@@ -36,6 +39,29 @@ const verdicts = (home: HomeInput, design: DesignInput) => {
     ...r.zones.map((z) => ({ name: z.name, key: z.indoorUnitKey, sizing: z.sizing })),
     ...r.systems.map((y) => ({ name: y.name, key: y.outdoorUnitKey, sizing: y.sizing })),
   ];
+};
+/**
+ * The load and capacity each of suggest's unit reasons reports, beside the desk's sizing of the same unit (computeDesign
+ * on the suggested design): a zone's reason (`suggest:<zone>`, its head or its matched pair) against that zone's
+ * verdict, a multi-zone unit's (`suggest:outdoor:<system>`) against that system's.
+ */
+const reportedAndDesk = (home: HomeInput, s: { design: DesignInput; reasons: readonly Explanation[] }) => {
+  const r = run(home, s.design);
+  const figure = (e: Explanation, label: string) => e.inputs?.find((i) => i.label === label)?.value;
+  return s.reasons.flatMap((e) => {
+    const load = figure(e, 'Cooling load at design');
+    if (load === undefined) return [];
+    const zone = r.zones.find((z) => e.key === `suggest:${z.zoneKey}`);
+    const system = r.systems.find((y) => e.key === `suggest:outdoor:${y.systemKey}`);
+    const desk = (zone ?? system)?.sizing;
+    return [
+      {
+        key: e.key,
+        reported: { load, capacity: figure(e, 'Cooling capacity at design') },
+        desk: desk ? { load: desk.coolingLoadBtuh, capacity: desk.coolingCapacityBtuh } : null,
+      },
+    ];
+  });
 };
 /** No ductless head across closed rooms: a zone of several rooms has a ducted unit or is one open space. */
 const headsServeOneSpace = (design: DesignInput) =>
@@ -92,6 +118,32 @@ describe('suggest on the demo ranch with no zones given (issue 13: a first price
     });
     expect(isDucted(one.design.zones[0]?.indoorUnitKey ?? '')).toBe(true);
     for (const u of verdicts(ranch, one.design)) expect(u.sizing.withinRange, `${u.name} ${u.key}`).toBe(true);
+  });
+});
+
+describe('suggest sizes each plan on the loads the desk shows for it (issue 13: a ductless plan without the ducts)', () => {
+  // The desk sizes a ductless unit without the walk-through's ducts (their losses belong to the distribution system in
+  // use: ASHRAE Standard 152; common practice for an option that does not use them). Without the ducted heat pumps
+  // the ranch's suggestion is ductless; before this fix suggest sized its heads on the loads with the attic ducts and
+  // its figures disagreed with the desk's.
+  const noDucted = models.filter((m) => m.kind !== 'outdoor-ducted');
+  const s = suggestDesign({ home: ranch, models: noDucted });
+  const units = reportedAndDesk(ranch, s);
+  it('every unit reason reports the load and capacity the desk shows for that unit', () => {
+    expect(units.length).toBeGreaterThanOrEqual(s.design.zones.length);
+    for (const u of units) expect(u.reported, u.key).toEqual(u.desk);
+  });
+  it('a room on a wall head is sized on its load with the ducts left out', () => {
+    const { ducts: _ducts, ...bare } = ranch;
+    const without = homeLoad({ home: bare });
+    const walls = s.design.zones.filter((z) => byKey.get(z.indoorUnitKey)?.indoorType === 'wall');
+    expect(walls.length).toBeGreaterThan(0);
+    for (const z of walls) {
+      // The room's coincident sensible and latent load in the house worked without its ducts (calc's loads).
+      const c = coincidentLoad({ loads: without, roomIds: z.roomIds });
+      const reported = units.find((u) => u.key === `suggest:${z.key}`)?.reported.load;
+      expect(reported, z.name).toBe(c.sensibleBtuh + c.latentBtuh);
+    }
   });
 });
 
@@ -222,7 +274,7 @@ describe('groupByCapacity (largest first to the least-loaded group with a free p
   });
 });
 
-describe('property: on random homes every head serves one room or one open space, and no unit is past its ports', () => {
+describe('property: on random homes every head serves one room or one open space, no unit is past its ports, and each unit is sized on the desk’s loads', () => {
   const roomArb = fc.record({
     sideFt: fc.integer({ min: 7, max: 30 }),
     glassShare: fc.double({ min: 0.05, max: 0.5, noNaN: true }),
@@ -231,6 +283,11 @@ describe('property: on random homes every head serves one room or one open space
   const homeArb = fc.record({
     rooms: fc.array(roomArb, { minLength: 1, maxLength: 9 }),
     ducts: fc.boolean(),
+    // The walk-through's ducts on some rooms only (each room's flag), and a catalog without ducted heat pumps (so a
+    // ductless plan is the suggestion on a house with ducts).
+    ductsOnSome: fc.boolean(),
+    onDucts: fc.array(fc.boolean(), { minLength: 9, maxLength: 9 }),
+    noDucted: fc.boolean(),
     // Zones given by the estimator: each room's zone number, and whether a zone is one open space.
     zoneOf: fc.array(fc.integer({ min: 0, max: 3 }), { minLength: 9, maxLength: 9 }),
     open: fc.array(fc.boolean(), { minLength: 4, maxLength: 4 }),
@@ -245,16 +302,26 @@ describe('property: on random homes every head serves one room or one open space
             ...square(`r${i}`, r.sideFt, Math.round(r.sideFt * 8 * r.glassShare)),
             floorLevel: r.floorLevel,
           })),
-          ...(h.ducts ? { ducts: { location: 'attic' as const, insulationR: 6, leakage: 'typical' as const } } : {}),
         };
+        const ductRooms = home.rooms.filter((_, i) => h.onDucts[i]).map((r) => r.id);
+        if (h.ducts)
+          home.ducts = {
+            location: 'attic',
+            insulationR: 6,
+            leakage: 'typical',
+            ...(h.ductsOnSome && ductRooms.length > 0 ? { roomIds: ductRooms } : {}),
+          };
+        const catalogModels = h.noDucted ? models.filter((m) => m.kind !== 'outdoor-ducted') : models;
         const zones = h.given
           ? [0, 1, 2, 3].flatMap((n) => {
               const roomIds = home.rooms.filter((_, i) => h.zoneOf[i] === n).map((r) => r.id);
               return roomIds.length > 0 ? [{ key: `z${n}`, name: `Zone ${n}`, roomIds, openSpace: h.open[n] }] : [];
             })
           : undefined;
-        const s = suggestDesign({ home, models, ...(zones ? { zones } : {}) });
+        const s = suggestDesign({ home, models: catalogModels, ...(zones ? { zones } : {}) });
         expect(headsServeOneSpace(s.design)).toBe(true);
+        // Each unit's reported load and capacity are the desk's for this design (a ductless unit without the ducts).
+        for (const u of reportedAndDesk(home, s)) expect(u.reported, u.key).toEqual(u.desk);
         // Every room in exactly one zone, every zone on one system.
         expect([...s.design.zones.flatMap((z) => z.roomIds)].sort()).toEqual(home.rooms.map((r) => r.id).sort());
         const circuits = s.design.systems.flatMap((y) => y.circuits.map((c) => c.zoneKey));

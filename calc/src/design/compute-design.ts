@@ -1,7 +1,7 @@
 import { CalcError } from '../errors';
 import { electricalPlan, type ElectricalPlan } from '../electrical/plan';
 import { m2FromFt2, mFromFt } from '../units';
-import { coincidentLoad, homeLoadFromParsed, type HomeLoad } from '../loads/home-load';
+import { coincidentLoad, type HomeLoad } from '../loads/home-load';
 import { parseOrThrow } from '../parse';
 import { priceLines, priceOption, type OptionPrice, type PricedLine } from '../pricing/price';
 import {
@@ -28,7 +28,7 @@ import { checkCombination, checkSizing, zoneRating, type CombinationCheck, type 
 import { DEFAULT_SIZING_POLICY, sizingPolicySchema, type SizingPolicy } from '../sizing/policy';
 import { buildTakeoff, type SystemForTakeoff } from '../takeoff/build';
 import { zoneLoads, type ZoneLoad } from './zone-loads';
-import { explainDuctLoads, homeForDesign, walkThroughDucts, walkThroughDuctShares } from './design-ducts';
+import { designLoads, explainDuctLoads, walkThroughDucts, walkThroughDuctShares } from './design-ducts';
 import { explanation, type Explanation } from '../explain/explanation';
 import { formatQuantity } from '../explain/format';
 import { explainExtension, explainLineSell, explainLineTax, explainOptionPrice } from '../pricing/explain-price';
@@ -175,6 +175,8 @@ export interface ParsedDesignRequest {
   readonly policy: SizingPolicy;
   /** The home's loads when the caller already has them (several options on one home): skips the recompute. */
   readonly loads?: HomeLoad;
+  /** How to work the loads of a home this design changes (its ducts): a caller trying many designs keeps them. */
+  readonly loadsOf?: (home: Home) => HomeLoad;
   /**
    * false: leave out the takeoff lines' and the price's explanations (`explanations` is empty), for a caller
    * that prices the takeoff again after its own edits and explains that price itself (the server's desk).
@@ -195,17 +197,22 @@ export function computeDesignFromParsed({
   pricing,
   policy,
   loads: given,
+  loadsOf,
   explainPrice = true,
 }: ParsedDesignRequest): DesignResult {
   // A ducted system's ducts are this option's own: its loads are worked with them (the shared loads stand otherwise).
   // The walk-through's ducts count only for the rooms a ducted unit of this option serves (none: no duct loads).
   const indoorUnits = byKey(catalog.indoorUnits, (u) => u.key);
-  const ductedZone = (z: Design['zones'][number]) =>
-    indoorUnits.get(z.indoorUnitKey)?.unitType === 'ducted-air-handler';
-  const withDucts = homeForDesign(home, design, ductedZone);
-  const loads = withDucts.changed ? homeLoadFromParsed(withDucts.home) : (given ?? homeLoadFromParsed(home));
+  const withDucts = designLoads({
+    home,
+    design,
+    indoorUnits,
+    ...(given ? { loads: given } : {}),
+    ...(loadsOf ? { loadsOf } : {}),
+  });
+  const loads = withDucts.loads;
   // Several ducted systems on the walk-through's one set of ducts: each explains its own rooms' share of them.
-  const shares = walkThroughDuctShares({ home, design, loads, ductedZone });
+  const shares = walkThroughDuctShares({ home, design, loads, ductedZone: withDucts.ductedZone });
   /** A ducted system's duct loads (none for a system without ducts on this option), with its share when shared. */
   const ductsOfSystem = (key: string) => {
     const share = shares?.get(key);

@@ -2,11 +2,12 @@ import { CalcError } from '../errors';
 import { explanation, input, type Explanation } from '../explain/explanation';
 import { formatNumber, formatQuantity } from '../explain/format';
 import type { HomeDucts } from '../loads/home-ducts';
-import type { HomeLoad } from '../loads/home-load';
+import { homeLoadFromParsed, type HomeLoad } from '../loads/home-load';
 import { apportion } from '../loads/peak-detail';
 import { roundHalfUp } from '../rounding';
 import { ductedRoomIds, roomOnTwoDuctedSystems, type Design, type System } from '../schemas/design';
 import type { DuctLocation } from '../schemas/ducts';
+import type { IndoorUnit } from '../schemas/equipment';
 import type { Home } from '../schemas/home';
 
 type SystemDucts = NonNullable<System['ducts']>;
@@ -154,6 +155,41 @@ export function walkThroughDuctShares({
       },
     ]),
   );
+}
+
+/**
+ * The loads an option is sized on — the one path from a design to its loads, for the desk (computeDesign) and for
+ * suggest, which judges each candidate plan on the loads the desk will show for it: the home of homeForDesign, a zone
+ * counting as ducted when its indoor unit is (an air handler or slim ducted head, `ducted-air-handler`). `loads`: the
+ * walk-through home's loads when the caller has them (used when the design leaves the home as walked); `loadsOf`: how
+ * to work a changed home's loads (a caller trying many designs on one home keeps them; default homeLoadFromParsed).
+ */
+export function designLoads({
+  home,
+  design,
+  indoorUnits,
+  loads,
+  loadsOf = homeLoadFromParsed,
+}: {
+  readonly home: Home;
+  readonly design: Design;
+  readonly indoorUnits: ReadonlyMap<string, IndoorUnit>;
+  readonly loads?: HomeLoad;
+  readonly loadsOf?: (home: Home) => HomeLoad;
+}): {
+  readonly loads: HomeLoad;
+  readonly systemKeys: readonly string[];
+  readonly ductedZone: (zone: Design['zones'][number]) => boolean;
+} {
+  const ductedZone = (z: Design['zones'][number]) =>
+    indoorUnits.get(z.indoorUnitKey)?.unitType === 'ducted-air-handler';
+  const withDucts = homeForDesign(home, design, ductedZone);
+  const worked = withDucts.changed ? withDucts.home : home;
+  return {
+    loads: withDucts.changed || !loads ? loadsOf(worked) : loads,
+    systemKeys: withDucts.systemKeys,
+    ductedZone,
+  };
 }
 
 /**

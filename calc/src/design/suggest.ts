@@ -1,16 +1,17 @@
 import { designCatalogFromModels, equipmentTypeOf } from '../catalog/design-bridge';
 import type { CatalogModel } from '../catalog/model';
-import { explanation, type Explanation } from '../explain/explanation';
+import { explanation, input, type Explanation } from '../explain/explanation';
 import { formatNumber, formatPercent, formatQuantity } from '../explain/format';
 import { coincidentLoad, homeLoadFromParsed, type HomeLoad } from '../loads/home-load';
 import { parseOrThrow } from '../parse';
 import { designSchema, type CircuitInput, type DesignInput } from '../schemas/design';
 import { floorAreaFt2 } from '../geometry';
 import { equipmentCatalogSchema, type IndoorUnit, type OutdoorUnit } from '../schemas/equipment';
-import { homeInputSchema, type HomeInput } from '../schemas/home';
+import { homeInputSchema, type Home, type HomeInput } from '../schemas/home';
 import { checkCombination, checkSizing, type LoadToMeet, type SizingCheck } from '../sizing/match';
 import { DEFAULT_SIZING_POLICY, sizingPolicySchema, type SizingPolicy } from '../sizing/policy';
 import { computeDesignFromParsed } from './compute-design';
+import { designLoads } from './design-ducts';
 import { priceBookSchema, pricingSchema } from '../pricing/schemas';
 
 /** A suggested design: the input computeDesign takes, with why each unit was chosen. */
@@ -21,6 +22,13 @@ export interface Suggestion {
   readonly warnings: readonly string[];
 }
 
+/**
+ * How many times suggest builds a candidate plan again on the desk's loads for the plan it built before (designLoads:
+ * a ductless plan's heads are sized without the walk-through's ducts). Two builds settle a plan whose kind of unit
+ * per zone does not change with the ducts; the rest allow a zone that moves between a head and a ducted one.
+ */
+export const SETTLE_BUILDS = 4;
+
 /** Default run per circuit until the estimator measures it, ft. [TRADE: a typical one-wall mini-split run] */
 export const SUGGEST_LINE_FT = 25;
 
@@ -29,6 +37,8 @@ interface ZoneDraft {
   name: string;
   roomIds: string[];
   load: LoadToMeet;
+  /** The home's loads the zone is sized on: the desk's loads for the plan it is part of (designLoads). */
+  on: HomeLoad;
 }
 
 const btuh = (v: number) => formatQuantity(Math.round(v), 'Btu/h');
@@ -110,6 +120,11 @@ function reason(key: string, who: string, p: Chosen<IndoorUnit | OutdoorUnit>, w
     unit: 'Btu/h',
     valueText: p.model.name,
     text: `${p.model.name}: ${btuh(p.sizing.coolingCapacityBtuh)} at design for ${btuh(p.sizing.coolingLoadBtuh)} = ${formatPercent(pct)} of the load (range ${p.sizing.allowedPercent.min}–${formatPercent(p.sizing.allowedPercent.max)}); ${why}`,
+    // The load is the desk's for this plan (designLoads): a ductless unit's without the walk-through's ducts.
+    inputs: [
+      input('Cooling load at design', p.sizing.coolingLoadBtuh, 'Btu/h', btuh(p.sizing.coolingLoadBtuh)),
+      input('Cooling capacity at design', p.sizing.coolingCapacityBtuh, 'Btu/h', btuh(p.sizing.coolingCapacityBtuh)),
+    ],
     status: p.sizing.withinRange ? 'ok' : 'warning',
     source: 'Active catalog, company sizing policy',
   });
@@ -248,6 +263,8 @@ export function groupByCapacity<Z>(zones: readonly Z[], loadOf: (z: Z) => number
  * - Zones given: kept as given. A zone no head can meet, or several closed rooms the home's ducts serve, goes on a
  *   ducted heat pump when that comes closer to the range than a head of the kind the zone suits; a zone of several
  *   closed rooms gets a slim ducted head (never a wall head), or when the catalog has none, is split into its rooms.
+ * Every plan is sized on the loads the desk will show for it (designLoads, the path computeDesign takes): a ductless
+ * unit without the walk-through's ducts, a ducted unit with the ducts of the rooms it serves (`settle`).
  * Each unit is the smallest of its kind in range, else the closest to it, with a warning saying so. A ducted heat pump
  * that falls short of the heat loss at the design temperature gets the smallest matched heat kit covering the
  * shortfall. Candidates are ordered by nominal size, cost, then key, so the same inputs always give the same
@@ -270,7 +287,18 @@ export function suggestDesign({
   readonly circuits?: readonly CircuitInput[];
 }): Suggestion {
   const home = parseOrThrow(homeInputSchema, homeIn);
-  const loads = homeLoadFromParsed(home);
+  /**
+   * The loads of the home as designLoads changes it for a plan (only its ducts change): worked once per set of
+   * ducts, so a plan tried again, or scored by computeDesign, finds them kept.
+   */
+  const worked = new Map<string, HomeLoad>();
+  const loadsOf = (h: Home): HomeLoad => {
+    const k = JSON.stringify([h.ducts ?? null, h.ductSystems ?? null]);
+    let l = worked.get(k);
+    if (!l) worked.set(k, (l = homeLoadFromParsed(h)));
+    return l;
+  };
+  const walked = loadsOf(home);
   const dc = home.designConditions;
   const designF = { cooling: dc.outdoorCoolingDryBulbF, heating: dc.outdoorHeatingDryBulbF };
   const active = models.filter((m) => m.active).sort(byNominal);
@@ -309,6 +337,7 @@ export function suggestDesign({
   const token = () => `plan.${(tokens += 1)}.system`;
   // What computeDesign needs to judge a plan: the prices play no part in its blockers.
   const parsedCatalog = parseOrThrow(equipmentCatalogSchema, engine);
+  const parsedIndoor = new Map(parsedCatalog.indoorUnits.map((u) => [u.key, u]));
   const parsedPolicy = parseOrThrow(sizingPolicySchema, policy);
   const noPrices = parseOrThrow(priceBookSchema, { items: {}, laborRateCents: 0 });
   const noPricing = parseOrThrow(pricingSchema, { method: 'margin', percent: 0 });
@@ -323,7 +352,7 @@ export function suggestDesign({
         priceBook: noPrices,
         pricing: noPricing,
         policy: parsedPolicy,
-        loads,
+        loadsOf,
         explainPrice: false,
       }).blockers.length;
     } catch {
@@ -353,7 +382,7 @@ export function suggestDesign({
     ...(z.given?.lowestDuctOpeningFt !== undefined ? { lowestDuctOpeningFt: z.given.lowestDuctOpeningFt } : {}),
   });
   type Draft = ZoneDraft & { given?: GivenZone };
-  const draft = (key: string, roomIds: string[], given?: GivenZone, name?: string): Draft => ({
+  const draft = (key: string, roomIds: string[], on: HomeLoad, given?: GivenZone, name?: string): Draft => ({
     key,
     name:
       given?.name ??
@@ -363,7 +392,8 @@ export function suggestDesign({
         .join(' + ')
         .slice(0, 80),
     roomIds,
-    load: loadOf(loads, roomIds),
+    load: loadOf(on, roomIds),
+    on,
     ...(given ? { given } : {}),
   });
   const coolingOf = (z: ZoneDraft) => z.load.sensibleBtuh + z.load.latentBtuh;
@@ -466,8 +496,9 @@ export function suggestDesign({
   const refusals: string[] = [];
   /** The smallest multi-zone unit in range for these zones' heads, else the closest; null when none takes them. */
   const multiFor = (group: readonly Draft[], chosen: readonly Chosen<IndoorUnit>[]) => {
+    const on = group[0]?.on ?? walked;
     const all = loadOf(
-      loads,
+      on,
       group.flatMap((z) => z.roomIds),
     );
     let best: { model: CatalogModel; unit: OutdoorUnit; sizing: SizingCheck; connected: number } | null = null;
@@ -632,9 +663,9 @@ export function suggestDesign({
    * suits them is oversized), which share a slim ducted head with other small rooms of their floor — largest first,
    * a group closing once a ducted head is in range for it, a leftover joining the last group when that stays in range.
    */
-  const roomZones = (roomIds: readonly string[], prefix: string): Draft[] => {
+  const roomZones = (roomIds: readonly string[], prefix: string, on: HomeLoad): Draft[] => {
     const ducted = headsOf(heads.filter((m) => kindOf(m) === 'ducted'));
-    const inRange = (ids: readonly string[]) => size(ducted, loadOf(loads, ids))?.sizing.withinRange === true;
+    const inRange = (ids: readonly string[]) => size(ducted, loadOf(on, ids))?.sizing.withinRange === true;
     const floors = new Map<number, string[]>();
     for (const id of roomIds) {
       const f = roomsById.get(id)?.floorLevel ?? 1;
@@ -644,14 +675,14 @@ export function suggestDesign({
     for (const f of [...floors.keys()].sort((a, b) => a - b)) {
       const small: string[] = [];
       for (const id of floors.get(f) ?? []) {
-        const z = draft('x', [id]);
+        const z = draft('x', [id], on);
         const h = pick(z, (k) => headsOf(heads.filter((m) => kindOf(m) === k)));
         const over =
           h !== null && !h.sizing.withinRange && (h.sizing.coolingRatio ?? 0) * 100 > h.sizing.allowedPercent.max;
         if (over && ducted.length > 0) small.push(id);
         else groups.push([id]);
       }
-      small.sort((a, b) => coolingOf(draft('x', [b])) - coolingOf(draft('x', [a])));
+      small.sort((a, b) => coolingOf(draft('x', [b], on)) - coolingOf(draft('x', [a], on)));
       const closed: string[][] = [];
       let open: string[] = [];
       for (const id of small) {
@@ -671,52 +702,101 @@ export function suggestDesign({
       draft(
         `${prefix}${i + 1}`,
         ids.sort((a, b) => (roomOrder.get(a) ?? 0) - (roomOrder.get(b) ?? 0)),
+        on,
       ),
     );
   };
 
+  /**
+   * The loads the desk will size this plan on: designLoads on the plan's design (the home of homeForDesign — a
+   * ductless plan without the walk-through's ducts, a ducted unit with the ducts of the rooms it serves).
+   */
+  const deskLoads = (p: Plan): HomeLoad => {
+    try {
+      return designLoads({
+        home,
+        design: parseOrThrow(designSchema, { zones: p.zones, systems: p.systems }),
+        indoorUnits: parsedIndoor,
+        loads: walked,
+        loadsOf,
+      }).loads;
+    } catch {
+      return walked;
+    }
+  };
+  /**
+   * A candidate plan sized on the loads the desk will show for it. Its zones are drafted on the walk-through's loads
+   * and served; while the desk's loads for the plan served (deskLoads) differ from those it was sized on — a ductless
+   * plan leaves the ducts out, which can make a room too small for its head or large enough for one — the zones are
+   * drafted again on the desk's loads and served again. Past SETTLE_BUILDS builds the zones of the last build are
+   * kept and only their units chosen again on its desk loads (a room that moves between its own head and a shared
+   * ducted head as its duct loads come and go stops moving). `settled` false: the last plan's loads still differ
+   * from the desk's; the caller says so.
+   */
+  const settle = (
+    zonesOn: (on: HomeLoad) => Draft[],
+    serve: (zones: readonly Draft[]) => Plan | null,
+  ): { plan: Plan; settled: boolean } | null => {
+    let on = walked;
+    let zones = zonesOn(on);
+    let plan = serve(zones);
+    for (let i = 1; plan !== null && i < 2 * SETTLE_BUILDS; i += 1) {
+      const desk = deskLoads(plan);
+      if (desk === on) return { plan, settled: true };
+      on = desk;
+      zones = i < SETTLE_BUILDS ? zonesOn(on) : zones.map((z) => draft(z.key, z.roomIds, on, z.given, z.name));
+      plan = serve(zones);
+    }
+    return plan && { plan, settled: deskLoads(plan) === on };
+  };
+
   const candidates: { label: string; plan: Plan }[] = [];
+  const consider = (label: string, found: { plan: Plan; settled: boolean } | null, notes: readonly string[] = []) => {
+    if (!found) return;
+    found.plan.warnings.push(...notes);
+    if (!found.settled)
+      found.plan.warnings.push(
+        `${label}: its units were sized on loads that differ from the desk's for this plan (its rooms' duct loads change with the kind of unit chosen), so check each unit's verdict on the desk.`,
+      );
+    candidates.push({ label, plan: found.plan });
+  };
   if (givenZones) {
     // A zone of closed rooms with no ducted unit in the catalog to serve it is split into its rooms.
     const anyDucted = heads.some((m) => kindOf(m) === 'ducted') || ductedCandidates.length > 0;
-    const zones: Draft[] = [];
     const notes: string[] = [];
-    for (const g of givenZones) {
-      const z = draft(g.key, [...g.roomIds], g);
-      if (closedRooms(z) && !anyDucted) {
+    for (const g of givenZones)
+      if (g.roomIds.length > 1 && g.openSpace !== true && !anyDucted)
         notes.push(
           `${g.name}: its rooms are not marked as one open space and the active catalog has no ducted unit, so each room gets its own head (a ductless head's air does not reach a closed room).`,
         );
-        z.roomIds.forEach((id, i) => zones.push(draft(`${g.key}-${i + 1}`, [id])));
-      } else zones.push(z);
-    }
-    const plan = servePlan(zones);
-    if (plan) {
-      plan.warnings.push(...notes);
-      candidates.push({ label: 'The zones as given', plan });
-    }
+    const zonesOn = (on: HomeLoad) =>
+      givenZones.flatMap((g) => {
+        const z = draft(g.key, [...g.roomIds], on, g);
+        return closedRooms(z) && !anyDucted ? z.roomIds.map((id, i) => draft(`${g.key}-${i + 1}`, [id], on)) : [z];
+      });
+    consider('The zones as given', settle(zonesOn, servePlan), notes);
   } else {
     const all = home.rooms.map((r) => r.id);
     if (ductRooms.length > 0) {
-      const d = ductedPlan(draft('zd', ductRooms, undefined, 'Ducted rooms'));
-      const rest = servePlan(
-        roomZones(
-          all.filter((id) => !ductRooms.includes(id)),
-          'z',
+      const rest = all.filter((id) => !ductRooms.includes(id));
+      consider(
+        ductRooms.length === all.length
+          ? "A ducted heat pump on the home's ducts"
+          : "A ducted heat pump on the home's ducts, ductless heads for the other rooms",
+        settle(
+          (on) => [draft('zd', ductRooms, on, undefined, 'Ducted rooms'), ...roomZones(rest, 'z', on)],
+          ([zd, ...others]) => {
+            const d = zd ? ductedPlan(zd) : null;
+            const served = servePlan(others);
+            return d && served ? joinPlans([d, served]) : null;
+          },
         ),
       );
-      if (d && rest)
-        candidates.push({
-          label:
-            ductRooms.length === all.length
-              ? "A ducted heat pump on the home's ducts"
-              : "A ducted heat pump on the home's ducts, ductless heads for the other rooms",
-          plan: joinPlans([d, rest]),
-        });
     }
-    const ductless = servePlan(roomZones(all, 'z'));
-    if (ductless)
-      candidates.push({ label: 'Ductless, a head for each room (small rooms sharing a ducted head)', plan: ductless });
+    consider(
+      'Ductless, a head for each room (small rooms sharing a ducted head)',
+      settle((on) => roomZones(all, 'z', on), servePlan),
+    );
   }
   let chosen: { label: string; plan: Plan } | null = null;
   for (const c of candidates) if (chosen === null || compareScores(score(c.plan), score(chosen.plan)) < 0) chosen = c;

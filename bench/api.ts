@@ -10,7 +10,7 @@
  * (comma-separated of jobs, rooms, loads, save, sign-in; default all); BENCH_CPU_PROF=<dir> runs the
  * app server under `node --cpu-prof` and leaves its profile there (open it in Chrome's DevTools).
  */
-import { randomBytes, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import { availableParallelism, loadavg } from 'node:os';
 import { join, resolve } from 'node:path';
 import pg from 'pg';
@@ -18,7 +18,15 @@ import { demoAccounts, isEmpty, seedDemo } from '../fixtures/seed';
 import { buildClientIfStale } from '../scripts/lib/client-build';
 import { migrate, withOrm } from '../scripts/lib/db';
 import { DEMO, startCluster } from '../scripts/lib/stack';
-import { cookieOf, cpuMs, signIn as signInAt, startProcess as start, stopAll, waitFor } from './lib/app-process';
+import {
+  cookieOf,
+  cpuMs,
+  signIn as signInAt,
+  startApp,
+  startProcess as start,
+  stopAll,
+  waitFor,
+} from './lib/app-process';
 import { load, type LoadResult } from './lib/load';
 import { phoneTimings, type PhoneTiming } from './lib/phone';
 import { formatTrace } from './lib/phone-trace';
@@ -209,31 +217,27 @@ try {
   const appRooms = await makeRooms(CONNECTIONS);
   const floorRooms = await makeRooms(CONNECTIONS);
 
-  const appProcess = start(
-    'server/src/main.ts',
-    {
-      NODE_ENV: 'production',
-      PORT: String(APP_PORT),
-      HOST: '127.0.0.1',
-      APP_ORIGIN: `https://127.0.0.1:${APP_PORT}`,
-      DATABASE_URL: databaseUrl,
-      DB_POOL_MAX: String(POOL_MAX),
-      SESSION_SECRET: randomBytes(32).toString('base64url'),
-      LOG_LEVEL: 'info',
-      // Sign-in is benchmarked: the per-IP and per-account failure limits would otherwise stop it.
-      LOGIN_MAX_PER_IP: '1000000',
-      LOGIN_MAX_PER_ACCOUNT: '1000000',
-      CLIENT_DIST: join(SERVER_DIR, 'dist/client'),
-    },
-    SERVER_DIR,
-    CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${CPU_PROF}`] : [],
-  );
   const floorProcess = start('bench/lib/floor-server.ts', {
     DATABASE_URL: databaseUrl,
     PORT: String(FLOOR_PORT),
     DB_POOL_MAX: String(POOL_MAX),
   });
-  await Promise.all([waitFor(`${APP}/api/health`), waitFor(`${FLOOR}/floor/nothing`)]);
+  const [appProcess] = await Promise.all([
+    startApp({
+      port: APP_PORT,
+      databaseUrl,
+      serverDir: SERVER_DIR,
+      cpuProfDir: CPU_PROF,
+      env: {
+        DB_POOL_MAX: String(POOL_MAX),
+        // Sign-in is benchmarked: the per-IP and per-account failure limits would otherwise stop it.
+        LOGIN_MAX_PER_IP: '1000000',
+        LOGIN_MAX_PER_ACCOUNT: '1000000',
+        CLIENT_DIST: join(SERVER_DIR, 'dist/client'),
+      },
+    }),
+    waitFor(`${FLOOR}/floor/nothing`),
+  ]);
 
   const s = await signInAt(APP, owner.email, owner.password);
   const appHeaders = {

@@ -15,7 +15,7 @@
  * BENCH_DESK_PORT (default 4898) is the server's port, BENCH_DESK_RUNS (default 200) the requests per
  * route; BENCH_SERVER_DIR=<checkout> runs that checkout's server (a before/after in one sitting). The bench job (40 rooms, three options) is deleted when it ends. Informational, never fails.
  */
-import { randomBytes, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import { availableParallelism, loadavg } from 'node:os';
 import { readdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
@@ -40,7 +40,8 @@ import { DEMO_PRICE_BOOK_SETTINGS, demoCompanyData } from '../fixtures/demo-comp
 import { demoAccounts, isEmpty, seedDemo } from '../fixtures/seed';
 import { migrate, withOrm } from '../scripts/lib/db';
 import { DEMO, startCluster } from '../scripts/lib/stack';
-import { cpuMs, signIn, startProcess, stopAll, waitFor } from './lib/app-process';
+import { DESIGN } from '../tests/helpers/sample-job';
+import { cpuMs, signIn, startApp, stopAll } from './lib/app-process';
 import { profileClockUs, summariseProfile } from './lib/profile-summary';
 
 const FRAME_MS = 16;
@@ -80,19 +81,9 @@ const desk: CompanyDesk = companyDeskFromRows(
   DEMO_PRICE_BOOK_SETTINGS,
 );
 const engine = engineData(desk);
-const designConditions = {
-  outdoorCoolingDryBulbF: 94,
-  outdoorCoolingWetBulbF: 75,
-  outdoorHeatingDryBulbF: 15,
-  indoorCoolingF: 75,
-  indoorHeatingF: 70,
-  indoorCoolingRhPercent: 50,
-  dailyRangeF: 22,
-  elevationFt: 800,
-};
 const home = {
   id: 'bench-home',
-  designConditions,
+  designConditions: DESIGN,
   tightness: 'average' as const,
   bedrooms: 6,
   rooms: Array.from({ length: 40 }, (_, i) => room(i)),
@@ -260,7 +251,7 @@ async function benchJob(db: pg.Pool, ownerEmail: string): Promise<{ jobId: strin
        j.postal_code, $2, $3, j.design_sources, 'average', '{"bedrooms": 6}', 1, now(), now(), now()
      from job j join app_user u on u.company_id = j.company_id where u.email = $4 and j.notes not like $5
      order by j.created_at, j.id limit 1 returning company_id`,
-    [jobId, `Bench job (${BENCH_MARK}; deleted when it ends)`, designConditions, ownerEmail, `%bench%`],
+    [jobId, `Bench job (${BENCH_MARK}; deleted when it ends)`, DESIGN, ownerEmail, `%bench%`],
   );
   const companyId = made.rows[0]?.company_id;
   if (!companyId) throw new Error('the demo data has no job to copy');
@@ -333,22 +324,13 @@ async function throughServer(): Promise<Row[]> {
   const db = new pg.Pool({ connectionString: url, max: 2 });
   try {
     const { jobId, companyId, ids } = await benchJob(db, owner.email);
-    const app = startProcess(
-      'server/src/main.ts',
-      {
-        NODE_ENV: 'production',
-        PORT: String(PORT),
-        HOST: '127.0.0.1',
-        APP_ORIGIN: `https://127.0.0.1:${PORT}`,
-        DATABASE_URL: url,
-        SESSION_SECRET: randomBytes(32).toString('base64url'),
-        LOG_LEVEL: 'info',
-        QUEUE_WORKERS: 'off',
-      },
-      SERVER_DIR,
-      CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${CPU_PROF}`] : [],
-    );
-    await waitFor(`${APP}/api/health`);
+    const app = await startApp({
+      port: PORT,
+      databaseUrl: url,
+      serverDir: SERVER_DIR,
+      cpuProfDir: CPU_PROF,
+      env: { QUEUE_WORKERS: 'off' },
+    });
     const s = await signIn(APP, owner.email, owner.password);
     const headers = {
       cookie: s.cookie,

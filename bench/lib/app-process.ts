@@ -1,9 +1,11 @@
 /**
- * The bench's server processes (the real app, the floor): start one under tsx, wait until it answers,
+ * The bench's server processes (the real app, the floor): start one under tsx (the app with its
+ * production settings: `startApp`), wait until it answers,
  * stop them all, sign in to the app, and read a process's CPU time from /proc. Shared by bench/api.ts
  * and bench/desk.ts.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 
 const children: ChildProcess[] = [];
@@ -54,6 +56,37 @@ export async function stopAll(): Promise<void> {
         }),
     ),
   );
+}
+
+/**
+ * The real app (`server/src/main.ts` of `serverDir`) in production mode on 127.0.0.1:`port` with a fresh
+ * session secret, resolved once it answers its health check; under `node --cpu-prof` when `cpuProfDir` is
+ * set. `env` adds to its settings (pool size, rate limits, the queue worker).
+ */
+export async function startApp(o: {
+  port: number;
+  databaseUrl: string;
+  serverDir: string;
+  cpuProfDir: string | null;
+  env?: Record<string, string>;
+}): Promise<ChildProcess> {
+  const app = startProcess(
+    'server/src/main.ts',
+    {
+      NODE_ENV: 'production',
+      PORT: String(o.port),
+      HOST: '127.0.0.1',
+      APP_ORIGIN: `https://127.0.0.1:${o.port}`,
+      DATABASE_URL: o.databaseUrl,
+      SESSION_SECRET: randomBytes(32).toString('base64url'),
+      LOG_LEVEL: 'info',
+      ...o.env,
+    },
+    o.serverDir,
+    o.cpuProfDir ? ['--cpu-prof', `--cpu-prof-dir=${o.cpuProfDir}`] : [],
+  );
+  await waitFor(`http://127.0.0.1:${o.port}/api/health`);
+  return app;
 }
 
 export const cookieOf = (setCookie: string | string[] | undefined | null) =>

@@ -4,20 +4,10 @@ import { expect } from 'vitest';
 import type request from 'supertest';
 import type { Session } from '../helpers/fixtures';
 import { isProblem } from '../helpers/fixtures';
+import { DESIGN, SITE } from '../helpers/sample-job';
 
 /** Shared by the customers, jobs, rooms, photos and loads tests: small builders over the API. */
-export const DESIGN = {
-  outdoorCoolingDryBulbF: 94,
-  outdoorCoolingWetBulbF: 75,
-  outdoorHeatingDryBulbF: 15,
-  indoorCoolingF: 75,
-  indoorHeatingF: 70,
-  indoorCoolingRhPercent: 50,
-  dailyRangeF: 22,
-  elevationFt: 800,
-};
-
-export const SITE = { street: '12 Fennimore Lane', city: 'Quillmere', region: 'Demo State', postalCode: '00042' };
+export { DESIGN, SITE };
 
 export function sampleRoom(name = 'Living room'): Omit<RoomInput, 'id'> {
   return {

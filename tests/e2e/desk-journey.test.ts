@@ -221,6 +221,16 @@ describe('the estimator’s desk to a ready job', () => {
       )
       .toBe('TSL-AH36');
     await page.screenshot({ path: `${SHOTS}/desk-suggested-1440.png`, fullPage: true });
+    // Why these units: the pair's reason opens to the load and capacity it was judged on — the desk's own figures.
+    const why = page.locator('details', { has: page.locator(':scope > summary', { hasText: 'Why these units' }) });
+    await why.locator(':scope > summary').click();
+    const pairWhy = why.locator('details', { has: page.locator(':scope > summary', { hasText: 'Suggested for' }) });
+    await pairWhy.first().locator(':scope > summary').click();
+    await pairWhy.getByText('Cooling load at design').waitFor();
+    await why.screenshot({ path: `${SHOTS}/desk-suggested-why-1440.png` });
+    await page.setViewportSize(PHONE);
+    await why.screenshot({ path: `${SHOTS}/desk-suggested-why-375.png` });
+    await page.setViewportSize(DESKTOP);
     // The suggested ducted pair sets no ducts of its own: the desk names the walk-through's it runs on.
     const suggestedDucts = page
       .getByRole('form', { name: `Design of ${single}` })

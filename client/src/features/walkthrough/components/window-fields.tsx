@@ -3,6 +3,7 @@ import { asNumber, asRecord, asString, getIn } from '../model/draft';
 import { glazingDefaults, glazingOptions, shadingOptions } from '../model/options';
 import type { EditorProps } from './editor-props';
 import { NumberInput, SelectInput } from './field-kit';
+import { OpeningFields } from './opening-fields';
 import { Fold, optionLabel } from './fold';
 
 /** "Window 1: 36 × 48 in, Double, clear ×2", or what is still missing. */
@@ -22,14 +23,11 @@ export function windowSummary(w: Record<string, unknown>, index: number): { text
 }
 
 export function WindowFields({
-  draft,
-  set,
-  err,
-  base,
   index,
   onRemove,
   startOpen,
   hasError,
+  ...opening
 }: EditorProps & {
   base: readonly (string | number)[];
   index: number;
@@ -39,6 +37,7 @@ export function WindowFields({
   /** A field of this window shows an error: it stays open. */
   hasError: boolean;
 }) {
+  const { draft, set, err, base } = opening;
   const p = (k: string) => [...base, k];
   const v = (k: string) => getIn(draft, p(k));
   const glazing = asString(v('glazing'), 'double-clear');
@@ -56,48 +55,11 @@ export function WindowFields({
       <fieldset className="border-t border-line p-3">
         <legend className="sr-only">Window {index + 1}</legend>
         <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-          <NumberInput
-            label="Window width"
-            quantity="in"
-            value={asNumber(v('widthIn'))}
-            onChange={(x) => set(p('widthIn'), x)}
-            error={err(p('widthIn'))}
-          />
-          <NumberInput
-            label="Window height"
-            quantity="in"
-            value={asNumber(v('heightIn'))}
-            onChange={(x) => set(p('heightIn'), x)}
-            error={err(p('heightIn'))}
-          />
-          <NumberInput
-            label="Window area"
-            hint="Instead of width × height"
-            quantity="ft2"
-            value={asNumber(v('areaFt2'))}
-            onChange={(x) => set(p('areaFt2'), x)}
-            error={err(p('areaFt2'))}
-          />
-          <NumberInput
-            label="Window count"
-            integer
-            value={asNumber(v('count'))}
-            onChange={(x) => set(p('count'), x)}
-            error={err(p('count'))}
-          />
-          <SelectInput
-            label="Glazing"
-            value={glazing}
-            options={glazingOptions}
-            onChange={(x) => set(p('glazing'), x)}
-            error={err(p('glazing'))}
-          />
-          <NumberInput
-            label="Window U-factor"
-            value={asNumber(v('uFactor'))}
-            onChange={(x) => set(p('uFactor'), x)}
-            error={err(p('uFactor'))}
-            hint={
+          <OpeningFields
+            {...opening}
+            noun="Window"
+            kind={{ label: 'Glazing', key: 'glazing', value: glazing, options: glazingOptions }}
+            uHint={
               defaults
                 ? `Btu/h·ft²·°F, from the label. Blank uses ${defaults.u} (typical ${defaults.label.toLowerCase()})`
                 : 'Btu/h·ft²·°F, from the label'

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  isDuctedUnit,
   catalogModelSchema,
   computeDesign,
   designCatalogFromModels,
@@ -42,7 +43,7 @@ const ductless = suggestDesign({
 }).design;
 /** A ducted option: suggest's plan on the ranch (the heat pump with its air handler on the home's ducts). */
 const ducted = suggestDesign({ home: ranch, models }).design;
-const ductedKeys = new Set(catalog.indoorUnits.filter((u) => u.unitType === 'ducted-air-handler').map((u) => u.key));
+const ductedKeys = new Set(catalog.indoorUnits.filter(isDuctedUnit).map((u) => u.key));
 const figures = (r: ReturnType<typeof run>) =>
   r.zones.map(
     (z) =>

@@ -20,6 +20,7 @@ const model = (key: string, kind: string, indoorType = ''): DeskModel => ({
   ports: null,
   indoorType,
   heatKitKw: null,
+  matchedKeys: [],
 });
 const models = [model('IN-9', 'indoor', 'wall'), model('OUT-9', 'outdoor-single-zone')];
 const room = (id: string, position: number): RoomRecord =>
@@ -177,5 +178,48 @@ describe('the heat kit’s own circuit (issue 13)', () => {
     fireEvent.change(field, { target: { value: '400' } });
     fireEvent.click(screen.getByRole('button', { name: 'Save design' }));
     expect(await screen.findByText('Panel to air handler must be between 1 and 300 ft')).toBeTruthy();
+  });
+});
+
+describe('a heat kit goes in an air handler (issue 13)', () => {
+  const kit = (key: string, kw: number, fits: string[]) => ({
+    ...model(key, 'heat-kit'),
+    heatKitKw: kw,
+    matchedKeys: fits,
+  });
+  const catalog = [
+    model('AH-36', 'indoor', 'air-handler'),
+    model('SD-12', 'indoor', 'slim-ducted'),
+    model('HP-24', 'outdoor-ducted'),
+    kit('HK-5', 5, ['AH-36', 'AH-60']),
+    kit('HK-10', 10, ['AH-60']),
+  ];
+  const on = (indoorUnitKey: string) =>
+    ({
+      ...option,
+      design: {
+        ...(option.design as object),
+        zones: [{ key: 'zone-1', name: 'Zone 1', roomIds: ['r1', 'r2'], indoorUnitKey }],
+      },
+    }) as unknown as OptionRecord;
+  const show = (o: OptionRecord) =>
+    render(
+      <QueryClientProvider client={createQueryClient()}>
+        <DesignForm jobId="j1" option={o} rooms={rooms} models={catalog} canEdit whys={new Map()} />
+      </QueryClientProvider>,
+    );
+
+  it('an air handler’s system offers the kits listed for that handler only', async () => {
+    show(on('AH-36'));
+    const select = await screen.findByLabelText('Heat kit (backup heat)');
+    const choices = [...select.querySelectorAll('option')].map((o) => o.value);
+    expect(choices).toEqual(['', 'HK-5']);
+  });
+
+  it('a slim ducted head’s system has its ducts but no heat kit to choose', async () => {
+    show(on('SD-12'));
+    await screen.findByLabelText('Where the ducts run');
+    expect(screen.queryByLabelText('Heat kit (backup heat)')).toBeNull();
+    expect(screen.getByText('Ducts', { selector: 'legend' })).toBeTruthy();
   });
 });

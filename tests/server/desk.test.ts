@@ -353,6 +353,17 @@ describe('disconnects beyond a whip and the heat kit’s circuit (issue 13)', ()
     // 2 × 120 ft × 26.0 A × 1.24 Ω/1000 ft (10 AWG, NEC Ch. 9 Table 8, from memory) = 7.74 V = 3.22 % of 240 V.
     expect(ownKit).toMatchObject({ circuitLengthFt: 120, circuitLengthAssumed: null, voltageDropPercent: 3.22 });
     expect(own.body.option.result.systems[0].electrical.circuitLengthFt).toBe(40);
+
+    // A heat kit the catalog lists for another air handler (the 10 kW kit: the 60k handler only) is refused, with
+    // the reason, and holds the ready mark.
+    const otherKit = { ...ducted, systems: [{ ...ducted.systems[0], heatKitKey: 'TSL-HK10' }] };
+    const refused = await patch(estimator, url, own.body.option.version).send({ design: otherKit });
+    expect(refused.status, JSON.stringify(refused.body)).toBe(200);
+    const why = 'is installed in an air handler it is listed for (TSL-AH60): Ducted has none.';
+    expect(refused.body.option.result.systems[0].combination.refusals.join(' ')).toContain(why);
+    const notReady = await post(estimator, `/api/jobs/${job.id}/ready`).send();
+    expectProblem(notReady, 422);
+    expect(JSON.stringify(notReady.body)).toContain(why);
   });
 });
 

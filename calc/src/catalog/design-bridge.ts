@@ -24,7 +24,7 @@ const INDOOR_TYPE: Record<NonNullable<CatalogModel['indoorType']>, IndoorUnit['u
   wall: 'wall-head',
   'ceiling-cassette': 'ceiling-cassette',
   'floor-console': 'floor-console',
-  'slim-ducted': 'ducted-air-handler',
+  'slim-ducted': 'slim-ducted',
   'air-handler': 'ducted-air-handler',
 };
 
@@ -140,6 +140,7 @@ export function heatKitOf(m: CatalogModel): HeatKit | null {
     key: m.key,
     description: m.name,
     kw: m.heatKitKw,
+    ...(m.matchedKeys.length > 0 ? { fitsIndoorKeys: [...m.matchedKeys] } : {}),
     mcaA: Math.max(1, mca),
     mocpA: Math.max(15, m.mocpA ?? mca),
   };
@@ -177,6 +178,7 @@ export const DEFAULT_LABOR_TASK_FOR: Readonly<Record<string, string>> = {
   'labor:mount-indoor:wall-head': 'mount-wall-head',
   'labor:mount-indoor:ceiling-cassette': 'mount-cassette',
   'labor:mount-indoor:floor-console': 'mount-floor-console',
+  'labor:mount-indoor:slim-ducted': 'mount-slim-ducted',
   'labor:mount-indoor:ducted-air-handler': 'mount-air-handler',
   'labor:run-line-set': 'line-set-run',
   'labor:wall-penetration': 'wall-penetration',
@@ -197,6 +199,7 @@ export const DEFAULT_LABOR_HOURS_TASK: Readonly<Record<LaborHoursKey, string>> =
   mountWallHead: 'mount-wall-head',
   mountCassette: 'mount-cassette',
   mountFloorConsole: 'mount-floor-console',
+  mountSlimDucted: 'mount-slim-ducted',
   mountAirHandler: 'mount-air-handler',
   setOutdoorPad: 'set-outdoor-pad',
   setOutdoorBracket: 'set-outdoor-bracket',

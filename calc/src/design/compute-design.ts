@@ -20,6 +20,7 @@ import {
   equipmentCatalogSchema,
   type EquipmentCatalog,
   type EquipmentCatalogInput,
+  isDuctedUnit,
   type IndoorUnit,
   type OutdoorUnit,
 } from '../schemas/equipment';
@@ -125,7 +126,7 @@ function a2lSpace(
   indoor: IndoorUnit,
   load: ZoneLoad,
 ): Omit<CircuitToPlan, 'circuit' | 'indoor'> {
-  if (indoor.unitType === 'ducted-air-handler')
+  if (isDuctedUnit(indoor))
     return {
       roomAreaM2: m2FromFt2({ ft2: load.servedAreaFt2 }),
       space: {
@@ -142,6 +143,37 @@ function a2lSpace(
   return {
     roomAreaM2: m2FromFt2({ ft2: load.headRoomAreaFt2 }),
     space: { basis: 'head-room', roomNames: load.headRoomName === '' ? [] : [load.headRoomName] },
+  };
+}
+
+/**
+ * A heat kit is installed in an air handler its catalog row lists (any air handler when it lists none): a system
+ * without one — wall or slim ducted heads only, or another handler — refuses it with the combination's refusals.
+ */
+function withHeatKitFit(
+  combination: CombinationCheck,
+  kit: HeatKit | undefined,
+  indoor: readonly IndoorUnit[],
+  systemName: string,
+): CombinationCheck {
+  if (!kit) return combination;
+  const fits = indoor.some(
+    (u) =>
+      u.unitType === 'ducted-air-handler' && (kit.fitsIndoorKeys === undefined || kit.fitsIndoorKeys.includes(u.key)),
+  );
+  if (fits) return combination;
+  const listed = kit.fitsIndoorKeys === undefined ? '' : ` it is listed for (${kit.fitsIndoorKeys.join(', ')})`;
+  const refusal = `${kit.key} (${kit.description}) is installed in an air handler${listed}: ${systemName} has none.`;
+  return {
+    ...combination,
+    ok: false,
+    refusals: [...combination.refusals, refusal],
+    warnings: [...combination.warnings, refusal],
+    explanation: {
+      ...combination.explanation,
+      status: 'blocker',
+      verdict: [combination.ok ? '' : (combination.explanation.verdict ?? ''), refusal].filter((x) => x).join(' '),
+    },
   };
 }
 
@@ -308,13 +340,18 @@ export function computeDesignFromParsed({
       policy,
     });
     const p = `${s.key}:`;
-    const combination = checkCombination({ outdoor, indoor: circuits.map((c) => c.indoor) });
-    const refrigerant = refrigerantPlan({ outdoor, circuits, keyPrefix: p });
-    const electrical = electricalPlan({ mcaA: outdoor.mcaA, mocpA: outdoor.mocpA, input: s.electrical, keyPrefix: p });
     const kit =
       s.heatKitKey === undefined
         ? undefined
         : lookup(heatKits, s.heatKitKey, 'UNKNOWN_EQUIPMENT', ['systems', si, 'heatKitKey']);
+    const combination = withHeatKitFit(
+      checkCombination({ outdoor, indoor: circuits.map((c) => c.indoor) }),
+      kit,
+      circuits.map((c) => c.indoor),
+      s.name,
+    );
+    const refrigerant = refrigerantPlan({ outdoor, circuits, keyPrefix: p });
+    const electrical = electricalPlan({ mcaA: outdoor.mcaA, mocpA: outdoor.mocpA, input: s.electrical, keyPrefix: p });
     // The heat kit's circuit runs from the panel to the air handler: its run and its disconnect are the air
     // handler's, not the outdoor unit's. A run not entered is taken as the outdoor unit's, and the plan says so.
     const kitRunFt = s.electrical.heatKitCircuitLengthFt;

@@ -7,7 +7,7 @@ import { apportion } from '../loads/peak-detail';
 import { roundHalfUp } from '../rounding';
 import { ductedRoomIds, roomOnTwoDuctedSystems, type Design, type System } from '../schemas/design';
 import type { DuctLocation } from '../schemas/ducts';
-import type { IndoorUnit } from '../schemas/equipment';
+import { isDuctedUnit, type IndoorUnit } from '../schemas/equipment';
 import type { Home } from '../schemas/home';
 
 type SystemDucts = NonNullable<System['ducts']>;
@@ -160,7 +160,7 @@ export function walkThroughDuctShares({
 /**
  * The loads an option is sized on — the one path from a design to its loads, for the desk (computeDesign) and for
  * suggest, which judges each candidate plan on the loads the desk will show for it: the home of homeForDesign, a zone
- * counting as ducted when its indoor unit is (an air handler or slim ducted head, `ducted-air-handler`). `loads`: the
+ * counting as ducted when its indoor unit is (an air handler or slim ducted head, `isDuctedUnit`). `loads`: the
  * walk-through home's loads when the caller has them (used when the design leaves the home as walked); `loadsOf`: how
  * to work a changed home's loads (a caller trying many designs on one home keeps them; default homeLoadFromParsed).
  */
@@ -181,8 +181,10 @@ export function designLoads({
   readonly systemKeys: readonly string[];
   readonly ductedZone: (zone: Design['zones'][number]) => boolean;
 } {
-  const ductedZone = (z: Design['zones'][number]) =>
-    indoorUnits.get(z.indoorUnitKey)?.unitType === 'ducted-air-handler';
+  const ductedZone = (z: Design['zones'][number]) => {
+    const u = indoorUnits.get(z.indoorUnitKey);
+    return u !== undefined && isDuctedUnit(u);
+  };
   const withDucts = homeForDesign(home, design, ductedZone);
   const worked = withDucts.changed ? withDucts.home : home;
   return {

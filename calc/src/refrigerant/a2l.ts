@@ -54,5 +54,6 @@ export const A2L_INSTALL_HEIGHT_M = {
   'wall-head': 1.8,
   'ceiling-cassette': 2.2,
   'floor-console': 0,
+  'slim-ducted': 0.6,
   'ducted-air-handler': 0.6,
 } as const;

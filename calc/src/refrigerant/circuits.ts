@@ -120,6 +120,7 @@ const UNIT_WORDS: Record<IndoorUnit['unitType'], string> = {
   'wall-head': 'wall head',
   'ceiling-cassette': 'ceiling cassette',
   'floor-console': 'floor console',
+  'slim-ducted': 'slim ducted unit',
   'ducted-air-handler': 'ducted unit',
 };
 

@@ -26,9 +26,18 @@ export const equipmentTypeSchema = z.enum(
   { error: 'Choose an equipment type' },
 );
 export const refrigerantSchema = z.enum(['R-410A', 'R-32', 'R-454B'], { error: 'Choose a refrigerant' });
-export const indoorUnitTypeSchema = z.enum(['wall-head', 'ceiling-cassette', 'floor-console', 'ducted-air-handler'], {
-  error: 'Choose an indoor unit type',
-});
+/**
+ * The indoor unit's kind. A slim ducted head and an air handler both move air through ducts (duct loads, the A2L
+ * space of the rooms they serve) but are mounted differently, and only an air handler takes a heat kit.
+ */
+export const indoorUnitTypeSchema = z.enum(
+  ['wall-head', 'ceiling-cassette', 'floor-console', 'slim-ducted', 'ducted-air-handler'],
+  { error: 'Choose an indoor unit type' },
+);
+
+/** An indoor unit whose air goes through ducts: an air handler or a slim ducted head. */
+export const isDuctedUnit = (unit: { readonly unitType: z.output<typeof indoorUnitTypeSchema> }): boolean =>
+  unit.unitType === 'ducted-air-handler' || unit.unitType === 'slim-ducted';
 export const tubeOdSchema = z.union(
   [
     z.literal(0.25),
@@ -113,6 +122,8 @@ export const heatKitSchema = z.object({
   key: keyField('Heat kit key'),
   description: nameField('Description', 120),
   kw: bounded('Heat kit', 1, 30, 'kW'),
+  /** The air handlers the kit is listed for (the catalog's matched models); absent → any air handler. */
+  fitsIndoorKeys: z.array(keyField('Air handler')).max(20, 'At most 20 air handlers').optional(),
   mcaA: bounded('Minimum circuit ampacity', 1, 150, 'A'),
   mocpA: bounded('Maximum overcurrent protection', 15, 200, 'A'),
 });

@@ -103,12 +103,14 @@ const MOUNT_LABOR: Record<IndoorUnit['unitType'], LaborHoursKey> = {
   'wall-head': 'mountWallHead',
   'ceiling-cassette': 'mountCassette',
   'floor-console': 'mountFloorConsole',
+  'slim-ducted': 'mountSlimDucted',
   'ducted-air-handler': 'mountAirHandler',
 };
 const MOUNT_DESCRIPTION: Record<IndoorUnit['unitType'], string> = {
   'wall-head': 'Mount indoor unit (wall-head)',
   'ceiling-cassette': 'Mount indoor unit (ceiling-cassette)',
   'floor-console': 'Mount indoor unit (floor-console)',
+  'slim-ducted': 'Mount indoor unit (slim ducted)',
   'ducted-air-handler': 'Mount indoor unit (ducted-air-handler)',
 };
 

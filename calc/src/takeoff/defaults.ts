@@ -31,6 +31,8 @@ export const LABOR_HOURS = {
   mountWallHead: 1.5,
   mountCassette: 3,
   mountFloorConsole: 1.5,
+  /** Hang a slim ducted head and connect its duct collars: as an air handler's setting [TRADE, from memory]. */
+  mountSlimDucted: 4,
   mountAirHandler: 4,
   setOutdoorPad: 1,
   setOutdoorBracket: 2,

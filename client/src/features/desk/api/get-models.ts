@@ -17,6 +17,8 @@ export interface DeskModel {
   readonly indoorType: string;
   /** Heat kits: the electric heat, kW. */
   readonly heatKitKw: number | null;
+  /** The models it is matched with (a heat kit: the air handlers it is listed for). */
+  readonly matchedKeys: readonly string[];
 }
 
 const num = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
@@ -41,6 +43,9 @@ export const modelsQueryOptions = () =>
           ports: num(r.record.ports),
           indoorType: str(r.record.indoorType),
           heatKitKw: num(r.record.heatKitKw),
+          matchedKeys: Array.isArray(r.record.matchedKeys)
+            ? r.record.matchedKeys.filter((k): k is string => typeof k === 'string')
+            : [],
         }));
     },
     staleTime: 5 * 60_000,

@@ -204,11 +204,12 @@ function DuctsAndHeat({
   const system = useWatch({ control, name: `systems.${s}` });
   const zones = useWatch({ control, name: 'zones' });
   const served = new Set(system.circuits.map((c) => c.zoneKey));
-  const ductedUnit = zones.some(
-    (z) =>
-      served.has(z.key) &&
-      DUCTED_INDOOR_TYPES.includes(models.find((m) => m.key === z.indoorUnitKey)?.indoorType ?? ''),
-  );
+  const typeOf = (key: string) => models.find((m) => m.key === key)?.indoorType ?? '';
+  const units = zones.filter((z) => served.has(z.key)).map((z) => z.indoorUnitKey);
+  const ductedUnit = units.some((k) => DUCTED_INDOOR_TYPES.includes(typeOf(k)));
+  // A heat kit goes in an air handler: a system of slim ducted heads has ducts but no heat kit to choose.
+  const airHandlers = units.filter((k) => typeOf(k) === 'air-handler');
+  const kitShown = airHandlers.length > 0 || Boolean(system.heatKitKey);
   if (!ductedUnit && !system.ducts && !system.heatKitKey) return null;
   const backup = whys.get(`${system.key}:backup-heat`);
   // A ducted unit with no ducts of its own runs on the walk-through's: calc explains their loads on the system
@@ -226,7 +227,7 @@ function DuctsAndHeat({
     : DUCT_CHOICES;
   return (
     <fieldset className="flex flex-col gap-3 border-l-4 border-line pl-3">
-      <legend className="text-sm font-semibold text-ink-900">Ducts and backup heat</legend>
+      <legend className="text-sm font-semibold text-ink-900">{kitShown ? 'Ducts and backup heat' : 'Ducts'}</legend>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
         <OptionalSelect
           name={`systems.${s}.ducts`}
@@ -275,11 +276,18 @@ function DuctsAndHeat({
         </div>
       ) : null}
       <div className="grid items-start gap-3 lg:grid-cols-2">
-        <OptionalSelect
-          name={`systems.${s}.heatKitKey`}
-          label="Heat kit (backup heat)"
-          options={heatKitOptions(models)}
-        />
+        {kitShown ? (
+          <OptionalSelect
+            name={`systems.${s}.heatKitKey`}
+            label="Heat kit (backup heat)"
+            hint={
+              airHandlers.length === 0
+                ? 'A heat kit is installed in an air handler: this system has none.'
+                : 'The kits listed for this system’s air handler.'
+            }
+            options={heatKitOptions(models, airHandlers, system.heatKitKey)}
+          />
+        ) : null}
         {system.heatKitKey ? (
           <>
             <AmountField

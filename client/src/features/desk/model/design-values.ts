@@ -66,10 +66,20 @@ export const modelOptions = (models: readonly DeskModel[], outdoor: boolean) => 
 /** Indoor units whose air goes through ducts (their system may carry ducts and a heat kit). */
 export const DUCTED_INDOOR_TYPES: readonly string[] = ['slim-ducted', 'air-handler'];
 
-export const heatKitOptions = (models: readonly DeskModel[]) => [
+/**
+ * The heat kits for a system: those listed for one of its air handlers (a kit listing none fits any), and the one
+ * already chosen even when it does not fit, so the server's refusal shows beside it.
+ */
+export const heatKitOptions = (models: readonly DeskModel[], airHandlerKeys: readonly string[], chosen?: string) => [
   { value: '', label: 'No heat kit' },
   ...models
-    .filter((m) => m.kind === 'heat-kit')
+    .filter(
+      (m) =>
+        m.kind === 'heat-kit' &&
+        (m.key === chosen ||
+          (airHandlerKeys.length > 0 &&
+            (m.matchedKeys.length === 0 || m.matchedKeys.some((k) => airHandlerKeys.includes(k))))),
+    )
     .map((m) => ({
       value: m.key,
       label: `${m.key} — ${m.name}${m.heatKitKw === null ? '' : ` (${m.heatKitKw} kW)`}`,

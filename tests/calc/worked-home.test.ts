@@ -87,12 +87,24 @@ const DIFFUSE_RATIO = (() => {
   }
   return s / 2000;
 })();
-/** Solar storage: r_j = ½^(j+1) / (1 − ½^24), a periodic 24-hour convolution (Gaugeline's RTS simplification). */
-const store = (q: number[]) =>
-  q.map((_, h) => {
+/**
+ * Radiant time factors, medium construction, with carpet, 10 % glass, hours 0–23, per cent
+ * [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 18 Table 19 (nonsolar) and Table 20 (solar), as reproduced in
+ * open-source building-energy code (OpenStudio's os_lib_heat_transfer.rb gives the 50 % glass column of the
+ * same class; a Python RTS module gives the whole tables)]. Typed here from the table, not from calc.
+ */
+const NONSOLAR = [46, 18, 10, 6, 4, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0];
+const SOLAR = [52, 16, 8, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0];
+/**
+ * Radiant time series over the repeating design day: cooling load(h) = (1 − f)·q(h) + f·Σ_j r_j·q(h − j), f the
+ * radiant part [PUB: ASHRAE ch. 18 RTS; splits from its Table 14: walls 0.46, roof 0.60, windows 0.33 for SHGC
+ * over 0.5 and 0.46 under, unshaded sun 1.0; MEM: 0.63 for sun behind an interior shade].
+ */
+const rts = (q: number[], f: number, table: number[]) =>
+  q.map((x, h) => {
     let s = 0;
-    for (let j = 0; j < 24; j += 1) s += (0.5 ** (j + 1) / (1 - 0.5 ** 24)) * q[(h - j + 24) % 24]!;
-    return s;
+    for (let j = 0; j < 24; j += 1) s += (table[j]! / 100) * q[(h - j + 24) % 24]!;
+    return (1 - f) * x + f * s;
   });
 /** Sol-air, medium colour: T_e = T_o + 0.225 × E_t (− 7 °F on a horizontal surface) [ASHRAE ch. 18 sol-air]. */
 const wallTe = (dir: Dir) => To.map((t, i) => t + 0.225 * (onWall(dir, i).beam + onWall(dir, i).diffuse));
@@ -133,26 +145,57 @@ const COMPONENTS = [
 ] as const;
 /** Each hour's rounded parts for a hand room. */
 function hand(r: HandRoom) {
-  const solarInstant = To.map((_, i) =>
-    r.windows.reduce((s, w) => {
-      const e = onWall(w.dir, i);
-      return s + w.ft2 * w.shgc * w.iac * (e.beam * shgcRatio(e.cos) + e.diffuse * DIFFUSE_RATIO);
-    }, 0),
+  // Sun through each window: unshaded → beam wholly radiant through the solar factors, diffuse through the
+  // nonsolar ones; behind blinds or drapes → beam + diffuse, 0.63 radiant, nonsolar factors.
+  const solar = r.windows.reduce(
+    (acc, w) => {
+      const k = w.ft2 * w.shgc * w.iac;
+      const beam = To.map((_, i) => k * onWall(w.dir, i).beam * shgcRatio(onWall(w.dir, i).cos));
+      const diffuse = To.map((_, i) => k * onWall(w.dir, i).diffuse * DIFFUSE_RATIO);
+      const load =
+        w.iac < 1
+          ? rts(
+              beam.map((b, i) => b + diffuse[i]!),
+              0.63,
+              NONSOLAR,
+            )
+          : rts(beam, 1, SOLAR).map((b, i) => b + rts(diffuse, 1, NONSOLAR)[i]!);
+      return acc.map((x, i) => x + load[i]!);
+    },
+    To.map(() => 0),
   );
-  const solar = store(solarInstant);
-  const glassUA = r.windows.reduce((s, w) => s + w.ft2 * w.u, 0);
-  return To.map((t, i) => {
-    const walls = r.walls.reduce((s, w) => s + w.u * w.netFt2 * lagged(wallTe(w.dir), 1, 0.98)[i]!, 0);
-    const doors = r.walls.reduce(
-      (s, w) => s + (w.doors ?? []).reduce((d, x) => d + x.u * x.ft2 * lagged(wallTe(w.dir), 1, 0.98)[i]!, 0),
-      0,
+  // Window conduction: U·A·(T_o − 75), radiant 0.33 when SHGC > 0.5, else 0.46
+  const glass = r.windows.reduce(
+    (acc, w) => {
+      const load = rts(
+        To.map((t) => w.u * w.ft2 * (t - 75)),
+        w.shgc > 0.5 ? 0.33 : 0.46,
+        NONSOLAR,
+      );
+      return acc.map((x, i) => x + load[i]!);
+    },
+    To.map(() => 0),
+  );
+  const opaque = (ua: (w: HandRoom['walls'][number]) => number) =>
+    rts(
+      To.map((_, i) => r.walls.reduce((s, w) => s + ua(w) * lagged(wallTe(w.dir), 1, 0.98)[i]!, 0)),
+      0.46,
+      NONSOLAR,
     );
+  const walls = opaque((w) => w.u * w.netFt2);
+  const doors = opaque((w) => (w.doors ?? []).reduce((d, x) => d + x.u * x.ft2, 0));
+  const ceiling = rts(
+    atticDt.map((d) => r.atticUA * d),
+    0.6,
+    NONSOLAR,
+  );
+  return To.map((t, i) => {
     const parts = {
-      walls: round(pos(walls)),
-      windowsConduction: round(pos(glassUA * (t - 75))),
+      walls: round(pos(walls[i]!)),
+      windowsConduction: round(pos(glass[i]!)),
       windowsSolar: round(pos(solar[i]!)),
-      doors: round(pos(doors)),
-      ceiling: round(pos(r.atticUA * atticDt[i]!)),
+      doors: round(pos(doors[i]!)),
+      ceiling: round(pos(ceiling[i]!)),
       infiltration: round(pos(1.08 * r.summerCfm * (t - 75))),
       people: round(r.people),
       appliances: round(r.appliances),

@@ -14,13 +14,17 @@ import {
 } from '../solar/design-day';
 import {
   ATTIC_RESPONSE,
+  DEFAULT_RTS_CONSTRUCTION,
   MASS_RESPONSE,
-  SOLAR_RTS,
+  NONSOLAR_RTS_PERCENT,
+  RADIANT_FRACTION,
+  SOLAR_RTS_PERCENT,
   SOL_AIR_ALPHA_OVER_HO,
   SOL_AIR_HORIZONTAL_LONGWAVE_F,
   SHGC_DIFFUSE_RATIO,
   shgcAngleRatio,
   type MassClass,
+  type RtsConstruction,
 } from './hourly-method';
 
 const RAD = Math.PI / 180;
@@ -36,8 +40,17 @@ export interface FacingSun {
   readonly glassBeam: Float64Array;
   /** Diffuse through glass per unit label SHGC: diffuse × the hemispherical ratio. */
   readonly glassDiffuse: Float64Array;
-  /** glassBeam + glassDiffuse after the solar storage series (what reaches the load each hour per unit A·SHGC·IAC). */
-  readonly stored: Float64Array;
+  /**
+   * Cooling load each hour per unit A·SHGC of unshaded glass (RTS): the beam wholly radiant through the solar
+   * factors plus the diffuse wholly radiant through the nonsolar factors.
+   */
+  readonly solarLoad: Float64Array;
+  /** The diffuse part of `solarLoad` alone (what an overhang leaves untouched). */
+  readonly diffuseLoad: Float64Array;
+  /** Cooling load per unit A·SHGC·IAC behind an interior shade: beam + diffuse, radiant part 0.63, nonsolar factors. */
+  readonly shadedSolarLoad: Float64Array;
+  /** The diffuse part of `shadedSolarLoad` alone. */
+  readonly shadedDiffuseLoad: Float64Array;
   /** tan of the profile angle (for an overhang's shadow); 0 when the sun is not on the wall. */
   readonly profileTan: Float64Array;
 }
@@ -61,20 +74,51 @@ export interface DesignDayContext {
   readonly facing: Readonly<Record<Facing, FacingSun>>;
   /** Total (beam + diffuse) on a horizontal roof each hour, Btu/h·ft². */
   readonly horizontal: Float64Array;
-  /** Equivalent ΔT (°F) each hour for an opaque wall/door of this facing, colour and mass (cached). */
+  /** The construction class whose radiant time factors turn heat gains into cooling loads. */
+  readonly construction: RtsConstruction;
+  /** Solar and nonsolar radiant time factors of that class (fractions, each series sums to 1). */
+  readonly rts: { readonly solar: Float64Array; readonly nonsolar: Float64Array };
+  /** Equivalent ΔT (°F) each hour for an opaque wall/door of this facing, colour and mass (cached): its heat gain. */
   wallDt(facing: Facing, color: SurfaceColor, mass: MassClass): Float64Array;
+  /** The same wall's cooling-load ΔT: radiant part 0.46 through the nonsolar factors (cached). */
+  wallLoadDt(facing: Facing, color: SurfaceColor, mass: MassClass): Float64Array;
+  /** Window conduction cooling-load ΔT: outdoor − indoor, radiant part by the SHGC class, nonsolar factors (cached). */
+  windowLoadDt(shgcOverHalf: boolean): Float64Array;
+  /** Floor (over a garage) cooling-load ΔT per unit of outdoor − indoor: radiant part 0.46 (cached). */
+  readonly floorLoadDt: Float64Array;
   /** Attic air − indoor each hour, °F (cached). */
   atticDt(color: SurfaceColor, radiantBarrier: boolean): Float64Array;
   /** Equivalent ΔT for an insulated roof deck (cathedral ceiling), frame mass (cached). */
   roofDt(color: SurfaceColor): Float64Array;
+  /** Cooling-load ΔT of a ceiling under the attic: attic − indoor, radiant part 0.60 (the roof's), nonsolar factors. */
+  atticLoadDt(color: SurfaceColor, radiantBarrier: boolean): Float64Array;
+  /** Cooling-load ΔT of a roof deck: radiant part 0.60, nonsolar factors (cached). */
+  roofLoadDt(color: SurfaceColor): Float64Array;
 }
 
-/** Periodic convolution with the solar storage series: out[h] = Σ_j r_j · q[h − j]. */
-export function storeSolar(q: ArrayLike<number>, out: Float64Array = new Float64Array(HOURS)): Float64Array {
+/** A column of radiant time factors in per cent as fractions. */
+export function rtsFractions(percent: readonly number[]): Float64Array {
+  const out = new Float64Array(HOURS);
+  for (let j = 0; j < HOURS; j += 1) out[j] = (percent[j] ?? 0) / 100;
+  return out;
+}
+
+/**
+ * Cooling load from a heat gain over the periodic design day by the radiant time series: the convective
+ * part (1 − f)·q(h) at once and the radiant part through the factors, Σ_j r_j · f·q(h − j), the day wrapping
+ * round (hour −1 is hour 23). `out` may not be `q`.
+ */
+export function radiantTimeSeries(
+  q: ArrayLike<number>,
+  radiantFraction: number,
+  factors: ArrayLike<number>,
+  out: Float64Array = new Float64Array(HOURS),
+): Float64Array {
+  const conv = 1 - radiantFraction;
   for (let h = 0; h < HOURS; h += 1) {
     let s = 0;
-    for (let j = 0; j < HOURS; j += 1) s += (SOLAR_RTS[j] ?? 0) * (q[(h - j + HOURS) % HOURS] ?? 0);
-    out[h] = s;
+    for (let j = 0; j < HOURS; j += 1) s += (factors[j] ?? 0) * (q[(h - j + HOURS) % HOURS] ?? 0);
+    out[h] = conv * (q[h] ?? 0) + radiantFraction * s;
   }
   return out;
 }
@@ -95,7 +139,15 @@ function laggedDt(te: Float64Array, indoorF: number, lag: number, decrement: num
  * and the roof, outdoor temperature, and cached sol-air responses. Equations: see
  * solar/design-day.ts (ASHRAE 2013 ch. 14) and hourly-method.ts.
  */
-export function designDayContext(c: DesignConditions): DesignDayContext {
+export function designDayContext(
+  c: DesignConditions,
+  construction: RtsConstruction = DEFAULT_RTS_CONSTRUCTION,
+): DesignDayContext {
+  const rts = {
+    solar: rtsFractions(SOLAR_RTS_PERCENT[construction]),
+    nonsolar: rtsFractions(NONSOLAR_RTS_PERCENT[construction]),
+  };
+  const nonsolarLoad = (q: ArrayLike<number>, f: number): Float64Array => radiantTimeSeries(q, f, rts.nonsolar);
   const latitudeAssumed = c.latitudeDeg === undefined;
   const latitudeDeg = c.latitudeDeg ?? DEFAULT_LATITUDE_DEG;
   // The summer design month by hemisphere when none is entered. [OWN: stated default]
@@ -140,7 +192,6 @@ export function designDayContext(c: DesignConditions): DesignDayContext {
     const profileTan = new Float64Array(HOURS);
     const glassBeam = new Float64Array(HOURS);
     const glassDiffuse = new Float64Array(HOURS);
-    const total = new Float64Array(HOURS);
     for (let h = 0; h < HOURS; h += 1) {
       const s = sun[h];
       if (!s || s.altitudeDeg <= 0) continue;
@@ -157,9 +208,26 @@ export function designDayContext(c: DesignConditions): DesignDayContext {
       const thetaDeg = Math.acos(Math.max(-1, Math.min(1, cosTheta))) / RAD;
       glassBeam[h] = (beam[h] ?? 0) * shgcAngleRatio(thetaDeg);
       glassDiffuse[h] = (diffuse[h] ?? 0) * SHGC_DIFFUSE_RATIO;
-      total[h] = (glassBeam[h] ?? 0) + (glassDiffuse[h] ?? 0);
     }
-    facing[f] = { beam, diffuse, glassBeam, glassDiffuse, stored: storeSolar(total), profileTan };
+    const beamLoad = radiantTimeSeries(glassBeam, RADIANT_FRACTION.sunUnshaded, rts.solar);
+    const diffuseLoad = nonsolarLoad(glassDiffuse, RADIANT_FRACTION.sunUnshaded);
+    const solarLoad = new Float64Array(HOURS);
+    for (let h = 0; h < HOURS; h += 1) solarLoad[h] = (beamLoad[h] ?? 0) + (diffuseLoad[h] ?? 0);
+    const shadedBeam = nonsolarLoad(glassBeam, RADIANT_FRACTION.sunInteriorShade);
+    const shadedDiffuseLoad = nonsolarLoad(glassDiffuse, RADIANT_FRACTION.sunInteriorShade);
+    const shadedSolarLoad = new Float64Array(HOURS);
+    for (let h = 0; h < HOURS; h += 1) shadedSolarLoad[h] = (shadedBeam[h] ?? 0) + (shadedDiffuseLoad[h] ?? 0);
+    facing[f] = {
+      beam,
+      diffuse,
+      glassBeam,
+      glassDiffuse,
+      solarLoad,
+      diffuseLoad,
+      shadedSolarLoad,
+      shadedDiffuseLoad,
+      profileTan,
+    };
   }
 
   const cache = new Map<string, Float64Array>();
@@ -177,7 +245,19 @@ export function designDayContext(c: DesignConditions): DesignDayContext {
     return out;
   };
 
-  return {
+  const cached = (key: string, make: () => Float64Array): Float64Array => {
+    let v = cache.get(key);
+    if (!v) {
+      v = make();
+      cache.set(key, v);
+    }
+    return v;
+  };
+
+  const ctx: DesignDayContext = {
+    construction,
+    rts,
+    floorLoadDt: nonsolarLoad(outdoorDtF, RADIANT_FRACTION.wallsAndFloors),
     latitudeDeg,
     latitudeAssumed,
     month,
@@ -193,40 +273,48 @@ export function designDayContext(c: DesignConditions): DesignDayContext {
     facing,
     horizontal,
     wallDt(f, color, mass) {
-      const key = `w${f}${color}${mass}`;
-      let v = cache.get(key);
-      if (!v) {
+      return cached(`w${f}${color}${mass}`, () => {
         const r = MASS_RESPONSE[mass];
-        v = laggedDt(solAir(facingTotal(f), color, false), indoorF, r.lagHours, r.decrement);
-        cache.set(key, v);
-      }
-      return v;
+        return laggedDt(solAir(facingTotal(f), color, false), indoorF, r.lagHours, r.decrement);
+      });
+    },
+    wallLoadDt(f, color, mass) {
+      return cached(`W${f}${color}${mass}`, () =>
+        nonsolarLoad(ctx.wallDt(f, color, mass), RADIANT_FRACTION.wallsAndFloors),
+      );
+    },
+    windowLoadDt(over) {
+      return cached(`g${over ? 1 : 0}`, () =>
+        nonsolarLoad(outdoorDtF, over ? RADIANT_FRACTION.windowsShgcOverHalf : RADIANT_FRACTION.windowsShgcUnderHalf),
+      );
     },
     atticDt(color, radiantBarrier) {
-      const key = `a${color}${radiantBarrier ? 1 : 0}`;
-      let v = cache.get(key);
-      if (!v) {
+      return cached(`a${color}${radiantBarrier ? 1 : 0}`, () => {
         const te = solAir(horizontal, color, true);
         const k = radiantBarrier ? ATTIC_RESPONSE.radiantBarrier : ATTIC_RESPONSE.vented;
-        v = new Float64Array(HOURS);
+        const v = new Float64Array(HOURS);
         for (let h = 0; h < HOURS; h += 1) {
           const p = (h - ATTIC_RESPONSE.lagHours + HOURS) % HOURS;
           const to = outdoorF[p] ?? 0;
           v[h] = to + k * ((te[p] ?? 0) - to) - indoorF;
         }
-        cache.set(key, v);
-      }
-      return v;
+        return v;
+      });
     },
     roofDt(color) {
-      const key = `r${color}`;
-      let v = cache.get(key);
-      if (!v) {
+      return cached(`r${color}`, () => {
         const r = MASS_RESPONSE.frame;
-        v = laggedDt(solAir(horizontal, color, true), indoorF, r.lagHours, r.decrement);
-        cache.set(key, v);
-      }
-      return v;
+        return laggedDt(solAir(horizontal, color, true), indoorF, r.lagHours, r.decrement);
+      });
+    },
+    atticLoadDt(color, radiantBarrier) {
+      return cached(`A${color}${radiantBarrier ? 1 : 0}`, () =>
+        nonsolarLoad(ctx.atticDt(color, radiantBarrier), RADIANT_FRACTION.roof),
+      );
+    },
+    roofLoadDt(color) {
+      return cached(`R${color}`, () => nonsolarLoad(ctx.roofDt(color), RADIANT_FRACTION.roof));
     },
   };
+  return ctx;
 }

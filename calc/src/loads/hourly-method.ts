@@ -4,25 +4,68 @@
  */
 
 /**
- * Heat storage of transmitted sun (a room's furnishings and floor absorb it and give it to
- * the air over the next hours). Gaugeline simplification of the radiant time series (RTS)
- * method of ASHRAE Handbook—Fundamentals ch. 18 (Spitler, Fisher and Pedersen, "The Radiant Time
- * Series Cooling Load Calculation Procedure", ASHRAE Transactions 103(2), 1997): transmitted solar is
- * taken as wholly radiant and reaches the cooling load through a 24-term periodic series
- * r_j = (1 − p)·p^j, normalised to sum to 1, with p = 0.5 — about half in the hour it arrives.
- * [Assumption (no published source found): the ratio p. The handbook's solar RTS tables were not
- * found in a public copy; its effect on the review ranch is stated in METHOD_ASSUMPTIONS and checked
- * in tests/calc/method-constants.test.ts.]
+ * Heat storage in the room: the radiant time series (RTS) method of ASHRAE Handbook—Fundamentals ch. 18
+ * (Spitler, Fisher and Pedersen, "The Radiant Time Series Cooling Load Calculation Procedure", ASHRAE
+ * Transactions 103(2), 1997). Each hour's heat gain is split into a convective part, which is cooling load
+ * in that hour, and a radiant part, which the room's surfaces and furnishings absorb and give to the air
+ * over the next 24 hours: cooling load Q_c(h) = Σ_j r_j·q_r(h − j), the r_j the radiant time factors. The
+ * design day repeats (a periodic day), so the series wraps round midnight and the day's cooling load adds
+ * up to the day's heat gain. Transmitted beam sun falls on the floor and uses the solar factors; every other
+ * radiant gain (diffuse sun, conduction) is spread over all surfaces and uses the nonsolar factors.
+ *
+ * The factors, in per cent, for each construction class, the columns "with carpet, 10 % glass" (a home's
+ * glass is nearer a tenth of its outside wall than half), hours 0–23:
+ * [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 18, Table 19 "Representative Nonsolar RTS Values for Light to
+ * Heavy Construction" and Table 20 "Representative Solar RTS Values for Light to Heavy Construction", read
+ * 5 Dec 2026 through two public reproductions in open-source building-energy code that agree where they
+ * overlap: OpenStudio's heat-transfer measure library (os_lib_heat_transfer.rb, Alliance for Sustainable
+ * Energy, "from ASHRAE HOF 2013/2021 Chapter 18 Tables 19 and 20, Medium Construction, 50% glass, with
+ * carpet") and a Python RTS module that embeds both whole tables ("ASHRAE Fundamentals 2021, Chapter 18,
+ * Tables 19 and 20"). tests/calc/radiant-time-series.test.ts checks that every column sums to 100.]
  */
-export const SOLAR_RTS_RATIO = 0.5;
-export const SOLAR_RTS: readonly number[] = (() => {
-  const raw: number[] = [];
-  for (let j = 0; j < 24; j += 1) raw.push((1 - SOLAR_RTS_RATIO) * SOLAR_RTS_RATIO ** j);
-  const sum = raw.reduce((a, b) => a + b, 0);
-  return raw.map((r) => r / sum);
-})();
-export const SOLAR_STORAGE_SOURCE =
-  '[OWN simplification of the ASHRAE ch. 18 radiant time series: r_j = ½ · ½^j; the ½ is an assumption, see below]';
+export const RTS_CONSTRUCTIONS = ['light', 'medium', 'heavy'] as const;
+export type RtsConstruction = (typeof RTS_CONSTRUCTIONS)[number];
+/** The construction class when none is chosen. [OWN: the middle of the table, as the issue asks] */
+export const DEFAULT_RTS_CONSTRUCTION: RtsConstruction = 'medium';
+
+export const NONSOLAR_RTS_PERCENT: Readonly<Record<RtsConstruction, readonly number[]>> = {
+  light: [47, 19, 11, 6, 4, 3, 2, 2, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0, 0, 0],
+  medium: [46, 18, 10, 6, 4, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0],
+  heavy: [34, 9, 6, 4, 4, 4, 3, 3, 3, 3, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1],
+};
+export const SOLAR_RTS_PERCENT: Readonly<Record<RtsConstruction, readonly number[]>> = {
+  light: [53, 17, 9, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0, 0, 0, 0],
+  medium: [52, 16, 8, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 0, 0, 0],
+  heavy: [47, 11, 6, 4, 3, 2, 2, 2, 2, 2, 2, 2, 2, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1],
+};
+
+/**
+ * The radiant part of each heat gain (the rest is convective, cooling load at once).
+ * [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 18, Table 14 "Recommended Radiative/Convective Splits for
+ * Internal Heat Gains", read through the same Python reproduction: conduction through walls and floors 0.46,
+ * through the roof 0.60, through windows 0.33 when the SHGC is over 0.5 and 0.46 when under; transmitted sun
+ * with no interior shading 1.0; air leakage and ventilation 0 (all convective).]
+ * [MEM: sun through glass with an interior shade 0.63 radiant (ASHRAE Fundamentals 2001 ch. 29, the
+ * radiative/convective table); later editions send the reader to the shade tables of ch. 15, which were not
+ * found in a public copy. A shade absorbs the beam and gives it off as it would any other gain, so shaded
+ * glass uses the nonsolar factors.]
+ */
+export const RADIANT_FRACTION = {
+  wallsAndFloors: 0.46,
+  roof: 0.6,
+  windowsShgcOverHalf: 0.33,
+  windowsShgcUnderHalf: 0.46,
+  sunUnshaded: 1,
+  sunInteriorShade: 0.63,
+} as const;
+
+/** The radiant part of a window's conduction gain by its SHGC (Table 14: over 0.5 → 0.33, else 0.46). */
+export function windowConductionRadiantFraction(shgc: number): number {
+  return shgc > 0.5 ? RADIANT_FRACTION.windowsShgcOverHalf : RADIANT_FRACTION.windowsShgcUnderHalf;
+}
+
+export const RTS_SOURCE =
+  '[PUB: ASHRAE Handbook—Fundamentals 2021 ch. 18, radiant time series: Tables 19 and 20 representative RTS values, with carpet, 10 % glass; Table 14 radiative/convective splits]';
 
 /**
  * Sol-air temperature: T_e = T_o + (α/h_o)·E_t − ε·ΔR/h_o. α/h_o in h·ft²·°F/Btu: light 0.15,

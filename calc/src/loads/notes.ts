@@ -1,6 +1,6 @@
 import { PEOPLE_SOURCE } from '../construction-defaults';
 import { DAILY_RANGE_SOURCE } from '../solar/design-day';
-import { SOLAR_STORAGE_SOURCE } from './hourly-method';
+import { RTS_SOURCE } from './hourly-method';
 
 /** Plain-word statement of the load method, attached to every room and home result. */
 export const METHOD_NOTES: readonly string[] = [
@@ -8,7 +8,8 @@ export const METHOD_NOTES: readonly string[] = [
   'Cooling is worked out for every hour of the design day (the 21st of the design month, solar time). Each room shows its own peak hour; the whole-home figure is the block load — the hour at which all rooms together peak.',
   `Outdoor temperature each hour: design dry bulb − fraction × daily range ${DAILY_RANGE_SOURCE}.`,
   'Sun position and clear-sky sun: ASHRAE Handbook—Fundamentals 2013 ch. 14 equations and its 2013 clear-sky model with the site’s optical depths τb and τd (or a generic default, labelled as such).',
-  `Sun through glass: area × SHGC × interior shading × (beam on the glass, less an overhang’s shadow, + sky and ground diffuse); the angle of incidence lowers the SHGC as it lowers the solar transmittance of two clear panes — Fresnel reflection at each surface and absorption along the slanted path [PUB: Duffie and Beckman, Solar Engineering of Thermal Processes, ch. 5; glass refractive index 1.525 from Rubin, Solar Energy Materials 12 (1985)]; part of it is stored by the room and reaches the load in later hours ${SOLAR_STORAGE_SOURCE}.`,
+  `Sun through glass: area × SHGC × interior shading × (beam on the glass, less an overhang’s shadow, + sky and ground diffuse); the angle of incidence lowers the SHGC as it lowers the solar transmittance of two clear panes — Fresnel reflection at each surface and absorption along the slanted path [PUB: Duffie and Beckman, Solar Engineering of Thermal Processes, ch. 5; glass refractive index 1.525 from Rubin, Solar Energy Materials 12 (1985)].`,
+  `Heat storage in the room: every heat gain becomes cooling load by the radiant time series of ASHRAE Handbook—Fundamentals ch. 18, for medium construction with carpet and glass a tenth of the outside wall — its convective part at once, its radiant part spread over the next hours of the repeating design day. Sun through glass with no interior shade is all radiant, the beam through the solar factors and the diffuse through the nonsolar ones; behind an interior shade 0.63 of it is radiant [MEM]; walls and floors 0.46, roofs and ceilings 0.60, windows 0.33 (SHGC over 0.5) or 0.46; air leakage and ventilation none ${RTS_SOURCE}.`,
   'Walls, doors and roofs: U × area × sol-air temperature difference (absorptance from the colour), with a time lag and damping for the construction’s mass [PUB: ASHRAE ch. 18 sol-air; lag and damping from the periodic conduction through representative walls with the material properties ORNL published; the walls’ make-up is an assumption, see below]. Attic air from the roof’s sol-air temperature: 0.45 of the way from outdoor air, one hour behind [OWN, checked against attics measured in Florida: FSEC-CR-1220-00], 0.38 with a radiant barrier [PUB: the ratio of two side-by-side vented attics’ peak excess over outdoor air measured with and without a barrier, 36.1 and 42.9 °F: Parker and Sherwin, Comparative Summer Attic Thermal Performance of Six Roof Constructions, Florida Solar Energy Center 1998]; a garage 0.6 of the way from indoor to outdoor [TRADE].',
   'Window conduction: U × area × (outdoor that hour − indoor).',
   'Slab floors lose heat at the exposed edge: F-factor × exposed perimeter × temperature difference [MEM: ASHRAE 90.1/IECC F-factors].',
@@ -23,14 +24,7 @@ export const METHOD_NOTES: readonly string[] = [
 
 /** A constant of the method for which no citable public source was found (issue 9), and what it does to the review ranch. */
 export interface MethodAssumption {
-  readonly key:
-    | 'summer-leakage'
-    | 'wall-mass'
-    | 'solar-storage'
-    | 'daily-range'
-    | 'duct-areas'
-    | 'glass-absorption'
-    | 'basement-floor';
+  readonly key: 'summer-leakage' | 'wall-mass' | 'daily-range' | 'duct-areas' | 'glass-absorption' | 'basement-floor';
   /** The constant and the value used. */
   readonly what: string;
   /** The plausible low and high values tried, as a phrase ("at 0.3 to 0.7"). */
@@ -57,31 +51,25 @@ export const METHOD_ASSUMPTIONS: readonly MethodAssumption[] = [
     key: 'summer-leakage',
     what: 'summer air leakage ½ of the winter rate',
     range: 'at ⅓ to 1 (summer equal to winter)',
-    ranch: { asUsed: 26764, low: 25873, high: 29439 },
-  },
-  {
-    key: 'solar-storage',
-    what: 'solar heat storage ratio ½ (half the sun through glass reaches the load in the hour it arrives)',
-    range: 'at 0.3 to 0.7',
-    ranch: { asUsed: 26764, low: 26956, high: 26117 },
+    ranch: { asUsed: 24980, low: 24089, high: 27655 },
   },
   {
     key: 'wall-mass',
     what: 'the make-up of the two representative walls whose periodic conduction gives the time lag and damping (frame: stucco, R-13, gypsum → 1 h and 0.98; masonry: 8 in concrete, gypsum → 6 h and 0.50)',
     range: 'at no lag or damping to the older recalled 2 h and 0.9 for frame',
-    ranch: { asUsed: 26764, low: 26703, high: 26435 },
+    ranch: { asUsed: 24980, low: 24995, high: 24655 },
   },
   {
     key: 'duct-areas',
     what: 'duct surface 27 % (supply) and 5 % (return) of the floor served when not entered',
     range: 'at a supply 20 % to 35 %',
-    ranch: { variant: 'with R-6 ducts in the attic', asUsed: 42009, low: 40547, high: 43715 },
+    ranch: { variant: 'with R-6 ducts in the attic', asUsed: 39613, low: 38148, high: 41326 },
   },
   {
     key: 'daily-range',
     what: 'the hourly fractions of the daily range (ASHRAE 1997 table, digits recalled)',
     range: 'with the published diurnal curve of Campbell and Norman (1998) instead',
-    ranch: { asUsed: 26764, low: 26727, high: 26727 },
+    ranch: { asUsed: 24980, low: 25027, high: 25027 },
   },
   {
     key: 'glass-absorption',
@@ -89,7 +77,7 @@ export const METHOD_ASSUMPTIONS: readonly MethodAssumption[] = [
     range: 'at 0 to 0.06',
     ranch: null,
     effect:
-      'the angular ratio moves by at most 2 % at any angle, so the example ranch’s block moves by at most about 250 Btu/h (2 % of its 12,311 Btu/h of sun through glass)',
+      'the angular ratio moves by at most 2 % at any angle, so the example ranch’s block moves by at most about 225 Btu/h (2 % of its 11,224 Btu/h of sun through glass)',
   },
   {
     key: 'basement-floor',

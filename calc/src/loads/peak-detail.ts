@@ -3,7 +3,8 @@ import { doorAreaFt2, wallAboveGradeFt2, windowAreaFt2 } from '../geometry';
 import type { Wall } from '../schemas/room';
 
 type CompassDirection = Wall['direction'];
-import { HOURS, storeSolar } from './design-day-context';
+import { HOURS, radiantTimeSeries } from './design-day-context';
+import { RADIANT_FRACTION } from './hourly-method';
 import type { LoadComponents, RoomHourly } from './room-load';
 
 /** One façade of a room at its peak hour, Btu/h; the façades add up to the room's components. */
@@ -96,7 +97,8 @@ const pos = (x: number): number => (x > 0 ? x : 0);
 export function peakDetail(w: RoomHourly, gain: LoadComponents): PeakDetail {
   const { room, ctx } = w;
   const h = w.peakIndex;
-  const dt = ctx.outdoorDtF[h] ?? 0;
+  const glassOver = ctx.windowLoadDt(true)[h] ?? 0;
+  const glassUnder = ctx.windowLoadDt(false)[h] ?? 0;
   const order: CompassDirection[] = [];
   const raw = new Map<
     CompassDirection,
@@ -117,33 +119,39 @@ export function peakDetail(w: RoomHourly, gain: LoadComponents): PeakDetail {
       const a = windowAreaFt2(win);
       openings += a;
       acc.glass += a;
-      acc.cond += (win.uFactor ?? g.u) * a * dt;
-      const k = a * (win.shgc ?? g.shgc) * INTERIOR_SHADING_IAC[win.interiorShading].value;
+      const shgc = win.shgc ?? g.shgc;
+      acc.cond += (win.uFactor ?? g.u) * a * (shgc > 0.5 ? glassOver : glassUnder);
+      const iac = INTERIOR_SHADING_IAC[win.interiorShading].value;
+      const shaded = iac < 1;
+      const k = a * shgc * iac;
       const depth = win.overhangDepthFt ?? 0;
       if (depth > 0) {
         const heightFt = win.heightIn !== undefined ? win.heightIn / 12 : Math.sqrt(a / win.count);
         const gap = win.overhangGapFt ?? 0;
-        const instant = new Float64Array(HOURS);
+        const beam = new Float64Array(HOURS);
         for (let i = 0; i < HOURS; i += 1) {
-          const shade = Math.min(heightFt, pos(depth * (fs.profileTan[i] ?? 0) - gap));
-          const sunlit = heightFt > 0 ? 1 - shade / heightFt : 1;
-          instant[i] = k * ((fs.glassBeam[i] ?? 0) * sunlit + (fs.glassDiffuse[i] ?? 0));
+          const cut = Math.min(heightFt, pos(depth * (fs.profileTan[i] ?? 0) - gap));
+          const sunlit = heightFt > 0 ? 1 - cut / heightFt : 1;
+          beam[i] = k * (fs.glassBeam[i] ?? 0) * sunlit;
         }
-        acc.sun += storeSolar(instant)[h] ?? 0;
-      } else acc.sun += k * (fs.stored[h] ?? 0);
+        const beamLoad = shaded
+          ? radiantTimeSeries(beam, RADIANT_FRACTION.sunInteriorShade, ctx.rts.nonsolar)
+          : radiantTimeSeries(beam, RADIANT_FRACTION.sunUnshaded, ctx.rts.solar);
+        acc.sun += (beamLoad[h] ?? 0) + k * ((shaded ? fs.shadedDiffuseLoad : fs.diffuseLoad)[h] ?? 0);
+      } else acc.sun += k * ((shaded ? fs.shadedSolarLoad : fs.solarLoad)[h] ?? 0);
     }
     for (const d of wall.doors) {
       const a = doorAreaFt2(d);
       openings += a;
       acc.doors +=
-        (d.uFactor ?? DOOR_TYPES[d.doorType].value) * a * (ctx.wallDt(wall.direction, color, 'frame')[h] ?? 0);
+        (d.uFactor ?? DOOR_TYPES[d.doorType].value) * a * (ctx.wallLoadDt(wall.direction, color, 'frame')[h] ?? 0);
     }
     const net = Math.max(0, wallAboveGradeFt2(wall, room.ceilingHeightFt) - openings);
     acc.net += net;
     acc.walls +=
       (wall.uFactor ?? WALL_CONSTRUCTIONS[wall.construction].value) *
       net *
-      (ctx.wallDt(wall.direction, color, massOf(wall.construction))[h] ?? 0);
+      (ctx.wallLoadDt(wall.direction, color, massOf(wall.construction))[h] ?? 0);
   }
   const list = order.map((d) => raw.get(d) ?? { net: 0, glass: 0, walls: 0, doors: 0, cond: 0, sun: 0 });
   const walls = apportion(

@@ -19,8 +19,8 @@ import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
 import { ceilingLoad, exposedWallsLoad, floorLoad } from './envelope';
 import { appliancesLoad, peopleLoad } from './internal';
 import { METHOD_NOTES } from './notes';
-import { designDayContext, HOURS, storeSolar, type DesignDayContext } from './design-day-context';
-import { GARAGE_COOLING_FRACTION, SUMMER_LEAKAGE_FRACTION, type MassClass } from './hourly-method';
+import { designDayContext, HOURS, radiantTimeSeries, type DesignDayContext } from './design-day-context';
+import { GARAGE_COOLING_FRACTION, RADIANT_FRACTION, SUMMER_LEAKAGE_FRACTION, type MassClass } from './hourly-method';
 import { peakDetail, type PeakDetail } from './peak-detail';
 
 /** Load components, Btu/h, each rounded half-up to 1 Btu/h; `total` = sum of the rounded parts. */
@@ -180,6 +180,9 @@ export function exposedEnvelopeFt2(room: Room): number {
 const pos = (x: number): number => (x > 0 ? x : 0);
 /** `roundHalfUp(x)` for a finite x ≥ 0 (the hourly parts), without the argument checks on the hot path. */
 const r0 = (x: number): number => Math.floor(x + 0.5 + x * 1e-12);
+const addInto = (to: Float64Array, from: Float64Array): void => {
+  for (let h = 0; h < HOURS; h += 1) to[h] = (to[h] ?? 0) + (from[h] ?? 0);
+};
 const massOf = (construction: string): MassClass => (construction.startsWith('masonry') ? 'masonry' : 'frame');
 
 /** The room's hourly parts, rounded, in a 24 × K table (row h = hour h + 1). */
@@ -197,20 +200,28 @@ export interface RoomHourly {
 }
 
 /**
- * One room hour by hour (cooling). Each part, each hour, ≥ 0 and rounded half-up:
- * - opaque walls and doors: U·A × the sol-air equivalent ΔT of their facing, colour and mass;
- * - window conduction: U·A × (outdoor(h) − indoor);
- * - sun through glass: A·SHGC·IAC × (beam × angular SHGC ratio × sunlit fraction under the overhang +
- *   diffuse × hemispherical ratio), through the solar storage series;
- * - ceiling: U·A × (attic air − indoor) or the roof's equivalent ΔT; floor over a garage: U·A × 0.6 × ΔT(h);
- * - leakage and ventilation: 1.08 × CFM × ΔT(h) × altitude factor; people and appliances constant.
+ * One room hour by hour (cooling). Each part's heat gain each hour becomes cooling load by the radiant time
+ * series (ASHRAE ch. 18; hourly-method.ts): its convective part at once, its radiant part spread over the
+ * following hours of the periodic design day. Each part, each hour, ≥ 0 and rounded half-up:
+ * - opaque walls and doors: U·A × the sol-air equivalent ΔT of their facing, colour and mass (radiant 0.46);
+ * - window conduction: U·A × (outdoor(h) − indoor) (radiant 0.33 for SHGC over 0.5, else 0.46);
+ * - sun through glass: A·SHGC·IAC × (beam × angular SHGC ratio × sunlit fraction under the overhang, wholly
+ *   radiant through the solar factors, + diffuse × hemispherical ratio, wholly radiant through the nonsolar
+ *   ones); behind an interior shade both 0.63 radiant through the nonsolar factors;
+ * - ceiling: U·A × (attic air − indoor) or the roof's equivalent ΔT (radiant 0.60); floor over a garage:
+ *   U·A × 0.6 × ΔT(h) (radiant 0.46);
+ * - leakage and ventilation: 1.08 × CFM × ΔT(h) × altitude factor (convective); people and appliances
+ *   constant (a steady gain is its own cooling load).
  */
 export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayContext, air: RoomAir): RoomHourly {
   const table = new Float64Array(HOURS * K);
   const hourly = new Float64Array(HOURS);
   const dt = ctx.outdoorDtF;
-  let glassUA = 0;
-  let solarInstant: Float64Array | null = null;
+  let glassUAOver = 0;
+  let glassUAUnder = 0;
+  // Beam gains of glass under an overhang (the shadow moves with the sun), before the radiant time series.
+  let beamOpen: Float64Array | null = null;
+  let beamShaded: Float64Array | null = null;
   const solar = new Float64Array(HOURS);
   // walls and doors accumulate per hour directly
   const walls = new Float64Array(HOURS);
@@ -225,52 +236,59 @@ export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayCo
       const shgc = w.shgc ?? g.shgc;
       const a = windowAreaFt2(w);
       openings += a;
-      glassUA += u * a;
-      const k = a * shgc * INTERIOR_SHADING_IAC[w.interiorShading].value;
+      if (shgc > 0.5) glassUAOver += u * a;
+      else glassUAUnder += u * a;
+      const iac = INTERIOR_SHADING_IAC[w.interiorShading].value;
+      const shade = iac < 1;
+      const k = a * shgc * iac;
       const depth = w.overhangDepthFt ?? 0;
       if (depth > 0) {
         // Shadow of a long horizontal overhang: it falls depth × tan(profile angle) below the overhang;
         // the window's top sits `gap` below it. [PUB: ASHRAE Fundamentals ch. 15 exterior shading, profile angle]
         const heightFt = w.heightIn !== undefined ? w.heightIn / 12 : Math.sqrt(a / w.count);
         const gap = w.overhangGapFt ?? 0;
-        solarInstant ??= new Float64Array(HOURS);
+        const beam = shade ? (beamShaded ??= new Float64Array(HOURS)) : (beamOpen ??= new Float64Array(HOURS));
+        const diffuse = shade ? fs.shadedDiffuseLoad : fs.diffuseLoad;
         for (let h = 0; h < HOURS; h += 1) {
-          const shade = Math.min(heightFt, pos(depth * (fs.profileTan[h] ?? 0) - gap));
-          const sunlit = heightFt > 0 ? 1 - shade / heightFt : 1;
-          solarInstant[h] = (solarInstant[h] ?? 0) + k * ((fs.glassBeam[h] ?? 0) * sunlit + (fs.glassDiffuse[h] ?? 0));
+          const cut = Math.min(heightFt, pos(depth * (fs.profileTan[h] ?? 0) - gap));
+          const sunlit = heightFt > 0 ? 1 - cut / heightFt : 1;
+          beam[h] = (beam[h] ?? 0) + k * (fs.glassBeam[h] ?? 0) * sunlit;
+          solar[h] = (solar[h] ?? 0) + k * (diffuse[h] ?? 0);
         }
       } else {
-        for (let h = 0; h < HOURS; h += 1) solar[h] = (solar[h] ?? 0) + k * (fs.stored[h] ?? 0);
+        const load = shade ? fs.shadedSolarLoad : fs.solarLoad;
+        for (let h = 0; h < HOURS; h += 1) solar[h] = (solar[h] ?? 0) + k * (load[h] ?? 0);
       }
     }
     for (const d of wall.doors) {
       const a = doorAreaFt2(d);
       openings += a;
       const ua = (d.uFactor ?? DOOR_TYPES[d.doorType].value) * a;
-      const edt = ctx.wallDt(wall.direction, color, 'frame');
+      const edt = ctx.wallLoadDt(wall.direction, color, 'frame');
       for (let h = 0; h < HOURS; h += 1) doors[h] = (doors[h] ?? 0) + ua * (edt[h] ?? 0);
     }
     const net = Math.max(0, wallAboveGradeFt2(wall, room.ceilingHeightFt) - openings);
     const ua = (wall.uFactor ?? WALL_CONSTRUCTIONS[wall.construction].value) * net;
-    const edt = ctx.wallDt(wall.direction, color, massOf(wall.construction));
+    const edt = ctx.wallLoadDt(wall.direction, color, massOf(wall.construction));
     for (let h = 0; h < HOURS; h += 1) walls[h] = (walls[h] ?? 0) + ua * (edt[h] ?? 0);
   }
-  if (solarInstant) {
-    const stored = storeSolar(solarInstant);
-    for (let h = 0; h < HOURS; h += 1) solar[h] = (solar[h] ?? 0) + (stored[h] ?? 0);
-  }
+  if (beamOpen) addInto(solar, radiantTimeSeries(beamOpen, RADIANT_FRACTION.sunUnshaded, ctx.rts.solar));
+  if (beamShaded) addInto(solar, radiantTimeSeries(beamShaded, RADIANT_FRACTION.sunInteriorShade, ctx.rts.nonsolar));
+  const glassOver = ctx.windowLoadDt(true);
+  const glassUnder = ctx.windowLoadDt(false);
   const area = floorAreaFt2(room);
   let ceilingUA = 0;
   let ceilingDt: Float64Array | null = null;
   if (room.above.kind === 'attic') {
     ceilingUA = CEILING_INSULATION[room.above.insulation].value * area;
-    ceilingDt = ctx.atticDt(room.above.roofColor ?? 'medium', room.above.radiantBarrier ?? false);
+    ceilingDt = ctx.atticLoadDt(room.above.roofColor ?? 'medium', room.above.radiantBarrier ?? false);
   } else if (room.above.kind === 'roof') {
     ceilingUA = CEILING_INSULATION[room.above.insulation].value * area;
-    ceilingDt = ctx.roofDt(room.above.roofColor ?? 'medium');
+    ceilingDt = ctx.roofLoadDt(room.above.roofColor ?? 'medium');
   }
   const floorUA =
     room.below.kind === 'garage' ? FLOOR_INSULATION[room.below.insulation].value * area * GARAGE_COOLING_FRACTION : 0;
+  const floorDt = ctx.floorLoadDt;
   const af = p.altitudeFactor;
   const infCoef = SENSIBLE_CONSTANT * air.summerCfm * af;
   const ventCoef = SENSIBLE_CONSTANT * air.ventCoolingSensibleCfm * af;
@@ -285,11 +303,11 @@ export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayCo
     const d = dt[h] ?? 0;
     const o = h * K;
     const c0 = r0(pos(walls[h] ?? 0));
-    const c1 = r0(pos(glassUA * d));
+    const c1 = r0(pos(glassUAOver * (glassOver[h] ?? 0) + glassUAUnder * (glassUnder[h] ?? 0)));
     const c2 = r0(pos(solar[h] ?? 0));
     const c3 = r0(pos(doors[h] ?? 0));
     const c4 = ceilingDt ? r0(pos(ceilingUA * (ceilingDt[h] ?? 0))) : 0;
-    const c5 = r0(pos(floorUA * d));
+    const c5 = r0(pos(floorUA * (floorDt[h] ?? 0)));
     const c6 = r0(pos(infCoef * d));
     const c7 = r0(pos(ventCoef * d));
     table[o] = c0;

@@ -129,6 +129,11 @@ describe('the estimator’s desk to a ready job', () => {
     await design.getByRole('button', { name: 'Save design' }).click();
     await saved(design);
     await page.getByText(/^2 of 4 ports used/).waitFor();
+    // Slim ducted heads have ducts (here the walk-through's) but no heat kit: a heat kit goes in an air handler.
+    const slimDucts = system.getByRole('group', { name: 'Ducts', exact: true });
+    await slimDucts.getByLabel('Where the ducts run').waitFor();
+    expect(await system.getByLabel('Heat kit (backup heat)').count()).toBe(0);
+    await slimDucts.screenshot({ path: `${SHOTS}/desk-slim-ducts-1440.png` });
 
     // One line longer: the charge and the price follow.
     const charge = () => page.getByText(/^Total extra charge/).textContent();
@@ -351,6 +356,7 @@ describe('the estimator’s desk to a ready job', () => {
     await page.screenshot({ path: `${SHOTS}/desk-ducted-768.png`, fullPage: true });
     await page.setViewportSize(PHONE);
     await design3.screenshot({ path: `${SHOTS}/desk-ducted-design-375.png` });
+    await kitBlock.screenshot({ path: `${SHOTS}/desk-ducted-results-375.png` });
     await tab(page, single).click();
     await page.screenshot({ path: `${SHOTS}/desk-suggested-375.png`, fullPage: true });
     await page.getByText(/^1 zone on 1 outdoor unit .*open to change$/).click();

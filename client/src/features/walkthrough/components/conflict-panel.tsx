@@ -1,4 +1,4 @@
-import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useQuery, useQueryClient, type UseQueryResult } from '@tanstack/react-query';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Spinner } from '../../../components/ui/spinner';
@@ -29,6 +29,26 @@ export function ConflictPanel({ item, onResolved }: { item: WalkthroughItem; onR
   return <RoomConflict item={item} jobId={edit.jobId} roomId={edit.roomId} onResolved={onResolved} />;
 }
 
+/** The person's answer over `item`, then `onResolved`: keep theirs (drop the waiting edits) or send mine on their version. */
+function useResolve(item: WalkthroughItem, onResolved: () => void) {
+  const queue = useWalkthroughQueue();
+  return {
+    drop: () => void queue.resolveConflict(item.id, 'drop').then(onResolved),
+    send: (payload: WalkthroughItem['payload'], baseVersion: number) =>
+      void queue.resolveConflict(item.id, { payload, baseVersion }).then(onResolved),
+  };
+}
+
+/** While the record as saved now is read; or why it could not be (`what`: "the job"). */
+function NotReadYet({ query, what }: { query: UseQueryResult<unknown>; what: string }) {
+  if (query.isPending) return <Spinner label="Reading the saved version…" />;
+  return (
+    <Alert tone="danger" title={`Could not read ${what} as saved now.`}>
+      {errorMessage(query.error)}
+    </Alert>
+  );
+}
+
 function RoomConflict({
   item,
   jobId,
@@ -40,7 +60,7 @@ function RoomConflict({
   roomId: string;
   onResolved: () => void;
 }) {
-  const queue = useWalkthroughQueue();
+  const { drop, send } = useResolve(item, onResolved);
   const queryClient = useQueryClient();
   const current = useQuery({
     queryKey: [...jobKeys.rooms(jobId), roomId, 'current', item.id],
@@ -60,11 +80,7 @@ function RoomConflict({
     return (
       <Alert tone="danger" title="This room was changed or removed by someone else.">
         <p>{errorMessage(current.error)}</p>
-        <Button
-          className="mt-2"
-          variant="secondary"
-          onClick={() => void queue.resolveConflict(item.id, 'drop').then(onResolved)}
-        >
+        <Button className="mt-2" variant="secondary" onClick={drop}>
           Discard my change
         </Button>
       </Alert>
@@ -76,19 +92,14 @@ function RoomConflict({
       <Alert tone="danger" title={`“${String(theirs.input.name ?? 'This room')}” was changed after you deleted it.`}>
         <p>{changedLine(theirs, deviceLabel())}</p>
         <div className="mt-2 flex flex-wrap gap-2">
-          <Button
-            variant="danger"
-            onClick={() =>
-              void queue.resolveConflict(item.id, { payload: edit, baseVersion: theirs.version }).then(onResolved)
-            }
-          >
+          <Button variant="danger" onClick={() => send(edit, theirs.version)}>
             Delete it anyway
           </Button>
           <Button
             variant="secondary"
             onClick={() => {
               keepTheirs(theirs);
-              void queue.resolveConflict(item.id, 'drop').then(onResolved);
+              drop();
             }}
           >
             Keep the room
@@ -103,11 +114,11 @@ function RoomConflict({
     const keepsMine = Object.values(choices).some((c) => c === 'mine');
     if (!keepsMine) {
       keepTheirs(theirs);
-      void queue.resolveConflict(item.id, 'drop').then(onResolved);
+      drop();
       return;
     }
     const input = { ...mergeChoices(edit.input, theirs.input, choices), id: roomId };
-    void queue.resolveConflict(item.id, { payload: { ...edit, input }, baseVersion: theirs.version }).then(onResolved);
+    send({ ...edit, input }, theirs.version);
   };
   return (
     <ConflictChoices
@@ -122,7 +133,7 @@ function RoomConflict({
 }
 
 function JobConflict({ item, jobId, onResolved }: { item: WalkthroughItem; jobId: string; onResolved: () => void }) {
-  const queue = useWalkthroughQueue();
+  const { drop, send } = useResolve(item, onResolved);
   const queryClient = useQueryClient();
   const current = useQuery({
     queryKey: [...jobKeys.detail(jobId), 'current', item.id],
@@ -131,13 +142,7 @@ function JobConflict({ item, jobId, onResolved }: { item: WalkthroughItem; jobId
   });
   const edit = item.payload;
   if (edit.kind !== 'job-update') return null;
-  if (current.isPending) return <Spinner label="Reading the saved version…" />;
-  if (current.isError)
-    return (
-      <Alert tone="danger" title="Could not read the job as saved now.">
-        {errorMessage(current.error)}
-      </Alert>
-    );
+  if (!current.isSuccess) return <NotReadYet query={current} what="the job" />;
   const theirs: JobRecord = current.data;
   const mine = edit.changes.designConditions ?? {};
   const theirValues = theirs.designConditions ?? {};
@@ -156,7 +161,7 @@ function JobConflict({ item, jobId, onResolved }: { item: WalkthroughItem; jobId
   const handleResolve = (choices: Record<string, Choice>) => {
     queryClient.setQueryData(jobKeys.detail(jobId), theirs);
     if (!Object.values(choices).some((c) => c === 'mine')) {
-      void queue.resolveConflict(item.id, 'drop').then(onResolved);
+      drop();
       return;
     }
     const changes: Record<string, unknown> = { ...edit.changes };
@@ -168,9 +173,7 @@ function JobConflict({ item, jobId, onResolved }: { item: WalkthroughItem; jobId
       }
       changes.designConditions = entered;
     }
-    void queue
-      .resolveConflict(item.id, { payload: { ...edit, changes }, baseVersion: theirs.version })
-      .then(onResolved);
+    send({ ...edit, changes }, theirs.version);
   };
   return (
     <ConflictChoices
@@ -210,7 +213,7 @@ function CustomerConflict({
   customerId: string;
   onResolved: () => void;
 }) {
-  const queue = useWalkthroughQueue();
+  const { drop, send } = useResolve(item, onResolved);
   const queryClient = useQueryClient();
   const options = customerQueryOptions(customerId);
   const current = useQuery({
@@ -220,13 +223,7 @@ function CustomerConflict({
   });
   const edit = item.payload;
   if (edit.kind !== 'customer-update') return null;
-  if (current.isPending) return <Spinner label="Reading the saved version…" />;
-  if (current.isError)
-    return (
-      <Alert tone="danger" title="Could not read the customer as saved now.">
-        {errorMessage(current.error)}
-      </Alert>
-    );
+  if (!current.isSuccess) return <NotReadYet query={current} what="the customer" />;
   const theirs = current.data;
   const mine: Record<string, unknown> = { ...edit.changes };
   const diffs = diffFields(mine, theirs, CUSTOMER_FIELD_LABELS).filter((d) => d.mine !== undefined);
@@ -234,12 +231,10 @@ function CustomerConflict({
     queryClient.setQueryData(options.queryKey, theirs);
     const changes = Object.fromEntries(Object.entries(edit.changes).filter(([k]) => choices[k] === 'mine'));
     if (Object.keys(changes).length === 0) {
-      void queue.resolveConflict(item.id, 'drop').then(onResolved);
+      drop();
       return;
     }
-    void queue
-      .resolveConflict(item.id, { payload: { ...edit, changes }, baseVersion: theirs.version })
-      .then(onResolved);
+    send({ ...edit, changes }, theirs.version);
   };
   return (
     <ConflictChoices

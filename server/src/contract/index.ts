@@ -13,3 +13,4 @@ export * from './desk';
 export * from './api-version';
 export * from './links';
 export * from './device';
+export * from './proposal';

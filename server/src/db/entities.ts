@@ -8,6 +8,7 @@ import { OutgoingMessageSchema } from '../modules/mail/outgoing-message.entity';
 import { PasswordResetTokenSchema } from '../modules/auth/password-reset-token.entity';
 import { RoomSchema } from '../modules/rooms/room.entity';
 import { DesignOptionSchema } from '../modules/desk/option.entity';
+import { ProposalEventSchema, ProposalSchema, ProposalVersionSchema } from '../modules/proposals/proposal.entity';
 import {
   CompanyDataChangeSchema,
   CompanyDataRowSchema,
@@ -29,4 +30,7 @@ export const entities = [
   PriceBookSettingsSchema,
   PasswordResetTokenSchema,
   DesignOptionSchema,
+  ProposalSchema,
+  ProposalVersionSchema,
+  ProposalEventSchema,
 ];

@@ -3,6 +3,7 @@ import { ConflictError, ForbiddenError } from '../../lib/errors';
 import type { ServiceContext } from '../../lib/service-context';
 import type { Storage } from '../../services/storage';
 import { PhotoSchema } from '../photos/photo.entity';
+import { ProposalSchema } from '../proposals/proposal.entity';
 import { RoomSchema } from '../rooms/room.entity';
 import { findJob } from './job-access';
 import { JobSchema } from './job.entity';
@@ -35,6 +36,9 @@ export async function deleteJob(ctx: JobDeleteContext, id: string, version: numb
     assertVersion(version, job.version, 'The job', () => presentJob(job));
     if (!DELETABLE_JOB_STATUSES.includes(job.status)) throw notDeletable(job.status);
     if (!mayDeleteJob({ id: actor.userId, role: actor.role }, job)) throw new ForbiddenError();
+    // An issued proposal is kept forever (its versions are frozen in PostgreSQL), and so is its job.
+    if ((await tx.count(ProposalSchema, { job: job.id, company: actor.companyId })) > 0)
+      throw new ConflictError('A job with an issued proposal cannot be deleted; mark it lost instead.');
     const photos = await tx.find(PhotoSchema, { room: { job: job.id } });
     if (photos.length) await tx.nativeDelete(PhotoSchema, { id: { $in: photos.map((p) => p.id) } });
     await tx.nativeDelete(RoomSchema, { job: job.id });

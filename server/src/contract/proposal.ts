@@ -1,0 +1,260 @@
+import { z } from 'zod';
+
+/**
+ * Proposals (issue 14): the frozen snapshot a version holds, and the records the proposal routes answer
+ * with. The snapshot is built on the server from the saved inputs with calc (modules/proposals) — never
+ * from the browser — and is what the PDF, the customer's page and "what changed" read. Money is integer
+ * cents; loads are Btu/h; lengths are feet; charge is ounces.
+ */
+
+export const PDF_STATES = ['waiting', 'rendering', 'ready', 'failed'] as const;
+export type PdfState = (typeof PDF_STATES)[number];
+
+/** The audit trail's kinds, shown to the office in `seq` order. */
+export const PROPOSAL_EVENT_KINDS = [
+  'issued',
+  'superseded',
+  'sent',
+  'send-failed',
+  'opened',
+  'viewed',
+  'downloaded',
+  'option-chosen',
+  'consented',
+  'signed',
+  'paid',
+  'refunded',
+  'cancelled',
+  'link-revoked',
+  'marked-lost',
+] as const;
+export type ProposalEventKind = (typeof PROPOSAL_EVENT_KINDS)[number];
+
+const text = (max: number) => z.string().max(max);
+const cents = z.number().int();
+const btuh = z.number();
+
+const snapshotCompany = z.object({
+  name: text(160),
+  address: text(400).nullable(),
+  phone: text(40).nullable(),
+  email: text(254).nullable(),
+  licence: text(400).nullable(),
+  /** The logo's storage key at issue time (services/storage), or null without a logo. */
+  logoKey: text(300).nullable(),
+  terms: text(20000),
+  warranty: text(20000),
+  /** State wording the company adds to the right-to-cancel notice (16 CFR 429 allows it), '' when none. */
+  cancellationExtra: text(20000),
+});
+
+const snapshotRoomLoad = z.object({
+  roomId: text(80),
+  name: text(120),
+  floorAreaFt2: z.number(),
+  sensibleBtuh: btuh,
+  latentBtuh: btuh,
+  coolingBtuh: btuh,
+  heatingBtuh: btuh,
+});
+
+const snapshotModel = z.object({
+  /** The model number. */
+  key: text(80),
+  name: text(120),
+  kind: text(40),
+  nominalCoolingBtuh: btuh.nullable(),
+  nominalHeatingBtuh: btuh.nullable(),
+  seer2: z.number().nullable(),
+  eer2: z.number().nullable(),
+  hspf2: z.number().nullable(),
+});
+
+const snapshotLineSet = z.object({
+  zoneKey: text(80),
+  zoneName: text(120),
+  liquid: text(40),
+  suction: text(40),
+  lengthFt: z.number(),
+  installedLengthFt: z.number(),
+  kind: z.enum(['kit', 'field-cut']),
+  extraChargeOz: z.number(),
+});
+
+const snapshotElectrical = z.object({
+  supplyVoltage: z.number(),
+  mcaA: z.number(),
+  mocpA: z.number(),
+  breakerA: z.number().nullable(),
+  wireAwg: z.number().nullable(),
+  circuitLengthFt: z.number(),
+  disconnectA: z.number(),
+});
+
+const snapshotSystem = z.object({
+  key: text(80),
+  name: text(120),
+  outdoor: snapshotModel,
+  zones: z.array(
+    z.object({
+      key: text(80),
+      name: text(120),
+      rooms: z.array(text(120)),
+      indoor: snapshotModel,
+      coolingLoadBtuh: btuh,
+      heatingLoadBtuh: btuh,
+    }),
+  ),
+  refrigerant: text(20),
+  lineSets: z.array(snapshotLineSet),
+  extraChargeOz: z.number(),
+  totalChargeOz: z.number(),
+  electrical: snapshotElectrical,
+  heatKit: snapshotModel.nullable(),
+});
+
+const snapshotLine = z.object({
+  itemKey: text(120),
+  description: text(300),
+  quantity: z.number(),
+  unit: text(20),
+  category: z.enum(['equipment', 'material', 'labor']),
+  /** The line at its sell price, cents (what the customer is charged for it before discount and tax). */
+  sellCents: cents,
+});
+
+const snapshotOption = z.object({
+  position: z.number().int().min(1).max(3),
+  name: text(60),
+  systems: z.array(snapshotSystem),
+  /** What is included, in words (equipment and materials, then labor). */
+  included: z.array(text(300)),
+  takeoff: z.array(snapshotLine),
+  price: z.object({
+    sellCents: cents,
+    discountCents: cents,
+    subtotalCents: cents,
+    taxCents: cents,
+    totalCents: cents,
+    depositCents: cents,
+    balanceCents: cents,
+  }),
+  monthly: z.array(
+    z.object({ name: text(120), aprPercent: z.number(), months: z.number().int(), monthlyPaymentCents: cents }),
+  ),
+});
+
+/** The frozen content of a proposal version (contract between issuing, the PDF, the customer's page and diff). */
+export const proposalSnapshot = z.object({
+  /** Bumped when this shape changes, so old versions can still be read. */
+  schema: z.literal(1),
+  company: snapshotCompany,
+  customer: z.object({ name: text(160), email: text(254).nullable(), phone: text(40).nullable() }),
+  site: z.object({ street: text(200), unit: text(60), city: text(100), region: text(60), postalCode: text(20) }),
+  design: z.object({
+    /** The design conditions as the job holds them (outdoor/indoor temperatures, humidity, latitude …). */
+    conditions: z.record(z.string(), z.unknown()),
+    /** Where each design condition came from (field → source text). */
+    sources: z.record(z.string(), z.unknown()),
+    method: text(2000),
+  }),
+  loads: z.object({
+    rooms: z.array(snapshotRoomLoad),
+    block: z.object({
+      hour: z.number().int(),
+      sensibleBtuh: btuh,
+      latentBtuh: btuh,
+      coolingBtuh: btuh,
+      heatingBtuh: btuh,
+      floorAreaFt2: z.number(),
+    }),
+  }),
+  options: z.array(snapshotOption).min(1).max(3),
+  cautions: z.array(text(2000)),
+  calcVersion: text(40),
+  /** ISO 8601 UTC. */
+  issuedAt: z.string(),
+});
+export type ProposalSnapshot = z.infer<typeof proposalSnapshot>;
+export type SnapshotOption = ProposalSnapshot['options'][number];
+
+/** One version as the office's list shows it (no snapshot: GET …/versions/:n has it). */
+export interface ProposalVersionRecord {
+  readonly number: number;
+  readonly issuedAt: string;
+  readonly issuedBy: { readonly id: string | null; readonly name: string };
+  readonly supersededAt: string | null;
+  readonly current: boolean;
+  readonly snapshotSha256: string;
+  readonly calcVersion: string;
+  readonly pdf: { readonly state: PdfState; readonly sha256: string | null };
+  /** The options' names and totals (cents), for the list. */
+  readonly options: readonly { readonly name: string; readonly totalCents: number }[];
+}
+
+export interface ProposalEventRecord {
+  readonly seq: number;
+  readonly kind: ProposalEventKind;
+  readonly at: string;
+  readonly versionNumber: number | null;
+  readonly by:
+    | { readonly kind: 'staff'; readonly id: string | null; readonly name: string }
+    | { readonly kind: 'customer' }
+    | null;
+  readonly data: Record<string, unknown>;
+}
+
+/** GET /api/jobs/:jobId/proposal. `proposal` is null before the first version is issued. */
+export interface ProposalResponse {
+  readonly jobId: string;
+  /** Whether a version may be issued now, and if not, why (the job is not marked ready …). */
+  readonly canIssue: { readonly ok: true } | { readonly ok: false; readonly reason: string };
+  readonly proposal: {
+    readonly id: string;
+    readonly createdAt: string;
+    readonly versions: readonly ProposalVersionRecord[];
+    readonly events: readonly ProposalEventRecord[];
+  } | null;
+}
+
+/** GET …/versions/:n. */
+export interface ProposalVersionResponse {
+  readonly version: ProposalVersionRecord;
+  readonly snapshot: ProposalSnapshot;
+}
+
+/** GET …/versions/:a/diff/:b: what changed from version a to version b, as plain sentences. */
+export interface ProposalDiffResponse {
+  readonly from: number;
+  readonly to: number;
+  readonly changes: readonly ProposalChange[];
+}
+
+export const CHANGE_AREAS = [
+  'company',
+  'customer',
+  'site',
+  'design',
+  'rooms',
+  'options',
+  'equipment',
+  'line sets',
+  'takeoff',
+  'prices',
+  'terms',
+  'cautions',
+] as const;
+export type ChangeArea = (typeof CHANGE_AREAS)[number];
+
+export interface ProposalChange {
+  readonly area: ChangeArea;
+  /** The leaf's path in the snapshot (dot-separated, array items by their key or name). */
+  readonly path: string;
+  readonly sentence: string;
+}
+
+export const PROPOSAL_MESSAGES = {
+  notReady:
+    'Mark the job ready to propose on the desk first: a proposal is issued only from a job the office has reviewed.',
+  noOptions: 'The job has no priced option to propose.',
+} as const;

@@ -79,6 +79,12 @@ const snapshotLineSet = z.object({
   installedLengthFt: z.number(),
   kind: z.enum(['kit', 'field-cut']),
   extraChargeOz: z.number(),
+  /** Vertical lift between the indoor and outdoor units, ft (calc's circuit `liftFt`). */
+  liftFt: z.number(),
+  /** calc's worked extra-charge formula for this circuit (its explanation's `text`: "65 ft installed − 25 ft pre-charged = …"). */
+  extraChargeText: text(600),
+  /** How the indoor unit drains (the design's circuit: `condensate`, `condensateLengthFt`). */
+  condensate: z.object({ kind: z.enum(['gravity', 'pump']), lengthFt: z.number() }),
 });
 
 const snapshotElectrical = z.object({

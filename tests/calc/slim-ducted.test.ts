@@ -109,5 +109,17 @@ describe('a slim ducted head is not an air handler (issue 13)', () => {
     const right = run(airHandler('TSL-HK5'));
     expect(right.systems[0]?.combination.ok).toBe(true);
     expect(right.blockers.filter((b) => b.kind === 'combination')).toEqual([]);
+    // A kit listed for the ducted outdoor unit goes in that unit's air handler.
+    const kits = (demoCatalog.heatKits ?? []).map((k) =>
+      k.key === 'TSL-HK10' ? { ...k, fitsModelKeys: ['TSL-HP24'] } : k,
+    );
+    const byOutdoor = computeDesign({
+      home,
+      design: airHandler('TSL-HK10'),
+      catalog: { ...demoCatalog, heatKits: kits },
+      priceBook,
+      pricing,
+    });
+    expect(byOutdoor.systems[0]?.combination.ok).toBe(true);
   });
 });

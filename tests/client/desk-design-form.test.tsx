@@ -193,6 +193,8 @@ describe('a heat kit goes in an air handler (issue 13)', () => {
     model('HP-24', 'outdoor-ducted'),
     kit('HK-5', 5, ['AH-36', 'AH-60']),
     kit('HK-10', 10, ['AH-60']),
+    // Listed for the system's outdoor unit (the sample option's OUT-9): its air handler takes it.
+    kit('HK-OUT', 8, ['OUT-9']),
   ];
   const on = (indoorUnitKey: string) =>
     ({
@@ -209,11 +211,11 @@ describe('a heat kit goes in an air handler (issue 13)', () => {
       </QueryClientProvider>,
     );
 
-  it('an air handler’s system offers the kits listed for that handler only', async () => {
+  it('an air handler’s system offers the kits listed for that handler or its outdoor unit only', async () => {
     show(on('AH-36'));
     const select = await screen.findByLabelText('Heat kit (backup heat)');
     const choices = [...select.querySelectorAll('option')].map((o) => o.value);
-    expect(choices).toEqual(['', 'HK-5']);
+    expect(choices).toEqual(['', 'HK-5', 'HK-OUT']);
   });
 
   it('a slim ducted head’s system has its ducts but no heat kit to choose', async () => {

@@ -140,7 +140,7 @@ export function heatKitOf(m: CatalogModel): HeatKit | null {
     key: m.key,
     description: m.name,
     kw: m.heatKitKw,
-    ...(m.matchedKeys.length > 0 ? { fitsIndoorKeys: [...m.matchedKeys] } : {}),
+    ...(m.matchedKeys.length > 0 ? { fitsModelKeys: [...m.matchedKeys] } : {}),
     mcaA: Math.max(1, mca),
     mocpA: Math.max(15, m.mocpA ?? mca),
   };

@@ -154,16 +154,15 @@ function withHeatKitFit(
   combination: CombinationCheck,
   kit: HeatKit | undefined,
   indoor: readonly IndoorUnit[],
+  outdoorKey: string,
   systemName: string,
 ): CombinationCheck {
   if (!kit) return combination;
-  const fits = indoor.some(
-    (u) =>
-      u.unitType === 'ducted-air-handler' && (kit.fitsIndoorKeys === undefined || kit.fitsIndoorKeys.includes(u.key)),
-  );
+  const listed = (key: string) => kit.fitsModelKeys === undefined || kit.fitsModelKeys.includes(key);
+  const fits = indoor.some((u) => u.unitType === 'ducted-air-handler' && (listed(u.key) || listed(outdoorKey)));
   if (fits) return combination;
-  const listed = kit.fitsIndoorKeys === undefined ? '' : ` it is listed for (${kit.fitsIndoorKeys.join(', ')})`;
-  const refusal = `${kit.key} (${kit.description}) is installed in an air handler${listed}: ${systemName} has none.`;
+  const models = kit.fitsModelKeys === undefined ? '' : ` it is listed for (${kit.fitsModelKeys.join(', ')})`;
+  const refusal = `${kit.key} (${kit.description}) is installed in an air handler${models}: ${systemName} has none.`;
   return {
     ...combination,
     ok: false,
@@ -348,6 +347,7 @@ export function computeDesignFromParsed({
       checkCombination({ outdoor, indoor: circuits.map((c) => c.indoor) }),
       kit,
       circuits.map((c) => c.indoor),
+      outdoor.key,
       s.name,
     );
     const refrigerant = refrigerantPlan({ outdoor, circuits, keyPrefix: p });

@@ -122,8 +122,11 @@ export const heatKitSchema = z.object({
   key: keyField('Heat kit key'),
   description: nameField('Description', 120),
   kw: bounded('Heat kit', 1, 30, 'kW'),
-  /** The air handlers the kit is listed for (the catalog's matched models); absent → any air handler. */
-  fitsIndoorKeys: z.array(keyField('Air handler')).max(20, 'At most 20 air handlers').optional(),
+  /**
+   * The models the kit is listed for (the catalog's matched models): air handlers, or a ducted outdoor unit whose
+   * air handler takes it; absent → any air handler.
+   */
+  fitsModelKeys: z.array(keyField('Matched model')).max(20, 'At most 20 matched models').optional(),
   mcaA: bounded('Minimum circuit ampacity', 1, 150, 'A'),
   mocpA: bounded('Maximum overcurrent protection', 15, 200, 'A'),
 });

@@ -285,7 +285,7 @@ function DuctsAndHeat({
                 ? 'A heat kit is installed in an air handler: this system has none.'
                 : 'The kits listed for this system’s air handler.'
             }
-            options={heatKitOptions(models, airHandlers, system.heatKitKey)}
+            options={heatKitOptions(models, airHandlers, system.outdoorUnitKey, system.heatKitKey)}
           />
         ) : null}
         {system.heatKitKey ? (

@@ -67,10 +67,15 @@ export const modelOptions = (models: readonly DeskModel[], outdoor: boolean) => 
 export const DUCTED_INDOOR_TYPES: readonly string[] = ['slim-ducted', 'air-handler'];
 
 /**
- * The heat kits for a system: those listed for one of its air handlers (a kit listing none fits any), and the one
- * already chosen even when it does not fit, so the server's refusal shows beside it.
+ * The heat kits for a system with an air handler: those listed for it or for the system's outdoor unit (a kit listing
+ * none fits any), and the one already chosen even when it does not fit, so the server's refusal shows beside it.
  */
-export const heatKitOptions = (models: readonly DeskModel[], airHandlerKeys: readonly string[], chosen?: string) => [
+export const heatKitOptions = (
+  models: readonly DeskModel[],
+  airHandlerKeys: readonly string[],
+  outdoorKey: string,
+  chosen?: string,
+) => [
   { value: '', label: 'No heat kit' },
   ...models
     .filter(
@@ -78,7 +83,9 @@ export const heatKitOptions = (models: readonly DeskModel[], airHandlerKeys: rea
         m.kind === 'heat-kit' &&
         (m.key === chosen ||
           (airHandlerKeys.length > 0 &&
-            (m.matchedKeys.length === 0 || m.matchedKeys.some((k) => airHandlerKeys.includes(k))))),
+            (m.matchedKeys.length === 0 ||
+              m.matchedKeys.includes(outdoorKey) ||
+              m.matchedKeys.some((k) => airHandlerKeys.includes(k))))),
     )
     .map((m) => ({
       value: m.key,

@@ -56,6 +56,12 @@ export interface TraceSummary {
   readonly byKind: ReadonlyArray<{ readonly kind: string; readonly ms: number }>;
   /** JavaScript self time by original source file until the letter arrived. */
   readonly bySource: ReadonlyArray<{ readonly source: string; readonly ms: number }>;
+  /**
+   * The main thread's CPU in each task that handled a typed letter (its keypress/input events and the
+   * render they ran) from `keysFromMs` on: the letters typed once the page had settled. What a letter waits
+   * for; the work a keystroke leaves for later (a deferred render) is in the tasks after it.
+   */
+  readonly keyTasksMs: readonly number[];
 }
 
 /** An event's CPU time in ms (its wall time where the trace has no thread time). */
@@ -233,7 +239,14 @@ function sourceTimes(samples: readonly Sample[], from: number, to: number): Arra
  */
 export function summariseTrace(
   events: readonly TraceEvent[],
-  opts: { visibleMs: number; typedMs: number; endMs: number; assetsDir?: string; minTaskMs?: number },
+  opts: {
+    visibleMs: number;
+    typedMs: number;
+    endMs: number;
+    keysFromMs?: number;
+    assetsDir?: string;
+    minTaskMs?: number;
+  },
 ): TraceSummary {
   const mainThreads = events.filter(
     (e) => e.ph === 'M' && e.name === 'thread_name' && str(e.args?.name) === 'CrRendererMain',
@@ -252,6 +265,7 @@ export function summariseTrace(
   const typed = at(opts.typedMs);
   const visible = at(opts.visibleMs);
   const minTask = (opts.minTaskMs ?? 50) * 1000;
+  const keysFrom = at(opts.keysFromMs ?? opts.endMs);
   const mapper = new SourceMapper(opts.assetsDir ?? null);
   const samples = samplesOf(events, pid, tid, mapper);
 
@@ -281,7 +295,7 @@ export function summariseTrace(
     if (task.ts < t0) continue;
     if (task.ts < visible) before += cpu(task);
     else if (task.ts < typed) between += cpu(task);
-    else after += cpu(task);
+    else if (task.ts < keysFrom) after += cpu(task);
     // The task's parts: the outermost described events inside it (an event inside a described one is its detail).
     const inside = onThread.filter((e) => e !== task && e.ts >= task.ts && e.ts + (e.dur ?? 0) <= tEnd);
     const parts = new Map<string, number>();
@@ -308,7 +322,20 @@ export function summariseTrace(
       sources: sourceTimes(samples, task.ts, tEnd),
     });
   }
+  const keyTasksMs = top
+    .filter((task) => task.ts >= keysFrom)
+    .filter((task) =>
+      onThread.some(
+        (e) =>
+          e.name === 'EventDispatch' &&
+          str(data(e).type) === 'keypress' &&
+          e.ts >= task.ts &&
+          e.ts < task.ts + (task.dur ?? 0),
+      ),
+    )
+    .map(cpu);
   return {
+    keyTasksMs,
     visibleMs: opts.visibleMs,
     typedMs: opts.typedMs,
     busyBeforeVisibleMs: before,
@@ -321,6 +348,12 @@ export function summariseTrace(
 }
 
 const ms = (n: number) => n.toFixed(0);
+/** The middle value (the mean of the two middle ones for an even count); NaN for none. */
+export function median(xs: readonly number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = Math.floor(s.length / 2);
+  return s.length === 0 ? Number.NaN : s.length % 2 ? (s[m] ?? Number.NaN) : ((s[m - 1] ?? 0) + (s[m] ?? 0)) / 2;
+}
 
 /** The summary as lines for the bench's output: every long task in order, marked before/after the field showed and the letter. */
 export function formatTrace(label: string, s: TraceSummary): string[] {
@@ -335,6 +368,11 @@ export function formatTrace(label: string, s: TraceSummary): string[] {
       .filter((k) => k.ms >= 5)
       .map((k) => `${k.kind} ${ms(k.ms)}`)
       .join(', ')}`,
+    ...(s.keyTasksMs.length
+      ? [
+          `    each letter typed once the page settled: ${s.keyTasksMs.map(ms).join(' / ')} CPU ms in its task (median ${ms(median(s.keyTasksMs))})`,
+        ]
+      : []),
     `    until the letter, JavaScript by source (sampled): ${s.bySource
       .slice(0, 10)
       .map((k) => `${k.source} ${ms(k.ms)}`)

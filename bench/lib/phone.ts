@@ -13,6 +13,9 @@ const NETWORK = {
 const CPU_SLOWDOWN = 4;
 /** With a trace: how long it goes on after the letter arrived, to show what the page kept for later. */
 const AFTER_TYPED_MS = 3000;
+/** With a trace: letters typed one at a time after that, a pause apart, to time a settled keystroke's work. */
+const MORE_KEYS = 'abcdefgh';
+const KEY_PAUSE_MS = 300;
 
 export interface PhoneTiming {
   readonly coldMs: number;
@@ -116,7 +119,15 @@ export async function phoneTimings(
       if (profile) {
         // What the page does next (the work kept until after the first keystroke) is in the trace too.
         await page.waitForTimeout(AFTER_TYPED_MS);
+        // Then more letters, each once the last one's work is done: the room editor's cost per keystroke.
+        const keysFromMs = performance.now() - t0;
+        for (const key of MORE_KEYS) {
+          await field.press(key);
+          await page.waitForTimeout(KEY_PAUSE_MS);
+        }
+        const keysEndMs = performance.now() - t0;
         const raw = await browser.stopTracing();
+        for (let i = 0; i < MORE_KEYS.length; i += 1) await field.press('Backspace');
         // The file's name carries when the field showed and took the letter (ms), for reading it again later.
         if (profile.saveDir)
           writeFileSync(
@@ -130,7 +141,8 @@ export async function phoneTimings(
         traces[label] = summariseTrace(events, {
           visibleMs,
           typedMs: ms,
-          endMs: ms + AFTER_TYPED_MS,
+          endMs: keysEndMs,
+          keysFromMs,
           assetsDir: profile.assetsDir,
         });
       }

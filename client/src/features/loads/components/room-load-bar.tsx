@@ -1,5 +1,5 @@
 import type { Room, Tightness } from '@calc';
-import { useState } from 'react';
+import { memo, useState } from 'react';
 import { engineWaitMessage, useLoadEngine } from './live-engine';
 import type { LiveHomeInputs } from '../model/live-room';
 import { groupedNumber } from '../../../lib/grouped-number';
@@ -18,8 +18,10 @@ interface Props {
  * A phone's view of the room's live loads: one line pinned to the bottom of the screen while the
  * form scrolls (sensible, latent, heat loss), which opens to the figures. Hidden on a wide screen,
  * where the full panel stays beside the form.
+ * Memoised: the room editor hands it the room a beat behind the form (useDeferredValue), so a
+ * keystroke's own render skips it (issue 11).
  */
-export function RoomLoadBar({ room, designConditions, tightness, home }: Props) {
+export const RoomLoadBar = memo(function RoomLoadBar({ room, designConditions, tightness, home }: Props) {
   const [open, setOpen] = useState(false);
   const engine = useLoadEngine({ ...home, designConditions, tightness });
   const parts = engine.status === 'ready' ? engine.engine : null;
@@ -60,4 +62,4 @@ export function RoomLoadBar({ room, designConditions, tightness, home }: Props) 
       </button>
     </aside>
   );
-}
+});

@@ -1,4 +1,5 @@
 import type { PlausibilityWarning, Room, Tightness } from '@calc';
+import { memo } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { engineWaitMessage, useLoadEngine } from './live-engine';
 import { LazyComponentChart } from './lazy-component-chart';
@@ -18,8 +19,10 @@ interface Props {
 /**
  * This room's loads, recomputed in the browser on every change, as the whole home will have them:
  * with its share of the house's leakage, ventilation and default gains, and of the ducts when there are.
+ * Memoised: the room editor hands it the room a beat behind the form (useDeferredValue), so a
+ * keystroke's own render skips it (issue 11).
  */
-export function RoomLoadPanel({ room, warnings, designConditions, tightness, home }: Props) {
+export const RoomLoadPanel = memo(function RoomLoadPanel({ room, warnings, designConditions, tightness, home }: Props) {
   const engine = useLoadEngine({ ...home, designConditions, tightness });
   const parts = engine.status === 'ready' ? engine.engine : null;
   const result = room && parts ? parts.computeLiveRoomLoad(room, home, designConditions, tightness) : null;
@@ -59,4 +62,4 @@ export function RoomLoadPanel({ room, warnings, designConditions, tightness, hom
       ) : null}
     </section>
   );
-}
+});

@@ -1,5 +1,5 @@
-import type { Tightness } from '@calc';
-import { useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import type { PlausibilityWarning, Tightness } from '@calc';
+import { useDeferredValue, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { Button } from '../../../components/ui/button';
 import { RoomLoadBar } from '../../loads/components/room-load-bar';
@@ -34,6 +34,7 @@ interface Props {
 
 /** No other rooms known: the room's loads as a home of its own. */
 const ALONE: LiveHomeInputs = { rooms: [] };
+const NO_WARNINGS: readonly PlausibilityWarning[] = [];
 
 /** One room, saved as it is typed: every valid change goes to the queue after a short pause. */
 export function RoomEditor({ jobId, room, designConditions, tightness, home = ALONE }: Props) {
@@ -46,6 +47,11 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
     id: room.id,
   }));
   const check = useMemo(() => checkRoom(draft), [draft]);
+  // The live loads follow the form a beat behind: a keystroke renders the field at once and the loads
+  // (the engine's recompute, the figures, the chart) in a render of their own right after it, which the
+  // next keystroke may interrupt (issue 11: on a phone at 4× slowdown they were most of each key's work).
+  const loadsCheck = useDeferredValue(check);
+  const loadsRoom = loadsCheck.ok ? loadsCheck.room : null;
   const target = roomTarget(room.id);
   // What was last handed to the debounce: a partial save is not repeated while only refused fields change.
   const queued = useRef<Record<string, unknown> | null>(null);
@@ -210,18 +216,13 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
         </QueryWidgetBoundary>
       </div>
       {/* On a phone the loads stay in sight as one line pinned to the bottom of the screen. */}
-      <RoomLoadBar
-        room={check.ok ? check.room : null}
-        designConditions={designConditions}
-        tightness={tightness}
-        home={home}
-      />
+      <RoomLoadBar room={loadsRoom} designConditions={designConditions} tightness={tightness} home={home} />
       {/* On a wide screen the loads stay in view beside the form while it is filled in. */}
       <aside className="min-w-0 lg:sticky lg:top-36 lg:self-start">
         <QueryWidgetBoundary name="the room loads">
           <RoomLoadPanel
-            room={check.ok ? check.room : null}
-            warnings={check.ok ? check.warnings : []}
+            room={loadsRoom}
+            warnings={loadsCheck.ok ? loadsCheck.warnings : NO_WARNINGS}
             designConditions={designConditions}
             tightness={tightness}
             home={home}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { OptionRecord } from '@contract';
-import { editsOf, withLine } from '../../client/src/features/desk/model/takeoff-edits';
+import { editedValues, editsOf, withLine } from '../../client/src/features/desk/model/takeoff-edits';
 
 const line = { itemKey: 'lineset:sys-1:zone-1', generatedQuantity: 25, generatedUnitCostCents: 4200 };
 
@@ -53,5 +53,17 @@ describe('the desk’s takeoff edits', () => {
     expect(withLine(before, line, { quantity: 25 })).toEqual(others);
     expect(withLine(before, line, { reset: true })).toEqual(others);
     expect(withLine(before, line, { remove: true })).toEqual([...others, { kind: 'remove', itemKey: line.itemKey }]);
+  });
+
+  it('marks a value edited only where it differs from the generated one (the screens show that one beside it)', () => {
+    const generated = { quantity: 25, generatedQuantity: 25, unitCostCents: 4200, generatedUnitCostCents: 4200 };
+    expect(editedValues(generated)).toEqual({ quantity: false, unitCost: false });
+    expect(editedValues({ ...generated, quantity: 30 })).toEqual({ quantity: true, unitCost: false });
+    expect(editedValues({ ...generated, unitCostCents: 3900 })).toEqual({ quantity: false, unitCost: true });
+    // A line the estimator added has nothing generated; a salesperson's lines carry no cost at all.
+    expect(
+      editedValues({ quantity: 2, generatedQuantity: null, unitCostCents: 500, generatedUnitCostCents: null }),
+    ).toEqual({ quantity: false, unitCost: false });
+    expect(editedValues({ quantity: 30, generatedQuantity: 25 })).toEqual({ quantity: true, unitCost: false });
   });
 });

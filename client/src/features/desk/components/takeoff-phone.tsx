@@ -2,6 +2,7 @@ import { formatMoney, formatNumber } from '@calc';
 import type { OptionRecord, TakeoffLineRecord } from '@contract';
 import { Button } from '../../../components/ui/button';
 import type { ExplanationView } from '../model/result-view';
+import { editedValues } from '../model/takeoff-edits';
 import { DeskFold } from './desk-fold';
 import { TakeoffLineEditor } from './takeoff-line-editor';
 import { RuleWords } from './sell-rule';
@@ -53,11 +54,7 @@ function LineCard({
   editing: boolean;
   onEdit: (on: boolean) => void;
 }) {
-  const qtyEdited = l.generatedQuantity !== null && l.generatedQuantity !== l.quantity;
-  const costEdited =
-    l.generatedUnitCostCents !== undefined &&
-    l.generatedUnitCostCents !== null &&
-    l.generatedUnitCostCents !== l.unitCostCents;
+  const edited = editedValues(l);
   return (
     <li className="border-t border-line first:border-t-0">
       <DeskFold
@@ -81,11 +78,13 @@ function LineCard({
       >
         <div className="flex flex-col gap-1 pb-2 pl-6 text-sm">
           <p className="break-words text-muted">{l.derivation}</p>
-          {qtyEdited ? <p className="text-amber-deep">generated {qty(l.generatedQuantity ?? 0, l.unit)}</p> : null}
+          {edited.quantity ? (
+            <p className="text-amber-deep">generated {qty(l.generatedQuantity ?? 0, l.unit)}</p>
+          ) : null}
           {l.unitCostCents !== undefined ? (
             <p className="tabular-nums">
               Unit cost {l.unitCostCents === null ? 'no price' : formatMoney(l.unitCostCents)}
-              {costEdited ? (
+              {edited.unitCost ? (
                 <span className="text-amber-deep"> (generated {formatMoney(l.generatedUnitCostCents ?? 0)})</span>
               ) : null}
               ; cost {formatMoney(l.extendedCostCents ?? 0)}

@@ -4,7 +4,7 @@ import type { OptionRecord, TakeoffLineRecord } from '@contract';
 import { Button } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/api-error';
 import { useRegenerateTakeoff, useSetTakeoffEdits } from '../api/set-takeoff-edits';
-import { editsOf } from '../model/takeoff-edits';
+import { editedValues, editsOf } from '../model/takeoff-edits';
 import type { ExplanationView } from '../model/result-view';
 import { usePhone } from '../../../lib/use-phone';
 import { RuleWords } from './sell-rule';
@@ -117,11 +117,7 @@ export function TakeoffTable({
         </thead>
         <tbody>
           {lines.map((l) => {
-            const qtyEdited = l.generatedQuantity !== null && l.generatedQuantity !== l.quantity;
-            const costEdited =
-              l.generatedUnitCostCents !== undefined &&
-              l.generatedUnitCostCents !== null &&
-              l.generatedUnitCostCents !== l.unitCostCents;
+            const edited = editedValues(l);
             return (
               <tr key={l.itemKey} className="border-b border-line align-top">
                 <th scope="row" className="py-2 pr-3 text-left font-normal">
@@ -131,7 +127,7 @@ export function TakeoffTable({
                 <td className={`${cell} tabular-nums`}>
                   <span className="block text-right">
                     {formatNumber(l.quantity, 2, { trim: true })} {l.unit}
-                    {qtyEdited ? (
+                    {edited.quantity ? (
                       <span className="block text-amber-deep">
                         generated {formatNumber(l.generatedQuantity ?? 0, 2, { trim: true })}
                       </span>
@@ -145,7 +141,7 @@ export function TakeoffTable({
                         {l.unitCostCents === null || l.unitCostCents === undefined
                           ? 'no price'
                           : formatMoney(l.unitCostCents)}
-                        {costEdited ? (
+                        {edited.unitCost ? (
                           <span className="block text-amber-deep">
                             generated {formatMoney(l.generatedUnitCostCents ?? 0)}
                           </span>

@@ -1,4 +1,4 @@
-import { takeoffEditSchema, type OptionRecord, type TakeoffEditInput } from '@contract';
+import { takeoffEditSchema, type OptionRecord, type TakeoffEditInput, type TakeoffLineRecord } from '@contract';
 
 const ADDED = 'added:';
 
@@ -30,6 +30,19 @@ export const editsOf = (option: Pick<OptionRecord, 'takeoffEdits'>): TakeoffEdit
     const i = asInput(e.edit);
     return i ? [i] : [];
   });
+
+/** Which of a line's values differ from what calc generated (the screens show the generated one beside it). */
+export function editedValues(
+  line: Pick<TakeoffLineRecord, 'quantity' | 'generatedQuantity' | 'unitCostCents' | 'generatedUnitCostCents'>,
+): { quantity: boolean; unitCost: boolean } {
+  return {
+    quantity: line.generatedQuantity !== null && line.generatedQuantity !== line.quantity,
+    unitCost:
+      line.generatedUnitCostCents !== undefined &&
+      line.generatedUnitCostCents !== null &&
+      line.generatedUnitCostCents !== line.unitCostCents,
+  };
+}
 
 const about = (e: TakeoffEditInput, itemKey: string) => e.kind !== 'add' && e.itemKey === itemKey;
 

@@ -29,6 +29,7 @@ export * from './src/loads/hourly-method';
 export * from './src/loads/design-day-context';
 export * from './src/loads/envelope';
 export * from './src/loads/internal';
+export * from './src/loads/infiltration';
 export * from './src/loads/notes';
 export * from './src/loads/room-load';
 export * from './src/loads/home-load';

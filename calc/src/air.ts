@@ -52,7 +52,11 @@ export function ventilationCfm62_2({
   return 0.03 * num(floorAreaFt2, 'nonNegative') + 7.5 * (num(bedrooms, 'nonNegativeInteger') + 1);
 }
 
-/** Natural ACH from a blower-door ACH50 result, ACH50 / N with N ≈ 20. [TRADE] */
+/**
+ * Natural ACH from a blower-door ACH50 result, ACH50 / N with N ≈ 20 — an empirical estimate that ignores the
+ * weather [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 16 "Empirical Models": ACH at 50 Pa "divided by a constant
+ * approximately equal to 20 (Sherman 1987)"]. The load method does not use it (infiltration.ts).
+ */
 export function naturalAchFromAch50({ ach50, n = 20 }: { readonly ach50: number; readonly n?: number }): number {
   return num(ach50, 'nonNegative') / num(n, 'positive');
 }

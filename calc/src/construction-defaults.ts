@@ -105,17 +105,38 @@ export const DOOR_TYPES = {
 } as const satisfies Record<string, Sourced<number>>;
 export type DoorTypeKey = keyof typeof DOOR_TYPES;
 
-/** Natural (design) air changes per hour by tightness. */
+/**
+ * Envelope tightness in words, as the walk-through offers it: each word is a row of the residential chapter's
+ * unit-leakage-area table, and `value` is that row's unit leakage area, cm² of effective leakage area per m² of
+ * exposed surface (the load method reads it from UNIT_LEAKAGE_AREA_CM2_PER_M2, loads/infiltration.ts).
+ * [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 17 Table 3 "Unit Leakage Areas", the rows' descriptions shortened]
+ */
 export const INFILTRATION_TIGHTNESS = {
   'very-tight': {
-    value: 0.15,
-    label: 'Very tight (≤ 3 ACH50)',
-    source: '[TRADE/MEM: ASHRAE 1997 ch. 28, Manual J tightness tables: 0.10–0.20]',
+    value: 0.7,
+    label: 'Very tight (sealed by an air-sealing specialist)',
+    source: '[PUB: ASHRAE Fundamentals 2021 ch. 17 Table 3, "tight"]',
   },
-  tight: { value: 0.3, label: 'Tight', source: '[TRADE/MEM: 0.25–0.35]' },
-  average: { value: 0.5, label: 'Average', source: '[TRADE/MEM: ≈ 0.5]' },
-  leaky: { value: 0.85, label: 'Leaky / older', source: '[TRADE/MEM: 0.7–1.0]' },
-  'very-leaky': { value: 1.25, label: 'Very leaky', source: '[TRADE/MEM: 1.0–1.5+]' },
+  tight: {
+    value: 1.4,
+    label: 'Tight (carefully sealed by the builder)',
+    source: '[PUB: ASHRAE Fundamentals 2021 ch. 17 Table 3, "good"]',
+  },
+  average: {
+    value: 2.8,
+    label: 'Average (typical current production house)',
+    source: '[PUB: ASHRAE Fundamentals 2021 ch. 17 Table 3, "average"]',
+  },
+  leaky: {
+    value: 5.6,
+    label: 'Leaky (typical pre-1970 house)',
+    source: '[PUB: ASHRAE Fundamentals 2021 ch. 17 Table 3, "leaky"]',
+  },
+  'very-leaky': {
+    value: 10.4,
+    label: 'Very leaky (old house as built)',
+    source: '[PUB: ASHRAE Fundamentals 2021 ch. 17 Table 3, "very leaky"]',
+  },
 } as const satisfies Record<string, Sourced<number>>;
 export type TightnessKey = keyof typeof INFILTRATION_TIGHTNESS;
 

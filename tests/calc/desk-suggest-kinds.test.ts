@@ -129,11 +129,12 @@ describe('the kind of head suits the zone', () => {
 });
 
 describe('ducted systems and heat kits', () => {
-  // Four large rooms with ducts in the attic and a colder winter (−5 °F) than the worked example.
+  // Four large rooms with ducts in the attic and a colder winter (0 °F) than the worked example (−5 °F until the
+  // leakage by the driving force of ASHRAE Fundamentals ch. 17 raised the heat loss past the catalog's largest kit).
   const ductedHome: HomeInput = {
     ...threeRoomHome,
     rooms: ['a', 'b', 'c', 'd'].map((x) => big(x, `Room ${x}`)),
-    designConditions: { ...threeRoomHome.designConditions, outdoorHeatingDryBulbF: -5 },
+    designConditions: { ...threeRoomHome.designConditions, outdoorHeatingDryBulbF: 0 },
     ducts: { location: 'attic', insulationR: 6, leakage: 'typical' },
   };
   const s = suggestDesign({ home: ductedHome, models });

@@ -208,7 +208,7 @@ describe('zones spread over multi-zone units by capacity, not list order', () =>
     ...threeRoomHome,
     rooms: [
       ...['L1', 'L2', 'L3', 'L4'].map((id) => square(id, 24, 80)),
-      ...['S1', 'S2', 'S3', 'S4'].map((id) => square(id, 15, 32)),
+      ...['S1', 'S2', 'S3', 'S4'].map((id) => square(id, 15, 34)),
     ],
   };
   const zones = home.rooms.map((r) => ({ key: r.id, name: r.name, roomIds: [r.id] }));

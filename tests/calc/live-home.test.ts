@@ -71,13 +71,23 @@ describe('live home (per keystroke) equals the full recompute', () => {
     expect(liveLiving?.sensibleGain.ducts).toBe(full2.rooms.find((r) => r.roomId === 'living')?.sensibleGain.ducts);
     expect(liveLiving?.sensibleGain.ducts).not.toBe(first.rooms.find((r) => r.roomId === 'living')?.sensibleGain.ducts);
 
-    // A longer outside wall: the exposed envelope changes, so every room's share of the leakage does.
-    const home3 = withRoom(
-      home2,
-      edit(wider, { exposedWalls: wider.exposedWalls.map((w) => ({ ...w, lengthFt: 22 })) }),
-    );
+    // A longer outside wall under the tightness: the room's leakage is its own exposed surface × the unit leakage
+    // area (ASHRAE Fundamentals 2021 ch. 17 eq. (9)), so that room alone is redone.
+    const longer = edit(wider, { exposedWalls: wider.exposedWalls.map((w) => ({ ...w, lengthFt: 22 })) });
+    const home3 = withRoom(home2, longer);
     expect(live.load(home3)).toEqual(homeLoadFromParsed(home3));
-    expect(live.lastRecomputed).toBe(ducted.rooms.length);
+    expect(live.lastRecomputed).toBe(1);
+    // With a blower-door figure the house's leakage is shared by exposed surface, so a longer wall moves every
+    // outside room's share.
+    const tested = { ...home3, blowerDoorCfm50: 1500 };
+    expect(live.load(tested)).toEqual(homeLoadFromParsed(tested));
+    const tested2 = withRoom(
+      tested,
+      edit(longer, { exposedWalls: longer.exposedWalls.map((w) => ({ ...w, lengthFt: 24 })) }),
+    );
+    expect(live.load(tested2)).toEqual(homeLoadFromParsed(tested2));
+    const outside = tested2.rooms.filter((r) => r.exposedWalls.length > 0 || r.above.kind !== 'conditioned').length;
+    expect(live.lastRecomputed).toBe(outside);
   });
 
   it('no ducts, then ducts added, then the design conditions changed: always the full figures', () => {

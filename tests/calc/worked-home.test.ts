@@ -7,7 +7,7 @@ import { bedroom, conditions, kitchen, livingRoom, threeRoomHome } from './sampl
  * Site: 95 °F db / 75 °F wb summer, 10 °F winter, indoor 75 °F / 50 % and 70 °F, daily
  * range 20 °F, sea level (altitude factor 1). No latitude entered → 40° N is assumed; design
  * month July → the 21st, day n = 202; no optical depths → the generic τb 0.40, τd 2.30.
- * Tightness "average" → 0.5 ACH in winter, half (0.25) in summer.
+ * Tightness "average": leakage by the driving force of ASHRAE Fundamentals 2021 ch. 17 (see `leakCfm`).
  *   ΔT heating = 70 − 10 = 60 °F.
  *   Grains: indoor 64.650, outdoor 98.456 → Δgr 33.807 (psychrolib-checked, reference 1.3/1.4).
  *   People: 70 W × 3.412141633 = 238.850 Btu/h sensible; 45 W → 153.546 Btu/h latent.
@@ -26,6 +26,20 @@ const FRACTION = [
   0.87, 0.92, 0.96, 0.99, 1.0, 0.98, 0.93, 0.84, 0.71, 0.56, 0.39, 0.23, 0.11, 0.03, 0.0, 0.03, 0.1, 0.21, 0.34, 0.47,
   0.58, 0.68, 0.76, 0.82,
 ];
+/**
+ * Leakage by hand [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 17 eqs. (8)–(10), Table 3 and Table 4]: effective
+ * leakage area A_L = exposed surface (ft² × 0.09290304 m²) × 2.8 cm²/m² ("average"); one storey of 8 ft = 2.4384 m;
+ * IDF = (51 + 0.35 × 2.4384 × 33.33 K)/1000 = 0.079448 L/(s·cm²) in winter (60 °F) and
+ * (25 + 0.38 × 2.4384 × 11.11 K)/1000 = 0.035296 in summer (20 °F); cfm = L/s × 2.11888.
+ */
+const leakCfm = (exposedFt2: number, season: 'winter' | 'summer') => {
+  const aL = exposedFt2 * 0.09290304 * 2.8;
+  const idf = season === 'winter' ? (51 + 0.35 * 2.4384 * (60 / 1.8)) / 1000 : (25 + 0.38 * 2.4384 * (20 / 1.8)) / 1000;
+  return aL * idf * 2.1188799727;
+};
+// Exposed surface (ch. 17 Table 4): living walls 160 + 120 + ceiling 300 = 580 ft²; bedroom 96 + 144 = 240;
+// kitchen wall 80 + its floor over the vented crawl space 120 = 200 (conditioned above)
+const EXPOSED = { living: 580, bed: 240, kitchen: 200 };
 const To = FRACTION.map((f) => 95 - f * 20); // outdoor dry bulb each hour, °F
 
 // Sun at L 40°, n 202 (ASHRAE 2013 ch. 14): δ = 23.45 sin(360 × (202 + 284)/365) = 23.45 × sin 479.34° = 20.44°
@@ -255,21 +269,21 @@ describe('worked example: three-room house, hour by hour', () => {
 
   it('living room alone (S low-e with blinds, W clear glass, steel door, R-38 attic, slab, 3 people, 150 W TV)', () => {
     const r = roomLoad({ room: livingRoom, designConditions: conditions });
-    // Leakage on its own: winter 0.5 × 2,400 / 60 = 20 CFM; summer 10 CFM
-    expect(r.infiltrationHeatingCfm).toBe(20);
-    expect(r.infiltrationCfm).toBe(10);
-    const hours = hand(livingHand(10));
+    // Leakage on its own (580 ft² exposed): winter 25.398 CFM, summer 11.283 CFM
+    expect(r.infiltrationHeatingCfm).toBeCloseTo(leakCfm(EXPOSED.living, 'winter'), 1);
+    expect(r.infiltrationCfm).toBeCloseTo(leakCfm(EXPOSED.living, 'summer'), 1);
+    const hours = hand(livingHand(leakCfm(EXPOSED.living, 'summer')));
     const peak = peakOf(hours);
     expect(r.peakHour).toBe(peak + 1);
     const { total, ...parts } = hours[peak]!;
     expect(r.sensibleGain).toEqual({ ...parts, floor: 0, ventilation: 0, ducts: 0, total });
     expect(r.hourlySensibleBtuh).toEqual(hours.map((h) => h.total));
-    // Latent: 0.68 × 10 × 33.807 = 229.89 → 230; people 3 × 153.546 = 460.64 → 461
-    expect(r.latentGain.infiltration).toBe(230);
+    // Latent: 0.68 × 11.283 × 33.807 = 259.39 → 259; people 3 × 153.546 = 460.64 → 461
+    expect(r.latentGain.infiltration).toBe(259);
     expect(r.latentGain.people).toBe(461);
     // Heating (unchanged method): walls 225 × 0.083 × 60 = 1,120.5 → 1,121; glass (6 + 8.25) × 60 = 855;
     // door 20 × 0.2 × 60 = 240; ceiling 300 × 0.03 × 60 = 540; slab 0.73 × 35 × 60 = 1,533;
-    // leakage 1.08 × 20 × 60 = 1,296 → 5,585; no credit for sun, people or appliances
+    // leakage 1.08 × 25.398 × 60 = 1,645.8 → 1,646 → 5,935; no credit for sun, people or appliances
     expect(r.heatLoss).toEqual({
       walls: 1121,
       windowsConduction: 855,
@@ -277,45 +291,44 @@ describe('worked example: three-room house, hour by hour', () => {
       doors: 240,
       ceiling: 540,
       floor: 1533,
-      infiltration: 1296,
+      infiltration: 1646,
       ventilation: 0,
       people: 0,
       appliances: 0,
       ducts: 0,
-      total: 5585,
+      total: 5935,
     });
   });
 
   it('bedroom alone (N low-e with drapes, R-38 attic, 2 people) and kitchen alone (E low-e, 1,200 Btu/h range)', () => {
     const b = roomLoad({ room: bedroom, designConditions: conditions });
-    // leakage: winter 0.5 × 1,152 / 60 = 9.6 CFM, summer 4.8
-    const bh = hand(bedroomHand(4.8));
+    // leakage (240 ft² exposed): winter 10.510 CFM, summer 4.669
+    const bh = hand(bedroomHand(leakCfm(EXPOSED.bed, 'summer')));
     expect(b.peakHour).toBe(peakOf(bh) + 1);
     expect(b.sensibleGain.total).toBe(bh[peakOf(bh)]!.total);
     expect(b.hourlySensibleBtuh).toEqual(bh.map((h) => h.total));
-    // heating: walls 84 × 0.083 × 60 = 418.32 → 418; glass 216; ceiling 259.2 → 259; slab 0.73 × 12 × 60 = 525.6 → 526; leakage 1.08 × 9.6 × 60 = 622.08 → 622
-    expect(b.heatLoss.total).toBe(418 + 216 + 259 + 526 + 622);
+    // heating: walls 84 × 0.083 × 60 = 418.32 → 418; glass 216; ceiling 259.2 → 259; slab 0.73 × 12 × 60 = 525.6 → 526; leakage 1.08 × 10.510 × 60 = 681.03 → 681
+    expect(b.heatLoss.total).toBe(418 + 216 + 259 + 526 + 681);
     const k = roomLoad({ room: kitchen, designConditions: conditions });
-    const kh = hand(kitchenHand(4)); // 0.5 × 960 / 60 = 8 CFM winter, 4 summer
+    const kh = hand(kitchenHand(leakCfm(EXPOSED.kitchen, 'summer'))); // 200 ft²: 8.758 CFM winter, 3.891 summer
     expect(k.peakHour).toBe(peakOf(kh) + 1);
     expect(k.hourlySensibleBtuh).toEqual(kh.map((h) => h.total));
     // the kitchen's east glass peaks in the morning, the living room's west glass in the afternoon
     expect(k.peakHour).toBeLessThan(12);
-    // heating: walls 70 × 0.083 × 60 = 348.6 → 349; glass 180; crawl floor 120 × 0.047 × 48 = 270.72 → 271; leakage 518.4 → 518
-    expect(k.heatLoss.total).toBe(349 + 180 + 271 + 518);
+    // heating: walls 70 × 0.083 × 60 = 348.6 → 349; glass 180; crawl floor 120 × 0.047 × 48 = 270.72 → 271; leakage 1.08 × 8.758 × 60 = 567.52 → 568
+    expect(k.heatLoss.total).toBe(349 + 180 + 271 + 568);
   });
 
   it('whole home: leakage shared by outside envelope, the block hour, block ≤ sum of room peaks', () => {
     const h = homeLoad({ home: threeRoomHome });
-    // House volume 2,400 + 1,152 + 960 = 4,512 ft³ → winter 0.5 × 4,512 / 60 = 37.6 CFM, summer 18.8
-    expect(h.air.winterCfm).toBe(37.6);
-    expect(h.air.summerCfm).toBe(18.8);
-    // Outside envelope: living 160 + 120 + 300 ceiling = 580; bedroom 96 + 144 = 240; kitchen 80 → 900 ft²
-    const share = { living: 580 / 900, bed: 240 / 900, kitchen: 80 / 900 };
+    // Exposed surface 580 + 240 + 200 = 1,020 ft² → winter 44.666 CFM, summer 19.843; each room's share is its own
+    // exposed surface's leakage (the same unit leakage area and one storey throughout)
+    expect(h.air.winterCfm).toBeCloseTo(leakCfm(1020, 'winter'), 1);
+    expect(h.air.summerCfm).toBeCloseTo(leakCfm(1020, 'summer'), 1);
     const rooms = [
-      hand(livingHand(18.8 * share.living)),
-      hand(bedroomHand(18.8 * share.bed)),
-      hand(kitchenHand(18.8 * share.kitchen)),
+      hand(livingHand(leakCfm(EXPOSED.living, 'summer'))),
+      hand(bedroomHand(leakCfm(EXPOSED.bed, 'summer'))),
+      hand(kitchenHand(leakCfm(EXPOSED.kitchen, 'summer'))),
     ];
     const house = To.map((_, i) => rooms.reduce((s, r) => s + r[i]!.total, 0));
     const blockIndex = house.indexOf(Math.max(...house));
@@ -324,11 +337,10 @@ describe('worked example: three-room house, hour by hour', () => {
     const peaks = rooms.reduce((s, r) => s + r[peakOf(r)]!.total, 0);
     expect(h.block.sumOfRoomPeaksSensibleBtuh).toBe(peaks);
     expect(h.totals.sensibleBtuh).toBeLessThan(peaks); // the rooms peak at different hours
-    // Heating leakage: 1.08 × 37.6 × 60 = 2,436.5 in all, by envelope: living 24.231 CFM → 1,570.1 → 1,570,
-    // bedroom 10.027 → 649.7 → 650, kitchen 3.342 → 216.6 → 217
-    expect(h.rooms.map((r) => r.heatLoss.infiltration)).toEqual([1570, 650, 217]);
-    // Latent: leakage 0.68 × 18.8 × 33.807 = 432.2 (split 278 + 115 + 39 after rounding) + people 461 + 307 = 1,200
-    expect(h.totals.latentBtuh).toBe(278 + 115 + 39 + 461 + 307);
+    // Heating leakage: living 1.08 × 25.398 × 60 = 1,645.8 → 1,646; bedroom 681.03 → 681; kitchen 567.52 → 568
+    expect(h.rooms.map((r) => r.heatLoss.infiltration)).toEqual([1646, 681, 568]);
+    // Latent: leakage 0.68 × CFM × 33.807: 259.39 → 259, 107.34 → 107, 89.45 → 89; + people 461 + 307
+    expect(h.totals.latentBtuh).toBe(259 + 107 + 89 + 461 + 307);
     expect(h.totals.coolingBtuh).toBe(h.totals.sensibleBtuh + h.totals.latentBtuh);
     expect(h.psychrometrics.deltaGrains).toBeCloseTo(33.81, 2);
     expect(h.psychrometrics.indoorDewPointF).toBeCloseTo(55.12, 1);

@@ -81,10 +81,14 @@ describe('loads page', () => {
     expect(within(totals).getByText('Estimate')).toBeInTheDocument();
     expect(screen.getByRole('article', { name: 'Loads for Bedroom 2' })).toBeInTheDocument();
     expect(screen.getByText('How these numbers are worked out')).toBeInTheDocument();
-    // The method states each figure with no published source, with what it does to the example ranch
-    const assumptions = screen.getByRole('list', { name: 'Figures with no published source', hidden: true });
+    // The method states each assumption (no published source, or an input not recorded), with what it does to the
+    // example ranch; what issue 9 sourced has left the list and is named in the method with its publication
+    const assumptions = screen.getByRole('list', { name: 'Assumptions the method makes', hidden: true });
     for (const a of METHOD_ASSUMPTIONS) expect(assumptions).toHaveTextContent(methodAssumptionText(a));
-    expect(assumptions).toHaveTextContent('summer air leakage ½ of the winter rate');
+    expect(assumptions).toHaveTextContent('no open flue');
+    expect(assumptions).not.toHaveTextContent(/summer air leakage|duct surface/);
+    const method = screen.getByText(/^Air leakage, both seasons from one effective leakage area/);
+    expect(method).toHaveTextContent('ASHRAE Handbook—Fundamentals 2021 ch. 17');
     expect(document.body.textContent).not.toMatch(/Checked against server|Checking against the server/);
   });
 

@@ -147,8 +147,10 @@ describe('what the desk keeps is never stale and never another company’s', () 
         input: { ...sampleRoom('Living room'), lengthFt: 26 },
       }),
     );
+    // A room upstairs: the house's stack height doubles, so every room's air leakage (ASHRAE Fundamentals 2021
+    // ch. 17 eq. (10)) and the option's loads move, though the new room is in no zone.
     await changed('a room added', () =>
-      post(estimatorA, `/api/jobs/${job.id}/rooms`).send({ input: sampleRoom('Den') }),
+      post(estimatorA, `/api/jobs/${job.id}/rooms`).send({ input: { ...sampleRoom('Den'), floorLevel: 2 } }),
     );
     const j = (await estimatorA.agent.get(`/api/jobs/${job.id}`)).body.job as { version: number };
     await changed("the home's tightness", () =>

@@ -154,8 +154,15 @@ describe('GET /api/jobs/:id/loads', () => {
     expect(saved.body.job.house).toEqual(house);
     const r = await sales.agent.get(`/api/jobs/${job.id}/loads`);
     expect(r.status, JSON.stringify(r.body)).toBe(200);
-    // 62.2: 0.03 × 200 + 7.5 × (3 + 1) = 36 cfm [MEM: ASHRAE 62.2]; blower door 900 × 60 / 1,600 ft³ / 20 = 1.6875 ACH
-    expect(r.body.loads.air).toMatchObject({ ventilationKind: 'balanced', ventilationCfm: 36, winterAch: 1.688 });
+    // 62.2: 0.03 × 200 + 7.5 × (3 + 1) = 36 cfm [MEM: ASHRAE 62.2]; blower door 900 CFM50 = 0.42475 m³/s at 50 Pa,
+    // c = 0.42475 / 50^0.65 = 0.033403, A_L = 10,000 × c × 4^0.65 × √(1.2/8) = 318.6 cm² = 49.4 in² [PUB: ASHRAE
+    // Fundamentals 2021 ch. 16 eqs. (40)–(41), n 0.65]
+    expect(r.body.loads.air).toMatchObject({
+      ventilationKind: 'balanced',
+      ventilationCfm: 36,
+      leakageBasis: 'blower-door',
+      leakageAreaIn2: 49.4,
+    });
     expect(r.body.house).toEqual(house);
     // Refused whole, nothing changed: out of bounds, an unknown key, an unknown system
     for (const bad of [{ bedrooms: 25 }, { bedrooms: 2, pets: 1 }, { ventilation: { kind: 'window' } }]) {

@@ -43,12 +43,28 @@ export const DUCT_METHOD_SOURCE =
   'Design delivery effectiveness after ANSI/ASHRAE Standard 152: the steady energy balance of the duct loop, re-derived and checked by marching the air through each duct';
 
 /**
- * Default duct surface areas as fractions of the floor area served, one-storey house, one return.
- * [Assumption (no published source found): supply 27 %, return 5 %, recalled as Standard 152's defaults;
- * their effect on the review ranch with R-6 attic ducts is stated in METHOD_ASSUMPTIONS and checked in
- * tests/calc/method-constants.test.ts. Enter the measured areas where known.]
+ * Default duct surface areas outside the conditioned space, as fractions of the floor area served: supply
+ * 0.27·F_out, return b_r·F_out with b_r = 0.05 per return register (at most 0.25), F_out = 1 for a one-storey
+ * house and 0.75 for two or more storeys (the rest of the ducts, 1 − F_out, run inside the conditioned space and
+ * lose nothing). [PUB: ANSI/ASHRAE Standard 152-2004 default duct surface areas, as the NREL OpenStudio-HPXML
+ * documentation ("HPXML Air Distribution", docs/source/hpxml_to_openstudio.rst) states them; one return register
+ * per conditioned storey when the number is not known is that documentation's default.] Enter the measured
+ * areas where known.
  */
-export const DUCT_AREA_DEFAULT = { supplyPerFt2: 0.27, returnPerFt2: 0.05 } as const;
+export const DUCT_AREA_DEFAULT = {
+  supplyPerFt2: 0.27,
+  returnPerFt2PerRegister: 0.05,
+  returnMaxPerFt2: 0.25,
+  outsideFractionMultiStorey: 0.75,
+} as const;
+
+/** The default supply and return duct surface areas outside the conditioned space, ft² (see DUCT_AREA_DEFAULT). */
+export function defaultDuctAreasFt2(floorAreaFt2: number, storeys: number): { supply: number; return: number } {
+  const n = Math.max(1, Math.round(storeys));
+  const fOut = n <= 1 ? 1 : DUCT_AREA_DEFAULT.outsideFractionMultiStorey;
+  const br = Math.min(DUCT_AREA_DEFAULT.returnMaxPerFt2, DUCT_AREA_DEFAULT.returnPerFt2PerRegister * n);
+  return { supply: DUCT_AREA_DEFAULT.supplyPerFt2 * fOut * floorAreaFt2, return: br * fOut * floorAreaFt2 };
+}
 
 /** Combined surface film resistance added to the duct insulation R. [MEM: ASHRAE ch. 26 still-air film 0.68, trade-facts §2] */
 export const DUCT_FILM_R = 0.68;
@@ -102,6 +118,8 @@ export interface DuctServed {
   readonly latentBtuh: number;
   readonly heatingBtuh: number;
   readonly floorAreaFt2: number;
+  /** Above-grade storeys the served rooms are on (1 when not given): sets the default duct areas. */
+  readonly storeys?: number;
 }
 
 /** Duct gains and losses, Btu/h (rounded half-up to 1 Btu/h), with the inputs used. */
@@ -157,8 +175,9 @@ export function ductLoadFromParsed(
   const leak = DUCT_LEAKAGE[ducts.leakage];
   const fs = ducts.supplyLeakageFraction ?? leak.supply;
   const fr = ducts.returnLeakageFraction ?? leak.return;
-  const as = ducts.supplyAreaFt2 ?? DUCT_AREA_DEFAULT.supplyPerFt2 * served.floorAreaFt2;
-  const ar = ducts.returnAreaFt2 ?? DUCT_AREA_DEFAULT.returnPerFt2 * served.floorAreaFt2;
+  const defaults = defaultDuctAreasFt2(served.floorAreaFt2, served.storeys ?? 1);
+  const as = ducts.supplyAreaFt2 ?? defaults.supply;
+  const ar = ducts.returnAreaFt2 ?? defaults.return;
   const coolingTotal = Math.max(0, served.sensibleBtuh) + Math.max(0, served.latentBtuh);
   const q =
     ducts.airflowCfm ??
@@ -241,6 +260,7 @@ export function ductLoad({
   const d = parseOrThrow(ductSystemSchema, ducts);
   const c = parseOrThrow(designConditionsSchema, designConditions);
   num(served.hour, 'positive');
+  if (served.storeys !== undefined) num(served.storeys, 'positive');
   num(served.sensibleBtuh);
   num(served.latentBtuh);
   num(served.heatingBtuh);

@@ -60,6 +60,7 @@ export function ductHours(
   const sum = new Float64Array(HOURS);
   let latent = 0;
   let floor = 0;
+  const levels = new Set<number>();
   const heat: number[] = [];
   let heating = 0;
   for (const i of served) {
@@ -68,6 +69,7 @@ export function ductHours(
     for (let h = 0; h < HOURS; h += 1) sum[h] = (sum[h] ?? 0) + (w.hourly[h] ?? 0);
     latent += w.latent.total;
     floor += areas[i] ?? 0;
+    if (w.room.floorLevel >= 1) levels.add(w.room.floorLevel);
     const hl = heatOf ? heatOf(i) : roomHeating(w.room, psy, w.air, 0).total;
     heat.push(hl);
     heating += hl;
@@ -97,6 +99,7 @@ export function ductHours(
         latentBtuh: latent,
         heatingBtuh: heating,
         floorAreaFt2: floor,
+        storeys: Math.max(1, levels.size),
       }),
     );
   return { served, byHour, peak, heat };

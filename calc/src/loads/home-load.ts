@@ -1,5 +1,4 @@
 import { ventilationCfm62_2 } from '../air';
-import { INFILTRATION_TIGHTNESS } from '../construction-defaults';
 import { CalcError } from '../errors';
 import { floorAreaFt2 } from '../geometry';
 import { parseOrThrow } from '../parse';
@@ -8,7 +7,13 @@ import { homeInputSchema, type Home, type HomeInput, type VentilationKind } from
 import { BTUH_PER_TON } from '../units';
 import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
 import { designDayContext, HOURS, type DesignDayContext } from './design-day-context';
-import { BLOWER_DOOR_N, DEFAULT_RECOVERY_SENSIBLE, RLF_INTERNAL, SUMMER_LEAKAGE_FRACTION } from './hourly-method';
+import { DEFAULT_RECOVERY_SENSIBLE, RLF_INTERNAL } from './hourly-method';
+import {
+  designLeakageCfm,
+  houseStackHeightFt,
+  leakageAreaFromCfm50Cm2,
+  leakageAreaFromTightnessCm2,
+} from './infiltration';
 import { METHOD_NOTES } from './notes';
 import { applyDucts, ductSystemsOf, type HomeDucts } from './home-ducts';
 import {
@@ -80,6 +85,10 @@ export interface HomeLoad {
     readonly summerAch: number;
     readonly winterCfm: number;
     readonly summerCfm: number;
+    /** Effective leakage area at 4 Pa, in² (from the tightness and exposed surface, or the blower-door CFM50). */
+    readonly leakageAreaIn2: number;
+    /** The house's stack height, ft (the driving force's H). */
+    readonly stackHeightFt: number;
     readonly leakageBasis: 'tightness' | 'blower-door';
     readonly ventilationKind: VentilationKind;
     readonly ventilationCfm: number;
@@ -205,8 +214,11 @@ export interface HouseAir {
   readonly areas: readonly number[];
   readonly floorArea: number;
   readonly winterAch: number;
+  readonly summerAch: number;
   readonly winterHouse: number;
   readonly summerHouse: number;
+  readonly leakageAreaCm2: number;
+  readonly stackHeightFt: number;
   readonly leakageBasis: 'tightness' | 'blower-door';
   readonly bedrooms: number;
   readonly ventKind: VentilationKind;
@@ -216,9 +228,10 @@ export interface HouseAir {
 }
 
 /**
- * The house's leakage (winter ACH from tightness or blower door; summer half) shared by exposed
- * envelope, its ventilation and (when no room has people or appliances) the default internal gains,
- * as each room's air: no hourly work, so the live path can tell which rooms' hours must be redone.
+ * The house's design leakage in both seasons from one effective leakage area (the tightness × exposed surface,
+ * or the blower-door CFM50; see infiltration.ts) shared by exposed envelope, its ventilation and (when no room
+ * has people or appliances) the default internal gains, as each room's air: no hourly work, so the live path
+ * can tell which rooms' hours must be redone.
  */
 export function houseAir(home: Home): HouseAir {
   let volume = 0;
@@ -226,22 +239,47 @@ export function houseAir(home: Home): HouseAir {
   let exposedTotal = 0;
   const exposed: number[] = [];
   const areas: number[] = [];
+  const storeys: { floorLevel: number; ceilingHeightFt: number; areaFt2: number }[] = [];
   for (const r of home.rooms) {
     const a = floorAreaFt2(r);
     areas.push(a);
     floorArea += a;
     volume += a * r.ceilingHeightFt;
+    storeys.push({ floorLevel: r.floorLevel, ceilingHeightFt: r.ceilingHeightFt, areaFt2: a });
     const e = r.achOverride === undefined ? exposedEnvelopeFt2(r) : 0;
     exposed.push(e);
     exposedTotal += e;
   }
   const leakageBasis = home.blowerDoorCfm50 !== undefined ? 'blower-door' : 'tightness';
-  const winterAch =
-    home.blowerDoorCfm50 !== undefined && volume > 0
-      ? (home.blowerDoorCfm50 * 60) / volume / BLOWER_DOOR_N
-      : INFILTRATION_TIGHTNESS[home.tightness].value;
-  const winterHouse = (winterAch * volume) / 60;
-  const summerHouse = winterHouse * SUMMER_LEAKAGE_FRACTION;
+  const leakageAreaCm2 =
+    home.blowerDoorCfm50 !== undefined
+      ? leakageAreaFromCfm50Cm2(home.blowerDoorCfm50)
+      : leakageAreaFromTightnessCm2(exposedTotal, home.tightness);
+  const stackHeightFt = houseStackHeightFt(storeys);
+  const c = home.designConditions;
+  const leak = (areaCm2: number, deltaTF: number, season: 'heating' | 'cooling') =>
+    designLeakageCfm({ leakageAreaCm2: areaCm2, stackHeightFt, deltaTF, season });
+  const heatingDeltaTF = c.indoorHeatingF - c.outdoorHeatingDryBulbF;
+  const coolingDeltaTF = c.outdoorCoolingDryBulbF - c.indoorCoolingF;
+  const winterHouse = leak(leakageAreaCm2, heatingDeltaTF, 'heating');
+  const summerHouse = leak(leakageAreaCm2, coolingDeltaTF, 'cooling');
+  // Each room's share by exposed surface, as a rate per ft²: under the tightness a room's leakage is its own
+  // surface × the unit leakage area (no other room's edit moves it); a blower-door figure is the house's, shared.
+  const perFt2 = leakageBasis === 'tightness' ? leakageAreaFromTightnessCm2(1, home.tightness) : 0;
+  const winterPerFt2 =
+    leakageBasis === 'tightness'
+      ? leak(perFt2, heatingDeltaTF, 'heating')
+      : exposedTotal > 0
+        ? winterHouse / exposedTotal
+        : 0;
+  const summerPerFt2 =
+    leakageBasis === 'tightness'
+      ? leak(perFt2, coolingDeltaTF, 'cooling')
+      : exposedTotal > 0
+        ? summerHouse / exposedTotal
+        : 0;
+  const winterAch = volume > 0 ? (winterHouse * 60) / volume : 0;
+  const summerAch = volume > 0 ? (summerHouse * 60) / volume : 0;
   const bedrooms = homeBedrooms(home);
   const ventKind = home.ventilation?.kind ?? 'none';
   const q =
@@ -259,9 +297,12 @@ export function houseAir(home: Home): HouseAir {
     const a = areas[i] ?? 0;
     const areaShare = floorArea > 0 ? a / floorArea : 0;
     let winterCfm: number;
-    if (room.achOverride !== undefined) winterCfm = (room.achOverride * a * room.ceilingHeightFt) / 60;
-    else winterCfm = exposedTotal > 0 ? (winterHouse * (exposed[i] ?? 0)) / exposedTotal : 0;
-    const summerCfm = room.achOverride !== undefined ? winterCfm : winterCfm * SUMMER_LEAKAGE_FRACTION;
+    let summerCfm: number;
+    if (room.achOverride !== undefined) summerCfm = winterCfm = (room.achOverride * a * room.ceilingHeightFt) / 60;
+    else {
+      winterCfm = winterPerFt2 * (exposed[i] ?? 0);
+      summerCfm = summerPerFt2 * (exposed[i] ?? 0);
+    }
     let defaultInternal: RoomAir['defaultInternal'];
     if (!anyInternal) {
       // Base part to the kitchen(s) by their area (all rooms when none is named so); area and people parts by area.
@@ -288,8 +329,11 @@ export function houseAir(home: Home): HouseAir {
     areas,
     floorArea,
     winterAch,
+    summerAch,
     winterHouse,
     summerHouse,
+    leakageAreaCm2,
+    stackHeightFt,
     leakageBasis,
     bedrooms,
     ventKind,
@@ -364,7 +408,8 @@ export function homeLoadFromWork(
   air: HouseAir,
   roomWork: readonly RoomHourly[],
 ): HomeLoad {
-  const { areas, floorArea, winterAch, winterHouse, summerHouse, leakageBasis, bedrooms, ventKind, anyInternal } = air;
+  const { areas, floorArea, winterAch, summerAch, winterHouse, summerHouse, leakageBasis, bedrooms, ventKind } = air;
+  const anyInternal = air.anyInternal;
   const q = air.ventCfm;
   const occupants = air.occupants;
   const { work, ductsByHour, houseHourly, block } = blockOfWork(home, psy, ctx, areas, roomWork);
@@ -439,9 +484,11 @@ export function homeLoadFromWork(
     },
     air: {
       winterAch: roundHalfUp(winterAch, 3),
-      summerAch: roundHalfUp(winterAch * SUMMER_LEAKAGE_FRACTION, 3),
+      summerAch: roundHalfUp(summerAch, 3),
       winterCfm: roundHalfUp(winterHouse, 1),
       summerCfm: roundHalfUp(summerHouse, 1),
+      leakageAreaIn2: roundHalfUp(air.leakageAreaCm2 / 6.4516, 1),
+      stackHeightFt: roundHalfUp(air.stackHeightFt, 2),
       leakageBasis,
       ventilationKind: ventKind,
       ventilationCfm: roundHalfUp(q, 1),

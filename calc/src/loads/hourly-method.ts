@@ -134,32 +134,13 @@ export const ATTIC_RESPONSE = {
 } as const;
 
 /**
- * Design air leakage in summer as a fraction of the winter rate (less stack effect, lighter
- * design wind). The tightness table's ACH is the winter figure.
- * [Assumption (no published source found): ½. Residential tightness tables give summer rates about
- * half the winter ones, as recalled. The ASHRAE basic stack-and-wind model Q = A_L·√(Cs·ΔT + Cw·U²)
- * gives 0.53 for 20 °F / 7.5 mph against 60 °F / 15 mph on a one-storey house: its wind coefficient
- * 0.0065 (shielding class 3) was seen in a public copy of the table (from ASHRAE 1989, CRC Press
- * companion material K10576); the stack coefficient 0.0150 and the design winds are recalled. The
- * stack-and-wind model itself is Sherman and Grimsrud's (LBL-10163, ASHRAE Transactions 1980, pp. 778–807;
- * its AIVC abstract, https://aivc.org/node/13801, read 5 Dec 2026: stack and wind regimes treated apart,
- * inputs the fan-pressurization leakage area, wind speed, terrain class and temperature difference); the
- * paper's coefficient tables were not found in a public copy in the second search either. The test
- * file works that ratio; the assumption's effect on the review ranch (the largest of them) is stated in
- * METHOD_ASSUMPTIONS and checked in tests/calc/method-constants.test.ts.]
- */
-export const SUMMER_LEAKAGE_FRACTION = 0.5;
-
-/**
- * Blower-door conversion: natural winter ACH = ACH50 / N with N = 20, ACH50 = CFM50 × 60 / volume.
- * [TRADE: the "N-factor" rule of thumb, trade-facts §5]
- */
-export const BLOWER_DOOR_N = 20;
-
-/**
  * Default internal gains of the whole home when no room has people or appliances entered:
  * sensible 464 + 0.7·A_cf + 75·N_oc, latent 68 + 0.07·A_cf + 41·N_oc Btu/h, N_oc = bedrooms + 1.
- * [MEM: ASHRAE Fundamentals ch. 17 RLF internal gains; trade-facts §3 check 3.4]
+ * [PUB: ASHRAE Handbook—Fundamentals ch. 17 (RLF method, "Internal Gain") eqs. (30) and (31), in the 2021 SI
+ * edition q_ig,s = 136 + 2.2·A_cf + 22·N_oc and q_ig,l = 20 + 0.22·A_cf + 12·N_oc W (A_cf in m²), "number of
+ * occupants (if unknown, estimate as N_br + 1)" — read in a copy of the 2021 SI chapter in a public repository;
+ * the SI form is also in a public university assignment implementing the RLF method. The IP coefficients here
+ * are the SI ones converted, which tests/calc/infiltration.test.ts checks.]
  */
 export const RLF_INTERNAL = {
   sensibleBase: 464,

@@ -13,10 +13,10 @@ export const METHOD_NOTES: readonly string[] = [
   'Walls, doors and roofs: U × area × sol-air temperature difference (absorptance from the colour), with a time lag and damping for the construction’s mass [PUB: ASHRAE ch. 18 sol-air; lag and damping from the periodic conduction through representative walls with the material properties ORNL published; the walls’ make-up is an assumption, see below]. Attic air from the roof’s sol-air temperature: 0.45 of the way from outdoor air, one hour behind [OWN, checked against attics measured in Florida: FSEC-CR-1220-00], 0.38 with a radiant barrier [PUB: the ratio of two side-by-side vented attics’ peak excess over outdoor air measured with and without a barrier, 36.1 and 42.9 °F: Parker and Sherwin, Comparative Summer Attic Thermal Performance of Six Roof Constructions, Florida Solar Energy Center 1998]; a garage 0.6 of the way from indoor to outdoor [TRADE].',
   'Window conduction: U × area × (outdoor that hour − indoor).',
   'Slab floors lose heat at the exposed edge: F-factor × exposed perimeter × temperature difference [MEM: ASHRAE 90.1/IECC F-factors].',
-  'Air leakage: winter air changes from the tightness (or a blower-door CFM50 ÷ 20 [TRADE]), summer half of it [an assumption, see below]; the house’s leakage is shared among rooms by outside envelope area, so interior rooms get none. Sensible 1.08 × CFM × ΔT, latent 0.68 × CFM × Δgrains, both × altitude factor.',
+  'Air leakage, both seasons from one effective leakage area A_L: the tightness’s unit leakage area × the exposed walls and ceilings, or a blower-door CFM50 taken to 4 Pa with pressure exponent 0.65 [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 17 eq. (9) and Table 3; ch. 16 eqs. (40)–(41)]; design leakage A_L × IDF, IDF = (I0 + I1 × stack height × |indoor − outdoor|)/1000, with the chapter’s coefficients for its cooling wind 3.4 m/s and heating wind 6.7 m/s, typical suburban shelter, no flue [PUB: ch. 17 eq. (10), its fit to the ch. 16 stack-and-wind model]. The house’s leakage is shared among rooms by outside envelope area, so interior rooms get none [OWN: stated rule]. Sensible 1.08 × CFM × ΔT, latent 0.68 × CFM × Δgrains, both × altitude factor.',
   'Ventilation: the ASHRAE 62.2 rate 0.03 cfm/ft² + 7.5 cfm × (bedrooms + 1) unless entered; balanced in full, ERV/HRV after recovery, exhaust or supply only the part above leakage [MEM: ASHRAE ch. 16]; shared to rooms by floor area.',
-  `People: ${PEOPLE_SOURCE}. When no room has people or appliances entered, the whole-home default 464 + 0.7 × ft² + 75 × occupants sensible and 68 + 0.07 × ft² + 41 × occupants latent is used, occupants = bedrooms + 1 [MEM: ASHRAE ch. 17 RLF]; its fixed part goes to the kitchen, the rest by floor area.`,
-  'Ducts (a ducted system outside the conditioned space): the extra output needed to deliver the rooms’ load through ducts that gain or lose heat along their surface (area, insulation R) and leak air to or from the space they run in, by a design delivery-effectiveness energy balance after ASHRAE Standard 152 (re-derived, no clause cited); attic air of the hour in cooling, outdoor air in heating; crawl space, garage and basement as buffer spaces [TRADE]. Shared to the rooms the system serves by their load. Unless entered: duct surface 27 % (supply) and 5 % (return) of the floor served, surface film R-0.68 [the areas are an assumption, see below; the film MEM: ASHRAE ch. 26]; leakage 4 / 10 / 20 % each side for sealed / typical / leaky [TRADE]; blower 400 cfm per ton [TRADE].',
+  `People: ${PEOPLE_SOURCE}. When no room has people or appliances entered, the whole-home default 464 + 0.7 × ft² + 75 × occupants sensible and 68 + 0.07 × ft² + 41 × occupants latent is used, occupants = bedrooms + 1 [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 17 eqs. (30)–(31)]; its fixed part goes to the kitchen, the rest by floor area.`,
+  'Ducts (a ducted system outside the conditioned space): the extra output needed to deliver the rooms’ load through ducts that gain or lose heat along their surface (area, insulation R) and leak air to or from the space they run in, by a design delivery-effectiveness energy balance after ASHRAE Standard 152 (re-derived, no clause cited); attic air of the hour in cooling, outdoor air in heating; crawl space, garage and basement as buffer spaces [TRADE]. Shared to the rooms the system serves by their load. Unless entered: duct surface outside the conditioned space 27 % (supply) and 5 % per return register (one per storey) of the floor served, × 0.75 in a house of two or more storeys [PUB: ASHRAE Standard 152-2004 defaults, as NREL’s OpenStudio-HPXML documentation gives them]; surface film R-0.68 [MEM: ASHRAE ch. 26]; leakage 4 / 10 / 20 % each side for sealed / typical / leaky [TRADE]; blower 400 cfm per ton [TRADE].',
   'Basements: walls below grade and basement floors lose heat to the ground by the ASHRAE Handbook—Fundamentals below-grade method (average U over the depth along circular heat-flow paths through soil of conductivity 0.8 Btu/h·ft·°F) at indoor − design ground surface temperature (annual mean less the ground amplitude; the outdoor heating design temperature when none is entered, which overstates the loss) [MEM; the basement-floor form is an assumption, see below]; no summer gain below grade.',
   'Heating: conduction, slab edge, winter leakage and ventilation at the heating design temperature; no credit for sun, people or appliances.',
   'Humidity ratios: ASHRAE Handbook—Fundamentals 2017 ch. 1 psychrometric equations at the station pressure for the elevation.',
@@ -24,7 +24,7 @@ export const METHOD_NOTES: readonly string[] = [
 
 /** A constant of the method for which no citable public source was found (issue 9), and what it does to the review ranch. */
 export interface MethodAssumption {
-  readonly key: 'summer-leakage' | 'wall-mass' | 'daily-range' | 'duct-areas' | 'glass-absorption' | 'basement-floor';
+  readonly key: 'flue' | 'wall-mass' | 'daily-range' | 'glass-absorption' | 'basement-floor';
   /** The constant and the value used. */
   readonly what: string;
   /** The plausible low and high values tried, as a phrase ("at 0.3 to 0.7"). */
@@ -43,33 +43,30 @@ export interface MethodAssumption {
   } | null;
   /** Where there is no ranch figure, or a bound instead of one: what is said. */
   readonly effect?: string;
+  /** The method has the term but the walk-through does not record its input (so it is assumed absent). */
+  readonly notEntered?: true;
 }
 
 /** Ordered by how much they move the review ranch's cooling block. */
 export const METHOD_ASSUMPTIONS: readonly MethodAssumption[] = [
   {
-    key: 'summer-leakage',
-    what: 'summer air leakage ½ of the winter rate',
-    range: 'at ⅓ to 1 (summer equal to winter)',
-    ranch: { asUsed: 24980, low: 24089, high: 27655 },
-  },
-  {
     key: 'wall-mass',
     what: 'the make-up of the two representative walls whose periodic conduction gives the time lag and damping (frame: stucco, R-13, gypsum → 1 h and 0.98; masonry: 8 in concrete, gypsum → 6 h and 0.50)',
     range: 'at no lag or damping to the older recalled 2 h and 0.9 for frame',
-    ranch: { asUsed: 24980, low: 24995, high: 24655 },
+    ranch: { asUsed: 25114, low: 25129, high: 24789 },
   },
   {
-    key: 'duct-areas',
-    what: 'duct surface 27 % (supply) and 5 % (return) of the floor served when not entered',
-    range: 'at a supply 20 % to 35 %',
-    ranch: { variant: 'with R-6 ducts in the attic', asUsed: 39613, low: 38148, high: 41326 },
+    key: 'flue',
+    what: 'no open flue (furnace, water heater or fireplace): the leakage is that of a house without one',
+    range: 'with a flue of half the house’s leakage area (the most the leakage equation allows)',
+    notEntered: true,
+    ranch: { asUsed: 25114, low: 25114, high: 25233 },
   },
   {
     key: 'daily-range',
     what: 'the hourly fractions of the daily range (ASHRAE 1997 table, digits recalled)',
     range: 'with the published diurnal curve of Campbell and Norman (1998) instead',
-    ranch: { asUsed: 24980, low: 25027, high: 25027 },
+    ranch: { asUsed: 25114, low: 25160, high: 25160 },
   },
   {
     key: 'glass-absorption',
@@ -92,7 +89,9 @@ const btuh = (n: number): string => String(Math.round(n)).replace(/\B(?=(\d{3})+
 
 /** One assumption in plain words, as the loads page prints it. */
 export function methodAssumptionText(a: MethodAssumption): string {
-  const head = `Assumption (no published source found): ${a.what}.`;
+  const head = a.notEntered
+    ? `Assumption (not recorded on the walk-through): ${a.what}.`
+    : `Assumption (no published source found): ${a.what}.`;
   if (!a.ranch) return a.effect ? `${head} ${a.effect.charAt(0).toUpperCase()}${a.effect.slice(1)}.` : head;
   const r = a.ranch;
   const figures = r.low === r.high ? `${btuh(r.low)} Btu/h` : `${btuh(r.low)} to ${btuh(r.high)} Btu/h`;

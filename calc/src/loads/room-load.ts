@@ -11,7 +11,6 @@ import {
   DOOR_TYPES,
   FLOOR_INSULATION,
   GLAZING_TYPES,
-  INFILTRATION_TIGHTNESS,
   INTERIOR_SHADING_IAC,
   WALL_CONSTRUCTIONS,
 } from '../construction-defaults';
@@ -20,7 +19,8 @@ import { ceilingLoad, exposedWallsLoad, floorLoad } from './envelope';
 import { appliancesLoad, peopleLoad } from './internal';
 import { METHOD_NOTES } from './notes';
 import { designDayContext, HOURS, radiantTimeSeries, type DesignDayContext } from './design-day-context';
-import { GARAGE_COOLING_FRACTION, RADIANT_FRACTION, SUMMER_LEAKAGE_FRACTION, type MassClass } from './hourly-method';
+import { GARAGE_COOLING_FRACTION, RADIANT_FRACTION, type MassClass } from './hourly-method';
+import { designLeakageCfm, leakageAreaFromTightnessCm2 } from './infiltration';
 import { peakDetail, type PeakDetail } from './peak-detail';
 
 /** Load components, Btu/h, each rounded half-up to 1 Btu/h; `total` = sum of the rounded parts. */
@@ -169,11 +169,19 @@ export interface RoomAir {
   };
 }
 
-/** Outside envelope area through which a room leaks, ft²: exposed walls gross + a ceiling under attic or roof. */
+/**
+ * Exposed surface through which a room leaks, ft²: exposed walls above grade (gross, windows and doors included),
+ * a ceiling under an attic or roof, and a floor over a vented crawl space or a garage; not a slab, a basement
+ * floor or a floor over a sealed crawl space or basement (whose above-grade walls the walk-through does not record).
+ * [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 17 Table 4 "Evaluation of Exposed Surface Area"; the floor over a
+ * garage is counted as the table counts a wall shared with one]
+ */
 export function exposedEnvelopeFt2(room: Room): number {
   let a = 0;
   for (const w of room.exposedWalls) a += wallAboveGradeFt2(w, room.ceilingHeightFt);
   if (room.above.kind !== 'conditioned') a += floorAreaFt2(room);
+  const below = room.below;
+  if (below.kind === 'garage' || (below.kind === 'crawlspace' && below.vented)) a += floorAreaFt2(room);
   return a;
 }
 
@@ -404,20 +412,27 @@ export function roomComponentsAt(w: RoomHourly, index: number): LoadComponents {
 }
 
 /**
- * One room on its own: its leakage is the house rate (winter ACH from the tightness; summer half
- * of it) over its own volume when it has outside envelope, none when it is interior; no ventilation
- * share and no default internal gains (those are whole-home terms — use homeLoad for them).
+ * One room on its own: its leakage is its own exposed surface × the tightness's unit leakage area, driven by its
+ * own ceiling height as the stack (infiltration.ts), none when it is interior; no ventilation share and no default
+ * internal gains (those are whole-home terms — use homeLoad for them).
  */
 export function roomLoadFromParsed(
   room: Room,
   p: DesignPsychrometrics,
   ctx: DesignDayContext,
-  winterAch: number,
+  tightness: Tightness,
 ): RoomLoad {
-  const exposed = exposedEnvelopeFt2(room) > 0;
-  const ach = room.achOverride ?? (exposed ? winterAch : 0);
-  const winterCfm = (ach * floorAreaFt2(room) * room.ceilingHeightFt) / 60;
-  const summerCfm = room.achOverride !== undefined ? winterCfm : winterCfm * SUMMER_LEAKAGE_FRACTION;
+  let winterCfm: number;
+  let summerCfm: number;
+  if (room.achOverride !== undefined)
+    summerCfm = winterCfm = (room.achOverride * floorAreaFt2(room) * room.ceilingHeightFt) / 60;
+  else {
+    const leakageAreaCm2 = leakageAreaFromTightnessCm2(exposedEnvelopeFt2(room), tightness);
+    const leak = (deltaTF: number, season: 'heating' | 'cooling') =>
+      designLeakageCfm({ leakageAreaCm2, stackHeightFt: room.ceilingHeightFt, deltaTF, season });
+    winterCfm = leak(p.heatingDeltaTF, 'heating');
+    summerCfm = leak(p.coolingDeltaTF, 'cooling');
+  }
   const air: RoomAir = {
     summerCfm,
     winterCfm,
@@ -447,5 +462,5 @@ export function roomLoad({
   const r = parseOrThrow(roomInputSchema, room);
   const c = parseOrThrow(designConditionsSchema, designConditions);
   const t = parseOrThrow(tightnessSchema, tightness);
-  return roomLoadFromParsed(r, designPsychrometrics(c), designDayContext(c), INFILTRATION_TIGHTNESS[t].value);
+  return roomLoadFromParsed(r, designPsychrometrics(c), designDayContext(c), t);
 }

@@ -17,11 +17,11 @@ export function MethodNote({ open = false }: { open?: boolean }) {
         ))}
       </ul>
       <h3 id={assumptionsId} className="mt-3 font-semibold text-ink-900">
-        Figures with no published source
+        Assumptions the method makes
       </h3>
       <p className="mt-1 text-ink-950">
-        These are stated assumptions. Each shows how far it moves the cooling load of an example ranch: 1,800 ft², slab
-        on grade, 95 °F outdoors at 36° N.
+        Figures with no published source, and inputs the walk-through does not record. Each shows how far it moves the
+        cooling load of an example ranch: 1,800 ft², slab on grade, 95 °F outdoors at 36° N.
       </p>
       <ul aria-labelledby={assumptionsId} className="mt-1 list-disc pl-5 text-ink-950">
         {METHOD_ASSUMPTIONS.map((a) => (

@@ -1,5 +1,6 @@
 import { spawn } from 'node:child_process';
 import { loadConfig } from '../server/src/config';
+import { startLocalPaymentsFake } from '../server/src/fakes/payments-fake';
 import { startSmtpFake } from '../server/src/fakes/smtp-fake';
 import { startServer } from '../server/src/server';
 import { isEmpty, seedDemo } from '../fixtures/seed';
@@ -15,7 +16,9 @@ await withOrm(url, async (orm) => {
 });
 const config = loadConfig({ ...process.env, DATABASE_URL: url, CLIENT_DIST: '.data/no-client' });
 const smtp = await startSmtpFake({ port: config.SMTP_PORT, dir: '.data/outbox' });
+const paymentsFake = await startLocalPaymentsFake(config);
 const running = await startServer(config);
+paymentsFake?.setWebhookTarget(`${running.url}/api/hooks/payments`);
 const vite = spawn(process.execPath, ['node_modules/vite/bin/vite.js'], {
   stdio: 'inherit',
   env: { ...process.env, PORT: String(config.PORT) },
@@ -25,6 +28,7 @@ const stop = async () => {
   vite.kill('SIGTERM');
   await running.close().catch(() => undefined);
   await smtp.close().catch(() => undefined);
+  await paymentsFake?.close().catch(() => undefined);
   cluster.stop();
   process.exit(0);
 };

@@ -1,4 +1,5 @@
 import { loadConfig } from '../server/src/config';
+import { startLocalPaymentsFake } from '../server/src/fakes/payments-fake';
 import { startSmtpFake } from '../server/src/fakes/smtp-fake';
 import { startServer } from '../server/src/server';
 import { demoAccounts, isEmpty, seedDemo } from '../fixtures/seed';
@@ -23,11 +24,14 @@ await buildClientIfStale();
 
 const config = loadConfig({ ...env, DATABASE_URL: env.DATABASE_URL ?? databaseUrl });
 const smtp = await startSmtpFake({ port: config.SMTP_PORT, dir: '.data/outbox' });
+const paymentsFake = await startLocalPaymentsFake(config);
 const running = await startServer(config);
+paymentsFake?.setWebhookTarget(`${running.url}/api/hooks/payments`);
 
 console.log(`
   Gaugeline is running at ${running.url}   (ready in ${((Date.now() - t0) / 1000).toFixed(1)} s)
   Outgoing e-mail is caught by the local SMTP fake on 127.0.0.1:${smtp.port}; owners read it at ${running.url}/dev/outbox
+  ${paymentsFake ? `Deposits go to the local payments fake on 127.0.0.1:${paymentsFake.port} (test card pm_card_visa pays, pm_card_chargeDeclined is declined)` : 'Deposits go to the payment service configured by PAYMENTS_SECRET_KEY'}
 
   Demo sign-ins:
 ${demoAccounts.map((a) => `    ${a.role.padEnd(12)} ${a.email.padEnd(40)} ${a.password.padEnd(28)} ${a.company}`).join('\n')}
@@ -42,6 +46,7 @@ async function stop(signal: string) {
   log(`${signal}: stopping the server, the fakes and the database…`);
   await running.close().catch(() => undefined);
   await smtp.close().catch(() => undefined);
+  await paymentsFake?.close().catch(() => undefined);
   cluster.stop();
   log('stopped.');
   process.exit(0);

@@ -1,5 +1,8 @@
 import { z } from 'zod';
 
+/** The signing secret the local payments fake and the app share when no real key is set. */
+export const LOCAL_WEBHOOK_SECRET = 'whsec_gaugelineLocalFakeSigningSecret0001';
+
 /** Every setting the server reads, validated once at start. `.env.example` documents each one. */
 const schema = z.object({
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
@@ -25,6 +28,19 @@ const schema = z.object({
   SMTP_HOST: z.string().default('127.0.0.1'),
   SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(54325),
   MAIL_FROM: z.string().default('Gaugeline <no-reply@gaugeline.example.com>'),
+  /** The payment service's secret key. Unset: the `stripe` SDK talks to the local fake (fakes/payments-fake.ts). */
+  PAYMENTS_SECRET_KEY: z
+    .string()
+    .regex(/^(sk|rk)_(test|live)_[A-Za-z0-9]+$/, { message: 'a secret key (sk_test_…, sk_live_… or rk_…)' })
+    .optional(),
+  /** The endpoint's signing secret: every webhook's Stripe-Signature is checked with it. */
+  PAYMENTS_WEBHOOK_SECRET: z.string().min(16).default(LOCAL_WEBHOOK_SECRET),
+  /** How old a webhook's signed timestamp may be, in seconds (the SDK's default is 300). */
+  PAYMENTS_WEBHOOK_TOLERANCE_SECONDS: z.coerce.number().int().min(1).max(3600).default(300),
+  /** The local payments fake listens here on 127.0.0.1 when no secret key is set (npm start, the tests). */
+  PAYMENTS_FAKE_PORT: z.coerce.number().int().min(0).max(65535).default(54326),
+  /** Sends the SDK somewhere else (e.g. a mock server); empty with a key means the real service. */
+  PAYMENTS_API_URL: z.string().url().optional(),
   STORAGE_DIR: z.string().default('.data/uploads'),
   UPLOAD_MAX_BYTES: z.coerce
     .number()
@@ -72,6 +88,11 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env, overrides: Part
   const c = { ...parsed.data, ...overrides };
   if (c.NODE_ENV === 'production' && c.SESSION_SECRET.startsWith('local-development')) {
     throw new Error('Invalid configuration:\n  SESSION_SECRET: set a secret of at least 32 characters in production');
+  }
+  if (c.PAYMENTS_SECRET_KEY && c.PAYMENTS_WEBHOOK_SECRET === LOCAL_WEBHOOK_SECRET) {
+    throw new Error(
+      "Invalid configuration:\n  PAYMENTS_WEBHOOK_SECRET: with a real PAYMENTS_SECRET_KEY, set the endpoint's own signing secret",
+    );
   }
   const devOutbox = (c.DEV_OUTBOX ?? (c.NODE_ENV === 'production' ? 'off' : 'on')) === 'on';
   return { ...c, devOutbox };

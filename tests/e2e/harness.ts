@@ -2,7 +2,9 @@ import { randomUUID } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { loadConfig } from '../../server/src/config';
+import { startPaymentsFake, type PaymentsFake } from '../../server/src/fakes/payments-fake';
 import { startSmtpFake, type SmtpFake } from '../../server/src/fakes/smtp-fake';
+import { LOCAL_WEBHOOK_SECRET } from '../../server/src/config';
 import { startServer, type Running } from '../../server/src/server';
 import { testDatabaseUrl } from '../helpers/test-app';
 
@@ -14,6 +16,8 @@ export interface E2E {
   url: string;
   browser: Browser;
   smtp: SmtpFake;
+  /** The payments fake the server's SDK talks to; its signed webhooks go to the server's hook URL. */
+  payments: PaymentsFake;
   running: Running;
   /**
    * A fresh profile. Service workers are blocked unless asked for: the built client installs one,
@@ -29,12 +33,14 @@ export interface E2E {
 /** The real server (built client, seeded test database, SMTP fake) and Debian's Chromium, headless; each context is a fresh profile. */
 export async function startE2E(): Promise<E2E> {
   const smtp = await startSmtpFake({ port: 0 });
+  const payments = await startPaymentsFake({ port: 0, webhookSecret: LOCAL_WEBHOOK_SECRET });
   const config = loadConfig({
     NODE_ENV: 'test',
     DATABASE_URL: testDatabaseUrl(),
     STORAGE_DIR: process.env.STORAGE_DIR,
     PORT: '0',
     SMTP_PORT: String(smtp.port),
+    PAYMENTS_FAKE_PORT: String(payments.port),
     LOG_LEVEL: 'silent',
     DEV_OUTBOX: 'on',
     LOGIN_MAX_PER_IP: '10000',
@@ -42,6 +48,7 @@ export async function startE2E(): Promise<E2E> {
     QUEUE_NAMESPACE: `e2e-${randomUUID().slice(0, 8)}`,
   });
   const running = await startServer(config, { outbox: smtp });
+  payments.setWebhookTarget(`${running.url}/api/hooks/payments`);
   mkdirSync(SHOTS, { recursive: true });
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
@@ -60,6 +67,7 @@ export async function startE2E(): Promise<E2E> {
     url: running.url,
     browser,
     smtp,
+    payments,
     running,
     async newPage(viewport, options = {}) {
       const context = await browser.newContext({
@@ -77,6 +85,7 @@ export async function startE2E(): Promise<E2E> {
       await browser.close();
       await running.close();
       await smtp.close();
+      await payments.close();
     },
   };
 }

@@ -5,10 +5,13 @@ import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import pg from 'pg';
+import request from 'supertest';
 import { ormConfig } from '../../mikro-orm.config';
 import { createApp, type AppExtras } from '../../server/src/app';
 import { loadConfig, type Config } from '../../server/src/config';
+import { startPaymentsFake, type PaymentsFake } from '../../server/src/fakes/payments-fake';
 import { startSmtpFake, type SmtpFake } from '../../server/src/fakes/smtp-fake';
+import { createStripePayments } from '../../server/src/services/payments';
 import { createSmtpMailer } from '../../server/src/services/mailer';
 import { createQueue } from '../../server/src/services/queue';
 import { systemClock, type Clock, type Services } from '../../server/src/services/services';
@@ -20,6 +23,8 @@ export interface TestApp {
   orm: MikroORM;
   services: Services;
   smtp: SmtpFake;
+  /** The payments fake the app's `stripe` SDK talks to; its webhooks reach this app's /api/hooks/payments. */
+  payments: PaymentsFake;
   close(): Promise<void>;
 }
 
@@ -51,6 +56,8 @@ export async function buildTestApp(
   const sessionPool = new pg.Pool({ connectionString: url, max: 3 });
   const smtp = await startSmtpFake({ port: 0 });
   const mailer = createSmtpMailer({ host: '127.0.0.1', port: smtp.port, from: config.MAIL_FROM });
+  const paymentsFake = await startPaymentsFake({ port: 0, webhookSecret: config.PAYMENTS_WEBHOOK_SECRET });
+  const paymentsConfig = { ...config, PAYMENTS_SECRET_KEY: undefined, PAYMENTS_API_URL: paymentsFake.url };
   // Each test app stores uploads in its own temporary folder, never in the developer's .data/uploads.
   const storage = createLocalDiskStorage(mkdtempSync(join(tmpdir(), 'gaugeline-uploads-')));
   const base: Omit<Services, 'queue'> = {
@@ -58,6 +65,7 @@ export async function buildTestApp(
     sessionPool,
     config: { ...config, devOutbox: true },
     mailer,
+    payments: createStripePayments(paymentsConfig),
     storage,
     clock,
     outbox: smtp,
@@ -75,12 +83,24 @@ export async function buildTestApp(
   if (config.QUEUE_WORKERS === 'on') await queue.start();
   const services: Services = { ...base, queue };
   const app = createApp(services, extras);
+  // The fake's webhooks go to this app as the service would send them (over HTTPS behind the proxy).
+  paymentsFake.setWebhookTarget(async (body, signature) => {
+    const res = await request(app)
+      .post('/api/hooks/payments')
+      .set('X-Forwarded-Proto', 'https')
+      .set('Content-Type', 'application/json; charset=utf-8')
+      .set('Stripe-Signature', signature)
+      .send(body);
+    return res.status;
+  });
   return {
     app,
     orm,
     services,
     smtp,
+    payments: paymentsFake,
     async close() {
+      await paymentsFake.close();
       await services.queue.stop().catch(() => undefined);
       mailer.close();
       await smtp.close();

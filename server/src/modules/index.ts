@@ -19,19 +19,19 @@ import { photoRoutes } from './photos/photo.routes';
 import { roomRoutes } from './rooms/room.routes';
 import { companyDataRoutes } from './company-data/company-data.routes';
 import { deskRoutes } from './desk/desk.routes';
+import { paymentHooks } from './payments/payments.hooks';
 
 /** A module's routes under /api<prefix> (tests add their own through createApp's extras). */
 export type ModuleMount = readonly [prefix: string, register: (api: ApiRouter) => void];
 
 /**
  * Signed webhooks, under /api/hooks<prefix>: mounted before the JSON parser, the session and CSRF, so
- * each gets its body as received and answers to its signature only (lib/route.ts `signed`). None yet;
- * the payments issue adds the first.
+ * each gets its body as received and answers to its signature only (lib/route.ts `signed`).
  */
-const HOOKS: readonly ModuleMount[] = [];
+const hooks = (services: Services): readonly ModuleMount[] => [['/payments', paymentHooks(() => services.payments)]];
 
 export function mountHooks(app: Express, services: Services, extra: readonly ModuleMount[] = []): void {
-  for (const [prefix, register] of [...HOOKS, ...extra]) {
+  for (const [prefix, register] of [...hooks(services), ...extra]) {
     const api = createApiRouter(`/api/hooks${prefix}`, () => services, { raw: true });
     register(api);
     app.use(`/api/hooks${prefix}`, (_req, _res, next) => RequestContext.create(services.orm.em, next), api.router);

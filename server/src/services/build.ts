@@ -5,6 +5,7 @@ import type { Config } from '../config';
 import { directoryOutbox } from '../fakes/smtp-fake';
 import { taskHandlers } from '../tasks/handlers';
 import { createSmtpMailer } from './mailer';
+import { createStripePayments } from './payments';
 import { createQueue } from './queue';
 import { systemClock, type Services } from './services';
 import { createLocalDiskStorage } from './storage';
@@ -22,6 +23,7 @@ export async function buildServices(config: Config, extra: Partial<Services> = {
       new pg.Pool({ connectionString: config.DATABASE_URL, max: 4, connectionTimeoutMillis: 2000 }),
     config,
     mailer: createSmtpMailer({ host: config.SMTP_HOST, port: config.SMTP_PORT, from: config.MAIL_FROM }),
+    payments: createStripePayments(config),
     storage: createLocalDiskStorage(config.STORAGE_DIR),
     clock: systemClock,
     outbox: config.devOutbox ? directoryOutbox('.data/outbox') : undefined,

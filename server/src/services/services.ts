@@ -3,6 +3,7 @@ import type pg from 'pg';
 import type { Config } from '../config';
 import type { Outbox } from '../fakes/smtp-fake';
 import type { Mailer } from './mailer';
+import type { Payments } from './payments';
 import type { Queue } from './queue';
 import type { Storage } from './storage';
 
@@ -21,6 +22,8 @@ export interface Services {
   mailer: Mailer;
   /** Background work in PostgreSQL (services/queue.ts); task kinds in tasks/kinds.ts. */
   queue: Queue;
+  /** Deposits through the payment service's SDK (the local fake unless a real key is configured). */
+  payments: Payments;
   /** Uploaded files (room photos). */
   storage: Storage;
   clock: Clock;

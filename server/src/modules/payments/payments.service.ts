@@ -1,0 +1,200 @@
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { randomUUID } from 'node:crypto';
+import { ConflictError } from '../../lib/errors';
+import type { DepositIntent, PaymentEvent, Payments } from '../../services/payments';
+import type { PaymentState } from './payment.entity';
+
+/**
+ * The deposit's server side: the payment row for a version's intent, and the webhooks that move it.
+ * The amount always comes from the server (the version's frozen deposit), never from a request.
+ */
+
+export interface DepositVersion {
+  companyId: string;
+  proposalId: string;
+  versionId: string;
+  /** The version's deposit in cents, read from its frozen snapshot by the caller. */
+  depositCents: number;
+}
+
+/**
+ * Whether the version has been signed by the customer: payment comes after the signature (pay before
+ * signing → 409). The e-signature slice of issue 14 answers this from its insert-only signature table;
+ * until that table exists no version is signed.
+ */
+export async function versionIsSigned(_em: EntityManager, _companyId: string, _versionId: string): Promise<boolean> {
+  return false;
+}
+
+export interface PaymentRow {
+  id: string;
+  company_id: string;
+  proposal_id: string;
+  proposal_version_id: string;
+  amount_cents: number;
+  intent_id: string;
+  state: PaymentState;
+  failure: string | null;
+  refund_id: string | null;
+}
+
+export async function paymentForVersion(
+  em: EntityManager,
+  companyId: string,
+  versionId: string,
+): Promise<PaymentRow | null> {
+  const rows = await em.execute<PaymentRow[]>(
+    'select * from "payment" where "company_id" = ? and "proposal_version_id" = ?',
+    [companyId, versionId],
+  );
+  return rows[0] ?? null;
+}
+
+/**
+ * Opens (or finds again) the deposit for a signed version: one intent per version, made with the
+ * idempotency key `deposit:<version id>` so a double click or a retry makes one intent. The amount is
+ * the version's own; nothing in the request can change it.
+ */
+export async function startDeposit(
+  em: EntityManager,
+  payments: Payments,
+  version: DepositVersion,
+): Promise<{ payment: PaymentRow; intent: DepositIntent }> {
+  if (!(await versionIsSigned(em, version.companyId, version.versionId))) {
+    throw new ConflictError('The proposal is paid for after it is signed: sign it first.');
+  }
+  if (!Number.isSafeInteger(version.depositCents) || version.depositCents <= 0) {
+    throw new ConflictError('This proposal asks for no deposit.');
+  }
+  const existing = await paymentForVersion(em, version.companyId, version.versionId);
+  if (existing?.state === 'succeeded' || existing?.state === 'refunded') {
+    throw new ConflictError('The deposit for this proposal has already been paid.');
+  }
+  const intent = await payments.createDepositIntent({
+    amountCents: version.depositCents,
+    metadata: { companyId: version.companyId, proposalId: version.proposalId, versionId: version.versionId },
+    idempotencyKey: `deposit:${version.versionId}`,
+  });
+  const payment = await recordDepositIntent(em, intent);
+  return { payment, intent };
+}
+
+/** Keeps the intent the server made as the version's payment row (once: the same intent again finds it). */
+export async function recordDepositIntent(em: EntityManager, intent: DepositIntent): Promise<PaymentRow> {
+  const { companyId, proposalId, versionId } = intent.metadata;
+  const at = new Date();
+  await em.execute(
+    `insert into "payment" ("id", "company_id", "proposal_id", "proposal_version_id", "amount_cents", "currency",
+       "intent_id", "state", "created_at", "updated_at")
+     values (?, ?, ?, ?, ?, ?, ?, 'created', ?, ?)
+     on conflict ("intent_id") do nothing`,
+    [randomUUID(), companyId, proposalId, versionId, intent.amountCents, intent.currency, intent.id, at, at],
+    'run',
+  );
+  const row = await paymentForVersion(em, companyId, versionId);
+  if (!row || row.intent_id !== intent.id) throw new ConflictError('This proposal already has another deposit.');
+  return row;
+}
+
+/**
+ * Refunds a paid deposit through the payment service (a cancellation inside the window calls this).
+ * The key `refund:<payment id>` makes a retried refund one refund; the row becomes `refunded` when the
+ * service's webhook says the charge was refunded.
+ */
+export async function refundDeposit(em: EntityManager, payments: Payments, payment: PaymentRow): Promise<string> {
+  if (payment.state !== 'succeeded') throw new ConflictError('Only a paid deposit can be refunded.');
+  const refund = await payments.refund(payment.intent_id, `refund:${payment.id}`);
+  await em.execute(
+    'update "payment" set "refund_id" = ?, "updated_at" = ? where "id" = ? and "refund_id" is null',
+    [refund.id, new Date(), payment.id],
+    'run',
+  );
+  return refund.id;
+}
+
+export type WebhookOutcome = 'applied' | 'unchanged' | 'ignored' | 'unknown-intent' | 'mismatch' | 'duplicate';
+
+interface EventObject {
+  id?: string;
+  object?: string;
+  amount?: number;
+  currency?: string;
+  payment_intent?: string;
+  refunded?: boolean;
+  metadata?: Record<string, string>;
+  last_payment_error?: { message?: string } | null;
+}
+
+/** The moves a webhook may make; nothing goes backwards (a late failure never un-pays a deposit). */
+function nextState(
+  type: string,
+  obj: EventObject,
+  from: PaymentState,
+): { to: PaymentState; failure?: string | null } | null {
+  if (type === 'payment_intent.succeeded' && (from === 'created' || from === 'failed')) return { to: 'succeeded' };
+  if (type === 'payment_intent.payment_failed' && from === 'created')
+    return { to: 'failed', failure: (obj.last_payment_error?.message ?? 'The payment failed.').slice(0, 500) };
+  if (type === 'charge.refunded' && obj.refunded === true && from === 'succeeded') return { to: 'refunded' };
+  return null;
+}
+
+const HANDLED = new Set(['payment_intent.succeeded', 'payment_intent.payment_failed', 'charge.refunded']);
+
+/**
+ * Applies one verified webhook event, once: its id goes into payment_webhook_event first (unique), so
+ * the same event again — sequentially or concurrently — finds it there and changes nothing. An intent's
+ * amount, currency or metadata that does not match the row is recorded as a mismatch and not applied.
+ */
+export async function applyPaymentEvent(em: EntityManager, event: PaymentEvent): Promise<WebhookOutcome> {
+  return em.transactional(async (tx) => {
+    const at = new Date();
+    const inserted = await tx.execute<Array<{ event_id: string }>>(
+      `insert into "payment_webhook_event" ("event_id", "type", "received_at") values (?, ?, ?)
+       on conflict ("event_id") do nothing returning "event_id"`,
+      [event.id, event.type, at],
+    );
+    if (inserted.length === 0) return 'duplicate';
+    const obj = event.data.object as EventObject;
+    const settle = async (outcome: Exclude<WebhookOutcome, 'duplicate'>, payment?: PaymentRow) => {
+      await tx.execute(
+        'update "payment_webhook_event" set "outcome" = ?, "payment_id" = ?, "company_id" = ? where "event_id" = ?',
+        [outcome, payment?.id ?? null, payment?.company_id ?? null, event.id],
+        'run',
+      );
+      return outcome;
+    };
+    if (!HANDLED.has(event.type)) return settle('ignored');
+    const intentId = obj.object === 'payment_intent' ? obj.id : obj.payment_intent;
+    const rows = await tx.execute<PaymentRow[]>('select * from "payment" where "intent_id" = ? for update', [
+      intentId ?? '',
+    ]);
+    const payment = rows[0];
+    if (!payment) return settle('unknown-intent');
+    if (obj.object === 'payment_intent') {
+      const m = obj.metadata ?? {};
+      const matches =
+        obj.amount === payment.amount_cents &&
+        m.companyId === payment.company_id &&
+        m.versionId === payment.proposal_version_id;
+      if (!matches) return settle('mismatch', payment);
+    }
+    const move = nextState(event.type, obj, payment.state);
+    if (!move) return settle('unchanged', payment);
+    const paid = move.to === 'succeeded' || move.to === 'refunded';
+    await tx.execute(
+      `update "payment" set "state" = ?, "updated_at" = ?, "failure" = ?,
+         "paid_at" = coalesce("paid_at", ?::timestamptz), "refunded_at" = ?::timestamptz
+       where "id" = ?`,
+      [
+        move.to,
+        at,
+        move.to === 'failed' ? (move.failure ?? null) : null,
+        paid ? at : null,
+        move.to === 'refunded' ? at : null,
+        payment.id,
+      ],
+      'run',
+    );
+    return settle('applied', payment);
+  });
+}

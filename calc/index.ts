@@ -79,6 +79,8 @@ export * from './src/catalog/records';
 export * from './src/catalog/diff-import';
 export * from './src/catalog/metric-columns';
 
+export * from './src/contract-law/cooling-off';
+
 export * from './src/explain/format';
 export * from './src/explain/explanation';
 export * from './src/pricing/discount';

@@ -27,6 +27,9 @@ export const CALC_ERROR_MESSAGES = {
   UNKNOWN_EQUIPMENT: 'The design refers to equipment that is not in the catalog.',
   UNKNOWN_ROOM: 'A zone refers to a room that is not in the home.',
   UNKNOWN_ZONE: 'A line-set circuit refers to a zone that is not in the design.',
+  NOT_A_DATE: 'Enter a calendar date as YYYY-MM-DD.',
+  DATE_OUT_OF_RANGE: 'The date must be in the years 1978 to 9999.',
+  DATE_BEFORE_TRANSACTION: 'The date checked is before the date of the transaction.',
 } as const;
 
 export type CalcErrorCode = keyof typeof CALC_ERROR_MESSAGES;

@@ -1,6 +1,9 @@
 import { SelectOptions } from '../../../components/ui/field-shell';
 import { ControlledField, type FieldFrameProps } from './controlled-field';
 
+/** Longer than this, a choice is cut short in a 375 px phone's select box. */
+const LONG_CHOICE = 26;
+
 /**
  * A select for an optional field: its first choice ('') leaves the field out (undefined), as calc's schema
  * wants for "no heat kit", "no ducts" or "the zone's first room"; `toValue` and `fromValue` may hold an object
@@ -18,16 +21,28 @@ export function OptionalSelect({
 }) {
   return (
     <ControlledField {...frame}>
-      {(field, control) => (
-        <select
-          {...control}
-          value={fromValue(field.value)}
-          onChange={(e) => field.onChange(toValue(e.target.value, field.value))}
-          onBlur={field.onBlur}
-        >
-          <SelectOptions options={options} />
-        </select>
-      )}
+      {(field, control) => {
+        const chosen = options.find((o) => o.value === fromValue(field.value))?.label ?? '';
+        return (
+          <>
+            <select
+              {...control}
+              value={fromValue(field.value)}
+              onChange={(e) => field.onChange(toValue(e.target.value, field.value))}
+              onBlur={field.onBlur}
+            >
+              <SelectOptions options={options} />
+            </select>
+            {/* A phone's select cuts a long choice short ("Tessaline 5 kW electric…"): the whole of it under the
+                box, for the eye only (the select itself tells a screen reader). */}
+            {chosen.length > LONG_CHOICE ? (
+              <p className="text-sm text-ink-900 sm:hidden" aria-hidden="true" data-testid="chosen-in-full">
+                {chosen}
+              </p>
+            ) : null}
+          </>
+        );
+      }}
     </ControlledField>
   );
 }

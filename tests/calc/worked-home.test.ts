@@ -21,10 +21,11 @@ const RAD = Math.PI / 180;
 const round = (x: number) => Math.floor(x + 0.5); // half-up for the non-negative parts
 const pos = (x: number) => Math.max(0, x);
 
-// ASHRAE 1997 ch. 28 Table 2 fraction of daily range, hours 1–24 [MEM] (peak 15:00, low 05:00)
+// ASHRAE Handbook—Fundamentals 2021 ch. 14 Table 6, fraction of daily temperature range, hours 1–24 (top 14:00 and
+// 15:00, low 05:00) [PUB; tests/calc/design-day.test.ts checks it against the handbook's worked Example 9]
 const FRACTION = [
-  0.87, 0.92, 0.96, 0.99, 1.0, 0.98, 0.93, 0.84, 0.71, 0.56, 0.39, 0.23, 0.11, 0.03, 0.0, 0.03, 0.1, 0.21, 0.34, 0.47,
-  0.58, 0.68, 0.76, 0.82,
+  0.88, 0.92, 0.95, 0.98, 1.0, 0.98, 0.91, 0.74, 0.55, 0.38, 0.23, 0.13, 0.05, 0.0, 0.0, 0.06, 0.14, 0.24, 0.39, 0.5,
+  0.59, 0.68, 0.75, 0.82,
 ];
 /**
  * Leakage by hand [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 17 eqs. (8)–(10), Table 3 and Table 4]: effective
@@ -257,8 +258,8 @@ describe('worked example: three-room house, hour by hour', () => {
     // β at 16:00: sin β = cos 40 cos 20.44 cos 60 + sin 40 sin 20.44 = 0.3589 + 0.2245 = 0.5834 → β 35.69°
     const s = SUN[15]!;
     expect(s.beta / RAD).toBeCloseTo(35.69, 1);
-    // Outdoor at 16:00 = 95 − 0.03 × 20 = 94.4 °F; at 05:00 = 75 °F
-    expect(To[15]).toBeCloseTo(94.4, 9);
+    // Outdoor at 16:00 = 95 − 0.06 × 20 = 93.8 °F; at 05:00 = 75 °F
+    expect(To[15]).toBeCloseTo(93.8, 9);
     expect(To[4]).toBe(75);
     // the whole design day is in calc's result: same outdoor profile
     const h = homeLoad({ home: threeRoomHome });

@@ -188,20 +188,19 @@ export function surfaceIrradiance(
 }
 
 /**
- * Fraction of the daily range below the design dry bulb at each hour 1–24 (local solar time):
- * 0 at 15:00 (the peak), 1 at 05:00 (the minimum), as the ASHRAE Handbook—Fundamentals 1997 ch. 28
- * Table 2 (2001 ch. 27) "percentage of daily range" gives it; the 2009+ edition's table differs slightly
- * (0.00 at 14:00). [Assumption (no published source found): the digits are recalled — no public copy of
- * either table was found. The shape is checked in tests/calc/method-constants.test.ts against a published
- * diurnal curve (Campbell and Norman, An Introduction to Environmental Biophysics, 2nd ed., Springer 1998,
- * eq. 2.2), and its effect on the review ranch is stated in METHOD_ASSUMPTIONS.]
+ * Fraction of the daily range below the design dry bulb at each hour 1–24 (local solar time): 1 at 05:00 (the
+ * minimum), 0 at 14:00 and 15:00 (the top). [PUB: ASHRAE Handbook—Fundamentals 2021 (SI) ch. 14 Table 6
+ * "Fraction of Daily Temperature Range", p. 14.13 — the table the 2009 and later editions give for design-day
+ * temperatures; read in two public copies (an open-source climatic-design library that cites the page, and a copy
+ * of the 2021 chapter), and checked against the chapter's worked Example 9 (Table 8) in
+ * tests/calc/design-day.test.ts. It replaced the 1997 ch. 28 Table 2 digits, which were recalled.]
  */
 export const DAILY_RANGE_FRACTION = [
-  0.87, 0.92, 0.96, 0.99, 1.0, 0.98, 0.93, 0.84, 0.71, 0.56, 0.39, 0.23, 0.11, 0.03, 0.0, 0.03, 0.1, 0.21, 0.34, 0.47,
-  0.58, 0.68, 0.76, 0.82,
+  0.88, 0.92, 0.95, 0.98, 1.0, 0.98, 0.91, 0.74, 0.55, 0.38, 0.23, 0.13, 0.05, 0.0, 0.0, 0.06, 0.14, 0.24, 0.39, 0.5,
+  0.59, 0.68, 0.75, 0.82,
 ] as const;
 export const DAILY_RANGE_SOURCE =
-  '[ASHRAE Handbook—Fundamentals 1997 ch. 28 Table 2, fraction of daily range, peak 15:00, low 05:00; its digits are an assumption, see below]';
+  '[PUB: ASHRAE Handbook—Fundamentals 2021 ch. 14 Table 6, fraction of daily temperature range: 1 at 05:00, 0 at 14:00 and 15:00]';
 
 /** Outdoor dry bulb at `hour` (1–24, local solar time), °F = design dry bulb − fraction(hour) × daily range. */
 export function outdoorDryBulbAtHour({

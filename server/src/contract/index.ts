@@ -14,3 +14,4 @@ export * from './api-version';
 export * from './links';
 export * from './device';
 export * from './proposal';
+export * from './cooling-off-notice';

@@ -98,17 +98,17 @@ export default tseslint.config(
   ...featureBoundaries,
   entityBoundary,
   {
-    files: ['server/**/*.ts'],
+    files: ['server/**/*.{ts,tsx}'],
     rules: { 'no-restricted-imports': noOurs([['**/client/**']], 'The server does not import client code.') },
   },
   {
     // Server layering: no import cycles (between modules or anywhere), and lib/ never reaches into a module.
-    files: ['server/**/*.ts'],
+    files: ['server/**/*.{ts,tsx}'],
     plugins: { import: importPlugin },
     settings: {
-      'import/resolver': { node: { extensions: ['.ts', '.js'] } },
-      'import/parsers': { '@typescript-eslint/parser': ['.ts'] },
-      'import/extensions': ['.ts', '.js'],
+      'import/resolver': { node: { extensions: ['.ts', '.tsx', '.js'] } },
+      'import/parsers': { '@typescript-eslint/parser': ['.ts', '.tsx'] },
+      'import/extensions': ['.ts', '.tsx', '.js'],
     },
     rules: {
       'import/no-cycle': ['error', { ignoreExternal: true }],

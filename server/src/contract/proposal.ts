@@ -27,6 +27,10 @@ export const PROPOSAL_EVENT_KINDS = [
   'cancelled',
   'link-revoked',
   'marked-lost',
+  /** The version's PDF was rendered and its SHA-256 recorded (data: sha256, bytes). */
+  'pdf-ready',
+  /** The PDF could not be made after the queue's last try (data: reason). */
+  'pdf-failed',
 ] as const;
 export type ProposalEventKind = (typeof PROPOSAL_EVENT_KINDS)[number];
 

@@ -20,6 +20,7 @@ import { roomRoutes } from './rooms/room.routes';
 import { companyDataRoutes } from './company-data/company-data.routes';
 import { deskRoutes } from './desk/desk.routes';
 import { paymentHooks } from './payments/payments.hooks';
+import { proposalPdfRoutes } from './proposals/proposal-pdf.routes';
 
 /** A module's routes under /api<prefix> (tests add their own through createApp's extras). */
 export type ModuleMount = readonly [prefix: string, register: (api: ApiRouter) => void];
@@ -62,6 +63,7 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/jobs', photoRoutes);
   mount('/jobs', loadsRoutes);
   mount('/jobs', deskRoutes);
+  mount('/jobs', proposalPdfRoutes);
   mount('/company-data', companyDataRoutes);
   for (const [prefix, register] of extra) mount(prefix, register);
 }

@@ -1,5 +1,6 @@
 import { composeResetMessage } from '../modules/auth/password.service';
 import { sendMessage } from '../modules/mail/mail.service';
+import { renderVersionPdf } from '../modules/proposals/proposal-pdf.service';
 import type { Services } from '../services/services';
 import type { TaskHandlers } from './kinds';
 
@@ -23,5 +24,6 @@ export function taskHandlers(services: Omit<Services, 'queue'>): TaskHandlers {
         run,
       );
     },
+    'render-proposal-pdf': ({ versionId }, run) => renderVersionPdf(services, versionId, run),
   };
 }

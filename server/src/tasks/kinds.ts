@@ -14,6 +14,11 @@ export const TASKS = {
     payload: z.strictObject({ messageId: z.uuid() }),
     maxAttempts: 10,
   },
+  /** Renders a proposal version's PDF from its frozen snapshot and records its SHA-256 (modules/proposals). */
+  'render-proposal-pdf': {
+    payload: z.strictObject({ versionId: z.uuid() }),
+    maxAttempts: 5,
+  },
 } as const;
 
 export type TaskKind = keyof typeof TASKS;

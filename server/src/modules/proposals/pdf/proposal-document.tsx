@@ -1,0 +1,60 @@
+import { Document } from '@react-pdf/renderer';
+import type { ProposalSnapshot } from '@contract';
+import { CautionsSection, SignaturePage, TermsSection } from './closing-sections';
+import { Cover } from './cover';
+import { day, line } from './format';
+import { LoadsSection } from './loads-section';
+import type { Logo } from './logo';
+import { OptionSection } from './option-section';
+import { ProposalPage, type PageFrameText } from './parts';
+
+export interface ProposalDocumentProps {
+  readonly snapshot: ProposalSnapshot;
+  readonly versionNumber: number;
+  readonly logo: Logo | null;
+}
+
+/**
+ * The proposal as a PDF, our own layout: a cover, the home's loads, one page (or more) per option with its
+ * installation work, the terms, warranty and safety cautions, and the acceptance page. Everything printed
+ * comes from the frozen snapshot, so the same version always prints the same words.
+ */
+export function ProposalDocument({ snapshot, versionNumber, logo }: ProposalDocumentProps) {
+  const customer = line(snapshot.customer.name);
+  const frame: PageFrameText = {
+    company: line(snapshot.company.name),
+    title: `Proposal for ${customer} · version ${versionNumber}`,
+    issued: `Issued ${day(snapshot.issuedAt)}`,
+  };
+  return (
+    <Document
+      title={`Proposal for ${customer}, version ${versionNumber}`}
+      author={frame.company}
+      subject="Heating and cooling proposal"
+      creator="Gaugeline"
+      producer="Gaugeline"
+      language="en-US"
+      creationDate={new Date(snapshot.issuedAt)}
+      modificationDate={new Date(snapshot.issuedAt)}
+    >
+      <ProposalPage frame={frame} bookmark="Cover">
+        <Cover snapshot={snapshot} versionNumber={versionNumber} logo={logo} />
+      </ProposalPage>
+      <ProposalPage frame={frame} bookmark="Your home’s loads">
+        <LoadsSection snapshot={snapshot} />
+      </ProposalPage>
+      {snapshot.options.map((o) => (
+        <ProposalPage key={o.position} frame={frame} bookmark={`Option ${o.position}: ${line(o.name)}`}>
+          <OptionSection option={o} />
+        </ProposalPage>
+      ))}
+      <ProposalPage frame={frame} bookmark="Terms, warranty and safety">
+        <TermsSection company={snapshot.company} />
+        <CautionsSection cautions={snapshot.cautions} />
+      </ProposalPage>
+      <ProposalPage frame={frame} bookmark="Acceptance">
+        <SignaturePage snapshot={snapshot} versionNumber={versionNumber} />
+      </ProposalPage>
+    </Document>
+  );
+}

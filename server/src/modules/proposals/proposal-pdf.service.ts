@@ -1,0 +1,147 @@
+import { createHash } from 'node:crypto';
+import type { EntityManager, MikroORM } from '@mikro-orm/postgresql';
+import { proposalSnapshot, type PdfState } from '@contract';
+import { ConflictError, NotFoundError } from '../../lib/errors';
+import { logger } from '../../lib/logger';
+import type { ServiceContext } from '../../lib/service-context';
+import type { Queue } from '../../services/queue';
+import type { Clock } from '../../services/services';
+import type { Storage } from '../../services/storage';
+import type { TaskRun } from '../../tasks/kinds';
+import { findJob } from '../jobs/job-access';
+import { loadLogo } from './pdf/logo';
+import { renderProposalPdf } from './pdf/render-proposal';
+import { ProposalEventSchema, ProposalVersionSchema } from './proposal.entity';
+
+/**
+ * A version's PDF (issue 14): rendered in the background from the frozen snapshot by the queue's
+ * `render-proposal-pdf` task, stored through services/storage, its SHA-256 recorded on the version. The
+ * database lets the PDF columns change only while pdf_sha256 is NULL, so a PDF, once recorded, stays.
+ */
+
+/** One waiting render per version: adding it again (a retry from the screen) replaces the waiting one. */
+const jobKey = (versionId: string) => `proposal-pdf:${versionId}`;
+/** The storage key: one per version, so a try that stored the bytes but died before recording them is overwritten. */
+export const pdfStorageKey = (versionId: string) => `proposal-pdf-${versionId}`;
+
+/** Queues the render of a version's PDF, inside the caller's transaction when given one (issuing does). */
+export async function queuePdfRender(queue: Queue, versionId: string, em?: EntityManager): Promise<void> {
+  await queue.add('render-proposal-pdf', { versionId }, { jobKey: jobKey(versionId), ...(em ? { em } : {}) });
+}
+
+export interface RenderDeps {
+  readonly orm: MikroORM;
+  readonly storage: Storage;
+  readonly clock: Clock;
+}
+
+const setState = (em: EntityManager, versionId: string, state: PdfState) =>
+  em.execute(
+    'update "proposal_version" set "pdf_state" = ? where "id" = ? and "pdf_sha256" is null',
+    [state, versionId],
+    'run',
+  );
+
+/**
+ * One try of the task. A version whose PDF is already recorded is left alone (a job that runs twice
+ * renders once). While trying it reads 'rendering'; a failed try puts it back to 'waiting' for the queue's
+ * next try, and the last failed try marks it 'failed' with an audit event; the error goes back to the
+ * queue either way, so it is retried with back-off.
+ */
+export async function renderVersionPdf(deps: RenderDeps, versionId: string, run: TaskRun): Promise<void> {
+  const em = deps.orm.em.fork();
+  const version = await em.findOne(ProposalVersionSchema, { id: versionId });
+  if (!version) {
+    logger.warn({ versionId }, 'render-proposal-pdf: no such version; dropped');
+    return;
+  }
+  if (version.pdfSha256) return;
+  await setState(em, versionId, 'rendering');
+  try {
+    const snapshot = proposalSnapshot.parse(version.snapshot);
+    const logo = await loadLogo(deps.storage, snapshot.company.logoKey);
+    const bytes = await renderProposalPdf({ snapshot, versionNumber: version.number, logo });
+    const sha256 = createHash('sha256').update(bytes).digest('hex');
+    const key = pdfStorageKey(versionId);
+    await deps.storage.put(key, bytes, 'application/pdf');
+    await em.transactional(async (tx) => {
+      const n = await tx.execute<{ affectedRows?: number }>(
+        `update "proposal_version" set "pdf_state" = 'ready', "pdf_sha256" = ?, "pdf_key" = ?
+          where "id" = ? and "pdf_sha256" is null`,
+        [sha256, key, versionId],
+        'run',
+      );
+      if (n.affectedRows !== 1) return; // another try recorded it first
+      tx.create(ProposalEventSchema, {
+        company: version.company,
+        proposal: version.proposal,
+        version,
+        kind: 'pdf-ready',
+        at: deps.clock.now(),
+        data: { sha256, bytes: bytes.length, attempt: run.attempt },
+      });
+    });
+  } catch (err) {
+    const last = run.attempt >= run.maxAttempts;
+    const after = deps.orm.em.fork(); // the try's EntityManager may hold a half-done unit of work
+    await setState(after, versionId, last ? 'failed' : 'waiting');
+    if (last) {
+      const reason = err instanceof Error ? err.message.slice(0, 300) : 'unknown error';
+      after.create(ProposalEventSchema, {
+        company: version.company,
+        proposal: version.proposal,
+        version,
+        kind: 'pdf-failed',
+        at: deps.clock.now(),
+        data: { reason, attempts: run.attempt },
+      });
+      await after.flush();
+    }
+    throw err;
+  }
+}
+
+/** The version of one of the actor's jobs by number, with what the PDF route needs; 404 otherwise. */
+async function findVersion(ctx: ServiceContext, jobId: string, number: number) {
+  const job = await findJob(ctx, jobId);
+  const version = await ctx.em.findOne(ProposalVersionSchema, {
+    company: ctx.actor.companyId,
+    proposal: { job: job.id },
+    number,
+  });
+  if (!version) throw new NotFoundError('The proposal version');
+  return version;
+}
+
+/** A file name any system accepts: "proposal-pat-quinlan-v2.pdf" (ASCII letters, digits and hyphens). */
+export function pdfFileName(customerName: string, number: number): string {
+  const slug = customerName
+    .normalize('NFKD')
+    .replace(/\p{M}/gu, '')
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+    .slice(0, 40)
+    .replace(/-+$/g, '');
+  return `proposal-${slug === '' ? 'customer' : slug}-v${number}.pdf`;
+}
+
+/** The stored PDF of a version; 409 while it is being prepared or after it failed (the screen says which). */
+export async function versionPdf(
+  ctx: ServiceContext & { storage: Storage },
+  jobId: string,
+  number: number,
+): Promise<{ bytes: Buffer; fileName: string; sha256: string }> {
+  const version = await findVersion(ctx, jobId, number);
+  if (version.pdfState !== 'ready' || !version.pdfKey || !version.pdfSha256)
+    throw new ConflictError(
+      version.pdfState === 'failed'
+        ? 'The PDF of this version could not be made. Try again from the proposal screen.'
+        : 'The PDF of this version is still being prepared.',
+      { pdfState: version.pdfState },
+    );
+  const bytes = await ctx.storage.get(version.pdfKey);
+  if (bytes === null) throw new NotFoundError('The PDF file');
+  const snapshot = proposalSnapshot.parse(version.snapshot);
+  return { bytes, fileName: pdfFileName(snapshot.customer.name, version.number), sha256: version.pdfSha256 };
+}

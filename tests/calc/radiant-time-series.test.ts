@@ -3,7 +3,11 @@ import { describe, expect, it } from 'vitest';
 import {
   designDayContext,
   FACINGS,
+  homeInputSchema,
   homeLoad,
+  homeLoadFromParsed,
+  houseSchema,
+  liveHome,
   NONSOLAR_RTS_PERCENT,
   radiantTimeSeries,
   RADIANT_FRACTION,
@@ -163,5 +167,35 @@ describe('the design day carries the series', () => {
     expect(h.totals.sensibleBtuh).toBeLessThan(h.block.sumOfRoomPeaksSensibleBtuh);
     expect(h.block.hour).toBeGreaterThanOrEqual(13);
     expect(h.block.hour).toBeLessThanOrEqual(17);
+  });
+});
+
+describe('the house chooses its construction class', () => {
+  it('unset is medium, said to be the default; a chosen class is used and named', () => {
+    const plain = homeLoad({ home: ranchHome });
+    expect(plain.designDay).toMatchObject({ thermalMass: 'medium', thermalMassAssumed: true });
+    const heavy = homeLoad({ home: { ...ranchHome, thermalMass: 'heavy' } });
+    expect(heavy.designDay).toMatchObject({ thermalMass: 'heavy', thermalMassAssumed: false });
+    const light = homeLoad({ home: { ...ranchHome, thermalMass: 'light' } });
+    // [PUB: Tables 19/20 — the heavier the room, the less of each hour's gain reaches the load at once, so the
+    // ranch's afternoon peak falls light → medium → heavy]
+    expect(light.totals.sensibleBtuh).toBeGreaterThan(plain.totals.sensibleBtuh);
+    expect(plain.totals.sensibleBtuh).toBeGreaterThan(heavy.totals.sensibleBtuh);
+    // heating has no sun and no storage: unchanged
+    expect(heavy.totals.heatingBtuh).toBe(plain.totals.heatingBtuh);
+  });
+
+  it('an unknown class is refused with a plain message', () => {
+    const r = houseSchema.safeParse({ thermalMass: 'granite' });
+    expect(r.success).toBe(false);
+    expect(r.error?.issues[0]?.message).toBe('Choose light, medium or heavy');
+  });
+
+  it('the live engine follows a change of class and stays equal to the full calculation', () => {
+    const live = liveHome();
+    for (const thermalMass of ['light', 'heavy', undefined, 'medium'] as const) {
+      const home = homeInputSchema.parse({ ...ranchHome, ...(thermalMass ? { thermalMass } : {}) });
+      expect(live.load(home)).toEqual(homeLoadFromParsed(home));
+    }
   });
 });

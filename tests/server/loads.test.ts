@@ -173,6 +173,25 @@ describe('GET /api/jobs/:id/loads', () => {
     expect(again.body.job.house).toEqual(house);
   });
 
+  it('the house’s heat storage class is saved with the job and names the radiant time factors the loads use; a bad one is refused', async () => {
+    const job = await newJob(sales);
+    await newRoom(sales, job.id, { name: 'Sun room', areaFt2: 200, above: { kind: 'attic' } });
+    const before = await sales.agent.get(`/api/jobs/${job.id}/loads`);
+    expect(before.body.loads.designDay).toMatchObject({ thermalMass: 'medium', thermalMassAssumed: true });
+    const saved = await patch(sales, `/api/jobs/${job.id}`, job.version).send({ house: { thermalMass: 'heavy' } });
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200);
+    expect(saved.body.job.house).toEqual({ thermalMass: 'heavy' });
+    const r = await sales.agent.get(`/api/jobs/${job.id}/loads`);
+    expect(r.body.loads.designDay).toMatchObject({ thermalMass: 'heavy', thermalMassAssumed: false });
+    // [PUB: ASHRAE Fundamentals ch. 18 Tables 19/20 — a heavy room gives back less of each hour's gain at once]
+    expect(r.body.loads.totals.sensibleBtuh).toBeLessThan(before.body.loads.totals.sensibleBtuh);
+    const bad = await patch(sales, `/api/jobs/${job.id}`, saved.body.job.version).send({
+      house: { thermalMass: 'granite' },
+    });
+    expectProblem(bad, 400);
+    expect((await sales.agent.get(`/api/jobs/${job.id}`)).body.job.house).toEqual({ thermalMass: 'heavy' });
+  });
+
   it('a ducted system in the house (ducts in the attic) is saved and its duct gains and losses are in the loads', async () => {
     const job = await newJob(sales);
     await newRoom(sales, job.id, { name: 'Main bedroom', areaFt2: 200, above: { kind: 'attic' } });

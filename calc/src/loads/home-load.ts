@@ -7,7 +7,7 @@ import { homeInputSchema, type Home, type HomeInput, type VentilationKind } from
 import { BTUH_PER_TON } from '../units';
 import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
 import { designDayContext, HOURS, type DesignDayContext } from './design-day-context';
-import { DEFAULT_RECOVERY_SENSIBLE, RLF_INTERNAL } from './hourly-method';
+import { DEFAULT_RECOVERY_SENSIBLE, RLF_INTERNAL, type RtsConstruction } from './hourly-method';
 import {
   designLeakageCfm,
   houseStackHeightFt,
@@ -74,6 +74,9 @@ export interface HomeLoad {
     readonly tauD: number;
     readonly skySource: string;
     readonly skyIsGeneric: boolean;
+    /** The construction class whose radiant time factors store the heat, and whether it is the default (none chosen). */
+    readonly thermalMass: RtsConstruction;
+    readonly thermalMassAssumed: boolean;
     /** Some room has basement walls or a basement floor below grade. */
     readonly belowGrade: boolean;
     /** Design ground surface temperature used below grade, °F, and whether it is the outdoor heating design stand-in. */
@@ -347,7 +350,7 @@ export function houseAir(home: Home): HouseAir {
 export function homeLoadFromParsed(
   home: Home,
   psy: DesignPsychrometrics = designPsychrometrics(home.designConditions),
-  ctx: DesignDayContext = designDayContext(home.designConditions),
+  ctx: DesignDayContext = designDayContext(home.designConditions, home.thermalMass),
 ): HomeLoad {
   const air = houseAir(home);
   return homeLoadFromWork(
@@ -476,6 +479,8 @@ export function homeLoadFromWork(
       tauD: ctx.tauD,
       skySource: ctx.skySource,
       skyIsGeneric: ctx.skyIsGeneric,
+      thermalMass: ctx.construction,
+      thermalMassAssumed: home.thermalMass === undefined,
       belowGrade: home.rooms.some(
         (r) => r.below.kind === 'basement-floor' || r.exposedWalls.some((w) => (w.belowGradeFt ?? 0) > 0),
       ),

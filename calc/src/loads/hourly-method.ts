@@ -1,3 +1,5 @@
+import { THERMAL_MASS_CLASSES, type ThermalMass } from '../schemas/home';
+
 /**
  * The constants of the hour-by-hour cooling method, each with its source tag. Values that
  * are our own simplification say so ([OWN]); see METHOD_NOTES for the plain-word statement.
@@ -23,9 +25,14 @@
  * carpet") and a Python RTS module that embeds both whole tables ("ASHRAE Fundamentals 2021, Chapter 18,
  * Tables 19 and 20"). tests/calc/radiant-time-series.test.ts checks that every column sums to 100.]
  */
-export const RTS_CONSTRUCTIONS = ['light', 'medium', 'heavy'] as const;
-export type RtsConstruction = (typeof RTS_CONSTRUCTIONS)[number];
-/** The construction class when none is chosen. [OWN: the middle of the table, as the issue asks] */
+export const RTS_CONSTRUCTIONS = THERMAL_MASS_CLASSES;
+export type RtsConstruction = ThermalMass;
+/**
+ * The construction class when the house has none chosen (its `thermalMass`). [OWN: the middle of the table. The
+ * handbook's classes are made of particular wall, floor and ceiling layers (MEM: light a framed wall over a thin
+ * floor; medium a brick-veneer wall over a 4 in concrete floor; heavy 8 in concrete walls and floors); the house
+ * descriptions the walk-through offers for them are our own reading.]
+ */
 export const DEFAULT_RTS_CONSTRUCTION: RtsConstruction = 'medium';
 
 export const NONSOLAR_RTS_PERCENT: Readonly<Record<RtsConstruction, readonly number[]>> = {

@@ -3,6 +3,7 @@ import type { Home } from '../schemas/home';
 import type { Room } from '../schemas/room-input';
 import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
 import { designDayContext, HOURS, type DesignDayContext } from './design-day-context';
+import { DEFAULT_RTS_CONSTRUCTION, type RtsConstruction } from './hourly-method';
 import { ductHours, ductSystemsOf, roomWithDucts, type HomeDuctHours } from './home-ducts';
 import { homeLoadFromWork, houseAir, type HomeLoad, type HouseAir } from './home-load';
 import { roomHeating, roomHourly, roomLoadFromHourly, type RoomAir, type RoomHourly, type RoomLoad } from './room-load';
@@ -78,17 +79,19 @@ export function liveHome(): LiveHome {
    * room panel and the pinned bar ask about the same keystroke, and other rooms of an unchanged home.
    */
   let combined: { work: readonly RoomHourly[]; ducts: string; ds: HomeDuctHours[]; block: number } | null = null;
-  const dayFor = (c: DesignConditions): [DesignPsychrometrics, DesignDayContext] => {
+  let massSeen: RtsConstruction = DEFAULT_RTS_CONSTRUCTION;
+  const dayFor = (c: DesignConditions, mass: RtsConstruction): [DesignPsychrometrics, DesignDayContext] => {
     // The same object read the same last time (the walk-through parses the conditions once); else compare by value.
-    if (c !== conditionsSeen || !psy || !ctx) {
-      const key = JSON.stringify(c);
+    if (c !== conditionsSeen || mass !== massSeen || !psy || !ctx) {
+      const key = `${mass} ${JSON.stringify(c)}`;
       if (key !== conditionsKey || !psy || !ctx) {
         conditionsKey = key;
         psy = designPsychrometrics(c);
-        ctx = designDayContext(c);
+        ctx = designDayContext(c, mass);
         held = new Map();
       }
       conditionsSeen = c;
+      massSeen = mass;
     }
     return [psy, ctx];
   };
@@ -96,7 +99,7 @@ export function liveHome(): LiveHome {
   const prepare = (
     home: Home,
   ): { p: DesignPsychrometrics; c: DesignDayContext; air: HouseAir; work: RoomHourly[]; kept: Held[] } => {
-    const [p, c] = dayFor(home.designConditions);
+    const [p, c] = dayFor(home.designConditions, home.thermalMass ?? DEFAULT_RTS_CONSTRUCTION);
     const air = houseAir(home);
     const next = new Map<string, Held>();
     const work: RoomHourly[] = [];

@@ -25,6 +25,13 @@ export const ventilationSchema = z.object({
   latentEffectiveness: bounded('Latent effectiveness', 0, 0.9).optional(),
 });
 
+/**
+ * How much heat the house's walls, floors and furnishings store: the construction class of the radiant time
+ * factors (ASHRAE Handbook—Fundamentals ch. 18 Tables 19 and 20, light / medium / heavy). Unset: medium.
+ */
+export const THERMAL_MASS_CLASSES = ['light', 'medium', 'heavy'] as const;
+export const thermalMassSchema = z.enum(THERMAL_MASS_CLASSES, { error: 'Choose light, medium or heavy' });
+
 /** What the walk-through records about the whole house beyond its rooms (all optional). */
 export const houseSchema = z.object({
   /** Blower-door airflow at 50 Pa; when given it replaces the tightness guess. */
@@ -33,6 +40,8 @@ export const houseSchema = z.object({
   ventilation: ventilationSchema.optional(),
   /** A ducted system's ducts (location, insulation, leakage); absent when no ducted system serves the home. */
   ducts: ductSystemSchema.optional(),
+  /** The construction class for heat storage (radiant time series); absent: medium. */
+  thermalMass: thermalMassSchema.optional(),
 });
 
 /** The most rooms one home may have. */
@@ -105,3 +114,4 @@ export type Ventilation = z.output<typeof ventilationSchema>;
 export type House = z.output<typeof houseSchema>;
 export type HouseInput = z.input<typeof houseSchema>;
 export type VentilationKind = z.output<typeof ventilationKindSchema>;
+export type ThermalMass = z.output<typeof thermalMassSchema>;

@@ -42,7 +42,8 @@ export function designDayLine(load: HomeLoad): string {
     : d.groundAssumed
       ? ` Basement walls and floors: no ground temperature entered, so the outdoor heating design ${d.groundDesignF} °F stands in (overstates their loss).`
       : ` Basement walls and floors: design ground temperature ${d.groundDesignF} °F.`;
-  return `Design day ${MONTHS[d.month - 1] ?? ''} 21 at ${lat}; ${sky}.${ground}`;
+  const mass = `Heat stored by the rooms: ASHRAE radiant time series, ${d.thermalMass} construction${d.thermalMassAssumed ? ' (the default: none chosen for the house)' : ''}.`;
+  return `Design day ${MONTHS[d.month - 1] ?? ''} 21 at ${lat}; ${sky}. ${mass}${ground}`;
 }
 
 const DUCT_PLACE: Record<string, string> = {

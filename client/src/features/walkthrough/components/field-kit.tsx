@@ -172,18 +172,19 @@ interface SelectProps {
   onChange: (value: string) => void;
   options: readonly { readonly value: string; readonly label: string }[];
   error?: string | undefined;
+  hint?: ReactNode;
 }
 
-export function SelectInput({ label, value, onChange, options, error }: SelectProps) {
+export function SelectInput({ label, value, onChange, options, error, hint }: SelectProps) {
   const id = useId();
   return (
-    <FieldShell id={id} label={label} error={error}>
+    <FieldShell id={id} label={label} error={error} hint={hint}>
       <select
         id={id}
         className={inputClass}
         value={value}
         onChange={(e) => onChange(e.target.value)}
-        {...aria(id, error, false)}
+        {...aria(id, error, hint !== undefined)}
       >
         <SelectOptions options={options} />
       </select>

@@ -27,6 +27,13 @@ const DUCT_LEAKAGE = [
   { value: 'leaky', label: 'Leaky (about 20 % each side)' },
 ];
 
+/** The construction classes of the radiant time factors in words a person at the house can tell apart. */
+const THERMAL_MASS = [
+  { value: 'medium', label: 'Medium: frame or brick-veneer walls on a concrete slab (usual)' },
+  { value: 'light', label: 'Light: frame walls, wood floors over a crawl space or basement' },
+  { value: 'heavy', label: 'Heavy: solid masonry or concrete walls and floors' },
+];
+
 const num = (v: unknown) => (typeof v === 'number' ? v : undefined);
 const ductsOf = (h: HouseDraft): Record<string, unknown> =>
   typeof h.ducts === 'object' && h.ducts !== null ? (h.ducts as Record<string, unknown>) : {};
@@ -120,6 +127,13 @@ export function HouseFields({ value, onChange }: { value: HouseDraft; onChange: 
             />
           </>
         ) : null}
+        <SelectInput
+          label="How much heat the house stores"
+          value={typeof value.thermalMass === 'string' ? value.thermalMass : 'medium'}
+          options={THERMAL_MASS}
+          hint="Sets how long the sun through the windows takes to warm the rooms (ASHRAE radiant time series). Not sure: medium."
+          onChange={(k) => set('thermalMass', k === 'medium' ? undefined : k)}
+        />
         <SelectInput
           label="Ducted system: where the ducts run"
           value={ductLocation}

@@ -4,38 +4,98 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DECLINED, PAYS, signWebhook } from '../../server/src/fakes/payments-fake';
 import {
+  depositDue,
   paymentForVersion,
   recordDepositIntent,
   refundDeposit,
   startDeposit,
   type PaymentRow,
 } from '../../server/src/modules/payments/payments.service';
-import { HTTPS, isProblem, makeCompany, type TestCompany } from '../helpers/fixtures';
+import { z } from 'zod';
+import { NO_CONTENT, PUBLIC, type ApiRouter } from '../../server/src/lib/route';
+import {
+  browserAgent,
+  csrfOf,
+  HTTPS,
+  isProblem,
+  login,
+  makeCompany,
+  type Session,
+  type TestCompany,
+} from '../helpers/fixtures';
 import { buildTestApp, type TestApp } from '../helpers/test-app';
+import { newJob } from './jobs-helpers';
 
 let t: TestApp;
 let a: TestCompany;
 let secret: string;
+let estimator: Session;
 // The SDK's own webhook helpers, used as the reference for how the real service signs.
 const sdk = new Stripe('sk_test_reference');
 
+/** Stands in for the route a proposal link opens (that slice is not built yet): a grant for the proposal. */
+function linkOpener(api: ApiRouter): void {
+  api.route({
+    method: 'post',
+    path: '/open/:companyId/:proposalId',
+    policy: PUBLIC,
+    params: z.strictObject({ companyId: z.uuid(), proposalId: z.uuid() }),
+    response: NO_CONTENT,
+    handler: async ({ req, params }) => {
+      req.session.link = { ...params, expiresAt: Date.now() + 60_000 };
+    },
+  });
+}
+
 beforeAll(async () => {
-  t = await buildTestApp();
+  t = await buildTestApp({}, undefined, { modules: [['/payments-test', linkOpener]] });
   a = await makeCompany(t.orm.em.fork(), 'Deposit');
   secret = t.services.config.PAYMENTS_WEBHOOK_SECRET;
+  estimator = await login(t.app, a.users.estimator.email);
 });
 afterAll(async () => t.close());
 
 const em = () => t.orm.em.fork();
 
-/** A version's deposit as the server would read it from the frozen snapshot (the proposal tables come with versions14). */
-function version(depositCents = 150_000) {
-  return { companyId: a.id, proposalId: randomUUID(), versionId: randomUUID(), depositCents };
+/** An issued proposal version on a new job; its snapshot holds two options with their deposits (cents). */
+async function version(depositCents = 150_000) {
+  const job = await newJob(estimator);
+  const proposalId = randomUUID();
+  const versionId = randomUUID();
+  const option = (position: number, deposit: number) => ({
+    position,
+    name: `Option ${position}`,
+    price: { depositCents: deposit },
+  });
+  await em().execute('insert into "proposal" ("id", "company_id", "job_id", "created_at") values (?, ?, ?, now())', [
+    proposalId,
+    a.id,
+    job.id,
+  ]);
+  await em().execute(
+    `insert into "proposal_version" ("id", "company_id", "proposal_id", "number", "snapshot", "snapshot_sha256",
+       "calc_version", "issued_by_id", "issued_by_name", "issued_at") values (?, ?, ?, 1, ?::jsonb, ?, '0.1.0', ?, 'Test estimator', now())`,
+    [
+      versionId,
+      a.id,
+      proposalId,
+      JSON.stringify({ schema: 1, options: [option(1, depositCents), option(2, depositCents + 25_000)] }),
+      'c'.repeat(64),
+      a.users.estimator.id,
+    ],
+  );
+  return { companyId: a.id, proposalId, versionId, depositCents };
 }
+
+const auditOf = async (versionId: string) =>
+  em().execute<Array<{ kind: string; data: Record<string, unknown> }>>(
+    'select "kind", "data" from "proposal_event" where "version_id" = ? order by "seq"',
+    [versionId],
+  );
 
 /** The server makes the intent for the version's own amount and keeps it as the payment row. */
 async function openDeposit(depositCents = 150_000): Promise<PaymentRow> {
-  const v = version(depositCents);
+  const v = await version(depositCents);
   const intent = await t.services.payments.createDepositIntent({
     amountCents: v.depositCents,
     metadata: { companyId: v.companyId, proposalId: v.proposalId, versionId: v.versionId },
@@ -125,6 +185,11 @@ describe('the deposit through the fake, end to end with its webhooks', () => {
     await expect(refundDeposit(em(), t.services.payments, afterRefund)).rejects.toThrow(/Only a paid deposit/);
     const again = await t.services.payments.refund(p.intent_id, `refund:${p.id}`);
     expect(again.id).toBe(refundId);
+    // The proposal's audit trail, in order: paid, then refunded, each naming the intent and the amount.
+    const audit = await auditOf(p.proposal_version_id);
+    expect(audit.map((e) => e.kind)).toEqual(['paid', 'refunded']);
+    expect(audit[0]!.data).toMatchObject({ paymentIntentId: p.intent_id, amountCents: 125_000 });
+    expect(audit[1]!.data).toMatchObject({ paymentIntentId: p.intent_id, amountCents: 125_000, refundId });
   });
 
   it('a declined card leaves the row failed with the reason; paying again with a good card succeeds', async () => {
@@ -142,7 +207,7 @@ describe('the deposit through the fake, end to end with its webhooks', () => {
   });
 
   it("the SDK's idempotency key makes one intent; the same key with another amount is refused", async () => {
-    const v = version(90_000);
+    const v = await version(90_000);
     const meta = { companyId: v.companyId, proposalId: v.proposalId, versionId: v.versionId };
     const before = t.payments.intents.size;
     const key = `deposit:${v.versionId}`;
@@ -166,7 +231,7 @@ describe('the deposit through the fake, end to end with its webhooks', () => {
 
   it('pay before signing → 409, and no intent is made', async () => {
     const before = t.payments.intents.size;
-    await expect(startDeposit(em(), t.services.payments, version())).rejects.toMatchObject({ status: 409 });
+    await expect(startDeposit(em(), t.services.payments, await version())).rejects.toMatchObject({ status: 409 });
     expect(t.payments.intents.size).toBe(before);
   });
 });
@@ -275,5 +340,62 @@ describe('POST /api/hooks/payments', () => {
       data: { object: {} },
     });
     expect((await post(other, sign(other))).body).toEqual({ received: true, outcome: 'ignored' });
+  });
+});
+
+describe('POST /api/proposals/:proposalId/deposit (the customer, through a proposal link)', () => {
+  async function customerFor(companyId: string, proposalId: string) {
+    const agent = browserAgent(t.app);
+    const csrf = await csrfOf(agent);
+    const opened = await agent
+      .post(`/api/payments-test/open/${companyId}/${proposalId}`)
+      .set(HTTPS)
+      .set('X-CSRF-Token', csrf);
+    expect(opened.status).toBe(204);
+    return (body: object) =>
+      agent.post(`/api/proposals/${proposalId}/deposit`).set(HTTPS).set('X-CSRF-Token', csrf).send(body);
+  }
+  const chooseOption = (v: { companyId: string; proposalId: string; versionId: string }, position: number) =>
+    em().execute(
+      `insert into "proposal_event" ("id", "company_id", "proposal_id", "version_id", "kind", "at", "by_customer", "data")
+       values (?, ?, ?, ?, 'option-chosen', now(), true, ?::jsonb)`,
+      [randomUUID(), v.companyId, v.proposalId, v.versionId, JSON.stringify({ position })],
+    );
+
+  it('a request that names an amount is refused (400) and makes no intent', async () => {
+    const v = await version(150_000);
+    await chooseOption(v, 2);
+    const pay = await customerFor(a.id, v.proposalId);
+    const before = t.payments.intents.size;
+    for (const tampered of [{ amountCents: 1 }, { amount: 100 }, { depositCents: 0 }]) {
+      const res = await pay(tampered);
+      expect(res.status, JSON.stringify(tampered)).toBe(400);
+      expect(isProblem(res)).toBe(true);
+    }
+    expect(t.payments.intents.size).toBe(before);
+    expect(await paymentForVersion(em(), a.id, v.versionId)).toBeNull();
+  });
+
+  it('the amount is the chosen option in the frozen snapshot; before an option is chosen → 409, before signing → 409', async () => {
+    const v = await version(150_000);
+    const pay = await customerFor(a.id, v.proposalId);
+    const noChoice = await pay({});
+    expect(noChoice.status).toBe(409);
+    expect(noChoice.body.detail).toMatch(/Choose one of the options/);
+    await chooseOption(v, 2);
+    await expect(depositDue(em(), a.id, v.proposalId)).resolves.toMatchObject({ depositCents: 175_000 });
+    const before = t.payments.intents.size;
+    const unsigned = await pay({});
+    expect(unsigned.status).toBe(409);
+    expect(isProblem(unsigned)).toBe(true);
+    expect(unsigned.body.detail).toMatch(/sign it first/);
+    expect(t.payments.intents.size).toBe(before);
+  });
+
+  it("another company's proposal is 404 even with a grant naming it", async () => {
+    const v = await version();
+    const other = await makeCompany(em(), 'Other deposit');
+    const pay = await customerFor(other.id, v.proposalId);
+    expect((await pay({})).status).toBe(404);
   });
 });

@@ -149,6 +149,8 @@ export async function startPaymentsFake(opts: {
   const idempotent = new Map<string, { fingerprint: string; status: number; body: string }>();
   const webhooks: SentWebhook[] = [];
   const pending = new Set<Promise<void>>();
+  // Events go out one after another, in the order they happened.
+  let lastDelivery: Promise<void> = Promise.resolve();
   let target = opts.webhookTarget;
 
   async function deliverOnce(body: string): Promise<number> {
@@ -164,7 +166,7 @@ export async function startPaymentsFake(opts: {
     return res.status;
   }
 
-  /** Sends an event as the service does: at once, and again (up to three tries) until the app answers 2xx. */
+  /** Sends an event as the service does, after the ones before it, again (up to three tries) until the app answers 2xx. */
   function emit(type: string, object: unknown, request: { id: string; idempotency_key: string | null }) {
     const event = {
       id: id('evt'),
@@ -180,13 +182,16 @@ export async function startPaymentsFake(opts: {
     const body = JSON.stringify(event, null, 2);
     const sent: SentWebhook = { eventId: event.id, type, status: 0 };
     webhooks.push(sent);
+    const previous = lastDelivery;
     const run = (async () => {
+      await previous;
       for (let attempt = 0; attempt < 3; attempt++) {
         if (attempt > 0) await new Promise((r) => setTimeout(r, 200 * 4 ** attempt));
         sent.status = await deliverOnce(body).catch(() => 0);
         if (sent.status >= 200 && sent.status < 300) return;
       }
     })();
+    lastDelivery = run;
     pending.add(run);
     void run.finally(() => pending.delete(run));
   }

@@ -21,6 +21,7 @@ import { companyDataRoutes } from './company-data/company-data.routes';
 import { deskRoutes } from './desk/desk.routes';
 import { paymentHooks } from './payments/payments.hooks';
 import { proposalPdfRoutes } from './proposals/proposal-pdf.routes';
+import { paymentRoutes } from './payments/payments.routes';
 
 /** A module's routes under /api<prefix> (tests add their own through createApp's extras). */
 export type ModuleMount = readonly [prefix: string, register: (api: ApiRouter) => void];
@@ -65,5 +66,6 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/jobs', deskRoutes);
   mount('/jobs', proposalPdfRoutes);
   mount('/company-data', companyDataRoutes);
+  mount('/proposals', paymentRoutes);
   for (const [prefix, register] of extra) mount(prefix, register);
 }

@@ -1,6 +1,7 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { randomUUID } from 'node:crypto';
-import { ConflictError } from '../../lib/errors';
+import type { SnapshotOption } from '@contract';
+import { ConflictError, NotFoundError } from '../../lib/errors';
 import type { DepositIntent, PaymentEvent, Payments } from '../../services/payments';
 import type { PaymentState } from './payment.entity';
 
@@ -9,12 +10,37 @@ import type { PaymentState } from './payment.entity';
  * The amount always comes from the server (the version's frozen deposit), never from a request.
  */
 
+/** The version a deposit is for, and its deposit as the frozen snapshot states it (cents). */
 export interface DepositVersion {
   companyId: string;
   proposalId: string;
   versionId: string;
-  /** The version's deposit in cents, read from its frozen snapshot by the caller. */
   depositCents: number;
+}
+
+/**
+ * The deposit the customer owes on the proposal's current version: the chosen option's `depositCents`
+ * from the version's frozen snapshot — never a figure from the request. The option is the one named by
+ * the version's latest `option-chosen` audit event (`data.position`, the snapshot option's position).
+ * Another company's proposal, or one with no current version, is 404; no option chosen yet is 409.
+ */
+export async function depositDue(em: EntityManager, companyId: string, proposalId: string): Promise<DepositVersion> {
+  const versions = await em.execute<Array<{ id: string; snapshot: { options?: SnapshotOption[] } }>>(
+    `select "id", "snapshot" from "proposal_version"
+     where "company_id" = ? and "proposal_id" = ? and "superseded_at" is null`,
+    [companyId, proposalId],
+  );
+  const version = versions[0];
+  if (!version) throw new NotFoundError('The proposal');
+  const chosen = await em.execute<Array<{ position: string | null }>>(
+    `select "data"->>'position' as "position" from "proposal_event"
+     where "company_id" = ? and "version_id" = ? and "kind" = 'option-chosen' order by "seq" desc limit 1`,
+    [companyId, version.id],
+  );
+  const position = Number(chosen[0]?.position);
+  const option = (version.snapshot.options ?? []).find((o) => o.position === position);
+  if (!option) throw new ConflictError('Choose one of the options before paying the deposit.');
+  return { companyId, proposalId, versionId: version.id, depositCents: option.price.depositCents };
 }
 
 /**
@@ -138,7 +164,12 @@ function nextState(
   return null;
 }
 
-const HANDLED = new Set(['payment_intent.succeeded', 'payment_intent.payment_failed', 'charge.refunded']);
+const HANDLED = new Set([
+  'payment_intent.succeeded',
+  'payment_intent.payment_failed',
+  'refund.created',
+  'charge.refunded',
+]);
 
 /**
  * Applies one verified webhook event, once: its id goes into payment_webhook_event first (unique), so
@@ -178,6 +209,15 @@ export async function applyPaymentEvent(em: EntityManager, event: PaymentEvent):
         m.versionId === payment.proposal_version_id;
       if (!matches) return settle('mismatch', payment);
     }
+    if (event.type === 'refund.created') {
+      // The refund's id, kept even when this arrives before the refund call's own answer is stored.
+      const kept = await tx.execute(
+        'update "payment" set "refund_id" = ?, "updated_at" = ? where "id" = ? and "refund_id" is null',
+        [obj.id ?? null, at, payment.id],
+        'run',
+      );
+      return settle((kept as { affectedRows?: number }).affectedRows ? 'applied' : 'unchanged', payment);
+    }
     const move = nextState(event.type, obj, payment.state);
     if (!move) return settle('unchanged', payment);
     const paid = move.to === 'succeeded' || move.to === 'refunded';
@@ -195,6 +235,28 @@ export async function applyPaymentEvent(em: EntityManager, event: PaymentEvent):
       ],
       'run',
     );
+    // The proposal's audit trail: the payment service moved the money (no staff user, not the customer).
+    if (move.to === 'succeeded' || move.to === 'refunded') {
+      await tx.execute(
+        `insert into "proposal_event" ("id", "company_id", "proposal_id", "version_id", "kind", "at", "data")
+         values (?, ?, ?, ?, ?, ?, ?::jsonb)`,
+        [
+          randomUUID(),
+          payment.company_id,
+          payment.proposal_id,
+          payment.proposal_version_id,
+          move.to === 'succeeded' ? 'paid' : 'refunded',
+          at,
+          JSON.stringify({
+            paymentIntentId: payment.intent_id,
+            amountCents: payment.amount_cents,
+            eventId: event.id,
+            ...(move.to === 'refunded' ? { refundId: payment.refund_id } : {}),
+          }),
+        ],
+        'run',
+      );
+    }
     return settle('applied', payment);
   });
 }

@@ -15,3 +15,4 @@ export * from './links';
 export * from './device';
 export * from './proposal';
 export * from './cooling-off-notice';
+export * from './proposal-diff';

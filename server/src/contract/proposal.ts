@@ -189,56 +189,57 @@ export type ProposalSnapshot = z.infer<typeof proposalSnapshot>;
 export type SnapshotOption = ProposalSnapshot['options'][number];
 
 /** One version as the office's list shows it (no snapshot: GET …/versions/:n has it). */
-export interface ProposalVersionRecord {
-  readonly number: number;
-  readonly issuedAt: string;
-  readonly issuedBy: { readonly id: string | null; readonly name: string };
-  readonly supersededAt: string | null;
-  readonly current: boolean;
-  readonly snapshotSha256: string;
-  readonly calcVersion: string;
-  readonly pdf: { readonly state: PdfState; readonly sha256: string | null };
+export const proposalVersionRecord = z.object({
+  number: z.number().int(),
+  issuedAt: z.string(),
+  issuedBy: z.object({ id: z.string().nullable(), name: z.string() }),
+  supersededAt: z.string().nullable(),
+  current: z.boolean(),
+  snapshotSha256: z.string(),
+  calcVersion: z.string(),
+  pdf: z.object({ state: z.enum(PDF_STATES), sha256: z.string().nullable() }),
   /** The options' names and totals (cents), for the list. */
-  readonly options: readonly { readonly name: string; readonly totalCents: number }[];
-}
+  options: z.array(z.object({ name: z.string(), totalCents: z.number().int() })),
+});
+export type ProposalVersionRecord = z.infer<typeof proposalVersionRecord>;
 
-export interface ProposalEventRecord {
-  readonly seq: number;
-  readonly kind: ProposalEventKind;
-  readonly at: string;
-  readonly versionNumber: number | null;
-  readonly by:
-    | { readonly kind: 'staff'; readonly id: string | null; readonly name: string }
-    | { readonly kind: 'customer' }
-    | null;
-  readonly data: Record<string, unknown>;
-}
+export const proposalEventRecord = z.object({
+  seq: z.number().int(),
+  kind: z.enum(PROPOSAL_EVENT_KINDS),
+  at: z.string(),
+  versionNumber: z.number().int().nullable(),
+  /** Who: a person of the company (their name now, or "a former user"), the customer, or nobody (the system). */
+  by: z.discriminatedUnion('kind', [
+    z.object({ kind: z.literal('staff'), id: z.string().nullable(), name: z.string() }),
+    z.object({ kind: z.literal('customer') }),
+    z.object({ kind: z.literal('system') }),
+  ]),
+  data: z.record(z.string(), z.unknown()),
+});
+export type ProposalEventRecord = z.infer<typeof proposalEventRecord>;
 
-/** GET /api/jobs/:jobId/proposal. `proposal` is null before the first version is issued. */
-export interface ProposalResponse {
-  readonly jobId: string;
-  /** Whether a version may be issued now, and if not, why (the job is not marked ready …). */
-  readonly canIssue: { readonly ok: true } | { readonly ok: false; readonly reason: string };
-  readonly proposal: {
-    readonly id: string;
-    readonly createdAt: string;
-    readonly versions: readonly ProposalVersionRecord[];
-    readonly events: readonly ProposalEventRecord[];
-  } | null;
-}
+/** GET /api/jobs/:jobId/proposal (and the answer to issuing). `proposal` is null before the first version. */
+export const proposalResponse = z.object({
+  jobId: z.string(),
+  /** Whether a version may be issued now by this person, and if not, why. */
+  canIssue: z.discriminatedUnion('ok', [
+    z.object({ ok: z.literal(true) }),
+    z.object({ ok: z.literal(false), reason: z.string() }),
+  ]),
+  proposal: z
+    .object({
+      id: z.string(),
+      createdAt: z.string(),
+      versions: z.array(proposalVersionRecord),
+      events: z.array(proposalEventRecord),
+    })
+    .nullable(),
+});
+export type ProposalResponse = z.infer<typeof proposalResponse>;
 
 /** GET …/versions/:n. */
-export interface ProposalVersionResponse {
-  readonly version: ProposalVersionRecord;
-  readonly snapshot: ProposalSnapshot;
-}
-
-/** GET …/versions/:a/diff/:b: what changed from version a to version b, as plain sentences. */
-export interface ProposalDiffResponse {
-  readonly from: number;
-  readonly to: number;
-  readonly changes: readonly ProposalChange[];
-}
+export const proposalVersionResponse = z.object({ version: proposalVersionRecord, snapshot: proposalSnapshot });
+export type ProposalVersionResponse = z.infer<typeof proposalVersionResponse>;
 
 export const CHANGE_AREAS = [
   'company',
@@ -256,12 +257,21 @@ export const CHANGE_AREAS = [
 ] as const;
 export type ChangeArea = (typeof CHANGE_AREAS)[number];
 
-export interface ProposalChange {
-  readonly area: ChangeArea;
-  /** The leaf's path in the snapshot (dot-separated, array items by their key or name). */
-  readonly path: string;
-  readonly sentence: string;
-}
+export const proposalChange = z.object({
+  area: z.enum(CHANGE_AREAS),
+  /** The leaf's path in the snapshot (array items by their key or name). */
+  path: z.string(),
+  sentence: z.string(),
+});
+export type ProposalChange = z.infer<typeof proposalChange>;
+
+/** GET …/versions/:a/diff/:b: what changed from version a to version b, as plain sentences. */
+export const proposalDiffResponse = z.object({
+  from: z.number().int(),
+  to: z.number().int(),
+  changes: z.array(proposalChange),
+});
+export type ProposalDiffResponse = z.infer<typeof proposalDiffResponse>;
 
 export const PROPOSAL_MESSAGES = {
   notReady:

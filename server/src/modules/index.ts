@@ -22,6 +22,7 @@ import { deskRoutes } from './desk/desk.routes';
 import { paymentHooks } from './payments/payments.hooks';
 import { proposalPdfRoutes } from './proposals/proposal-pdf.routes';
 import { paymentRoutes } from './payments/payments.routes';
+import { proposalRoutes } from './proposals/proposal.routes';
 
 /** A module's routes under /api<prefix> (tests add their own through createApp's extras). */
 export type ModuleMount = readonly [prefix: string, register: (api: ApiRouter) => void];
@@ -65,6 +66,7 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/jobs', loadsRoutes);
   mount('/jobs', deskRoutes);
   mount('/jobs', proposalPdfRoutes);
+  mount('/jobs', proposalRoutes);
   mount('/company-data', companyDataRoutes);
   mount('/proposals', paymentRoutes);
   for (const [prefix, register] of extra) mount(prefix, register);

@@ -1,0 +1,227 @@
+import { createHash } from 'node:crypto';
+import type { EntityManager } from '@mikro-orm/postgresql';
+import { stringify as canonicalJson } from 'safe-stable-stringify';
+import {
+  diffSnapshots,
+  isOfficeRole,
+  PROPOSAL_MESSAGES,
+  type ProposalDiffResponse,
+  type ProposalEventKind,
+  type ProposalEventRecord,
+  type ProposalResponse,
+  type ProposalVersionRecord,
+  type ProposalVersionResponse,
+  type BlockerRecord,
+  type Role,
+} from '@contract';
+import type { DeskJobState } from '../desk/desk-read';
+import { ConflictError, ForbiddenError, NotFoundError } from '../../lib/errors';
+import type { ServiceContext } from '../../lib/service-context';
+import { CompanySchema } from '../companies/company.entity';
+import { getDesk } from '../desk/desk.service';
+import { findJob } from '../jobs/job-access';
+import { UserSchema } from '../users/user.entity';
+import { buildSnapshot, CALC_VERSION } from './snapshot';
+import {
+  ProposalEventSchema,
+  ProposalSchema,
+  ProposalVersionSchema,
+  type Proposal,
+  type ProposalVersion,
+} from './proposal.entity';
+
+/**
+ * Proposals (issue 14, versions): issuing freezes a version, worked out again by the server with calc
+ * (the desk's own computeOption on the saved inputs); reads answer with the versions, the audit trail in
+ * order, one version's snapshot, and what changed between two versions. Every read and write is inside the
+ * actor's job scope (another company's job or proposal is 404).
+ */
+
+/** The SHA-256 of a snapshot's canonical JSON (keys sorted: safe-stable-stringify), hex. */
+export const snapshotSha256 = (snapshot: unknown): string =>
+  createHash('sha256')
+    .update(canonicalJson(snapshot) ?? '')
+    .digest('hex');
+
+/** Called inside the issuing transaction once the version and its events are written (the PDF task is added here). */
+export type OnIssued = (tx: EntityManager, version: ProposalVersion) => Promise<void>;
+
+/** Why this job cannot be issued now (for the 409 and the screen), or null when it can. */
+function whyNot(job: DeskJobState, blockers: readonly BlockerRecord[], role: Role): string | null {
+  if (!isOfficeRole(role)) return 'Only an estimator or the owner issues a proposal.';
+  if (!job.readyAt) return PROPOSAL_MESSAGES.notReady;
+  // Units outside their sizing range pass only with the office's reason, given when it marked the job ready.
+  const left = blockers.filter((b) => !(b.code === 'sizing-outside-range' && job.readyOverride));
+  if (left.length) return `The job cannot be proposed: ${left.map((b) => b.message).join(' ')}`;
+  return null;
+}
+
+/**
+ * Issues version N+1 of the job's proposal: recomputes the options from the saved inputs, builds and
+ * checks the snapshot, stores it with its hash, marks the version before it superseded, and writes the
+ * 'superseded' and 'issued' events — all in one transaction (the job row locked, so two issues queue).
+ * 409 when the job is not marked ready (why, in words).
+ */
+export async function issueVersion(ctx: ServiceContext, jobId: string, onIssued?: OnIssued): Promise<ProposalVersion> {
+  if (!isOfficeRole(ctx.actor.role)) throw new ForbiddenError('Only an estimator or the owner issues a proposal.');
+  return ctx.em.transactional(async (tx) => {
+    const c = { ...ctx, em: tx };
+    const job = await findJob(c, jobId);
+    // Two issues of one job wait for each other here, so version numbers never collide.
+    await tx.execute('select id from "job" where id = ? for update', [job.id]);
+    await tx.refresh(job);
+    const desk = await getDesk(c, job.id);
+    const why = whyNot(job, desk.blockers, ctx.actor.role);
+    if (why) throw new ConflictError(why);
+    const now = ctx.clock.now();
+    const company = await tx.findOneOrFail(CompanySchema, ctx.actor.companyId);
+    const issuer = await tx.findOneOrFail(UserSchema, ctx.actor.userId);
+    const snapshot = buildSnapshot({ company, customer: job.customer, job, options: desk.options, issuedAt: now });
+    let proposal = await tx.findOne(ProposalSchema, { job: job.id, company: ctx.actor.companyId });
+    proposal ??= tx.create(ProposalSchema, { company: ctx.actor.companyId, job: job.id, createdAt: now });
+    const previous = await tx.findOne(
+      ProposalVersionSchema,
+      { proposal: proposal.id, supersededAt: null },
+      { orderBy: { number: 'desc' } },
+    );
+    const last = await tx.findOne(ProposalVersionSchema, { proposal: proposal.id }, { orderBy: { number: 'desc' } });
+    if (previous) {
+      previous.supersededAt = now;
+      // The superseded version is written before the new one (one current version per proposal).
+      await tx.flush();
+    }
+    const version = tx.create(ProposalVersionSchema, {
+      company: ctx.actor.companyId,
+      proposal,
+      number: (last?.number ?? 0) + 1,
+      snapshot,
+      snapshotSha256: snapshotSha256(snapshot),
+      calcVersion: CALC_VERSION,
+      issuedBy: issuer,
+      issuedByName: issuer.name,
+      issuedAt: now,
+      supersededAt: null,
+      pdfState: 'waiting',
+      pdfSha256: null,
+      pdfKey: null,
+    });
+    const event = (kind: ProposalEventKind, v: ProposalVersion, data: Record<string, unknown>) =>
+      tx.create(ProposalEventSchema, {
+        company: ctx.actor.companyId,
+        proposal,
+        version: v,
+        kind,
+        at: now,
+        byUser: issuer,
+        byCustomer: false,
+        ip: null,
+        userAgent: null,
+        data,
+      });
+    if (previous) {
+      await tx.flush();
+      event('superseded', previous, { number: previous.number, by: version.number });
+    }
+    await tx.flush();
+    event('issued', version, { number: version.number, snapshotSha256: version.snapshotSha256 });
+    await tx.flush();
+    if (onIssued) await onIssued(tx, version);
+    return version;
+  });
+}
+
+const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
+
+function versionRecord(v: ProposalVersion): ProposalVersionRecord {
+  return {
+    number: v.number,
+    issuedAt: v.issuedAt.toISOString(),
+    issuedBy: { id: v.issuedBy?.id ?? null, name: v.issuedByName },
+    supersededAt: iso(v.supersededAt),
+    current: v.supersededAt === null,
+    snapshotSha256: v.snapshotSha256.trim(),
+    calcVersion: v.calcVersion,
+    pdf: { state: v.pdfState, sha256: v.pdfSha256?.trim() ?? null },
+    options: v.snapshot.options.map((o) => ({ name: o.name, totalCents: o.price.totalCents })),
+  };
+}
+
+/** The job's proposal in the actor's scope (404 for a job outside it), or null before its first version. */
+async function findProposal(ctx: ServiceContext, jobId: string): Promise<{ jobId: string; proposal: Proposal | null }> {
+  const job = await findJob(ctx, jobId);
+  const proposal = await ctx.em.findOne(ProposalSchema, { job: job.id, company: ctx.actor.companyId });
+  return { jobId: job.id, proposal };
+}
+
+/** GET …/proposal: the versions (newest first), the audit trail in `seq` order, and whether a version may be issued. */
+export async function getProposal(ctx: ServiceContext, jobId: string): Promise<ProposalResponse> {
+  const { proposal } = await findProposal(ctx, jobId);
+  const desk = await getDesk(ctx, jobId);
+  const why = whyNot(desk.desk.job, desk.blockers, ctx.actor.role);
+  const canIssue = why ? ({ ok: false, reason: why } as const) : ({ ok: true } as const);
+  if (!proposal) return { jobId, canIssue, proposal: null };
+  const versions = await ctx.em.find(
+    ProposalVersionSchema,
+    { proposal: proposal.id, company: ctx.actor.companyId },
+    { orderBy: { number: 'desc' } },
+  );
+  const numbers = new Map(versions.map((v) => [v.id, v.number]));
+  const events = await ctx.em.find(
+    ProposalEventSchema,
+    { proposal: proposal.id, company: ctx.actor.companyId },
+    { orderBy: { seq: 'asc' }, populate: ['byUser'] },
+  );
+  return {
+    jobId,
+    canIssue,
+    proposal: {
+      id: proposal.id,
+      createdAt: proposal.createdAt.toISOString(),
+      versions: versions.map(versionRecord),
+      events: events.map((e): ProposalEventRecord => ({
+        seq: Number(e.seq),
+        kind: e.kind,
+        at: e.at.toISOString(),
+        versionNumber: e.version ? (numbers.get(e.version.id) ?? null) : null,
+        by: e.byCustomer
+          ? { kind: 'customer' }
+          : e.byUser
+            ? { kind: 'staff', id: e.byUser.id, name: e.byUser.name }
+            : { kind: 'system' },
+        data: e.data,
+      })),
+    },
+  };
+}
+
+async function findVersion(ctx: ServiceContext, jobId: string, n: number): Promise<ProposalVersion> {
+  const { proposal } = await findProposal(ctx, jobId);
+  const v = proposal
+    ? await ctx.em.findOne(ProposalVersionSchema, { proposal: proposal.id, number: n, company: ctx.actor.companyId })
+    : null;
+  if (!v) throw new NotFoundError(`Version ${n} of the proposal`);
+  return v;
+}
+
+/** GET …/versions/:n: the version and its snapshot exactly as frozen. */
+export async function getVersion(ctx: ServiceContext, jobId: string, n: number): Promise<ProposalVersionResponse> {
+  const v = await findVersion(ctx, jobId, n);
+  return { version: versionRecord(v), snapshot: v.snapshot };
+}
+
+/** GET …/versions/:a/diff/:b: what changed from version a to version b. */
+export async function diffVersions(
+  ctx: ServiceContext,
+  jobId: string,
+  a: number,
+  b: number,
+): Promise<ProposalDiffResponse> {
+  const from = await findVersion(ctx, jobId, a);
+  const to = await findVersion(ctx, jobId, b);
+  return { from: a, to: b, changes: diffSnapshots(from.snapshot, to.snapshot) };
+}
+
+/** Whether a job has an issued proposal (the job status machine's JobFacts.hasProposal). */
+export async function jobHasProposal(em: EntityManager, companyId: string, jobId: string): Promise<boolean> {
+  return (await em.count(ProposalSchema, { job: jobId, company: companyId })) > 0;
+}

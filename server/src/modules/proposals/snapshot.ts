@@ -82,6 +82,14 @@ function optionOf(v: OptionView): SnapshotOption {
           installedLengthFt: c.installedLengthFt,
           kind: c.lineSet,
           extraChargeOz: c.extraChargeOz,
+          liftFt: c.liftFt,
+          // calc's worked formula for this circuit's extra charge (its explanation key ends with the zone's key).
+          extraChargeText:
+            s.refrigerant.explanations.find((e) => e.key.endsWith(`charge:${c.zoneKey}`))?.text.slice(0, 600) ?? '',
+          condensate: {
+            kind: input?.circuits.find((x) => x.zoneKey === c.zoneKey)?.condensate ?? 'gravity',
+            lengthFt: input?.circuits.find((x) => x.zoneKey === c.zoneKey)?.condensateLengthFt ?? 0,
+          },
         })),
         extraChargeOz: s.refrigerant.extraChargeOz,
         totalChargeOz: s.refrigerant.totalChargeOz,

@@ -93,7 +93,9 @@ describe('issuing a proposal version', () => {
       [1, false, false],
     ]);
     const events = second.body.proposal.events as { seq: number; kind: string; versionNumber: number }[];
-    expect(events.map((e) => [e.kind, e.versionNumber])).toEqual([
+    // The PDF renders in the background (the test app runs the queue), so its 'pdf-ready' lands at its own time.
+    const issuing = events.filter((e) => !e.kind.startsWith('pdf-'));
+    expect(issuing.map((e) => [e.kind, e.versionNumber])).toEqual([
       ['issued', 1],
       ['superseded', 1],
       ['issued', 2],
@@ -126,6 +128,26 @@ describe('issuing a proposal version', () => {
     expectProblem(await post(sales, `/api/jobs/${jobId}/proposal/versions`).send(), 403);
     expectProblem(await estimator.agent.get(`/api/jobs/${jobId}/proposal/versions/7`), 404);
     expectProblem(await estimator.agent.get(`/api/jobs/${jobId}/proposal/versions/first`), 400);
+  });
+
+  it('issuing queues the PDF in its transaction: once the queue has run, the version’s PDF is ready and served', async () => {
+    const { jobId } = await pricedJob();
+    await markReady(jobId);
+    expect((await post(estimator, `/api/jobs/${jobId}/proposal/versions`).send()).status).toBe(201);
+    await t.services.queue.drain();
+    const read = await estimator.agent.get(`/api/jobs/${jobId}/proposal`);
+    expect(read.body.proposal.versions[0]).toMatchObject({ number: 1, pdf: { state: 'ready' } });
+    const pdf = await estimator.agent
+      .get(`/api/jobs/${jobId}/proposal/versions/1/pdf`)
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      });
+    expect(pdf.status).toBe(200);
+    expect(pdf.headers['content-type']).toBe('application/pdf');
+    expect((pdf.body as Buffer).subarray(0, 5).toString('latin1')).toBe('%PDF-');
   });
 
   it('is one transaction: a failure after the version is written leaves no version and no event', async () => {

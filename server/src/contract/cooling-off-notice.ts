@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { coolingOffWindow } from '@calc';
+import { formatUsDate } from './dates';
 
 /**
  * The buyer's right-to-cancel texts for a sale made at the home (FTC Cooling-Off Rule, 16 CFR Part 429),
@@ -77,26 +78,8 @@ export interface CoolingOffNotice {
   readonly source: string;
 }
 
-const MONTHS = [
-  'January',
-  'February',
-  'March',
-  'April',
-  'May',
-  'June',
-  'July',
-  'August',
-  'September',
-  'October',
-  'November',
-  'December',
-] as const;
-
-/** "2026-11-30" → "November 30, 2026" (US style, no Intl, so the server and browser print the same). */
-export function formatNoticeDate(isoDate: string): string {
-  const [y, m, d] = isoDate.split('-').map(Number);
-  return `${MONTHS[(m ?? 1) - 1]} ${d}, ${y}`;
-}
+/** "2026-11-30" → "November 30, 2026" (the contract's one date style). */
+export const formatNoticeDate = formatUsDate;
 
 /** Builds the completed notice. Throws a ZodError for bad input and calc's CalcError for an impossible date. */
 export function buildCoolingOffNotice(input: CoolingOffNoticeInput): CoolingOffNotice {

@@ -15,4 +15,5 @@ export * from './links';
 export * from './device';
 export * from './proposal';
 export * from './cooling-off-notice';
+export * from './dates';
 export * from './proposal-diff';

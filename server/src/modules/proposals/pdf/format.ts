@@ -1,3 +1,4 @@
+import { formatUsDate } from '@contract';
 import { printableText } from './fonts';
 
 /**
@@ -49,25 +50,9 @@ export const ounces = (value: number): string => `${oneDecimal.format(value)} oz
 export const amps = (value: number): string => `${upToTwo.format(value)} A`;
 export const plain = (value: number): string => upToTwo.format(value);
 
-const MONTHS = [
-  'January',
-  'February',
-  'March',
-  'April',
-  'May',
-  'June',
-  'July',
-  'August',
-  'September',
-  'October',
-  'November',
-  'December',
-];
-
-/** An ISO date-time as the day it fell on in UTC: "5 December 2026". */
+/** An ISO date-time as the day it fell on in UTC, in the contract's one date style: "December 5, 2026". */
 export function day(iso: string): string {
-  const d = new Date(iso);
-  return `${d.getUTCDate()} ${MONTHS[d.getUTCMonth()]} ${d.getUTCFullYear()}`;
+  return formatUsDate(new Date(iso).toISOString().slice(0, 10));
 }
 
 /** A design-day hour (calc numbers them 1–24, solar time) as the loads screen writes it: 15 → "15:00". */

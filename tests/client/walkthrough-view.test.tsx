@@ -96,7 +96,8 @@ describe('adding rooms', () => {
     });
     fireEvent.click(await screen.findByRole('button', { name: 'Copy room' }));
     await waitFor(() => expect(screen.getByLabelText('Room name')).toHaveValue('Bedroom 2 (copy)'));
-    expect(screen.getAllByLabelText('Wall length')).toHaveLength(1);
+    // The walls fold renders at the first idle moment after the room opens.
+    expect(await screen.findAllByLabelText('Wall length')).toHaveLength(1);
 
     fireEvent.change(screen.getByLabelText('Room template'), { target: { value: 'kitchen' } });
     fireEvent.click(screen.getByRole('button', { name: 'Add room' }));

@@ -104,7 +104,8 @@ describe('the desk on a phone', () => {
     await page.keyboard.press('Enter');
     await expect.poll(() => isOpen(labor)).toBe(true);
     const items = takeoff.locator('li li');
-    expect(await items.count()).toBeGreaterThan(0);
+    // The opened category draws its lines after the click, so wait for the first one.
+    await items.first().waitFor();
     const heights = await items.evaluateAll((ls) => ls.map((l) => l.getBoundingClientRect().height));
     console.log('takeoff line heights at 375 px, folded:', heights.map(Math.round).join(', '));
     for (const h of heights) expect(h).toBeLessThanOrEqual(90);

@@ -17,3 +17,4 @@ export * from './proposal';
 export * from './cooling-off-notice';
 export * from './dates';
 export * from './proposal-diff';
+export * from './payments';

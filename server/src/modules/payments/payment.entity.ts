@@ -1,9 +1,9 @@
 import { defineEntity, p, type InferEntity } from '@mikro-orm/core';
 import { CompanySchema } from '../companies/company.entity';
+import { PAYMENT_STATES } from '@contract';
 import { timestamps, uuidKey } from '../../lib/entity-columns';
 
-export const PAYMENT_STATES = ['created', 'succeeded', 'failed', 'refunded'] as const;
-export type PaymentState = (typeof PAYMENT_STATES)[number];
+export { PAYMENT_STATES, type PaymentState } from '@contract';
 
 /**
  * A proposal version's deposit: the payment service's intent, what the server asked for (never an

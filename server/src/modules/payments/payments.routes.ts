@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { PAYMENT_STATES } from '@contract';
 import { link, type ApiRouter } from '../../lib/route';
 import { depositDue, startDeposit } from './payments.service';
 
@@ -7,7 +8,7 @@ const depositResponse = z.strictObject({
   /** What the customer's page hands the payment form; never logged or stored by the app. */
   clientSecret: z.string().nullable(),
   amountCents: z.number().int().positive(),
-  state: z.enum(['created', 'succeeded', 'failed', 'refunded']),
+  state: z.enum(PAYMENT_STATES),
 });
 
 /**

@@ -256,29 +256,31 @@ export function checkCombination({
     );
   const ok = refusals.length === 0;
   const sizes = indoor.map((u) => formatQuantity(u.nominalBtuh, 'Btu/h')).join(' + ');
-  if (!multiZone)
-    return {
-      heads: indoor.length,
-      maxHeads: outdoor.maxHeads,
-      multiZone,
-      connectedPercent: pct,
-      allowedPercent: { min, max },
-      ok,
-      ports: null,
-      refusals,
-      warnings: refusals,
-      explanation: explanation({
+  const verdict = refusals.join(' ');
+  // The two cases share every figure; they differ in the ports shown and in the explanation's words.
+  const shown = multiZone
+    ? explanation({
+        key: 'combination',
+        label: `Indoor units on ${outdoor.description}`,
+        value: pct,
+        unit: '%',
+        valueText: formatPercent(pct),
+        text: `${indoor.length} of ${outdoor.maxHeads} port(s) used${ports ? ` (${ports.map(portLetter).join(', ')})` : ''}; ${sizes || '0 Btu/h'} = ${formatQuantity(connected, 'Btu/h')} ÷ ${formatQuantity(outdoor.nominalBtuh, 'Btu/h')} nominal = ${formatPercent(pct)}`,
+        verdict: ok ? `Within the maker's ${min}–${max} % and its ports.` : verdict,
+        status: ok ? 'ok' : 'blocker',
+        source: "The maker's combination table",
+      })
+    : explanation({
         key: 'combination',
         label: `Indoor unit on ${outdoor.description}`,
         value: indoor.length,
         unit: '',
         valueText: `${indoor.length} of 1`,
         text: `${sizes || 'No indoor unit'} on a one-to-one outdoor unit: the pair is rated together (the sizing above), so the connected-capacity range of a multi-zone unit does not apply.`,
-        verdict: ok ? 'One indoor unit, as the pair is made.' : refusals.join(' '),
+        verdict: ok ? 'One indoor unit, as the pair is made.' : verdict,
         status: ok ? 'ok' : 'blocker',
         source: "The maker's matched-pair rating",
-      }),
-    };
+      });
   return {
     heads: indoor.length,
     maxHeads: outdoor.maxHeads,
@@ -286,19 +288,9 @@ export function checkCombination({
     connectedPercent: pct,
     allowedPercent: { min, max },
     ok,
-    ports,
+    ports: multiZone ? ports : null,
     refusals,
     warnings: refusals,
-    explanation: explanation({
-      key: 'combination',
-      label: `Indoor units on ${outdoor.description}`,
-      value: pct,
-      unit: '%',
-      valueText: formatPercent(pct),
-      text: `${indoor.length} of ${outdoor.maxHeads} port(s) used${ports ? ` (${ports.map(portLetter).join(', ')})` : ''}; ${sizes || '0 Btu/h'} = ${formatQuantity(connected, 'Btu/h')} ÷ ${formatQuantity(outdoor.nominalBtuh, 'Btu/h')} nominal = ${formatPercent(pct)}`,
-      verdict: ok ? `Within the maker's ${min}–${max} % and its ports.` : refusals.join(' '),
-      status: ok ? 'ok' : 'blocker',
-      source: "The maker's combination table",
-    }),
+    explanation: shown,
   };
 }

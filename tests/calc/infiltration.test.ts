@@ -64,11 +64,87 @@ describe('the infiltration driving force against the handbook’s own table (ch.
     expect(q / 0.0736).toBeCloseTo(0.81, 2);
   });
 
-  it('a flue raises the wind part: [1 + I2 × flue share] × I0 (eq. (10); 0.12 cooling, 0.23 heating)', () => {
+  it('a flue raises the constant part: [1 + I2 × flue share] × I0 (eq. (10); 0.12 cooling, 0.23 heating)', () => {
     const none = infiltrationDrivingForce({ stackHeightM: 2.5, deltaTK: 30, season: 'heating' });
     const half = infiltrationDrivingForce({ stackHeightM: 2.5, deltaTK: 30, season: 'heating', flueFraction: 0.5 });
     // (51 × 1.115 + 0.35 × 2.5 × 30) − (51 + 26.25) = 5.865 → /1000
     expect((half - none) * 1000).toBeCloseTo(51 * 0.23 * 0.5, 9);
+  });
+});
+
+/*
+ * Where the flue factor sits in eq. (10). The public copy of the 2021 SI chapter prints the equation garbled as
+ * "IDF = ([I + I2(A_L,flue ⁄ A_L)] I0 + H Δt _1)/1000": the bracket stands before I0, and H·Δt keeps its own I1.
+ * The chapter says eq. (10) is Barnaby and Spitler's fit to ch. 16's enhanced (AIM-2) model, so the enhanced
+ * model itself says which term a flue raises. Ch. 16's Tables 7–9 (2017 edition, as reproduced in a public
+ * R implementation of "the Enhanced Model from ASHRAE Handbook of Fundamentals 2017, Section 16.24"): stack
+ * coefficient Cs, (Pa/K)ⁿ, no flue / flue, 1–3 storeys 0.054/0.069, 0.078/0.089, 0.098/0.107; wind coefficient
+ * Cw, (Pa·s²/m²)ⁿ, slab 0.156/0.142, 0.170/0.156, 0.170/0.167; local wind = met wind × 0.48, 0.59, 0.67; shelter
+ * class 3 factor 0.70 without a flue, 0.86, 0.81, 0.79 with one; Q = c·√((Cs·Δtⁿ)² + (Cw·(s·U)²ⁿ)²), n = 0.67.
+ * Per cm² of A_L (A_L = 10 000·c·4ⁿ·√(ρ/8), ch. 16 eq. (41)) that is an IDF.
+ */
+describe('the flue factor of eq. (10) sits on I0 (ch. 16’s enhanced model, which eq. (10) is fitted to)', () => {
+  const n = 0.67;
+  const perCm2 = 1000 / (10000 * 4 ** n * Math.sqrt(1.2 / 8)); // L/s per cm² of A_L, per unit c
+  const CS = [
+    [0.054, 0.069],
+    [0.078, 0.089],
+    [0.098, 0.107],
+  ];
+  const CW = [
+    [0.156, 0.142],
+    [0.17, 0.156],
+    [0.17, 0.167],
+  ];
+  const WIND_MULTIPLIER = [0.48, 0.59, 0.67];
+  const SHELTER_3 = [
+    [0.7, 0.86],
+    [0.7, 0.81],
+    [0.7, 0.79],
+  ];
+  const enhanced = (storeys: 1 | 2 | 3, dt: number, windMs: number, flue: 0 | 1) => {
+    const i = storeys - 1;
+    const u = SHELTER_3[i]![flue]! * WIND_MULTIPLIER[i]! * windMs;
+    return Math.hypot(CS[i]![flue]! * dt ** n, CW[i]![flue]! * u ** (2 * n)) * perCm2;
+  };
+  // The seasons of eq. (10) with Table 5's temperature columns (indoor 20 °C heating, 24 °C cooling).
+  const SEASONS = {
+    cooling: { windMs: 3.4, i0: 25, dts: [6, 11, 16] },
+    heating: { windMs: 6.7, i0: 51, dts: [10, 20, 30, 40, 50, 60] },
+  } as const;
+  const spread = (xs: number[]) => Math.max(...xs) / Math.min(...xs);
+
+  it.each(Object.entries(SEASONS))(
+    '%s: the flue’s extra leakage hardly follows H·Δt — a constant term, not the stack term',
+    (_season, k) => {
+      const perI0: number[] = [];
+      const perStack: number[] = [];
+      for (const storeys of [1, 2, 3] as const) {
+        for (const dt of k.dts) {
+          const extra = enhanced(storeys, dt, k.windMs, 1) - enhanced(storeys, dt, k.windMs, 0);
+          expect(extra).toBeGreaterThan(0); // a flue always adds leakage
+          perI0.push(extra / k.i0);
+          perStack.push(extra / (2.5 * storeys * dt)); // H = 2.5 m per storey (ch. 17)
+        }
+      }
+      // Read as [1 + I2·f]·I0 the implied I2·f varies about 2.2–2.7-fold over the grid; read as H·Δt·(I1 + I2·f)
+      // it would have to vary 6.7–11-fold (cooling / heating). The equation's form, as its copy prints it, is
+      // the one the model it was fitted to supports.
+      expect(spread(perI0)).toBeLessThan(3);
+      expect(spread(perStack)).toBeGreaterThan(2 * spread(perI0));
+    },
+  );
+
+  it('calc’s form: the flue adds I2 × share × I0 whatever the stack height and temperature difference', () => {
+    for (const [h, dt] of [
+      [2.5, 10],
+      [5, 40],
+      [7.5, 60],
+    ] as const) {
+      const none = infiltrationDrivingForce({ stackHeightM: h, deltaTK: dt, season: 'heating' });
+      const flue = infiltrationDrivingForce({ stackHeightM: h, deltaTK: dt, season: 'heating', flueFraction: 0.3 });
+      expect((flue - none) * 1000).toBeCloseTo(0.23 * 0.3 * 51, 9);
+    }
   });
 });
 

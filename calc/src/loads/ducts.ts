@@ -66,7 +66,16 @@ export function defaultDuctAreasFt2(floorAreaFt2: number, storeys: number): { su
   return { supply: DUCT_AREA_DEFAULT.supplyPerFt2 * fOut * floorAreaFt2, return: br * fOut * floorAreaFt2 };
 }
 
-/** Combined surface film resistance added to the duct insulation R. [MEM: ASHRAE ch. 26 still-air film 0.68, trade-facts §2] */
+/**
+ * Surface film resistance added to the duct insulation R, h·ft²·°F/Btu: still air on a surface of emittance 0.90
+ * with horizontal heat flow. [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 26 Table 10, indoor surface resistances:
+ * vertical, horizontal flow, ε 0.90 → 0.68 (horizontal surface, upward 0.61, downward 0.92) — read through a public
+ * building-science note that reproduces the table.] [OWN: one still-air film stands for the duct's outside film; the
+ * moving air inside adds little and is left out.] Measured "true" R-values of round flex duct run below nominal + film
+ * (Palmiter and Kruse 2006, as NREL's OpenStudio-HPXML airflow.rb fits them: nominal R-6 → R-5.7 supply, R-6.3
+ * return; R-8 → 6.8 / 7.8), so this term is on the low side for insulated flex duct; enter a lower insulation R
+ * where the duct is known to be compressed.
+ */
 export const DUCT_FILM_R = 0.68;
 
 /** Leakage to outside the conditioned space, fraction of the blower airflow, supply and return. [TRADE: common practice, replace with a duct-leakage test where one exists] */

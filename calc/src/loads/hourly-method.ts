@@ -53,9 +53,11 @@ export const SOLAR_RTS_PERCENT: Readonly<Record<RtsConstruction, readonly number
  * through the roof 0.60, through windows 0.33 when the SHGC is over 0.5 and 0.46 when under; transmitted sun
  * with no interior shading 1.0; air leakage and ventilation 0 (all convective).]
  * [MEM: sun through glass with an interior shade 0.63 radiant (ASHRAE Fundamentals 2001 ch. 29, the
- * radiative/convective table); later editions send the reader to the shade tables of ch. 15, which were not
- * found in a public copy. A shade absorbs the beam and gives it off as it would any other gain, so shaded
- * glass uses the nonsolar factors.]
+ * radiative/convective table); later editions send the reader to the radiant fractions beside the interior
+ * attenuation coefficients of ch. 15's shade tables. Neither table was found in a public copy (searched 5 Dec 2026:
+ * public code and documents for the split table's shaded-glass row and for ch. 15's IAC/radiant-fraction columns;
+ * the public reproductions of Table 14 stop at the conduction rows), so the figure stays from memory. A shade absorbs
+ * the beam and gives it off as it would any other gain, so shaded glass uses the nonsolar factors.]
  */
 export const RADIANT_FRACTION = {
   wallsAndFloors: 0.46,

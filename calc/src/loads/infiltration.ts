@@ -85,9 +85,11 @@ export function leakageAreaFromTightnessCm2(exposedFt2: number, tightness: Tight
 /**
  * Infiltration driving force, L/(s·cm²), for a stack height (m), an indoor–outdoor difference (K) and the flue's
  * share of the leakage area (0 unless given; the equation holds up to ½):
- * IDF = ([1 + I2·(A_L,flue/A_L)]·I0 + I1·H·|Δt|)/1000. [PUB: ch. 17 eq. (10); the copy's text of the equation is
- * garbled by extraction, so the flue factor's place (on I0) is as read there; with no flue, as the load method
- * uses it, the form is checked against the chapter's Table 5]
+ * IDF = ([1 + I2·(A_L,flue/A_L)]·I0 + I1·H·|Δt|)/1000. [PUB: ch. 17 eq. (10). The public copy prints it garbled
+ * by extraction but with the bracket before I0; ch. 16's enhanced (AIM-2) model, which eq. (10) is fitted to, agrees:
+ * with its Tables 7–9 (2017 edition, as reproduced in public code) a flue's extra leakage barely follows H·Δt, so it
+ * belongs on the constant I0, not on the stack term — tests/calc/infiltration.test.ts works that. With no flue, as
+ * the load method uses it, the form is checked against every cell of the chapter's Table 5]
  */
 export function infiltrationDrivingForce({
   stackHeightM,

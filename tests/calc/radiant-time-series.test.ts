@@ -74,6 +74,23 @@ describe('the radiant time series over a repeating design day', () => {
     );
   });
 
+  it('property: the same figures, to the last bit, as the series written with the wrap-round index (h − j) mod 24', () => {
+    // The method's sum Q_c(h) = (1 − f)·q(h) + f·Σ_j r_j·q(h − j), j = 0…23 in order, hour −1 being hour 23
+    // [PUB: ch. 18 radiant time series over the periodic day]: calc splits the loop at midnight instead of taking
+    // the index mod 24 (speed); the terms and their order are the same, so the result must be identical.
+    fc.assert(
+      fc.property(day, fc.double({ min: 0, max: 1, noNaN: true }), fc.constantFrom(...RTS_CONSTRUCTIONS), (q, f, c) => {
+        const r = rtsFractions(NONSOLAR_RTS_PERCENT[c]);
+        const want = q.map((qh, h) => {
+          let s = 0;
+          for (let j = 0; j < 24; j += 1) s += (r[j] ?? 0) * (q[(h - j + 24) % 24] ?? 0);
+          return (1 - f) * qh + f * s;
+        });
+        expect(Array.from(radiantTimeSeries(q, f, r))).toEqual(want);
+      }),
+    );
+  });
+
   it('property: no hour’s cooling load is above the day’s highest gain nor below its lowest', () => {
     // [PUB: the method's definition — each hour's load is a weighted average of the gains, weights ≥ 0 adding to 1]
     fc.assert(

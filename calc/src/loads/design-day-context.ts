@@ -116,8 +116,10 @@ export function radiantTimeSeries(
 ): Float64Array {
   const conv = 1 - radiantFraction;
   for (let h = 0; h < HOURS; h += 1) {
+    // Σ_j r_j·q(h − j), j = 0…23 in that order; the hours before midnight are h − j + 24 (no modulo in the loop).
     let s = 0;
-    for (let j = 0; j < HOURS; j += 1) s += (factors[j] ?? 0) * (q[(h - j + HOURS) % HOURS] ?? 0);
+    for (let j = 0; j <= h; j += 1) s += (factors[j] ?? 0) * (q[h - j] ?? 0);
+    for (let j = h + 1; j < HOURS; j += 1) s += (factors[j] ?? 0) * (q[h - j + HOURS] ?? 0);
     out[h] = conv * (q[h] ?? 0) + radiantFraction * s;
   }
   return out;

@@ -27,6 +27,40 @@ export interface PeakDetail {
 /** A part's raw figure, or 0 when it is not a positive finite number. */
 const cleanRaw = (r: number): number => (r > 0 && Number.isFinite(r) ? r : 0);
 
+/** Scratch space for `apportion`'s remainders and their selection (grown as needed; apportion never re-enters). */
+let remScratch = new Float64Array(64);
+let pickScratch = new Float64Array(64);
+
+/**
+ * The k-th largest (1-based) of the first n values of `a`, by quickselect; `a`'s order is changed.
+ * Hoare partition about the middle value, descending.
+ */
+function kthLargest(a: Float64Array, n: number, k: number): number {
+  const target = k - 1;
+  let lo = 0;
+  let hi = n - 1;
+  while (lo < hi) {
+    const pivot = a[(lo + hi) >> 1] ?? 0;
+    let i = lo;
+    let j = hi;
+    while (i <= j) {
+      while ((a[i] ?? 0) > pivot) i += 1;
+      while ((a[j] ?? 0) < pivot) j -= 1;
+      if (i <= j) {
+        const x = a[i] ?? 0;
+        a[i] = a[j] ?? 0;
+        a[j] = x;
+        i += 1;
+        j -= 1;
+      }
+    }
+    if (target <= j) hi = j;
+    else if (target >= i) lo = i;
+    else return a[target] ?? 0;
+  }
+  return a[lo] ?? 0;
+}
+
 /**
  * Shares an integer `total` among parts in proportion to `raws` (each ≥ 0) by largest remainder,
  * so the parts are integers that add up to the total. [OWN: the screen's breakdown always adds up]
@@ -41,8 +75,12 @@ export function apportion(total: number, raws: ArrayLike<number>): number[] {
     out[0] = total;
     return out;
   }
+  if (remScratch.length < n) {
+    remScratch = new Float64Array(n);
+    pickScratch = new Float64Array(n);
+  }
+  const rems = remScratch;
   // Each part's floor and remainder; the leftover 1s go to the largest remainders (the earlier part on a tie).
-  const rems = new Float64Array(n);
   let floors = 0;
   for (let k = 0; k < n; k += 1) {
     const e = (total * cleanRaw(raws[k] ?? 0)) / sum;
@@ -51,13 +89,23 @@ export function apportion(total: number, raws: ArrayLike<number>): number[] {
     floors += f;
     rems[k] = e - f;
   }
-  let left = total - floors;
+  const left = total - floors;
   if (!(left > 0)) return out;
-  const order = Array.from({ length: n }, (_, k) => k).sort((x, y) => (rems[y] ?? 0) - (rems[x] ?? 0) || x - y);
-  for (const k of order) {
-    if (left <= 0) break;
-    out[k] = (out[k] ?? 0) + 1;
-    left -= 1;
+  // One leftover 1 per whole or part unit left, at most one per part, to the `ones` parts first in the order
+  // (larger remainder, then earlier part): every part whose remainder is above the `ones`-th largest remainder t,
+  // then the earliest parts whose remainder equals t. t by quickselect on a copy; one pass in part order hands out.
+  const ones = Math.min(n, Math.ceil(left));
+  pickScratch.set(rems.subarray(0, n));
+  const t = kthLargest(pickScratch, n, ones);
+  let atT = ones;
+  for (let k = 0; k < n; k += 1) if ((rems[k] ?? 0) > t) atT -= 1;
+  for (let k = 0; k < n; k += 1) {
+    const r = rems[k] ?? 0;
+    if (r > t) out[k] = (out[k] ?? 0) + 1;
+    else if (r === t && atT > 0) {
+      out[k] = (out[k] ?? 0) + 1;
+      atT -= 1;
+    }
   }
   return out;
 }

@@ -57,6 +57,15 @@ function server(
       sent.push({ method, url, body, ifMatch: headers['If-Match'] });
       if (method === 'GET' && url === '/api/customers/c1') return Response.json({ customer });
       if (method === 'GET' && url === '/api/staff') return Response.json({ staff });
+      if (method === 'GET' && url === '/api/company/loss-reasons')
+        return Response.json({
+          lossReasons: {
+            reasons: ['Price too high', 'Moved away'],
+            systemReason: 'Cancelled by buyer',
+            isDefault: false,
+            version: 1,
+          },
+        });
       if (method === 'GET' && url === `/api/jobs/${JOB_ID}`) return Response.json({ job });
       if (method === 'PATCH' && url === '/api/customers/c1' && customerPatch) return customerPatch(body);
       if (method === 'PATCH' && url === '/api/customers/c1')
@@ -112,6 +121,29 @@ describe('job details on the walk-through', () => {
     expect(s.writes()).toEqual([
       { method: 'PATCH', url: `/api/jobs/${JOB_ID}`, body: { status: 'design' }, ifMatch: '"2"' },
     ]);
+  });
+
+  it('marking lost asks why from the company’s list first; the status then says why', async () => {
+    const s = server();
+    const { queryClient } = await renderPanel(salesperson);
+    fireEvent.click(screen.getByRole('button', { name: 'Mark lost' }));
+    const why = await screen.findByRole('group', { name: 'Why was the job lost?' });
+    // Nothing chosen: it says so and sends nothing.
+    fireEvent.click(screen.getByRole('button', { name: 'Mark lost' }));
+    expect(await screen.findByText('Choose a reason first.')).toBeTruthy();
+    expect(s.writes()).toEqual([]);
+    fireEvent.click(within(why).getByRole('radio', { name: 'Moved away' }));
+    fireEvent.click(screen.getByRole('button', { name: 'Mark lost' }));
+    await waitFor(() => expect(queryClient.getQueryData<JobRecord>(jobKeys.detail(JOB_ID))?.status).toBe('lost'));
+    expect(s.writes()).toEqual([
+      {
+        method: 'PATCH',
+        url: `/api/jobs/${JOB_ID}`,
+        body: { status: 'lost', lostReason: 'Moved away' },
+        ifMatch: '"2"',
+      },
+    ]);
+    expect(await screen.findByText('Status: Lost: Moved away')).toBeTruthy();
   });
 
   it('sends only what changed: the customer’s phone to the customer, the street to the job', async () => {

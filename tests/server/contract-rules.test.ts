@@ -8,9 +8,9 @@ import {
   moveNeedsProposal,
   movesFor,
   NEEDS_PROPOSAL_MESSAGE,
-  NO_PROPOSAL_YET,
   PAYMENT_STATES,
   PDF_STATES,
+  DEFAULT_LOSS_REASONS,
   PRICE_SETTINGS_ROLES,
   PROPOSAL_EVENT_KINDS,
   roleMayMoveJob,
@@ -49,7 +49,7 @@ const newSalespersonJob = () =>
 async function jobIn(status: JobStatus, job?: { id: string }): Promise<{ id: string; version: number }> {
   job ??= await newSalespersonJob();
   const em = t.orm.em.fork();
-  await em.nativeUpdate(JobSchema, { id: job.id }, { status });
+  await em.nativeUpdate(JobSchema, { id: job.id }, { status, lostReason: null });
   const row = await em.findOneOrFail(JobSchema, { id: job.id });
   return { id: job.id, version: row.version };
 }
@@ -60,8 +60,11 @@ describe('job status machine', () => {
     for (const to of JOB_STATUSES.filter((s) => s !== from)) {
       for (const role of ROLES) {
         const job = await jobIn(from, { id });
-        const r = await patch(sessions[role], `/api/jobs/${job.id}`, job.version).send({ status: to });
-        const allowed = mayMoveJob(role, from, to, NO_PROPOSAL_YET);
+        // Marking a job lost takes a reason from the company's list (here the defaults).
+        const body = to === 'lost' ? { status: to, lostReason: DEFAULT_LOSS_REASONS[0] } : { status: to };
+        const r = await patch(sessions[role], `/api/jobs/${job.id}`, job.version).send(body);
+        // These jobs have no proposal (the job's real fact: no version was issued).
+        const allowed = mayMoveJob(role, from, to, { hasProposal: false });
         expect(r.status === 200, `${role}: ${from} → ${to} answered ${r.status}`).toBe(allowed);
         if (!allowed && role !== 'installer' && !nextStatuses(from).includes(to)) expect(r.status).toBe(422);
         if (roleMayMoveJob(role, from, to) && moveNeedsProposal(to)) expect(r.status).toBe(422);
@@ -72,7 +75,7 @@ describe('job status machine', () => {
 
 describe('a move that needs a proposal', () => {
   it('is refused (422, nothing changed) while the job has no proposal, and the contract offers none', async () => {
-    expect(movesFor('salesperson', 'design', NO_PROPOSAL_YET)).not.toContain('proposed');
+    expect(movesFor('salesperson', 'design', { hasProposal: false })).not.toContain('proposed');
     expect(movesFor('salesperson', 'design', { hasProposal: true })).toContain('proposed');
     const job = await jobIn('design');
     const r = await patch(sessions.salesperson, `/api/jobs/${job.id}`, job.version).send({ status: 'proposed' });

@@ -18,3 +18,4 @@ export * from './cooling-off-notice';
 export * from './dates';
 export * from './proposal-diff';
 export * from './payments';
+export * from './loss-reasons';

@@ -68,11 +68,8 @@ export const MOVES_NEEDING_PROPOSAL: readonly JobStatus[] = ['proposed'];
 export const moveNeedsProposal = (to: JobStatus): boolean => MOVES_NEEDING_PROPOSAL.includes(to);
 export const NEEDS_PROPOSAL_MESSAGE = 'A job is marked proposed when its proposal is sent, and this job has none yet.';
 
-/**
- * No job has a proposal until proposals are built (a later issue): both ends use this for every job,
- * so neither offers nor accepts "proposed". The proposals issue replaces it with the job's own fact.
- */
-export const NO_PROPOSAL_YET: JobFacts = { hasProposal: false };
+/** The facts a job record carries (JobRecord.hasProposal, from the server's jobHasProposal): both ends read them so. */
+export const jobFacts = (job: { readonly hasProposal: boolean }): JobFacts => ({ hasProposal: job.hasProposal });
 
 /** The machine's answer for the role alone, whatever the job holds. */
 export function roleMayMoveJob(role: Role, from: JobStatus, to: JobStatus): boolean {

@@ -69,6 +69,10 @@ export const jobRecord = z.object({
   lastChange: lastChangeRecord.nullable().optional(),
   /** When the office marked the job ready to propose (the desk's mark; a later change to an option takes it off); null if not marked. */
   readyToProposeAt: timestamp.nullable().optional(),
+  /** Whether a proposal version has been issued for the job (the status machine's JobFacts.hasProposal). */
+  hasProposal: z.boolean(),
+  /** Why the job was lost (the company's list, or "Cancelled by buyer"); null unless it is lost. */
+  lostReason: z.string().nullable(),
 });
 export type JobRecord = z.output<typeof jobRecord>;
 

@@ -9,6 +9,7 @@ import { PasswordResetTokenSchema } from '../modules/auth/password-reset-token.e
 import { RoomSchema } from '../modules/rooms/room.entity';
 import { DesignOptionSchema } from '../modules/desk/option.entity';
 import { ProposalEventSchema, ProposalSchema, ProposalVersionSchema } from '../modules/proposals/proposal.entity';
+import { CompanyLossReasonsSchema } from '../modules/jobs/loss-reasons.entity';
 import { PaymentSchema } from '../modules/payments/payment.entity';
 import {
   CompanyDataChangeSchema,
@@ -35,4 +36,5 @@ export const entities = [
   ProposalVersionSchema,
   ProposalEventSchema,
   PaymentSchema,
+  CompanyLossReasonsSchema,
 ];

@@ -13,6 +13,7 @@ import { userRoutes } from './users/user.routes';
 import { companySettingsRoutes } from './company-settings/company-settings.routes';
 import { customerRoutes } from './customers/customer.routes';
 import { jobRoutes } from './jobs/job.routes';
+import { lossReasonRoutes } from './jobs/loss-reasons.routes';
 import { mailRoutes } from './mail/mail.routes';
 import { loadsRoutes } from './loads/loads.routes';
 import { photoRoutes } from './photos/photo.routes';
@@ -59,6 +60,7 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/dev', outboxRoutes);
   mount('/mail', mailRoutes);
   mount('/company', companySettingsRoutes);
+  mount('/company', lossReasonRoutes);
   mount('/customers', customerRoutes);
   mount('/jobs', jobRoutes);
   mount('/jobs', roomRoutes);

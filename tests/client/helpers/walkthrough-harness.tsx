@@ -147,6 +147,8 @@ export function jobRecord(overrides: Record<string, unknown> = {}) {
     createdAt: '2026-01-01T00:00:00.000Z',
     updatedAt: '2026-01-01T00:00:00.000Z',
     lastActivityAt: '2026-01-01T00:00:00.000Z',
+    hasProposal: false,
+    lostReason: null,
     ...overrides,
   };
 }

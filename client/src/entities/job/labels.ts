@@ -19,3 +19,9 @@ export const moveLabels: Record<JobStatus, string> = {
   lost: 'Mark lost',
   installed: 'Mark installed',
 };
+
+/** The status as words, with why a lost job was lost (the job page and the jobs list show the same). */
+export function jobStatusText(job: { readonly status: JobStatus; readonly lostReason?: string | null }): string {
+  const label = jobStatusLabels[job.status];
+  return job.status === 'lost' && job.lostReason ? `${label}: ${job.lostReason}` : label;
+}

@@ -21,4 +21,5 @@ export const jobKeys = {
   customer: (customerId: string) => [...jobKeys.all, 'customer', customerId] as const,
   staff: () => ['staff'] as const,
   settings: () => ['company-settings'] as const,
+  lossReasons: () => ['company-loss-reasons'] as const,
 };

@@ -25,6 +25,8 @@ export interface JobChanges {
   readonly salespersonId?: string;
   readonly assignedInstallerId?: string | null;
   readonly status?: JobStatus;
+  /** With status "lost": one of the company's loss reasons. */
+  readonly lostReason?: string;
 }
 
 /** The job-details fields of JobChanges (the rest are the walk-through's design edits and the status). */

@@ -7,7 +7,7 @@ import { ProposalSchema } from '../proposals/proposal.entity';
 import { RoomSchema } from '../rooms/room.entity';
 import { findJob } from './job-access';
 import { JobSchema } from './job.entity';
-import { presentJob } from './job.presenter';
+import { jobViewOf, presentJob } from './job.presenter';
 import { assertVersion } from '../../lib/version-lock';
 
 /** Deleting a job also removes its photos' files. */
@@ -33,12 +33,12 @@ export async function deleteJob(ctx: JobDeleteContext, id: string, version: numb
   const { em, actor, storage } = ctx;
   const keys = await em.transactional(async (tx) => {
     const job = await findJob({ ...ctx, em: tx }, id);
-    assertVersion(version, job.version, 'The job', () => presentJob(job));
+    const hasProposal = (await tx.count(ProposalSchema, { job: job.id, company: actor.companyId })) > 0;
+    assertVersion(version, job.version, 'The job', () => presentJob(jobViewOf(job, { hasProposal })));
     if (!DELETABLE_JOB_STATUSES.includes(job.status)) throw notDeletable(job.status);
     if (!mayDeleteJob({ id: actor.userId, role: actor.role }, job)) throw new ForbiddenError();
     // An issued proposal is kept forever (its versions are frozen in PostgreSQL), and so is its job.
-    if ((await tx.count(ProposalSchema, { job: job.id, company: actor.companyId })) > 0)
-      throw new ConflictError('A job with an issued proposal cannot be deleted; mark it lost instead.');
+    if (hasProposal) throw new ConflictError('A job with an issued proposal cannot be deleted; mark it lost instead.');
     const photos = await tx.find(PhotoSchema, { room: { job: job.id } });
     if (photos.length) await tx.nativeDelete(PhotoSchema, { id: { $in: photos.map((p) => p.id) } });
     await tx.nativeDelete(RoomSchema, { job: job.id });

@@ -40,12 +40,15 @@ interface JobRow {
   changed_by_name: string | null;
   changed_on_device: string | null;
   ready_at: Date | string | null;
+  lost_reason: string | null;
+  has_proposal: boolean;
 }
 
 const JOB_COLUMNS = `j.id, j.status, j.street, j.unit, j.city, j.region, j.postal_code, j.notes, j.design_conditions,
   j.design_sources, j.tightness, j.house, j.version, j.created_at, j.updated_at, j.last_activity_at,
   c.id as customer_id, c.name as customer_name, s.id as salesperson_id, s.name as salesperson_name,
-  i.id as installer_id, i.name as installer_name, j.changed_by_name, j.changed_on_device, j.ready_at`;
+  i.id as installer_id, i.name as installer_name, j.changed_by_name, j.changed_on_device, j.ready_at, j.lost_reason,
+  exists (select 1 from "proposal" pr where pr.job_id = j.id and pr.company_id = j.company_id) as has_proposal`;
 const JOB_FROM = `from "job" j join "customer" c on c.id = j.customer_id join "app_user" s on s.id = j.salesperson_id
   left join "app_user" i on i.id = j.assigned_installer_id`;
 
@@ -83,6 +86,8 @@ function toView(r: JobRow): JobView {
     changedByName: r.changed_by_name,
     changedOnDevice: r.changed_on_device,
     readyAt: r.ready_at === null ? null : date(r.ready_at),
+    lostReason: r.lost_reason,
+    hasProposal: r.has_proposal,
   };
 }
 

@@ -17,6 +17,8 @@ export const JobSchema = defineEntity({
     salesperson: p.manyToOne(UserSchema).index(),
     assignedInstaller: p.manyToOne(UserSchema).nullable().index(),
     status: p.enum([...JOB_STATUSES]).default('walkthrough'),
+    /** Why the job was lost (the company's list, or the system's "Cancelled by buyer"); null unless lost. */
+    lostReason: p.string().length(80).nullable(),
     street: p.string().length(200),
     unit: p.string().length(60).default(''),
     city: p.string().length(100),

@@ -5,6 +5,7 @@ import {
   houseInputSchema,
   JOB_STATUSES,
   listQueryFields,
+  LOSS_REASON_MAX,
   siteRules,
   TIGHTNESS,
 } from '@contract';
@@ -39,6 +40,12 @@ export const updateJobSchema = z
   .strictObject({
     ...fields,
     status,
+    /** With status "lost" (or on a lost job): one of the company's loss reasons (GET /api/company/loss-reasons). */
+    lostReason: z
+      .string({ message: 'Choose why the job was lost.' })
+      .trim()
+      .min(1, { message: 'Choose why the job was lost.' })
+      .max(LOSS_REASON_MAX, { message: `A loss reason is at most ${LOSS_REASON_MAX} characters.` }),
   })
   .partial()
   .refine((v) => Object.keys(v).length > 0, { message: 'Send at least one field to change.' });

@@ -6,8 +6,8 @@ import {
   mayAssignInstaller,
   mayChooseSalesperson,
   mayMoveJob,
+  isListedReason,
   NEEDS_PROPOSAL_MESSAGE,
-  NO_PROPOSAL_YET,
   roleMayMoveJob,
   nextStatuses,
   notesOf,
@@ -21,8 +21,10 @@ import { CustomerSchema, type Customer } from '../customers/customer.entity';
 import { UserSchema, type User } from '../users/user.entity';
 import { resolveDesignConditions } from './design-conditions';
 import { findJob } from './job-access';
-import { JobSchema, type Job } from './job.entity';
-import { presentJob } from './job.presenter';
+import { JobSchema } from './job.entity';
+import { jobViewOf, presentJob, type JobView } from './job.presenter';
+import { jobHasProposal, recordMarkedLost } from './job-moves';
+import { lossReasonsOf } from './loss-reasons.service';
 import type { CreateJobInput, UpdateJobInput } from './job.schema';
 import { assertVersion } from '../../lib/version-lock';
 import { stampOf } from '../../lib/change-stamp';
@@ -66,7 +68,7 @@ async function installerOf({ em, actor }: ServiceContext, id: string | null): Pr
   return u;
 }
 
-export async function createJob(ctx: ServiceContext, input: CreateJobInput): Promise<Job> {
+export async function createJob(ctx: ServiceContext, input: CreateJobInput): Promise<JobView> {
   const { em, actor, clock } = ctx;
   const customer = await customerOf(ctx, input.customerId);
   const salesperson = await salespersonOf(ctx, input.salespersonId);
@@ -97,14 +99,40 @@ export async function createJob(ctx: ServiceContext, input: CreateJobInput): Pro
     ...stampOf(actor),
   });
   await em.flush();
-  return job;
+  return jobViewOf(job, { hasProposal: false });
 }
 
-export async function updateJob(ctx: ServiceContext, id: string, version: number, input: UpdateJobInput): Promise<Job> {
+const LOST_REASON_NEEDED = 'Choose why the job was lost, from the company’s list of reasons.';
+
+/** The list's own spelling of the reason chosen, or a 422 when it is not on the company's list. */
+async function listedReason(ctx: ServiceContext, reason: string | undefined): Promise<string> {
+  if (reason === undefined)
+    throw new UnprocessableError(LOST_REASON_NEEDED, { errors: [{ path: 'lostReason', message: LOST_REASON_NEEDED }] });
+  const { reasons } = await lossReasonsOf(ctx.em, ctx.actor.companyId);
+  const listed = reasons.find((r) => isListedReason([r], reason));
+  if (!listed)
+    throw new UnprocessableError(`“${reason}” is not one of the company’s loss reasons.`, {
+      errors: [{ path: 'lostReason', message: `Choose one of: ${reasons.join('; ')}.` }],
+    });
+  return listed;
+}
+
+export async function updateJob(
+  ctx: ServiceContext,
+  id: string,
+  version: number,
+  input: UpdateJobInput,
+): Promise<JobView> {
   const { em, actor, clock } = ctx;
   const job = await findJob(ctx, id);
-  assertVersion(version, job.version, 'The job', () => presentJob(job));
+  const facts = { hasProposal: await jobHasProposal(em, actor.companyId, job.id) };
+  assertVersion(version, job.version, 'The job', () => presentJob(jobViewOf(job, facts)));
   const from: JobStatus = job.status;
+  const to: JobStatus = input.status ?? from;
+  if (input.lostReason !== undefined && to !== 'lost')
+    throw new UnprocessableError('A loss reason is given only when the job is marked lost.', {
+      errors: [{ path: 'lostReason', message: 'A loss reason is given only when the job is marked lost.' }],
+    });
   if (input.status !== undefined && input.status !== from) {
     const allowed = nextStatuses(from);
     if (!allowed.includes(input.status)) {
@@ -114,11 +142,26 @@ export async function updateJob(ctx: ServiceContext, id: string, version: number
     }
     if (!roleMayMoveJob(actor.role, from, input.status))
       throw new ForbiddenError(`Your role cannot move a job from ${from} to ${input.status}.`);
-    if (!mayMoveJob(actor.role, from, input.status, NO_PROPOSAL_YET))
+    if (!mayMoveJob(actor.role, from, input.status, facts))
       throw new UnprocessableError(NEEDS_PROPOSAL_MESSAGE, {
         errors: [{ path: 'status', message: NEEDS_PROPOSAL_MESSAGE }],
       });
+    if (input.status === 'lost') {
+      // Marked lost by hand: the reason from the company's list, and the proposal's audit trail says so.
+      job.lostReason = await listedReason(ctx, input.lostReason);
+      await recordMarkedLost(em, {
+        companyId: actor.companyId,
+        jobId: job.id,
+        reason: job.lostReason,
+        from,
+        byUserId: actor.userId,
+        at: clock.now(),
+      });
+    } else job.lostReason = null;
     job.status = input.status;
+  } else if (input.lostReason !== undefined) {
+    // A lost job's reason corrected (from the list); the trail is not written again.
+    job.lostReason = await listedReason(ctx, input.lostReason);
   }
   if (input.customerId !== undefined) job.customer = await customerOf(ctx, input.customerId);
   if (input.salespersonId !== undefined) job.salesperson = await salespersonOf(ctx, input.salespersonId);
@@ -151,5 +194,5 @@ export async function updateJob(ctx: ServiceContext, id: string, version: number
   job.lastActivityAt = clock.now();
   Object.assign(job, stampOf(actor));
   await em.flush();
-  return job;
+  return jobViewOf(job, facts);
 }

@@ -221,7 +221,5 @@ export async function diffVersions(
   return { from: a, to: b, changes: diffSnapshots(from.snapshot, to.snapshot) };
 }
 
-/** Whether a job has an issued proposal (the job status machine's JobFacts.hasProposal). */
-export async function jobHasProposal(em: EntityManager, companyId: string, jobId: string): Promise<boolean> {
-  return (await em.count(ProposalSchema, { job: jobId, company: companyId })) > 0;
-}
+/** Whether a job has an issued proposal (the job status machine's JobFacts.hasProposal; one rule, in jobs/job-moves.ts). */
+export { jobHasProposal } from '../jobs/job-moves';

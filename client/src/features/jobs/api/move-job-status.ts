@@ -14,11 +14,15 @@ export function useMoveJobStatus(jobId: string) {
   const queryClient = useQueryClient();
   const edits = useJobEdits();
   return useMutation({
-    mutationFn: async ({ job, to }: { job: JobRecord; to: JobStatus }) => {
+    mutationFn: async ({ job, to, lostReason }: { job: JobRecord; to: JobStatus; lostReason?: string }) => {
       await edits.flush();
       const held = queryClient.getQueryData<JobRecord>(jobKeys.detail(jobId)) ?? job;
       try {
-        return await updateJob(jobId, held.version, { status: to });
+        return await updateJob(
+          jobId,
+          held.version,
+          lostReason === undefined ? { status: to } : { status: to, lostReason },
+        );
       } catch (e) {
         if (isApiError(e) && e.status === 409) {
           await queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId), exact: true });

@@ -22,7 +22,7 @@ import { SelectField, SubmitButton, TextField } from '../../../components/ui/for
 import { Spinner } from '../../../components/ui/spinner';
 import { useJobEdits } from '../../../entities/job/job-edits';
 import { JobPeopleFacts } from '../../../entities/job/job-people';
-import { jobStatusLabels } from '../../../entities/job/labels';
+import { jobStatusText } from '../../../entities/job/labels';
 import { customerQueryOptions, staffQueryOptions } from '../../../entities/job/queries';
 import type { CustomerChanges, JobChanges } from '../../../entities/job/requests';
 import { errorMessage } from '../../../lib/api-error';
@@ -211,7 +211,7 @@ export function JobDetailsPanel({ job }: { job: JobRecord }) {
       <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">
         Job details{' '}
         <span className="ml-2 rounded-full bg-ink-50 px-3 py-1 text-sm font-semibold text-ink-800">
-          {jobStatusLabels[job.status]}
+          {jobStatusText(job)}
         </span>
       </summary>
       {opened ? (

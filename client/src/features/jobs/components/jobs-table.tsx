@@ -3,7 +3,7 @@ import { DataTableBody, DataTableHead } from '../../../components/ui/data-table'
 import { Link } from 'react-router-dom';
 import { jobPaths } from '../../../entities/job/paths';
 import { type JobRecord } from '@contract';
-import { jobStatusLabels } from '../../../entities/job/labels';
+import { jobStatusText } from '../../../entities/job/labels';
 import { ReadyBadge } from './ready-badge';
 
 const col = createColumnHelper<JobRecord>();
@@ -30,7 +30,7 @@ const columns = [
     header: 'Status',
     cell: (c) => (
       <span className="flex flex-col items-start gap-1">
-        {jobStatusLabels[c.getValue()]}
+        {jobStatusText(c.row.original)}
         <ReadyBadge at={c.row.original.readyToProposeAt} />
       </span>
     ),
@@ -75,7 +75,7 @@ export function JobsTable({ jobs, total, page, pageSize, onPage }: Props) {
                   {[j.site.street, j.site.unit, j.site.city].filter(Boolean).join(', ')}
                 </span>
                 <span className="text-sm text-muted">
-                  {jobStatusLabels[j.status]} · {when.format(new Date(j.lastActivityAt))}
+                  {jobStatusText(j)} · {when.format(new Date(j.lastActivityAt))}
                 </span>
                 {j.readyToProposeAt ? (
                   <span className="mt-1">

@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import { buttonClass } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { jobPaths } from '../../../entities/job/paths';
-import { jobStatusLabels } from '../../../entities/job/labels';
+import { jobStatusText } from '../../../entities/job/labels';
 import { toDisplay, unitLabel } from '../../../lib/unit-display';
 import type { RoomView } from '../sync/overlay';
 import { JobPeopleFacts } from '../../../entities/job/job-people';
@@ -50,7 +50,7 @@ export function ReadOnlyJob({
         <dl className="mt-2 grid gap-2 text-base sm:grid-cols-3">
           <div>
             <dt className="text-sm font-semibold text-muted">Status</dt>
-            <dd>{jobStatusLabels[job.status]}</dd>
+            <dd>{jobStatusText(job)}</dd>
           </div>
           <JobPeopleFacts job={job} />
         </dl>

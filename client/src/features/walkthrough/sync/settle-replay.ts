@@ -30,6 +30,8 @@ function jobValue(job: JobRecord, key: keyof JobChanges): unknown {
       return job.assignedInstaller?.id ?? null;
     case 'status':
       return job.status;
+    case 'lostReason':
+      return job.lostReason;
     default:
       return job.site[key] ?? '';
   }

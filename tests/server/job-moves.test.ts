@@ -227,7 +227,7 @@ describe('the company’s loss reasons', () => {
       isDefault: true,
       version: 0,
     });
-    const put = (s: Session, version: number, body: unknown) =>
+    const put = (s: Session, version: number, body: object) =>
       s.agent.put('/api/company/loss-reasons').set('X-CSRF-Token', s.csrf).set('If-Match', `"${version}"`).send(body);
 
     expectProblem(await put(estimator, 0, { reasons: ['Price too high'] }), 403);

@@ -1,6 +1,7 @@
+import { memo } from 'react';
 import { asNumber, asRecord, asString } from '../model/draft';
 import { aboveOptions, belowOptions, ceilingInsulationOptions, floorInsulationOptions } from '../model/options';
-import type { EditorProps } from './editor-props';
+import { sameDraftParts, type EditorProps } from './editor-props';
 import { NumberInput, SelectInput } from './field-kit';
 import { optionLabel } from './fold';
 import { COLOR_OPTIONS } from './wall-fields';
@@ -41,114 +42,120 @@ const BELOW_DEFAULTS: Record<string, object> = {
   conditioned: { kind: 'conditioned' },
 };
 
-/** What is above the room (attic, roof, conditioned floor) and below it (slab, crawl, basement, garage, conditioned). */
-export function AboveBelowFields({ draft, set, err }: EditorProps) {
-  const above = asRecord(draft.above);
-  const below = asRecord(draft.below);
-  const aboveKind = asString(above.kind, 'conditioned');
-  const belowKind = asString(below.kind, 'conditioned');
-  return (
-    <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-      <SelectInput
-        label="Above the room"
-        value={aboveKind}
-        options={aboveOptions}
-        onChange={(k) => set(['above'], ABOVE_DEFAULTS[k])}
-        error={err(['above'])}
-      />
-      {aboveKind === 'attic' || aboveKind === 'roof' ? (
+/**
+ * What is above the room (attic, roof, conditioned floor) and below it (slab, crawl, basement, garage, conditioned).
+ * Re-renders when either changes.
+ */
+export const AboveBelowFields = memo(
+  function AboveBelowFields({ draft, set, err }: EditorProps) {
+    const above = asRecord(draft.above);
+    const below = asRecord(draft.below);
+    const aboveKind = asString(above.kind, 'conditioned');
+    const belowKind = asString(below.kind, 'conditioned');
+    return (
+      <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
         <SelectInput
-          label="Ceiling insulation"
-          value={asString(above.insulation, 'r30')}
-          options={ceilingInsulationOptions}
-          onChange={(x) => set(['above', 'insulation'], x)}
-          error={err(['above', 'insulation'])}
+          label="Above the room"
+          value={aboveKind}
+          options={aboveOptions}
+          onChange={(k) => set(['above'], ABOVE_DEFAULTS[k])}
+          error={err(['above'])}
         />
-      ) : null}
-      {aboveKind === 'attic' || aboveKind === 'roof' ? (
-        <SelectInput
-          label="Roof colour"
-          value={asString(above.roofColor, 'medium')}
-          options={COLOR_OPTIONS}
-          onChange={(x) => set(['above', 'roofColor'], x)}
-          error={err(['above', 'roofColor'])}
-        />
-      ) : null}
-      {aboveKind === 'attic' ? (
-        <SelectInput
-          label="Radiant barrier under the roof"
-          value={above.radiantBarrier === true ? 'yes' : 'no'}
-          options={[
-            { value: 'no', label: 'No radiant barrier' },
-            { value: 'yes', label: 'Radiant barrier' },
-          ]}
-          onChange={(x) => set(['above', 'radiantBarrier'], x === 'yes')}
-        />
-      ) : null}
-      <SelectInput
-        label="Below the room"
-        value={belowKind}
-        options={belowOptions}
-        onChange={(k) => set(['below'], BELOW_DEFAULTS[k])}
-        error={err(['below'])}
-      />
-      {belowKind === 'slab' ? (
-        <SelectInput
-          label="Slab edge"
-          value={below.edgeInsulated === true ? 'yes' : 'no'}
-          options={[
-            { value: 'no', label: 'Edge not insulated' },
-            { value: 'yes', label: 'Edge insulated' },
-          ]}
-          onChange={(x) => set(['below', 'edgeInsulated'], x === 'yes')}
-        />
-      ) : null}
-      {belowKind === 'crawlspace' ? (
-        <SelectInput
-          label="Crawl space venting"
-          value={below.vented === false ? 'closed' : 'vented'}
-          options={[
-            { value: 'vented', label: 'Vented' },
-            { value: 'closed', label: 'Closed (sealed)' },
-          ]}
-          onChange={(x) => set(['below', 'vented'], x === 'vented')}
-        />
-      ) : null}
-      {belowKind === 'basement-floor' ? (
-        <>
-          <NumberInput
-            label="Floor depth below grade"
-            quantity="ft"
-            value={asNumber(below.depthFt)}
-            onChange={(x) => set(['below', 'depthFt'], x)}
-            error={err(['below', 'depthFt'])}
+        {aboveKind === 'attic' || aboveKind === 'roof' ? (
+          <SelectInput
+            label="Ceiling insulation"
+            value={asString(above.insulation, 'r30')}
+            options={ceilingInsulationOptions}
+            onChange={(x) => set(['above', 'insulation'], x)}
+            error={err(['above', 'insulation'])}
           />
-          <NumberInput
-            label="Basement’s shortest width"
-            hint="The whole basement’s. Blank: this room’s shorter side."
-            quantity="ft"
-            value={asNumber(below.widthFt)}
-            onChange={(x) => set(['below', 'widthFt'], x)}
-            error={err(['below', 'widthFt'])}
+        ) : null}
+        {aboveKind === 'attic' || aboveKind === 'roof' ? (
+          <SelectInput
+            label="Roof colour"
+            value={asString(above.roofColor, 'medium')}
+            options={COLOR_OPTIONS}
+            onChange={(x) => set(['above', 'roofColor'], x)}
+            error={err(['above', 'roofColor'])}
           />
-          <NumberInput
-            label="Insulation under the floor"
-            unit="R"
-            value={asNumber(below.insulationR)}
-            onChange={(x) => set(['below', 'insulationR'], x)}
-            error={err(['below', 'insulationR'])}
+        ) : null}
+        {aboveKind === 'attic' ? (
+          <SelectInput
+            label="Radiant barrier under the roof"
+            value={above.radiantBarrier === true ? 'yes' : 'no'}
+            options={[
+              { value: 'no', label: 'No radiant barrier' },
+              { value: 'yes', label: 'Radiant barrier' },
+            ]}
+            onChange={(x) => set(['above', 'radiantBarrier'], x === 'yes')}
           />
-        </>
-      ) : null}
-      {belowKind === 'crawlspace' || belowKind === 'basement' || belowKind === 'garage' ? (
+        ) : null}
         <SelectInput
-          label="Floor insulation"
-          value={asString(below.insulation, 'none')}
-          options={floorInsulationOptions}
-          onChange={(x) => set(['below', 'insulation'], x)}
-          error={err(['below', 'insulation'])}
+          label="Below the room"
+          value={belowKind}
+          options={belowOptions}
+          onChange={(k) => set(['below'], BELOW_DEFAULTS[k])}
+          error={err(['below'])}
         />
-      ) : null}
-    </div>
-  );
-}
+        {belowKind === 'slab' ? (
+          <SelectInput
+            label="Slab edge"
+            value={below.edgeInsulated === true ? 'yes' : 'no'}
+            options={[
+              { value: 'no', label: 'Edge not insulated' },
+              { value: 'yes', label: 'Edge insulated' },
+            ]}
+            onChange={(x) => set(['below', 'edgeInsulated'], x === 'yes')}
+          />
+        ) : null}
+        {belowKind === 'crawlspace' ? (
+          <SelectInput
+            label="Crawl space venting"
+            value={below.vented === false ? 'closed' : 'vented'}
+            options={[
+              { value: 'vented', label: 'Vented' },
+              { value: 'closed', label: 'Closed (sealed)' },
+            ]}
+            onChange={(x) => set(['below', 'vented'], x === 'vented')}
+          />
+        ) : null}
+        {belowKind === 'basement-floor' ? (
+          <>
+            <NumberInput
+              label="Floor depth below grade"
+              quantity="ft"
+              value={asNumber(below.depthFt)}
+              onChange={(x) => set(['below', 'depthFt'], x)}
+              error={err(['below', 'depthFt'])}
+            />
+            <NumberInput
+              label="Basement’s shortest width"
+              hint="The whole basement’s. Blank: this room’s shorter side."
+              quantity="ft"
+              value={asNumber(below.widthFt)}
+              onChange={(x) => set(['below', 'widthFt'], x)}
+              error={err(['below', 'widthFt'])}
+            />
+            <NumberInput
+              label="Insulation under the floor"
+              unit="R"
+              value={asNumber(below.insulationR)}
+              onChange={(x) => set(['below', 'insulationR'], x)}
+              error={err(['below', 'insulationR'])}
+            />
+          </>
+        ) : null}
+        {belowKind === 'crawlspace' || belowKind === 'basement' || belowKind === 'garage' ? (
+          <SelectInput
+            label="Floor insulation"
+            value={asString(below.insulation, 'none')}
+            options={floorInsulationOptions}
+            onChange={(x) => set(['below', 'insulation'], x)}
+            error={err(['below', 'insulation'])}
+          />
+        ) : null}
+      </div>
+    );
+  },
+  sameDraftParts<EditorProps>(({ draft }) => [draft.above, draft.below]),
+);

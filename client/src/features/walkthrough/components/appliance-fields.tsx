@@ -1,6 +1,7 @@
+import { memo } from 'react';
 import { Button } from '../../../components/ui/button';
 import { append, asNumber, asRecords, asString, removeAt } from '../model/draft';
-import type { EditorProps } from './editor-props';
+import { sameDraftParts, type EditorProps, type Replace } from './editor-props';
 import { NumberInput, SelectInput, TextInput } from './field-kit';
 
 /** "2 people · 1 appliance (Lamp 100 W)": the people section's folded line. */
@@ -22,60 +23,68 @@ export function peopleSummary(draft: Record<string, unknown>): { text: string; c
 }
 
 /** Heat-producing appliances and lights of the room. */
-export function ApplianceFields({ draft, set, err, replace }: EditorProps & { replace: (next: unknown) => void }) {
-  const items = asRecords(draft.appliances);
-  return (
-    <div className="flex flex-col gap-3">
-      {items.map((a, i) => {
-        const p = (k: string) => ['appliances', i, k];
-        return (
-          <fieldset key={i} className="grid grid-cols-2 gap-3 rounded-md border border-line p-3 sm:grid-cols-4">
-            <legend className="px-1 text-sm font-semibold text-ink-800">Appliance {i + 1}</legend>
-            <TextInput
-              label="Appliance name"
-              value={asString(a.label)}
-              onChange={(x) => set(p('label'), x)}
-              error={err(p('label'))}
-            />
-            <NumberInput
-              label="Heat given off"
-              value={asNumber(a.gain)}
-              unit={asString(a.unit, 'W')}
-              onChange={(x) => set(p('gain'), x)}
-              error={err(p('gain'))}
-            />
-            <SelectInput
-              label="Gain unit"
-              value={asString(a.unit, 'W')}
-              options={[
-                { value: 'W', label: 'W' },
-                { value: 'Btu/h', label: 'Btu/h' },
-              ]}
-              onChange={(x) => set(p('unit'), x)}
-            />
-            <NumberInput
-              label="Moisture (latent) gain"
-              unit="Btu/h"
-              value={asNumber(a.latentBtuh)}
-              onChange={(x) => set(p('latentBtuh'), x)}
-              error={err(p('latentBtuh'))}
-            />
-            <Button variant="ghost" onClick={() => replace(removeAt(draft, ['appliances'], i))}>
-              Remove appliance {i + 1}
-            </Button>
-          </fieldset>
-        );
-      })}
-      <div>
-        <Button
-          variant="secondary"
-          onClick={() =>
-            replace(append(draft, ['appliances'], { label: 'Appliance', gain: 100, unit: 'W', latentBtuh: 0 }))
-          }
-        >
-          Add appliance
-        </Button>
+type ApplianceProps = EditorProps & { replace: Replace };
+
+/** Re-renders when the appliances change. */
+export const ApplianceFields = memo(
+  function ApplianceFields({ draft, set, err, replace }: ApplianceProps) {
+    const items = asRecords(draft.appliances);
+    return (
+      <div className="flex flex-col gap-3">
+        {items.map((a, i) => {
+          const p = (k: string) => ['appliances', i, k];
+          return (
+            <fieldset key={i} className="grid grid-cols-2 gap-3 rounded-md border border-line p-3 sm:grid-cols-4">
+              <legend className="px-1 text-sm font-semibold text-ink-800">Appliance {i + 1}</legend>
+              <TextInput
+                label="Appliance name"
+                value={asString(a.label)}
+                onChange={(x) => set(p('label'), x)}
+                error={err(p('label'))}
+              />
+              <NumberInput
+                label="Heat given off"
+                value={asNumber(a.gain)}
+                unit={asString(a.unit, 'W')}
+                onChange={(x) => set(p('gain'), x)}
+                error={err(p('gain'))}
+              />
+              <SelectInput
+                label="Gain unit"
+                value={asString(a.unit, 'W')}
+                options={[
+                  { value: 'W', label: 'W' },
+                  { value: 'Btu/h', label: 'Btu/h' },
+                ]}
+                onChange={(x) => set(p('unit'), x)}
+              />
+              <NumberInput
+                label="Moisture (latent) gain"
+                unit="Btu/h"
+                value={asNumber(a.latentBtuh)}
+                onChange={(x) => set(p('latentBtuh'), x)}
+                error={err(p('latentBtuh'))}
+              />
+              <Button variant="ghost" onClick={() => replace((latest: unknown) => removeAt(latest, ['appliances'], i))}>
+                Remove appliance {i + 1}
+              </Button>
+            </fieldset>
+          );
+        })}
+        <div>
+          <Button
+            variant="secondary"
+            onClick={() =>
+              replace((latest: unknown) =>
+                append(latest, ['appliances'], { label: 'Appliance', gain: 100, unit: 'W', latentBtuh: 0 }),
+              )
+            }
+          >
+            Add appliance
+          </Button>
+        </div>
       </div>
-    </div>
-  );
-}
+    );
+  },
+  sameDraftParts<ApplianceProps>(({ draft }) => [draft.appliances]),
+);

@@ -1,6 +1,6 @@
 import { formatTape, formatTapeCm, parseTape } from '@calc';
 import type { UnitSystem } from '@contract';
-import { useEffect, useId, useState, type ReactNode } from 'react';
+import { memo, useEffect, useId, useState, type ReactNode } from 'react';
 import { FieldShell, inputClass, SelectOptions } from '../../../components/ui/field-shell';
 import { fromDisplay, localiseBound, toDisplay, unitLabel, type Quantity } from '../../../lib/unit-display';
 import { useUnitSystem } from './unit-system';
@@ -71,12 +71,17 @@ function readField(
 const sameValue = (a: number | undefined, b: number | undefined) =>
   a === b || (a !== undefined && b !== undefined && Number.isNaN(a) && Number.isNaN(b));
 
+/*
+ * The fields are memoised: one whose props are all the same as last time (the room editor hands each a setter
+ * that keeps its identity) is skipped when another field's key re-renders the form around it (issue 11).
+ */
+
 /**
  * A number on the phone's decimal keypad, shown in the company's units. Empty → undefined,
  * text → NaN, so calc's schema says what is wrong. Keeps the typed text while it parses
  * to the same number ("8." stays "8.").
  */
-export function NumberInput({
+export const NumberInput = memo(function NumberInput({
   label,
   value,
   onChange,
@@ -129,7 +134,7 @@ export function NumberInput({
       />
     </FieldShell>
   );
-}
+});
 
 interface TextProps {
   label: string;
@@ -139,7 +144,7 @@ interface TextProps {
   multiline?: boolean;
 }
 
-export function TextInput({ label, value, onChange, error, multiline = false }: TextProps) {
+export const TextInput = memo(function TextInput({ label, value, onChange, error, multiline = false }: TextProps) {
   const id = useId();
   return (
     <FieldShell id={id} label={label} error={error}>
@@ -164,7 +169,7 @@ export function TextInput({ label, value, onChange, error, multiline = false }: 
       )}
     </FieldShell>
   );
-}
+});
 
 interface SelectProps {
   label: string;
@@ -175,7 +180,7 @@ interface SelectProps {
   hint?: ReactNode;
 }
 
-export function SelectInput({ label, value, onChange, options, error, hint }: SelectProps) {
+export const SelectInput = memo(function SelectInput({ label, value, onChange, options, error, hint }: SelectProps) {
   const id = useId();
   return (
     <FieldShell id={id} label={label} error={error} hint={hint}>
@@ -190,4 +195,4 @@ export function SelectInput({ label, value, onChange, options, error, hint }: Se
       </select>
     </FieldShell>
   );
-}
+});

@@ -1,14 +1,23 @@
 import type { PlausibilityWarning, Tightness } from '@calc';
-import { useDeferredValue, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import {
+  useCallback,
+  useDeferredValue,
+  useEffect,
+  useLayoutEffect,
+  useMemo,
+  useRef,
+  useState,
+  type ReactNode,
+} from 'react';
 import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { Button } from '../../../components/ui/button';
 import { RoomLoadBar } from '../../loads/components/room-load-bar';
 import { RoomLoadPanel } from '../../loads/components/room-load-panel';
 import type { LiveHomeInputs } from '../../loads/model/live-room';
-import { asNumber, asRecords, asString, setIn, type PathPart } from '../model/draft';
+import { append, asNumber, asRecords, asString, setIn, type PathPart } from '../model/draft';
 import { floorLevelOptions } from '../model/options';
 import { NEW_WALL } from '../model/room-templates';
-import { checkRoom, pathKey } from '../model/validate-room';
+import { checkRoom, pathKey, type FieldErrors, type RoomCheck } from '../model/validate-room';
 import { sameRoomInput, saveablePart } from '../model/saveable';
 import { markUnsavedFields } from '../../../lib/offline/unsaved-fields';
 import type { RoomView } from '../sync/overlay';
@@ -18,6 +27,7 @@ import { useWalkthroughQueue } from '../sync/queue-context';
 import { clearUnsavedDraft, keepUnsavedDraft, takeUnsavedDraft } from '../../../lib/offline/drafts';
 import { aboveBelowSummary, AboveBelowFields } from './above-below-fields';
 import { ApplianceFields, peopleSummary } from './appliance-fields';
+import type { Replace } from './editor-props';
 import { Fold } from './fold';
 import { NumberInput, SelectInput, TextInput } from './field-kit';
 import { RoomPhotos } from './room-photos';
@@ -36,17 +46,40 @@ interface Props {
 const ALONE: LiveHomeInputs = { rooms: [] };
 const NO_WARNINGS: readonly PlausibilityWarning[] = [];
 
-/** One room, saved as it is typed: every valid change goes to the queue after a short pause. */
+/** Two checks' errors say the same: the fields and parts showing them need not render again. */
+function sameErrors(a: FieldErrors, b: FieldErrors): boolean {
+  if (a.size !== b.size) return false;
+  for (const [key, message] of a) if (b.get(key) !== message) return false;
+  return true;
+}
+
+/** The room as typed and calc's check of it, made together once per change. */
+interface Typed {
+  readonly draft: Record<string, unknown>;
+  readonly check: RoomCheck;
+}
+
+/**
+ * One room, saved as it is typed: every valid change goes to the queue after a short pause.
+ *
+ * A keystroke re-renders the field typed in and what shows that value (a fold's line, the live loads a beat
+ * later), not the whole form (issue 11): the setters keep their identity for the editor's life and write to
+ * the room as it stands (`typed`, ahead of the render when keys come faster than renders), the errors keep
+ * theirs while they say the same, and the fields and the walls, above/below and appliances parts are
+ * memoised on the part of the room they show.
+ */
 export function RoomEditor({ jobId, room, designConditions, tightness, home = ALONE }: Props) {
   const queue = useWalkthroughQueue();
   // A draft the schema refused last time (still being fixed) comes back instead of the saved room,
   // also after the server moved on by this draft's own partial saves.
   const [restored] = useState(() => takeUnsavedDraft(room.id, room.version, (sent) => sameRoomInput(sent, room.input)));
-  const [draft, setDraft] = useState<Record<string, unknown>>(() => ({
-    ...(restored?.input ?? room.input),
-    id: room.id,
-  }));
-  const check = useMemo(() => checkRoom(draft), [draft]);
+  const [state, setState] = useState<Typed>(() => {
+    const draft = { ...(restored?.input ?? room.input), id: room.id };
+    return { draft, check: checkRoom(draft) };
+  });
+  const { draft, check } = state;
+  // What the next change starts from: set with the change itself, so two keys before a render both count.
+  const typed = useRef(state);
   // The live loads follow the form a beat behind: a keystroke renders the field at once and the loads
   // (the engine's recompute, the figures, the chart) in a render of their own right after it, which the
   // next keystroke may interrupt (issue 11: on a phone at 4× slowdown they were most of each key's work).
@@ -66,10 +99,19 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
   useEffect(() => markUnsavedFields(target, check.errors.size), [target, check.errors.size]);
   useEffect(() => () => markUnsavedFields(target, 0), [target]);
 
-  const replace = (next: unknown) => {
-    const value = typeof next === 'object' && next !== null && !Array.isArray(next) ? { ...next } : draft;
-    setDraft(value);
-    if (checkRoom(value).ok) {
+  const change = (next: unknown) => {
+    const before = typed.current;
+    const given =
+      typeof next === 'function' ? (next as (latest: Record<string, unknown>) => unknown)(before.draft) : next;
+    const value = typeof given === 'object' && given !== null && !Array.isArray(given) ? { ...given } : before.draft;
+    const checked = checkRoom(value);
+    const now: Typed = {
+      draft: value,
+      check: sameErrors(checked.errors, before.check.errors) ? { ...checked, errors: before.check.errors } : checked,
+    };
+    typed.current = now;
+    setState(now);
+    if (checked.ok) {
       clearUnsavedDraft(room.id);
       queued.current = value;
       schedule(value);
@@ -88,14 +130,35 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
     }
     keepUnsavedDraft(room.id, { baseVersion: room.version, input: value, sent: queued.current ?? undefined });
   };
-  const set = (path: readonly PathPart[], value: unknown) => replace(setIn(draft, path, value));
-  const err = (path: readonly PathPart[]) => check.errors.get(pathKey(path));
+  // One identity for the editor's life (what the memoised parts compare), calling this render's `change`.
+  const latestChange = useRef(change);
+  useLayoutEffect(() => {
+    latestChange.current = change;
+  });
+  const replace = useCallback<Replace>((next) => latestChange.current(next), []);
+  const set = useCallback(
+    (path: readonly PathPart[], value: unknown) => replace((latest: unknown) => setIn(latest, path, value)),
+    [replace],
+  );
+  const err = useCallback((path: readonly PathPart[]) => check.errors.get(pathKey(path)), [check.errors]);
+  // A setter per field, made once: a field whose value and error did not change is skipped on a key elsewhere.
+  const setters = useRef(new Map<string, (value: unknown) => void>());
+  const setterOf = (...path: PathPart[]) => {
+    const key = path.join('.');
+    let setter = setters.current.get(key);
+    if (!setter) {
+      setter = (value: unknown) => set(path, value);
+      setters.current.set(key, setter);
+    }
+    return setter;
+  };
+  const setFloorLevel = useCallback((x: string) => set(['floorLevel'], Number(x)), [set]);
   const props = { draft, set, err };
   const walls = asRecords(draft.exposedWalls);
   // Walls the room came with fold once complete; one added now opens to be filled in.
   const [wallsAtOpen] = useState(walls.length);
   const name = asString(draft.name) || 'Room';
-  const errorKeys = [...check.errors.keys()];
+  const errorKeys = useMemo(() => [...check.errors.keys()], [check.errors]);
   const errorUnder = (...prefixes: string[]) =>
     errorKeys.some((k) => prefixes.some((prefix) => k === prefix || k.startsWith(`${prefix}.`)));
   const aboveBelow = aboveBelowSummary(draft);
@@ -117,7 +180,7 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
             <TextInput
               label="Room name"
               value={asString(draft.name)}
-              onChange={(x) => set(['name'], x)}
+              onChange={setterOf('name')}
               error={err(['name'])}
             />
           </div>
@@ -125,21 +188,21 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
             label="Floor level"
             value={String(asNumber(draft.floorLevel) ?? 1)}
             options={floorLevelOptions}
-            onChange={(x) => set(['floorLevel'], Number(x))}
+            onChange={setFloorLevel}
             error={err(['floorLevel'])}
           />
           <NumberInput
             label="Length"
             quantity="ft"
             value={asNumber(draft.lengthFt)}
-            onChange={(x) => set(['lengthFt'], x)}
+            onChange={setterOf('lengthFt')}
             error={err(['lengthFt'])}
           />
           <NumberInput
             label="Width"
             quantity="ft"
             value={asNumber(draft.widthFt)}
-            onChange={(x) => set(['widthFt'], x)}
+            onChange={setterOf('widthFt')}
             error={err(['widthFt'])}
           />
           <NumberInput
@@ -147,14 +210,14 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
             hint="Only if length × width does not fit"
             quantity="ft2"
             value={asNumber(draft.areaFt2)}
-            onChange={(x) => set(['areaFt2'], x)}
+            onChange={setterOf('areaFt2')}
             error={err(['areaFt2'])}
           />
           <NumberInput
             label="Ceiling height"
             quantity="ft"
             value={asNumber(draft.ceilingHeightFt)}
-            onChange={(x) => set(['ceilingHeightFt'], x)}
+            onChange={setterOf('ceilingHeightFt')}
             error={err(['ceilingHeightFt'])}
           />
         </div>
@@ -174,7 +237,10 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
             />
           ))}
           <div>
-            <Button variant="secondary" onClick={() => replace(setIn(draft, ['exposedWalls'], [...walls, NEW_WALL]))}>
+            <Button
+              variant="secondary"
+              onClick={() => replace((latest: unknown) => append(latest, ['exposedWalls'], NEW_WALL))}
+            >
               Add wall
             </Button>
           </div>
@@ -195,7 +261,7 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
                 integer
                 unit="people"
                 value={asNumber(draft.occupants)}
-                onChange={(x) => set(['occupants'], x)}
+                onChange={setterOf('occupants')}
                 error={err(['occupants'])}
               />
             </div>
@@ -207,7 +273,7 @@ export function RoomEditor({ jobId, room, designConditions, tightness, home = AL
           label="Notes"
           multiline
           value={asString(draft.notes)}
-          onChange={(x) => set(['notes'], x)}
+          onChange={setterOf('notes')}
           error={err(['notes'])}
         />
 

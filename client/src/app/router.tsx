@@ -36,6 +36,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
         { path: paths.signIn, lazy: lazy(() => import('./routes/sign-in')) },
         { path: paths.forgotPassword, lazy: lazy(() => import('./routes/forgot-password')) },
         { path: paths.resetPassword, lazy: lazy(() => import('./routes/reset-password')) },
+        // The customer's proposal: outside the signed-in shell (a proposal-link session, no staff sign-in).
+        { path: paths.customerProposal, lazy: lazy(() => import('./routes/customer-proposal')) },
         {
           // The signed-in shell: its loader is the auth guard.
           path: paths.home,

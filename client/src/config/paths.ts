@@ -1,4 +1,4 @@
-import { RESET_PASSWORD_PATH } from '@contract';
+import { CUSTOMER_PROPOSAL_PREFIX, RESET_PASSWORD_PATH } from '@contract';
 
 /** Every client URL in one place; build links with these, never with string literals. */
 export const paths = {
@@ -14,6 +14,8 @@ export const paths = {
   reports: '/reports',
   priceBook: '/price-book',
   companySettings: '/settings',
+  /** The customer's page of a proposal (no staff sign-in). */
+  customerProposal: `${CUSTOMER_PROPOSAL_PREFIX}/:proposalId`,
 } as const;
 
 export type AppPath = (typeof paths)[keyof typeof paths];

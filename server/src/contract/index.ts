@@ -19,3 +19,4 @@ export * from './dates';
 export * from './proposal-diff';
 export * from './payments';
 export * from './loss-reasons';
+export * from './proposal-link';

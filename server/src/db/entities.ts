@@ -11,6 +11,7 @@ import { DesignOptionSchema } from '../modules/desk/option.entity';
 import { ProposalEventSchema, ProposalSchema, ProposalVersionSchema } from '../modules/proposals/proposal.entity';
 import { CompanyLossReasonsSchema } from '../modules/jobs/loss-reasons.entity';
 import { PaymentSchema } from '../modules/payments/payment.entity';
+import { ProposalLinkSchema } from '../modules/proposal-links/proposal-link.entity';
 import {
   CompanyDataChangeSchema,
   CompanyDataRowSchema,
@@ -37,4 +38,5 @@ export const entities = [
   ProposalEventSchema,
   PaymentSchema,
   CompanyLossReasonsSchema,
+  ProposalLinkSchema,
 ];

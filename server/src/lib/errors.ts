@@ -91,6 +91,17 @@ export class ConflictError extends AppError {
   }
 }
 
+/**
+ * A customer's proposal link (or the session it opened) that no longer works: expired, revoked, or its
+ * version replaced. `reason` and `contact` (the company's name and phone from the version sent) let the
+ * customer's page say why and whom to call.
+ */
+export class LinkEndedError extends AppError {
+  constructor(detail: string, extra: Record<string, unknown>) {
+    super(410, 'link-ended', 'This link no longer works', detail, extra);
+  }
+}
+
 /** A new record would repeat one the company has (same e-mail or phone); `existing` names it so the person can use it. */
 export class DuplicateError extends AppError {
   constructor(title: string, detail: string, extra: Record<string, unknown>) {

@@ -78,6 +78,8 @@ function responses(route: RegisteredRoute): Json {
   if (route.policy.kind !== 'public') out['401'] = problem('Not signed in (or the signature does not match)');
   if (route.policy.kind === 'roles') out['403'] = problem('The role may not do this, or the CSRF token is missing');
   if (route.params || route.policy.kind === 'link') out['404'] = problem('Not found (or not yours to see)');
+  if (route.policy.kind === 'link')
+    out['410'] = problem('The link ended (expired, withdrawn or replaced): why, and whom to contact');
   if (route.ifMatch) {
     out['409'] = problem('Changed by someone else since the version sent: the answer carries the record now');
     out['428'] = problem('If-Match is missing');

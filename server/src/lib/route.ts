@@ -21,13 +21,19 @@ export interface Actor {
 
 /**
  * What a proposal link gives a customer's browser: a session that reaches only that one proposal's
- * routes. Set in the session by the route that opens a link (the proposal issue adds it).
+ * routes. Set in the session by the route that opens a link (modules/proposal-links, GET /api/links/open).
  */
 export interface LinkGrant {
   proposalId: string;
   companyId: string;
   /** Epoch ms after which the grant no longer counts. */
   expiresAt: number;
+  /** The link it was opened with (its routes check it still works: not revoked, expired or superseded). */
+  linkId?: string;
+  /** The version that link sent. */
+  versionId?: string;
+  /** Set once the customer's page has been read in this session (one 'viewed' event per opening). */
+  viewed?: boolean;
 }
 
 /** Deny by default: every route states who may call it. */

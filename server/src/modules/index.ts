@@ -24,6 +24,7 @@ import { paymentHooks } from './payments/payments.hooks';
 import { proposalPdfRoutes } from './proposals/proposal-pdf.routes';
 import { paymentRoutes } from './payments/payments.routes';
 import { proposalRoutes } from './proposals/proposal.routes';
+import { customerProposalRoutes, linkOpenRoutes, proposalLinkRoutes } from './proposal-links/proposal-link.routes';
 
 /** A module's routes under /api<prefix> (tests add their own through createApp's extras). */
 export type ModuleMount = readonly [prefix: string, register: (api: ApiRouter) => void];
@@ -69,7 +70,10 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/jobs', deskRoutes);
   mount('/jobs', proposalPdfRoutes);
   mount('/jobs', proposalRoutes);
+  mount('/jobs', proposalLinkRoutes);
   mount('/company-data', companyDataRoutes);
   mount('/proposals', paymentRoutes);
+  mount('/proposals', customerProposalRoutes);
+  mount('/links', linkOpenRoutes);
   for (const [prefix, register] of extra) mount(prefix, register);
 }

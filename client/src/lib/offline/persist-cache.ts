@@ -76,7 +76,8 @@ export function keepPersonCache(queryClient: QueryClient): () => void {
       queryClient,
       persister: persisterFor(p),
       buster: BUSTER,
-      dehydrateOptions: { shouldDehydrateQuery: (q) => q.state.status === 'success' },
+      // A query marked `meta: { persist: false }` (a customer's proposal) is never written to the device.
+      dehydrateOptions: { shouldDehydrateQuery: (q) => q.state.status === 'success' && q.meta?.persist !== false },
     });
   };
   follow();

@@ -72,11 +72,21 @@ export function describeMailError(err: unknown): string {
 /** graphile-worker waits e^min(n,10) seconds after the n-th failed try (its fail_job). */
 export const retryDelayMs = (attempt: number) => Math.round(Math.exp(Math.min(attempt, 10)) * 1000);
 
+/** A message that is not to go out after all, and why (kept on the message, shown on the E-mail page). */
+export interface NotSent {
+  notSent: string;
+}
+
 export interface SendDeps {
   mailer: Mailer;
   clock: Clock;
-  /** Makes the body of a message stored without one (password-reset), inside the sending transaction. */
-  compose(em: EntityManager, message: OutgoingMessage): Promise<string | null>;
+  /**
+   * Makes the body of a message stored without one (password-reset, proposal-link), inside the sending
+   * transaction, or says why it is not to be sent.
+   */
+  compose(em: EntityManager, message: OutgoingMessage): Promise<string | NotSent>;
+  /** Told once a message has failed its last try (a proposal e-mail writes 'send-failed' on its trail). */
+  failed?(em: EntityManager, message: OutgoingMessage): Promise<void>;
 }
 
 /**
@@ -90,15 +100,15 @@ export async function sendMessage(em: EntityManager, deps: SendDeps, messageId: 
   try {
     // The body is made and the mail sent inside one transaction, so a one-time link made for a
     // message that then failed to go out is rolled back with it.
-    const sent = await em.transactional(async (tx) => {
+    const outcome = await em.transactional(async (tx) => {
       const text = message.bodyText ?? (await deps.compose(tx, message));
-      if (text === null) return false;
+      if (typeof text !== 'string') return text;
       await deps.mailer.send({ to: message.toAddress, subject: message.subject, text });
-      return true;
+      return null;
     });
-    message.state = sent ? 'sent' : 'failed';
-    message.sentAt = sent ? deps.clock.now() : null;
-    message.lastError = sent ? null : 'Not sent: the account it was for is no longer active.';
+    message.state = outcome ? 'failed' : 'sent';
+    message.sentAt = outcome ? null : deps.clock.now();
+    message.lastError = outcome ? outcome.notSent : null;
     message.nextAttemptAt = null;
     await em.flush();
   } catch (err) {
@@ -107,6 +117,7 @@ export async function sendMessage(em: EntityManager, deps: SendDeps, messageId: 
     message.lastError = describeMailError(err);
     message.nextAttemptAt = last ? null : new Date(deps.clock.now().getTime() + retryDelayMs(run.attempt));
     await em.flush();
+    if (last && deps.failed) await deps.failed(em, message);
     throw err;
   }
 }

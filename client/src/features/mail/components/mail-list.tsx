@@ -12,6 +12,7 @@ const KIND_LABEL: Record<Message['kind'], string> = {
   'new-user': 'New account',
   'password-changed': 'Password changed',
   'password-reset': 'Password reset link',
+  'proposal-link': 'Proposal sent to a customer',
 };
 
 const STATE: Record<Message['state'], { label: string; className: string }> = {

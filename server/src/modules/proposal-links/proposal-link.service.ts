@@ -14,13 +14,13 @@ import type { ServiceContext } from '../../lib/service-context';
 import type { Queue } from '../../services/queue';
 import type { Clock } from '../../services/services';
 import { findJob } from '../jobs/job-access';
+import { moveJobForProposal } from '../jobs/job-moves';
 import type { Job } from '../jobs/job.entity';
 import { queueMessage, type NotSent } from '../mail/mail.service';
 import type { OutgoingMessage } from '../mail/outgoing-message.entity';
 import { ProposalEventSchema, ProposalSchema, ProposalVersionSchema } from '../proposals/proposal.entity';
 import { UserSchema } from '../users/user.entity';
 import { ProposalLinkSchema, type ProposalLink } from './proposal-link.entity';
-import { moveJobToProposed } from './job-proposed';
 
 /**
  * Sending a proposal version to its customer (issue 14): each send is a new link (proposal_link) and an
@@ -103,12 +103,14 @@ export async function listLinks(ctx: ServiceContext, jobId: string): Promise<Pro
 
 /**
  * Sends the current version to `to`: a new link and its e-mail on the queue, in one transaction with the
- * job row locked. Sending moves a job still in walk-through or design to "proposed". 409 with the reason when
+ * job row locked. Sending moves the job to "proposed" (jobs/job-moves: from walk-through, design or lost; a job
+ * won or installed stays). 409 with the reason when
  * there is no version or the job changed since it was issued.
  */
 export async function sendProposal(ctx: LinkContext, jobId: string, to: string): Promise<void> {
   await ctx.em.transactional(async (tx) => {
     const job = await findJob({ ...ctx, em: tx }, jobId);
+    // The job row is locked by the move below; sends of one job queue here first.
     await tx.execute('select id from "job" where id = ? for update', [job.id]);
     await tx.refresh(job);
     const { proposal, version } = await currentVersionOf(tx, ctx.actor.companyId, job.id);
@@ -137,7 +139,13 @@ export async function sendProposal(ctx: LinkContext, jobId: string, to: string):
       revokedBy: null,
     });
     await tx.flush();
-    await moveJobToProposed(tx, job);
+    await moveJobForProposal(tx, {
+      companyId: ctx.actor.companyId,
+      jobId: job.id,
+      to: 'proposed',
+      byUserId: ctx.actor.userId,
+      at: now,
+    });
   });
 }
 

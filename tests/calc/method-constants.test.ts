@@ -168,6 +168,13 @@ describe('assumptions with no published source: the method statement’s figures
     expect(methodAssumptionText(a)).toMatch(
       a.notEntered ? /^Assumption \(not recorded on the walk-through\)/ : /^Assumption \(no published source found\)/,
     );
+    // The statement's range reads smaller figure first, whichever end of the assumption gives it.
+    const range = /between ([\d,]+) and ([\d,]+) Btu\/h/.exec(methodAssumptionText(a));
+    if (a.ranch && a.ranch.low !== a.ranch.high) {
+      const [lo, hi] = [range?.[1], range?.[2]].map((x) => Number((x ?? '').replace(/,/g, '')));
+      expect(lo).toBe(Math.min(a.ranch.low, a.ranch.high));
+      expect(hi).toBe(Math.max(a.ranch.low, a.ranch.high));
+    }
   });
 
   it('glass absorption: the stated bound, 2 % of the ranch’s sun through glass, is about 225 Btu/h', () => {

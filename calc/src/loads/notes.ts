@@ -88,7 +88,10 @@ export function methodAssumptionText(a: MethodAssumption): string {
     : `Assumption (no published source found): ${a.what}.`;
   if (!a.ranch) return a.effect ? `${head} ${a.effect.charAt(0).toUpperCase()}${a.effect.slice(1)}.` : head;
   const r = a.ranch;
-  const figures = r.low === r.high ? `${btuh(r.low)} Btu/h` : `${btuh(r.low)} to ${btuh(r.high)} Btu/h`;
+  // Smaller figure first, whichever end of the range gives it (a range read "25,248 to 25,011" trips the reader).
+  const lo = Math.min(r.low, r.high);
+  const hi = Math.max(r.low, r.high);
+  const figures = lo === hi ? `${btuh(lo)} Btu/h` : `between ${btuh(lo)} and ${btuh(hi)} Btu/h`;
   return (
     `${head} ${a.range.charAt(0).toUpperCase()}${a.range.slice(1)}, the example ranch’s block cooling load${r.variant ? ` ${r.variant}` : ''} is ` +
     `${figures} (${btuh(r.asUsed)} as used).`

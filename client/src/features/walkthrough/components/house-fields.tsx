@@ -28,10 +28,11 @@ const DUCT_LEAKAGE = [
 ];
 
 /** The construction classes of the radiant time factors in words a person at the house can tell apart. */
+// Short enough to read whole in a phone's select (375 px); what each class means is in the field's hint.
 const THERMAL_MASS = [
-  { value: 'medium', label: 'Medium: frame or brick-veneer walls on a concrete slab (usual)' },
-  { value: 'light', label: 'Light: frame walls, wood floors over a crawl space or basement' },
-  { value: 'heavy', label: 'Heavy: solid masonry or concrete walls and floors' },
+  { value: 'medium', label: 'Medium (most houses)' },
+  { value: 'light', label: 'Light' },
+  { value: 'heavy', label: 'Heavy' },
 ];
 
 const num = (v: unknown) => (typeof v === 'number' ? v : undefined);
@@ -131,7 +132,7 @@ export function HouseFields({ value, onChange }: { value: HouseDraft; onChange: 
           label="How much heat the house stores"
           value={typeof value.thermalMass === 'string' ? value.thermalMass : 'medium'}
           options={THERMAL_MASS}
-          hint="Sets how long the sun through the windows takes to warm the rooms (ASHRAE radiant time series). Not sure: medium."
+          hint="Light: frame walls, wood floors over a crawl space or basement. Medium: frame or brick-veneer walls on a concrete slab. Heavy: solid masonry or concrete walls and floors. Sets how long the sun through the windows takes to warm the rooms (ASHRAE radiant time series). Not sure: medium."
           onChange={(k) => set('thermalMass', k === 'medium' ? undefined : k)}
         />
         <SelectInput

@@ -15,6 +15,7 @@ import { apiVersionGuard, csrfGuard, deviceGuard, personGuard, sessionMiddleware
 import { loadActor } from './modules/auth/load-actor';
 import { mountHooks, mountModules, type ModuleMount } from './modules';
 import type { Services } from './services/services';
+import { browserPayments } from './services/payments';
 
 const JSON_LIMIT = '256kb';
 const IMPORT_JSON_LIMIT = '3mb';
@@ -79,11 +80,15 @@ export function createApp(services: Services, extras: AppExtras = {}): Express {
   app.set('etag', false);
 
   app.use(requestLog(logger));
+  const paysFrom = browserPayments(config);
   app.use(
     helmet({
       contentSecurityPolicy: {
         directives: {
           defaultSrc: ["'self'"],
+          // The customer's page confirms a deposit with the payment service from the browser: the local fake's
+          // loopback origin when it is the configured service, nothing else (services/payments.ts).
+          connectSrc: ["'self'", ...(paysFrom ? [paysFrom.apiUrl] : [])],
           imgSrc: ["'self'", 'data:', 'blob:'],
           styleSrc: ["'self'", "'unsafe-inline'"],
           fontSrc: ["'self'", 'data:'],

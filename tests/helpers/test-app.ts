@@ -63,7 +63,7 @@ export async function buildTestApp(
   const base: Omit<Services, 'queue'> = {
     orm,
     sessionPool,
-    config: { ...config, devOutbox: true },
+    config: { ...config, PAYMENTS_API_URL: paymentsFake.url, devOutbox: true },
     mailer,
     payments: createStripePayments(paymentsConfig),
     storage,

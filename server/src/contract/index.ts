@@ -20,3 +20,4 @@ export * from './proposal-diff';
 export * from './payments';
 export * from './loss-reasons';
 export * from './proposal-link';
+export * from './after-signing';

@@ -1,7 +1,7 @@
 import { createHmac, randomBytes } from 'node:crypto';
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { LOCAL_SECRET_KEY } from '../services/payments';
+import { LOCAL_PUBLISHABLE_KEY, LOCAL_SECRET_KEY } from '../services/payments';
 
 /**
  * A local stand-in, on loopback, for the few payment-service endpoints the app uses (payment intents
@@ -141,8 +141,10 @@ export async function startPaymentsFake(opts: {
   webhookSecret: string;
   webhookTarget?: WebhookTarget;
   secretKey?: string;
+  publishableKey?: string;
 }): Promise<PaymentsFake> {
   const secretKey = opts.secretKey ?? LOCAL_SECRET_KEY;
+  const publishableKey = opts.publishableKey ?? LOCAL_PUBLISHABLE_KEY;
   const intents = new Map<string, FakeIntent>();
   const charges = new Map<string, FakeCharge>();
   const refunds = new Map<string, FakeRefund>();
@@ -336,13 +338,43 @@ export async function startPaymentsFake(opts: {
     const send = (status: number, body: string, replayed = false) => {
       res.writeHead(status, {
         'Content-Type': 'application/json',
+        // A customer's page confirms from its own origin with the publishable key (below), as the service's
+        // browser library does; no cookies, so any origin may read the answer.
+        'Access-Control-Allow-Origin': '*',
         'Request-Id': requestId,
         ...(replayed ? { 'Idempotent-Replayed': 'true' } : {}),
         ...(key ? { 'Idempotency-Key': key } : {}),
       });
       res.end(body);
     };
-    if (req.headers.authorization !== `Bearer ${secretKey}`) {
+    if (method === 'OPTIONS') {
+      res.writeHead(204, {
+        'Access-Control-Allow-Origin': '*',
+        'Access-Control-Allow-Methods': 'GET, POST',
+        'Access-Control-Allow-Headers': 'Content-Type',
+        'Access-Control-Max-Age': '600',
+      });
+      res.end();
+      return;
+    }
+    const form = parseForm(raw);
+    // The browser's one call: confirm an intent with the publishable key and the intent's client secret
+    // (form fields `key` and `client_secret`), no secret key. Anything else needs the secret key.
+    const browserConfirm = /^\/v1\/payment_intents\/([A-Za-z0-9_]+)\/confirm$/.exec(path);
+    if (req.headers.authorization === undefined && text(form, 'key') !== undefined) {
+      const pi = browserConfirm ? intents.get(browserConfirm[1] as string) : undefined;
+      if (method !== 'POST' || !browserConfirm || text(form, 'key') !== publishableKey) {
+        send(401, JSON.stringify({ error: { type: 'invalid_request_error', message: 'Invalid API Key provided.' } }));
+        return;
+      }
+      if (!pi || text(form, 'client_secret') !== pi.client_secret) {
+        const message = `No such payment_intent: '${browserConfirm[1]}'`;
+        send(404, JSON.stringify({ error: { type: 'invalid_request_error', code: 'resource_missing', message } }));
+        return;
+      }
+      delete form.key;
+      delete form.client_secret;
+    } else if (req.headers.authorization !== `Bearer ${secretKey}`) {
       send(401, JSON.stringify({ error: { type: 'invalid_request_error', message: 'Invalid API Key provided.' } }));
       return;
     }
@@ -359,7 +391,7 @@ export async function startPaymentsFake(opts: {
     let status: number;
     let body: string;
     try {
-      const out = handle(method, path, parseForm(raw), { id: requestId, idempotency_key: key });
+      const out = handle(method, path, form, { id: requestId, idempotency_key: key });
       status = out.status;
       body = JSON.stringify(out.body);
     } catch (err) {

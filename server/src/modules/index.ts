@@ -25,6 +25,7 @@ import { proposalPdfRoutes } from './proposals/proposal-pdf.routes';
 import { paymentRoutes } from './payments/payments.routes';
 import { proposalRoutes } from './proposals/proposal.routes';
 import { customerProposalRoutes, linkOpenRoutes, proposalLinkRoutes } from './proposal-links/proposal-link.routes';
+import { customerAfterSigningRoutes, officeCancellationRoutes } from './cancellations/cancellation.routes';
 
 /** A module's routes under /api<prefix> (tests add their own through createApp's extras). */
 export type ModuleMount = readonly [prefix: string, register: (api: ApiRouter) => void];
@@ -33,7 +34,15 @@ export type ModuleMount = readonly [prefix: string, register: (api: ApiRouter) =
  * Signed webhooks, under /api/hooks<prefix>: mounted before the JSON parser, the session and CSRF, so
  * each gets its body as received and answers to its signature only (lib/route.ts `signed`).
  */
-const hooks = (services: Services): readonly ModuleMount[] => [['/payments', paymentHooks(() => services.payments)]];
+const hooks = (services: Services): readonly ModuleMount[] => [
+  [
+    '/payments',
+    paymentHooks(
+      () => services.payments,
+      () => services.queue,
+    ),
+  ],
+];
 
 export function mountHooks(app: Express, services: Services, extra: readonly ModuleMount[] = []): void {
   for (const [prefix, register] of [...hooks(services), ...extra]) {
@@ -71,9 +80,11 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/jobs', proposalPdfRoutes);
   mount('/jobs', proposalRoutes);
   mount('/jobs', proposalLinkRoutes);
+  mount('/jobs', officeCancellationRoutes);
   mount('/company-data', companyDataRoutes);
   mount('/proposals', paymentRoutes);
   mount('/proposals', customerProposalRoutes);
+  mount('/proposals', customerAfterSigningRoutes);
   mount('/links', linkOpenRoutes);
   for (const [prefix, register] of extra) mount(prefix, register);
 }

@@ -67,6 +67,21 @@ export interface Payments {
 /** The key the SDK sends to the local fake: a test key, so nothing ever looks live. */
 export const LOCAL_SECRET_KEY = 'sk_test_gaugelineLocalFake';
 
+/** The publishable key the customer's page sends with a confirm to the local fake (a test key). */
+export const LOCAL_PUBLISHABLE_KEY = 'pk_test_gaugelineLocalFake';
+
+/**
+ * What the customer's browser needs to confirm a deposit with the payment service itself (card data goes
+ * from the browser to the service, never through this server): the service's address and the
+ * publishable key. Only for the local fake (its test payment methods, `testMode`); with a real key this
+ * build has no card form, so null. The app's CSP allows exactly this origin in connect-src.
+ */
+export function browserPayments(config: Config): { apiUrl: string; publishableKey: string; testMode: true } | null {
+  if (config.PAYMENTS_SECRET_KEY) return null;
+  const apiUrl = new URL(config.PAYMENTS_API_URL ?? `http://127.0.0.1:${config.PAYMENTS_FAKE_PORT}`).origin;
+  return { apiUrl, publishableKey: LOCAL_PUBLISHABLE_KEY, testMode: true };
+}
+
 /** Where the SDK goes: the real service with a key (unless PAYMENTS_API_URL says otherwise), the fake without. */
 export function paymentsEndpoint(config: Config): { host: string; port: number; protocol: 'http' | 'https' } | null {
   const url =

@@ -1,6 +1,7 @@
 import { composeResetMessage } from '../modules/auth/password.service';
 import { sendMessage } from '../modules/mail/mail.service';
 import { composeProposalLinkMessage, recordProposalSendFailed } from '../modules/proposal-links/proposal-link.service';
+import { refundCancelledDeposit } from '../modules/cancellations/cancellation.service';
 import { renderVersionPdf } from '../modules/proposals/proposal-pdf.service';
 import type { Services } from '../services/services';
 import type { TaskHandlers } from './kinds';
@@ -37,5 +38,6 @@ export function taskHandlers(services: Omit<Services, 'queue'>): TaskHandlers {
       );
     },
     'render-proposal-pdf': ({ versionId }, run) => renderVersionPdf(services, versionId, run),
+    'refund-deposit': ({ paymentId }) => refundCancelledDeposit(services.orm.em.fork(), services.payments, paymentId),
   };
 }

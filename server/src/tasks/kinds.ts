@@ -19,6 +19,11 @@ export const TASKS = {
     payload: z.strictObject({ versionId: z.uuid() }),
     maxAttempts: 5,
   },
+  /** Refunds the deposit of a cancelled proposal version, if it was paid (modules/cancellations). */
+  'refund-deposit': {
+    payload: z.strictObject({ paymentId: z.uuid() }),
+    maxAttempts: 10,
+  },
 } as const;
 
 export type TaskKind = keyof typeof TASKS;

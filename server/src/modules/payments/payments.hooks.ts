@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { BadRequestError } from '../../lib/errors';
 import { signed, type ApiRouter } from '../../lib/route';
 import { WebhookSignatureError, type PaymentEvent, type Payments } from '../../services/payments';
+import type { Queue } from '../../services/queue';
 import { applyPaymentEvent } from './payments.service';
 
 const VERIFIED = Symbol('verified payment event');
@@ -14,7 +15,7 @@ type VerifiedRequest = Request & { [VERIFIED]?: PaymentEvent };
  * a header that does not verify, or one signed too long ago → 400; either way nothing changes.
  * A verified event is applied once per event id (payments.service.ts).
  */
-export function paymentHooks(payments: () => Payments) {
+export function paymentHooks(payments: () => Payments, queue?: () => Pick<Queue, 'add'>) {
   return (api: ApiRouter): void => {
     api.route({
       method: 'post',
@@ -39,7 +40,7 @@ export function paymentHooks(payments: () => Payments) {
       handler: async ({ req, em }) => {
         const event = (req as VerifiedRequest)[VERIFIED];
         if (!event) throw new BadRequestError('The webhook is not a readable event.');
-        return { received: true as const, outcome: await applyPaymentEvent(em, event) };
+        return { received: true as const, outcome: await applyPaymentEvent(em, event, queue?.()) };
       },
     });
   };

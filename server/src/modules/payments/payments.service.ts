@@ -2,7 +2,9 @@ import type { EntityManager } from '@mikro-orm/postgresql';
 import { randomUUID } from 'node:crypto';
 import type { SnapshotOption } from '@contract';
 import { ConflictError, NotFoundError } from '../../lib/errors';
+import { moveJobForProposal } from '../jobs/job-moves';
 import type { DepositIntent, PaymentEvent, Payments } from '../../services/payments';
+import type { Queue } from '../../services/queue';
 import type { PaymentState } from './payment.entity';
 
 /**
@@ -92,6 +94,11 @@ export async function startDeposit(
   if (!Number.isSafeInteger(version.depositCents) || version.depositCents <= 0) {
     throw new ConflictError('This proposal asks for no deposit.');
   }
+  const cancelled = await em.execute<Array<{ id: string }>>(
+    'select "id" from "proposal_cancellation" where "company_id" = ? and "version_id" = ?',
+    [version.companyId, version.versionId],
+  );
+  if (cancelled[0]) throw new ConflictError('This proposal was cancelled, so no deposit is taken.');
   const existing = await paymentForVersion(em, version.companyId, version.versionId);
   if (existing?.state === 'succeeded' || existing?.state === 'refunded') {
     throw new ConflictError('The deposit for this proposal has already been paid.');
@@ -176,7 +183,11 @@ const HANDLED = new Set([
  * the same event again — sequentially or concurrently — finds it there and changes nothing. An intent's
  * amount, currency or metadata that does not match the row is recorded as a mismatch and not applied.
  */
-export async function applyPaymentEvent(em: EntityManager, event: PaymentEvent): Promise<WebhookOutcome> {
+export async function applyPaymentEvent(
+  em: EntityManager,
+  event: PaymentEvent,
+  queue?: Pick<Queue, 'add'>,
+): Promise<WebhookOutcome> {
   return em.transactional(async (tx) => {
     const at = new Date();
     const inserted = await tx.execute<Array<{ event_id: string }>>(
@@ -256,6 +267,20 @@ export async function applyPaymentEvent(em: EntityManager, event: PaymentEvent):
         ],
         'run',
       );
+    }
+    // The deposit was due and is now paid: the job is won (signing alone moves it where no deposit is due).
+    // Not for a version the buyer cancelled meanwhile: its refund task gives the money back instead.
+    if (move.to === 'succeeded') {
+      const job = await tx.execute<Array<{ job_id: string; cancelled: boolean }>>(
+        `select p."job_id", exists (select 1 from "proposal_cancellation" c where c."version_id" = ?) as "cancelled"
+         from "proposal" p where p."id" = ? and p."company_id" = ?`,
+        [payment.proposal_version_id, payment.proposal_id, payment.company_id],
+      );
+      if (job[0] && !job[0].cancelled)
+        await moveJobForProposal(tx, { companyId: payment.company_id, jobId: job[0].job_id, to: 'won', at });
+      // Paid after the buyer cancelled (the confirm was on its way): give it back.
+      if (job[0]?.cancelled && queue)
+        await queue.add('refund-deposit', { paymentId: payment.id }, { jobKey: `refund:${payment.id}`, em: tx });
     }
     return settle('applied', payment);
   });

@@ -21,3 +21,4 @@ export * from './payments';
 export * from './loss-reasons';
 export * from './proposal-link';
 export * from './after-signing';
+export * from './proposal-details';

@@ -1,6 +1,7 @@
 import { CompanySchema } from '../modules/companies/company.entity';
 import { UserSchema } from '../modules/users/user.entity';
 import { CompanySettingsSchema } from '../modules/company-settings/company-settings.entity';
+import { CompanyLogoSchema, CompanyProposalDetailsSchema } from '../modules/company-settings/proposal-details.entity';
 import { CustomerSchema } from '../modules/customers/customer.entity';
 import { JobSchema } from '../modules/jobs/job.entity';
 import { PhotoSchema } from '../modules/photos/photo.entity';
@@ -23,6 +24,8 @@ export const entities = [
   CompanySchema,
   UserSchema,
   CompanySettingsSchema,
+  CompanyProposalDetailsSchema,
+  CompanyLogoSchema,
   CustomerSchema,
   JobSchema,
   RoomSchema,

@@ -5,13 +5,14 @@ import { BadRequestError, PayloadTooLargeError } from './errors';
 export const PHOTO_FIELD = 'file';
 
 /**
- * Reads one multipart file into memory (photos are small and go straight to sharp).
+ * Reads one multipart file into memory (photos and logos are small and go straight to sharp).
  * Multer and busboy errors become our problem types here, so a malformed upload is a 4xx.
  */
 export function receiveUpload(
   req: Request,
   res: Response,
   maxBytes: number,
+  what: 'photo' | 'logo' = 'photo',
 ): Promise<{ buffer: Buffer; originalname: string }> {
   const upload = multer({
     storage: multer.memoryStorage(),
@@ -23,18 +24,18 @@ export function receiveUpload(
     upload(req, res, (err: unknown) => {
       if (err instanceof multer.MulterError) {
         if (err.code === 'LIMIT_FILE_SIZE')
-          return reject(new PayloadTooLargeError(`The photo is larger than ${mb} MB.`));
+          return reject(new PayloadTooLargeError(`The ${what} is larger than ${mb} MB.`));
         if (err.code === 'LIMIT_UNEXPECTED_FILE')
-          return reject(new BadRequestError(`Send one photo in the form field "${PHOTO_FIELD}".`));
+          return reject(new BadRequestError(`Send one ${what} in the form field "${PHOTO_FIELD}".`));
         return reject(
-          new BadRequestError('The upload does not fit the allowed limits: one photo and a few small fields.'),
+          new BadRequestError(`The upload does not fit the allowed limits: one ${what} and a few small fields.`),
         );
       }
       if (err) return reject(new BadRequestError('The upload could not be read as multipart/form-data.'));
       const file = req.file;
       if (!file)
-        return reject(new BadRequestError(`Attach the photo as multipart/form-data in the field "${PHOTO_FIELD}".`));
-      if (file.size === 0) return reject(new BadRequestError('The photo file is empty.'));
+        return reject(new BadRequestError(`Attach the ${what} as multipart/form-data in the field "${PHOTO_FIELD}".`));
+      if (file.size === 0) return reject(new BadRequestError(`The ${what} file is empty.`));
       resolve({ buffer: file.buffer, originalname: file.originalname });
     });
   });

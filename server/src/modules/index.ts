@@ -11,6 +11,7 @@ import { healthRoutes } from './health/health.routes';
 import { staffRoutes } from './users/staff.routes';
 import { userRoutes } from './users/user.routes';
 import { companySettingsRoutes } from './company-settings/company-settings.routes';
+import { proposalDetailsRoutes } from './company-settings/proposal-details.routes';
 import { customerRoutes } from './customers/customer.routes';
 import { jobRoutes } from './jobs/job.routes';
 import { lossReasonRoutes } from './jobs/loss-reasons.routes';
@@ -71,6 +72,7 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/mail', mailRoutes);
   mount('/company', companySettingsRoutes);
   mount('/company', lossReasonRoutes);
+  mount('/company', proposalDetailsRoutes);
   mount('/customers', customerRoutes);
   mount('/jobs', jobRoutes);
   mount('/jobs', roomRoutes);

@@ -17,7 +17,7 @@ import {
 import type { DeskJobState } from '../desk/desk-read';
 import { ConflictError, ForbiddenError, NotFoundError } from '../../lib/errors';
 import type { ServiceContext } from '../../lib/service-context';
-import { CompanySchema } from '../companies/company.entity';
+import { proposalCompanyPart } from '../company-settings/proposal-details.service';
 import { getDesk } from '../desk/desk.service';
 import { findJob } from '../jobs/job-access';
 import { UserSchema } from '../users/user.entity';
@@ -74,7 +74,7 @@ export async function issueVersion(ctx: ServiceContext, jobId: string, onIssued?
     const why = whyNot(job, desk.blockers, ctx.actor.role);
     if (why) throw new ConflictError(why);
     const now = ctx.clock.now();
-    const company = await tx.findOneOrFail(CompanySchema, ctx.actor.companyId);
+    const company = await proposalCompanyPart(tx, ctx.actor.companyId);
     const issuer = await tx.findOneOrFail(UserSchema, ctx.actor.userId);
     const snapshot = buildSnapshot({ company, customer: job.customer, job, options: desk.options, issuedAt: now });
     let proposal = await tx.findOne(ProposalSchema, { job: job.id, company: ctx.actor.companyId });

@@ -1,6 +1,5 @@
 import type { CatalogModel } from '@calc';
 import { proposalSnapshot, type ProposalSnapshot, type SnapshotOption } from '@contract';
-import type { Company } from '../companies/company.entity';
 import type { Customer } from '../customers/customer.entity';
 import type { Job } from '../jobs/job.entity';
 import type { OptionView } from '../desk/desk.service';
@@ -20,7 +19,8 @@ export const PROPOSAL_CAUTIONS = [
 ];
 
 interface SnapshotInputs {
-  readonly company: Pick<Company, 'name'>;
+  /** The company's part as the settings hold it now (company-settings `proposalCompanyPart`): frozen here. */
+  readonly company: ProposalSnapshot['company'];
   readonly customer: Pick<Customer, 'name' | 'email' | 'phone'>;
   readonly job: Pick<Job, 'street' | 'unit' | 'city' | 'region' | 'postalCode' | 'designConditions' | 'designSources'>;
   readonly options: readonly OptionView[];
@@ -149,17 +149,7 @@ export function buildSnapshot(i: SnapshotInputs): ProposalSnapshot {
   ];
   return proposalSnapshot.parse({
     schema: 1,
-    company: {
-      name: i.company.name,
-      address: null,
-      phone: null,
-      email: null,
-      licence: null,
-      logoKey: null,
-      terms: '',
-      warranty: '',
-      cancellationExtra: '',
-    },
+    company: { ...i.company },
     customer: { name: i.customer.name, email: i.customer.email ?? null, phone: i.customer.phone ?? null },
     site: {
       street: i.job.street,

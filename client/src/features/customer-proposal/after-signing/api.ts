@@ -10,9 +10,9 @@ import { apiFetch } from '../../../lib/api-client';
  * passes through this app's server.
  */
 
+/** Under the proposal's own key (`['customer-proposal', id]`), so the signing's invalidation refreshes it too. */
 export const afterSigningKeys = {
-  all: ['customer-proposal', 'after-signing'] as const,
-  one: (proposalId: string) => [...afterSigningKeys.all, proposalId] as const,
+  one: (proposalId: string) => ['customer-proposal', proposalId, 'after-signing'] as const,
 };
 
 const base = (proposalId: string) => `/api/proposals/${encodeURIComponent(proposalId)}`;

@@ -40,13 +40,13 @@ export function CancelPanel({ proposalId }: { proposalId: string }) {
   if (cancellation) {
     return (
       <section aria-labelledby={`${ids}-h`} className="rounded-lg border border-line bg-white p-4 shadow-card">
-        <h2 id={`${ids}-h`} className="text-lg font-semibold text-ink-900">
+        <h3 id={`${ids}-h`} className="text-lg font-semibold text-ink-900">
           {!paid
             ? 'Cancelled'
             : deposit.state === 'refunded'
               ? `Cancelled — your deposit of ${amount} has been refunded`
               : `Cancelled — your deposit of ${amount} is being refunded`}
-        </h2>
+        </h3>
         <p role="status" className="mt-1 text-base text-ink-800">
           {!paid
             ? 'You cancelled this agreement. Nothing was charged, and nothing more is owed.'
@@ -61,9 +61,9 @@ export function CancelPanel({ proposalId }: { proposalId: string }) {
   const failed = cancel.error;
   return (
     <section aria-labelledby={`${ids}-h`} className="rounded-lg border border-line bg-white p-4 shadow-card">
-      <h2 id={`${ids}-h`} className="text-lg font-semibold text-ink-900">
+      <h3 id={`${ids}-h`} className="text-lg font-semibold text-ink-900">
         Your right to cancel
-      </h2>
+      </h3>
       {window.open ? (
         <p className="mt-1 text-base font-semibold text-ink-950">
           You may cancel this agreement, without any penalty or obligation, until midnight at the end of{' '}

@@ -47,9 +47,9 @@ export function DepositStep({ proposalId }: { proposalId: string }) {
   if (deposit.state === 'succeeded' || deposit.state === 'refunded') {
     return (
       <section aria-labelledby={`${groupId}-h`} className="rounded-lg border border-ok bg-ok-soft p-4">
-        <h2 id={`${groupId}-h`} className="text-lg font-semibold text-ink-950">
+        <h3 id={`${groupId}-h`} className="text-lg font-semibold text-ink-950">
           Deposit paid
-        </h2>
+        </h3>
         <p className="mt-1 text-base text-ink-950">
           {amount}
           {deposit.paidAt ? ` on ${dayOf(deposit.paidAt)}` : ''}. Thank you — your contractor will be in touch to
@@ -88,9 +88,9 @@ export function DepositStep({ proposalId }: { proposalId: string }) {
   const waiting = step.kind === 'waiting';
   return (
     <section aria-labelledby={`${groupId}-h`} className="rounded-lg border border-line bg-white p-4 shadow-card">
-      <h2 id={`${groupId}-h`} className="text-lg font-semibold text-ink-900">
+      <h3 id={`${groupId}-h`} className="text-lg font-semibold text-ink-900">
         Pay the deposit of {amount}
-      </h2>
+      </h3>
       <p className="mt-1 text-base text-ink-700">
         The deposit holds your installation date. The rest is due as your agreement says.
       </p>

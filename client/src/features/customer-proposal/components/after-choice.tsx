@@ -1,10 +1,11 @@
 import type { CustomerProposalView } from '@contract';
+import { CancelPanel, DepositStep } from '../after-signing';
 import { money } from './format';
 
 /**
  * What comes after the customer's choice. The signing steps (sign14: `../signing/SigningSteps`) and then the
- * deposit and the right to cancel (after14: `../after-signing/DepositStep`, `CancelPanel`) are mounted here,
- * at the places marked below, by the slices that build them.
+ * deposit and the right to cancel (`../after-signing`: `DepositStep`, `CancelPanel`, which read the signing,
+ * the deposit and any cancellation from `GET …/after-signing` themselves).
  */
 export function AfterChoice({ view }: { view: CustomerProposalView }) {
   const option = view.options.find((o) => o.position === view.chosen?.position);
@@ -23,7 +24,11 @@ export function AfterChoice({ view }: { view: CustomerProposalView }) {
         {option.price.depositCents > 0 ? ` and pay the ${money(option.price.depositCents)} deposit` : ''}.
       </p>
       {/* ── SIGNING SLOT (sign14): <SigningSteps proposalId={view.proposalId} view={view} /> renders here. ── */}
-      {/* ── AFTER-SIGNING SLOT (after14): <DepositStep …/> and <CancelPanel …/> render here once signed. ── */}
+      {/* After the signature: the deposit, then the right to cancel (each renders nothing before signing). */}
+      <div className="mt-4 grid gap-4 empty:hidden">
+        <DepositStep proposalId={view.proposalId} />
+        <CancelPanel proposalId={view.proposalId} />
+      </div>
     </section>
   );
 }

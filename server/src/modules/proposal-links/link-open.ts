@@ -138,12 +138,12 @@ export function linkEndedPage(reason: LinkEndedReason | null, contact: LinkConta
 <meta name="referrer" content="no-referrer">
 <title>${escapeHtml(LINK_ENDED.title)}</title>
 <style>
-body{margin:0;font-family:system-ui,-apple-system,"Segoe UI",sans-serif;background:#f4f6f8;color:#17202a;line-height:1.5}
-main{max-width:32rem;margin:0 auto;padding:2.5rem 1.25rem}
-.card{background:#fff;border-radius:.75rem;padding:1.5rem;box-shadow:0 1px 3px rgba(0,0,0,.12)}
-h1{font-size:1.375rem;margin:0 0 .75rem}
-p{font-size:1.0625rem;margin:0 0 .75rem}
-a{color:#0b5cad;font-weight:600}
+body{margin:0;font-family:"Source Sans 3",ui-sans-serif,system-ui,sans-serif;background:#fbfaf7;color:#0b2227;line-height:1.5}
+main{max-width:32rem;margin:0 auto;padding:2.5rem 1rem}
+.card{background:#fff;border-radius:.875rem;padding:1.5rem;box-shadow:0 1px 2px rgb(18 52 59/.08),0 2px 8px rgb(18 52 59/.06)}
+h1{font-size:1.728rem;line-height:1.25;font-weight:600;color:#12343b;margin:0 0 .75rem}
+p{font-size:1.2rem;margin:0 0 .75rem}
+a{color:#18383e;font-weight:600}
 </style>
 </head>
 <body>

@@ -22,8 +22,8 @@ function Header({ view }: { view: CustomerProposalView }) {
     .filter(Boolean)
     .join(', ');
   return (
-    <header className="bg-ink-900 px-4 pb-6 pt-8 text-white">
-      <div className="mx-auto max-w-6xl">
+    <header className="bg-ink-900 pb-6 pt-8 text-white">
+      <div className="mx-auto max-w-6xl px-4">
         <p className="text-base font-semibold text-ink-100">{view.company.name}</p>
         <h1 className="mt-1 text-2xl font-semibold sm:text-3xl">Your proposal, {view.customer.name}</h1>
         <p className="mt-1 text-base text-ink-100">{place}</p>
@@ -38,8 +38,8 @@ function Header({ view }: { view: CustomerProposalView }) {
 function Contact({ view }: { view: CustomerProposalView }) {
   const c = view.company;
   return (
-    <footer className="border-t border-line bg-white px-4 py-6">
-      <div className="mx-auto max-w-6xl text-base">
+    <footer className="border-t border-line bg-white py-6">
+      <div className="mx-auto max-w-6xl px-4 text-base">
         <p className="font-semibold text-ink-900">Questions? {c.name}</p>
         {c.phone ? (
           <p>

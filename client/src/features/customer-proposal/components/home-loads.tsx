@@ -13,11 +13,15 @@ export function HomeLoads({ loads }: { loads: CustomerProposalView['loads'] }) {
       <dl className="mt-4 grid grid-cols-2 gap-3">
         <div className="rounded-md bg-ink-50 p-3">
           <dt className="text-sm font-semibold text-ink-800">Cooling, whole home</dt>
-          <dd className="text-xl font-semibold text-cooling">{btuh(loads.home.coolingBtuh)}</dd>
+          <dd className="whitespace-nowrap text-lg font-semibold text-cooling sm:text-xl">
+            {btuh(loads.home.coolingBtuh)}
+          </dd>
         </div>
         <div className="rounded-md bg-ink-50 p-3">
           <dt className="text-sm font-semibold text-ink-800">Heating, whole home</dt>
-          <dd className="text-xl font-semibold text-heating">{btuh(loads.home.heatingBtuh)}</dd>
+          <dd className="whitespace-nowrap text-lg font-semibold text-heating sm:text-xl">
+            {btuh(loads.home.heatingBtuh)}
+          </dd>
         </div>
       </dl>
       <p className="mt-2 text-sm text-muted">{groupedNumber(loads.home.floorAreaFt2)} ft² of conditioned floor.</p>

@@ -82,31 +82,5 @@ export const siteRules = {
   notes,
 };
 
-/** The address fields of a site (its rules without the notes), in the order a form shows them. */
-export const ADDRESS_FIELDS = [
-  'street',
-  'unit',
-  'city',
-  'region',
-  'postalCode',
-] as const satisfies readonly (keyof typeof siteRules)[];
-
 /** Blank text in a form means "not given"; the server takes null (or leaves the field out) for those. */
 export const blankOr = <S extends z.ZodType<string, string>>(rule: S) => z.union([z.literal(''), rule]);
-
-/** The search and paging of every list. */
-export const listQueryFields = {
-  search: z.string().trim().max(100, { message: 'Search must be at most 100 characters.' }).optional(),
-  page: z.coerce
-    .number({ message: 'Page must be a number.' })
-    .int({ message: 'Page must be a whole number.' })
-    .min(1, { message: 'Page starts at 1.' })
-    .max(100_000, { message: 'Page is too large.' })
-    .default(1),
-  pageSize: z.coerce
-    .number({ message: 'Page size must be a number.' })
-    .int({ message: 'Page size must be a whole number.' })
-    .min(1, { message: 'Page size must be between 1 and 100.' })
-    .max(100, { message: 'Page size must be between 1 and 100.' })
-    .default(25),
-};

@@ -409,3 +409,31 @@ describe('names in the e-mail', () => {
     expect(t.smtp.messages.some((m) => m.to.includes('thief@evil.example'))).toBe(false);
   });
 });
+
+describe('a mail server that stays down', () => {
+  // Last in the file: it stops this app's SMTP fake.
+  it('shows "waiting to send" with the reason while retrying, then "not sent" and a send-failed event after the last try', async () => {
+    const { jobId, proposalId } = await issuedJob();
+    await t.smtp.close();
+    const to = recipient();
+    const r = await post(estimator, `/api/jobs/${jobId}/proposal/links`).send({ to });
+    expect(r.status).toBe(201);
+    await t.services.queue.drain({ retriesNow: true });
+    const waiting = await estimator.agent.get(`/api/jobs/${jobId}/proposal/links`);
+    expect(waiting.body.links[0]).toMatchObject({ state: 'waiting-to-send', to, sentAt: null });
+    expect(waiting.body.links[0].mailProblem).toContain('could not be reached');
+    // The job moved to proposed with the send, whatever the mail server does.
+    expect((await estimator.agent.get(`/api/jobs/${jobId}`)).body.job.status).toBe('proposed');
+    for (let i = 0; i < 12; i++) await t.services.queue.drain({ retriesNow: true });
+    const failed = await estimator.agent.get(`/api/jobs/${jobId}/proposal/links`);
+    expect(failed.body.links[0]).toMatchObject({ state: 'not-sent', to });
+    const [row] = await sql<{ token_sha256: string | null }>(
+      `select "token_sha256" from "proposal_link" where "recipient" = ?`,
+      [to],
+    );
+    expect(row?.token_sha256).toBeNull(); // no token was ever made for a mail that never went
+    const trail = await events(proposalId);
+    expect(trail.map((e) => e.kind)).toEqual(['issued', 'send-failed']);
+    expect(String(trail[1]?.data.reason)).toContain('could not be reached');
+  });
+});

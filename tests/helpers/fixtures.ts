@@ -58,11 +58,11 @@ interface CookieJarAgent {
 }
 
 /**
- * A supertest agent that behaves like a browser behind the TLS-terminating proxy: it says
+ * A supertest agent (on the app, or on a server's URL) that behaves like a browser behind the TLS-terminating proxy: it says
  * X-Forwarded-Proto: https and sends back Secure (`__Host-`) cookies, which the stock agent
  * only does for https URLs (security plan, harness trap G1).
  */
-export function browserAgent(app: Express): Agent {
+export function browserAgent(app: Express | string): Agent {
   const agent = request.agent(app);
   agent.set('X-Forwarded-Proto', 'https');
   const patched = agent as unknown as CookieJarAgent;
@@ -79,7 +79,7 @@ export async function csrfOf(agent: ReturnType<typeof request.agent>): Promise<s
 }
 
 /** Signs in through the API as a browser would (pre-session CSRF token, then the rotated one). */
-export async function login(app: Express, email: string, password = TEST_PASSWORD): Promise<Session> {
+export async function login(app: Express | string, email: string, password = TEST_PASSWORD): Promise<Session> {
   const agent = browserAgent(app);
   const pre = await csrfOf(agent);
   const res = await agent.post('/api/auth/login').set(HTTPS).set('X-CSRF-Token', pre).send({ email, password });

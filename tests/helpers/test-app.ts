@@ -16,7 +16,7 @@ import { createSmtpMailer } from '../../server/src/services/mailer';
 import { createQueue } from '../../server/src/services/queue';
 import { systemClock, type Clock, type Services } from '../../server/src/services/services';
 import { createLocalDiskStorage } from '../../server/src/services/storage';
-import { taskHandlers } from '../../server/src/tasks/handlers';
+import { abandonedHandlers, taskHandlers } from '../../server/src/tasks/handlers';
 
 export interface TestApp {
   app: Express;
@@ -75,6 +75,7 @@ export async function buildTestApp(
   const queue = createQueue({
     databaseUrl: url,
     handlers: taskHandlers(base),
+    abandoned: abandonedHandlers(base),
     namespace: config.QUEUE_NAMESPACE ?? `t-${randomUUID().slice(0, 8)}`,
     concurrency: 1,
     pollIntervalMs: 200,

@@ -3,7 +3,7 @@ import pg from 'pg';
 import { ormConfig } from '../../../mikro-orm.config';
 import type { Config } from '../config';
 import { directoryOutbox } from '../fakes/smtp-fake';
-import { taskHandlers } from '../tasks/handlers';
+import { abandonedHandlers, taskHandlers } from '../tasks/handlers';
 import { createSmtpMailer } from './mailer';
 import { createStripePayments } from './payments';
 import { createQueue } from './queue';
@@ -32,6 +32,7 @@ export async function buildServices(config: Config, extra: Partial<Services> = {
   services.queue ??= createQueue({
     databaseUrl: config.DATABASE_URL,
     handlers: taskHandlers(services),
+    abandoned: abandonedHandlers(services),
     namespace: config.QUEUE_NAMESPACE,
     concurrency: config.QUEUE_CONCURRENCY,
   });

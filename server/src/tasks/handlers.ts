@@ -1,10 +1,16 @@
 import { composeResetMessage } from '../modules/auth/password.service';
-import { sendMessage } from '../modules/mail/mail.service';
+import { sendAbandoned, sendMessage, type SendDeps } from '../modules/mail/mail.service';
 import { composeProposalLinkMessage, recordProposalSendFailed } from '../modules/proposal-links/proposal-link.service';
 import { refundCancelledDeposit } from '../modules/cancellations/cancellation.service';
-import { renderVersionPdf } from '../modules/proposals/proposal-pdf.service';
+import { renderAbandoned, renderVersionPdf } from '../modules/proposals/proposal-pdf.service';
 import type { Services } from '../services/services';
-import type { TaskHandlers } from './kinds';
+import type { AbandonedHandlers, TaskHandlers } from './kinds';
+
+/** Told once a message has failed its last try (a proposal e-mail writes 'send-failed' on its trail). */
+const mailFailed =
+  (services: Pick<Services, 'clock'>): NonNullable<SendDeps['failed']> =>
+  (em, message) =>
+    message.kind === 'proposal-link' ? recordProposalSendFailed(em, message, services.clock.now()) : Promise.resolve();
 
 /** The handler of each task kind; each try works in an EntityManager of its own. */
 export function taskHandlers(services: Omit<Services, 'queue'>): TaskHandlers {
@@ -28,10 +34,7 @@ export function taskHandlers(services: Omit<Services, 'queue'>): TaskHandlers {
               );
             return { notSent: 'Not sent: the message has no text.' };
           },
-          failed: (em, message) =>
-            message.kind === 'proposal-link'
-              ? recordProposalSendFailed(em, message, services.clock.now())
-              : Promise.resolve(),
+          failed: mailFailed(services),
         },
         messageId,
         run,
@@ -39,5 +42,15 @@ export function taskHandlers(services: Omit<Services, 'queue'>): TaskHandlers {
     },
     'render-proposal-pdf': ({ versionId }, run) => renderVersionPdf(services, versionId, run),
     'refund-deposit': ({ paymentId }) => refundCancelledDeposit(services.orm.em.fork(), services.payments, paymentId),
+  };
+}
+
+/** What each kind writes when a try was lost with its process (services/queue.ts releaseAbandoned). */
+export function abandonedHandlers(services: Pick<Services, 'orm' | 'clock'>): AbandonedHandlers {
+  return {
+    'send-email': ({ messageId }, run) =>
+      sendAbandoned(services.orm.em.fork(), { failed: mailFailed(services) }, messageId, run),
+    'render-proposal-pdf': ({ versionId }, run) => renderAbandoned(services, versionId, run),
+    // refund-deposit writes nothing while it runs: the next try takes it up (the refund carries an idempotency key).
   };
 }

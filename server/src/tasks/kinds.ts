@@ -39,3 +39,10 @@ export interface TaskRun {
 }
 
 export type TaskHandlers = { [K in TaskKind]: (payload: TaskPayload<K>, run: TaskRun) => Promise<void> };
+
+/**
+ * A try lost with its process (services/queue.ts releaseAbandoned): the handler never got to write how the
+ * try ended, so this puts the record right — `run.attempt < run.maxAttempts`: the job runs again next;
+ * otherwise it had no tries left and will not run again.
+ */
+export type AbandonedHandlers = { [K in TaskKind]?: (payload: TaskPayload<K>, run: TaskRun) => Promise<void> };

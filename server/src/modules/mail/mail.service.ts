@@ -122,6 +122,28 @@ export async function sendMessage(em: EntityManager, deps: SendDeps, messageId: 
   }
 }
 
+/**
+ * A try lost with the process that was sending it (the queue's releaseAbandoned): the message may or may
+ * not have reached the mail server. With tries left it waits for the next one; without, it is 'failed' and
+ * the office's "Try again" sends it.
+ */
+export async function sendAbandoned(
+  em: EntityManager,
+  deps: Pick<SendDeps, 'failed'>,
+  messageId: string,
+  run: TaskRun,
+): Promise<void> {
+  const message = await em.findOne(OutgoingMessageSchema, { id: messageId });
+  if (!message || message.state === 'sent' || message.state === 'failed') return;
+  const last = run.attempt >= run.maxAttempts;
+  message.attempts = run.attempt;
+  message.state = last ? 'failed' : 'retrying';
+  message.lastError = 'The process sending it stopped in the middle of a try.';
+  message.nextAttemptAt = null;
+  await em.flush();
+  if (last && deps.failed) await deps.failed(em, message);
+}
+
 export function listMessages({ em, actor }: ServiceContext): Promise<OutgoingMessage[]> {
   return em.find(
     OutgoingMessageSchema,

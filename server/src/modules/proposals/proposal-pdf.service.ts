@@ -3,6 +3,7 @@ import type { EntityManager, MikroORM } from '@mikro-orm/postgresql';
 import { proposalSnapshot, type PdfState } from '@contract';
 import { ConflictError, NotFoundError } from '../../lib/errors';
 import { logger } from '../../lib/logger';
+import { testPause } from '../../lib/test-pause';
 import type { ServiceContext } from '../../lib/service-context';
 import type { Queue } from '../../services/queue';
 import type { Clock } from '../../services/services';
@@ -10,7 +11,6 @@ import type { Storage } from '../../services/storage';
 import type { TaskRun } from '../../tasks/kinds';
 import { findJob } from '../jobs/job-access';
 import { loadLogo } from './pdf/logo';
-import { renderProposalPdf } from './pdf/render-proposal';
 import { ProposalEventSchema, ProposalVersionSchema } from './proposal.entity';
 
 /**
@@ -57,9 +57,14 @@ export async function renderVersionPdf(deps: RenderDeps, versionId: string, run:
   }
   if (version.pdfSha256) return;
   await setState(em, versionId, 'rendering');
+  // The fault test kills the process here: the version says 'rendering', nothing is stored (lib/test-pause.ts).
+  await testPause('render-pdf', async () => ({ versionId }));
   try {
     const snapshot = proposalSnapshot.parse(version.snapshot);
     const logo = await loadLogo(deps.storage, snapshot.company.logoKey);
+    // Loaded on the first render, not at start: @react-pdf and the document cost every process that starts
+    // the app about a second of CPU (the API, each test app), most of which never render a PDF.
+    const { renderProposalPdf } = await import('./pdf/render-proposal');
     const bytes = await renderProposalPdf({ snapshot, versionNumber: version.number, logo });
     const sha256 = createHash('sha256').update(bytes).digest('hex');
     const key = pdfStorageKey(versionId);
@@ -82,23 +87,53 @@ export async function renderVersionPdf(deps: RenderDeps, versionId: string, run:
       });
     });
   } catch (err) {
-    const last = run.attempt >= run.maxAttempts;
-    const after = deps.orm.em.fork(); // the try's EntityManager may hold a half-done unit of work
-    await setState(after, versionId, last ? 'failed' : 'waiting');
-    if (last) {
-      const reason = err instanceof Error ? err.message.slice(0, 300) : 'unknown error';
-      after.create(ProposalEventSchema, {
-        company: version.company,
-        proposal: version.proposal,
-        version,
-        kind: 'pdf-failed',
-        at: deps.clock.now(),
-        data: { reason, attempts: run.attempt },
-      });
-      await after.flush();
-    }
+    const reason = err instanceof Error ? err.message.slice(0, 300) : 'unknown error';
+    // A fresh EntityManager: the try's may hold a half-done unit of work.
+    await afterTry(deps, deps.orm.em.fork(), versionId, run, reason);
     throw err;
   }
+}
+
+/**
+ * How a try that did not record a PDF leaves the version: 'waiting' for the queue's next try, or after the
+ * last one 'failed' with a pdf-failed event (written once, whoever gets here first).
+ */
+async function afterTry(
+  deps: Pick<RenderDeps, 'clock'>,
+  em: EntityManager,
+  versionId: string,
+  run: TaskRun,
+  reason: string,
+) {
+  if (run.attempt < run.maxAttempts) return setState(em, versionId, 'waiting');
+  await em.transactional(async (tx) => {
+    const n = await tx.execute<{ affectedRows?: number }>(
+      `update "proposal_version" set "pdf_state" = 'failed'
+        where "id" = ? and "pdf_sha256" is null and "pdf_state" <> 'failed'`,
+      [versionId],
+      'run',
+    );
+    if (n.affectedRows !== 1) return;
+    const version = await tx.findOneOrFail(ProposalVersionSchema, { id: versionId });
+    tx.create(ProposalEventSchema, {
+      company: version.company,
+      proposal: version.proposal,
+      version,
+      kind: 'pdf-failed',
+      at: deps.clock.now(),
+      data: { reason, attempts: run.attempt },
+    });
+  });
+}
+
+/**
+ * A try lost with its process (the queue's releaseAbandoned): the version says 'rendering' and nothing will
+ * change it, so it goes back to 'waiting' for the next try, or, when that was the last, to 'failed'.
+ */
+export async function renderAbandoned(deps: Pick<RenderDeps, 'orm' | 'clock'>, versionId: string, run: TaskRun) {
+  const em = deps.orm.em.fork();
+  if (!(await em.findOne(ProposalVersionSchema, { id: versionId }))) return;
+  await afterTry(deps, em, versionId, run, 'The process making the PDF stopped during its last try.');
 }
 
 /** The version of one of the actor's jobs by number, with what the PDF route needs; 404 otherwise. */

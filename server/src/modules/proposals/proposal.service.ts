@@ -16,6 +16,7 @@ import {
 } from '@contract';
 import type { DeskJobState } from '../desk/desk-read';
 import { ConflictError, ForbiddenError, NotFoundError } from '../../lib/errors';
+import { testPause } from '../../lib/test-pause';
 import type { ServiceContext } from '../../lib/service-context';
 import { proposalCompanyPart } from '../company-settings/proposal-details.service';
 import { getDesk } from '../desk/desk.service';
@@ -126,6 +127,11 @@ export async function issueVersion(ctx: ServiceContext, jobId: string, onIssued?
     event('issued', version, { number: version.number, snapshotSha256: version.snapshotSha256 });
     await tx.flush();
     if (onIssued) await onIssued(tx, version);
+    // The fault test kills the process here: all written, nothing committed (lib/test-pause.ts).
+    await testPause('issue-before-commit', async () => ({
+      versionId: version.id,
+      backendPid: (await tx.execute<{ pid: number }[]>('select pg_backend_pid() as pid'))[0]?.pid,
+    }));
     return version;
   });
 }

@@ -163,9 +163,10 @@ export default defineConfig({
               test: /[\\/]client[\\/]src[\\/]app[\\/](routes[\\/]app-root|job-route-loaders)\.tsx?$/,
             },
             {
-              // Small pieces the job screens share (units, labels, empty states, widget boundaries): one file.
+              // Small pieces the job screens share (units, labels, figures, empty states, widget boundaries): one file.
+              // (The customer's proposal page shares the figures' grouping too; alone it was a tenth walk-through file.)
               name: 'job-kit',
-              test: /[\\/](client[\\/]src[\\/](lib[\\/](unit-display|months|use-after-idle)|entities[\\/]job[\\/](labels|design-fields)|components[\\/](ui[\\/]empty-state|errors[\\/](query-)?widget-boundary))|calc[\\/]src[\\/](units|construction-defaults))\.tsx?$/,
+              test: /[\\/](client[\\/]src[\\/](lib[\\/](unit-display|months|use-after-idle|grouped-number)|entities[\\/]job[\\/](labels|design-fields)|components[\\/](ui[\\/]empty-state|errors[\\/](query-)?widget-boundary))|calc[\\/]src[\\/](units|construction-defaults))\.tsx?$/,
             },
           ],
         },

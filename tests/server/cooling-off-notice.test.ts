@@ -1,7 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { ZodError } from 'zod';
 import { CalcError } from '@calc';
-import { buildCoolingOffNotice, formatNoticeDate } from '../../server/src/contract';
+import {
+  buildCoolingOffNotice,
+  buildUnsignedCoolingOffNotice,
+  formatNoticeDate,
+  NOTICE_BLANK,
+} from '../../server/src/contract';
 
 // Invented demo seller (no real company or address).
 const seller = {
@@ -71,6 +76,20 @@ describe('right-to-cancel notice (16 CFR 429.1(a), (b))', () => {
     );
     expect(() => buildCoolingOffNotice({ ...seller, transactionDate: '3 Dec 2026' })).toThrow(ZodError);
     expect(() => buildCoolingOffNotice({ ...seller, transactionDate: '2026-02-30' })).toThrow(CalcError);
+  });
+
+  it('before signing: the same 429.1 texts with blank lines for both dates', () => {
+    const signed = buildCoolingOffNotice({ ...seller, transactionDate: '2026-11-25' });
+    const unsigned = buildUnsignedCoolingOffNotice(seller);
+    expect(unsigned.transactionDate).toBeNull();
+    expect(unsigned.lastDayToCancel).toBeNull();
+    expect(unsigned.form.dateOfTransaction).toBeNull();
+    expect(unsigned.statement).toBe(signed.statement);
+    expect(unsigned.form.paragraphs.slice(0, 4)).toEqual(signed.form.paragraphs.slice(0, 4));
+    expect(unsigned.form.paragraphs.at(-1)).toBe(
+      (signed.form.paragraphs.at(-1) ?? '').replace('November 30, 2026', NOTICE_BLANK),
+    );
+    expect(() => buildUnsignedCoolingOffNotice({ ...seller, sellerAddress: ' ' })).toThrow(ZodError);
   });
 
   it('dates print in US style without Intl', () => {

@@ -115,7 +115,9 @@ describe('render-proposal-pdf', () => {
     expect(text).toContain(v.snapshot.design.method.replace(/\s+/g, ' '));
     expect(text).toContain('A licensed electrician confirms them');
     const pages = await pdfPages(r.body as Buffer);
-    expect(pages.at(-1)).toContain('Acceptance');
+    // The acceptance page, then the Notice of Cancellation in duplicate (16 CFR 429.1(b)).
+    expect(pages.at(-3)).toContain('Acceptance');
+    expect(pages.slice(-2).every((p) => p.includes('NOTICE OF CANCELLATION'))).toBe(true);
 
     // Rendered once: another job for the same version leaves the recorded PDF alone.
     await queuePdfRender(t.services.queue, v.versionId);

@@ -16,7 +16,22 @@ import { formatUsDate } from './dates';
  *   laws in force); printed after the federal form, as the company wrote it.
  *
  * The last day to cancel is always computed here with calc's `coolingOffWindow` from the transaction's local
- * date (the job site's date when the buyer signed), never taken from a caller. The texts are English, the
+ * date (the job site's date when the buyer signed), never taken from a caller. Before the buyer signs there is
+ * no transaction date: `buildUnsignedCoolingOffNotice` gives the same texts with blank lines for both dates
+ * (the unsigned PDF); the signing fills them by calling `buildCoolingOffNotice` with the date.
+ *
+ * Wording checked (5 December 2026; the eCFR itself was not reachable from here) against copies of the rule's
+ * text: the 429.1(a) statement, the sentence on the forms' location, the (b) caption choice, the ten-point bold
+ * face and "in duplicate" against the rule as reproduced on a legal-publisher page ("16 C.F.R. § 429.1, current
+ * through September 30, 2024") and a law firm's page quoting § 429.1; the form's first three paragraphs against
+ * the Wisconsin Department of Financial Institutions' page "Three Day Right To Cancel — Federal Notice" ("the
+ * following notices are required by 16 CFR 429.1"); its fourth and fifth paragraphs and the buyer's part
+ * ("I HEREBY CANCEL THIS TRANSACTION.", "(Date)", "(Buyer's signature)") against independent public copies of
+ * the federal form that agree word for word, and against state statutes that repeat it (New York Personal
+ * Property Law § 428, Delaware Code tit. 6 § 4404). The last session's "from memory" for the later paragraphs
+ * is confirmed: no word differed. Differences seen only in some copies, and not taken: "traded-in",
+ * "canceled", "when received by you" (Wisconsin's page); "within TEN DAYS" (a seller's own copy; the rule
+ * says TEN BUSINESS DAYS). The texts are English, the
  * language the proposal is written in (429.1(a), (b) ask for the language of the sales presentation/contract).
  */
 
@@ -56,15 +71,17 @@ export const COOLING_OFF_TYPE = { minPoints: 10, bold: true } as const;
 export const NOTICE_CAPTIONS = ['NOTICE OF CANCELLATION', 'NOTICE OF RIGHT TO CANCEL'] as const;
 
 export interface CoolingOffNotice {
-  readonly transactionDate: string;
-  readonly lastDayToCancel: string;
+  /** The transaction's local date (YYYY-MM-DD), or null on the notice of a version not yet signed. */
+  readonly transactionDate: string | null;
+  /** The last day to cancel (YYYY-MM-DD), or null before signing (the text prints a blank line). */
+  readonly lastDayToCancel: string | null;
   /** 16 CFR 429.1(a). */
   readonly statement: string;
   /** 16 CFR 429.1(b), completed. */
   readonly form: {
     readonly caption: (typeof NOTICE_CAPTIONS)[number];
-    /** The completed date of the transaction, printed above "(Date)". */
-    readonly dateOfTransaction: string;
+    /** The completed date of the transaction, printed above "(Date)"; null before signing (a blank line). */
+    readonly dateOfTransaction: string | null;
     readonly paragraphs: readonly string[];
     /** The buyer's part: the sentence to sign and the two blanks under it. */
     readonly buyerPart: { readonly sentence: string; readonly blanks: readonly ['(Date)', "(Buyer's signature)"] };
@@ -81,26 +98,31 @@ export interface CoolingOffNotice {
 /** "2026-11-30" → "November 30, 2026" (the contract's one date style). */
 export const formatNoticeDate = formatUsDate;
 
-/** Builds the completed notice. Throws a ZodError for bad input and calc's CalcError for an impossible date. */
-export function buildCoolingOffNotice(input: CoolingOffNoticeInput): CoolingOffNotice {
-  const parsed = coolingOffNoticeInputSchema.parse(input);
-  const window = coolingOffWindow(parsed.transactionDate);
+/** The blank a date is filled in on, before the buyer signs (the signing fills it). */
+export const NOTICE_BLANK = '____________________';
+
+type NoticeParties = z.output<typeof coolingOffNoticeInputSchema>;
+
+function noticeTexts(
+  parsed: NoticeParties,
+  dates: { readonly transactionDate: string; readonly lastDayToCancel: string } | null,
+): CoolingOffNotice {
   const address = parsed.sellerAddress
     .split(/\r\n|\r|\n/)
     .map((line) => line.trim())
     .filter((line) => line.length > 0)
     .join(', ');
-  const lastDay = formatNoticeDate(window.lastDayToCancel);
+  const lastDay = dates ? formatNoticeDate(dates.lastDayToCancel) : NOTICE_BLANK;
 
   return {
-    transactionDate: window.transactionDate,
-    lastDayToCancel: window.lastDayToCancel,
+    transactionDate: dates?.transactionDate ?? null,
+    lastDayToCancel: dates?.lastDayToCancel ?? null,
     statement:
       'You, the buyer, may cancel this transaction at any time prior to midnight of the third business day after the ' +
       `date of this transaction. See the ${parsed.formLocation} notice of cancellation form for an explanation of this right.`,
     form: {
       caption: 'NOTICE OF CANCELLATION',
-      dateOfTransaction: formatNoticeDate(window.transactionDate),
+      dateOfTransaction: dates ? formatNoticeDate(dates.transactionDate) : null,
       paragraphs: [
         'You may CANCEL this transaction, without any penalty or obligation, within THREE BUSINESS DAYS from the above date.',
         'If you cancel, any property traded in, any payments made by you under the contract or sale, and any negotiable ' +
@@ -125,4 +147,21 @@ export function buildCoolingOffNotice(input: CoolingOffNoticeInput): CoolingOffN
       'The statement and the notice of cancellation follow the FTC Cooling-Off Rule, 16 CFR 429.1(a) and (b). ' +
       'Business days exclude Sundays and the federal holidays named in 16 CFR 429.0(g).',
   };
+}
+
+/** Builds the completed notice. Throws a ZodError for bad input and calc's CalcError for an impossible date. */
+export function buildCoolingOffNotice(input: CoolingOffNoticeInput): CoolingOffNotice {
+  const parsed = coolingOffNoticeInputSchema.parse(input);
+  const window = coolingOffWindow(parsed.transactionDate);
+  return noticeTexts(parsed, { transactionDate: window.transactionDate, lastDayToCancel: window.lastDayToCancel });
+}
+
+/**
+ * The notice before the buyer signs: the same texts with blank lines (`NOTICE_BLANK`) for the date of the
+ * transaction and the last day to cancel, which only the signing fixes. Throws a ZodError for bad input.
+ */
+export function buildUnsignedCoolingOffNotice(input: Omit<CoolingOffNoticeInput, 'transactionDate'>): CoolingOffNotice {
+  // Any valid date satisfies the schema's check of the other fields; no date from it is used.
+  const parsed = coolingOffNoticeInputSchema.parse({ ...input, transactionDate: '2000-01-01' });
+  return noticeTexts(parsed, null);
 }

@@ -1,5 +1,6 @@
 import { Text, View } from '@react-pdf/renderer';
-import type { ProposalSnapshot } from '@contract';
+import type { CoolingOffNotice, ProposalSnapshot } from '@contract';
+import { CancelStatement } from './cancellation-section';
 import { line, money } from './format';
 import { Bullets, Paragraphs } from './parts';
 import { COLORS, s } from './styles';
@@ -49,8 +50,20 @@ function SignLine({ label, width }: { label: string; width: number | string }) {
   );
 }
 
-/** The last page: the option chosen, then blank lines for the buyer and the company to sign and date. */
-export function SignaturePage({ snapshot, versionNumber }: { snapshot: ProposalSnapshot; versionNumber: number }) {
+/**
+ * The acceptance page: the option chosen, then blank lines for the buyer and the company to sign and date,
+ * with the buyer's right-to-cancel statement just above the buyer's lines (16 CFR 429.1(a): "in immediate
+ * proximity to the space reserved in the contract for the signature of the buyer").
+ */
+export function SignaturePage({
+  snapshot,
+  versionNumber,
+  notice,
+}: {
+  snapshot: ProposalSnapshot;
+  versionNumber: number;
+  notice: CoolingOffNotice;
+}) {
   const company = line(snapshot.company.name);
   return (
     <View>
@@ -72,6 +85,7 @@ export function SignaturePage({ snapshot, versionNumber }: { snapshot: ProposalS
       </View>
 
       <Text style={s.h2}>Buyer</Text>
+      <CancelStatement notice={notice} />
       <View style={{ flexDirection: 'row', marginBottom: 14 }}>
         <SignLine label="Signature" width="60%" />
         <SignLine label="Date" width="40%" />

@@ -31,7 +31,8 @@ export function Cover({
   logo: Logo | null;
 }) {
   const c = snapshot.company;
-  const contact = [c.address, c.phone, c.email].filter((x): x is string => x !== null && x.trim() !== '');
+  // The address as the owner wrote it, a line each (settings allow up to four), then phone and e-mail.
+  const contact = [...(c.address ?? '').split('\n'), c.phone ?? '', c.email ?? ''].filter((x) => x.trim() !== '');
   return (
     <View>
       <View style={{ flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-start' }}>
@@ -42,8 +43,8 @@ export function Cover({
           <Text style={[s.h1, { fontSize: logo ? 13 : 18 }]}>{line(c.name)}</Text>
         </View>
         <View style={{ width: 200 }}>
-          {contact.map((x) => (
-            <Text key={x} style={[s.small, { textAlign: 'right' }]}>
+          {contact.map((x, i) => (
+            <Text key={i} style={[s.small, { textAlign: 'right' }]}>
               {line(x)}
             </Text>
           ))}

@@ -1,5 +1,6 @@
 import { Document } from '@react-pdf/renderer';
 import type { ProposalSnapshot } from '@contract';
+import { noticeForSnapshot, NoticeOfCancellation, type CancellationDates } from './cancellation-section';
 import { CautionsSection, SignaturePage, TermsSection } from './closing-sections';
 import { Cover } from './cover';
 import { day, line } from './format';
@@ -12,15 +13,22 @@ export interface ProposalDocumentProps {
   readonly snapshot: ProposalSnapshot;
   readonly versionNumber: number;
   readonly logo: Logo | null;
+  /**
+   * The signing's dates for the right-to-cancel notice (the job site's local date when the buyer signed);
+   * null or absent on an unsigned version, whose notice prints blank lines for them.
+   */
+  readonly cancellation?: CancellationDates | null;
 }
 
 /**
  * The proposal as a PDF, our own layout: a cover, the home's loads, one page (or more) per option with its
- * installation work, the terms, warranty and safety cautions, and the acceptance page. Everything printed
+ * installation work, the terms, warranty and safety cautions, the acceptance page with the buyer's
+ * right-to-cancel statement, and the Notice of Cancellation in duplicate (16 CFR 429.1). Everything printed
  * comes from the frozen snapshot, so the same version always prints the same words.
  */
-export function ProposalDocument({ snapshot, versionNumber, logo }: ProposalDocumentProps) {
+export function ProposalDocument({ snapshot, versionNumber, logo, cancellation = null }: ProposalDocumentProps) {
   const customer = line(snapshot.customer.name);
+  const notice = noticeForSnapshot(snapshot.company, cancellation);
   const frame: PageFrameText = {
     company: line(snapshot.company.name),
     title: `Proposal for ${customer} · version ${versionNumber}`,
@@ -53,8 +61,13 @@ export function ProposalDocument({ snapshot, versionNumber, logo }: ProposalDocu
         <CautionsSection cautions={snapshot.cautions} />
       </ProposalPage>
       <ProposalPage frame={frame} bookmark="Acceptance">
-        <SignaturePage snapshot={snapshot} versionNumber={versionNumber} />
+        <SignaturePage snapshot={snapshot} versionNumber={versionNumber} notice={notice} />
       </ProposalPage>
+      {([1, 2] as const).map((copy) => (
+        <ProposalPage key={`notice-${copy}`} frame={frame} bookmark={`Notice of cancellation, copy ${copy}`}>
+          <NoticeOfCancellation notice={notice} copy={copy} companyName={snapshot.company.name} />
+        </ProposalPage>
+      ))}
     </Document>
   );
 }

@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { PROPOSAL_LINK_OPEN_PATH } from '@contract';
 import type { StoredMail } from '../../server/src/fakes/smtp-fake';
 import { checkedPages, expectNoSeriousViolations } from './axe';
+import { api } from './proposal-helpers';
 import { account, expectFitsWidth, jobWithRooms } from './desk-helpers';
 import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
 
@@ -24,19 +25,6 @@ async function mailFor(to: string): Promise<StoredMail> {
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
   throw new Error(`no mail to ${to}`);
-}
-
-/** The estimator's API calls in their own browser session (CSRF from the session, as the app sends it). */
-async function api(page: Page, method: 'post' | 'get', path: string, body?: unknown) {
-  const csrf = ((await (await page.request.get('/api/auth/csrf')).json()) as { token: string }).token;
-  const res = await page.request.fetch(path, {
-    method,
-    headers: { 'X-CSRF-Token': csrf, 'Content-Type': 'application/json' },
-    data: body === undefined ? undefined : JSON.stringify(body),
-  });
-  const text = await res.text();
-  expect(res.ok(), `${method} ${path}: ${res.status()} ${text}`).toBe(true);
-  return text ? (JSON.parse(text) as Record<string, unknown>) : {};
 }
 
 /** A demo job with two priced options, marked ready and issued as a version (the desk's own journeys cover that UI). */

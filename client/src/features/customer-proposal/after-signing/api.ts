@@ -60,7 +60,7 @@ export function cancelProposal(proposalId: string, reason: string) {
 }
 
 /** What the payment service said to the browser's confirm. */
-export type ConfirmOutcome = { ok: true } | { ok: false; message: string };
+export type ConfirmOutcome = { ok: true } | { ok: false; message: string; alreadyPaid: boolean };
 
 /**
  * Confirms the intent with the payment service from the browser, the way the service's own browser
@@ -86,11 +86,21 @@ export async function confirmWithService(
       }).toString(),
     });
   } catch {
-    return { ok: false, message: 'The payment service could not be reached. Check the connection and try again.' };
+    return {
+      ok: false,
+      message: 'The payment service could not be reached. Check the connection and try again.',
+      alreadyPaid: false,
+    };
   }
   if (res.ok) return { ok: true };
   const body: unknown = await res.json().catch(() => null);
   const error = typeof body === 'object' && body !== null ? Reflect.get(body, 'error') : undefined;
-  const message = typeof error === 'object' && error !== null ? Reflect.get(error, 'message') : undefined;
-  return { ok: false, message: typeof message === 'string' && message ? message : 'The payment did not go through.' };
+  const field = (name: string) => (typeof error === 'object' && error !== null ? Reflect.get(error, name) : undefined);
+  const message = field('message');
+  return {
+    ok: false,
+    message: typeof message === 'string' && message ? message : 'The payment did not go through.',
+    // Paid from another tab (or before a reload) while the server had not heard yet: nothing to do but wait.
+    alreadyPaid: field('code') === 'payment_intent_unexpected_state',
+  };
 }

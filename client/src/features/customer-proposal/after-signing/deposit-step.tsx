@@ -70,7 +70,7 @@ export function DepositStep({ proposalId }: { proposalId: string }) {
       }
       if (!intent.clientSecret) throw new Error('The payment could not be started.');
       const outcome = await confirmWithService(record.payWith, intent.paymentIntentId, intent.clientSecret, method);
-      if (!outcome.ok) {
+      if (!outcome.ok && !outcome.alreadyPaid) {
         setStep({ kind: 'declined', message: outcome.message });
         return;
       }

@@ -148,7 +148,10 @@ describe('the design day carries the series', () => {
         const fs = ctx.facing[f];
         const gain = sum(fs.glassBeam) + sum(fs.glassDiffuse);
         expect(sum(fs.solarLoad)).toBeCloseTo(gain, 6);
-        expect(sum(fs.shadedSolarLoad)).toBeCloseTo(gain, 6);
+        for (const shade of ['blinds', 'drapes', 'shades'] as const) {
+          expect(sum(fs.shaded[shade].solarLoad)).toBeCloseTo(gain, 6);
+          expect(sum(fs.shaded[shade].diffuseLoad)).toBeCloseTo(sum(fs.glassDiffuse), 6);
+        }
         expect(sum(fs.diffuseLoad)).toBeCloseTo(sum(fs.glassDiffuse), 6);
       }
       // walls, attic ceilings and windows: the same day's total, moved in time

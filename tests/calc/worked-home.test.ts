@@ -113,7 +113,7 @@ const SOLAR = [52, 16, 8, 5, 3, 2, 2, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 1, 0, 0, 
 /**
  * Radiant time series over the repeating design day: cooling load(h) = (1 − f)·q(h) + f·Σ_j r_j·q(h − j), f the
  * radiant part [PUB: ASHRAE ch. 18 RTS; splits from its Table 14: walls 0.46, roof 0.60, windows 0.33 for SHGC
- * over 0.5 and 0.46 under, unshaded sun 1.0; MEM: 0.63 for sun behind an interior shade].
+ * over 0.5 and 0.46 under, unshaded sun 1.0; sun behind an interior shade the shade's FR — see `fr` below].
  */
 const rts = (q: number[], f: number, table: number[]) =>
   q.map((x, h) => {
@@ -142,7 +142,15 @@ const atticDt = (() => {
 
 interface HandRoom {
   walls: { dir: Dir; netFt2: number; u: number; doors?: { ft2: number; u: number }[] }[];
-  windows: { dir: Dir; ft2: number; u: number; shgc: number; iac: number }[];
+  /**
+   * fr: the radiant part of the sun behind the window's interior shade (beam and diffuse alike) — 0.63 for blinds
+   * and drapes [MEM], 0.44 for roller shades [PUB: ASHRAE Handbook—Fundamentals 2017 ch. 15 roller-shade row,
+   * dark opaque on double clear glass, IAC 0.76 and FR 0.44, as used in python-hvac's worked example
+   * (github.com/TomLXXVI/python-hvac, docs/examples/cooling_load_calc/example_10/zone_2.py); the rule that the
+   * whole shaded gain takes the shade's FR from ASHRAE 2017 ch. 15 Tables 14A–14G: python-hvac
+   * hvac/cooling_load_calc/building/fenestration.py, Window.solar_heat_gain].
+   */
+  windows: { dir: Dir; ft2: number; u: number; shgc: number; iac: number; fr?: number }[];
   atticUA: number;
   summerCfm: number;
   people: number; // sensible, Btu/h
@@ -161,7 +169,7 @@ const COMPONENTS = [
 /** Each hour's rounded parts for a hand room. */
 function hand(r: HandRoom) {
   // Sun through each window: unshaded → beam wholly radiant through the solar factors, diffuse through the
-  // nonsolar ones; behind blinds or drapes → beam + diffuse, 0.63 radiant, nonsolar factors.
+  // nonsolar ones; behind a shade → beam + diffuse, the shade's fr radiant (0.63 blinds and drapes), nonsolar factors.
   const solar = r.windows.reduce(
     (acc, w) => {
       const k = w.ft2 * w.shgc * w.iac;
@@ -171,7 +179,7 @@ function hand(r: HandRoom) {
         w.iac < 1
           ? rts(
               beam.map((b, i) => b + diffuse[i]!),
-              0.63,
+              w.fr ?? 0.63,
               NONSOLAR,
             )
           : rts(beam, 1, SOLAR).map((b, i) => b + rts(diffuse, 1, NONSOLAR)[i]!);
@@ -318,6 +326,27 @@ describe('worked example: three-room house, hour by hour', () => {
     expect(k.peakHour).toBeLessThan(12);
     // heating: walls 70 × 0.083 × 60 = 348.6 → 349; glass 180; crawl floor 120 × 0.047 × 48 = 270.72 → 271; leakage 1.08 × 8.758 × 60 = 567.52 → 568
     expect(k.heatLoss.total).toBe(349 + 180 + 271 + 568);
+  });
+
+  it('roller shades take their own radiant part: the kitchen’s east glass behind shades, hour by hour', () => {
+    // Same kitchen, its E low-e window behind 'Shades' (IAC 0.80 [MEM: construction-defaults]). Sun through it:
+    // beam + diffuse × 0.80, split 0.44 radiant (through the nonsolar factors) and 0.56 convective (at once)
+    // [PUB: FR 0.44, ASHRAE 2017 ch. 15 dark opaque roller shade on double clear glass, via python-hvac — see fr].
+    const shadedKitchen = {
+      ...kitchen,
+      exposedWalls: (kitchen.exposedWalls ?? []).map((w) => ({
+        ...w,
+        windows: (w.windows ?? []).map((x) => ({ ...x, interiorShading: 'shades' as const })),
+      })),
+    };
+    const k = roomLoad({ room: shadedKitchen, designConditions: conditions });
+    const base = kitchenHand(leakCfm(EXPOSED.kitchen, 'summer'));
+    const withFr = (fr: number) => hand({ ...base, windows: base.windows.map((w) => ({ ...w, iac: 0.8, fr })) });
+    const kh = withFr(0.44);
+    expect(k.hourlySensibleBtuh).toEqual(kh.map((h) => h.total));
+    expect(k.peakHour).toBe(peakOf(kh) + 1);
+    // the old single 0.63 gives other hours: the check sees which fraction is used
+    expect(withFr(0.63).map((h) => h.total)).not.toEqual(kh.map((h) => h.total));
   });
 
   it('whole home: leakage shared by outside envelope, the block hour, block ≤ sum of room peaks', () => {

@@ -18,6 +18,7 @@ import {
   MASS_RESPONSE,
   NONSOLAR_RTS_PERCENT,
   RADIANT_FRACTION,
+  SHADED_SUN_RADIANT_FRACTION,
   SOLAR_RTS_PERCENT,
   SOL_AIR_ALPHA_OVER_HO,
   SOL_AIR_HORIZONTAL_LONGWAVE_F,
@@ -25,6 +26,7 @@ import {
   shgcAngleRatio,
   type MassClass,
   type RtsConstruction,
+  type ShadeKind,
 } from './hourly-method';
 
 const RAD = Math.PI / 180;
@@ -47,10 +49,13 @@ export interface FacingSun {
   readonly solarLoad: Float64Array;
   /** The diffuse part of `solarLoad` alone (what an overhang leaves untouched). */
   readonly diffuseLoad: Float64Array;
-  /** Cooling load per unit A·SHGC·IAC behind an interior shade: beam + diffuse, radiant part 0.63, nonsolar factors. */
-  readonly shadedSolarLoad: Float64Array;
-  /** The diffuse part of `shadedSolarLoad` alone. */
-  readonly shadedDiffuseLoad: Float64Array;
+  /**
+   * Cooling load per unit A·SHGC·IAC behind each interior shade: beam + diffuse, radiant part the shade's FR
+   * (SHADED_SUN_RADIANT_FRACTION), nonsolar factors; `diffuseLoad` the diffuse part alone.
+   */
+  readonly shaded: Readonly<
+    Record<ShadeKind, { readonly solarLoad: Float64Array; readonly diffuseLoad: Float64Array }>
+  >;
   /** tan of the profile angle (for an overhang's shadow); 0 when the sun is not on the wall. */
   readonly profileTan: Float64Array;
 }
@@ -215,10 +220,24 @@ export function designDayContext(
     const diffuseLoad = nonsolarLoad(glassDiffuse, RADIANT_FRACTION.sunUnshaded);
     const solarLoad = new Float64Array(HOURS);
     for (let h = 0; h < HOURS; h += 1) solarLoad[h] = (beamLoad[h] ?? 0) + (diffuseLoad[h] ?? 0);
-    const shadedBeam = nonsolarLoad(glassBeam, RADIANT_FRACTION.sunInteriorShade);
-    const shadedDiffuseLoad = nonsolarLoad(glassDiffuse, RADIANT_FRACTION.sunInteriorShade);
-    const shadedSolarLoad = new Float64Array(HOURS);
-    for (let h = 0; h < HOURS; h += 1) shadedSolarLoad[h] = (shadedBeam[h] ?? 0) + (shadedDiffuseLoad[h] ?? 0);
+    // One pair of series per distinct radiant fraction (shades that share a fraction share the arrays).
+    const byFraction = new Map<number, { solarLoad: Float64Array; diffuseLoad: Float64Array }>();
+    const shadedFor = (fr: number) => {
+      const hit = byFraction.get(fr);
+      if (hit) return hit;
+      const shadedBeam = nonsolarLoad(glassBeam, fr);
+      const shadedDiffuseLoad = nonsolarLoad(glassDiffuse, fr);
+      const shadedSolarLoad = new Float64Array(HOURS);
+      for (let h = 0; h < HOURS; h += 1) shadedSolarLoad[h] = (shadedBeam[h] ?? 0) + (shadedDiffuseLoad[h] ?? 0);
+      const made = { solarLoad: shadedSolarLoad, diffuseLoad: shadedDiffuseLoad };
+      byFraction.set(fr, made);
+      return made;
+    };
+    const shaded = {
+      blinds: shadedFor(SHADED_SUN_RADIANT_FRACTION.blinds),
+      drapes: shadedFor(SHADED_SUN_RADIANT_FRACTION.drapes),
+      shades: shadedFor(SHADED_SUN_RADIANT_FRACTION.shades),
+    };
     facing[f] = {
       beam,
       diffuse,
@@ -226,8 +245,7 @@ export function designDayContext(
       glassDiffuse,
       solarLoad,
       diffuseLoad,
-      shadedSolarLoad,
-      shadedDiffuseLoad,
+      shaded,
       profileTan,
     };
   }

@@ -1,3 +1,4 @@
+import type { InteriorShadingKey } from '../construction-defaults';
 import { THERMAL_MASS_CLASSES, type ThermalMass } from '../schemas/home';
 
 /**
@@ -52,12 +53,19 @@ export const SOLAR_RTS_PERCENT: Readonly<Record<RtsConstruction, readonly number
  * Internal Heat Gains", read through the same Python reproduction: conduction through walls and floors 0.46,
  * through the roof 0.60, through windows 0.33 when the SHGC is over 0.5 and 0.46 when under; transmitted sun
  * with no interior shading 1.0; air leakage and ventilation 0 (all convective).]
- * [MEM: sun through glass with an interior shade 0.63 radiant (ASHRAE Fundamentals 2001 ch. 29, the
- * radiative/convective table); later editions send the reader to the radiant fractions beside the interior
- * attenuation coefficients of ch. 15's shade tables. Neither table was found in a public copy (searched 5 Dec 2026:
- * public code and documents for the split table's shaded-glass row and for ch. 15's IAC/radiant-fraction columns;
- * the public reproductions of Table 14 stop at the conduction rows), so the figure stays from memory. A shade absorbs
- * the beam and gives it off as it would any other gain, so shaded glass uses the nonsolar factors.]
+ * Sun through glass behind an interior shade: the current handbook gives no single split. Its rule is that
+ * the whole solar gain through a window with an interior shading device — beam and diffuse alike, after
+ * SHGC × IAC — is split by the radiant fraction FR printed beside that shade's IAC in the interior-shading
+ * tables of the fenestration chapter, so FR depends on the kind of shade (and its colour, weave or slat
+ * angle); an unshaded window's transmitted sun is 1.0 radiant.
+ * [PUB: the rule as implemented, with its citation, in the open-source python-hvac package
+ * (github.com/TomLXXVI/python-hvac, hvac/cooling_load_calc/building/fenestration.py: class
+ * InteriorShadingDevice, "F_rad: Radiative fraction of solar heat gain through window in combination with
+ * interior shading device", citing ASHRAE Handbook—Fundamentals 2017 ch. 15 §5.2 and Tables 14A to 14G;
+ * Window.solar_heat_gain applies that F_rad to beam + diffuse and 1.0 when there is no shade), read 5 Dec 2026.]
+ * `sunInteriorShade` 0.63 is kept only as the from-memory stand-in for the shades whose FR was not found;
+ * SHADED_SUN_RADIANT_FRACTION below gives each shade choice its own figure. A shade absorbs the beam and gives it
+ * off as it would any other gain, so shaded glass uses the nonsolar factors.
  */
 export const RADIANT_FRACTION = {
   wallsAndFloors: 0.46,
@@ -65,8 +73,40 @@ export const RADIANT_FRACTION = {
   windowsShgcOverHalf: 0.33,
   windowsShgcUnderHalf: 0.46,
   sunUnshaded: 1,
+  /**
+   * [MEM: a single shaded-glass figure recalled from the radiative/convective table of ASHRAE Fundamentals 2001
+   * ch. 29 — recalled, not seen, and which row it is (sun through glass with a shade, or sun absorbed by the
+   * glass) is itself unverified. Searched 5 Dec 2026 for the per-shade FR column: public code, building-simulation
+   * documentation and pages for ch. 15 Tables 14A–14G, "interior attenuation coefficient" with "radiant
+   * fraction", the Load Calculation Applications Manual, and the split table's shaded-glass row.]
+   */
   sunInteriorShade: 0.63,
 } as const;
+
+/** The interior shades a window can have (every choice but 'none'). */
+export type ShadeKind = Exclude<InteriorShadingKey, 'none'>;
+export const SHADE_KINDS: readonly ShadeKind[] = ['blinds', 'drapes', 'shades'];
+
+/**
+ * The radiant part of the sun through glass behind each interior shade (beam and diffuse alike), the FR of the
+ * rule above.
+ * - shades 0.44 [PUB: the roller-shade row of ASHRAE Handbook—Fundamentals 2017 ch. 15 (Tables 14A–14G) as used in
+ *   python-hvac's worked two-zone example (github.com/TomLXXVI/python-hvac,
+ *   docs/examples/cooling_load_calc/example_10/zone_2.py: "dark opaque roller shades" on double clear glass 5a,
+ *   IAC 0.76, F_rad 0.44), read 5 Dec 2026. The row's IAC agrees with the residential chapter's consolidated
+ *   table (dark opaque roller shade on double clear glass 0.76, as reproduced in a public copy of ch. 17
+ *   Table 14), which ties the row to the handbook. Our 'Shades' choice does not ask the colour; the dark opaque
+ *   row is the published roller shade nearest its IAC 0.80.]
+ * - blinds 0.63, drapes 0.63 [MEM: the stand-in above; their FR rows were not found in a public copy. The one
+ *   published blind row found (python-hvac's same example: louvered shade, louver reflectance 0.5, slats at 0°,
+ *   on double clear glass: IAC 0.98 at normal incidence, 0.80 at 60°, 0.89 diffuse, FR 0.71) is an open-slat
+ *   blind, not the mostly closed blind our IAC 0.70 describes, so it is not adopted.]
+ */
+export const SHADED_SUN_RADIANT_FRACTION: Readonly<Record<ShadeKind, number>> = {
+  blinds: RADIANT_FRACTION.sunInteriorShade,
+  drapes: RADIANT_FRACTION.sunInteriorShade,
+  shades: 0.44,
+};
 
 /** The radiant part of a window's conduction gain by its SHGC (Table 14: over 0.5 → 0.33, else 0.46). */
 export function windowConductionRadiantFraction(shgc: number): number {

@@ -4,7 +4,7 @@ import type { Wall } from '../schemas/room';
 
 type CompassDirection = Wall['direction'];
 import { HOURS, radiantTimeSeries } from './design-day-context';
-import { RADIANT_FRACTION } from './hourly-method';
+import { RADIANT_FRACTION, SHADED_SUN_RADIANT_FRACTION } from './hourly-method';
 import type { LoadComponents, RoomHourly } from './room-load';
 
 /** One façade of a room at its peak hour, Btu/h; the façades add up to the room's components. */
@@ -170,7 +170,7 @@ export function peakDetail(w: RoomHourly, gain: LoadComponents): PeakDetail {
       const shgc = win.shgc ?? g.shgc;
       acc.cond += (win.uFactor ?? g.u) * a * (shgc > 0.5 ? glassOver : glassUnder);
       const iac = INTERIOR_SHADING_IAC[win.interiorShading].value;
-      const shaded = iac < 1;
+      const shaded = win.interiorShading === 'none' ? null : win.interiorShading;
       const k = a * shgc * iac;
       const depth = win.overhangDepthFt ?? 0;
       if (depth > 0) {
@@ -183,10 +183,10 @@ export function peakDetail(w: RoomHourly, gain: LoadComponents): PeakDetail {
           beam[i] = k * (fs.glassBeam[i] ?? 0) * sunlit;
         }
         const beamLoad = shaded
-          ? radiantTimeSeries(beam, RADIANT_FRACTION.sunInteriorShade, ctx.rts.nonsolar)
+          ? radiantTimeSeries(beam, SHADED_SUN_RADIANT_FRACTION[shaded], ctx.rts.nonsolar)
           : radiantTimeSeries(beam, RADIANT_FRACTION.sunUnshaded, ctx.rts.solar);
-        acc.sun += (beamLoad[h] ?? 0) + k * ((shaded ? fs.shadedDiffuseLoad : fs.diffuseLoad)[h] ?? 0);
-      } else acc.sun += k * ((shaded ? fs.shadedSolarLoad : fs.solarLoad)[h] ?? 0);
+        acc.sun += (beamLoad[h] ?? 0) + k * ((shaded ? fs.shaded[shaded].diffuseLoad : fs.diffuseLoad)[h] ?? 0);
+      } else acc.sun += k * ((shaded ? fs.shaded[shaded].solarLoad : fs.solarLoad)[h] ?? 0);
     }
     for (const d of wall.doors) {
       const a = doorAreaFt2(d);

@@ -19,7 +19,14 @@ import { ceilingLoad, exposedWallsLoad, floorLoad } from './envelope';
 import { appliancesLoad, peopleLoad } from './internal';
 import { METHOD_NOTES } from './notes';
 import { designDayContext, HOURS, radiantTimeSeries, type DesignDayContext } from './design-day-context';
-import { GARAGE_COOLING_FRACTION, RADIANT_FRACTION, type MassClass } from './hourly-method';
+import {
+  GARAGE_COOLING_FRACTION,
+  RADIANT_FRACTION,
+  SHADED_SUN_RADIANT_FRACTION,
+  SHADE_KINDS,
+  type MassClass,
+  type ShadeKind,
+} from './hourly-method';
 import { designLeakageCfm, leakageAreaFromTightnessCm2 } from './infiltration';
 import { peakDetail, type PeakDetail } from './peak-detail';
 
@@ -215,7 +222,8 @@ export interface RoomHourly {
  * - window conduction: U·A × (outdoor(h) − indoor) (radiant 0.33 for SHGC over 0.5, else 0.46);
  * - sun through glass: A·SHGC·IAC × (beam × angular SHGC ratio × sunlit fraction under the overhang, wholly
  *   radiant through the solar factors, + diffuse × hemispherical ratio, wholly radiant through the nonsolar
- *   ones); behind an interior shade both 0.63 radiant through the nonsolar factors;
+ *   ones); behind an interior shade both radiant by the shade's FR (SHADED_SUN_RADIANT_FRACTION: shades 0.44,
+ *   blinds and drapes 0.63 from memory) through the nonsolar factors;
  * - ceiling: U·A × (attic air − indoor) or the roof's equivalent ΔT (radiant 0.60); floor over a garage:
  *   U·A × 0.6 × ΔT(h) (radiant 0.46);
  * - leakage and ventilation: 1.08 × CFM × ΔT(h) × altitude factor (convective); people and appliances
@@ -229,7 +237,7 @@ export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayCo
   let glassUAUnder = 0;
   // Beam gains of glass under an overhang (the shadow moves with the sun), before the radiant time series.
   let beamOpen: Float64Array | null = null;
-  let beamShaded: Float64Array | null = null;
+  const beamShaded: Partial<Record<ShadeKind, Float64Array>> = {};
   const solar = new Float64Array(HOURS);
   // walls and doors accumulate per hour directly
   const walls = new Float64Array(HOURS);
@@ -247,7 +255,7 @@ export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayCo
       if (shgc > 0.5) glassUAOver += u * a;
       else glassUAUnder += u * a;
       const iac = INTERIOR_SHADING_IAC[w.interiorShading].value;
-      const shade = iac < 1;
+      const shade = w.interiorShading === 'none' ? null : w.interiorShading;
       const k = a * shgc * iac;
       const depth = w.overhangDepthFt ?? 0;
       if (depth > 0) {
@@ -255,8 +263,8 @@ export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayCo
         // the window's top sits `gap` below it. [PUB: ASHRAE Fundamentals ch. 15 exterior shading, profile angle]
         const heightFt = w.heightIn !== undefined ? w.heightIn / 12 : Math.sqrt(a / w.count);
         const gap = w.overhangGapFt ?? 0;
-        const beam = shade ? (beamShaded ??= new Float64Array(HOURS)) : (beamOpen ??= new Float64Array(HOURS));
-        const diffuse = shade ? fs.shadedDiffuseLoad : fs.diffuseLoad;
+        const beam = shade ? (beamShaded[shade] ??= new Float64Array(HOURS)) : (beamOpen ??= new Float64Array(HOURS));
+        const diffuse = shade ? fs.shaded[shade].diffuseLoad : fs.diffuseLoad;
         for (let h = 0; h < HOURS; h += 1) {
           const cut = Math.min(heightFt, pos(depth * (fs.profileTan[h] ?? 0) - gap));
           const sunlit = heightFt > 0 ? 1 - cut / heightFt : 1;
@@ -264,7 +272,7 @@ export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayCo
           solar[h] = (solar[h] ?? 0) + k * (diffuse[h] ?? 0);
         }
       } else {
-        const load = shade ? fs.shadedSolarLoad : fs.solarLoad;
+        const load = shade ? fs.shaded[shade].solarLoad : fs.solarLoad;
         for (let h = 0; h < HOURS; h += 1) solar[h] = (solar[h] ?? 0) + k * (load[h] ?? 0);
       }
     }
@@ -281,7 +289,10 @@ export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayCo
     for (let h = 0; h < HOURS; h += 1) walls[h] = (walls[h] ?? 0) + ua * (edt[h] ?? 0);
   }
   if (beamOpen) addInto(solar, radiantTimeSeries(beamOpen, RADIANT_FRACTION.sunUnshaded, ctx.rts.solar));
-  if (beamShaded) addInto(solar, radiantTimeSeries(beamShaded, RADIANT_FRACTION.sunInteriorShade, ctx.rts.nonsolar));
+  for (const kind of SHADE_KINDS) {
+    const beam = beamShaded[kind];
+    if (beam) addInto(solar, radiantTimeSeries(beam, SHADED_SUN_RADIANT_FRACTION[kind], ctx.rts.nonsolar));
+  }
   const glassOver = ctx.windowLoadDt(true);
   const glassUnder = ctx.windowLoadDt(false);
   const area = floorAreaFt2(room);

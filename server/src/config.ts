@@ -62,6 +62,13 @@ const schema = z.object({
     .int()
     .min(1)
     .default(60 * 60),
+  /** Proposal links that do not open (unknown, altered, ended) allowed per client address within the window. */
+  LINK_OPEN_MAX_FAILURES_PER_IP: z.coerce.number().int().min(1).default(20),
+  LINK_OPEN_WINDOW_SECONDS: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .default(15 * 60),
   /** `off`: this server only adds jobs and `npm run worker` (server/src/worker-main.ts) runs them. */
   QUEUE_WORKERS: z.enum(['on', 'off']).default('on'),
   QUEUE_CONCURRENCY: z.coerce.number().int().min(1).max(32).default(2),

@@ -410,6 +410,27 @@ describe('names in the e-mail', () => {
   });
 });
 
+describe('guessing at links', () => {
+  it('an address whose openings keep failing gets 429 for every token, a real one too; another address is not held up', async () => {
+    const { jobId, proposalId } = await issuedJob();
+    const { token } = await send(jobId);
+    const guesser = `203.0.113.${Math.floor(Math.random() * 200) + 20}`;
+    const from = (ip: string, tok: string) =>
+      browserAgent(t.app).get(`${PROPOSAL_LINK_OPEN_PATH}?t=${tok}`).set(HTTPS).set('X-Forwarded-For', ip);
+    const limit = t.services.config.LINK_OPEN_MAX_FAILURES_PER_IP;
+    for (let i = 0; i < limit; i++)
+      expect((await from(guesser, randomBytes(32).toString('base64url'))).status).toBe(410);
+    const held = await from(guesser, token);
+    expect(held.status).toBe(429);
+    expect(Number(held.headers['retry-after'])).toBeGreaterThan(0);
+    expect(held.text).toContain(LINK_ENDED.tooMany);
+    expect(held.text).not.toContain(a.name);
+    const other = await from('198.51.100.9', token);
+    expect(other.status).toBe(303);
+    expect(other.headers.location).toBe(`/p/${proposalId}`);
+  });
+});
+
 describe('a mail server that stays down', () => {
   // Last in the file: it stops this app's SMTP fake.
   it('shows "waiting to send" with the reason while retrying, then "not sent" and a send-failed event after the last try', async () => {

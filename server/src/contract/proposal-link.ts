@@ -172,5 +172,8 @@ export const LINK_ENDED = {
   superseded: 'The company has sent a newer version of this proposal; the newest e-mail has the link to it.',
   sessionEnded: 'Your viewing time has ended. Open the link in your e-mail again to carry on.',
   contact: 'To get a new link, contact',
+  tooManyTitle: 'Please wait a few minutes',
+  tooMany:
+    'Many links that do not work were opened from this connection. Wait a few minutes, then open the link in your e-mail again.',
 } as const;
 export type LinkEndedReason = 'expired' | 'revoked' | 'superseded';

@@ -5,6 +5,7 @@ import type { Services } from '../services/services';
 import { authRoutes } from './auth/auth.routes';
 import { createLoginLimiter } from './auth/rate-limit';
 import { createResetLimiter } from './auth/reset-limit';
+import { createLinkOpenLimiter } from './proposal-links/link-open-limit';
 import { outboxRoutes } from './dev/outbox.routes';
 import { docsPageRoutes, docsRoutes } from './docs/docs.routes';
 import { healthRoutes } from './health/health.routes';
@@ -87,6 +88,7 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/proposals', paymentRoutes);
   mount('/proposals', customerProposalRoutes);
   mount('/proposals', customerAfterSigningRoutes);
-  mount('/links', linkOpenRoutes);
+  const linkLimiter = createLinkOpenLimiter(services.config, services.sessionPool);
+  mount('/links', (api) => linkOpenRoutes(api, linkLimiter));
   for (const [prefix, register] of extra) mount(prefix, register);
 }

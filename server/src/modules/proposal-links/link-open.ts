@@ -122,7 +122,14 @@ const escapeHtml = (s: string) =>
  * token that never existed (or was altered) the page is the same bytes whatever was sent.
  */
 export function linkEndedPage(reason: LinkEndedReason | null, contact: LinkContact | null): string {
-  const why = escapeHtml(endedDetail(reason));
+  return page(LINK_ENDED.title, endedDetail(reason), contact);
+}
+
+/** The answer while an address that failed too often waits (the same for every token). */
+export const tooManyTriesPage = () => page(LINK_ENDED.tooManyTitle, LINK_ENDED.tooMany, null);
+
+function page(title: string, detail: string, contact: LinkContact | null): string {
+  const why = escapeHtml(detail);
   const reach = contact
     ? `<p>${escapeHtml(LINK_ENDED.contact)} <strong>${escapeHtml(contact.name)}</strong>${
         contact.phone
@@ -136,7 +143,7 @@ export function linkEndedPage(reason: LinkEndedReason | null, contact: LinkConta
 <meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1">
 <meta name="referrer" content="no-referrer">
-<title>${escapeHtml(LINK_ENDED.title)}</title>
+<title>${escapeHtml(title)}</title>
 <style>
 body{margin:0;font-family:"Source Sans 3",ui-sans-serif,system-ui,sans-serif;background:#fbfaf7;color:#0b2227;line-height:1.5}
 main{max-width:32rem;margin:0 auto;padding:2.5rem 1rem}
@@ -149,7 +156,7 @@ a{color:#18383e;font-weight:600}
 <body>
 <main>
 <div class="card">
-<h1>${escapeHtml(LINK_ENDED.title)}</h1>
+<h1>${escapeHtml(title)}</h1>
 <p>${why}</p>
 ${reach}
 </div>

@@ -9,7 +9,8 @@ import {
 import { link, OFFICE, PUBLIC, rawResponse, type ApiRouter } from '../../lib/route';
 import { uuidParam } from '../../lib/validate';
 import { chooseOption, customerPdf, readCustomerProposal } from './customer-proposal.service';
-import { linkEndedPage, openLink } from './link-open';
+import { linkEndedPage, openLink, tooManyTriesPage } from './link-open';
+import type { LinkOpenLimiter } from './link-open-limit';
 import { listLinks, revokeLink, sendProposal } from './proposal-link.service';
 
 const jobParams = z.strictObject({ jobId: uuidParam });
@@ -61,9 +62,10 @@ export function proposalLinkRoutes(api: ApiRouter): void {
  * regenerated (a new id) and holds a grant for that one proposal, and the answer is 303 to the clean page
  * `/p/<proposal id>`, so the token leaves the address bar and history and is never sent as a Referer. An
  * ended, altered or unknown token: 410 with the "no longer works" page (why and whom to contact only for a
- * real link). The token is in the query, which the request log never writes.
+ * real link). Failed openings are counted per client address (link-open-limit.ts): past the limit, 429.
+ * The token is in the query, which the request log never writes.
  */
-export function linkOpenRoutes(api: ApiRouter): void {
+export function linkOpenRoutes(api: ApiRouter, limiter: LinkOpenLimiter): void {
   api.route({
     method: 'get',
     path: '/open',
@@ -74,11 +76,19 @@ export function linkOpenRoutes(api: ApiRouter): void {
     handler: async ({ req, res, em, services, query }) => {
       res.setHeader('Referrer-Policy', 'no-referrer');
       res.setHeader('Cache-Control', 'no-store');
+      // An address that failed too often waits, whatever it sends now (guessing tokens is slowed to a crawl).
+      const ip = req.ip ?? 'unknown';
+      const wait = await limiter.blockedFor(ip);
+      if (wait > 0) {
+        res.status(429).setHeader('Retry-After', String(wait)).type('html').send(tooManyTriesPage());
+        return undefined;
+      }
       const outcome = await openLink(em, services.clock, query.t ?? '', {
         ip: req.ip ?? null,
         userAgent: req.get('user-agent') ?? null,
       });
       if (!outcome.ok) {
+        await limiter.failed(ip);
         res.status(410).type('html').send(linkEndedPage(outcome.reason, outcome.contact));
         return undefined;
       }

@@ -10,13 +10,15 @@ export interface FieldShellProps {
   error?: string | undefined;
   /** A unit shown beside the input (the walk-through's measures: "ft", "m²"); none when empty. */
   unit?: string;
+  /** Classes for the field's own box (a grid cell's span). */
+  className?: string | undefined;
   children: ReactNode;
 }
 
 /** A field's label, hint and error around its input: the Form's fields use it, and so does the sign-in page, which has no react-hook-form. */
-export function FieldShell({ id, label, hint, error, unit, children }: FieldShellProps) {
+export function FieldShell({ id, label, hint, error, unit, className, children }: FieldShellProps) {
   return (
-    <div className="flex min-w-0 flex-col gap-1">
+    <div className={`flex min-w-0 flex-col gap-1${className ? ` ${className}` : ''}`}>
       <label htmlFor={id} className="text-sm font-semibold text-ink-900">
         {label}
       </label>

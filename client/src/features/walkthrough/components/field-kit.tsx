@@ -180,10 +180,27 @@ interface SelectProps {
   hint?: ReactNode;
 }
 
+/**
+ * A phone's select shows about 14 characters in half a row and about 30 in a whole one; a choice longer than
+ * that was cut short ("2×4 wood fran…", "Double pan…"). Such a select takes the whole row of a two-column grid,
+ * and a choice longer than a whole row is also written out under the box, for the eye only (the select itself
+ * tells a screen reader), as the desk's selects do.
+ */
+const HALF_ROW_CHOICE = 14;
+const WHOLE_ROW_CHOICE = 30;
+
 export const SelectInput = memo(function SelectInput({ label, value, onChange, options, error, hint }: SelectProps) {
   const id = useId();
+  const longest = options.reduce((n, o) => Math.max(n, o.label.length), 0);
+  const chosen = options.find((o) => o.value === value)?.label ?? '';
   return (
-    <FieldShell id={id} label={label} error={error} hint={hint}>
+    <FieldShell
+      id={id}
+      label={label}
+      error={error}
+      hint={hint}
+      className={longest > HALF_ROW_CHOICE ? '[.grid-cols-2>&]:col-span-2' : undefined}
+    >
       <select
         id={id}
         className={inputClass}
@@ -193,6 +210,11 @@ export const SelectInput = memo(function SelectInput({ label, value, onChange, o
       >
         <SelectOptions options={options} />
       </select>
+      {chosen.length > WHOLE_ROW_CHOICE ? (
+        <p className="text-sm text-ink-900 sm:hidden" aria-hidden="true" data-testid="chosen-in-full">
+          {chosen}
+        </p>
+      ) : null}
     </FieldShell>
   );
 });

@@ -5,6 +5,9 @@ import { Card } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
 import { companySettingsQueryOptions } from '../../entities/job/queries';
 import { DesignDefaultsForm } from '../../features/company-settings/components/design-defaults-form';
+import { proposalDetailsQueryOptions } from '../../features/company-settings/api/proposal-details';
+import { LogoField } from '../../features/company-settings/components/logo-field';
+import { ProposalDetailsForm } from '../../features/company-settings/components/proposal-details-form';
 import { UnitSystemForm } from '../../features/company-settings/components/unit-system-form';
 import { requireArea } from '../guards';
 import { ensureHeld } from '../../lib/offline/online';
@@ -19,6 +22,9 @@ export const clientLoader =
     if (onlineManager.isOnline()) await queryClient.prefetchQuery({ ...settings, staleTime: 0 });
     // Nothing held and no signal: "No signal" in words at once, not a fetch paused until the signal is back.
     await ensureHeld(queryClient, settings.queryKey, () => queryClient.ensureQueryData(settings));
+    // What every proposal carries: read while the page loads; its cards wait for it on their own.
+    const details = proposalDetailsQueryOptions();
+    if (onlineManager.isOnline()) void queryClient.prefetchQuery({ ...details, staleTime: 0 });
     return null;
   };
 
@@ -27,7 +33,7 @@ export default function CompanySettingsRoute() {
     <>
       <PageHeader
         title="Company settings"
-        lead="The units your people work in, and the design conditions every new job starts from. A job can still change any value for its own site."
+        lead="The units your people work in, the design conditions every new job starts from, and what every proposal carries. A job can still change any design value for its own site."
       />
       <div className="flex flex-col gap-6">
         <Card title="Units">
@@ -38,6 +44,16 @@ export default function CompanySettingsRoute() {
         <Card title="Design defaults">
           <QueryWidgetBoundary name="the design defaults">
             <DesignDefaultsForm />
+          </QueryWidgetBoundary>
+        </Card>
+        <Card title="On every proposal">
+          <QueryWidgetBoundary name="the proposal details">
+            <ProposalDetailsForm />
+          </QueryWidgetBoundary>
+        </Card>
+        <Card title="Logo">
+          <QueryWidgetBoundary name="the logo">
+            <LogoField />
           </QueryWidgetBoundary>
         </Card>
       </div>

@@ -46,6 +46,14 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
       },
     },
     {
+      path: jobRoutePatterns.proposal,
+      ErrorBoundary: RouteError,
+      lazy: {
+        loader: async () => (await import('./job-proposal-loader')).proposalLoader(queryClient),
+        Component: async () => (await import('./routes/job-proposal')).default,
+      },
+    },
+    {
       path: jobRoutePatterns.print,
       ErrorBoundary: RouteError,
       lazy: { loader: jobWithRooms, Component: async () => (await import('./routes/job-loads-print')).default },

@@ -33,6 +33,13 @@ export interface Viewer {
 }
 
 export const isOfficeRole = (role: Role): boolean => has(OFFICE_ROLES, role);
+/**
+ * Proposals (issue 14): the office issues versions and previews their PDFs; whoever may edit the job (a
+ * salesperson: their own jobs) reads its versions, what changed and the trail; an installer never.
+ */
+export const mayIssueProposal = (role: Role): boolean => isOfficeRole(role);
+export const mayReadProposal = (role: Role): boolean => has(JOB_EDITOR_ROLES, role);
+export const mayOpenProposalPdf = (role: Role): boolean => isOfficeRole(role);
 export const mayEditJob = (role: Role): boolean => has(JOB_EDITOR_ROLES, role);
 export const mayAssignInstaller = (role: Role): boolean => isOfficeRole(role);
 /** A salesperson may make only themself a job's salesperson; the office may choose anyone who can own jobs. */

@@ -6,6 +6,7 @@ export const jobPaths = {
   loads: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/loads`,
   print: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/loads/print`,
   desk: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/desk`,
+  proposal: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/proposal`,
 } as const;
 
 /** Route patterns for the router, in step with jobPaths. */
@@ -16,6 +17,7 @@ export const jobRoutePatterns = {
   loads: '/jobs/:jobId/loads',
   print: '/jobs/:jobId/loads/print',
   desk: '/jobs/:jobId/desk',
+  proposal: '/jobs/:jobId/proposal',
 } as const;
 
 /** The API's addresses for a job and the records hanging off it. */

@@ -1,6 +1,8 @@
 import { z } from 'zod';
+import { proposalResponse } from '@contract';
 import { OFFICE, rawResponse, type ApiRouter } from '../../lib/route';
-import { versionPdf } from './proposal-pdf.service';
+import { retryPdfRender, versionPdf } from './proposal-pdf.service';
+import { getProposal } from './proposal.service';
 
 const versionParams = z.object({
   jobId: z.uuid({ message: 'Must be a job id.' }),
@@ -43,6 +45,18 @@ export function proposalPdfRoutes(api: ApiRouter): void {
         .setHeader('Content-Security-Policy', "default-src 'none'; object-src 'self'; frame-ancestors 'self'")
         .end(pdf.bytes);
       return undefined;
+    },
+  });
+  api.route({
+    method: 'post',
+    path: '/:jobId/proposal/versions/:n/pdf/retry',
+    policy: OFFICE,
+    params: versionParams,
+    summary: 'Queues a failed PDF again (409 unless it failed); answers with the proposal',
+    response: proposalResponse,
+    handler: async ({ service, services, params }) => {
+      await retryPdfRender({ ...service, queue: services.queue }, params.jobId, params.n);
+      return getProposal(service, params.jobId);
     },
   });
 }

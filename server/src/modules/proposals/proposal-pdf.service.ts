@@ -180,3 +180,31 @@ export async function versionPdf(
   const snapshot = proposalSnapshot.parse(version.snapshot);
   return { bytes, fileName: pdfFileName(snapshot.customer.name, version.number), sha256: version.pdfSha256 };
 }
+
+/**
+ * The office's "Try again" for a version whose PDF failed after the queue's last try: back to 'waiting' and
+ * queued again, in one transaction (the PDF columns may change while no hash is recorded). A version whose PDF
+ * is ready or still on its way is a 409 that says which.
+ */
+export async function retryPdfRender(
+  ctx: ServiceContext & { queue: Queue },
+  jobId: string,
+  number: number,
+): Promise<void> {
+  const version = await findVersion(ctx, jobId, number);
+  if (version.pdfState !== 'failed')
+    throw new ConflictError(
+      version.pdfState === 'ready'
+        ? 'The PDF of this version is ready; there is nothing to try again.'
+        : 'The PDF of this version is already being prepared.',
+      { pdfState: version.pdfState },
+    );
+  await ctx.em.transactional(async (tx) => {
+    await tx.execute(
+      `update "proposal_version" set "pdf_state" = 'waiting' where "id" = ? and "pdf_state" = 'failed' and "pdf_sha256" is null`,
+      [version.id],
+      'run',
+    );
+    await queuePdfRender(ctx.queue, version.id, tx);
+  });
+}

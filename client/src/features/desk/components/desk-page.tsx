@@ -153,6 +153,14 @@ export function DeskPage() {
             {r.markedReady ? 'Take the ready mark off' : 'Mark ready to propose'}
           </Button>
         ) : null}
+        {r.ready || job.hasProposal ? (
+          <Link
+            className={buttonClass(r.ready && !job.hasProposal ? 'primary' : 'secondary')}
+            to={jobPaths.proposal(jobId)}
+          >
+            {job.hasProposal ? 'The proposal' : 'Go to the proposal'}
+          </Link>
+        ) : null}
         <Blockers blockers={r.blockers} options={desk.options} />
         {ready.isError ? (
           <Alert tone="danger" title="Not marked ready">

@@ -122,7 +122,7 @@ export function WalkthroughView({
               <LiveSaveStatus />
               {/* On a phone the pinned load bar and the link under the header take its place. */}
               <span className="hidden gap-2 sm:flex">
-                <JobPageLinks jobId={job.id} />
+                <JobPageLinks job={job} />
               </span>
             </div>
           </div>
@@ -137,7 +137,7 @@ export function WalkthroughView({
         <div className="-mt-3 flex flex-wrap items-center justify-between gap-2 sm:hidden">
           <p className="min-w-0 text-sm text-muted">{address}</p>
           <div className="flex flex-wrap gap-2">
-            <JobPageLinks jobId={job.id} />
+            <JobPageLinks job={job} />
           </div>
         </div>
 
@@ -225,7 +225,8 @@ export function WalkthroughView({
 }
 
 /** The job's other pages, beside the save status on a wide screen and under the header on a phone. */
-function JobPageLinks({ jobId }: { jobId: string }) {
+function JobPageLinks({ job }: { job: JobRecord }) {
+  const jobId = job.id;
   return (
     <>
       <Link className={buttonClass('secondary')} to={jobPaths.loads(jobId)}>
@@ -234,6 +235,12 @@ function JobPageLinks({ jobId }: { jobId: string }) {
       <Link className={buttonClass('secondary')} to={jobPaths.desk(jobId)}>
         Options and price
       </Link>
+      {/* The proposal once there is one, or once the office has marked the job ready to propose. */}
+      {job.hasProposal || job.readyToProposeAt ? (
+        <Link className={buttonClass('secondary')} to={jobPaths.proposal(jobId)}>
+          Proposal
+        </Link>
+      ) : null}
     </>
   );
 }

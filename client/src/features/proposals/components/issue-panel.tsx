@@ -1,0 +1,54 @@
+import { Link } from 'react-router-dom';
+import type { ProposalResponse } from '@contract';
+import { Alert } from '../../../components/ui/alert';
+import { Button, buttonClass } from '../../../components/ui/button';
+import { jobPaths } from '../../../entities/job/paths';
+import { errorMessage } from '../../../lib/api-error';
+import { useIssueVersion } from '../api/issue-version';
+
+/**
+ * "Issue version N" for the office. The server says whether the job may be issued and why not (not marked
+ * ready, what blocks it); the same reasons come back in a 409 if something changed meanwhile.
+ */
+export function IssuePanel({ jobId, data }: { jobId: string; data: ProposalResponse }) {
+  const issue = useIssueVersion(jobId);
+  const versions = data.proposal?.versions ?? [];
+  const current = versions.find((v) => v.current) ?? null;
+  const next = (versions[0]?.number ?? 0) + 1;
+  return (
+    <section aria-labelledby="issue-heading" className="flex flex-col gap-3 rounded-lg border border-line bg-white p-4">
+      <h2 id="issue-heading" className="text-lg font-semibold text-ink-900">
+        {current ? 'Issue a new version' : 'Issue the proposal'}
+      </h2>
+      <p className="max-w-prose text-base text-ink-950">
+        Issuing freezes what the desk shows now: the server works every figure out again from the saved rooms and
+        options and keeps it unchanged from then on.
+        {current ? ` Version ${current.number} stays readable and is marked superseded.` : ''}
+      </p>
+      {data.canIssue.ok ? (
+        <div>
+          <Button busy={issue.isPending} onClick={() => issue.mutate()}>
+            Issue version {next}
+          </Button>
+        </div>
+      ) : (
+        <Alert tone="warning" title={`Version ${next} cannot be issued yet.`}>
+          <p>{data.canIssue.reason}</p>
+          <Link className={`${buttonClass('secondary')} mt-2`} to={jobPaths.desk(jobId)}>
+            Open the desk
+          </Link>
+        </Alert>
+      )}
+      {issue.isError ? (
+        <Alert tone="danger" title="The version was not issued.">
+          {errorMessage(issue.error)}
+        </Alert>
+      ) : null}
+      {issue.isSuccess ? (
+        <p role="status" className="font-semibold text-ok">
+          Version {issue.data.proposal?.versions[0]?.number} issued. Its PDF is being made.
+        </p>
+      ) : null}
+    </section>
+  );
+}

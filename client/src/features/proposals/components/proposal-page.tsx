@@ -1,0 +1,100 @@
+import { useSuspenseQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import { z } from 'zod';
+import { mayIssueProposal, mayOpenProposalPdf, mayReadProposal } from '@contract';
+import { Alert } from '../../../components/ui/alert';
+import { buttonClass } from '../../../components/ui/button';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { PageHeader } from '../../../components/ui/page-header';
+import { jobStatusText } from '../../../entities/job/labels';
+import { jobPaths } from '../../../entities/job/paths';
+import { jobQueryOptions } from '../../../entities/job/queries';
+import { useViewer, type Viewer } from '../../../lib/viewer';
+import { proposalQueryOptions } from '../api/get-proposal';
+import { pdfFailure } from '../model/event-words';
+import { AuditTrail } from './audit-trail';
+import { IssuePanel } from './issue-panel';
+import { PdfPanel } from './pdf-panel';
+import { VersionsList } from './versions-list';
+import { WhatChanged } from './what-changed';
+
+export const proposalParams = z.object({ jobId: z.uuid({ message: 'That is not a job address.' }) });
+
+/**
+ * /jobs/:jobId/proposal — the office's proposal screen: issue version N, the versions with their PDFs (progress,
+ * preview, download), what changed between any two, and the audit trail in order. A salesperson reads their own
+ * job's proposal; issuing and the PDF are the office's.
+ */
+export function ProposalPage() {
+  const { jobId } = proposalParams.parse(useParams());
+  const viewer = useViewer();
+  if (!viewer) return null;
+  if (!mayReadProposal(viewer.role))
+    return (
+      <Alert tone="warning" title="Proposals are for the office and the job’s salesperson.">
+        <Link className="underline" to={jobPaths.walkthrough(jobId)}>
+          The job page
+        </Link>{' '}
+        has what you need for the install.
+      </Alert>
+    );
+  return <ProposalScreen jobId={jobId} viewer={viewer} />;
+}
+
+function ProposalScreen({ jobId, viewer }: { jobId: string; viewer: Viewer }) {
+  const job = useSuspenseQuery(jobQueryOptions(jobId)).data;
+  const data = useSuspenseQuery(proposalQueryOptions(jobId)).data;
+  const [picked, setPicked] = useState<number | null>(null);
+  const proposal = data.proposal;
+  const versions = proposal?.versions ?? [];
+  const shown = versions.find((v) => v.number === picked) ?? versions.find((v) => v.current) ?? versions[0] ?? null;
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader
+        title={`Proposal — ${job.customer.name}`}
+        lead={`${[job.site.street, job.site.city].filter(Boolean).join(', ')} · ${jobStatusText(job)}`}
+        actions={
+          <div className="flex flex-wrap gap-2">
+            <Link className={buttonClass('secondary')} to={jobPaths.walkthrough(jobId)}>
+              The job
+            </Link>
+            <Link className={buttonClass('secondary')} to={jobPaths.desk(jobId)}>
+              Options and price
+            </Link>
+          </div>
+        }
+      />
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
+        <div className="flex min-w-0 flex-col gap-6">
+          {mayIssueProposal(viewer.role) ? <IssuePanel jobId={jobId} data={data} /> : null}
+          {proposal && shown ? (
+            <>
+              <VersionsList versions={versions} shown={shown.number} onShow={setPicked} />
+              {/* send14: "Send to the customer" (client/src/features/proposals/send/) goes here, given the
+                  proposal and its current version. */}
+              <WhatChanged jobId={jobId} versions={versions} />
+              <AuditTrail events={proposal.events} />
+            </>
+          ) : (
+            <EmptyState title="No version issued yet">
+              {mayIssueProposal(viewer.role)
+                ? 'Once the desk marks the job ready to propose, issue version 1 here.'
+                : 'The office issues the proposal once the job is ready to propose.'}
+            </EmptyState>
+          )}
+        </div>
+        {proposal && shown ? (
+          <div className="min-w-0">
+            <PdfPanel
+              jobId={jobId}
+              version={shown}
+              failure={pdfFailure(proposal.events, shown.number)}
+              canOpen={mayOpenProposalPdf(viewer.role)}
+            />
+          </div>
+        ) : null}
+      </div>
+    </div>
+  );
+}

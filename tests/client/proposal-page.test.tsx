@@ -1,0 +1,200 @@
+import { QueryClientProvider } from '@tanstack/react-query';
+import { fireEvent, render, screen, within } from '@testing-library/react';
+import { Suspense } from 'react';
+import { MemoryRouter, Route, Routes } from 'react-router-dom';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import {
+  PROPOSAL_EVENT_KINDS,
+  type ProposalEventRecord,
+  type ProposalResponse,
+  type ProposalVersionRecord,
+  type Role,
+} from '../../server/src/contract';
+import { ProposalPage } from '../../client/src/features/proposals/components/proposal-page';
+import { describeEvent } from '../../client/src/features/proposals/model/event-words';
+import { clearCsrfToken } from '../../client/src/lib/api-client';
+import { createQueryClient } from '../../client/src/lib/query-client';
+import { ViewerContext } from '../../client/src/lib/viewer';
+import { json, mockFetch, problem } from './helpers/fetch-mock';
+import { JOB_ID, jobRecord } from './helpers/walkthrough-harness';
+
+/** Issue 14 (office14): the office's proposal screen against a stand-in server. */
+beforeEach(() => clearCsrfToken());
+afterEach(() => vi.unstubAllGlobals());
+
+const base = `/api/jobs/${JOB_ID}/proposal`;
+
+function version(n: number, current: boolean, state: ProposalVersionRecord['pdf']['state']): ProposalVersionRecord {
+  return {
+    number: n,
+    issuedAt: `2026-12-0${n}T15:00:00.000Z`,
+    issuedBy: { id: 'u-est', name: 'Esme Estimator' },
+    supersededAt: current ? null : '2026-12-04T15:00:00.000Z',
+    current,
+    snapshotSha256: 'a'.repeat(64),
+    calcVersion: '0.1.0',
+    pdf: { state, sha256: state === 'ready' ? 'b'.repeat(64) : null },
+    options: [{ name: 'Essential', totalCents: 1_234_500 }],
+  };
+}
+
+const event = (seq: number, kind: ProposalEventRecord['kind'], n: number | null, data = {}): ProposalEventRecord => ({
+  seq,
+  kind,
+  at: '2026-12-04T15:00:00.000Z',
+  versionNumber: n,
+  by: { kind: 'staff', id: 'u-est', name: 'Esme Estimator' },
+  data,
+});
+
+const none: ProposalResponse = { jobId: JOB_ID, canIssue: { ok: true }, proposal: null };
+const two = (v2: ProposalVersionRecord['pdf']['state']): ProposalResponse => ({
+  jobId: JOB_ID,
+  canIssue: { ok: true },
+  proposal: {
+    id: 'p1',
+    createdAt: '2026-12-03T15:00:00.000Z',
+    versions: [version(2, true, v2), version(1, false, 'ready')],
+    events: [
+      event(1, 'issued', 1),
+      event(4, 'pdf-failed', 2, { reason: 'disk full', attempts: 5 }),
+      event(2, 'superseded', 1, { number: 1, by: 2 }),
+      event(3, 'issued', 2),
+    ],
+  },
+});
+
+function renderPage(role: Role) {
+  return render(
+    <QueryClientProvider client={createQueryClient()}>
+      <MemoryRouter initialEntries={[`/jobs/${JOB_ID}/proposal`]}>
+        <ViewerContext.Provider value={{ id: `u-${role}`, role }}>
+          <Suspense fallback="loading">
+            <Routes>
+              <Route path="/jobs/:jobId/proposal" element={<ProposalPage />} />
+            </Routes>
+          </Suspense>
+        </ViewerContext.Provider>
+      </MemoryRouter>
+    </QueryClientProvider>,
+  );
+}
+
+describe('the proposal screen', () => {
+  it('the estimator issues version 1; a 409 says why in the server’s words and nothing is shown as issued', async () => {
+    const fetch = mockFetch({
+      [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'design' }) }),
+      [`GET ${base}`]: json(200, none),
+      'GET /api/auth/csrf': json(200, { token: 't' }),
+      [`POST ${base}/versions`]: (_init, call) =>
+        call === 1
+          ? problem(409, 'conflict', 'Mark the job ready to propose on the desk first.')
+          : json(201, two('waiting')),
+    });
+    renderPage('estimator');
+    expect(await screen.findByText('No version issued yet')).toBeInTheDocument();
+    fireEvent.click(screen.getByRole('button', { name: 'Issue version 1' }));
+    const refused = await screen.findByRole('alert');
+    expect(refused).toHaveTextContent('The version was not issued.');
+    expect(refused).toHaveTextContent('Mark the job ready to propose on the desk first.');
+
+    fireEvent.click(screen.getByRole('button', { name: 'Issue version 1' }));
+    expect(await screen.findByText('Version 2 issued. Its PDF is being made.')).toBeInTheDocument();
+    const versions = screen.getByRole('region', { name: 'Versions' });
+    const items = within(versions).getAllByRole('button');
+    expect(items.map((b) => b.textContent)).toEqual([
+      expect.stringMatching(/^Version 2CurrentPDF waiting its turn/),
+      expect.stringMatching(/^Version 1SupersededPDF ready/),
+    ]);
+    expect(screen.getByRole('region', { name: 'PDF of version 2' })).toHaveTextContent('Waiting its turn');
+    expect(fetch.mock.calls.filter(([, init]) => init?.method === 'POST')).toHaveLength(2);
+  });
+
+  it('shows a failed PDF’s reason with “Try again”, the ready one’s preview, and the trail in seq order', async () => {
+    mockFetch({
+      [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'design', hasProposal: true }) }),
+      [`GET ${base}`]: json(200, two('failed')),
+      [`GET ${base}/versions/1/diff/2`]: json(200, {
+        from: 1,
+        to: 2,
+        changes: [
+          { area: 'line sets', path: 'a', sentence: 'Essential: line set run (ft) 35 → 45.' },
+          { area: 'prices', path: 'b', sentence: 'Essential: total $12,000.00 → $12,345.00.' },
+        ],
+      }),
+    });
+    renderPage('estimator');
+    const pdf = await screen.findByRole('region', { name: 'PDF of version 2' });
+    expect(pdf).toHaveTextContent('The PDF could not be made.');
+    expect(pdf).toHaveTextContent('Why: disk full');
+    expect(within(pdf).getByRole('button', { name: 'Try again' })).toBeInTheDocument();
+
+    const changed = screen.getByRole('region', { name: 'What changed' });
+    expect(await within(changed).findByText('Essential: line set run (ft) 35 → 45.')).toBeInTheDocument();
+    expect(within(changed).getByRole('heading', { name: 'Line sets' })).toBeInTheDocument();
+    expect(within(changed).getByRole('heading', { name: 'Prices' })).toBeInTheDocument();
+
+    const trail = screen.getByRole('list', { name: 'Audit trail' });
+    expect(
+      within(trail)
+        .getAllByRole('listitem')
+        .map((li) => li.firstChild?.textContent),
+    ).toEqual([
+      'Version 1 issued',
+      'Version 1 superseded by version 2',
+      'Version 2 issued',
+      'PDF of version 2 could not be made after 5 tries',
+    ]);
+
+    fireEvent.click(within(screen.getByRole('region', { name: 'Versions' })).getAllByRole('button')[1] as HTMLElement);
+    const ready = await screen.findByRole('region', { name: 'PDF of version 1' });
+    expect(within(ready).getByTitle('Proposal version 1, PDF preview')).toHaveAttribute(
+      'src',
+      `${base}/versions/1/pdf`,
+    );
+    expect(within(ready).getByRole('link', { name: 'Download the PDF' })).toHaveAttribute(
+      'href',
+      `${base}/versions/1/pdf?download=1`,
+    );
+  });
+
+  it('a salesperson reads it without issuing or the PDF; an installer is turned away before anything is asked', async () => {
+    mockFetch({
+      [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'design', hasProposal: true }) }),
+      [`GET ${base}`]: json(200, { ...two('ready'), canIssue: { ok: false, reason: 'Only the office issues.' } }),
+      [`GET ${base}/versions/1/diff/2`]: json(200, { from: 1, to: 2, changes: [] }),
+    });
+    const view = renderPage('salesperson');
+    const pdf = await screen.findByRole('region', { name: 'PDF of version 2' });
+    expect(pdf).toHaveTextContent('The office previews and downloads it.');
+    expect(screen.queryByRole('button', { name: /Issue version/ })).toBeNull();
+    expect(within(pdf).queryByTitle(/PDF preview/)).toBeNull();
+    expect(await screen.findByText('Nothing the customer sees differs between version 1 and version 2.')).toBeVisible();
+    view.unmount();
+
+    const fetch = mockFetch({});
+    renderPage('installer');
+    expect(screen.getByText('Proposals are for the office and the job’s salesperson.')).toBeInTheDocument();
+    expect(fetch).not.toHaveBeenCalled();
+  });
+});
+
+describe('the audit trail’s words', () => {
+  it('every kind the contract names has its own sentence', () => {
+    const titles = PROPOSAL_EVENT_KINDS.map((k) => describeEvent(event(1, k, 2)).title);
+    for (const t of titles) expect(t.length).toBeGreaterThan(10);
+    expect(new Set(titles).size).toBe(PROPOSAL_EVENT_KINDS.length);
+  });
+
+  it('reads only the expected keys, as text', () => {
+    expect(describeEvent(event(1, 'marked-lost', 1, { reason: 'Price too high', from: 'proposed' })).title).toBe(
+      'Job marked lost: Price too high',
+    );
+    expect(describeEvent(event(1, 'paid', 1, { amountCents: 150000 })).title).toBe('Deposit paid: $1,500.00');
+    expect(describeEvent(event(1, 'option-chosen', 1, { position: 2 })).title).toBe('The customer chose option 2');
+    // A non-string value where a string belongs is left out, not printed.
+    expect(describeEvent(event(1, 'sent', 1, { to: { html: '<b>x</b>' } })).title).toBe(
+      'Version 1 sent to the customer',
+    );
+  });
+});

@@ -47,6 +47,9 @@ const event = (seq: number, kind: ProposalEventRecord['kind'], n: number | null,
   data,
 });
 
+/** send14's panel asks for the links sent (the office's screen shows it); none sent yet. */
+const links = json(200, { customerEmail: 'rowan@example.com', canSend: { ok: true, versionNumber: 2 }, links: [] });
+
 const none: ProposalResponse = { jobId: JOB_ID, canIssue: { ok: true }, proposal: null };
 const two = (v2: ProposalVersionRecord['pdf']['state']): ProposalResponse => ({
   jobId: JOB_ID,
@@ -85,6 +88,7 @@ describe('the proposal screen', () => {
     const fetch = mockFetch({
       [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'design' }) }),
       [`GET ${base}`]: json(200, none),
+      [`GET ${base}/links`]: links,
       'GET /api/auth/csrf': json(200, { token: 't' }),
       [`POST ${base}/versions`]: (_init, call) =>
         call === 1
@@ -108,12 +112,15 @@ describe('the proposal screen', () => {
     ]);
     expect(screen.getByRole('region', { name: 'PDF of version 2' })).toHaveTextContent('Waiting its turn');
     expect(fetch.mock.calls.filter(([, init]) => init?.method === 'POST')).toHaveLength(2);
+    // The send panel sits below the versions once there is one to send.
+    expect(await screen.findByRole('region', { name: 'Send to the customer' })).toBeInTheDocument();
   });
 
   it('shows a failed PDF’s reason with “Try again”, the ready one’s preview, and the trail in seq order', async () => {
     mockFetch({
       [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'design', hasProposal: true }) }),
       [`GET ${base}`]: json(200, two('failed')),
+      [`GET ${base}/links`]: links,
       [`GET ${base}/versions/1/diff/2`]: json(200, {
         from: 1,
         to: 2,

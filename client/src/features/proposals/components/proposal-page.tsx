@@ -1,12 +1,14 @@
 import { useSuspenseQuery } from '@tanstack/react-query';
-import { useState } from 'react';
+import { Suspense, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { z } from 'zod';
 import { mayIssueProposal, mayOpenProposalPdf, mayReadProposal } from '@contract';
+import { QueryWidgetBoundary } from '../../../components/errors/query-widget-boundary';
 import { Alert } from '../../../components/ui/alert';
 import { buttonClass } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { PageHeader } from '../../../components/ui/page-header';
+import { Spinner } from '../../../components/ui/spinner';
 import { jobStatusText } from '../../../entities/job/labels';
 import { jobPaths } from '../../../entities/job/paths';
 import { jobQueryOptions } from '../../../entities/job/queries';
@@ -18,6 +20,7 @@ import { IssuePanel } from './issue-panel';
 import { PdfPanel } from './pdf-panel';
 import { VersionsList } from './versions-list';
 import { WhatChanged } from './what-changed';
+import { SendPanel } from '../send/send-panel';
 
 export const proposalParams = z.object({ jobId: z.uuid({ message: 'That is not a job address.' }) });
 
@@ -71,8 +74,14 @@ function ProposalScreen({ jobId, viewer }: { jobId: string; viewer: Viewer }) {
           {proposal && shown ? (
             <>
               <VersionsList versions={versions} shown={shown.number} onShow={setPicked} />
-              {/* send14: "Send to the customer" (client/src/features/proposals/send/) goes here, given the
-                  proposal and its current version. */}
+              {/* "Send to the customer" (send14's panel, features/proposals/send/): the office's only. */}
+              {mayIssueProposal(viewer.role) ? (
+                <QueryWidgetBoundary name="sending to the customer">
+                  <Suspense fallback={<Spinner label="Loading the links sent…" />}>
+                    <SendPanel jobId={jobId} />
+                  </Suspense>
+                </QueryWidgetBoundary>
+              ) : null}
               <WhatChanged jobId={jobId} versions={versions} />
               <AuditTrail events={proposal.events} />
             </>

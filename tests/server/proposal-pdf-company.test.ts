@@ -63,7 +63,9 @@ async function render(snapshot: ProposalSnapshot, cancellation: { transactionDat
   return pdf;
 }
 
-describe('the company on the proposal PDF', () => {
+// The first render in a process merges the typeface (about a second quiet, more while the whole suite runs on
+// two cores): a generous limit, not a speed check (speed is `npm run bench`).
+describe('the company on the proposal PDF', { timeout: 120_000 }, () => {
   it('the cover carries the contact lines and licence; terms and warranty print from the snapshot', async () => {
     const snapshot = { ...sampleSnapshot('Rowan Ellery'), company: company() };
     const raw = await pdfPages(await render(snapshot, null, 'company-unsigned'));

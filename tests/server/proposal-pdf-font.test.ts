@@ -8,7 +8,9 @@ import { sampleSnapshot } from '../helpers/proposal-snapshot';
  * weight (fonts.ts merges Source Sans 3's subsets), so a reader extracts a name whole, as typed. Rendered
  * without the database: the PDF is a function of the snapshot.
  */
-describe('proposal PDF typeface', () => {
+// The first render in a process merges the typeface (about a second quiet, more while the whole suite runs on
+// two cores): a generous limit, not a speed check (speed is `npm run bench`).
+describe('proposal PDF typeface', { timeout: 120_000 }, () => {
   it('prints Latin-extended names whole in the regular and the bold weights', async () => {
     const names = 'Łódź Óscar Şen';
     const snapshot = sampleSnapshot(names);

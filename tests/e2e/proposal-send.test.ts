@@ -64,9 +64,18 @@ describe('a proposal sent to the customer', () => {
     await office.page.getByTestId('user-name').first().waitFor();
     const jobId = await issuedJob(office.page);
 
+    // The estimator sends it from the proposal screen's "Send to the customer" panel.
     const to = `homeowner-${Date.now()}@example.com`;
-    await api(office.page, 'post', `/api/jobs/${jobId}/proposal/links`, { to });
+    await office.page.goto(`/jobs/${jobId}/proposal`);
+    const form = office.page.getByRole('form', { name: 'Send the proposal' });
+    await form.getByLabel('Customer’s e-mail').fill(to);
+    await form.getByRole('button', { name: /^Send version \d+$/ }).click();
+    await office.page.getByText(`On its way to ${to}.`).waitFor();
     const mail = await mailFor(to);
+    // The panel reads the real mail state: "Sent" once the mail server has taken it.
+    await office.page.getByRole('list', { name: 'Links sent' }).getByText('Sent', { exact: true }).first().waitFor();
+    await office.page.screenshot({ path: `${SHOTS}/proposal-send-panel-1440.png`, fullPage: true });
+    await expectNoSeriousViolations(office.page);
     const link = new RegExp(`https?://\\S+${PROPOSAL_LINK_OPEN_PATH}\\?t=[A-Za-z0-9_-]{43}`).exec(mail.text)?.[0];
     if (!link) throw new Error(`no proposal link in: ${mail.text}`);
     const path = new URL(link).pathname + new URL(link).search;
@@ -131,7 +140,7 @@ describe('a proposal sent to the customer', () => {
     await fresh.page.screenshot({ path: `${SHOTS}/customer-link-ended-server-375.png`, fullPage: true });
     await expectNoSeriousViolations(fresh.page);
 
-    for (const p of ['/p/:id']) expect([...checkedPages], p).toContain(p);
+    for (const p of ['/p/:id', '/jobs/:id/proposal']) expect([...checkedPages], p).toContain(p);
     expect(proposalId).toMatch(/^[0-9a-f-]{36}$/);
     for (const c of [office, phone, desk, fresh]) await c.context.close();
   });

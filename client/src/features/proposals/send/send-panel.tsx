@@ -1,5 +1,5 @@
-import { useSuspenseQuery } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useQueryClient, useSuspenseQuery } from '@tanstack/react-query';
+import { useEffect, useRef, useState } from 'react';
 import { z } from 'zod';
 import { emailRule, PROPOSAL_LINK_DAYS } from '@contract';
 import { Alert } from '../../../components/ui/alert';
@@ -8,6 +8,7 @@ import { SubmitButton, TextField } from '../../../components/ui/form-fields';
 import { errorMessage } from '../../../lib/api-error';
 import { proposalLinksQueryOptions, useRevokeLink, useSendProposal } from './api/links';
 import { LinkRow } from './link-row';
+import { proposalLinkKeys } from './query-keys';
 
 const sendSchema = z.object({ to: emailRule });
 
@@ -25,6 +26,16 @@ export function SendPanel({ jobId }: { jobId: string }) {
   const revoke = useRevokeLink(jobId);
   const [sentTo, setSentTo] = useState<string | null>(null);
   const can = data.canSend;
+  // The 'sent' event is written when the mail server takes the e-mail: when the poll sees a link go out,
+  // the screen's audit trail is read again too.
+  const queryClient = useQueryClient();
+  const sentCount = data.links.filter((l) => l.sentAt !== null).length;
+  const seen = useRef(sentCount);
+  useEffect(() => {
+    if (sentCount === seen.current) return;
+    seen.current = sentCount;
+    void queryClient.invalidateQueries({ queryKey: proposalLinkKeys.proposal(jobId), exact: true });
+  }, [sentCount, jobId, queryClient]);
   return (
     <section aria-labelledby="send-heading" className="rounded-lg border border-line bg-white p-4 shadow-card sm:p-6">
       <h2 id="send-heading" className="text-lg font-semibold text-ink-900">

@@ -1,0 +1,187 @@
+import { existsSync } from 'node:fs';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { formatMoney } from '@calc';
+import { PROPOSAL_LINK_OPEN_PATH, type AfterSigningRecord } from '@contract';
+import { checkedPages, expectNoSeriousViolations } from './axe';
+import { api } from './proposal-helpers';
+import { account, expectFitsWidth, jobWithRooms } from './desk-helpers';
+import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
+
+/**
+ * Issue 14, after the signature, at 375 px: the customer pays the deposit through the local payments fake
+ * (a declined test card first, then one that pays; "Deposit paid" only once the server has the webhook),
+ * and, coming back the next day, cancels within the three business days and sees the refund arrive.
+ * Sending, choosing and signing have their own journeys; here the signing goes through its API from the
+ * customer's own browser session.
+ */
+let e: E2E;
+
+async function until<T>(what: string, read: () => Promise<T | undefined>): Promise<T> {
+  for (let i = 0; i < 300; i += 1) {
+    const found = await read();
+    if (found !== undefined) return found;
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  }
+  throw new Error(`gave up waiting for ${what}`);
+}
+
+/** A demo job with one priced option asking a 10 % deposit, marked ready, issued and e-mailed: the link's path. */
+async function sentProposal(office: Page): Promise<{ jobId: string; path: string }> {
+  const jobId = await jobWithRooms(office);
+  const rooms = (await api(office, 'get', `/api/jobs/${jobId}/rooms`)).rooms as { id: string }[];
+  await api(office, 'post', `/api/jobs/${jobId}/options`, {
+    name: 'Quiet comfort',
+    design: {
+      zones: [{ key: 'z1', name: 'Main room', roomIds: [rooms[0]?.id ?? ''], indoorUnitKey: 'TSL-S12H-W' }],
+      systems: [
+        {
+          key: 's1',
+          name: 'Main system',
+          outdoorUnitKey: 'TSL-S12H-O',
+          circuits: [{ zoneKey: 'z1', lengthFt: 25 }],
+          electrical: { circuitLengthFt: 40 },
+        },
+      ],
+    },
+    pricing: { deposit: { kind: 'percent', value: 10 } },
+  });
+  await api(office, 'post', `/api/jobs/${jobId}/ready`, {
+    sizingOverride: { reason: 'The family wants the main room done first.' },
+  });
+  await api(office, 'post', `/api/jobs/${jobId}/proposal/versions`);
+  const to = `buyer-${Date.now()}@example.com`;
+  await api(office, 'post', `/api/jobs/${jobId}/proposal/links`, { to });
+  const mail = await until('the proposal e-mail', async () => e.smtp.messages.find((m) => m.to.includes(to)));
+  const link = new RegExp(`https?://\\S+${PROPOSAL_LINK_OPEN_PATH}\\?t=[A-Za-z0-9_-]{43}`).exec(mail.text)?.[0];
+  if (!link) throw new Error(`no proposal link in: ${mail.text}`);
+  return { jobId, path: new URL(link).pathname + new URL(link).search };
+}
+
+/** Consent and a typed signature through the signing API, in the customer's session (its PDF must be ready first). */
+async function signAsCustomer(phone: Page, proposalId: string) {
+  type Signing = {
+    version: { number: number; pdfReady: boolean };
+    consent: { sha256: string };
+    statement: { sha256: string } | null;
+    option: { position: number } | null;
+    signerDefaults: { name: string; email: string };
+  };
+  const state = await until('the proposal PDF', async () => {
+    const s = (await api(phone, 'get', `/api/proposals/${proposalId}/signing`)) as unknown as Signing;
+    return s.version.pdfReady && s.statement ? s : undefined;
+  });
+  await api(phone, 'post', `/api/proposals/${proposalId}/consent`, {
+    versionNumber: state.version.number,
+    disclosureSha256: state.consent.sha256,
+  });
+  await api(phone, 'post', `/api/proposals/${proposalId}/signature`, {
+    method: 'typed',
+    versionNumber: state.version.number,
+    optionPosition: state.option?.position ?? 1,
+    statementSha256: state.statement?.sha256 ?? '',
+    signerName: state.signerDefaults.name,
+    signerEmail: state.signerDefaults.email,
+    typedName: state.signerDefaults.name,
+  });
+}
+
+const afterSigning = async (page: Page, proposalId: string) =>
+  (await api(page, 'get', `/api/proposals/${proposalId}/after-signing`)) as unknown as AfterSigningRecord;
+
+// The signing API (issue 14's e-signature slice) lands on its own; until its routes exist this journey cannot sign.
+const signingBuilt = existsSync('server/src/modules/signing/signing.routes.ts');
+
+describe.skipIf(!signingBuilt)('after the signature, on the phone', () => {
+  beforeAll(async () => {
+    e = await startE2E();
+  });
+  afterAll(async () => e?.close());
+
+  it('pays the deposit through the payment service (a declined card first), then cancels the next visit and sees the refund', async () => {
+    const office = await e.newPage(DESKTOP);
+    const estimator = account('estimator');
+    await signIn(office.page, estimator.email, estimator.password);
+    await office.page.getByTestId('user-name').first().waitFor();
+    const { jobId, path } = await sentProposal(office.page);
+
+    const phone = await e.newPage(PHONE);
+    await phone.page.goto(path);
+    await phone.page.getByRole('heading', { name: /^Your proposal,/ }).waitFor();
+    const proposalId = new URL(phone.page.url()).pathname.split('/')[2] ?? '';
+    await phone.page.getByRole('button', { name: 'Choose Quiet comfort' }).click();
+    await phone.page.getByRole('heading', { name: /^You chose Quiet comfort/ }).waitFor();
+    await signAsCustomer(phone.page, proposalId);
+    const due = (await afterSigning(phone.page, proposalId)).deposit.amountCents;
+    expect(due).toBeGreaterThan(0);
+    const amount = formatMoney(due);
+
+    // The deposit step, after a reload (as the customer comes back to the page once signed).
+    await phone.page.reload();
+    const pay = phone.page.getByRole('button', { name: `Pay ${amount}` });
+    await pay.waitFor();
+    await phone.page.getByRole('heading', { name: `Pay the deposit of ${amount}` }).waitFor();
+    await phone.page.getByText('Test mode — no real money moves').waitFor();
+    await pay.scrollIntoViewIfNeeded();
+    await expectFitsWidth(phone.page);
+    await phone.page.screenshot({ path: `${SHOTS}/customer-deposit-375.png`, fullPage: true });
+    await expectNoSeriousViolations(phone.page);
+
+    // A declined test card: said plainly, nothing paid, and the step stays to try again.
+    await phone.page.getByRole('radio', { name: /Test card that is declined/ }).check();
+    await pay.click();
+    await phone.page.getByText('The payment did not go through').waitFor();
+    await phone.page.screenshot({ path: `${SHOTS}/customer-deposit-declined-375.png`, fullPage: true });
+    await expectNoSeriousViolations(phone.page);
+    expect((await afterSigning(phone.page, proposalId)).deposit.state).not.toBe('succeeded');
+
+    // The card that pays: "Deposit paid" once the server has the service's webhook.
+    await phone.page.getByRole('radio', { name: /Test card that pays/ }).check();
+    await pay.click();
+    await phone.page.getByRole('heading', { name: 'Deposit paid' }).waitFor();
+    expect((await afterSigning(phone.page, proposalId)).deposit.state).toBe('succeeded');
+    const intents = [...e.payments.intents.values()].filter((i) => i.metadata.proposalId === proposalId);
+    expect(intents.map((i) => [i.status, i.amount])).toEqual([['succeeded', due]]);
+    await phone.page
+      .getByText(/You may cancel this agreement, without any penalty or obligation, until midnight/)
+      .waitFor();
+    await phone.page.screenshot({ path: `${SHOTS}/customer-deposit-paid-375.png`, fullPage: true });
+    await expectNoSeriousViolations(phone.page);
+    await phone.context.close();
+
+    // The next visit, on the same link's session in a new tab: cancel within the window.
+    const again = await e.newPage(PHONE);
+    await again.page.goto(path);
+    const cancelButton = again.page.getByRole('button', { name: 'Cancel this agreement' });
+    await cancelButton.waitFor();
+    await cancelButton.click();
+    await again.page.getByText('Cancel the agreement you signed?').waitFor();
+    await again.page.getByLabel('Why are you cancelling? (optional)').fill('We found the money is needed elsewhere.');
+    await again.page.screenshot({ path: `${SHOTS}/customer-cancel-confirm-375.png`, fullPage: true });
+    await expectNoSeriousViolations(again.page);
+    await again.page.getByRole('button', { name: 'Yes, cancel the agreement' }).click();
+    await again.page
+      .getByRole('heading', { name: `Cancelled — your deposit of ${amount} has been refunded` })
+      .waitFor();
+    await expectFitsWidth(again.page);
+    await again.page.screenshot({ path: `${SHOTS}/customer-cancelled-refunded-375.png`, fullPage: true });
+    await expectNoSeriousViolations(again.page);
+    const refunds = [...e.payments.refunds.values()].filter((r) => r.payment_intent === intents[0]?.id);
+    expect(refunds.map((r) => r.amount)).toEqual([due]);
+
+    // The office: the job lost "Cancelled by buyer"; the trail in order.
+    const job = (await api(office.page, 'get', `/api/jobs/${jobId}`)).job as {
+      status: string;
+      lostReason: string | null;
+    };
+    expect([job.status, job.lostReason]).toEqual(['lost', 'Cancelled by buyer']);
+    const trail = (await api(office.page, 'get', `/api/jobs/${jobId}/proposal`)).proposal as {
+      events: { kind: string }[];
+    };
+    const money = ['consented', 'signed', 'paid', 'cancelled', 'refunded'];
+    expect(trail.events.map((x) => x.kind).filter((k) => money.includes(k))).toEqual(money);
+    for (const p of ['/p/:id']) expect([...checkedPages], p).toContain(p);
+    await again.context.close();
+    await office.context.close();
+  });
+});

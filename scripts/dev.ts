@@ -1,5 +1,6 @@
 import { spawn } from 'node:child_process';
 import { loadConfig } from '../server/src/config';
+import { localSeal } from './lib/seal';
 import { startLocalPaymentsFake } from '../server/src/fakes/payments-fake';
 import { startSmtpFake } from '../server/src/fakes/smtp-fake';
 import { startServer } from '../server/src/server';
@@ -14,7 +15,12 @@ await migrate(url);
 await withOrm(url, async (orm) => {
   if (await isEmpty(orm.em.fork())) await seedDemo(orm.em.fork());
 });
-const config = loadConfig({ ...process.env, DATABASE_URL: url, CLIENT_DIST: '.data/no-client' });
+const config = loadConfig({
+  ...process.env,
+  ...(await localSeal(process.env)),
+  DATABASE_URL: url,
+  CLIENT_DIST: '.data/no-client',
+});
 const smtp = await startSmtpFake({ port: config.SMTP_PORT, dir: '.data/outbox' });
 const paymentsFake = await startLocalPaymentsFake(config);
 const running = await startServer(config);

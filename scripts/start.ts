@@ -1,4 +1,5 @@
 import { loadConfig } from '../server/src/config';
+import { localSeal } from './lib/seal';
 import { startLocalPaymentsFake } from '../server/src/fakes/payments-fake';
 import { startSmtpFake } from '../server/src/fakes/smtp-fake';
 import { startServer } from '../server/src/server';
@@ -22,7 +23,7 @@ await withOrm(databaseUrl, async (orm) => {
 });
 await buildClientIfStale();
 
-const config = loadConfig({ ...env, DATABASE_URL: env.DATABASE_URL ?? databaseUrl });
+const config = loadConfig({ ...env, ...(await localSeal(env)), DATABASE_URL: env.DATABASE_URL ?? databaseUrl });
 const smtp = await startSmtpFake({ port: config.SMTP_PORT, dir: '.data/outbox' });
 const paymentsFake = await startLocalPaymentsFake(config);
 const running = await startServer(config);

@@ -1,4 +1,5 @@
 import { loadConfig } from '../server/src/config';
+import { localSeal } from './lib/seal';
 import { startWorker } from '../server/src/worker';
 import { DEMO, startCluster } from './lib/stack';
 import { log } from './lib/system';
@@ -7,7 +8,7 @@ import { log } from './lib/system';
 // local demo cluster. Run the server with QUEUE_WORKERS=off beside it (README, "Past one machine").
 const env = { ...process.env };
 const started = env.DATABASE_URL ? undefined : await startCluster(DEMO);
-const config = loadConfig({ ...env, DATABASE_URL: env.DATABASE_URL ?? started?.url });
+const config = loadConfig({ ...env, ...(await localSeal(env)), DATABASE_URL: env.DATABASE_URL ?? started?.url });
 const running = await startWorker(config);
 log(`worker running (${config.QUEUE_CONCURRENCY} at a time); Ctrl-C stops it.`);
 

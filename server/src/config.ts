@@ -42,6 +42,12 @@ const schema = z.object({
   /** Sends the SDK somewhere else (e.g. a mock server); empty with a key means the real service. */
   PAYMENTS_API_URL: z.string().url().optional(),
   STORAGE_DIR: z.string().default('.data/uploads'),
+  /**
+   * The PKCS#12 file (certificate and key) that seals signed proposals' PDFs. Unset: npm start, npm run dev,
+   * the worker script and the tests make a self-signed one under .data/seal (services/seal-certificate.ts).
+   */
+  SEAL_P12_FILE: z.string().optional(),
+  SEAL_P12_PASSPHRASE: z.string().default(''),
   UPLOAD_MAX_BYTES: z.coerce
     .number()
     .int()

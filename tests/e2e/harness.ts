@@ -6,6 +6,7 @@ import { startPaymentsFake, type PaymentsFake } from '../../server/src/fakes/pay
 import { startSmtpFake, type SmtpFake } from '../../server/src/fakes/smtp-fake';
 import { LOCAL_WEBHOOK_SECRET } from '../../server/src/config';
 import { startServer, type Running } from '../../server/src/server';
+import { ensureLocalSealCertificate, LOCAL_SEAL_PASSPHRASE } from '../../server/src/services/seal-certificate';
 import { testDatabaseUrl } from '../helpers/test-app';
 
 export const PHONE = { width: 375, height: 812 } as const;
@@ -44,6 +45,8 @@ export async function startE2E(): Promise<E2E> {
     LOG_LEVEL: 'silent',
     DEV_OUTBOX: 'on',
     LOGIN_MAX_PER_IP: '10000',
+    SEAL_P12_FILE: await ensureLocalSealCertificate(),
+    SEAL_P12_PASSPHRASE: LOCAL_SEAL_PASSPHRASE,
     // Its own task names: another e2e file's server never sends this one's e-mail.
     QUEUE_NAMESPACE: `e2e-${randomUUID().slice(0, 8)}`,
   });

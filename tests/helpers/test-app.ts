@@ -16,6 +16,7 @@ import { createSmtpMailer } from '../../server/src/services/mailer';
 import { createQueue } from '../../server/src/services/queue';
 import { systemClock, type Clock, type Services } from '../../server/src/services/services';
 import { createLocalDiskStorage } from '../../server/src/services/storage';
+import { ensureLocalSealCertificate, LOCAL_SEAL_PASSPHRASE } from '../../server/src/services/seal-certificate';
 import { abandonedHandlers, taskHandlers } from '../../server/src/tasks/handlers';
 
 export interface TestApp {
@@ -47,6 +48,9 @@ export async function buildTestApp(
       NODE_ENV: 'production',
       DATABASE_URL: url,
       SESSION_SECRET: 'test-secret-test-secret-test-secret-0123',
+      // The self-signed sealing certificate the tests share (made once under .data/seal).
+      SEAL_P12_FILE: await ensureLocalSealCertificate(),
+      SEAL_P12_PASSPHRASE: LOCAL_SEAL_PASSPHRASE,
       APP_ORIGIN: 'https://gaugeline.test',
       LOG_LEVEL: 'silent',
     },
@@ -60,7 +64,7 @@ export async function buildTestApp(
   const paymentsConfig = { ...config, PAYMENTS_SECRET_KEY: undefined, PAYMENTS_API_URL: paymentsFake.url };
   // Each test app stores uploads in its own temporary folder, never in the developer's .data/uploads.
   const storage = createLocalDiskStorage(mkdtempSync(join(tmpdir(), 'gaugeline-uploads-')));
-  const base: Omit<Services, 'queue'> = {
+  const base: Omit<Services, 'queue'> & { queue?: Services['queue'] } = {
     orm,
     sessionPool,
     config: { ...config, PAYMENTS_API_URL: paymentsFake.url, devOutbox: true },
@@ -80,6 +84,7 @@ export async function buildTestApp(
     concurrency: 1,
     pollIntervalMs: 200,
   });
+  base.queue = queue; // the handlers read it when a task queues more work
   // QUEUE_WORKERS: 'off' in the overrides: the app only adds jobs (a worker process runs them).
   if (config.QUEUE_WORKERS === 'on') await queue.start();
   const services: Services = { ...base, queue };

@@ -38,8 +38,11 @@ export const passwordResetBody = z.strictObject(passwordResetFields);
 export const RESET_REQUESTED_MESSAGE = `If an account uses that address, an e-mail with a link to set a new password is on its way. The link works for ${RESET_LINK_MINUTES} minutes.`;
 export const RESET_LINK_INVALID = 'This link has expired or has already been used. Ask for a new one.';
 
-/** 'password-reset' and 'proposal-link' are stored without a body: their one-time link is made as they are sent. */
-export const MESSAGE_KINDS = ['new-user', 'password-changed', 'password-reset', 'proposal-link'] as const;
+/**
+ * 'password-reset' and 'proposal-link' are stored without a body: their one-time link is made as they are sent.
+ * 'signed-proposal': the customer's signed, sealed copy of a proposal (attached).
+ */
+export const MESSAGE_KINDS = ['new-user', 'password-changed', 'password-reset', 'proposal-link', 'signed-proposal'] as const;
 export type MessageKind = (typeof MESSAGE_KINDS)[number];
 /** waiting → sent; a failed try → retrying (the queue tries again later) → … → failed after the last try. */
 export const MESSAGE_STATES = ['waiting', 'retrying', 'failed', 'sent'] as const;

@@ -24,3 +24,4 @@ export * from './loss-reasons';
 export * from './proposal-link';
 export * from './after-signing';
 export * from './proposal-details';
+export * from './signing';

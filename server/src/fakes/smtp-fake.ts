@@ -1,6 +1,6 @@
 import { mkdir, readdir, readFile, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
-import { randomUUID } from 'node:crypto';
+import { createHash, randomUUID } from 'node:crypto';
 import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 
@@ -12,6 +12,8 @@ export interface StoredMail {
   subject: string;
   text: string;
   html: string | null;
+  /** Files sent with it: name, type, size and SHA-256 of the bytes (the bytes are not kept). */
+  attachments?: { filename: string; contentType: string; size: number; sha256: string }[];
 }
 
 export interface Outbox {
@@ -63,6 +65,12 @@ export async function startSmtpFake(opts: { port: number; host?: string; dir?: s
             subject: parsed.subject ?? '',
             text: parsed.text ?? '',
             html: typeof parsed.html === 'string' ? parsed.html : null,
+            attachments: parsed.attachments.map((a) => ({
+              filename: a.filename ?? '',
+              contentType: a.contentType,
+              size: a.content.length,
+              sha256: createHash('sha256').update(a.content).digest('hex'),
+            })),
           };
           messages.push(mail);
           if (opts.dir)

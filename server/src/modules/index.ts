@@ -28,6 +28,7 @@ import { paymentRoutes } from './payments/payments.routes';
 import { proposalRoutes } from './proposals/proposal.routes';
 import { customerProposalRoutes, linkOpenRoutes, proposalLinkRoutes } from './proposal-links/proposal-link.routes';
 import { customerAfterSigningRoutes, officeCancellationRoutes } from './cancellations/cancellation.routes';
+import { officeSigningRoutes, signingRoutes } from './signing/signing.routes';
 
 /** A module's routes under /api<prefix> (tests add their own through createApp's extras). */
 export type ModuleMount = readonly [prefix: string, register: (api: ApiRouter) => void];
@@ -84,10 +85,12 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/jobs', proposalRoutes);
   mount('/jobs', proposalLinkRoutes);
   mount('/jobs', officeCancellationRoutes);
+  mount('/jobs', officeSigningRoutes);
   mount('/company-data', companyDataRoutes);
   mount('/proposals', paymentRoutes);
   mount('/proposals', customerProposalRoutes);
   mount('/proposals', customerAfterSigningRoutes);
+  mount('/proposals', signingRoutes);
   const linkLimiter = createLinkOpenLimiter(services.config, services.sessionPool);
   mount('/links', (api) => linkOpenRoutes(api, linkLimiter));
   for (const [prefix, register] of extra) mount(prefix, register);

@@ -5,6 +5,7 @@ export interface MailMessage {
   subject: string;
   text: string;
   html?: string;
+  attachments?: { filename: string; content: Buffer; contentType: string }[];
 }
 
 /** E-mail goes out through SMTP; locally and in tests that SMTP server is the fake in server/src/fakes. */
@@ -23,7 +24,14 @@ export function createSmtpMailer(opts: { host: string; port: number; from: strin
   });
   return {
     async send(m) {
-      await transport.sendMail({ from: opts.from, to: m.to, subject: m.subject, text: m.text, html: m.html });
+      await transport.sendMail({
+        from: opts.from,
+        to: m.to,
+        subject: m.subject,
+        text: m.text,
+        html: m.html,
+        attachments: m.attachments,
+      });
     },
     close() {
       transport.close();

@@ -3,6 +3,7 @@ import { sendAbandoned, sendMessage, type SendDeps } from '../modules/mail/mail.
 import { composeProposalLinkMessage, recordProposalSendFailed } from '../modules/proposal-links/proposal-link.service';
 import { refundCancelledDeposit } from '../modules/cancellations/cancellation.service';
 import { renderAbandoned, renderVersionPdf } from '../modules/proposals/proposal-pdf.service';
+import { sealSignedProposal } from '../modules/signing/signed-pdf.service';
 import type { Services } from '../services/services';
 import type { AbandonedHandlers, TaskHandlers } from './kinds';
 
@@ -12,8 +13,16 @@ const mailFailed =
   (em, message) =>
     message.kind === 'proposal-link' ? recordProposalSendFailed(em, message, services.clock.now()) : Promise.resolve();
 
-/** The handler of each task kind; each try works in an EntityManager of its own. */
-export function taskHandlers(services: Omit<Services, 'queue'>): TaskHandlers {
+/**
+ * The handler of each task kind; each try works in an EntityManager of its own. The handlers are made
+ * before the queue they run in, so `services.queue` is read when a task runs (a task that queues more
+ * work, as sealing a signed proposal queues its e-mail); the caller sets it on the same object.
+ */
+export function taskHandlers(services: Omit<Services, 'queue'> & { queue?: Services['queue'] }): TaskHandlers {
+  const queue = () => {
+    if (!services.queue) throw new Error('The task handlers were given no queue.');
+    return services.queue;
+  };
   return {
     'send-email': async ({ messageId }, run) => {
       const em = services.orm.em.fork();
@@ -22,6 +31,7 @@ export function taskHandlers(services: Omit<Services, 'queue'>): TaskHandlers {
         {
           mailer: services.mailer,
           clock: services.clock,
+          storage: services.storage,
           // Only messages carrying a one-time link are stored without a body: the link is made as they go out.
           compose: async (tx, message) => {
             const deps = { clock: services.clock, appOrigin: services.config.APP_ORIGIN };
@@ -42,6 +52,8 @@ export function taskHandlers(services: Omit<Services, 'queue'>): TaskHandlers {
     },
     'render-proposal-pdf': ({ versionId }, run) => renderVersionPdf(services, versionId, run),
     'refund-deposit': ({ paymentId }) => refundCancelledDeposit(services.orm.em.fork(), services.payments, paymentId),
+    'seal-signed-proposal': ({ signatureId }, run) =>
+      sealSignedProposal({ ...services, queue: queue() }, signatureId, run),
   };
 }
 
@@ -52,5 +64,6 @@ export function abandonedHandlers(services: Pick<Services, 'orm' | 'clock'>): Ab
       sendAbandoned(services.orm.em.fork(), { failed: mailFailed(services) }, messageId, run),
     'render-proposal-pdf': ({ versionId }, run) => renderAbandoned(services, versionId, run),
     // refund-deposit writes nothing while it runs: the next try takes it up (the refund carries an idempotency key).
+    // seal-signed-proposal neither: its row and e-mail are written in one transaction at the end of a try.
   };
 }

@@ -24,6 +24,11 @@ export const TASKS = {
     payload: z.strictObject({ paymentId: z.uuid() }),
     maxAttempts: 10,
   },
+  /** Makes a signed proposal's sealed copy (signature, signing record, PDF seal), stores and e-mails it (modules/signing). */
+  'seal-signed-proposal': {
+    payload: z.strictObject({ signatureId: z.uuid() }),
+    maxAttempts: 10,
+  },
 } as const;
 
 export type TaskKind = keyof typeof TASKS;

@@ -3,6 +3,7 @@ import { ConflictError, NotFoundError } from '../../lib/errors';
 import type { ServiceContext } from '../../lib/service-context';
 import type { Mailer } from '../../services/mailer';
 import type { Queue } from '../../services/queue';
+import type { Storage } from '../../services/storage';
 import type { Clock } from '../../services/services';
 import type { TaskRun } from '../../tasks/kinds';
 import { CompanySchema } from '../companies/company.entity';
@@ -18,6 +19,8 @@ export interface NewMessage {
   subject: string;
   /** Null only for kinds whose body is made when sent (password-reset). */
   text: string | null;
+  /** A stored file to send with it (the signed proposal's PDF): its storage key and file name. */
+  attachment?: { key: string; name: string };
 }
 
 /** "Try again" also needs the job queue. */
@@ -40,6 +43,8 @@ export async function queueMessage(em: EntityManager, queue: Queue, m: NewMessag
       toAddress: m.to,
       subject: m.subject,
       bodyText: m.text,
+      attachmentKey: m.attachment?.key ?? null,
+      attachmentName: m.attachment?.name ?? null,
       state: 'waiting',
       attempts: 0,
     });
@@ -80,6 +85,8 @@ export interface NotSent {
 export interface SendDeps {
   mailer: Mailer;
   clock: Clock;
+  /** Where a message's attachment is kept. */
+  storage: Storage;
   /**
    * Makes the body of a message stored without one (password-reset, proposal-link), inside the sending
    * transaction, or says why it is not to be sent.
@@ -103,7 +110,13 @@ export async function sendMessage(em: EntityManager, deps: SendDeps, messageId: 
     const outcome = await em.transactional(async (tx) => {
       const text = message.bodyText ?? (await deps.compose(tx, message));
       if (typeof text !== 'string') return text;
-      await deps.mailer.send({ to: message.toAddress, subject: message.subject, text });
+      const attachments = [];
+      if (message.attachmentKey && message.attachmentName) {
+        const content = await deps.storage.get(message.attachmentKey);
+        if (content === null) throw new Error(`The attached file ${message.attachmentName} is missing from storage.`);
+        attachments.push({ filename: message.attachmentName, content, contentType: 'application/pdf' });
+      }
+      await deps.mailer.send({ to: message.toAddress, subject: message.subject, text, attachments });
       return null;
     });
     message.state = outcome ? 'failed' : 'sent';

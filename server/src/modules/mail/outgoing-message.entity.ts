@@ -20,6 +20,9 @@ export const OutgoingMessageSchema = defineEntity({
     toAddress: p.string().length(254),
     subject: p.string().length(300),
     bodyText: p.text().nullable(),
+    /** A stored file sent with the message (services/storage key) and the file name it goes out under. */
+    attachmentKey: p.string().length(300).nullable(),
+    attachmentName: p.string().length(120).nullable(),
     state: p.enum([...MESSAGE_STATES]).default('waiting'),
     attempts: p.integer().default(0),
     lastError: p.string().length(500).nullable(),

@@ -6,6 +6,7 @@ import { moveJobForProposal } from '../jobs/job-moves';
 import type { DepositIntent, PaymentEvent, Payments } from '../../services/payments';
 import type { Queue } from '../../services/queue';
 import type { PaymentState } from './payment.entity';
+import { isVersionSigned } from '../signing/signing.service';
 
 /**
  * The deposit's server side: the payment row for a version's intent, and the webhooks that move it.
@@ -47,11 +48,10 @@ export async function depositDue(em: EntityManager, companyId: string, proposalI
 
 /**
  * Whether the version has been signed by the customer: payment comes after the signature (pay before
- * signing → 409). The e-signature slice of issue 14 answers this from its insert-only signature table;
- * until that table exists no version is signed.
+ * signing → 409). Answered from the insert-only signature table (modules/signing).
  */
-export async function versionIsSigned(_em: EntityManager, _companyId: string, _versionId: string): Promise<boolean> {
-  return false;
+export async function versionIsSigned(em: EntityManager, companyId: string, versionId: string): Promise<boolean> {
+  return isVersionSigned(em, companyId, versionId);
 }
 
 export interface PaymentRow {

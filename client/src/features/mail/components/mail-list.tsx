@@ -13,6 +13,7 @@ const KIND_LABEL: Record<Message['kind'], string> = {
   'password-changed': 'Password changed',
   'password-reset': 'Password reset link',
   'proposal-link': 'Proposal sent to a customer',
+  'signed-proposal': 'Signed proposal copy',
 };
 
 const STATE: Record<Message['state'], { label: string; className: string }> = {

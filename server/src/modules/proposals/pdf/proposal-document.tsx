@@ -8,6 +8,9 @@ import { LoadsSection } from './loads-section';
 import type { Logo } from './logo';
 import { OptionSection } from './option-section';
 import { ProposalPage, type PageFrameText } from './parts';
+import { AuditPage } from './audit-page';
+import { SignedAcceptance } from './signature-page';
+import type { SignedRecord } from './signed-record';
 
 export interface ProposalDocumentProps {
   readonly snapshot: ProposalSnapshot;
@@ -18,6 +21,8 @@ export interface ProposalDocumentProps {
    * null or absent on an unsigned version, whose notice prints blank lines for them.
    */
   readonly cancellation?: CancellationDates | null;
+  /** The signed copy (modules/signing): the signature on the acceptance page and the signing record after it. */
+  readonly signed?: SignedRecord;
 }
 
 /**
@@ -26,7 +31,13 @@ export interface ProposalDocumentProps {
  * right-to-cancel statement, and the Notice of Cancellation in duplicate (16 CFR 429.1). Everything printed
  * comes from the frozen snapshot, so the same version always prints the same words.
  */
-export function ProposalDocument({ snapshot, versionNumber, logo, cancellation = null }: ProposalDocumentProps) {
+export function ProposalDocument({
+  snapshot,
+  versionNumber,
+  logo,
+  cancellation = null,
+  signed,
+}: ProposalDocumentProps) {
   const customer = line(snapshot.customer.name);
   const notice = noticeForSnapshot(snapshot.company, cancellation);
   const frame: PageFrameText = {
@@ -61,13 +72,22 @@ export function ProposalDocument({ snapshot, versionNumber, logo, cancellation =
         <CautionsSection cautions={snapshot.cautions} />
       </ProposalPage>
       <ProposalPage frame={frame} bookmark="Acceptance">
-        <SignaturePage snapshot={snapshot} versionNumber={versionNumber} notice={notice} />
+        {signed ? (
+          <SignedAcceptance snapshot={snapshot} versionNumber={versionNumber} signed={signed} notice={notice} />
+        ) : (
+          <SignaturePage snapshot={snapshot} versionNumber={versionNumber} notice={notice} />
+        )}
       </ProposalPage>
       {([1, 2] as const).map((copy) => (
         <ProposalPage key={`notice-${copy}`} frame={frame} bookmark={`Notice of cancellation, copy ${copy}`}>
           <NoticeOfCancellation notice={notice} copy={copy} companyName={snapshot.company.name} />
         </ProposalPage>
       ))}
+      {signed ? (
+        <ProposalPage frame={frame} bookmark="Signing record">
+          <AuditPage signed={signed} versionNumber={versionNumber} />
+        </ProposalPage>
+      ) : null}
     </Document>
   );
 }

@@ -1,0 +1,1 @@
+export { SigningSteps } from './signing-steps';

@@ -35,7 +35,9 @@ export async function checkSignatureImage(dataUrl: string): Promise<{ png: Buffe
   const { width = 0, height = 0 } = meta;
   if (meta.format !== 'png') refuse('Send the drawing as a PNG image.');
   if (width < 40 || height < 20 || width > SIGNATURE_IMAGE_MAX_PX.width || height > SIGNATURE_IMAGE_MAX_PX.height)
-    refuse(`The drawing must be between 40 × 20 and ${SIGNATURE_IMAGE_MAX_PX.width} × ${SIGNATURE_IMAGE_MAX_PX.height} pixels.`);
+    refuse(
+      `The drawing must be between 40 × 20 and ${SIGNATURE_IMAGE_MAX_PX.width} × ${SIGNATURE_IMAGE_MAX_PX.height} pixels.`,
+    );
   // Blank: fully transparent (the pad's background), or one flat colour everywhere.
   const alpha = meta.hasAlpha ? stats.channels[stats.channels.length - 1] : undefined;
   const flat = stats.channels.every((c) => c.min === c.max);

@@ -48,7 +48,14 @@ interface CurrentVersion {
 /** The proposal's current (not superseded) version; `lock` holds it until the transaction ends. */
 async function currentVersion(em: EntityManager, grant: LinkGrant, lock = false): Promise<CurrentVersion> {
   const rows = await em.execute<
-    Array<{ id: string; number: number; snapshot: unknown; snapshot_sha256: string; pdf_sha256: string | null; job_id: string }>
+    Array<{
+      id: string;
+      number: number;
+      snapshot: unknown;
+      snapshot_sha256: string;
+      pdf_sha256: string | null;
+      job_id: string;
+    }>
   >(
     `select v."id", v."number", v."snapshot", v."snapshot_sha256", v."pdf_sha256", p."job_id"
        from "proposal_version" v join "proposal" p on p."id" = v."proposal_id"
@@ -213,9 +220,12 @@ function assertCurrent(version: CurrentVersion, shown: number): void {
 
 async function assertNotSigned(em: EntityManager, grant: LinkGrant, version: CurrentVersion): Promise<void> {
   if (await signatureOfVersion(em, grant.companyId, version.id))
-    throw new ConflictError(`Version ${version.number} of this proposal is already signed. It cannot be signed again.`, {
-      reason: 'signed',
-    });
+    throw new ConflictError(
+      `Version ${version.number} of this proposal is already signed. It cannot be signed again.`,
+      {
+        reason: 'signed',
+      },
+    );
 }
 
 export interface SigningDeps {
@@ -240,9 +250,12 @@ export async function giveConsent(
     await assertNotSigned(tx, grant, version);
     const disclosure = disclosureOf(version.snapshot);
     if (body.disclosureSha256 !== disclosure.sha256)
-      throw new ConflictError('The consent text changed since the page was opened. Reload the page and read it again.', {
-        reason: 'disclosure-changed',
-      });
+      throw new ConflictError(
+        'The consent text changed since the page was opened. Reload the page and read it again.',
+        {
+          reason: 'disclosure-changed',
+        },
+      );
     const before = await consentOf(tx, grant.companyId, version.id);
     if (before?.sha256 === disclosure.sha256) return;
     tx.create(ProposalEventSchema, {

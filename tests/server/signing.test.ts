@@ -447,6 +447,15 @@ describe('the signed copy', () => {
     await t.services.queue.drain({ timeoutMs: 60_000 });
     const row = (await db.query(`select * from proposal_signed_pdf where signature_id = $1`, [signatureId])).rows[0];
     expect(row).toBeDefined();
+    // Every signature of the file so far (typed ones too) has its sealed copy.
+    const unsealed = await db.query(
+      `select s.id, s.method from proposal_signature s left join proposal_signed_pdf d on d.signature_id = s.id
+        where s.company_id = $1 and d.id is null`,
+      [a.id],
+    );
+    expect(unsealed.rows).toEqual([]);
+    const methods = await db.query(`select distinct method from proposal_signature where company_id = $1`, [a.id]);
+    expect(methods.rows.map((r) => r.method).sort()).toEqual(['drawn', 'typed']);
     const mine = await getBytes(c.get('/signed-pdf'));
     expect(mine.status).toBe(200);
     expect(mine.headers['content-type']).toBe('application/pdf');

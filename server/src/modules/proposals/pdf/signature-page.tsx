@@ -4,6 +4,7 @@ import { CancelStatement } from './cancellation-section';
 import { line, money } from './format';
 import type { SignedRecord } from './signed-record';
 import { utc } from './signed-record';
+import { FONT_WEIGHTS } from './fonts';
 import { COLORS, s } from './styles';
 
 function Tick({ on }: { on: boolean }) {
@@ -97,7 +98,17 @@ export function SignedAcceptance({
               style={{ height: 54, objectFit: 'contain', objectPosition: 'left bottom' }}
             />
           ) : (
-            <Text style={{ fontSize: 20, color: COLORS.ink, fontStyle: 'italic' }}>{line(signed.typedName ?? '')}</Text>
+            <Text
+              style={{
+                fontSize: 18,
+                lineHeight: 1.25,
+                color: COLORS.ink,
+                fontWeight: FONT_WEIGHTS.semibold,
+                paddingTop: 10,
+              }}
+            >
+              {line(signed.typedName ?? '')}
+            </Text>
           )}
         </Filled>
         <Filled label="Date and time (UTC)" width="40%">

@@ -1,5 +1,5 @@
 import { execFileSync } from 'node:child_process';
-import { createHash, randomUUID } from 'node:crypto';
+import { createHash, randomBytes, randomUUID } from 'node:crypto';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -7,9 +7,13 @@ import pg from 'pg';
 import sharp from 'sharp';
 import type request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { z } from 'zod';
-import { disclosureText, esignDisclosure, type ProposalSnapshot, type SigningState } from '@contract';
-import { NO_CONTENT, PUBLIC, type ApiRouter } from '../../server/src/lib/route';
+import {
+  disclosureText,
+  esignDisclosure,
+  PROPOSAL_LINK_OPEN_PATH,
+  type ProposalSnapshot,
+  type SigningState,
+} from '@contract';
 import { versionIsSigned } from '../../server/src/modules/payments/payments.service';
 import { renderProposalPdf } from '../../server/src/modules/proposals/pdf/render-proposal';
 import {
@@ -42,22 +46,8 @@ let office: Session;
 /** One rendered proposal PDF shared by the versions (its bytes stored under each version's key). */
 let pdf: Buffer;
 
-/** Stands in for the route a proposal link opens (the sending slice's): a grant for the proposal. */
-function linkOpener(api: ApiRouter): void {
-  api.route({
-    method: 'post',
-    path: '/open/:companyId/:proposalId',
-    policy: PUBLIC,
-    params: z.strictObject({ companyId: z.uuid(), proposalId: z.uuid() }),
-    response: NO_CONTENT,
-    handler: async ({ req, params }) => {
-      req.session.link = { ...params, expiresAt: Date.now() + 10 * 60_000 };
-    },
-  });
-}
-
 beforeAll(async () => {
-  t = await buildTestApp({ QUEUE_WORKERS: 'off' }, undefined, { modules: [['/signing-test', linkOpener]] });
+  t = await buildTestApp({ QUEUE_WORKERS: 'off' });
   a = await makeCompany(t.orm.em.fork(), 'Signing');
   estimator = await login(t.app, a.users.estimator.email);
   office = await login(t.app, a.users.owner.email);
@@ -127,37 +117,46 @@ async function proposal(opts: { deposit?: boolean; customer?: string } = {}): Pr
   return { jobId: job.id, proposalId, versionId, snapshot };
 }
 
-/** The option choice as the sending slice records it (an option-chosen event with data.position). */
-const choose = (p: Proposal, versionId: string, position: number) =>
-  db.query(
-    `insert into proposal_event (id, company_id, proposal_id, version_id, kind, at, by_customer, data)
-     values ($1, $2, $3, $4, 'option-chosen', now(), true, $5)`,
-    [randomUUID(), a.id, p.proposalId, versionId, JSON.stringify({ position })],
-  );
-
 interface Customer {
   get(path: string): request.Test;
   post(path: string, body: object): request.Test;
+  /** The option choice through the sending slice's route (an option-chosen event with data.position). */
+  choose(position: number): Promise<void>;
+  linkId: string;
+  agent: ReturnType<typeof browserAgent>;
+  csrf: string;
 }
 
-/** A browser holding the proposal's link session. */
-async function customer(p: { proposalId: string }, companyId = a.id): Promise<Customer> {
+/** A browser that opened an e-mailed link for the version (the link made as sending makes it, then opened). */
+async function customer(p: { proposalId: string; versionId: string }): Promise<Customer> {
+  const token = randomBytes(32).toString('base64url');
+  const linkId = randomUUID();
+  await db.query(
+    `insert into proposal_link (id, company_id, proposal_id, version_id, token_sha256, recipient, created_at, expires_at)
+     values ($1, $2, $3, $4, $5, 'marisol@example.com', now(), now() + interval '7 days')`,
+    [linkId, a.id, p.proposalId, p.versionId, sha256(token)],
+  );
   const agent = browserAgent(t.app);
+  const opened = await agent.get(`${PROPOSAL_LINK_OPEN_PATH}?t=${token}`).set(HTTPS);
+  expect(opened.status).toBe(303);
   const csrf = await csrfOf(agent);
-  const opened = await agent
-    .post(`/api/signing-test/open/${companyId}/${p.proposalId}`)
-    .set(HTTPS)
-    .set('X-CSRF-Token', csrf);
-  expect(opened.status).toBe(204);
+  const post = (path: string, body: object) =>
+    agent
+      .post(`/api/proposals/${p.proposalId}${path}`)
+      .set(HTTPS)
+      .set('X-CSRF-Token', csrf)
+      .set('User-Agent', 'SigningTest/1.0 (phone)')
+      .send(body);
   return {
+    linkId,
+    agent,
+    csrf,
     get: (path) => agent.get(`/api/proposals/${p.proposalId}${path}`).set(HTTPS),
-    post: (path, body) =>
-      agent
-        .post(`/api/proposals/${p.proposalId}${path}`)
-        .set(HTTPS)
-        .set('X-CSRF-Token', csrf)
-        .set('User-Agent', 'SigningTest/1.0 (phone)')
-        .send(body),
+    post,
+    async choose(position) {
+      const res = await post('/option', { position });
+      expect(res.status, JSON.stringify(res.body)).toBe(200);
+    },
   };
 }
 
@@ -242,7 +241,7 @@ describe('consent, then signature (the customer, through a proposal link)', () =
     const noOption = await c.post('/signature', typed(await stateOf(c)));
     expect(noOption.status).toBe(409);
     expect(noOption.body.detail).toMatch(/Choose one of the options/);
-    await choose(p, p.versionId, 2);
+    await c.choose(2);
     const state = await stateOf(c);
     expect(state.statement?.text).toMatch(/I accept option 2, .* of proposal version 1 from Alder Bay Comfort Co\./);
     const other = await c.post('/signature', typed(state, { optionPosition: 1 }));
@@ -259,7 +258,7 @@ describe('consent, then signature (the customer, through a proposal link)', () =
     const p = await proposal({ deposit: false });
     const c = await customer(p);
     await consent(c);
-    await choose(p, p.versionId, 1);
+    await c.choose(1);
     const state = await stateOf(c);
     const res = await c.post('/signature', typed(state));
     expect(res.status).toBe(201);
@@ -281,7 +280,7 @@ describe('consent, then signature (the customer, through a proposal link)', () =
       image_key: null,
     });
     const kinds = (await eventsOf(p.proposalId)).map((e) => e.kind);
-    expect(kinds).toEqual(['consented', 'option-chosen', 'signed']);
+    expect(kinds).toEqual(['opened', 'consented', 'option-chosen', 'signed']);
     const signed = (await eventsOf(p.proposalId)).find((e) => e.kind === 'signed')!;
     expect(signed.data).toMatchObject({ signatureId: rows[0].id, signerName: 'Marisol Quenby' });
     expect(await versionIsSigned(t.orm.em.fork(), a.id, p.versionId)).toBe(true);
@@ -298,33 +297,57 @@ describe('consent, then signature (the customer, through a proposal link)', () =
     const p = await proposal();
     const c = await customer(p);
     await consent(c);
-    await choose(p, p.versionId, 3);
+    await c.choose(3);
     const before = await jobStatus(p.jobId);
     expect((await c.post('/signature', typed(await stateOf(c)))).status).toBe(201);
     expect(await jobStatus(p.jobId)).toBe(before);
   });
 
-  it('a superseded version cannot be signed: 409 naming the current version', async () => {
+  it('a superseded version cannot be signed: its link ends (410, why and whom to contact); a page left open on it is 409', async () => {
     const p = await proposal();
     const c = await customer(p);
     await consent(c);
-    await choose(p, p.versionId, 1);
+    await c.choose(1);
     const seen = await stateOf(c);
     const v2 = await addVersion(p, 2, p.snapshot);
-    const res = await c.post('/signature', typed(seen));
-    expect(res.status).toBe(409);
-    expect(res.body.detail).toMatch(/replaced by version 2/);
+    const ended = await c.post('/signature', typed(seen));
+    expect(ended.status).toBe(410);
+    expect(isProblem(ended)).toBe(true);
+    expect(ended.body).toMatchObject({ reason: 'superseded', contact: { name: 'Alder Bay Comfort Co.' } });
+    // A link to version 2, with the page still showing version 1.
+    const c2 = await customer({ proposalId: p.proposalId, versionId: v2 });
+    expect((await stateOf(c2)).consent.givenAt).toBeNull(); // version 2 needs its own consent
+    await consent(c2, 2);
+    await c2.choose(1);
+    const stale = await c2.post('/signature', typed(seen));
+    expect(stale.status).toBe(409);
+    expect(stale.body.detail).toMatch(/replaced by version 2/);
+    expect(stale.body.reason).toBe('superseded');
     expect(await versionIsSigned(t.orm.em.fork(), a.id, p.versionId)).toBe(false);
     expect(await versionIsSigned(t.orm.em.fork(), a.id, v2)).toBe(false);
-    // Version 2 needs its own consent.
-    expect((await stateOf(c)).consent.givenAt).toBeNull();
+  });
+
+  it('a revoked link can neither consent nor sign (410), and nothing is written', async () => {
+    const p = await proposal();
+    const c = await customer(p);
+    await c.choose(1);
+    const state = await stateOf(c);
+    await db.query(`update proposal_link set revoked_at = now() where id = $1`, [c.linkId]);
+    const consentRes = await c.post('/consent', { versionNumber: 1, disclosureSha256: state.consent.sha256 });
+    expect(consentRes.status).toBe(410);
+    expect(consentRes.body.reason).toBe('revoked');
+    expect((await c.post('/signature', typed(state))).status).toBe(410);
+    expect((await c.get('/signing')).status).toBe(410);
+    const kinds = (await eventsOf(p.proposalId)).map((e) => e.kind);
+    expect(kinds).not.toContain('consented');
+    expect(kinds).not.toContain('signed');
   });
 
   it('two signatures sent at once: exactly one is taken', async () => {
     const p = await proposal();
     const c = await customer(p);
     await consent(c);
-    await choose(p, p.versionId, 1);
+    await c.choose(1);
     const state = await stateOf(c);
     const answers = await Promise.all([c.post('/signature', typed(state)), c.post('/signature', typed(state))]);
     expect(answers.map((r) => r.status).sort()).toEqual([201, 409]);
@@ -337,7 +360,7 @@ describe('consent, then signature (the customer, through a proposal link)', () =
     const p = await proposal();
     const c = await customer(p);
     await consent(c);
-    await choose(p, p.versionId, 1);
+    await c.choose(1);
     const state = await stateOf(c);
     const drawn = (image: string) => ({ ...typed(state), typedName: undefined, method: 'drawn', image });
     const notPng = `data:image/png;base64,${Buffer.from('GIF89a not a png at all').toString('base64')}`;
@@ -374,13 +397,11 @@ describe('consent, then signature (the customer, through a proposal link)', () =
   it("another proposal's session cannot sign this one (404), and a staff session is 401", async () => {
     const p = await proposal();
     const q = await proposal();
-    const agentForQ = browserAgent(t.app);
-    const csrf = await csrfOf(agentForQ);
-    await agentForQ.post(`/api/signing-test/open/${a.id}/${q.proposalId}`).set(HTTPS).set('X-CSRF-Token', csrf);
-    const cross = await agentForQ
+    const cq = await customer(q);
+    const cross = await cq.agent
       .post(`/api/proposals/${p.proposalId}/consent`)
       .set(HTTPS)
-      .set('X-CSRF-Token', csrf)
+      .set('X-CSRF-Token', cq.csrf)
       .send({ versionNumber: 1, disclosureSha256: 'a'.repeat(64) });
     expect(cross.status).toBe(404);
     const staff = await estimator.agent.get(`/api/proposals/${p.proposalId}/signing`).set(HTTPS);
@@ -393,7 +414,7 @@ describe('the signature table is insert-only in PostgreSQL', () => {
     const p = await proposal();
     const c = await customer(p);
     await consent(c);
-    await choose(p, p.versionId, 1);
+    await c.choose(1);
     expect((await c.post('/signature', typed(await stateOf(c)))).status).toBe(201);
     const before = (await db.query(`select * from proposal_signature where proposal_id = $1`, [p.proposalId])).rows[0];
     await expect(
@@ -425,7 +446,7 @@ describe('the signed copy', () => {
     p = await proposal({ customer: 'Ezekiel Thornbury' });
     c = await customer(p);
     await consent(c);
-    await choose(p, p.versionId, 2);
+    await c.choose(2);
     const state = await stateOf(c);
     const res = await c.post('/signature', {
       method: 'drawn',

@@ -42,7 +42,13 @@ export const RESET_LINK_INVALID = 'This link has expired or has already been use
  * 'password-reset' and 'proposal-link' are stored without a body: their one-time link is made as they are sent.
  * 'signed-proposal': the customer's signed, sealed copy of a proposal (attached).
  */
-export const MESSAGE_KINDS = ['new-user', 'password-changed', 'password-reset', 'proposal-link', 'signed-proposal'] as const;
+export const MESSAGE_KINDS = [
+  'new-user',
+  'password-changed',
+  'password-reset',
+  'proposal-link',
+  'signed-proposal',
+] as const;
 export type MessageKind = (typeof MESSAGE_KINDS)[number];
 /** waiting → sent; a failed try → retrying (the queue tries again later) → … → failed after the last try. */
 export const MESSAGE_STATES = ['waiting', 'retrying', 'failed', 'sent'] as const;

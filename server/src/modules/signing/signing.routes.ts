@@ -2,6 +2,7 @@ import type { Request, Response } from 'express';
 import { z } from 'zod';
 import { consentBody, signatureBody, signingState } from '@contract';
 import { link, OFFICE, rawResponse, type ApiRouter } from '../../lib/route';
+import { liveLink } from '../proposal-links/link-open';
 import { customerSignedPdf, officeSignedPdf } from './signed-pdf.service';
 import { giveConsent, signingState as readSigningState, signVersion, type RequestMeta } from './signing.service';
 
@@ -28,8 +29,8 @@ function sendPdf(res: Response, pdf: { bytes: Buffer; fileName: string; sha256: 
 }
 
 /**
- * The customer's signing, under /api/proposals (a proposal-link session, `link('proposalId')`): the
- * state of signing, the consent to sign electronically (ESIGN §7001(c)), the signature, and the signed copy.
+ * The customer's signing, under /api/proposals (a proposal-link session, `link('proposalId')`, whose link
+ * must still work: revoked, expired or superseded is 410 with why and whom to contact): the state of signing, the consent to sign electronically (ESIGN §7001(c)), the signature, and the signed copy.
  */
 export function signingRoutes(api: ApiRouter): void {
   api.route({
@@ -39,7 +40,10 @@ export function signingRoutes(api: ApiRouter): void {
     policy: link('proposalId'),
     params: proposalParams,
     response: signingState,
-    handler: ({ em, link: grant }) => readSigningState(em, grant!),
+    handler: async ({ em, link: grant, services }) => {
+      await liveLink(em, services.clock, grant!);
+      return readSigningState(em, grant!);
+    },
   });
   api.route({
     method: 'post',
@@ -50,8 +54,10 @@ export function signingRoutes(api: ApiRouter): void {
     body: consentBody,
     status: 200,
     response: signingState,
-    handler: ({ em, link: grant, body, req, services }) =>
-      giveConsent(em, { clock: services.clock }, grant!, body, metaOf(req)),
+    handler: async ({ em, link: grant, body, req, services }) => {
+      await liveLink(em, services.clock, grant!);
+      return giveConsent(em, { clock: services.clock }, grant!, body, metaOf(req));
+    },
   });
   api.route({
     method: 'post',
@@ -62,14 +68,16 @@ export function signingRoutes(api: ApiRouter): void {
     body: signatureBody,
     status: 201,
     response: signingState,
-    handler: ({ em, link: grant, body, req, services }) =>
-      signVersion(
+    handler: async ({ em, link: grant, body, req, services }) => {
+      await liveLink(em, services.clock, grant!);
+      return signVersion(
         em,
         { clock: services.clock, storage: services.storage, queue: services.queue },
         grant!,
         body,
         metaOf(req),
-      ),
+      );
+    },
   });
   api.route({
     method: 'get',
@@ -79,6 +87,7 @@ export function signingRoutes(api: ApiRouter): void {
     params: proposalParams,
     response: rawResponse('application/pdf'),
     handler: async ({ em, link: grant, services, res }) => {
+      await liveLink(em, services.clock, grant!);
       sendPdf(res, await customerSignedPdf(em, services.storage, grant!.companyId, grant!.proposalId));
       return undefined;
     },

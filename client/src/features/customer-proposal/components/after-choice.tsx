@@ -1,10 +1,11 @@
 import type { CustomerProposalView } from '@contract';
 import { CancelPanel, DepositStep } from '../after-signing';
+import { SigningSteps } from '../signing';
 import { money } from './format';
 
 /**
- * What comes after the customer's choice. The signing steps (sign14: `../signing/SigningSteps`) and then the
- * deposit and the right to cancel (`../after-signing`: `DepositStep`, `CancelPanel`, which read the signing,
+ * What comes after the customer's choice. The signing steps (`../signing`: consent, signature, the signed
+ * copy; they read `GET …/signing` themselves) and then the deposit and the right to cancel (`../after-signing`: `DepositStep`, `CancelPanel`, which read the signing,
  * the deposit and any cancellation from `GET …/after-signing` themselves).
  */
 export function AfterChoice({ view }: { view: CustomerProposalView }) {
@@ -23,7 +24,7 @@ export function AfterChoice({ view }: { view: CustomerProposalView }) {
         You can still change your mind above until you sign. Next, {view.company.name} asks you to sign the proposal
         {option.price.depositCents > 0 ? ` and pay the ${money(option.price.depositCents)} deposit` : ''}.
       </p>
-      {/* ── SIGNING SLOT (sign14): <SigningSteps proposalId={view.proposalId} view={view} /> renders here. ── */}
+      <SigningSteps proposalId={view.proposalId} chosenPosition={view.chosen?.position ?? null} />
       {/* After the signature: the deposit, then the right to cancel (each renders nothing before signing). */}
       <div className="mt-4 grid gap-4 empty:hidden">
         <DepositStep proposalId={view.proposalId} />

@@ -499,7 +499,10 @@ describe('the signed copy', () => {
     const pages = (await pdfPages(sealed)).map((x) => x.replace(/\s+/g, ' '));
     const first = pages.findIndex((x) => x.includes('Signing record'));
     expect(first).toBeGreaterThan(0);
-    const acceptance = pages[first - 1]!;
+    const acceptance = pages.find((x) => x.includes('This is the signed copy')) ?? '';
+    // The right-to-cancel statement stays beside the buyer's signature, now with its dates (16 CFR 429.1(a)).
+    expect(acceptance).toMatch(/cancel this transaction/i);
+    expect(pages.slice(0, first).some((x) => /NOTICE OF CANCELLATION/i.test(x))).toBe(true);
     const record = pages.slice(first).join(' ');
     expect(acceptance).toMatch(/This is the signed copy of proposal version 1/);
     expect(acceptance).toMatch(/Ezekiel Thornbury/);

@@ -103,7 +103,7 @@ describe('the proposal screen', () => {
     expect(refused).toHaveTextContent('Mark the job ready to propose on the desk first.');
 
     fireEvent.click(screen.getByRole('button', { name: 'Issue version 1' }));
-    expect(await screen.findByText('Version 2 issued. Its PDF is being made.')).toBeInTheDocument();
+    expect(await screen.findByText('Version 2 issued.')).toBeInTheDocument();
     const versions = screen.getByRole('region', { name: 'Versions' });
     const items = within(versions).getAllByRole('button');
     expect(items.map((b) => b.textContent)).toEqual([

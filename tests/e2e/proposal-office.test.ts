@@ -57,7 +57,7 @@ async function issueAndWaitForPdf(page: Page): Promise<number> {
   const label = (await issueButton(page).textContent()) ?? '';
   const n = Number(/(\d+)$/.exec(label)?.[1]);
   await issueButton(page).click();
-  await page.getByText(`Version ${n} issued. Its PDF is being made.`).waitFor();
+  await page.getByText(`Version ${n} issued.`).waitFor();
   const pdf = page.getByRole('region', { name: `PDF of version ${n}` });
   // The queue makes it in the background; the screen polls until the preview is there.
   await pdf.getByTitle(`Proposal version ${n}, PDF preview`).waitFor({ timeout: 60_000 });

@@ -18,6 +18,11 @@ export function useIssueVersion(jobId: string) {
       queryClient.setQueryData(proposalKeys.proposal(jobId), proposal);
       await Promise.all([
         queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId), exact: true }),
+        // What hangs under the proposal (the send panel's links: which version may be sent) is asked for again.
+        queryClient.invalidateQueries({
+          queryKey: proposalKeys.proposal(jobId),
+          predicate: (q) => q.queryKey.length > proposalKeys.proposal(jobId).length,
+        }),
         queryClient.invalidateQueries({ queryKey: jobKeys.lists() }),
       ]);
     },

@@ -46,7 +46,7 @@ export function IssuePanel({ jobId, data }: { jobId: string; data: ProposalRespo
       ) : null}
       {issue.isSuccess ? (
         <p role="status" className="font-semibold text-ok">
-          Version {issue.data.proposal?.versions[0]?.number} issued. Its PDF is being made.
+          Version {issue.data.proposal?.versions[0]?.number} issued.
         </p>
       ) : null}
     </section>

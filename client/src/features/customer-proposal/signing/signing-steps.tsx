@@ -20,7 +20,7 @@ function StepFrame({ n, current, children }: { n: number; current: Step; childre
   const done = n < at;
   const active = n === at;
   return (
-    <li className={`rounded-lg border p-4 ${active ? 'border-ink-700 bg-white' : 'border-line bg-paper'}`}>
+    <li className={`rounded-lg border p-3 sm:p-4 ${active ? 'border-ink-700 bg-white' : 'border-line bg-paper'}`}>
       <h3
         className={`flex items-center gap-3 text-lg font-semibold ${active ? 'text-ink-900' : 'text-muted'}`}
         aria-current={active ? 'step' : undefined}

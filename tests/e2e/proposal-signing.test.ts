@@ -1,0 +1,103 @@
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { PROPOSAL_LINK_OPEN_PATH } from '@contract';
+import { expectNoSeriousViolations } from './axe';
+import { api } from './proposal-helpers';
+import { account, expectFitsWidth, jobWithRooms } from './desk-helpers';
+import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
+
+/**
+ * Issue 14, signing at 375 px through the customer's page: the consent notice and its tick box, a signature
+ * drawn with the pointer in a box at least 190 px high, "Sign and accept the proposal", then the sealed copy
+ * to download once the queue has made it (served as a PDF). Screenshots customer-sign-*-375.png.
+ */
+let e: E2E;
+
+async function until<T>(what: string, read: () => Promise<T | undefined>): Promise<T> {
+  for (let i = 0; i < 300; i += 1) {
+    const found = await read();
+    if (found !== undefined) return found;
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  }
+  throw new Error(`gave up waiting for ${what}`);
+}
+
+/** A demo job with one priced option asking a 10 % deposit, marked ready, issued and e-mailed: the link's path. */
+async function sentProposal(office: Page): Promise<{ jobId: string; path: string }> {
+  const jobId = await jobWithRooms(office);
+  const rooms = (await api(office, 'get', `/api/jobs/${jobId}/rooms`)).rooms as { id: string }[];
+  await api(office, 'post', `/api/jobs/${jobId}/options`, {
+    name: 'Quiet comfort',
+    design: {
+      zones: [{ key: 'z1', name: 'Main room', roomIds: [rooms[0]?.id ?? ''], indoorUnitKey: 'TSL-S12H-W' }],
+      systems: [
+        {
+          key: 's1',
+          name: 'Main system',
+          outdoorUnitKey: 'TSL-S12H-O',
+          circuits: [{ zoneKey: 'z1', lengthFt: 25 }],
+          electrical: { circuitLengthFt: 40 },
+        },
+      ],
+    },
+    pricing: { deposit: { kind: 'percent', value: 10 } },
+  });
+  await api(office, 'post', `/api/jobs/${jobId}/ready`, {
+    sizingOverride: { reason: 'The family wants the main room done first.' },
+  });
+  await api(office, 'post', `/api/jobs/${jobId}/proposal/versions`);
+  const to = `buyer-${Date.now()}@example.com`;
+  await api(office, 'post', `/api/jobs/${jobId}/proposal/links`, { to });
+  const mail = await until('the proposal e-mail', async () => e.smtp.messages.find((m) => m.to.includes(to)));
+  const link = new RegExp(`https?://\\S+${PROPOSAL_LINK_OPEN_PATH}\\?t=[A-Za-z0-9_-]{43}`).exec(mail.text)?.[0];
+  if (!link) throw new Error(`no proposal link in: ${mail.text}`);
+  return { jobId, path: new URL(link).pathname + new URL(link).search };
+}
+
+describe('signing on the phone', () => {
+  beforeAll(async () => {
+    e = await startE2E();
+  });
+  afterAll(async () => e?.close());
+
+  it('consents, draws a signature with a finger-sized box, signs and downloads the sealed copy', async () => {
+    const office = await e.newPage(DESKTOP);
+    const estimator = account('estimator');
+    await signIn(office.page, estimator.email, estimator.password);
+    await office.page.getByTestId('user-name').first().waitFor();
+    const { path } = await sentProposal(office.page);
+    const phone = await e.newPage(PHONE);
+    await phone.page.goto(path);
+    await phone.page.getByRole('heading', { name: /^Your proposal,/ }).waitFor();
+    await phone.page.getByRole('button', { name: 'Choose Quiet comfort' }).click();
+    await phone.page.getByRole('heading', { name: /^You chose Quiet comfort/ }).waitFor();
+    const box = phone.page.getByRole('checkbox', { name: /I agree to sign electronically/ });
+    await box.waitFor();
+    await box.scrollIntoViewIfNeeded();
+    await phone.page.screenshot({ path: `${SHOTS}/customer-sign-consent-375.png`, fullPage: true });
+    await expectFitsWidth(phone.page);
+    await box.check();
+    await phone.page.getByRole('button', { name: /I agree — continue to sign/ }).click();
+    const canvas = phone.page.getByRole('img', { name: /Signature box/ });
+    await canvas.waitFor();
+    await canvas.scrollIntoViewIfNeeded();
+    const b = (await canvas.boundingBox())!;
+    expect(b.height).toBeGreaterThanOrEqual(190);
+    expect(b.width).toBeGreaterThan(260);
+    await phone.page.mouse.move(b.x + 20, b.y + 140);
+    await phone.page.mouse.down();
+    for (let i = 1; i <= 20; i++) await phone.page.mouse.move(b.x + 20 + i * 13, b.y + 140 - Math.sin(i / 3) * 60);
+    await phone.page.mouse.up();
+    await phone.page.screenshot({ path: `${SHOTS}/customer-sign-draw-375.png`, fullPage: true });
+    await expectNoSeriousViolations(phone.page);
+    await phone.page.getByRole('button', { name: 'Sign and accept the proposal' }).click();
+    const download = phone.page.getByRole('link', { name: 'Download your signed copy (PDF)' });
+    await download.waitFor({ timeout: 60_000 });
+    await download.scrollIntoViewIfNeeded();
+    await phone.page.screenshot({ path: `${SHOTS}/customer-sign-signed-375.png`, fullPage: true });
+    const href = await download.getAttribute('href');
+    const res = await phone.page.request.get(href ?? '');
+    expect(res.status()).toBe(200);
+    expect(res.headers()['content-type']).toBe('application/pdf');
+  });
+});

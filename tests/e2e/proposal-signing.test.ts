@@ -94,6 +94,12 @@ describe('signing on the phone', () => {
     const download = phone.page.getByRole('link', { name: 'Download your signed copy (PDF)' });
     await download.waitFor({ timeout: 60_000 });
     await download.scrollIntoViewIfNeeded();
+    // Signed, the choice is settled (the server refuses another): no card offers a different option and the
+    // page no longer says the choice can change.
+    await phone.page.getByRole('heading', { name: /^You signed for Quiet comfort/ }).waitFor();
+    await phone.page.getByText('✓ Signed').waitFor();
+    expect(await phone.page.getByRole('button', { name: /^Choose / }).count()).toBe(0);
+    expect(await phone.page.getByText(/change your mind/).count()).toBe(0);
     await phone.page.screenshot({ path: `${SHOTS}/customer-sign-signed-375.png`, fullPage: true });
     const href = await download.getAttribute('href');
     const res = await phone.page.request.get(href ?? '');

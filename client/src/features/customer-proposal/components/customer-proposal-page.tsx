@@ -8,6 +8,7 @@ import { ChangesSince } from './changes-since';
 import { usDate } from './format';
 import { HomeLoads } from './home-loads';
 import { OptionCard } from './option-card';
+import { useIsSigned } from '../signing';
 import { ProposalPdfLink } from './proposal-pdf-link';
 
 const COLUMNS: Record<number, string> = { 1: 'lg:grid-cols-1 lg:max-w-xl', 2: 'lg:grid-cols-2', 3: 'lg:grid-cols-3' };
@@ -78,6 +79,7 @@ function TextFold({ title, text }: { title: string; text: string }) {
 export function CustomerProposalPage({ proposalId }: { proposalId: string }) {
   const { data: view } = useCustomerProposal(proposalId);
   const choose = useChooseOption(proposalId);
+  const signed = useIsSigned(proposalId, view.chosen?.position ?? null);
   const count = view.options.length;
   return (
     <div className="min-h-dvh bg-paper">
@@ -89,7 +91,11 @@ export function CustomerProposalPage({ proposalId }: { proposalId: string }) {
             {count > 1 ? `Your ${count} options` : 'What we propose'}
           </h2>
           <p className="mt-1 text-base text-muted">
-            {count > 1 ? 'Compare them and choose the one you want.' : 'Read it through and choose it to go ahead.'}
+            {signed
+              ? 'You signed for the option marked below.'
+              : count > 1
+                ? 'Compare them and choose the one you want.'
+                : 'Read it through and choose it to go ahead.'}
           </p>
           {choose.isError ? (
             <div className="mt-3">
@@ -105,13 +111,14 @@ export function CustomerProposalPage({ proposalId }: { proposalId: string }) {
                 option={o}
                 chosen={view.chosen?.position === o.position}
                 anyChosen={view.chosen !== null}
+                signed={signed}
                 busy={choose.isPending && choose.variables === o.position}
                 onChoose={() => choose.mutate(o.position)}
               />
             ))}
           </div>
         </section>
-        {view.chosen ? <AfterChoice view={view} /> : null}
+        {view.chosen ? <AfterChoice view={view} signed={signed} /> : null}
         <HomeLoads loads={view.loads} />
         <section
           aria-labelledby="pdf-heading"

@@ -45,12 +45,15 @@ export function OptionCard({
   option,
   chosen,
   anyChosen,
+  signed = false,
   busy,
   onChoose,
 }: {
   option: CustomerOption;
   chosen: boolean;
   anyChosen: boolean;
+  /** Signed: the choice is settled, so no card offers to change it. */
+  signed?: boolean;
   busy: boolean;
   onChoose: () => void;
 }) {
@@ -110,9 +113,9 @@ export function OptionCard({
       <div className="mt-auto pt-4">
         {chosen ? (
           <p className="flex min-h-touch items-center justify-center rounded-md bg-ok-soft px-4 text-base font-semibold text-ok">
-            ✓ Your choice
+            {signed ? '✓ Signed' : '✓ Your choice'}
           </p>
-        ) : (
+        ) : signed ? null : (
           <Button className="w-full" variant={anyChosen ? 'secondary' : 'primary'} busy={busy} onClick={onChoose}>
             {anyChosen ? `Choose ${option.name} instead` : `Choose ${option.name}`}
           </Button>

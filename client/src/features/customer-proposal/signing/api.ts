@@ -1,4 +1,4 @@
-import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { signingState, type ConsentBody, type SignatureBody, type SigningState } from '@contract';
 import { apiFetch } from '../../../lib/api-client';
 
@@ -13,18 +13,33 @@ export const signingKeys = {
   state: (proposalId: string) => ['customer-proposal', proposalId, 'signing'] as const,
 };
 
+/** GET /api/proposals/:id/signing, as the signing steps and the page around them read it (one cache entry). */
+const signingQuery = (proposalId: string, chosenPosition: number | null) =>
+  queryOptions({
+    queryKey: [...signingKeys.state(proposalId), chosenPosition],
+    queryFn: ({ signal }) => apiFetch(`${base(proposalId)}/signing`, { schema: signingState, signal }),
+    meta: { persist: false },
+  });
+
 /**
  * GET /api/proposals/:id/signing. Never kept on the device (a shared browser). While the signed copy is
  * being made, asks again every few seconds until it is ready.
  */
 export function useSigningState(proposalId: string, chosenPosition: number | null) {
   return useQuery({
-    queryKey: [...signingKeys.state(proposalId), chosenPosition],
-    queryFn: ({ signal }) => apiFetch(`${base(proposalId)}/signing`, { schema: signingState, signal }),
-    meta: { persist: false },
+    ...signingQuery(proposalId, chosenPosition),
     placeholderData: keepPreviousData,
     refetchInterval: (q) => (q.state.data?.signedPdf === 'waiting' ? 3000 : false),
   });
+}
+
+/**
+ * Whether the proposal is signed, for the page around the steps: once it is, the options can no longer be
+ * changed (the server refuses a new choice), so the page stops offering one. False until an option is chosen.
+ */
+export function useIsSigned(proposalId: string, chosenPosition: number | null): boolean {
+  const query = useQuery({ ...signingQuery(proposalId, chosenPosition), enabled: chosenPosition !== null });
+  return query.data?.signature != null;
 }
 
 function useSigningWrite<B>(proposalId: string, path: string) {

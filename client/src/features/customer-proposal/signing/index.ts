@@ -1,1 +1,2 @@
 export { SigningSteps } from './signing-steps';
+export { useIsSigned } from './api';

@@ -65,7 +65,7 @@ describe('signing on the phone', () => {
     const estimator = account('estimator');
     await signIn(office.page, estimator.email, estimator.password);
     await office.page.getByTestId('user-name').first().waitFor();
-    const { path } = await sentProposal(office.page);
+    const { jobId, path } = await sentProposal(office.page);
     const phone = await e.newPage(PHONE);
     await phone.page.goto(path);
     await phone.page.getByRole('heading', { name: /^Your proposal,/ }).waitFor();
@@ -105,5 +105,20 @@ describe('signing on the phone', () => {
     const res = await phone.page.request.get(href ?? '');
     expect(res.status()).toBe(200);
     expect(res.headers()['content-type']).toBe('application/pdf');
+
+    // The office's proposal screen: who signed and when, and the same sealed copy to download.
+    await office.page.goto(`/jobs/${jobId}/proposal`);
+    await office.page
+      .getByText(/^Signed by /)
+      .first()
+      .waitFor();
+    const officeCopy = office.page.getByRole('link', { name: 'Download the signed copy' });
+    await officeCopy.waitFor({ timeout: 60_000 });
+    const theirs = await office.page.request.get((await officeCopy.getAttribute('href')) ?? '');
+    expect(theirs.status()).toBe(200);
+    expect(theirs.headers()['content-type']).toBe('application/pdf');
+    expect(Buffer.compare(await theirs.body(), await res.body())).toBe(0);
+    await office.page.screenshot({ path: `${SHOTS}/proposal-office-signed-1440.png`, fullPage: true });
+    await expectNoSeriousViolations(office.page);
   });
 });

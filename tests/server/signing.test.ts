@@ -465,6 +465,10 @@ describe('the signed copy', () => {
   it('is 409 until the queue has made it, then served to the customer and the office as the same sealed bytes', async () => {
     const waiting = await c.get('/signed-pdf');
     expect(waiting.status).toBe(409);
+    // The office's proposal screen reads the signature on the version, the copy not made yet.
+    const officeView = async () =>
+      (await office.agent.get(`/api/jobs/${p.jobId}/proposal`).set(HTTPS)).body.proposal.versions[0].signed;
+    expect(await officeView()).toMatchObject({ signerName: 'Ezekiel Thornbury', copySha256: null });
     await t.services.queue.drain({ timeoutMs: 60_000 });
     const row = (await db.query(`select * from proposal_signed_pdf where signature_id = $1`, [signatureId])).rows[0];
     expect(row).toBeDefined();
@@ -489,6 +493,7 @@ describe('the signed copy', () => {
     expect(theirs.status).toBe(200);
     expect(sha256(theirs.body as Buffer)).toBe(row.sha256);
     expect((await stateOf(c)).signedPdf).toBe('ready');
+    expect((await officeView()).copySha256).toBe(row.sha256);
     // The sealed row is insert-only too.
     await expect(
       db.query(`update proposal_signed_pdf set sha256 = $2 where id = $1`, [row.id, 'f'.repeat(64)]),

@@ -200,6 +200,11 @@ export const proposalVersionRecord = z.object({
   pdf: z.object({ state: z.enum(PDF_STATES), sha256: z.string().nullable() }),
   /** The options' names and totals (cents), for the list. */
   options: z.array(z.object({ name: z.string(), totalCents: z.number().int() })),
+  /**
+   * The customer's signature on this version, if any: when, by whom, and the sealed signed copy's SHA-256
+   * once the queue has made it (null while it is being made). Absent where the answer does not read it.
+   */
+  signed: z.object({ at: z.string(), signerName: z.string(), copySha256: z.string().nullable() }).nullable().optional(),
 });
 export type ProposalVersionRecord = z.infer<typeof proposalVersionRecord>;
 

@@ -138,7 +138,14 @@ export async function issueVersion(ctx: ServiceContext, jobId: string, onIssued?
 
 const iso = (d: Date | null | undefined) => (d ? d.toISOString() : null);
 
-function versionRecord(v: ProposalVersion): ProposalVersionRecord {
+interface SignedRow {
+  version_id: string;
+  signed_at: Date;
+  signer_name: string;
+  copy_sha256: string | null;
+}
+
+function versionRecord(v: ProposalVersion, signed?: SignedRow): ProposalVersionRecord {
   return {
     number: v.number,
     issuedAt: v.issuedAt.toISOString(),
@@ -149,7 +156,25 @@ function versionRecord(v: ProposalVersion): ProposalVersionRecord {
     calcVersion: v.calcVersion,
     pdf: { state: v.pdfState, sha256: v.pdfSha256?.trim() ?? null },
     options: v.snapshot.options.map((o) => ({ name: o.name, totalCents: o.price.totalCents })),
+    signed: signed
+      ? {
+          at: signed.signed_at.toISOString(),
+          signerName: signed.signer_name,
+          copySha256: signed.copy_sha256?.trim() ?? null,
+        }
+      : null,
   };
+}
+
+/** Each signed version of the proposal with its signer and the sealed copy's hash (insert-only tables of the signing module). */
+async function signaturesByVersion(ctx: ServiceContext, proposalId: string): Promise<Map<string, SignedRow>> {
+  const rows = await ctx.em.execute<SignedRow[]>(
+    `select s."version_id", s."signed_at", s."signer_name", p."sha256" as "copy_sha256"
+       from "proposal_signature" s left join "proposal_signed_pdf" p on p."signature_id" = s."id"
+      where s."company_id" = ? and s."proposal_id" = ?`,
+    [ctx.actor.companyId, proposalId],
+  );
+  return new Map(rows.map((r) => [r.version_id, { ...r, signed_at: new Date(r.signed_at) }]));
 }
 
 /** The job's proposal in the actor's scope (404 for a job outside it), or null before its first version. */
@@ -172,6 +197,7 @@ export async function getProposal(ctx: ServiceContext, jobId: string): Promise<P
     { orderBy: { number: 'desc' } },
   );
   const numbers = new Map(versions.map((v) => [v.id, v.number]));
+  const signed = await signaturesByVersion(ctx, proposal.id);
   const events = await ctx.em.find(
     ProposalEventSchema,
     { proposal: proposal.id, company: ctx.actor.companyId },
@@ -183,7 +209,7 @@ export async function getProposal(ctx: ServiceContext, jobId: string): Promise<P
     proposal: {
       id: proposal.id,
       createdAt: proposal.createdAt.toISOString(),
-      versions: versions.map(versionRecord),
+      versions: versions.map((v) => versionRecord(v, signed.get(v.id))),
       events: events.map((e): ProposalEventRecord => ({
         seq: Number(e.seq),
         kind: e.kind,

@@ -10,12 +10,18 @@ export const versionPath = (jobId: string, n: number) => `${proposalPath(jobId)}
 export const pdfPath = (jobId: string, n: number, download = false) =>
   `${versionPath(jobId, n)}/pdf${download ? '?download=1' : ''}`;
 
+/** The sealed signed copy of a signed version (office), as an attachment. */
+export const signedPdfPath = (jobId: string, n: number) => `${versionPath(jobId, n)}/signed-pdf`;
+
 /** How often the screen asks again while a version's PDF is waiting or being made. */
 export const PDF_POLL_MS = 2000;
 
-/** Whether some version's PDF is still on its way (the screen then polls). */
+/** Whether some version's PDF, or a signed version's sealed copy, is still on its way (the screen then polls). */
 export const pdfPending = (data: ProposalResponse | undefined): boolean =>
-  data?.proposal?.versions.some((v) => v.pdf.state === 'waiting' || v.pdf.state === 'rendering') ?? false;
+  data?.proposal?.versions.some(
+    (v) =>
+      v.pdf.state === 'waiting' || v.pdf.state === 'rendering' || (v.signed != null && v.signed.copySha256 === null),
+  ) ?? false;
 
 /**
  * GET /api/jobs/:jobId/proposal — the versions (newest first), the audit trail in order and whether a version

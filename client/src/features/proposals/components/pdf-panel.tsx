@@ -2,7 +2,8 @@ import type { ProposalVersionRecord } from '@contract';
 import { Alert } from '../../../components/ui/alert';
 import { Button, buttonClass } from '../../../components/ui/button';
 import { errorMessage } from '../../../lib/api-error';
-import { pdfPath } from '../api/get-proposal';
+import { pdfPath, signedPdfPath } from '../api/get-proposal';
+import { formatStamp } from '../model/dates';
 import { useRetryPdf } from '../api/retry-pdf';
 
 /**
@@ -57,6 +58,24 @@ export function PdfPanel({
           )}
           {retry.isError ? <p className="mt-2 font-semibold">{errorMessage(retry.error)}</p> : null}
         </Alert>
+      ) : null}
+      {version.signed && canOpen ? (
+        <div className="flex flex-col gap-2 rounded-md border border-ok bg-ok-soft p-3 text-base text-ink-950">
+          <p>
+            <span className="font-semibold">Signed by {version.signed.signerName}</span> on{' '}
+            {formatStamp(version.signed.at)}.
+          </p>
+          {version.signed.copySha256 ? (
+            <>
+              <a className={`${buttonClass('primary')} self-start`} href={signedPdfPath(jobId, n)} download>
+                Download the signed copy
+              </a>
+              <p className="break-all text-sm text-muted">SHA-256 of the signed copy: {version.signed.copySha256}</p>
+            </>
+          ) : (
+            <p role="status">The sealed signed copy is being made. This page checks again every few seconds.</p>
+          )}
+        </div>
       ) : null}
       {state === 'ready' && canOpen ? (
         <>

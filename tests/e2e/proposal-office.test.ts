@@ -23,14 +23,22 @@ async function api(page: Page) {
   return { 'X-CSRF-Token': csrf };
 }
 
-/** The Quillbrook job the seed marked ready to propose (the newest one, if runs left more). */
+/**
+ * The Quillbrook job the seed marked ready to propose. Other files mark Quillbrook jobs ready too on the same
+ * database (desk-ready's, with units outside their range and a reason), so the one taken is a ready job whose
+ * readiness needed no sizing reason: this journey re-marks it ready without one.
+ */
 async function readyJob(page: Page): Promise<string> {
   const list = (await (await page.request.get('/api/jobs?page=1&pageSize=50')).json()) as {
     items: { id: string; readyToProposeAt: string | null; hasProposal: boolean }[];
   };
-  const job = list.items.find((j) => j.readyToProposeAt !== null);
-  if (!job) throw new Error('no Quillbrook job marked ready');
-  return job.id;
+  for (const job of list.items.filter((j) => j.readyToProposeAt !== null)) {
+    const desk = (await (await page.request.get(`/api/jobs/${job.id}/desk`)).json()) as {
+      readiness: { ready: boolean; sizingOverride: unknown };
+    };
+    if (desk.readiness.ready && desk.readiness.sizingOverride === null) return job.id;
+  }
+  throw new Error('no Quillbrook job marked ready without a sizing reason');
 }
 
 /** Renames the first option (a change the customer sees) and marks the job ready again, through the API. */

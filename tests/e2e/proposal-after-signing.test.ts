@@ -1,10 +1,10 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { formatMoney } from '@calc';
-import { PROPOSAL_LINK_OPEN_PATH, type AfterSigningRecord } from '@contract';
+import type { AfterSigningRecord } from '@contract';
 import { checkedPages, expectNoSeriousViolations } from './axe';
-import { api } from './proposal-helpers';
-import { account, expectFitsWidth, jobWithRooms } from './desk-helpers';
+import { api, sentProposal, until } from './proposal-helpers';
+import { account, expectFitsWidth } from './desk-helpers';
 import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
 
 /**
@@ -15,47 +15,6 @@ import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
  * customer's own browser session.
  */
 let e: E2E;
-
-async function until<T>(what: string, read: () => Promise<T | undefined>): Promise<T> {
-  for (let i = 0; i < 300; i += 1) {
-    const found = await read();
-    if (found !== undefined) return found;
-    await new Promise((resolve) => setTimeout(resolve, 100));
-  }
-  throw new Error(`gave up waiting for ${what}`);
-}
-
-/** A demo job with one priced option asking a 10 % deposit, marked ready, issued and e-mailed: the link's path. */
-async function sentProposal(office: Page): Promise<{ jobId: string; path: string }> {
-  const jobId = await jobWithRooms(office);
-  const rooms = (await api(office, 'get', `/api/jobs/${jobId}/rooms`)).rooms as { id: string }[];
-  await api(office, 'post', `/api/jobs/${jobId}/options`, {
-    name: 'Quiet comfort',
-    design: {
-      zones: [{ key: 'z1', name: 'Main room', roomIds: [rooms[0]?.id ?? ''], indoorUnitKey: 'TSL-S12H-W' }],
-      systems: [
-        {
-          key: 's1',
-          name: 'Main system',
-          outdoorUnitKey: 'TSL-S12H-O',
-          circuits: [{ zoneKey: 'z1', lengthFt: 25 }],
-          electrical: { circuitLengthFt: 40 },
-        },
-      ],
-    },
-    pricing: { deposit: { kind: 'percent', value: 10 } },
-  });
-  await api(office, 'post', `/api/jobs/${jobId}/ready`, {
-    sizingOverride: { reason: 'The family wants the main room done first.' },
-  });
-  await api(office, 'post', `/api/jobs/${jobId}/proposal/versions`);
-  const to = `buyer-${Date.now()}@example.com`;
-  await api(office, 'post', `/api/jobs/${jobId}/proposal/links`, { to });
-  const mail = await until('the proposal e-mail', async () => e.smtp.messages.find((m) => m.to.includes(to)));
-  const link = new RegExp(`https?://\\S+${PROPOSAL_LINK_OPEN_PATH}\\?t=[A-Za-z0-9_-]{43}`).exec(mail.text)?.[0];
-  if (!link) throw new Error(`no proposal link in: ${mail.text}`);
-  return { jobId, path: new URL(link).pathname + new URL(link).search };
-}
 
 /** Consent and a typed signature through the signing API, in the customer's session (its PDF must be ready first). */
 async function signAsCustomer(phone: Page, proposalId: string) {
@@ -99,7 +58,7 @@ describe('after the signature, on the phone', () => {
     const estimator = account('estimator');
     await signIn(office.page, estimator.email, estimator.password);
     await office.page.getByTestId('user-name').first().waitFor();
-    const { jobId, path } = await sentProposal(office.page);
+    const { jobId, path } = await sentProposal(e, office.page);
 
     const phone = await e.newPage(PHONE);
     await phone.page.goto(path);

@@ -54,6 +54,7 @@ export * from './src/electrical/raceway';
 export * from './src/electrical/plan';
 export * from './src/electrical/disconnect-run';
 export * from './src/commissioning/checks';
+export * from './src/commissioning/record';
 
 export * from './src/takeoff/defaults';
 export * from './src/takeoff/lines';

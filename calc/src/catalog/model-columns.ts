@@ -184,6 +184,7 @@ export const MODEL_COLUMNS: readonly CsvColumn[] = [
   numberCol('max_total_line_ft', 'maxTotalLineFt', 'Maximum total line length (multi-zone), ft'),
   numberCol('max_lift_ft', 'maxLiftFt', 'Maximum height between outdoor and indoor, ft'),
   numberCol('max_indoor_height_diff_ft', 'maxIndoorHeightDiffFt', 'Maximum height between indoor units, ft'),
+  numberCol('test_pressure_psig', 'testPressurePsig', 'Field pressure test from the nameplate or manual, psig'),
   tubeCol('liquid_in', 'liquidOdIn', 'Liquid connection, in (1/4, 3/8, …)'),
   tubeCol('suction_in', 'suctionOdIn', 'Suction (gas) connection, in'),
   numberCol('ports', 'ports', 'Multi-zone: number of ports'),

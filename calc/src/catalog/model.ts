@@ -89,6 +89,11 @@ const modelObject = z.object({
   maxTotalLineFt: bounded('Maximum total line length', 10, 1000, 'ft').optional(),
   maxLiftFt: bounded('Maximum lift', 0, 200, 'ft').optional(),
   maxIndoorHeightDiffFt: bounded('Maximum height between indoor units', 0, 100, 'ft').optional(),
+  /**
+   * Outdoor units: the field pressure test the nameplate or installation manual gives, psig (the standing
+   * nitrogen test of the line sets and indoor units must never go above it; reference §9).
+   */
+  testPressurePsig: bounded('Test pressure', 50, 1000, 'psig').optional(),
   liquidOdIn: tubeOdSchema.optional(),
   suctionOdIn: tubeOdSchema.optional(),
   ports: boundedInt('Ports', 2, 8).optional(),

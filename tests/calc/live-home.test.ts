@@ -346,3 +346,61 @@ describe('live home (per keystroke) equals the full recompute', () => {
     // A generous limit: the machine that runs the suite may be busy (this is not a speed check).
   }, 60_000);
 });
+
+describe('the first pass in pieces (issue 11: a phone hands the main thread back between them)', () => {
+  // The reference is again `homeLoadFromParsed`, the full recompute (see the top of this file), and the
+  // one-task live pass: the pieces only move work earlier, so the figures must be the very same numbers.
+  const plain: Home = { ...ducted, ducts: undefined };
+
+  it('every piece run, then load: the same figures as one whole pass, with no room worked out twice', () => {
+    for (const home of [plain, ducted]) {
+      const live = liveHome();
+      // The design day, then one piece per room.
+      expect([...live.prepareInPieces(home)]).toHaveLength(home.rooms.length + 1);
+      const load = live.load(home);
+      expect(live.lastRecomputed).toBe(0);
+      expect(load).toStrictEqual(liveHome().load(home));
+      expect(load).toStrictEqual(homeLoadFromParsed(home));
+      // A second run finds every room's hours kept: nothing left to do but the design day.
+      expect([...live.prepareInPieces(home)]).toHaveLength(1);
+    }
+  });
+
+  it('property: a room edited, or the design day changed, between pieces never leaves a stale figure', () => {
+    const ids = ducted.rooms.map((r) => r.id);
+    fc.assert(
+      fc.property(
+        fc.nat({ max: ducted.rooms.length + 1 }),
+        fc.constantFrom(...ids),
+        fc.integer({ min: 8, max: 30 }),
+        fc.integer({ min: 0, max: 6 }),
+        (stopAfter, id, wallFt, hotter) => {
+          const live = liveHome();
+          const pieces = live.prepareInPieces(ducted);
+          for (let i = 0; i < stopAfter; i += 1) pieces.next();
+          // Meanwhile the page asks about an edited room, in a home whose day may read differently.
+          const r = roomOf(ducted, id);
+          let home = withRoom(
+            ducted,
+            edit(r, { exposedWalls: r.exposedWalls.map((w, i) => (i === 0 ? { ...w, lengthFt: wallFt } : w)) }),
+          );
+          if (hotter > 0)
+            home = {
+              ...home,
+              designConditions: designConditionsSchema.parse({
+                ...ducted.designConditions,
+                outdoorCoolingDryBulbF: ducted.designConditions.outdoorCoolingDryBulbF + hotter,
+              }),
+            };
+          const full = homeLoadFromParsed(home);
+          expect(live.room(home, id)).toStrictEqual(full.rooms.find((x) => x.roomId === id));
+          // The rest of the pieces (for the home as it was), then the home as it is now.
+          for (let step = pieces.next(); !step.done; step = pieces.next());
+          expect(live.load(home)).toStrictEqual(full);
+        },
+      ),
+      { numRuns: 30 },
+    );
+    // A generous limit: the machine that runs the suite may be busy (this is not a speed check).
+  }, 60_000);
+});

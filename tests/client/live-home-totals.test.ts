@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { computeHomeLoad } from '../../client/src/features/loads/model/compute';
-import { computeLiveHomeLoad } from '../../client/src/features/loads/model/live-room';
+import { computeLiveHomeLoad, primeLive } from '../../client/src/features/loads/model/live-room';
 import { ranchHome, ranchRooms } from '../calc/ranch-home';
 
 /**
@@ -63,5 +63,24 @@ describe('live whole-home totals', () => {
       expect(live).toMatchObject({ ok: false });
       expect(live).toEqual(computeHomeLoad(crowded, c, 'average'));
     }
+  });
+
+  it('got ready in slices first (primeLive), then asked by the render: the full recompute’s figures, the same answer while nothing changed', async () => {
+    for (const house of [{ bedrooms: 3 }, { bedrooms: 3, ducts: DUCTS }]) {
+      // New input objects: nothing parsed or worked out before for these rooms.
+      const rooms = saved();
+      await primeLive({ rooms, house, designConditions: conditions, tightness: 'tight' });
+      const first = computeLiveHomeLoad(rooms, conditions, 'tight', house);
+      expect(first).toStrictEqual(computeHomeLoad(rooms, conditions, 'tight', house));
+      // The render takes the answer primeLive left (the same object), and asks again for free while nothing changed.
+      expect(computeLiveHomeLoad([...rooms], conditions, 'tight', house)).toBe(first);
+    }
+  });
+
+  it('a prime no longer wanted stops, and the figures asked for afterwards are still the full ones', async () => {
+    const rooms = saved();
+    let asked = 0;
+    await primeLive({ rooms, designConditions: conditions, tightness: 'leaky' }, () => (asked += 1) < 2);
+    expect(computeLiveHomeLoad(rooms, conditions, 'leaky')).toStrictEqual(computeHomeLoad(rooms, conditions, 'leaky'));
   });
 });

@@ -29,6 +29,16 @@ export interface LiveHome {
    * is not in the home), without working out the other rooms' results: what a room editor shows.
    */
   room(home: Home, roomId: string): RoomLoad | null;
+  /**
+   * The costly part of a first `load(home)` or `room(home, …)` — the design day, then each room's hours
+   * before ducts — one piece per `next()`, so a caller on a page can hand the main thread back between
+   * pieces (issue 11: on a slow phone the first whole-home pass was one ~120 ms task a keystroke waited
+   * behind). It returns nothing and changes no figure: what it works out is what `load`/`room` would work
+   * out themselves (same room, same air, same day), kept for them, so after the last piece they only
+   * recombine (`lastRecomputed` 0). A call to `load`/`room` in between is answered in full as usual; a
+   * piece that finds the design day changed meanwhile stops (its work would belong to another day).
+   */
+  prepareInPieces(home: Home): Generator<void, void, void>;
   /** How many rooms' hours the last call worked out again (the rest were kept). */
   readonly lastRecomputed: number;
 }
@@ -123,6 +133,22 @@ export function liveHome(): LiveHome {
   return {
     get lastRecomputed() {
       return lastRecomputed;
+    },
+    *prepareInPieces(home) {
+      const [p, c] = dayFor(home.designConditions, home.thermalMass ?? DEFAULT_RTS_CONSTRUCTION);
+      yield;
+      const air = houseAir(home);
+      for (let i = 0; i < home.rooms.length; i += 1) {
+        // Another call moved to another design day (and dropped the kept hours): this work is no longer wanted.
+        if (ctx !== c || psy !== p) return;
+        const room = home.rooms[i];
+        const a = air.airs[i];
+        if (!room || !a) continue;
+        const h = held.get(room.id);
+        if (h && h.room === room && sameAir(h.air, a)) continue;
+        held.set(room.id, { room, air: a, work: roomHourly(room, p, c, a), heat: undefined });
+        yield;
+      }
     },
     load(home) {
       const { p, c, air, work } = prepare(home);

@@ -11,7 +11,7 @@ import {
   type Tightness,
 } from '@calc';
 import { inSlices, yieldToMain } from '../../../lib/yield-to-main';
-import { houseOf, wholeHomeLoad, type LoadResult, type WholeHomePath } from './compute';
+import { houseOf, wholeHomeLoad, type LoadResult, type WholeHomeLoad, type WholeHomePath } from './compute';
 
 /** The rest of the home the edited room sits in: the rooms as they stand (saved or waiting) and the house facts. */
 export interface LiveHomeInputs {
@@ -98,14 +98,49 @@ const livePath: WholeHomePath = {
   },
 };
 
+/** The whole home's loads, live, worked out afresh (see computeLiveHomeLoad, which keeps the last answer). */
+const liveHomeLoad = wholeHomeLoad(livePath);
+
+type RoomInputs = Parameters<WholeHomeLoad>[0];
+
+/** The same rooms (each id with the same stored input object): parsed and worked out, they give the same figures. */
+const sameInputs = (a: RoomInputs, b: RoomInputs) =>
+  a === b || (a.length === b.length && a.every((r, i) => r.id === b[i]?.id && r.input === b[i]?.input));
+const sameHouse = (a: Record<string, unknown>, b: Record<string, unknown>) =>
+  a === b || (Object.keys(a).length === 0 && Object.keys(b).length === 0);
+
+/** The last whole-home answer and what it was asked with (the page's records never change in place). */
+let lastWhole: {
+  readonly inputs: RoomInputs;
+  readonly designConditions: Record<string, unknown> | null;
+  readonly tightness: Tightness;
+  readonly house: Record<string, unknown>;
+  readonly result: ReturnType<WholeHomeLoad>;
+} | null = null;
+
 /**
  * The whole home's loads, live: exactly `computeHomeLoad` (calc's `homeLoad` of the rooms calc accepts,
  * with the others named in `skipped`), but through the page's one engine — each room parsed once and its
  * hourly work kept — so the totals under the walk-through cost a recombination when the page renders
  * again instead of a full parse and recompute of every room (issue 11: on a phone that was 50–100 ms of
- * main-thread work on every save status change).
+ * main-thread work on every save status change). Asked again with the same rooms (the same input
+ * objects), conditions, tightness and house, it gives the last answer: the first render after
+ * `primeLive` then takes the figures primeLive worked out.
  */
-export const computeLiveHomeLoad = wholeHomeLoad(livePath);
+export const computeLiveHomeLoad: WholeHomeLoad = (inputs, designConditions, tightness, house = {}) => {
+  const last = lastWhole;
+  if (
+    last &&
+    last.designConditions === designConditions &&
+    last.tightness === tightness &&
+    sameHouse(last.house, house) &&
+    sameInputs(last.inputs, inputs)
+  )
+    return last.result;
+  const result = liveHomeLoad(inputs, designConditions, tightness, house);
+  lastWhole = { inputs, designConditions, tightness, house, result };
+  return result;
+};
 
 /** What the page's live figures will be asked for: the home as it stands. */
 export interface LivePrime extends LiveHomeInputs {
@@ -115,13 +150,35 @@ export interface LivePrime extends LiveHomeInputs {
 
 /**
  * Gets the engine ready for a home before its first figures render, in slices a keystroke can come
- * between: each room parsed (a few at a time), then the home's hourly work done once in a task of its own.
- * The first render then only recombines, instead of one long task doing it all (on the 100-room bench job
- * at 4× CPU that task was 110–240 ms, and a letter typed meanwhile waited for it).
+ * between (`inSlices`, about 8 ms each): each room parsed, then calc's costly part in pieces
+ * (`liveHome().prepareInPieces`: the design day, then each room's hours), then the recombination in a
+ * task of its own, whose answer the first render takes (computeLiveHomeLoad keeps it). On the 100-room
+ * bench job at 4× CPU the whole pass was one task of about 120 ms, and a letter typed meanwhile waited for
+ * all of it. Nothing is shown from here: the live parts say "Working out the loads…" until it is done.
  */
 export async function primeLive(home: LivePrime, stillWanted: () => boolean = () => true): Promise<void> {
-  const parsed = await inSlices(home.rooms, (r) => parseRoom(r.id, r.input), { stillWanted });
+  const rooms: Room[] = [];
+  const parsed = await inSlices(
+    home.rooms,
+    (r) => {
+      const room = parseRoom(r.id, r.input);
+      if (room) rooms.push(room);
+    },
+    { stillWanted },
+  );
   if (!parsed) return;
+  const conditions = home.designConditions ? parseConditions(home.designConditions) : null;
+  if (conditions && rooms.length > 0 && rooms.length <= MOST_ROOMS_IN_HOME) {
+    // The home exactly as computeLiveHomeLoad will give it to calc (the same parsed objects).
+    const whole: Home = {
+      ...houseOf(home.house ?? {}),
+      designConditions: conditions,
+      tightness: home.tightness,
+      rooms,
+    };
+    const worked = await inSlices(live.prepareInPieces(whole), () => undefined, { stillWanted });
+    if (!worked) return;
+  }
   await yieldToMain();
   if (!stillWanted()) return;
   computeLiveHomeLoad(home.rooms, home.designConditions, home.tightness, home.house ?? {});

@@ -26,6 +26,7 @@ import {
   type Session,
   type TestCompany,
 } from '../helpers/fixtures';
+import { pdfFonts } from '../helpers/pdf-fonts';
 import { pdfPages, pdfText } from '../helpers/pdf-text';
 import { sampleSnapshot } from '../helpers/proposal-snapshot';
 import { buildTestApp, testDatabaseUrl, type TestApp } from '../helpers/test-app';
@@ -520,6 +521,12 @@ describe('the signed copy', () => {
     expect(record).toMatch(/Option chosen/);
     expect(record).toMatch(/\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2} UTC/);
     expect(await pdfText(sealed)).toMatch(/Drawn on screen/);
+  });
+
+  it('embeds every font it uses: only Source Sans 3, no fallback Helvetica (pdffonts, page by page)', () => {
+    const fonts = pdfFonts(sealed);
+    expect(fonts.filter((f) => !f.embedded).map((f) => `${f.name} on pages ${f.pages.join(', ')}`)).toEqual([]);
+    for (const f of fonts) expect(f.name).toMatch(/^[A-Z]{6}\+SourceSans3-/);
   });
 
   it("the seal verifies with poppler's pdfsig, and fails after one byte of the signed range is changed", () => {

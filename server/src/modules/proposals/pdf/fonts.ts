@@ -19,6 +19,8 @@ import { Font as FontFile, type FontEditor } from 'fonteditor-core';
  */
 
 const SUBSETS = ['latin', 'latin-ext', 'vietnamese', 'greek', 'cyrillic', 'greek-ext', 'cyrillic-ext'] as const;
+/** Tab, line feed and carriage return: given an empty glyph so react-pdf never falls back to Helvetica for them. */
+const CONTROL_CODE_POINTS = [0x09, 0x0a, 0x0d] as const;
 export const FONT_WEIGHTS = { regular: 400, semibold: 600, bold: 700 } as const;
 
 /** The `fontFamily` every text of the proposal uses. */
@@ -54,6 +56,21 @@ export function mergedFace(weight: number, dir = filesDir()): Buffer {
       ttf.glyf.push({ ...glyph, unicode: fresh });
     }
   }
+  // A line break (or tab) inside a text is a character too: react-pdf looks it up in the font like any other and,
+  // where the font has no glyph for it, sets that character in its fallback, the standard Helvetica, which is
+  // then referenced without being embedded. An empty glyph with no width for the control characters keeps every
+  // character of the proposal in this one embedded face (react-pdf breaks the line there; nothing is drawn).
+  ttf.glyf.push({
+    contours: [],
+    xMin: 0,
+    yMin: 0,
+    xMax: 0,
+    yMax: 0,
+    unicode: [...CONTROL_CODE_POINTS],
+    advanceWidth: 0,
+    leftSideBearing: 0,
+    name: 'controls',
+  });
   base.set(ttf);
   return base.write({ type: 'ttf', toBuffer: true, kerning: true, hinting: false });
 }

@@ -25,3 +25,4 @@ export * from './proposal-link';
 export * from './after-signing';
 export * from './proposal-details';
 export * from './signing';
+export * from './commissioning';

@@ -19,6 +19,8 @@ export const JOB_OWNER_ROLES = ['salesperson', 'estimator', 'owner'] as const sa
 export const OWNER_ROLES = ['owner'] as const satisfies readonly Role[];
 /** Who may be assigned to a job as its installer. */
 export const INSTALLER_ROLES = ['installer'] as const satisfies readonly Role[];
+/** Who opens and fills a job's commissioning record (issue 15): the installer and the office; never a salesperson. */
+export const COMMISSIONING_ROLES = ['owner', 'estimator', 'installer'] as const satisfies readonly Role[];
 /** Who reads the price book's settings (tax; the sell rule only the office): everyone who sells. */
 export const PRICE_SETTINGS_ROLES = ['owner', 'estimator', 'salesperson'] as const satisfies readonly Role[];
 

@@ -29,6 +29,11 @@ import { proposalRoutes } from './proposals/proposal.routes';
 import { customerProposalRoutes, linkOpenRoutes, proposalLinkRoutes } from './proposal-links/proposal-link.routes';
 import { customerAfterSigningRoutes, officeCancellationRoutes } from './cancellations/cancellation.routes';
 import { officeSigningRoutes, signingRoutes } from './signing/signing.routes';
+import {
+  certificationRoutes,
+  commissioningPolicyRoutes,
+  commissioningRoutes,
+} from './commissioning/commissioning.routes';
 
 /** A module's routes under /api<prefix> (tests add their own through createApp's extras). */
 export type ModuleMount = readonly [prefix: string, register: (api: ApiRouter) => void];
@@ -86,6 +91,9 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/jobs', proposalLinkRoutes);
   mount('/jobs', officeCancellationRoutes);
   mount('/jobs', officeSigningRoutes);
+  mount('/jobs', commissioningRoutes);
+  mount('/company', commissioningPolicyRoutes);
+  mount('/me', certificationRoutes);
   mount('/company-data', companyDataRoutes);
   mount('/proposals', paymentRoutes);
   mount('/proposals', customerProposalRoutes);

@@ -12,6 +12,7 @@ import { DesignOptionSchema } from '../modules/desk/option.entity';
 import { ProposalEventSchema, ProposalSchema, ProposalVersionSchema } from '../modules/proposals/proposal.entity';
 import { CompanyLossReasonsSchema } from '../modules/jobs/loss-reasons.entity';
 import { PaymentSchema } from '../modules/payments/payment.entity';
+import { JobAssignmentSchema } from '../modules/install/assignment.entity';
 import { ProposalLinkSchema } from '../modules/proposal-links/proposal-link.entity';
 import {
   CompanyDataChangeSchema,
@@ -42,4 +43,5 @@ export const entities = [
   PaymentSchema,
   CompanyLossReasonsSchema,
   ProposalLinkSchema,
+  JobAssignmentSchema,
 ];

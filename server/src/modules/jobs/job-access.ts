@@ -1,4 +1,4 @@
-import type { FilterQuery } from '@mikro-orm/core';
+import { raw, type FilterQuery } from '@mikro-orm/core';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { NotFoundError } from '../../lib/errors';
 import type { Actor } from '../../lib/route';
@@ -7,21 +7,41 @@ import { JobSchema, type Job } from './job.entity';
 
 /**
  * Which jobs a person may see: estimators and owners the company's, a salesperson the
- * jobs they own, an installer the jobs assigned to them. Anything else answers 404.
+ * jobs they own, an installer the jobs assigned to them (the job details' installer, or a scheduled
+ * `job_assignment` row of issue 15). Anything else answers 404.
  */
 export function jobScope(actor: Actor): FilterQuery<Job> {
-  const own = ownJobsBy(actor);
-  return own ? { company: actor.companyId, [own.property]: actor.userId } : { company: actor.companyId };
+  if (actor.role === 'salesperson') return { company: actor.companyId, salesperson: actor.userId };
+  if (actor.role === 'installer')
+    return {
+      company: actor.companyId,
+      $or: [
+        { assignedInstaller: actor.userId },
+        {
+          [raw(
+            (alias: string) =>
+              `exists (select 1 from "job_assignment" ja where ja."job_id" = ${alias}."id" and ja."user_id" = ?)`,
+            [actor.userId],
+          )]: true,
+        },
+      ],
+    };
+  return { company: actor.companyId };
 }
 
 /**
- * The one rule behind jobScope() and its SQL twin scopeSql(): which of a job's people a role is limited
- * to (null: the whole company's jobs), as the entity's property and its column.
+ * jobScope() as SQL over the job aliased `j` (the same rule; job-reads.ts and every plain-SQL read use it).
  */
-export function ownJobsBy(actor: Actor): { property: 'salesperson' | 'assignedInstaller'; column: string } | null {
-  if (actor.role === 'salesperson') return { property: 'salesperson', column: 'salesperson_id' };
-  if (actor.role === 'installer') return { property: 'assignedInstaller', column: 'assigned_installer_id' };
-  return null;
+export function jobScopeSql(actor: Actor): { sql: string; params: unknown[] } {
+  if (actor.role === 'salesperson')
+    return { sql: 'j.company_id = ? and j."salesperson_id" = ?', params: [actor.companyId, actor.userId] };
+  if (actor.role === 'installer')
+    return {
+      sql: `j.company_id = ? and (j."assigned_installer_id" = ?
+        or exists (select 1 from "job_assignment" ja where ja."job_id" = j."id" and ja."user_id" = ?))`,
+      params: [actor.companyId, actor.userId, actor.userId],
+    };
+  return { sql: 'j.company_id = ?', params: [actor.companyId] };
 }
 
 export const JOB_POPULATE = ['customer', 'salesperson', 'assignedInstaller'] as const;

@@ -6,7 +6,7 @@ import { likePattern } from '../customers/customer.schema';
 import type { DesignSources, JobStatus } from '@contract';
 import type { JobView } from './job.presenter';
 import type { ListJobsQuery } from './job.schema';
-import { ownJobsBy } from './job-access';
+import { jobScopeSql } from './job-access';
 
 /**
  * Reads of jobs for the hot paths (the jobs list, the walk-through's rooms and loads): plain SQL,
@@ -52,12 +52,9 @@ const JOB_COLUMNS = `j.id, j.status, j.street, j.unit, j.city, j.region, j.posta
 const JOB_FROM = `from "job" j join "customer" c on c.id = j.customer_id join "app_user" s on s.id = j.salesperson_id
   left join "app_user" i on i.id = j.assigned_installer_id`;
 
-/** The scope of jobScope() as SQL (the same rule, ownJobsBy): the company's, the salesperson's own, the installer's assigned. */
+/** The scope of jobScope() as SQL (job-access.ts): the company's, the salesperson's own, the installer's assigned. */
 export function scopeSql(actor: Actor): { sql: string; params: unknown[] } {
-  const own = ownJobsBy(actor);
-  return own
-    ? { sql: `j.company_id = ? and j."${own.column}" = ?`, params: [actor.companyId, actor.userId] }
-    : { sql: 'j.company_id = ?', params: [actor.companyId] };
+  return jobScopeSql(actor);
 }
 
 const date = (d: Date | string) => (d instanceof Date ? d : new Date(d));

@@ -165,6 +165,51 @@ describe('the proposal screen', () => {
     );
   });
 
+  it('a signed version: no “Issue version 3”, the reason in the server’s words, no way to the desk offered as if there were', async () => {
+    const reason =
+      'Version 2 was signed on December 4, 2026 by Rowan Quell, and a signed contract is not changed here: a change after signing is agreed with the customer outside this proposal.';
+    mockFetch({
+      [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'won', hasProposal: true }) }),
+      [`GET ${base}`]: json(200, {
+        ...two('ready'),
+        canIssue: {
+          ok: false,
+          reason,
+          signed: { versionNumber: 2, signedOn: '2026-12-04', signerName: 'Rowan Quell' },
+        },
+      }),
+      [`GET ${base}/links`]: links,
+      [`GET ${base}/versions/1/diff/2`]: json(200, { from: 1, to: 2, changes: [] }),
+    });
+    renderPage('estimator');
+    const panel = await screen.findByRole('region', { name: 'Signed' });
+    expect(panel).toHaveTextContent('Version 2 is signed: no new version is issued.');
+    expect(panel).toHaveTextContent(reason);
+    expect(screen.queryByRole('button', { name: /Issue version/ })).toBeNull();
+    expect(within(panel).queryByRole('link', { name: 'Open the desk' })).toBeNull();
+  });
+
+  it('reads in the phone’s order: issue, versions, the PDF, sending, what changed, the audit trail last', async () => {
+    mockFetch({
+      [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'design', hasProposal: true }) }),
+      [`GET ${base}`]: json(200, two('ready')),
+      [`GET ${base}/links`]: links,
+      [`GET ${base}/versions/1/diff/2`]: json(200, { from: 1, to: 2, changes: [] }),
+    });
+    renderPage('estimator');
+    await screen.findByRole('region', { name: 'Send to the customer' });
+    // The DOM order is the one-column phone order (and so a screen reader's); from lg the PDF moves right.
+    const names = screen.getAllByRole('heading', { level: 2 }).map((h) => h.textContent);
+    expect(names).toEqual([
+      'Issue a new version',
+      'Versions',
+      'PDF of version 2',
+      'Send to the customer',
+      'What changed',
+      'What happened, in order',
+    ]);
+  });
+
   it('a salesperson reads it without issuing or the PDF; an installer is turned away before anything is asked', async () => {
     mockFetch({
       [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'design', hasProposal: true }) }),

@@ -275,15 +275,8 @@ describe('opening the link', () => {
       .set('If-Match', `"${first.version}"`)
       .send({ name: 'Essential plus' });
     expect(changed.status, JSON.stringify(changed.body)).toBe(200);
-    // Sent, the job is proposed; to revise it the estimator takes it back to design.
-    const job = await estimator.agent.get(`/api/jobs/${jobId}`);
-    expect(job.body.job.status).toBe('proposed');
-    const back = await estimator.agent
-      .patch(`/api/jobs/${jobId}`)
-      .set('X-CSRF-Token', estimator.csrf)
-      .set('If-Match', `"${job.body.job.version}"`)
-      .send({ status: 'design' });
-    expect(back.status, JSON.stringify(back.body)).toBe(200);
+    // Sent, the job is proposed; the estimator marks it ready again and issues version 2 without a detour.
+    expect((await estimator.agent.get(`/api/jobs/${jobId}`)).body.job.status).toBe('proposed');
     const ready = await post(estimator, `/api/jobs/${jobId}/ready`).send({ sizingOverride: { reason: REASON } });
     expect(ready.status, JSON.stringify(ready.body)).toBe(200);
     const issued = await post(estimator, `/api/jobs/${jobId}/proposal/versions`).send();
@@ -294,7 +287,7 @@ describe('opening the link', () => {
     expect(view.version.number).toBe(2);
     expect(view.changes?.sinceNumber).toBe(1);
     expect(view.changes?.sentences).toContain('Option “Essential plus”: name “Essential” → “Essential plus”.');
-    // Sending the new version moves the job to proposed again.
+    // Sending the new version keeps the job proposed.
     expect((await estimator.agent.get(`/api/jobs/${jobId}`)).body.job.status).toBe('proposed');
   });
 });

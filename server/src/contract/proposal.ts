@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { formatUsDate } from './dates';
 
 /**
  * Proposals (issue 14): the frozen snapshot a version holds, and the records the proposal routes answer
@@ -229,7 +230,15 @@ export const proposalResponse = z.object({
   /** Whether a version may be issued now by this person, and if not, why. */
   canIssue: z.discriminatedUnion('ok', [
     z.object({ ok: z.literal(true) }),
-    z.object({ ok: z.literal(false), reason: z.string() }),
+    z.object({
+      ok: z.literal(false),
+      reason: z.string(),
+      /**
+       * Set when the refusal is a signed version not cancelled: a signed contract is not revised here
+       * (the lead's decision for issue 14). The screen says so and offers no "Issue version N+1".
+       */
+      signed: z.object({ versionNumber: z.number().int(), signedOn: z.string(), signerName: z.string() }).optional(),
+    }),
   ]),
   proposal: z
     .object({
@@ -282,4 +291,7 @@ export const PROPOSAL_MESSAGES = {
   notReady:
     'Mark the job ready to propose on the desk first: a proposal is issued only from a job the office has reviewed.',
   noOptions: 'The job has no priced option to propose.',
+  /** The 409 while a version is signed and not cancelled (issue 14: a signed contract is not revised). */
+  signed: (versionNumber: number, signedOn: string, signerName: string) =>
+    `Version ${versionNumber} was signed on ${formatUsDate(signedOn)} by ${signerName}, and a signed contract is not changed here: a change after signing is agreed with the customer outside this proposal. If the buyer cancels within the cooling-off window, the proposal can be revised and issued again.`,
 } as const;

@@ -2,6 +2,7 @@ import { isDeepStrictEqual } from 'node:util';
 import {
   DESK_MESSAGES,
   MAX_OPTIONS,
+  PROPOSAL_MESSAGES,
   mayDecideDiscount,
   mayEditTakeoff,
   mayMarkReady,
@@ -27,6 +28,7 @@ import type { ServiceContext } from '../../lib/service-context';
 import { assertVersion } from '../../lib/version-lock';
 import { CompanySchema } from '../companies/company.entity';
 import type { Job } from '../jobs/job.entity';
+import { liveSignature } from '../proposals/live-signature';
 import { UserSchema } from '../users/user.entity';
 import { computeOption, modelKeysOf, type ComputedOption } from './desk-compute';
 import {
@@ -488,6 +490,14 @@ export async function reviewOption(
 const isSizing = (b: BlockerRecord) => b.code === 'sizing-outside-range';
 
 /**
+ * Where a job may be marked ready to propose: in design, and again once proposed (a revision: the estimator
+ * changes the desk, marks it ready and issues version N+1 while the job stays proposed) or lost (after the
+ * buyer cancelled, or the office marked it lost; the next send moves it to proposed). Not won or
+ * installed: that sale is settled. A signed version not cancelled refuses it first (live-signature.ts).
+ */
+export const READY_FROM: readonly Job['status'][] = ['design', 'proposed', 'lost'];
+
+/**
  * Marks the job ready to propose, or refuses with every reason (422, the blockers listed). Units outside
  * their sizing range hold it unless the office gives the reason to propose them anyway; that reason is
  * kept with the mark (who, when, the units it covers) and goes with it.
@@ -501,10 +511,16 @@ export async function markReady(
     throw new ForbiddenError('Only an estimator or the owner marks a job ready to propose.');
   const view = await getDeskToChange(ctx, jobId);
   const { job } = view.desk;
-  if (job.status !== 'design')
-    throw new UnprocessableError(`A job is marked ready to propose while in design; this one is ${job.status}.`, {
-      errors: [{ path: 'status', message: 'The job is not in design.' }],
-    });
+  const signed = await liveSignature(ctx.em, ctx.actor.companyId, job.id);
+  if (signed) {
+    const message = PROPOSAL_MESSAGES.signed(signed.versionNumber, signed.signedOn, signed.signerName);
+    throw new UnprocessableError(message, { errors: [{ path: 'status', message }], signed });
+  }
+  if (!READY_FROM.includes(job.status))
+    throw new UnprocessableError(
+      `A job is marked ready to propose while in design, proposed or lost; this one is ${job.status}.`,
+      { errors: [{ path: 'status', message: `The job is ${job.status}.` }] },
+    );
   const sizing = view.blockers.filter(isSizing);
   const reason = body.sizingOverride?.reason;
   const hard = view.blockers.filter((b) => !isSizing(b));

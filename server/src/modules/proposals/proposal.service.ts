@@ -22,6 +22,7 @@ import { proposalCompanyPart } from '../company-settings/proposal-details.servic
 import { getDesk } from '../desk/desk.service';
 import { findJob } from '../jobs/job-access';
 import { UserSchema } from '../users/user.entity';
+import { liveSignature, type LiveSignature } from './live-signature';
 import { buildSnapshot, CALC_VERSION } from './snapshot';
 import {
   ProposalEventSchema,
@@ -47,9 +48,27 @@ export const snapshotSha256 = (snapshot: unknown): string =>
 /** Called inside the issuing transaction once the version and its events are written (the PDF task is added here). */
 export type OnIssued = (tx: EntityManager, version: ProposalVersion) => Promise<void>;
 
+type IssueRefusal = { reason: string; signed?: LiveSignature };
+
 /** Why this job cannot be issued now (for the 409 and the screen), or null when it can. */
-function whyNot(job: DeskJobState, blockers: readonly BlockerRecord[], role: Role): string | null {
-  if (!isOfficeRole(role)) return 'Only an estimator or the owner issues a proposal.';
+function whyNot(
+  job: DeskJobState,
+  blockers: readonly BlockerRecord[],
+  role: Role,
+  signed: LiveSignature | null,
+): IssueRefusal | null {
+  if (!isOfficeRole(role)) return { reason: 'Only an estimator or the owner issues a proposal.' };
+  if (signed)
+    return {
+      reason: PROPOSAL_MESSAGES.signed(signed.versionNumber, signed.signedOn, signed.signerName),
+      signed,
+    };
+  const why = whyNotReady(job, blockers);
+  return why ? { reason: why } : null;
+}
+
+/** The desk's part: marked ready, and nothing but reasoned sizing blocks it. */
+function whyNotReady(job: DeskJobState, blockers: readonly BlockerRecord[]): string | null {
   if (!job.readyAt) return PROPOSAL_MESSAGES.notReady;
   // Units outside their sizing range pass only with the office's reason, given when it marked the job ready.
   const left = blockers.filter((b) => !(b.code === 'sizing-outside-range' && job.readyOverride));
@@ -72,8 +91,8 @@ export async function issueVersion(ctx: ServiceContext, jobId: string, onIssued?
     await tx.execute('select id from "job" where id = ? for update', [job.id]);
     await tx.refresh(job);
     const desk = await getDesk(c, job.id);
-    const why = whyNot(job, desk.blockers, ctx.actor.role);
-    if (why) throw new ConflictError(why);
+    const why = whyNot(job, desk.blockers, ctx.actor.role, await liveSignature(tx, ctx.actor.companyId, job.id));
+    if (why) throw new ConflictError(why.reason, why.signed ? { signed: why.signed } : {});
     const now = ctx.clock.now();
     const company = await proposalCompanyPart(tx, ctx.actor.companyId);
     const issuer = await tx.findOneOrFail(UserSchema, ctx.actor.userId);
@@ -188,8 +207,11 @@ async function findProposal(ctx: ServiceContext, jobId: string): Promise<{ jobId
 export async function getProposal(ctx: ServiceContext, jobId: string): Promise<ProposalResponse> {
   const { proposal } = await findProposal(ctx, jobId);
   const desk = await getDesk(ctx, jobId);
-  const why = whyNot(desk.desk.job, desk.blockers, ctx.actor.role);
-  const canIssue = why ? ({ ok: false, reason: why } as const) : ({ ok: true } as const);
+  const live = proposal ? await liveSignature(ctx.em, ctx.actor.companyId, desk.desk.job.id) : null;
+  const why = whyNot(desk.desk.job, desk.blockers, ctx.actor.role, live);
+  const canIssue: ProposalResponse['canIssue'] = why
+    ? { ok: false, reason: why.reason, ...(why.signed ? { signed: why.signed } : {}) }
+    : { ok: true };
   if (!proposal) return { jobId, canIssue, proposal: null };
   const versions = await ctx.em.find(
     ProposalVersionSchema,

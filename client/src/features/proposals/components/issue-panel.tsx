@@ -18,19 +18,32 @@ export function IssuePanel({ jobId, data }: { jobId: string; data: ProposalRespo
   return (
     <section aria-labelledby="issue-heading" className="flex flex-col gap-3 rounded-lg border border-line bg-white p-4">
       <h2 id="issue-heading" className="text-lg font-semibold text-ink-900">
-        {current ? 'Issue a new version' : 'Issue the proposal'}
+        {data.canIssue.ok || !data.canIssue.signed
+          ? current
+            ? 'Issue a new version'
+            : 'Issue the proposal'
+          : 'Signed'}
       </h2>
-      <p className="max-w-prose text-base text-ink-950">
-        Issuing freezes what the desk shows now: the server works every figure out again from the saved rooms and
-        options and keeps it unchanged from then on.
-        {current ? ` Version ${current.number} stays readable and is marked superseded.` : ''}
-      </p>
+      {data.canIssue.ok || !data.canIssue.signed ? (
+        <p className="max-w-prose text-base text-ink-950">
+          Issuing freezes what the desk shows now: the server works every figure out again from the saved rooms and
+          options and keeps it unchanged from then on.
+          {current
+            ? ` Version ${current.number} stays readable and is marked superseded; its link stops working, so send the new one.`
+            : ''}
+        </p>
+      ) : null}
       {data.canIssue.ok ? (
         <div>
           <Button busy={issue.isPending} onClick={() => issue.mutate()}>
             Issue version {next}
           </Button>
         </div>
+      ) : data.canIssue.signed ? (
+        // A signed version not cancelled: no new version here, and no way to the desk offered as if there were.
+        <Alert tone="info" title={`Version ${data.canIssue.signed.versionNumber} is signed: no new version is issued.`}>
+          <p>{data.canIssue.reason}</p>
+        </Alert>
       ) : (
         <Alert tone="warning" title={`Version ${next} cannot be issued yet.`}>
           <p>{data.canIssue.reason}</p>

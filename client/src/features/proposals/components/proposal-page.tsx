@@ -22,6 +22,9 @@ import { VersionsList } from './versions-list';
 import { WhatChanged } from './what-changed';
 import { SendPanel } from '../send/send-panel';
 
+/** A panel of the left-hand column from lg (one column on a phone). */
+const LEFT = 'min-w-0 lg:col-start-1';
+
 export const proposalParams = z.object({ jobId: z.uuid({ message: 'That is not a job address.' }) });
 
 /**
@@ -68,41 +71,58 @@ function ProposalScreen({ jobId, viewer }: { jobId: string; viewer: Viewer }) {
           </div>
         }
       />
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
-        <div className="flex min-w-0 flex-col gap-6">
-          {mayIssueProposal(viewer.role) ? <IssuePanel jobId={jobId} data={data} /> : null}
-          {proposal && shown ? (
-            <>
+      {/*
+        One column on a phone, in the order a person there needs it (the DOM order, so a screen reader and the
+        keyboard go the same way): issue, the versions, the shown version's PDF, sending it, then what changed and
+        the audit trail last. From lg the PDF takes the right-hand column across every row; the rest stacks on
+        the left, and the last, flexible row takes up whatever the PDF is taller by, so no gap opens between
+        the left-hand panels.
+      */}
+      <div className="flex flex-col gap-6 lg:grid lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)] lg:grid-rows-[repeat(5,auto)_1fr] lg:items-start">
+        {mayIssueProposal(viewer.role) ? (
+          <div className={LEFT}>
+            <IssuePanel jobId={jobId} data={data} />
+          </div>
+        ) : null}
+        {proposal && shown ? (
+          <>
+            <div className={LEFT}>
               <VersionsList versions={versions} shown={shown.number} onShow={setPicked} />
-              {/* "Send to the customer" (send14's panel, features/proposals/send/): the office's only. */}
-              {mayIssueProposal(viewer.role) ? (
+            </div>
+            <div className="min-w-0 lg:col-start-2 lg:row-[1/-1]">
+              <PdfPanel
+                jobId={jobId}
+                version={shown}
+                failure={pdfFailure(proposal.events, shown.number)}
+                canOpen={mayOpenProposalPdf(viewer.role)}
+              />
+            </div>
+            {/* "Send to the customer" (send14's panel, features/proposals/send/): the office's only. */}
+            {mayIssueProposal(viewer.role) ? (
+              <div className={LEFT}>
                 <QueryWidgetBoundary name="sending to the customer">
                   <Suspense fallback={<Spinner label="Loading the links sent…" />}>
                     <SendPanel jobId={jobId} />
                   </Suspense>
                 </QueryWidgetBoundary>
-              ) : null}
+              </div>
+            ) : null}
+            <div className={LEFT}>
               <WhatChanged jobId={jobId} versions={versions} />
+            </div>
+            <div className={LEFT}>
               <AuditTrail events={proposal.events} />
-            </>
-          ) : (
+            </div>
+          </>
+        ) : (
+          <div className={LEFT}>
             <EmptyState title="No version issued yet">
               {mayIssueProposal(viewer.role)
                 ? 'Once the desk marks the job ready to propose, issue version 1 here.'
                 : 'The office issues the proposal once the job is ready to propose.'}
             </EmptyState>
-          )}
-        </div>
-        {proposal && shown ? (
-          <div className="min-w-0">
-            <PdfPanel
-              jobId={jobId}
-              version={shown}
-              failure={pdfFailure(proposal.events, shown.number)}
-              canOpen={mayOpenProposalPdf(viewer.role)}
-            />
           </div>
-        ) : null}
+        )}
       </div>
     </div>
   );

@@ -11,6 +11,7 @@ export * from './address-fields';
 export * from './design-conditions';
 export * from './accounts';
 export * from './records';
+export * from './records-office';
 export * from './desk';
 export * from './api-version';
 export * from './links';

@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoAccounts } from '../../fixtures/seed';
+import { HISTORY_JOB_NOTE } from '../../fixtures/sales-history-seed';
 import { login } from '../helpers/fixtures';
 import { buildTestApp, type TestApp } from '../helpers/test-app';
 
@@ -14,6 +15,7 @@ interface JobItem {
   status: string;
   salesperson: { id: string };
   designConditions: unknown;
+  notes: string;
 }
 interface RoomItem {
   input: { exposedWalls: Array<{ windows: unknown[] }> };
@@ -28,7 +30,11 @@ describe('demo data', () => {
       const s = await login(t.app, acct.email, acct.password);
       const jobs = await s.agent.get('/api/jobs');
       expect(jobs.status).toBe(200);
-      const items: JobItem[] = jobs.body.items;
+      // The sales history before this month (fixtures/sales-history-seed.ts, the owner's reports) is not the
+      // demo's current work: its jobs carry HISTORY_JOB_NOTE and come after these in the list (older).
+      const all: JobItem[] = jobs.body.items;
+      const items = all.filter((j) => j.notes !== HISTORY_JOB_NOTE);
+      expect(all.slice(0, items.length)).toEqual(items);
       expect(items.length).toBeGreaterThanOrEqual(3);
       expect(new Set(items.map((j) => j.status))).toEqual(new Set(['walkthrough', 'design']));
       let photos = 0;

@@ -27,3 +27,4 @@ export * from './after-signing';
 export * from './proposal-details';
 export * from './signing';
 export * from './commissioning';
+export * from './reports';

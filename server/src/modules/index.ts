@@ -34,6 +34,7 @@ import {
   commissioningPolicyRoutes,
   commissioningRoutes,
 } from './commissioning/commissioning.routes';
+import { reportsRoutes } from './reports/reports.routes';
 
 /** A module's routes under /api<prefix> (tests add their own through createApp's extras). */
 export type ModuleMount = readonly [prefix: string, register: (api: ApiRouter) => void];
@@ -101,5 +102,6 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/proposals', signingRoutes);
   const linkLimiter = createLinkOpenLimiter(services.config, services.sessionPool);
   mount('/links', (api) => linkOpenRoutes(api, linkLimiter));
+  mount('/reports', reportsRoutes);
   for (const [prefix, register] of extra) mount(prefix, register);
 }

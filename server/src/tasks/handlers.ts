@@ -1,7 +1,7 @@
 import { composeResetMessage } from '../modules/auth/password.service';
 import { sendAbandoned, sendMessage, type SendDeps } from '../modules/mail/mail.service';
 import { composeProposalLinkMessage, recordProposalSendFailed } from '../modules/proposal-links/proposal-link.service';
-import { refundCancelledDeposit } from '../modules/cancellations/cancellation.service';
+import { refundAbandoned, refundCancelledDeposit } from '../modules/cancellations/cancellation.service';
 import { renderAbandoned, renderVersionPdf } from '../modules/proposals/proposal-pdf.service';
 import { sealSignedProposal } from '../modules/signing/signed-pdf.service';
 import type { Services } from '../services/services';
@@ -58,12 +58,21 @@ export function taskHandlers(services: Omit<Services, 'queue'> & { queue?: Servi
 }
 
 /** What each kind writes when a try was lost with its process (services/queue.ts releaseAbandoned). */
-export function abandonedHandlers(services: Pick<Services, 'orm' | 'clock'>): AbandonedHandlers {
+export function abandonedHandlers(
+  services: Pick<Services, 'orm' | 'clock'> & { queue?: Services['queue'] },
+): AbandonedHandlers {
+  const queue = () => {
+    if (!services.queue) throw new Error('The abandoned-job handlers were given no queue.');
+    return services.queue;
+  };
   return {
     'send-email': ({ messageId }, run) =>
       sendAbandoned(services.orm.em.fork(), { failed: mailFailed(services) }, messageId, run),
     'render-proposal-pdf': ({ versionId }, run) => renderAbandoned(services, versionId, run),
-    // refund-deposit writes nothing while it runs: the next try takes it up (the refund carries an idempotency key).
+    // A refund writes nothing while it runs: the next try finishes it (same idempotency key, one refund); a lost
+    // last try is queued again, as the money is still owed.
+    'refund-deposit': ({ paymentId }, run) =>
+      refundAbandoned({ em: services.orm.em.fork(), queue: queue() }, paymentId, run),
     // seal-signed-proposal neither: its row and e-mail are written in one transaction at the end of a try.
   };
 }

@@ -260,7 +260,7 @@ export async function cancelProposal(
     // Any deposit row: the task asks the service whether the money arrived (a webhook may still be on its
     // way) and refunds it if so; a deposit never paid needs nothing.
     if (payment)
-      await deps.queue.add('refund-deposit', { paymentId: payment.id }, { jobKey: `refund:${payment.id}`, em: tx });
+      await deps.queue.add('refund-deposit', { paymentId: payment.id }, { jobKey: refundJobKey(payment.id), em: tx });
   });
 }
 
@@ -270,18 +270,47 @@ export async function cancelProposal(
  * so a retried task is one refund. A deposit that was never paid needs nothing.
  */
 export async function refundCancelledDeposit(em: EntityManager, payments: Payments, paymentId: string): Promise<void> {
+  const payment = await refundOwed(em, paymentId);
+  if (!payment) return;
+  if (payment.state !== 'succeeded') {
+    const intent = await payments.retrieve(payment.intent_id);
+    if (intent.status !== 'succeeded') return;
+  }
+  await refundDeposit(em, payments, { ...payment, state: 'succeeded' });
+}
+
+/** A cancelled version's deposit whose refund has not been asked for and recorded yet, or null. */
+async function refundOwed(em: EntityManager, paymentId: string): Promise<PaymentRow | null> {
   const rows = await em.execute<PaymentRow[]>(
     `select p.* from "payment" p join "proposal_cancellation" c on c."version_id" = p."proposal_version_id"
      where p."id" = ?`,
     [paymentId],
   );
   const payment = rows[0];
-  if (!payment || payment.state === 'refunded' || payment.refund_id) return;
-  if (payment.state !== 'succeeded') {
-    const intent = await payments.retrieve(payment.intent_id);
-    if (intent.status !== 'succeeded') return;
-  }
-  await refundDeposit(em, payments, { ...payment, state: 'succeeded' });
+  return !payment || payment.state === 'refunded' || payment.refund_id ? null : payment;
+}
+
+/** The queue's one `refund-deposit` job per deposit: adding again replaces a waiting one (graphile's job key). */
+export const refundJobKey = (paymentId: string): string => `refund:${paymentId}`;
+
+/**
+ * A refund try lost with its process (SIGKILL, out of memory; services/queue.ts releaseAbandoned). The try
+ * may have stopped before asking the payment service, or after the service made the refund and before the
+ * row recorded it: the task writes nothing until the end, so either way the next try finishes the work, and
+ * it asks with the same idempotency key `refund:<payment id>`, which makes the service answer with the first
+ * refund instead of making a second (payments.service.ts refundDeposit). On an earlier try the queue unlocks
+ * the job and it runs again at once. A lost last try would leave the buyer's money owed with no try left, so
+ * the refund is queued again under the same job key (graphile-worker retires the locked job and adds a fresh
+ * one with its tries). Nothing is queued when the refund is already recorded or no longer owed.
+ */
+export async function refundAbandoned(
+  deps: { em: EntityManager; queue: Pick<Queue, 'add'> },
+  paymentId: string,
+  run: { attempt: number; maxAttempts: number },
+): Promise<void> {
+  if (run.attempt < run.maxAttempts) return;
+  if (!(await refundOwed(deps.em, paymentId))) return;
+  await deps.queue.add('refund-deposit', { paymentId }, { jobKey: refundJobKey(paymentId) });
 }
 
 /** Whether the proposal's current version has been cancelled (a deposit is not taken after that). */

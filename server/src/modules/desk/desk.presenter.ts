@@ -11,6 +11,7 @@ import {
 } from '@contract';
 import type { OptionPrice } from '@calc';
 import type { DeskLine, OptionFigures } from './desk-compute';
+import { designAsCalcReadsIt } from './desk-design';
 import { keyOf } from './desk-read';
 import type { DeskView, OptionView } from './desk.service';
 
@@ -143,7 +144,8 @@ export function presentOption(v: OptionView, role: Role): OptionRecord {
     jobId: o.job.id,
     position: o.position,
     name: o.name,
-    design: o.design ? { ...o.design } : null,
+    // As calc reads it (defaults filled): what the GET returns saved back unchanged stores the same design.
+    design: o.design ? { ...designAsCalcReadsIt(o.design) } : null,
     pricing,
     takeoffEdits: office
       ? v.computed.edits.map((e) => ({

@@ -30,6 +30,7 @@ import { CompanySchema } from '../companies/company.entity';
 import type { Job } from '../jobs/job.entity';
 import { liveSignature } from '../proposals/live-signature';
 import { UserSchema } from '../users/user.entity';
+import { designAsCalcReadsIt } from './desk-design';
 import { computeOption, modelKeysOf, type ComputedOption } from './desk-compute';
 import {
   compute,
@@ -282,7 +283,7 @@ export async function createOption(
     job: desk.job,
     position,
     name: input.name,
-    design: source?.design ?? null,
+    design: source?.design ? designAsCalcReadsIt(source.design) : null,
     pricing: source?.pricing ?? optionPricingSchema.parse({}),
     takeoffEdits: source?.takeoffEdits ?? [],
     chosenModels: source?.chosenModels ?? {},
@@ -307,7 +308,7 @@ async function applyInputs(
   if (input.name !== undefined) option.name = input.name;
   if (input.design !== undefined) {
     option.chosenModels = checkDesign(desk, option, input.design);
-    option.design = input.design;
+    option.design = designAsCalcReadsIt(input.design);
   }
   if (input.pricing !== undefined) {
     checkPricingRights(ctx, option.pricing, input.pricing);
@@ -329,8 +330,27 @@ export async function updateOption(
   present: (v: OptionView) => unknown,
 ): Promise<OptionView> {
   return changeOption(ctx, { jobId, optionId }, version, present, (desk, option) =>
-    applyInputs(ctx, desk, option, input),
+    sameInputs(option, input) ? false : applyInputs(ctx, desk, option, input),
   );
+}
+
+/** Plain JSON values (what jsonb and the wire keep: no undefined keys), for comparing inputs. */
+const asStored = (value: unknown): unknown => (value === undefined ? undefined : JSON.parse(JSON.stringify(value)));
+
+/**
+ * Whether a PATCH asks for what the option already holds: its name, its design as calc reads it
+ * (desk-design.ts) and its pricing. Such a save changes nothing: no new version, and the job keeps its
+ * ready mark (a change would take it off), so the desk's form saving back what it read is harmless.
+ */
+function sameInputs(option: DesignOption, input: OptionInput): boolean {
+  if (input.name !== undefined && input.name !== option.name) return false;
+  if (
+    input.design !== undefined &&
+    (!option.design ||
+      !isDeepStrictEqual(asStored(designAsCalcReadsIt(input.design)), asStored(designAsCalcReadsIt(option.design))))
+  )
+    return false;
+  return input.pricing === undefined || isDeepStrictEqual(asStored(input.pricing), asStored(option.pricing));
 }
 
 export async function deleteOption(

@@ -2,6 +2,7 @@ import type { CatalogModel } from '@calc';
 import { proposalSnapshot, type ProposalSnapshot, type SnapshotOption } from '@contract';
 import type { Customer } from '../customers/customer.entity';
 import type { Job } from '../jobs/job.entity';
+import { designAsCalcReadsIt } from '../desk/desk-design';
 import type { OptionView } from '../desk/desk.service';
 import pkg from '../../../../package.json';
 
@@ -50,7 +51,8 @@ function optionOf(v: OptionView): SnapshotOption {
   const roomNames = new Map(d.loads.rooms.map((r) => [r.roomId, r.roomName]));
   const zones = new Map(d.zones.map((z) => [z.zoneKey, z]));
   const sells = new Map(f.price.lineSells.map((l) => [l.itemKey, l.sellCents]));
-  const design = v.option.design;
+  // The design as calc worked it out (defaults filled): an absent condensate run is calc's 10 ft, not 0.
+  const design = v.option.design ? designAsCalcReadsIt(v.option.design) : null;
   return {
     position: v.option.position,
     name: v.option.name,

@@ -1,5 +1,5 @@
 import { QueryClientProvider } from '@tanstack/react-query';
-import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
+import { fireEvent, render, screen, within } from '@testing-library/react';
 import type { ReactNode } from 'react';
 import { Suspense } from 'react';
 import { MemoryRouter, Route, Routes } from 'react-router-dom';
@@ -119,8 +119,8 @@ describe('the job view per role', () => {
     });
     expect(await screen.findByRole('button', { name: 'Delete this room' })).toBeInTheDocument();
     expect(screen.getByLabelText('Room name')).toHaveValue('Bedroom 2');
-    // Closed folds render their fields at the page's first idle moment (issue 11): wait for them.
-    await waitFor(() => expect(container.querySelectorAll('input').length).toBeGreaterThan(10));
+    // The room's open fields take typing (closed folds make theirs when first opened, issue 11).
+    expect(container.querySelectorAll('input').length).toBeGreaterThan(3);
     // The job's details panel is a lazily loaded chunk (issue 11): wait for the import, not a fixed second.
     fireEvent.click(await screen.findByText(/^Job details/, undefined, { timeout: 15_000 }));
     expect(await screen.findByRole('button', { name: 'Back to walk-through' })).toBeInTheDocument();

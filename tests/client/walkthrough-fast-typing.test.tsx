@@ -2,7 +2,14 @@ import { act, fireEvent, screen, waitFor, within } from '@testing-library/react'
 import { afterEach, describe, expect, it } from 'vitest';
 import { RoomEditor } from '../../client/src/features/walkthrough/components/room-editor';
 import type { WalkthroughEdit } from '../../client/src/features/walkthrough/sync/edits';
-import { bedroomInput, designConditions, JOB_ID, renderWalkthrough, roomView } from './helpers/walkthrough-harness';
+import {
+  bedroomInput,
+  designConditions,
+  JOB_ID,
+  openFolds,
+  renderWalkthrough,
+  roomView,
+} from './helpers/walkthrough-harness';
 
 /*
  * Issue 11: a keystroke re-renders only the field typed in (and what shows its value), so the walls, the
@@ -21,6 +28,8 @@ async function editor() {
     <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
     { send: async (item) => (sent.push(item.payload), { kind: 'ok', version: 3 + sent.length }) },
   );
+  // The room's folded parts (walls, windows, people) make their fields when first opened.
+  await openFolds();
   return { sent, ...view };
 }
 

@@ -16,6 +16,7 @@ import {
   designConditions,
   JOB_ID,
   jobRecord,
+  openFolds,
   renderWalkthrough,
   ROOM_ID,
   roomRecord,
@@ -31,13 +32,16 @@ const pill = () =>
   screen.getAllByRole('status').find((s) => /Saved|Saving|Offline|Not saved/.test(s.textContent ?? ''));
 
 async function editor(sent: WalkthroughEdit[], room = roomView()) {
-  return renderWalkthrough(
+  const view = await renderWalkthrough(
     <>
       <LiveSaveStatus />
       <RoomEditor jobId={JOB_ID} room={room} designConditions={designConditions} tightness="average" />
     </>,
     { send: async (item) => (sent.push(item.payload), { kind: 'ok', version: (room.version ?? 0) + sent.length }) },
   );
+  // The room's folded parts (walls, windows, people) make their fields when first opened.
+  await openFolds();
+  return view;
 }
 
 const inputOf = (e: WalkthroughEdit | undefined) => (e && e.kind === 'room-update' ? e.input : undefined);

@@ -1,7 +1,14 @@
 import { fireEvent, screen, waitFor } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { RoomEditor } from '../../client/src/features/walkthrough/components/room-editor';
-import { designConditions, JOB_ID, renderWalkthrough, ROOM_ID, roomView } from './helpers/walkthrough-harness';
+import {
+  designConditions,
+  JOB_ID,
+  openFolds,
+  renderWalkthrough,
+  ROOM_ID,
+  roomView,
+} from './helpers/walkthrough-harness';
 
 const editor = () => (
   <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />
@@ -49,6 +56,7 @@ describe('inch fields take tape-measure entry too', () => {
   it(`stores a window 3'2" wide as 38 in, keeps a plain number as inches, and asks about 36,5`, async () => {
     // 3 ft 2 in = 3 × 12 + 2 = 38 in (12 in per ft, definition).
     const { queue } = await renderWalkthrough(editor(), { online: () => false });
+    await openFolds();
     const width = screen.getByLabelText('Window width');
     fireEvent.change(width, { target: { value: `3'2"` } });
     expect(screen.getByText('= 3 ft 2 in')).toBeInTheDocument();

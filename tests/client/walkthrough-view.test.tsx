@@ -96,7 +96,8 @@ describe('adding rooms', () => {
     });
     fireEvent.click(await screen.findByRole('button', { name: 'Copy room' }));
     await waitFor(() => expect(screen.getByLabelText('Room name')).toHaveValue('Bedroom 2 (copy)'));
-    // The walls fold renders at the first idle moment after the room opens.
+    // The copied wall is complete, so it is folded to its line; its fields are made when the line is tapped.
+    fireEvent.click(await screen.findByText(/^Wall 1:/));
     expect(await screen.findAllByLabelText('Wall length')).toHaveLength(1);
 
     fireEvent.change(screen.getByLabelText('Room template'), { target: { value: 'kitchen' } });

@@ -9,6 +9,7 @@ import {
   bedroomInput,
   designConditions,
   JOB_ID,
+  openFolds,
   renderWalkthrough,
   ROOM_ID,
   roomView,
@@ -71,6 +72,7 @@ describe('room form', () => {
     await renderWalkthrough(
       <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
     );
+    await openFolds();
     const area = screen.getByLabelText('Window area');
     fireEvent.change(area, { target: { value: '100' } });
     expect(await screen.findByText('The window (100 ft²) is larger than its wall (80 ft²)')).toBeInTheDocument();
@@ -82,6 +84,7 @@ describe('room form', () => {
     await renderWalkthrough(
       <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
     );
+    await openFolds();
     // 120 in × 120 in = 100 ft²; the wall is 10 ft × 8 ft = 80 ft²
     fireEvent.change(screen.getByLabelText('Window width'), { target: { value: '120' } });
     fireEvent.change(screen.getByLabelText('Window height'), { target: { value: '120' } });
@@ -96,6 +99,7 @@ describe('room form', () => {
     await renderWalkthrough(
       <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
     );
+    await openFolds();
     fireEvent.change(screen.getByLabelText('Wall length'), { target: { value: '0' } });
     expect(await screen.findByText('Wall length must be between 1 and 200 ft')).toBeInTheDocument();
     expect(screen.getByLabelText('Window area')).not.toHaveAttribute('aria-invalid', 'true');
@@ -118,6 +122,7 @@ describe('room form', () => {
     await renderWalkthrough(
       <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
     );
+    await openFolds();
     fireEvent.click(screen.getByRole('button', { name: 'Add wall' }));
     expect(screen.getAllByLabelText('Wall length')).toHaveLength(2);
     fireEvent.click(screen.getAllByRole('button', { name: 'Add window' })[1] ?? document.body);
@@ -128,6 +133,7 @@ describe('room form', () => {
     await renderWalkthrough(
       <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
     );
+    await openFolds();
     const panel = screen.getByRole('region', { name: 'Room loads' });
     const before = roomLoad({ room: bedroomInput, designConditions, tightness: 'average' });
     expect(within(panel).getByTestId('load-sensible-gain')).toHaveTextContent(fmt(before.sensibleGain.total));
@@ -156,6 +162,7 @@ describe('a draft the schema refuses', () => {
     const first = await renderWalkthrough(
       <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
     );
+    await openFolds();
     fireEvent.change(screen.getByLabelText('Window area'), { target: { value: '100' } });
     expect(await screen.findByText('The window (100 ft²) is larger than its wall (80 ft²)')).toBeInTheDocument();
     first.unmount();
@@ -167,6 +174,7 @@ describe('a draft the schema refuses', () => {
         send: async (item) => (sent.push(item.payload), { kind: 'ok', version: 4 }),
       },
     );
+    await openFolds();
     expect(screen.getByLabelText('Window area')).toHaveValue('100');
     expect(screen.getByText(/Brought back what you were typing/)).toBeInTheDocument();
     fireEvent.change(screen.getByLabelText('Window area'), { target: { value: '20' } });
@@ -175,6 +183,7 @@ describe('a draft the schema refuses', () => {
     await renderWalkthrough(
       <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
     );
+    await openFolds();
     expect(screen.getByLabelText('Window area')).not.toHaveValue('100');
   });
 
@@ -182,6 +191,7 @@ describe('a draft the schema refuses', () => {
     const first = await renderWalkthrough(
       <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,
     );
+    await openFolds();
     fireEvent.change(screen.getByLabelText('Window area'), { target: { value: '100' } });
     first.unmount();
     await renderWalkthrough(
@@ -192,6 +202,7 @@ describe('a draft the schema refuses', () => {
         tightness="average"
       />,
     );
+    await openFolds();
     expect(screen.getByLabelText('Window area')).not.toHaveValue('100');
   });
 });

@@ -1,6 +1,6 @@
 import type { RoomInput } from '@calc';
 import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
-import { render } from '@testing-library/react';
+import { fireEvent, render, waitFor } from '@testing-library/react';
 import { Suspense, type ReactNode } from 'react';
 import { MemoryRouter } from 'react-router-dom';
 import { memoryQueueStorage, type QueueItem, type SendResult } from '../../../client/src/lib/offline/queue';
@@ -151,4 +151,22 @@ export function jobRecord(overrides: Record<string, unknown> = {}) {
     lostReason: null,
     ...overrides,
   };
+}
+
+/**
+ * Taps the line of every folded part of the room form, then of the parts that shows inside them (a wall's
+ * windows), as a person opening them would: a folded part makes its fields only when first opened (issue 11).
+ * Resolves once each opened part shows more than its line. `within`: where to look (default: the page).
+ */
+export async function openFolds(within: ParentNode = document): Promise<void> {
+  for (let round = 0; round < 4; round += 1) {
+    const closed = [...within.querySelectorAll('details:not([open])')].filter(
+      (d): d is HTMLDetailsElement => d instanceof HTMLDetailsElement && d.querySelector(':scope > summary') !== null,
+    );
+    if (closed.length === 0) return;
+    for (const d of closed) fireEvent.click(d.querySelector(':scope > summary') as HTMLElement);
+    await waitFor(() => {
+      for (const d of closed) if (d.children.length < 2) throw new Error('a folded part has not opened yet');
+    });
+  }
 }

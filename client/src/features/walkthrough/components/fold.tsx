@@ -1,5 +1,4 @@
 import { useState, type ReactNode } from 'react';
-import { useAfterIdle } from '../../../lib/use-after-idle';
 
 interface FoldProps {
   /** The one line shown folded (and above the fields when open). */
@@ -20,9 +19,11 @@ interface FoldProps {
  * phone scrolls past what is done. It starts open when incomplete, just added or wrong, and never folds
  * while a field inside shows an error; a tap on the line opens or closes it.
  *
- * A fold that starts closed renders its fields after the page's first idle moment (or at once when opened):
- * on a phone the folded walls, windows and sections were a third of the walk-through's first render, all
- * hidden, and they held the room name from taking typing (issue 11).
+ * A fold that starts closed renders its fields when first opened, and keeps them after: on a phone the folded
+ * walls, windows and sections were a third of the walk-through's first render, all hidden (issue 11). Drawn
+ * hidden after the first idle moment instead, they still cost a phone 60–145 ms of layout just as the room
+ * name took its first letter: the browser lays out a closed <details>' contents whenever something asks
+ * about its fields (its form autofill scan after each change to the page, a focus, a tap's hit test).
  */
 export function Fold({
   summary,
@@ -34,7 +35,9 @@ export function Fold({
   children,
 }: FoldProps) {
   const [open, setOpen] = useState(() => startOpen || hasError || !complete);
-  const later = useAfterIdle();
+  // Opened once: the fields stay (closing it again only hides them, as before).
+  const [opened, setOpened] = useState(open);
+  if ((open || hasError) && !opened) setOpened(true);
   return (
     <details
       open={open || hasError}
@@ -54,7 +57,7 @@ export function Fold({
         />
         {summary}
       </summary>
-      {open || hasError || later ? children : null}
+      {open || hasError || opened ? children : null}
     </details>
   );
 }

@@ -64,8 +64,8 @@ export function WalkthroughView({
   const viewer = useViewer();
   // The folded job details come once the rooms can be typed into (they load a chunk and fetch the customer and staff).
   const detailsNow = useAfterIdle();
-  // The design conditions' form (a fold of its own, closed once they are entered) renders when opened or
-  // once the rooms take typing: closed, it was a quarter of the page's first render (issue 11).
+  // The design conditions' form (a fold of its own, closed once they are entered) renders when first opened:
+  // closed, it was a quarter of the page's first render (issue 11).
   const [designOpen, setDesignOpen] = useState(() => job.designConditions === null);
   const current = rooms.find((r) => r.id === selected) ?? rooms[0] ?? null;
   const conflict = state.conflict && state.conflict.payload.jobId === job.id ? state.conflict : null;
@@ -169,12 +169,16 @@ export function WalkthroughView({
         <details
           className="rounded-lg border border-line bg-white p-4"
           open={job.designConditions === null}
-          onToggle={(e) => setDesignOpen(e.currentTarget.open)}
+          // Made when first opened and kept (closing only hides it): a form drawn hidden still costs a phone
+          // layout whenever the browser looks at its fields (issue 11).
+          onToggle={(e) => {
+            if (e.currentTarget.open) setDesignOpen(true);
+          }}
         >
           <summary className="min-h-touch cursor-pointer text-lg font-semibold text-ink-900">
             Site design conditions
           </summary>
-          {designOpen || detailsNow || job.designConditions === null ? (
+          {designOpen || job.designConditions === null ? (
             <QueryWidgetBoundary name="the design conditions">
               <DesignConditionsForm
                 key={`${job.id}:${revision}`}

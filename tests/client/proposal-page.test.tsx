@@ -189,6 +189,31 @@ describe('the proposal screen', () => {
     expect(within(panel).queryByRole('link', { name: 'Open the desk' })).toBeNull();
   });
 
+  it('marked ready before the current version was issued: “send that one”, and “Issue version 3” is the quieter button', async () => {
+    const job = (readyToProposeAt: string) =>
+      json(200, { job: jobRecord({ status: 'design', hasProposal: true, readyToProposeAt }) });
+    const common = {
+      [`GET ${base}`]: json(200, two('ready')),
+      [`GET ${base}/links`]: links,
+      [`GET ${base}/versions/1/diff/2`]: json(200, { from: 1, to: 2, changes: [] }),
+    };
+    // Version 2 was issued on 2 December 15:00 UTC; the mark is from the 1st.
+    mockFetch({ [`GET /api/jobs/${JOB_ID}`]: job('2026-12-01T10:00:00.000Z'), ...common });
+    const view = renderPage('estimator');
+    const button = await screen.findByRole('button', { name: 'Issue version 3' });
+    expect(
+      screen.getByText(/^Nothing on the desk has changed since version 2 was issued: send that one\./),
+    ).toBeVisible();
+    expect(button.className).toMatch(/bg-white/);
+    view.unmount();
+
+    // Marked again after a change on the 3rd: the new version is the thing to do.
+    mockFetch({ [`GET /api/jobs/${JOB_ID}`]: job('2026-12-03T10:00:00.000Z'), ...common });
+    renderPage('estimator');
+    expect((await screen.findByRole('button', { name: 'Issue version 3' })).className).toMatch(/bg-ink-800/);
+    expect(screen.queryByText(/^Nothing on the desk has changed/)).toBeNull();
+  });
+
   it('reads in the phone’s order: issue, versions, the PDF, sending, what changed, the audit trail last', async () => {
     mockFetch({
       [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'design', hasProposal: true }) }),

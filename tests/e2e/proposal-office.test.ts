@@ -129,6 +129,17 @@ describe('the office’s proposal screen', () => {
       .getByRole('region', { name: `PDF of version ${second}` })
       .getByRole('link', { name: 'Download the PDF' })
       .waitFor();
+    // On a phone the shown version's PDF comes before sending it and the audit trail is last.
+    const top = async (name: string) =>
+      (await page.getByRole('heading', { level: 2, name, exact: true }).boundingBox())?.y ?? Number.NaN;
+    const order = [
+      await top('Versions'),
+      await top(`PDF of version ${second}`),
+      await top('Send to the customer'),
+      await top('What changed'),
+      await top('What happened, in order'),
+    ];
+    expect(order).toEqual([...order].sort((x, y) => x - y));
     await page.screenshot({ path: `${SHOTS}/proposal-office-375.png`, fullPage: true });
     expect(await axeViolations(page)).toEqual([]);
     await context.close();

@@ -26,33 +26,48 @@ export const LOSS_REASONS_MAX = 20;
 const sameReason = (a: string, b: string) =>
   a.trim().toLocaleLowerCase('en-US') === b.trim().toLocaleLowerCase('en-US');
 
+/** One reason as the owner types it: one line of text, trimmed, 1–80 characters. */
+export const lossReasonText = z
+  .string({ message: 'A reason is text.' })
+  .trim()
+  .min(1, { message: 'A reason cannot be empty.' })
+  .max(LOSS_REASON_MAX, { message: `A reason is at most ${LOSS_REASON_MAX} characters.` })
+  .refine((s) => ![...s].some((ch) => ch.charCodeAt(0) < 32 || ch.charCodeAt(0) === 127), {
+    message: 'A reason is one line of text.',
+  });
+
+export const LOSS_REASONS_MESSAGES = {
+  none: 'Keep at least one reason, so a job can be marked lost.',
+  tooMany: `At most ${LOSS_REASONS_MAX} reasons.`,
+  system: `“${CANCELLED_BY_BUYER}” is kept for cancellations the system records; choose other words.`,
+  twice: (r: string) => `“${r}” is on the list twice.`,
+} as const;
+
+/**
+ * What is wrong across the list (each problem at the position of the reason it is about): the system's own
+ * reason typed by hand, or the same words twice (ignoring case and outer spaces; the later one is named).
+ * The server's schema and the settings screen's form both use it, so they say the same thing.
+ */
+export function lossReasonListProblems(list: readonly string[]): Array<{ index: number; message: string }> {
+  const out: Array<{ index: number; message: string }> = [];
+  list.forEach((r, i) => {
+    if (r.trim() === '') return;
+    if (sameReason(r, CANCELLED_BY_BUYER)) out.push({ index: i, message: LOSS_REASONS_MESSAGES.system });
+    else if (list.findIndex((o) => sameReason(o, r)) < i)
+      out.push({ index: i, message: LOSS_REASONS_MESSAGES.twice(r.trim()) });
+  });
+  return out;
+}
+
 /** What the owner sends: the whole list, in the order to offer it. */
 export const lossReasonsInput = z.strictObject({
   reasons: z
-    .array(
-      z
-        .string({ message: 'A reason is text.' })
-        .trim()
-        .min(1, { message: 'A reason cannot be empty.' })
-        .max(LOSS_REASON_MAX, { message: `A reason is at most ${LOSS_REASON_MAX} characters.` })
-        .refine((s) => ![...s].some((ch) => ch.charCodeAt(0) < 32 || ch.charCodeAt(0) === 127), {
-          message: 'A reason is one line of text.',
-        }),
-      { message: 'Send the reasons as a list.' },
-    )
-    .min(1, { message: 'Keep at least one reason, so a job can be marked lost.' })
-    .max(LOSS_REASONS_MAX, { message: `At most ${LOSS_REASONS_MAX} reasons.` })
+    .array(lossReasonText, { message: 'Send the reasons as a list.' })
+    .min(1, { message: LOSS_REASONS_MESSAGES.none })
+    .max(LOSS_REASONS_MAX, { message: LOSS_REASONS_MESSAGES.tooMany })
     .superRefine((list, ctx) => {
-      list.forEach((r, i) => {
-        if (sameReason(r, CANCELLED_BY_BUYER))
-          ctx.addIssue({
-            code: 'custom',
-            path: [i],
-            message: `“${CANCELLED_BY_BUYER}” is kept for cancellations the system records; choose other words.`,
-          });
-        else if (list.findIndex((o) => sameReason(o, r)) < i)
-          ctx.addIssue({ code: 'custom', path: [i], message: `“${r}” is on the list twice.` });
-      });
+      for (const p of lossReasonListProblems(list))
+        ctx.addIssue({ code: 'custom', path: [p.index], message: p.message });
     }),
 });
 export type LossReasonsInput = z.output<typeof lossReasonsInput>;

@@ -3,10 +3,11 @@ import type { LoaderFunctionArgs } from 'react-router-dom';
 import { QueryWidgetBoundary } from '../../components/errors/query-widget-boundary';
 import { Card } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
-import { companySettingsQueryOptions } from '../../entities/job/queries';
+import { companySettingsQueryOptions, lossReasonsQueryOptions } from '../../entities/job/queries';
 import { DesignDefaultsForm } from '../../features/company-settings/components/design-defaults-form';
 import { proposalDetailsQueryOptions } from '../../features/company-settings/api/proposal-details';
 import { LogoField } from '../../features/company-settings/components/logo-field';
+import { LossReasonsForm } from '../../features/company-settings/components/loss-reasons-form';
 import { ProposalDetailsForm } from '../../features/company-settings/components/proposal-details-form';
 import { UnitSystemForm } from '../../features/company-settings/components/unit-system-form';
 import { requireArea } from '../guards';
@@ -25,6 +26,8 @@ export const clientLoader =
     // What every proposal carries: read while the page loads; its cards wait for it on their own.
     const details = proposalDetailsQueryOptions();
     if (onlineManager.isOnline()) void queryClient.prefetchQuery({ ...details, staleTime: 0 });
+    const reasons = lossReasonsQueryOptions();
+    if (onlineManager.isOnline()) void queryClient.prefetchQuery({ ...reasons, staleTime: 0 });
     return null;
   };
 
@@ -33,7 +36,7 @@ export default function CompanySettingsRoute() {
     <>
       <PageHeader
         title="Company settings"
-        lead="The units your people work in, the design conditions every new job starts from, and what every proposal carries. A job can still change any design value for its own site."
+        lead="The units your people work in, the design conditions every new job starts from, what every proposal carries, and the reasons a job is marked lost with. A job can still change any design value for its own site."
       />
       <div className="flex flex-col gap-6">
         <Card title="Units">
@@ -54,6 +57,11 @@ export default function CompanySettingsRoute() {
         <Card title="Logo">
           <QueryWidgetBoundary name="the logo">
             <LogoField />
+          </QueryWidgetBoundary>
+        </Card>
+        <Card title="Reasons a job is lost">
+          <QueryWidgetBoundary name="the loss reasons">
+            <LossReasonsForm />
           </QueryWidgetBoundary>
         </Card>
       </div>

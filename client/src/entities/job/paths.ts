@@ -29,3 +29,4 @@ export const roomPath = (jobId: string, roomId: string) => `${roomsPath(jobId)}/
 export const customerPath = (customerId: string) => `/api/customers/${encodeURIComponent(customerId)}`;
 export const STAFF_PATH = '/api/staff';
 export const COMPANY_SETTINGS_PATH = '/api/company/settings';
+export const LOSS_REASONS_PATH = '/api/company/loss-reasons';

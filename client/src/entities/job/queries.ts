@@ -1,7 +1,14 @@
 import { queryOptions } from '@tanstack/react-query';
-import { customerResponse, jobResponse, roomsResponse, settingsResponse, staffResponse } from '@contract';
+import {
+  customerResponse,
+  jobResponse,
+  lossReasonsResponse,
+  roomsResponse,
+  settingsResponse,
+  staffResponse,
+} from '@contract';
 import { apiFetch } from '../../lib/api-client';
-import { COMPANY_SETTINGS_PATH, customerPath, jobPath, roomsPath, STAFF_PATH } from './paths';
+import { COMPANY_SETTINGS_PATH, customerPath, jobPath, LOSS_REASONS_PATH, roomsPath, STAFF_PATH } from './paths';
 import { jobKeys } from './query-keys';
 
 /** Read queries for the job records (each parsed with the contract's schema by apiFetch). */
@@ -60,4 +67,16 @@ export const staffQueryOptions = () =>
     queryKey: jobKeys.staff(),
     queryFn: async ({ signal }) => (await apiFetch(STAFF_PATH, { schema: staffResponse, signal })).staff,
     staleTime: 5 * 60_000,
+  });
+
+/**
+ * GET /api/company/loss-reasons: the reasons a job may be marked lost with (the defaults until the owner saves).
+ * Read by the job's status moves and by the owner's list in the company settings.
+ */
+export const lossReasonsQueryOptions = () =>
+  queryOptions({
+    queryKey: jobKeys.lossReasons(),
+    queryFn: async ({ signal }) =>
+      (await apiFetch(LOSS_REASONS_PATH, { signal, schema: lossReasonsResponse })).lossReasons,
+    staleTime: 60_000,
   });

@@ -7,7 +7,7 @@ import { Spinner } from '../../../components/ui/spinner';
 import { jobStatusText, moveLabels } from '../../../entities/job/labels';
 import { errorMessage } from '../../../lib/api-error';
 import type { Viewer } from '../../../lib/viewer';
-import { lossReasonsQueryOptions } from '../api/loss-reasons';
+import { lossReasonsQueryOptions } from '../../../entities/job/queries';
 import { useMoveJobStatus } from '../api/move-job-status';
 
 /**

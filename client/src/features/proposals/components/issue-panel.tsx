@@ -10,11 +10,23 @@ import { useIssueVersion } from '../api/issue-version';
  * "Issue version N" for the office. The server says whether the job may be issued and why not (not marked
  * ready, what blocks it); the same reasons come back in a 409 if something changed meanwhile.
  */
-export function IssuePanel({ jobId, data }: { jobId: string; data: ProposalResponse }) {
+export function IssuePanel({
+  jobId,
+  data,
+  readyAt,
+}: {
+  jobId: string;
+  data: ProposalResponse;
+  /** When the desk last marked the job ready (any change takes the mark off). */
+  readyAt: string | null;
+}) {
   const issue = useIssueVersion(jobId);
   const versions = data.proposal?.versions ?? [];
   const current = versions.find((v) => v.current) ?? null;
   const next = (versions[0]?.number ?? 0) + 1;
+  // Marked ready before the current version was issued: the desk has not changed since, so issuing again is
+  // rarely what is wanted (sending is). Still offered, for a change made outside the desk (terms, details).
+  const unchanged = current !== null && readyAt !== null && Date.parse(readyAt) <= Date.parse(current.issuedAt);
   return (
     <section aria-labelledby="issue-heading" className="flex flex-col gap-3 rounded-lg border border-line bg-white p-4">
       <h2 id="issue-heading" className="text-lg font-semibold text-ink-900">
@@ -34,10 +46,18 @@ export function IssuePanel({ jobId, data }: { jobId: string; data: ProposalRespo
         </p>
       ) : null}
       {data.canIssue.ok ? (
-        <div>
-          <Button busy={issue.isPending} onClick={() => issue.mutate()}>
-            Issue version {next}
-          </Button>
+        <div className="flex flex-col gap-2">
+          {unchanged && current ? (
+            <p className="max-w-prose text-base text-ink-950">
+              Nothing on the desk has changed since version {current.number} was issued: send that one. Issue a new
+              version after a change on the desk, or to the company’s proposal details.
+            </p>
+          ) : null}
+          <div>
+            <Button variant={unchanged ? 'secondary' : 'primary'} busy={issue.isPending} onClick={() => issue.mutate()}>
+              Issue version {next}
+            </Button>
+          </div>
         </div>
       ) : data.canIssue.signed ? (
         // A signed version not cancelled: no new version here, and no way to the desk offered as if there were.

@@ -81,7 +81,7 @@ function ProposalScreen({ jobId, viewer }: { jobId: string; viewer: Viewer }) {
       <div className="flex flex-col gap-6 lg:grid lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)] lg:grid-rows-[repeat(5,auto)_1fr] lg:items-start">
         {mayIssueProposal(viewer.role) ? (
           <div className={LEFT}>
-            <IssuePanel jobId={jobId} data={data} />
+            <IssuePanel jobId={jobId} data={data} readyAt={job.readyToProposeAt ?? null} />
           </div>
         ) : null}
         {proposal && shown ? (

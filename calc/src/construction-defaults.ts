@@ -159,13 +159,47 @@ export const PEAK_IRRADIANCE_BTUH_FT2 = {
 export type CompassDirection = keyof typeof PEAK_IRRADIANCE_BTUH_FT2;
 export const IRRADIANCE_SOURCE = '[MEM: ASHRAE Fundamentals ch. 14/15 clear-sky peaks; Gaugeline simplification]';
 
-/** Interior attenuation (IAC) by interior shading. [MEM: ASHRAE ch. 15 IAC; 0.70 blinds per check 3.2] */
+/**
+ * Interior attenuation coefficient (IAC) of an interior shade drawn over the whole window: a straight line in the
+ * glazing's SHGC, IAC = c1 − c2 × SHGC (a shade cuts the sun through clear glass more than through glass that
+ * already keeps most of it out). [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 15 Table 14 (interior attenuation
+ * coefficients), as NREL's OpenStudio-HPXML fits it for ANSI/RESNET/ICC 301-2022 Addendum C
+ * (HPXMLtoOpenStudio/resources/defaults.rb, get_window_interior_shading_factors: "C1/C2 coefficients derived from
+ * ASHRAE 2021 Handbook of Fundamentals Chapter 15 Table 14"), read 5 Dec 2026. Rows used:
+ * blinds = medium blinds half open (c1 0.95, c2 0.26; half open is that source's default position for blinds),
+ * drapes = medium curtains (0.94, 0.37), shades = dark shades (0.98, 0.33 — on double clear glass, SHGC 0.67, this
+ * gives 0.76, the handbook's dark opaque roller shade whose radiant fraction 0.44 SHADED_SUN_RADIANT_FRACTION uses).]
+ * [OWN: the walk-through does not ask the colour, so blinds and drapes take the medium row and shades the dark one;
+ * the shade covers the whole window — it is chosen where it is drawn on a hot afternoon.]
+ */
 export const INTERIOR_SHADING_IAC = {
-  none: { value: 1, label: 'None', source: '[PUB: definition, no attenuation]' },
-  blinds: { value: 0.7, label: 'Blinds', source: '[MEM: ASHRAE ch. 15 IAC, light venetian blinds ≈ 0.70]' },
-  drapes: { value: 0.65, label: 'Drapes', source: '[MEM: ASHRAE ch. 15 IAC, light drapes, verify]' },
-  shades: { value: 0.8, label: 'Shades', source: '[MEM: ASHRAE ch. 15 IAC, roller shades, verify]' },
-} as const satisfies Record<string, Sourced<number>>;
+  none: { value: { c1: 1, c2: 0 }, label: 'None', source: '[PUB: definition, no attenuation]' },
+  blinds: {
+    value: { c1: 0.95, c2: 0.26 },
+    label: 'Blinds',
+    source: '[PUB: ASHRAE 2021 ch. 15 Table 14 as fitted by OpenStudio-HPXML: medium blinds, half open]',
+  },
+  drapes: {
+    value: { c1: 0.94, c2: 0.37 },
+    label: 'Drapes',
+    source: '[PUB: ASHRAE 2021 ch. 15 Table 14 as fitted by OpenStudio-HPXML: medium curtains]',
+  },
+  shades: {
+    value: { c1: 0.98, c2: 0.33 },
+    label: 'Shades',
+    source: '[PUB: ASHRAE 2021 ch. 15 Table 14 as fitted by OpenStudio-HPXML: dark shades]',
+  },
+} as const satisfies Record<string, Sourced<{ c1: number; c2: number }>>;
+
+/** The shade choices in words, for the loads page and the shade picker. */
+export const SHADE_IAC_NOTE =
+  'Interior shading IAC = c1 − c2 × the glass’s SHGC, the line fitted to ASHRAE Handbook—Fundamentals 2021 ch. 15 Table 14 in NREL’s OpenStudio-HPXML: blinds as medium blinds half open (0.95 − 0.26 × SHGC), drapes as medium curtains (0.94 − 0.37 × SHGC), shades as dark shades (0.98 − 0.33 × SHGC), each drawn over the whole window; the colour is not asked.';
+
+/** The IAC of `kind` over glass of solar heat gain coefficient `shgc` (see INTERIOR_SHADING_IAC). */
+export function interiorAttenuation(kind: keyof typeof INTERIOR_SHADING_IAC, shgc: number): number {
+  const c = INTERIOR_SHADING_IAC[kind].value;
+  return c.c1 - c.c2 * shgc;
+}
 export type InteriorShadingKey = keyof typeof INTERIOR_SHADING_IAC;
 
 /**

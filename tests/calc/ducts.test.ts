@@ -14,10 +14,21 @@ import { ranchHome } from './ranch-home';
  */
 
 /**
- * The duct wall's R in the loop below: the insulation's R + one still-air surface film, R-0.68 (ASHRAE
- * Handbook—Fundamentals 2021 ch. 26 Table 10: vertical surface, horizontal heat flow, emittance 0.90).
+ * The duct wall's R in the loop below, worked here from the source's own equations (not calc's code): Palmiter and
+ * Kruse (2006), "True R-Values of Round Residential Ductwork", as NREL's OpenStudio-HPXML writes them out
+ * (HPXMLtoOpenStudio/resources/defaults.rb, get_duct_effective_r_value, round ducts, f_rect = 0): insulation
+ * R-2.8 per inch, t = R/2.8; insulation on the inner surface R/t·(d/2)·ln(1 + 2t/d); inside film 0.3429·d^0.1974;
+ * outside film 0.667·d/(d + 2t); supply d = 6 in, return d = 14 in; bare duct R-1.7.
+ *   R-6 supply: t = 2.1429 in; 2.8 × 3 × ln(1.71429) = 4.5276; film in 0.3429 × 6^0.1974 = 0.4884;
+ *     film out 0.667 × 6/10.2857 = 0.3891 → 5.41 (the old nominal + still-air film was 6.68);
+ *   R-6 return: 2.8 × 7 × ln(1.30612) = 5.2344; 0.3429 × 14^0.1974 = 0.5773; 0.667 × 14/18.2857 = 0.5107 → 6.32;
+ *   R-8 supply: t = 2.8571; 8.4 × ln(1.95238) = 5.6200; 0.4884; 0.667 × 6/11.7143 = 0.3416 → 6.45;
+ *   R-8 return: 19.6 × ln(1.40816) = 6.7088; 0.5773; 0.667 × 14/19.7143 = 0.4737 → 7.76.
  */
-const STILL_AIR_FILM_R = 0.68;
+const TRUE_R = {
+  r6: { supply: 5.41, return: 6.32 },
+  r8: { supply: 6.45, return: 7.76 },
+} as const;
 
 // 95/75 °F summer, 10 °F winter, 75 °F / 50 % and 70 °F indoor, daily range 20 °F, sea level.
 const conditions: DesignConditionsInput = {
@@ -34,7 +45,8 @@ interface Loop {
   readonly q: number;
   readonly supplyArea: number;
   readonly returnArea: number;
-  readonly r: number;
+  readonly rSupply: number;
+  readonly rReturn: number;
   readonly fs: number;
   readonly fr: number;
   readonly indoor: number;
@@ -46,11 +58,11 @@ function delivered(loop: Loop, equipmentBtuh: number): number {
   const c = 1.08 * loop.q; // Btu/h·°F, 60 min/h × 0.075 lb/ft³ × 0.24 Btu/lb·°F (trade-facts §1)
   const n = 20000;
   let t = loop.indoor;
-  const ur = loop.returnArea / loop.r / n;
+  const ur = loop.returnArea / loop.rReturn / n;
   for (let i = 0; i < n; i += 1) t += (ur * (loop.around - t)) / c;
   t = (1 - loop.fr) * t + loop.fr * loop.around;
   t += equipmentBtuh / c;
-  const us = loop.supplyArea / loop.r / n;
+  const us = loop.supplyArea / loop.rSupply / n;
   for (let i = 0; i < n; i += 1) t += (us * (loop.around - t)) / c;
   return (1 - loop.fs) * c * (t - loop.indoor);
 }
@@ -72,7 +84,8 @@ describe('ductLoad — ASHRAE 152 delivery effectiveness, checked by an energy b
       q: 800,
       supplyArea: 405,
       returnArea: 75,
-      r: 6 + STILL_AIR_FILM_R,
+      rSupply: TRUE_R.r6.supply,
+      rReturn: TRUE_R.r6.return,
       fs: 0.1,
       fr: 0.1,
       indoor: 75,
@@ -82,6 +95,20 @@ describe('ductLoad — ASHRAE 152 delivery effectiveness, checked by an energy b
     const winter = { ...loop, indoor: 70, around: 34 };
     expect(delivered(winter, 30000 + d.heating.btuh)).toBeCloseTo(30000, -0.5);
     expect(d.cooling.deliveryEffectiveness).toBeCloseTo(20000 / (20000 + d.cooling.sensibleBtuh), 3);
+  });
+
+  it('the duct wall works at the measured round-duct R, not nominal + film (Palmiter and Kruse 2006)', () => {
+    const served = { hour: 15, sensibleBtuh: 20000, latentBtuh: 4000, heatingBtuh: 30000, floorAreaFt2: 1500 };
+    const r6 = ductLoad({ ducts: { location: 'attic', insulationR: 6 }, designConditions: conditions, served });
+    const r8 = ductLoad({ ducts: { location: 'attic', insulationR: 8 }, designConditions: conditions, served });
+    const bare = ductLoad({ ducts: { location: 'attic', insulationR: 0 }, designConditions: conditions, served });
+    expect([r6.supplyEffectiveR, r6.returnEffectiveR]).toEqual([TRUE_R.r6.supply, TRUE_R.r6.return]);
+    expect([r8.supplyEffectiveR, r8.returnEffectiveR]).toEqual([TRUE_R.r8.supply, TRUE_R.r8.return]);
+    // The source's bare-duct figure, R-1.7 ("based on ASHRAE HOF and the above paper"), both sides.
+    expect([bare.supplyEffectiveR, bare.returnEffectiveR]).toEqual([1.7, 1.7]);
+    // B = exp(−A/(1.08·Q·R)) with the supply's own R: 405 ft², 800 cfm → exp(−405/(864 × 5.41)) = 0.9170.
+    expect(r6.supplyConductionFraction).toBeCloseTo(Math.exp(-405 / (1.08 * 800 * 5.41)), 4);
+    expect(r6.returnConductionFraction).toBeCloseTo(Math.exp(-75 / (1.08 * 800 * 6.32)), 4);
   });
 
   it('return leakage from a space open to outdoor air brings outdoor moisture (moisture balance)', () => {
@@ -116,7 +143,8 @@ describe('ductLoad — ASHRAE 152 delivery effectiveness, checked by an energy b
       q: 800,
       supplyArea: 405,
       returnArea: 75,
-      r: 8.68,
+      rSupply: TRUE_R.r8.supply,
+      rReturn: TRUE_R.r8.return,
       fs: 0.1,
       fr: 0.1,
       indoor: 75,
@@ -194,7 +222,8 @@ describe('ductLoad — ASHRAE 152 delivery effectiveness, checked by an energy b
       q: d.airflowCfm,
       supplyArea: d.supplyAreaFt2,
       returnArea: d.returnAreaFt2,
-      r: 6 + STILL_AIR_FILM_R,
+      rSupply: TRUE_R.r6.supply,
+      rReturn: TRUE_R.r6.return,
       fs: 0.1,
       fr: 0.1,
       indoor: 70,

@@ -140,11 +140,20 @@ const atticDt = (() => {
   });
 })();
 
+/**
+ * Interior attenuation over the SHGC 0.30 low-e glass of these rooms: IAC = c1 − c2 × SHGC, the line NREL's
+ * OpenStudio-HPXML fits to ASHRAE Handbook—Fundamentals 2021 ch. 15 Table 14 (HPXMLtoOpenStudio/resources/defaults.rb,
+ * get_window_interior_shading_factors): blinds = medium blinds half open 0.95 − 0.26 × 0.3 = 0.872; drapes = medium
+ * curtains 0.94 − 0.37 × 0.3 = 0.829; shades = dark shades 0.98 − 0.33 × 0.3 = 0.881.
+ */
+const IAC = { blinds: 0.872, drapes: 0.829, shades: 0.881 } as const;
+
 interface HandRoom {
   walls: { dir: Dir; netFt2: number; u: number; doors?: { ft2: number; u: number }[] }[];
   /**
-   * fr: the radiant part of the sun behind the window's interior shade (beam and diffuse alike) — 0.63 for blinds
-   * and drapes [MEM], 0.44 for roller shades [PUB: ASHRAE Handbook—Fundamentals 2017 ch. 15 roller-shade row,
+   * fr: the radiant part of the sun behind the window's interior shade (beam and diffuse alike) — 0.63 for drapes
+   * [MEM], 0.71 for blinds [PUB: the louvered-shade row, reflectance 0.5, on double clear glass, FR 0.71, in the
+   * same python-hvac example], 0.44 for roller shades [PUB: ASHRAE Handbook—Fundamentals 2017 ch. 15 roller-shade row,
    * dark opaque on double clear glass, IAC 0.76 and FR 0.44, as used in python-hvac's worked example
    * (github.com/TomLXXVI/python-hvac, docs/examples/cooling_load_calc/example_10/zone_2.py); the rule that the
    * whole shaded gain takes the shade's FR from ASHRAE 2017 ch. 15 Tables 14A–14G: python-hvac
@@ -169,7 +178,7 @@ const COMPONENTS = [
 /** Each hour's rounded parts for a hand room. */
 function hand(r: HandRoom) {
   // Sun through each window: unshaded → beam wholly radiant through the solar factors, diffuse through the
-  // nonsolar ones; behind a shade → beam + diffuse, the shade's fr radiant (0.63 blinds and drapes), nonsolar factors.
+  // nonsolar ones; behind a shade → beam + diffuse, the shade's fr radiant (0.63 when not given: drapes), nonsolar factors.
   const solar = r.windows.reduce(
     (acc, w) => {
       const k = w.ft2 * w.shgc * w.iac;
@@ -236,7 +245,7 @@ const livingHand = (summerCfm: number): HandRoom => ({
     { dir: 'W', netFt2: 85, u: 0.083, doors: [{ ft2: 20, u: 0.2 }] },
   ],
   windows: [
-    { dir: 'S', ft2: 20, u: 0.3, shgc: 0.3, iac: 0.7 }, // 60 × 48 in low-e, blinds
+    { dir: 'S', ft2: 20, u: 0.3, shgc: 0.3, iac: IAC.blinds, fr: 0.71 }, // 60 × 48 in low-e, blinds
     { dir: 'W', ft2: 15, u: 0.55, shgc: 0.67, iac: 1 }, // double clear
   ],
   atticUA: 300 * 0.03,
@@ -246,7 +255,7 @@ const livingHand = (summerCfm: number): HandRoom => ({
 });
 const bedroomHand = (summerCfm: number): HandRoom => ({
   walls: [{ dir: 'N', netFt2: 96 - 12, u: 0.083 }],
-  windows: [{ dir: 'N', ft2: 12, u: 0.3, shgc: 0.3, iac: 0.65 }], // drapes
+  windows: [{ dir: 'N', ft2: 12, u: 0.3, shgc: 0.3, iac: IAC.drapes }], // drapes
   atticUA: 144 * 0.03,
   summerCfm,
   people: 2 * 238.85,
@@ -329,8 +338,8 @@ describe('worked example: three-room house, hour by hour', () => {
   });
 
   it('roller shades take their own radiant part: the kitchen’s east glass behind shades, hour by hour', () => {
-    // Same kitchen, its E low-e window behind 'Shades' (IAC 0.80 [MEM: construction-defaults]). Sun through it:
-    // beam + diffuse × 0.80, split 0.44 radiant (through the nonsolar factors) and 0.56 convective (at once)
+    // Same kitchen, its E low-e window behind 'Shades' (IAC 0.98 − 0.33 × 0.30 = 0.881, see IAC). Sun through it:
+    // beam + diffuse × 0.881, split 0.44 radiant (through the nonsolar factors) and 0.56 convective (at once)
     // [PUB: FR 0.44, ASHRAE 2017 ch. 15 dark opaque roller shade on double clear glass, via python-hvac — see fr].
     const shadedKitchen = {
       ...kitchen,
@@ -341,7 +350,7 @@ describe('worked example: three-room house, hour by hour', () => {
     };
     const k = roomLoad({ room: shadedKitchen, designConditions: conditions });
     const base = kitchenHand(leakCfm(EXPOSED.kitchen, 'summer'));
-    const withFr = (fr: number) => hand({ ...base, windows: base.windows.map((w) => ({ ...w, iac: 0.8, fr })) });
+    const withFr = (fr: number) => hand({ ...base, windows: base.windows.map((w) => ({ ...w, iac: IAC.shades, fr })) });
     const kh = withFr(0.44);
     expect(k.hourlySensibleBtuh).toEqual(kh.map((h) => h.total));
     expect(k.peakHour).toBe(peakOf(kh) + 1);

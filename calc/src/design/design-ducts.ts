@@ -274,11 +274,25 @@ export function explainDuctLoads(
       `(delivery effectiveness ${formatNumber(d.cooling.deliveryEffectiveness, 2)}); ` +
       `${btuh(d.heating.btuh)} heat loss at ${formatNumber(d.heating.surroundingsF)} °F ` +
       `(delivery effectiveness ${formatNumber(d.heating.deliveryEffectiveness, 2)}); ` +
-      `${leakageWords(d, given)}. ` +
+      `${leakageWords(d, given)}; ` +
+      `the R-${formatNumber(d.insulationR, 1, { trim: true })} insulation works as R-${formatNumber(d.supplyEffectiveR, 2, { trim: true })} on the supply and ` +
+      `R-${formatNumber(d.returnEffectiveR, 2, { trim: true })} on the return (measured round flex duct with its air films, Palmiter and Kruse 2006). ` +
       'Added to the rooms these ducts serve, so the sizing above includes them.',
     inputs: [
       ...shareInputs,
       input('Insulation', d.insulationR, 'R', `R-${formatNumber(d.insulationR, 1, { trim: true })}`),
+      input(
+        'Working R, supply (round flex, 6 in)',
+        d.supplyEffectiveR,
+        'R',
+        `R-${formatNumber(d.supplyEffectiveR, 2, { trim: true })}`,
+      ),
+      input(
+        'Working R, return (round flex, 14 in)',
+        d.returnEffectiveR,
+        'R',
+        `R-${formatNumber(d.returnEffectiveR, 2, { trim: true })}`,
+      ),
       input('Blower airflow', d.airflowCfm, 'cfm', formatQuantity(roundHalfUp(d.airflowCfm), 'cfm')),
       input('Supply leakage', d.supplyLeakageFraction, '', formatNumber(d.supplyLeakageFraction, 2)),
       input('Return leakage', d.returnLeakageFraction, '', formatNumber(d.returnLeakageFraction, 2)),

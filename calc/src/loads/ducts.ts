@@ -67,16 +67,38 @@ export function defaultDuctAreasFt2(floorAreaFt2: number, storeys: number): { su
 }
 
 /**
- * Surface film resistance added to the duct insulation R, h·ft²·°F/Btu: still air on a surface of emittance 0.90
- * with horizontal heat flow. [PUB: ASHRAE Handbook—Fundamentals 2021 ch. 26 Table 10, indoor surface resistances:
- * vertical, horizontal flow, ε 0.90 → 0.68 (horizontal surface, upward 0.61, downward 0.92) — read through a public
- * building-science note that reproduces the table.] [OWN: one still-air film stands for the duct's outside film; the
- * moving air inside adds little and is left out.] Measured "true" R-values of round flex duct run below nominal + film
- * (Palmiter and Kruse 2006, as NREL's OpenStudio-HPXML airflow.rb fits them: nominal R-6 → R-5.7 supply, R-6.3
- * return; R-8 → 6.8 / 7.8), so this term is on the low side for insulated flex duct; enter a lower insulation R
- * where the duct is known to be compressed.
+ * The duct wall's effective R, h·ft²·°F/Btu per ft² of duct surface: what a round flex duct really gives, which is
+ * less than its nominal insulation R plus films. The insulation is a cylinder around the duct, so its R on the
+ * duct's inner surface is k·(d/2)·ln(1 + 2t/d) (t = R_nominal / k thick, k = R-2.8 per inch, fibreglass); the
+ * inside film of a round duct is 0.3429·d^0.1974 and the outside film 0.667 scaled by d/(d + 2t) to the inner
+ * surface; an uninsulated duct is R-1.7. Supply ducts are taken at 6 in and return ducts at 14 in diameter.
+ * [PUB: Palmiter and Kruse (2006), "True R-Values of Round Residential Ductwork", as NREL's OpenStudio-HPXML
+ * implements it for ANSI/RESNET/ICC 301 (HPXMLtoOpenStudio/resources/defaults.rb, get_duct_effective_r_value,
+ * with these constants), read 5 Dec 2026.] [OWN: every duct outside the conditioned space is taken as round flex
+ * duct — the same source gives a rectangular duct 0.333 + R + 0.667, and we do not ask the duct's shape.]
+ * Nominal R-6 gives R-5.41 supply and R-6.32 return (nominal + the old still-air film would be 6.68).
  */
-export const DUCT_FILM_R = 0.68;
+export const DUCT_EFFECTIVE_R = {
+  uninsulatedR: 1.7,
+  insulationRPerInch: 2.8,
+  insideFilmCoefficient: 0.3429,
+  insideFilmExponent: 0.1974,
+  outsideFilmR: 0.667,
+  supplyDiameterIn: 6,
+  returnDiameterIn: 14,
+} as const;
+
+/** Effective R of a round insulated duct of `diameterIn` with nominal insulation `nominalR` (see DUCT_EFFECTIVE_R), 2 decimals. */
+export function ductEffectiveR(nominalR: number, diameterIn: number): number {
+  const k = DUCT_EFFECTIVE_R;
+  if (nominalR <= 0) return k.uninsulatedR;
+  const d = diameterIn;
+  const t = nominalR / k.insulationRPerInch;
+  const insulation = k.insulationRPerInch * (d / 2) * Math.log(1 + (2 * t) / d);
+  const inside = k.insideFilmCoefficient * d ** k.insideFilmExponent;
+  const outside = k.outsideFilmR * (d / (d + 2 * t));
+  return roundHalfUp(inside + insulation + outside, 2);
+}
 
 /** Leakage to outside the conditioned space, fraction of the blower airflow, supply and return. [TRADE: common practice, replace with a duct-leakage test where one exists] */
 export const DUCT_LEAKAGE: Readonly<
@@ -138,6 +160,9 @@ export interface DuctLoad {
   readonly supplyAreaFt2: number;
   readonly returnAreaFt2: number;
   readonly insulationR: number;
+  /** The duct wall's effective R on the supply and return sides (DUCT_EFFECTIVE_R), h·ft²·°F/Btu. */
+  readonly supplyEffectiveR: number;
+  readonly returnEffectiveR: number;
   readonly supplyLeakageFraction: number;
   readonly returnLeakageFraction: number;
   /** Conduction fractions B_s, B_r (4 decimals). */
@@ -192,9 +217,10 @@ export function ductLoadFromParsed(
     ducts.airflowCfm ??
     (DUCT_CFM_PER_TON * (coolingTotal > 0 ? coolingTotal : Math.max(0, served.heatingBtuh))) / BTUH_PER_TON;
   const cq = SENSIBLE_CONSTANT * psy.altitudeFactor * q;
-  const r = ducts.insulationR + DUCT_FILM_R;
-  const bs = cq > 0 ? Math.exp(-as / (cq * r)) : 0;
-  const br = cq > 0 ? Math.exp(-ar / (cq * r)) : 0;
+  const rs = ductEffectiveR(ducts.insulationR, DUCT_EFFECTIVE_R.supplyDiameterIn);
+  const rr = ductEffectiveR(ducts.insulationR, DUCT_EFFECTIVE_R.returnDiameterIn);
+  const bs = cq > 0 ? Math.exp(-as / (cq * rs)) : 0;
+  const br = cq > 0 ? Math.exp(-ar / (cq * rr)) : 0;
   const where = surroundings(ducts.location);
   const indoorC = psy.indoorCoolingF;
   const outdoorC = ctx.outdoorF[index] ?? psy.outdoorCoolingF;
@@ -231,6 +257,8 @@ export function ductLoadFromParsed(
     supplyAreaFt2: roundHalfUp(as, 1),
     returnAreaFt2: roundHalfUp(ar, 1),
     insulationR: ducts.insulationR,
+    supplyEffectiveR: rs,
+    returnEffectiveR: rr,
     supplyLeakageFraction: fs,
     returnLeakageFraction: fr,
     supplyConductionFraction: roundHalfUp(bs, 4),

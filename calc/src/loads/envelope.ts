@@ -5,7 +5,7 @@ import {
   DOOR_TYPES,
   FLOOR_INSULATION,
   GLAZING_TYPES,
-  INTERIOR_SHADING_IAC,
+  interiorAttenuation,
   PEAK_IRRADIANCE_BTUH_FT2,
   SLAB_EDGE,
   WALL_CONSTRUCTIONS,
@@ -97,7 +97,7 @@ export function exposedWallsLoad(room: Room, p: DesignPsychrometrics): ExposedWa
       windowsArea += a;
       glassCooling += uaDt(u, a, glassDt);
       glassHeating += uaDt(u, a, p.heatingDeltaTF);
-      solar += a * shgc * irradiance * INTERIOR_SHADING_IAC[w.interiorShading].value; // = solarGainBtuh
+      solar += a * shgc * irradiance * interiorAttenuation(w.interiorShading, shgc); // = solarGainBtuh
     }
     let doorsArea = 0;
     for (const d of wall.doors) {
@@ -144,7 +144,7 @@ export function windowsSolarLoad(room: Room): number {
         areaFt2: windowAreaFt2(w),
         shgc: windowProperties(w).shgc,
         irradiance: PEAK_IRRADIANCE_BTUH_FT2[wall.direction],
-        iac: INTERIOR_SHADING_IAC[w.interiorShading].value,
+        iac: interiorAttenuation(w.interiorShading, windowProperties(w).shgc),
       });
     }
   }

@@ -63,7 +63,7 @@ export const SOLAR_RTS_PERCENT: Readonly<Record<RtsConstruction, readonly number
  * InteriorShadingDevice, "F_rad: Radiative fraction of solar heat gain through window in combination with
  * interior shading device", citing ASHRAE Handbook—Fundamentals 2017 ch. 15 §5.2 and Tables 14A to 14G;
  * Window.solar_heat_gain applies that F_rad to beam + diffuse and 1.0 when there is no shade), read 5 Dec 2026.]
- * `sunInteriorShade` 0.63 is kept only as the from-memory stand-in for the shades whose FR was not found;
+ * `sunInteriorShade` 0.63 is kept only as the from-memory stand-in for drapes, whose FR was not found;
  * SHADED_SUN_RADIANT_FRACTION below gives each shade choice its own figure. A shade absorbs the beam and gives it
  * off as it would any other gain, so shaded glass uses the nonsolar factors.
  */
@@ -95,15 +95,19 @@ export const SHADE_KINDS: readonly ShadeKind[] = ['blinds', 'drapes', 'shades'];
  *   docs/examples/cooling_load_calc/example_10/zone_2.py: "dark opaque roller shades" on double clear glass 5a,
  *   IAC 0.76, F_rad 0.44), read 5 Dec 2026. The row's IAC agrees with the residential chapter's consolidated
  *   table (dark opaque roller shade on double clear glass 0.76, as reproduced in a public copy of ch. 17
- *   Table 14), which ties the row to the handbook. Our 'Shades' choice does not ask the colour; the dark opaque
- *   row is the published roller shade nearest its IAC 0.80.]
- * - blinds 0.63, drapes 0.63 [MEM: the stand-in above; their FR rows were not found in a public copy. The one
- *   published blind row found (python-hvac's same example: louvered shade, louver reflectance 0.5, slats at 0°,
- *   on double clear glass: IAC 0.98 at normal incidence, 0.80 at 60°, 0.89 diffuse, FR 0.71) is an open-slat
- *   blind, not the mostly closed blind our IAC 0.70 describes, so it is not adopted.]
+ *   Table 14), which ties the row to the handbook; our 'Shades' IAC is the dark-shade line of the same table,
+ *   which over double clear glass gives that 0.76 (INTERIOR_SHADING_IAC).]
+ * - blinds 0.71 [PUB: the one published blind row found, in the same example: louvered shade, louver reflectance
+ *   0.5, on double clear glass, IAC 0.98 at normal incidence, 0.80 at 60°, 0.89 diffuse, FR 0.71 (ASHRAE 2017
+ *   ch. 15 Tables 14A–14G as python-hvac's example_10 uses them), read 5 Dec 2026. It is the open-slat row; our
+ *   'Blinds' are the half-open medium blinds of INTERIOR_SHADING_IAC, whose FR was not found — this is the nearest
+ *   published blind row, chosen over the 0.63 recalled figure.]
+ * - drapes 0.63 [MEM: the stand-in above; no published drapery FR was found in a public copy (searched 5 Dec 2026:
+ *   public code and pages for ch. 15 Table 14G, draperies with "radiant fraction", ASHWAT and 1311-RP code). The
+ *   loads page and the shade picker say so.]
  */
 export const SHADED_SUN_RADIANT_FRACTION: Readonly<Record<ShadeKind, number>> = {
-  blinds: RADIANT_FRACTION.sunInteriorShade,
+  blinds: 0.71,
   drapes: RADIANT_FRACTION.sunInteriorShade,
   shades: 0.44,
 };

@@ -1,4 +1,4 @@
-import { DOOR_TYPES, GLAZING_TYPES, INTERIOR_SHADING_IAC, WALL_CONSTRUCTIONS } from '../construction-defaults';
+import { DOOR_TYPES, GLAZING_TYPES, interiorAttenuation, WALL_CONSTRUCTIONS } from '../construction-defaults';
 import { doorAreaFt2, wallAboveGradeFt2, windowAreaFt2 } from '../geometry';
 import type { Wall } from '../schemas/room';
 
@@ -169,7 +169,7 @@ export function peakDetail(w: RoomHourly, gain: LoadComponents): PeakDetail {
       acc.glass += a;
       const shgc = win.shgc ?? g.shgc;
       acc.cond += (win.uFactor ?? g.u) * a * (shgc > 0.5 ? glassOver : glassUnder);
-      const iac = INTERIOR_SHADING_IAC[win.interiorShading].value;
+      const iac = interiorAttenuation(win.interiorShading, shgc);
       const shaded = win.interiorShading === 'none' ? null : win.interiorShading;
       const k = a * shgc * iac;
       const depth = win.overhangDepthFt ?? 0;

@@ -11,7 +11,7 @@ import {
   DOOR_TYPES,
   FLOOR_INSULATION,
   GLAZING_TYPES,
-  INTERIOR_SHADING_IAC,
+  interiorAttenuation,
   WALL_CONSTRUCTIONS,
 } from '../construction-defaults';
 import { designPsychrometrics, type DesignPsychrometrics } from './conditions';
@@ -254,7 +254,7 @@ export function roomHourly(room: Room, p: DesignPsychrometrics, ctx: DesignDayCo
       openings += a;
       if (shgc > 0.5) glassUAOver += u * a;
       else glassUAUnder += u * a;
-      const iac = INTERIOR_SHADING_IAC[w.interiorShading].value;
+      const iac = interiorAttenuation(w.interiorShading, shgc);
       const shade = w.interiorShading === 'none' ? null : w.interiorShading;
       const k = a * shgc * iac;
       const depth = w.overhangDepthFt ?? 0;

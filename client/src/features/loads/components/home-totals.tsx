@@ -58,10 +58,11 @@ const DUCT_PLACE: Record<string, string> = {
 export function ductLine(d: NonNullable<HomeLoad['ducts']>): string {
   const pct = (f: number) => `${Math.round(f * 100)} %`;
   return (
-    `Ducts in ${DUCT_PLACE[d.location] ?? d.location} (R-${d.insulationR}, leakage ${pct(d.supplyLeakageFraction)} supply / ${pct(d.returnLeakageFraction)} return, ${n(d.airflowCfm)} cfm, ${n(d.supplyAreaFt2)} ft² supply): ` +
+    `Ducts in ${DUCT_PLACE[d.location] ?? d.location} (R-${d.insulationR} insulation, working as R-${d.supplyEffectiveR} supply / R-${d.returnEffectiveR} return, leakage ${pct(d.supplyLeakageFraction)} supply / ${pct(d.returnLeakageFraction)} return, ${n(d.airflowCfm)} cfm, ${n(d.supplyAreaFt2)} ft² supply): ` +
     `+${n(d.cooling.sensibleBtuh)} Btu/h sensible and +${n(d.cooling.latentBtuh)} Btu/h latent at ${hourLabel(d.cooling.hour)} (surroundings ${d.cooling.surroundingsF} °F), ` +
     `+${n(d.heating.btuh)} Btu/h heat loss (surroundings ${d.heating.surroundingsF} °F). ` +
-    `Delivery effectiveness ${d.cooling.deliveryEffectiveness.toFixed(2)} cooling, ${d.heating.deliveryEffectiveness.toFixed(2)} heating (ASHRAE Standard 152 balance).`
+    `Delivery effectiveness ${d.cooling.deliveryEffectiveness.toFixed(2)} cooling, ${d.heating.deliveryEffectiveness.toFixed(2)} heating (ASHRAE Standard 152 balance). ` +
+    `Working R: insulation wrapped round a flex duct does less than its label says, and the air films add a little, so the duct is worked at the measured round-duct R (Palmiter and Kruse 2006; 6 in supply, 14 in return).`
   );
 }
 

@@ -1,6 +1,6 @@
 import { Button } from '../../../components/ui/button';
 import { asNumber, asRecord, asString, getIn } from '../model/draft';
-import { glazingDefaults, glazingOptions, shadingOptions } from '../model/options';
+import { glazingDefaults, glazingOptions, shadingHint, shadingOptions } from '../model/options';
 import type { EditorProps } from './editor-props';
 import { NumberInput, SelectInput } from './field-kit';
 import { OpeningFields } from './opening-fields';
@@ -78,6 +78,7 @@ export function WindowFields({
             options={shadingOptions}
             onChange={(x) => set(p('interiorShading'), x)}
             error={err(p('interiorShading'))}
+            hint={shadingHint(asString(v('interiorShading'), 'none'), asNumber(v('shgc')) ?? defaults?.shgc)}
           />
           <NumberInput
             label="Overhang depth"

@@ -6,6 +6,8 @@ import {
   FLOOR_INSULATION,
   GLAZING_TYPES,
   INTERIOR_SHADING_IAC,
+  interiorAttenuation,
+  SHADED_SUN_RADIANT_FRACTION,
   WALL_CONSTRUCTIONS,
   type aboveSchema,
   type belowSchema,
@@ -53,4 +55,32 @@ export function glazingDefaults(key: string): { u: number; shgc: number; label: 
 export function doorDefault(key: string): { u: number; label: string } | null {
   const entry = Object.entries(DOOR_TYPES).find(([k]) => k === key)?.[1];
   return entry ? { u: entry.value, label: entry.label } : null;
+}
+
+/** Where each shade's figures come from, in a few words (calc: INTERIOR_SHADING_IAC, SHADED_SUN_RADIANT_FRACTION). */
+const SHADE_WORDS: Record<string, { row: string; delay: string }> = {
+  blinds: {
+    row: 'medium blinds, half open',
+    delay: 'the delay is the published open-slat blind figure',
+  },
+  drapes: {
+    row: 'medium curtains',
+    delay: 'the delay (0.63 radiant) is from memory: no published drapery figure was found',
+  },
+  shades: { row: 'dark shades', delay: 'the delay is the published dark roller-shade figure' },
+};
+
+/**
+ * The hint under "Interior shading": how much of the sun the chosen shade lets through this glass and where that
+ * comes from — what the loads use, so the person choosing sees the figure and its standing.
+ */
+export function shadingHint(kind: string, shgc: number | undefined): string {
+  const words = SHADE_WORDS[kind];
+  if (!words || !(kind in SHADED_SUN_RADIANT_FRACTION) || shgc === undefined)
+    return 'The shade drawn over this window on a hot afternoon. None: the sun comes straight in.';
+  const iac = interiorAttenuation(kind as keyof typeof SHADED_SUN_RADIANT_FRACTION, shgc);
+  return (
+    `Lets ${Math.round(iac * 100)} % of the sun through this glass (ASHRAE Fundamentals ch. 15 Table 14, ${words.row}); ` +
+    `${words.delay}.`
+  );
 }

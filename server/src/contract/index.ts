@@ -28,3 +28,4 @@ export * from './proposal-details';
 export * from './signing';
 export * from './commissioning';
 export * from './reports';
+export * from './install';

@@ -29,6 +29,8 @@ import { proposalRoutes } from './proposals/proposal.routes';
 import { customerProposalRoutes, linkOpenRoutes, proposalLinkRoutes } from './proposal-links/proposal-link.routes';
 import { customerAfterSigningRoutes, officeCancellationRoutes } from './cancellations/cancellation.routes';
 import { officeSigningRoutes, signingRoutes } from './signing/signing.routes';
+import { assignmentRoutes, myJobsRoutes } from './install/assignment.routes';
+import { packetRoutes } from './install/packet.routes';
 import {
   certificationRoutes,
   commissioningPolicyRoutes,
@@ -93,6 +95,9 @@ export function mountModules(app: Express, services: Services, extra: readonly M
   mount('/jobs', officeCancellationRoutes);
   mount('/jobs', officeSigningRoutes);
   mount('/jobs', commissioningRoutes);
+  mount('/jobs', assignmentRoutes);
+  mount('/jobs', packetRoutes);
+  mount('/my-jobs', myJobsRoutes);
   mount('/company', commissioningPolicyRoutes);
   mount('/me', certificationRoutes);
   mount('/company-data', companyDataRoutes);

@@ -3,6 +3,7 @@ import { sendAbandoned, sendMessage, type SendDeps } from '../modules/mail/mail.
 import { composeProposalLinkMessage, recordProposalSendFailed } from '../modules/proposal-links/proposal-link.service';
 import { refundAbandoned, refundCancelledDeposit } from '../modules/cancellations/cancellation.service';
 import { renderAbandoned, renderVersionPdf } from '../modules/proposals/proposal-pdf.service';
+import { renderPacketAbandoned, renderPacketPdf } from '../modules/install/packet-pdf.service';
 import { sealSignedProposal } from '../modules/signing/signed-pdf.service';
 import type { Services } from '../services/services';
 import type { AbandonedHandlers, TaskHandlers } from './kinds';
@@ -54,6 +55,7 @@ export function taskHandlers(services: Omit<Services, 'queue'> & { queue?: Servi
     'refund-deposit': ({ paymentId }) => refundCancelledDeposit(services.orm.em.fork(), services.payments, paymentId),
     'seal-signed-proposal': ({ signatureId }, run) =>
       sealSignedProposal({ ...services, queue: queue() }, signatureId, run),
+    'render-install-packet': (payload, run) => renderPacketPdf(services, payload, run),
   };
 }
 
@@ -73,6 +75,7 @@ export function abandonedHandlers(
     // last try is queued again, as the money is still owed.
     'refund-deposit': ({ paymentId }, run) =>
       refundAbandoned({ em: services.orm.em.fork(), queue: queue() }, paymentId, run),
-    // seal-signed-proposal neither: its row and e-mail are written in one transaction at the end of a try.
+    'render-install-packet': (payload, run) => renderPacketAbandoned(services, payload, run),
+    // seal-signed-proposal writes nothing while it runs: its row and e-mail are written in one transaction at the end of a try.
   };
 }

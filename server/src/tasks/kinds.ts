@@ -29,6 +29,11 @@ export const TASKS = {
     payload: z.strictObject({ signatureId: z.uuid() }),
     maxAttempts: 10,
   },
+  /** Renders a won job's packet PDF for its installers from the signed option, no prices (modules/install). */
+  'render-install-packet': {
+    payload: z.strictObject({ companyId: z.uuid(), jobId: z.uuid(), requestSeq: z.number().int().positive() }),
+    maxAttempts: 5,
+  },
 } as const;
 
 export type TaskKind = keyof typeof TASKS;

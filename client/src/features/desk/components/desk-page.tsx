@@ -155,7 +155,8 @@ export function DeskPage() {
         ) : null}
         {r.ready || job.hasProposal ? (
           <Link
-            className={buttonClass(r.ready && !job.hasProposal ? 'primary' : 'secondary')}
+            // Ready (a first proposal, or a revision after a change): the proposal screen is the next step.
+            className={buttonClass(r.ready ? 'primary' : 'secondary')}
             to={jobPaths.proposal(jobId)}
           >
             {job.hasProposal ? 'The proposal' : 'Go to the proposal'}

@@ -183,7 +183,6 @@ describe('the proposal screen', () => {
     });
     renderPage('estimator');
     const panel = await screen.findByRole('region', { name: 'Signed' });
-    expect(panel).toHaveTextContent('Version 2 is signed: no new version is issued.');
     expect(panel).toHaveTextContent(reason);
     expect(screen.queryByRole('button', { name: /Issue version/ })).toBeNull();
     expect(within(panel).queryByRole('link', { name: 'Open the desk' })).toBeNull();

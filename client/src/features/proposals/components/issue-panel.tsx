@@ -61,7 +61,7 @@ export function IssuePanel({
         </div>
       ) : data.canIssue.signed ? (
         // A signed version not cancelled: no new version here, and no way to the desk offered as if there were.
-        <Alert tone="info" title={`Version ${data.canIssue.signed.versionNumber} is signed: no new version is issued.`}>
+        <Alert tone="info">
           <p>{data.canIssue.reason}</p>
         </Alert>
       ) : (

@@ -6,6 +6,12 @@
  * that is ready to propose, one request after another; the clock stops when the last version's PDF is
  * 'ready' in the database. Prints proposals/s beside the floor (1 per second: one worker at the 1 s render
  * goal) and the load average. Informational, never fails. BENCH_ISSUE_PORT (default 4899) is the server's port.
+ *
+ * Then the issue request alone: a second server on BENCH_ISSUE_PORT + 1 with its workers off (its PDF jobs go
+ * to a queue namespace nobody runs, so no render shares its event loop) takes BENCH_ISSUE_ALONE (default 20)
+ * more issues after 3 to warm up; printed are the server's CPU per request (from /proc: the fair figure on a
+ * busy machine) and the wall median. BENCH_CPU_PROF=<dir> runs that server under `node --cpu-prof` and prints
+ * its profile of those requests by area and by function (the requests are then slower: read the summary).
  */
 import { availableParallelism, loadavg } from 'node:os';
 import { mkdtempSync, rmSync } from 'node:fs';
@@ -17,12 +23,16 @@ import { demoAccounts, seedDemo } from '../fixtures/seed';
 import { createLocalDiskStorage } from '../server/src/services/storage';
 import { migrate, withOrm } from '../scripts/lib/db';
 import { DEMO, startCluster } from '../scripts/lib/stack';
-import { signIn, startApp, stopAll } from './lib/app-process';
+import { readdirSync } from 'node:fs';
+import { cpuMs, signIn, startApp, stopAll } from './lib/app-process';
+import { profileClockUs, summariseProfile } from './lib/profile-summary';
 
 const COUNT = Number(process.env.BENCH_ISSUE_COUNT ?? 10);
 const PORT = Number(process.env.BENCH_ISSUE_PORT ?? 4899);
 const APP = `http://127.0.0.1:${PORT}`;
 const FLOOR_PER_S = 1;
+const ALONE = Number(process.env.BENCH_ISSUE_ALONE ?? 20);
+const CPU_PROF = process.env.BENCH_CPU_PROF ? resolve(process.env.BENCH_CPU_PROF) : null;
 const DATABASE = 'gaugeline_bench_proposals';
 const load = () =>
   loadavg()
@@ -102,6 +112,67 @@ try {
       `the requests alone took ${(issuedAt / 1000).toFixed(1)} s, median ${sorted[Math.floor(COUNT / 2)]?.toFixed(0)} ms each`,
   );
   console.log(`load average after: ${load()}`);
+  await stopAll();
+
+  // The issue request alone: its own server, workers off, the PDF jobs in a namespace no worker runs.
+  const alonePort = PORT + 1;
+  const ALONE_APP = `http://127.0.0.1:${alonePort}`;
+  const alone = await startApp({
+    port: alonePort,
+    databaseUrl: url,
+    serverDir: resolve('.'),
+    cpuProfDir: CPU_PROF,
+    env: { QUEUE_WORKERS: 'off', QUEUE_NAMESPACE: 'bench-unrun', STORAGE_DIR: storageDir, LOG_LEVEL: 'warn' },
+  });
+  const s2 = await signIn(ALONE_APP, estimator.email, estimator.password);
+  const issueAlone = async (): Promise<{ wall: number; cpu: number }> => {
+    const c0 = cpuMs(alone.pid);
+    const i0 = performance.now();
+    const r = await fetch(`${ALONE_APP}/api/jobs/${jobId}/proposal/versions`, {
+      method: 'POST',
+      headers: { cookie: s2.cookie, 'x-forwarded-proto': 'https', 'x-csrf-token': s2.csrf },
+    });
+    if (r.status !== 201) throw new Error(`issuing answered ${r.status}: ${await r.text()}`);
+    await r.arrayBuffer();
+    return { wall: performance.now() - i0, cpu: cpuMs(alone.pid) - c0 };
+  };
+  for (let i = 0; i < 3; i++) await issueAlone();
+  const from = { us: profileClockUs(), load: load() };
+  const runs: { wall: number; cpu: number }[] = [];
+  for (let i = 0; i < ALONE; i++) runs.push(await issueAlone());
+  const to = profileClockUs();
+  const wallSorted = runs.map((r) => r.wall).sort((a, b) => a - b);
+  const cpuMean = runs.reduce((sum, r) => sum + r.cpu, 0) / ALONE;
+  const versions = Number(
+    (
+      await db.query<{ n: string }>(
+        'select count(*) as n from proposal_version v join proposal p on p.id = v.proposal_id where p.job_id = $1',
+        [jobId],
+      )
+    ).rows[0]?.n ?? 0,
+  );
+  console.log(
+    `the issue request alone (workers off), ${ALONE} requests, versions ${versions - ALONE + 1}–${versions} of the job, ` +
+      `load average ${from.load} → ${load()}:`,
+  );
+  console.log(
+    `  server CPU ${cpuMean.toFixed(0)} ms per request (mean, /proc); wall median ${wallSorted[Math.floor(ALONE / 2)]?.toFixed(0)} ms`,
+  );
+  await stopAll();
+  if (CPU_PROF) {
+    // CPU.<date>.<time>.<pid>.<thread>.<n>.cpuprofile: the server's main thread (0), not tsx's loader thread.
+    const newest = readdirSync(CPU_PROF)
+      .filter((f) => f.endsWith('.cpuprofile') && f.includes(`.${alone.pid}.0.`))
+      .sort()
+      .at(-1);
+    if (newest) {
+      console.log(`  profile: ${join(CPU_PROF, newest)}`);
+      summariseProfile(join(CPU_PROF, newest), 25, `${ALONE} × POST …/proposal/versions`, {
+        fromUs: from.us,
+        toUs: to,
+      });
+    }
+  }
 } finally {
   await stopAll();
   await db.end();

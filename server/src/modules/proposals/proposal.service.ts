@@ -99,21 +99,25 @@ export async function issueVersion(ctx: ServiceContext, jobId: string, onIssued?
     const snapshot = buildSnapshot({ company, customer: job.customer, job, options: desk.options, issuedAt: now });
     let proposal = await tx.findOne(ProposalSchema, { job: job.id, company: ctx.actor.companyId });
     proposal ??= tx.create(ProposalSchema, { company: ctx.actor.companyId, job: job.id, createdAt: now });
-    const previous = await tx.findOne(
-      ProposalVersionSchema,
-      { proposal: proposal.id, supersededAt: null },
-      { orderBy: { number: 'desc' } },
+    // The earlier versions by number and whether current, never their snapshots: loaded as entities, each
+    // snapshot was parsed, copied for change tracking and compared again at every flush of the transaction.
+    const earlier = await tx.execute<Array<{ id: string; number: number; current: boolean }>>(
+      `select "id", "number", "superseded_at" is null as "current" from "proposal_version"
+        where "proposal_id" = ? and "company_id" = ? order by "number" desc`,
+      [proposal.id, ctx.actor.companyId],
     );
-    const last = await tx.findOne(ProposalVersionSchema, { proposal: proposal.id }, { orderBy: { number: 'desc' } });
-    if (previous) {
-      previous.supersededAt = now;
-      // The superseded version is written before the new one (one current version per proposal).
-      await tx.flush();
-    }
+    const previous = earlier.find((v) => v.current);
+    if (previous)
+      // The superseded version is written before the new one (one current version per proposal); the trigger
+      // lets superseded_at go from null to a time once.
+      await tx.execute('update "proposal_version" set "superseded_at" = ? where "id" = ? and "superseded_at" is null', [
+        now,
+        previous.id,
+      ]);
     const version = tx.create(ProposalVersionSchema, {
       company: ctx.actor.companyId,
       proposal,
-      number: (last?.number ?? 0) + 1,
+      number: (earlier[0]?.number ?? 0) + 1,
       snapshot,
       snapshotSha256: snapshotSha256(snapshot),
       calcVersion: CALC_VERSION,
@@ -125,11 +129,11 @@ export async function issueVersion(ctx: ServiceContext, jobId: string, onIssued?
       pdfSha256: null,
       pdfKey: null,
     });
-    const event = (kind: ProposalEventKind, v: ProposalVersion, data: Record<string, unknown>) =>
+    const event = (kind: ProposalEventKind, versionId: string, data: Record<string, unknown>) =>
       tx.create(ProposalEventSchema, {
         company: ctx.actor.companyId,
         proposal,
-        version: v,
+        version: tx.getReference(ProposalVersionSchema, versionId),
         kind,
         at: now,
         byUser: issuer,
@@ -138,12 +142,11 @@ export async function issueVersion(ctx: ServiceContext, jobId: string, onIssued?
         userAgent: null,
         data,
       });
-    if (previous) {
-      await tx.flush();
-      event('superseded', previous, { number: previous.number, by: version.number });
-    }
+    // The version, then its events in one statement, in the order made (their seq follows it): 'superseded'
+    // before 'issued'. One flush, so the new snapshot is compared for changes once, not at three flushes.
     await tx.flush();
-    event('issued', version, { number: version.number, snapshotSha256: version.snapshotSha256 });
+    if (previous) event('superseded', previous.id, { number: previous.number, by: version.number });
+    event('issued', version.id, { number: version.number, snapshotSha256: version.snapshotSha256 });
     await tx.flush();
     if (onIssued) await onIssued(tx, version);
     // The fault test kills the process here: all written, nothing committed (lib/test-pause.ts).
@@ -164,7 +167,78 @@ interface SignedRow {
   copy_sha256: string | null;
 }
 
-function versionRecord(v: ProposalVersion, signed?: SignedRow): ProposalVersionRecord {
+/** What a version's record shows: its columns and, of its snapshot, each option's name and total. */
+type VersionSummary = Pick<
+  ProposalVersion,
+  | 'id'
+  | 'number'
+  | 'issuedAt'
+  | 'issuedByName'
+  | 'supersededAt'
+  | 'snapshotSha256'
+  | 'calcVersion'
+  | 'pdfState'
+  | 'pdfSha256'
+> & {
+  readonly issuedBy: { readonly id: string } | null | undefined;
+  readonly options: ReadonlyArray<{ readonly name: string; readonly totalCents: number }>;
+};
+
+const summaryOf = (v: ProposalVersion): VersionSummary => ({
+  ...v,
+  options: v.snapshot.options.map((o) => ({ name: o.name, totalCents: o.price.totalCents })),
+});
+
+/**
+ * Every version of a proposal, newest first, as its record needs it: the options' names and totals are
+ * taken out of each snapshot by PostgreSQL. The whole snapshots (tens of kB each) were read, parsed and
+ * hydrated for two fields, on every issue and every read of the proposal: a cost growing with the versions.
+ */
+async function versionSummaries(ctx: ServiceContext, proposalId: string): Promise<VersionSummary[]> {
+  const rows = await ctx.em.execute<
+    Array<{
+      id: string;
+      number: number;
+      issued_at: string;
+      issued_by_id: string | null;
+      issued_by_name: string;
+      superseded_at: string | null;
+      snapshot_sha256: string;
+      calc_version: string;
+      pdf_state: ProposalVersion['pdfState'];
+      pdf_sha256: string | null;
+      options: Array<{ name: string; totalCents: number }>;
+    }>
+  >(
+    `select v."id", v."number", v."issued_at", v."issued_by_id", v."issued_by_name", v."superseded_at",
+            v."snapshot_sha256", v."calc_version", v."pdf_state", v."pdf_sha256",
+            coalesce((select jsonb_agg(jsonb_build_object('name', o.value->'name', 'totalCents',
+                        o.value->'price'->'totalCents') order by o.ordinality)
+                        from jsonb_array_elements(v."snapshot"->'options') with ordinality o), '[]'::jsonb) as "options"
+       from "proposal_version" v
+      where v."proposal_id" = ? and v."company_id" = ?
+      order by v."number" desc`,
+    [proposalId, ctx.actor.companyId],
+  );
+  // Times as the ORM reads them (its type parsers leave timestamps as text; its platform makes the Date).
+  const platform = ctx.em.getPlatform();
+  const date = (t: string) => platform.parseDate(t) as Date;
+  return rows.map((r) => ({
+    id: r.id,
+    number: r.number,
+    issuedAt: date(r.issued_at),
+    issuedBy: r.issued_by_id ? { id: r.issued_by_id } : null,
+    issuedByName: r.issued_by_name,
+    supersededAt: r.superseded_at === null ? null : date(r.superseded_at),
+    snapshotSha256: r.snapshot_sha256,
+    calcVersion: r.calc_version,
+    pdfState: r.pdf_state,
+    pdfSha256: r.pdf_sha256,
+    options: r.options,
+  }));
+}
+
+function versionRecord(v: VersionSummary, signed?: SignedRow): ProposalVersionRecord {
   return {
     number: v.number,
     issuedAt: v.issuedAt.toISOString(),
@@ -174,7 +248,7 @@ function versionRecord(v: ProposalVersion, signed?: SignedRow): ProposalVersionR
     snapshotSha256: v.snapshotSha256.trim(),
     calcVersion: v.calcVersion,
     pdf: { state: v.pdfState, sha256: v.pdfSha256?.trim() ?? null },
-    options: v.snapshot.options.map((o) => ({ name: o.name, totalCents: o.price.totalCents })),
+    options: v.options.map((o) => ({ name: o.name, totalCents: o.totalCents })),
     signed: signed
       ? {
           at: signed.signed_at.toISOString(),
@@ -213,11 +287,7 @@ export async function getProposal(ctx: ServiceContext, jobId: string): Promise<P
     ? { ok: false, reason: why.reason, ...(why.signed ? { signed: why.signed } : {}) }
     : { ok: true };
   if (!proposal) return { jobId, canIssue, proposal: null };
-  const versions = await ctx.em.find(
-    ProposalVersionSchema,
-    { proposal: proposal.id, company: ctx.actor.companyId },
-    { orderBy: { number: 'desc' } },
-  );
+  const versions = await versionSummaries(ctx, proposal.id);
   const numbers = new Map(versions.map((v) => [v.id, v.number]));
   const signed = await signaturesByVersion(ctx, proposal.id);
   const events = await ctx.em.find(
@@ -260,7 +330,7 @@ async function findVersion(ctx: ServiceContext, jobId: string, n: number): Promi
 /** GET …/versions/:n: the version and its snapshot exactly as frozen. */
 export async function getVersion(ctx: ServiceContext, jobId: string, n: number): Promise<ProposalVersionResponse> {
   const v = await findVersion(ctx, jobId, n);
-  return { version: versionRecord(v), snapshot: v.snapshot };
+  return { version: versionRecord(summaryOf(v)), snapshot: v.snapshot };
 }
 
 /** GET …/versions/:a/diff/:b: what changed from version a to version b. */

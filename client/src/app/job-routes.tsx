@@ -54,6 +54,14 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
       },
     },
     {
+      path: jobRoutePatterns.commissioning,
+      ErrorBoundary: RouteError,
+      lazy: {
+        loader: async () => (await import('./job-commissioning-loader')).commissioningLoader(queryClient),
+        Component: async () => (await import('./routes/job-commissioning')).default,
+      },
+    },
+    {
       path: jobRoutePatterns.print,
       ErrorBoundary: RouteError,
       lazy: { loader: jobWithRooms, Component: async () => (await import('./routes/job-loads-print')).default },

@@ -201,8 +201,12 @@ export const commissioningRecord = z.object({
           liquid: z.string(),
           plannedInstalledFt: z.number(),
           plannedExtraOz: z.number(),
+          /** The charge adder used for the recomputation, oz/ft (the maker's, else the liquid-full estimate). */
+          ozPerFt: z.number().nullable(),
         }),
       ),
+      /** The outdoor unit's pre-charge (catalog), so the phone recomputes with no signal; null: not in the catalog. */
+      precharge: z.object({ lengthFt: z.number(), basis: z.enum(['per-circuit', 'system-total']) }).nullable(),
       charge: z
         .object({
           plannedOz: z.number(),

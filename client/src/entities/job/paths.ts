@@ -7,6 +7,7 @@ export const jobPaths = {
   print: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/loads/print`,
   desk: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/desk`,
   proposal: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/proposal`,
+  commissioning: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/commissioning`,
 } as const;
 
 /** Route patterns for the router, in step with jobPaths. */
@@ -18,6 +19,7 @@ export const jobRoutePatterns = {
   print: '/jobs/:jobId/loads/print',
   desk: '/jobs/:jobId/desk',
   proposal: '/jobs/:jobId/proposal',
+  commissioning: '/jobs/:jobId/commissioning',
 } as const;
 
 /** The API's addresses for a job and the records hanging off it. */

@@ -297,6 +297,19 @@ function evacuationVerdictOf(e: EvacuationInput, policy: EvacuationPolicyRecord)
   return { pass: r.pass, outcome: r.outcome, words: r.words };
 }
 
+function adderOf(facts: CatalogFacts | undefined, refrigerant: string, liquid: string): number | null {
+  const od = odOfLabel(liquid);
+  if (!facts || od === null) return null;
+  const maker = facts.chargeAdders.find((a) => a.liquidOdIn === od)?.ozPerFt;
+  if (maker !== undefined) return maker;
+  return refrigerant in LIQUID_DENSITY_100F_LB_FT3
+    ? liquidLineChargeOzPerFt({
+        odIn: od,
+        liquidDensityLbPerFt3: LIQUID_DENSITY_100F_LB_FT3[refrigerant as Refrigerant],
+      })
+    : null;
+}
+
 function systemsOf(sold: Sold, measured: CommissioningRecord['measuredLines'], entries: EntryRow[]) {
   if (!sold.option) return [];
   return sold.option.systems.map((s) => {
@@ -307,29 +320,29 @@ function systemsOf(sold: Sold, measured: CommissioningRecord['measuredLines'], e
           .filter((e) => e.system_key === s.key)
           .reduce((sum, e) => sum + Number(e.added_oz) - Number(e.recovered_oz), 0) * 100,
       ) / 100;
+    const circuits = s.lineSets.map((l) => ({
+      zoneKey: l.zoneKey,
+      zoneName: l.zoneName,
+      liquid: l.liquid,
+      plannedInstalledFt: l.installedLengthFt,
+      plannedExtraOz: l.extraChargeOz,
+      ozPerFt: adderOf(facts, s.refrigerant, l.liquid),
+    }));
+    const precharge =
+      facts && facts.prechargedLengthFt !== null
+        ? { lengthFt: facts.prechargedLengthFt, basis: facts.prechargeBasis }
+        : null;
     let charge: CommissioningRecord['systems'][number]['charge'] = null;
-    if (facts && facts.prechargedLengthFt !== null) {
-      const circuits = s.lineSets.map((l) => {
-        const od = odOfLabel(l.liquid);
-        const maker = od === null ? undefined : facts.chargeAdders.find((a) => a.liquidOdIn === od)?.ozPerFt;
-        const refrigerant = s.refrigerant as Refrigerant;
-        const ozPerFt =
-          maker ??
-          (od !== null && refrigerant in LIQUID_DENSITY_100F_LB_FT3
-            ? liquidLineChargeOzPerFt({ odIn: od, liquidDensityLbPerFt3: LIQUID_DENSITY_100F_LB_FT3[refrigerant] })
-            : 0);
-        const m = measured.find((x) => x.systemKey === s.key && x.zoneKey === l.zoneKey);
-        return {
-          key: l.zoneKey,
-          plannedInstalledFt: l.installedLengthFt,
-          measuredFt: m?.measuredFt ?? null,
-          ozPerFt,
-        };
-      });
+    if (precharge && circuits.every((c) => c.ozPerFt !== null)) {
       const r = recomputedExtraCharge({
-        circuits,
-        prechargedLengthFt: facts.prechargedLengthFt,
-        prechargeBasis: facts.prechargeBasis,
+        circuits: circuits.map((c) => ({
+          key: c.zoneKey,
+          plannedInstalledFt: c.plannedInstalledFt,
+          measuredFt: measured.find((x) => x.systemKey === s.key && x.zoneKey === c.zoneKey)?.measuredFt ?? null,
+          ozPerFt: c.ozPerFt ?? 0,
+        })),
+        prechargedLengthFt: precharge.lengthFt,
+        prechargeBasis: precharge.basis,
         weighedInOz,
       });
       charge = {
@@ -346,13 +359,8 @@ function systemsOf(sold: Sold, measured: CommissioningRecord['measuredLines'], e
       outdoorModel: s.outdoor.key,
       refrigerant: s.refrigerant,
       testPressurePsig: facts?.testPressurePsig ?? null,
-      circuits: s.lineSets.map((l) => ({
-        zoneKey: l.zoneKey,
-        zoneName: l.zoneName,
-        liquid: l.liquid,
-        plannedInstalledFt: l.installedLengthFt,
-        plannedExtraOz: l.extraChargeOz,
-      })),
+      circuits,
+      precharge,
       charge,
     };
   });

@@ -231,6 +231,7 @@ export function WalkthroughView({
 /** The job's other pages, beside the save status on a wide screen and under the header on a phone. */
 function JobPageLinks({ job }: { job: JobRecord }) {
   const jobId = job.id;
+  const viewer = useViewer();
   return (
     <>
       <Link className={buttonClass('secondary')} to={jobPaths.loads(jobId)}>
@@ -243,6 +244,12 @@ function JobPageLinks({ job }: { job: JobRecord }) {
       {job.hasProposal || job.readyToProposeAt ? (
         <Link className={buttonClass('secondary')} to={jobPaths.proposal(jobId)}>
           Proposal
+        </Link>
+      ) : null}
+      {/* The installer's commissioning record (issue 15) once the job is won; a salesperson has none. */}
+      {(job.status === 'won' || job.status === 'installed') && viewer && viewer.role !== 'salesperson' ? (
+        <Link className={buttonClass('secondary')} to={jobPaths.commissioning(jobId)}>
+          Commissioning record
         </Link>
       ) : null}
     </>

@@ -3,6 +3,7 @@ import { isApiError } from '../../../lib/api-error';
 import { jobKeys } from '../../../entities/job/query-keys';
 import { customerQueryOptions, getCustomer, getJob, roomsQueryOptions } from '../../../entities/job/queries';
 import type { SendResult } from '../../../lib/offline/queue';
+import { OTHER_PERSON, sendFailure as failure } from '../../../lib/offline/send-failure';
 import type { JobRecord, RoomRecord } from '@contract';
 import { createRoom } from '../api/create-room';
 import { deleteRoom } from '../api/delete-room';
@@ -47,31 +48,7 @@ function afterWrite(queryClient: QueryClient, jobId: string): void {
   void queryClient.invalidateQueries({ queryKey: jobKeys.lists() });
 }
 
-function failure(e: unknown): SendResult {
-  if (isApiError(e)) {
-    if (e.code === 'network' || e.status === 0) return { kind: 'network' };
-    // Another person signed in on this device (another tab): these changes wait for their maker.
-    if (e.code === 'other-person') return { kind: 'blocked', message: OTHER_PERSON };
-    // The server was updated past this page: keep the edits for the reloaded app to send.
-    if (e.code === 'api-version') return { kind: 'blocked', message: e.detail };
-    // 428 means the edit carried no version: never drop it, ask the person as for a 409.
-    if (e.status === 409 || e.status === 428) return { kind: 'conflict' };
-    if (e.status === 401)
-      return {
-        kind: 'blocked',
-        message:
-          'Your session has ended. Sign in again (in another tab keeps this page); your changes stay on this device until then.',
-      };
-    // 5xx may pass; keep the edit and try again later rather than lose it.
-    if (e.status >= 500 || e.status === 429) return { kind: 'network' };
-    const fields = e.errors.map((f) => f.message).join(' ');
-    return { kind: 'rejected', message: fields ? `${e.detail} ${fields}` : e.detail };
-  }
-  return { kind: 'network' };
-}
-
-export const OTHER_PERSON =
-  'Someone else is signed in on this device now. These changes stay here until you sign in again.';
+export { OTHER_PERSON };
 
 const isConflict = (e: unknown) => isApiError(e) && e.status === 409;
 

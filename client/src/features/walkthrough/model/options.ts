@@ -59,28 +59,20 @@ export function doorDefault(key: string): { u: number; label: string } | null {
 
 /** Where each shade's figures come from, in a few words (calc: INTERIOR_SHADING_IAC, SHADED_SUN_RADIANT_FRACTION). */
 const SHADE_WORDS: Record<string, { row: string; delay: string }> = {
-  blinds: {
-    row: 'medium blinds, half open',
-    delay: 'the delay is the published open-slat blind figure',
-  },
-  drapes: {
-    row: 'medium curtains',
-    delay: 'the delay (0.63 radiant) is from memory: no published drapery figure was found',
-  },
-  shades: { row: 'dark shades', delay: 'the delay is the published dark roller-shade figure' },
+  blinds: { row: 'medium blinds half open', delay: '' },
+  // The drapes' radiant part (0.63) has no published source: say so where the shade is picked.
+  drapes: { row: 'medium curtains', delay: ' Its delay figure is from memory.' },
+  shades: { row: 'dark shades', delay: '' },
 };
 
 /**
- * The hint under "Interior shading": how much of the sun the chosen shade lets through this glass and where that
- * comes from — what the loads use, so the person choosing sees the figure and its standing.
+ * The hint under "Interior shading" (short: it sits in a half-width cell on a phone): how much of the sun the chosen
+ * shade lets through this glass, the handbook row it is, and for drapes that the delay figure is from memory.
  */
 export function shadingHint(kind: string, shgc: number | undefined): string {
   const words = SHADE_WORDS[kind];
   if (!words || !(kind in SHADED_SUN_RADIANT_FRACTION) || shgc === undefined)
-    return 'The shade drawn over this window on a hot afternoon. None: the sun comes straight in.';
+    return 'The shade drawn on a hot afternoon.';
   const iac = interiorAttenuation(kind as keyof typeof SHADED_SUN_RADIANT_FRACTION, shgc);
-  return (
-    `Lets ${Math.round(iac * 100)} % of the sun through this glass (ASHRAE Fundamentals ch. 15 Table 14, ${words.row}); ` +
-    `${words.delay}.`
-  );
+  return `Lets ${Math.round(iac * 100)} % of the sun in (ASHRAE ch. 15, ${words.row}).${words.delay}`;
 }

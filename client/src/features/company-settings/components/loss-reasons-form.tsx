@@ -91,7 +91,7 @@ function ReasonRows() {
               <label htmlFor={inputId} className="text-sm font-semibold text-ink-900">
                 Reason {i + 1}
               </label>
-              <div className="flex flex-col gap-2 sm:flex-row sm:items-center">
+              <div className="flex flex-col gap-2 sm:flex-row sm:flex-wrap sm:items-center">
                 <input
                   id={inputId}
                   className={`${inputClass} sm:flex-1`}
@@ -100,6 +100,11 @@ function ReasonRows() {
                   aria-describedby={error ? `${inputId}-error` : undefined}
                   {...register(`reasons.${i}.text`)}
                 />
+                {error ? (
+                  <p id={`${inputId}-error`} className="text-sm font-semibold text-danger sm:order-last sm:basis-full">
+                    {error}
+                  </p>
+                ) : null}
                 <div className="flex gap-2">
                   <Button
                     id={`${base}-up-${field.id}`}
@@ -138,11 +143,6 @@ function ReasonRows() {
                   </Button>
                 </div>
               </div>
-              {error ? (
-                <p id={`${inputId}-error`} className="text-sm font-semibold text-danger">
-                  {error}
-                </p>
-              ) : null}
             </li>
           );
         })}

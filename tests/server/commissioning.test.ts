@@ -1,12 +1,12 @@
-import { createHash, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import pg from 'pg';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TEST_GAS_REASON } from '@contract';
 import { login, makeCompany, type Session, type TestCompany } from '../helpers/fixtures';
-import { sampleSnapshot } from '../helpers/proposal-snapshot';
 import { buildTestApp, testDatabaseUrl, type TestApp } from '../helpers/test-app';
-import { expectProblem, newJob, patch, post } from './jobs-helpers';
+import { assignDirect, cancelSigned, signedJob } from './install-helpers';
+import { expectProblem, patch, post } from './jobs-helpers';
 
 /**
  * Issue 15 (commission15): the commissioning record — validation beside the field (nitrogen only, the
@@ -22,8 +22,6 @@ let estimator: Session;
 let installer: Session;
 let otherOwner: Session;
 let sales: Session;
-
-const sha256 = (s: string) => createHash('sha256').update(s).digest('hex');
 
 beforeAll(async () => {
   t = await buildTestApp();
@@ -59,35 +57,11 @@ afterAll(async () => {
   await t?.close();
 });
 
-/** A won job of A signed for option 2 (system sys-2, FX-30H2, R-454B), assigned to A's installer. */
+/** A won job of A signed for option 2 (system sys-2, FX-30H2, R-454B), scheduled for A's installer (pack15's helpers). */
 async function wonJob(): Promise<string> {
-  const job = await newJob(estimator);
-  const proposalId = randomUUID();
-  const versionId = randomUUID();
-  const snapshot = sampleSnapshot('Odalys Brackenridge');
-  await db.query(`insert into proposal (id, company_id, job_id, created_at) values ($1, $2, $3, now())`, [
-    proposalId,
-    a.id,
-    job.id,
-  ]);
-  await db.query(
-    `insert into proposal_version (id, company_id, proposal_id, number, snapshot, snapshot_sha256, calc_version,
-       issued_by_id, issued_by_name, issued_at) values ($1, $2, $3, 1, $4, $5, '0.1.0', $6, 'Estimator', now())`,
-    [versionId, a.id, proposalId, JSON.stringify(snapshot), sha256(JSON.stringify(snapshot)), a.users.estimator.id],
-  );
-  await db.query(
-    `insert into proposal_signature (id, company_id, proposal_id, version_id, option_position, signer_name,
-       signer_email, method, typed_name, statement, statement_sha256, document_sha256, snapshot_sha256,
-       consent_sha256, signed_at)
-     values ($1, $2, $3, $4, 2, 'Odalys Brackenridge', 'odalys@example.com', 'typed', 'Odalys Brackenridge',
-       'I accept.', $5, $6, $7, $8, now())`,
-    [randomUUID(), a.id, proposalId, versionId, sha256('I accept.'), sha256('pdf'), sha256('s'), sha256('c')],
-  );
-  await db.query(`update job set status = 'won', assigned_installer_id = $2, version = version + 1 where id = $1`, [
-    job.id,
-    a.users.installer.id,
-  ]);
-  return job.id;
+  const { jobId } = await signedJob(db, a, estimator);
+  await assignDirect(db, a, jobId, a.users.installer.id);
+  return jobId;
 }
 
 const url = (jobId: string, rest = '') => `/api/jobs/${jobId}/commissioning${rest}`;
@@ -352,7 +326,17 @@ describe('the commissioning record', () => {
     expectProblem(await otherOwner.agent.get(url(jobId)), 404);
     expectProblem(await patch(otherOwner, url(jobId), 1).send({ notes: 'x' }), 404);
     expectProblem(await sales.agent.get(url(jobId)), 403);
-    await db.query(`update job set assigned_installer_id = null where id = $1`, [jobId]);
+    await db.query(`delete from job_assignment where job_id = $1`, [jobId]);
     expectProblem(await installer.agent.get(url(jobId)), 404);
+    await assignDirect(db, a, jobId, a.users.installer.id);
+    expect((await read(installer, jobId)).systems).toHaveLength(1);
+  });
+
+  it('a cancelled sale leaves nothing sold to commission', async () => {
+    const job = await signedJob(db, a, estimator);
+    await cancelSigned(db, a, job);
+    const r = await read(estimator, job.jobId);
+    expect(r.systems).toEqual([]);
+    expect(r.missing).toContain('The job has no signed proposal: there is nothing sold to commission.');
   });
 });

@@ -164,7 +164,7 @@ if (!owner) throw new Error('no demo owner');
 const { url: databaseUrl } = await startCluster(DEMO);
 await migrate(databaseUrl);
 await withOrm(databaseUrl, async (orm) => {
-  if (await isEmpty(orm.em.fork())) await seedDemo(orm.em.fork());
+  if (await isEmpty(orm.em.fork())) await seedDemo(orm);
 });
 await buildClientIfStale();
 

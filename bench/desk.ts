@@ -319,7 +319,7 @@ async function throughServer(): Promise<Row[]> {
   const { url } = await startCluster(DEMO);
   await migrate(url);
   await withOrm(url, async (orm) => {
-    if (await isEmpty(orm.em.fork())) await seedDemo(orm.em.fork());
+    if (await isEmpty(orm.em.fork())) await seedDemo(orm);
   });
   const db = new pg.Pool({ connectionString: url, max: 2 });
   try {

@@ -45,7 +45,7 @@ const storageDir = mkdtempSync(join(tmpdir(), 'gaugeline-bench-proposals-'));
 const db = new pg.Pool({ connectionString: url, max: 2 });
 try {
   await migrate(url);
-  await withOrm(url, (orm) => seedDemo(orm.em.fork(), createLocalDiskStorage(storageDir)));
+  await withOrm(url, (orm) => seedDemo(orm, { storage: createLocalDiskStorage(storageDir) }));
   const estimator = demoAccounts.find((a) => a.role === 'estimator');
   if (!estimator) throw new Error('no demo estimator');
   const ready = await db.query<{ id: string }>(

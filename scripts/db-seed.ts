@@ -11,6 +11,6 @@ await withOrm(url, async (orm) => {
     log('the database already has companies; demo data not loaded (drop the database to start over).');
     return;
   }
-  await seedDemo(em);
+  await seedDemo(orm, { outboxDir: '.data/outbox' });
   log('demo data loaded.');
 });

@@ -13,7 +13,7 @@ import { log } from './lib/system';
 const { cluster, url } = await startCluster(DEMO);
 await migrate(url);
 await withOrm(url, async (orm) => {
-  if (await isEmpty(orm.em.fork())) await seedDemo(orm.em.fork());
+  if (await isEmpty(orm.em.fork())) await seedDemo(orm, { outboxDir: '.data/outbox' });
 });
 const config = loadConfig({
   ...process.env,

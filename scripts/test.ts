@@ -30,7 +30,7 @@ await migrate(url);
 const storageDir = `.data/uploads-${TEST.database}`;
 rmSync(storageDir, { recursive: true, force: true });
 await withOrm(url, async (orm) => {
-  if (await isEmpty(orm.em.fork())) await seedDemo(orm.em.fork(), createLocalDiskStorage(storageDir));
+  if (await isEmpty(orm.em.fork())) await seedDemo(orm, { storage: createLocalDiskStorage(storageDir) });
 });
 if (!process.env.GAUGELINE_SKIP_BUILD) await buildClientIfStale();
 log(`test set-up ready in ${((Date.now() - t0) / 1000).toFixed(1)} s; running the suite…`);

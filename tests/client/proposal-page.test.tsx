@@ -234,6 +234,43 @@ describe('the proposal screen', () => {
     ]);
   });
 
+  it('no business address: the reason and, for the owner, the way to Settings; an estimator is sent to the owner', async () => {
+    const noAddress = (who: string): ProposalResponse => ({
+      jobId: JOB_ID,
+      canIssue: {
+        ok: false,
+        fix: 'settings',
+        reason: `${who} the business address in Settings (On every proposal) first: the notice … (16 CFR 429.1).`,
+      },
+      proposal: null,
+    });
+    mockFetch({
+      [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'design' }) }),
+      [`GET ${base}`]: json(200, noAddress('Add')),
+      [`GET ${base}/links`]: links,
+    });
+    const view = renderPage('owner');
+    const why = await screen.findByText(/^Add the business address in Settings/);
+    const box = why.closest('[role="alert"], [role="status"], div') as HTMLElement;
+    expect(screen.queryByRole('button', { name: /Issue version/ })).toBeNull();
+    expect(within(box.parentElement ?? box).getByRole('link', { name: 'Open Settings' })).toHaveAttribute(
+      'href',
+      '/settings',
+    );
+    expect(screen.queryByRole('link', { name: 'Open the desk' })).toBeNull();
+    view.unmount();
+
+    mockFetch({
+      [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'design' }) }),
+      [`GET ${base}`]: json(200, noAddress('Ask the owner to add')),
+      [`GET ${base}/links`]: links,
+    });
+    renderPage('estimator');
+    expect(await screen.findByText(/^Ask the owner to add the business address in Settings/)).toBeInTheDocument();
+    expect(screen.queryByRole('link', { name: 'Open Settings' })).toBeNull();
+    expect(screen.queryByRole('link', { name: 'Open the desk' })).toBeNull();
+  });
+
   it('a salesperson reads it without issuing or the PDF; an installer is turned away before anything is asked', async () => {
     mockFetch({
       [`GET /api/jobs/${JOB_ID}`]: json(200, { job: jobRecord({ status: 'design', hasProposal: true }) }),

@@ -30,9 +30,11 @@ async function api(page: Page) {
  */
 async function readyJob(page: Page): Promise<string> {
   const list = (await (await page.request.get('/api/jobs?page=1&pageSize=50')).json()) as {
-    items: { id: string; readyToProposeAt: string | null; hasProposal: boolean }[];
+    items: { id: string; status: string; readyToProposeAt: string | null; hasProposal: boolean }[];
   };
-  for (const job of list.items.filter((j) => j.readyToProposeAt !== null)) {
+  // In design: the demo's proposals in every state (fixtures/demo-proposal-states.ts) were marked ready too, and
+  // have since been sent, signed or lost.
+  for (const job of list.items.filter((j) => j.readyToProposeAt !== null && j.status === 'design')) {
     const desk = (await (await page.request.get(`/api/jobs/${job.id}/desk`)).json()) as {
       readiness: { ready: boolean; sizingOverride: unknown };
     };

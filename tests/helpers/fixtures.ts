@@ -4,6 +4,7 @@ import request from 'supertest';
 import { CookieAccessInfo } from 'cookiejar';
 import type { Express } from 'express';
 import { CompanySchema } from '../../server/src/modules/companies/company.entity';
+import { CompanyProposalDetailsSchema } from '../../server/src/modules/company-settings/proposal-details.entity';
 import { ROLES, type Role } from '../../server/src/contract';
 import { UserSchema } from '../../server/src/modules/users/user.entity';
 import { hashPassword } from '../../server/src/services/passwords';
@@ -20,8 +21,19 @@ export interface TestCompany {
   users: Record<Role, { id: string; email: string; name: string }>;
 }
 
-/** A fresh company with one active user of every role; unique e-mails so test files can run in parallel. */
-export async function makeCompany(em: EntityManager, label = 'Test'): Promise<TestCompany> {
+/** The invented business address a test company's proposals carry (issuing needs one: 16 CFR 429.1). */
+export const TEST_BUSINESS_ADDRESS = '1 Testbed Row\nQuillmere, Demo State 00042';
+
+/**
+ * A fresh company with one active user of every role; unique e-mails so test files can run in parallel.
+ * It has a business address in its proposal details (a proposal is issued only with one) unless
+ * `businessAddress: false` (a company that never saved its proposal details).
+ */
+export async function makeCompany(
+  em: EntityManager,
+  label = 'Test',
+  opts: { businessAddress?: boolean } = {},
+): Promise<TestCompany> {
   const tag = randomUUID().slice(0, 8);
   const company = em.create(CompanySchema, {
     id: randomUUID(),
@@ -41,6 +53,17 @@ export async function makeCompany(em: EntityManager, label = 'Test'): Promise<Te
     });
     users[role] = { id: u.id, email: u.email, name: u.name };
   }
+  if (opts.businessAddress !== false)
+    em.create(CompanyProposalDetailsSchema, {
+      company,
+      address: TEST_BUSINESS_ADDRESS,
+      phone: '',
+      email: '',
+      licence: '',
+      terms: '',
+      warranty: '',
+      cancellationExtra: '',
+    });
   await em.flush();
   return { id: company.id, name: company.name, users };
 }

@@ -22,8 +22,13 @@ describe('demo proposal', () => {
   it('Larkspur: a job with version 1 superseded and version 2 current, both PDFs made, and what changed between them', async () => {
     const acct = account('Larkspur', 'estimator');
     const s = await login(t.app, acct.email, acct.password);
-    const jobs = (await s.agent.get('/api/jobs?pageSize=100')).body.items as { id: string; hasProposal: boolean }[];
-    const withProposal = jobs.filter((j) => j.hasProposal);
+    const jobs = (await s.agent.get('/api/jobs?pageSize=100')).body.items as {
+      id: string;
+      status: string;
+      hasProposal: boolean;
+    }[];
+    // The issued-not-sent one is still in design (the jobs in every state are proposed, won or lost).
+    const withProposal = jobs.filter((j) => j.hasProposal && j.status === 'design');
     expect(withProposal.length).toBeGreaterThanOrEqual(1);
     const jobId = withProposal[0]?.id ?? '';
     const r = await s.agent.get(`/api/jobs/${jobId}/proposal`);

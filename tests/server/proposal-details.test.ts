@@ -33,9 +33,9 @@ const DETAILS = {
 
 beforeAll(async () => {
   t = await buildTestApp({ UPLOAD_MAX_BYTES: MAX });
-  a = await makeCompany(t.orm.em.fork(), 'Details');
+  a = await makeCompany(t.orm.em.fork(), 'Details', { businessAddress: false });
   await seedData(t.orm.em.fork(), a.id);
-  const b = await makeCompany(t.orm.em.fork(), 'DetailsB');
+  const b = await makeCompany(t.orm.em.fork(), 'DetailsB', { businessAddress: false });
   owner = await login(t.app, a.users.owner.email);
   estimator = await login(t.app, a.users.estimator.email);
   otherOwner = await login(t.app, b.users.owner.email);
@@ -252,5 +252,62 @@ describe('issuing freezes the company part', () => {
     expect(await t.services.storage.get(row.storageKey)).not.toBeNull();
     expect((await uploadLogo(owner, await transparentLogo(120, 40))).status).toBe(200);
     expect(await t.services.storage.get(row.storageKey)).toBeNull();
+  });
+});
+
+describe('issuing needs the business address (the cancellation notice names the seller’s address: 16 CFR 429.1)', () => {
+  it('without one: 409 problem+json saying to add it in Settings, nothing written; with one: issued', async () => {
+    const c = await makeCompany(t.orm.em.fork(), 'NoAddress', { businessAddress: false });
+    await seedData(t.orm.em.fork(), c.id);
+    const cOwner = await login(t.app, c.users.owner.email);
+    const cEstimator = await login(t.app, c.users.estimator.email);
+    const { job, rooms } = await deskJob(cEstimator);
+    await newOption(cEstimator, job.id, { name: 'Essential', design: singleZone(rooms[0] ?? '', 30) });
+    const ready = await post(cEstimator, `/api/jobs/${job.id}/ready`).send({
+      sizingOverride: { reason: 'The owner keeps this room cool for a home studio; the larger unit is wanted.' },
+    });
+    expect(ready.status, JSON.stringify(ready.body)).toBe(200);
+
+    // The screen is told before anyone tries: the reason and where it is put right. The estimator cannot open
+    // Settings, so the words send them to the owner; the owner is told to add it.
+    const screen = await cEstimator.agent.get(`/api/jobs/${job.id}/proposal`);
+    expect(screen.body.canIssue).toEqual({
+      ok: false,
+      fix: 'settings',
+      reason: expect.stringMatching(/^Ask the owner to add the business address in Settings .*16 CFR 429\.1/),
+    });
+    const ownerScreen = await cOwner.agent.get(`/api/jobs/${job.id}/proposal`);
+    expect(ownerScreen.body.canIssue.reason).toMatch(/^Add the business address in Settings/);
+
+    const refused = await post(cEstimator, `/api/jobs/${job.id}/proposal/versions`).send();
+    expectProblem(refused, 409);
+    expect(refused.body.detail).toMatch(/business address in Settings/);
+    expect(refused.body.fix).toBe('settings');
+    // Nothing changed: no proposal, no version, no event, no PDF job; the job is still ready and in design.
+    const rows = await t.orm.em
+      .fork()
+      .getConnection()
+      .execute<{ proposals: string; versions: string; events: string }[]>(
+        `select (select count(*) from proposal where job_id = ?) as proposals,
+                (select count(*) from proposal_version where company_id = ?) as versions,
+                (select count(*) from proposal_event where company_id = ?) as events`,
+        [job.id, c.id, c.id],
+      );
+    expect(rows[0]).toEqual({ proposals: '0', versions: '0', events: '0' });
+    const after = (await cEstimator.agent.get(`/api/jobs/${job.id}`)).body.job;
+    expect(after).toMatchObject({ status: 'design', hasProposal: false });
+    expect(after.readyToProposeAt).not.toBeNull();
+
+    // A blank address is no address.
+    expect((await put(cOwner, 0, { ...DETAILS, address: '   ' })).status).toBe(200);
+    expectProblem(await post(cEstimator, `/api/jobs/${job.id}/proposal/versions`).send(), 409);
+
+    const saved = await read(cOwner);
+    expect((await put(cOwner, saved.version, DETAILS)).status).toBe(200);
+    expect((await cEstimator.agent.get(`/api/jobs/${job.id}/proposal`)).body.canIssue).toEqual({ ok: true });
+    const issued = await post(cEstimator, `/api/jobs/${job.id}/proposal/versions`).send();
+    expect(issued.status, JSON.stringify(issued.body)).toBe(201);
+    const v = await cEstimator.agent.get(`/api/jobs/${job.id}/proposal/versions/1`);
+    expect(v.body.snapshot.company.address).toBe('77 Quillfeather Way\nUnit 3\nMossgrove, OR 97000');
   });
 });

@@ -49,7 +49,7 @@ describe('issuing a proposal version', () => {
     const read = await estimator.agent.get(`/api/jobs/${jobId}/proposal`);
     expect(read.status).toBe(200);
     expect(read.body.proposal).toBeNull();
-    expect(read.body.canIssue).toEqual({ ok: false, reason: expect.stringMatching(/ready to propose/) });
+    expect(read.body.canIssue).toEqual({ ok: false, fix: 'desk', reason: expect.stringMatching(/ready to propose/) });
   });
 
   it('freezes what the desk shows; a second issue makes version 2 and supersedes 1; the snapshot reads back identical; the trail is in order', async () => {

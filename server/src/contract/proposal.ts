@@ -238,6 +238,8 @@ export const proposalResponse = z.object({
        * (the lead's decision for issue 14). The screen says so and offers no "Issue version N+1".
        */
       signed: z.object({ versionNumber: z.number().int(), signedOn: z.string(), signerName: z.string() }).optional(),
+      /** Where the reason is put right: the desk (the job's options and ready mark) or the company settings. */
+      fix: z.enum(['desk', 'settings']).optional(),
     }),
   ]),
   proposal: z
@@ -294,4 +296,10 @@ export const PROPOSAL_MESSAGES = {
   /** The 409 while a version is signed and not cancelled (issue 14: a signed contract is not revised). */
   signed: (versionNumber: number, signedOn: string, signerName: string) =>
     `Version ${versionNumber} was signed on ${formatUsDate(signedOn)} by ${signerName}, and a signed contract is not changed here: a change after signing is agreed with the customer outside this proposal. If the buyer cancels within the cooling-off window, the proposal can be revised and issued again.`,
+  /**
+   * No business address in the company's proposal details: the notice of cancellation every proposal carries
+   * must give the seller's address (16 CFR 429.1(a) and (b)), so nothing is issued without one.
+   */
+  noBusinessAddress: (mayEditSettings: boolean) =>
+    `${mayEditSettings ? 'Add the business address in Settings' : 'Ask the owner to add the business address in Settings'} (On every proposal) first: the notice of the buyer’s right to cancel that every proposal carries must give the seller’s address (16 CFR 429.1).`,
 } as const;

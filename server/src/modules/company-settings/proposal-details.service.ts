@@ -126,6 +126,12 @@ export async function logoBytes(ctx: LogoContext, logoId: string): Promise<{ log
   return { logo, bytes };
 }
 
+/** Whether the company has given a business address (a proposal's cancellation notice needs one: 16 CFR 429.1). */
+export async function hasBusinessAddress(em: EntityManager, companyId: string): Promise<boolean> {
+  const row = await em.findOne(CompanyProposalDetailsSchema, { company: companyId });
+  return (row?.address.trim() ?? '') !== '';
+}
+
 /**
  * The company's part of a proposal snapshot at this moment (issuing freezes it): its name, the contact
  * lines ('' → null), the licence, the logo's storage key, terms, warranty and the extra cancellation wording.

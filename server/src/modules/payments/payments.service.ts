@@ -87,6 +87,7 @@ export async function startDeposit(
   em: EntityManager,
   payments: Payments,
   version: DepositVersion,
+  now?: Date,
 ): Promise<{ payment: PaymentRow; intent: DepositIntent }> {
   if (!(await versionIsSigned(em, version.companyId, version.versionId))) {
     throw new ConflictError('The proposal is paid for after it is signed: sign it first.');
@@ -108,14 +109,17 @@ export async function startDeposit(
     metadata: { companyId: version.companyId, proposalId: version.proposalId, versionId: version.versionId },
     idempotencyKey: `deposit:${version.versionId}`,
   });
-  const payment = await recordDepositIntent(em, intent);
+  const payment = await recordDepositIntent(em, intent, now);
   return { payment, intent };
 }
 
-/** Keeps the intent the server made as the version's payment row (once: the same intent again finds it). */
-export async function recordDepositIntent(em: EntityManager, intent: DepositIntent): Promise<PaymentRow> {
+/**
+ * Keeps the intent the server made as the version's payment row (once: the same intent again finds it).
+ * `now` is the time written (now by default; the demo seed gives its own clock's).
+ */
+export async function recordDepositIntent(em: EntityManager, intent: DepositIntent, now?: Date): Promise<PaymentRow> {
   const { companyId, proposalId, versionId } = intent.metadata;
-  const at = new Date();
+  const at = now ?? new Date();
   await em.execute(
     `insert into "payment" ("id", "company_id", "proposal_id", "proposal_version_id", "amount_cents", "currency",
        "intent_id", "state", "created_at", "updated_at")
@@ -182,14 +186,16 @@ const HANDLED = new Set([
  * Applies one verified webhook event, once: its id goes into payment_webhook_event first (unique), so
  * the same event again — sequentially or concurrently — finds it there and changes nothing. An intent's
  * amount, currency or metadata that does not match the row is recorded as a mismatch and not applied.
+ * `now` is the time written on the payment, its audit event and the job (now by default; the demo seed's clock).
  */
 export async function applyPaymentEvent(
   em: EntityManager,
   event: PaymentEvent,
   queue?: Pick<Queue, 'add'>,
+  now?: Date,
 ): Promise<WebhookOutcome> {
   return em.transactional(async (tx) => {
-    const at = new Date();
+    const at = now ?? new Date();
     const inserted = await tx.execute<Array<{ event_id: string }>>(
       `insert into "payment_webhook_event" ("event_id", "type", "received_at") values (?, ?, ?)
        on conflict ("event_id") do nothing returning "event_id"`,

@@ -1,8 +1,8 @@
-import type { Request } from 'express';
 import type { EntityManager } from '@mikro-orm/postgresql';
 import { proposalSnapshot, type CustomerProposalView, type ProposalEventKind } from '@contract';
 import { ConflictError, NotFoundError, ValidationError } from '../../lib/errors';
 import type { LinkGrant } from '../../lib/route';
+import type { RequestMeta } from '../../lib/request-meta';
 import type { Storage } from '../../services/storage';
 import type { Clock } from '../../services/services';
 import { versionIsSigned } from '../payments/payments.service';
@@ -22,11 +22,12 @@ export interface CustomerContext {
   em: EntityManager;
   clock: Clock;
   grant: LinkGrant;
-  req: Request;
+  /** The browser's address and user agent, as the trail keeps them (the route reads them from the request). */
+  meta: RequestMeta;
 }
 
 function customerEvent(
-  { em, clock, req }: CustomerContext,
+  { em, clock, meta }: CustomerContext,
   link: ProposalLink,
   kind: ProposalEventKind,
   data: Record<string, unknown>,
@@ -39,8 +40,8 @@ function customerEvent(
     at: clock.now(),
     byUser: null,
     byCustomer: true,
-    ip: req.ip?.slice(0, 45) ?? null,
-    userAgent: req.get('user-agent')?.slice(0, 400) ?? null,
+    ip: meta.ip?.slice(0, 45) ?? null,
+    userAgent: meta.userAgent?.slice(0, 400) ?? null,
     data: { linkId: link.id, ...data },
   });
 }

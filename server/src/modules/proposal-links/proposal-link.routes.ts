@@ -7,6 +7,7 @@ import {
   sendProposalBody,
 } from '@contract';
 import { link, OFFICE, PUBLIC, rawResponse, type ApiRouter } from '../../lib/route';
+import { requestMeta as metaOf } from '../../lib/request-meta';
 import { uuidParam } from '../../lib/validate';
 import { chooseOption, customerPdf, readCustomerProposal } from './customer-proposal.service';
 import { linkEndedPage, openLink, tooManyTriesPage } from './link-open';
@@ -111,7 +112,7 @@ export function customerProposalRoutes(api: ApiRouter): void {
     params: proposalParams,
     response: customerProposalView,
     handler: async ({ em, services, link: grant, req }) =>
-      readCustomerProposal({ em, clock: services.clock, grant: grant!, req }),
+      readCustomerProposal({ em, clock: services.clock, grant: grant!, meta: metaOf(req) }),
   });
   api.route({
     method: 'post',
@@ -122,7 +123,7 @@ export function customerProposalRoutes(api: ApiRouter): void {
     body: chooseOptionBody,
     response: customerProposalView,
     handler: async ({ em, services, link: grant, req, body }) =>
-      chooseOption({ em, clock: services.clock, grant: grant!, req }, body.position),
+      chooseOption({ em, clock: services.clock, grant: grant!, meta: metaOf(req) }, body.position),
   });
   api.route({
     method: 'get',
@@ -132,7 +133,13 @@ export function customerProposalRoutes(api: ApiRouter): void {
     params: proposalParams,
     response: rawResponse('application/pdf'),
     handler: async ({ em, services, link: grant, req, res }) => {
-      const pdf = await customerPdf({ em, clock: services.clock, grant: grant!, req, storage: services.storage });
+      const pdf = await customerPdf({
+        em,
+        clock: services.clock,
+        grant: grant!,
+        meta: metaOf(req),
+        storage: services.storage,
+      });
       res
         .status(200)
         .setHeader('Content-Type', 'application/pdf')

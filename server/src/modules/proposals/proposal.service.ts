@@ -4,6 +4,8 @@ import { stringify as canonicalJson } from 'safe-stable-stringify';
 import {
   diffSnapshots,
   isOfficeRole,
+  OWNER_ROLES,
+  roleIn,
   PROPOSAL_MESSAGES,
   type ProposalDiffResponse,
   type ProposalEventKind,
@@ -18,7 +20,7 @@ import type { DeskJobState } from '../desk/desk-read';
 import { ConflictError, ForbiddenError, NotFoundError } from '../../lib/errors';
 import { testPause } from '../../lib/test-pause';
 import type { ServiceContext } from '../../lib/service-context';
-import { proposalCompanyPart } from '../company-settings/proposal-details.service';
+import { hasBusinessAddress, proposalCompanyPart } from '../company-settings/proposal-details.service';
 import { getDesk } from '../desk/desk.service';
 import { findJob } from '../jobs/job-access';
 import { UserSchema } from '../users/user.entity';
@@ -48,14 +50,18 @@ export const snapshotSha256 = (snapshot: unknown): string =>
 /** Called inside the issuing transaction once the version and its events are written (the PDF task is added here). */
 export type OnIssued = (tx: EntityManager, version: ProposalVersion) => Promise<void>;
 
-type IssueRefusal = { reason: string; signed?: LiveSignature };
+type IssueRefusal = { reason: string; signed?: LiveSignature; fix?: 'desk' | 'settings' };
 
-/** Why this job cannot be issued now (for the 409 and the screen), or null when it can. */
+/**
+ * Why this job cannot be issued now (for the 409 and the screen) and where that is put right (`fix`: the desk,
+ * or the company settings for the business address), or null when it can.
+ */
 function whyNot(
   job: DeskJobState,
   blockers: readonly BlockerRecord[],
   role: Role,
   signed: LiveSignature | null,
+  hasAddress: boolean,
 ): IssueRefusal | null {
   if (!isOfficeRole(role)) return { reason: 'Only an estimator or the owner issues a proposal.' };
   if (signed)
@@ -64,7 +70,10 @@ function whyNot(
       signed,
     };
   const why = whyNotReady(job, blockers);
-  return why ? { reason: why } : null;
+  if (why) return { reason: why, fix: 'desk' };
+  // The notice of cancellation in every proposal names the seller's address (16 CFR 429.1): none, nothing issued.
+  if (!hasAddress) return { reason: PROPOSAL_MESSAGES.noBusinessAddress(roleIn(OWNER_ROLES, role)), fix: 'settings' };
+  return null;
 }
 
 /** The desk's part: marked ready, and nothing but reasoned sizing blocks it. */
@@ -80,7 +89,8 @@ function whyNotReady(job: DeskJobState, blockers: readonly BlockerRecord[]): str
  * Issues version N+1 of the job's proposal: recomputes the options from the saved inputs, builds and
  * checks the snapshot, stores it with its hash, marks the version before it superseded, and writes the
  * 'superseded' and 'issued' events — all in one transaction (the job row locked, so two issues queue).
- * 409 when the job is not marked ready (why, in words).
+ * 409 when the job is not marked ready, or the company has no business address for the cancellation notice
+ * (why, in words, and `fix`: where to put it right); nothing is written then.
  */
 export async function issueVersion(ctx: ServiceContext, jobId: string, onIssued?: OnIssued): Promise<ProposalVersion> {
   if (!isOfficeRole(ctx.actor.role)) throw new ForbiddenError('Only an estimator or the owner issues a proposal.');
@@ -91,10 +101,20 @@ export async function issueVersion(ctx: ServiceContext, jobId: string, onIssued?
     await tx.execute('select id from "job" where id = ? for update', [job.id]);
     await tx.refresh(job);
     const desk = await getDesk(c, job.id);
-    const why = whyNot(job, desk.blockers, ctx.actor.role, await liveSignature(tx, ctx.actor.companyId, job.id));
-    if (why) throw new ConflictError(why.reason, why.signed ? { signed: why.signed } : {});
-    const now = ctx.clock.now();
     const company = await proposalCompanyPart(tx, ctx.actor.companyId);
+    const why = whyNot(
+      job,
+      desk.blockers,
+      ctx.actor.role,
+      await liveSignature(tx, ctx.actor.companyId, job.id),
+      company.address !== null,
+    );
+    if (why)
+      throw new ConflictError(why.reason, {
+        ...(why.signed ? { signed: why.signed } : {}),
+        ...(why.fix ? { fix: why.fix } : {}),
+      });
+    const now = ctx.clock.now();
     const issuer = await tx.findOneOrFail(UserSchema, ctx.actor.userId);
     const snapshot = buildSnapshot({ company, customer: job.customer, job, options: desk.options, issuedAt: now });
     let proposal = await tx.findOne(ProposalSchema, { job: job.id, company: ctx.actor.companyId });
@@ -282,9 +302,20 @@ export async function getProposal(ctx: ServiceContext, jobId: string): Promise<P
   const { proposal } = await findProposal(ctx, jobId);
   const desk = await getDesk(ctx, jobId);
   const live = proposal ? await liveSignature(ctx.em, ctx.actor.companyId, desk.desk.job.id) : null;
-  const why = whyNot(desk.desk.job, desk.blockers, ctx.actor.role, live);
+  const why = whyNot(
+    desk.desk.job,
+    desk.blockers,
+    ctx.actor.role,
+    live,
+    await hasBusinessAddress(ctx.em, ctx.actor.companyId),
+  );
   const canIssue: ProposalResponse['canIssue'] = why
-    ? { ok: false, reason: why.reason, ...(why.signed ? { signed: why.signed } : {}) }
+    ? {
+        ok: false,
+        reason: why.reason,
+        ...(why.signed ? { signed: why.signed } : {}),
+        ...(why.fix ? { fix: why.fix } : {}),
+      }
     : { ok: true };
   if (!proposal) return { jobId, canIssue, proposal: null };
   const versions = await versionSummaries(ctx, proposal.id);

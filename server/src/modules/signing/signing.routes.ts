@@ -1,18 +1,13 @@
-import type { Request, Response } from 'express';
+import type { Response } from 'express';
 import { z } from 'zod';
 import { consentBody, signatureBody, signingState } from '@contract';
 import { link, OFFICE, rawResponse, type ApiRouter } from '../../lib/route';
 import { liveLink } from '../proposal-links/link-open';
 import { customerSignedPdf, officeSignedPdf } from './signed-pdf.service';
-import { giveConsent, signingState as readSigningState, signVersion, type RequestMeta } from './signing.service';
+import { requestMeta as metaOf } from '../../lib/request-meta';
+import { giveConsent, signingState as readSigningState, signVersion } from './signing.service';
 
 const proposalParams = z.strictObject({ proposalId: z.uuid() });
-
-/** The address and browser as the audit trail keeps them: req.ip (trusted only through TRUST_PROXY). */
-const metaOf = (req: Request): RequestMeta => ({
-  ip: req.ip ? req.ip.slice(0, 45) : null,
-  userAgent: req.get('user-agent')?.slice(0, 400) ?? null,
-});
 
 /** A signed copy as a download: attachment, its SHA-256 as the ETag, nothing that stops saving or printing. */
 function sendPdf(res: Response, pdf: { bytes: Buffer; fileName: string; sha256: string }) {

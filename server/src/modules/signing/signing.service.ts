@@ -16,6 +16,7 @@ import type { LinkGrant } from '../../lib/route';
 import type { Queue } from '../../services/queue';
 import type { Clock } from '../../services/services';
 import type { Storage } from '../../services/storage';
+import type { RequestMeta } from '../../lib/request-meta';
 import { moveJobForProposal } from '../jobs/job-moves';
 import { ProposalEventSchema } from '../proposals/proposal.entity';
 import { checkSignatureImage } from './signature-image';
@@ -30,10 +31,7 @@ import { checkSignatureImage } from './signature-image';
 
 const sha256 = (text: string | Buffer) => createHash('sha256').update(text).digest('hex');
 
-export interface RequestMeta {
-  readonly ip: string | null;
-  readonly userAgent: string | null;
-}
+export type { RequestMeta } from '../../lib/request-meta';
 
 interface CurrentVersion {
   id: string;

@@ -1,14 +1,18 @@
 import { Link } from 'react-router-dom';
-import type { ProposalResponse } from '@contract';
+import { OWNER_ROLES, roleIn, type ProposalResponse } from '@contract';
 import { Alert } from '../../../components/ui/alert';
 import { Button, buttonClass } from '../../../components/ui/button';
+import { paths } from '../../../config/paths';
 import { jobPaths } from '../../../entities/job/paths';
 import { errorMessage } from '../../../lib/api-error';
+import { useViewer } from '../../../lib/viewer';
 import { useIssueVersion } from '../api/issue-version';
 
 /**
- * "Issue version N" for the office. The server says whether the job may be issued and why not (not marked
- * ready, what blocks it); the same reasons come back in a 409 if something changed meanwhile.
+ * "Issue version N" for the office. The server says whether the job may be issued, why not and where that is
+ * put right (`fix`: the desk — not marked ready, what blocks it — or the company settings — no business
+ * address for the cancellation notice); the same reasons come back in a 409 if something changed meanwhile.
+ * Settings is the owner's page: an estimator gets the words (ask the owner) without a link that would fail.
  */
 export function IssuePanel({
   jobId,
@@ -21,6 +25,8 @@ export function IssuePanel({
   readyAt: string | null;
 }) {
   const issue = useIssueVersion(jobId);
+  const viewer = useViewer();
+  const mayOpenSettings = viewer !== null && roleIn(OWNER_ROLES, viewer.role);
   const versions = data.proposal?.versions ?? [];
   const current = versions.find((v) => v.current) ?? null;
   const next = (versions[0]?.number ?? 0) + 1;
@@ -67,9 +73,17 @@ export function IssuePanel({
       ) : (
         <Alert tone="warning" title={`Version ${next} cannot be issued yet.`}>
           <p>{data.canIssue.reason}</p>
-          <Link className={`${buttonClass('secondary')} mt-2`} to={jobPaths.desk(jobId)}>
-            Open the desk
-          </Link>
+          {data.canIssue.fix === 'settings' ? (
+            mayOpenSettings ? (
+              <Link className={`${buttonClass('secondary')} mt-2`} to={paths.companySettings}>
+                Open Settings
+              </Link>
+            ) : null
+          ) : (
+            <Link className={`${buttonClass('secondary')} mt-2`} to={jobPaths.desk(jobId)}>
+              Open the desk
+            </Link>
+          )}
         </Alert>
       )}
       {issue.isError ? (

@@ -29,8 +29,11 @@ await migrate(url);
 // Test uploads (demo photos included) live apart from the demo instance's, and start empty.
 const storageDir = `.data/uploads-${TEST.database}`;
 rmSync(storageDir, { recursive: true, force: true });
+// The demo's e-mails (its proposal links), for the e2e that opens the sent one as the customer would.
+const outboxDir = `.data/outbox-${TEST.database}`;
+rmSync(outboxDir, { recursive: true, force: true });
 await withOrm(url, async (orm) => {
-  if (await isEmpty(orm.em.fork())) await seedDemo(orm, { storage: createLocalDiskStorage(storageDir) });
+  if (await isEmpty(orm.em.fork())) await seedDemo(orm, { storage: createLocalDiskStorage(storageDir), outboxDir });
 });
 if (!process.env.GAUGELINE_SKIP_BUILD) await buildClientIfStale();
 log(`test set-up ready in ${((Date.now() - t0) / 1000).toFixed(1)} s; running the suite…`);
@@ -41,6 +44,7 @@ const child = spawn(process.execPath, ['node_modules/vitest/vitest.mjs', 'run', 
     ...process.env,
     DATABASE_URL: url,
     STORAGE_DIR: storageDir,
+    DEMO_OUTBOX_DIR: outboxDir,
     NODE_ENV: 'test',
     CHROMIUM_PATH: chromiumPath,
     LOG_LEVEL: 'silent',

@@ -41,7 +41,7 @@ describe('the demo proposals in a browser', () => {
     // The sales history (reports) fills the list too: each demo proposal's job is found with the list's search.
     for (const s of DEMO_PROPOSAL_STATES.filter((x) => x.company === signed.company)) {
       await page.getByLabel('Search jobs').fill(s.customer.name);
-      await page.getByText(s.customer.name).first().waitFor();
+      await page.getByText(s.customer.name).filter({ visible: true }).first().waitFor();
     }
     await page.getByLabel('Search jobs').fill('');
     await page.screenshot({ path: `${SHOTS}/demo-jobs-larkspur-1440.png`, fullPage: true });
@@ -55,7 +55,7 @@ describe('the demo proposals in a browser', () => {
     await page.goto(`/jobs/${job.id}/proposal`);
     const panel = page.getByRole('region', { name: 'Signed' });
     await panel.waitFor();
-    await page.getByText(signed.customer.name).first().waitFor();
+    await page.getByText(signed.customer.name).filter({ visible: true }).first().waitFor();
     expect(await page.getByRole('button', { name: /^Issue version/ }).count()).toBe(0);
     await page.screenshot({ path: `${SHOTS}/demo-proposal-signed-1440.png`, fullPage: true });
     await expectNoSeriousViolations(page);
@@ -67,7 +67,7 @@ describe('the demo proposals in a browser', () => {
     await q.page.goto('/jobs');
     for (const s of DEMO_PROPOSAL_STATES.filter((x) => x.company === other.company)) {
       await q.page.getByLabel('Search jobs').fill(s.customer.name);
-      await q.page.getByText(s.customer.name).first().waitFor();
+      await q.page.getByText(s.customer.name).filter({ visible: true }).first().waitFor();
     }
     await q.page.getByLabel('Search jobs').fill('');
     await q.page.screenshot({ path: `${SHOTS}/demo-jobs-quillbrook-1440.png`, fullPage: true });

@@ -54,6 +54,14 @@ export function createJobsRoutes(queryClient: QueryClient): RouteObject[] {
       },
     },
     {
+      path: jobRoutePatterns.packet,
+      ErrorBoundary: RouteError,
+      lazy: {
+        loader: async () => (await import('./job-packet-loader')).packetLoader(queryClient),
+        Component: async () => (await import('./routes/job-packet')).default,
+      },
+    },
+    {
       path: jobRoutePatterns.commissioning,
       ErrorBoundary: RouteError,
       lazy: {

@@ -8,6 +8,7 @@ export const jobPaths = {
   desk: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/desk`,
   proposal: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/proposal`,
   commissioning: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/commissioning`,
+  packet: (jobId: string) => `/jobs/${encodeURIComponent(jobId)}/packet`,
 } as const;
 
 /** Route patterns for the router, in step with jobPaths. */
@@ -20,6 +21,7 @@ export const jobRoutePatterns = {
   desk: '/jobs/:jobId/desk',
   proposal: '/jobs/:jobId/proposal',
   commissioning: '/jobs/:jobId/commissioning',
+  packet: '/jobs/:jobId/packet',
 } as const;
 
 /** The API's addresses for a job and the records hanging off it. */

@@ -252,6 +252,11 @@ function JobPageLinks({ job }: { job: JobRecord }) {
           Commissioning record
         </Link>
       ) : null}
+      {(job.status === 'won' || job.status === 'installed') && viewer && viewer.role !== 'salesperson' ? (
+        <Link className={buttonClass('secondary')} to={jobPaths.packet(jobId)}>
+          Job packet
+        </Link>
+      ) : null}
     </>
   );
 }

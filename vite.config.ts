@@ -197,6 +197,10 @@ export default defineConfig({
           include: ['tests/client/**/*.test.{ts,tsx}'],
           environment: 'happy-dom',
           setupFiles: ['tests/client/setup.ts'],
+          // The walk-through's saves wait out a debounce and the queue; under `npm test` the client files share two
+          // cores with the server and e2e projects, so a 5 s test budget and 2 s waits were too tight (3 of them
+          // timed out at load 18). Waits now allow 5 s; a test may take 15 s.
+          testTimeout: 15_000,
         },
       },
       {

@@ -37,7 +37,7 @@ describe('design conditions', () => {
     });
     fireEvent.change(screen.getByLabelText('Outdoor cooling dry bulb'), { target: { value: '97' } });
     expect(hintOf('Outdoor cooling dry bulb')).toBe('Source: Entered for this job');
-    await waitFor(() => expect(queue.getSnapshot().items).toHaveLength(1), { timeout: 2000 });
+    await waitFor(() => expect(queue.getSnapshot().items).toHaveLength(1), { timeout: 5000 });
     expect(queue.getSnapshot().items[0]).toMatchObject({
       baseVersion: 2,
       payload: {
@@ -76,7 +76,7 @@ describe('metric companies', () => {
     expect(length).toHaveValue('3.66');
     expect(document.getElementById(`${length.id}-unit`)).toHaveTextContent('m');
     fireEvent.change(length, { target: { value: '4' } });
-    await waitFor(() => expect(queue.getSnapshot().items).toHaveLength(1), { timeout: 2000 });
+    await waitFor(() => expect(queue.getSnapshot().items).toHaveLength(1), { timeout: 5000 });
     expect(queue.getSnapshot().items[0]?.payload).toMatchObject({ input: { lengthFt: ftFromM({ m: 4 }) } });
     expect(length).toHaveValue('4');
   });

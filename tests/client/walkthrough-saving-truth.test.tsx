@@ -66,7 +66,7 @@ describe('a value refused on screen is never sent', () => {
     fireEvent.change(screen.getByLabelText('Wall length'), { target: { value: '250' } });
     fireEvent.change(screen.getByLabelText('Occupants'), { target: { value: '4' } });
     fireEvent.change(screen.getByLabelText('Notes'), { target: { value: 'North bedroom' } });
-    await waitFor(() => expect(sent).toHaveLength(1), { timeout: 2000 });
+    await waitFor(() => expect(sent).toHaveLength(1), { timeout: 5000 });
     const input = inputOf(sent[0]);
     expect(input).toMatchObject({ occupants: 4, notes: 'North bedroom' });
     // The refused wall keeps its saved value in what was sent.
@@ -79,7 +79,7 @@ describe('a value refused on screen is never sent', () => {
     expect(document.activeElement).toBe(screen.getByLabelText('Wall length'));
 
     fireEvent.change(screen.getByLabelText('Wall length'), { target: { value: '25' } });
-    await waitFor(() => expect(sent).toHaveLength(2), { timeout: 2000 });
+    await waitFor(() => expect(sent).toHaveLength(2), { timeout: 5000 });
     expect(inputOf(sent[1])?.exposedWalls).toMatchObject([{ lengthFt: 25 }]);
     await waitFor(() => expect(pill()).toHaveTextContent('Saved'));
   });
@@ -98,7 +98,7 @@ describe('a value refused on screen is never sent', () => {
     const first = await editor(sent);
     fireEvent.change(screen.getByLabelText('Wall length'), { target: { value: '250' } });
     fireEvent.change(screen.getByLabelText('Occupants'), { target: { value: '4' } });
-    await waitFor(() => expect(sent).toHaveLength(1), { timeout: 2000 });
+    await waitFor(() => expect(sent).toHaveLength(1), { timeout: 5000 });
     first.unmount();
     const saved = inputOf(sent[0]) ?? {};
     await editor([], roomView(saved, 4));

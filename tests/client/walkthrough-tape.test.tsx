@@ -23,7 +23,7 @@ describe('length fields take tape-measure entry', () => {
     expect(screen.getByText('= 12 ft 6 in')).toBeInTheDocument();
     expect(length).not.toHaveAttribute('aria-invalid');
     expect(length).toHaveValue(`12'6"`);
-    await waitFor(() => expect(queue.getSnapshot().items).toHaveLength(1), { timeout: 2000 });
+    await waitFor(() => expect(queue.getSnapshot().items).toHaveLength(1), { timeout: 5000 });
     expect(queue.getSnapshot().items[0]?.payload).toMatchObject({
       kind: 'room-update',
       roomId: ROOM_ID,
@@ -61,7 +61,7 @@ describe('inch fields take tape-measure entry too', () => {
     fireEvent.change(width, { target: { value: `3'2"` } });
     expect(screen.getByText('= 3 ft 2 in')).toBeInTheDocument();
     expect(width).not.toHaveAttribute('aria-invalid');
-    await waitFor(() => expect(queue.getSnapshot().items).toHaveLength(1), { timeout: 2000 });
+    await waitFor(() => expect(queue.getSnapshot().items).toHaveLength(1), { timeout: 5000 });
     expect(queue.getSnapshot().items[0]?.payload).toMatchObject({
       input: { exposedWalls: [{ windows: [{ widthIn: 38 }] }] },
     });
@@ -71,7 +71,7 @@ describe('inch fields take tape-measure entry too', () => {
         expect(queue.getSnapshot().items[0]?.payload).toMatchObject({
           input: { exposedWalls: [{ windows: [{ widthIn: 40 }] }] },
         }),
-      { timeout: 2000 },
+      { timeout: 5000 },
     );
     fireEvent.change(width, { target: { value: '36,5' } });
     expect(await screen.findByText('Did you mean 36.5 in?')).toBeInTheDocument();

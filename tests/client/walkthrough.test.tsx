@@ -57,7 +57,7 @@ describe('save status pill', () => {
     expect(pill()).toHaveTextContent('Saved');
     fireEvent.change(screen.getByLabelText('Length'), { target: { value: '14' } });
     expect(pill()).toHaveTextContent('Saving…');
-    await waitFor(() => expect(pill()).toHaveTextContent('Offline — 1 change waiting'), { timeout: 2000 });
+    await waitFor(() => expect(pill()).toHaveTextContent('Offline — 1 change waiting'), { timeout: 5000 });
     expect(queue.getSnapshot().items[0]?.payload).toMatchObject({
       kind: 'room-update',
       roomId: ROOM_ID,
@@ -178,7 +178,7 @@ describe('a draft the schema refuses', () => {
     expect(screen.getByLabelText('Window area')).toHaveValue('100');
     expect(screen.getByText(/Brought back what you were typing/)).toBeInTheDocument();
     fireEvent.change(screen.getByLabelText('Window area'), { target: { value: '20' } });
-    await waitFor(() => expect(sent).toHaveLength(1), { timeout: 2000 });
+    await waitFor(() => expect(sent).toHaveLength(1), { timeout: 5000 });
     second.unmount();
     await renderWalkthrough(
       <RoomEditor jobId={JOB_ID} room={roomView()} designConditions={designConditions} tightness="average" />,

@@ -78,7 +78,7 @@ describe('jobs list', () => {
     );
   });
 
-  it('shows the ready-to-propose mark in words on the table and on the phone cards, only on marked jobs', async () => {
+  it('shows the ready-to-propose mark in words on the table and on the phone cards, only on marked jobs not yet decided', async () => {
     mockFetch({
       'GET /api/jobs?page=1&pageSize=25': page(
         [
@@ -89,8 +89,15 @@ describe('jobs list', () => {
             status: 'design',
             readyToProposeAt: null,
           }),
+          // Won with the desk's mark still on it (a signed sale keeps the mark): "Ready to propose" beside "Won" misleads.
+          jobRecord({
+            id: '55555555-5555-4555-8555-555555555555',
+            customer: { id: 'c3', name: 'Jordan Placeholder' },
+            status: 'won',
+            readyToProposeAt: '2026-12-01T15:00:00.000Z',
+          }),
         ],
-        2,
+        3,
       ),
     });
     renderAt('/jobs');
@@ -99,6 +106,7 @@ describe('jobs list', () => {
     const rowOf = (name: string) => rows.find((r) => within(r).queryByRole('link', { name }));
     expect(within(rowOf('Rowan Example') ?? table).getByText('Ready to propose')).toBeInTheDocument();
     expect(within(rowOf('Avery Sample') ?? table).queryByText('Ready to propose')).toBeNull();
+    expect(within(rowOf('Jordan Placeholder') ?? table).queryByText('Ready to propose')).toBeNull();
     const cards = screen.getByRole('list', { name: 'Jobs' });
     expect(within(cards).getAllByText('Ready to propose')).toHaveLength(1);
   });

@@ -4,7 +4,7 @@ import { Link } from 'react-router-dom';
 import { jobPaths } from '../../../entities/job/paths';
 import { type JobRecord } from '@contract';
 import { jobStatusText } from '../../../entities/job/labels';
-import { ReadyBadge } from './ready-badge';
+import { ReadyBadge, showsReadyMark } from './ready-badge';
 
 const col = createColumnHelper<JobRecord>();
 const when = new Intl.DateTimeFormat('en-US', { dateStyle: 'medium', timeStyle: 'short' });
@@ -31,7 +31,7 @@ const columns = [
     cell: (c) => (
       <span className="flex flex-col items-start gap-1">
         {jobStatusText(c.row.original)}
-        <ReadyBadge at={c.row.original.readyToProposeAt} />
+        <ReadyBadge job={c.row.original} />
       </span>
     ),
   }),
@@ -77,9 +77,9 @@ export function JobsTable({ jobs, total, page, pageSize, onPage }: Props) {
                 <span className="text-sm text-muted">
                   {jobStatusText(j)} · {when.format(new Date(j.lastActivityAt))}
                 </span>
-                {j.readyToProposeAt ? (
+                {showsReadyMark(j) ? (
                   <span className="mt-1">
-                    <ReadyBadge at={j.readyToProposeAt} />
+                    <ReadyBadge job={j} />
                   </span>
                 ) : null}
               </Link>

@@ -36,7 +36,9 @@ describe('a room’s component drill-down on the loads page', () => {
   it('says what the ducts add, where they run and the method', () => {
     if (!load.ducts) throw new Error('the home has ducts');
     const line = ductLine(load.ducts);
-    expect(line).toContain('Ducts in the attic (R-6, leakage 10 % supply / 10 % return');
+    expect(line).toContain(
+      `Ducts in the attic (R-6 insulation, working as R-${load.ducts.supplyEffectiveR} supply / R-${load.ducts.returnEffectiveR} return, leakage 10 % supply / 10 % return`,
+    );
     expect(line).toContain(`+${load.ducts.heating.btuh.toLocaleString('en-US')} Btu/h heat loss`);
     expect(line).toContain('ASHRAE Standard 152');
   });

@@ -71,7 +71,10 @@ function LostReasonPicker({
   onChoose: (reason: string) => void;
   onCancel: () => void;
 }) {
-  const reasons = useQuery(lossReasonsQueryOptions());
+  // Always asked afresh when the picker opens, and the cached list is not offered while that answer is on its way:
+  // a list kept from an earlier visit (the saved cache) could still carry a reason the owner has since renamed. With no
+  // signal (the fetch paused) the kept list is what there is.
+  const reasons = useQuery({ ...lossReasonsQueryOptions(), refetchOnMount: 'always' });
   const [chosen, setChosen] = useState<string | null>(null);
   const [missing, setMissing] = useState(false);
   const name = useId();
@@ -81,7 +84,8 @@ function LostReasonPicker({
         {errorMessage(reasons.error)}
       </Alert>
     );
-  if (!reasons.data) return <Spinner label="Loading the reasons…" />;
+  if (!reasons.data || (reasons.fetchStatus === 'fetching' && !reasons.isFetchedAfterMount))
+    return <Spinner label="Loading the reasons…" />;
   return (
     <form
       className="flex flex-col gap-3 rounded-md border border-line p-3"

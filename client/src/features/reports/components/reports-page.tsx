@@ -3,14 +3,13 @@ import { useSearchParams } from 'react-router-dom';
 import type { SalesReport } from '@contract';
 import { Alert } from '../../../components/ui/alert';
 import { buttonClass } from '../../../components/ui/button';
+import { FieldShell, inputClass, SelectOptions } from '../../../components/ui/field-shell';
 import { PageHeader } from '../../../components/ui/page-header';
 import { Spinner } from '../../../components/ui/spinner';
 import { errorMessage, isApiError } from '../../../lib/api-error';
 import { salesReportCsvHref, useSalesReport } from '../api/get-sales-report';
 import { filtersFromSearch, type ReportFilters } from '../query-keys';
 import { CountBreakdown, GroupBreakdown, money, percent } from './group-chart';
-
-const field = 'block min-h-touch w-full rounded-md border border-line bg-white px-3 text-base';
 
 /** /reports (the owner): what wins, by whom and at what sizing. Filters live in the URL; the CSV has the same figures. */
 export function ReportsPage() {
@@ -79,14 +78,8 @@ function Filters({
   useEffect(() => setFrom(filters.from), [filters.from]);
   useEffect(() => setTo(filters.to), [filters.to]);
   const any = filters.from || filters.to || filters.salesperson;
-  const error = (name: string) => {
-    const message = fieldError(name);
-    return message ? (
-      <p id={`reports-${name}-error`} className="text-sm font-semibold text-danger">
-        {message}
-      </p>
-    ) : null;
-  };
+  // The server's refusal of a filter sits under that field (FieldShell gives it the id `<field id>-error`).
+  const described = (id: string, name: string) => (fieldError(name) ? `${id}-error` : undefined);
   return (
     <form
       role="search"
@@ -94,59 +87,52 @@ function Filters({
       className="grid gap-3 sm:grid-cols-2 lg:grid-cols-[1fr_1fr_2fr_auto] lg:items-end"
       onSubmit={(e) => e.preventDefault()}
     >
-      <div className="flex flex-col gap-1">
-        <label htmlFor="reports-from" className="text-sm font-semibold text-ink-900">
-          Issued from
-        </label>
+      <FieldShell id="reports-from" label="Issued from" error={fieldError('from')}>
         <input
           id="reports-from"
           type="date"
-          className={field}
+          className={inputClass}
           value={from}
-          aria-describedby={fieldError('from') ? 'reports-from-error' : undefined}
+          aria-invalid={fieldError('from') ? true : undefined}
+          aria-describedby={described('reports-from', 'from')}
           onChange={(e) => {
             setFrom(e.target.value);
             onChange({ from: e.target.value });
           }}
         />
-        {error('from')}
-      </div>
-      <div className="flex flex-col gap-1">
-        <label htmlFor="reports-to" className="text-sm font-semibold text-ink-900">
-          Issued to
-        </label>
+      </FieldShell>
+      <FieldShell id="reports-to" label="Issued to" error={fieldError('to')}>
         <input
           id="reports-to"
           type="date"
-          className={field}
+          className={inputClass}
           value={to}
-          aria-describedby={fieldError('to') ? 'reports-to-error' : undefined}
+          aria-invalid={fieldError('to') ? true : undefined}
+          aria-describedby={described('reports-to', 'to')}
           onChange={(e) => {
             setTo(e.target.value);
             onChange({ to: e.target.value });
           }}
         />
-        {error('to')}
-      </div>
-      <div className="flex flex-col gap-1 sm:col-span-2 lg:col-span-1">
-        <label htmlFor="reports-salesperson" className="text-sm font-semibold text-ink-900">
-          Salesperson
-        </label>
+      </FieldShell>
+      <FieldShell
+        id="reports-salesperson"
+        label="Salesperson"
+        error={fieldError('salesperson')}
+        className="sm:col-span-2 lg:col-span-1"
+      >
         <select
           id="reports-salesperson"
-          className={field}
+          className={inputClass}
           value={filters.salesperson}
+          aria-invalid={fieldError('salesperson') ? true : undefined}
+          aria-describedby={described('reports-salesperson', 'salesperson')}
           onChange={(e) => onChange({ salesperson: e.target.value })}
         >
           <option value="">Everyone</option>
-          {salespeople.map((p) => (
-            <option key={p.id} value={p.id}>
-              {p.name}
-            </option>
-          ))}
+          <SelectOptions options={salespeople.map((p) => ({ value: p.id, label: p.name }))} />
         </select>
-        {error('salesperson')}
-      </div>
+      </FieldShell>
       <button
         type="button"
         className={buttonClass('ghost')}

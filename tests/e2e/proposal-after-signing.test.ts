@@ -3,9 +3,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { formatMoney } from '@calc';
 import type { AfterSigningRecord } from '@contract';
 import { checkedPages, expectNoSeriousViolations } from './axe';
-import { api, sentProposal, until } from './proposal-helpers';
-import { account, expectFitsWidth } from './desk-helpers';
-import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
+import { api, customerOnPhone, until } from './proposal-helpers';
+import { expectFitsWidth } from './desk-helpers';
+import { PHONE, SHOTS, startE2E, type E2E } from './harness';
 
 /**
  * Issue 14, after the signature, at 375 px: the customer pays the deposit through the local payments fake
@@ -54,15 +54,7 @@ describe('after the signature, on the phone', () => {
   afterAll(async () => e?.close());
 
   it('pays the deposit through the payment service (a declined card first), then cancels the next visit and sees the refund', async () => {
-    const office = await e.newPage(DESKTOP);
-    const estimator = account('estimator');
-    await signIn(office.page, estimator.email, estimator.password);
-    await office.page.getByTestId('user-name').first().waitFor();
-    const { jobId, path } = await sentProposal(e, office.page);
-
-    const phone = await e.newPage(PHONE);
-    await phone.page.goto(path);
-    await phone.page.getByRole('heading', { name: /^Your proposal,/ }).waitFor();
+    const { office, phone, jobId, path } = await customerOnPhone(e);
     const proposalId = new URL(phone.page.url()).pathname.split('/')[2] ?? '';
     await phone.page.getByRole('button', { name: 'Choose Quiet comfort' }).click();
     await phone.page.getByRole('heading', { name: /^You chose Quiet comfort/ }).waitFor();

@@ -1,8 +1,8 @@
 import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
 import { PROPOSAL_LINK_OPEN_PATH } from '@contract';
-import { jobWithRooms } from './desk-helpers';
-import type { E2E } from './harness';
+import { account, jobWithRooms } from './desk-helpers';
+import { DESKTOP, PHONE, signIn, type E2E } from './harness';
 
 /** Shared by the proposal journeys (issue 14). */
 
@@ -59,4 +59,20 @@ export async function sentProposal(e: E2E, office: Page): Promise<{ jobId: strin
   const link = new RegExp(`https?://\\S+${PROPOSAL_LINK_OPEN_PATH}\\?t=[A-Za-z0-9_-]{43}`).exec(mail.text)?.[0];
   if (!link) throw new Error(`no proposal link in: ${mail.text}`);
   return { jobId, path: new URL(link).pathname + new URL(link).search };
+}
+
+/**
+ * The estimator signed in at the desk sends a proposal (sentProposal), and the customer opens the e-mailed link on a
+ * phone: both pages, the job and the link's path (for a later visit).
+ */
+export async function customerOnPhone(e: E2E) {
+  const office = await e.newPage(DESKTOP);
+  const estimator = account('estimator');
+  await signIn(office.page, estimator.email, estimator.password);
+  await office.page.getByTestId('user-name').first().waitFor();
+  const { jobId, path } = await sentProposal(e, office.page);
+  const phone = await e.newPage(PHONE);
+  await phone.page.goto(path);
+  await phone.page.getByRole('heading', { name: /^Your proposal,/ }).waitFor();
+  return { office, phone, jobId, path };
 }

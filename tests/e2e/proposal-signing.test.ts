@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { expectNoSeriousViolations } from './axe';
-import { sentProposal } from './proposal-helpers';
-import { account, expectFitsWidth } from './desk-helpers';
-import { DESKTOP, PHONE, SHOTS, signIn, startE2E, type E2E } from './harness';
+import { customerOnPhone } from './proposal-helpers';
+import { expectFitsWidth } from './desk-helpers';
+import { SHOTS, startE2E, type E2E } from './harness';
 
 /**
  * Issue 14, signing at 375 px through the customer's page: the consent notice and its tick box, a signature
@@ -18,14 +18,7 @@ describe('signing on the phone', () => {
   afterAll(async () => e?.close());
 
   it('consents, draws a signature with a finger-sized box, signs and downloads the sealed copy', async () => {
-    const office = await e.newPage(DESKTOP);
-    const estimator = account('estimator');
-    await signIn(office.page, estimator.email, estimator.password);
-    await office.page.getByTestId('user-name').first().waitFor();
-    const { jobId, path } = await sentProposal(e, office.page);
-    const phone = await e.newPage(PHONE);
-    await phone.page.goto(path);
-    await phone.page.getByRole('heading', { name: /^Your proposal,/ }).waitFor();
+    const { office, phone, jobId } = await customerOnPhone(e);
     await phone.page.getByRole('button', { name: 'Choose Quiet comfort' }).click();
     await phone.page.getByRole('heading', { name: /^You chose Quiet comfort/ }).waitFor();
     const box = phone.page.getByRole('checkbox', { name: /I agree to sign electronically/ });
